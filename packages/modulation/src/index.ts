@@ -1,0 +1,10 @@
+/**
+ * @pulsewright/modulation: exact modulation math for inverters.
+ *
+ * Conventions: angles in radians over one fundamental period [0, 2π); amplitudes in peak volts;
+ * ratios (THD, WTHD) as fractions. No I/O, no clocks, no mutable module state.
+ */
+export * from './math.js';
+export * from './validation/index.js';
+export * from './waveform/index.js';
+export * from './spectrum/index.js';

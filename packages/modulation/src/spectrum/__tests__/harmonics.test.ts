@@ -1,0 +1,51 @@
+import { describe, expect, it } from 'vitest';
+import { harmonics, thd, wthd } from '../index.js';
+import { assertInDelta } from '../../testing/assertInDelta.js';
+
+describe('harmonics of a square wave', () => {
+  // ±V square wave, +V on (0, π): Fourier series 4V/(nπ) on odd n, phase 0 (standard Fourier
+  // analysis, any signals text).
+  const volts = 300;
+  const square = { edges: [0, Math.PI], levels: [volts, -volts] };
+
+  it('matches 4V/(nπ) on odd orders and zero on even orders', () => {
+    for (const { order, amplitude, phase } of harmonics(square, 99)) {
+      const expected = order % 2 === 1 ? (4 * volts) / (order * Math.PI) : 0;
+      assertInDelta(amplitude, expected, 1e-10 * volts, `order ${order}`);
+      if (order % 2 === 1) assertInDelta(phase, 0, 1e-12, `phase ${order}`);
+    }
+  });
+
+  it('has THD √(π²/8 − 1) ≈ 48.34 % in the limit of many orders', () => {
+    // THD of a square wave = √(π²/8 − 1) (standard Fourier analysis). Truncation to order N
+    // leaves out a tail Σ_{odd n>N} 1/n² ≈ 1/(2N) of THD², which lowers THD by about
+    // 1/(4N·THD) ≈ 2.6e-5 at N = 20001; the check allows 3e-5 and requires it to be below.
+    const truncated = thd(harmonics(square, 20001));
+    const limit = Math.sqrt(Math.PI ** 2 / 8 - 1);
+    assertInDelta(truncated, limit, 3e-5);
+    expect(truncated).toBeLessThan(limit);
+  });
+
+  it('weights each order by 1/n for WTHD', () => {
+    // WTHD of a square wave: √(Σ_{odd n≥3} 1/n⁴) = √(π⁴/96 − 1) (Σ_{odd} n⁻⁴ = π⁴/96).
+    assertInDelta(wthd(harmonics(square, 2001)), Math.sqrt(Math.PI ** 4 / 96 - 1), 1e-9);
+  });
+
+  it('reports a shifted wave with the shifted phase', () => {
+    const shift = 0.3;
+    const shifted = { edges: [shift, Math.PI + shift], levels: [volts, -volts] };
+    const [, fundamental] = harmonics(shifted, 1);
+    assertInDelta(fundamental?.phase ?? NaN, -shift, 1e-12);
+  });
+});
+
+describe('harmonics input checks', () => {
+  it('names the field and the range', () => {
+    const square = { edges: [0, Math.PI], levels: [1, -1] };
+    expect(() => harmonics(square, -1)).toThrow(/maxOrder must be an integer ≥ 0 and ≤ 100000/);
+    expect(() => harmonics(square, 2.5)).toThrow(RangeError);
+    expect(() => harmonics({ edges: [1, 0.5], levels: [1, -1] }, 3)).toThrow(/waveform.edges\[1\]/);
+    expect(() => harmonics({ edges: [0, 7], levels: [1, -1] }, 3)).toThrow(/\[0, 2π\)/);
+    expect(() => harmonics({ edges: [0, 1], levels: [1, NaN] }, 3)).toThrow(/levels\[1\]/);
+  });
+});

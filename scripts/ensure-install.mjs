@@ -1,0 +1,16 @@
+// Installs the workspace's dependencies when they are missing or older than the lock file,
+// so `npm start` and `npm test` work on a fresh clone with nothing installed beforehand.
+import { existsSync, statSync } from 'node:fs';
+import { execSync } from 'node:child_process';
+
+const marker = 'node_modules/.package-lock.json';
+const lock = 'package-lock.json';
+const stale = !existsSync(marker) || (existsSync(lock) && statSync(lock).mtimeMs > statSync(marker).mtimeMs);
+if (stale) {
+  const command = existsSync(lock) ? 'npm ci --no-audit --no-fund' : 'npm install --no-audit --no-fund';
+  console.log(`pulsewright: installing dependencies (${command}) ...`);
+  execSync(command, {
+    stdio: 'inherit',
+    env: { ...process.env, SCARF_ANALYTICS: 'false', TURBO_TELEMETRY_DISABLED: '1' },
+  });
+}
