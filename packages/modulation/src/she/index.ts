@@ -1,0 +1,4 @@
+export * from './SheKind.js';
+export * from './sheWaveform.js';
+export * from './solveShe.js';
+export type { SheSolverSettings } from './sheOptions.js';

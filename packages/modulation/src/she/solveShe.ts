@@ -1,0 +1,120 @@
+import { harmonics } from '../spectrum/harmonics.js';
+import type { Waveform } from '../waveform/Waveform.js';
+import { createSheSystem } from './sheSystem.js';
+import { searchSolutions } from './sheSearch.js';
+import { seededStarts } from './seededStarts.js';
+import { buildSheWaveform } from './buildSheWaveform.js';
+import { assertSquare, resolveSheBase, type SheSolverSettings } from './sheOptions.js';
+import { assertFundamental } from './validateShe.js';
+import type { OrderAmplitude, SheKind } from './SheKind.js';
+
+/** Options of {@link solveShe}. */
+export interface SolveSheOptions extends SheSolverSettings {
+  /** Pattern family; conventions in {@link SheKind}. */
+  kind: SheKind;
+  /** DC source voltage, volts (> 0): the bipolar level or each staircase cell's step. */
+  vdc: number;
+  /**
+   * Initial guess: first-quarter angles (radians), strictly ascending in (0, π/2). Fixes the
+   * number of angles N. Optional when `count` is given (then only seeded starts are used).
+   */
+  angles?: number[];
+  /** Number of first-quarter angles N (1..64) when no `angles` are given. */
+  count?: number;
+  /** Odd orders ≥ 3 to null: N − 1 of them with a `fundamental`, N without. */
+  eliminate: number[];
+  /**
+   * Wanted fundamental, peak volts in phase with sin θ, in (0, 4vdc/π) for bipolar and
+   * (0, N·4vdc/π) for staircase. Omit it to spend every angle on elimination.
+   */
+  fundamental?: number;
+}
+
+/** The outcome of {@link solveShe}; plain data. */
+export interface SheResult {
+  /** True when every eliminated order and the fundamental meet the tolerance. */
+  converged: boolean;
+  /** What happened, in plain words (why no solution, when there is none). */
+  message: string;
+  kind: SheKind;
+  vdc: number;
+  /** First-quarter angles in radians, ascending in (0, π/2); the closest attempt if not converged. */
+  angles: number[];
+  /** The full-period waveform the angles define (quarter- and half-wave symmetric). */
+  waveform: Waveform;
+  /** The fundamental of `waveform`, peak volts in phase with sin θ (negative if in antiphase). */
+  fundamental: number;
+  /** Remaining amplitude (peak volts) of each eliminated order, from the exact spectrum. */
+  residual: OrderAmplitude[];
+  /** Newton iterations over all starts tried. */
+  iterations: number;
+  /** Starting guesses tried (the given angles count as one). */
+  starts: number;
+}
+
+/**
+ * Selective harmonic elimination for a quarter-wave symmetric pattern (H. S. Patel and R. G.
+ * Hoft, "Generalized techniques of harmonic elimination and voltage control in thyristor
+ * inverters", IEEE Trans. Ind. Appl., 1973): finds first-quarter angles α₁ < … < α_N in
+ * (0, π/2) with b_n = 0 for each order in `eliminate` and b₁ = `fundamental`, where
+ * b_n = s·(4vdc/(nπ))·[1 + 2Σ(−1)^k cos nα_k] (bipolar, s = (−1)^N) or
+ * b_n = (4vdc/(nπ))·Σ cos nα_k (staircase); conventions in {@link SheKind}.
+ *
+ * Method: damped Newton–Raphson with the analytic Jacobian (solved with ml-matrix), steps kept
+ * inside the ordered region, from the given angles and then from `starts` seeded guesses until
+ * one converges. A missing solution is not an error: `converged` is false and `message` says
+ * why. The returned residual and fundamental are measured on the built waveform by the exact
+ * {@link harmonics}, not by the model the solver used.
+ *
+ * @throws ParameterRangeError / ParameterTypeError for invalid input: unknown kind, vdc ≤ 0,
+ *   angles not ascending in (0, π/2), eliminate holding even orders, order 1 or repeats, the
+ *   wrong number of orders for N, or a fundamental outside the achievable range
+ */
+export function solveShe(options: SolveSheOptions): SheResult {
+  const base = resolveSheBase(options);
+  const { kind, vdc, count, eliminate } = base;
+  const { fundamental } = options;
+  if (fundamental !== undefined) assertFundamental('fundamental', fundamental, kind, count, vdc);
+  assertSquare(eliminate, count, fundamental !== undefined);
+  const scale = (4 * vdc) / Math.PI;
+  const system = createSheSystem(kind, count, eliminate, fundamental === undefined ? undefined : fundamental / scale);
+  const given = options.angles === undefined ? [] : [options.angles];
+  const starts = [...given, ...seededStarts(count, base.starts, base.seed)];
+  const search = searchSolutions(system, starts, base.search, false);
+  const angles = search.solutions[0] ?? search.best.angles;
+  const waveform = buildSheWaveform(kind, vdc, angles);
+  const spectrum = harmonics(waveform, Math.max(1, ...eliminate));
+  const first = spectrum[1];
+  const achieved = first === undefined ? 0 : first.amplitude * Math.cos(first.phase);
+  const converged = search.solutions.length > 0;
+  return {
+    converged,
+    message: converged
+      ? `Converged after ${search.tried} start(s), ${search.iterations} Newton iteration(s) in all.`
+      : noSolutionMessage(search.tried, search.reason, count, eliminate, fundamental),
+    kind,
+    vdc,
+    angles: [...angles],
+    waveform,
+    fundamental: achieved,
+    residual: eliminate.map((order) => ({ order, amplitude: spectrum[order]?.amplitude ?? NaN })),
+    iterations: search.iterations,
+    starts: search.tried,
+  };
+}
+
+function noSolutionMessage(
+  tried: number,
+  reason: string,
+  count: number,
+  eliminate: readonly number[],
+  fundamental: number | undefined,
+): string {
+  const target =
+    fundamental === undefined ? '' : ` at a fundamental of ${fundamental.toPrecision(6)} V`;
+  return (
+    `No solution found from ${tried} start(s): ${reason}. With ${count} angle(s) eliminating ` +
+    `order(s) ${eliminate.join(', ') || 'none'}${target}, there may be no solution at all; ` +
+    'try another fundamental, more angles, or more starts.'
+  );
+}
