@@ -8,3 +8,6 @@ export * from './math.js';
 export * from './validation/index.js';
 export * from './waveform/index.js';
 export * from './spectrum/index.js';
+export * from './numeric/index.js';
+export * from './carrier/index.js';
+export * from './three-phase/index.js';

@@ -1,7 +1,7 @@
-import { TAU } from '../math.js';
 import { assertNumberInRange } from '../validation/assertions.js';
 import { assertWaveform } from '../waveform/assertWaveform.js';
 import type { Waveform } from '../waveform/Waveform.js';
+import { waveformMean } from '../waveform/waveformMean.js';
 import type { Harmonic } from './Harmonic.js';
 
 /** The highest harmonic order {@link harmonics} computes; bounds the cost of one call. */
@@ -56,7 +56,7 @@ export function harmonics(waveform: Waveform, maxOrder: number): Harmonic[] {
       cosSum[n] = (cosSum[n] as number) + jump * c;
     }
   }
-  const result: Harmonic[] = [{ order: 0, amplitude: meanLevel(waveform), phase: 0 }];
+  const result: Harmonic[] = [{ order: 0, amplitude: waveformMean(waveform), phase: 0 }];
   for (let n = 1; n <= maxOrder; n++) {
     // v = a_n cos nθ + b_n sin nθ with a_n = −ΣΔ sin/(πn), b_n = ΣΔ cos/(πn)
     const a = -(sinSum[n] as number) / (Math.PI * n);
@@ -64,13 +64,4 @@ export function harmonics(waveform: Waveform, maxOrder: number): Harmonic[] {
     result.push({ order: n, amplitude: Math.hypot(a, b), phase: Math.atan2(a, b) });
   }
   return result;
-}
-
-function meanLevel({ edges, levels }: Waveform): number {
-  let sum = 0;
-  for (let i = 0; i < edges.length; i++) {
-    const end = i + 1 < edges.length ? (edges[i + 1] as number) : (edges[0] as number) + TAU;
-    sum += (levels[i] as number) * (end - (edges[i] as number));
-  }
-  return sum / TAU;
 }

@@ -3,5 +3,7 @@ export * from './assertWaveform.js';
 export * from './waveformFromTransitions.js';
 export * from './combineWaveforms.js';
 export * from './subtractWaveforms.js';
+export * from './waveformMean.js';
 export * from './waveformMeanSquare.js';
 export * from './waveformValueAt.js';
+export * from './waveformIntegral.js';

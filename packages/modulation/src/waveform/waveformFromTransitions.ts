@@ -28,13 +28,11 @@ export function waveformFromTransitions(transitions: readonly Transition[]): Wav
     if (previous !== undefined && t.angle - previous.angle < EDGE_EPSILON) previous.level = t.level;
     else merged.push({ ...t });
   }
-  // A cluster straddling 2π: the tail's last transition determines the level at the start.
+  // A cluster straddling 2π: the transition just after 0 is the later one (it sits at 2π plus a
+  // little), so its level stands and the one just before 2π is dropped.
   const first = merged[0] as Transition;
   const last = merged[merged.length - 1] as Transition;
-  if (merged.length > 1 && first.angle + TAU - last.angle < EDGE_EPSILON) {
-    first.level = last.level;
-    merged.pop();
-  }
+  if (merged.length > 1 && first.angle + TAU - last.angle < EDGE_EPSILON) merged.pop();
   return dropRepeatedLevels(merged);
 }
 

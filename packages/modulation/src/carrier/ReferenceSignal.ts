@@ -1,0 +1,19 @@
+/**
+ * A modulating reference normalised to the carrier (±1 spans the DC bus), as a function of the
+ * fundamental angle θ in radians. Periodic in 2π.
+ */
+export interface ReferenceSignal {
+  /** The reference value at θ (radians). */
+  value: (theta: number) => number;
+  /**
+   * An upper bound of |d value/dθ| between breakpoints (per radian); sets how finely each
+   * carrier half-period is searched for crossings.
+   */
+  slopeBound: number;
+  /**
+   * Angles in [0, 2π) where the reference has a kink or a jump (the clamping instants of
+   * discontinuous zero sequences); the crossing search splits there.
+   * @default []
+   */
+  breakpoints?: readonly number[];
+}

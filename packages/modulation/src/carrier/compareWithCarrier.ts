@@ -1,0 +1,124 @@
+import { TAU } from '../math.js';
+import { findBracketedRoot } from '../numeric/findBracketedRoot.js';
+import type { Waveform } from '../waveform/Waveform.js';
+import { waveformFromTransitions, type Transition } from '../waveform/waveformFromTransitions.js';
+import type { CarrierSampling } from './CarrierSampling.js';
+import type { ReferenceSignal } from './ReferenceSignal.js';
+import { fundamentalAngleOfCarrier, type CarrierAlignment } from './triangleCarrier.js';
+
+/** Options of {@link compareWithCarrier}. */
+export interface CarrierComparisonOptions extends CarrierAlignment {
+  /** @default 'natural' */
+  sampling?: CarrierSampling;
+  /** Output level (volts) while the reference is above the carrier. */
+  high: number;
+  /** Output level (volts) while the reference is below the carrier. */
+  low: number;
+}
+
+/**
+ * One inverter leg switched by comparing a reference with the unit triangle carrier: the
+ * output is `high` while the reference is above the carrier, `low` otherwise (the comparator of
+ * carrier-based PWM, Holmes and Lipo, 2003, ch. 3). Exact: natural-sampling edges are found by
+ * Brent's method to machine precision; regular-sampling edges in closed form, since the
+ * carrier is linear over each half period. `mf` must be an integer so that one fundamental
+ * period holds a whole number of carrier cycles. Inputs are assumed validated by the caller.
+ */
+export function compareWithCarrier(
+  reference: ReferenceSignal,
+  { mf, carrierPhase = 0, sampling = 'natural', high, low }: CarrierComparisonOptions,
+): Waveform {
+  const alignment = { mf, carrierPhase };
+  const transitions: Transition[] = [];
+  // 2·mf carrier half periods cover exactly one fundamental period; start at any boundary.
+  for (let j = 0; j < 2 * mf; j++) {
+    const start = fundamentalAngleOfCarrier(j * Math.PI, alignment);
+    const end = fundamentalAngleOfCarrier((j + 1) * Math.PI, alignment);
+    // Even j starts at a valley (carrier rising from −1), odd j at a peak (falling from +1).
+    const rising = j % 2 === 0;
+    const carrierAt = (theta: number): number => {
+      const fraction = (theta - start) / (end - start);
+      return rising ? -1 + 2 * fraction : 1 - 2 * fraction;
+    };
+    const level = (above: boolean): number => (above ? high : low);
+    if (sampling === 'natural') {
+      pushNaturalHalfPeriod(transitions, reference, start, end, carrierAt, level);
+    } else {
+      // Symmetric: both halves of a carrier period use the sample at its opening peak.
+      const sampleAngle =
+        sampling === 'regular-asymmetric' || !rising
+          ? start
+          : fundamentalAngleOfCarrier((j - 1) * Math.PI, alignment);
+      pushRegularHalfPeriod(transitions, reference.value(sampleAngle), start, end, rising, level);
+    }
+  }
+  return waveformFromTransitions(transitions);
+}
+
+function pushRegularHalfPeriod(
+  transitions: Transition[],
+  sample: number,
+  start: number,
+  end: number,
+  rising: boolean,
+  level: (above: boolean) => number,
+): void {
+  const startCarrier = rising ? -1 : 1;
+  transitions.push({ angle: start, level: level(sample > startCarrier) });
+  if (sample > -1 && sample < 1) {
+    // Carrier is linear: it meets the held sample at a fraction (sample − c₀)/(c₁ − c₀).
+    const fraction = rising ? (sample + 1) / 2 : (1 - sample) / 2;
+    transitions.push({ angle: start + fraction * (end - start), level: level(!rising) });
+  }
+}
+
+function pushNaturalHalfPeriod(
+  transitions: Transition[],
+  reference: ReferenceSignal,
+  start: number,
+  end: number,
+  carrierAt: (theta: number) => number,
+  level: (above: boolean) => number,
+): void {
+  const difference = (theta: number): number => reference.value(theta) - carrierAt(theta);
+  const points = searchGrid(reference, start, end);
+  const values = points.map(difference);
+  const crossings: number[] = [start];
+  for (let k = 0; k + 1 < points.length; k++) {
+    const fa = values[k] as number;
+    const fb = values[k + 1] as number;
+    if (fb === 0 && k + 2 < points.length) crossings.push(points[k + 1] as number);
+    else if (fa !== 0 && fb !== 0 && fa > 0 !== fb > 0) {
+      crossings.push(findBracketedRoot(difference, points[k] as number, points[k + 1] as number, fa, fb));
+    }
+  }
+  crossings.push(end);
+  // The level of each piece between crossings is read at its midpoint, so a crossing found
+  // exactly at a grid point or a tangency cannot flip the sense.
+  for (let k = 0; k + 1 < crossings.length; k++) {
+    const a = crossings[k] as number;
+    const b = crossings[k + 1] as number;
+    if (b - a <= 0) continue;
+    transitions.push({ angle: a, level: level(difference((a + b) / 2) > 0) });
+  }
+}
+
+/**
+ * Points that split [start, end] into pieces over which reference − carrier is monotonic: the
+ * carrier's slope is 2/(half-period width), so pieces narrower than that divided by the
+ * reference's slope bound hold at most one crossing. Breakpoints of the reference are added.
+ */
+function searchGrid(reference: ReferenceSignal, start: number, end: number): number[] {
+  const width = end - start;
+  const carrierSlope = 2 / width;
+  const pieces = Math.max(1, Math.ceil((2 * reference.slopeBound) / carrierSlope));
+  const points: number[] = [];
+  for (let k = 0; k <= pieces; k++) points.push(start + (k * width) / pieces);
+  for (const breakpoint of reference.breakpoints ?? []) {
+    // Breakpoints are given in [0, 2π); the half period may lie in the next fundamental period.
+    for (const shifted of [breakpoint - TAU, breakpoint, breakpoint + TAU]) {
+      if (shifted > start && shifted < end) points.push(shifted);
+    }
+  }
+  return points.sort((a, b) => a - b);
+}

@@ -1,0 +1,4 @@
+export * from './ZeroSequence.js';
+export * from './zeroSequenceOffset.js';
+export * from './threePhaseReference.js';
+export * from './threePhase.js';

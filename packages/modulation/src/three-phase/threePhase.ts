@@ -1,0 +1,65 @@
+import { assertCarrierOptions } from '../carrier/assertCarrierOptions.js';
+import type { CarrierSampling } from '../carrier/CarrierSampling.js';
+import { compareWithCarrier } from '../carrier/compareWithCarrier.js';
+import { assertOneOf } from '../validation/assertions.js';
+import type { Waveform } from '../waveform/Waveform.js';
+import { subtractWaveforms } from '../waveform/subtractWaveforms.js';
+import { threePhaseReference, type PhaseIndex } from './threePhaseReference.js';
+import { ZERO_SEQUENCES, type ZeroSequence } from './ZeroSequence.js';
+
+/** Options of {@link threePhase}. */
+export interface ThreePhaseOptions {
+  /** Modulation index of each sine reference, (0, 1000]; linear to 1, or 2/√3 with injection. */
+  ma: number;
+  /** Frequency ratio, an integer in [1, 10000]; one carrier is shared by the three legs. */
+  mf: number;
+  /** DC bus voltage (volts), > 0; each leg switches between +vdc/2 and −vdc/2. */
+  vdc: number;
+  /** @default 'none' */
+  zeroSequence?: ZeroSequence;
+  /** @default 'natural' */
+  sampling?: CarrierSampling;
+  /** Carrier delay in carrier radians, as for {@link sineTriangle}. @default 0 */
+  carrierPhase?: number;
+}
+
+/** The waveforms of a three-phase, two-level inverter over one fundamental period. */
+export interface ThreePhaseWaveforms {
+  /** Leg-to-midpoint voltages of the DC bus (volts, ±vdc/2). */
+  legs: { a: Waveform; b: Waveform; c: Waveform };
+  /** Line-to-line voltages ab = a − b, bc = b − c, ca = c − a (volts, 0 or ±vdc). */
+  lineToLine: { ab: Waveform; bc: Waveform; ca: Waveform };
+}
+
+/**
+ * A three-phase two-level inverter under carrier PWM with zero-sequence injection, exact. The
+ * phase references are ma·sin(θ − k·2π/3) plus a common offset (see {@link ZeroSequence}); each
+ * leg is +vdc/2 while its reference is above the shared carrier. The leg fundamental is
+ * ma·vdc/2 in the linear range; the zero sequence cancels in the line-to-line voltages, whose
+ * fundamental is √3·ma·vdc/2 (Holmes and Lipo, 2003, ch. 5).
+ *
+ * @throws ParameterRangeError naming `ma`, `mf`, `vdc`, `zeroSequence`, `sampling` or
+ *   `carrierPhase`
+ */
+export function threePhase(options: ThreePhaseOptions): ThreePhaseWaveforms {
+  assertCarrierOptions(options);
+  if (options.zeroSequence !== undefined) {
+    assertOneOf('zeroSequence', options.zeroSequence, ZERO_SEQUENCES);
+  }
+  const { ma, mf, vdc, zeroSequence = 'none', sampling = 'natural', carrierPhase = 0 } = options;
+  const leg = (phase: PhaseIndex): Waveform =>
+    compareWithCarrier(threePhaseReference(phase, { ma, zeroSequence }), {
+      mf,
+      carrierPhase,
+      sampling,
+      high: vdc / 2,
+      low: -vdc / 2,
+    });
+  const a = leg(0);
+  const b = leg(1);
+  const c = leg(2);
+  return {
+    legs: { a, b, c },
+    lineToLine: { ab: subtractWaveforms(a, b), bc: subtractWaveforms(b, c), ca: subtractWaveforms(c, a) },
+  };
+}
