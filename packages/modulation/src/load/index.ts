@@ -1,0 +1,6 @@
+export * from './RlLoad.js';
+export * from './assertRlLoad.js';
+export * from './rlSteadyState.js';
+export * from './rlCurrentAt.js';
+export * from './rlCurrentSeries.js';
+export * from './harmonicLoadCurrent.js';

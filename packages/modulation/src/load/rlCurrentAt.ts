@@ -1,0 +1,35 @@
+import { wrapAngle } from '../math.js';
+import { assertFiniteArray } from '../validation/assertions.js';
+import { assertWaveform } from '../waveform/assertWaveform.js';
+import type { Waveform } from '../waveform/Waveform.js';
+import { assertRlLoad } from './assertRlLoad.js';
+import type { RlLoadOptions } from './RlLoad.js';
+import { currentInSegment, rlPiecewiseSolution, segmentIndexAt } from './rlPiecewiseSolution.js';
+
+/** The most angles one call of {@link rlCurrentAt} evaluates. */
+export const MAX_CURRENT_ANGLES = 1_000_000;
+
+/**
+ * The exact periodic steady-state load current (amperes) at the given angles, for the same load
+ * as {@link rlSteadyState} (standard circuit analysis: exponentials per segment with the
+ * periodic initial condition, plus the back-EMF's sinusoidal steady state).
+ *
+ * At an edge the value on the segment that starts there is returned (the current is continuous
+ * when l > 0, so this only matters for a resistive load).
+ *
+ * @param waveform - one period of the source voltage, volts
+ * @param angles - radians, any finite values (wrapped into [0, 2π)), at most 1 000 000
+ * @param options - the load, as for {@link rlSteadyState}
+ * @returns one current per angle, amperes, in the order given
+ */
+export function rlCurrentAt(waveform: Waveform, angles: readonly number[], options: RlLoadOptions): number[] {
+  assertWaveform(waveform);
+  assertFiniteArray('angles', angles, 0, MAX_CURRENT_ANGLES);
+  assertRlLoad(options);
+  const solution = rlPiecewiseSolution(waveform, options);
+  return angles.map((angle) => {
+    const theta = wrapAngle(angle);
+    const segment = solution.segments[segmentIndexAt(solution, theta)];
+    return currentInSegment(solution, segment as NonNullable<typeof segment>, theta);
+  });
+}
