@@ -11,3 +11,4 @@ export * from './spectrum/index.js';
 export * from './numeric/index.js';
 export * from './carrier/index.js';
 export * from './three-phase/index.js';
+export * from './load/index.js';
