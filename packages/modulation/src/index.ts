@@ -12,3 +12,4 @@ export * from './numeric/index.js';
 export * from './carrier/index.js';
 export * from './three-phase/index.js';
 export * from './load/index.js';
+export * from './space-vector/index.js';
