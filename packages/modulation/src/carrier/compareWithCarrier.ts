@@ -82,25 +82,33 @@ function pushNaturalHalfPeriod(
 ): void {
   const difference = (theta: number): number => reference.value(theta) - carrierAt(theta);
   const points = searchGrid(reference, start, end);
-  const values = points.map(difference);
-  const crossings: number[] = [start];
+  // Every grid point is a candidate edge: at a breakpoint the reference may jump, so the sign
+  // is read just inside each piece (4 ulp in) and the piece's own crossing found by Brent.
+  const candidates: number[] = [...points];
   for (let k = 0; k + 1 < points.length; k++) {
-    const fa = values[k] as number;
-    const fb = values[k + 1] as number;
-    if (fb === 0 && k + 2 < points.length) crossings.push(points[k + 1] as number);
-    else if (fa !== 0 && fb !== 0 && fa > 0 !== fb > 0) {
-      crossings.push(findBracketedRoot(difference, points[k] as number, points[k + 1] as number, fa, fb));
+    const a = insideFrom(points[k] as number, 1);
+    const b = insideFrom(points[k + 1] as number, -1);
+    if (!(b > a)) continue;
+    const fa = difference(a);
+    const fb = difference(b);
+    if (fa !== 0 && fb !== 0 && fa > 0 !== fb > 0) {
+      candidates.push(findBracketedRoot(difference, a, b, fa, fb));
     }
   }
-  crossings.push(end);
-  // The level of each piece between crossings is read at its midpoint, so a crossing found
-  // exactly at a grid point or a tangency cannot flip the sense.
-  for (let k = 0; k + 1 < crossings.length; k++) {
-    const a = crossings[k] as number;
-    const b = crossings[k + 1] as number;
+  candidates.sort((x, y) => x - y);
+  // The level of each piece between candidates is read at its midpoint, so a crossing found
+  // exactly at a grid point or a tangency cannot flip the sense; equal neighbours merge later.
+  for (let k = 0; k + 1 < candidates.length; k++) {
+    const a = candidates[k] as number;
+    const b = candidates[k + 1] as number;
     if (b - a <= 0) continue;
     transitions.push({ angle: a, level: level(difference((a + b) / 2) > 0) });
   }
+}
+
+/** `angle` moved 4 units in the last place towards `direction` (+1 or −1). */
+function insideFrom(angle: number, direction: 1 | -1): number {
+  return angle + direction * 4 * Number.EPSILON * Math.max(1, Math.abs(angle));
 }
 
 /**
