@@ -29,3 +29,12 @@ export interface FundamentalRange {
   to: number;
   points: number;
 }
+
+/** The distortion measure an optimal pulse pattern minimises when no weights are given. */
+export type PulseObjective = 'wthd' | 'thd';
+
+/** One harmonic order and its weight w in an objective √(Σ w·V_n²)/V₁. */
+export interface OrderWeight {
+  order: number;
+  weight: number;
+}

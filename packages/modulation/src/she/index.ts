@@ -2,3 +2,5 @@ export * from './SheKind.js';
 export * from './sheWaveform.js';
 export * from './solveShe.js';
 export type { SheSolverSettings } from './sheOptions.js';
+export * from './sheSweep.js';
+export * from './optimalPulsePattern.js';

@@ -1,0 +1,120 @@
+import { harmonics } from '../spectrum/harmonics.js';
+import type { Waveform } from '../waveform/Waveform.js';
+import { buildSheWaveform } from './buildSheWaveform.js';
+import { optimisePulses, type PulseOutcome } from './pulseOptimizer.js';
+import { pulseProblem, resolvePulseBase, type PulseSolverSettings, type ResolvedPulseBase } from './pulseOptions.js';
+import { seededStarts } from './seededStarts.js';
+import { assertFundamental } from './validateShe.js';
+import type { SheKind } from './SheKind.js';
+
+/** Options of {@link optimalPulsePattern}. */
+export interface OptimalPulseOptions extends PulseSolverSettings {
+  /** Pattern family; conventions in {@link SheKind}. */
+  kind: SheKind;
+  /** DC source voltage, volts (> 0). */
+  vdc: number;
+  /** Number of first-quarter angles N (1..64), when no `angles` are given. */
+  count?: number;
+  /** Optional first guess (radians, ascending in (0, π/2)); fixes N. */
+  angles?: number[];
+  /** Wanted fundamental, peak volts in phase with sin θ, inside the achievable range. */
+  fundamental: number;
+}
+
+/** The outcome of {@link optimalPulsePattern}; plain data. */
+export interface OptimalPulseResult {
+  /** True when a strict local minimum was found (stationary, positive curvature on the constraint). */
+  converged: boolean;
+  /** What happened, in plain words. */
+  message: string;
+  kind: SheKind;
+  vdc: number;
+  /** First-quarter angles in radians, ascending in (0, π/2). */
+  angles: number[];
+  /** The full-period waveform the angles define. */
+  waveform: Waveform;
+  /** The waveform's fundamental, peak volts in phase with sin θ, from the exact spectrum. */
+  fundamental: number;
+  /** √(Σ w_n·V_n²)/V₁ from the exact spectrum (for 'wthd', the WTHD over orders ≤ maxOrder). */
+  objective: number;
+  iterations: number;
+  starts: number;
+}
+
+/**
+ * Optimal pulse pattern: first-quarter angles of a quarter-wave symmetric pattern
+ * ({@link SheKind}) that minimise a weighted harmonic distortion √(Σ w_n·V_n²)/V₁ (WTHD by
+ * default, Holmes and Lipo, *Pulse Width Modulation for Power Converters*, 2003, ch. 3)
+ * subject to V₁ = `fundamental`. The harmonic model is that of Patel and Hoft (IEEE Trans.
+ * Ind. Appl., 1973); the optimiser is a feasible-path Newton method on the KKT conditions with
+ * the exact Hessian (see the method notes in docs/methods/she.md), run from the given angles
+ * and `starts` seeded guesses, keeping the best strict local minimum. The optimum found is
+ * local: more starts may find a better one.
+ *
+ * @throws ParameterRangeError / ParameterTypeError for invalid input: unknown kind or
+ *   objective, vdc ≤ 0, bad angles or count, weights on even orders, a fundamental outside
+ *   (0, 4vdc/π) (bipolar) or (0, N·4vdc/π) (staircase)
+ */
+export function optimalPulsePattern(options: OptimalPulseOptions): OptimalPulseResult {
+  const base = resolvePulseBase(options);
+  assertFundamental('fundamental', options.fundamental, base.kind, base.count, base.vdc);
+  const given = options.angles === undefined ? [] : [options.angles];
+  const starts = [...given, ...seededStarts(base.count, base.starts, base.seed)];
+  const search = bestOptimum(base, options.fundamental, starts);
+  return describeOptimum(base, search.best, search.iterations, starts.length, search.found);
+}
+
+/** Runs the optimiser from each start; the best converged outcome, else the best attempt (internal). */
+export function bestOptimum(
+  base: ResolvedPulseBase,
+  fundamental: number,
+  starts: readonly (readonly number[])[],
+): { best: PulseOutcome; iterations: number; found: number } {
+  const problem = pulseProblem(base, fundamental / ((4 * base.vdc) / Math.PI));
+  let best: PulseOutcome | null = null;
+  let iterations = 0;
+  let found = 0;
+  for (const start of starts) {
+    const outcome = optimisePulses(problem, start, base.settings);
+    iterations += outcome.iterations;
+    if (outcome.converged) found++;
+    const better =
+      best === null ||
+      (outcome.converged && !best.converged) ||
+      (outcome.converged === best.converged && outcome.value < best.value);
+    if (better) best = outcome;
+  }
+  return { best: best as PulseOutcome, iterations, found };
+}
+
+/** Builds the public result of one optimum, measured on the exact spectrum (internal). */
+export function describeOptimum(
+  base: ResolvedPulseBase,
+  outcome: PulseOutcome,
+  iterations: number,
+  tried: number,
+  found: number,
+): OptimalPulseResult {
+  const waveform = buildSheWaveform(base.kind, base.vdc, outcome.angles);
+  const spectrum = harmonics(waveform, Math.max(...base.orders));
+  const first = spectrum[1];
+  const fundamental = first === undefined ? 0 : first.amplitude * Math.cos(first.phase);
+  let sum = 0;
+  base.orders.forEach((order, i) => {
+    sum += (base.orderWeights[i] as number) * (spectrum[order]?.amplitude ?? 0) ** 2;
+  });
+  return {
+    converged: outcome.converged,
+    message: outcome.converged
+      ? `Strict local minimum found; ${found} of ${tried} start(s) converged, best kept.`
+      : `No optimum found from ${tried} start(s): ${outcome.reason}.`,
+    kind: base.kind,
+    vdc: base.vdc,
+    angles: [...outcome.angles],
+    waveform,
+    fundamental,
+    objective: Math.sqrt(sum) / fundamental,
+    iterations,
+    starts: tried,
+  };
+}
