@@ -5,3 +5,4 @@ export * from './spaceVectorSequence.js';
 export * from './overmodulationSetting.js';
 export * from './overmodulatedReference.js';
 export * from './spaceVectorWaveforms.js';
+export * from './overmodulationGainCurve.js';

@@ -54,7 +54,8 @@ export interface OvermodulationSetting {
  * ratio the generated waveform's fundamental differs slightly; see overmodulationGainCurve.
  *
  * Method `'hexagon-limit'`: the vector is clipped to the hexagon (radius = m), angle kept, no
- * compensation; its fundamental saturates at (3/π)·ln 3 (common practice).
+ * compensation (common practice); its fundamental is that of the clipped circle of radius m,
+ * below m, and stays below (3/π)·ln 3 (the whole hexagon) however large m is.
  *
  * @param m - commanded modulation index in [0, 2√3/π]
  * @throws ParameterRangeError naming `m` or `method`

@@ -13,8 +13,8 @@ export const HEXAGON_VERTEX_M = 2 / Math.sqrt(3);
 /**
  * Fundamental, in m units, of a reference that runs round the hexagon at uniform angular speed:
  * (1/π)·∫ sec over a sector = (3/π)·ln 3 ≈ 1.0490 (standard integral ∫sec = ln|sec + tan|).
- * The end of Holtz's overmodulation mode I and the saturation of the uncompensated hexagon
- * limit (about 0.9514 of six-step).
+ * The end of Holtz's overmodulation mode I and the bound of the uncompensated hexagon limit
+ * (about 0.9514 of six-step).
  */
 export const HEXAGON_TRAJECTORY_M = (3 / Math.PI) * Math.log(3);
 

@@ -105,6 +105,6 @@ export type OvermodulationMode =
  *   inverters in the overmodulation range including the six-step mode", IEEE Trans. Power
  *   Electron., 1993: mode I then mode II, continuous up to six-step.
  * - `'hexagon-limit'`: the vector's magnitude is clipped to the hexagon, angle kept, no
- *   compensation (common practice); its fundamental saturates at (3/π)·ln 3 in m units.
+ *   compensation (common practice); its fundamental stays below m and below (3/π)·ln 3.
  */
 export type OvermodulationMethod = 'two-mode' | 'hexagon-limit';
