@@ -11,5 +11,7 @@ export * from './spectrum/index.js';
 export * from './numeric/index.js';
 export * from './carrier/index.js';
 export * from './three-phase/index.js';
+export * from './sweep/index.js';
 export * from './load/index.js';
 export * from './space-vector/index.js';
+export * from './filter/index.js';
