@@ -5,4 +5,3 @@ export * from './compareWithCarrier.js';
 export * from './assertCarrierOptions.js';
 export * from './sineReference.js';
 export * from './sineTriangle.js';
-export * from './carrierGroupOf.js';
