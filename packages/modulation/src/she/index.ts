@@ -4,3 +4,4 @@ export * from './solveShe.js';
 export type { SheSolverSettings } from './sheOptions.js';
 export * from './sheSweep.js';
 export * from './optimalPulsePattern.js';
+export * from './optimalPulseSweep.js';
