@@ -1,0 +1,94 @@
+import express, { type Express } from 'express';
+import * as OpenApiValidator from 'express-openapi-validator';
+import helmet from 'helmet';
+import multer from 'multer';
+import swaggerUi from 'swagger-ui-express';
+import { createAuthorizer } from './auth/authorize.js';
+import { loadConfig, type AppConfig } from './config.js';
+import { openDatabase } from './db/database.js';
+import { migrate } from './db/migrate.js';
+import { HttpError } from './http/errors.js';
+import { problemHandler } from './http/problemHandler.js';
+import { staticWeb } from './http/staticWeb.js';
+import { defineModels } from './models/index.js';
+import { listOperations, loadOpenApiDocument } from './openapi.js';
+import { accountRoutes } from './routes/accountRoutes.js';
+import { studyRoutes } from './routes/studyRoutes.js';
+import { createServices, type Services } from './services/index.js';
+import { seedDemo } from './services/seed.js';
+
+export { loadConfig, type AppConfig } from './config.js';
+
+/** Largest accepted capture upload, in bytes. */
+export const MAX_UPLOAD_BYTES = 5 * 1024 * 1024;
+
+/** The Express app plus what a caller needs to shut it down and to look inside in tests. */
+export type PulsewrightApp = Express & {
+  services: Services;
+  /** Whether this start created the database (and seeded it, when seeding is on). */
+  freshDatabase: boolean;
+  /** Stops background work and closes the database. */
+  close(): Promise<void>;
+};
+
+/**
+ * Builds the service: opens and migrates the database, seeds a new one, marks jobs a crash left
+ * running as failed, and assembles the middleware. It never listens; src/index.ts does.
+ */
+export async function createApp(overrides: Partial<AppConfig> = {}): Promise<PulsewrightApp> {
+  const config = { ...loadConfig(), ...overrides };
+  const document = loadOpenApiDocument();
+  listOperations(document); // throws when an operation has no role requirement
+  const sequelize = await openDatabase(config.databaseUrl);
+  const { fresh } = await migrate(sequelize);
+  const models = defineModels(sequelize);
+  const services = createServices(models, config);
+  if (fresh && config.seedDemo) await seedDemo(services, config.demoPassword);
+
+  const app = express() as PulsewrightApp;
+  app.disable('x-powered-by');
+  app.set('trust proxy', false);
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // Swagger UI and the dashboard need inline styles and data: images; scripts stay 'self'.
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+        },
+      },
+    }),
+  );
+  // No CORS headers: the dashboard is served from this origin, and scripts are not browsers.
+  app.use('/api', express.json({ limit: '1mb' }));
+
+  app.get('/api/openapi.json', (_req, res) => {
+    res.json(document);
+  });
+  app.use('/api/docs', swaggerUi.serve, swaggerUi.setup(document, { customSiteTitle: 'Pulsewright API' }));
+
+  app.use(
+    OpenApiValidator.middleware({
+      apiSpec: structuredClone(document) as never,
+      validateRequests: { allErrors: true, discriminator: true, allowUnknownQueryParameters: false },
+      validateResponses: true,
+      validateSecurity: { handlers: { bearerAuth: createAuthorizer(services.auth) } },
+      ignorePaths: (path: string) => !path.startsWith('/api/') || path.startsWith('/api/docs') || path === '/api/openapi.json',
+      fileUploader: { storage: multer.memoryStorage(), limits: { fileSize: MAX_UPLOAD_BYTES, files: 1, fields: 10 } },
+    }),
+  );
+  const version = document.info.version;
+  app.use(accountRoutes(services, { ...config, version }));
+  app.use(studyRoutes(services));
+  app.use('/api', (req, _res, next) => next(new HttpError(404, `No route ${req.method} ${req.originalUrl}.`)));
+  app.use(staticWeb(config.webDist));
+  app.use(problemHandler(document, config.logErrors));
+
+  app.services = services;
+  app.freshDatabase = fresh;
+  app.close = async () => {
+    services.mailer.close();
+    await sequelize.close();
+  };
+  return app;
+}

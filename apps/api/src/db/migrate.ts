@@ -1,0 +1,26 @@
+import type { Sequelize } from 'sequelize';
+import { SequelizeStorage, Umzug } from 'umzug';
+import * as initialSchema from '../migrations/0001-initial-schema.js';
+
+/** The migrations in order; listed by hand so src/ and dist/ run the same set. */
+const MIGRATIONS = [{ name: '0001-initial-schema', ...initialSchema }];
+
+/**
+ * Applies pending migrations. Returns true when the database was new (no migration had run),
+ * which is when the demo scenario is seeded.
+ */
+export async function migrate(sequelize: Sequelize): Promise<{ fresh: boolean; applied: string[] }> {
+  const umzug = new Umzug({
+    migrations: MIGRATIONS.map(({ name, up, down }) => ({
+      name,
+      up: () => up({ context: sequelize.getQueryInterface() }),
+      down: () => down({ context: sequelize.getQueryInterface() }),
+    })),
+    context: sequelize.getQueryInterface(),
+    storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
+    logger: undefined,
+  });
+  const executed = await umzug.executed();
+  const applied = await umzug.up();
+  return { fresh: executed.length === 0, applied: applied.map((m) => m.name) };
+}

@@ -1,0 +1,56 @@
+import { Router } from 'express';
+import { intQuery } from '../http/query.js';
+import { principalOf } from '../auth/authorize.js';
+import type { Services } from '../services/index.js';
+
+/** Projects and studies (every study edit is a new revision). */
+export function studyRoutes(services: Services): Router {
+  const router = Router();
+  const { projects, studies } = services;
+  const text = (value: unknown): string | undefined => (typeof value === 'string' ? value : undefined);
+
+  router.get('/api/v1/projects', async (req, res) => {
+    res.json(await projects.list(principalOf(req).teamId, text(req.query.q)));
+  });
+  router.post('/api/v1/projects', async (req, res) => {
+    res.status(201).json(await projects.create(principalOf(req), req.body));
+  });
+  router.get('/api/v1/projects/:id', async (req, res) => {
+    res.json(await projects.get(principalOf(req).teamId, req.params.id));
+  });
+  router.patch('/api/v1/projects/:id', async (req, res) => {
+    res.json(await projects.update(principalOf(req), req.params.id, req.body));
+  });
+
+  router.get('/api/v1/studies', async (req, res) => {
+    res.json(
+      await studies.list(principalOf(req).teamId, {
+        projectId: text(req.query.projectId),
+        q: text(req.query.q),
+        limit: intQuery(req.query.limit, 50),
+        offset: intQuery(req.query.offset, 0),
+      }),
+    );
+  });
+  router.post('/api/v1/studies', async (req, res) => {
+    const { projectId, ...content } = req.body;
+    res.status(201).json(await studies.create(principalOf(req), projectId, content));
+  });
+  router.get('/api/v1/studies/:id', async (req, res) => {
+    res.json(await studies.get(principalOf(req).teamId, req.params.id));
+  });
+  router.put('/api/v1/studies/:id', async (req, res) => {
+    const { baseRevision, ...content } = req.body;
+    res.json(await studies.update(principalOf(req), req.params.id, baseRevision, content));
+  });
+  router.post('/api/v1/studies/:id/duplicate', async (req, res) => {
+    res.status(201).json(await studies.duplicate(principalOf(req), req.params.id, text(req.body?.name)));
+  });
+  router.get('/api/v1/studies/:id/revisions', async (req, res) => {
+    res.json(await studies.revisions(principalOf(req).teamId, req.params.id));
+  });
+  router.post('/api/v1/studies/:id/revisions/:revision/restore', async (req, res) => {
+    res.json(await studies.restore(principalOf(req), req.params.id, Number(req.params.revision), req.body.baseRevision));
+  });
+  return router;
+}

@@ -1,0 +1,119 @@
+import bcrypt from 'bcryptjs';
+import { Op } from 'sequelize';
+import type { Models, Role } from '../models/index.js';
+import type { AuditLog } from './audit.js';
+import { iso } from './dto.js';
+import { lowerRole, type Principal } from './principal.js';
+import { API_KEY_PREFIX, hashToken, newSecret, SESSION_PREFIX } from './tokens.js';
+import { unauthenticated } from '../http/errors.js';
+
+/** Touch `lastUsedAt` at most this often, so reads do not each become a write. */
+const LAST_USED_RESOLUTION_MS = 60_000;
+
+export interface SessionTokenDto {
+  token: string;
+  expiresAt: string;
+}
+
+/** Sign-in, sessions and the lookup of bearer tokens (sessions and API keys). */
+export class AuthService {
+  /** A real bcrypt hash to compare against when the e-mail is unknown, so timing tells nothing. */
+  private readonly dummyHash: string;
+
+  constructor(
+    private readonly models: Models,
+    private readonly audit: AuditLog,
+    private readonly options: { sessionHours: number; bcryptRounds: number },
+  ) {
+    this.dummyHash = bcrypt.hashSync('pulsewright-no-such-user', 4);
+  }
+
+  hashPassword(password: string): Promise<string> {
+    return bcrypt.hash(password, this.options.bcryptRounds);
+  }
+
+  async login(email: string, password: string): Promise<SessionTokenDto> {
+    const user = await this.models.User.findOne({ where: { email: email.toLowerCase() } });
+    const ok = await bcrypt.compare(password, user?.passwordHash ?? this.dummyHash);
+    if (!user || !user.passwordHash || !ok) {
+      await this.audit.record(null, 'auth.login-failed', 'user', user?.id ?? null, { email: email.toLowerCase() });
+      throw unauthenticated('The e-mail address or the password is wrong.');
+    }
+    const membership = await this.models.Membership.findOne({ where: { userId: user.id }, order: [['createdAt', 'ASC']] });
+    if (!membership) throw unauthenticated('This account is not a member of any team.');
+    const session = await this.startSession(user.id, membership.teamId);
+    await this.audit.record({ userId: user.id, email: user.email, teamId: membership.teamId }, 'auth.login', 'user', user.id);
+    return session;
+  }
+
+  async startSession(userId: string, teamId: string): Promise<SessionTokenDto> {
+    const token = newSecret(SESSION_PREFIX);
+    const expiresAt = new Date(Date.now() + this.options.sessionHours * 3600_000);
+    await this.models.Session.create({ userId, teamId, tokenHash: hashToken(token), expiresAt });
+    return { token, expiresAt: iso(expiresAt) };
+  }
+
+  async logout(principal: Principal): Promise<void> {
+    if (principal.authMethod !== 'session') return;
+    await this.models.Session.update({ revokedAt: new Date() }, { where: { id: principal.credentialId } });
+    await this.audit.record(principal, 'auth.logout', 'user', principal.user.id);
+  }
+
+  /** Ends every session of a user (password change, removal from the team). */
+  async endSessions(userId: string, teamId?: string): Promise<void> {
+    await this.models.Session.update(
+      { revokedAt: new Date() },
+      { where: { userId, revokedAt: null, ...(teamId ? { teamId } : {}) } },
+    );
+  }
+
+  /** The principal a bearer token stands for, or null when it is unknown, expired or revoked. */
+  async authenticate(token: string): Promise<Principal | null> {
+    const now = new Date();
+    if (token.startsWith(SESSION_PREFIX)) {
+      const session = await this.models.Session.findOne({
+        where: { tokenHash: hashToken(token), revokedAt: null, expiresAt: { [Op.gt]: now } },
+      });
+      if (!session) return null;
+      const principal = await this.principalFor(session.userId, session.teamId, null, 'session', session.id);
+      if (principal && (!session.lastUsedAt || now.getTime() - session.lastUsedAt.getTime() > LAST_USED_RESOLUTION_MS)) {
+        await session.update({ lastUsedAt: now });
+      }
+      return principal;
+    }
+    if (token.startsWith(API_KEY_PREFIX)) {
+      const key = await this.models.ApiKey.findOne({ where: { keyHash: hashToken(token), revokedAt: null } });
+      if (!key || (key.expiresAt && key.expiresAt <= now)) return null;
+      const principal = await this.principalFor(key.userId, key.teamId, key.role, 'api-key', key.id);
+      if (principal && (!key.lastUsedAt || now.getTime() - key.lastUsedAt.getTime() > LAST_USED_RESOLUTION_MS)) {
+        await key.update({ lastUsedAt: now });
+      }
+      return principal;
+    }
+    return null;
+  }
+
+  private async principalFor(
+    userId: string,
+    teamId: string,
+    keyRole: Role | null,
+    authMethod: Principal['authMethod'],
+    credentialId: string,
+  ): Promise<Principal | null> {
+    const [user, membership, team] = await Promise.all([
+      this.models.User.findByPk(userId),
+      this.models.Membership.findOne({ where: { userId, teamId } }),
+      this.models.Team.findByPk(teamId),
+    ]);
+    // A removed member's sessions and keys stop working at once.
+    if (!user || !membership || !team) return null;
+    return {
+      user: { id: user.id, email: user.email, name: user.name },
+      teamId,
+      teamName: team.name,
+      role: keyRole ? lowerRole(keyRole, membership.role) : membership.role,
+      authMethod,
+      credentialId,
+    };
+  }
+}

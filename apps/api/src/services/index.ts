@@ -1,0 +1,38 @@
+import type { AppConfig } from '../config.js';
+import type { Models } from '../models/index.js';
+import { ApiKeyService } from './apiKeys.js';
+import { AuditLog } from './audit.js';
+import { AuthService } from './auth.js';
+import { Mailer } from './mail.js';
+import { ProjectService } from './projects.js';
+import { StudyService } from './studies.js';
+import { TeamService } from './team.js';
+
+/** Every service of one running app, wired to one database. */
+export interface Services {
+  models: Models;
+  audit: AuditLog;
+  auth: AuthService;
+  apiKeys: ApiKeyService;
+  mailer: Mailer;
+  team: TeamService;
+  projects: ProjectService;
+  studies: StudyService;
+}
+
+export function createServices(models: Models, config: AppConfig): Services {
+  const audit = new AuditLog(models);
+  const auth = new AuthService(models, audit, { sessionHours: config.sessionHours, bcryptRounds: config.bcryptRounds });
+  const mailer = new Mailer(models, config.smtpUrl, config.mailFrom);
+  const projects = new ProjectService(models, audit);
+  return {
+    models,
+    audit,
+    auth,
+    apiKeys: new ApiKeyService(models, audit),
+    mailer,
+    team: new TeamService(models, audit, auth, mailer, config.publicUrl),
+    projects,
+    studies: new StudyService(models, audit, projects),
+  };
+}

@@ -1,0 +1,75 @@
+import { fn, col, Op } from 'sequelize';
+import type { Models, ProjectRow } from '../models/index.js';
+import { notFound } from '../http/errors.js';
+import type { AuditLog } from './audit.js';
+import { iso } from './dto.js';
+import type { Principal } from './principal.js';
+
+export interface ProjectDto {
+  id: string;
+  name: string;
+  description: string;
+  studyCount: number;
+  createdAt: string;
+  updatedAt: string;
+}
+
+/** Escapes LIKE wildcards so a search for `50%` means the text `50%`. */
+export function likePattern(text: string): string {
+  return `%${text.toLowerCase().replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+}
+
+export class ProjectService {
+  constructor(
+    private readonly models: Models,
+    private readonly audit: AuditLog,
+  ) {}
+
+  async list(teamId: string, q?: string): Promise<ProjectDto[]> {
+    const where = q
+      ? { teamId, [Op.and]: [this.models.sequelize.where(fn('lower', col('name')), { [Op.like]: likePattern(q) })] }
+      : { teamId };
+    const rows = await this.models.Project.findAll({ where, order: [['name', 'ASC']] });
+    return Promise.all(rows.map((row) => this.toDto(row)));
+  }
+
+  async get(teamId: string, id: string): Promise<ProjectDto> {
+    return this.toDto(await this.find(teamId, id));
+  }
+
+  async find(teamId: string, id: string): Promise<ProjectRow> {
+    const row = await this.models.Project.findOne({ where: { id, teamId } });
+    if (!row) throw notFound('That project');
+    return row;
+  }
+
+  async create(principal: Principal, input: { name: string; description?: string }): Promise<ProjectDto> {
+    const row = await this.models.Project.create({
+      teamId: principal.teamId,
+      name: input.name,
+      description: input.description ?? '',
+      createdById: principal.user.id,
+    });
+    await this.audit.record(principal, 'project.create', 'project', row.id, { name: row.name });
+    return this.toDto(row);
+  }
+
+  async update(principal: Principal, id: string, input: { name?: string; description?: string }): Promise<ProjectDto> {
+    const row = await this.find(principal.teamId, id);
+    await row.update(input);
+    await this.audit.record(principal, 'project.update', 'project', row.id, { ...input });
+    return this.toDto(row);
+  }
+
+  private async toDto(row: ProjectRow): Promise<ProjectDto> {
+    const studyCount = await this.models.Study.count({ where: { projectId: row.id } });
+    return {
+      id: row.id,
+      name: row.name,
+      description: row.description,
+      studyCount,
+      createdAt: iso(row.createdAt),
+      updatedAt: iso(row.updatedAt),
+    };
+  }
+}
