@@ -15,3 +15,4 @@ export * from './sweep/index.js';
 export * from './load/index.js';
 export * from './space-vector/index.js';
 export * from './filter/index.js';
+export * from './she/index.js';
