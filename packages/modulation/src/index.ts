@@ -16,3 +16,4 @@ export * from './load/index.js';
 export * from './space-vector/index.js';
 export * from './filter/index.js';
 export * from './she/index.js';
+export * from './firmware/index.js';

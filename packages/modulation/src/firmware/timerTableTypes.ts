@@ -1,0 +1,146 @@
+/**
+ * Types of a timer compare table ({@link timerTable}). Plain, serialisable data.
+ *
+ * Units: frequencies in hertz, times in seconds, voltages in volts, angles in radians of the
+ * fundamental, compare and period values in timer counts (ticks of the timer clock).
+ */
+
+/** The modulation a table is built from (regular-sampled sine reference, peak `ma`). */
+export type TimerModulation =
+  | {
+      /** Single-phase H-bridge, sine reference `ma·sin θ` against one carrier. */
+      method: 'sine-triangle';
+      /**
+       * `'bipolar'`: one channel (leg A); leg B is driven crosswise from leg A's complementary
+       * outputs (the diagonal pairs switch together). `'unipolar'`: two channels, leg A from
+       * `+ma·sin θ` and leg B from `−ma·sin θ`, both against the same carrier.
+       */
+      scheme: 'bipolar' | 'unipolar';
+      ma: number;
+    }
+  | {
+      /** Three-phase two-level inverter, legs a, b, c at 0, −2π/3, −4π/3. */
+      method: 'three-phase';
+      /** @default 'none' */
+      zeroSequence?: 'none' | 'third-harmonic' | 'min-max';
+      ma: number;
+    };
+
+/** Counting mode of the timer. */
+export type CountingMode = 'edge-aligned' | 'centre-aligned';
+
+/** What is done to a pulse narrower than the minimum width: left out, or widened to it. */
+export type NarrowPulseAction = 'drop' | 'clamp';
+
+/** How the dead time reaches the hardware. */
+export type DeadTimeMethod = 'compare-offset' | 'dead-time-register';
+
+/** Options of {@link timerTable}. */
+export interface TimerTableOptions {
+  modulation: TimerModulation;
+  /** Fundamental (output) frequency, Hz. */
+  fundamentalFrequency: number;
+  /** Carrier (switching) frequency, Hz. */
+  carrierFrequency: number;
+  /**
+   * `'regular-symmetric'`: one compare value per carrier period; `'regular-asymmetric'`: one
+   * per half carrier period (centre-aligned only).
+   * @default 'regular-symmetric'
+   */
+  sampling?: 'regular-symmetric' | 'regular-asymmetric';
+  /** Timer input clock after the prescaler, Hz. */
+  timerClock: number;
+  /** @default 'centre-aligned' */
+  countingMode?: CountingMode;
+  /** Counter width in bits, integer 8..32. @default 16 */
+  counterBits?: number;
+  /** Dead time between complementary outputs, seconds. @default 0 */
+  deadTime?: number;
+  /**
+   * `'compare-offset'` (centre-aligned only): separate high- and low-side compare values,
+   * each moved half the dead time away from the ideal edge. `'dead-time-register'`: one
+   * compare value per channel; the timer's dead-time generator delays every turn-on.
+   * @default 'compare-offset' for centre-aligned, 'dead-time-register' for edge-aligned
+   */
+  deadTimeMethod?: DeadTimeMethod;
+  /**
+   * Entries per fundamental period; must divide the updates per fundamental period
+   * (carrierFrequency/fundamentalFrequency, × 2 for asymmetric sampling).
+   * @default the updates per fundamental period (one entry per update)
+   */
+  tableLength?: number;
+  /** DC bus voltage, V (for the quantisation figures and the realised waveforms). @default 1 */
+  vdc?: number;
+}
+
+/** One timer channel (one inverter leg). */
+export interface TimerChannel {
+  /** Short identifier, `a`, `b` or `c` (used for C and CSV names). */
+  name: string;
+  /** What the channel drives, in words. */
+  description: string;
+  /** Ideal duty cycle of the high-side switch per entry, fraction in [0, 1] (no dead time). */
+  duty: number[];
+  /** Ideal compare value per entry, rounded to counts (no dead time). */
+  compare: number[];
+  /** High-side compare value per entry, counts (dead time applied for 'compare-offset'). */
+  highSide: number[];
+  /** Low-side compare value per entry, counts (dead time applied for 'compare-offset'). */
+  lowSide: number[];
+}
+
+/** A soft problem: the table is usable but the engineer should know. */
+export interface TimerWarning {
+  field: string;
+  message: string;
+}
+
+/** Result of {@link timerTable}. */
+export interface TimerTable {
+  /** Every input, defaults filled in. */
+  parameters: {
+    modulation: { method: 'sine-triangle' | 'three-phase'; scheme?: 'bipolar' | 'unipolar'; zeroSequence?: 'none' | 'third-harmonic' | 'min-max'; ma: number };
+    fundamentalFrequency: number;
+    carrierFrequency: number;
+    sampling: 'regular-symmetric' | 'regular-asymmetric';
+    timerClock: number;
+    countingMode: CountingMode;
+    counterBits: number;
+    deadTime: number;
+    deadTimeMethod: DeadTimeMethod;
+    tableLength: number;
+    vdc: number;
+  };
+  /** Unit of each numeric field of `parameters` and of the result. */
+  units: Record<string, string>;
+  /** The generation conventions, one sentence each (copied into the C header). */
+  conventions: string[];
+  /** Value for the period register: ARR = ticks − 1 (edge-aligned) or P (centre-aligned). */
+  periodRegister: number;
+  /** Compare value of 100 % duty: ARR + 1 (edge-aligned) or P (centre-aligned). */
+  fullScaleCounts: number;
+  /** Timer clock ticks in one carrier period: ARR + 1 or 2·P. */
+  ticksPerCarrierPeriod: number;
+  /** Carrier frequency the rounded period register gives, Hz. */
+  realisedCarrierFrequency: number;
+  /** Fundamental frequency the table gives at the realised carrier frequency, Hz. */
+  realisedFundamentalFrequency: number;
+  /** Carrier periods per fundamental period (integer). */
+  carrierPeriodsPerFundamental: number;
+  /** Compare updates per fundamental period (carrier periods, × 2 for asymmetric sampling). */
+  updatesPerFundamental: number;
+  /** Consecutive updates that reuse one entry (updatesPerFundamental / tableLength). */
+  updatesPerEntry: number;
+  /** Dead time in timer ticks (rounded up, so never shorter than asked). */
+  deadTimeCounts: number;
+  /** deadTimeCounts / timerClock, s. */
+  realisedDeadTime: number;
+  /** Angle at which each entry's reference was sampled, radians of the fundamental. */
+  entryAngles: number[];
+  channels: TimerChannel[];
+  /** Change of a leg's average voltage for one count, V (vdc / fullScaleCounts). */
+  quantisationStep: number;
+  /** Largest |rounded − ideal| compare over the table, expressed in volts of leg average. */
+  maxQuantisationError: number;
+  warnings: TimerWarning[];
+}
