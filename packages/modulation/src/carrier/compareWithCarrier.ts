@@ -82,6 +82,10 @@ function pushNaturalHalfPeriod(
 ): void {
   const difference = (theta: number): number => reference.value(theta) - carrierAt(theta);
   const points = searchGrid(reference, start, end);
+  if (points.length === 2) {
+    pushSinglePiece(transitions, difference, start, end, level);
+    return;
+  }
   // Every grid point is a candidate edge: at a breakpoint the reference may jump, so the sign
   // is read just inside each piece (4 ulp in) and the piece's own crossing found by Brent.
   const candidates: number[] = [...points];
@@ -104,6 +108,29 @@ function pushNaturalHalfPeriod(
     if (b - a <= 0) continue;
     transitions.push({ angle: a, level: level(difference((a + b) / 2) > 0) });
   }
+}
+
+/**
+ * The common case of one monotonic piece (no breakpoint, slope below the carrier's): at most one
+ * crossing, so the level before and after it follow from the signs at the ends.
+ */
+function pushSinglePiece(
+  transitions: Transition[],
+  difference: (theta: number) => number,
+  start: number,
+  end: number,
+  level: (above: boolean) => number,
+): void {
+  const a = insideFrom(start, 1);
+  const b = insideFrom(end, -1);
+  const fa = difference(a);
+  const fb = difference(b);
+  if (fa > 0 === fb > 0 || fa === 0 || fb === 0) {
+    transitions.push({ angle: start, level: level(difference((start + end) / 2) > 0) });
+    return;
+  }
+  transitions.push({ angle: start, level: level(fa > 0) });
+  transitions.push({ angle: findBracketedRoot(difference, a, b, fa, fb), level: level(fb > 0) });
 }
 
 /** `angle` moved 4 units in the last place towards `direction` (+1 or −1). */

@@ -1,0 +1,20 @@
+/** Median wall time (ms) of `runs` calls of `task` after `warmup` untimed calls. */
+export function medianTime(task: () => unknown, runs = 30, warmup = 5): number {
+  for (let i = 0; i < warmup; i++) task();
+  const times: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const start = performance.now();
+    task();
+    times.push(performance.now() - start);
+  }
+  times.sort((a, b) => a - b);
+  return times[Math.floor(times.length / 2)] as number;
+}
+
+/** Prints a markdown table of label/value rows under a heading. */
+export function printTable(heading: string, rows: [string, string][]): void {
+  console.log(`\n### ${heading}\n`);
+  console.log('| measure | value |');
+  console.log('| --- | --- |');
+  for (const [label, value] of rows) console.log(`| ${label} | ${value} |`);
+}
