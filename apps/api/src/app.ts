@@ -11,13 +11,33 @@ import { HttpError } from './http/errors.js';
 import { problemHandler } from './http/problemHandler.js';
 import { staticWeb } from './http/staticWeb.js';
 import { defineModels } from './models/index.js';
-import { listOperations, loadOpenApiDocument } from './openapi.js';
+import { listOperations, loadOpenApiDocument, type OpenApiDocument } from './openapi.js';
 import { accountRoutes } from './routes/accountRoutes.js';
 import { studyRoutes } from './routes/studyRoutes.js';
 import { createServices, type Services } from './services/index.js';
 import { seedDemo } from './services/seed.js';
 
 export { loadConfig, type AppConfig } from './config.js';
+
+/**
+ * A copy of the document for express-openapi-validator. Ajv's discriminator support (which
+ * keeps errors to the chosen oneOf branch) refuses `mapping`, which openapi-typescript needs
+ * to type the tag, so the copy drops the mappings; the tags are `const` in each branch anyway.
+ */
+function documentForValidator(document: OpenApiDocument): OpenApiDocument {
+  const copy = structuredClone(document);
+  const visit = (node: unknown): void => {
+    if (Array.isArray(node)) node.forEach(visit);
+    else if (node && typeof node === 'object') {
+      const record = node as Record<string, unknown>;
+      const discriminator = record.discriminator as Record<string, unknown> | undefined;
+      if (discriminator && typeof discriminator === 'object') delete discriminator.mapping;
+      Object.values(record).forEach(visit);
+    }
+  };
+  visit(copy);
+  return copy;
+}
 
 /** Largest accepted capture upload, in bytes. */
 export const MAX_UPLOAD_BYTES = 5 * 1024 * 1024;
@@ -69,7 +89,7 @@ export async function createApp(overrides: Partial<AppConfig> = {}): Promise<Pul
 
   app.use(
     OpenApiValidator.middleware({
-      apiSpec: structuredClone(document) as never,
+      apiSpec: documentForValidator(document) as never,
       validateRequests: { allErrors: true, discriminator: true, allowUnknownQueryParameters: false },
       validateResponses: true,
       validateSecurity: { handlers: { bearerAuth: createAuthorizer(services.auth) } },

@@ -1,0 +1,42 @@
+/**
+ * Compile-time checks of the paths DESIGN.md promises to scripts. The build fails when the
+ * OpenAPI document drops or reshapes one of them, before any caller notices at run time.
+ */
+import type { paths } from './schema.js';
+
+type JsonBody<P extends keyof paths, M extends keyof paths[P]> = paths[P][M] extends {
+  requestBody?: { content: { 'application/json': infer B } };
+}
+  ? B
+  : never;
+type JsonAnswer<P extends keyof paths, M extends keyof paths[P], S extends number> = paths[P][M] extends {
+  responses: { [K in S]: { content: { 'application/json': infer B } } };
+}
+  ? B
+  : never;
+
+const login: JsonBody<'/api/v1/auth/login', 'post'> = { email: 'a@b.example', password: 'x' };
+const token: JsonAnswer<'/api/v1/auth/login', 'post', 200>['token'] = '';
+const key: JsonBody<'/api/v1/api-keys', 'post'> = { name: 'ci', role: 'viewer' };
+const keyAnswer: Pick<JsonAnswer<'/api/v1/api-keys', 'post', 201>, 'id' | 'key'> = { id: '', key: '' };
+const spectrum: JsonBody<'/api/v1/spectra', 'post'> = {
+  modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8, mf: 21, vdc: 400, sampling: 'natural', carrierPhase: 0 },
+  maxOrder: 50,
+};
+const spectrumAnswer: JsonAnswer<'/api/v1/spectra', 'post', 200> = {
+  harmonics: [{ order: 1, amplitude: 0, phase: 0 }],
+  thd: 0,
+  wthd: 0,
+};
+type Exists = [
+  paths['/api/health']['get'],
+  paths['/api/v1/me']['get'],
+  paths['/api/v1/api-keys/{id}']['delete'],
+  paths['/api/v1/projects']['get'],
+  paths['/api/v1/studies']['post'],
+  paths['/api/v1/captures']['post'],
+  paths['/api/v1/jobs/{id}']['get'],
+];
+
+/** Referenced so the checks above are not unused. */
+export const contractChecks: readonly unknown[] = [login, token, key, keyAnswer, spectrum, spectrumAnswer, null as unknown as Exists];
