@@ -17,3 +17,4 @@ export * from './space-vector/index.js';
 export * from './filter/index.js';
 export * from './she/index.js';
 export * from './firmware/index.js';
+export * from './losses/index.js';

@@ -1,0 +1,6 @@
+export * from './lossTypes.js';
+export * from './semiconductorLosses.js';
+export * from './legLossesFromSamples.js';
+export * from './semiconductorLossesByIntegration.js';
+export * from './rippleInductance.js';
+export * from './switchingFrequencyTradeoff.js';
