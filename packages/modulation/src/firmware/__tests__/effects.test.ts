@@ -125,6 +125,14 @@ describe('deadTimeEffect', () => {
     assertInDelta(effect.fundamentalChange, Math.hypot(v, lossBridge) - v, 0.05);
   });
 
+  it('follows a given current sign: a constant current out of leg A shifts the mean', () => {
+    // Constant current out of leg A (into leg B): every carrier period loses one dead time on
+    // leg A and gains one on leg B, so vAB's mean is −2·td·fsw·vdc (same volt-second rule).
+    const table = timerTable(bipolar);
+    const output = timerTableWaveforms(table, { currentSign: () => 1 }).outputs[0]!;
+    assertInDelta(harmonics(output, 0)[0]!.amplitude, -2 * 1e-6 * 10_000 * vdc, 1e-9 * vdc);
+  });
+
   it('lowers a line-to-line fundamental by √3·(4/π)·td·fsw·vdc', () => {
     const effect = deadTimeEffect(timerTable({ ...bipolar, modulation: { method: 'three-phase', ma: 0.8 } }));
     const loss = Math.sqrt(3) * (4 / Math.PI) * 1e-6 * 10_000 * vdc;
