@@ -82,14 +82,14 @@ const input = new Float64Array(samples);
 const output = fft.createComplexArray() as unknown as Float64Array;
 const reference = independentReference();
 
-const exactTime = medianTime(exactSpectrum, 50);
-const sampledTime = medianTime(() => sampledSpectrum(fft, input, output), 20);
+const exactTime = medianTime(exactSpectrum, 400, 400);
+const sampledTime = medianTime(() => sampledSpectrum(fft, input, output), 100, 50);
 const exactError = maxError(exactSpectrum(), reference);
 const sampledError = maxError(sampledSpectrum(fft, input, output), reference);
 const sweepTime = medianTime(
   () => sweepModulationIndex((m) => sineTriangle({ scheme: 'bipolar', ma: m, mf, vdc }), { from: 0.05, to: 1.3, points: 100, maxOrder }),
-  7,
-  2,
+  15,
+  3,
 );
 
 printTable(`Exact spectrum vs sampled FFT baseline (bipolar natural PWM, mf = ${mf}, orders 0..${maxOrder})`, [

@@ -16,4 +16,10 @@ export interface ReferenceSignal {
    * @default []
    */
   breakpoints?: readonly number[];
+  /**
+   * True when value(θ + π) = −value(θ) exactly (sines, odd zero sequences): with odd mf the
+   * comparator then needs only half a period, and the output has half-wave symmetry.
+   * @default false
+   */
+  halfWaveAntisymmetric?: boolean;
 }

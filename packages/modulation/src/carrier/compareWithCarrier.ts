@@ -30,8 +30,13 @@ export function compareWithCarrier(
 ): Waveform {
   const alignment = { mf, carrierPhase };
   const transitions: Transition[] = [];
+  // With odd mf the carrier half a fundamental period later is the negated carrier, so an
+  // antisymmetric reference gives v(θ + π) = high + low − v(θ): compute half, mirror the rest.
+  // Symmetric regular sampling is the exception: it samples at peaks only, which map to valleys.
+  const mirrored =
+    mf % 2 === 1 && reference.halfWaveAntisymmetric === true && sampling !== 'regular-symmetric';
   // 2·mf carrier half periods cover exactly one fundamental period; start at any boundary.
-  for (let j = 0; j < 2 * mf; j++) {
+  for (let j = 0; j < (mirrored ? mf : 2 * mf); j++) {
     const start = fundamentalAngleOfCarrier(j * Math.PI, alignment);
     const end = fundamentalAngleOfCarrier((j + 1) * Math.PI, alignment);
     // Even j starts at a valley (carrier rising from −1), odd j at a peak (falling from +1).
@@ -50,6 +55,13 @@ export function compareWithCarrier(
           ? start
           : fundamentalAngleOfCarrier((j - 1) * Math.PI, alignment);
       pushRegularHalfPeriod(transitions, reference.value(sampleAngle), start, end, rising, level);
+    }
+  }
+  if (mirrored) {
+    const half = transitions.length;
+    for (let k = 0; k < half; k++) {
+      const { angle, level } = transitions[k] as Transition;
+      transitions.push({ angle: angle + Math.PI, level: high + low - level });
     }
   }
   return waveformFromTransitions(transitions);
@@ -81,11 +93,11 @@ function pushNaturalHalfPeriod(
   level: (above: boolean) => number,
 ): void {
   const difference = (theta: number): number => reference.value(theta) - carrierAt(theta);
-  const points = searchGrid(reference, start, end);
-  if (points.length === 2) {
+  if (isSinglePiece(reference, start, end)) {
     pushSinglePiece(transitions, difference, start, end, level);
     return;
   }
+  const points = searchGrid(reference, start, end);
   // Every grid point is a candidate edge: at a breakpoint the reference may jump, so the sign
   // is read just inside each piece (4 ulp in) and the piece's own crossing found by Brent.
   const candidates: number[] = [...points];
@@ -108,6 +120,13 @@ function pushNaturalHalfPeriod(
     if (b - a <= 0) continue;
     transitions.push({ angle: a, level: level(difference((a + b) / 2) > 0) });
   }
+}
+
+/** True when [start, end] needs no split: slope below half the carrier's, no breakpoint. */
+function isSinglePiece(reference: ReferenceSignal, start: number, end: number): boolean {
+  if (2 * reference.slopeBound * (end - start) > 2) return false;
+  const breakpoints = reference.breakpoints;
+  return breakpoints === undefined || breakpoints.length === 0;
 }
 
 /**
@@ -145,8 +164,7 @@ function insideFrom(angle: number, direction: 1 | -1): number {
  */
 function searchGrid(reference: ReferenceSignal, start: number, end: number): number[] {
   const width = end - start;
-  const carrierSlope = 2 / width;
-  const pieces = Math.max(1, Math.ceil((2 * reference.slopeBound) / carrierSlope));
+  const pieces = Math.max(1, Math.ceil(reference.slopeBound * width));
   const points: number[] = [];
   for (let k = 0; k <= pieces; k++) points.push(start + (k * width) / pieces);
   for (const breakpoint of reference.breakpoints ?? []) {

@@ -11,5 +11,6 @@ export function sineReference(amplitude: number, shift = 0): ReferenceSignal {
   return {
     value: (theta) => amplitude * Math.sin(theta - shift),
     slopeBound: Math.abs(amplitude),
+    halfWaveAntisymmetric: true,
   };
 }

@@ -1,3 +1,4 @@
+import { TAU } from '../math.js';
 import { assertNumberInRange } from '../validation/assertions.js';
 import { assertWaveform } from '../waveform/assertWaveform.js';
 import type { Waveform } from '../waveform/Waveform.js';
@@ -36,40 +37,70 @@ export function harmonics(waveform: Waveform, maxOrder: number): Harmonic[] {
   // sinSum[n] = Σ Δᵢ sin(nθᵢ), cosSum[n] = Σ Δᵢ cos(nθᵢ)
   const sinSum = new Float64Array(maxOrder + 1);
   const cosSum = new Float64Array(maxOrder + 1);
+  // Half-wave symmetry about a level, v(θ + π) = 2c − v(θ): the second half's jumps repeat the
+  // first half's negated, which doubles the odd orders and cancels the even ones.
+  const symmetric = hasHalfWaveSymmetry(waveform);
   const jumps: { theta: number; jump: number }[] = [];
-  for (let i = 0; i < edgeCount; i++) {
+  for (let i = 0; i < (symmetric ? edgeCount / 2 : edgeCount); i++) {
     const jump = (levels[i] as number) - (levels[(i + edgeCount - 1) % edgeCount] as number);
-    if (jump !== 0) jumps.push({ theta: edges[i] as number, jump });
+    if (jump !== 0) jumps.push({ theta: edges[i] as number, jump: symmetric ? 2 * jump : jump });
   }
   for (let i = 0; i < jumps.length; i += 4) {
-    accumulateFourEdges(sinSum, cosSum, jumps.slice(i, i + 4), maxOrder);
+    accumulateFourEdges(sinSum, cosSum, jumps.slice(i, i + 4), maxOrder, symmetric ? 2 : 1);
   }
   const result: Harmonic[] = [{ order: 0, amplitude: waveformMean(waveform), phase: 0 }];
   for (let n = 1; n <= maxOrder; n++) {
     // v = a_n cos nθ + b_n sin nθ with a_n = −ΣΔ sin/(πn), b_n = ΣΔ cos/(πn)
-    const a = -(sinSum[n] as number) / (Math.PI * n);
-    const b = (cosSum[n] as number) / (Math.PI * n);
-    result.push({ order: n, amplitude: Math.sqrt(a * a + b * b), phase: Math.atan2(a, b) });
+    const scale = 1 / (Math.PI * n);
+    const a = -(sinSum[n] as number) * scale;
+    const b = (cosSum[n] as number) * scale;
+    // Orders cancelled by symmetry are exactly zero: skip the costly atan2 for them.
+    const amplitude = Math.sqrt(a * a + b * b);
+    result.push({ order: n, amplitude, phase: amplitude === 0 ? 0 : Math.atan2(a, b) });
   }
   return result;
 }
 
 /**
- * Adds Σ jump·sin(nθ) and Σ jump·cos(nθ) over up to four edges for n = 1..maxOrder into the
- * sums. Each edge's e^{jnθ} is rotated one order at a time and re-evaluated exactly at the start
- * of every block; four edges run side by side so their recurrences overlap in the pipeline.
+ * Tolerance (radians) for pairing an edge with the one half a period later: 4 ulp at 2π. An
+ * edge off by that much moves any amplitude by at most |jump|·tolerance/π (the 1/n of the
+ * coefficient cancels the n of the phase), below 1e-14 of the jump.
+ */
+const SYMMETRY_TOLERANCE = 4 * Number.EPSILON * TAU;
+
+/** True when v(θ + π) = 2c − v(θ) for one constant c, to {@link SYMMETRY_TOLERANCE}. */
+function hasHalfWaveSymmetry({ edges, levels }: Waveform): boolean {
+  const count = edges.length;
+  if (count < 2 || count % 2 === 1) return false;
+  const half = count / 2;
+  const levelSum = (levels[0] as number) + (levels[half] as number);
+  for (let i = 0; i < half; i++) {
+    if ((levels[i] as number) + (levels[i + half] as number) !== levelSum) return false;
+    const gap = (edges[i + half] as number) - (edges[i] as number) - Math.PI;
+    if (Math.abs(gap) > SYMMETRY_TOLERANCE) return false;
+  }
+  return true;
+}
+
+/**
+ * Adds Σ jump·sin(nθ) and Σ jump·cos(nθ) over up to four edges for the orders n = 1,
+ * 1 + orderStep, … ≤ maxOrder into the sums. Each edge's e^{jnθ} is rotated one step at a time
+ * and re-evaluated exactly at the start of every block; four edges run side by side so their
+ * recurrences overlap in the pipeline.
  */
 function accumulateFourEdges(
   sinSum: Float64Array,
   cosSum: Float64Array,
   group: readonly { theta: number; jump: number }[],
   maxOrder: number,
+  orderStep: number,
 ): void {
   const edge = (k: number): { theta: number; jump: number } => group[k] ?? { theta: 0, jump: 0 };
   const [e0, e1, e2, e3] = [edge(0), edge(1), edge(2), edge(3)];
-  const [k0, k1, k2, k3] = [Math.cos(e0.theta), Math.cos(e1.theta), Math.cos(e2.theta), Math.cos(e3.theta)];
-  const [q0, q1, q2, q3] = [Math.sin(e0.theta), Math.sin(e1.theta), Math.sin(e2.theta), Math.sin(e3.theta)];
-  for (let blockStart = 1; blockStart <= maxOrder; blockStart += RESEED_INTERVAL) {
+  const [k0, k1, k2, k3] = [e0, e1, e2, e3].map((e) => Math.cos(orderStep * e.theta)) as [number, number, number, number];
+  const [q0, q1, q2, q3] = [e0, e1, e2, e3].map((e) => Math.sin(orderStep * e.theta)) as [number, number, number, number];
+  const blockSpan = RESEED_INTERVAL * orderStep;
+  for (let blockStart = 1; blockStart <= maxOrder; blockStart += blockSpan) {
     let c0 = e0.jump * Math.cos(blockStart * e0.theta);
     let s0 = e0.jump * Math.sin(blockStart * e0.theta);
     let c1 = e1.jump * Math.cos(blockStart * e1.theta);
@@ -78,8 +109,8 @@ function accumulateFourEdges(
     let s2 = e2.jump * Math.sin(blockStart * e2.theta);
     let c3 = e3.jump * Math.cos(blockStart * e3.theta);
     let s3 = e3.jump * Math.sin(blockStart * e3.theta);
-    const blockEnd = Math.min(maxOrder, blockStart + RESEED_INTERVAL - 1);
-    for (let n = blockStart; n <= blockEnd; n++) {
+    const blockEnd = Math.min(maxOrder, blockStart + blockSpan - 1);
+    for (let n = blockStart; n <= blockEnd; n += orderStep) {
       sinSum[n] = (sinSum[n] as number) + (s0 + s1 + (s2 + s3));
       cosSum[n] = (cosSum[n] as number) + (c0 + c1 + (c2 + c3));
       let next = c0 * k0 - s0 * q0;

@@ -32,5 +32,7 @@ export function threePhaseReference(
     // for the third harmonic).
     slopeBound: zeroSequence === 'none' ? ma : 2 * ma,
     breakpoints: zeroSequence === 'none' ? [] : Array.from({ length: 12 }, (_, k) => k * THIRTY_DEGREES),
+    // Negating the three sines negates every offset except the 120° clamps, which swap rails.
+    halfWaveAntisymmetric: zeroSequence !== 'clamp-120-top' && zeroSequence !== 'clamp-120-bottom',
   };
 }

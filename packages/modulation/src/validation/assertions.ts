@@ -21,18 +21,13 @@ export function assertNumberInRange(
   bounds: NumberBounds = {},
 ): asserts value is number {
   if (typeof value !== 'number') throw new ParameterTypeError(field, 'a number', value);
-  const allowed = describeBounds(bounds);
-  if (!Number.isFinite(value)) throw new ParameterRangeError(field, allowed, value);
-  if (bounds.integer === true && !Number.isInteger(value)) {
-    throw new ParameterRangeError(field, allowed, value);
-  }
   const { min, max } = bounds;
-  if (min !== undefined && (bounds.minExclusive === true ? value <= min : value < min)) {
-    throw new ParameterRangeError(field, allowed, value);
-  }
-  if (max !== undefined && (bounds.maxExclusive === true ? value >= max : value > max)) {
-    throw new ParameterRangeError(field, allowed, value);
-  }
+  const outside =
+    !Number.isFinite(value) ||
+    (bounds.integer === true && !Number.isInteger(value)) ||
+    (min !== undefined && (bounds.minExclusive === true ? value <= min : value < min)) ||
+    (max !== undefined && (bounds.maxExclusive === true ? value >= max : value > max));
+  if (outside) throw new ParameterRangeError(field, describeBounds(bounds), value);
 }
 
 /**
