@@ -1,0 +1,10 @@
+import { AppProviders } from './providers';
+import { AppRouter } from './router';
+
+export function App() {
+  return (
+    <AppProviders>
+      <AppRouter />
+    </AppProviders>
+  );
+}

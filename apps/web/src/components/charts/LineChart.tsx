@@ -1,0 +1,92 @@
+import { line, scaleLinear } from 'd3';
+import { formatNumber } from '../../lib/format';
+import { AxisBottom, AxisLeft } from './axes';
+import { ChartFrame } from './ChartFrame';
+
+export interface LineSeries {
+  name: string;
+  color: string;
+  x: readonly number[];
+  y: readonly number[];
+  dashed?: boolean;
+}
+
+export interface LineChartProps {
+  title: string;
+  fileName: string;
+  series: readonly LineSeries[];
+  xLabel: string;
+  yLabel: string;
+  width?: number;
+  height?: number;
+  /** Points become buttons; called with the series index and point index. */
+  onPick?: (seriesIndex: number, pointIndex: number) => void;
+  picked?: { series: number; point: number } | null;
+  yFormat?: (v: number) => string;
+}
+
+/** Several y(x) series on shared linear axes (sweeps against ma, solution branches). */
+export function LineChart({ title, fileName, series, xLabel, yLabel, width = 760, height = 280, onPick, picked, yFormat }: LineChartProps) {
+  const margin = { top: 14, right: 14, bottom: 40, left: 60 };
+  const xs = series.flatMap((s) => s.x as number[]);
+  const ys = series.flatMap((s) => (s.y as number[]).filter(Number.isFinite));
+  const x = scaleLinear().domain([Math.min(...xs, 0), Math.max(...xs, 1)]).range([margin.left, width - margin.right]).nice();
+  const y = scaleLinear().domain([Math.min(0, ...ys), Math.max(1e-12, ...ys) * 1.05]).range([height - margin.bottom, margin.top]).nice();
+  const path = line<number>().defined((d) => Number.isFinite(d));
+  return (
+    <ChartFrame
+      title={title}
+      fileName={fileName}
+      footer={
+        <ul className="mt-1 flex flex-wrap gap-3 text-xs" aria-label="Legend">
+          {series.map((s) => (
+            <li key={s.name} className="flex items-center gap-1">
+              <span className="inline-block h-0.5 w-4" style={{ background: s.color }} />
+              {s.name}
+            </li>
+          ))}
+        </ul>
+      }
+    >
+      <svg data-chart="line" viewBox={`0 0 ${width} ${height}`} className="w-full text-ink" role="img" aria-label={`${title}: ${series.map((s) => s.name).join(', ')} against ${xLabel}`}>
+        <AxisLeft scale={y} x={margin.left} width={width - margin.left - margin.right} label={yLabel} format={yFormat} />
+        {series.map((s, si) => (
+          <g key={s.name}>
+            <path
+              d={path.x((_, i) => x(s.x[i] ?? 0)).y((d) => y(d))(s.y as number[]) ?? ''}
+              fill="none"
+              stroke={s.color}
+              strokeWidth={1.8}
+              strokeDasharray={s.dashed ? '5 4' : undefined}
+            />
+            {onPick
+              ? s.y.map((value, pi) =>
+                  Number.isFinite(value) ? (
+                    <circle
+                      key={pi}
+                      cx={x(s.x[pi] ?? 0)}
+                      cy={y(value)}
+                      r={picked?.series === si && picked.point === pi ? 6 : 3}
+                      fill={picked?.series === si && picked.point === pi ? 'var(--color-signal)' : s.color}
+                      tabIndex={0}
+                      role="button"
+                      aria-label={`${s.name}: ${xLabel} ${formatNumber(s.x[pi] ?? 0)}, ${formatNumber(value)}`}
+                      className="cursor-pointer"
+                      onClick={() => onPick(si, pi)}
+                      onKeyDown={(event) => {
+                        if (event.key === 'Enter' || event.key === ' ') {
+                          event.preventDefault();
+                          onPick(si, pi);
+                        }
+                      }}
+                    />
+                  ) : null,
+                )
+              : null}
+          </g>
+        ))}
+        <AxisBottom scale={x} y={height - margin.bottom} label={xLabel} />
+      </svg>
+    </ChartFrame>
+  );
+}

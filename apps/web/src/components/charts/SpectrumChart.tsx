@@ -1,0 +1,157 @@
+import { scaleLinear, scaleLog } from 'd3';
+import { useState } from 'react';
+import { formatNumber, formatPercent } from '../../lib/format';
+import { Button } from '../ui/Button';
+import { AxisBottom, AxisLeft } from './axes';
+import { ChartFrame } from './ChartFrame';
+
+export interface SpectrumBar {
+  order: number;
+  amplitude: number;
+  /** Carrier-group label from the library's labelHarmonics (`mf`, `2mf+1`, …). */
+  label?: string;
+}
+
+export interface SpectrumSeries {
+  name: string;
+  color: string;
+  harmonics: readonly SpectrumBar[];
+}
+
+export interface SpectrumChartProps {
+  series: readonly SpectrumSeries[];
+  title?: string;
+  fileName?: string;
+  /** Bars at least this fraction of the largest harmonic (order ≥ 2) get their label printed. @default 0.15 */
+  labelThreshold?: number;
+  width?: number;
+  unit?: string;
+}
+
+/** Orders drawn: the fundamental and every harmonic (order 0, the mean, is left out). */
+export function drawnHarmonics(harmonics: readonly SpectrumBar[]): SpectrumBar[] {
+  return harmonics.filter((h) => h.order >= 1);
+}
+
+/** Harmonic amplitudes as bars, linear or logarithmic, carrier groups labelled, value on hover. */
+export function SpectrumChart({ series, title = 'Spectrum', fileName = 'spectrum', labelThreshold = 0.15, width = 760, unit = 'V' }: SpectrumChartProps) {
+  const [scaleKind, setScaleKind] = useState<'linear' | 'log'>('linear');
+  const [hover, setHover] = useState<number | null>(null);
+  const height = 280;
+  const margin = { top: 22, right: 14, bottom: 40, left: 60 };
+  const all = series.map((s) => drawnHarmonics(s.harmonics));
+  const maxOrder = Math.max(1, ...all.flat().map((h) => h.order));
+  const peak = Math.max(1e-12, ...all.flat().map((h) => h.amplitude));
+  const x = scaleLinear().domain([0.5, maxOrder + 0.5]).range([margin.left, width - margin.right]);
+  const floor = peak * 1e-5;
+  const y =
+    scaleKind === 'linear'
+      ? scaleLinear().domain([0, peak * 1.08]).range([height - margin.bottom, margin.top]).nice()
+      : scaleLog().domain([floor, peak * 1.5]).range([height - margin.bottom, margin.top]).clamp(true);
+  const step = (width - margin.left - margin.right) / maxOrder;
+  const barWidth = Math.max(0.6, (step * 0.82) / series.length);
+  const base = height - margin.bottom;
+  const first = all[0] ?? [];
+  const fundamental = first.find((h) => h.order === 1)?.amplitude ?? 0;
+  const largestHarmonic = Math.max(0, ...first.filter((h) => h.order >= 2).map((h) => h.amplitude));
+  const labelled = first.filter((h) => h.label !== undefined && h.order >= 2 && h.amplitude >= labelThreshold * largestHarmonic && largestHarmonic > 0);
+  const hovered = hover === null ? null : series.map((s, i) => ({ name: s.name, color: s.color, bar: all[i]?.find((h) => h.order === hover) }));
+  const significant = first.filter((h) => h.amplitude > peak * 1e-3).map((h) => h.order);
+
+  const moveHover = (direction: 1 | -1) => {
+    if (!significant.length) return;
+    const index = hover === null ? -1 : significant.indexOf(hover);
+    const next = significant[Math.min(significant.length - 1, Math.max(0, index + direction))];
+    setHover(next ?? null);
+  };
+
+  return (
+    <ChartFrame
+      title={title}
+      fileName={fileName}
+      controls={
+        <Button variant="ghost" aria-pressed={scaleKind === 'log'} onClick={() => setScaleKind(scaleKind === 'linear' ? 'log' : 'linear')}>
+          {scaleKind === 'linear' ? 'Log scale' : 'Linear scale'}
+        </Button>
+      }
+      footer={
+        series.length > 1 ? (
+          <ul className="mt-1 flex flex-wrap gap-3 text-xs" aria-label="Legend">
+            {series.map((s) => (
+              <li key={s.name} className="flex items-center gap-1">
+                <span className="inline-block h-2.5 w-2.5 rounded-sm" style={{ background: s.color }} />
+                {s.name}
+              </li>
+            ))}
+          </ul>
+        ) : null
+      }
+    >
+      <svg
+        data-chart="spectrum"
+        data-scale={scaleKind}
+        viewBox={`0 0 ${width} ${height}`}
+        className="w-full text-ink"
+        role="img"
+        tabIndex={0}
+        aria-label={`${title}: ${first.length} harmonic orders, ${scaleKind} scale. Use the arrow keys to read values.`}
+        onKeyDown={(event) => {
+          if (event.key === 'ArrowRight') moveHover(1);
+          else if (event.key === 'ArrowLeft') moveHover(-1);
+          else if (event.key === 'Escape') setHover(null);
+          else return;
+          event.preventDefault();
+        }}
+        onMouseLeave={() => setHover(null)}
+      >
+        <AxisLeft scale={y} x={margin.left} width={width - margin.left - margin.right} label={`amplitude (${unit} peak)`} ticks={scaleKind === 'log' ? 5 : 5} format={scaleKind === 'log' ? (v) => formatNumber(v, 2) : undefined} />
+        {series.map((s, i) => (
+          <g key={s.name} fill={s.color} data-series={s.name}>
+            {(all[i] ?? []).map((h) => {
+              const top = y(Math.max(h.amplitude, scaleKind === 'log' ? floor : 0));
+              return (
+                <rect
+                  key={h.order}
+                  data-order={h.order}
+                  data-bar=""
+                  x={x(h.order) - (step * 0.41) + i * barWidth}
+                  width={barWidth}
+                  y={top}
+                  height={Math.max(0, base - top)}
+                  opacity={hover === null || hover === h.order ? 1 : 0.55}
+                  onMouseEnter={() => setHover(h.order)}
+                />
+              );
+            })}
+          </g>
+        ))}
+        <g fontSize={9} fill="currentColor" textAnchor="middle" data-labels="">
+          {labelled.map((h) => (
+            <text key={h.order} data-label-order={h.order} x={x(h.order)} y={y(Math.max(h.amplitude, floor)) - 4}>
+              {h.label}
+            </text>
+          ))}
+        </g>
+        <AxisBottom scale={x} y={base} label="harmonic order" ticks={10} format={(v) => String(v)} />
+        {hovered && hover !== null ? (
+          <g transform={`translate(${Math.min(x(hover) + 8, width - 190)},${margin.top})`} pointerEvents="none">
+            <rect width={180} height={18 + hovered.length * 14} rx={4} fill="var(--color-panel)" stroke="var(--color-rule)" />
+            <text x={8} y={13} fontSize={10} fontWeight={600} fill="currentColor">
+              order {hover}
+              {first.find((h) => h.order === hover)?.label ? ` (${first.find((h) => h.order === hover)?.label})` : ''}
+            </text>
+            {hovered.map((entry, i) => (
+              <text key={entry.name} x={8} y={27 + i * 14} fontSize={10} fill={entry.color}>
+                {series.length > 1 ? `${entry.name}: ` : ''}
+                {entry.bar ? `${formatNumber(entry.bar.amplitude)} ${unit}${fundamental > 0 && i === 0 ? ` · ${formatPercent(entry.bar.amplitude / fundamental)} of order 1` : ''}` : '—'}
+              </text>
+            ))}
+          </g>
+        ) : null}
+      </svg>
+      <p className="sr-only" aria-live="polite">
+        {hover !== null && hovered?.[0]?.bar ? `Order ${hover}: ${formatNumber(hovered[0].bar.amplitude)} ${unit}` : ''}
+      </p>
+    </ChartFrame>
+  );
+}

@@ -1,0 +1,74 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { Problem, Schema } from '@pulsewright/client';
+import { apiPaths } from '../../../config/paths';
+import { api, ApiError, unwrap } from '../../../lib/api';
+import { session } from '../../../lib/session';
+
+export type Capture = Schema<'Capture'>;
+export type CaptureWithSeries = Schema<'CaptureWithSeries'>;
+
+export async function getCaptures(): Promise<Capture[]> {
+  return unwrap(await api.GET('/api/v1/captures'));
+}
+export const capturesQueryOptions = () => queryOptions({ queryKey: ['captures', 'list'], queryFn: getCaptures });
+export function useCaptures() {
+  return useQuery(capturesQueryOptions());
+}
+
+export async function getCapture(id: string): Promise<CaptureWithSeries> {
+  return unwrap(await api.GET('/api/v1/captures/{id}', { params: { path: { id } } }));
+}
+export const captureQueryOptions = (id: string) => queryOptions({ queryKey: ['captures', 'one', id], queryFn: () => getCapture(id), staleTime: Infinity });
+export function useCapture(id: string | null) {
+  return useQuery({ ...captureQueryOptions(id ?? ''), enabled: Boolean(id) });
+}
+
+export interface UploadInput {
+  file: File;
+  name?: string;
+  projectId?: string;
+  /** Fraction of the bytes sent, 0..1. */
+  onProgress?: (fraction: number) => void;
+}
+
+/**
+ * Uploads a capture as multipart form data with XMLHttpRequest, whose upload events give the
+ * progress bar (fetch has no upload progress in most browsers). Same path and auth as the client.
+ */
+export function uploadCapture({ file, name, projectId, onProgress }: UploadInput): Promise<Capture> {
+  return new Promise((resolve, reject) => {
+    const form = new FormData();
+    form.append('file', file);
+    if (name) form.append('name', name);
+    if (projectId) form.append('projectId', projectId);
+    const request = new XMLHttpRequest();
+    request.open('POST', apiPaths.captures);
+    const token = session.getToken();
+    if (token) request.setRequestHeader('Authorization', `Bearer ${token}`);
+    request.upload.onprogress = (event) => {
+      if (event.lengthComputable) onProgress?.(event.loaded / event.total);
+    };
+    request.onload = () => {
+      let body: unknown = undefined;
+      try {
+        body = JSON.parse(request.responseText);
+      } catch {
+        body = undefined;
+      }
+      if (request.status >= 200 && request.status < 300) {
+        onProgress?.(1);
+        resolve(body as Capture);
+      } else {
+        if (request.status === 401) session.setToken(null);
+        reject(new ApiError(request.status, body as Problem | undefined));
+      }
+    };
+    request.onerror = () => reject(new Error('The upload failed: the service could not be reached.'));
+    request.send(form);
+  });
+}
+
+export function useUploadCapture() {
+  const client = useQueryClient();
+  return useMutation({ mutationFn: uploadCapture, onSuccess: () => client.invalidateQueries({ queryKey: ['captures'] }) });
+}

@@ -1,0 +1,126 @@
+import { useQuery } from '@tanstack/react-query';
+import { useState, type FormEvent } from 'react';
+import { useNavigate } from 'react-router-dom';
+import { LineChart, type LineSeries } from '../../../components/charts/LineChart';
+import { SpectrumChart } from '../../../components/charts/SpectrumChart';
+import { Button } from '../../../components/ui/Button';
+import { SelectField, TextField } from '../../../components/ui/Field';
+import { PageHeader, Panel } from '../../../components/ui/Panel';
+import { ErrorState } from '../../../components/ui/QueryState';
+import { paths } from '../../../config/paths';
+import { errorMessage } from '../../../lib/api';
+import { formatNumber, formatPercent } from '../../../lib/format';
+import { roleAtLeast, useMe } from '../../auth/api/auth';
+import { getEliminationProjects, pointSpectrum, useSaveSheStudy, useSheSweep } from '../api/elimination';
+
+const COLOURS = ['#12263a', '#d9822b', '#2a8c82', '#8e3b6e', '#c2462e', '#5b6fa8', '#7a6a2f', '#3d8a5a'];
+
+/** Selective harmonic elimination: solution branches of the angles against the fundamental. */
+export function EliminationPage() {
+  const me = useMe();
+  const canSave = roleAtLeast(me.data?.role, 'engineer');
+  const [form, setForm] = useState({ kind: 'bipolar' as 'bipolar' | 'staircase', vdc: 300, eliminate: '5, 7', from: 0.3, to: 1.1, points: 40 });
+  const sweep = useSheSweep();
+  const [picked, setPicked] = useState<{ branch: number; point: number } | null>(null);
+  const save = useSaveSheStudy();
+  const projects = useQuery({ queryKey: ['projects', ''], queryFn: () => getEliminationProjects() });
+  const navigate = useNavigate();
+  const orders = form.eliminate.split(/[\s,]+/).filter(Boolean).map(Number);
+  const count = orders.length + 1;
+  const scale = form.kind === 'staircase' ? count * form.vdc : form.vdc;
+
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    setPicked(null);
+    // fundamentals are given as a fraction of the largest (4·vdc/π per level, square-wave fundamental)
+    sweep.run({ kind: form.kind, vdc: form.vdc, count, eliminate: orders, fundamentals: { from: ((form.from * 4) / Math.PI) * scale, to: ((form.to * 4) / Math.PI) * scale, points: form.points } });
+  };
+
+  // One series per (branch, angle); x the fundamental, y the angle in degrees.
+  const series: LineSeries[] = [];
+  const seriesIndex: { branch: number }[] = [];
+  sweep.result?.branches.forEach((branch, b) => {
+    const converged = branch.points.filter((p) => p.converged);
+    for (let k = 0; k < count; k++) {
+      series.push({ name: `branch ${b + 1}, α${k + 1}`, color: COLOURS[b % COLOURS.length] ?? '#12263a', x: converged.map((p) => p.fundamental), y: converged.map((p) => ((p.angles[k] ?? Number.NaN) * 180) / Math.PI), dashed: k % 2 === 1 });
+      seriesIndex.push({ branch: b });
+    }
+  });
+  const pickedPoint = picked ? sweep.result?.branches[picked.branch]?.points.filter((p) => p.converged)[picked.point] : undefined;
+  const preview = pickedPoint ? pointSpectrum(form.kind, form.vdc, pickedPoint.angles) : null;
+
+  const saveStudy = () => {
+    if (!pickedPoint) return;
+    const projectId = projects.data?.[0]?.id;
+    if (!projectId) return;
+    save.mutate(
+      {
+        projectId,
+        name: `SHE ${form.kind} eliminating ${orders.join(', ')} at ${formatNumber(pickedPoint.fundamental)} V`,
+        note: `Angles (rad): ${pickedPoint.angles.map((a) => a.toFixed(6)).join(', ')}`,
+        // The API document lists the modulation methods it stores; if it does not take this
+        // one, its problem+json answer is shown below.
+        modulation: { method: 'selective-harmonic-elimination', kind: form.kind, vdc: form.vdc, angles: pickedPoint.angles, eliminate: orders, fundamental: pickedPoint.fundamental } as never,
+        load: null,
+        filter: null,
+      },
+      { onSuccess: (study) => navigate(paths.study.getHref(study.id)) },
+    );
+  };
+
+  return (
+    <div>
+      <PageHeader title="Harmonic elimination" subtitle="Quarter-wave symmetric patterns whose first-quarter angles null chosen odd harmonics while setting the fundamental; each solution branch is followed across the fundamental (solved in this browser by the library)." />
+      <div className="grid gap-5 lg:grid-cols-[320px_minmax(0,1fr)]">
+        <Panel title="Pattern">
+          <form onSubmit={submit} className="flex flex-col gap-3" noValidate>
+            <SelectField label="Pattern" value={form.kind} onChange={(e) => setForm({ ...form, kind: e.target.value as 'bipolar' | 'staircase' })} options={[{ value: 'bipolar', label: 'Two-level (bipolar)' }, { value: 'staircase', label: 'Multilevel staircase' }]} />
+            <TextField label="DC level" unit="V" type="number" value={form.vdc} onChange={(e) => setForm({ ...form, vdc: Number(e.target.value) })} error={sweep.error?.field === 'vdc' ? sweep.error.message : undefined} />
+            <TextField label="Orders to eliminate" value={form.eliminate} onChange={(e) => setForm({ ...form, eliminate: e.target.value })} hint={`odd orders ≥ 3; ${count} angles per quarter`} error={sweep.error?.field?.startsWith('eliminate') ? sweep.error.message : undefined} />
+            <div className="grid grid-cols-2 gap-3">
+              <TextField label="Fundamental from" unit="of square wave" type="number" step={0.05} value={form.from} onChange={(e) => setForm({ ...form, from: Number(e.target.value) })} />
+              <TextField label="to" unit="of square wave" type="number" step={0.05} value={form.to} onChange={(e) => setForm({ ...form, to: Number(e.target.value) })} />
+            </div>
+            <TextField label="Points" type="number" value={form.points} onChange={(e) => setForm({ ...form, points: Number(e.target.value) })} hint="2 to 400" error={sweep.error?.field?.startsWith('fundamentals') ? sweep.error.message : undefined} />
+            <Button type="submit" busy={sweep.running}>Find the branches</Button>
+          </form>
+          {sweep.running ? (
+            <div role="progressbar" aria-label="Solving" aria-valuenow={Math.round(sweep.progress * 100)} aria-valuemin={0} aria-valuemax={100} className="mt-3 h-3 overflow-hidden rounded-full bg-rule">
+              <div className="h-full bg-signal" style={{ width: `${sweep.progress * 100}%` }} />
+            </div>
+          ) : null}
+        </Panel>
+        <div className="flex min-w-0 flex-col gap-4">
+          {sweep.error && !sweep.error.field ? <ErrorState error={new Error(sweep.error.message)} /> : null}
+          {sweep.error?.field ? <ErrorState error={new Error(sweep.error.message)} /> : null}
+          {sweep.result ? (
+            <>
+              <Panel><p className="text-sm">{sweep.result.message}</p></Panel>
+              <LineChart
+                title="Switching angles against the fundamental"
+                fileName="she-branches"
+                xLabel="fundamental (V peak)"
+                yLabel="angle (degrees)"
+                series={series}
+                onPick={(si, pi) => setPicked({ branch: seriesIndex[si]?.branch ?? 0, point: pi })}
+                picked={null}
+              />
+            </>
+          ) : null}
+          {pickedPoint && preview ? (
+            <>
+              <Panel title="Picked point">
+                <p className="num text-sm">Fundamental {formatNumber(pickedPoint.fundamental)} V · angles {pickedPoint.angles.map((a) => `${formatNumber((a * 180) / Math.PI)}°`).join(', ')} · THD to order 49 {formatPercent(preview.thd)}</p>
+                {canSave ? (
+                  <Button className="mt-2" onClick={saveStudy} busy={save.isPending} disabled={!projects.data?.length}>Save as study</Button>
+                ) : <p className="mt-2 text-xs text-ink-soft">Saving needs the engineer role.</p>}
+                {save.isError ? <p role="alert" className="mt-2 text-sm text-bad">{errorMessage(save.error)}</p> : null}
+              </Panel>
+              <SpectrumChart series={[{ name: 'Picked pattern', color: 'var(--color-ink)', harmonics: preview.spectrum }]} title="Spectrum of the picked pattern" fileName="she-point-spectrum" labelThreshold={2} />
+            </>
+          ) : null}
+        </div>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,37 @@
+import { firmwareEffects, harmonics, labelHarmonics, timerTable, timerTableToCHeader, timerTableToCsv, timerTableToJson, type FirmwareEffects, type TimerTable, type TimerTableOptions } from '@pulsewright/modulation';
+
+// The service has no timer-table endpoint; the library (integrators' npm package) builds the
+// table in the browser. This module is the feature's single door to it.
+
+export interface TimerTableOutcome {
+  table: TimerTable | null;
+  effects: FirmwareEffects | null;
+  error: { field: string; message: string } | null;
+}
+
+export function buildTimerTable(options: TimerTableOptions, effectOptions: { minPulseWidth: number }): TimerTableOutcome {
+  try {
+    const table = timerTable(options);
+    const effects = firmwareEffects(table, { minPulseWidth: effectOptions.minPulseWidth });
+    return { table, effects, error: null };
+  } catch (error) {
+    const field = (error as { field?: string }).field ?? 'table';
+    return { table: null, effects: null, error: { field, message: error instanceof Error ? error.message : String(error) } };
+  }
+}
+
+export function timerTableExports(table: TimerTable) {
+  return {
+    json: () => timerTableToJson(table),
+    csv: () => timerTableToCsv(table),
+    cHeader: () => timerTableToCHeader(table),
+  };
+}
+
+/** The labelled spectra of an effect's reference and realised waveforms, for the chart. */
+export function effectSpectra(effect: FirmwareEffects['combined'], mf: number) {
+  return {
+    reference: labelHarmonics(harmonics(effect.reference, effect.maxOrder), mf),
+    realised: labelHarmonics(harmonics(effect.realised, effect.maxOrder), mf),
+  };
+}

@@ -1,0 +1,124 @@
+import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { Schema } from '@pulsewright/client';
+import { api, unwrap } from '../../../lib/api';
+
+export type Project = Schema<'Project'>;
+export type Study = Schema<'Study'>;
+export type StudyRevision = Schema<'StudyRevision'>;
+export type StudyCreate = Schema<'StudyCreate'>;
+export type StudyUpdate = Schema<'StudyUpdate'>;
+export type SpectrumResult = Schema<'SpectrumResult'>;
+
+// Projects ----------------------------------------------------------------------------------
+
+export async function getProjects(q?: string): Promise<Project[]> {
+  return unwrap(await api.GET('/api/v1/projects', { params: { query: q ? { q } : {} } }));
+}
+export const projectsQueryOptions = (q?: string) => queryOptions({ queryKey: ['projects', q ?? ''], queryFn: () => getProjects(q) });
+export function useProjects(q?: string) {
+  return useQuery(projectsQueryOptions(q));
+}
+
+export async function createProject(body: Schema<'ProjectInput'>): Promise<Project> {
+  return unwrap(await api.POST('/api/v1/projects', { body }));
+}
+export function useCreateProject() {
+  const client = useQueryClient();
+  return useMutation({ mutationFn: createProject, onSuccess: () => client.invalidateQueries({ queryKey: ['projects'] }) });
+}
+
+// Studies -----------------------------------------------------------------------------------
+
+export interface StudyFilter {
+  projectId?: string | undefined;
+  q?: string | undefined;
+}
+
+export async function getStudies({ projectId, q }: StudyFilter = {}): Promise<Study[]> {
+  const query: { projectId?: string; q?: string; limit: number } = { limit: 200 };
+  if (projectId) query.projectId = projectId;
+  if (q) query.q = q;
+  return unwrap(await api.GET('/api/v1/studies', { params: { query } }));
+}
+export const studiesQueryOptions = (filter: StudyFilter = {}) =>
+  queryOptions({ queryKey: ['studies', 'list', filter.projectId ?? '', filter.q ?? ''], queryFn: () => getStudies(filter), placeholderData: keepPreviousData });
+export function useStudies(filter: StudyFilter = {}) {
+  return useQuery(studiesQueryOptions(filter));
+}
+
+export async function getStudy(id: string): Promise<Study> {
+  return unwrap(await api.GET('/api/v1/studies/{id}', { params: { path: { id } } }));
+}
+export const studyQueryOptions = (id: string) => queryOptions({ queryKey: ['studies', 'one', id], queryFn: () => getStudy(id) });
+export function useStudy(id: string | undefined) {
+  return useQuery({ ...studyQueryOptions(id ?? ''), enabled: Boolean(id) });
+}
+
+export async function createStudy(body: StudyCreate): Promise<Study> {
+  return unwrap(await api.POST('/api/v1/studies', { body }));
+}
+export function useCreateStudy() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: createStudy,
+    onSuccess: () => {
+      client.invalidateQueries({ queryKey: ['studies'] });
+      client.invalidateQueries({ queryKey: ['projects'] });
+    },
+  });
+}
+
+export async function updateStudy({ id, body }: { id: string; body: StudyUpdate }): Promise<Study> {
+  return unwrap(await api.PUT('/api/v1/studies/{id}', { params: { path: { id } }, body }));
+}
+export function useUpdateStudy() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: updateStudy,
+    onSuccess: (study) => {
+      client.setQueryData(studyQueryOptions(study.id).queryKey, study);
+      client.invalidateQueries({ queryKey: ['studies', 'list'] });
+      client.invalidateQueries({ queryKey: ['studies', 'revisions', study.id] });
+      client.invalidateQueries({ queryKey: ['studies', 'spectrum', study.id] });
+    },
+  });
+}
+
+export async function duplicateStudy({ id, name }: { id: string; name?: string }): Promise<Study> {
+  return unwrap(await api.POST('/api/v1/studies/{id}/duplicate', { params: { path: { id } }, body: name ? { name } : {} }));
+}
+export function useDuplicateStudy() {
+  const client = useQueryClient();
+  return useMutation({ mutationFn: duplicateStudy, onSuccess: () => client.invalidateQueries({ queryKey: ['studies', 'list'] }) });
+}
+
+export async function getStudyRevisions(id: string): Promise<StudyRevision[]> {
+  return unwrap(await api.GET('/api/v1/studies/{id}/revisions', { params: { path: { id } } }));
+}
+export const studyRevisionsQueryOptions = (id: string) => queryOptions({ queryKey: ['studies', 'revisions', id], queryFn: () => getStudyRevisions(id) });
+export function useStudyRevisions(id: string | undefined) {
+  return useQuery({ ...studyRevisionsQueryOptions(id ?? ''), enabled: Boolean(id) });
+}
+
+export async function restoreStudyRevision({ id, revision, baseRevision }: { id: string; revision: number; baseRevision: number }): Promise<Study> {
+  return unwrap(await api.POST('/api/v1/studies/{id}/revisions/{revision}/restore', { params: { path: { id, revision } }, body: { baseRevision } }));
+}
+export function useRestoreStudyRevision() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: restoreStudyRevision,
+    onSuccess: (study) => {
+      client.setQueryData(studyQueryOptions(study.id).queryKey, study);
+      client.invalidateQueries({ queryKey: ['studies'] });
+    },
+  });
+}
+
+export async function getStudySpectrum(id: string, maxOrder = 100): Promise<SpectrumResult> {
+  return unwrap(await api.GET('/api/v1/studies/{id}/spectrum', { params: { path: { id }, query: { maxOrder } } }));
+}
+export const studySpectrumQueryOptions = (id: string, maxOrder = 100) =>
+  queryOptions({ queryKey: ['studies', 'spectrum', id, maxOrder], queryFn: () => getStudySpectrum(id, maxOrder) });
+export function useStudySpectrum(id: string | undefined, maxOrder = 100) {
+  return useQuery({ ...studySpectrumQueryOptions(id ?? '', maxOrder), enabled: Boolean(id) });
+}

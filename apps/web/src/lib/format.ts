@@ -1,0 +1,17 @@
+/** Number formatting for tables and readouts (display only; no modulation math). */
+export function formatNumber(value: number, digits = 4): string {
+  if (!Number.isFinite(value)) return '—';
+  if (value === 0) return '0';
+  const magnitude = Math.abs(value);
+  if (magnitude >= 1e5 || magnitude < 1e-3) return value.toExponential(digits - 1);
+  return Number(value.toPrecision(digits)).toString();
+}
+
+export function formatPercent(ratio: number, digits = 2): string {
+  return Number.isFinite(ratio) ? `${(ratio * 100).toFixed(digits)} %` : '—';
+}
+
+export function formatDate(iso: string): string {
+  const date = new Date(iso);
+  return Number.isNaN(date.getTime()) ? iso : date.toLocaleString();
+}
