@@ -18,3 +18,4 @@ export * from './filter/index.js';
 export * from './she/index.js';
 export * from './firmware/index.js';
 export * from './losses/index.js';
+export * from './capture/index.js';

@@ -1,0 +1,3 @@
+export * from './FftWindowName.js';
+export * from './fftWindow.js';
+export * from './fftSpectrum.js';
