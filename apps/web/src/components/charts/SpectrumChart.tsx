@@ -33,6 +33,15 @@ export function drawnHarmonics(harmonics: readonly SpectrumBar[]): SpectrumBar[]
   return harmonics.filter((h) => h.order >= 1);
 }
 
+/** Keeps the tallest bars' labels that do not collide with one already placed (greedy, by amplitude). */
+function placeLabels(candidates: readonly SpectrumBar[], xOf: (h: SpectrumBar) => number, minGap = 34): SpectrumBar[] {
+  const placed: SpectrumBar[] = [];
+  for (const h of [...candidates].sort((a, b) => b.amplitude - a.amplitude)) {
+    if (placed.every((p) => Math.abs(xOf(p) - xOf(h)) >= minGap)) placed.push(h);
+  }
+  return placed;
+}
+
 /** Harmonic amplitudes as bars, linear or logarithmic, carrier groups labelled, value on hover. */
 export function SpectrumChart({ series, title = 'Spectrum', fileName = 'spectrum', labelThreshold = 0.15, width = 760, unit = 'V' }: SpectrumChartProps) {
   const [scaleKind, setScaleKind] = useState<'linear' | 'log'>('linear');
@@ -54,7 +63,10 @@ export function SpectrumChart({ series, title = 'Spectrum', fileName = 'spectrum
   const first = all[0] ?? [];
   const fundamental = first.find((h) => h.order === 1)?.amplitude ?? 0;
   const largestHarmonic = Math.max(0, ...first.filter((h) => h.order >= 2).map((h) => h.amplitude));
-  const labelled = first.filter((h) => h.label !== undefined && h.order >= 2 && h.amplitude >= labelThreshold * largestHarmonic && largestHarmonic > 0);
+  const labelled = placeLabels(
+    first.filter((h) => h.label !== undefined && h.order >= 2 && h.amplitude >= labelThreshold * largestHarmonic && largestHarmonic > 0),
+    (h) => x(h.order),
+  );
   const hovered = hover === null ? null : series.map((s, i) => ({ name: s.name, color: s.color, bar: all[i]?.find((h) => h.order === hover) }));
   const significant = first.filter((h) => h.amplitude > peak * 1e-3).map((h) => h.order);
 

@@ -116,7 +116,7 @@ function CaptureAnalysis({ capture }: { capture: CaptureWithSeries }) {
   }, [capture, windowName, study]);
   const mf = Number((study?.modulation as { mf?: unknown } | undefined)?.mf) || 1;
   const series: SpectrumSeries[] = [];
-  if (analysis.result) series.push({ name: `Capture (${windowName} window)`, color: 'var(--color-trace-current)', harmonics: labelHarmonics(analysis.result.harmonics, mf) });
+  if (analysis.result) series.push({ name: `Capture (${windowName} window)`, color: 'var(--color-trace-current)', harmonics: study ? labelHarmonics(analysis.result.harmonics, mf) : analysis.result.harmonics });
   if (prediction.data && study) series.push({ name: `Prediction: ${study.name}`, color: 'var(--color-ink)', harmonics: labelHarmonics(prediction.data.harmonics.filter((h) => h.order <= 50), mf) });
 
   return (

@@ -27,7 +27,13 @@ export function useJob(id: string | null) {
 export async function getJobs(): Promise<Job[]> {
   return unwrap(await api.GET('/api/v1/jobs', { params: { query: { limit: 20 } } }));
 }
-export const jobsQueryOptions = () => queryOptions({ queryKey: ['jobs', 'list'], queryFn: getJobs });
+export const jobsQueryOptions = () =>
+  queryOptions({
+    queryKey: ['jobs', 'list'],
+    queryFn: getJobs,
+    // Keep the list fresh while any job is still working.
+    refetchInterval: (query) => (query.state.data?.some((j) => j.status === 'queued' || j.status === 'running') ? 1000 : false),
+  });
 export function useJobs() {
   return useQuery(jobsQueryOptions());
 }

@@ -1,0 +1,207 @@
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import type { Browser, Page } from 'playwright-core';
+import { assert, screenshot, signIn } from './harness.js';
+
+export interface Context {
+  browser: Browser;
+  baseUrl: string;
+  /** Shared between scenarios, in order: the study the engineer created. */
+  state: { studyId?: string };
+}
+
+export interface Scenario {
+  name: string;
+  run(context: Context): Promise<void>;
+}
+
+async function newPage(context: Context): Promise<Page> {
+  const page = await context.browser.newPage({ viewport: { width: 1400, height: 900 } });
+  page.setDefaultTimeout(15_000);
+  return page;
+}
+
+async function token(page: Page): Promise<string> {
+  const value = await page.evaluate(() => sessionStorage.getItem('pulsewright.session'));
+  assert(value, 'the session token is kept in sessionStorage');
+  return value;
+}
+
+const ROLES = [
+  { email: 'admin@kestrel.example', role: 'admin' },
+  { email: 'engineer@kestrel.example', role: 'engineer' },
+  { email: 'viewer@kestrel.example', role: 'viewer' },
+] as const;
+
+export const scenarios: Scenario[] = [
+  {
+    name: 'each demo role signs in, sees its role and the caution, and signs out',
+    async run(context) {
+      for (const { email, role } of ROLES) {
+        const page = await newPage(context);
+        await signIn(page, context.baseUrl, email);
+        const shown = (await page.getByTestId('role').textContent())?.trim();
+        assert(shown === role, `role badge shows ${role} (got ${shown})`);
+        assert(await page.getByRole('complementary', { name: 'Safety caution' }).isVisible(), 'the hazard caution is visible');
+        assert((await page.getByRole('link', { name: 'Team' }).count()) === (role === 'viewer' ? 0 : 1), 'Team link only for engineers and admins');
+        await screenshot(page, `studies-${role}`);
+        await page.getByRole('button', { name: 'Sign out' }).click();
+        await page.getByRole('button', { name: 'Sign in' }).waitFor();
+        await page.close();
+      }
+    },
+  },
+  {
+    name: 'a wrong password shows the server message on the sign-in form',
+    async run(context) {
+      const page = await newPage(context);
+      await page.goto(`${context.baseUrl}/sign-in`);
+      await page.getByLabel('E-mail').fill('engineer@kestrel.example');
+      await page.getByLabel('Password').fill('not-the-password');
+      await page.getByRole('button', { name: 'Sign in' }).click();
+      await page.getByRole('alert').first().waitFor();
+      await screenshot(page, 'sign-in-error');
+      await page.close();
+    },
+  },
+  {
+    name: 'an engineer creates a project and a study and sees its spectrum render',
+    async run(context) {
+      const page = await newPage(context);
+      await signIn(page, context.baseUrl, 'engineer@kestrel.example');
+      await page.getByLabel('Project name').fill('Pump inverter 3 kVA (e2e)');
+      await page.getByRole('button', { name: 'Create project' }).click();
+      await page.getByRole('button', { name: /Pump inverter 3 kVA \(e2e\)/ }).waitFor();
+      await page.getByRole('link', { name: 'New study' }).click();
+      await page.getByLabel('Name', { exact: true }).fill('E2E unipolar mf 31');
+      await page.getByLabel('Bridge scheme').selectOption('unipolar');
+      const mf = page.getByLabel('Frequency ratio mf', { exact: true });
+      await mf.fill('31');
+      await mf.press('Enter');
+      const bars = page.locator('svg[data-chart="spectrum"] rect[data-bar]');
+      await bars.first().waitFor();
+      assert((await bars.count()) > 50, 'the live spectrum draws one bar per harmonic');
+      await screenshot(page, 'study-new');
+      await page.getByRole('button', { name: 'Create study' }).click();
+      await page.waitForURL(/\/studies\/[0-9a-f-]{36}$/);
+      context.state.studyId = page.url().split('/').pop();
+      await page.getByText('Revision 1', { exact: false }).first().waitFor();
+      await page.getByText(/Saved revision on the server: THD/).waitFor();
+      const labels = await page.locator('svg[data-chart="spectrum"] [data-labels] text').allTextContents();
+      assert(labels.some((l) => l.startsWith('2mf')), `unipolar spectrum labels the 2mf group (labels: ${labels.join(' ')})`);
+      await screenshot(page, 'study-editor');
+      // A second revision, then the history lists both.
+      const ma = page.getByLabel('Modulation index ma', { exact: true });
+      await ma.fill('0.6');
+      await ma.press('Enter');
+      await page.getByRole('button', { name: 'Save revision' }).click();
+      await page.getByText('Saved as revision 2').waitFor();
+      await page.getByRole('list', { name: 'Revisions' }).getByText('Revision 1').waitFor();
+      await page.goto(`${context.baseUrl}/studies/${context.state.studyId}/report`);
+      await page.getByText('Pulsewright study report').waitFor();
+      await page.locator('svg[data-chart="spectrum"]').waitFor();
+      await screenshot(page, 'study-report');
+      await page.close();
+    },
+  },
+  {
+    name: 'a sweep of ma runs as a job and its progress reaches the end',
+    async run(context) {
+      const page = await newPage(context);
+      await signIn(page, context.baseUrl, 'engineer@kestrel.example');
+      await page.getByRole('link', { name: 'Index sweeps' }).click();
+      await page.getByRole('button', { name: 'Run the sweep' }).click();
+      await page.getByTestId('sweep-done').waitFor({ timeout: 30_000 });
+      const value = await page.getByRole('progressbar').first().getAttribute('aria-valuenow');
+      assert(value === '100', `progress bar at 100 % when done (got ${value})`);
+      await page.locator('svg[data-chart="line"] path').first().waitFor();
+      await screenshot(page, 'sweep');
+      await page.close();
+    },
+  },
+  {
+    name: 'an engineer uploads a capture with a progress bar and sees its spectrum',
+    async run(context) {
+      // An invented bench record: 50 Hz fundamental plus a small 1550 Hz component, 20 kS/s, 0.2 s.
+      const rows = ['time,voltage'];
+      for (let k = 0; k < 4000; k++) {
+        const t = k / 20_000;
+        rows.push(`${t.toFixed(7)},${(300 * Math.sin(2 * Math.PI * 50 * t) + 12 * Math.sin(2 * Math.PI * 1550 * t)).toFixed(4)}`);
+      }
+      const dir = mkdtempSync(path.join(tmpdir(), 'pulsewright-capture-'));
+      const file = path.join(dir, 'bench-e2e.csv');
+      writeFileSync(file, rows.join('\n') + '\n');
+      const page = await newPage(context);
+      await signIn(page, context.baseUrl, 'engineer@kestrel.example');
+      await page.getByRole('link', { name: 'Bench captures' }).click();
+      await page.getByLabel(/CSV file/).setInputFiles(file);
+      await page.getByRole('button', { name: 'Upload' }).click();
+      await page.getByText('Uploaded').waitFor();
+      const value = await page.getByRole('progressbar', { name: 'Upload progress' }).getAttribute('aria-valuenow');
+      assert(value === '100', `upload progress at 100 % (got ${value})`);
+      await page.getByTestId('capture-analysis').waitFor();
+      await page.locator('svg[data-chart="spectrum"] rect[data-bar]').first().waitFor();
+      await screenshot(page, 'capture');
+      await page.close();
+    },
+  },
+  {
+    name: 'an engineer creates an API key, sees it once, uses it, and revokes it',
+    async run(context) {
+      const page = await newPage(context);
+      await signIn(page, context.baseUrl, 'engineer@kestrel.example');
+      await page.getByRole('link', { name: 'Team' }).click();
+      await page.getByLabel('Key name').fill('e2e build server');
+      await page.getByRole('button', { name: 'Create key' }).click();
+      const key = (await page.getByTestId('new-key').textContent())?.trim() ?? '';
+      assert(key.length > 20, 'the new key is shown');
+      const before = await fetch(`${context.baseUrl}/api/v1/me`, { headers: { Authorization: `Bearer ${key}` } });
+      assert(before.status === 200, `the key signs a request in (got ${before.status})`);
+      await screenshot(page, 'api-key');
+      await page.getByRole('button', { name: 'Revoke e2e build server' }).click();
+      await page.locator('tr[data-key-name="e2e build server"]').getByText(/revoked/).waitFor();
+      const after = await fetch(`${context.baseUrl}/api/v1/me`, { headers: { Authorization: `Bearer ${key}` } });
+      assert(after.status === 401, `a revoked key is refused (got ${after.status})`);
+      await page.close();
+    },
+  },
+  {
+    name: 'a viewer can look and compute but cannot edit, and the API refuses an edit',
+    async run(context) {
+      const id = context.state.studyId;
+      assert(id, 'the engineer scenario created a study');
+      const page = await newPage(context);
+      await signIn(page, context.baseUrl, 'viewer@kestrel.example');
+      await page.goto(`${context.baseUrl}/studies/${id}`);
+      await page.getByTestId('read-only').waitFor();
+      assert(await page.getByRole('button', { name: 'Save revision' }).isDisabled(), 'save is disabled for a viewer');
+      assert(await page.getByLabel('Name', { exact: true }).isDisabled(), 'fields are disabled for a viewer');
+      assert((await page.getByRole('button', { name: 'Duplicate' }).count()) === 0, 'no duplicate for a viewer');
+      await page.locator('svg[data-chart="spectrum"] rect[data-bar]').first().waitFor();
+      const bearer = await token(page);
+      const response = await fetch(`${context.baseUrl}/api/v1/studies/${id}`, {
+        method: 'PUT',
+        headers: { Authorization: `Bearer ${bearer}`, 'Content-Type': 'application/json' },
+        body: JSON.stringify({ baseRevision: 2, name: 'viewer edit', modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.5, mf: 21, vdc: 400 } }),
+      });
+      assert(response.status === 403, `the API refuses a viewer's edit (got ${response.status})`);
+      await screenshot(page, 'viewer-study');
+      await page.close();
+    },
+  },
+  {
+    name: 'an admin sees members, audit log and outbox',
+    async run(context) {
+      const page = await newPage(context);
+      await signIn(page, context.baseUrl, 'admin@kestrel.example');
+      await page.getByRole('link', { name: 'Team' }).click();
+      await page.getByRole('tab', { name: 'Members' }).click();
+      await page.getByText('viewer@kestrel.example').waitFor();
+      await page.getByRole('tab', { name: 'Audit log' }).click();
+      await page.getByRole('tabpanel').locator('table, [role=status], div').first().waitFor();
+      await screenshot(page, 'team-admin');
+      await page.close();
+    },
+  },
+];
