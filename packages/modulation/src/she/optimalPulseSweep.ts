@@ -1,6 +1,6 @@
 import { assertNumberInRange } from '../validation/assertions.js';
 import { ParameterTypeError } from '../validation/errors.js';
-import { bestOptimum, describeOptimum } from './optimalPulsePattern.js';
+import { bestOptimum, describeOptimum } from './pulseSearch.js';
 import { resolvePulseBase, type PulseSolverSettings } from './pulseOptions.js';
 import { seededStarts } from './seededStarts.js';
 import { assertFundamentalRange, fundamentalGrid } from './validateShe.js';
