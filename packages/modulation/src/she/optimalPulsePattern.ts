@@ -45,7 +45,7 @@ export interface OptimalPulseResult {
  * default, Holmes and Lipo, *Pulse Width Modulation for Power Converters*, 2003, ch. 3)
  * subject to V₁ = `fundamental`. The harmonic model is that of Patel and Hoft (IEEE Trans.
  * Ind. Appl., 1973); the optimiser is a feasible-path Newton method on the KKT conditions with
- * the exact Hessian (see the method notes in docs/methods/she.md), run from the given angles
+ * the exact Hessian (see the method notes in docs/methods.md), run from the given angles
  * and `starts` seeded guesses, keeping the best strict local minimum. The optimum found is
  * local: more starts may find a better one.
  *
