@@ -23,7 +23,7 @@ async function newPage(context: Context): Promise<Page> {
 }
 
 async function token(page: Page): Promise<string> {
-  const value = await page.evaluate(() => sessionStorage.getItem('pulsewright.session'));
+  const value = (await page.evaluate('sessionStorage.getItem("pulsewright.session")')) as string | null;
   assert(value, 'the session token is kept in sessionStorage');
   return value;
 }

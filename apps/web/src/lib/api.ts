@@ -3,7 +3,8 @@ import { session } from './session';
 
 /** The typed client of the API, same origin, with the session token on every request. */
 export const api = createPulsewrightClient({
-  baseUrl: '',
+  // An absolute origin: Request() needs one outside a browser page (tests).
+  baseUrl: globalThis.location?.origin ?? '',
   token: () => session.getToken(),
   // openapi-fetch keeps a reference to fetch; look it up per call so tests can replace it.
   fetch: (input, init) => globalThis.fetch(input, init),

@@ -1,5 +1,5 @@
 import { line, curveStepAfter, scaleLinear, select, zoom, zoomIdentity, type ZoomBehavior, type ZoomTransform } from 'd3';
-import { useEffect, useMemo, useRef, useState } from 'react';
+import { useEffect, useId, useMemo, useRef, useState } from 'react';
 import { Button } from '../ui/Button';
 import { AxisBottom, AxisLeft, formatRadians } from './axes';
 import { ChartFrame } from './ChartFrame';
@@ -93,7 +93,7 @@ export function WaveformChart({ title = 'Modulator and output', fileName = 'wave
   };
   const topLine = line<[number, number]>().x((d) => x(d[0])).y((d) => topY(d[1]));
   const stepLine = line<[number, number]>().x((d) => x(d[0])).y((d) => bottomY(d[1])).curve(curveStepAfter);
-  const clipId = useMemo(() => `clip-${Math.random().toString(36).slice(2)}`, []);
+  const clipId = `clip-${useId().replace(/:/g, '')}`;
 
   return (
     <ChartFrame

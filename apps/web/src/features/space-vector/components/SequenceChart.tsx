@@ -10,13 +10,10 @@ export function SequenceChart({ sequence }: { sequence: SpaceVectorSequence }) {
   const x = scaleLinear().domain([0, 1]).range([left, width - 12]);
   const legs = ['a', 'b', 'c'] as const;
   const rows = scaleBand<string>().domain(['state', ...legs]).range([10, height - 24]).padding(0.25);
-  let start = 0;
-  const segments = sequence.states.map((state, i) => {
-    const duration = sequence.durations[i] ?? 0;
-    const segment = { state, from: start, to: start + duration };
-    start += duration;
-    return segment;
-  });
+  const segments = sequence.states.reduce<{ state: string; from: number; to: number }[]>((list, state, i) => {
+    const from = list[list.length - 1]?.to ?? 0;
+    return [...list, { state, from, to: from + (sequence.durations[i] ?? 0) }];
+  }, []);
   return (
     <ChartFrame title="Switching sequence over one period" fileName="space-vector-sequence">
       <svg data-chart="sequence" viewBox={`0 0 ${width} ${height}`} className="w-full text-ink" role="img" aria-label={`Sequence ${sequence.states.join(' ')}`}>
