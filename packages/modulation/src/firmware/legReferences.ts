@@ -1,4 +1,4 @@
-import { TAU } from '../math.js';
+import { threePhaseReference, type PhaseIndex } from '../three-phase/threePhaseReference.js';
 import type { TimerModulation } from './timerTableTypes.js';
 
 /**
@@ -20,10 +20,8 @@ export function legReferences(theta: number, modulation: TimerModulation): numbe
     const r = ma * Math.sin(theta);
     return modulation.scheme === 'bipolar' ? [r] : [r, -r];
   }
-  const sines = [0, 1, 2].map((k) => ma * Math.sin(theta - (TAU * k) / 3));
   const zeroSequence = modulation.zeroSequence ?? 'none';
-  let v0 = 0;
-  if (zeroSequence === 'third-harmonic') v0 = (ma / 6) * Math.sin(3 * theta);
-  else if (zeroSequence === 'min-max') v0 = -(Math.max(...sines) + Math.min(...sines)) / 2;
-  return sines.map((s) => s + v0);
+  return PHASES.map((phase) => threePhaseReference(phase, { ma, zeroSequence }).value(theta));
 }
+
+const PHASES: readonly PhaseIndex[] = [0, 1, 2];

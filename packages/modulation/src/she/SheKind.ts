@@ -1,3 +1,5 @@
+import type { Waveform } from '../waveform/Waveform.js';
+
 /**
  * The two quarter-wave symmetric pattern families selective harmonic elimination works on.
  *
@@ -16,6 +18,26 @@ export type SheKind = 'bipolar' | 'staircase';
 
 /** The kinds {@link SheKind} allows, for validation and for the API's schema. */
 export const SHE_KINDS: readonly SheKind[] = ['bipolar', 'staircase'];
+
+/** What every quarter-wave pattern search returns; plain data. */
+export interface QuarterWavePattern {
+  /** True when the search met its goal (see the function that returns it). */
+  converged: boolean;
+  /** What happened, in plain words (why no solution, when there is none). */
+  message: string;
+  kind: SheKind;
+  vdc: number;
+  /** First-quarter angles in radians, ascending in (0, π/2); the closest attempt if not converged. */
+  angles: number[];
+  /** The full-period waveform the angles define (quarter- and half-wave symmetric). */
+  waveform: Waveform;
+  /** The fundamental of `waveform`, peak volts in phase with sin θ, from the exact spectrum. */
+  fundamental: number;
+  /** Iterations over all starts tried. */
+  iterations: number;
+  /** Number of starts tried. */
+  starts: number;
+}
 
 /** The amplitude (peak volts, ≥ 0) that remains of one harmonic order. */
 export interface OrderAmplitude {

@@ -1,9 +1,8 @@
-import type { Waveform } from '../waveform/Waveform.js';
 import { resolvePulseBase, type PulseSolverSettings } from './pulseOptions.js';
 import { bestOptimum, describeOptimum } from './pulseSearch.js';
 import { seededStarts } from './seededStarts.js';
 import { assertFundamental } from './validateShe.js';
-import type { SheKind } from './SheKind.js';
+import type { QuarterWavePattern, SheKind } from './SheKind.js';
 
 /** Options of {@link optimalPulsePattern}. */
 export interface OptimalPulseOptions extends PulseSolverSettings {
@@ -20,23 +19,11 @@ export interface OptimalPulseOptions extends PulseSolverSettings {
 }
 
 /** The outcome of {@link optimalPulsePattern}; plain data. */
-export interface OptimalPulseResult {
+export interface OptimalPulseResult extends QuarterWavePattern {
   /** True when a strict local minimum was found (stationary, positive curvature on the constraint). */
   converged: boolean;
-  /** What happened, in plain words. */
-  message: string;
-  kind: SheKind;
-  vdc: number;
-  /** First-quarter angles in radians, ascending in (0, π/2). */
-  angles: number[];
-  /** The full-period waveform the angles define. */
-  waveform: Waveform;
-  /** The waveform's fundamental, peak volts in phase with sin θ, from the exact spectrum. */
-  fundamental: number;
   /** √(Σ w_n·V_n²)/V₁ from the exact spectrum (for 'wthd', the WTHD over orders ≤ maxOrder). */
   objective: number;
-  iterations: number;
-  starts: number;
 }
 
 /**

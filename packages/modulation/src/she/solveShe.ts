@@ -1,12 +1,11 @@
 import { harmonics } from '../spectrum/harmonics.js';
-import type { Waveform } from '../waveform/Waveform.js';
 import { createSheSystem } from './sheSystem.js';
 import { searchSolutions } from './sheSearch.js';
 import { seededStarts } from './seededStarts.js';
 import { buildSheWaveform } from './buildSheWaveform.js';
 import { assertSquare, resolveSheBase, type SheSolverSettings } from './sheOptions.js';
 import { assertFundamental } from './validateShe.js';
-import type { OrderAmplitude, SheKind } from './SheKind.js';
+import type { OrderAmplitude, QuarterWavePattern, SheKind } from './SheKind.js';
 
 /** Options of {@link solveShe}. */
 export interface SolveSheOptions extends SheSolverSettings {
@@ -31,25 +30,14 @@ export interface SolveSheOptions extends SheSolverSettings {
 }
 
 /** The outcome of {@link solveShe}; plain data. */
-export interface SheResult {
-  /** True when every eliminated order and the fundamental meet the tolerance. */
+export interface SheResult extends QuarterWavePattern {
+  /**
+   * True when every eliminated order and the fundamental meet the tolerance. The fundamental
+   * is negative if the pattern came out in antiphase.
+   */
   converged: boolean;
-  /** What happened, in plain words (why no solution, when there is none). */
-  message: string;
-  kind: SheKind;
-  vdc: number;
-  /** First-quarter angles in radians, ascending in (0, π/2); the closest attempt if not converged. */
-  angles: number[];
-  /** The full-period waveform the angles define (quarter- and half-wave symmetric). */
-  waveform: Waveform;
-  /** The fundamental of `waveform`, peak volts in phase with sin θ (negative if in antiphase). */
-  fundamental: number;
   /** Remaining amplitude (peak volts) of each eliminated order, from the exact spectrum. */
   residual: OrderAmplitude[];
-  /** Newton iterations over all starts tried. */
-  iterations: number;
-  /** Starting guesses tried (the given angles count as one). */
-  starts: number;
 }
 
 /**
