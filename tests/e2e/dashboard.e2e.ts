@@ -9,6 +9,8 @@ export interface Context {
   baseUrl: string;
   /** Shared between scenarios, in order: the study the engineer created. */
   state: { studyId?: string };
+  /** The page a scenario opened last (screenshotted when the scenario fails). */
+  lastPage?: Page;
 }
 
 export interface Scenario {
@@ -19,6 +21,7 @@ export interface Scenario {
 async function newPage(context: Context): Promise<Page> {
   const page = await context.browser.newPage({ viewport: { width: 1400, height: 900 } });
   page.setDefaultTimeout(15_000);
+  context.lastPage = page;
   return page;
 }
 
@@ -169,10 +172,14 @@ export const scenarios: Scenario[] = [
   {
     name: 'a viewer can look and compute but cannot edit, and the API refuses an edit',
     async run(context) {
-      const id = context.state.studyId;
-      assert(id, 'the engineer scenario created a study');
       const page = await newPage(context);
       await signIn(page, context.baseUrl, 'viewer@kestrel.example');
+      // The study the engineer made, or else the first one of the demo.
+      const listed = await fetch(`${context.baseUrl}/api/v1/studies`, { headers: { Authorization: `Bearer ${await token(page)}` } });
+      const studies = (await listed.json()) as { id: string; revision: number }[];
+      const id = context.state.studyId ?? studies[0]?.id;
+      const revision = studies.find((s) => s.id === id)?.revision ?? 1;
+      assert(id, 'there is a study to open');
       await page.goto(`${context.baseUrl}/studies/${id}`);
       await page.getByTestId('read-only').waitFor();
       assert(await page.getByRole('button', { name: 'Save revision' }).isDisabled(), 'save is disabled for a viewer');
@@ -183,10 +190,41 @@ export const scenarios: Scenario[] = [
       const response = await fetch(`${context.baseUrl}/api/v1/studies/${id}`, {
         method: 'PUT',
         headers: { Authorization: `Bearer ${bearer}`, 'Content-Type': 'application/json' },
-        body: JSON.stringify({ baseRevision: 2, name: 'viewer edit', modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.5, mf: 21, vdc: 400 } }),
+        body: JSON.stringify({ baseRevision: revision, name: 'viewer edit', modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.5, mf: 21, vdc: 400 } }),
       });
       assert(response.status === 403, `the API refuses a viewer's edit (got ${response.status})`);
       await screenshot(page, 'viewer-study');
+      await page.close();
+    },
+  },
+  {
+    name: 'the browser-side tools render: compare, harmonic elimination, space vector, controller tables',
+    async run(context) {
+      const page = await newPage(context);
+      await signIn(page, context.baseUrl, 'engineer@kestrel.example');
+      await page.getByRole('link', { name: 'Compare' }).click();
+      await page.getByRole('heading', { name: 'Compare studies' }).waitFor();
+      const boxes = page.getByRole('region', { name: 'Studies' }).getByRole('checkbox');
+      await boxes.first().waitFor();
+      await boxes.nth(0).check();
+      await boxes.nth(1).check();
+      await page.locator('svg[data-chart="spectrum"] g[data-series]').nth(1).waitFor();
+      await screenshot(page, 'compare');
+      await page.getByRole('link', { name: 'Harmonic elimination' }).click();
+      await page.getByRole('button', { name: 'Find the branches' }).click();
+      await page.locator('svg[data-chart="line"] circle').first().waitFor({ timeout: 30_000 });
+      await page.locator('svg[data-chart="line"] circle').nth(5).click();
+      await page.getByText('Picked point').waitFor();
+      await screenshot(page, 'elimination');
+      await page.getByRole('link', { name: 'Space vector' }).click();
+      await page.locator('svg[data-chart="hexagon"]').waitFor();
+      const sector = (await page.getByTestId('sector').textContent())?.trim();
+      // θ = 25° lies between V1 (0°) and V2 (60°): sector 1 (van der Broeck et al., 1988).
+      assert(sector === '1', `25° is in sector 1 (got ${sector})`);
+      await screenshot(page, 'space-vector');
+      await page.getByRole('link', { name: 'Controller tables' }).click();
+      await page.getByRole('button', { name: 'C header' }).waitFor();
+      await screenshot(page, 'controller-tables');
       await page.close();
     },
   },

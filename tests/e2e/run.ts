@@ -8,7 +8,7 @@ import { readdirSync } from 'node:fs';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import type { Scenario, Context } from './dashboard.e2e.js';
-import { launchBrowser, repoRoot, startService, type Service } from './harness.js';
+import { launchBrowser, repoRoot, screenshot, startService, type Service } from './harness.js';
 
 const dir = path.join(repoRoot, 'tests', 'e2e');
 const files = readdirSync(dir).filter((f) => f.endsWith('.e2e.ts')).sort();
@@ -30,11 +30,16 @@ try {
     for (const scenario of scenarios) {
       if (filter && !scenario.name.includes(filter)) continue;
       const t0 = Date.now();
+      delete context.lastPage;
       try {
         await scenario.run(context);
         console.log(`  ✓ ${scenario.name} (${Date.now() - t0} ms)`);
       } catch (error) {
         failures++;
+        if (context.lastPage && !context.lastPage.isClosed()) {
+          await screenshot(context.lastPage, `failed-${failures}`).catch(() => undefined);
+          await context.lastPage.close().catch(() => undefined);
+        }
         console.log(`  ✗ ${scenario.name}\n    ${error instanceof Error ? error.message.split('\n').join('\n    ') : String(error)}`);
       }
     }

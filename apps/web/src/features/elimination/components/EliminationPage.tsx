@@ -19,9 +19,9 @@ const COLOURS = ['#12263a', '#d9822b', '#2a8c82', '#8e3b6e', '#c2462e', '#5b6fa8
 export function EliminationPage() {
   const me = useMe();
   const canSave = roleAtLeast(me.data?.role, 'engineer');
-  const [form, setForm] = useState({ kind: 'bipolar' as 'bipolar' | 'staircase', vdc: 300, eliminate: '5, 7', from: 0.3, to: 1.1, points: 40 });
+  const [form, setForm] = useState({ kind: 'bipolar' as 'bipolar' | 'staircase', vdc: 300, eliminate: '5, 7', from: 0.3, to: 0.95, points: 40 });
   const sweep = useSheSweep();
-  const [picked, setPicked] = useState<{ branch: number; point: number } | null>(null);
+  const [picked, setPicked] = useState<{ branch: number; point: number; series: number } | null>(null);
   const save = useSaveSheStudy();
   const projects = useQuery({ queryKey: ['projects', ''], queryFn: () => getEliminationProjects() });
   const navigate = useNavigate();
@@ -102,8 +102,8 @@ export function EliminationPage() {
                 xLabel="fundamental (V peak)"
                 yLabel="angle (degrees)"
                 series={series}
-                onPick={(si, pi) => setPicked({ branch: seriesIndex[si]?.branch ?? 0, point: pi })}
-                picked={null}
+                onPick={(si, pi) => setPicked({ branch: seriesIndex[si]?.branch ?? 0, point: pi, series: si })}
+                picked={picked ? { series: picked.series, point: picked.point } : null}
               />
             </>
           ) : null}

@@ -31,7 +31,7 @@ export function FirmwarePage() {
     zeroSequence: 'none',
     ma: 0.85,
     fundamentalFrequency: 50,
-    carrierFrequency: 10_050,
+    carrierFrequency: 10_000,
     timerClock: 72e6,
     countingMode: 'centre-aligned',
     counterBits: 16,

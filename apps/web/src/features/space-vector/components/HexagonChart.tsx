@@ -8,9 +8,9 @@ const STATES = ['100', '110', '010', '011', '001', '101'];
  * drawn normalised to 1), the inscribed circle m = 1, and the reference vector.
  */
 export function HexagonChart({ m, theta, sector }: { m: number; theta: number; sector: number }) {
-  const size = 340;
-  const s = scaleLinear().domain([-1.25, 1.25]).range([0, size]);
-  const y = scaleLinear().domain([-1.25, 1.25]).range([size, 0]);
+  const size = 360;
+  const s = scaleLinear().domain([-1.45, 1.45]).range([0, size]);
+  const y = scaleLinear().domain([-1.45, 1.45]).range([size, 0]);
   const vertex = (k: number) => [Math.cos((k * Math.PI) / 3), Math.sin((k * Math.PI) / 3)] as const;
   const hexagon = STATES.map((_, k) => vertex(k)).map(([a, b]) => `${s(a)},${y(b)}`).join(' ');
   // m = 1 is the inscribed circle, radius cos(π/6) of the vertex radius (hexagon geometry).
@@ -31,13 +31,13 @@ export function HexagonChart({ m, theta, sector }: { m: number; theta: number; s
             <g key={state}>
               <line x1={s(0)} y1={y(0)} x2={s(vx)} y2={y(vy)} stroke="currentColor" opacity={0.25} />
               <circle cx={s(vx)} cy={y(vy)} r={3} fill="currentColor" />
-              <text x={s(vx * 1.13)} y={y(vy * 1.13)} fontSize={11} textAnchor="middle" dy="0.35em" fill="currentColor">
+              <text x={s(vx * 1.2)} y={y(vy * 1.2)} fontSize={11} textAnchor="middle" dy="0.35em" fill="currentColor">
                 V{k + 1} {state}
               </text>
             </g>
           );
         })}
-        <text x={s(0) + 6} y={y(0) - 6} fontSize={10} fill="currentColor">000 / 111</text>
+        <text x={s(0)} y={y(0) + 16} fontSize={10} textAnchor="middle" fill="currentColor">000 / 111</text>
         <line x1={s(0)} y1={y(0)} x2={s(tip[0])} y2={y(tip[1])} stroke="var(--color-trace-ref)" strokeWidth={3} markerEnd="url(#arrow)" />
         <defs>
           <marker id="arrow" viewBox="0 0 10 10" refX="8" refY="5" markerWidth="6" markerHeight="6" orient="auto-start-reverse">
