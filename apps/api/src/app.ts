@@ -14,6 +14,8 @@ import { defineModels } from './models/index.js';
 import { listOperations, loadOpenApiDocument, type OpenApiDocument } from './openapi.js';
 import { accountRoutes } from './routes/accountRoutes.js';
 import { studyRoutes } from './routes/studyRoutes.js';
+import { computeRoutes } from './routes/computeRoutes.js';
+import { captureRoutes } from './routes/captureRoutes.js';
 import { createServices, type Services } from './services/index.js';
 import { seedDemo } from './services/seed.js';
 
@@ -63,6 +65,7 @@ export async function createApp(overrides: Partial<AppConfig> = {}): Promise<Pul
   const { fresh } = await migrate(sequelize);
   const models = defineModels(sequelize);
   const services = createServices(models, config);
+  await services.jobs.failInterrupted();
   if (fresh && config.seedDemo) await seedDemo(services, config.demoPassword);
 
   const app = express() as PulsewrightApp;
@@ -100,6 +103,8 @@ export async function createApp(overrides: Partial<AppConfig> = {}): Promise<Pul
   const version = document.info.version;
   app.use(accountRoutes(services, { ...config, version }));
   app.use(studyRoutes(services));
+  app.use(computeRoutes(services));
+  app.use(captureRoutes(services));
   app.use('/api', (req, _res, next) => next(new HttpError(404, `No route ${req.method} ${req.originalUrl}.`)));
   app.use(staticWeb(config.webDist));
   app.use(problemHandler(document, config.logErrors));
@@ -107,6 +112,7 @@ export async function createApp(overrides: Partial<AppConfig> = {}): Promise<Pul
   app.services = services;
   app.freshDatabase = fresh;
   app.close = async () => {
+    await services.jobs.close();
     services.mailer.close();
     await sequelize.close();
   };

@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { intQuery } from '../http/query.js';
 import { principalOf } from '../auth/authorize.js';
+import { computeSpectrum, type ModulationInput } from '../services/compute.js';
 import type { Services } from '../services/index.js';
 
 /** Projects and studies (every study edit is a new revision). */
@@ -51,6 +52,10 @@ export function studyRoutes(services: Services): Router {
   });
   router.post('/api/v1/studies/:id/revisions/:revision/restore', async (req, res) => {
     res.json(await studies.restore(principalOf(req), req.params.id, Number(req.params.revision), req.body.baseRevision));
+  });
+  router.get('/api/v1/studies/:id/spectrum', async (req, res) => {
+    const study = await studies.get(principalOf(req).teamId, req.params.id);
+    res.json(computeSpectrum(study.modulation as ModulationInput, intQuery(req.query.maxOrder, 100)));
   });
   return router;
 }

@@ -3,6 +3,8 @@ import type { Models } from '../models/index.js';
 import { ApiKeyService } from './apiKeys.js';
 import { AuditLog } from './audit.js';
 import { AuthService } from './auth.js';
+import { CaptureService } from './captures.js';
+import { JobService } from './jobs.js';
 import { Mailer } from './mail.js';
 import { ProjectService } from './projects.js';
 import { StudyService } from './studies.js';
@@ -18,6 +20,8 @@ export interface Services {
   team: TeamService;
   projects: ProjectService;
   studies: StudyService;
+  captures: CaptureService;
+  jobs: JobService;
 }
 
 export function createServices(models: Models, config: AppConfig): Services {
@@ -25,6 +29,7 @@ export function createServices(models: Models, config: AppConfig): Services {
   const auth = new AuthService(models, audit, { sessionHours: config.sessionHours, bcryptRounds: config.bcryptRounds });
   const mailer = new Mailer(models, config.smtpUrl, config.mailFrom);
   const projects = new ProjectService(models, audit);
+  const studies = new StudyService(models, audit, projects);
   return {
     models,
     audit,
@@ -33,6 +38,8 @@ export function createServices(models: Models, config: AppConfig): Services {
     mailer,
     team: new TeamService(models, audit, auth, mailer, config.publicUrl),
     projects,
-    studies: new StudyService(models, audit, projects),
+    studies,
+    captures: new CaptureService(models, audit, projects, studies),
+    jobs: new JobService(models, audit),
   };
 }

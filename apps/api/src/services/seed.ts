@@ -1,18 +1,135 @@
+import { rlCurrentAt, TAU, waveformValueAt } from '@pulsewright/modulation';
+import type { Role } from '../models/index.js';
+import { modulationWaveforms, type ModulationInput } from './compute.js';
 import type { Services } from './index.js';
+import type { Principal } from './principal.js';
+import type { StudyContent } from './studies.js';
 
-/** Seeds the invented Kestrel Drives scenario into a new database (see DESIGN.md). */
+/** The invented demo team (DESIGN.md, "Demo scenario"); every value below is made up. */
+export const DEMO_USERS: readonly { email: string; name: string; role: Role }[] = [
+  { email: 'admin@kestrel.example', name: 'Ada Marsh', role: 'admin' },
+  { email: 'engineer@kestrel.example', name: 'Ravi Okafor', role: 'engineer' },
+  { email: 'engineer2@kestrel.example', name: 'Lena Brandt', role: 'engineer' },
+  { email: 'viewer@kestrel.example', name: 'Tomas Reyes', role: 'viewer' },
+];
+
+const PUMP_BASELINE: StudyContent = {
+  name: 'Unipolar 20 kHz baseline',
+  modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.86, mf: 400, vdc: 375, sampling: 'natural', carrierPhase: 0 },
+  load: { r: 15.5, l: 0.021, frequency: 50 },
+  filter: { l: 0.0011, c: 0.0000068, rDamping: 2.2, dampingPlacement: 'series-with-capacitor' },
+  note: 'Pump motor modelled as RL at the rated slip; filter sized for about 1.8 kHz resonance.',
+};
+
+/** The bench capture is taken at a low frequency ratio so its pulses are visible at 250 kS/s. */
+const BENCH_MODULATION: ModulationInput = { method: 'sine-triangle', scheme: 'unipolar', ma: 0.8, mf: 42, vdc: 360 };
+
+/**
+ * Seeds a new database with the Kestrel Drives scenario: the team, four people sharing the
+ * demo password, two projects, a few studies with history, and one bench capture.
+ */
 export async function seedDemo(services: Services, password: string): Promise<void> {
-  const { models, auth } = services;
+  const { models, auth, projects, studies, captures } = services;
   const passwordHash = await auth.hashPassword(password);
   const team = await models.Team.create({ name: 'Kestrel Drives' });
-  const people = [
-    { email: 'admin@kestrel.example', name: 'Ada Marsh', role: 'admin' as const },
-    { email: 'engineer@kestrel.example', name: 'Ravi Okafor', role: 'engineer' as const },
-    { email: 'engineer2@kestrel.example', name: 'Lena Brandt', role: 'engineer' as const },
-    { email: 'viewer@kestrel.example', name: 'Tomas Reyes', role: 'viewer' as const },
-  ];
-  for (const person of people) {
+  const principals: Principal[] = [];
+  for (const person of DEMO_USERS) {
     const user = await models.User.create({ email: person.email, name: person.name, passwordHash });
     await models.Membership.create({ teamId: team.id, userId: user.id, role: person.role });
+    principals.push({
+      user: { id: user.id, email: user.email, name: user.name },
+      teamId: team.id,
+      teamName: team.name,
+      role: person.role,
+      authMethod: 'session',
+      credentialId: 'seed',
+    });
   }
+  const [, ravi, lena] = principals as [Principal, Principal, Principal, Principal];
+
+  const pump = await projects.create(ravi, {
+    name: '3 kVA pump inverter',
+    description: 'Single-phase H-bridge for irrigation pumps: 230 V rms, 50 Hz output from a 375 V bus.',
+  });
+  const drive = await projects.create(lena, {
+    name: '7.5 kW drive',
+    description: 'Three-phase drive for a 400 V induction motor from a 650 V bus.',
+  });
+
+  const baseline = await studies.create(ravi, pump.id, PUMP_BASELINE);
+  // A second revision: the team settled on a slightly higher index after a bus-voltage review.
+  await studies.update(ravi, baseline.id, baseline.revision, {
+    ...PUMP_BASELINE,
+    modulation: { ...PUMP_BASELINE.modulation, ma: 0.88 },
+    note: `${PUMP_BASELINE.note} Index raised to 0.88 for the low-line case.`,
+  });
+  await studies.create(ravi, pump.id, {
+    name: 'Bipolar comparison',
+    modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.88, mf: 399, vdc: 375, sampling: 'natural', carrierPhase: 0 },
+    load: PUMP_BASELINE.load ?? null,
+    filter: null,
+    note: 'Two-level switching for comparison: simpler gate drive, larger ripple.',
+  });
+  await studies.create(lena, drive.id, {
+    name: 'Third-harmonic injection, 8 kHz',
+    modulation: { method: 'three-phase', ma: 1.08, mf: 160, vdc: 650, zeroSequence: 'third-harmonic', sampling: 'natural', carrierPhase: 0 },
+    load: { r: 2.4, l: 0.0085, frequency: 50 },
+    filter: null,
+    note: 'Linear up to ma ≈ 1.15 with 1/6 third-harmonic injection.',
+  });
+  await studies.create(lena, drive.id, {
+    name: 'Centred space vector (min-max), 8 kHz',
+    modulation: { method: 'three-phase', ma: 1.1, mf: 160, vdc: 650, zeroSequence: 'min-max', sampling: 'regular-symmetric', carrierPhase: 0 },
+    load: { r: 2.4, l: 0.0085, frequency: 50 },
+    filter: null,
+    note: 'Regular-symmetric sampling as the controller will run it.',
+  });
+  await studies.create(ravi, pump.id, {
+    name: 'Bench prototype (42 × 50 Hz carrier)',
+    modulation: BENCH_MODULATION as StudyContent['modulation'],
+    load: { r: 12, l: 0.018, frequency: 50 },
+    filter: null,
+    note: 'Settings of the first bench prototype, for comparison with the capture.',
+  });
+
+  const csv = benchCaptureCsv();
+  await captures.upload(ravi, { buffer: Buffer.from(csv, 'utf8'), originalname: 'kestrel-bench-prototype-run1.csv' }, {
+    name: 'Bench prototype, run 1',
+    projectId: pump.id,
+  });
+}
+
+/** Small deterministic PRNG (mulberry32), so every new database gets the same capture. */
+function mulberry32(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+/**
+ * An invented bench capture: two 50 Hz periods of the bench prototype's bridge voltage and
+ * load current sampled at 250 kS/s, with a little measurement noise. Voltage and current come
+ * from the library (waveformValueAt, rlCurrentAt).
+ */
+export function benchCaptureCsv(): string {
+  const sampleRate = 250_000;
+  const frequency = 50;
+  const rows = (2 * sampleRate) / frequency;
+  const { waveform } = modulationWaveforms(BENCH_MODULATION);
+  const angles = Array.from({ length: rows }, (_, k) => ((TAU * frequency * k) / sampleRate) % TAU);
+  const current = rlCurrentAt(waveform, angles, { r: 12, l: 0.018, frequency });
+  const random = mulberry32(0x6b657374); // "kest"
+  const noise = (scale: number) => (random() + random() + random() - 1.5) * scale;
+  const lines = ['time_s,voltage_v,current_a'];
+  for (let k = 0; k < rows; k++) {
+    const v = waveformValueAt(waveform, angles[k] as number) + noise(1.5);
+    const i = (current[k] as number) + noise(0.02);
+    lines.push(`${(k / sampleRate).toFixed(7)},${v.toFixed(2)},${i.toFixed(4)}`);
+  }
+  return `${lines.join('\n')}\n`;
 }

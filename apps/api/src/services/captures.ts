@@ -1,0 +1,149 @@
+import { fftSpectrum, harmonics, type FftWindowName } from '@pulsewright/modulation';
+import type { CaptureRow, Models } from '../models/index.js';
+import { badRequest, notFound } from '../http/errors.js';
+import type { AuditLog } from './audit.js';
+import { parseCaptureCsv, sanitiseFileName } from './captureCsv.js';
+import { modulationWaveforms, type ModulationInput } from './compute.js';
+import { iso } from './dto.js';
+import { callLibrary } from './library.js';
+import type { Principal } from './principal.js';
+import type { ProjectService } from './projects.js';
+import type { StudyService } from './studies.js';
+
+export interface CaptureDto {
+  id: string;
+  projectId: string | null;
+  name: string;
+  fileName: string;
+  rows: number;
+  sampleRate: number;
+  duration: number;
+  columns: string[];
+  byteSize: number;
+  createdAt: string;
+}
+
+export interface AnalysisOptions {
+  window: FftWindowName;
+  fundamentalFrequency?: number;
+  maxOrder: number;
+  column: 'voltage' | 'current';
+}
+
+/** Bench captures: checked and parsed on upload (the original kept), analysed by fftSpectrum. */
+export class CaptureService {
+  constructor(
+    private readonly models: Models,
+    private readonly audit: AuditLog,
+    private readonly projects: ProjectService,
+    private readonly studies: StudyService,
+  ) {}
+
+  async upload(
+    principal: Principal,
+    file: { buffer: Buffer; originalname?: string; mimetype?: string },
+    fields: { name?: string; projectId?: string },
+  ): Promise<CaptureDto> {
+    // Everything is checked before anything is written: a rejected file stores nothing.
+    if (fields.projectId) await this.projects.find(principal.teamId, fields.projectId);
+    const parsed = parseCaptureCsv(file.buffer);
+    const fileName = sanitiseFileName(file.originalname);
+    const row = await this.models.Capture.create({
+      teamId: principal.teamId,
+      projectId: fields.projectId ?? null,
+      name: fields.name?.trim() || fileName.replace(/\.[^.]*$/, '') || 'capture',
+      fileName,
+      contentType: 'text/csv',
+      byteSize: file.buffer.length,
+      original: file.buffer,
+      series: parsed.series,
+      rows: parsed.rows,
+      sampleRate: parsed.sampleRate,
+      duration: parsed.duration,
+      columns: parsed.columns,
+      uploadedById: principal.user.id,
+    });
+    await this.audit.record(principal, 'capture.upload', 'capture', row.id, { fileName, rows: parsed.rows });
+    return toDto(row);
+  }
+
+  async list(teamId: string, projectId?: string): Promise<CaptureDto[]> {
+    const rows = await this.models.Capture.findAll({
+      where: { teamId, ...(projectId ? { projectId } : {}) },
+      attributes: { exclude: ['original', 'series'] },
+      order: [['createdAt', 'DESC']],
+    });
+    return rows.map(toDto);
+  }
+
+  async find(teamId: string, id: string): Promise<CaptureRow> {
+    const row = await this.models.Capture.findOne({ where: { id, teamId } });
+    if (!row) throw notFound('That capture');
+    return row;
+  }
+
+  async get(teamId: string, id: string): Promise<CaptureDto & { series: CaptureRow['series'] }> {
+    const row = await this.find(teamId, id);
+    return { ...toDto(row), series: row.series };
+  }
+
+  async analyse(teamId: string, id: string, options: AnalysisOptions) {
+    const row = await this.find(teamId, id);
+    const samples = options.column === 'current' ? row.series.current : row.series.voltage;
+    if (!samples) {
+      const message = 'column must be voltage: this capture has no current column';
+      throw badRequest(message, [{ path: 'column', message }]);
+    }
+    const { bins: _bins, ...spectrum } = callLibrary('', () =>
+      fftSpectrum(samples, row.sampleRate, {
+        window: options.window,
+        maxOrder: options.maxOrder,
+        ...(options.fundamentalFrequency ? { fundamentalFrequency: options.fundamentalFrequency } : {}),
+      }),
+    );
+    return { captureId: row.id, column: options.column, ...spectrum };
+  }
+
+  /** Measured harmonics of a capture against the exact prediction of a study, order by order. */
+  async compare(teamId: string, id: string, studyId: string, options: AnalysisOptions) {
+    const measured = await this.analyse(teamId, id, { ...options, column: 'voltage' });
+    const study = await this.studies.get(teamId, studyId);
+    const { waveform } = modulationWaveforms(study.modulation as ModulationInput);
+    const predicted = callLibrary('', () => harmonics(waveform, options.maxOrder));
+    const orders = measured.harmonics.map((h) => {
+      const p = predicted[h.order]?.amplitude ?? 0;
+      return {
+        order: h.order,
+        frequency: h.frequency,
+        measured: h.amplitude,
+        predicted: p,
+        difference: h.amplitude - p,
+        ratio: p > 0 ? h.amplitude / p : null,
+      };
+    });
+    return {
+      captureId: id,
+      studyId,
+      studyRevision: study.revision,
+      window: measured.window,
+      fundamentalFrequency: measured.fundamentalFrequency,
+      measuredThd: measured.thd,
+      orders,
+    };
+  }
+}
+
+function toDto(row: CaptureRow): CaptureDto {
+  return {
+    id: row.id,
+    projectId: row.projectId,
+    name: row.name,
+    fileName: row.fileName,
+    rows: row.rows,
+    sampleRate: row.sampleRate,
+    duration: row.duration,
+    columns: row.columns,
+    byteSize: row.byteSize,
+    createdAt: iso(row.createdAt),
+  };
+}

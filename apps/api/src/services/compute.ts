@@ -1,0 +1,157 @@
+import {
+  filteredSpectrum,
+  harmonics,
+  lcFilter,
+  rlCurrentSeries,
+  rlSteadyState,
+  sineTriangle,
+  spaceVectorSequence,
+  thd,
+  threePhase,
+  timerTable,
+  timerTableToCHeader,
+  timerTableToCsv,
+  timerTableToJson,
+  wthd,
+  type Harmonic,
+  type LcFilterCharacteristics,
+  type LcFilterOptions,
+  type RlLoadOptions,
+  type RlSteadyState,
+  type SpaceVectorSequence,
+  type SpaceVectorSequenceOptions,
+  type TimerTableOptions,
+  type Waveform,
+  type ZeroSequence,
+  type CarrierSampling,
+} from '@pulsewright/modulation';
+import { callLibrary } from './library.js';
+
+export type SineTriangleInput = {
+  method: 'sine-triangle';
+  scheme: 'bipolar' | 'unipolar';
+  ma: number;
+  mf: number;
+  vdc: number;
+  sampling?: CarrierSampling;
+  carrierPhase?: number;
+};
+export type ThreePhaseInput = {
+  method: 'three-phase';
+  ma: number;
+  mf: number;
+  vdc: number;
+  zeroSequence?: ZeroSequence;
+  sampling?: CarrierSampling;
+  carrierPhase?: number;
+  /** Which output spectra analyse. @default 'line-to-line' */
+  output?: 'line-to-line' | 'leg';
+};
+export type ModulationInput = SineTriangleInput | ThreePhaseInput;
+
+export interface SpectrumResult {
+  harmonics: Harmonic[];
+  thd: number;
+  wthd: number;
+}
+
+export interface WaveformResult {
+  name: string;
+  waveform: Waveform;
+  traces: { name: string; waveform: Waveform }[];
+}
+
+/** The analysed output waveform (and every trace) of a modulation, from the library. */
+export function modulationWaveforms(modulation: ModulationInput, prefix = 'modulation.'): WaveformResult {
+  return callLibrary(prefix, () => {
+    if (modulation.method === 'sine-triangle') {
+      const { method: _method, ...options } = modulation;
+      const waveform = sineTriangle(options);
+      return { name: 'bridge output', waveform, traces: [{ name: 'bridge output', waveform }] };
+    }
+    const { method: _method, output = 'line-to-line', ...options } = modulation;
+    const result = threePhase(options);
+    const traces = [
+      { name: 'leg a', waveform: result.legs.a },
+      { name: 'leg b', waveform: result.legs.b },
+      { name: 'leg c', waveform: result.legs.c },
+      { name: 'line ab', waveform: result.lineToLine.ab },
+      { name: 'line bc', waveform: result.lineToLine.bc },
+      { name: 'line ca', waveform: result.lineToLine.ca },
+    ];
+    return output === 'leg'
+      ? { name: 'leg a', waveform: result.legs.a, traces }
+      : { name: 'line ab', waveform: result.lineToLine.ab, traces };
+  });
+}
+
+/** A function from ma to the analysed waveform, for sweeps. */
+export function waveformAtMa(modulation: ModulationInput): (ma: number) => Waveform {
+  return (ma) => modulationWaveforms({ ...modulation, ma } as ModulationInput).waveform;
+}
+
+export function spectrumOf(waveform: Waveform, maxOrder: number): SpectrumResult {
+  return callLibrary('', () => {
+    const spectrum = harmonics(waveform, maxOrder);
+    return { harmonics: spectrum, thd: thd(spectrum), wthd: wthd(spectrum) };
+  });
+}
+
+export function computeSpectrum(modulation: ModulationInput, maxOrder: number): SpectrumResult {
+  return spectrumOf(modulationWaveforms(modulation).waveform, maxOrder);
+}
+
+export interface LoadCurrentResult extends RlSteadyState {
+  series: { angles: number[]; current: number[] };
+}
+
+export function computeLoadCurrent(modulation: ModulationInput, load: RlLoadOptions, points: number): LoadCurrentResult {
+  const { waveform } = modulationWaveforms(modulation);
+  return callLibrary('load.', () => ({
+    ...rlSteadyState(waveform, load),
+    series: rlCurrentSeries(waveform, { ...load, points }),
+  }));
+}
+
+export interface FilterResult {
+  characteristics: LcFilterCharacteristics;
+  output: SpectrumResult | null;
+}
+
+export function computeFilter(
+  filter: LcFilterOptions,
+  spectrumInput?: { modulation: ModulationInput; maxOrder: number; fundamentalFrequency: number },
+): FilterResult {
+  const characteristics = callLibrary('filter.', () => lcFilter(filter));
+  if (!spectrumInput) return { characteristics, output: null };
+  const input = computeSpectrum(spectrumInput.modulation, spectrumInput.maxOrder);
+  const output = callLibrary('', () => {
+    const spectrum = filteredSpectrum(input.harmonics, { filter, fundamentalFrequency: spectrumInput.fundamentalFrequency });
+    return { harmonics: spectrum, thd: thd(spectrum), wthd: wthd(spectrum) };
+  });
+  return { characteristics, output };
+}
+
+export function computeSpaceVector(m: number, theta: number, options: SpaceVectorSequenceOptions): SpaceVectorSequence {
+  return callLibrary('', () => spaceVectorSequence({ m, theta }, options));
+}
+
+export type TimerFormat = 'json' | 'csv' | 'c-header';
+
+export interface TimerDownload {
+  body: string;
+  contentType: string;
+  fileName: string;
+}
+
+/** A timer table rendered by the library in the format asked for, ready to download. */
+export function computeTimerTable(options: TimerTableOptions, format: TimerFormat, prefix = 'pwm_table'): TimerDownload {
+  return callLibrary('', () => {
+    const table = timerTable(options);
+    if (format === 'csv') return { body: timerTableToCsv(table), contentType: 'text/csv; charset=utf-8', fileName: `${prefix}.csv` };
+    if (format === 'c-header') {
+      return { body: timerTableToCHeader(table, { prefix }), contentType: 'text/x-c; charset=utf-8', fileName: `${prefix}.h` };
+    }
+    return { body: timerTableToJson(table), contentType: 'application/json; charset=utf-8', fileName: `${prefix}.json` };
+  });
+}
