@@ -78,8 +78,11 @@ export async function createApp(overrides: Partial<AppConfig> = {}): Promise<Pul
           // Swagger UI and the dashboard need inline styles and data: images; scripts stay 'self'.
           'style-src': ["'self'", "'unsafe-inline'"],
           'img-src': ["'self'", 'data:', 'blob:'],
+          // The service speaks plain HTTP on its port; TLS (and HSTS) belong to the proxy in front.
+          'upgrade-insecure-requests': null,
         },
       },
+      strictTransportSecurity: false,
     }),
   );
   // No CORS headers: the dashboard is served from this origin, and scripts are not browsers.
