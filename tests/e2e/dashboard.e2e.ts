@@ -48,6 +48,8 @@ export const scenarios: Scenario[] = [
         assert(shown === role, `role badge shows ${role} (got ${shown})`);
         assert(await page.getByRole('complementary', { name: 'Safety caution' }).isVisible(), 'the hazard caution is visible');
         assert((await page.getByRole('link', { name: 'Team' }).count()) === (role === 'viewer' ? 0 : 1), 'Team link only for engineers and admins');
+        await page.getByRole('heading', { name: 'Studies', exact: true }).waitFor();
+        await page.getByRole('link', { name: /Bench prototype/ }).first().waitFor();
         await screenshot(page, `studies-${role}`);
         await page.getByRole('button', { name: 'Sign out' }).click();
         await page.getByRole('button', { name: 'Sign in' }).waitFor();
@@ -94,14 +96,35 @@ export const scenarios: Scenario[] = [
       const labels = await page.locator('svg[data-chart="spectrum"] [data-labels] text').allTextContents();
       assert(labels.some((l) => l.startsWith('2mf')), `unipolar spectrum labels the 2mf group (labels: ${labels.join(' ')})`);
       await screenshot(page, 'study-editor');
-      // A second revision, then the history lists both.
+      await page.close();
+    },
+  },
+  {
+    name: 'an engineer duplicates a study, saves a revision, restores the first, and prints the report',
+    async run(context) {
+      const page = await newPage(context);
+      await signIn(page, context.baseUrl, 'engineer@kestrel.example');
+      await page.getByRole('link', { name: /Bench prototype/ }).first().click();
+      await page.getByRole('link', { name: 'Printable report' }).waitFor();
+      await page.getByRole('button', { name: 'Duplicate', exact: true }).click();
+      await page.getByRole('heading', { name: /\(copy\)$/ }).waitFor();
+      const id = page.url().split('/').pop();
+      assert(id && /^[0-9a-f-]{36}$/.test(id), 'the copy opens at its own URL');
+      context.state.studyId ??= id;
       const ma = page.getByLabel('Modulation index ma', { exact: true });
       await ma.fill('0.6');
       await ma.press('Enter');
       await page.getByRole('button', { name: 'Save revision' }).click();
       await page.getByText('Saved as revision 2').waitFor();
-      await page.getByRole('list', { name: 'Revisions' }).getByText('Revision 1').waitFor();
-      await page.goto(`${context.baseUrl}/studies/${context.state.studyId}/report`);
+      const history = page.getByRole('list', { name: 'Revisions' });
+      await history.getByText('Revision 1').waitFor();
+      await history.getByRole('button', { name: 'Restore' }).click();
+      await page.getByText('Revision 3 · sine-triangle').waitFor();
+      await history.getByText('restored from 1').waitFor();
+      const restoredMa = await page.getByLabel('Modulation index ma', { exact: true }).inputValue();
+      assert(restoredMa === '0.8', `restoring revision 1 brings its ma back (got ${restoredMa})`);
+      await screenshot(page, 'study-revisions');
+      await page.goto(`${context.baseUrl}/studies/${id}/report`);
       await page.getByText('Pulsewright study report').waitFor();
       await page.locator('svg[data-chart="spectrum"]').waitFor();
       await screenshot(page, 'study-report');

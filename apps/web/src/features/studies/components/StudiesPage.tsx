@@ -114,7 +114,7 @@ export function StudiesPage() {
                       <td className="py-1.5 text-xs">{formatDate(s.updatedAt)}</td>
                       <td className="py-1.5 text-right">
                         {canEdit ? (
-                          <Button variant="ghost" busy={duplicate.isPending && duplicate.variables?.id === s.id} onClick={() => duplicate.mutate({ id: s.id, name: `${s.name} (copy)`.slice(0, 120) })}>
+                          <Button variant="ghost" aria-label={`Duplicate ${s.name}`} busy={duplicate.isPending && duplicate.variables?.id === s.id} onClick={() => duplicate.mutate({ id: s.id, name: `${s.name} (copy)`.slice(0, 120) })}>
                             Duplicate
                           </Button>
                         ) : null}

@@ -1,5 +1,5 @@
 import { useCallback, useState } from 'react';
-import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
+import { Link, useLocation, useNavigate, useParams, useSearchParams } from 'react-router-dom';
 import { paths } from '../../../config/paths';
 import { errorMessage, fieldErrorOf } from '../../../lib/api';
 import { formatNumber, formatPercent } from '../../../lib/format';
@@ -26,6 +26,9 @@ export function StudyEditorPage() {
 function StudyEditor({ study }: { study: Study | undefined }) {
   const [params] = useSearchParams();
   const navigate = useNavigate();
+  const location = useLocation();
+  // The editor remounts at each new revision; the save's confirmation travels in the history state.
+  const savedRevision = (location.state as { savedRevision?: number } | null)?.savedRevision;
   const me = useMe();
   const projects = useProjects();
   const canEdit = roleAtLeast(me.data?.role, 'engineer');
@@ -53,9 +56,12 @@ function StudyEditor({ study }: { study: Study | undefined }) {
     const content = studyContentOf(draft);
     if (study) {
       const { projectId: _projectId, ...rest } = content;
-      update.mutate({ id: study.id, body: { ...rest, baseRevision: study.revision } }, { onSuccess: () => setDirty(false) });
+      update.mutate(
+        { id: study.id, body: { ...rest, baseRevision: study.revision } },
+        { onSuccess: (saved) => navigate(location.pathname, { replace: true, state: { savedRevision: saved.revision } }) },
+      );
     } else {
-      create.mutate(content, { onSuccess: (created) => navigate(paths.study.getHref(created.id), { replace: true }) });
+      create.mutate(content, { onSuccess: (created) => navigate(paths.study.getHref(created.id), { replace: true, state: { savedRevision: created.revision } }) });
     }
   };
 
@@ -103,7 +109,7 @@ function StudyEditor({ study }: { study: Study | undefined }) {
           ))}
         </ul>
       ) : null}
-      {update.isSuccess && !dirty ? <p role="status" className="mb-3 text-sm text-good">Saved as revision {update.data.revision}.</p> : null}
+      {savedRevision && savedRevision === study?.revision && !dirty ? <p role="status" className="mb-3 text-sm text-good">Saved as revision {savedRevision}.</p> : null}
 
       <div className="grid gap-5 lg:grid-cols-[340px_minmax(0,1fr)]">
         <div className="flex flex-col gap-4">
