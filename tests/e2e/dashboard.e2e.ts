@@ -168,6 +168,9 @@ export const scenarios: Scenario[] = [
       assert(value === '100', `upload progress at 100 % (got ${value})`);
       await page.getByTestId('capture-analysis').waitFor();
       await page.locator('svg[data-chart="spectrum"] rect[data-bar]').first().waitFor();
+      await page.getByLabel('Compare with study').selectOption({ index: 1 });
+      await page.getByRole('region', { name: 'Order by order' }).waitFor();
+      assert((await page.locator('svg[data-chart="spectrum"] g[data-series]').count()) === 2, 'capture and prediction overlaid');
       await screenshot(page, 'capture');
       await page.close();
     },

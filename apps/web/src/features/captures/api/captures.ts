@@ -72,3 +72,26 @@ export function useUploadCapture() {
   const client = useQueryClient();
   return useMutation({ mutationFn: uploadCapture, onSuccess: () => client.invalidateQueries({ queryKey: ['captures'] }) });
 }
+
+export type CaptureSpectrum = Schema<'CaptureSpectrum'>;
+export type CaptureComparison = Schema<'CaptureComparison'>;
+export type FftWindow = 'rectangular' | 'hann' | 'flat-top';
+
+export async function getCaptureSpectrum(id: string, window: FftWindow, maxOrder = 50): Promise<CaptureSpectrum> {
+  return unwrap(await api.POST('/api/v1/captures/{id}/spectrum', { params: { path: { id } }, body: { window, maxOrder } }));
+}
+/** The windowed FFT the service computes; a read, so a query (keyed by the window). */
+export const captureSpectrumQueryOptions = (id: string, window: FftWindow, maxOrder = 50) =>
+  queryOptions({ queryKey: ['captures', 'spectrum', id, window, maxOrder], queryFn: () => getCaptureSpectrum(id, window, maxOrder), staleTime: Infinity });
+export function useCaptureSpectrum(id: string, window: FftWindow) {
+  return useQuery(captureSpectrumQueryOptions(id, window));
+}
+
+export async function getCaptureComparison(id: string, studyId: string, window: FftWindow, maxOrder = 50): Promise<CaptureComparison> {
+  return unwrap(await api.POST('/api/v1/captures/{id}/comparison', { params: { path: { id } }, body: { studyId, window, maxOrder } }));
+}
+export const captureComparisonQueryOptions = (id: string, studyId: string, window: FftWindow, maxOrder = 50) =>
+  queryOptions({ queryKey: ['captures', 'comparison', id, studyId, window, maxOrder], queryFn: () => getCaptureComparison(id, studyId, window, maxOrder) });
+export function useCaptureComparison(id: string, studyId: string | null, window: FftWindow) {
+  return useQuery({ ...captureComparisonQueryOptions(id, studyId ?? '', window), enabled: Boolean(studyId) });
+}

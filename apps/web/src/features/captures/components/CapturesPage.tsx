@@ -1,5 +1,5 @@
-import { fftSpectrum, labelHarmonics, type FftWindowName } from '@pulsewright/modulation';
-import { useMemo, useRef, useState, type FormEvent } from 'react';
+import { labelHarmonics } from '@pulsewright/modulation';
+import { useRef, useState, type FormEvent } from 'react';
 import { SpectrumChart, type SpectrumSeries } from '../../../components/charts/SpectrumChart';
 import { Button } from '../../../components/ui/Button';
 import { SelectField, TextField } from '../../../components/ui/Field';
@@ -8,8 +8,8 @@ import { ErrorState, Loading, QueryView } from '../../../components/ui/QueryStat
 import { errorMessage, fieldErrorOf } from '../../../lib/api';
 import { formatDate, formatNumber, formatPercent } from '../../../lib/format';
 import { roleAtLeast, useMe } from '../../auth/api/auth';
-import { useCapture, useCaptures, useUploadCapture, type CaptureWithSeries } from '../api/captures';
-import { useCaptureStudies, useStudyPrediction } from '../api/prediction';
+import { useCapture, useCaptureComparison, useCaptureSpectrum, useCaptures, useUploadCapture, type CaptureComparison, type CaptureWithSeries, type FftWindow } from '../api/captures';
+import { useCaptureStudies } from '../api/prediction';
 
 function UploadForm({ onUploaded }: { onUploaded: (id: string) => void }) {
   const [file, setFile] = useState<File | null>(null);
@@ -101,42 +101,68 @@ function CaptureDetail({ id }: { id: string }) {
 }
 
 function CaptureAnalysis({ capture }: { capture: CaptureWithSeries }) {
-  const [windowName, setWindowName] = useState<FftWindowName>('hann');
+  const [windowName, setWindowName] = useState<FftWindow>('hann');
   const [studyId, setStudyId] = useState('');
   const studies = useCaptureStudies();
   const study = studies.data?.find((s) => s.id === studyId);
-  const prediction = useStudyPrediction(studyId || null, 50);
-  const analysis = useMemo(() => {
-    try {
-      const frequency = study?.load?.frequency;
-      return { result: fftSpectrum(capture.series.voltage, capture.sampleRate, { window: windowName, maxOrder: 50, ...(frequency ? { fundamentalFrequency: frequency } : {}) }), error: null };
-    } catch (error) {
-      return { result: null, error };
-    }
-  }, [capture, windowName, study]);
-  const mf = Number((study?.modulation as { mf?: unknown } | undefined)?.mf) || 1;
+  const spectrum = useCaptureSpectrum(capture.id, windowName);
+  const comparison = useCaptureComparison(capture.id, studyId || null, windowName);
+  const mf = Number((study?.modulation as { mf?: unknown } | undefined)?.mf) || 0;
+  const label = (bars: { order: number; amplitude: number }[]) => (mf ? labelHarmonics(bars.map((b) => ({ ...b, phase: 0 })), mf) : bars);
   const series: SpectrumSeries[] = [];
-  if (analysis.result) series.push({ name: `Capture (${windowName} window)`, color: 'var(--color-trace-current)', harmonics: study ? labelHarmonics(analysis.result.harmonics, mf) : analysis.result.harmonics });
-  if (prediction.data && study) series.push({ name: `Prediction: ${study.name}`, color: 'var(--color-ink)', harmonics: labelHarmonics(prediction.data.harmonics.filter((h) => h.order <= 50), mf) });
+  if (comparison.data) {
+    series.push({ name: `Capture (${windowName} window)`, color: 'var(--color-trace-current)', harmonics: label(comparison.data.orders.map((o) => ({ order: o.order, amplitude: o.measured }))) });
+    series.push({ name: `Prediction: ${study?.name ?? 'study'} (revision ${comparison.data.studyRevision})`, color: 'var(--color-ink)', harmonics: label(comparison.data.orders.map((o) => ({ order: o.order, amplitude: o.predicted }))) });
+  } else if (spectrum.data) {
+    series.push({ name: `Capture (${windowName} window)`, color: 'var(--color-trace-current)', harmonics: spectrum.data.harmonics });
+  }
 
   return (
     <div className="flex flex-col gap-4" data-testid="capture-analysis">
       <Panel title={capture.name}>
         <p className="text-sm">{capture.fileName} · {capture.rows} samples at {formatNumber(capture.sampleRate)} S/s ({formatNumber(capture.duration * 1e3)} ms) · columns {capture.columns.join(', ')}</p>
         <div className="mt-3 grid gap-3 sm:grid-cols-2">
-          <SelectField label="FFT window" value={windowName} onChange={(e) => setWindowName(e.target.value as FftWindowName)} options={[{ value: 'hann', label: 'Hann' }, { value: 'flat-top', label: 'Flat-top' }, { value: 'rectangular', label: 'Rectangular' }]} />
+          <SelectField label="FFT window" value={windowName} onChange={(e) => setWindowName(e.target.value as FftWindow)} options={[{ value: 'hann', label: 'Hann' }, { value: 'flat-top', label: 'Flat-top' }, { value: 'rectangular', label: 'Rectangular' }]} />
           <SelectField label="Compare with study" value={studyId} onChange={(e) => setStudyId(e.target.value)} options={[{ value: '', label: 'No study' }, ...(studies.data ?? []).map((s) => ({ value: s.id, label: s.name }))]} />
         </div>
-        {analysis.result ? (
+        {spectrum.isPending ? <Loading label="Analysing the capture…" /> : null}
+        {spectrum.isError ? <ErrorState error={spectrum.error} onRetry={() => spectrum.refetch()} /> : null}
+        {spectrum.data ? (
           <p className="mt-2 text-sm">
-            Fundamental {formatNumber(analysis.result.fundamentalFrequency)} Hz{analysis.result.fundamentalEstimated ? ' (estimated from the strongest bin)' : ' (from the study)'} · capture THD {formatPercent(analysis.result.thd)} to order 50
-            {prediction.data ? ` · predicted THD ${formatPercent(prediction.data.thd)}` : ''}
+            Fundamental {formatNumber(spectrum.data.fundamentalFrequency)} Hz{spectrum.data.fundamentalEstimated ? ' (estimated from the strongest bin)' : ''} · FFT of {spectrum.data.fftSize} points, coherent gain {formatNumber(spectrum.data.coherentGain)} · capture THD {formatPercent(spectrum.data.thd)} to order 50
           </p>
         ) : null}
-        {analysis.error ? <ErrorState error={analysis.error} /> : null}
-        {prediction.isError ? <ErrorState error={prediction.error} /> : null}
+        {comparison.isPending && studyId ? <Loading label="Comparing with the prediction…" /> : null}
+        {comparison.isError ? <ErrorState error={comparison.error} onRetry={() => comparison.refetch()} /> : null}
       </Panel>
-      {series.length ? <SpectrumChart series={series} title="Capture against prediction" fileName="capture-spectrum" /> : null}
+      {series.length ? <SpectrumChart series={series} title={comparison.data ? 'Capture against prediction' : 'Capture spectrum'} fileName="capture-spectrum" /> : null}
+      {comparison.data ? <ComparisonTable comparison={comparison.data} /> : null}
     </div>
+  );
+}
+
+function ComparisonTable({ comparison }: { comparison: CaptureComparison }) {
+  const rows = comparison.orders.filter((o) => o.order === 1 || o.predicted > 1e-3 * (comparison.orders[0]?.predicted ?? 1) || o.measured > 1e-3 * (comparison.orders[0]?.measured ?? 1));
+  return (
+    <Panel title="Order by order">
+      <div className="max-h-72 overflow-auto">
+        <table className="num w-full text-sm">
+          <thead className="sticky top-0 bg-panel text-left text-xs text-ink-soft">
+            <tr><th scope="col">Order</th><th scope="col">Hz</th><th scope="col">Measured (V)</th><th scope="col">Predicted (V)</th><th scope="col">Measured / predicted</th></tr>
+          </thead>
+          <tbody>
+            {rows.map((o) => (
+              <tr key={o.order} className="border-t border-rule/60">
+                <td>{o.order}</td>
+                <td>{formatNumber(o.frequency)}</td>
+                <td>{formatNumber(o.measured)}</td>
+                <td>{formatNumber(o.predicted)}</td>
+                <td>{o.ratio === null || o.predicted < 1e-6 * (comparison.orders[0]?.predicted ?? 1) ? '—' : formatNumber(o.ratio)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+    </Panel>
   );
 }
