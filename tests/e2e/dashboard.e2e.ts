@@ -241,6 +241,11 @@ export const scenarios: Scenario[] = [
       await page.locator('svg[data-chart="line"] circle').first().waitFor({ timeout: 30_000 });
       await page.locator('svg[data-chart="line"] circle').nth(5).click();
       await page.getByText('Picked point').waitFor();
+      // The picked pattern nulls the orders asked (Patel and Hoft, 1973): its 5th and 7th bars are empty.
+      for (const order of [5, 7]) {
+        const height = Number(await page.locator(`svg[data-chart="spectrum"] rect[data-order="${order}"]`).getAttribute('height'));
+        assert(height < 0.01, `order ${order} is eliminated (bar height ${height})`);
+      }
       await screenshot(page, 'elimination');
       await page.getByRole('link', { name: 'Space vector' }).click();
       await page.locator('svg[data-chart="hexagon"]').waitFor();

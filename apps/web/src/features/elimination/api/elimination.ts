@@ -1,41 +1,57 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { harmonics, sheWaveform, labelHarmonics, thd, type SheSweepOptions, type SheSweepResult } from '@pulsewright/modulation';
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { harmonics, labelHarmonics, sheWaveform, thd } from '@pulsewright/modulation';
 import type { Schema } from '@pulsewright/client';
 import { api, unwrap } from '../../../lib/api';
 
-export type SheSweepInput = Omit<SheSweepOptions, 'onProgress'>;
+export type SheSweepRequest = Schema<'SheSweepRequest'>;
+export type Job = Schema<'Job'>;
 
-export interface SweepState {
-  running: boolean;
-  progress: number;
-  result: SheSweepResult | null;
-  error: { message: string; field?: string } | null;
+/** A point of a solution branch: peak volts and first-quarter angles (radians). */
+export interface ShePoint {
+  fundamental: number;
+  angles: number[];
+  converged: boolean;
 }
 
-/** Runs sheSweep in a Web Worker (the solver can take seconds) with progress. */
-export function useSheSweep() {
-  const worker = useRef<Worker | null>(null);
-  const [state, setState] = useState<SweepState>({ running: false, progress: 0, result: null, error: null });
-  useEffect(() => () => worker.current?.terminate(), []);
-  const run = useCallback((input: SheSweepInput) => {
-    worker.current?.terminate();
-    const next = new Worker(new URL('./sheWorker.ts', import.meta.url), { type: 'module' });
-    worker.current = next;
-    setState({ running: true, progress: 0, result: null, error: null });
-    next.onmessage = (event: MessageEvent<{ type: string; fraction?: number; result?: SheSweepResult; message?: string; field?: string }>) => {
-      const data = event.data;
-      if (data.type === 'progress') setState((s) => ({ ...s, progress: data.fraction ?? s.progress }));
-      else if (data.type === 'done') setState({ running: false, progress: 1, result: data.result ?? null, error: null });
-      else setState({ running: false, progress: 0, result: null, error: { message: data.message ?? 'The sweep failed.', ...(data.field ? { field: data.field } : {}) } });
-    };
-    next.postMessage(input);
-  }, []);
-  return { ...state, run };
+export interface SheBranchView {
+  points: ShePoint[];
 }
 
-/** The spectrum of one solved point (quarter-wave angles), for the preview of a picked point. */
-export function pointSpectrum(kind: SheSweepInput['kind'], vdc: number, angles: number[], maxOrder = 49) {
+/**
+ * The branches of a finished SHE job. The service answers one followed branch
+ * (`{ points, solvedFraction }`); the library's multi-branch form (`{ branches }`) is read too.
+ */
+export function branchesOf(result: unknown): { branches: SheBranchView[]; solvedFraction: number | null; message: string | null } {
+  const r = result as { points?: ShePoint[]; branches?: SheBranchView[]; solvedFraction?: number; message?: string } | null;
+  if (!r) return { branches: [], solvedFraction: null, message: null };
+  const branches = Array.isArray(r.branches) ? r.branches : Array.isArray(r.points) ? [{ points: r.points }] : [];
+  return { branches, solvedFraction: typeof r.solvedFraction === 'number' ? r.solvedFraction : null, message: typeof r.message === 'string' ? r.message : null };
+}
+
+export async function createSheSweep(body: SheSweepRequest): Promise<Job> {
+  return unwrap(await api.POST('/api/v1/jobs/she-sweeps', { body }));
+}
+export function useCreateSheSweep() {
+  const client = useQueryClient();
+  return useMutation({ mutationFn: createSheSweep, onSuccess: () => client.invalidateQueries({ queryKey: ['jobs', 'list'] }) });
+}
+
+export async function getSheJob(id: string): Promise<Job> {
+  return unwrap(await api.GET('/api/v1/jobs/{id}', { params: { path: { id } } }));
+}
+/** Polls the job every 400 ms until it has finished (same key as the sweeps screen's job query). */
+export const sheJobQueryOptions = (id: string) =>
+  queryOptions({
+    queryKey: ['jobs', 'one', id],
+    queryFn: () => getSheJob(id),
+    refetchInterval: (query) => (query.state.data?.status === 'succeeded' || query.state.data?.status === 'failed' ? false : 400),
+  });
+export function useSheJob(id: string | null) {
+  return useQuery({ ...sheJobQueryOptions(id ?? ''), enabled: Boolean(id) });
+}
+
+/** The spectrum of one solved point (quarter-wave angles) by the library, for the picked point. */
+export function pointSpectrum(kind: 'bipolar' | 'staircase', vdc: number, angles: number[], maxOrder = 49) {
   const waveform = sheWaveform(angles, { kind, vdc });
   const spectrum = harmonics(waveform, maxOrder);
   return { spectrum: labelHarmonics(spectrum, 1), thd: thd(spectrum) };

@@ -8,10 +8,10 @@ import { SelectField, TextField } from '../../../components/ui/Field';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState } from '../../../components/ui/QueryState';
 import { paths } from '../../../config/paths';
-import { errorMessage } from '../../../lib/api';
+import { errorMessage, fieldErrorOf } from '../../../lib/api';
 import { formatNumber, formatPercent } from '../../../lib/format';
 import { roleAtLeast, useMe } from '../../auth/api/auth';
-import { getEliminationProjects, pointSpectrum, useSaveSheStudy, useSheSweep } from '../api/elimination';
+import { branchesOf, getEliminationProjects, pointSpectrum, useCreateSheSweep, useSaveSheStudy, useSheJob } from '../api/elimination';
 
 const COLOURS = ['#12263a', '#d9822b', '#2a8c82', '#8e3b6e', '#c2462e', '#5b6fa8', '#7a6a2f', '#3d8a5a'];
 
@@ -20,7 +20,11 @@ export function EliminationPage() {
   const me = useMe();
   const canSave = roleAtLeast(me.data?.role, 'engineer');
   const [form, setForm] = useState({ kind: 'bipolar' as 'bipolar' | 'staircase', vdc: 300, eliminate: '5, 7', from: 0.3, to: 0.95, points: 40 });
-  const sweep = useSheSweep();
+  const start = useCreateSheSweep();
+  const [jobId, setJobId] = useState<string | null>(null);
+  const job = useSheJob(jobId);
+  const running = start.isPending || job.data?.status === 'queued' || job.data?.status === 'running';
+  const outcome = job.data?.status === 'succeeded' ? branchesOf(job.data.result) : null;
   const [picked, setPicked] = useState<{ branch: number; point: number; series: number } | null>(null);
   const save = useSaveSheStudy();
   const projects = useQuery({ queryKey: ['projects', ''], queryFn: () => getEliminationProjects() });
@@ -33,20 +37,23 @@ export function EliminationPage() {
     event.preventDefault();
     setPicked(null);
     // fundamentals are given as a fraction of the largest (4·vdc/π per level, square-wave fundamental)
-    sweep.run({ kind: form.kind, vdc: form.vdc, count, eliminate: orders, fundamentals: { from: ((form.from * 4) / Math.PI) * scale, to: ((form.to * 4) / Math.PI) * scale, points: form.points } });
+    start.mutate(
+      { kind: form.kind, vdc: form.vdc, count, eliminate: orders, fundamental: { from: ((form.from * 4) / Math.PI) * scale, to: ((form.to * 4) / Math.PI) * scale, points: form.points } },
+      { onSuccess: (created) => setJobId(created.id) },
+    );
   };
 
   // One series per (branch, angle); x the fundamental, y the angle in degrees.
   const series: LineSeries[] = [];
   const seriesIndex: { branch: number }[] = [];
-  sweep.result?.branches.forEach((branch, b) => {
+  outcome?.branches.forEach((branch, b) => {
     const converged = branch.points.filter((p) => p.converged);
     for (let k = 0; k < count; k++) {
       series.push({ name: `branch ${b + 1}, α${k + 1}`, color: COLOURS[b % COLOURS.length] ?? '#12263a', x: converged.map((p) => p.fundamental), y: converged.map((p) => ((p.angles[k] ?? Number.NaN) * 180) / Math.PI), dashed: k % 2 === 1 });
       seriesIndex.push({ branch: b });
     }
   });
-  const pickedPoint = picked ? sweep.result?.branches[picked.branch]?.points.filter((p) => p.converged)[picked.point] : undefined;
+  const pickedPoint = picked ? outcome?.branches[picked.branch]?.points.filter((p) => p.converged)[picked.point] : undefined;
   const preview = pickedPoint ? pointSpectrum(form.kind, form.vdc, pickedPoint.angles) : null;
 
   const saveStudy = () => {
@@ -70,32 +77,40 @@ export function EliminationPage() {
 
   return (
     <div>
-      <PageHeader title="Harmonic elimination" subtitle="Quarter-wave symmetric patterns whose first-quarter angles null chosen odd harmonics while setting the fundamental; each solution branch is followed across the fundamental (solved in this browser by the library)." />
+      <PageHeader title="Harmonic elimination" subtitle="Quarter-wave symmetric patterns whose first-quarter angles null chosen odd harmonics while setting the fundamental; the service follows a solution branch across the fundamental as a job." />
       <div className="grid gap-5 lg:grid-cols-[320px_minmax(0,1fr)]">
         <Panel title="Pattern">
           <form onSubmit={submit} className="flex flex-col gap-3" noValidate>
             <SelectField label="Pattern" value={form.kind} onChange={(e) => setForm({ ...form, kind: e.target.value as 'bipolar' | 'staircase' })} options={[{ value: 'bipolar', label: 'Two-level (bipolar)' }, { value: 'staircase', label: 'Multilevel staircase' }]} />
-            <TextField label="DC level" unit="V" type="number" value={form.vdc} onChange={(e) => setForm({ ...form, vdc: Number(e.target.value) })} error={sweep.error?.field === 'vdc' ? sweep.error.message : undefined} />
-            <TextField label="Orders to eliminate" value={form.eliminate} onChange={(e) => setForm({ ...form, eliminate: e.target.value })} hint={`odd orders ≥ 3; ${count} angles per quarter`} error={sweep.error?.field?.startsWith('eliminate') ? sweep.error.message : undefined} />
+            <TextField label="DC level" unit="V" type="number" value={form.vdc} onChange={(e) => setForm({ ...form, vdc: Number(e.target.value) })} error={fieldErrorOf(start.error, 'vdc')} />
+            <TextField label="Orders to eliminate" value={form.eliminate} onChange={(e) => setForm({ ...form, eliminate: e.target.value })} hint={`odd orders ≥ 3; ${count} angles per quarter`} error={fieldErrorOf(start.error, 'eliminate') ?? fieldErrorOf(start.error, 'count')} />
             <div className="grid grid-cols-2 gap-3">
               <TextField label="Fundamental from" unit="of square wave" type="number" step={0.05} value={form.from} onChange={(e) => setForm({ ...form, from: Number(e.target.value) })} />
               <TextField label="to" unit="of square wave" type="number" step={0.05} value={form.to} onChange={(e) => setForm({ ...form, to: Number(e.target.value) })} />
             </div>
-            <TextField label="Points" type="number" value={form.points} onChange={(e) => setForm({ ...form, points: Number(e.target.value) })} hint="2 to 400" error={sweep.error?.field?.startsWith('fundamentals') ? sweep.error.message : undefined} />
-            <Button type="submit" busy={sweep.running}>Find the branches</Button>
+            <TextField label="Points" type="number" value={form.points} onChange={(e) => setForm({ ...form, points: Number(e.target.value) })} hint="2 to 400" error={fieldErrorOf(start.error, 'points') ?? fieldErrorOf(start.error, 'fundamental.points')} />
+            <Button type="submit" busy={running}>Find the branches</Button>
           </form>
-          {sweep.running ? (
-            <div role="progressbar" aria-label="Solving" aria-valuenow={Math.round(sweep.progress * 100)} aria-valuemin={0} aria-valuemax={100} className="mt-3 h-3 overflow-hidden rounded-full bg-rule">
-              <div className="h-full bg-signal" style={{ width: `${sweep.progress * 100}%` }} />
+          {job.data ? (
+            <div className="mt-3">
+              <div className="mb-1 flex justify-between text-xs"><span>Job {job.data.status}</span><span className="num">{Math.round(job.data.progress * 100)} %</span></div>
+              <div role="progressbar" aria-label="Solving" aria-valuenow={Math.round(job.data.progress * 100)} aria-valuemin={0} aria-valuemax={100} className="h-3 overflow-hidden rounded-full bg-rule">
+                <div className="h-full bg-signal" style={{ width: `${job.data.progress * 100}%` }} />
+              </div>
             </div>
           ) : null}
         </Panel>
         <div className="flex min-w-0 flex-col gap-4">
-          {sweep.error && !sweep.error.field ? <ErrorState error={new Error(sweep.error.message)} /> : null}
-          {sweep.error?.field ? <ErrorState error={new Error(sweep.error.message)} /> : null}
-          {sweep.result ? (
+          {start.isError ? <ErrorState error={start.error} /> : null}
+          {job.isError ? <ErrorState error={job.error} /> : null}
+          {job.data?.error ? <ErrorState error={new Error(job.data.error)} /> : null}
+          {outcome ? (
             <>
-              <Panel><p className="text-sm">{sweep.result.message}</p></Panel>
+              <Panel>
+                <p className="text-sm" data-testid="she-summary">
+                  {outcome.message ?? `${outcome.branches.length} branch(es) followed; solved at ${formatPercent(outcome.solvedFraction ?? 0, 0)} of the fundamentals asked.`}
+                </p>
+              </Panel>
               <LineChart
                 title="Switching angles against the fundamental"
                 fileName="she-branches"
