@@ -29,7 +29,7 @@ export async function testApp(overrides: Partial<AppConfig> = {}, dir?: string):
     databaseUrl: `sqlite:${file}`,
     demoPassword: DEMO_PASSWORD,
     bcryptRounds: 4,
-    logErrors: false,
+    logErrors: process.env.LOG_ERRORS === 'true',
     loginRateLimit: 1000,
     keyRateLimit: 1000,
     webDist: path.join(folder, 'no-web'),

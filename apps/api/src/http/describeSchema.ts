@@ -9,23 +9,26 @@ export function schemaAt(
   root: JsonSchema | undefined,
   segments: readonly string[],
   value: unknown,
+  { keepChoices = false }: { keepChoices?: boolean } = {},
 ): JsonSchema | undefined {
+  let raw = resolveRef(document, root);
   let schema = flatten(document, root, value);
   let current = value;
   for (const segment of segments) {
     if (!schema) return undefined;
     const properties = schema.properties as Record<string, JsonSchema> | undefined;
     if (properties && segment in properties) {
-      schema = properties[segment];
+      raw = properties[segment];
     } else if (schema.items && /^\d+$/.test(segment)) {
-      schema = schema.items as JsonSchema;
+      raw = schema.items as JsonSchema;
     } else {
       return undefined;
     }
     current = (current as Record<string, unknown> | undefined)?.[segment];
-    schema = flatten(document, schema, current);
+    schema = flatten(document, raw, current);
   }
-  return schema;
+  // With keepChoices the oneOf itself is returned, to list its discriminator values.
+  return keepChoices ? resolveRef(document, raw) : schema;
 }
 
 function flatten(document: OpenApiDocument, input: JsonSchema | undefined, value: unknown): JsonSchema | undefined {

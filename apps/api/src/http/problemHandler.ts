@@ -121,11 +121,16 @@ function sentence(text: string): string {
 function validationItem(document: OpenApiDocument, req: Request, item: ValidatorItem): ProblemItem {
   const parts = (item.path ?? '').split('/').filter(Boolean);
   const location = parts[0] ?? '';
-  let segments = parts.slice(1);
+  const segments = parts.slice(1);
   const code = (item.errorCode ?? '').replace('.openapi.validation', '');
   if (code === 'discriminator') {
-    const tag = 'method';
-    segments = [...segments, tag];
+    const union = locate(document, req, location, segments, true).schema;
+    const tag = (union?.discriminator as { propertyName?: string } | undefined)?.propertyName ?? 'method';
+    const mapping = Object.keys(((union?.discriminator as { mapping?: object } | undefined)?.mapping ?? {}) as object);
+    const field = [...segments, tag].join('.');
+    const given = locate(document, req, location, [...segments, tag]).value;
+    const message = `${field} must be one of ${mapping.map((v) => JSON.stringify(v)).join(', ') || 'the documented values'}; got ${describeValue(given)}`;
+    return { path: field, message };
   }
   const field = segments.join('.') || location;
   const { schema, value } = locate(document, req, location, segments);
@@ -150,6 +155,7 @@ function locate(
   req: Request,
   location: string,
   segments: readonly string[],
+  keepChoices = false,
 ): { schema: JsonSchema | undefined; value: unknown } {
   const operation = operationOf(document, req);
   if (!operation) return { schema: undefined, value: undefined };
@@ -158,7 +164,7 @@ function locate(
     const root = content?.['application/json']?.schema ?? content?.['multipart/form-data']?.schema;
     let value: unknown = req.body;
     for (const segment of segments) value = (value as Record<string, unknown> | undefined)?.[segment];
-    return { schema: schemaAt(document, root, segments, req.body), value };
+    return { schema: schemaAt(document, root, segments, req.body, { keepChoices }), value };
   }
   const name = segments[0];
   const where = location === 'params' ? 'path' : location;
