@@ -75,11 +75,14 @@ export const scenarios: Scenario[] = [
     async run(context) {
       const page = await newPage(context);
       await signIn(page, context.baseUrl, 'engineer@kestrel.example');
-      await page.getByLabel('Project name').fill('Pump inverter 3 kVA (e2e)');
+      const projectName = `Pump inverter e2e ${Date.now()}`;
+      await page.getByLabel('Project name').fill(projectName);
       await page.getByRole('button', { name: 'Create project' }).click();
-      await page.getByRole('button', { name: /Pump inverter 3 kVA \(e2e\)/ }).waitFor();
+      await page.getByRole('button', { name: `${projectName} (0)`, pressed: true }).waitFor();
       await page.getByRole('link', { name: 'New study' }).click();
       await page.getByLabel('Name', { exact: true }).fill('E2E unipolar mf 31');
+      const chosen = await page.getByLabel('Project').evaluate((el) => (el as unknown as { selectedOptions: { text: string }[] }).selectedOptions[0]?.text);
+      assert(chosen === projectName, `the new study goes into the project just made (got ${chosen})`);
       await page.getByLabel('Bridge scheme').selectOption('unipolar');
       const mf = page.getByLabel('Frequency ratio mf', { exact: true });
       await mf.fill('31');
@@ -104,7 +107,7 @@ export const scenarios: Scenario[] = [
     async run(context) {
       const page = await newPage(context);
       await signIn(page, context.baseUrl, 'engineer@kestrel.example');
-      await page.getByRole('link', { name: /Bench prototype/ }).first().click();
+      await page.getByRole('link', { name: 'Bench prototype (42 × 50 Hz carrier)', exact: true }).click();
       await page.getByRole('link', { name: 'Printable report' }).waitFor();
       await page.getByRole('button', { name: 'Duplicate', exact: true }).click();
       await page.getByRole('heading', { name: /\(copy\)$/ }).waitFor();
@@ -116,6 +119,12 @@ export const scenarios: Scenario[] = [
       await ma.press('Enter');
       await page.getByRole('button', { name: 'Save revision' }).click();
       await page.getByText('Saved as revision 2').waitFor();
+      await page.goto(`${context.baseUrl}/studies/${id}/report`);
+      await page.getByText('Pulsewright study report').waitFor();
+      await page.locator('svg[data-chart="spectrum"]').waitFor();
+      await page.getByText(/Revision 2 by engineer@kestrel.example/).waitFor();
+      await screenshot(page, 'study-report');
+      await page.goBack();
       const history = page.getByRole('list', { name: 'Revisions' });
       await history.getByText('Revision 1').waitFor();
       await history.getByRole('button', { name: 'Restore' }).click();
@@ -124,10 +133,6 @@ export const scenarios: Scenario[] = [
       const restoredMa = await page.getByLabel('Modulation index ma', { exact: true }).inputValue();
       assert(restoredMa === '0.8', `restoring revision 1 brings its ma back (got ${restoredMa})`);
       await screenshot(page, 'study-revisions');
-      await page.goto(`${context.baseUrl}/studies/${id}/report`);
-      await page.getByText('Pulsewright study report').waitFor();
-      await page.locator('svg[data-chart="spectrum"]').waitFor();
-      await screenshot(page, 'study-report');
       await page.close();
     },
   },
@@ -181,15 +186,16 @@ export const scenarios: Scenario[] = [
       const page = await newPage(context);
       await signIn(page, context.baseUrl, 'engineer@kestrel.example');
       await page.getByRole('link', { name: 'Team' }).click();
-      await page.getByLabel('Key name').fill('e2e build server');
+      const keyName = `e2e build server ${Date.now()}`;
+      await page.getByLabel('Key name').fill(keyName);
       await page.getByRole('button', { name: 'Create key' }).click();
       const key = (await page.getByTestId('new-key').textContent())?.trim() ?? '';
       assert(key.length > 20, 'the new key is shown');
       const before = await fetch(`${context.baseUrl}/api/v1/me`, { headers: { Authorization: `Bearer ${key}` } });
       assert(before.status === 200, `the key signs a request in (got ${before.status})`);
       await screenshot(page, 'api-key');
-      await page.getByRole('button', { name: 'Revoke e2e build server' }).click();
-      await page.locator('tr[data-key-name="e2e build server"]').getByText(/revoked/).waitFor();
+      await page.getByRole('button', { name: `Revoke ${keyName}` }).click();
+      await page.locator(`tr[data-key-name="${keyName}"]`).getByText(/revoked/).waitFor();
       const after = await fetch(`${context.baseUrl}/api/v1/me`, { headers: { Authorization: `Bearer ${key}` } });
       assert(after.status === 401, `a revoked key is refused (got ${after.status})`);
       await page.close();

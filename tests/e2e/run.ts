@@ -7,6 +7,7 @@
 import { readdirSync } from 'node:fs';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
+import type { Page } from 'playwright-core';
 import type { Scenario, Context } from './dashboard.e2e.js';
 import { launchBrowser, repoRoot, screenshot, startService, type Service } from './harness.js';
 
@@ -36,9 +37,11 @@ try {
         console.log(`  ✓ ${scenario.name} (${Date.now() - t0} ms)`);
       } catch (error) {
         failures++;
-        if (context.lastPage && !context.lastPage.isClosed()) {
-          await screenshot(context.lastPage, `failed-${failures}`).catch(() => undefined);
-          await context.lastPage.close().catch(() => undefined);
+        // A cast: the compiler keeps the narrowing from before the scenario ran.
+        const last = context.lastPage as Page | undefined;
+        if (last && !last.isClosed()) {
+          await screenshot(last, `failed-${failures}`).catch(() => undefined);
+          await last.close().catch(() => undefined);
         }
         console.log(`  ✗ ${scenario.name}\n    ${error instanceof Error ? error.message.split('\n').join('\n    ') : String(error)}`);
       }

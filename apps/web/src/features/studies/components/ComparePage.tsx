@@ -16,10 +16,13 @@ export function ComparePage() {
   const all = useStudies();
   const studies = useQueries({ queries: ids.map((id) => studyQueryOptions(id)) });
   const spectra = useQueries({ queries: ids.map((id) => studySpectrumQueryOptions(id, 150)) });
-  const toggle = (id: string) => {
-    const next = ids.includes(id) ? ids.filter((x) => x !== id) : [...ids, id];
-    setParams(next.length ? { ids: next.join(',') } : {});
-  };
+  // Functional update: two quick clicks must both count, whatever the render in between.
+  const toggle = (id: string) =>
+    setParams((previous) => {
+      const current = (previous.get('ids') ?? '').split(',').filter(Boolean);
+      const next = current.includes(id) ? current.filter((x) => x !== id) : [...current, id];
+      return new URLSearchParams(next.length ? { ids: next.join(',') } : {});
+    });
 
   const pending = [...studies, ...spectra].some((q) => q.isPending);
   const failed = [...studies, ...spectra].find((q) => q.isError);
