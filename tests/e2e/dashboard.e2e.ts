@@ -91,6 +91,18 @@ export const scenarios: Scenario[] = [
       await bars.first().waitFor();
       assert((await bars.count()) > 50, 'the live spectrum draws one bar per harmonic');
       await screenshot(page, 'study-new');
+      // The live preview's cost at mf = 101, as the editor measures it in this browser.
+      await mf.fill('101');
+      await mf.press('Enter');
+      await page.getByText('Spectrum to order 323').waitFor();
+      const timing = (await page.getByTestId('preview-time').textContent()) ?? '';
+      const ms = Number(/([\d.]+) ms/.exec(timing)?.[1]);
+      console.log(`    live preview at mf = 101 in chromium: ${ms} ms`);
+      // Goal one 16 ms frame; the check leaves room for a loaded CI machine and catches gross regressions.
+      assert(Number.isFinite(ms) && ms < 100, `preview at mf = 101 takes ${ms} ms`);
+      await mf.fill('31');
+      await mf.press('Enter');
+      await page.getByText('Spectrum to order 113').waitFor();
       await page.getByRole('button', { name: 'Create study' }).click();
       await page.waitForURL(/\/studies\/[0-9a-f-]{36}$/);
       context.state.studyId = page.url().split('/').pop();

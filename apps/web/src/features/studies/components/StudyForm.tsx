@@ -69,6 +69,11 @@ export function StudyForm({ draft, onChange, readOnly, projects, saveError, prev
             ]}
           />
         ) : null}
+        {draft.method === 'space-vector' ? (
+          <p className="rounded border border-signal bg-signal-soft px-2 py-1 text-xs" role="note">
+            The service stores sine-triangle and three-phase carrier studies; a space-vector study previews here, and saving it shows the service&apos;s answer.
+          </p>
+        ) : null}
         {isCarrier ? (
           <SelectField
             label="Sampling"
