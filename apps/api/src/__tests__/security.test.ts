@@ -125,7 +125,7 @@ describe('sign-in, keys and roles', () => {
     const admin = await signIn(t.app, DEMO.admin);
     const events = await request(t.app).get('/api/v1/audit-events').set(bearer(admin)).query({ limit: 200 });
     const actions = new Set(events.body.map((e: { action: string }) => e.action));
-    for (const action of ['auth.login', 'api-key.create', 'api-key.revoke', 'member.role-change', 'invitation.accept', 'member.remove']) {
+    for (const action of ['auth.login', 'auth.login-failed', 'api-key.create', 'api-key.revoke', 'member.role-change', 'invitation.accept', 'member.remove']) {
       expect(actions.has(action), action).toBe(true);
     }
   });

@@ -36,7 +36,15 @@ export class AuthService {
     const user = await this.models.User.findOne({ where: { email: email.toLowerCase() } });
     const ok = await bcrypt.compare(password, user?.passwordHash ?? this.dummyHash);
     if (!user || !user.passwordHash || !ok) {
-      await this.audit.record(null, 'auth.login-failed', 'user', user?.id ?? null, { email: email.toLowerCase() });
+      // Filed under the account's team when the address is known, so its admins see attempts.
+      const known = user ? await this.models.Membership.findOne({ where: { userId: user.id }, order: [['createdAt', 'ASC']] }) : null;
+      await this.audit.record(
+        { userId: null, email: null, teamId: known?.teamId ?? null },
+        'auth.login-failed',
+        'user',
+        user?.id ?? null,
+        { email: email.toLowerCase() },
+      );
       throw unauthenticated('The e-mail address or the password is wrong.');
     }
     const membership = await this.models.Membership.findOne({ where: { userId: user.id }, order: [['createdAt', 'ASC']] });
