@@ -246,7 +246,13 @@ export const scenarios: Scenario[] = [
     async run(context) {
       const page = await newPage(context);
       await signIn(page, context.baseUrl, 'engineer@kestrel.example');
-      await page.getByRole('link', { name: 'Compare' }).click();
+      // A three-phase demo study: line-to-line output, star-load phase current.
+      await page.getByRole('link', { name: 'Centred space vector (min-max), 8 kHz', exact: true }).click();
+      await page.locator('svg[data-chart="spectrum"] rect[data-bar]').first().waitFor();
+      await page.getByText('Line-to-line a−b').first().waitFor();
+      await page.getByText(/Saved revision on the server: THD/).waitFor();
+      await screenshot(page, 'study-three-phase');
+      await page.getByRole('link', { name: 'Compare', exact: true }).first().click();
       await page.getByRole('heading', { name: 'Compare studies' }).waitFor();
       const boxes = page.getByRole('region', { name: 'Studies' }).getByRole('checkbox');
       await boxes.first().waitFor();

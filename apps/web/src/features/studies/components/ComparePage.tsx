@@ -62,7 +62,7 @@ export function ComparePage() {
           {series.length ? (
             <>
               <Panel title="Summary">
-                <table className="w-full text-sm">
+                <table className="w-full text-sm [&_td]:px-2 [&_th]:px-2">
                   <thead className="text-left text-xs text-ink-soft uppercase">
                     <tr>
                       <th scope="col">Study</th>

@@ -76,7 +76,7 @@ export function StudiesPage() {
           </div>
           <QueryView query={studies} empty={q ? `No study matches “${q}”.` : 'No studies here yet. Create one to start.'} loadingLabel="Loading studies…">
             {(list) => (
-              <table className="w-full text-sm">
+              <table className="w-full text-sm [&_td]:px-2 [&_th]:px-2">
                 <thead className="text-left text-xs text-ink-soft uppercase">
                   <tr>
                     <th scope="col" className="w-8 py-1"><span className="sr-only">Select</span></th>

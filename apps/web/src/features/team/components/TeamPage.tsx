@@ -116,7 +116,7 @@ function ApiKeys({ myRole }: { myRole: Role }) {
       <Panel title="Keys">
         <QueryView query={keys} empty="No API keys yet.">
           {(list) => (
-            <table className="w-full text-sm">
+            <table className="w-full text-sm [&_td]:px-2 [&_th]:px-2">
               <thead className="text-left text-xs text-ink-soft uppercase">
                 <tr><th scope="col">Name</th><th scope="col">Starts</th><th scope="col">Role</th><th scope="col">Owner</th><th scope="col">Last used</th><th scope="col">State</th><th scope="col"><span className="sr-only">Actions</span></th></tr>
               </thead>
@@ -156,7 +156,7 @@ function Members({ myId }: { myId: string | undefined }) {
     <Panel title="Members">
       <QueryView query={members} empty="No members.">
         {(list) => (
-          <table className="w-full text-sm">
+          <table className="w-full text-sm [&_td]:px-2 [&_th]:px-2">
             <thead className="text-left text-xs text-ink-soft uppercase"><tr><th scope="col">Name</th><th scope="col">E-mail</th><th scope="col">Role</th><th scope="col">Joined</th><th scope="col"><span className="sr-only">Actions</span></th></tr></thead>
             <tbody>
               {list.map((m) => (
@@ -226,7 +226,7 @@ function AuditLog() {
     <Panel title="Audit log">
       <QueryView query={events} empty="Nothing recorded yet.">
         {(list) => (
-          <table className="w-full text-sm">
+          <table className="w-full text-sm [&_td]:px-2 [&_th]:px-2">
             <thead className="text-left text-xs text-ink-soft uppercase"><tr><th scope="col">When</th><th scope="col">Who</th><th scope="col">Action</th><th scope="col">Subject</th></tr></thead>
             <tbody>
               {list.map((e) => (
