@@ -284,6 +284,37 @@ export const scenarios: Scenario[] = [
     },
   },
   {
+    name: 'an admin invites a member, who follows the e-mailed link and joins with a password',
+    async run(context) {
+      const email = `newcomer-${Date.now()}@kestrel.example`;
+      const page = await newPage(context);
+      await signIn(page, context.baseUrl, 'admin@kestrel.example');
+      await page.getByRole('link', { name: 'Team' }).click();
+      await page.getByRole('tab', { name: 'Invitations' }).click();
+      await page.getByLabel('E-mail').fill(email);
+      await page.getByRole('button', { name: 'Send invitation' }).click();
+      await page.getByText(`Invitation sent to ${email}.`).waitFor();
+      await page.getByRole('tab', { name: 'Mail outbox' }).click();
+      const message = page.getByRole('listitem').filter({ hasText: `to ${email}` }).first();
+      await message.waitFor();
+      const text = (await message.textContent()) ?? '';
+      const link = /https?:\/\/\S+accept-invitation\?token=[\w-]+/.exec(text)?.[0];
+      assert(link, 'the invitation e-mail holds a link');
+      const path = new URL(link).pathname + new URL(link).search;
+      await screenshot(page, 'team-outbox');
+      await page.getByRole('button', { name: 'Sign out' }).click();
+      await page.getByRole('button', { name: 'Sign in' }).waitFor();
+      await page.goto(`${context.baseUrl}${path}`);
+      await page.getByLabel('Your name').fill('Noor Vance');
+      await page.getByLabel('New password').fill('a-long-enough-password');
+      await page.getByRole('button', { name: 'Join' }).click();
+      await page.getByTestId('role').waitFor();
+      const role = (await page.getByTestId('role').textContent())?.trim();
+      assert(role === 'engineer', `the newcomer joins with the invited role (got ${role})`);
+      await page.close();
+    },
+  },
+  {
     name: 'an admin sees members, audit log and outbox',
     async run(context) {
       const page = await newPage(context);

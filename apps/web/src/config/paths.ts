@@ -1,7 +1,8 @@
 /** Every URL of the dashboard, in one place (bulletproof-react's paths.ts). */
 export const paths = {
   signIn: { path: '/sign-in', getHref: (redirectTo?: string) => `/sign-in${redirectTo ? `?redirectTo=${encodeURIComponent(redirectTo)}` : ''}` },
-  acceptInvitation: { path: '/invitation', getHref: () => '/invitation' },
+  // The service e-mails links to these two paths (apps/api/src/services/team.ts).
+  acceptInvitation: { path: '/accept-invitation', getHref: () => '/accept-invitation' },
   resetPassword: { path: '/reset-password', getHref: () => '/reset-password' },
   home: { path: '/', getHref: () => '/' },
   studies: { path: '/studies', getHref: () => '/studies' },
