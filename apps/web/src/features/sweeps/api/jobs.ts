@@ -4,6 +4,7 @@ import { api, unwrap } from '../../../lib/api';
 
 export type Job = Schema<'Job'>;
 export type MaSweepRequest = Schema<'MaSweepRequest'>;
+export type ZeroSequence = Schema<'ZeroSequence'>;
 
 export async function getJob(id: string): Promise<Job> {
   return unwrap(await api.GET('/api/v1/jobs/{id}', { params: { path: { id } } }));

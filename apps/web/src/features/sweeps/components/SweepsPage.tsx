@@ -6,7 +6,7 @@ import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState, QueryView } from '../../../components/ui/QueryState';
 import { errorMessage, fieldErrorOf } from '../../../lib/api';
 import { formatDate, formatPercent } from '../../../lib/format';
-import { useCreateMaSweep, useJob, useJobs, type Job } from '../api/jobs';
+import { useCreateMaSweep, useJob, useJobs, type Job, type ZeroSequence } from '../api/jobs';
 
 /** The result of an ma sweep as the API returns it (the library's ModulationIndexSweep). */
 interface SweepResult {
@@ -36,7 +36,7 @@ export function ProgressBar({ value, label }: { value: number; label: string }) 
 
 /** Start a sweep of the modulation index on the service and watch it to the end. */
 export function SweepsPage() {
-  const [form, setForm] = useState({ scheme: 'bipolar', mf: 21, vdc: 400, from: 0.1, to: 1.2, points: 60, maxOrder: 120 });
+  const [form, setForm] = useState({ method: 'sine-triangle', scheme: 'bipolar', zeroSequence: 'none', mf: 21, vdc: 400, from: 0.1, to: 1.2, points: 60, maxOrder: 120 });
   const [jobId, setJobId] = useState<string | null>(null);
   const start = useCreateMaSweep();
   const job = useJob(jobId);
@@ -45,7 +45,10 @@ export function SweepsPage() {
     event.preventDefault();
     start.mutate(
       {
-        modulation: { method: 'sine-triangle', scheme: form.scheme as 'bipolar' | 'unipolar', ma: form.from, mf: form.mf, vdc: form.vdc },
+        modulation:
+          form.method === 'three-phase'
+            ? { method: 'three-phase', ma: form.from, mf: form.mf, vdc: form.vdc, zeroSequence: form.zeroSequence as ZeroSequence }
+            : { method: 'sine-triangle', scheme: form.scheme as 'bipolar' | 'unipolar', ma: form.from, mf: form.mf, vdc: form.vdc },
         ma: { from: form.from, to: form.to, points: form.points },
         maxOrder: form.maxOrder,
       },
@@ -57,11 +60,21 @@ export function SweepsPage() {
 
   return (
     <div>
-      <PageHeader title="Index sweeps" subtitle="THD, WTHD and harmonic amplitudes of sine-triangle PWM across a range of the modulation index, computed as a job on the service." />
+      <PageHeader title="Index sweeps" subtitle="THD, WTHD and harmonic amplitudes of carrier PWM across a range of the modulation index, computed as a job on the service." />
       <div className="grid gap-5 lg:grid-cols-[320px_minmax(0,1fr)]">
         <Panel title="Sweep">
           <form onSubmit={submit} className="flex flex-col gap-3" noValidate>
-            <SelectField label="Bridge scheme" value={form.scheme} onChange={(e) => setForm({ ...form, scheme: e.target.value })} options={[{ value: 'bipolar', label: 'Bipolar' }, { value: 'unipolar', label: 'Unipolar' }]} />
+            <SelectField label="Method" value={form.method} onChange={(e) => setForm({ ...form, method: e.target.value })} options={[{ value: 'sine-triangle', label: 'Sine-triangle, single-phase bridge' }, { value: 'three-phase', label: 'Three-phase carrier' }]} />
+            {form.method === 'three-phase' ? (
+              <SelectField
+                label="Zero sequence"
+                value={form.zeroSequence}
+                onChange={(e) => setForm({ ...form, zeroSequence: e.target.value })}
+                options={['none', 'third-harmonic', 'min-max', 'clamp-60-peak', 'clamp-60-lead', 'clamp-60-lag', 'clamp-120-top', 'clamp-120-bottom'].map((v) => ({ value: v, label: v }))}
+              />
+            ) : (
+              <SelectField label="Bridge scheme" value={form.scheme} onChange={(e) => setForm({ ...form, scheme: e.target.value })} options={[{ value: 'bipolar', label: 'Bipolar' }, { value: 'unipolar', label: 'Unipolar' }]} />
+            )}
             <TextField label="Frequency ratio mf" type="number" value={form.mf} onChange={num('mf')} hint="whole number, 1 to 1000" error={err('mf')} />
             <TextField label="DC bus" unit="V" type="number" value={form.vdc} onChange={num('vdc')} hint="above 0, up to 100000" error={err('vdc')} />
             <div className="grid grid-cols-2 gap-3">
