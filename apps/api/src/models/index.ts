@@ -181,6 +181,17 @@ const role = { type: DataTypes.STRING(16), allowNull: false, validate: { isIn: [
 export function defineModels(sequelize: Sequelize): Models {
   const define = <R extends Model>(name: string, tableName: string, attributes: Record<string, unknown>) =>
     sequelize.define<R>(name, attributes as never, { tableName, timestamps: true });
+  const models = defineTables(sequelize, define);
+  // Lets the bearer lookup read membership, user and team in one query.
+  models.Membership.belongsTo(models.User, { foreignKey: 'userId', as: 'user' });
+  models.Membership.belongsTo(models.Team, { foreignKey: 'teamId', as: 'team' });
+  return models;
+}
+
+function defineTables(
+  sequelize: Sequelize,
+  define: <R extends Model>(name: string, tableName: string, attributes: Record<string, unknown>) => ModelStatic<R>,
+): Models {
   return {
     sequelize,
     Team: define<TeamRow>('Team', 'teams', { id, name: text() }),

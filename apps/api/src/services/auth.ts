@@ -1,6 +1,6 @@
 import bcrypt from 'bcryptjs';
 import { Op } from 'sequelize';
-import type { Models, Role } from '../models/index.js';
+import type { MembershipRow, Models, Role, TeamRow, UserRow } from '../models/index.js';
 import type { AuditLog } from './audit.js';
 import { iso } from './dto.js';
 import { lowerRole, type Principal } from './principal.js';
@@ -108,13 +108,17 @@ export class AuthService {
     authMethod: Principal['authMethod'],
     credentialId: string,
   ): Promise<Principal | null> {
-    const [user, membership, team] = await Promise.all([
-      this.models.User.findByPk(userId),
-      this.models.Membership.findOne({ where: { userId, teamId } }),
-      this.models.Team.findByPk(teamId),
-    ]);
+    const membership = (await this.models.Membership.findOne({
+      where: { userId, teamId },
+      include: [
+        { model: this.models.User, as: 'user', required: true },
+        { model: this.models.Team, as: 'team', required: true },
+      ],
+    })) as (MembershipRow & { user?: UserRow; team?: TeamRow }) | null;
+    const user = membership?.user;
+    const team = membership?.team;
     // A removed member's sessions and keys stop working at once.
-    if (!user || !membership || !team) return null;
+    if (!membership || !user || !team) return null;
     return {
       user: { id: user.id, email: user.email, name: user.name },
       teamId,
