@@ -240,6 +240,9 @@ export const scenarios: Scenario[] = [
         body: JSON.stringify({ baseRevision: revision, name: 'viewer edit', modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.5, mf: 21, vdc: 400 } }),
       });
       assert(response.status === 403, `the API refuses a viewer's edit (got ${response.status})`);
+      // Viewers may compute: the harmonic-limit check answers them.
+      await page.getByRole('button', { name: 'Check the spectrum' }).click();
+      await page.getByTestId('limit-result').getByText(/IEEE Std 519/).waitFor();
       await screenshot(page, 'viewer-study');
       await page.close();
     },

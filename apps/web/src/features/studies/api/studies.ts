@@ -122,3 +122,15 @@ export const studySpectrumQueryOptions = (id: string, maxOrder = 100) =>
 export function useStudySpectrum(id: string | undefined, maxOrder = 100) {
   return useQuery({ ...studySpectrumQueryOptions(id ?? '', maxOrder), enabled: Boolean(id) });
 }
+
+// Harmonic limits -----------------------------------------------------------------------------
+
+export type HarmonicLimitRequest = Schema<'HarmonicLimitRequest'>;
+export type HarmonicLimitResult = Schema<'HarmonicLimitResult'>;
+
+export async function checkHarmonicLimits(body: HarmonicLimitRequest): Promise<HarmonicLimitResult> {
+  return unwrap(await api.POST('/api/v1/harmonic-limits/check', { body }));
+}
+export function useCheckHarmonicLimits() {
+  return useMutation({ mutationFn: checkHarmonicLimits });
+}

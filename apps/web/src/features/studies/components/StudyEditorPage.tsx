@@ -8,7 +8,8 @@ import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState, Loading } from '../../../components/ui/QueryState';
 import { roleAtLeast, useMe } from '../../auth/api/auth';
 import { useCreateStudy, useDuplicateStudy, useProjects, useStudy, useStudySpectrum, useUpdateStudy, type Study } from '../api/studies';
-import { defaultDraft, draftFromStudy, draftRangeErrors, studyContentOf, type StudyDraft } from '../model/studyDraft';
+import { defaultDraft, draftFromStudy, draftRangeErrors, modulationOf, studyContentOf, type StudyDraft } from '../model/studyDraft';
+import { HarmonicLimitsPanel } from './HarmonicLimitsPanel';
 import { RevisionHistory } from './RevisionHistory';
 import { StudyCharts } from './StudyCharts';
 import { StudyForm } from './StudyForm';
@@ -123,6 +124,7 @@ function StudyEditor({ study }: { study: Study | undefined }) {
               previewErrors={[...outcome.errors, ...rangeErrors]}
             />
           </Panel>
+          <HarmonicLimitsPanel modulation={modulationOf(draft)} />
           {study ? <RevisionHistory study={study} canEdit={canEdit} /> : null}
         </div>
         <div className="flex min-w-0 flex-col gap-4" aria-live="off">
