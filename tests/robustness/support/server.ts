@@ -57,6 +57,8 @@ export async function startChildServer(options: {
   env?: Record<string, string>;
   port?: number;
   waitForHealth?: boolean;
+  /** Run as this user id (and group id), e.g. 65534 (nobody), so file permissions apply. */
+  uid?: number;
 }): Promise<ChildServer> {
   if (!existsSync(apiEntry)) throw new Error(`${apiEntry} is missing: run \`npm run build\` first.`);
   const port = options.port ?? (await freePort());
@@ -80,6 +82,7 @@ export async function startChildServer(options: {
       ...options.env,
     },
     stdio: ['ignore', 'pipe', 'pipe'],
+    ...(options.uid !== undefined ? { uid: options.uid, gid: options.uid } : {}),
   });
   child.stdout?.on('data', (chunk: Buffer) => (output += chunk.toString()));
   child.stderr?.on('data', (chunk: Buffer) => (output += chunk.toString()));
