@@ -13,6 +13,7 @@
  */
 import { pathToFileURL } from 'node:url';
 import { harmonics, sheSweep, sheWaveform, solveShe, type SheSweepResult } from '@pulsewright/modulation';
+import { medianTime } from './measure.js';
 
 /** What {@link runSheBench} measured: printable lines and the raw figures. */
 export interface SheBenchReport {
@@ -26,18 +27,6 @@ const scale = (4 * vdc) / Math.PI;
 const count = 5;
 const eliminate = [5, 7, 11, 13];
 const points = 100;
-
-function median(task: () => void, runs: number, warmup: number): number {
-  for (let i = 0; i < warmup; i++) task();
-  const times: number[] = [];
-  for (let i = 0; i < runs; i++) {
-    const start = performance.now();
-    task();
-    times.push(performance.now() - start);
-  }
-  times.sort((a, b) => a - b);
-  return times[Math.floor(times.length / 2)] as number;
-}
 
 function grid(from: number, to: number): number[] {
   return Array.from({ length: points }, (_, i) => from + ((to - from) * i) / (points - 1));
@@ -84,9 +73,9 @@ export async function runSheBench(): Promise<SheBenchReport> {
     const to = b * scale;
     const last: { sweep?: SheSweepResult } = {};
     let plain = { solved: 0 };
-    const sweepMs = median(() => (last.sweep = continuation(from, to)), 9, 2);
+    const sweepMs = medianTime(() => (last.sweep = continuation(from, to)), 9, 2);
     const sweep = last.sweep === undefined ? { solved: 0, worstResidual: NaN } : check(last.sweep);
-    const plainMs = median(() => (plain = multiStart(from, to)), 5, 1);
+    const plainMs = medianTime(() => (plain = multiStart(from, to)), 5, 1);
     const key = r === 0 ? 'solvable' : 'withGap';
     figures[`${key}ContinuationMs`] = sweepMs;
     figures[`${key}MultiStartMs`] = plainMs;
