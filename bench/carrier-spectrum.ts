@@ -9,7 +9,7 @@
  * compensated summation. Both the engine and the baseline are scored against it.
  */
 import FFT from 'fft.js';
-import { harmonics, sineTriangle, sweepModulationIndex, triangleCarrier } from '@pulsewright/modulation';
+import { harmonics, sineTriangle, sweepModulationIndex, triangleCarrier, type Harmonic } from '@pulsewright/modulation';
 import { medianTime, printTable } from './measure.js';
 
 const mf = 21;
@@ -18,23 +18,25 @@ const vdc = 1;
 const maxOrder = 50 * mf;
 const samples = 2 ** 16;
 
-function exactSpectrum(): number[] {
-  return harmonics(sineTriangle({ scheme: 'bipolar', ma, mf, vdc }), maxOrder).map((h) => h.amplitude);
+/** Both sides produce the same output: the library's `{ order, amplitude, phase }` list. */
+function exactSpectrum(): Harmonic[] {
+  return harmonics(sineTriangle({ scheme: 'bipolar', ma, mf, vdc }), maxOrder);
 }
 
-function sampledSpectrum(fft: FFT, input: Float64Array, output: Float64Array): number[] {
+function sampledSpectrum(fft: FFT, input: Float64Array, output: Float64Array): Harmonic[] {
   for (let k = 0; k < samples; k++) {
     const theta = (2 * Math.PI * k) / samples;
     input[k] = ma * Math.sin(theta) > triangleCarrier(theta, { mf }) ? vdc : -vdc;
   }
   fft.realTransform(output, input);
-  const amplitudes: number[] = [];
+  const spectrum: Harmonic[] = [];
   for (let n = 0; n <= maxOrder; n++) {
     const re = output[2 * n] as number;
     const im = output[2 * n + 1] as number;
-    amplitudes.push(((n === 0 ? 1 : 2) * Math.hypot(re, im)) / samples);
+    // X_n = (N/2)·(a_n − j·b_n) for v = a_n cos nθ + b_n sin nθ; phase as in `harmonics`.
+    spectrum.push({ order: n, amplitude: ((n === 0 ? 1 : 2) * Math.sqrt(re * re + im * im)) / samples, phase: Math.atan2(re, -im) });
   }
-  return amplitudes;
+  return spectrum;
 }
 
 function independentReference(): number[] {
@@ -73,8 +75,8 @@ function kahanAdd(sum: number, compensation: number, value: number): [number, nu
   return [t, t - sum - y];
 }
 
-function maxError(values: readonly number[], reference: readonly number[]): number {
-  return values.reduce((worst, v, i) => Math.max(worst, Math.abs(v - (reference[i] as number))), 0);
+function maxError(values: readonly Harmonic[], reference: readonly number[]): number {
+  return values.reduce((worst, v, i) => Math.max(worst, Math.abs(v.amplitude - (reference[i] as number))), 0);
 }
 
 const fft = new FFT(samples);

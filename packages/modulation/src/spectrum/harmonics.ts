@@ -48,15 +48,14 @@ export function harmonics(waveform: Waveform, maxOrder: number): Harmonic[] {
   for (let i = 0; i < jumps.length; i += 4) {
     accumulateFourEdges(sinSum, cosSum, jumps.slice(i, i + 4), maxOrder, symmetric ? 2 : 1);
   }
-  const result: Harmonic[] = [{ order: 0, amplitude: waveformMean(waveform), phase: 0 }];
+  const result: Harmonic[] = new Array<Harmonic>(maxOrder + 1);
+  result[0] = { order: 0, amplitude: waveformMean(waveform), phase: 0 };
   for (let n = 1; n <= maxOrder; n++) {
     // v = a_n cos nθ + b_n sin nθ with a_n = −ΣΔ sin/(πn), b_n = ΣΔ cos/(πn)
     const scale = 1 / (Math.PI * n);
     const a = -(sinSum[n] as number) * scale;
     const b = (cosSum[n] as number) * scale;
-    // Orders cancelled by symmetry are exactly zero: skip the costly atan2 for them.
-    const amplitude = Math.sqrt(a * a + b * b);
-    result.push({ order: n, amplitude, phase: amplitude === 0 ? 0 : Math.atan2(a, b) });
+    result[n] = { order: n, amplitude: Math.sqrt(a * a + b * b), phase: Math.atan2(a, b) };
   }
   return result;
 }

@@ -17,39 +17,60 @@ export interface Transition {
  * @param transitions - at least one; does not change the array
  */
 export function waveformFromTransitions(transitions: readonly Transition[]): Waveform {
-  if (transitions.length === 0) throw new RangeError('transitions must hold at least one entry');
-  const sorted = transitions
-    .map((t) => ({ angle: wrapAngle(t.angle), level: t.level }))
-    .sort((a, b) => a.angle - b.angle);
-  // Merge near-coincident transitions: the last of a cluster holds the level after it.
-  const merged: Transition[] = [];
-  for (const t of sorted) {
-    const previous = merged[merged.length - 1];
-    if (previous !== undefined && t.angle - previous.angle < EDGE_EPSILON) previous.level = t.level;
-    else merged.push({ ...t });
+  const count = transitions.length;
+  if (count === 0) throw new RangeError('transitions must hold at least one entry');
+  const angles: number[] = [];
+  const levels: number[] = [];
+  for (const index of ascendingOrder(transitions)) {
+    const { angle, level } = transitions[index] as Transition;
+    const wrapped = wrapAngle(angle);
+    // Merge near-coincident transitions: the last of a cluster holds the level after it.
+    if (angles.length > 0 && wrapped - (angles[angles.length - 1] as number) < EDGE_EPSILON) {
+      levels[levels.length - 1] = level;
+    } else {
+      angles.push(wrapped);
+      levels.push(level);
+    }
   }
   // A cluster straddling 2π: the transition just after 0 is the later one (it sits at 2π plus a
   // little), so its level stands and the one just before 2π is dropped.
-  const first = merged[0] as Transition;
-  const last = merged[merged.length - 1] as Transition;
-  if (merged.length > 1 && first.angle + TAU - last.angle < EDGE_EPSILON) merged.pop();
-  return dropRepeatedLevels(merged);
+  if (angles.length > 1 && (angles[0] as number) + TAU - (angles[angles.length - 1] as number) < EDGE_EPSILON) {
+    angles.pop();
+    levels.pop();
+  }
+  return dropRepeatedLevels(angles, levels);
 }
 
-function dropRepeatedLevels(transitions: Transition[]): Waveform {
+/**
+ * The indices of `transitions` in ascending order of wrapped angle, ties in input order. The
+ * modulators emit transitions in ascending unwrapped order, which wrapping turns into one
+ * rotation of an ascending list: that case is found in one pass, anything else is sorted.
+ */
+function ascendingOrder(transitions: readonly Transition[]): number[] {
+  const count = transitions.length;
+  const wrapped = transitions.map((t) => wrapAngle(t.angle));
+  let descents = 0;
+  let start = 0;
+  for (let i = 1; i < count; i++) {
+    if ((wrapped[i] as number) < (wrapped[i - 1] as number)) {
+      descents++;
+      start = i;
+    }
+  }
+  const rotation = descents === 0 || (descents === 1 && (wrapped[count - 1] as number) <= (wrapped[0] as number));
+  if (rotation) return Array.from({ length: count }, (_, k) => (start + k) % count);
+  return Array.from({ length: count }, (_, k) => k).sort((a, b) => (wrapped[a] as number) - (wrapped[b] as number) || a - b);
+}
+
+function dropRepeatedLevels(angles: readonly number[], levels: readonly number[]): Waveform {
   const edges: number[] = [];
-  const levels: number[] = [];
-  const n = transitions.length;
-  for (let i = 0; i < n; i++) {
-    const t = transitions[i] as Transition;
-    const before = transitions[(i + n - 1) % n] as Transition;
-    if (n > 1 && t.level === before.level) continue;
-    edges.push(t.angle);
-    levels.push(t.level);
+  const kept: number[] = [];
+  const count = angles.length;
+  for (let i = 0; i < count; i++) {
+    if (count > 1 && levels[i] === levels[(i + count - 1) % count]) continue;
+    edges.push(angles[i] as number);
+    kept.push(levels[i] as number);
   }
-  if (edges.length === 0) {
-    const only = transitions[0] as Transition;
-    return { edges: [0], levels: [only.level] };
-  }
-  return { edges, levels };
+  if (edges.length === 0) return { edges: [0], levels: [levels[0] as number] };
+  return { edges, levels: kept };
 }
