@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { harmonics, sineTriangle, thd, waveformIntegral } from '../../index.js';
+import { harmonics, sineTriangle, thd, triangleCarrier, waveformIntegral, waveformValueAt } from '../../index.js';
 import { assertInDelta } from '../../testing/assertInDelta.js';
 
 const vdc = 350;
@@ -106,6 +106,22 @@ describe('sineTriangle regular sampling', () => {
 });
 
 describe('sineTriangle carrier phase', () => {
+  it('delays the carrier: its valley moves from π/2 to π/2 + carrierPhase/mf (DESIGN.md)', () => {
+    const mf = 9;
+    const carrierPhase = 0.8;
+    assertInDelta(triangleCarrier(Math.PI / 2, { mf }), -1, 1e-12);
+    assertInDelta(triangleCarrier(Math.PI / 2 + carrierPhase / mf, { mf, carrierPhase }), -1, 1e-12);
+    assertInDelta(triangleCarrier(Math.PI / 2 + (carrierPhase + Math.PI) / mf, { mf, carrierPhase }), 1, 1e-12);
+    // The bipolar pulse round that valley is high (reference ma·sin θ > −1 there) and, with
+    // regular sampling, centred on it.
+    const waveform = sineTriangle({ scheme: 'bipolar', ma: 0.5, mf, vdc, carrierPhase, sampling: 'regular-symmetric' });
+    const valley = Math.PI / 2 + carrierPhase / mf;
+    const rise = waveform.edges.filter((e) => e < valley).at(-1) ?? NaN;
+    const fall = waveform.edges.find((e) => e > valley) ?? NaN;
+    assertInDelta(valley - rise, fall - valley, 1e-12);
+    expect(waveformValueAt(waveform, valley)).toBe(vdc);
+  });
+
   it('moves the edges with the carrier and leaves the linear fundamental unchanged', () => {
     const base = sineTriangle({ scheme: 'bipolar', ma: 0.5, mf: 10, vdc });
     const shifted = sineTriangle({ scheme: 'bipolar', ma: 0.5, mf: 10, vdc, carrierPhase: 1.1 });
