@@ -6,6 +6,7 @@ import {
   thd,
   threePhaseReference,
   triangleCarrier,
+  waveformValueAt,
   ZERO_SEQUENCES,
   type Waveform,
   type ZeroSequence,
@@ -128,6 +129,24 @@ describe('discontinuous clamping', () => {
       assertInDelta(clampedAngle(legs.a, mf), expected, (4 * 2 * Math.PI) / mf, zeroSequence);
     });
   }
+
+  it('places the 60° blocks round the peak, 30° before it (lead) or 30° after it (lag)', () => {
+    // clamp-60-peak holds leg a high on (60°, 120°); lead on (30°, 90°); lag on (90°, 150°)
+    // (Holmes and Lipo 2003, ch. 7; which shift is called which is from memory).
+    const mf = 96;
+    const carrierPeriod = (2 * Math.PI) / mf;
+    const heldHigh = (zeroSequence: ZeroSequence, fromDegrees: number, toDegrees: number): boolean => {
+      const { legs } = threePhase({ ma: 0.9, mf, vdc, zeroSequence });
+      const from = (fromDegrees * Math.PI) / 180 + carrierPeriod;
+      const to = (toDegrees * Math.PI) / 180 - carrierPeriod;
+      return legs.a.edges.every((e) => e <= from || e >= to) && waveformValueAt(legs.a, (from + to) / 2) === vdc / 2;
+    };
+    expect(heldHigh('clamp-60-peak', 60, 120)).toBe(true);
+    expect(heldHigh('clamp-60-lead', 30, 90)).toBe(true);
+    expect(heldHigh('clamp-60-lag', 90, 150)).toBe(true);
+    expect(heldHigh('clamp-60-lead', 90, 150)).toBe(false);
+    expect(heldHigh('clamp-60-lag', 30, 90)).toBe(false);
+  });
 
   it('clamp-120-top holds leg a at +vdc/2 round its positive peak', () => {
     const { legs } = threePhase({ ma: 0.9, mf: 96, vdc, zeroSequence: 'clamp-120-top' });
