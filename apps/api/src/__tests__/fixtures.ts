@@ -153,3 +153,6 @@ export function send(app: PulsewrightApp, method: string, spec: RequestSpec, tok
   if (spec.body !== undefined) return test.send(spec.body as object);
   return test;
 }
+
+/** A space-vector modulation (seven segments, symmetric regular sampling, linear range). */
+export const SPACE_VECTOR = { method: 'space-vector', m: 0.8, vdc: 600, frequencyRatio: 201 } as const;

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { intQuery } from '../http/query.js';
 import { principalOf } from '../auth/authorize.js';
-import { computeSpectrum, type ModulationInput } from '../services/compute.js';
+import { assertModulation, computeSpectrum, type ModulationInput } from '../services/compute.js';
 import type { Services } from '../services/index.js';
 
 /** Projects and studies (every study edit is a new revision). */
@@ -35,6 +35,7 @@ export function studyRoutes(services: Services): Router {
   });
   router.post('/api/v1/studies', async (req, res) => {
     const { projectId, ...content } = req.body;
+    assertModulation(content.modulation);
     res.status(201).json(await studies.create(principalOf(req), projectId, content));
   });
   router.get('/api/v1/studies/:id', async (req, res) => {
@@ -42,6 +43,7 @@ export function studyRoutes(services: Services): Router {
   });
   router.put('/api/v1/studies/:id', async (req, res) => {
     const { baseRevision, ...content } = req.body;
+    assertModulation(content.modulation);
     res.json(await studies.update(principalOf(req), req.params.id, baseRevision, content));
   });
   router.post('/api/v1/studies/:id/duplicate', async (req, res) => {

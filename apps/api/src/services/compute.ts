@@ -4,8 +4,10 @@ import {
   lcFilter,
   rlCurrentSeries,
   rlSteadyState,
+  sheWaveform,
   sineTriangle,
   spaceVectorSequence,
+  spaceVectorWaveforms,
   thd,
   threePhase,
   timerTable,
@@ -24,6 +26,12 @@ import {
   type Waveform,
   type ZeroSequence,
   type CarrierSampling,
+  type OvermodulationMethod,
+  type SheKind,
+  type SpaceVectorSampling,
+  type SpaceVectorSequenceKind,
+  type ZeroVectorClamping,
+  ParameterRangeError,
 } from '@pulsewright/modulation';
 import { callLibrary } from './library.js';
 
@@ -47,7 +55,36 @@ export type ThreePhaseInput = {
   /** Which output spectra analyse. @default 'line-to-line' */
   output?: 'line-to-line' | 'leg';
 };
-export type ModulationInput = SineTriangleInput | ThreePhaseInput;
+/** The fields of the library's spaceVectorWaveforms (one of m and ma), whole frequency ratio. */
+export type SpaceVectorInput = {
+  method: 'space-vector';
+  m?: number;
+  ma?: number;
+  vdc: number;
+  frequencyRatio: number;
+  sequence?: SpaceVectorSequenceKind;
+  sampling?: SpaceVectorSampling;
+  zeroSplit?: number;
+  clamping?: ZeroVectorClamping;
+  overmodulation?: OvermodulationMethod;
+  /** Which output spectra analyse. @default 'line-to-line' */
+  output?: 'line-to-line' | 'leg';
+};
+/**
+ * A solved selective-harmonic-elimination pattern: the first-quarter angles define the
+ * waveform (the library's sheWaveform); `eliminate` and `fundamental` record the solve's goal.
+ */
+export type SheInput = {
+  method: 'selective-harmonic-elimination';
+  kind: SheKind;
+  vdc: number;
+  angles: number[];
+  eliminate?: number[];
+  fundamental?: number;
+};
+export type ModulationInput = SineTriangleInput | ThreePhaseInput | SpaceVectorInput | SheInput;
+/** The methods whose modulation index a sweep can vary. */
+export type CarrierModulationInput = SineTriangleInput | ThreePhaseInput;
 
 export interface SpectrumResult {
   harmonics: Harmonic[];
@@ -69,6 +106,8 @@ export function modulationWaveforms(modulation: ModulationInput, prefix = 'modul
       const waveform = sineTriangle(options);
       return { name: 'bridge output', waveform, traces: [{ name: 'bridge output', waveform }] };
     }
+    if (modulation.method === 'space-vector') return spaceVectorOutput(modulation);
+    if (modulation.method === 'selective-harmonic-elimination') return sheOutput(modulation);
     const { method: _method, output = 'line-to-line', ...options } = modulation;
     const result = threePhase(options);
     const traces = [
@@ -85,9 +124,47 @@ export function modulationWaveforms(modulation: ModulationInput, prefix = 'modul
   });
 }
 
-/** A function from ma to the analysed waveform, for sweeps. */
-export function waveformAtMa(modulation: ModulationInput): (ma: number) => Waveform {
-  return (ma) => modulationWaveforms({ ...modulation, ma } as ModulationInput).waveform;
+function spaceVectorOutput(modulation: SpaceVectorInput): WaveformResult {
+  const { method: _method, output = 'line-to-line', ...options } = modulation;
+  const result = spaceVectorWaveforms(options);
+  const traces = [
+    { name: 'leg a', waveform: result.a },
+    { name: 'leg b', waveform: result.b },
+    { name: 'leg c', waveform: result.c },
+    { name: 'line ab', waveform: result.ab },
+    { name: 'line bc', waveform: result.bc },
+    { name: 'line ca', waveform: result.ca },
+  ];
+  return output === 'leg' ? { name: 'leg a', waveform: result.a, traces } : { name: 'line ab', waveform: result.ab, traces };
+}
+
+function sheOutput(modulation: SheInput): WaveformResult {
+  const { kind, vdc, angles, eliminate = [] } = modulation;
+  // The schema bounds each order; oddness is the library's rule for what can be eliminated
+  // (quarter-wave symmetry leaves no even harmonics), checked here because the pattern is
+  // stored, not solved.
+  eliminate.forEach((order, i) => {
+    if (order % 2 === 0) {
+      throw new ParameterRangeError(`eliminate[${i}]`, 'an odd order ≥ 3 (quarter-wave symmetry leaves no even harmonics)', order);
+    }
+  });
+  const waveform = sheWaveform(angles, { kind, vdc });
+  const name = kind === 'staircase' ? 'staircase output' : 'bridge output';
+  return { name, waveform, traces: [{ name, waveform }] };
+}
+
+/**
+ * Refuses (400 naming the field) a modulation the library will not build, so a study is
+ * never stored with one: the schema bounds each field, the library checks what a schema
+ * cannot (first-quarter angles ascending, exactly one of m and ma).
+ */
+export function assertModulation(modulation: ModulationInput, prefix = 'modulation.'): void {
+  modulationWaveforms(modulation, prefix);
+}
+
+/** A function from ma to the analysed waveform, for sweeps of the carrier methods. */
+export function waveformAtMa(modulation: CarrierModulationInput): (ma: number) => Waveform {
+  return (ma) => modulationWaveforms({ ...modulation, ma }).waveform;
 }
 
 export function spectrumOf(waveform: Waveform, maxOrder: number): SpectrumResult {

@@ -1,6 +1,6 @@
 import { sheSweep, sweepModulationIndex, type ModulationIndexSweep, type SheKind } from '@pulsewright/modulation';
 import type { ChunkedWork } from './jobs.js';
-import { waveformAtMa, type ModulationInput } from './compute.js';
+import { waveformAtMa, type CarrierModulationInput } from './compute.js';
 import { asBadRequest } from './library.js';
 
 /** Points per chunk: each chunk is a few milliseconds of work at the largest allowed inputs. */
@@ -18,7 +18,7 @@ const gridValue = (from: number, to: number, points: number, k: number): number 
   k === points - 1 ? to : from + ((to - from) * k) / (points - 1);
 
 export interface MaSweepInput {
-  modulation: ModulationInput;
+  modulation: CarrierModulationInput;
   ma: { from: number; to: number; points: number };
   maxOrder: number;
   orders?: number[];
