@@ -244,7 +244,18 @@ export function requestArbitrary(tools: SchemaTools, op: Operation, ids: KnownId
     Object.fromEntries(queryParams.map((p) => [p.name, validArbitrary(tools, p.schema).map(String)])) as Record<string, fc.Arbitrary<string>>,
     { requiredKeys: queryParams.filter((p) => p.required).map((p) => p.name) },
   );
-  const validBody: fc.Arbitrary<unknown> = bodySchema ? validArbitrary(tools, bodySchema) : fc.constant(undefined);
+  // Ids in bodies (projectId, studyId) mostly name things that exist, so creates get past their 404.
+  const known: Record<string, string[]> = { projectId: ids.projects, studyId: ids.studies };
+  const validBody: fc.Arbitrary<unknown> = bodySchema
+    ? fc.tuple(validArbitrary(tools, bodySchema), fc.nat(), fc.integer({ min: 0, max: 4 })).map(([body, pick, odds]) => {
+        if (!body || typeof body !== 'object' || Array.isArray(body) || odds === 0) return body;
+        const copy = { ...(body as Record<string, unknown>) };
+        for (const [field, pool] of Object.entries(known)) {
+          if (typeof copy[field] === 'string' && pool.length) copy[field] = pool[pick % pool.length];
+        }
+        return copy;
+      })
+    : fc.constant(undefined);
 
   type Parts = Pick<FuzzRequest, 'contentType' | 'headers' | 'body' | 'multipart' | 'variant'> & { path?: Record<string, string>; query?: Record<string, string> };
 
