@@ -39,7 +39,13 @@ export function EliminationPage() {
     // fundamentals are given as a fraction of the largest (4·vdc/π per level, square-wave fundamental)
     start.mutate(
       { kind: form.kind, vdc: form.vdc, count, eliminate: orders, fundamental: { from: ((form.from * 4) / Math.PI) * scale, to: ((form.to * 4) / Math.PI) * scale, points: form.points } },
-      { onSuccess: (created) => setJobId(created.id) },
+      {
+        onSuccess: (created) => {
+          setJobId(created.id);
+          setSolvedFor({ kind: form.kind, vdc: form.vdc, orders });
+          setTarget((t) => ({ ...t, name: null }));
+        },
+      },
     );
   };
 
@@ -54,20 +60,30 @@ export function EliminationPage() {
     }
   });
   const pickedPoint = picked ? outcome?.branches[picked.branch]?.points.filter((p) => p.converged)[picked.point] : undefined;
-  const preview = pickedPoint ? pointSpectrum(form.kind, form.vdc, pickedPoint.angles) : null;
+  // The sweep that found the point: its pattern settings, kept apart from later form edits.
+  const [solvedFor, setSolvedFor] = useState<{ kind: 'bipolar' | 'staircase'; vdc: number; orders: number[] } | null>(null);
+  const [target, setTarget] = useState<{ projectId: string; name: string | null }>({ projectId: '', name: null });
+  const projectId = target.projectId || projects.data?.[0]?.id || '';
+  const pattern = solvedFor ?? { kind: form.kind, vdc: form.vdc, orders };
+  const preview = pickedPoint ? pointSpectrum(pattern.kind, pattern.vdc, pickedPoint.angles) : null;
+  const defaultName = pickedPoint ? `SHE ${pattern.kind} eliminating ${pattern.orders.join(', ')} at ${formatNumber(pickedPoint.fundamental)} V`.slice(0, 120) : '';
+  const studyName = target.name ?? defaultName;
 
   const saveStudy = () => {
-    if (!pickedPoint) return;
-    const projectId = projects.data?.[0]?.id;
-    if (!projectId) return;
+    if (!pickedPoint || !projectId || !studyName.trim()) return;
     save.mutate(
       {
         projectId,
-        name: `SHE ${form.kind} eliminating ${orders.join(', ')} at ${formatNumber(pickedPoint.fundamental)} V`,
-        note: `Angles (rad): ${pickedPoint.angles.map((a) => a.toFixed(6)).join(', ')}`,
-        // The API document lists the modulation methods it stores; if it does not take this
-        // one, its problem+json answer is shown below.
-        modulation: { method: 'selective-harmonic-elimination', kind: form.kind, vdc: form.vdc, angles: pickedPoint.angles, eliminate: orders, fundamental: pickedPoint.fundamental } as never,
+        name: studyName.trim(),
+        note: `Picked on a solution branch of the harmonic-elimination page (${pickedPoint.angles.length} first-quarter angles).`,
+        modulation: {
+          method: 'selective-harmonic-elimination',
+          kind: pattern.kind,
+          vdc: pattern.vdc,
+          angles: pickedPoint.angles,
+          eliminate: pattern.orders,
+          fundamental: pickedPoint.fundamental,
+        },
         load: null,
         filter: null,
       },
@@ -127,7 +143,17 @@ export function EliminationPage() {
               <Panel title="Picked point">
                 <p className="num text-sm">Fundamental {formatNumber(pickedPoint.fundamental)} V · angles {pickedPoint.angles.map((a) => `${formatNumber((a * 180) / Math.PI)}°`).join(', ')} · THD to order 49 {formatPercent(preview.thd)}</p>
                 {canSave ? (
-                  <Button className="mt-2" onClick={saveStudy} busy={save.isPending} disabled={!projects.data?.length}>Save as study</Button>
+                  <div className="mt-3 grid gap-3 sm:grid-cols-[minmax(0,1fr)_minmax(0,1fr)_auto] sm:items-end">
+                    <SelectField
+                      label="Project"
+                      value={projectId}
+                      onChange={(e) => setTarget({ ...target, projectId: e.target.value })}
+                      error={fieldErrorOf(save.error, 'projectId')}
+                      options={projects.data?.length ? projects.data.map((p) => ({ value: p.id, label: p.name })) : [{ value: '', label: 'No projects yet' }]}
+                    />
+                    <TextField label="Study name" value={studyName} maxLength={120} onChange={(e) => setTarget({ ...target, name: e.target.value })} error={fieldErrorOf(save.error, 'name')} />
+                    <Button onClick={saveStudy} busy={save.isPending} disabled={!projectId || !studyName.trim()}>Save as study</Button>
+                  </div>
                 ) : <p className="mt-2 text-xs text-ink-soft">Saving needs the engineer role.</p>}
                 {save.isError ? <p role="alert" className="mt-2 text-sm text-bad">{errorMessage(save.error)}</p> : null}
               </Panel>

@@ -31,7 +31,8 @@ export function ComparePage() {
     const study = studies[i]?.data;
     const spectrum = spectra[i]?.data;
     if (!study || !spectrum) return;
-    const mf = Number((study.modulation as { mf?: unknown }).mf) || 1;
+    const stored = study.modulation as { mf?: unknown; frequencyRatio?: unknown };
+    const mf = Number(stored.mf ?? stored.frequencyRatio) || 1;
     series.push({ name: study.name, color: COLOURS[i % COLOURS.length] ?? '#12263a', harmonics: labelHarmonics(spectrum.harmonics, mf) });
   });
 

@@ -11,6 +11,15 @@ import { roleAtLeast, useMe } from '../../auth/api/auth';
 import { useCreateProject, useDuplicateStudy, useProjects, useStudies } from '../api/studies';
 
 function describeModulation(modulation: Record<string, unknown>): string {
+  if (modulation.method === 'selective-harmonic-elimination') {
+    const count = Array.isArray(modulation.angles) ? modulation.angles.length : 0;
+    const orders = Array.isArray(modulation.eliminate) && modulation.eliminate.length ? ` · eliminates ${modulation.eliminate.join(', ')}` : '';
+    return `${String(modulation.kind ?? '?')} · ${count} angle(s) · ${String(modulation.vdc ?? '?')} V${orders}`;
+  }
+  if (modulation.method === 'space-vector') {
+    const index = modulation.ma !== undefined ? `ma ${String(modulation.ma)}` : `m ${String(modulation.m ?? '?')}`;
+    return `${index} · ratio ${String(modulation.frequencyRatio ?? '?')} · ${String(modulation.vdc ?? '?')} V${typeof modulation.sequence === 'string' ? ` · ${modulation.sequence}` : ''}`;
+  }
   const parts = [modulation.scheme, modulation.zeroSequence, modulation.sequence].filter((v) => typeof v === 'string');
   return `ma ${String(modulation.ma ?? '?')} · mf ${String(modulation.mf ?? '?')} · ${String(modulation.vdc ?? '?')} V${parts.length ? ` · ${parts.join(', ')}` : ''}`;
 }

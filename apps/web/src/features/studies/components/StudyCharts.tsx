@@ -22,7 +22,7 @@ export function StudyCharts({ preview, fileStem }: { preview: Preview; fileStem:
           filteredThd: preview.filtered?.thd,
         }}
       />
-      <WaveformChart modulator={preview.modulator} output={preview.output} outputName={preview.outputName} fileName={`${fileStem}-waveform`} />
+      <WaveformChart modulator={preview.modulator ?? undefined} output={preview.output} outputName={preview.outputName} fileName={`${fileStem}-waveform`} />
       <SpectrumChart series={series} fileName={`${fileStem}-spectrum`} title={`Spectrum to order ${preview.maxOrder}`} />
       {preview.load ? (
         <LoadCurrentChart

@@ -67,7 +67,7 @@ function StudyEditor({ study }: { study: Study | undefined }) {
   };
 
   const saving = create.isPending || update.isPending;
-  const generalSaveError = saveError && !['name', 'projectId', 'ma', 'mf', 'vdc', 'r', 'l', 'frequency', 'emf', 'method', 'scheme', 'sampling'].some((f) => fieldErrorOf(saveError, f));
+  const generalSaveError = saveError && !['name', 'projectId', 'ma', 'm', 'mf', 'frequencyRatio', 'sequence', 'vdc', 'r', 'l', 'frequency', 'emf', 'method', 'scheme', 'sampling'].some((f) => fieldErrorOf(saveError, f));
 
   return (
     <div>

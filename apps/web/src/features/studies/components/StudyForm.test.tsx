@@ -43,4 +43,15 @@ describe('StudyForm', () => {
       expect(control).toBeDisabled();
     }
   });
+
+  it('lists a harmonic-elimination study\'s angles read-only, without carrier controls', () => {
+    const draft = { ...defaultDraft(projects[0]?.id), method: 'selective-harmonic-elimination' as const, she: { kind: 'bipolar' as const, angles: [0.2, 0.5, 0.9], eliminate: [5, 7], fundamental: 150 } };
+    render(<StudyForm draft={draft} onChange={() => undefined} readOnly={false} projects={projects} saveError={null} previewErrors={[]} />);
+    const table = screen.getByRole('table', { name: 'First-quarter switching angles' });
+    expect(table.querySelectorAll('tbody tr')).toHaveLength(3);
+    expect(table).toHaveTextContent('0.500000000');
+    expect(screen.getByTestId('she-pattern')).toHaveTextContent('eliminates orders 5, 7');
+    expect(screen.queryByRole('slider', { name: /Modulation index ma/ })).toBeNull();
+    expect(screen.getByRole('combobox', { name: 'Method' })).toHaveValue('selective-harmonic-elimination');
+  });
 });

@@ -2,7 +2,8 @@ import { fieldErrorOf } from '../../../lib/api';
 import { SelectField, SliderField, TextField } from '../../../components/ui/Field';
 import type { Project } from '../api/studies';
 import type { PreviewFieldError } from '../model/computePreview';
-import { METHOD_OPTIONS, RANGES, SLIDER_LIMITS, ZERO_SEQUENCE_OPTIONS, type StudyDraft } from '../model/studyDraft';
+import { formatNumber } from '../../../lib/format';
+import { METHOD_OPTIONS, RANGES, SHE_METHOD_OPTION, SLIDER_LIMITS, ZERO_SEQUENCE_OPTIONS, type ShePattern, type StudyDraft } from '../model/studyDraft';
 
 export interface StudyFormProps {
   draft: StudyDraft;
@@ -22,7 +23,10 @@ export function StudyForm({ draft, onChange, readOnly, projects, saveError, prev
   const error = (field: string, ...serverPaths: string[]) =>
     [field, ...serverPaths].map((p) => fieldErrorOf(saveError, p)).find(Boolean) ?? previewErrors.find((e) => e.field === field)?.message;
   const set = <K extends keyof StudyDraft>(key: K) => (value: StudyDraft[K]) => onChange({ [key]: value } as Partial<StudyDraft>);
-  const isCarrier = draft.method !== 'space-vector';
+  const isPattern = draft.method === 'selective-harmonic-elimination';
+  const isCarrier = draft.method === 'sine-triangle' || draft.method === 'three-phase';
+  // A stored pattern keeps its method in the list; it cannot be chosen for a new study.
+  const methodOptions = isPattern || draft.she ? [...METHOD_OPTIONS, SHE_METHOD_OPTION] : METHOD_OPTIONS;
 
   return (
     <form className="flex flex-col gap-4" onSubmit={(e) => e.preventDefault()} aria-label="Study parameters">
@@ -41,7 +45,8 @@ export function StudyForm({ draft, onChange, readOnly, projects, saveError, prev
 
       <fieldset disabled={readOnly} className="flex flex-col gap-3">
         <legend className="mb-1 text-sm font-semibold uppercase tracking-wide">Modulation</legend>
-        <SelectField label="Method" value={draft.method} onChange={(e) => set('method')(e.target.value as StudyDraft['method'])} error={error('method')} options={METHOD_OPTIONS} />
+        <SelectField label="Method" value={draft.method} onChange={(e) => set('method')(e.target.value as StudyDraft['method'])} error={error('method')} options={methodOptions} />
+        {isPattern ? <PatternSummary pattern={draft.she} vdc={draft.vdc} error={error('angles', 'modulation.angles', 'modulation.eliminate', 'modulation.kind')} /> : null}
         {draft.method === 'sine-triangle' ? (
           <SelectField
             label="Bridge scheme"
@@ -69,11 +74,6 @@ export function StudyForm({ draft, onChange, readOnly, projects, saveError, prev
             ]}
           />
         ) : null}
-        {draft.method === 'space-vector' ? (
-          <p className="rounded border border-signal bg-signal-soft px-2 py-1 text-xs" role="note">
-            The service stores sine-triangle and three-phase carrier studies; a space-vector study previews here, and saving it shows the service&apos;s answer.
-          </p>
-        ) : null}
         {isCarrier ? (
           <SelectField
             label="Sampling"
@@ -87,9 +87,22 @@ export function StudyForm({ draft, onChange, readOnly, projects, saveError, prev
             ]}
           />
         ) : null}
-        <SliderField label="DC bus" unit="V" value={draft.vdc} min={SLIDER_LIMITS.vdc.min} max={SLIDER_LIMITS.vdc.max} step={1} hint={rangeHint(RANGES.vdc, 'V')} error={error('vdc')} onChange={set('vdc')} />
-        <SliderField label="Modulation index ma" value={draft.ma} min={SLIDER_LIMITS.ma.min} max={SLIDER_LIMITS.ma.max} step={0.01} hint="above 0, up to 4; above 1 is overmodulation" error={error('ma', 'm')} onChange={set('ma')} />
-        <SliderField label="Frequency ratio mf" value={draft.mf} min={SLIDER_LIMITS.mf.min} max={SLIDER_LIMITS.mf.max} step={1} hint="whole number, 1 to 1000; odd values give quarter-wave symmetry" error={error('mf', 'frequencyRatio')} onChange={(v) => set('mf')(Math.round(v))} />
+        {isPattern ? null : (
+          <>
+            <SliderField label="DC bus" unit="V" value={draft.vdc} min={SLIDER_LIMITS.vdc.min} max={SLIDER_LIMITS.vdc.max} step={1} hint={rangeHint(RANGES.vdc, 'V')} error={error('vdc')} onChange={set('vdc')} />
+            <SliderField
+              label="Modulation index ma"
+              value={draft.ma}
+              min={SLIDER_LIMITS.ma.min}
+              max={draft.method === 'space-vector' ? Math.min(SLIDER_LIMITS.ma.max, 1.27) : SLIDER_LIMITS.ma.max}
+              step={0.01}
+              hint={draft.method === 'space-vector' ? 'ma = 2m/√3, above 0 up to 4/π ≈ 1.273 (six-step); above 2/√3 ≈ 1.155 is overmodulation' : 'above 0, up to 4; above 1 is overmodulation'}
+              error={error('ma', 'm', 'modulation.ma', 'modulation.m')}
+              onChange={set('ma')}
+            />
+            <SliderField label="Frequency ratio mf" value={draft.mf} min={SLIDER_LIMITS.mf.min} max={SLIDER_LIMITS.mf.max} step={1} hint={draft.method === 'space-vector' ? 'switching periods per fundamental period, whole number, 1 to 1000' : 'whole number, 1 to 1000; odd values give quarter-wave symmetry'} error={error('mf', 'frequencyRatio', 'modulation.frequencyRatio')} onChange={(v) => set('mf')(Math.round(v))} />
+          </>
+        )}
       </fieldset>
 
       <fieldset disabled={readOnly} className="flex flex-col gap-3">
@@ -118,6 +131,40 @@ export function StudyForm({ draft, onChange, readOnly, projects, saveError, prev
         ) : null}
       </fieldset>
     </form>
+  );
+}
+
+/** The stored pattern of a harmonic-elimination study, read-only: its angles come from the elimination page. */
+function PatternSummary({ pattern, vdc, error }: { pattern: ShePattern | null; vdc: number; error?: string | undefined }) {
+  if (!pattern) return <p role="alert" className="text-sm text-bad">{error ?? 'This study has no pattern.'}</p>;
+  return (
+    <div className="rounded border border-rule bg-panel px-3 py-2 text-sm" data-testid="she-pattern">
+      <p>
+        {pattern.kind === 'staircase' ? 'Multilevel staircase' : 'Two-level (bipolar)'} · DC level <span className="num">{formatNumber(vdc)} V</span>
+        {pattern.eliminate.length ? <> · eliminates orders <span className="num">{pattern.eliminate.join(', ')}</span></> : null}
+        {pattern.fundamental !== undefined ? <> · solved for <span className="num">{formatNumber(pattern.fundamental)} V</span></> : null}
+      </p>
+      <table className="mt-2 w-full text-left text-xs" aria-label="First-quarter switching angles">
+        <thead>
+          <tr>
+            <th className="font-semibold">Angle</th>
+            <th className="font-semibold">degrees</th>
+            <th className="font-semibold">radians</th>
+          </tr>
+        </thead>
+        <tbody className="num">
+          {pattern.angles.map((angle, k) => (
+            <tr key={k}>
+              <td>α{k + 1}</td>
+              <td>{formatNumber((angle * 180) / Math.PI, 6)}°</td>
+              <td>{angle.toFixed(9)}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <p className="mt-2 text-xs text-ink-soft">The angles were solved on the harmonic-elimination page; pick another point there to change them. Name, note, load and filter can be edited here.</p>
+      {error ? <p role="alert" className="mt-1 text-xs text-bad">{error}</p> : null}
+    </div>
   );
 }
 

@@ -9,6 +9,20 @@ import { draftFromStudy, type StudyDraft } from '../model/studyDraft';
 import { StudyCharts } from './StudyCharts';
 
 function parameterRows(draft: StudyDraft): [string, string][] {
+  if (draft.method === 'selective-harmonic-elimination' && draft.she) {
+    const she = draft.she;
+    return [
+      ['Method', draft.method],
+      ['Pattern', she.kind],
+      ['DC level', `${formatNumber(draft.vdc)} V`],
+      ['First-quarter angles', she.angles.map((a) => `${formatNumber((a * 180) / Math.PI, 6)}°`).join(', ')],
+      ['Eliminated orders', she.eliminate.join(', ') || '—'],
+      ...(she.fundamental !== undefined ? ([['Solved for', `${formatNumber(she.fundamental)} V peak`]] as [string, string][]) : []),
+      ['Fundamental', `${formatNumber(draft.frequency)} Hz`],
+      ['Load R', `${formatNumber(draft.r)} Ω`],
+      ['Load L', `${formatNumber(draft.l * 1e3)} mH`],
+    ];
+  }
   const rows: [string, string][] = [
     ['Method', draft.method],
     ...(draft.method === 'sine-triangle' ? ([['Bridge scheme', draft.scheme]] as [string, string][]) : []),

@@ -5,6 +5,7 @@ import {
   labelHarmonics,
   rlCurrentSeries,
   rlSteadyState,
+  sheWaveform,
   sineReference,
   sineTriangle,
   spaceVectorWaveforms,
@@ -26,8 +27,8 @@ export interface Preview {
   /** The analysed output voltage (volts) and its name. */
   output: Waveform;
   outputName: string;
-  /** Reference and carrier sampled over one period for the modulator chart (per unit of the carrier peak). */
-  modulator: { angles: number[]; reference: number[]; carrier: number[] | null };
+  /** Reference and carrier sampled over one period for the modulator chart (per unit of the carrier peak); null without a modulator (a stored pattern). */
+  modulator: { angles: number[]; reference: number[]; carrier: number[] | null } | null;
   /** Harmonics 0..maxOrder, labelled by carrier group and sideband. */
   spectrum: LabelledHarmonic[];
   maxOrder: number;
@@ -56,6 +57,16 @@ export function previewMaxOrder(mf: number): number {
   return Math.min(5000, Math.max(60, Math.ceil(3 * mf + 20)));
 }
 
+/** Highest order analysed for a harmonic-elimination pattern: well past the eliminated orders. */
+export function patternMaxOrder(eliminate: readonly number[]): number {
+  return Math.min(5000, Math.max(99, 2 * Math.max(0, ...eliminate) + 21));
+}
+
+/** The highest order a draft's preview (and the saved study's server spectrum) goes to. */
+export function draftMaxOrder(draft: StudyDraft): number {
+  return draft.method === 'selective-harmonic-elimination' ? patternMaxOrder(draft.she?.eliminate ?? []) : previewMaxOrder(draft.mf);
+}
+
 function fieldOf(error: unknown): string {
   const field = (error as { field?: unknown }).field;
   return typeof field === 'string' ? field : 'modulation';
@@ -71,8 +82,10 @@ interface Modulated {
   outputName: string;
   loadVoltage: Waveform;
   loadVoltageName: string;
-  reference: (theta: number) => number;
+  reference: ((theta: number) => number) | null;
   carrier: ((theta: number) => number) | null;
+  /** Carrier ratio for the spectrum's sideband labels (1: orders only). */
+  labelRatio: number;
 }
 
 function modulate(draft: StudyDraft): Modulated {
@@ -87,7 +100,14 @@ function modulate(draft: StudyDraft): Modulated {
       loadVoltageName: 'bridge output',
       reference: reference.value,
       carrier: (theta) => triangleCarrier(theta, { mf }),
+      labelRatio: mf,
     };
+  }
+  if (draft.method === 'selective-harmonic-elimination') {
+    const she = draft.she ?? { kind: 'bipolar' as const, angles: [] };
+    const output = sheWaveform(she.angles, { kind: she.kind, vdc });
+    const name = she.kind === 'staircase' ? 'Staircase output' : 'Bridge output';
+    return { output, outputName: name, loadVoltage: output, loadVoltageName: name.toLowerCase(), reference: null, carrier: null, labelRatio: 1 };
   }
   if (draft.method === 'three-phase') {
     const result = threePhase({ ma, mf, vdc, zeroSequence: draft.zeroSequence, sampling: draft.sampling });
@@ -102,6 +122,7 @@ function modulate(draft: StudyDraft): Modulated {
       loadVoltageName: 'phase a of a star load',
       reference: reference.value,
       carrier: (theta) => triangleCarrier(theta, { mf }),
+      labelRatio: mf,
     };
   }
   const result = spaceVectorWaveforms({ ma, vdc, frequencyRatio: mf, sequence: draft.sequence });
@@ -113,6 +134,7 @@ function modulate(draft: StudyDraft): Modulated {
     loadVoltageName: 'phase a of a star load',
     reference: reference.value,
     carrier: null,
+    labelRatio: mf,
   };
 }
 
@@ -127,9 +149,9 @@ export function computePreview(draft: StudyDraft, { points = 1200 }: { points?: 
   } catch (error) {
     return { preview: null, errors: [asFieldError(error)] };
   }
-  const maxOrder = previewMaxOrder(draft.mf);
+  const maxOrder = draftMaxOrder(draft);
   const raw = harmonics(modulated.output, maxOrder);
-  const spectrum = labelHarmonics(raw, draft.mf);
+  const spectrum = labelHarmonics(raw, modulated.labelRatio);
   const fundamental = raw[1]?.amplitude ?? 0;
   let totalThd = Number.NaN;
   let weightedThd = Number.NaN;
@@ -142,7 +164,7 @@ export function computePreview(draft: StudyDraft, { points = 1200 }: { points?: 
   const samples = Math.max(points, draft.mf * 8);
   const angles = Array.from({ length: samples + 1 }, (_, k) => (TAU * k) / samples);
   const { reference, carrier } = modulated;
-  const modulator = { angles, reference: angles.map((t) => reference(t)), carrier: carrier ? angles.map((t) => carrier(t)) : null };
+  const modulator = reference ? { angles, reference: angles.map((t) => reference(t)), carrier: carrier ? angles.map((t) => carrier(t)) : null } : null;
 
   const errors: PreviewFieldError[] = [];
   let load: Preview['load'] = null;
@@ -166,7 +188,7 @@ export function computePreview(draft: StudyDraft, { points = 1200 }: { points?: 
   if (draft.filterOn) {
     try {
       const out = filteredSpectrum(raw, { filter: { l: draft.filterL, c: draft.filterC, rDamping: draft.filterR }, fundamentalFrequency: draft.frequency });
-      filtered = { spectrum: labelHarmonics(out, draft.mf), thd: (out[1]?.amplitude ?? 0) > 0 ? thd(out) : Number.NaN };
+      filtered = { spectrum: labelHarmonics(out, modulated.labelRatio), thd: (out[1]?.amplitude ?? 0) > 0 ? thd(out) : Number.NaN };
     } catch (error) {
       errors.push(asFieldError(error, 'filter.'));
     }

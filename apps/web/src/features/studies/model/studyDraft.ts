@@ -1,7 +1,8 @@
+import { spaceVectorWaveforms } from '@pulsewright/modulation';
 import type { Study, StudyCreate } from '../api/studies';
 
 /** Methods the editor offers. The API's spec names the modulation by `method`. */
-export type StudyMethod = 'sine-triangle' | 'three-phase' | 'space-vector';
+export type StudyMethod = 'sine-triangle' | 'three-phase' | 'space-vector' | 'selective-harmonic-elimination';
 export type Scheme = 'bipolar' | 'unipolar';
 export type Sampling = 'natural' | 'regular-symmetric' | 'regular-asymmetric';
 export type ZeroSequenceChoice =
@@ -15,6 +16,17 @@ export type ZeroSequenceChoice =
   | 'clamp-120-bottom';
 export type SvSequence = 'seven-segment' | 'five-segment';
 
+/** A solved harmonic-elimination pattern: it is picked on the elimination page, not edited here. */
+export interface ShePattern {
+  kind: 'bipolar' | 'staircase';
+  /** First-quarter switching angles, radians, ascending in (0, π/2). */
+  angles: number[];
+  /** Odd orders the angles were solved to eliminate. */
+  eliminate: number[];
+  /** The fundamental they were solved for, peak volts (when one was set). */
+  fundamental?: number;
+}
+
 /** The editor's state: every field of a study, in the units the form shows. */
 export interface StudyDraft {
   name: string;
@@ -25,6 +37,8 @@ export interface StudyDraft {
   sampling: Sampling;
   zeroSequence: ZeroSequenceChoice;
   sequence: SvSequence;
+  /** The pattern of a harmonic-elimination study (null for the other methods). */
+  she: ShePattern | null;
   /** DC bus, volts. */
   vdc: number;
   ma: number;
@@ -69,6 +83,12 @@ export const METHOD_OPTIONS = [
   { value: 'space-vector', label: 'Space vector (regular sampled)' },
 ] as const;
 
+/** Shown only for a study saved from the harmonic-elimination page (its angles come from there). */
+export const SHE_METHOD_OPTION = { value: 'selective-harmonic-elimination', label: 'Harmonic elimination (solved angles)' } as const;
+
+/** Space vector's ma = 2m/√3 ends at six-step, 4/π (the API document's bound). */
+export const SPACE_VECTOR_MA_MAX = 1.2732395447351628;
+
 export const ZERO_SEQUENCE_OPTIONS: { value: ZeroSequenceChoice; label: string }[] = [
   { value: 'none', label: 'None (pure sine)' },
   { value: 'third-harmonic', label: 'Third harmonic (1/6)' },
@@ -90,6 +110,7 @@ export function defaultDraft(projectId = ''): StudyDraft {
     sampling: 'natural',
     zeroSequence: 'none',
     sequence: 'seven-segment',
+    she: null,
     vdc: 400,
     ma: 0.8,
     mf: 21,
@@ -112,6 +133,16 @@ const str = <T extends string>(value: unknown, fallback: T): T => (typeof value 
 export function draftFromStudy(study: Pick<Study, 'name' | 'note' | 'projectId' | 'modulation' | 'load' | 'filter'>): StudyDraft {
   const base = defaultDraft(study.projectId);
   const m = study.modulation as Record<string, unknown>;
+  const numbers = (value: unknown): number[] => (Array.isArray(value) ? value.filter((x): x is number => typeof x === 'number') : []);
+  const she: ShePattern | null =
+    m.method === 'selective-harmonic-elimination'
+      ? {
+          kind: m.kind === 'staircase' ? 'staircase' : 'bipolar',
+          angles: numbers(m.angles),
+          eliminate: numbers(m.eliminate),
+          ...(typeof m.fundamental === 'number' ? { fundamental: m.fundamental } : {}),
+        }
+      : null;
   return {
     ...base,
     name: study.name,
@@ -121,9 +152,10 @@ export function draftFromStudy(study: Pick<Study, 'name' | 'note' | 'projectId' 
     sampling: str(m.sampling, base.sampling),
     zeroSequence: str(m.zeroSequence, base.zeroSequence),
     sequence: str(m.sequence, base.sequence),
+    she,
     vdc: num(m.vdc, base.vdc),
-    ma: num(m.ma, base.ma),
-    mf: num(m.mf, base.mf),
+    ma: num(m.ma, spaceVectorMa(m) ?? base.ma),
+    mf: num(m.mf, num(m.frequencyRatio, base.mf)),
     frequency: num(study.load?.frequency, base.frequency),
     r: num(study.load?.r, base.r),
     l: num(study.load?.l, base.l),
@@ -136,12 +168,26 @@ export function draftFromStudy(study: Pick<Study, 'name' | 'note' | 'projectId' 
   };
 }
 
+/** A space-vector study stored with m (scripts may send it) read as ma, by the library. */
+function spaceVectorMa(m: Record<string, unknown>): number | undefined {
+  if (m.method !== 'space-vector' || typeof m.m !== 'number') return undefined;
+  try {
+    return spaceVectorWaveforms({ m: m.m, vdc: 1, frequencyRatio: 1 }).ma;
+  } catch {
+    return undefined;
+  }
+}
+
 /** The modulation object sent to the API for this draft. */
 export function modulationOf(draft: StudyDraft): Record<string, unknown> {
   const { method, ma, mf, vdc } = draft;
   if (method === 'sine-triangle') return { method, scheme: draft.scheme, ma, mf, vdc, sampling: draft.sampling };
   if (method === 'three-phase') return { method, ma, mf, vdc, zeroSequence: draft.zeroSequence, sampling: draft.sampling };
-  return { method, ma, mf, vdc, sequence: draft.sequence };
+  if (method === 'selective-harmonic-elimination') {
+    const she = draft.she ?? { kind: 'bipolar', angles: [], eliminate: [] };
+    return { method, kind: she.kind, vdc, angles: she.angles, eliminate: she.eliminate, ...(she.fundamental !== undefined ? { fundamental: she.fundamental } : {}) };
+  }
+  return { method, ma, vdc, frequencyRatio: mf, sequence: draft.sequence };
 }
 
 /** The body of a create (and, with baseRevision, an update). */
@@ -150,8 +196,7 @@ export function studyContentOf(draft: StudyDraft): StudyCreate {
     projectId: draft.projectId,
     name: draft.name,
     note: draft.note,
-    // The API document types `modulation` per method; methods beyond its list are refused
-    // there with a problem+json the form shows.
+    // Built per method above; the API document types `modulation` as a union by `method`.
     modulation: modulationOf(draft) as StudyCreate['modulation'],
     // The load also carries the fundamental frequency, so it is always sent.
     load: { r: draft.r, l: draft.l, frequency: draft.frequency, ...(draft.emf > 0 ? { emf: { amplitude: draft.emf, phase: draft.emfPhase } } : {}) },
@@ -171,8 +216,12 @@ export function draftRangeErrors(draft: StudyDraft): { field: string; message: s
   if (!draft.name.trim()) errors.push({ field: 'name', message: 'name must not be empty' });
   if (!draft.projectId) errors.push({ field: 'projectId', message: 'choose a project for the study' });
   check('vdc', draft.vdc, 0, 100_000, 'V', { minExclusive: true });
-  check('ma', draft.ma, 0, 4, '', { minExclusive: true });
-  check('mf', draft.mf, 1, 1000, '', { integer: true });
+  if (draft.method === 'selective-harmonic-elimination') {
+    if (!draft.she?.angles.length) errors.push({ field: 'angles', message: 'a harmonic-elimination study needs its solved angles (pick a point on the elimination page)' });
+  } else {
+    check('ma', draft.ma, 0, draft.method === 'space-vector' ? SPACE_VECTOR_MA_MAX : 4, '', { minExclusive: true });
+    check('mf', draft.mf, 1, 1000, '', { integer: true });
+  }
   check('frequency', draft.frequency, 0, 100_000, 'Hz', { minExclusive: true });
   check('r', draft.r, 0, 1_000_000, 'Ω', { minExclusive: true });
   check('l', draft.l, 0, 100, 'H', { minExclusive: true });
