@@ -290,6 +290,54 @@ export const scenarios: Scenario[] = [
     },
   },
   {
+    name: 'an engineer saves a picked harmonic-elimination point and a space-vector study, and sees their spectra',
+    async run(context) {
+      const page = await newPage(context);
+      await signIn(page, context.baseUrl, 'engineer@kestrel.example');
+      await page.getByRole('link', { name: 'Harmonic elimination' }).click();
+      await page.getByRole('button', { name: 'Find the branches' }).click();
+      await page.locator('svg[data-chart="line"] circle').first().waitFor({ timeout: 30_000 });
+      await page.locator('svg[data-chart="line"] circle').nth(8).click();
+      await page.getByText('Picked point').waitFor();
+      const project = page.getByLabel('Project');
+      const projectValue = await project.locator('option').nth(1).getAttribute('value').catch(() => null);
+      if (projectValue) await project.selectOption(projectValue);
+      const chosen = await project.evaluate((el) => (el as unknown as { value: string }).value);
+      const name = `E2E picked pattern ${Date.now()}`;
+      await page.getByLabel('Study name').fill(name);
+      await page.getByRole('button', { name: 'Save as study' }).click();
+      await page.waitForURL(/\/studies\/[0-9a-f-]{36}$/);
+      await page.getByRole('heading', { name }).waitFor();
+      const study = (await (await fetch(`${context.baseUrl}/api/v1/studies/${page.url().split('/').pop()}`, { headers: { Authorization: `Bearer ${await token(page)}` } })).json()) as { projectId: string; method: string };
+      assert(study.method === 'selective-harmonic-elimination' && study.projectId === chosen, `saved as a pattern study in the chosen project (${study.method}, ${study.projectId} vs ${chosen})`);
+      // Orders 5, 7 eliminated with the fundamental set: three first-quarter angles, listed read-only.
+      const rows = page.getByRole('table', { name: 'First-quarter switching angles' }).locator('tbody tr');
+      await rows.first().waitFor();
+      assert((await rows.count()) === 3, `three angles listed (got ${await rows.count()})`);
+      await page.getByText(/Saved revision on the server: THD/).waitFor();
+      await page.locator('svg[data-chart="spectrum"] rect[data-bar]').first().waitFor();
+      // The saved pattern still nulls the eliminated orders (Patel and Hoft, 1973).
+      for (const order of [5, 7]) {
+        const height = Number(await page.locator(`svg[data-chart="spectrum"] rect[data-order="${order}"]`).first().getAttribute('height'));
+        assert(height < 0.01, `order ${order} stays eliminated in the saved study (bar height ${height})`);
+      }
+      await screenshot(page, 'study-she');
+
+      await page.goto(`${context.baseUrl}/studies/new`);
+      await page.getByLabel('Name', { exact: true }).fill(`E2E space vector ${Date.now()}`);
+      await page.getByLabel('Method').selectOption('space-vector');
+      await page.getByLabel('Switching sequence').selectOption('five-segment');
+      await page.locator('svg[data-chart="spectrum"] rect[data-bar]').first().waitFor();
+      await page.getByRole('button', { name: 'Create study' }).click();
+      await page.waitForURL(/\/studies\/[0-9a-f-]{36}$/);
+      await page.getByText(/Revision 1 · space-vector/).waitFor();
+      await page.getByText(/Saved revision on the server: THD/).waitFor();
+      await page.getByText('Line-to-line a−b').first().waitFor();
+      await screenshot(page, 'study-space-vector');
+      await page.close();
+    },
+  },
+  {
     name: 'an admin invites a member, who follows the e-mailed link and joins with a password',
     async run(context) {
       const email = `newcomer-${Date.now()}@kestrel.example`;

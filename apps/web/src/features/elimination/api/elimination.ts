@@ -54,7 +54,8 @@ export function useSheJob(id: string | null) {
 export function pointSpectrum(kind: 'bipolar' | 'staircase', vdc: number, angles: number[], maxOrder = 49) {
   const waveform = sheWaveform(angles, { kind, vdc });
   const spectrum = harmonics(waveform, maxOrder);
-  return { spectrum: labelHarmonics(spectrum, 1), thd: thd(spectrum) };
+  // No carrier: a ratio past every analysed order labels each harmonic by its order alone.
+  return { spectrum: labelHarmonics(spectrum, 2 * maxOrder + 1), thd: thd(spectrum) };
 }
 
 export async function saveSheStudy(body: Schema<'StudyCreate'>) {

@@ -84,7 +84,7 @@ interface Modulated {
   loadVoltageName: string;
   reference: ((theta: number) => number) | null;
   carrier: ((theta: number) => number) | null;
-  /** Carrier ratio for the spectrum's sideband labels (1: orders only). */
+  /** Carrier ratio for the spectrum's sideband labels. */
   labelRatio: number;
 }
 
@@ -104,10 +104,12 @@ function modulate(draft: StudyDraft): Modulated {
     };
   }
   if (draft.method === 'selective-harmonic-elimination') {
-    const she = draft.she ?? { kind: 'bipolar' as const, angles: [] };
+    const she = draft.she ?? { kind: 'bipolar' as const, angles: [], eliminate: [] };
     const output = sheWaveform(she.angles, { kind: she.kind, vdc });
     const name = she.kind === 'staircase' ? 'Staircase output' : 'Bridge output';
-    return { output, outputName: name, loadVoltage: output, loadVoltageName: name.toLowerCase(), reference: null, carrier: null, labelRatio: 1 };
+    // No carrier: a ratio past every analysed order labels each harmonic by its order alone.
+    const labelRatio = 2 * patternMaxOrder(she.eliminate) + 1;
+    return { output, outputName: name, loadVoltage: output, loadVoltageName: name.toLowerCase(), reference: null, carrier: null, labelRatio };
   }
   if (draft.method === 'three-phase') {
     const result = threePhase({ ma, mf, vdc, zeroSequence: draft.zeroSequence, sampling: draft.sampling });
