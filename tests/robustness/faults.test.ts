@@ -1,7 +1,23 @@
-import { chmodSync, chownSync, closeSync, openSync, readdirSync, rmSync, statfsSync, writeSync } from 'node:fs';
+import {
+  chmodSync,
+  chownSync,
+  closeSync,
+  openSync,
+  readdirSync,
+  rmSync,
+  statfsSync,
+  writeSync,
+} from 'node:fs';
 import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
-import { call, DEMO, signInOver, startChildServer, tempDir, type ChildServer } from './support/server.js';
+import {
+  call,
+  DEMO,
+  signInOver,
+  startChildServer,
+  tempDir,
+  type ChildServer,
+} from './support/server.js';
 import { integrityCheck, mountSmallDisk, queryFile, type SmallDisk } from './support/sqlite.js';
 
 /**
@@ -41,7 +57,13 @@ interface Acknowledged {
 }
 
 /** Creates studies from `lanes` concurrent loops until `stop()` resolves; returns the acknowledged ones. */
-async function studyBurst(server: ChildServer, token: string, projectId: string, lanes: number, stop: Promise<void>) {
+async function studyBurst(
+  server: ChildServer,
+  token: string,
+  projectId: string,
+  lanes: number,
+  stop: Promise<void>,
+) {
   const acknowledged: Acknowledged[] = [];
   let stopped = false;
   let counter = 0;
@@ -51,7 +73,12 @@ async function studyBurst(server: ChildServer, token: string, projectId: string,
     while (!stopped) {
       const name = `burst study ${++counter}`;
       try {
-        const res = await call(server.baseUrl, 'POST', '/api/v1/studies', token, { projectId, name, modulation: MODULATION, note: 'x'.repeat(500) });
+        const res = await call(server.baseUrl, 'POST', '/api/v1/studies', token, {
+          projectId,
+          name,
+          modulation: MODULATION,
+          note: 'x'.repeat(500),
+        });
         if (res.status === 201) acknowledged.push({ id: (res.body as { id: string }).id, name });
         else refused++;
       } catch {
@@ -69,11 +96,16 @@ async function newProject(server: ChildServer, token: string): Promise<string> {
   return (res.body as { id: string }).id;
 }
 
-async function missingStudies(server: ChildServer, token: string, studies: Acknowledged[]): Promise<string[]> {
+async function missingStudies(
+  server: ChildServer,
+  token: string,
+  studies: Acknowledged[],
+): Promise<string[]> {
   const missing: string[] = [];
   for (const study of studies) {
     const res = await call(server.baseUrl, 'GET', `/api/v1/studies/${study.id}`, token);
-    if (res.status !== 200 || (res.body as { name: string }).name !== study.name) missing.push(study.id);
+    if (res.status !== 200 || (res.body as { name: string }).name !== study.name)
+      missing.push(study.id);
   }
   return missing;
 }
@@ -105,7 +137,9 @@ describe('faults', () => {
     const second = await start(file);
     const token2 = await signInOver(second.baseUrl, DEMO.admin);
     expect(await missingStudies(second, token2, acknowledged)).toEqual([]);
-    console.log(`faults: SIGKILL after ${sent} study writes sent, ${acknowledged.length} acknowledged, all ${acknowledged.length} present after restart, integrity_check ok`);
+    console.log(
+      `faults: SIGKILL after ${sent} study writes sent, ${acknowledged.length} acknowledged, all ${acknowledged.length} present after restart, integrity_check ok`,
+    );
   }, 60_000);
 
   it('a job running when the service is killed ends as failed after the restart, never stays running', async () => {
@@ -122,7 +156,10 @@ describe('faults', () => {
     expect(started.status).toBe(202);
     const job = started.body as { id: string; status: string };
     const before = await call(first.baseUrl, 'GET', `/api/v1/jobs/${job.id}`, token);
-    expect((before.body as { status: string }).status, 'the sweep must still be running when the service is killed').toBe('running');
+    expect(
+      (before.body as { status: string }).status,
+      'the sweep must still be running when the service is killed',
+    ).toBe('running');
     await first.kill();
 
     const second = await start(file);
@@ -160,32 +197,57 @@ describe('faults', () => {
       cleanups.push(() => server.kill());
       const token = await signInOver(server.baseUrl, DEMO.admin);
       const projectId = await newProject(server, token);
-      const before = await call(server.baseUrl, 'POST', '/api/v1/studies', token, { projectId, name: 'before read-only', modulation: MODULATION });
+      const before = await call(server.baseUrl, 'POST', '/api/v1/studies', token, {
+        projectId,
+        name: 'before read-only',
+        modulation: MODULATION,
+      });
       expect(before.status).toBe(201);
 
       const files = readdirSync(dir).map((f) => path.join(dir, f));
       for (const f of files) chmodSync(f, 0o444);
       chmodSync(dir, 0o555);
-      const refused = await call(server.baseUrl, 'POST', '/api/v1/studies', token, { projectId, name: 'during read-only', modulation: MODULATION });
-      const read = await call(server.baseUrl, 'GET', `/api/v1/studies/${(before.body as { id: string }).id}`, token);
+      const refused = await call(server.baseUrl, 'POST', '/api/v1/studies', token, {
+        projectId,
+        name: 'during read-only',
+        modulation: MODULATION,
+      });
+      const read = await call(
+        server.baseUrl,
+        'GET',
+        `/api/v1/studies/${(before.body as { id: string }).id}`,
+        token,
+      );
       chmodSync(dir, 0o755);
       for (const f of files) chmodSync(f, 0o644);
 
       expect.soft(read.status, 'reads while the file is read-only').toBe(200);
       expect.soft(refused.type).toMatch(/^application\/problem\+json/);
-      expect.soft({ status: refused.status, detail: (refused.body as { detail?: string }).detail }).toMatchObject({
-        status: 503,
-        detail: expect.stringMatching(/read-only|read only|cannot (be )?writ|storage/i),
-      });
+      expect
+        .soft({ status: refused.status, detail: (refused.body as { detail?: string }).detail })
+        .toMatchObject({
+          status: 503,
+          detail: expect.stringMatching(/read-only|read only|cannot (be )?writ|storage/i),
+        });
       await server.stop();
       expect(await integrityCheck(file)).toEqual(['ok']);
       const again = await startChildServer({ databaseUrl: `sqlite:${file}`, uid: NOBODY });
       cleanups.push(() => again.kill());
       const token2 = await signInOver(again.baseUrl, DEMO.admin);
-      expect(await missingStudies(again, token2, [{ id: (before.body as { id: string }).id, name: 'before read-only' }])).toEqual([]);
-      const after = await call(again.baseUrl, 'POST', '/api/v1/studies', token2, { projectId, name: 'after read-only', modulation: MODULATION });
+      expect(
+        await missingStudies(again, token2, [
+          { id: (before.body as { id: string }).id, name: 'before read-only' },
+        ]),
+      ).toEqual([]);
+      const after = await call(again.baseUrl, 'POST', '/api/v1/studies', token2, {
+        projectId,
+        name: 'after read-only',
+        modulation: MODULATION,
+      });
       expect(after.status).toBe(201);
-      console.log(`faults: read-only file; write answered ${refused.status}: ${(refused.body as { detail?: string }).detail} (service log: ${server.output().match(/SQLITE_\w+[^\n]*/)?.[0] ?? 'no SQLite error'})`);
+      console.log(
+        `faults: read-only file; write answered ${refused.status}: ${(refused.body as { detail?: string }).detail} (service log: ${server.output().match(/SQLITE_\w+[^\n]*/)?.[0] ?? 'no SQLite error'})`,
+      );
     }, 60_000);
 
     it('a full disk: writes answer 503 with a clear message, acknowledged writes and the file survive', async () => {
@@ -213,7 +275,12 @@ describe('faults', () => {
       let refusal: { status: number; type: string; body: unknown } | undefined;
       for (let i = 0; i < 400 && !refusal; i++) {
         const name = `filling ${i}`;
-        const res = await call(server.baseUrl, 'POST', '/api/v1/studies', token, { projectId, name, modulation: MODULATION, note: 'n'.repeat(2000) });
+        const res = await call(server.baseUrl, 'POST', '/api/v1/studies', token, {
+          projectId,
+          name,
+          modulation: MODULATION,
+          note: 'n'.repeat(2000),
+        });
         if (res.status === 201) acknowledged.push({ id: (res.body as { id: string }).id, name });
         else refusal = res;
       }
@@ -221,14 +288,22 @@ describe('faults', () => {
       rmSync(filler);
       const detail = (refusal?.body as { detail?: string } | undefined)?.detail;
       expect.soft(refusal?.type).toMatch(/^application\/problem\+json/);
-      expect.soft({ status: refusal?.status, detail }).toMatchObject({ status: 503, detail: expect.stringMatching(/full|space|storage/i) });
+      expect
+        .soft({ status: refusal?.status, detail })
+        .toMatchObject({ status: 503, detail: expect.stringMatching(/full|space|storage/i) });
       // With room again the same process writes again, and nothing acknowledged was lost.
-      const after = await call(server.baseUrl, 'POST', '/api/v1/studies', token, { projectId, name: 'after the disk was freed', modulation: MODULATION });
+      const after = await call(server.baseUrl, 'POST', '/api/v1/studies', token, {
+        projectId,
+        name: 'after the disk was freed',
+        modulation: MODULATION,
+      });
       expect.soft(after.status, 'a write once there is room again').toBe(201);
       expect(await missingStudies(server, token, acknowledged)).toEqual([]);
       await server.stop();
       expect(await integrityCheck(file)).toEqual(['ok']);
-      console.log(`faults: full disk after ${acknowledged.length} acknowledged writes; refusal ${refusal?.status}: ${detail} (service log: ${server.output().match(/SQLITE_\w+[^\n]*/)?.[0] ?? 'no SQLite error'})`);
+      console.log(
+        `faults: full disk after ${acknowledged.length} acknowledged writes; refusal ${refusal?.status}: ${detail} (service log: ${server.output().match(/SQLITE_\w+[^\n]*/)?.[0] ?? 'no SQLite error'})`,
+      );
     }, 90_000);
   });
 });

@@ -4,7 +4,12 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { loadOpenApiDocument } from '../../apps/api/src/openapi.js';
 import { inProcessApp, type InProcessApp } from './support/inProcess.js';
-import { operationsOf, requestArbitrary, type FuzzRequest, type KnownIds } from './support/requests.js';
+import {
+  operationsOf,
+  requestArbitrary,
+  type FuzzRequest,
+  type KnownIds,
+} from './support/requests.js';
 import { SchemaTools, type Document } from './support/schemaArbitrary.js';
 import { DEMO, DEMO_PASSWORD } from './support/server.js';
 
@@ -34,7 +39,15 @@ let setup: InProcessApp;
 let server: Server;
 let adminToken: string;
 let adminUser: { id: string; teamId: string };
-const ids: KnownIds = { projects: [], studies: [], captures: [], jobs: [], apiKeys: [], members: [], invitations: [] };
+const ids: KnownIds = {
+  projects: [],
+  studies: [],
+  captures: [],
+  jobs: [],
+  apiKeys: [],
+  members: [],
+  invitations: [],
+};
 const loggedErrors: string[] = [];
 const originalConsoleError = console.error;
 
@@ -42,35 +55,52 @@ beforeAll(async () => {
   setup = await inProcessApp('fuzz', { logErrors: true });
   // 5xx are logged by the service; keep them to explain failures instead of printing them.
   console.error = (...args: unknown[]) => {
-    loggedErrors.push(args.map((a) => (a instanceof Error ? `${a.name}: ${a.message}` : String(a))).join(' '));
+    loggedErrors.push(
+      args.map((a) => (a instanceof Error ? `${a.name}: ${a.message}` : String(a))).join(' '),
+    );
   };
   server = createServer(setup.app).listen(0, '127.0.0.1');
   await new Promise((resolve) => server.once('listening', resolve));
-  const login = await request(server).post('/api/v1/auth/login').send({ email: DEMO.admin, password: DEMO_PASSWORD });
+  const login = await request(server)
+    .post('/api/v1/auth/login')
+    .send({ email: DEMO.admin, password: DEMO_PASSWORD });
   expect(login.status).toBe(200);
   adminToken = login.body.token;
   const auth = { Authorization: `Bearer ${adminToken}` };
   const me = await request(server).get('/api/v1/me').set(auth);
   adminUser = { id: me.body.user.id, teamId: me.body.team.id };
   // Things that exist, so valid requests reach the services and not only their 404s.
-  await request(server).post('/api/v1/jobs/ma-sweeps').set(auth).send({
-    modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8, mf: 15, vdc: 100 },
-    ma: { from: 0.2, to: 1, points: 5 },
-    maxOrder: 50,
-  });
-  await request(server).post('/api/v1/api-keys').set(auth).send({ name: 'fuzz key', role: 'viewer' });
-  await request(server).post('/api/v1/invitations').set(auth).send({ email: 'fuzz.invite@kestrel.example', role: 'viewer' });
+  await request(server)
+    .post('/api/v1/jobs/ma-sweeps')
+    .set(auth)
+    .send({
+      modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8, mf: 15, vdc: 100 },
+      ma: { from: 0.2, to: 1, points: 5 },
+      maxOrder: 50,
+    });
+  await request(server)
+    .post('/api/v1/api-keys')
+    .set(auth)
+    .send({ name: 'fuzz key', role: 'viewer' });
+  await request(server)
+    .post('/api/v1/invitations')
+    .set(auth)
+    .send({ email: 'fuzz.invite@kestrel.example', role: 'viewer' });
   await setup.app.services.jobs.idle();
-  const list = async (path: string) => (await request(server).get(path).set(auth)).body as Record<string, unknown>[];
+  const list = async (path: string) =>
+    (await request(server).get(path).set(auth)).body as Record<string, unknown>[];
   ids.projects = (await list('/api/v1/projects')).map((p) => String(p.id));
   ids.studies = (await list('/api/v1/studies')).map((s) => String(s.id));
   ids.captures = (await list('/api/v1/captures')).map((c) => String(c.id));
   ids.jobs = (await list('/api/v1/jobs')).map((j) => String(j.id));
   ids.apiKeys = (await list('/api/v1/api-keys')).map((k) => String(k.id));
   // The admin's own membership is left out, so the run keeps an admin to act as.
-  ids.members = (await list('/api/v1/members')).map((m) => String((m.user as { id: string }).id)).filter((id) => id !== adminUser.id);
+  ids.members = (await list('/api/v1/members'))
+    .map((m) => String((m.user as { id: string }).id))
+    .filter((id) => id !== adminUser.id);
   ids.invitations = (await list('/api/v1/invitations')).map((i) => String(i.id));
-  for (const [kind, values] of Object.entries(ids)) expect(values.length, `seeded ${kind}`).toBeGreaterThan(0);
+  for (const [kind, values] of Object.entries(ids))
+    expect(values.length, `seeded ${kind}`).toBeGreaterThan(0);
 }, 60_000);
 
 afterAll(async () => {
@@ -86,15 +116,23 @@ async function send(req: FuzzRequest): Promise<Outcome> {
   let test = agent[method](req.url);
   if (req.auth === 'admin') {
     // Signing out would end the token the rest of the run uses; a fresh session is signed out instead.
-    const token = req.operationId === 'logout' ? (await setup.app.services.auth.startSession(adminUser.id, adminUser.teamId)).token : adminToken;
+    const token =
+      req.operationId === 'logout'
+        ? (await setup.app.services.auth.startSession(adminUser.id, adminUser.teamId)).token
+        : adminToken;
     test = test.set('Authorization', `Bearer ${token}`);
   } else if (req.auth === 'garbage' && req.authorization !== undefined) {
     test = test.set('Authorization', req.authorization);
   }
   for (const [name, value] of Object.entries(req.headers ?? {})) test = test.set(name, value);
   if (req.multipart) {
-    for (const [name, value] of Object.entries(req.multipart.fields)) test = test.field(name, value);
-    for (const file of req.multipart.files) test = test.attach(file.field, file.make(), { filename: file.fileName, contentType: file.contentType });
+    for (const [name, value] of Object.entries(req.multipart.fields))
+      test = test.field(name, value);
+    for (const file of req.multipart.files)
+      test = test.attach(file.field, file.make(), {
+        filename: file.fileName,
+        contentType: file.contentType,
+      });
   } else if (req.body !== undefined) {
     test = test.set('Content-Type', req.contentType ?? '').send(req.body);
   }
@@ -122,8 +160,14 @@ function check(o: Outcome): string | undefined {
   const { request: req, status, problem } = o;
   if (status >= 500) return `status ${status}: ${problem?.detail ?? ''}`;
   if (status >= 400) {
-    if (!o.type.startsWith('application/problem+json')) return `status ${status} with content type ${o.type || '(none)'}, not application/problem+json`;
-    if (!problem || problem.status !== status || typeof problem.detail !== 'string' || !Array.isArray(problem.errors)) {
+    if (!o.type.startsWith('application/problem+json'))
+      return `status ${status} with content type ${o.type || '(none)'}, not application/problem+json`;
+    if (
+      !problem ||
+      problem.status !== status ||
+      typeof problem.detail !== 'string' ||
+      !Array.isArray(problem.errors)
+    ) {
       return `status ${status} with a problem body lacking status/detail/errors`;
     }
   }
@@ -131,27 +175,37 @@ function check(o: Outcome): string | undefined {
     // Without a valid token the only right answers are 401, a 404 for a path no route matches,
     // or the body parser's 400/413/415 for a body that is malformed as a whole (it runs first).
     const bodyParserRefusal =
-      [400, 413, 415].includes(status) && ((problem?.errors ?? []).some((e) => e.path === 'body') || /body/i.test(problem?.detail ?? ''));
-    const ok = status === 401 || (req.variant.kind === 'invalid-path' && status === 404) || bodyParserRefusal;
+      [400, 413, 415].includes(status) &&
+      ((problem?.errors ?? []).some((e) => e.path === 'body') ||
+        /body/i.test(problem?.detail ?? ''));
+    const ok =
+      status === 401 ||
+      (req.variant.kind === 'invalid-path' && status === 404) ||
+      bodyParserRefusal;
     return ok ? undefined : `no valid token but status ${status}`;
   }
   const named = (field: string): boolean => {
     const errors = problem?.errors ?? [];
     const leaf = field.split('.').pop() ?? field;
     return (
-      errors.some((e) => typeof e.path === 'string' && (e.path === field || e.path.startsWith(`${field}.`) || e.path.split('.').includes(leaf))) ||
-      (problem?.detail ?? '').includes(field)
+      errors.some(
+        (e) =>
+          typeof e.path === 'string' &&
+          (e.path === field || e.path.startsWith(`${field}.`) || e.path.split('.').includes(leaf)),
+      ) || (problem?.detail ?? '').includes(field)
     );
   };
   const v = req.variant;
   switch (v.kind) {
     case 'invalid-field':
       if (status < 400) return `invalid ${v.field} (${v.mutation}) accepted with ${status}`;
-      if (status === 400 && !named(v.field)) return `400 does not name ${v.field} (${v.mutation}): ${JSON.stringify(problem?.errors?.slice(0, 3))}`;
+      if (status === 400 && !named(v.field))
+        return `400 does not name ${v.field} (${v.mutation}): ${JSON.stringify(problem?.errors?.slice(0, 3))}`;
       return undefined;
     case 'invalid-query':
       if (status < 400) return `invalid query ${v.what} accepted with ${status}`;
-      if (status === 400 && !named(v.field)) return `400 does not name query ${v.field}: ${JSON.stringify(problem?.errors?.slice(0, 3))}`;
+      if (status === 400 && !named(v.field))
+        return `400 does not name query ${v.field}: ${JSON.stringify(problem?.errors?.slice(0, 3))}`;
       return undefined;
     case 'invalid-path':
       if (status < 400) return `invalid path ${v.field} accepted with ${status}`;
@@ -159,21 +213,28 @@ function check(o: Outcome): string | undefined {
       return undefined;
     case 'invalid-upload':
       if (status < 400) return `invalid upload (${v.what}) accepted with ${status}`;
-      if (status === 400 && !named(v.field)) return `400 does not name ${v.field} (${v.what}): ${JSON.stringify(problem?.errors?.slice(0, 3))}`;
+      if (status === 400 && !named(v.field))
+        return `400 does not name ${v.field} (${v.what}): ${JSON.stringify(problem?.errors?.slice(0, 3))}`;
       return undefined;
     case 'stray-body':
       // A body sent to an operation that takes none is ignored or refused, never a 5xx (checked above).
       return undefined;
     case 'invalid-body':
       if (status < 400) return `invalid body (${v.what}) accepted with ${status}`;
-      if (status === 400 && !(problem?.errors ?? []).some((e) => typeof e.path === 'string' && e.path !== '')) {
+      if (
+        status === 400 &&
+        !(problem?.errors ?? []).some((e) => typeof e.path === 'string' && e.path !== '')
+      ) {
         return `400 for ${v.what} names no field: ${problem?.detail}`;
       }
       return undefined;
     case 'valid':
       // A valid request may still be refused by the service's own rules (409, 404, a library
       // range such as a carrier that is no whole multiple); a 400 must still name a field.
-      if (status === 400 && !(problem?.errors ?? []).some((e) => typeof e.path === 'string' && e.path !== '')) {
+      if (
+        status === 400 &&
+        !(problem?.errors ?? []).some((e) => typeof e.path === 'string' && e.path !== '')
+      ) {
         return `400 for a schema-valid request names no field: ${problem?.detail}`;
       }
       return undefined;
@@ -189,7 +250,10 @@ describe('fuzzing every operation of the OpenAPI document', () => {
     const outcomes: Outcome[] = [];
     const started = Date.now();
     for (const [index, op] of operations.entries()) {
-      const samples = fc.sample(requestArbitrary(tools, op, ids), { seed: SEED + index, numRuns: perOperation });
+      const samples = fc.sample(requestArbitrary(tools, op, ids), {
+        seed: SEED + index,
+        numRuns: perOperation,
+      });
       for (const req of samples) outcomes.push(await send(req));
     }
     const seconds = (Date.now() - started) / 1000;
@@ -197,10 +261,16 @@ describe('fuzzing every operation of the OpenAPI document', () => {
     const byStatus = new Map<number, number>();
     for (const o of outcomes) byStatus.set(o.status, (byStatus.get(o.status) ?? 0) + 1);
     const byKind = new Map<string, number>();
-    for (const o of outcomes) byKind.set(o.request.variant.kind, (byKind.get(o.request.variant.kind) ?? 0) + 1);
+    for (const o of outcomes)
+      byKind.set(o.request.variant.kind, (byKind.get(o.request.variant.kind) ?? 0) + 1);
     const accepted = new Map<string, number>();
     for (const o of outcomes) {
-      if (o.request.variant.kind === 'valid' && (o.request.auth === 'admin' || o.request.role === 'public') && o.status < 300) accepted.set(o.request.operationId, (accepted.get(o.request.operationId) ?? 0) + 1);
+      if (
+        o.request.variant.kind === 'valid' &&
+        (o.request.auth === 'admin' || o.request.role === 'public') &&
+        o.status < 300
+      )
+        accepted.set(o.request.operationId, (accepted.get(o.request.operationId) ?? 0) + 1);
     }
     const failures = outcomes.filter((o) => o.failure);
     const grouped = new Map<string, Outcome[]>();
@@ -223,17 +293,39 @@ describe('fuzzing every operation of the OpenAPI document', () => {
         return `  ${list.length} × ${key}\n      e.g. ${JSON.stringify(first.request.variant)} ${first.request.method.toUpperCase()} ${first.request.url.slice(0, 120)} files ${first.request.multipart?.files.map((f) => f.fileName).join(',') ?? '-'} body ${(first.request.body ?? '').slice(0, 400)}`;
       }),
       ...(loggedErrors.length
-        ? ['service logged (distinct causes):', ...[...new Set(loggedErrors.map((e) => e.replace(/^.*? failed: /, '').slice(0, 200)))].slice(0, 30).map((e) => `  ${e}`)]
+        ? [
+            'service logged (distinct causes):',
+            ...[...new Set(loggedErrors.map((e) => e.replace(/^.*? failed: /, '').slice(0, 200)))]
+              .slice(0, 30)
+              .map((e) => `  ${e}`),
+          ]
         : []),
     ];
     console.log(lines.join('\n'));
 
     expect(outcomes.length).toBeGreaterThanOrEqual(5_000);
     // Every operation was exercised, valid and invalid, with and without a token where it needs one.
-    for (const op of operations) expect(outcomes.some((o) => o.request.operationId === op.operationId), op.operationId).toBe(true);
+    for (const op of operations)
+      expect(
+        outcomes.some((o) => o.request.operationId === op.operationId),
+        op.operationId,
+      ).toBe(true);
     // Valid requests built from the schemas are accepted (not only refused) by the routes where
     // random valid input can succeed; a route that refuses all of them has a schema/route mismatch.
-    for (const id of ['computeSpectrum', 'computeWaveform', 'computeLoadCurrent', 'computeLcFilter', 'computeSpaceVector', 'createProject', 'createStudy', 'createApiKey', 'uploadCapture', 'listStudies', 'getStudy', 'getHealth']) {
+    for (const id of [
+      'computeSpectrum',
+      'computeWaveform',
+      'computeLoadCurrent',
+      'computeLcFilter',
+      'computeSpaceVector',
+      'createProject',
+      'createStudy',
+      'createApiKey',
+      'uploadCapture',
+      'listStudies',
+      'getStudy',
+      'getHealth',
+    ]) {
       expect(accepted.get(id) ?? 0, `schema-valid requests accepted by ${id}`).toBeGreaterThan(0);
     }
     expect([...grouped.keys()]).toEqual([]);

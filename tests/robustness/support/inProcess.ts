@@ -16,7 +16,10 @@ export interface InProcessApp {
 }
 
 /** createApp on a fresh temporary SQLite file, seeded with the demo, bcrypt cost 4. */
-export async function inProcessApp(label: string, overrides: Partial<AppConfig> = {}): Promise<InProcessApp> {
+export async function inProcessApp(
+  label: string,
+  overrides: Partial<AppConfig> = {},
+): Promise<InProcessApp> {
   const dir = tempDir(label);
   const file = path.join(dir, 'robustness.sqlite');
   const app = await createApp({

@@ -20,7 +20,10 @@ export interface Operation {
 }
 
 /** Identifiers of things that exist in the fuzzed database, by what the path names. */
-export type KnownIds = Record<'projects' | 'studies' | 'captures' | 'jobs' | 'apiKeys' | 'members' | 'invitations', string[]>;
+export type KnownIds = Record<
+  'projects' | 'studies' | 'captures' | 'jobs' | 'apiKeys' | 'members' | 'invitations',
+  string[]
+>;
 
 export type Auth = 'admin' | 'none' | 'garbage';
 
@@ -59,7 +62,9 @@ export interface FuzzRequest {
 const dotted = (path: (string | number)[]): string => path.join('.');
 
 /** Every operation of the document (method, path, operation and its path item). */
-export function operationsOf(document: { paths: Record<string, Record<string, unknown>> }): Operation[] {
+export function operationsOf(document: {
+  paths: Record<string, Record<string, unknown>>;
+}): Operation[] {
   const result: Operation[] = [];
   for (const [path, item] of Object.entries(document.paths)) {
     for (const method of ['get', 'put', 'post', 'patch', 'delete']) {
@@ -97,12 +102,17 @@ interface Parameter {
 }
 
 function parametersOf(tools: SchemaTools, op: Operation): Parameter[] {
-  const all = [...((op.pathItem.parameters as Schema[]) ?? []), ...((op.operation.parameters as Schema[]) ?? [])];
+  const all = [
+    ...((op.pathItem.parameters as Schema[]) ?? []),
+    ...((op.operation.parameters as Schema[]) ?? []),
+  ];
   return all.map((p) => tools.deref(p) as unknown as Parameter);
 }
 
 function jsonBodySchema(op: Operation): Schema | undefined {
-  const content = (op.operation.requestBody as { content?: Record<string, { schema?: Schema }> } | undefined)?.content;
+  const content = (
+    op.operation.requestBody as { content?: Record<string, { schema?: Schema }> } | undefined
+  )?.content;
   return content?.['application/json']?.schema;
 }
 
@@ -110,7 +120,14 @@ function bodyRequired(op: Operation): boolean {
   return (op.operation.requestBody as { required?: boolean } | undefined)?.required === true;
 }
 
-const INVALID_IDS = ['not-a-uuid', '..%2F..%2Fetc%2Fpasswd', '%E2%80%AEdi', 'x'.repeat(3000), "1'%20OR%20'1'%3D'1", '00000000-0000-0000-0000-00000000000g'];
+const INVALID_IDS = [
+  'not-a-uuid',
+  '..%2F..%2Fetc%2Fpasswd',
+  '%E2%80%AEdi',
+  'x'.repeat(3000),
+  "1'%20OR%20'1'%3D'1",
+  '00000000-0000-0000-0000-00000000000g',
+];
 
 const GARBAGE_AUTH = [
   'Bearer pws_AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA',
@@ -123,8 +140,18 @@ const GARBAGE_AUTH = [
 ];
 
 /** Bodies that are wrong as a whole: empty, not JSON, not an object, the wrong media type, too big. */
-const WHOLE_BODY_CASES: { what: string; contentType?: string; body?: string; headers?: Record<string, string> }[] = [
-  { what: 'unknown content encoding', contentType: 'application/json', body: '{"name":"x"}', headers: { 'Content-Encoding': 'x-unknown' } },
+const WHOLE_BODY_CASES: {
+  what: string;
+  contentType?: string;
+  body?: string;
+  headers?: Record<string, string>;
+}[] = [
+  {
+    what: 'unknown content encoding',
+    contentType: 'application/json',
+    body: '{"name":"x"}',
+    headers: { 'Content-Encoding': 'x-unknown' },
+  },
   { what: 'empty json body', contentType: 'application/json', body: '' },
   { what: 'json null', contentType: 'application/json', body: 'null' },
   { what: 'json array', contentType: 'application/json', body: '[1,2,3]' },
@@ -136,8 +163,16 @@ const WHOLE_BODY_CASES: { what: string; contentType?: string; body?: string; hea
   { what: 'xml body', contentType: 'application/xml', body: '<study><name>x</name></study>' },
   { what: 'form body', contentType: 'application/x-www-form-urlencoded', body: 'name=x&ma=0.8' },
   { what: 'no content type', body: '{"name":"x"}' },
-  { what: 'body over 1 MB', contentType: 'application/json', body: `{"name":"${'a'.repeat(1_100_000)}"}` },
-  { what: 'json charset latin1', contentType: 'application/json; charset=latin1', body: '{"name":"x"}' },
+  {
+    what: 'body over 1 MB',
+    contentType: 'application/json',
+    body: `{"name":"${'a'.repeat(1_100_000)}"}`,
+  },
+  {
+    what: 'json charset latin1',
+    contentType: 'application/json; charset=latin1',
+    body: '{"name":"x"}',
+  },
 ];
 
 /** A plausible bench capture CSV (header variants, 16–120 rows, even time step). */
@@ -145,7 +180,12 @@ const captureCsv = fc
   .record({
     rows: fc.integer({ min: 16, max: 120 }),
     step: fc.double({ min: 1e-7, max: 1e-2, noNaN: true }),
-    header: fc.constantFrom(['time', 'voltage'], ['t', 'v'], ['time_s', 'voltage_v', 'current_a'], ['Time (s)', 'Voltage (V)']),
+    header: fc.constantFrom(
+      ['time', 'voltage'],
+      ['t', 'v'],
+      ['time_s', 'voltage_v', 'current_a'],
+      ['Time (s)', 'Voltage (V)'],
+    ),
     delimiter: fc.constantFrom(',', ';', '\t'),
     amplitude: fc.double({ min: 0.1, max: 1000, noNaN: true }),
   })
@@ -159,9 +199,23 @@ const captureCsv = fc
     return `${lines.join('\n')}\n`;
   });
 
-const PNG = Buffer.from('89504e470d0a1a0a0000000d49484452000000010000000108060000001f15c4890000000d4944415478da6364f8cf00000301010027fd5c8a0000000049454e44ae426082', 'hex');
+const PNG = Buffer.from(
+  '89504e470d0a1a0a0000000d49484452000000010000000108060000001f15c4890000000d4944415478da6364f8cf00000301010027fd5c8a0000000049454e44ae426082',
+  'hex',
+);
 
-const FILE_NAMES = ['capture.csv', '../../../etc/passwd', '..\\..\\windows\\system32\\x.csv', 'a\u0000b.csv', '\u202egpj.csv', '.htaccess', `${'long'.repeat(100)}.csv`, 'résumé 💥.csv', 'CON.csv', ''];
+const FILE_NAMES = [
+  'capture.csv',
+  '../../../etc/passwd',
+  '..\\..\\windows\\system32\\x.csv',
+  'a\u0000b.csv',
+  '\u202egpj.csv',
+  '.htaccess',
+  `${'long'.repeat(100)}.csv`,
+  'résumé 💥.csv',
+  'CON.csv',
+  '',
+];
 
 type UploadParts = Pick<FuzzRequest, 'contentType' | 'body' | 'multipart' | 'variant'>;
 
@@ -170,44 +224,113 @@ function uploadRequest(ids: KnownIds, tools: SchemaTools): fc.Arbitrary<UploadPa
   const fields = fc.record(
     {
       name: validArbitrary(tools, nameSchema) as fc.Arbitrary<string>,
-      projectId: fc.oneof(fc.constantFrom(...(ids.projects.length ? ids.projects : ['00000000-0000-4000-8000-000000000000'])), fc.uuid()),
+      projectId: fc.oneof(
+        fc.constantFrom(
+          ...(ids.projects.length ? ids.projects : ['00000000-0000-4000-8000-000000000000']),
+        ),
+        fc.uuid(),
+      ),
     },
     { requiredKeys: [] },
   );
-  const valid = fc.record({ csv: captureCsv, fields, fileName: fc.constantFrom(...FILE_NAMES) }).map(({ csv, fields: f, fileName }): UploadParts => ({
-    multipart: { fields: f as Record<string, string>, files: [{ field: 'file', fileName, contentType: 'text/csv', make: () => Buffer.from(csv, 'utf8') }] },
-    variant: { kind: 'valid' } as Variant,
-  }));
-  const badFile = (what: string, make: () => Buffer, fileName = 'capture.csv', contentType = 'text/csv') =>
+  const valid = fc
+    .record({ csv: captureCsv, fields, fileName: fc.constantFrom(...FILE_NAMES) })
+    .map(({ csv, fields: f, fileName }): UploadParts => ({
+      multipart: {
+        fields: f as Record<string, string>,
+        files: [
+          {
+            field: 'file',
+            fileName,
+            contentType: 'text/csv',
+            make: () => Buffer.from(csv, 'utf8'),
+          },
+        ],
+      },
+      variant: { kind: 'valid' } as Variant,
+    }));
+  const badFile = (
+    what: string,
+    make: () => Buffer,
+    fileName = 'capture.csv',
+    contentType = 'text/csv',
+  ) =>
     fc.constant<UploadParts>({
       multipart: { fields: {}, files: [{ field: 'file', fileName, contentType, make }] },
       variant: { kind: 'invalid-upload', what, field: 'file' } as Variant,
     });
   const invalid = fc.oneof(
     badFile('png renamed .csv', () => PNG, 'plot.csv'),
-    badFile('random binary', () => Buffer.from(Array.from({ length: 2048 }, (_, i) => (i * 131 + 7) % 256))),
+    badFile('random binary', () =>
+      Buffer.from(Array.from({ length: 2048 }, (_, i) => (i * 131 + 7) % 256)),
+    ),
     badFile('empty file', () => Buffer.alloc(0)),
     badFile('latin-1 text', () => Buffer.from('time,voltage\n0,1\n', 'latin1').fill(0xe9, 5, 6)),
     badFile('too few rows', () => Buffer.from('time,voltage\n0,1\n1,2\n')),
-    badFile('uneven time', () => Buffer.from(`time,voltage\n${Array.from({ length: 20 }, (_, k) => `${k * k},1`).join('\n')}\n`)),
-    badFile('unknown header', () => Buffer.from(`when,volts2\n${Array.from({ length: 20 }, (_, k) => `${k},1`).join('\n')}\n`)),
-    badFile('formula cells', () => Buffer.from(`time,voltage\n${Array.from({ length: 20 }, (_, k) => `${k},=1+${k}`).join('\n')}\n`)),
+    badFile('uneven time', () =>
+      Buffer.from(
+        `time,voltage\n${Array.from({ length: 20 }, (_, k) => `${k * k},1`).join('\n')}\n`,
+      ),
+    ),
+    badFile('unknown header', () =>
+      Buffer.from(`when,volts2\n${Array.from({ length: 20 }, (_, k) => `${k},1`).join('\n')}\n`),
+    ),
+    badFile('formula cells', () =>
+      Buffer.from(
+        `time,voltage\n${Array.from({ length: 20 }, (_, k) => `${k},=1+${k}`).join('\n')}\n`,
+      ),
+    ),
     badFile('over 5 MB', () => Buffer.alloc(5 * 1024 * 1024 + 10, '0,1\n')),
-    badFile('json in a csv', () => Buffer.from('{"time":[0,1],"voltage":[1,2]}'), 'x.csv', 'application/json'),
+    badFile(
+      'json in a csv',
+      () => Buffer.from('{"time":[0,1],"voltage":[1,2]}'),
+      'x.csv',
+      'application/json',
+    ),
     fc.constant<UploadParts>({
       multipart: { fields: { name: 'x' }, files: [] },
       variant: { kind: 'invalid-upload', what: 'no file', field: 'file' } as Variant,
     }),
     fc.constant<UploadParts>({
-      multipart: { fields: {}, files: [{ field: 'upload', fileName: 'c.csv', contentType: 'text/csv', make: () => Buffer.from('time,voltage\n') }] },
+      multipart: {
+        fields: {},
+        files: [
+          {
+            field: 'upload',
+            fileName: 'c.csv',
+            contentType: 'text/csv',
+            make: () => Buffer.from('time,voltage\n'),
+          },
+        ],
+      },
       variant: { kind: 'invalid-upload', what: 'wrong field name', field: 'file' } as Variant,
     }),
     captureCsv.map((csv): UploadParts => ({
-      multipart: { fields: { projectId: 'not-a-uuid' }, files: [{ field: 'file', fileName: 'c.csv', contentType: 'text/csv', make: () => Buffer.from(csv) }] },
+      multipart: {
+        fields: { projectId: 'not-a-uuid' },
+        files: [
+          {
+            field: 'file',
+            fileName: 'c.csv',
+            contentType: 'text/csv',
+            make: () => Buffer.from(csv),
+          },
+        ],
+      },
       variant: { kind: 'invalid-upload', what: 'bad projectId', field: 'projectId' } as Variant,
     })),
     captureCsv.map((csv): UploadParts => ({
-      multipart: { fields: { name: 'n'.repeat(121) }, files: [{ field: 'file', fileName: 'c.csv', contentType: 'text/csv', make: () => Buffer.from(csv) }] },
+      multipart: {
+        fields: { name: 'n'.repeat(121) },
+        files: [
+          {
+            field: 'file',
+            fileName: 'c.csv',
+            contentType: 'text/csv',
+            make: () => Buffer.from(csv),
+          },
+        ],
+      },
       variant: { kind: 'invalid-upload', what: 'name too long', field: 'name' } as Variant,
     })),
     fc.constant<UploadParts>({
@@ -224,7 +347,11 @@ function uploadRequest(ids: KnownIds, tools: SchemaTools): fc.Arbitrary<UploadPa
  * mutation of a valid one (or a wrong body, query or path as a whole), with the admin's token,
  * no token, or a garbage one.
  */
-export function requestArbitrary(tools: SchemaTools, op: Operation, ids: KnownIds): fc.Arbitrary<FuzzRequest> {
+export function requestArbitrary(
+  tools: SchemaTools,
+  op: Operation,
+  ids: KnownIds,
+): fc.Arbitrary<FuzzRequest> {
   const parameters = parametersOf(tools, op);
   const pathParams = parameters.filter((p) => p.in === 'path');
   const queryParams = parameters.filter((p) => p.in === 'query');
@@ -236,28 +363,44 @@ export function requestArbitrary(tools: SchemaTools, op: Operation, ids: KnownId
       pathParams.map((p) => {
         const pool = p.name === 'id' ? idPool(op.path, ids) : [];
         const valid = validArbitrary(tools, p.schema).map(String);
-        return [p.name, pool.length ? fc.oneof({ weight: 4, arbitrary: fc.constantFrom(...pool) }, { weight: 1, arbitrary: valid }) : valid];
+        return [
+          p.name,
+          pool.length
+            ? fc.oneof(
+                { weight: 4, arbitrary: fc.constantFrom(...pool) },
+                { weight: 1, arbitrary: valid },
+              )
+            : valid,
+        ];
       }),
     ) as Record<string, fc.Arbitrary<string>>,
   );
   const queryValues = fc.record(
-    Object.fromEntries(queryParams.map((p) => [p.name, validArbitrary(tools, p.schema).map(String)])) as Record<string, fc.Arbitrary<string>>,
+    Object.fromEntries(
+      queryParams.map((p) => [p.name, validArbitrary(tools, p.schema).map(String)]),
+    ) as Record<string, fc.Arbitrary<string>>,
     { requiredKeys: queryParams.filter((p) => p.required).map((p) => p.name) },
   );
   // Ids in bodies (projectId, studyId) mostly name things that exist, so creates get past their 404.
   const known: Record<string, string[]> = { projectId: ids.projects, studyId: ids.studies };
   const validBody: fc.Arbitrary<unknown> = bodySchema
-    ? fc.tuple(validArbitrary(tools, bodySchema), fc.nat(), fc.integer({ min: 0, max: 4 })).map(([body, pick, odds]) => {
-        if (!body || typeof body !== 'object' || Array.isArray(body) || odds === 0) return body;
-        const copy = { ...(body as Record<string, unknown>) };
-        for (const [field, pool] of Object.entries(known)) {
-          if (typeof copy[field] === 'string' && pool.length) copy[field] = pool[pick % pool.length];
-        }
-        return copy;
-      })
+    ? fc
+        .tuple(validArbitrary(tools, bodySchema), fc.nat(), fc.integer({ min: 0, max: 4 }))
+        .map(([body, pick, odds]) => {
+          if (!body || typeof body !== 'object' || Array.isArray(body) || odds === 0) return body;
+          const copy = { ...(body as Record<string, unknown>) };
+          for (const [field, pool] of Object.entries(known)) {
+            if (typeof copy[field] === 'string' && pool.length)
+              copy[field] = pool[pick % pool.length];
+          }
+          return copy;
+        })
     : fc.constant(undefined);
 
-  type Parts = Pick<FuzzRequest, 'contentType' | 'headers' | 'body' | 'multipart' | 'variant'> & { path?: Record<string, string>; query?: Record<string, string> };
+  type Parts = Pick<FuzzRequest, 'contentType' | 'headers' | 'body' | 'multipart' | 'variant'> & {
+    path?: Record<string, string>;
+    query?: Record<string, string>;
+  };
 
   const variants: fc.WeightedArbitrary<Parts>[] = [];
   if (isUpload) {
@@ -267,7 +410,9 @@ export function requestArbitrary(tools: SchemaTools, op: Operation, ids: KnownId
       weight: 4,
       arbitrary: validBody.map((body) => ({
         variant: { kind: 'valid' } as Variant,
-        ...(body !== undefined ? { contentType: 'application/json', body: JSON.stringify(body) } : {}),
+        ...(body !== undefined
+          ? { contentType: 'application/json', body: JSON.stringify(body) }
+          : {}),
       })),
     });
   }
@@ -276,12 +421,20 @@ export function requestArbitrary(tools: SchemaTools, op: Operation, ids: KnownId
       const sites = sitesOf(tools, bodySchema, body);
       const options: Mutation[] = [];
       for (const site of sites) {
-        const parent = site.path.length ? sites.find((s) => s.path.length === site.path.length - 1 && dotted(s.path) === dotted(site.path.slice(0, -1))) : undefined;
+        const parent = site.path.length
+          ? sites.find(
+              (s) =>
+                s.path.length === site.path.length - 1 &&
+                dotted(s.path) === dotted(site.path.slice(0, -1)),
+            )
+          : undefined;
         const required = (parent?.schema.required as string[] | undefined) ?? [];
         options.push(...mutationsFor(tools, site, required));
       }
       if (!options.length) return fc.constant(undefined);
-      return fc.constantFrom(...options).map((mutation) => ({ mutation, text: applyMutation(body, mutation) }));
+      return fc
+        .constantFrom(...options)
+        .map((mutation) => ({ mutation, text: applyMutation(body, mutation) }));
     });
     variants.push({
       weight: 5,
@@ -290,7 +443,11 @@ export function requestArbitrary(tools: SchemaTools, op: Operation, ids: KnownId
         const named = [...m.mutation.path].reverse().find((s) => typeof s === 'string');
         const index = m.mutation.path.findLastIndex((s) => typeof s === 'string');
         const field = named === undefined ? 'body' : dotted(m.mutation.path.slice(0, index + 1));
-        return { variant: { kind: 'invalid-field', mutation: m.mutation.kind, field }, contentType: 'application/json', body: m.text };
+        return {
+          variant: { kind: 'invalid-field', mutation: m.mutation.kind, field },
+          contentType: 'application/json',
+          body: m.text,
+        };
       }),
     });
   }
@@ -307,7 +464,14 @@ export function requestArbitrary(tools: SchemaTools, op: Operation, ids: KnownId
   }
   // Query parameters: wrong type, out of range, repeated, or one the operation does not know.
   const queryCases: fc.Arbitrary<Parts>[] = [
-    fc.constant({ variant: { kind: 'invalid-query', field: 'unexpectedParam', what: 'unknown parameter' } as Variant, query: { unexpectedParam: '1' } }),
+    fc.constant({
+      variant: {
+        kind: 'invalid-query',
+        field: 'unexpectedParam',
+        what: 'unknown parameter',
+      } as Variant,
+      query: { unexpectedParam: '1' },
+    }),
   ];
   for (const p of queryParams) {
     const s = tools.resolve(p.schema);
@@ -323,7 +487,16 @@ export function requestArbitrary(tools: SchemaTools, op: Operation, ids: KnownId
     if (typeof s.maxLength === 'number') bad.push('q'.repeat(s.maxLength + 1));
     if (typeof s.minLength === 'number' && s.minLength > 0) bad.push('');
     for (const value of bad) {
-      queryCases.push(fc.constant({ variant: { kind: 'invalid-query', field: p.name, what: `${p.name}=${value.slice(0, 20)}` } as Variant, query: { [p.name]: value } }));
+      queryCases.push(
+        fc.constant({
+          variant: {
+            kind: 'invalid-query',
+            field: p.name,
+            what: `${p.name}=${value.slice(0, 20)}`,
+          } as Variant,
+          query: { [p.name]: value },
+        }),
+      );
     }
   }
   variants.push({ weight: 1, arbitrary: fc.oneof(...queryCases) });
@@ -333,26 +506,50 @@ export function requestArbitrary(tools: SchemaTools, op: Operation, ids: KnownId
     const bad = s.type === 'integer' ? ['abc', '0', '1.5', '99999999999'] : INVALID_IDS;
     variants.push({
       weight: 1,
-      arbitrary: fc.constantFrom(...bad).map((value) => ({ variant: { kind: 'invalid-path', field: p.name } as Variant, path: { [p.name]: value } })),
+      arbitrary: fc
+        .constantFrom(...bad)
+        .map((value) => ({
+          variant: { kind: 'invalid-path', field: p.name } as Variant,
+          path: { [p.name]: value },
+        })),
     });
   }
 
-  const authArbitrary = op.role === 'public'
-    ? fc.constant<Auth>('none')
-    : fc.oneof({ weight: 8, arbitrary: fc.constant<Auth>('admin') }, { weight: 1, arbitrary: fc.constant<Auth>('none') }, { weight: 1, arbitrary: fc.constant<Auth>('garbage') });
+  const authArbitrary =
+    op.role === 'public'
+      ? fc.constant<Auth>('none')
+      : fc.oneof(
+          { weight: 8, arbitrary: fc.constant<Auth>('admin') },
+          { weight: 1, arbitrary: fc.constant<Auth>('none') },
+          { weight: 1, arbitrary: fc.constant<Auth>('garbage') },
+        );
 
   return fc
-    .record({ parts: fc.oneof(...variants), pathValues, queryValues, auth: authArbitrary, garbage: fc.constantFrom(...GARBAGE_AUTH) })
+    .record({
+      parts: fc.oneof(...variants),
+      pathValues,
+      queryValues,
+      auth: authArbitrary,
+      garbage: fc.constantFrom(...GARBAGE_AUTH),
+    })
     .map(({ parts, pathValues: pv, queryValues: qv, auth, garbage }) => {
       const pathValuesFinal = { ...pv, ...(parts.path ?? {}) };
       let url = op.path.replace(/\{(\w+)\}/g, (_, name: string) => {
         const value = pathValuesFinal[name] ?? '';
         return parts.path?.[name] !== undefined ? value : encodeURIComponent(value);
       });
-      const query = { ...(parts.variant.kind === 'invalid-query' ? {} : qv), ...(parts.query ?? {}) };
+      const query = {
+        ...(parts.variant.kind === 'invalid-query' ? {} : qv),
+        ...(parts.query ?? {}),
+      };
       const search = new URLSearchParams(query).toString();
       if (search) url += `?${search}`;
-      if (op.operationId === 'computeTimerTable' && parts.variant.kind !== 'invalid-query' && !query.format) url += `${search ? '&' : '?'}format=csv`;
+      if (
+        op.operationId === 'computeTimerTable' &&
+        parts.variant.kind !== 'invalid-query' &&
+        !query.format
+      )
+        url += `${search ? '&' : '?'}format=csv`;
       const request: FuzzRequest = {
         operationId: op.operationId,
         role: op.role,
@@ -368,7 +565,12 @@ export function requestArbitrary(tools: SchemaTools, op: Operation, ids: KnownId
       };
       // A body the operation requires but the valid variant did not produce stays absent: that
       // is itself an invalid request.
-      if (parts.variant.kind === 'valid' && bodyRequired(op) && request.body === undefined && !request.multipart) {
+      if (
+        parts.variant.kind === 'valid' &&
+        bodyRequired(op) &&
+        request.body === undefined &&
+        !request.multipart
+      ) {
         request.variant = { kind: 'invalid-body', what: 'missing body' };
       }
       return request;

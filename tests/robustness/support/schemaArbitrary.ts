@@ -71,9 +71,12 @@ export class SchemaTools {
       properties[key] = key in pa ? this.merge(this.resolve(pa[key]), this.resolve(value)) : value;
     }
     if (Object.keys(properties).length) result.properties = properties;
-    const required = [...new Set([...((a.required as string[]) ?? []), ...((b.required as string[]) ?? [])])];
+    const required = [
+      ...new Set([...((a.required as string[]) ?? []), ...((b.required as string[]) ?? [])]),
+    ];
     if (required.length) result.required = required;
-    if (a.additionalProperties === false || b.additionalProperties === false) result.additionalProperties = false;
+    if (a.additionalProperties === false || b.additionalProperties === false)
+      result.additionalProperties = false;
     return result;
   }
 
@@ -103,7 +106,9 @@ export class SchemaTools {
     const tag = (schema.discriminator as { propertyName?: string } | undefined)?.propertyName;
     if (tag) {
       const given = (value as Record<string, unknown> | undefined)?.[tag];
-      return branches.find((b) => (b.properties as Record<string, Schema> | undefined)?.[tag]?.const === given);
+      return branches.find(
+        (b) => (b.properties as Record<string, Schema> | undefined)?.[tag]?.const === given,
+      );
     }
     return branches.find((b) => b.type !== 'null');
   }
@@ -117,14 +122,23 @@ export function jsonType(value: unknown): string {
 }
 
 /** Valid values of a schema. Numbers lean towards the low end so compute routes stay cheap. */
-export function validArbitrary(tools: SchemaTools, input: Schema | undefined, depth = 0): fc.Arbitrary<unknown> {
+export function validArbitrary(
+  tools: SchemaTools,
+  input: Schema | undefined,
+  depth = 0,
+): fc.Arbitrary<unknown> {
   const schema = tools.resolve(input);
   if (schema.const !== undefined) return fc.constant(schema.const);
   if (Array.isArray(schema.enum)) return fc.constantFrom(...(schema.enum as unknown[]));
   const branches = tools.branches(schema);
   if (branches.length) return fc.oneof(...branches.map((b) => validArbitrary(tools, b, depth)));
-  const types = Array.isArray(schema.type) ? (schema.type as string[]) : typeof schema.type === 'string' ? [schema.type] : [];
-  if (types.length > 1) return fc.oneof(...types.map((t) => validArbitrary(tools, { ...schema, type: t }, depth)));
+  const types = Array.isArray(schema.type)
+    ? (schema.type as string[])
+    : typeof schema.type === 'string'
+      ? [schema.type]
+      : [];
+  if (types.length > 1)
+    return fc.oneof(...types.map((t) => validArbitrary(tools, { ...schema, type: t }, depth)));
   switch (types[0]) {
     case 'null':
       return fc.constant(null);
@@ -138,14 +152,21 @@ export function validArbitrary(tools: SchemaTools, input: Schema | undefined, de
       return stringArbitrary(schema);
     case 'array': {
       const minLength = (schema.minItems as number | undefined) ?? 0;
-      const maxLength = Math.min((schema.maxItems as number | undefined) ?? 6, Math.max(minLength, 6));
-      return fc.array(validArbitrary(tools, schema.items as Schema, depth + 1), { minLength, maxLength });
+      const maxLength = Math.min(
+        (schema.maxItems as number | undefined) ?? 6,
+        Math.max(minLength, 6),
+      );
+      return fc.array(validArbitrary(tools, schema.items as Schema, depth + 1), {
+        minLength,
+        maxLength,
+      });
     }
     case 'object': {
       const properties = (schema.properties ?? {}) as Record<string, Schema>;
       const required = (schema.required as string[] | undefined) ?? [];
       const model: Record<string, fc.Arbitrary<unknown>> = {};
-      for (const [key, value] of Object.entries(properties)) model[key] = validArbitrary(tools, value, depth + 1);
+      for (const [key, value] of Object.entries(properties))
+        model[key] = validArbitrary(tools, value, depth + 1);
       return fc.record(model, { requiredKeys: required.filter((k) => k in model) });
     }
     default:
@@ -153,12 +174,24 @@ export function validArbitrary(tools: SchemaTools, input: Schema | undefined, de
   }
 }
 
-function bounds(schema: Schema): { min: number; max: number; minExcluded: boolean; maxExcluded: boolean } {
-  const exclusiveMin = typeof schema.exclusiveMinimum === 'number' ? schema.exclusiveMinimum : undefined;
-  const exclusiveMax = typeof schema.exclusiveMaximum === 'number' ? schema.exclusiveMaximum : undefined;
+function bounds(schema: Schema): {
+  min: number;
+  max: number;
+  minExcluded: boolean;
+  maxExcluded: boolean;
+} {
+  const exclusiveMin =
+    typeof schema.exclusiveMinimum === 'number' ? schema.exclusiveMinimum : undefined;
+  const exclusiveMax =
+    typeof schema.exclusiveMaximum === 'number' ? schema.exclusiveMaximum : undefined;
   const min = exclusiveMin ?? (schema.minimum as number | undefined) ?? -1e6;
   const max = exclusiveMax ?? (schema.maximum as number | undefined) ?? 1e6;
-  return { min, max, minExcluded: exclusiveMin !== undefined, maxExcluded: exclusiveMax !== undefined };
+  return {
+    min,
+    max,
+    minExcluded: exclusiveMin !== undefined,
+    maxExcluded: exclusiveMax !== undefined,
+  };
 }
 
 function integerArbitrary(schema: Schema): fc.Arbitrary<number> {
@@ -175,10 +208,25 @@ function integerArbitrary(schema: Schema): fc.Arbitrary<number> {
 
 function numberArbitrary(schema: Schema): fc.Arbitrary<number> {
   const b = bounds(schema);
-  const full = fc.double({ min: b.min, max: b.max, minExcluded: b.minExcluded, maxExcluded: b.maxExcluded, noNaN: true, noDefaultInfinity: true });
+  const full = fc.double({
+    min: b.min,
+    max: b.max,
+    minExcluded: b.minExcluded,
+    maxExcluded: b.maxExcluded,
+    noNaN: true,
+    noDefaultInfinity: true,
+  });
   const lowTop = b.min + (b.max - b.min) * 0.05;
-  const low = fc.double({ min: b.min, max: lowTop, minExcluded: b.minExcluded, noNaN: true, noDefaultInfinity: true });
-  const edges = [b.minExcluded ? null : b.min, b.maxExcluded ? null : b.max].filter((v): v is number => v !== null);
+  const low = fc.double({
+    min: b.min,
+    max: lowTop,
+    minExcluded: b.minExcluded,
+    noNaN: true,
+    noDefaultInfinity: true,
+  });
+  const edges = [b.minExcluded ? null : b.min, b.maxExcluded ? null : b.max].filter(
+    (v): v is number => v !== null,
+  );
   return fc.oneof(
     { weight: 6, arbitrary: low },
     { weight: 2, arbitrary: full },
@@ -195,16 +243,22 @@ function stringArbitrary(schema: Schema): fc.Arbitrary<string> {
     case 'email':
       return fc.emailAddress().filter((e) => e.length >= minLength && e.length <= maxLength);
     case 'date-time':
-      return fc.date({ min: new Date('2000-01-01'), max: new Date('2100-01-01'), noInvalidDate: true }).map((d) => d.toISOString());
+      return fc
+        .date({ min: new Date('2000-01-01'), max: new Date('2100-01-01'), noInvalidDate: true })
+        .map((d) => d.toISOString());
     case 'binary':
       return fc.string();
     default:
       break;
   }
   if (typeof schema.pattern === 'string') {
-    return fc.stringMatching(new RegExp(schema.pattern)).filter((s) => s.length >= minLength && s.length <= maxLength);
+    return fc
+      .stringMatching(new RegExp(schema.pattern))
+      .filter((s) => s.length >= minLength && s.length <= maxLength);
   }
-  const awkward = AWKWARD_STRINGS.filter((s) => codePointLength(s) >= minLength && codePointLength(s) <= maxLength);
+  const awkward = AWKWARD_STRINGS.filter(
+    (s) => codePointLength(s) >= minLength && codePointLength(s) <= maxLength,
+  );
   const upper = Math.min(maxLength, Math.max(minLength, 40));
   return fc.oneof(
     { weight: 4, arbitrary: fc.string({ unit: anyCodePoint, minLength, maxLength: upper }) },
@@ -225,19 +279,39 @@ export interface Site {
 }
 
 /** Every place inside `value` (and every absent optional property), walked beside its schema. */
-export function sitesOf(tools: SchemaTools, input: Schema | undefined, value: unknown, path: (string | number)[] = []): Site[] {
+export function sitesOf(
+  tools: SchemaTools,
+  input: Schema | undefined,
+  value: unknown,
+  path: (string | number)[] = [],
+): Site[] {
   let schema = tools.resolve(input);
   const branch = tools.branchFor(schema, value);
-  if (branch) schema = { ...branch, ...(schema.discriminator ? { discriminator: schema.discriminator } : {}) };
+  if (branch)
+    schema = {
+      ...branch,
+      ...(schema.discriminator ? { discriminator: schema.discriminator } : {}),
+    };
   const sites: Site[] = [{ path, schema, value, present: true }];
   if (value && typeof value === 'object' && !Array.isArray(value)) {
     const properties = (schema.properties ?? {}) as Record<string, Schema>;
     for (const [key, sub] of Object.entries(properties)) {
-      if (key in (value as object)) sites.push(...sitesOf(tools, sub, (value as Record<string, unknown>)[key], [...path, key]));
-      else sites.push({ path: [...path, key], schema: tools.resolve(sub), value: undefined, present: false });
+      if (key in (value as object))
+        sites.push(...sitesOf(tools, sub, (value as Record<string, unknown>)[key], [...path, key]));
+      else
+        sites.push({
+          path: [...path, key],
+          schema: tools.resolve(sub),
+          value: undefined,
+          present: false,
+        });
     }
   } else if (Array.isArray(value) && schema.items) {
-    value.slice(0, 3).forEach((item, i) => sites.push(...sitesOf(tools, schema.items as Schema, item, [...path, i])));
+    value
+      .slice(0, 3)
+      .forEach((item, i) =>
+        sites.push(...sitesOf(tools, schema.items as Schema, item, [...path, i])),
+      );
   }
   return sites;
 }
@@ -270,14 +344,19 @@ export interface Mutation {
 export const DELETE = Symbol('delete');
 
 /** The ways a site can be made invalid (every one is certainly outside the schema). */
-export function mutationsFor(tools: SchemaTools, site: Site, parentRequired: readonly string[]): Mutation[] {
+export function mutationsFor(
+  tools: SchemaTools,
+  site: Site,
+  parentRequired: readonly string[],
+): Mutation[] {
   const { schema, path } = site;
   const out: Mutation[] = [];
   const last = path[path.length - 1];
   if (!site.present) {
     return [];
   }
-  if (typeof last === 'string' && parentRequired.includes(last)) out.push({ kind: 'missing-required', path, replacement: DELETE });
+  if (typeof last === 'string' && parentRequired.includes(last))
+    out.push({ kind: 'missing-required', path, replacement: DELETE });
   const types = tools.types(schema);
   if (!types.has('any')) {
     const candidates: [string, unknown][] = [
@@ -291,25 +370,55 @@ export function mutationsFor(tools: SchemaTools, site: Site, parentRequired: rea
     for (const [type, value] of candidates) {
       const admitted = types.has(type) || (type === 'number' && types.has('integer') && false);
       // 12345.678 is no integer, so it is wrong for integer-only fields as well
-      if (!admitted && !(type === 'number' && types.has('number'))) out.push({ kind: 'wrong-type', path, replacement: value });
+      if (!admitted && !(type === 'number' && types.has('number')))
+        out.push({ kind: 'wrong-type', path, replacement: value });
     }
     if (!types.has('array')) {
-      out.push({ kind: 'huge-array', path, replacement: Array.from({ length: 100_000 }, (_, i) => i % 7) });
-      out.push({ kind: 'deep-nesting', path, replacement: null, raw: `${'['.repeat(20_000)}${']'.repeat(20_000)}` });
+      out.push({
+        kind: 'huge-array',
+        path,
+        replacement: Array.from({ length: 100_000 }, (_, i) => i % 7),
+      });
+      out.push({
+        kind: 'deep-nesting',
+        path,
+        replacement: null,
+        raw: `${'['.repeat(20_000)}${']'.repeat(20_000)}`,
+      });
     }
     if (!types.has('object')) {
-      out.push({ kind: 'deep-nesting', path, replacement: null, raw: `${'{"a":'.repeat(5_000)}1${'}'.repeat(5_000)}` });
+      out.push({
+        kind: 'deep-nesting',
+        path,
+        replacement: null,
+        raw: `${'{"a":'.repeat(5_000)}1${'}'.repeat(5_000)}`,
+      });
     }
   }
   const type = Array.isArray(schema.type) ? undefined : (schema.type as string | undefined);
   if (type === 'number' || type === 'integer') {
     const b = bounds(schema);
-    if (typeof schema.maximum === 'number') out.push({ kind: 'out-of-range', path, replacement: schema.maximum + (type === 'integer' ? 1 : Math.max(1e-9, Math.abs(schema.maximum) * 1e-6)) });
-    if (typeof schema.exclusiveMaximum === 'number') out.push({ kind: 'out-of-range', path, replacement: schema.exclusiveMaximum });
-    if (typeof schema.minimum === 'number') out.push({ kind: 'out-of-range', path, replacement: schema.minimum - 1 });
-    if (typeof schema.exclusiveMinimum === 'number') out.push({ kind: 'out-of-range', path, replacement: schema.exclusiveMinimum });
+    if (typeof schema.maximum === 'number')
+      out.push({
+        kind: 'out-of-range',
+        path,
+        replacement:
+          schema.maximum +
+          (type === 'integer' ? 1 : Math.max(1e-9, Math.abs(schema.maximum) * 1e-6)),
+      });
+    if (typeof schema.exclusiveMaximum === 'number')
+      out.push({ kind: 'out-of-range', path, replacement: schema.exclusiveMaximum });
+    if (typeof schema.minimum === 'number')
+      out.push({ kind: 'out-of-range', path, replacement: schema.minimum - 1 });
+    if (typeof schema.exclusiveMinimum === 'number')
+      out.push({ kind: 'out-of-range', path, replacement: schema.exclusiveMinimum });
     out.push({ kind: 'out-of-range', path, replacement: b.max > 1e300 ? -1e308 : 1e308 });
-    if (type === 'integer') out.push({ kind: 'not-integer', path, replacement: Math.min(b.max, Math.max(b.min, 1)) - 0.5 });
+    if (type === 'integer')
+      out.push({
+        kind: 'not-integer',
+        path,
+        replacement: Math.min(b.max, Math.max(b.min, 1)) - 0.5,
+      });
   }
   if (schema.const !== undefined || Array.isArray(schema.enum)) {
     out.push({ kind: 'bad-enum', path, replacement: 'no-such-choice\u202e' });
@@ -320,17 +429,32 @@ export function mutationsFor(tools: SchemaTools, site: Site, parentRequired: rea
     const minLength = schema.minLength as number | undefined;
     if (maxLength !== undefined) {
       out.push({ kind: 'too-long', path, replacement: 'x'.repeat(maxLength + 1) });
-      out.push({ kind: 'too-long', path, replacement: '🔥'.repeat(Math.min(200_000, maxLength * 50 + 1)) });
+      out.push({
+        kind: 'too-long',
+        path,
+        replacement: '🔥'.repeat(Math.min(200_000, maxLength * 50 + 1)),
+      });
     }
-    if (minLength !== undefined && minLength > 0) out.push({ kind: 'too-short', path, replacement: '' });
-    if (schema.format === 'uuid') out.push({ kind: 'bad-format', path, replacement: '../../etc/passwd' });
-    if (schema.format === 'email') out.push({ kind: 'bad-format', path, replacement: 'no-at-sign.example' });
-    if (typeof schema.pattern === 'string') out.push({ kind: 'bad-pattern', path, replacement: '9 not/allowed' });
+    if (minLength !== undefined && minLength > 0)
+      out.push({ kind: 'too-short', path, replacement: '' });
+    if (schema.format === 'uuid')
+      out.push({ kind: 'bad-format', path, replacement: '../../etc/passwd' });
+    if (schema.format === 'email')
+      out.push({ kind: 'bad-format', path, replacement: 'no-at-sign.example' });
+    if (typeof schema.pattern === 'string')
+      out.push({ kind: 'bad-pattern', path, replacement: '9 not/allowed' });
   }
   if (type === 'array' && typeof schema.maxItems === 'number') {
     const items = tools.resolve(schema.items as Schema);
-    const filler = items.type === 'integer' || items.type === 'number' ? (items.minimum as number | undefined) ?? 0.5 : 'x';
-    out.push({ kind: 'huge-array', path, replacement: Array.from({ length: Math.max(100_000, schema.maxItems + 1) }, () => filler) });
+    const filler =
+      items.type === 'integer' || items.type === 'number'
+        ? ((items.minimum as number | undefined) ?? 0.5)
+        : 'x';
+    out.push({
+      kind: 'huge-array',
+      path,
+      replacement: Array.from({ length: Math.max(100_000, schema.maxItems + 1) }, () => filler),
+    });
   }
   if (type === 'object' && schema.additionalProperties === false) {
     out.push({ kind: 'unknown-property', path: [...path, 'unexpectedFieldÅ'], replacement: 1 });
@@ -347,7 +471,8 @@ export function applyMutation(value: unknown, mutation: Mutation): string {
   }
   const copy = structuredClone(value) as Record<string | number, unknown>;
   let node: Record<string | number, unknown> = copy;
-  for (const segment of mutation.path.slice(0, -1)) node = node[segment] as Record<string | number, unknown>;
+  for (const segment of mutation.path.slice(0, -1))
+    node = node[segment] as Record<string | number, unknown>;
   const key = mutation.path[mutation.path.length - 1] as string | number;
   if (mutation.replacement === DELETE) delete node[key];
   else node[key] = mutation.raw !== undefined ? '__pulsewright_raw__' : mutation.replacement;

@@ -28,7 +28,11 @@ export async function freePort(): Promise<number> {
     server.on('error', reject);
     server.listen(0, '127.0.0.1', () => {
       const address = server.address();
-      server.close(() => (typeof address === 'object' && address ? resolve(address.port) : reject(new Error('no port'))));
+      server.close(() =>
+        typeof address === 'object' && address
+          ? resolve(address.port)
+          : reject(new Error('no port')),
+      );
     });
   });
 }
@@ -60,7 +64,8 @@ export async function startChildServer(options: {
   /** Run as this user id (and group id), e.g. 65534 (nobody), so file permissions apply. */
   uid?: number;
 }): Promise<ChildServer> {
-  if (!existsSync(apiEntry)) throw new Error(`${apiEntry} is missing: run \`npm run build\` first.`);
+  if (!existsSync(apiEntry))
+    throw new Error(`${apiEntry} is missing: run \`npm run build\` first.`);
   const port = options.port ?? (await freePort());
   let output = '';
   const child = spawn(process.execPath, [apiEntry], {
@@ -112,7 +117,8 @@ export async function startChildServer(options: {
   if (options.waitForHealth === false) return server;
   const deadline = Date.now() + 30_000;
   for (;;) {
-    if (child.exitCode !== null) throw new Error(`The API exited with ${child.exitCode}:\n${output}`);
+    if (child.exitCode !== null)
+      throw new Error(`The API exited with ${child.exitCode}:\n${output}`);
     try {
       const response = await fetch(`${baseUrl}/api/health`);
       if (response.ok) break;
@@ -129,14 +135,19 @@ export async function startChildServer(options: {
 }
 
 /** Signs in over HTTP and returns the session token. */
-export async function signInOver(baseUrl: string, email: string, password = DEMO_PASSWORD): Promise<string> {
+export async function signInOver(
+  baseUrl: string,
+  email: string,
+  password = DEMO_PASSWORD,
+): Promise<string> {
   const response = await fetch(`${baseUrl}/api/v1/auth/login`, {
     method: 'POST',
     headers: { 'content-type': 'application/json' },
     body: JSON.stringify({ email, password }),
   });
   const body = (await response.json()) as { token?: string };
-  if (response.status !== 200 || !body.token) throw new Error(`sign-in of ${email} failed: ${response.status} ${JSON.stringify(body)}`);
+  if (response.status !== 200 || !body.token)
+    throw new Error(`sign-in of ${email} failed: ${response.status} ${JSON.stringify(body)}`);
   return body.token;
 }
 

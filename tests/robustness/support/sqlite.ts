@@ -42,7 +42,9 @@ export function mountSmallDisk(sizeBytes: number): SmallDisk {
     execFileSync('mount', ['-t', 'tmpfs', '-o', `size=${sizeBytes}`, 'tmpfs', dir]);
   } catch (error) {
     rmdirSync(dir);
-    throw new Error(`The fault suite mounts a small tmpfs and needs root for it: ${(error as Error).message}`);
+    throw new Error(
+      `The fault suite mounts a small tmpfs and needs root for it: ${(error as Error).message}`,
+    );
   }
   return {
     dir,
