@@ -368,10 +368,8 @@ export function mutationsFor(
       ['null', null],
     ];
     for (const [type, value] of candidates) {
-      const admitted = types.has(type) || (type === 'number' && types.has('integer') && false);
-      // 12345.678 is no integer, so it is wrong for integer-only fields as well
-      if (!admitted && !(type === 'number' && types.has('number')))
-        out.push({ kind: 'wrong-type', path, replacement: value });
+      // 12345.678 is no integer, so it is a wrong type for integer-only fields as well.
+      if (!types.has(type)) out.push({ kind: 'wrong-type', path, replacement: value });
     }
     if (!types.has('array')) {
       out.push({
