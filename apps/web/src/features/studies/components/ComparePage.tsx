@@ -1,5 +1,6 @@
 import { labelHarmonics } from '@pulsewright/modulation';
 import { useQueries } from '@tanstack/react-query';
+import { useEffect, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { SpectrumChart, type SpectrumSeries } from '../../../components/charts/SpectrumChart';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
@@ -12,17 +13,24 @@ const COLOURS = ['#12263a', '#d9822b', '#2a8c82', '#8e3b6e', '#c2462e', '#5b6fa8
 /** Two or more studies side by side: summary figures and overlaid spectra (computed by the API). */
 export function ComparePage() {
   const [params, setParams] = useSearchParams();
-  const ids = (params.get('ids') ?? '').split(',').filter(Boolean);
+  const fromUrl = params.get('ids') ?? '';
+  // The ticked studies live in component state so a checkbox changes the moment it is clicked;
+  // the URL follows (shareable link) and a link to /compare?ids=… sets the state.
+  const [ids, setIds] = useState(() => parseIds(fromUrl));
+  const [seenUrl, setSeenUrl] = useState(fromUrl);
+  if (fromUrl !== seenUrl) {
+    // The URL changed from outside (a link, back/forward): adopt it while rendering.
+    setSeenUrl(fromUrl);
+    if (fromUrl !== ids.join(',')) setIds(parseIds(fromUrl));
+  }
+  useEffect(() => {
+    const joined = ids.join(',');
+    if (joined !== fromUrl) setParams(joined ? { ids: joined } : {}, { replace: true });
+  }, [ids, fromUrl, setParams]);
   const all = useStudies();
   const studies = useQueries({ queries: ids.map((id) => studyQueryOptions(id)) });
   const spectra = useQueries({ queries: ids.map((id) => studySpectrumQueryOptions(id, 150)) });
-  // Functional update: two quick clicks must both count, whatever the render in between.
-  const toggle = (id: string) =>
-    setParams((previous) => {
-      const current = (previous.get('ids') ?? '').split(',').filter(Boolean);
-      const next = current.includes(id) ? current.filter((x) => x !== id) : [...current, id];
-      return new URLSearchParams(next.length ? { ids: next.join(',') } : {});
-    });
+  const toggle = (id: string) => setIds((current) => (current.includes(id) ? current.filter((x) => x !== id) : [...current, id]));
 
   const pending = [...studies, ...spectra].some((q) => q.isPending);
   const failed = [...studies, ...spectra].find((q) => q.isError);
@@ -101,4 +109,8 @@ export function ComparePage() {
       </div>
     </div>
   );
+}
+
+function parseIds(value: string): string[] {
+  return value.split(',').filter(Boolean);
 }
