@@ -1,3 +1,4 @@
+import { AsyncLocalStorage } from 'node:async_hooks';
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import { Sequelize } from 'sequelize';
@@ -45,7 +46,78 @@ export async function openDatabase(databaseUrl: string): Promise<Sequelize> {
       },
     },
   });
+  serialiseWrites(sequelize);
   if (storage !== ':memory:') await sequelize.query('PRAGMA journal_mode = WAL;');
   await sequelize.query('PRAGMA foreign_keys = ON;');
   return sequelize;
+}
+
+/**
+ * One-at-a-time queue for SQLite writers, kept in JavaScript.
+ *
+ * Sequelize opens one SQLite connection per transaction, and node-sqlite3 runs each statement on
+ * one of libuv's threadpool threads (4 by default). A `BEGIN IMMEDIATE` that finds the write lock
+ * taken waits in SQLite's busy handler *on that thread*; with four such waiters every pool
+ * thread is blocked, so the writer holding the lock can never run its COMMIT and the service
+ * stops (defect L1 in docs/robustness.md). Queuing writers here means at most one write
+ * transaction (or autocommit write) is in SQLite at a time and the rest wait as promises.
+ *
+ * Work started from inside a queued transaction (the store says so) runs straight away, so a
+ * nested write never waits for itself; it meets SQLite's busy timeout as it did before.
+ */
+export class WriteQueue {
+  private tail: Promise<void> = Promise.resolve();
+  private readonly holder = new AsyncLocalStorage<true>();
+  /** Writers waiting or running, for tests and diagnostics. */
+  pending = 0;
+
+  run<T>(work: () => Promise<T>): Promise<T> {
+    if (this.holder.getStore()) return work();
+    const previous = this.tail;
+    let release!: () => void;
+    this.tail = new Promise<void>((resolve) => {
+      release = resolve;
+    });
+    this.pending += 1;
+    return previous
+      .then(() => this.holder.run(true, work))
+      .finally(() => {
+        this.pending -= 1;
+        release();
+      });
+  }
+}
+
+const WRITE_SQL = /^\s*(INSERT|UPDATE|DELETE|REPLACE|CREATE|DROP|ALTER)\b/i;
+
+/** The write queue of a SQLite Sequelize instance opened by {@link openDatabase}. */
+export function writeQueueOf(sequelize: Sequelize): WriteQueue | undefined {
+  return (sequelize as Sequelize & { pulsewrightWriteQueue?: WriteQueue }).pulsewrightWriteQueue;
+}
+
+/**
+ * Routes every managed transaction, and every write statement outside a transaction, of a
+ * SQLite instance through one {@link WriteQueue}. Reads outside transactions are not queued
+ * (WAL readers do not wait for the writer). Unmanaged transactions (`transaction()` without a
+ * callback) are not queued; the service does not use them.
+ */
+function serialiseWrites(sequelize: Sequelize): void {
+  const queue = new WriteQueue();
+  (sequelize as Sequelize & { pulsewrightWriteQueue?: WriteQueue }).pulsewrightWriteQueue = queue;
+  const transaction = sequelize.transaction.bind(sequelize) as (...args: unknown[]) => Promise<unknown>;
+  const query = sequelize.query.bind(sequelize) as (...args: unknown[]) => Promise<unknown>;
+  const patched = sequelize as unknown as {
+    transaction: (...args: unknown[]) => Promise<unknown>;
+    query: (...args: unknown[]) => Promise<unknown>;
+  };
+  patched.transaction = (...args: unknown[]) => {
+    const managed = typeof args[0] === 'function' || typeof args[1] === 'function';
+    return managed ? queue.run(() => transaction(...args)) : transaction(...args);
+  };
+  patched.query = (...args: unknown[]) => {
+    const [sql, options] = args as [unknown, { transaction?: unknown } | undefined];
+    const text = typeof sql === 'string' ? sql : (sql as { query?: unknown } | null)?.query;
+    const write = typeof text === 'string' && WRITE_SQL.test(text) && !options?.transaction;
+    return write ? queue.run(() => query(...args)) : query(...args);
+  };
 }
