@@ -15,6 +15,7 @@ const TITLES: Record<number, string> = {
   415: 'Unsupported media type',
   429: 'Too many requests',
   500: 'Internal error',
+  503: 'Service unavailable',
 };
 
 const TYPES: Record<number, string> = {
@@ -28,6 +29,7 @@ const TYPES: Record<number, string> = {
   415: 'unsupported-media-type',
   429: 'rate-limited',
   500: 'internal-error',
+  503: 'storage-unavailable',
 };
 
 /** The URI naming a kind of problem (RFC 9457 `type`). */

@@ -49,6 +49,7 @@ export function problemHandler(document: OpenApiDocument, logErrors: boolean): E
       console.error(`pulsewright: ${req.method} ${req.originalUrl} failed:`, err);
     }
     if (problem.status === 401) res.setHeader('WWW-Authenticate', 'Bearer realm="pulsewright"');
+    if (problem.status === 503) res.setHeader('Retry-After', '30');
     // send (not json): the body never goes through response validation hooks, whose failure
     // would come back here.
     res
@@ -77,13 +78,17 @@ function toProblem(document: OpenApiDocument, err: unknown, req: Request): Probl
   if (isParameterError(err)) {
     return { status: 400, detail: err.message, errors: [{ path: err.field, message: err.message }] };
   }
-  const bodyParser = err as { type?: string; status?: number };
+  const bodyParser = err as { type?: string; status?: number; charset?: string; encoding?: string; message?: string };
   if (bodyParser?.type === 'entity.parse.failed') {
     return { status: 400, detail: 'The request body is not valid JSON.', errors: [{ path: 'body', message: 'The request body is not valid JSON.' }] };
   }
   if (bodyParser?.type === 'entity.too.large') {
     return { status: 413, detail: 'The request body is larger than 1 MB.', errors: [] };
   }
+  if (isBodyParserError(err)) return bodyParserProblem(err);
+  const storage = storageProblem(err);
+  if (storage) return storage;
+  if (isValidatorError(err) && isUploadError(err, req)) return uploadProblem(err);
   if (isValidatorError(err)) {
     if (err.status === 400) {
       const errors = (err.errors ?? []).map((item) => validationItem(document, req, item));
@@ -92,6 +97,12 @@ function toProblem(document: OpenApiDocument, err: unknown, req: Request): Probl
     }
     if (err.status === 413) {
       return { status: 413, detail: 'The upload is larger than allowed (5 MB).', errors: [{ path: 'file', message: 'file must be at most 5 MB' }] };
+    }
+    if (err.status >= 500 && !(err.errors ?? []).every((item) => (item.path ?? '').startsWith('/response'))) {
+      // A 500 the validator raised while reading the request (not checking our answer) is the
+      // request's fault: name what it reported.
+      const errors = (err.errors ?? []).map((item) => ({ path: requestField(item.path), message: sentence(item.message ?? err.message) }));
+      return { status: 400, detail: `The request could not be read: ${sentence(err.message)}`, errors: errors.length ? errors : [{ path: 'body', message: sentence(err.message) }] };
     }
     if (err.status >= 500) {
       return {
@@ -109,6 +120,108 @@ function toProblem(document: OpenApiDocument, err: unknown, req: Request): Probl
     return { status: 409, detail: 'That conflicts with data saved meanwhile; reload and try again.', errors: [] };
   }
   return { status: 500, detail: 'Something went wrong inside the service; it has been logged.', errors: [] };
+}
+
+/** body-parser's own errors (http-errors with a `type` such as `charset.unsupported`). */
+function isBodyParserError(err: unknown): err is { type: string; status: number; message: string; charset?: string; encoding?: string } {
+  const e = err as { type?: unknown; status?: unknown } | null;
+  return (
+    err instanceof Error &&
+    typeof e?.type === 'string' &&
+    typeof e.status === 'number' &&
+    e.status >= 400 &&
+    e.status < 500 &&
+    !isValidatorError(err)
+  );
+}
+
+function bodyParserProblem(err: { type: string; status: number; message: string; charset?: string; encoding?: string }): Problem {
+  if (err.type === 'charset.unsupported') {
+    const detail = `The request body's charset ${JSON.stringify(err.charset ?? '')} is not supported; send JSON as UTF-8 (Content-Type: application/json or application/json; charset=utf-8).`;
+    return { status: 415, detail, errors: [{ path: 'body', message: detail }] };
+  }
+  if (err.type === 'encoding.unsupported') {
+    const detail = `The request body's Content-Encoding ${JSON.stringify(err.encoding ?? '')} is not supported; send it unencoded (identity) or as gzip, deflate or br.`;
+    return { status: 415, detail, errors: [{ path: 'body', message: detail }] };
+  }
+  const detail = `The request body could not be read: ${sentence(err.message)}`;
+  return { status: err.status, detail, errors: [{ path: 'body', message: detail }] };
+}
+
+/** A multipart upload the validator's multer/busboy step could not read (its items name the URL path). */
+function isUploadError(err: ValidatorError, req: Request): boolean {
+  return (
+    /^multipart\//i.test(req.headers['content-type'] ?? '') &&
+    err.status !== 401 &&
+    err.status !== 403 &&
+    (err.errors ?? []).every((item) => item.path === req.path || !(item.path ?? '').startsWith('/'))
+  );
+}
+
+function uploadProblem(err: ValidatorError): Problem {
+  const reason = sentence(err.message);
+  const status = err.status === 413 ? 413 : 400;
+  if (status === 413) {
+    return { status, detail: 'The upload is larger than allowed (5 MB, one file).', errors: [{ path: 'file', message: 'file must be one file of at most 5 MB' }] };
+  }
+  const fieldProblem = /field/i.test(err.message) && !/unexpected field/i.test(err.message);
+  const path = fieldProblem ? 'body' : 'file';
+  const detail =
+    path === 'file'
+      ? `The upload could not be read (${reason.replace(/\.$/, '')}); send one CSV as the multipart field "file" with a plain file name.`
+      : `The upload's form fields could not be read: ${reason}`;
+  return { status, detail, errors: [{ path, message: detail }] };
+}
+
+/** `/body/x/y` → `x.y`; `/query/limit` → `limit`; anything else → `body`. */
+function requestField(path: string | undefined): string {
+  const parts = (path ?? '').split('/').filter(Boolean);
+  if (parts[0] === 'body' || parts[0] === 'query' || parts[0] === 'params' || parts[0] === 'headers') {
+    return parts.slice(1).join('.') || parts[0];
+  }
+  return 'body';
+}
+
+/** SQLite / PostgreSQL error codes meaning the storage cannot take the write. */
+const STORAGE_PROBLEMS: Record<string, string> = {
+  SQLITE_READONLY:
+    'The database is read-only; nothing was saved. Give the service write access to its database file and folder, then try again.',
+  SQLITE_CANTOPEN:
+    'The database file cannot be opened for writing; nothing was saved. Check that the file and its folder exist and the service may write them, then try again.',
+  SQLITE_IOERR:
+    'The database storage failed to read or write (I/O error); nothing was saved. Check the disk that holds the database, then try again.',
+  SQLITE_FULL:
+    'The database disk is full; nothing was saved. Free space on the storage that holds the database, then try again.',
+  SQLITE_BUSY: 'The database is busy with other writes; nothing was saved. Try again in a moment.',
+  SQLITE_LOCKED: 'The database is busy with other writes; nothing was saved. Try again in a moment.',
+  // PostgreSQL SQLSTATEs: read_only_sql_transaction, disk_full, insufficient_resources.
+  '25006': 'The database is read-only; nothing was saved. Try again once it accepts writes.',
+  '53100': 'The database disk is full; nothing was saved. Free space on the database server, then try again.',
+  '53000': 'The database has run out of resources; nothing was saved. Try again in a moment.',
+};
+
+/** The driver's error code of a Sequelize error (its `parent` / `original`, or the error itself). */
+function driverCode(err: unknown): string | undefined {
+  const seen = new Set<unknown>();
+  let current: unknown = err;
+  while (current && typeof current === 'object' && !seen.has(current)) {
+    seen.add(current);
+    const e = current as { code?: unknown; message?: unknown; parent?: unknown; original?: unknown; cause?: unknown };
+    if (typeof e.code === 'string' && e.code in STORAGE_PROBLEMS) return e.code;
+    const named = typeof e.message === 'string' ? /\b(SQLITE_[A-Z]+)\b/.exec(e.message)?.[1] : undefined;
+    if (named && named in STORAGE_PROBLEMS) return named;
+    current = e.parent ?? e.original ?? e.cause;
+  }
+  return undefined;
+}
+
+/** Storage that cannot take a write → 503 (RFC 9110 §15.6.4: the service is temporarily unable). */
+function storageProblem(err: unknown): Problem | undefined {
+  if (!(err instanceof Error) || !err.name.startsWith('Sequelize')) return undefined;
+  const code = driverCode(err);
+  if (!code) return undefined;
+  const detail = STORAGE_PROBLEMS[code] as string;
+  return { status: 503, detail, errors: [] };
 }
 
 function sentence(text: string): string {

@@ -1,5 +1,22 @@
-/** An integer query parameter the validator has already checked, or its default. */
-export function intQuery(value: unknown, fallback: number): number {
-  const number = typeof value === 'string' || typeof value === 'number' ? Number(value) : NaN;
-  return Number.isInteger(number) ? number : fallback;
+import type { Request } from 'express';
+import { badRequest } from './errors.js';
+
+const DECIMAL_INTEGER = /^[0-9]{1,15}$/;
+
+/**
+ * The integer query parameter `name` of `req`, or `fallback` when it is absent. The validator
+ * has checked the bounds, but its type coercion takes `0x10` for 16 and `1e999` for Infinity
+ * (and writes the coerced value into `req.query`), so the text as sent in the URL is read
+ * here: only plain decimal digits are accepted, anything else is a 400 naming the parameter,
+ * never a silent default.
+ */
+export function intQuery(req: Request, name: string, fallback: number): number {
+  const search = req.originalUrl.includes('?') ? req.originalUrl.slice(req.originalUrl.indexOf('?') + 1) : '';
+  const values = new URLSearchParams(search).getAll(name);
+  if (values.length === 0) return fallback;
+  const text = values[0] as string;
+  if (values.length === 1 && DECIMAL_INTEGER.test(text)) return Number(text);
+  const given = values.length === 1 ? JSON.stringify(text.slice(0, 40)) : `${values.length} values`;
+  const message = `${name} must be one whole number written in decimal digits, e.g. ${fallback}; got ${given}`;
+  throw badRequest(message, [{ path: name, message }]);
 }

@@ -97,10 +97,10 @@ export function accountRoutes(
   });
 
   router.get('/api/v1/audit-events', async (req, res) => {
-    res.json(await audit.list(principalOf(req).teamId, intQuery(req.query.limit, 50), intQuery(req.query.offset, 0)));
+    res.json(await audit.list(principalOf(req).teamId, intQuery(req, 'limit', 50), intQuery(req, 'offset', 0)));
   });
   router.get('/api/v1/outbox', async (req, res) => {
-    res.json(await mailer.list(intQuery(req.query.limit, 50), intQuery(req.query.offset, 0)));
+    res.json(await mailer.list(intQuery(req, 'limit', 50), intQuery(req, 'offset', 0)));
   });
   return router;
 }

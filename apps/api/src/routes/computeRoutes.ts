@@ -51,7 +51,7 @@ export function computeRoutes(services: Services): Router {
   });
 
   router.get('/api/v1/jobs', async (req, res) => {
-    res.json(await jobs.list(principalOf(req).teamId, intQuery(req.query.limit, 50), intQuery(req.query.offset, 0)));
+    res.json(await jobs.list(principalOf(req).teamId, intQuery(req, 'limit', 50), intQuery(req, 'offset', 0)));
   });
   router.post('/api/v1/jobs/ma-sweeps', async (req, res) => {
     const input = { ...req.body, maxOrder: req.body.maxOrder ?? 100 };

@@ -28,8 +28,8 @@ export function studyRoutes(services: Services): Router {
       await studies.list(principalOf(req).teamId, {
         projectId: text(req.query.projectId),
         q: text(req.query.q),
-        limit: intQuery(req.query.limit, 50),
-        offset: intQuery(req.query.offset, 0),
+        limit: intQuery(req, 'limit', 50),
+        offset: intQuery(req, 'offset', 0),
       }),
     );
   });
@@ -57,7 +57,7 @@ export function studyRoutes(services: Services): Router {
   });
   router.get('/api/v1/studies/:id/spectrum', async (req, res) => {
     const study = await studies.get(principalOf(req).teamId, req.params.id);
-    res.json(computeSpectrum(study.modulation as ModulationInput, intQuery(req.query.maxOrder, 100)));
+    res.json(computeSpectrum(study.modulation as ModulationInput, intQuery(req, 'maxOrder', 100)));
   });
   return router;
 }

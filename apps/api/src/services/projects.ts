@@ -1,6 +1,6 @@
 import { fn, col, Op } from 'sequelize';
 import type { Models, ProjectRow } from '../models/index.js';
-import { notFound } from '../http/errors.js';
+import { badRequest, notFound } from '../http/errors.js';
 import type { AuditLog } from './audit.js';
 import { iso } from './dto.js';
 import type { Principal } from './principal.js';
@@ -14,8 +14,19 @@ export interface ProjectDto {
   updatedAt: string;
 }
 
-/** Escapes LIKE wildcards so a search for `50%` means the text `50%`. */
+/**
+ * Escapes LIKE wildcards so a search for `50%` means the text `50%`. Control characters
+ * (U+0000–U+001F, U+007F) are refused with a 400 naming `q`: no name can hold them, and SQLite
+ * ends the inlined literal at NUL (defect F3 in docs/robustness.md).
+ */
 export function likePattern(text: string): string {
+  // eslint-disable-next-line no-control-regex
+  const control = /[\u0000-\u001f\u007f]/u.exec(text);
+  if (control) {
+    const code = `U+${(control[0].codePointAt(0) ?? 0).toString(16).toUpperCase().padStart(4, '0')}`;
+    const message = `q must be plain text without control characters; got ${code} at position ${control.index + 1}`;
+    throw badRequest(message, [{ path: 'q', message }]);
+  }
   return `%${text.toLowerCase().replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 }
 
