@@ -1,4 +1,5 @@
 import { TAU } from '../math.js';
+import { ParameterRangeError } from '../validation/errors.js';
 import { assertLcFilter } from './assertLcFilter.js';
 import type { LcFilterOptions } from './LcFilterOptions.js';
 import { lcFilterTransfer } from './lcFilterTransfer.js';
@@ -35,9 +36,38 @@ const SCAN_DECADES = 2;
  * then golden-section refinement around the largest (relative frequency tolerance 1e−10).
  *
  * @param filter - the filter (henries, farads, ohms)
+ * @throws ParameterRangeError / ParameterTypeError naming the field; also when valid but
+ *   extreme values (e.g. subnormal l·c) would make a figure non-finite: it names `l`, `c`,
+ *   `rDamping` or `loadR` instead of returning NaN or ∞
  */
 export function lcFilter(filter: LcFilterOptions): LcFilterCharacteristics {
   assertLcFilter(filter);
+  return assertFiniteCharacteristics(filter, characteristicsOf(filter));
+}
+
+/**
+ * Returns `result` when every figure is finite or `null`; otherwise throws naming the option
+ * furthest from 1 in orders of magnitude (l·c and l/c are checked by assertLcFilter already).
+ */
+function assertFiniteCharacteristics(filter: LcFilterOptions, result: LcFilterCharacteristics): LcFilterCharacteristics {
+  const bad = (Object.keys(result) as (keyof LcFilterCharacteristics)[]).find((key) => {
+    const value = result[key];
+    return value !== null && !Number.isFinite(value);
+  });
+  if (bad === undefined) return result;
+  const candidates: [string, number | undefined][] = [
+    ['l', filter.l],
+    ['c', filter.c],
+    ['rDamping', filter.rDamping],
+    ['cDamping', filter.cDamping],
+    ['loadR', filter.loadR],
+  ];
+  const magnitude = (x: number | undefined): number => (x !== undefined && x > 0 ? Math.abs(Math.log10(x)) : -1);
+  const [field, value] = candidates.reduce((a, b) => (magnitude(b[1]) > magnitude(a[1]) ? b : a));
+  throw new ParameterRangeError(field, `a less extreme finite number (it makes ${bad} non-finite in double precision)`, value);
+}
+
+function characteristicsOf(filter: LcFilterOptions): LcFilterCharacteristics {
   const { l, c, rDamping = 0, dampingPlacement = 'series-with-capacitor', loadR } = filter;
   const resonanceFrequency = 1 / (TAU * Math.sqrt(l * c));
   const characteristicImpedance = Math.sqrt(l / c);

@@ -26,6 +26,9 @@ export interface LcFilterResponse {
  *
  * @param frequencies - hertz, each ≥ 0, at most 1 000 000
  * @param filter - the filter (henries, farads, ohms)
+ * @throws ParameterRangeError naming the field; `frequencies[i]` when |H| there is not a
+ *   finite non-zero double (an undamped filter exactly at resonance, or ω²LC overflowing),
+ *   so `magnitudeDb` and `phase` are always finite
  */
 export function lcFilterResponse(frequencies: readonly number[], filter: LcFilterOptions): LcFilterResponse {
   assertFiniteArray('frequencies', frequencies, 0, MAX_RESPONSE_FREQUENCIES);
@@ -39,6 +42,14 @@ export function lcFilterResponse(frequencies: readonly number[], filter: LcFilte
   for (const f of frequencies) {
     const h = lcFilterTransfer(filter, TAU * f);
     const m = Math.hypot(h.re, h.im);
+    if (!Number.isFinite(m) || !(m > 0) || !Number.isFinite(h.re) || !Number.isFinite(h.im)) {
+      const i = magnitude.length;
+      throw new ParameterRangeError(
+        `frequencies[${i}]`,
+        `a frequency at which this filter's gain is a finite, non-zero double (|H| = ${m} here; l·c·ω² overflows or the filter is undamped at resonance)`,
+        f,
+      );
+    }
     magnitude.push(m);
     magnitudeDb.push(20 * Math.log10(m));
     phase.push(Math.atan2(h.im, h.re));

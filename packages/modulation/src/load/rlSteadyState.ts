@@ -1,4 +1,5 @@
 import { TAU } from '../math.js';
+import { ParameterRangeError } from '../validation/errors.js';
 import { assertWaveform } from '../waveform/assertWaveform.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import { assertRlLoad } from './assertRlLoad.js';
@@ -56,7 +57,10 @@ const EXTREMUM_SCAN_STEP = Math.PI / 32;
  * @param options - `r` ohm > 0, `l` henry ≥ 0, `frequency` hertz > 0, `emf` optional
  *   `{ amplitude (peak volts ≥ 0), phase (radians) }` with e(θ) = amplitude·sin(θ + phase)
  * @throws ParameterRangeError / ParameterTypeError naming the field (`r`, `l`, `frequency`,
- *   `emf.amplitude`, `emf.phase`, `waveform.*`)
+ *   `emf.amplitude`, `emf.phase`, `waveform.*`); also a ParameterRangeError when valid but
+ *   extreme inputs make a figure overflow or lose all precision in double arithmetic (for
+ *   example r = 5e-324 Ω, where volts/r is infinite, or ωL/R beyond 1.8e308): it names the
+ *   input that made the result non-finite instead of returning NaN or ∞.
  */
 export function rlSteadyState(waveform: Waveform, options: RlLoadOptions): RlSteadyState {
   assertWaveform(waveform);
@@ -85,7 +89,7 @@ export function rlSteadyState(waveform: Waveform, options: RlLoadOptions): RlSte
   const { peak, min } = currentExtremes(solution);
   const rmsCurrent = Math.sqrt(meanSquare);
   const first = segments[0] as RlSegment;
-  return {
+  return assertFiniteSteadyState(waveform, options, {
     rmsCurrent,
     meanCurrent: integralCurrent / TAU,
     peakCurrent: peak,
@@ -95,7 +99,44 @@ export function rlSteadyState(waveform: Waveform, options: RlLoadOptions): RlSte
     power: options.r * meanSquare,
     sourcePower: integralSourcePower / TAU,
     emfPower,
-  };
+  });
+}
+
+/**
+ * Returns `result` when every figure is finite; otherwise throws a ParameterRangeError naming
+ * the input that made it so: `r` when (peak source + EMF volts)/r or the power overflows;
+ * otherwise the largest factor of the time constant ωL/R (`l`, `frequency`, or `r` for 1/R)
+ * when it overflows; otherwise the input furthest from 1 in orders of magnitude.
+ */
+function assertFiniteSteadyState(waveform: Waveform, options: RlLoadOptions, result: RlSteadyState): RlSteadyState {
+  const bad = (Object.keys(result) as (keyof RlSteadyState)[]).find((key) => !Number.isFinite(result[key]));
+  if (bad === undefined) return result;
+  const { r, l, frequency } = options;
+  const volts = waveform.levels.reduce((m, v) => Math.max(m, Math.abs(v)), 0) + (options.emf?.amplitude ?? 0);
+  const current = volts / r;
+  const why = `(it makes ${bad} non-finite in double precision)`;
+  if (!Number.isFinite(current) || !Number.isFinite(current * current * r)) {
+    const least = volts === 0 ? Number.MIN_VALUE : volts / Math.sqrt(Number.MAX_VALUE);
+    throw new ParameterRangeError('r', `a finite number ≥ ${least.toPrecision(3)} ohm for peak volts ${volts.toPrecision(3)} ${why}`, r);
+  }
+  const magnitude = (x: number): number => (x > 0 ? Math.abs(Math.log10(x)) : 0);
+  if (!Number.isFinite((TAU * frequency * l) / r)) {
+    const factors: [string, number, number][] = [
+      ['l', l, Math.log10(l)],
+      ['frequency', frequency, Math.log10(frequency)],
+      ['r', r, -Math.log10(r)],
+    ];
+    const [field, value] = factors.reduce((a, b) => (b[2] > a[2] ? b : a));
+    throw new ParameterRangeError(field, `a finite number for which the time constant 2π·frequency·l/r stays below 1.8e308 ${why}`, value);
+  }
+  const candidates: [string, number][] = [
+    ['r', r],
+    ['l', l],
+    ['frequency', frequency],
+    ['emf.amplitude', options.emf?.amplitude ?? 1],
+  ];
+  const [field, value] = candidates.reduce((a, b) => (magnitude(b[1]) > magnitude(a[1]) ? b : a));
+  throw new ParameterRangeError(field, `a less extreme finite number ${why}`, value);
 }
 
 /** ∫ i_v dθ over the segment: c·w + d·τ·(1 − e^{−w/τ}). */
