@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { principalOf } from '../auth/authorize.js';
 import { badRequest } from '../http/errors.js';
+import { escapeFormulaCells } from '../services/captureCsv.js';
 import type { Services } from '../services/index.js';
 
 interface UploadedFile {
@@ -32,10 +33,16 @@ export function captureRoutes(services: Services): Router {
   });
   router.get('/api/v1/captures/:id/file', async (req, res) => {
     const row = await captures.find(principalOf(req).teamId, req.params.id);
+    // Uploads with formula cells are refused, but a file stored before that check is escaped
+    // (cells beginning with = + - @ get a leading ') rather than sent as it was.
+    const original = Buffer.isBuffer(row.original) ? row.original : Buffer.from(String(row.original));
+    const text = original.toString('utf8');
+    const safe = escapeFormulaCells(text);
     res
       .type('text/csv; charset=utf-8')
       .setHeader('Content-Disposition', `attachment; filename="${row.fileName}"`)
-      .send(row.original);
+      .setHeader('X-Content-Type-Options', 'nosniff')
+      .send(safe === text ? original : Buffer.from(safe, 'utf8'));
   });
   router.post('/api/v1/captures/:id/spectrum', async (req, res) => {
     const { window = 'hann', fundamentalFrequency, maxOrder = 50, column = 'voltage' } = req.body ?? {};

@@ -35,6 +35,15 @@ export function parseCaptureCsv(buffer: Buffer): ParsedCapture {
   if (buffer.includes(0)) throw reject('file is not text (it holds NUL bytes); upload a CSV file');
   const text = new TextDecoder('utf-8', { fatal: false }).decode(buffer);
   if (text.includes('\uFFFD')) throw reject('file is not UTF-8 text; export the capture as CSV');
+  // The original bytes are offered for download, so a cell a spreadsheet would run as a formula
+  // (even in a comment line the parser skips) is refused: OWASP, "CSV Injection".
+  const formula = formulaCells(text)[0];
+  if (formula) {
+    throw reject(
+      `line ${formula.line}: the cell ${JSON.stringify(formula.cell.slice(0, 40))} begins with ${JSON.stringify(formula.cell[0])}, which a spreadsheet runs as a formula; remove it or prefix it with '`,
+      `file.line${formula.line}`,
+    );
+  }
   let records: string[][];
   try {
     records = parse(text.replace(/^\uFEFF/, ''), {
@@ -102,6 +111,75 @@ export function parseCaptureCsv(buffer: Buffer): ParsedCapture {
     sampleRate: 1 / step,
     duration: duration + step,
   };
+}
+
+/** Cells a spreadsheet would run as a formula: beginning with = + - @ (or tab, CR), not a plain number. */
+const FORMULA_START = /^[=+\-@\t\r]/;
+const PLAIN_NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
+
+export interface FormulaCell {
+  /** 1-based line of the file. */
+  line: number;
+  cell: string;
+  /** Offset in the text of the cell's first character (inside its quotes when quoted). */
+  offset: number;
+}
+
+/**
+ * Every cell of `text` a spreadsheet would treat as a formula (OWASP, "CSV Injection":
+ * cells beginning with = + - @, tab or carriage return), splitting on `,`, `;` and tab as the
+ * upload accepts them, with double quotes honoured, comment lines included. Plain numbers such
+ * as `-1.5e3` are not formulas.
+ */
+export function formulaCells(text: string): FormulaCell[] {
+  const found: FormulaCell[] = [];
+  let line = 1;
+  let cell = '';
+  let start = -1;
+  let quoted = false;
+  const end = (): void => {
+    if (start >= 0 && FORMULA_START.test(cell) && !PLAIN_NUMBER.test(cell.trim())) found.push({ line, cell, offset: start });
+    cell = '';
+    start = -1;
+  };
+  for (let i = 0; i < text.length; i++) {
+    const ch = text[i] as string;
+    if (ch === '"') {
+      if (quoted && text[i + 1] === '"') {
+        if (start < 0) start = i;
+        cell += '"';
+        i++;
+      } else quoted = !quoted;
+    } else if (!quoted && (ch === ',' || ch === ';' || ch === '\t')) {
+      end();
+    } else if (!quoted && (ch === '\n' || (ch === '\r' && text[i + 1] === '\n'))) {
+      end();
+      if (ch === '\r') i++;
+      line++;
+    } else {
+      if (start < 0) start = i;
+      cell += ch;
+    }
+  }
+  end();
+  return found;
+}
+
+/**
+ * `text` with every formula cell prefixed by `'` so a spreadsheet shows it as text (OWASP,
+ * "CSV Injection"); the text itself when it holds none. Used on download, for files stored
+ * before uploads were checked.
+ */
+export function escapeFormulaCells(text: string): string {
+  const cells = formulaCells(text);
+  if (cells.length === 0) return text;
+  let out = '';
+  let from = 0;
+  for (const { offset } of cells) {
+    out += `${text.slice(from, offset)}'`;
+    from = offset;
+  }
+  return out + text.slice(from);
 }
 
 function columnOf(name: string): 'time' | 'voltage' | 'current' | undefined {

@@ -33,7 +33,7 @@ import {
   type ZeroVectorClamping,
   ParameterRangeError,
 } from '@pulsewright/modulation';
-import { callLibrary } from './library.js';
+import { callLibrary, finiteResult } from './library.js';
 
 export type SineTriangleInput = {
   method: 'sine-triangle';
@@ -168,10 +168,11 @@ export function waveformAtMa(modulation: CarrierModulationInput): (ma: number) =
 }
 
 export function spectrumOf(waveform: Waveform, maxOrder: number): SpectrumResult {
-  return callLibrary('', () => {
+  const result = callLibrary('', () => {
     const spectrum = harmonics(waveform, maxOrder);
     return { harmonics: spectrum, thd: thd(spectrum), wthd: wthd(spectrum) };
   });
+  return finiteResult('modulation', result);
 }
 
 export function computeSpectrum(modulation: ModulationInput, maxOrder: number): SpectrumResult {
@@ -184,10 +185,11 @@ export interface LoadCurrentResult extends RlSteadyState {
 
 export function computeLoadCurrent(modulation: ModulationInput, load: RlLoadOptions, points: number): LoadCurrentResult {
   const { waveform } = modulationWaveforms(modulation);
-  return callLibrary('load.', () => ({
+  const result = callLibrary('load.', () => ({
     ...rlSteadyState(waveform, load),
     series: rlCurrentSeries(waveform, { ...load, points }),
   }));
+  return finiteResult('load', result);
 }
 
 export interface FilterResult {
@@ -199,14 +201,14 @@ export function computeFilter(
   filter: LcFilterOptions,
   spectrumInput?: { modulation: ModulationInput; maxOrder: number; fundamentalFrequency: number },
 ): FilterResult {
-  const characteristics = callLibrary('filter.', () => lcFilter(filter));
+  const characteristics = finiteResult('filter', callLibrary('filter.', () => lcFilter(filter)));
   if (!spectrumInput) return { characteristics, output: null };
   const input = computeSpectrum(spectrumInput.modulation, spectrumInput.maxOrder);
   const output = callLibrary('', () => {
     const spectrum = filteredSpectrum(input.harmonics, { filter, fundamentalFrequency: spectrumInput.fundamentalFrequency });
     return { harmonics: spectrum, thd: thd(spectrum), wthd: wthd(spectrum) };
   });
-  return { characteristics, output };
+  return { characteristics, output: finiteResult('filter', output) };
 }
 
 export function computeSpaceVector(m: number, theta: number, options: SpaceVectorSequenceOptions): SpaceVectorSequence {

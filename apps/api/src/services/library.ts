@@ -26,3 +26,33 @@ export function asBadRequest(prefix: string, error: unknown): unknown {
   if (error instanceof RangeError) return new HttpError(400, error.message, [{ path: prefix.replace(/\.$/, ''), message: error.message }]);
   return error;
 }
+
+/** The JSON path of the first number in `value` that is NaN or ±∞, or undefined when all are finite. */
+function firstNonFinite(value: unknown, at: string, depth = 0): string | undefined {
+  if (typeof value === 'number') return Number.isFinite(value) ? undefined : at;
+  if (depth > 8 || value === null || typeof value !== 'object') return undefined;
+  if (Array.isArray(value)) {
+    for (let i = 0; i < value.length; i++) {
+      const found = firstNonFinite(value[i], `${at}[${i}]`, depth + 1);
+      if (found) return found;
+    }
+    return undefined;
+  }
+  for (const [key, entry] of Object.entries(value)) {
+    const found = firstNonFinite(entry, at ? `${at}.${key}` : key, depth + 1);
+    if (found) return found;
+  }
+  return undefined;
+}
+
+/**
+ * The last guard before the response validator: a library result holding NaN or ±∞ (which
+ * JSON would send as null and the contract forbids) becomes a 400 naming the input `field`
+ * whose values are too extreme, never a 500.
+ */
+export function finiteResult<T>(field: string, result: T): T {
+  const where = firstNonFinite(result, '');
+  if (where === undefined) return result;
+  const message = `${field} holds values so extreme that ${where} is not a finite number in double precision; use values nearer the documented working range`;
+  throw new HttpError(400, message, [{ path: field, message }]);
+}
