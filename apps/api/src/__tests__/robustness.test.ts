@@ -67,8 +67,20 @@ describe('F3: control characters in q', () => {
   it.each(['/api/v1/studies?q=a%00b', '/api/v1/projects?q=a%00b', '/api/v1/studies?q=%1b'])('%s is 400 naming q', async (url) => {
     expectProblem(await auth(request(t.app).get(url)), 400, 'q');
   });
-  it('ordinary text still searches', async () => {
+  it('ordinary text still searches, and % _ \\ are literal (LIKE … ESCAPE)', async () => {
     expect((await auth(request(t.app).get('/api/v1/studies?q=a'))).status).toBe(200);
+    for (const name of ['Wildcard 50% load', 'Wildcard 50 volts', 'Wildcard a_b', 'Wildcard axb', 'Wildcard c\\d']) {
+      const res = await auth(request(t.app).post('/api/v1/studies')).send({ projectId, name, modulation: SINE_TRIANGLE });
+      expect(res.status).toBe(201);
+    }
+    const names = async (q: string): Promise<string[]> =>
+      (await auth(request(t.app).get(`/api/v1/studies?q=${encodeURIComponent(q)}`))).body.map((s: { name: string }) => s.name);
+    expect(await names('50%')).toEqual(['Wildcard 50% load']);
+    expect(await names('a_b')).toEqual(['Wildcard a_b']);
+    expect(await names('c\\d')).toEqual(['Wildcard c\\d']);
+    expect((await names('WILDCARD 50')).sort()).toEqual(['Wildcard 50 volts', 'Wildcard 50% load']);
+    const projects = (await auth(request(t.app).get('/api/v1/projects?q=%25'))).body as { name: string }[];
+    expect(projects.every((p) => p.name.includes('%'))).toBe(true);
   });
 });
 

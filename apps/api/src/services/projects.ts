@@ -1,4 +1,4 @@
-import { fn, col, Op } from 'sequelize';
+import { fn, col, Op, type Sequelize } from 'sequelize';
 import type { Models, ProjectRow } from '../models/index.js';
 import { badRequest, notFound } from '../http/errors.js';
 import type { AuditLog } from './audit.js';
@@ -30,6 +30,16 @@ export function likePattern(text: string): string {
   return `%${text.toLowerCase().replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 }
 
+/**
+ * `lower(column) LIKE '%text%' ESCAPE '\'`: case-insensitive substring match in which `%`, `_`
+ * and `\` of the text are literal (SQLite has no default LIKE escape character, so the clause
+ * must name it; PostgreSQL accepts the same clause).
+ */
+export function containsText(sequelize: Sequelize, column: string, text: string): ReturnType<Sequelize['where']> {
+  const pattern = sequelize.literal(`${sequelize.escape(likePattern(text))} ESCAPE '\\'`);
+  return sequelize.where(fn('lower', col(column)), Op.like, pattern);
+}
+
 export class ProjectService {
   constructor(
     private readonly models: Models,
@@ -38,7 +48,7 @@ export class ProjectService {
 
   async list(teamId: string, q?: string): Promise<ProjectDto[]> {
     const where = q
-      ? { teamId, [Op.and]: [this.models.sequelize.where(fn('lower', col('name')), { [Op.like]: likePattern(q) })] }
+      ? { teamId, [Op.and]: [containsText(this.models.sequelize, 'name', q)] }
       : { teamId };
     const rows = await this.models.Project.findAll({ where, order: [['name', 'ASC']] });
     return Promise.all(rows.map((row) => this.toDto(row)));

@@ -1,10 +1,10 @@
-import { col, fn, Op, Transaction, UniqueConstraintError } from 'sequelize';
+import { Op, Transaction, UniqueConstraintError } from 'sequelize';
 import type { Models, StudyRevisionRow, StudyRow } from '../models/index.js';
 import { conflict, notFound } from '../http/errors.js';
 import type { AuditLog } from './audit.js';
 import { iso } from './dto.js';
 import type { Principal } from './principal.js';
-import { likePattern, type ProjectService } from './projects.js';
+import { containsText, type ProjectService } from './projects.js';
 
 /** The content of one revision as the API reads and writes it. */
 export interface StudyContent {
@@ -65,8 +65,8 @@ export class StudyService {
     if (filter.q) {
       and.push({
         [Op.or]: [
-          this.models.sequelize.where(fn('lower', col('Study.name')), { [Op.like]: likePattern(filter.q) }),
-          this.models.sequelize.where(fn('lower', col('Study.method')), { [Op.like]: likePattern(filter.q) }),
+          containsText(this.models.sequelize, 'Study.name', filter.q),
+          containsText(this.models.sequelize, 'Study.method', filter.q),
         ],
       });
     }
