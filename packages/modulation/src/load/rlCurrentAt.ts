@@ -4,6 +4,7 @@ import { assertWaveform } from '../waveform/assertWaveform.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import { assertRlLoad } from './assertRlLoad.js';
 import type { RlLoadOptions } from './RlLoad.js';
+import { nonFiniteLoadError } from './nonFiniteLoadError.js';
 import { currentInSegment, rlPiecewiseSolution, segmentIndexAt } from './rlPiecewiseSolution.js';
 
 /** The most angles one call of {@link rlCurrentAt} evaluates. */
@@ -21,15 +22,24 @@ export const MAX_CURRENT_ANGLES = 1_000_000;
  * @param angles - radians, any finite values (wrapped into [0, 2π)), at most 1 000 000
  * @param options - the load, as for {@link rlSteadyState}
  * @returns one current per angle, amperes, in the order given
+ * @throws ParameterRangeError naming the field for invalid input, and naming the input to
+ *   blame when valid but extreme values would make a current non-finite (as rlSteadyState)
  */
-export function rlCurrentAt(waveform: Waveform, angles: readonly number[], options: RlLoadOptions): number[] {
+export function rlCurrentAt(
+  waveform: Waveform,
+  angles: readonly number[],
+  options: RlLoadOptions,
+): number[] {
   assertWaveform(waveform);
   assertFiniteArray('angles', angles, 0, MAX_CURRENT_ANGLES);
   assertRlLoad(options);
   const solution = rlPiecewiseSolution(waveform, options);
-  return angles.map((angle) => {
+  return angles.map((angle, i) => {
     const theta = wrapAngle(angle);
     const segment = solution.segments[segmentIndexAt(solution, theta)];
-    return currentInSegment(solution, segment as NonNullable<typeof segment>, theta);
+    const current = currentInSegment(solution, segment as NonNullable<typeof segment>, theta);
+    if (!Number.isFinite(current))
+      throw nonFiniteLoadError(waveform, options, `the current at angles[${i}]`);
+    return current;
   });
 }

@@ -1,8 +1,8 @@
 import { TAU } from '../math.js';
-import { ParameterRangeError } from '../validation/errors.js';
 import { assertWaveform } from '../waveform/assertWaveform.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import { assertRlLoad } from './assertRlLoad.js';
+import { nonFiniteLoadError } from './nonFiniteLoadError.js';
 import type { RlLoadOptions } from './RlLoad.js';
 import {
   currentInSegment,
@@ -102,41 +102,17 @@ export function rlSteadyState(waveform: Waveform, options: RlLoadOptions): RlSte
   });
 }
 
-/**
- * Returns `result` when every figure is finite; otherwise throws a ParameterRangeError naming
- * the input that made it so: `r` when (peak source + EMF volts)/r or the power overflows;
- * otherwise the largest factor of the time constant ωL/R (`l`, `frequency`, or `r` for 1/R)
- * when it overflows; otherwise the input furthest from 1 in orders of magnitude.
- */
-function assertFiniteSteadyState(waveform: Waveform, options: RlLoadOptions, result: RlSteadyState): RlSteadyState {
-  const bad = (Object.keys(result) as (keyof RlSteadyState)[]).find((key) => !Number.isFinite(result[key]));
+/** Returns `result` when every figure is finite; otherwise throws naming the input to blame. */
+function assertFiniteSteadyState(
+  waveform: Waveform,
+  options: RlLoadOptions,
+  result: RlSteadyState,
+): RlSteadyState {
+  const bad = (Object.keys(result) as (keyof RlSteadyState)[]).find(
+    (key) => !Number.isFinite(result[key]),
+  );
   if (bad === undefined) return result;
-  const { r, l, frequency } = options;
-  const volts = waveform.levels.reduce((m, v) => Math.max(m, Math.abs(v)), 0) + (options.emf?.amplitude ?? 0);
-  const current = volts / r;
-  const why = `(it makes ${bad} non-finite in double precision)`;
-  if (!Number.isFinite(current) || !Number.isFinite(current * current * r)) {
-    const least = volts === 0 ? Number.MIN_VALUE : volts / Math.sqrt(Number.MAX_VALUE);
-    throw new ParameterRangeError('r', `a finite number ≥ ${least.toPrecision(3)} ohm for peak volts ${volts.toPrecision(3)} ${why}`, r);
-  }
-  const magnitude = (x: number): number => (x > 0 ? Math.abs(Math.log10(x)) : 0);
-  if (!Number.isFinite((TAU * frequency * l) / r)) {
-    const factors: [string, number, number][] = [
-      ['l', l, Math.log10(l)],
-      ['frequency', frequency, Math.log10(frequency)],
-      ['r', r, -Math.log10(r)],
-    ];
-    const [field, value] = factors.reduce((a, b) => (b[2] > a[2] ? b : a));
-    throw new ParameterRangeError(field, `a finite number for which the time constant 2π·frequency·l/r stays below 1.8e308 ${why}`, value);
-  }
-  const candidates: [string, number][] = [
-    ['r', r],
-    ['l', l],
-    ['frequency', frequency],
-    ['emf.amplitude', options.emf?.amplitude ?? 1],
-  ];
-  const [field, value] = candidates.reduce((a, b) => (magnitude(b[1]) > magnitude(a[1]) ? b : a));
-  throw new ParameterRangeError(field, `a less extreme finite number ${why}`, value);
+  throw nonFiniteLoadError(waveform, options, bad);
 }
 
 /** ∫ i_v dθ over the segment: c·w + d·τ·(1 − e^{−w/τ}). */
@@ -210,7 +186,12 @@ function currentExtremes(solution: RlPiecewiseSolution): { peak: number; min: nu
 }
 
 /** A zero of di/dθ in [a, b] when the slope changes sign there, to ~1e−15 rad. */
-function bisectSlope(solution: RlPiecewiseSolution, s: RlSegment, a: number, b: number): number | undefined {
+function bisectSlope(
+  solution: RlPiecewiseSolution,
+  s: RlSegment,
+  a: number,
+  b: number,
+): number | undefined {
   let fa = slope(solution, s, a);
   const fb = slope(solution, s, b);
   if (fa === 0) return a;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { rlSteadyState } from '../index.js';
+import { rlCurrentSeries, rlSteadyState } from '../index.js';
 import { ParameterRangeError } from '../../validation/errors.js';
 import { waveformFromTransitions } from '../../waveform/waveformFromTransitions.js';
 import type { Waveform } from '../../waveform/Waveform.js';
@@ -33,6 +33,11 @@ describe('rlSteadyState at the edges of double precision', () => {
     const load: RlLoadOptions = { r: 5e-324, l: 2.8e-50, frequency: 3.4e-174, emf: { amplitude: 5000, phase: 0 } };
     expect(fieldOf(() => rlSteadyState(square(1.2e-168), load))).toBe('r');
     expect(() => rlSteadyState(square(1.2e-168), load)).toThrow(/^r must be .*ohm/);
+  });
+
+  it('rlCurrentSeries names r too instead of returning NaN samples', () => {
+    const load: RlLoadOptions = { r: 5e-324, l: 2.8e-50, frequency: 3.4e-174, emf: { amplitude: 5000, phase: 0 } };
+    expect(fieldOf(() => rlCurrentSeries(square(1.2e-168), { ...load, points: 8 }))).toBe('r');
   });
 
   it('names l when the time constant 2π·f·L/R overflows', () => {
