@@ -35,8 +35,9 @@ describe('rlSteadyState at the edges of double precision', () => {
     expect(() => rlSteadyState(square(1.2e-168), load)).toThrow(/^r must be .*ohm/);
   });
 
-  it('rlCurrentSeries names r too instead of returning NaN samples', () => {
-    const load: RlLoadOptions = { r: 5e-324, l: 2.8e-50, frequency: 3.4e-174, emf: { amplitude: 5000, phase: 0 } };
+  it('rlCurrentSeries names r too instead of returning ±∞/NaN samples', () => {
+    // Resistive (l = 0): the EMF current 5000 V / 5e-324 Ω overflows to ∞.
+    const load: RlLoadOptions = { r: 5e-324, l: 0, frequency: 50, emf: { amplitude: 5000, phase: 0 } };
     expect(fieldOf(() => rlCurrentSeries(square(1.2e-168), { ...load, points: 8 }))).toBe('r');
   });
 
