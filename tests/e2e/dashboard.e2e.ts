@@ -377,8 +377,14 @@ export const scenarios: Scenario[] = [
       await page.getByRole('tab', { name: 'Members' }).click();
       await page.getByText('viewer@kestrel.example').waitFor();
       await page.getByRole('tab', { name: 'Audit log' }).click();
-      await page.getByRole('tabpanel').locator('table, [role=status], div').first().waitFor();
+      // This admin's own sign-in is the newest audit event.
+      await page.getByRole('tabpanel').getByRole('cell', { name: 'auth.login' }).first().waitFor();
       await screenshot(page, 'team-admin');
+      // A password-reset request writes a mail; the outbox must show it to the admin.
+      const reset = await page.request.post(`${context.baseUrl}/api/v1/auth/password-reset`, { data: { email: 'viewer@kestrel.example' } });
+      if (!reset.ok()) throw new Error(`password reset answered ${reset.status()}`);
+      await page.getByRole('tab', { name: 'Mail outbox' }).click();
+      await page.getByRole('tabpanel').getByText('viewer@kestrel.example').first().waitFor();
       await page.close();
     },
   },
