@@ -16,6 +16,7 @@ import { accountRoutes } from './routes/accountRoutes.js';
 import { studyRoutes } from './routes/studyRoutes.js';
 import { computeRoutes } from './routes/computeRoutes.js';
 import { captureRoutes } from './routes/captureRoutes.js';
+import { shareRoutes } from './routes/shareRoutes.js';
 import { createServices, type Services } from './services/index.js';
 import { seedDemo } from './services/seed.js';
 
@@ -106,6 +107,7 @@ export async function createApp(overrides: Partial<AppConfig> = {}): Promise<Pul
   const version = document.info.version;
   app.use(accountRoutes(services, { ...config, version }));
   app.use(studyRoutes(services));
+  app.use(shareRoutes(services, config));
   app.use(computeRoutes(services));
   app.use(captureRoutes(services));
   app.use('/api', (req, _res, next) => next(new HttpError(404, `No route ${req.method} ${req.originalUrl}.`)));

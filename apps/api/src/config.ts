@@ -21,6 +21,8 @@ export interface AppConfig {
   loginRateLimit: number;
   /** API keys a user may create per hour. @default 20 */
   keyRateLimit: number;
+  /** Study reports a user may e-mail per hour. @default 20 */
+  shareRateLimit: number;
   /** bcrypt cost factor. @default 12 */
   bcryptRounds: number;
   /** Folder of the built dashboard; served when it holds index.html. */
@@ -59,6 +61,7 @@ export function loadConfig(
     mailFrom: env.MAIL_FROM || 'Pulsewright <pulsewright@localhost>',
     loginRateLimit: number('LOGIN_RATE_LIMIT', 20),
     keyRateLimit: number('KEY_RATE_LIMIT', 20),
+    shareRateLimit: number('SHARE_RATE_LIMIT', 20),
     bcryptRounds: number('BCRYPT_ROUNDS', 12),
     webDist: env.WEB_DIST || path.join(repoRoot, 'apps', 'web', 'dist'),
     logErrors: env.LOG_ERRORS !== 'false',

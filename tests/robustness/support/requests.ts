@@ -455,7 +455,12 @@ export function requestArbitrary(
     variants.push({
       weight: 2,
       arbitrary: fc.constantFrom(...WHOLE_BODY_CASES).map((c) => ({
-        variant: { kind: bodySchema ? 'invalid-body' : 'stray-body', what: c.what } as Variant,
+        // An empty body is a valid request when the body is optional (requestBody.required false).
+        variant: (!bodySchema
+          ? { kind: 'stray-body', what: c.what }
+          : c.body === '' && !bodyRequired(op)
+            ? { kind: 'valid' }
+            : { kind: 'invalid-body', what: c.what }) as Variant,
         ...(c.contentType ? { contentType: c.contentType } : {}),
         ...(c.body !== undefined ? { body: c.body } : {}),
         ...(c.headers ? { headers: c.headers } : {}),

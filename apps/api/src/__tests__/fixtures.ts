@@ -125,6 +125,7 @@ export const FIXTURES: Record<string, Fixture> = {
     };
   },
   duplicateStudy: ({ ids }) => ({ path: `/api/v1/studies/${ids.studyId}/duplicate`, body: {} }),
+  shareStudyReport: ({ ids }) => ({ path: `/api/v1/studies/${ids.studyId}/share`, body: { email: 'reviewer@kestrel.example' } }),
   listStudyRevisions: ({ ids }) => ({ path: `/api/v1/studies/${ids.studyId}/revisions` }),
   restoreStudyRevision: async ({ app, ids, tokens }) => {
     const current = await request(app).get(`/api/v1/studies/${ids.studyId}`).set('Authorization', `Bearer ${tokens.viewer}`);

@@ -8,6 +8,7 @@ import { JobService } from './jobs.js';
 import { Mailer } from './mail.js';
 import { ProjectService } from './projects.js';
 import { StudyService } from './studies.js';
+import { StudyShareService } from './studyShare.js';
 import { TeamService } from './team.js';
 
 /** Every service of one running app, wired to one database. */
@@ -20,6 +21,7 @@ export interface Services {
   team: TeamService;
   projects: ProjectService;
   studies: StudyService;
+  shares: StudyShareService;
   captures: CaptureService;
   jobs: JobService;
 }
@@ -39,6 +41,7 @@ export function createServices(models: Models, config: AppConfig): Services {
     team: new TeamService(models, audit, auth, mailer, config.publicUrl),
     projects,
     studies,
+    shares: new StudyShareService(models, audit, mailer, studies, config.publicUrl),
     captures: new CaptureService(models, audit, projects, studies),
     jobs: new JobService(models, audit),
   };

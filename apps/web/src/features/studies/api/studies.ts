@@ -92,6 +92,15 @@ export function useDuplicateStudy() {
   return useMutation({ mutationFn: duplicateStudy, onSuccess: () => client.invalidateQueries({ queryKey: ['studies', 'list'] }) });
 }
 
+export type StudyShareResult = Schema<'StudyShareResult'>;
+
+export async function shareStudyReport({ id, email, message }: { id: string; email: string; message?: string }): Promise<StudyShareResult> {
+  return unwrap(await api.POST('/api/v1/studies/{id}/share', { params: { path: { id } }, body: message ? { email, message } : { email } }));
+}
+export function useShareStudyReport() {
+  return useMutation({ mutationFn: shareStudyReport });
+}
+
 export async function getStudyRevisions(id: string): Promise<StudyRevision[]> {
   return unwrap(await api.GET('/api/v1/studies/{id}/revisions', { params: { path: { id } } }));
 }

@@ -3,9 +3,11 @@ import { CAUTION_TEXT } from '../../../components/ui/Caution';
 import { Button } from '../../../components/ui/Button';
 import { ErrorState, Loading } from '../../../components/ui/QueryState';
 import { formatDate, formatNumber } from '../../../lib/format';
+import { roleAtLeast, useMe } from '../../auth/api/auth';
 import { useStudy, useStudyRevisions } from '../api/studies';
 import { computePreview } from '../model/computePreview';
 import { draftFromStudy, type StudyDraft } from '../model/studyDraft';
+import { ShareReportForm } from './ShareReportForm';
 import { StudyCharts } from './StudyCharts';
 
 function parameterRows(draft: StudyDraft): [string, string][] {
@@ -46,24 +48,22 @@ export function StudyReportPage() {
   const { studyId } = useParams();
   const study = useStudy(studyId);
   const revisions = useStudyRevisions(studyId);
+  const me = useMe();
   if (study.isPending) return <Loading label="Preparing the report…" />;
   if (study.isError) return <ErrorState error={study.error} onRetry={() => study.refetch()} />;
   const draft = draftFromStudy(study.data);
   const { preview, errors } = computePreview(draft);
   const current = revisions.data?.find((r) => r.revision === study.data.revision);
   const link = `${window.location.origin}/studies/${study.data.id}/report`;
-  const mail = `mailto:?subject=${encodeURIComponent(`Pulsewright study: ${study.data.name}`)}&body=${encodeURIComponent(`The report of "${study.data.name}" (revision ${study.data.revision}):\n${link}`)}`;
   return (
     <article className="mx-auto max-w-4xl bg-panel p-6 shadow-sm print:shadow-none">
       <div className="no-print mb-4 flex flex-wrap gap-2">
         <Button onClick={() => window.print()}>Print</Button>
-        <a className="rounded-md border border-rule px-3 py-1.5 text-sm" href={mail}>
-          E-mail a link to a teammate
-        </a>
         <Button variant="secondary" onClick={() => navigator.clipboard?.writeText(link)}>
           Copy link
         </Button>
       </div>
+      <ShareReportForm studyId={study.data.id} canShare={roleAtLeast(me.data?.role, 'engineer')} />
       <header className="mb-4 border-b border-rule pb-3">
         <p className="text-xs tracking-wide text-ink-soft uppercase">Pulsewright study report</p>
         <h1 className="text-2xl font-semibold">{study.data.name}</h1>

@@ -1,0 +1,62 @@
+import type { Models } from '../models/index.js';
+import type { AuditLog } from './audit.js';
+import type { Mailer } from './mail.js';
+import type { Principal } from './principal.js';
+import type { StudyService } from './studies.js';
+
+/** The hazard caution every shared report carries (REFERENCES.md, "Cautions"). */
+export const REPORT_CAUTION =
+  'Inverter DC buses and outputs are lethal. Predictions here are idealised (ideal switches unless a loss or ' +
+  'dead-time model is chosen) and are no substitute for measurement, protective design, and the codes and ' +
+  'licensed practice that apply where the equipment is built and installed.';
+
+export interface ShareInput {
+  email: string;
+  message?: string | undefined;
+}
+
+export interface StudyShareDto {
+  sent: true;
+  to: string;
+  revision: number;
+  link: string;
+}
+
+/** Control characters (other than tab and newline) never reach a mail body or subject. */
+const stripControls = (text: string, keepNewlines: boolean): string =>
+  // eslint-disable-next-line no-control-regex
+  text.replace(keepNewlines ? /[\u0000-\u0008\u000b-\u001f\u007f]/g : /[\u0000-\u001f\u007f]/g, keepNewlines ? '' : ' ');
+
+/** E-mails a link to a study's printable report through the mail path, and audits it. */
+export class StudyShareService {
+  constructor(
+    private readonly models: Models,
+    private readonly audit: AuditLog,
+    private readonly mailer: Mailer,
+    private readonly studies: StudyService,
+    private readonly publicUrl: string,
+  ) {}
+
+  async share(principal: Principal, studyId: string, input: ShareInput): Promise<StudyShareDto> {
+    const study = await this.studies.find(principal.teamId, studyId);
+    const revision = await this.models.StudyRevision.findOne({ where: { studyId: study.id, revision: study.currentRevision } });
+    const author = revision?.authorId ? await this.models.User.findByPk(revision.authorId) : null;
+    const to = input.email.toLowerCase();
+    const link = `${this.publicUrl}/studies/${study.id}/report`;
+    const name = stripControls(study.name, false);
+    const by = author ? `${author.name} <${author.email}>` : 'an unknown author';
+    const message = input.message ? stripControls(input.message, true).trim() : '';
+    const text =
+      `${principal.user.name} (${principal.user.email}) shared a Pulsewright study report with you.\n\n` +
+      `Study: ${name}\nRevision: ${study.currentRevision}, saved by ${by}\nReport: ${link}\n\n` +
+      (message ? `Message from ${principal.user.name}:\n${message}\n\n` : '') +
+      `Caution. ${REPORT_CAUTION}\n`;
+    await this.mailer.send({ to, subject: `Pulsewright study report: ${name}`, text });
+    await this.audit.record(principal, 'study.share', 'study', study.id, {
+      to,
+      revision: study.currentRevision,
+      withMessage: message !== '',
+    });
+    return { sent: true, to, revision: study.currentRevision, link };
+  }
+}
