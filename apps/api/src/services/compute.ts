@@ -1,4 +1,7 @@
 import {
+  type SineTriangleOptions,
+  type ThreePhaseOptions,
+  type SpaceVectorWaveformOptions,
   filteredSpectrum,
   harmonics,
   lcFilter,
@@ -24,52 +27,20 @@ import {
   type SpaceVectorSequenceOptions,
   type TimerTableOptions,
   type Waveform,
-  type ZeroSequence,
-  type CarrierSampling,
-  type OvermodulationMethod,
   type SheKind,
-  type SpaceVectorSampling,
-  type SpaceVectorSequenceKind,
-  type ZeroVectorClamping,
   ParameterRangeError,
 } from '@pulsewright/modulation';
 import { callLibrary, finiteResult } from './library.js';
 
-export type SineTriangleInput = {
-  method: 'sine-triangle';
-  scheme: 'bipolar' | 'unipolar';
-  ma: number;
-  mf: number;
-  vdc: number;
-  sampling?: CarrierSampling;
-  carrierPhase?: number;
-};
-export type ThreePhaseInput = {
-  method: 'three-phase';
-  ma: number;
-  mf: number;
-  vdc: number;
-  zeroSequence?: ZeroSequence;
-  sampling?: CarrierSampling;
-  carrierPhase?: number;
-  /** Which output spectra analyse. @default 'line-to-line' */
-  output?: 'line-to-line' | 'leg';
-};
-/** The fields of the library's spaceVectorWaveforms (one of m and ma), whole frequency ratio. */
-export type SpaceVectorInput = {
-  method: 'space-vector';
-  m?: number;
-  ma?: number;
-  vdc: number;
-  frequencyRatio: number;
-  sequence?: SpaceVectorSequenceKind;
-  sampling?: SpaceVectorSampling;
-  zeroSplit?: number;
-  clamping?: ZeroVectorClamping;
-  overmodulation?: OvermodulationMethod;
-  /** Which output spectra analyse. @default 'line-to-line' */
-  output?: 'line-to-line' | 'leg';
-};
+/** Which output of a three-phase bridge spectra analyse. @default 'line-to-line' */
+type ThreePhaseOutput = { output?: 'line-to-line' | 'leg' };
+
+/** The fields of the library's `sineTriangle`, chosen by `method`. */
+export type SineTriangleInput = { method: 'sine-triangle' } & SineTriangleOptions;
+/** The fields of the library's `threePhase`, chosen by `method`. */
+export type ThreePhaseInput = { method: 'three-phase' } & ThreePhaseOptions & ThreePhaseOutput;
+/** The fields of the library's `spaceVectorWaveforms` (one of m and ma), whole frequency ratio. */
+export type SpaceVectorInput = { method: 'space-vector' } & SpaceVectorWaveformOptions & ThreePhaseOutput;
 /**
  * A solved selective-harmonic-elimination pattern: the first-quarter angles define the
  * waveform (the library's sheWaveform); `eliminate` and `fundamental` record the solve's goal.

@@ -1,20 +1,18 @@
-import { spaceVectorWaveforms } from '@pulsewright/modulation';
+import {
+  spaceVectorWaveforms,
+  type BridgeScheme,
+  type CarrierSampling,
+  type SpaceVectorSequenceKind,
+  type ZeroSequence,
+} from '@pulsewright/modulation';
 import type { Study, StudyCreate } from '../api/studies';
 
 /** Methods the editor offers. The API's spec names the modulation by `method`. */
 export type StudyMethod = 'sine-triangle' | 'three-phase' | 'space-vector' | 'selective-harmonic-elimination';
-export type Scheme = 'bipolar' | 'unipolar';
-export type Sampling = 'natural' | 'regular-symmetric' | 'regular-asymmetric';
-export type ZeroSequenceChoice =
-  | 'none'
-  | 'third-harmonic'
-  | 'min-max'
-  | 'clamp-60-peak'
-  | 'clamp-60-lead'
-  | 'clamp-60-lag'
-  | 'clamp-120-top'
-  | 'clamp-120-bottom';
-export type SvSequence = 'seven-segment' | 'five-segment';
+export type Scheme = BridgeScheme;
+export type Sampling = CarrierSampling;
+export type ZeroSequenceChoice = ZeroSequence;
+export type SvSequence = SpaceVectorSequenceKind;
 
 /** A solved harmonic-elimination pattern: it is picked on the elimination page, not edited here. */
 export interface ShePattern {
