@@ -28,6 +28,17 @@ export default tseslint.config(
     rules: reactHooks.configs.recommended.rules,
   },
   {
+    // Dashboard features never import each other (STYLE.md): shared code lives in components/,
+    // lib/ and config/; only app/ (router, shell) brings features together.
+    files: ['apps/web/src/features/*/*/*.{ts,tsx}'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        { patterns: [{ regex: '^\\.\\./\\.\\./[a-z-]+/', message: 'Features do not import other features; move shared code to lib/ or components/.' }] },
+      ],
+    },
+  },
+  {
     // Tool configuration files are loaded by their tools through a default export.
     files: ['**/*.config.{js,ts,mjs}', '**/vite.config.ts', '**/vitest.config.ts'],
     rules: { 'no-restricted-syntax': 'off' },

@@ -4,7 +4,8 @@ import { paths } from '../config/paths';
 import { Button } from '../components/ui/Button';
 import { CautionBanner } from '../components/ui/Caution';
 import { ErrorState, Loading } from '../components/ui/QueryState';
-import { roleAtLeast, useLogout, useMe } from '../features/auth/api/auth';
+import { useLogout } from '../features/auth/api/auth';
+import { roleAtLeast, useMe } from '../lib/me';
 import { useSessionToken } from './useSession';
 
 const NAV = [

@@ -1,20 +1,6 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Schema } from '@pulsewright/client';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, unwrap, unwrapEmpty } from '../../../lib/api';
 import { session } from '../../../lib/session';
-
-export type Me = Schema<'Me'>;
-export type Role = Schema<'Role'>;
-
-export async function getMe(): Promise<Me> {
-  return unwrap(await api.GET('/api/v1/me'));
-}
-
-export const meQueryOptions = () => queryOptions({ queryKey: ['me', session.getToken()], queryFn: getMe, staleTime: 60_000, retry: false });
-
-export function useMe(enabled = true) {
-  return useQuery({ ...meQueryOptions(), enabled });
-}
 
 export async function login(body: { email: string; password: string }) {
   return unwrap(await api.POST('/api/v1/auth/login', { body }));
@@ -75,11 +61,4 @@ export function useAcceptInvitation() {
       session.setToken(token);
     },
   });
-}
-
-const RANK: Record<Role, number> = { viewer: 0, engineer: 1, admin: 2 };
-
-/** Whether a role reaches another (viewer < engineer < admin), as the API's middleware checks. */
-export function roleAtLeast(role: Role | undefined, wanted: Role): boolean {
-  return role !== undefined && RANK[role] >= RANK[wanted];
 }

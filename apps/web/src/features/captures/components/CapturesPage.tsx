@@ -7,7 +7,7 @@ import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState, Loading, QueryView } from '../../../components/ui/QueryState';
 import { errorMessage, fieldErrorOf } from '../../../lib/api';
 import { formatDate, formatNumber, formatPercent } from '../../../lib/format';
-import { roleAtLeast, useMe } from '../../auth/api/auth';
+import { roleAtLeast, useMe } from '../../../lib/me';
 import { useCapture, useCaptureComparison, useCaptureSpectrum, useCaptures, useUploadCapture, type CaptureComparison, type CaptureWithSeries, type FftWindow } from '../api/captures';
 import { useCaptureStudies } from '../api/prediction';
 

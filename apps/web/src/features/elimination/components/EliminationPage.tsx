@@ -10,7 +10,7 @@ import { ErrorState } from '../../../components/ui/QueryState';
 import { paths } from '../../../config/paths';
 import { errorMessage, fieldErrorOf } from '../../../lib/api';
 import { formatNumber, formatPercent } from '../../../lib/format';
-import { roleAtLeast, useMe } from '../../auth/api/auth';
+import { roleAtLeast, useMe } from '../../../lib/me';
 import { branchesOf, getEliminationProjects, pointSpectrum, useCreateSheSweep, useSaveSheStudy, useSheJob } from '../api/elimination';
 
 const COLOURS = ['#12263a', '#d9822b', '#2a8c82', '#8e3b6e', '#c2462e', '#5b6fa8', '#7a6a2f', '#3d8a5a'];

@@ -7,7 +7,7 @@ import { Button } from '../../../components/ui/Button';
 import { TextField } from '../../../components/ui/Field';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { QueryView } from '../../../components/ui/QueryState';
-import { roleAtLeast, useMe } from '../../auth/api/auth';
+import { roleAtLeast, useMe } from '../../../lib/me';
 import { useCreateProject, useDuplicateStudy, useProjects, useStudies } from '../api/studies';
 
 function describeModulation(modulation: Record<string, unknown>): string {

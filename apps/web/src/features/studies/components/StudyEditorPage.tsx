@@ -6,7 +6,7 @@ import { formatNumber, formatPercent } from '../../../lib/format';
 import { Button } from '../../../components/ui/Button';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState, Loading } from '../../../components/ui/QueryState';
-import { roleAtLeast, useMe } from '../../auth/api/auth';
+import { roleAtLeast, useMe } from '../../../lib/me';
 import { useCreateStudy, useDuplicateStudy, useProjects, useStudy, useStudySpectrum, useUpdateStudy, type Study } from '../api/studies';
 import { defaultDraft, draftFromStudy, draftRangeErrors, modulationOf, studyContentOf, type StudyDraft } from '../model/studyDraft';
 import { HarmonicLimitsPanel } from './HarmonicLimitsPanel';

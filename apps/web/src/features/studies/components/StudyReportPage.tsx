@@ -3,7 +3,7 @@ import { CAUTION_TEXT } from '../../../components/ui/Caution';
 import { Button } from '../../../components/ui/Button';
 import { ErrorState, Loading } from '../../../components/ui/QueryState';
 import { formatDate, formatNumber } from '../../../lib/format';
-import { roleAtLeast, useMe } from '../../auth/api/auth';
+import { roleAtLeast, useMe } from '../../../lib/me';
 import { useStudy, useStudyRevisions } from '../api/studies';
 import { computePreview } from '../model/computePreview';
 import { draftFromStudy, type StudyDraft } from '../model/studyDraft';

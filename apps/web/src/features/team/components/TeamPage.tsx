@@ -5,7 +5,7 @@ import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { QueryView } from '../../../components/ui/QueryState';
 import { errorMessage, fieldErrorOf } from '../../../lib/api';
 import { formatDate } from '../../../lib/format';
-import { roleAtLeast, useMe } from '../../auth/api/auth';
+import { roleAtLeast, useMe } from '../../../lib/me';
 import {
   useApiKeys,
   useAuditEvents,
