@@ -1,27 +1,9 @@
-import { spawn, type ChildProcess } from 'node:child_process';
-import { existsSync, mkdirSync, mkdtempSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
-import { tmpdir } from 'node:os';
+import { existsSync, mkdirSync, rmSync } from 'node:fs';
 import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { chromium, type Browser, type Page } from 'playwright-core';
+import { DEMO_PASSWORD, repoRoot, startChildServer, tempDir } from '../support/server.js';
 
-export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 export const screenshotDir = path.join(repoRoot, 'tests', 'e2e', 'screenshots');
-export const DEMO_PASSWORD = 'pulsewright-demo';
-
-/** A free loopback port, asked of the OS. */
-async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = createServer();
-    server.unref();
-    server.on('error', reject);
-    server.listen(0, '127.0.0.1', () => {
-      const address = server.address();
-      server.close(() => (typeof address === 'object' && address ? resolve(address.port) : reject(new Error('no port'))));
-    });
-  });
-}
 
 export interface Service {
   baseUrl: string;
@@ -34,58 +16,22 @@ export interface Service {
  * database seeded with the demo, serving the built dashboard (apps/web/dist). Builds nothing.
  */
 export async function startService(): Promise<Service> {
-  const webIndex = path.join(repoRoot, 'apps', 'web', 'dist', 'index.html');
-  if (!existsSync(webIndex)) throw new Error('apps/web/dist is missing: run `npm run build` (turbo builds the dashboard) before the browser tests.');
-  const apiEntry = path.join(repoRoot, 'apps', 'api', 'dist', 'index.js');
-  if (!existsSync(apiEntry)) throw new Error('apps/api/dist/index.js is missing: run `npm run build` before the browser tests.');
-  const port = await freePort();
-  const dataDir = mkdtempSync(path.join(tmpdir(), 'pulsewright-e2e-'));
-  let output = '';
-  const child: ChildProcess = spawn(process.execPath, [apiEntry], {
-    cwd: repoRoot,
-    env: {
-      ...process.env,
-      PORT: String(port),
-      HOST: '127.0.0.1',
-      DATABASE_URL: `sqlite:${path.join(dataDir, 'e2e.sqlite')}`,
-      DEMO_PASSWORD,
-      PUBLIC_URL: `http://127.0.0.1:${port}`,
-      BCRYPT_ROUNDS: '4',
-      LOGIN_RATE_LIMIT: '1000',
-      KEY_RATE_LIMIT: '1000',
-      SMTP_URL: '',
-      SCARF_ANALYTICS: 'false',
-    },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
-  child.stdout?.on('data', (chunk: Buffer) => (output += chunk.toString()));
-  child.stderr?.on('data', (chunk: Buffer) => (output += chunk.toString()));
-  const baseUrl = `http://127.0.0.1:${port}`;
-  const deadline = Date.now() + 30_000;
-  for (;;) {
-    if (child.exitCode !== null) throw new Error(`The API exited with ${child.exitCode}:\n${output}`);
-    try {
-      const response = await fetch(`${baseUrl}/api/health`);
-      if (response.ok) break;
-    } catch {
-      // not listening yet
-    }
-    if (Date.now() > deadline) {
-      child.kill('SIGTERM');
-      throw new Error(`The API did not answer /api/health within 30 s:\n${output}`);
-    }
-    await new Promise((r) => setTimeout(r, 200));
+  const webDist = path.join(repoRoot, 'apps', 'web', 'dist');
+  if (!existsSync(path.join(webDist, 'index.html'))) {
+    throw new Error(
+      'apps/web/dist is missing: run `npm run build` (turbo builds the dashboard) before the browser tests.',
+    );
   }
+  const dataDir = tempDir('e2e');
+  const server = await startChildServer({
+    databaseUrl: `sqlite:${path.join(dataDir, 'e2e.sqlite')}`,
+    env: { WEB_DIST: webDist },
+  });
   return {
-    baseUrl,
-    log: () => output,
+    baseUrl: server.baseUrl,
+    log: server.output,
     async stop() {
-      if (child.exitCode === null) {
-        const exited = new Promise((r) => child.once('exit', r));
-        child.kill('SIGTERM');
-        await Promise.race([exited, new Promise((r) => setTimeout(r, 5000))]);
-        if (child.exitCode === null) child.kill('SIGKILL');
-      }
+      await server.stop();
       rmSync(dataDir, { recursive: true, force: true });
     },
   };
@@ -93,10 +39,22 @@ export async function startService(): Promise<Service> {
 
 export async function launchBrowser(): Promise<Browser> {
   const executablePath = process.env.CHROMIUM_PATH || '/usr/bin/chromium';
-  if (!existsSync(executablePath)) throw new Error(`No chromium at ${executablePath}: apt-get install -y chromium (.ci/run does).`);
+  if (!existsSync(executablePath))
+    throw new Error(
+      `No chromium at ${executablePath}: apt-get install -y chromium (.ci/run does).`,
+    );
   return chromium.launch({
     executablePath,
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'],
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+      '--disable-quic',
+    ],
   });
 }
 

@@ -9,7 +9,8 @@ import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import type { Page } from 'playwright-core';
 import type { Scenario, Context } from './dashboard.e2e.js';
-import { launchBrowser, repoRoot, screenshot, startService, type Service } from './harness.js';
+import { repoRoot } from '../support/server.js';
+import { launchBrowser, screenshot, startService, type Service } from './harness.js';
 
 const dir = path.join(repoRoot, 'tests', 'e2e');
 const files = readdirSync(dir).filter((f) => f.endsWith('.e2e.ts')).sort();

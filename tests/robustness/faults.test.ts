@@ -17,7 +17,7 @@ import {
   startChildServer,
   tempDir,
   type ChildServer,
-} from './support/server.js';
+} from '../support/server.js';
 import { integrityCheck, mountSmallDisk, queryFile, type SmallDisk } from './support/sqlite.js';
 
 /**

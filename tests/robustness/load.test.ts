@@ -9,7 +9,7 @@ import {
   startChildServer,
   tempDir,
   type ChildServer,
-} from './support/server.js';
+} from '../support/server.js';
 
 /**
  * Load: autocannon with 50 connections against the built service (node apps/api/dist/index.js)
@@ -136,6 +136,16 @@ function record(
   return row;
 }
 
+/** The load was held: no errors, timeouts or non-2xx, and health answered soon after the run. */
+function expectLoadHeld(row: Row): void {
+  expect
+    .soft({ errors: row.errors, timeouts: row.timeouts, non2xx: row.non2xx })
+    .toEqual({ errors: 0, timeouts: 0, non2xx: 0 });
+  expect
+    .soft(row.recovery, 'ms until /api/health answered after the run')
+    .toBeLessThanOrEqual(RECOVERY_LIMIT_MS);
+}
+
 /** Reads every id back, a few at a time, and returns those that are missing or wrong. */
 async function readBack<T>(items: T[], check: (item: T) => Promise<boolean>): Promise<T[]> {
   const missing: T[] = [];
@@ -163,12 +173,7 @@ describe(`load: ${CONNECTIONS} connections for ${SECONDS} s each`, () => {
       });
       const row = record('POST /api/v1/spectra', result, { recovery: await recoveryTime() });
       expect(row.requests).toBeGreaterThan(0);
-      expect
-        .soft({ errors: row.errors, timeouts: row.timeouts, non2xx: row.non2xx })
-        .toEqual({ errors: 0, timeouts: 0, non2xx: 0 });
-      expect
-        .soft(row.recovery, 'ms until /api/health answered after the run')
-        .toBeLessThanOrEqual(RECOVERY_LIMIT_MS);
+      expectLoadHeld(row);
     },
     SECONDS * 1000 + 30_000,
   );
@@ -221,12 +226,7 @@ describe(`load: ${CONNECTIONS} connections for ${SECONDS} s each`, () => {
         recovery,
       });
       expect(acknowledged.length).toBeGreaterThan(0);
-      expect
-        .soft({ errors: row.errors, timeouts: row.timeouts, non2xx: row.non2xx })
-        .toEqual({ errors: 0, timeouts: 0, non2xx: 0 });
-      expect
-        .soft(row.recovery, 'ms until /api/health answered after the run')
-        .toBeLessThanOrEqual(RECOVERY_LIMIT_MS);
+      expectLoadHeld(row);
       expect(missing, 'acknowledged studies missing on read-back').toEqual([]);
     },
     SECONDS * 1000 + 60_000,
@@ -313,12 +313,7 @@ describe(`load: ${CONNECTIONS} connections for ${SECONDS} s each`, () => {
         recovery,
       });
       expect(acknowledged.length).toBeGreaterThan(0);
-      expect
-        .soft({ errors: row.errors, timeouts: row.timeouts, non2xx: row.non2xx })
-        .toEqual({ errors: 0, timeouts: 0, non2xx: 0 });
-      expect
-        .soft(row.recovery, 'ms until /api/health answered after the run')
-        .toBeLessThanOrEqual(RECOVERY_LIMIT_MS);
+      expectLoadHeld(row);
       expect(
         missing?.map(([id]) => id),
         'studies whose acknowledged revisions are missing',

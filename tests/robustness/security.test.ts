@@ -11,7 +11,7 @@ import {
   signInOver,
   startChildServer,
   tempDir,
-} from './support/server.js';
+} from '../support/server.js';
 
 /**
  * Security checks as tests, against the threats docs/security.md lists: stolen or stale tokens,

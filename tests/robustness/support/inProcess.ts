@@ -3,7 +3,7 @@ import path from 'node:path';
 // In-process suites drive the service's own source through vitest's TypeScript transform, so
 // they test the code as it is now, without a build of apps/api.
 import { createApp, type AppConfig, type PulsewrightApp } from '../../../apps/api/src/app.js';
-import { DEMO_PASSWORD, tempDir } from './server.js';
+import { DEMO_PASSWORD, tempDir } from '../../support/server.js';
 
 export type { PulsewrightApp };
 

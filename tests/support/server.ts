@@ -5,8 +5,8 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 
-/** The repository root (tests/robustness/support → three levels up). */
-export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../..');
+/** The repository root (tests/support → two levels up). */
+export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 export const apiEntry = path.join(repoRoot, 'apps', 'api', 'dist', 'index.js');
 export const DEMO_PASSWORD = 'pulsewright-demo';
 export const DEMO = {
