@@ -2,6 +2,7 @@ import { line, scaleLinear } from 'd3';
 import { formatNumber } from '../../lib/format';
 import { AxisBottom, AxisLeft } from './axes';
 import { ChartFrame } from './ChartFrame';
+import { ChartLegend } from './ChartLegend';
 
 export interface LineSeries {
   name: string;
@@ -37,16 +38,7 @@ export function LineChart({ title, fileName, series, xLabel, yLabel, width = 760
     <ChartFrame
       title={title}
       fileName={fileName}
-      footer={
-        <ul className="mt-1 flex flex-wrap gap-3 text-xs" aria-label="Legend">
-          {series.map((s) => (
-            <li key={s.name} className="flex items-center gap-1">
-              <span className="inline-block h-0.5 w-4" style={{ background: s.color }} />
-              {s.name}
-            </li>
-          ))}
-        </ul>
-      }
+      footer={<ChartLegend series={series} swatch="line" />}
     >
       <svg data-chart="line" viewBox={`0 0 ${width} ${height}`} className="w-full text-ink" role="img" aria-label={`${title}: ${series.map((s) => s.name).join(', ')} against ${xLabel}`}>
         <AxisLeft scale={y} x={margin.left} width={width - margin.left - margin.right} label={yLabel} format={yFormat} />

@@ -4,6 +4,7 @@ import { formatNumber, formatPercent } from '../../lib/format';
 import { Button } from '../ui/Button';
 import { AxisBottom, AxisLeft } from './axes';
 import { ChartFrame } from './ChartFrame';
+import { ChartLegend } from './ChartLegend';
 
 export interface SpectrumBar {
   order: number;
@@ -87,16 +88,7 @@ export function SpectrumChart({ series, title = 'Spectrum', fileName = 'spectrum
         </Button>
       }
       footer={
-        series.length > 1 ? (
-          <ul className="mt-1 flex flex-wrap gap-3 text-xs" aria-label="Legend">
-            {series.map((s) => (
-              <li key={s.name} className="flex items-center gap-1">
-                <span className="inline-block h-2.5 w-2.5 rounded-sm" style={{ background: s.color }} />
-                {s.name}
-              </li>
-            ))}
-          </ul>
-        ) : null
+        series.length > 1 ? <ChartLegend series={series} swatch="square" /> : null
       }
     >
       <svg
