@@ -21,9 +21,10 @@ export function waveformFromTransitions(transitions: readonly Transition[]): Wav
   if (count === 0) throw new RangeError('transitions must hold at least one entry');
   const angles: number[] = [];
   const levels: number[] = [];
-  for (const index of ascendingOrder(transitions)) {
-    const { angle, level } = transitions[index] as Transition;
-    const wrapped = wrapAngle(angle);
+  const wrappedAngles = transitions.map((t) => wrapAngle(t.angle));
+  for (const index of ascendingOrder(wrappedAngles)) {
+    const wrapped = wrappedAngles[index] as number;
+    const { level } = transitions[index] as Transition;
     // Merge near-coincident transitions: the last of a cluster holds the level after it.
     if (angles.length > 0 && wrapped - (angles[angles.length - 1] as number) < EDGE_EPSILON) {
       levels[levels.length - 1] = level;
@@ -42,13 +43,12 @@ export function waveformFromTransitions(transitions: readonly Transition[]): Wav
 }
 
 /**
- * The indices of `transitions` in ascending order of wrapped angle, ties in input order. The
+ * The indices of `wrapped` (angles in [0, 2π)) in ascending order, ties in input order. The
  * modulators emit transitions in ascending unwrapped order, which wrapping turns into one
  * rotation of an ascending list: that case is found in one pass, anything else is sorted.
  */
-function ascendingOrder(transitions: readonly Transition[]): number[] {
-  const count = transitions.length;
-  const wrapped = transitions.map((t) => wrapAngle(t.angle));
+function ascendingOrder(wrapped: readonly number[]): number[] {
+  const count = wrapped.length;
   let descents = 0;
   let start = 0;
   for (let i = 1; i < count; i++) {
