@@ -19,3 +19,5 @@ export * from './she/index.js';
 export * from './firmware/index.js';
 export * from './losses/index.js';
 export * from './capture/index.js';
+export * from './limits/index.js';
+export * from './design/index.js';

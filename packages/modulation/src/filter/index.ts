@@ -4,3 +4,4 @@ export * from './lcFilter.js';
 export * from './lcFilterResponse.js';
 export * from './filteredSpectrum.js';
 export * from './sizeFilterInductance.js';
+export * from './outputNetworkResponse.js';

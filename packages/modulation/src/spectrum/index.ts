@@ -4,3 +4,6 @@ export * from './thd.js';
 export * from './wthd.js';
 export * from './labelHarmonics.js';
 export * from './carrierGroupOf.js';
+export * from './fundamentalAmplitude.js';
+export * from './waveformThd.js';
+export * from './waveformWthd.js';

@@ -1,2 +1,3 @@
 export * from './errors.js';
 export * from './assertions.js';
+export * from './withFieldPrefix.js';

@@ -1,0 +1,106 @@
+import type { LcFilterCharacteristics } from '../filter/lcFilter.js';
+import type { HarmonicLimitCheck } from '../limits/checkVoltageHarmonicLimits.js';
+import type { LabelledHarmonic } from '../spectrum/labelHarmonics.js';
+import type { ModulationMethod } from './Modulation.js';
+import type { NamedVoltage } from './modulationVoltages.js';
+
+/** One period sampled at evenly spaced angles [0, 2π): plain arrays of equal length. */
+export interface PeriodSeries {
+  /** Radians. */
+  angles: number[];
+  /** Volts or amperes at each angle. */
+  values: number[];
+}
+
+/** The figures of one voltage; a plain serialisable object. */
+export interface VoltageFigures {
+  /** What the voltage is measured between, e.g. `phase a to star point`. */
+  name: string;
+  /** Fundamental amplitude, peak volts, and its phase (radians, of sin(θ + phase)). */
+  fundamental: number;
+  fundamentalPhase: number;
+  /** RMS over the period, volts. */
+  rms: number;
+  /**
+   * THD over every order ≥ 2, ratio. Exact from the mean square when `exact`; otherwise (a
+   * filtered voltage) the sum to `analysisOrder`, with `thdUpperBound` adding a rigorous bound
+   * on the orders above it.
+   */
+  thd: number;
+  thdUpperBound: number;
+  /** WTHD over every order ≥ 2, ratio (exact, or the sum to `analysisOrder` as for thd). */
+  wthd: number;
+  /** True when thd and wthd are exact over the whole waveform (an unfiltered bridge voltage). */
+  exact: boolean;
+  /** Orders 0..maxOrder, peak volts, labelled by carrier group and sideband (by order alone for a pattern). */
+  spectrum: LabelledHarmonic[];
+  /** THD of orders 2..maxOrder only, ratio: show it only labelled with that order. */
+  spectrumThd: number;
+}
+
+/** The figures of one current; a plain serialisable object. */
+export interface CurrentFigures {
+  /** Which current, e.g. `inverter (switch) current, phase a`. */
+  name: string;
+  /** RMS, amperes. */
+  rms: number;
+  /** Largest |i| over the period, amperes. */
+  peak: number;
+  /** Fundamental amplitude, peak amperes. */
+  fundamental: number;
+  /** RMS of what remains after the fundamental, i − i₁, amperes. */
+  rippleRms: number;
+  /** Peak-to-peak of i − i₁ over the period, amperes. */
+  ripplePeakToPeak: number;
+  /** The current over one period, for charts. */
+  series: PeriodSeries;
+}
+
+/** The currents of one phase. */
+export interface PhaseCurrents {
+  phase: 'a' | 'b' | 'c';
+  /** What the bridge leg's switches carry: the filter inductor's current, or the load's without a filter. */
+  inverter: CurrentFigures;
+  /** Into the filter's shunt branch; null without a filter. */
+  capacitor: CurrentFigures | null;
+  /** Into the load; null without a load. */
+  load: CurrentFigures | null;
+}
+
+/** Everything the product shows about one design, from {@link analyseDesign}; plain data. */
+export interface DesignReport {
+  method: ModulationMethod;
+  methodLabel: string;
+  /** 1 (single-phase bridge) or 3 (three-phase bridge, star-connected load and filter). */
+  phaseCount: 1 | 3;
+  /** carrierFrequency/fundamentalFrequency; null for a stored pattern. */
+  frequencyRatio: number | null;
+  fundamentalFrequency: number;
+  /** Highest order of every `spectrum`. */
+  maxOrder: number;
+  /** Highest order summed for the filtered figures (their tails are bounded beyond it). */
+  analysisOrder: number;
+  /** The bridge's output voltages, named (phases to the load, and legs and lines for three-phase). */
+  voltages: NamedVoltage[];
+  /** The bridge voltage across phase a of the load side (before any filter). */
+  bridge: VoltageFigures;
+  /** Line-to-line a−b of the bridge (three-phase only). */
+  lineToLine: VoltageFigures | null;
+  /** The filter's output voltage of phase a, loaded by the load; null without a filter. */
+  output: (VoltageFigures & { series: PeriodSeries }) | null;
+  /** Currents of each phase; empty with neither load nor filter. */
+  currents: PhaseCurrents[];
+  /** Mean power into the load resistance, all phases together, watts; null without a load. */
+  loadPower: number | null;
+  /** The filter's own figures (unloaded) and its loaded gain; null without a filter. */
+  filter: {
+    characteristics: LcFilterCharacteristics;
+    /** |V_out/V_bridge| at the fundamental and at the carrier frequency, with the load. */
+    gainAtFundamental: number;
+    gainAtCarrier: number | null;
+  } | null;
+  /** The limit check of the voltage at the point of coupling (the filter's output where there is one). */
+  limitCheck: HarmonicLimitCheck;
+  /** Cautions the product shows with these figures. */
+  cautions: string[];
+}

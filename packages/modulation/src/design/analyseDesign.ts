@@ -1,0 +1,353 @@
+import { assertLcFilter } from '../filter/assertLcFilter.js';
+import { lcFilter } from '../filter/lcFilter.js';
+import { outputNetworkResponse, type OutputNetwork, type OutputNetworkPhasors } from '../filter/outputNetworkResponse.js';
+import { checkVoltageHarmonicLimits } from '../limits/checkVoltageHarmonicLimits.js';
+import { HARMONIC_LIMIT_CAUTION } from '../limits/voltageHarmonicLimits.js';
+import { rlCurrentAt } from '../load/rlCurrentAt.js';
+import type { RlLoadOptions } from '../load/RlLoad.js';
+import { rlSteadyState } from '../load/rlSteadyState.js';
+import { TAU } from '../math.js';
+import { complexAbs, complexDivide, complexSubtract, phasorOf, type Complex } from '../numeric/complex.js';
+import { weightedDistortion } from '../spectrum/distortion.js';
+import type { Harmonic } from '../spectrum/Harmonic.js';
+import { harmonics } from '../spectrum/harmonics.js';
+import { labelHarmonics } from '../spectrum/labelHarmonics.js';
+import { waveformThd } from '../spectrum/waveformThd.js';
+import { waveformWthd } from '../spectrum/waveformWthd.js';
+import { assertNumberInRange } from '../validation/assertions.js';
+import { withFieldPrefix } from '../validation/withFieldPrefix.js';
+import type { Waveform } from '../waveform/Waveform.js';
+import { waveformMeanSquare } from '../waveform/waveformMeanSquare.js';
+import { assertInverterDesign } from './assertInverterDesign.js';
+import { defaultSpectrumOrder } from './defaultSpectrumOrder.js';
+import { designModulation } from './designModulation.js';
+import type { CurrentFigures, DesignReport, PeriodSeries, PhaseCurrents, VoltageFigures } from './DesignReport.js';
+import type { InverterDesign } from './InverterDesign.js';
+import { MODULATION_METHOD_LABELS } from './Modulation.js';
+import { modulationVoltages } from './modulationVoltages.js';
+import { synthesisePeriod } from './synthesisePeriod.js';
+
+/** Options of {@link analyseDesign}. */
+export interface AnalyseDesignOptions {
+  /** Highest order of the returned spectra, integer in [50, 5000]. @default defaultSpectrumOrder(design) */
+  maxOrder?: number;
+  /** Samples per period of the returned time series, integer in [64, 20000]. @default 1200 */
+  points?: number;
+  /**
+   * Nominal bus voltage at the point of coupling for the limit check, volts rms line to line.
+   * @default the rms line-to-line fundamental of the voltage checked
+   */
+  busVoltage?: number;
+}
+
+/** Most orders summed for a filtered design (bounds its cost; the tail beyond is bounded, not dropped). */
+export const MAX_ANALYSIS_ORDER = 20_000;
+
+/** The general caution shown with every report (REFERENCES.md). */
+export const DESIGN_CAUTION =
+  'Inverter DC buses and outputs are lethal. These predictions are idealised (ideal switches, no dead time or losses unless ' +
+  'a model is chosen) and are no substitute for measurement, protective design, and the codes and licensed practice that ' +
+  'apply where the equipment is built and installed.';
+
+const PHASES = ['a', 'b', 'c'] as const;
+
+/**
+ * The design report: every figure the product shows for one {@link InverterDesign}, from one
+ * model, so the editor, Compare, the limit check, the printed report, the API and the command
+ * line agree to the last digit.
+ *
+ * - Voltages: the bridge's output voltages, exact from the switching angles; THD and WTHD of the
+ *   bridge voltages over the whole waveform (`waveformThd`, `waveformWthd`), the spectrum to
+ *   `maxOrder` labelled by carrier group.
+ * - With a filter: each phase's LC filter loaded by its load, solved per harmonic
+ *   (`outputNetworkResponse`) to `analysisOrder` = min(20000, max(maxOrder, 10·mf + 10)) (2000
+ *   for a pattern); the output's THD beyond that order is bounded by Parseval: the bridge's
+ *   remaining mean square (exact) times the largest filter gain found above the order (|H| is
+ *   sampled at (N+1)·2^k, k = 0..10, and assumed not to rise between: true past the resonance).
+ * - Currents per phase: without a filter the exact piecewise-exponential steady state
+ *   (`rlSteadyState`); with one the harmonic sum, its time series by FFT. Ripple is i − i₁.
+ * - Three-phase: the load and filter are star-connected and balanced; each phase sees its
+ *   phase-to-star-point voltage (2·v_a − v_b − v_c)/3; line-to-line figures are reported beside.
+ * - Limit check (IEEE Std 519-2022 Table 1, recalled from memory) on the voltage at the point
+ *   of coupling: the filter's output with a filter, else the bridge's.
+ *
+ * @throws ParameterRangeError / ParameterTypeError naming the field by its path in the design
+ *   (`vdc`, `carrierFrequency`, `modulation.ma`, `load.r`, `filter.c`, …) or the option
+ */
+export function analyseDesign(design: InverterDesign, options: AnalyseDesignOptions = {}): DesignReport {
+  assertInverterDesign(design);
+  const { maxOrder = defaultSpectrumOrder(design), points = 1200, busVoltage } = options;
+  assertNumberInRange('maxOrder', maxOrder, { min: 50, max: 5000, integer: true });
+  assertNumberInRange('points', points, { min: 64, max: 20_000, integer: true });
+  if (busVoltage !== undefined) assertNumberInRange('busVoltage', busVoltage, { min: 0, minExclusive: true, max: 1e7 });
+  const filter = design.filter ?? null;
+  if (filter !== null) withFieldPrefix('filter.', () => assertLcFilter(filter));
+  const modulation = withFieldPrefix('modulation.', () => designModulation(design));
+  const voltages = withFieldPrefix('modulation.', () => modulationVoltages(modulation));
+  const frequencyRatio = 'mf' in modulation ? modulation.mf : 'frequencyRatio' in modulation ? modulation.frequencyRatio : null;
+  const labelRatio = frequencyRatio ?? 2 * maxOrder + 1;
+  const analysisOrder = filter === null ? maxOrder : Math.min(MAX_ANALYSIS_ORDER, Math.max(maxOrder, 10 * (frequencyRatio ?? 200) + 10));
+  const label = (spectrum: readonly Harmonic[]) => labelHarmonics(spectrum.slice(0, maxOrder + 1), labelRatio);
+
+  const phaseVoltages = voltages.phases.map((v) => v.waveform);
+  const bridge = exactVoltageFigures(voltages.phases[0]?.name ?? 'bridge output', phaseVoltages[0] as Waveform, maxOrder, label);
+  const line = voltages.lines[0];
+  const lineToLine = line ? exactVoltageFigures(line.name, line.waveform, maxOrder, label) : null;
+  const load = design.load ?? null;
+  const frequency = design.fundamentalFrequency;
+  const network: OutputNetwork = { filter, load: load === null ? null : { r: load.r, l: load.l } };
+
+  let output: DesignReport['output'] = null;
+  let currents: PhaseCurrents[] = [];
+  let loadPower: number | null = null;
+  if (filter === null) {
+    if (load !== null) {
+      const solved = phaseVoltages.map((waveform, k) => exactLoadCurrents(waveform, rlLoadOf(design, k), PHASES[k] ?? 'a', points, frequencyRatio));
+      currents = solved.map((s) => s.currents);
+      loadPower = solved.reduce((sum, s) => sum + s.power, 0);
+    }
+  } else {
+    const solved = phaseVoltages.map((waveform, k) =>
+      filteredPhase(waveform, { network, design, phaseIndex: k, analysisOrder, points }),
+    );
+    const first = solved[0] as FilteredPhase;
+    const outputSpectrum = first.outputSpectrum;
+    output = {
+      ...distortionFigures(`filter output, ${voltages.phaseCount === 3 ? 'phase a to star point' : 'across the capacitor'}`, outputSpectrum, label),
+      thdUpperBound: first.outputThdUpperBound,
+      series: first.outputSeries,
+    };
+    currents = solved.map((s) => s.currents);
+    loadPower = load === null ? null : solved.reduce((sum, s) => sum + s.loadPower, 0);
+  }
+
+  const pcc = output ?? bridge;
+  const pccSpectrum = output === null ? bridge.spectrum : output.spectrum;
+  const nominal = ((voltages.phaseCount === 3 ? Math.sqrt(3) : 1) * pcc.fundamental) / Math.SQRT2;
+  const limitCheck = checkVoltageHarmonicLimits(pccSpectrum, { busVoltage: busVoltage ?? nominal, thdWholeWaveform: pcc.thdUpperBound });
+
+  return {
+    method: design.modulation.method,
+    methodLabel: MODULATION_METHOD_LABELS[design.modulation.method],
+    phaseCount: voltages.phaseCount,
+    frequencyRatio,
+    fundamentalFrequency: frequency,
+    maxOrder,
+    analysisOrder,
+    voltages: [...voltages.phases, ...voltages.legs, ...voltages.lines],
+    bridge,
+    lineToLine,
+    output,
+    currents,
+    loadPower,
+    filter: filter === null ? null : filterFigures(filter, network, frequency, frequencyRatio),
+    limitCheck,
+    cautions: [DESIGN_CAUTION, HARMONIC_LIMIT_CAUTION],
+  };
+}
+
+type Labeller = (spectrum: readonly Harmonic[]) => DesignReport['bridge']['spectrum'];
+
+/** Figures of a voltage whose THD is a sum over its spectrum (thdUpperBound set by the caller). */
+function distortionFigures(name: string, spectrum: readonly Harmonic[], label: Labeller): VoltageFigures {
+  const fundamental = spectrum[1] as Harmonic;
+  let meanSquare = 0;
+  for (const h of spectrum) meanSquare += h.order === 0 ? h.amplitude * h.amplitude : (h.amplitude * h.amplitude) / 2;
+  const labelled = label(spectrum);
+  const thd = weightedDistortion(spectrum, 0);
+  return {
+    name,
+    fundamental: fundamental.amplitude,
+    fundamentalPhase: fundamental.phase,
+    rms: Math.sqrt(meanSquare),
+    thd,
+    thdUpperBound: thd,
+    wthd: weightedDistortion(spectrum, 1),
+    exact: false,
+    spectrum: labelled,
+    spectrumThd: weightedDistortion(labelled, 0),
+  };
+}
+
+/** Figures of a piecewise-constant voltage, THD and WTHD exact over the whole waveform. */
+function exactVoltageFigures(name: string, waveform: Waveform, maxOrder: number, label: Labeller): VoltageFigures {
+  const spectrum = harmonics(waveform, maxOrder);
+  const fundamental = spectrum[1] as Harmonic;
+  const thd = waveformThd(waveform);
+  const labelled = label(spectrum);
+  return {
+    name,
+    fundamental: fundamental.amplitude,
+    fundamentalPhase: fundamental.phase,
+    rms: Math.sqrt(waveformMeanSquare(waveform)),
+    thd,
+    thdUpperBound: thd,
+    wthd: waveformWthd(waveform),
+    exact: true,
+    spectrum: labelled,
+    spectrumThd: weightedDistortion(labelled, 0),
+  };
+}
+
+/** The load of phase k (0, 1, 2) as rlSteadyState takes it: the EMF lags by k·2π/3. */
+function rlLoadOf(design: InverterDesign, phaseIndex: number): RlLoadOptions {
+  const load = design.load as NonNullable<InverterDesign['load']>;
+  const emf = load.emf ? { amplitude: load.emf.amplitude, phase: load.emf.phase - (phaseIndex * TAU) / 3 } : undefined;
+  return { r: load.r, l: load.l, frequency: design.fundamentalFrequency, ...(emf ? { emf } : {}) };
+}
+
+/** Exact load current of an unfiltered phase (the load current is the switch current). */
+function exactLoadCurrents(
+  waveform: Waveform,
+  load: RlLoadOptions,
+  phase: PhaseCurrents['phase'],
+  points: number,
+  frequencyRatio: number | null,
+): { currents: PhaseCurrents; power: number } {
+  const steady = withFieldPrefix('load.', () => rlSteadyState(waveform, load));
+  const voltage = harmonics(waveform, 1)[1] as Harmonic;
+  const emf = load.emf ? phasorOf(load.emf.amplitude, load.emf.phase) : { re: 0, im: 0 };
+  const impedance = { re: load.r, im: TAU * load.frequency * load.l };
+  const first = complexDivide(complexSubtract(phasorOf(voltage.amplitude, voltage.phase), emf), impedance);
+  const fundamental = complexAbs(first);
+  const fundamentalAt = (theta: number): number => first.re * Math.sin(theta) + first.im * Math.cos(theta);
+  // The ripple's extremes sit at or near the switching edges: sample every edge and a fine grid.
+  const grid = Math.min(200_000, Math.max(points, 16 * (frequencyRatio ?? 64)));
+  const angles = [...waveform.edges, ...Array.from({ length: grid }, (_, k) => (TAU * k) / grid)];
+  const sampled = rlCurrentAt(waveform, angles, load);
+  let low = Infinity;
+  let high = -Infinity;
+  sampled.forEach((current, k) => {
+    const ripple = current - fundamentalAt(angles[k] as number);
+    if (ripple < low) low = ripple;
+    if (ripple > high) high = ripple;
+  });
+  const seriesAngles = Array.from({ length: points }, (_, k) => (TAU * k) / points);
+  const figures: CurrentFigures = {
+    name: `load current, phase ${phase}`,
+    rms: steady.rmsCurrent,
+    peak: Math.max(Math.abs(steady.peakCurrent), Math.abs(steady.minCurrent)),
+    fundamental,
+    rippleRms: Math.sqrt(Math.max(0, steady.rmsCurrent ** 2 - (fundamental * fundamental) / 2)),
+    ripplePeakToPeak: high - low,
+    series: { angles: seriesAngles, values: rlCurrentAt(waveform, seriesAngles, load) },
+  };
+  return {
+    currents: { phase, inverter: { ...figures, name: `inverter (switch) current, phase ${phase}` }, capacitor: null, load: figures },
+    power: steady.power,
+  };
+}
+
+interface FilteredPhase {
+  outputSpectrum: Harmonic[];
+  outputThdUpperBound: number;
+  outputSeries: PeriodSeries;
+  currents: PhaseCurrents;
+  loadPower: number;
+}
+
+/** One phase through the loaded filter, per harmonic to the analysis order. */
+function filteredPhase(
+  waveform: Waveform,
+  context: { network: OutputNetwork; design: InverterDesign; phaseIndex: number; analysisOrder: number; points: number },
+): FilteredPhase {
+  const { network, design, phaseIndex, analysisOrder, points } = context;
+  const phase = PHASES[phaseIndex] ?? 'a';
+  const omega = TAU * design.fundamentalFrequency;
+  const bridge = harmonics(waveform, analysisOrder);
+  const load = design.load ?? null;
+  const emf = load?.emf ? phasorOf(load.emf.amplitude, load.emf.phase - (phaseIndex * TAU) / 3) : { re: 0, im: 0 };
+  const solved: OutputNetworkPhasors[] = bridge.map((h) =>
+    outputNetworkResponse(network, omega * h.order, phasorOf(h.amplitude, h.phase), h.order === 1 ? emf : { re: 0, im: 0 }),
+  );
+  const outputSpectrum = solved.map((s, order) => harmonicOf(order, s.output));
+
+  // Parseval tail bound: the bridge's mean square above the analysis order is exact; the
+  // filter passes at most the largest gain found above that order.
+  let bridgeSum = 0;
+  for (const h of bridge) bridgeSum += h.order === 0 ? h.amplitude * h.amplitude : (h.amplitude * h.amplitude) / 2;
+  const bridgeTail = Math.max(0, waveformMeanSquare(waveform) - bridgeSum);
+  let tailGain = 0;
+  for (let k = 0, order = analysisOrder + 1; k <= 10; k++, order *= 2) {
+    const response = outputNetworkResponse(network, omega * order, { re: 1, im: 0 });
+    tailGain = Math.max(tailGain, complexAbs(response.output));
+  }
+  const fundamental = outputSpectrum[1]?.amplitude ?? 0;
+  let harmonicSum = 0;
+  for (const h of outputSpectrum) if (h.order >= 2) harmonicSum += (h.amplitude * h.amplitude) / 2;
+  const outputThdUpperBound = Math.sqrt(2 * (harmonicSum + tailGain * tailGain * bridgeTail)) / fundamental;
+
+  const samplesWanted = Math.max(points, 4 * analysisOrder);
+  const series = (values: Float64Array): PeriodSeries => {
+    const stride = Math.max(1, Math.floor(values.length / points));
+    const angles: number[] = [];
+    const picked: number[] = [];
+    for (let j = 0; j < values.length; j += stride) {
+      angles.push((TAU * j) / values.length);
+      picked.push(values[j] as number);
+    }
+    return { angles, values: picked };
+  };
+  const current = (name: string, pick: (s: OutputNetworkPhasors) => Complex): CurrentFigures => {
+    const phasors = solved.map(pick);
+    const samples = synthesisePeriod(phasors, samplesWanted);
+    const first = phasors[1] ?? { re: 0, im: 0 };
+    let meanSquare = 0;
+    phasors.forEach((p, order) => {
+      meanSquare += order === 0 ? p.re * p.re : (p.re * p.re + p.im * p.im) / 2;
+    });
+    let peak = 0;
+    let low = Infinity;
+    let high = -Infinity;
+    samples.forEach((value, j) => {
+      const theta = (TAU * j) / samples.length;
+      const ripple = value - (first.re * Math.sin(theta) + first.im * Math.cos(theta));
+      peak = Math.max(peak, Math.abs(value));
+      low = Math.min(low, ripple);
+      high = Math.max(high, ripple);
+    });
+    const fundamentalCurrent = complexAbs(first);
+    return {
+      name: `${name}, phase ${phase}`,
+      rms: Math.sqrt(meanSquare),
+      peak,
+      fundamental: fundamentalCurrent,
+      rippleRms: Math.sqrt(Math.max(0, meanSquare - (fundamentalCurrent * fundamentalCurrent) / 2)),
+      ripplePeakToPeak: high - low,
+      series: series(samples),
+    };
+  };
+  const loadCurrent = load === null ? null : current('load current', (s) => s.loadCurrent);
+  return {
+    outputSpectrum,
+    outputThdUpperBound,
+    outputSeries: series(synthesisePeriod(solved.map((s) => s.output), samplesWanted)),
+    currents: {
+      phase,
+      inverter: current('inverter (switch) current', (s) => s.inverterCurrent),
+      capacitor: current('capacitor current', (s) => s.capacitorCurrent),
+      load: loadCurrent,
+    },
+    loadPower: load === null || loadCurrent === null ? 0 : load.r * loadCurrent.rms * loadCurrent.rms,
+  };
+}
+
+/** A phasor as a harmonic in the `harmonics` convention (order 0 keeps its sign). */
+function harmonicOf(order: number, phasor: Complex): Harmonic {
+  if (order === 0) return { order, amplitude: phasor.re, phase: 0 };
+  return { order, amplitude: complexAbs(phasor), phase: Math.atan2(phasor.im, phasor.re) };
+}
+
+function filterFigures(
+  filter: NonNullable<InverterDesign['filter']>,
+  network: OutputNetwork,
+  frequency: number,
+  frequencyRatio: number | null,
+): NonNullable<DesignReport['filter']> {
+  const gainAt = (order: number): number => complexAbs(outputNetworkResponse(network, TAU * frequency * order, { re: 1, im: 0 }).output);
+  return {
+    characteristics: withFieldPrefix('filter.', () => lcFilter(filter)),
+    gainAtFundamental: gainAt(1),
+    gainAtCarrier: frequencyRatio === null ? null : gainAt(frequencyRatio),
+  };
+}

@@ -1,0 +1,82 @@
+import { sineTriangle } from '../carrier/sineTriangle.js';
+import { sheWaveform } from '../she/sheWaveform.js';
+import { spaceVectorWaveforms } from '../space-vector/spaceVectorWaveforms.js';
+import { threePhase } from '../three-phase/threePhase.js';
+import { combineWaveforms } from '../waveform/combineWaveforms.js';
+import type { Waveform } from '../waveform/Waveform.js';
+import type { Modulation } from './Modulation.js';
+
+/** A voltage waveform with a name that says what it is measured between. */
+export interface NamedVoltage {
+  /** For example `bridge output`, `leg a to DC midpoint`, `phase a to star point`, `line a−b`. */
+  name: string;
+  /** One fundamental period, volts. */
+  waveform: Waveform;
+}
+
+/** The output voltages of a modulated bridge, named by what they are. */
+export interface ModulationVoltages {
+  /** 1 for a single-phase bridge, 3 for a three-phase bridge. */
+  phaseCount: 1 | 3;
+  /**
+   * The voltage across each phase of the load: the bridge output of a single-phase bridge, or
+   * each phase to the star point of a balanced star load, v_an = (2·v_a − v_b − v_c)/3 of the leg
+   * voltages (standard circuit analysis). One entry per phase, a, b, c.
+   */
+  phases: NamedVoltage[];
+  /** Leg to DC-midpoint voltages (three-phase only; empty for a single-phase bridge). */
+  legs: NamedVoltage[];
+  /** Line-to-line voltages a−b, b−c, c−a (three-phase only). */
+  lines: NamedVoltage[];
+}
+
+const PHASE_NAMES = ['a', 'b', 'c'] as const;
+
+/**
+ * Builds the output voltages of a {@link Modulation} with the library function of its method,
+ * exact (no time step), and names each by what it is measured between.
+ * @throws ParameterRangeError / ParameterTypeError from the method's function, naming its field
+ */
+export function modulationVoltages(modulation: Modulation): ModulationVoltages {
+  switch (modulation.method) {
+    case 'sine-triangle': {
+      const { method: _method, ...options } = modulation;
+      return singlePhase('bridge output', sineTriangle(options));
+    }
+    case 'selective-harmonic-elimination':
+    case 'optimal-pattern': {
+      const waveform = sheWaveform(modulation.angles, { kind: modulation.kind, vdc: modulation.vdc });
+      return singlePhase(modulation.kind === 'staircase' ? 'staircase output' : 'bridge output', waveform);
+    }
+    case 'three-phase': {
+      const { method: _method, ...options } = modulation;
+      const { legs } = threePhase(options);
+      return threePhaseVoltages([legs.a, legs.b, legs.c]);
+    }
+    case 'space-vector': {
+      const { method: _method, ...options } = modulation;
+      const result = spaceVectorWaveforms(options);
+      return threePhaseVoltages([result.a, result.b, result.c]);
+    }
+  }
+}
+
+function singlePhase(name: string, waveform: Waveform): ModulationVoltages {
+  return { phaseCount: 1, phases: [{ name, waveform }], legs: [], lines: [] };
+}
+
+function threePhaseVoltages(legs: [Waveform, Waveform, Waveform]): ModulationVoltages {
+  const at = (k: number): Waveform => legs[((k % 3) + 3) % 3] as Waveform;
+  return {
+    phaseCount: 3,
+    legs: PHASE_NAMES.map((p, k) => ({ name: `leg ${p} to DC midpoint`, waveform: at(k) })),
+    phases: PHASE_NAMES.map((p, k) => ({
+      name: `phase ${p} to star point`,
+      waveform: combineWaveforms([at(k), at(k + 1), at(k + 2)], ([own = 0, next = 0, last = 0]) => (2 * own - next - last) / 3),
+    })),
+    lines: PHASE_NAMES.map((p, k) => ({
+      name: `line ${p}−${PHASE_NAMES[(k + 1) % 3]}`,
+      waveform: combineWaveforms([at(k), at(k + 1)], ([own = 0, next = 0]) => own - next),
+    })),
+  };
+}

@@ -1,0 +1,2 @@
+export * from './voltageHarmonicLimits.js';
+export * from './checkVoltageHarmonicLimits.js';
