@@ -67,6 +67,16 @@ export function compareWithCarrier(
   return waveformFromTransitions(transitions);
 }
 
+/**
+ * One carrier half period against a held sample. The carrier runs linearly from −1 to +1
+ * (rising) or +1 to −1 (falling) and touches the sample at most once. A sample on or beyond a
+ * carrier extreme never crosses the open half period: at +1 or above the reference is above the
+ * carrier everywhere inside it (high throughout), at −1 or below it is below (low throughout).
+ * The single instant where a sample of exactly ±1 meets the carrier's peak or valley has no
+ * width, so it decides nothing: testing it against the carrier at the start, as a plain
+ * `sample > carrier` would, turned a sample of exactly +1 after a peak into a low half period
+ * (a clamped leg lost half its pulses).
+ */
 function pushRegularHalfPeriod(
   transitions: Transition[],
   sample: number,
@@ -75,13 +85,15 @@ function pushRegularHalfPeriod(
   rising: boolean,
   level: (above: boolean) => number,
 ): void {
-  const startCarrier = rising ? -1 : 1;
-  transitions.push({ angle: start, level: level(sample > startCarrier) });
-  if (sample > -1 && sample < 1) {
-    // Carrier is linear: it meets the held sample at a fraction (sample − c₀)/(c₁ − c₀).
-    const fraction = rising ? (sample + 1) / 2 : (1 - sample) / 2;
-    transitions.push({ angle: start + fraction * (end - start), level: level(!rising) });
+  if (sample >= 1 || sample <= -1) {
+    transitions.push({ angle: start, level: level(sample >= 1) });
+    return;
   }
+  // Strictly inside (−1, 1): above the carrier from a valley, below it from a peak, until the
+  // carrier meets the sample at the fraction (sample − c₀)/(c₁ − c₀) of the half period.
+  const fraction = rising ? (sample + 1) / 2 : (1 - sample) / 2;
+  transitions.push({ angle: start, level: level(rising) });
+  transitions.push({ angle: start + fraction * (end - start), level: level(!rising) });
 }
 
 function pushNaturalHalfPeriod(

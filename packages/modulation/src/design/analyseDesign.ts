@@ -17,6 +17,7 @@ import { waveformWthd } from '../spectrum/waveformWthd.js';
 import { assertNumberInRange } from '../validation/assertions.js';
 import { withFieldPrefix } from '../validation/withFieldPrefix.js';
 import type { Waveform } from '../waveform/Waveform.js';
+import { runningIntegral } from '../waveform/runningIntegral.js';
 import { waveformMeanSquare } from '../waveform/waveformMeanSquare.js';
 import { assertInverterDesign } from './assertInverterDesign.js';
 import { defaultSpectrumOrder } from './defaultSpectrumOrder.js';
@@ -25,7 +26,7 @@ import type { CurrentFigures, DesignReport, PeriodSeries, PhaseCurrents, Voltage
 import type { InverterDesign } from './InverterDesign.js';
 import { MODULATION_METHOD_LABELS } from './Modulation.js';
 import { modulationVoltages } from './modulationVoltages.js';
-import { synthesisePeriod } from './synthesisePeriod.js';
+import { synthesisePeriod, synthesisSize } from './synthesisePeriod.js';
 
 /** Options of {@link analyseDesign}. */
 export interface AnalyseDesignOptions {
@@ -277,7 +278,7 @@ function filteredPhase(
   for (const h of outputSpectrum) if (h.order >= 2) harmonicSum += (h.amplitude * h.amplitude) / 2;
   const outputThdUpperBound = Math.sqrt(2 * (harmonicSum + tailGain * tailGain * bridgeTail)) / fundamental;
 
-  const samplesWanted = Math.max(points, 4 * analysisOrder);
+  const size = synthesisSize(analysisOrder, Math.max(points, 16 * analysisOrder));
   const series = (values: Float64Array): PeriodSeries => {
     const stride = Math.max(1, Math.floor(values.length / points));
     const angles: number[] = [];
@@ -288,14 +289,19 @@ function filteredPhase(
     }
     return { angles, values: picked };
   };
-  const current = (name: string, pick: (s: OutputNetworkPhasors) => Complex): CurrentFigures => {
+  const tail = switchingTail(waveform, bridge, network.filter, omega, size);
+  const current = (name: string, pick: (s: OutputNetworkPhasors) => Complex, withTail: boolean): CurrentFigures => {
     const phasors = solved.map(pick);
-    const samples = synthesisePeriod(phasors, samplesWanted);
-    const first = phasors[1] ?? { re: 0, im: 0 };
+    const samples = synthesisePeriod(phasors, size);
     let meanSquare = 0;
     phasors.forEach((p, order) => {
       meanSquare += order === 0 ? p.re * p.re : (p.re * p.re + p.im * p.im) / 2;
     });
+    if (withTail && tail !== null) {
+      samples.forEach((value, j) => (samples[j] = value + (tail.samples[j] as number)));
+      meanSquare += tail.meanSquare;
+    }
+    const first = phasors[1] ?? { re: 0, im: 0 };
     let peak = 0;
     let low = Infinity;
     let high = -Infinity;
@@ -317,19 +323,54 @@ function filteredPhase(
       series: series(samples),
     };
   };
-  const loadCurrent = load === null ? null : current('load current', (s) => s.loadCurrent);
+  const loadCurrent = load === null ? null : current('load current', (s) => s.loadCurrent, false);
   return {
     outputSpectrum,
     outputThdUpperBound,
-    outputSeries: series(synthesisePeriod(solved.map((s) => s.output), samplesWanted)),
+    outputSeries: series(synthesisePeriod(solved.map((s) => s.output), size)),
     currents: {
       phase,
-      inverter: current('inverter (switch) current', (s) => s.inverterCurrent),
-      capacitor: current('capacitor current', (s) => s.capacitorCurrent),
+      inverter: current('inverter (switch) current', (s) => s.inverterCurrent, true),
+      capacitor: current('capacitor current', (s) => s.capacitorCurrent, true),
       load: loadCurrent,
     },
     loadPower: load === null || loadCurrent === null ? 0 : load.r * loadCurrent.rms * loadCurrent.rms,
   };
+}
+
+/**
+ * The inverter current above the analysis order N, where the series inductor alone sets it
+ * (|Z_s| ≫ the shunt branch there, so nearly all of it flows into the capacitor):
+ * i_tail = (Φ − Φ_N)/(ω·L), with Φ the bridge voltage's running integral (exact, piecewise
+ * linear) and Φ_N its harmonics to N (v = L·di/dt, standard circuit analysis). Its mean square
+ * is (Var Φ − Σ_{n≤N} (V_n/n)²/2)/(ωL)² by Parseval. Null for damping across the inductor, whose
+ * series branch is not inductive at high frequency, and when N is not ten times past the LC
+ * resonance (the sum to N is used as it is there).
+ */
+function switchingTail(
+  waveform: Waveform,
+  bridge: readonly Harmonic[],
+  filter: OutputNetwork['filter'],
+  omega: number,
+  size: number,
+): { samples: Float64Array; meanSquare: number } | null {
+  if (filter === null || filter.dampingPlacement === 'parallel-with-inductor') return null;
+  // Only valid well past the resonance, where the shunt branch shorts the load out.
+  const resonanceOrder = 1 / (Math.sqrt(filter.l * filter.c) * omega);
+  if (bridge.length - 1 < 10 * resonanceOrder) return null;
+  const integral = runningIntegral(waveform);
+  const integralPhasors: Complex[] = bridge.map((h) =>
+    // ∫ A·sin(nθ + φ) dθ = (A/n)·sin(nθ + φ − π/2): phasor (A/n)·e^{j(φ − π/2)}.
+    h.order === 0 ? { re: 0, im: 0 } : phasorOf(h.amplitude / h.order, h.phase - Math.PI / 2),
+  );
+  const truncated = synthesisePeriod(integralPhasors, size);
+  const whole = integral.at(size);
+  const reactance = omega * filter.l;
+  const samples = new Float64Array(size);
+  for (let j = 0; j < size; j++) samples[j] = ((whole[j] as number) - integral.mean - (truncated[j] as number)) / reactance;
+  let heldVariance = 0;
+  for (const h of bridge) if (h.order > 0) heldVariance += (h.amplitude / h.order) ** 2 / 2;
+  return { samples, meanSquare: Math.max(0, integral.variance - heldVariance) / (reactance * reactance) };
 }
 
 /** A phasor as a harmonic in the `harmonics` convention (order 0 keeps its sign). */

@@ -1,7 +1,6 @@
-import { TAU } from '../math.js';
 import { assertWaveform } from '../waveform/assertWaveform.js';
 import type { Waveform } from '../waveform/Waveform.js';
-import { waveformMean } from '../waveform/waveformMean.js';
+import { runningIntegral } from '../waveform/runningIntegral.js';
 import { fundamentalAmplitude } from './fundamentalAmplitude.js';
 
 /**
@@ -18,27 +17,6 @@ import { fundamentalAmplitude } from './fundamentalAmplitude.js';
 export function waveformWthd(waveform: Waveform): number {
   assertWaveform(waveform);
   const fundamental = fundamentalAmplitude(waveform);
-  const remainder = 2 * integralVariance(waveform) - fundamental * fundamental;
+  const remainder = 2 * runningIntegral(waveform).variance - fundamental * fundamental;
   return Math.sqrt(Math.max(0, remainder)) / fundamental;
-}
-
-/** Variance over one period of Φ(θ) = ∫ (v − mean) dθ from the first edge, volt-radians². */
-function integralVariance(waveform: Waveform): number {
-  const { edges, levels } = waveform;
-  const mean = waveformMean(waveform);
-  let flux = 0;
-  let sum = 0;
-  let sumOfSquares = 0;
-  for (let i = 0; i < edges.length; i++) {
-    const start = edges[i] as number;
-    const end = i + 1 < edges.length ? (edges[i + 1] as number) : (edges[0] as number) + TAU;
-    const width = end - start;
-    const slope = (levels[i] as number) - mean;
-    // ∫₀ʷ (a + s·t) dt and ∫₀ʷ (a + s·t)² dt for the linear piece a + s·t.
-    sum += flux * width + (slope * width * width) / 2;
-    sumOfSquares += flux * flux * width + flux * slope * width * width + (slope * slope * width * width * width) / 3;
-    flux += slope * width;
-  }
-  const meanFlux = sum / TAU;
-  return sumOfSquares / TAU - meanFlux * meanFlux;
 }

@@ -1,11 +1,10 @@
 import type { ReferenceSignal } from '../carrier/ReferenceSignal.js';
 import type { ZeroSequence } from './ZeroSequence.js';
+import { THIRTY_DEGREES } from './thirtyDegreeSector.js';
 import { zeroSequenceOffset } from './zeroSequenceOffset.js';
 
 /** Phase a, b or c: index 0, 1, 2, delayed by 0, 2π/3, 4π/3. */
 export type PhaseIndex = 0 | 1 | 2;
-
-const THIRTY_DEGREES = Math.PI / 6;
 
 /**
  * The reference of one phase of a three-phase carrier modulator, normalised to the carrier:

@@ -1,3 +1,4 @@
+import { thirtyDegreeSector } from './thirtyDegreeSector.js';
 import type { ZeroSequence } from './ZeroSequence.js';
 
 /**
@@ -8,9 +9,18 @@ import type { ZeroSequence } from './ZeroSequence.js';
  * references exceed the rails (ma past the linear range) the clamp still holds that phase there
  * and the others follow the same offset.
  *
+ * The 60° clamps choose the rail by the 30° interval θ lies in, not by comparing the sines
+ * (Holmes and Lipo 2003, ch. 7: clamp-60-peak takes the positive rail on [60°, 120°),
+ * [180°, 240°) and [300°, 360°), where phase a, b or c is at its positive peak, and the negative
+ * rail between; lead advances those blocks by 30°, lag delays them by 30°). At a block boundary
+ * the two choices tie in magnitude and rounding of the sines would pick the rail, differently
+ * at θ, θ + 2π/3 and θ + π. Here every boundary belongs to the block that starts there, so the
+ * offset is exactly 2π/3-periodic and changes sign at θ + π (with the sines), also for samples
+ * that land on a boundary.
+ *
  * @param sines - [a, b, c] = ma·sin(θ − k·2π/3), k = 0, 1, 2
- * @param theta - fundamental angle (radians), used by the 30°-shifted clamps and the third
- *   harmonic
+ * @param theta - fundamental angle (radians, any finite value), used by the 60° clamps and the
+ *   third harmonic
  * @param ma - modulation index, for the third harmonic's amplitude ma/6
  */
 export function zeroSequenceOffset(
@@ -34,15 +44,18 @@ export function zeroSequenceOffset(
     case 'clamp-120-bottom':
       return -1 - min;
     case 'clamp-60-peak':
-      return max + min >= 0 ? 1 - max : -1 - min;
     case 'clamp-60-lead':
-    case 'clamp-60-lag': {
-      // Decide the rail from the references shifted by ∓30°, then clamp the phase that is
-      // extreme now: the clamping block moves by 30° against the peak (Holmes and Lipo ch. 7).
-      const shift = zeroSequence === 'clamp-60-lead' ? Math.PI / 6 : -Math.PI / 6;
-      const shifted = [0, 1, 2].map((k) => Math.sin(theta + shift - (k * 2 * Math.PI) / 3));
-      const upper = Math.max(...shifted) + Math.min(...shifted) >= 0;
-      return upper ? 1 - max : -1 - min;
-    }
+    case 'clamp-60-lag':
+      return clampsHigh(zeroSequence, thirtyDegreeSector(theta)) ? 1 - max : -1 - min;
   }
+}
+
+/**
+ * True when a 60° clamp holds the positive rail in the 30° interval `sector` (0…11): the 60°
+ * blocks [60°, 120°), [180°, 240°), [300°, 360°) for the peak clamp, advanced by 30° for lead
+ * and delayed by 30° for lag (the block moves against the peak, Holmes and Lipo ch. 7).
+ */
+function clampsHigh(zeroSequence: 'clamp-60-peak' | 'clamp-60-lead' | 'clamp-60-lag', sector: number): boolean {
+  const shift = zeroSequence === 'clamp-60-peak' ? 0 : zeroSequence === 'clamp-60-lead' ? 1 : 11;
+  return Math.floor(((sector + shift) % 12) / 2) % 2 === 1;
 }
