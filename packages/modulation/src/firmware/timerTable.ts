@@ -26,8 +26,8 @@ const MIN_PERIOD_COUNTS = 2;
  * Conventions (common practice: timer reference manuals describe edge- and centre-aligned
  * PWM; from memory). All channels are active-high: the high-side switch is on while the
  * counter is below the compare value, and the compare match turns it off.
- * - `'edge-aligned'`: up-counting 0…ARR, `ARR = timerClock/carrierFrequency − 1` (rounded),
- *   `compare = round(duty·(ARR + 1))`; the high-side pulse starts at each counter reset.
+ * - `'edge-aligned'`: up-counting 0…TOP, `TOP = timerClock/carrierFrequency − 1` (rounded),
+ *   `compare = round(duty·(TOP + 1))`; the high-side pulse starts at each counter reset.
  * - `'centre-aligned'`: up-down counting P→0→P per carrier period (compare values loaded at
  *   the counter peak), `P = timerClock/(2·carrierFrequency)` (rounded),
  *   `compare = round(duty·P)`; the high-side pulse is centred on the counter valley. With
@@ -249,7 +249,7 @@ function periodTiming(mode: CountingMode, clock: number, carrier: number, bits: 
     if (ticks > maxCount || ticks < MIN_PERIOD_COUNTS) {
       throw new ParameterRangeError(
         'timerClock/carrierFrequency',
-        `${MIN_PERIOD_COUNTS} to 2^${bits} = ${maxCount} counts for a ${bits}-bit edge-aligned counter (ARR = ticks − 1 ≤ ${maxCount - 1}); use a prescaler, a wider counter or another carrier frequency`,
+        `${MIN_PERIOD_COUNTS} to 2^${bits} = ${maxCount} counts for a ${bits}-bit edge-aligned counter (TOP = ticks − 1 ≤ ${maxCount - 1}); use a prescaler, a wider counter or another carrier frequency`,
         exact,
       );
     }
@@ -319,7 +319,7 @@ function conventionLines(mode: CountingMode, sampling: string, deadTimeMethod: D
   const lines = [
     'Outputs active-high: a high-side switch is on while the counter is below its compare value; the compare match turns it off.',
     mode === 'edge-aligned'
-      ? 'Edge-aligned: the counter counts up 0..ARR and resets; ARR = ticks per carrier period - 1; compare = round(duty * (ARR + 1)); each high-side pulse starts at the counter reset.'
+      ? 'Edge-aligned: the counter counts up 0..TOP and resets; TOP = ticks per carrier period - 1; compare = round(duty * (TOP + 1)); each high-side pulse starts at the counter reset.'
       : 'Centre-aligned: the counter counts P down to 0 and back up to P in each carrier period; compare values load at the counter peak; compare = round(duty * P); each high-side pulse is centred on the counter valley.',
     'duty = (1 + r)/2, r = leg reference in units of vdc/2 (sine, plus zero sequence for three-phase), clamped to [0, 1].',
     'Entry i is sampled at angle (i + 0.5) * 2*pi / tableLength of the fundamental, the centre of the interval it governs; each entry serves updatesPerEntry consecutive compare updates.',

@@ -115,11 +115,11 @@ export interface TimerTable {
   units: Record<string, string>;
   /** The generation conventions, one sentence each (copied into the C header). */
   conventions: string[];
-  /** Value for the period register: ARR = ticks − 1 (edge-aligned) or P (centre-aligned). */
+  /** Value for the period register: TOP = ticks − 1 (edge-aligned) or P (centre-aligned). */
   periodRegister: number;
-  /** Compare value of 100 % duty: ARR + 1 (edge-aligned) or P (centre-aligned). */
+  /** Compare value of 100 % duty: TOP + 1 (edge-aligned) or P (centre-aligned). */
   fullScaleCounts: number;
-  /** Timer clock ticks in one carrier period: ARR + 1 or 2·P. */
+  /** Timer clock ticks in one carrier period: TOP + 1 or 2·P. */
   ticksPerCarrierPeriod: number;
   /** Carrier frequency the rounded period register gives, Hz. */
   realisedCarrierFrequency: number;

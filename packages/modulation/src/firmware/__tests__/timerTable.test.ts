@@ -13,8 +13,8 @@ const base: TimerTableOptions = {
 };
 
 describe('timerTable period and compare values', () => {
-  it('uses ARR = clock/fc − 1 and compare = round(duty·(ARR + 1)) when edge-aligned', () => {
-    // Edge-aligned PWM: ARR = f_clk/f_c − 1, CCR = duty·(ARR + 1) (common practice: timer
+  it('uses TOP = clock/fc − 1 and compare = round(duty·(TOP + 1)) when edge-aligned', () => {
+    // Edge-aligned PWM: TOP = f_clk/f_c − 1, compare = duty·(TOP + 1) (common practice: timer
     // reference manuals; from memory). 64 MHz / 16 kHz = 4000 ticks.
     const table = timerTable({ ...base, countingMode: 'edge-aligned' });
     expect(table.periodRegister).toBe(3999);
@@ -32,7 +32,7 @@ describe('timerTable period and compare values', () => {
 
   it('uses P = clock/(2·fc) and compare = round(duty·P) when centre-aligned', () => {
     // Centre-aligned (up-down) PWM: the counter runs P → 0 → P, so P = f_clk/(2·f_c) and
-    // CCR = duty·P (common practice: timer reference manuals; from memory).
+    // compare = duty·P (common practice: timer reference manuals; from memory).
     const table = timerTable({ ...base, countingMode: 'centre-aligned' });
     expect(table.periodRegister).toBe(2000);
     expect(table.ticksPerCarrierPeriod).toBe(4000);
