@@ -1,7 +1,7 @@
 import { assertFiniteArray, assertNumberInRange } from '../validation/assertions.js';
 import { harmonics, MAX_HARMONIC_ORDER } from '../spectrum/harmonics.js';
-import { thd } from '../spectrum/thd.js';
-import { wthd } from '../spectrum/wthd.js';
+import { waveformThd } from '../spectrum/waveformThd.js';
+import { waveformWthd } from '../spectrum/waveformWthd.js';
 import type { Waveform } from '../waveform/Waveform.js';
 
 /** Options of {@link sweepModulationIndex}. */
@@ -12,7 +12,7 @@ export interface ModulationIndexSweepOptions {
   to?: number;
   /** Number of evenly spaced points, an integer in [2, 1000]. @default 100 */
   points?: number;
-  /** Highest harmonic order used for THD and WTHD, an integer in [1, 100000]. */
+  /** Highest order `orders` may name, an integer in [1, 100000] (THD and WTHD cover every order). */
   maxOrder: number;
   /** Orders whose amplitude is returned as a series (each in [0, maxOrder]). @default [] */
   orders?: number[];
@@ -26,9 +26,9 @@ export interface ModulationIndexSweep {
   ma: number[];
   /** Fundamental amplitude at each point (peak volts). */
   fundamental: number[];
-  /** THD over orders 2..maxOrder (ratio). */
+  /** THD over the whole waveform, every order ≥ 2 (ratio; `waveformThd`). */
   thd: number[];
-  /** WTHD over orders 2..maxOrder (ratio). */
+  /** WTHD over the whole waveform (ratio; `waveformWthd`). */
   wthd: number[];
   /** Amplitude series (peak volts) of each requested order. */
   harmonics: { order: number; amplitude: number[] }[];
@@ -37,7 +37,7 @@ export interface ModulationIndexSweep {
 /**
  * Spectrum, THD and WTHD across a range of modulation index for any method: `waveformAt(ma)`
  * builds the waveform (for example `(ma) => sineTriangle({ ...options, ma })`), and each point
- * is analysed by the exact {@link harmonics}. The reporting follows Holmes and Lipo (2003,
+ * is analysed exactly: THD and WTHD over the whole waveform, the requested orders by {@link harmonics}. The reporting follows Holmes and Lipo (2003,
  * ch. 3), who compare methods by THD and WTHD against ma.
  *
  * @throws ParameterRangeError naming `from`, `to`, `points`, `maxOrder` or `orders[i]`
@@ -63,11 +63,12 @@ export function sweepModulationIndex(
   };
   for (let k = 0; k < points; k++) {
     const ma = from + ((to - from) * k) / (points - 1);
-    const spectrum = harmonics(waveformAt(ma), maxOrder);
+    const waveform = waveformAt(ma);
+    const spectrum = harmonics(waveform, Math.max(1, ...orders));
     result.ma.push(ma);
     result.fundamental.push(spectrum[1]?.amplitude ?? 0);
-    result.thd.push(thd(spectrum));
-    result.wthd.push(wthd(spectrum));
+    result.thd.push(waveformThd(waveform));
+    result.wthd.push(waveformWthd(waveform));
     result.harmonics.forEach((series) => series.amplitude.push(spectrum[series.order]?.amplitude ?? 0));
     onProgress?.((k + 1) / points);
   }
