@@ -1,6 +1,6 @@
+import { execFileSync } from 'node:child_process';
 import {
   chmodSync,
-  chownSync,
   closeSync,
   openSync,
   readdirSync,
@@ -11,6 +11,7 @@ import {
 import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
 import {
+  boundByWritePermissions,
   call,
   DEMO,
   signInOver,
@@ -28,9 +29,6 @@ import { integrityCheck, mountSmallDisk, queryFile, type SmallDisk } from './sup
  * The expected answer for storage it cannot write is 503 with a message saying so (RFC 9110
  * §15.6.4: the server is temporarily unable to handle the request).
  */
-
-/** The unprivileged user the read-only test runs the service as. */
-const NOBODY = 65534;
 
 const MODULATION = { method: 'sine-triangle', scheme: 'unipolar', ma: 0.86, mf: 41, vdc: 375 };
 
@@ -88,6 +86,26 @@ async function studyBurst(
   };
   await Promise.all(Array.from({ length: lanes }, lane));
   return { acknowledged, refused, sent: counter };
+}
+
+/**
+ * Whether a process started like the service in the read-only test can open `file` for writing:
+ * true, false on a permission error (EACCES, EPERM, EROFS), an exception on anything else.
+ */
+function writableByTheService(file: string): boolean {
+  const probe = boundByWritePermissions(process.execPath, [
+    '-e',
+    `try { require('node:fs').closeSync(require('node:fs').openSync(process.argv[1], 'r+')); }
+     catch (e) { if (['EACCES', 'EPERM', 'EROFS'].includes(e.code)) process.exit(3); throw e; }`,
+    file,
+  ]);
+  try {
+    execFileSync(probe.file, probe.args, { stdio: ['ignore', 'ignore', 'pipe'] });
+    return true;
+  } catch (error) {
+    if ((error as { status?: number }).status === 3) return false;
+    throw error;
+  }
 }
 
 async function newProject(server: ChildServer, token: string): Promise<string> {
@@ -186,14 +204,19 @@ describe('faults', () => {
     });
 
     it('a read-only database file: writes answer 503 with a clear message, reads go on, nothing is corrupted', async () => {
-      // The service runs as nobody, so taking write permission away from its files is binding
-      // (root ignores permissions; a busy tmpfs cannot be remounted read-only under open files).
-      // Each write transaction opens a new SQLite connection, which finds the file read-only.
+      // The service runs without the power to override file permissions (as root: without
+      // CAP_DAC_OVERRIDE, see boundByWritePermissions), so taking write permission away from its
+      // files binds (root ignores permissions; a busy tmpfs cannot be remounted read-only under
+      // open files). It still reads everything, so it starts from a checkout in any folder, a
+      // private one included. Each write transaction opens a new SQLite connection, which finds
+      // the file read-only.
       const dir = tempDir('faults-ro');
       cleanups.push(() => rmSync(dir, { recursive: true, force: true }));
-      chownSync(dir, NOBODY, NOBODY);
       const file = path.join(dir, 'ro.sqlite');
-      const server = await startChildServer({ databaseUrl: `sqlite:${file}`, uid: NOBODY });
+      const server = await startChildServer({
+        databaseUrl: `sqlite:${file}`,
+        boundByWritePermissions: true,
+      });
       cleanups.push(() => server.kill());
       const token = await signInOver(server.baseUrl, DEMO.admin);
       const projectId = await newProject(server, token);
@@ -207,6 +230,10 @@ describe('faults', () => {
       const files = readdirSync(dir).map((f) => path.join(dir, f));
       for (const f of files) chmodSync(f, 0o444);
       chmodSync(dir, 0o555);
+      cleanups.push(() => chmodSync(dir, 0o755));
+      // The premise, checked apart from the service: a process started the way the service was
+      // cannot open the file for writing. Otherwise a 201 below would be the test's fault.
+      expect(writableByTheService(file), `${file} is still writable for the service`).toBe(false);
       const refused = await call(server.baseUrl, 'POST', '/api/v1/studies', token, {
         projectId,
         name: 'during read-only',
@@ -231,7 +258,10 @@ describe('faults', () => {
         });
       await server.stop();
       expect(await integrityCheck(file)).toEqual(['ok']);
-      const again = await startChildServer({ databaseUrl: `sqlite:${file}`, uid: NOBODY });
+      const again = await startChildServer({
+        databaseUrl: `sqlite:${file}`,
+        boundByWritePermissions: true,
+      });
       cleanups.push(() => again.kill());
       const token2 = await signInOver(again.baseUrl, DEMO.admin);
       expect(

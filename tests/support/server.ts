@@ -1,4 +1,4 @@
-import { spawn, type ChildProcess } from 'node:child_process';
+import { execFileSync, spawn, type ChildProcess } from 'node:child_process';
 import { existsSync, mkdtempSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
@@ -18,6 +18,36 @@ export const DEMO = {
 /** A new temporary folder for one suite's databases. */
 export function tempDir(label: string): string {
   return mkdtempSync(path.join(tmpdir(), `pulsewright-${label}-`));
+}
+
+/**
+ * How to run `file args` without the power to write where file permissions say no, so that
+ * taking write permission away from a file binds. Root ignores permissions through the capability
+ * CAP_DAC_OVERRIDE, so as root the program runs under util-linux's `setpriv` with that one
+ * capability removed (from the bounding and inheritable sets, so the exec cannot get it back).
+ * The process is still root and keeps CAP_DAC_READ_SEARCH, so it still reads and traverses every
+ * folder: it loads the service wherever the checkout sits, however private its parents are (a
+ * clone in a 0700 folder made by `mktemp -d`, a private home folder). That is why this replaced
+ * running the service as `nobody`, which cannot reach a checkout in a private folder. Any other
+ * user is bound by permissions already and gets `file args` unchanged. No mount, no second user.
+ */
+export function boundByWritePermissions(
+  file: string,
+  args: string[],
+): { file: string; args: string[] } {
+  if (process.getuid?.() !== 0) return { file, args };
+  try {
+    execFileSync('setpriv', ['--version'], { stdio: 'ignore' });
+  } catch {
+    throw new Error(
+      'Running as root, the tests take write permission away from the service with `setpriv` ' +
+        '(util-linux), which is not on PATH: apt-get install -y util-linux.',
+    );
+  }
+  return {
+    file: 'setpriv',
+    args: ['--inh-caps=-dac_override', '--bounding-set=-dac_override', '--', file, ...args],
+  };
 }
 
 /** A free loopback port, asked of the OS. */
@@ -61,14 +91,20 @@ export async function startChildServer(options: {
   env?: Record<string, string>;
   port?: number;
   waitForHealth?: boolean;
-  /** Run as this user id (and group id), e.g. 65534 (nobody), so file permissions apply. */
-  uid?: number;
+  /**
+   * Without the power to write where file permissions say no (see `boundByWritePermissions`),
+   * so that taking write permission away from its database binds even when the tests run as root.
+   */
+  boundByWritePermissions?: boolean;
 }): Promise<ChildServer> {
   if (!existsSync(apiEntry))
     throw new Error(`${apiEntry} is missing: run \`npm run build\` first.`);
   const port = options.port ?? (await freePort());
   let output = '';
-  const child = spawn(process.execPath, [apiEntry], {
+  const command = options.boundByWritePermissions
+    ? boundByWritePermissions(process.execPath, [apiEntry])
+    : { file: process.execPath, args: [apiEntry] };
+  const child = spawn(command.file, command.args, {
     cwd: repoRoot,
     env: {
       PATH: process.env.PATH ?? '',
@@ -87,7 +123,6 @@ export async function startChildServer(options: {
       ...options.env,
     },
     stdio: ['ignore', 'pipe', 'pipe'],
-    ...(options.uid !== undefined ? { uid: options.uid, gid: options.uid } : {}),
   });
   child.stdout?.on('data', (chunk: Buffer) => (output += chunk.toString()));
   child.stderr?.on('data', (chunk: Buffer) => (output += chunk.toString()));
