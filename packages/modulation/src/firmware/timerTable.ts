@@ -20,6 +20,12 @@ const RATIO_TOLERANCE = 1e-9;
 const MIN_PERIOD_COUNTS = 2;
 
 /**
+ * Most entries a timer table may hold per fundamental period (each entry holds a compare value per
+ * channel): bounds the work and the size of the answer; a controller's table is far shorter.
+ */
+export const MAX_TIMER_TABLE_LENGTH = 65_536;
+
+/**
  * Timer compare values for a regular-sampled sine modulation: what a controller loads into
  * its PWM timer, per channel (inverter leg), with complementary outputs and dead time.
  *
@@ -46,7 +52,8 @@ const MIN_PERIOD_COUNTS = 2;
  *   turn-on by D ticks (its register encoding is timer-specific).
  *
  * @throws ParameterRangeError naming the field: a non-integer carrier/fundamental ratio, a
- *   period that does not fit the counter or has fewer than 2 counts, a dead time of half a
+ *   period that does not fit the counter or has fewer than 2 counts, a table longer than
+ *   {@link MAX_TIMER_TABLE_LENGTH} (given or by default), a dead time of half a
  *   carrier period or more, a table length that does not divide the period, asymmetric
  *   sampling or compare-offset dead time with edge-aligned counting.
  */
@@ -84,8 +91,17 @@ export function timerTable(options: TimerTableOptions): TimerTable {
 
   const carrierPeriods = integerRatio(carrierFrequency, fundamentalFrequency);
   const updatesPerFundamental = carrierPeriods * (sampling === 'regular-asymmetric' ? 2 : 1);
+  if (options.tableLength === undefined && updatesPerFundamental > MAX_TIMER_TABLE_LENGTH) {
+    // The default (one entry per compare update) would size the table from the two frequencies
+    // alone; refuse before any work rather than build millions of rows.
+    throw new ParameterRangeError(
+      'tableLength',
+      `given when carrierFrequency/fundamentalFrequency${sampling === 'regular-asymmetric' ? ' × 2' : ''} (${updatesPerFundamental} compare updates per period) exceeds ${MAX_TIMER_TABLE_LENGTH}: a divisor of ${updatesPerFundamental} up to ${MAX_TIMER_TABLE_LENGTH}`,
+      undefined,
+    );
+  }
   const tableLength = options.tableLength ?? updatesPerFundamental;
-  assertNumberInRange('tableLength', tableLength, { min: 1, max: updatesPerFundamental, integer: true });
+  assertNumberInRange('tableLength', tableLength, { min: 1, max: Math.min(updatesPerFundamental, MAX_TIMER_TABLE_LENGTH), integer: true });
   if (updatesPerFundamental % tableLength !== 0) {
     throw new ParameterRangeError('tableLength', `a divisor of ${updatesPerFundamental} (compare updates per fundamental period)`, tableLength);
   }

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { legReferences, timerTable, timerTableWaveforms, type TimerTableOptions } from '../index.js';
+import { legReferences, MAX_TIMER_TABLE_LENGTH, timerTable, timerTableWaveforms, type TimerTableOptions } from '../index.js';
+import { rangeErrorField } from '../../testing/rangeErrorField.js';
 import { harmonics } from '../../spectrum/index.js';
 import { ParameterRangeError } from '../../validation/index.js';
 import { assertInDelta } from '../../testing/assertInDelta.js';
@@ -137,5 +138,21 @@ describe('timerTable input checks', () => {
       expect(lowSide[i]! - highSide[i]!).toBe(65);
       expect(c - highSide[i]!).toBe(32);
     });
+  });
+});
+
+describe('timerTable: size bounded before work (issue 11: a default table length crashed the service)', () => {
+  it('refuses a default table length past MAX_TIMER_TABLE_LENGTH, naming tableLength, and accepts a divisor', () => {
+    const options = {
+      modulation: { method: 'three-phase' as const, ma: 0.9, zeroSequence: 'min-max' as const },
+      fundamentalFrequency: 0.05,
+      carrierFrequency: 1e6,
+      timerClock: 1e9,
+      sampling: 'regular-asymmetric' as const,
+    };
+    expect(rangeErrorField(() => timerTable(options))).toBe('tableLength');
+    expect(() => timerTable(options)).toThrow(/tableLength must be given when .* \(40000000 compare updates per period\) exceeds 65536/);
+    expect(rangeErrorField(() => timerTable({ ...options, tableLength: 2 * MAX_TIMER_TABLE_LENGTH }))).toBe('tableLength');
+    expect(timerTable({ ...options, tableLength: 50_000 }).entryAngles).toHaveLength(50_000);
   });
 });
