@@ -23,10 +23,24 @@ const spectrum: JsonBody<'/api/v1/spectra', 'post'> = {
   modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8, mf: 21, vdc: 400, sampling: 'natural', carrierPhase: 0 },
   maxOrder: 50,
 };
-const spectrumAnswer: JsonAnswer<'/api/v1/spectra', 'post', 200> = {
+const spectrumAnswer: Pick<JsonAnswer<'/api/v1/spectra', 'post', 200>, 'harmonics' | 'thd' | 'wthd'> = {
   harmonics: [{ order: 1, amplitude: 0, phase: 0 }],
   thd: 0,
   wthd: 0,
+};
+const design: JsonBody<'/api/v1/designs/report', 'post'>['design'] = {
+  vdc: 400,
+  fundamentalFrequency: 50,
+  carrierFrequency: 1050,
+  modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8 },
+  load: { r: 10, l: 0.02 },
+  filter: null,
+};
+const studyCreate: JsonBody<'/api/v1/studies', 'post'> = { projectId: '', name: 'x', design };
+const reportFigures: Pick<JsonAnswer<'/api/v1/studies/{id}/report', 'get', 200>['bridge'], 'thd' | 'wthd' | 'exact'> = {
+  thd: 0,
+  wthd: 0,
+  exact: true,
 };
 type Exists = [
   paths['/api/health']['get'],
@@ -36,7 +50,18 @@ type Exists = [
   paths['/api/v1/studies']['post'],
   paths['/api/v1/captures']['post'],
   paths['/api/v1/jobs/{id}']['get'],
+  paths['/api/v1/studies/{id}/report']['get'],
 ];
 
 /** Referenced so the checks above are not unused. */
-export const contractChecks: readonly unknown[] = [login, token, key, keyAnswer, spectrum, spectrumAnswer, null as unknown as Exists];
+export const contractChecks: readonly unknown[] = [
+  login,
+  token,
+  key,
+  keyAnswer,
+  spectrum,
+  spectrumAnswer,
+  studyCreate,
+  reportFigures,
+  null as unknown as Exists,
+];

@@ -6,7 +6,7 @@ describe('createPulsewrightClient', () => {
     const seen: Request[] = [];
     const fakeFetch = async (input: Request) => {
       seen.push(input);
-      return new Response(JSON.stringify({ harmonics: [], thd: 0, wthd: 0 }), {
+      return new Response(JSON.stringify({ name: 'bridge output', harmonics: [], thd: 0, wthd: 0, spectrumThd: 0 }), {
         status: 200,
         headers: { 'Content-Type': 'application/json' },
       });
