@@ -1,6 +1,7 @@
 import type { LcFilterCharacteristics } from '../filter/lcFilter.js';
 import type { HarmonicLimitCheck } from '../limits/checkVoltageHarmonicLimits.js';
 import type { LabelledHarmonic } from '../spectrum/labelHarmonics.js';
+import type { Waveform } from '../waveform/Waveform.js';
 import type { ModulationMethod } from './Modulation.js';
 import type { NamedVoltage } from './modulationVoltages.js';
 
@@ -67,6 +68,49 @@ export interface PhaseCurrents {
   load: CurrentFigures | null;
 }
 
+/**
+ * The current the bridge draws from the DC bus, i_dc = Σ s_k·i_k over the legs (s_k = 1 while the
+ * upper switch of leg k is on); its AC part is what the DC-link capacitor carries (J. W. Kolar and
+ * S. D. Round, IEE Proc. Electric Power Applications, 2006). Sampled on a grid fine enough to
+ * hold every switching period (at least 64 samples a carrier period).
+ */
+export interface DcLinkFigures {
+  /** Mean DC current, amperes (the power drawn over vdc). */
+  mean: number;
+  /** RMS of i_dc, amperes. */
+  rms: number;
+  /** RMS of the AC part, √(rms² − mean²): the capacitor's ripple current, amperes. */
+  rippleRms: number;
+  /** Single-phase bridges: amplitude at twice the output frequency, peak amperes; null for three-phase. */
+  secondHarmonic: number | null;
+  /** Orders 0..maxOrder of i_dc (order 0 the mean), peak amperes. */
+  spectrum: LabelledHarmonic[];
+  series: PeriodSeries;
+  /** Samples per fundamental period the figures were computed from. */
+  samplesPerPeriod: number;
+}
+
+/**
+ * The common-mode voltage of a three-phase bridge: the star point of a balanced load against the
+ * DC midpoint, (v_a + v_b + v_c)/3 of the leg voltages (standard circuit analysis). Each step
+ * is a dv/dt event that drives bearing and EMI currents (A. M. Hava and E. Ün, IEEE Trans. Power
+ * Electronics, 2009).
+ */
+export interface CommonModeFigures {
+  name: string;
+  /** One period, volts, exact. */
+  waveform: Waveform;
+  /** The distinct levels it takes, volts, ascending (±vdc/6, ±vdc/2 for a two-level bridge). */
+  levels: number[];
+  /** RMS, volts. */
+  rms: number;
+  /** Steps per fundamental period, and per carrier period (null for a pattern). */
+  stepsPerPeriod: number;
+  stepsPerCarrierPeriod: number | null;
+  /** Orders 0..maxOrder, peak volts, labelled. */
+  spectrum: LabelledHarmonic[];
+}
+
 /** Everything the product shows about one design, from {@link analyseDesign}; plain data. */
 export interface DesignReport {
   method: ModulationMethod;
@@ -90,6 +134,10 @@ export interface DesignReport {
   output: (VoltageFigures & { series: PeriodSeries }) | null;
   /** Currents of each phase; empty with neither load nor filter. */
   currents: PhaseCurrents[];
+  /** The current drawn from the DC bus; null with neither load nor filter, or for a staircase (one source a cell). */
+  dcLink: DcLinkFigures | null;
+  /** The common-mode voltage (three-phase only). */
+  commonMode: CommonModeFigures | null;
   /** Mean power into the load resistance, all phases together, watts; null without a load. */
   loadPower: number | null;
   /** The filter's own figures (unloaded) and its loaded gain; null without a filter. */

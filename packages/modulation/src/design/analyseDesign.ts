@@ -22,6 +22,8 @@ import { waveformMeanSquare } from '../waveform/waveformMeanSquare.js';
 import { assertInverterDesign } from './assertInverterDesign.js';
 import { defaultSpectrumOrder } from './defaultSpectrumOrder.js';
 import { designModulation } from './designModulation.js';
+import { commonModeFigures } from './commonModeFigures.js';
+import { dcLinkFigures } from './dcLinkFigures.js';
 import type { CurrentFigures, DesignReport, PeriodSeries, PhaseCurrents, VoltageFigures } from './DesignReport.js';
 import type { InverterDesign } from './InverterDesign.js';
 import { MODULATION_METHOD_LABELS } from './Modulation.js';
@@ -40,6 +42,9 @@ export interface AnalyseDesignOptions {
    */
   busVoltage?: number;
 }
+
+/** Most samples a period of the unfiltered currents is read on (a power of two). */
+const MAX_GRID_SAMPLES = 1 << 17;
 
 /** Most orders summed for a filtered design (bounds its cost; the tail beyond is bounded, not dropped). */
 export const MAX_ANALYSIS_ORDER = 20_000;
@@ -101,11 +106,13 @@ export function analyseDesign(design: InverterDesign, options: AnalyseDesignOpti
   let output: DesignReport['output'] = null;
   let currents: PhaseCurrents[] = [];
   let loadPower: number | null = null;
+  let inverterSamples: Float64Array[] = [];
   if (filter === null) {
     if (load !== null) {
       const solved = phaseVoltages.map((waveform, k) => exactLoadCurrents(waveform, rlLoadOf(design, k), PHASES[k] ?? 'a', points, frequencyRatio));
       currents = solved.map((s) => s.currents);
       loadPower = solved.reduce((sum, s) => sum + s.power, 0);
+      inverterSamples = solved.map((s) => s.inverterSamples);
     }
   } else {
     const solved = phaseVoltages.map((waveform, k) =>
@@ -120,7 +127,17 @@ export function analyseDesign(design: InverterDesign, options: AnalyseDesignOpti
     };
     currents = solved.map((s) => s.currents);
     loadPower = load === null ? null : solved.reduce((sum, s) => sum + s.loadPower, 0);
+    inverterSamples = solved.map((s) => s.inverterSamples);
   }
+  // The switching function of each leg: a two-level leg's upper switch is on at +vdc/2; a
+  // single-phase bridge draws (v_bridge/vdc)·i. A staircase has a source per cell: no one DC link.
+  const staircase = 'kind' in design.modulation && design.modulation.kind === 'staircase';
+  const switching = voltages.phaseCount === 3 ? voltages.legs.map((v) => v.waveform) : voltages.phases.map((v) => v.waveform);
+  const dcLink =
+    inverterSamples.length === 0 || staircase
+      ? null
+      : dcLinkFigures(switching, inverterSamples, { vdc: design.vdc, phaseCount: voltages.phaseCount, maxOrder, points, label });
+  const commonMode = voltages.phaseCount === 3 ? commonModeFigures(voltages.legs.map((v) => v.waveform), { maxOrder, frequencyRatio, label }) : null;
 
   const pcc = output ?? bridge;
   const pccSpectrum = output === null ? bridge.spectrum : output.spectrum;
@@ -140,6 +157,8 @@ export function analyseDesign(design: InverterDesign, options: AnalyseDesignOpti
     lineToLine,
     output,
     currents,
+    dcLink,
+    commonMode,
     loadPower,
     filter: filter === null ? null : filterFigures(filter, network, frequency, frequencyRatio),
     limitCheck,
@@ -204,7 +223,7 @@ function exactLoadCurrents(
   phase: PhaseCurrents['phase'],
   points: number,
   frequencyRatio: number | null,
-): { currents: PhaseCurrents; power: number } {
+): { currents: PhaseCurrents; power: number; inverterSamples: Float64Array } {
   const steady = withFieldPrefix('load.', () => rlSteadyState(waveform, load));
   const voltage = harmonics(waveform, 1)[1] as Harmonic;
   const emf = load.emf ? phasorOf(load.emf.amplitude, load.emf.phase) : { re: 0, im: 0 };
@@ -213,7 +232,7 @@ function exactLoadCurrents(
   const fundamental = complexAbs(first);
   const fundamentalAt = (theta: number): number => first.re * Math.sin(theta) + first.im * Math.cos(theta);
   // The ripple's extremes sit at or near the switching edges: sample every edge and a fine grid.
-  const grid = Math.min(200_000, Math.max(points, 16 * (frequencyRatio ?? 64)));
+  const grid = synthesisSize(1, Math.min(MAX_GRID_SAMPLES, Math.max(points, 64 * (frequencyRatio ?? 64))));
   const angles = [...waveform.edges, ...Array.from({ length: grid }, (_, k) => (TAU * k) / grid)];
   const sampled = rlCurrentAt(waveform, angles, load);
   let low = Infinity;
@@ -236,11 +255,13 @@ function exactLoadCurrents(
   return {
     currents: { phase, inverter: { ...figures, name: `inverter (switch) current, phase ${phase}` }, capacitor: null, load: figures },
     power: steady.power,
+    inverterSamples: Float64Array.from(sampled.slice(waveform.edges.length)),
   };
 }
 
 interface FilteredPhase {
   outputSpectrum: Harmonic[];
+  inverterSamples: Float64Array;
   outputThdUpperBound: number;
   outputSeries: PeriodSeries;
   currents: PhaseCurrents;
@@ -290,9 +311,11 @@ function filteredPhase(
     return { angles, values: picked };
   };
   const tail = switchingTail(waveform, bridge, network.filter, omega, size);
+  let inverterSamples: Float64Array = new Float64Array(0);
   const current = (name: string, pick: (s: OutputNetworkPhasors) => Complex, withTail: boolean): CurrentFigures => {
     const phasors = solved.map(pick);
     const samples = synthesisePeriod(phasors, size);
+    if (name.startsWith('inverter')) inverterSamples = samples;
     let meanSquare = 0;
     phasors.forEach((p, order) => {
       meanSquare += order === 0 ? p.re * p.re : (p.re * p.re + p.im * p.im) / 2;
@@ -324,13 +347,15 @@ function filteredPhase(
     };
   };
   const loadCurrent = load === null ? null : current('load current', (s) => s.loadCurrent, false);
+  const inverter = current('inverter (switch) current', (s) => s.inverterCurrent, true);
   return {
+    inverterSamples,
     outputSpectrum,
     outputThdUpperBound,
     outputSeries: series(synthesisePeriod(solved.map((s) => s.output), size)),
     currents: {
       phase,
-      inverter: current('inverter (switch) current', (s) => s.inverterCurrent, true),
+      inverter,
       capacitor: current('capacitor current', (s) => s.capacitorCurrent, true),
       load: loadCurrent,
     },

@@ -177,4 +177,60 @@ describe('analyseDesign: one report of a design', () => {
     expect(rangeErrorField(() => analyseDesign(bipolar(0.8, 21), { maxOrder: 10 }))).toBe('maxOrder');
     expect(() => analyseDesign({ ...bipolar(0.8, 21), carrierFrequency: 1060 })).toThrow(/whole multiple .* of fundamentalFrequency 50 Hz/);
   });
+
+  it('DC-link ripple current of a three-phase bridge agrees with Kolar and Round (2006)', () => {
+    // J. W. Kolar and S. D. Round, "Analytical calculation of the RMS current stress on the DC-link
+    // capacitor of voltage-PWM converter systems", IEE Proc. Electric Power Applications, 2006:
+    // I_C,rms = I_N·√(2M·[√3/(4π) + cos²φ·(√3/π − 9M/16)]), I_N the rms phase current, M = ma
+    // (sinusoidal phase currents assumed; recalled from memory). A high mf and an inductive load
+    // keep the current near sinusoidal, so 0.5 % tolerance.
+    for (const [ma, angle] of [
+      [0.8, 0.6],
+      [0.5, 1.0],
+      [1.0, 0.3],
+    ] as const) {
+      const r = 5;
+      const l = (Math.tan(angle) * r) / (TAU * 50);
+      const report = analyseDesign({
+        vdc: 600,
+        fundamentalFrequency: 50,
+        carrierFrequency: 50 * 201,
+        modulation: { method: 'three-phase', ma, zeroSequence: 'none' },
+        load: { r, l },
+      });
+      const phaseRms = (report.currents[0]?.load?.fundamental ?? 0) / Math.SQRT2;
+      const kolar = phaseRms * Math.sqrt(2 * ma * (SQRT3 / (4 * Math.PI) + Math.cos(angle) ** 2 * (SQRT3 / Math.PI - (9 * ma) / 16)));
+      expect(relative(report.dcLink?.rippleRms ?? 0, kolar)).toBeLessThan(5e-3);
+      // Power balance: mean DC current × vdc = power into the load (ideal switches).
+      expect(relative((report.dcLink?.mean ?? 0) * 600, report.loadPower ?? 0)).toBeLessThan(5e-3);
+      expect(report.dcLink?.secondHarmonic).toBeNull();
+    }
+  });
+
+  it('a single-phase bridge draws a DC-link current at twice the output frequency of ma·I₁/2', () => {
+    // i_dc = (v/vdc)·i; with v₁ = ma·vdc·sin θ and i₁ = I₁·sin(θ − φ) the product holds
+    // (ma·I₁/2)·cos φ at DC and ma·I₁/2 at 2f (standard circuit analysis).
+    const report = analyseDesign({ ...bipolar(0.9, 201), modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.9 }, load: { r: 4, l: 0.01 } });
+    const fundamental = report.currents[0]?.load?.fundamental ?? 0;
+    expect(relative(report.dcLink?.secondHarmonic ?? 0, (0.9 * fundamental) / 2)).toBeLessThan(5e-3);
+  });
+
+  it('common-mode voltage of a two-level bridge: levels ±vdc/6, ±vdc/2; 6 steps a carrier period, 4 when clamped', () => {
+    // Standard circuit analysis of (v_a + v_b + v_c)/3 with legs at ±vdc/2; a discontinuous
+    // (clamped) method leaves one leg still for 120° of every 360°, so 2/3 of the steps remain
+    // (Hava and Ün, 2009).
+    const design = (zeroSequence: 'min-max' | 'clamp-60-peak'): InverterDesign => ({
+      vdc: 600,
+      fundamentalFrequency: 50,
+      carrierFrequency: 50 * 99,
+      modulation: { method: 'three-phase', ma: 0.9, zeroSequence },
+    });
+    const continuous = analyseDesign(design('min-max')).commonMode;
+    expect(continuous?.levels).toEqual([-300, -100, 100, 300]);
+    expect(continuous?.stepsPerCarrierPeriod).toBe(6);
+    const clamped = analyseDesign(design('clamp-60-peak')).commonMode;
+    // A few extra steps where a clamp begins or ends inside a carrier period: 4 ± 0.2.
+    expect(Math.abs((clamped?.stepsPerCarrierPeriod ?? 0) - 4)).toBeLessThan(0.2);
+    expect(analyseDesign(bipolar(0.8, 21)).commonMode).toBeNull();
+  });
 });
