@@ -12,7 +12,8 @@ export interface ReferenceSignal {
   slopeBound: number;
   /**
    * Angles in [0, 2π) where the reference has a kink or a jump (the clamping instants of
-   * discontinuous zero sequences); the crossing search splits there.
+   * discontinuous zero sequences); the crossing search splits there, and a regular sample that
+   * falls on one takes the value just after it.
    * @default []
    */
   breakpoints?: readonly number[];

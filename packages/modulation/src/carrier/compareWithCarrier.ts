@@ -1,4 +1,4 @@
-import { TAU } from '../math.js';
+import { EDGE_EPSILON, TAU } from '../math.js';
 import { findBracketedRoot } from '../numeric/findBracketedRoot.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import { waveformFromTransitions, type Transition } from '../waveform/waveformFromTransitions.js';
@@ -23,6 +23,11 @@ export interface CarrierComparisonOptions extends CarrierAlignment {
  * Brent's method to machine precision; regular-sampling edges in closed form, since the
  * carrier is linear over each half period. `mf` must be an integer so that one fundamental
  * period holds a whole number of carrier cycles. Inputs are assumed validated by the caller.
+ *
+ * Regular sampling at the rails: a held sample of +1 or more gives a half period high
+ * throughout, −1 or less low throughout (it meets the carrier's peak or valley only at an
+ * instant, which has no width). A sample that falls on one of the reference's breakpoints
+ * takes the value just after it, of the piece that starts there.
  */
 export function compareWithCarrier(
   reference: ReferenceSignal,
@@ -54,7 +59,7 @@ export function compareWithCarrier(
         sampling === 'regular-asymmetric' || !rising
           ? start
           : fundamentalAngleOfCarrier((j - 1) * Math.PI, alignment);
-      pushRegularHalfPeriod(transitions, reference.value(sampleAngle), start, end, rising, level);
+      pushRegularHalfPeriod(transitions, heldSample(reference, sampleAngle), start, end, rising, level);
     }
   }
   if (mirrored) {
@@ -65,6 +70,26 @@ export function compareWithCarrier(
     }
   }
   return waveformFromTransitions(transitions);
+}
+
+/**
+ * The reference sampled at `angle` for regular sampling. A sample that falls on a breakpoint
+ * (within {@link EDGE_EPSILON}, the library's resolution of an instant) takes the value of the
+ * piece that starts there, read just inside it as the natural-sampling search reads each piece.
+ * Where the reference jumps (the change of clamp of a discontinuous zero sequence) the two
+ * sides differ by the jump, and a carrier peak or valley lands exactly on it whenever mf is a
+ * multiple of 6: left to rounding of the two angles, the side would differ from one such
+ * sample to the next, between phases and between half periods, and break the three-phase and
+ * half-wave symmetry of the output. One rule for every such sample keeps both exact.
+ */
+function heldSample(reference: ReferenceSignal, angle: number): number {
+  for (const breakpoint of reference.breakpoints ?? []) {
+    // The breakpoint's copy nearest the sample (breakpoints are given in [0, 2π)).
+    const offset = angle - breakpoint;
+    const nearest = breakpoint + TAU * Math.round(offset / TAU);
+    if (Math.abs(angle - nearest) < EDGE_EPSILON) return reference.value(insideFrom(nearest, 1));
+  }
+  return reference.value(angle);
 }
 
 /**

@@ -4,24 +4,15 @@ import { wrapAngle } from '../math.js';
 export const THIRTY_DEGREES = Math.PI / 6;
 
 /**
- * Relative distance, in 30° widths, within which an angle is taken to lie exactly on a grid
- * boundary. Sample angles that are exact multiples of 30° in exact arithmetic (carrier peaks
- * and valleys when mf is a multiple of 6, say) come out of floating point a few ulp to either
- * side; without the snap, rounding would choose the side. Angles that are not on a boundary
- * lie at least π/(6·mf·…) away (rational positions), far above this.
- */
-const BOUNDARY_SNAP = 1e-12;
-
-/**
- * Index 0…11 of the 30° interval [k·π/6, (k + 1)·π/6) holding the fundamental angle `theta`
- * (radians, any finite value; wrapped into [0, 2π)). Half-open: an angle on a boundary belongs
- * to the interval that starts there, whichever phase, half period or clamp is asking, so a
- * decision taken from this index is exactly periodic in 2π/3 and flips exactly at θ + π.
+ * Index 0…11 of the half-open 30° interval [k·π/6, (k + 1)·π/6) holding the fundamental angle
+ * `theta` (radians, any finite value; wrapped into [0, 2π)). A decision taken from this index
+ * rather than from comparing sines is exactly 2π/3-periodic and flips at θ + π, and stays
+ * right a few ulp inside an interval, where `compareWithCarrier`'s crossing search reads each
+ * piece of the reference (the sines' difference there is below their rounding). Within rounding
+ * of a boundary, rounding of θ picks the side; the comparator never asks there (a held sample
+ * that falls on a breakpoint is read just after it, in the interval that starts there).
  * Internal helper of the zero sequences (not exported by the package).
  */
 export function thirtyDegreeSector(theta: number): number {
-  let position = wrapAngle(theta) / THIRTY_DEGREES;
-  const nearest = Math.round(position);
-  if (Math.abs(position - nearest) < BOUNDARY_SNAP) position = nearest;
-  return Math.floor(position) % 12;
+  return Math.floor(wrapAngle(theta) / THIRTY_DEGREES) % 12;
 }

@@ -12,11 +12,12 @@ import type { ZeroSequence } from './ZeroSequence.js';
  * The 60° clamps choose the rail by the 30° interval θ lies in, not by comparing the sines
  * (Holmes and Lipo 2003, ch. 7: clamp-60-peak takes the positive rail on [60°, 120°),
  * [180°, 240°) and [300°, 360°), where phase a, b or c is at its positive peak, and the negative
- * rail between; lead advances those blocks by 30°, lag delays them by 30°). At a block boundary
- * the two choices tie in magnitude and rounding of the sines would pick the rail, differently
- * at θ, θ + 2π/3 and θ + π. Here every boundary belongs to the block that starts there, so the
- * offset is exactly 2π/3-periodic and changes sign at θ + π (with the sines), also for samples
- * that land on a boundary.
+ * rail between; lead advances those blocks by 30°, lag delays them by 30°). The blocks are
+ * half-open, [start, end); at a boundary the two candidate phases tie in magnitude, and the
+ * sines' comparison was decided there, and a few ulp either side, by rounding. Decided by
+ * interval, the offset is exactly 2π/3-periodic and changes sign at θ + π. On a boundary itself
+ * rounding of θ still picks the side; `compareWithCarrier` never evaluates there (it reads a
+ * held sample that lands on a boundary just after it).
  *
  * @param sines - [a, b, c] = ma·sin(θ − k·2π/3), k = 0, 1, 2
  * @param theta - fundamental angle (radians, any finite value), used by the 60° clamps and the
