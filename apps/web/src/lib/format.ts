@@ -15,3 +15,9 @@ export function formatDate(iso: string): string {
   const date = new Date(iso);
   return Number.isNaN(date.getTime()) ? iso : date.toLocaleString();
 }
+
+/** A voltage gain as a ratio and in decibels, 20·log10 (display only). */
+export function formatGain(ratio: number): string {
+  if (!Number.isFinite(ratio) || ratio <= 0) return formatNumber(ratio, 3);
+  return `${formatNumber(ratio, 3)} (${(20 * Math.log10(ratio)).toFixed(1)} dB)`;
+}

@@ -13,7 +13,7 @@ export interface HarmonicRow {
 type SortKey = 'order' | 'amplitude' | 'ratio';
 
 /** Sortable table of harmonics with the ratio to the fundamental, and CSV download. */
-export function HarmonicTable({ harmonics, fileName = 'harmonics', minRatio = 1e-4, unit = 'V' }: { harmonics: readonly HarmonicRow[]; fileName?: string; minRatio?: number; unit?: string }) {
+export function HarmonicTable({ harmonics, title = 'Harmonic table', fileName = 'harmonics', minRatio = 1e-4, unit = 'V' }: { harmonics: readonly HarmonicRow[]; title?: string; fileName?: string; minRatio?: number; unit?: string }) {
   const [sort, setSort] = useState<{ key: SortKey; descending: boolean }>({ key: 'amplitude', descending: true });
   const fundamental = harmonics.find((h) => h.order === 1)?.amplitude ?? 0;
   const rows = useMemo(() => {
@@ -41,14 +41,14 @@ export function HarmonicTable({ harmonics, fileName = 'harmonics', minRatio = 1e
     );
 
   return (
-    <div className="rounded-lg border border-rule bg-panel p-3 shadow-sm">
+    <section className="rounded-lg border border-rule bg-panel p-3 shadow-sm" aria-label={title}>
       <div className="mb-2 flex items-center justify-between">
-        <h3 className="text-sm font-semibold tracking-wide uppercase">Harmonic table</h3>
+        <h3 className="text-sm font-semibold tracking-wide uppercase">{title}</h3>
         <Button variant="ghost" className="no-print" onClick={download}>
           Download CSV
         </Button>
       </div>
-      <div className="max-h-80 overflow-auto">
+      <div className="max-h-80 overflow-auto print:max-h-none print:overflow-visible">
         <table className="w-full text-sm">
           <caption className="sr-only">Harmonics at or above {formatPercent(minRatio, 2)} of the fundamental</caption>
           <thead className="sticky top-0 bg-panel text-xs text-ink-soft">
@@ -71,6 +71,6 @@ export function HarmonicTable({ harmonics, fileName = 'harmonics', minRatio = 1e
           </tbody>
         </table>
       </div>
-    </div>
+    </section>
   );
 }

@@ -1,5 +1,5 @@
 import { scaleLinear, scaleLog } from 'd3';
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { formatNumber, formatPercent } from '../../lib/format';
 import { Button } from '../ui/Button';
 import { AxisBottom, AxisLeft } from './axes';
@@ -27,6 +27,8 @@ export interface SpectrumChartProps {
   labelThreshold?: number;
   width?: number;
   unit?: string;
+  /** Controls shown before the scale button (a choice of voltage). */
+  controls?: ReactNode;
 }
 
 /** Orders drawn: the fundamental and every harmonic (order 0, the mean, is left out). */
@@ -44,7 +46,7 @@ function placeLabels(candidates: readonly SpectrumBar[], xOf: (h: SpectrumBar) =
 }
 
 /** Harmonic amplitudes as bars, linear or logarithmic, carrier groups labelled, value on hover. */
-export function SpectrumChart({ series, title = 'Spectrum', fileName = 'spectrum', labelThreshold = 0.15, width = 760, unit = 'V' }: SpectrumChartProps) {
+export function SpectrumChart({ series, title = 'Spectrum', fileName = 'spectrum', labelThreshold = 0.15, width = 760, unit = 'V', controls }: SpectrumChartProps) {
   const [scaleKind, setScaleKind] = useState<'linear' | 'log'>('linear');
   const [hover, setHover] = useState<number | null>(null);
   const height = 280;
@@ -69,6 +71,7 @@ export function SpectrumChart({ series, title = 'Spectrum', fileName = 'spectrum
     (h) => x(h.order),
   );
   const hovered = hover === null ? null : series.map((s, i) => ({ name: s.name, color: s.color, bar: all[i]?.find((h) => h.order === hover) }));
+  const hoverWidth = series.length > 1 ? 300 : 200;
   const significant = first.filter((h) => h.amplitude > peak * 1e-3).map((h) => h.order);
 
   const moveHover = (direction: 1 | -1) => {
@@ -83,9 +86,12 @@ export function SpectrumChart({ series, title = 'Spectrum', fileName = 'spectrum
       title={title}
       fileName={fileName}
       controls={
+        <>
+        {controls}
         <Button variant="ghost" aria-pressed={scaleKind === 'log'} onClick={() => setScaleKind(scaleKind === 'linear' ? 'log' : 'linear')}>
           {scaleKind === 'linear' ? 'Log scale' : 'Linear scale'}
         </Button>
+        </>
       }
       footer={
         series.length > 1 ? <ChartLegend series={series} swatch="square" /> : null
@@ -138,8 +144,8 @@ export function SpectrumChart({ series, title = 'Spectrum', fileName = 'spectrum
         </g>
         <AxisBottom scale={x} y={base} label="harmonic order" ticks={10} format={(v) => String(v)} />
         {hovered && hover !== null ? (
-          <g transform={`translate(${Math.min(x(hover) + 8, width - 190)},${margin.top})`} pointerEvents="none">
-            <rect width={180} height={18 + hovered.length * 14} rx={4} fill="var(--color-panel)" stroke="var(--color-rule)" />
+          <g transform={`translate(${Math.min(x(hover) + 8, width - hoverWidth - 10)},${margin.top})`} pointerEvents="none">
+            <rect width={hoverWidth} height={18 + hovered.length * 14} rx={4} fill="var(--color-panel)" stroke="var(--color-rule)" />
             <text x={8} y={13} fontSize={10} fontWeight={600} fill="currentColor">
               order {hover}
               {first.find((h) => h.order === hover)?.label ? ` (${first.find((h) => h.order === hover)?.label})` : ''}
@@ -147,7 +153,7 @@ export function SpectrumChart({ series, title = 'Spectrum', fileName = 'spectrum
             {hovered.map((entry, i) => (
               <text key={entry.name} x={8} y={27 + i * 14} fontSize={10} fill={entry.color}>
                 {series.length > 1 ? `${entry.name}: ` : ''}
-                {entry.bar ? `${formatNumber(entry.bar.amplitude)} ${unit}${fundamental > 0 && i === 0 ? ` · ${formatPercent(entry.bar.amplitude / fundamental)} of order 1` : ''}` : '—'}
+                {entry.bar ? `${formatNumber(entry.bar.amplitude)} ${unit}${fundamental > 0 && i === 0 ? ` · ${formatPercent(entry.bar.amplitude / fundamental)} of order 1` : ''}${i > 0 && entry.bar.label !== undefined && entry.bar.label !== first.find((h) => h.order === hover)?.label ? ` (${entry.bar.label})` : ''}` : '—'}
               </text>
             ))}
           </g>

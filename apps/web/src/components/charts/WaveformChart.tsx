@@ -1,5 +1,5 @@
 import { line, curveStepAfter, scaleLinear, select, zoom, zoomIdentity, type ZoomBehavior, type ZoomTransform } from 'd3';
-import { useEffect, useId, useMemo, useRef, useState } from 'react';
+import { useEffect, useId, useMemo, useRef, useState, type ReactNode } from 'react';
 import { Button } from '../ui/Button';
 import { AxisBottom, AxisLeft, formatRadians } from './axes';
 import { ChartFrame } from './ChartFrame';
@@ -17,6 +17,10 @@ export interface WaveformChartProps {
   /** The switched output (volts). */
   output: StepWaveform;
   outputName: string;
+  /** A smooth voltage drawn over the output on the same axes (a filter's output), volts. */
+  overlay?: { name: string; angles: readonly number[]; values: readonly number[] } | undefined;
+  /** Controls shown before the zoom buttons (a choice of voltage). */
+  controls?: ReactNode;
   width?: number;
 }
 
@@ -33,7 +37,7 @@ function stepPoints({ edges, levels }: StepWaveform): [number, number][] {
 }
 
 /** Reference and carrier above, the switched output below, over a zoomable, pannable angle window. */
-export function WaveformChart({ title = 'Modulator and output', fileName = 'waveform', modulator, output, outputName, width = 760 }: WaveformChartProps) {
+export function WaveformChart({ title = 'Modulator and output', fileName = 'waveform', modulator, output, outputName, overlay, controls, width = 760 }: WaveformChartProps) {
   const svgRef = useRef<SVGSVGElement>(null);
   const zoomRef = useRef<ZoomBehavior<SVGSVGElement, unknown> | null>(null);
   const [transform, setTransform] = useState<ZoomTransform>(zoomIdentity);
@@ -79,7 +83,7 @@ export function WaveformChart({ title = 'Modulator and output', fileName = 'wave
 
   const topY = scaleLinear().domain([-1.6, 1.6]).range([margin.top + topHeight, margin.top]);
   const levels = output.levels.length ? output.levels : [0];
-  const peak = Math.max(1e-9, ...levels.map(Math.abs));
+  const peak = Math.max(1e-9, ...levels.map(Math.abs), ...(overlay?.values ?? []).map(Math.abs));
   const bottomTop = margin.top + topHeight + gap;
   const bottomY = scaleLinear().domain([-peak * 1.15, peak * 1.15]).range([bottomTop + bottomHeight, bottomTop]).nice();
 
@@ -91,7 +95,8 @@ export function WaveformChart({ title = 'Modulator and output', fileName = 'wave
     });
     return points;
   };
-  const topLine = line<[number, number]>().x((d) => x(d[0])).y((d) => topY(d[1]));
+  const topLineOf = (scale: (v: number) => number) => line<[number, number]>().x((d) => x(d[0])).y((d) => scale(d[1]));
+  const topLine = topLineOf(topY);
   const stepLine = line<[number, number]>().x((d) => x(d[0])).y((d) => bottomY(d[1])).curve(curveStepAfter);
   const clipId = `clip-${useId().replace(/:/g, '')}`;
 
@@ -101,6 +106,7 @@ export function WaveformChart({ title = 'Modulator and output', fileName = 'wave
       fileName={fileName}
       controls={
         <>
+          {controls}
           <Button variant="ghost" onClick={() => stepBy(2)} aria-label="Zoom in">
             +
           </Button>
@@ -118,7 +124,7 @@ export function WaveformChart({ title = 'Modulator and output', fileName = 'wave
           </Button>
         </>
       }
-      footer={<p className="mt-1 text-xs text-ink-soft">Scroll or pinch to zoom, drag to pan; window {formatRadians(lo)} to {formatRadians(hi)} of the fundamental period.</p>}
+      footer={<p className="no-print mt-1 text-xs text-ink-soft">Scroll or pinch to zoom, drag to pan; window {formatRadians(lo)} to {formatRadians(hi)} of the fundamental period.</p>}
     >
       <svg ref={svgRef} data-chart="waveform" viewBox={`0 0 ${width} ${height}`} className="w-full cursor-grab touch-none select-none text-ink" role="img" aria-label={`${title}: ${outputName}, ${output.edges.length} switching edges per period`}>
         <defs>
@@ -148,9 +154,11 @@ export function WaveformChart({ title = 'Modulator and output', fileName = 'wave
         <AxisLeft scale={bottomY} x={margin.left} width={innerWidth} label="volts" ticks={4} />
         <g clipPath={`url(#${clipId})`}>
           <path d={stepLine(stepPoints(output)) ?? ''} fill="none" stroke="var(--color-trace-out)" strokeWidth={1.3} />
+          {overlay ? <path data-trace={overlay.name} d={topLineOf(bottomY)(visible(overlay.angles, overlay.values)) ?? ''} fill="none" stroke="var(--color-signal)" strokeWidth={2} /> : null}
         </g>
         <text x={margin.left + 8} y={bottomTop + 12} fontSize={10} fill="currentColor">
           {outputName}
+          {overlay ? <tspan fill="var(--color-signal)"> · {overlay.name}</tspan> : null}
         </text>
         <AxisBottom scale={x} y={bottomTop + bottomHeight} label="angle θ (rad)" format={formatRadians} />
       </svg>

@@ -1,4 +1,4 @@
-import { labelHarmonics } from '@pulsewright/modulation';
+import { designFrequencyRatio, labelHarmonics, type InverterDesign } from '@pulsewright/modulation';
 import { useRef, useState, type FormEvent } from 'react';
 import { SpectrumChart, type SpectrumSeries } from '../../../components/charts/SpectrumChart';
 import { Button } from '../../../components/ui/Button';
@@ -107,7 +107,7 @@ function CaptureAnalysis({ capture }: { capture: CaptureWithSeries }) {
   const study = studies.data?.find((s) => s.id === studyId);
   const spectrum = useCaptureSpectrum(capture.id, windowName);
   const comparison = useCaptureComparison(capture.id, studyId || null, windowName);
-  const mf = Number((study?.modulation as { mf?: unknown } | undefined)?.mf) || 0;
+  const mf = study ? frequencyRatioOf(study.design) : 0;
   const label = (bars: { order: number; amplitude: number }[]) => (mf ? labelHarmonics(bars.map((b) => ({ ...b, phase: 0 })), mf) : bars);
   const series: SpectrumSeries[] = [];
   if (comparison.data) {
@@ -165,4 +165,14 @@ function ComparisonTable({ comparison }: { comparison: CaptureComparison }) {
       </div>
     </Panel>
   );
+}
+
+/** The study's frequency ratio for the carrier-group labels (0 for a stored pattern: no labels). */
+function frequencyRatioOf(design: InverterDesign): number {
+  if (design.carrierFrequency === undefined) return 0;
+  try {
+    return designFrequencyRatio(design);
+  } catch {
+    return 0;
+  }
 }

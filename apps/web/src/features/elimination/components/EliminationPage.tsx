@@ -13,6 +13,9 @@ import { formatNumber, formatPercent } from '../../../lib/format';
 import { roleAtLeast, useMe } from '../../../lib/me';
 import { branchesOf, getEliminationProjects, pointSpectrum, useCreateSheSweep, useSaveSheStudy, useSheJob } from '../api/elimination';
 
+/** The fundamental frequency a saved pattern study starts with, hertz (edited in the study). */
+const SAVED_FUNDAMENTAL_FREQUENCY = 50;
+
 const COLOURS = ['#12263a', '#d9822b', '#2a8c82', '#8e3b6e', '#c2462e', '#5b6fa8', '#7a6a2f', '#3d8a5a'];
 
 /** Selective harmonic elimination: solution branches of the angles against the fundamental. */
@@ -76,16 +79,20 @@ export function EliminationPage() {
         projectId,
         name: studyName.trim(),
         note: `Picked on a solution branch of the harmonic-elimination page (${pickedPoint.angles.length} first-quarter angles).`,
-        modulation: {
-          method: 'selective-harmonic-elimination',
-          kind: pattern.kind,
+        // A pattern has no carrier; the fundamental frequency (for a load or a filter) is set in the study.
+        design: {
           vdc: pattern.vdc,
-          angles: pickedPoint.angles,
-          eliminate: pattern.orders,
-          fundamental: pickedPoint.fundamental,
+          fundamentalFrequency: SAVED_FUNDAMENTAL_FREQUENCY,
+          modulation: {
+            method: 'selective-harmonic-elimination',
+            kind: pattern.kind,
+            angles: pickedPoint.angles,
+            eliminate: pattern.orders,
+            fundamental: pickedPoint.fundamental,
+          },
+          load: null,
+          filter: null,
         },
-        load: null,
-        filter: null,
       },
       { onSuccess: (study) => navigate(paths.study.getHref(study.id)) },
     );

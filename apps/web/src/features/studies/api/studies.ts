@@ -7,7 +7,9 @@ export type Study = Schema<'Study'>;
 export type StudyRevision = Schema<'StudyRevision'>;
 export type StudyCreate = Schema<'StudyCreate'>;
 export type StudyUpdate = Schema<'StudyUpdate'>;
-export type SpectrumResult = Schema<'SpectrumResult'>;
+/** The design report as the service sends it (the library's `analyseDesign`); the live preview's library report is assignable to it. */
+export type StudyReport = Schema<'DesignReport'>;
+export type StudyReportOptions = Schema<'AnalyseDesignOptions'>;
 
 // Projects ----------------------------------------------------------------------------------
 
@@ -79,7 +81,7 @@ export function useUpdateStudy() {
       client.setQueryData(studyQueryOptions(study.id).queryKey, study);
       client.invalidateQueries({ queryKey: ['studies', 'list'] });
       client.invalidateQueries({ queryKey: ['studies', 'revisions', study.id] });
-      client.invalidateQueries({ queryKey: ['studies', 'spectrum', study.id] });
+      client.invalidateQueries({ queryKey: ['studies', 'report', study.id] });
     },
   });
 }
@@ -123,23 +125,12 @@ export function useRestoreStudyRevision() {
   });
 }
 
-export async function getStudySpectrum(id: string, maxOrder = 100): Promise<SpectrumResult> {
-  return unwrap(await api.GET('/api/v1/studies/{id}/spectrum', { params: { path: { id }, query: { maxOrder } } }));
+export async function getStudyReport(id: string, options: StudyReportOptions = {}): Promise<StudyReport> {
+  return unwrap(await api.GET('/api/v1/studies/{id}/report', { params: { path: { id }, query: options } }));
 }
-export const studySpectrumQueryOptions = (id: string, maxOrder = 100) =>
-  queryOptions({ queryKey: ['studies', 'spectrum', id, maxOrder], queryFn: () => getStudySpectrum(id, maxOrder) });
-export function useStudySpectrum(id: string | undefined, maxOrder = 100) {
-  return useQuery({ ...studySpectrumQueryOptions(id ?? '', maxOrder), enabled: Boolean(id) });
-}
-
-// Harmonic limits -----------------------------------------------------------------------------
-
-export type HarmonicLimitRequest = Schema<'HarmonicLimitRequest'>;
-export type HarmonicLimitResult = Schema<'HarmonicLimitResult'>;
-
-export async function checkHarmonicLimits(body: HarmonicLimitRequest): Promise<HarmonicLimitResult> {
-  return unwrap(await api.POST('/api/v1/harmonic-limits/check', { body }));
-}
-export function useCheckHarmonicLimits() {
-  return useMutation({ mutationFn: checkHarmonicLimits });
+/** The report of a study's current revision; the key holds the id, so a save of that study refetches it. */
+export const studyReportQueryOptions = (id: string, options: StudyReportOptions = {}) =>
+  queryOptions({ queryKey: ['studies', 'report', id, options], queryFn: () => getStudyReport(id, options) });
+export function useStudyReport(id: string | undefined, options: StudyReportOptions = {}) {
+  return useQuery({ ...studyReportQueryOptions(id ?? '', options), enabled: Boolean(id) });
 }

@@ -1,16 +1,46 @@
-import { labelHarmonics } from '@pulsewright/modulation';
 import { useQueries } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { SpectrumChart, type SpectrumSeries } from '../../../components/charts/SpectrumChart';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { Empty, ErrorState, Loading, QueryView } from '../../../components/ui/QueryState';
-import { formatNumber, formatPercent } from '../../../lib/format';
-import { studyQueryOptions, studySpectrumQueryOptions, useStudies } from '../api/studies';
+import { formatGain, formatNumber, formatPercent } from '../../../lib/format';
+import { studyQueryOptions, studyReportQueryOptions, useStudies, type StudyReport } from '../api/studies';
+import { limitPointName } from '../model/reportFigures';
 
 const COLOURS = ['#12263a', '#d9822b', '#2a8c82', '#8e3b6e', '#c2462e', '#5b6fa8'];
 
-/** Two or more studies side by side: summary figures and overlaid spectra (computed by the API). */
+/** Which voltage's spectra are overlaid: the bridge's (phase a), or the point of coupling's (the filter's output where there is one). */
+type SpectrumChoice = 'bridge' | 'coupling';
+
+/** A column of the figures table: its heading and the cell of one report. */
+interface Column {
+  heading: string;
+  cell: (report: StudyReport) => string;
+  title?: (report: StudyReport) => string;
+}
+
+const phaseA = (report: StudyReport) => report.currents[0];
+
+/** Every column comes from the same design report of each study. */
+const COLUMNS: Column[] = [
+  { heading: 'Method', cell: (r) => r.methodLabel },
+  { heading: 'Fundamental (V peak)', cell: (r) => formatNumber(r.bridge.fundamental), title: (r) => r.bridge.name },
+  { heading: 'THD, exact', cell: (r) => formatPercent(r.bridge.thd), title: (r) => `whole waveform, ${r.bridge.name}` },
+  { heading: 'WTHD, exact', cell: (r) => formatPercent(r.bridge.wthd, 3), title: (r) => `whole waveform, ${r.bridge.name}` },
+  { heading: 'Output THD', cell: (r) => (r.output ? formatPercent(r.output.thd) : '—'), title: (r) => (r.output ? `${r.output.name}, to order ${r.analysisOrder}` : 'no filter') },
+  { heading: 'Current ripple (A rms)', cell: (r) => (phaseA(r) ? formatNumber(phaseA(r)?.inverter.rippleRms ?? Number.NaN) : '—'), title: (r) => phaseA(r)?.inverter.name ?? 'no load or filter' },
+  { heading: 'Switch current (A rms)', cell: (r) => (phaseA(r) ? formatNumber(phaseA(r)?.inverter.rms ?? Number.NaN) : '—'), title: (r) => phaseA(r)?.inverter.name ?? 'no load or filter' },
+  { heading: 'Load power (W)', cell: (r) => (r.loadPower === null ? '—' : formatNumber(r.loadPower)), title: (r) => (r.phaseCount === 3 ? 'into R, all three phases' : 'into R') },
+  {
+    heading: 'Filter resonance (Hz)',
+    cell: (r) => (r.filter ? formatNumber(r.filter.characteristics.resonanceFrequency) : '—'),
+    title: (r) => (r.filter?.gainAtCarrier != null ? `gain at the carrier ${formatGain(r.filter.gainAtCarrier)}` : 'no filter'),
+  },
+  { heading: 'Limit check', cell: (r) => (r.limitCheck.pass ? 'pass' : 'fail'), title: (r) => `${r.limitCheck.standard.name}, ${limitPointName(r)}` },
+];
+
+/** Two or more studies side by side: a table of their report figures and overlaid labelled spectra (from the service). */
 export function ComparePage() {
   const [params, setParams] = useSearchParams();
   const fromUrl = params.get('ids') ?? '';
@@ -18,6 +48,7 @@ export function ComparePage() {
   // the URL follows (shareable link) and a link to /compare?ids=… sets the state.
   const [ids, setIds] = useState(() => parseIds(fromUrl));
   const [seenUrl, setSeenUrl] = useState(fromUrl);
+  const [choice, setChoice] = useState<SpectrumChoice>('bridge');
   if (fromUrl !== seenUrl) {
     // The URL changed from outside (a link, back/forward): adopt it while rendering.
     setSeenUrl(fromUrl);
@@ -29,24 +60,25 @@ export function ComparePage() {
   }, [ids, fromUrl, setParams]);
   const all = useStudies();
   const studies = useQueries({ queries: ids.map((id) => studyQueryOptions(id)) });
-  const spectra = useQueries({ queries: ids.map((id) => studySpectrumQueryOptions(id, 150)) });
+  const reports = useQueries({ queries: ids.map((id) => studyReportQueryOptions(id)) });
   const toggle = (id: string) => setIds((current) => (current.includes(id) ? current.filter((x) => x !== id) : [...current, id]));
 
-  const pending = [...studies, ...spectra].some((q) => q.isPending);
-  const failed = [...studies, ...spectra].find((q) => q.isError);
-  const series: SpectrumSeries[] = [];
-  ids.forEach((_, i) => {
+  const pending = [...studies, ...reports].some((q) => q.isPending);
+  const failed = [...studies, ...reports].find((q) => q.isError);
+  const rows = ids.flatMap((id, i) => {
     const study = studies[i]?.data;
-    const spectrum = spectra[i]?.data;
-    if (!study || !spectrum) return;
-    const stored = study.modulation as { mf?: unknown; frequencyRatio?: unknown };
-    const mf = Number(stored.mf ?? stored.frequencyRatio) || 1;
-    series.push({ name: study.name, color: COLOURS[i % COLOURS.length] ?? '#12263a', harmonics: labelHarmonics(spectrum.harmonics, mf) });
+    const report = reports[i]?.data;
+    return study && report ? [{ id, study, report, color: COLOURS[i % COLOURS.length] ?? '#12263a' }] : [];
+  });
+  // Each spectrum keeps its own report's labels: carrier groups for a carrier method, orders for a pattern.
+  const series: SpectrumSeries[] = rows.map(({ study, report, color }) => {
+    const voltage = choice === 'coupling' && report.output ? report.output : report.bridge;
+    return { name: `${study.name} (${voltage.name})`, color, harmonics: voltage.spectrum };
   });
 
   return (
     <div>
-      <PageHeader title="Compare studies" subtitle="Pick two or more studies; their predicted spectra are overlaid (computed by the service at each study's current revision)." />
+      <PageHeader title="Compare studies" subtitle="Pick two or more studies: their figures and spectra come from each one's design report, computed by the service at its current revision." />
       <div className="grid gap-5 lg:grid-cols-[280px_minmax(0,1fr)]">
         <Panel title="Studies">
           <QueryView query={all} empty="No studies to compare yet.">
@@ -65,44 +97,62 @@ export function ComparePage() {
           </QueryView>
         </Panel>
         <div className="flex min-w-0 flex-col gap-4">
-          {ids.length < 2 ? <Empty>Select at least two studies to overlay their spectra.</Empty> : null}
-          {ids.length > 0 && pending ? <Loading label="Computing the spectra…" /> : null}
+          {ids.length < 2 ? <Empty>Select at least two studies to compare their figures and spectra.</Empty> : null}
+          {ids.length > 0 && pending ? <Loading label="Analysing the designs…" /> : null}
           {failed ? <ErrorState error={failed.error} onRetry={() => failed.refetch()} /> : null}
-          {series.length ? (
+          {rows.length ? (
             <>
-              <Panel title="Summary">
-                <table className="w-full text-sm [&_td]:px-2 [&_th]:px-2">
-                  <thead className="text-left text-xs text-ink-soft uppercase">
-                    <tr>
-                      <th scope="col">Study</th>
-                      <th scope="col">Method</th>
-                      <th scope="col">Fundamental (V)</th>
-                      <th scope="col">THD</th>
-                      <th scope="col">WTHD</th>
-                    </tr>
-                  </thead>
-                  <tbody className="num">
-                    {ids.map((id, i) => {
-                      const study = studies[i]?.data;
-                      const spectrum = spectra[i]?.data;
-                      if (!study || !spectrum) return null;
-                      return (
-                        <tr key={id} className="border-t border-rule/60">
-                          <td className="font-sans">
-                            <span className="mr-1 inline-block h-2.5 w-2.5 rounded-sm" style={{ background: COLOURS[i % COLOURS.length] }} />
+              <Panel title="Figures">
+                <div className="overflow-x-auto">
+                  <table className="w-full text-sm [&_td]:px-2 [&_td]:py-1 [&_th]:px-2" data-testid="compare-figures">
+                    <thead className="text-left align-bottom text-xs text-ink-soft uppercase">
+                      <tr>
+                        <th scope="col">Study</th>
+                        {COLUMNS.map((c) => (
+                          <th scope="col" key={c.heading}>
+                            {c.heading}
+                          </th>
+                        ))}
+                      </tr>
+                    </thead>
+                    <tbody className="num">
+                      {rows.map(({ id, study, report, color }) => (
+                        <tr key={id} className="border-t border-rule/60" data-study={study.name}>
+                          <th scope="row" className="text-left font-sans font-medium">
+                            <span className="mr-1 inline-block h-2.5 w-2.5 rounded-sm" style={{ background: color }} />
                             {study.name}
-                          </td>
-                          <td className="font-sans">{study.method}</td>
-                          <td>{formatNumber(spectrum.harmonics.find((h) => h.order === 1)?.amplitude ?? 0)}</td>
-                          <td>{formatPercent(spectrum.thd)}</td>
-                          <td>{formatPercent(spectrum.wthd, 3)}</td>
+                          </th>
+                          {COLUMNS.map((c) => (
+                            <td
+                              key={c.heading}
+                              data-column={c.heading}
+                              title={c.title?.(report)}
+                              className={c.heading === 'Method' ? 'font-sans text-xs' : c.heading === 'Limit check' ? `font-sans font-semibold ${report.limitCheck.pass ? 'text-good' : 'text-bad'}` : ''}
+                            >
+                              {c.cell(report)}
+                            </td>
+                          ))}
                         </tr>
-                      );
-                    })}
-                  </tbody>
-                </table>
+                      ))}
+                    </tbody>
+                  </table>
+                </div>
+                <p className="mt-2 text-xs text-ink-soft">
+                  THD and WTHD are exact over the whole waveform of each bridge voltage (per phase, phase to star point, for three-phase designs); currents are of phase a; the limit check reads the voltage at the point of coupling (the filter's output where there is one).
+                </p>
               </Panel>
-              <SpectrumChart series={series} title="Spectra overlaid" fileName="compare-spectra" />
+              <SpectrumChart
+                series={series}
+                title="Spectra overlaid"
+                fileName="compare-spectra"
+                controls={
+                  <select aria-label="Spectra of" className="rounded border border-rule bg-panel px-1.5 py-0.5 text-xs" value={choice} onChange={(e) => setChoice(e.target.value as SpectrumChoice)}>
+                    <option value="bridge">Bridge voltage</option>
+                    <option value="coupling">Point of coupling (filter output)</option>
+                  </select>
+                }
+              />
+              <p className="-mt-2 text-xs text-ink-soft">Labels are those of the first study's report ({rows[0]?.report.frequencyRatio === null ? 'orders of a stored pattern' : 'carrier groups of its mf'}); hover a bar to read every study at that order.</p>
             </>
           ) : null}
         </div>

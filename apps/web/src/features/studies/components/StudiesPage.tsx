@@ -9,20 +9,7 @@ import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { QueryView } from '../../../components/ui/QueryState';
 import { roleAtLeast, useMe } from '../../../lib/me';
 import { useCreateProject, useDuplicateStudy, useProjects, useStudies } from '../api/studies';
-
-function describeModulation(modulation: Record<string, unknown>): string {
-  if (modulation.method === 'selective-harmonic-elimination') {
-    const count = Array.isArray(modulation.angles) ? modulation.angles.length : 0;
-    const orders = Array.isArray(modulation.eliminate) && modulation.eliminate.length ? ` · eliminates ${modulation.eliminate.join(', ')}` : '';
-    return `${String(modulation.kind ?? '?')} · ${count} angle(s) · ${String(modulation.vdc ?? '?')} V${orders}`;
-  }
-  if (modulation.method === 'space-vector') {
-    const index = modulation.ma !== undefined ? `ma ${String(modulation.ma)}` : `m ${String(modulation.m ?? '?')}`;
-    return `${index} · ratio ${String(modulation.frequencyRatio ?? '?')} · ${String(modulation.vdc ?? '?')} V${typeof modulation.sequence === 'string' ? ` · ${modulation.sequence}` : ''}`;
-  }
-  const parts = [modulation.scheme, modulation.zeroSequence, modulation.sequence].filter((v) => typeof v === 'string');
-  return `ma ${String(modulation.ma ?? '?')} · mf ${String(modulation.mf ?? '?')} · ${String(modulation.vdc ?? '?')} V${parts.length ? ` · ${parts.join(', ')}` : ''}`;
-}
+import { describeDesign } from '../model/describeDesign';
 
 /** Projects and their studies: search, create, duplicate, pick several to compare. */
 export function StudiesPage() {
@@ -117,7 +104,7 @@ export function StudiesPage() {
                       <td className="py-1.5 text-xs">
                         {s.method}
                         <br />
-                        <span className="num text-ink-soft">{describeModulation(s.modulation as Record<string, unknown>)}</span>
+                        <span className="num text-ink-soft">{describeDesign(s.design)}</span>
                       </td>
                       <td className="num py-1.5">{s.revision}</td>
                       <td className="py-1.5 text-xs">{formatDate(s.updatedAt)}</td>

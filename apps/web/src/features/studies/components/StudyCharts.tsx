@@ -1,39 +1,142 @@
+import type { StudyReport } from '../api/studies';
+import { useState } from 'react';
+import { FigureCards } from '../../../components/charts/FigureCards';
 import { HarmonicTable } from '../../../components/charts/HarmonicTable';
-import { LoadCurrentChart } from '../../../components/charts/LoadCurrentChart';
+import { PeriodChart, type PeriodTrace } from '../../../components/charts/PeriodChart';
 import { SpectrumChart, type SpectrumSeries } from '../../../components/charts/SpectrumChart';
-import { SummaryPanel } from '../../../components/charts/SummaryPanel';
 import { WaveformChart } from '../../../components/charts/WaveformChart';
-import type { Preview } from '../model/computePreview';
+import { formatNumber } from '../../../lib/format';
+import { reportFigures } from '../model/reportFigures';
 
-/** Every chart of a study preview, in reading order. */
-export function StudyCharts({ preview, fileStem }: { preview: Preview; fileStem: string }) {
-  const series: SpectrumSeries[] = [{ name: preview.outputName, color: 'var(--color-ink)', harmonics: preview.spectrum }];
-  if (preview.filtered) series.push({ name: 'After LC filter', color: 'var(--color-signal)', harmonics: preview.filtered.spectrum });
+const CURRENT_COLOURS = { inverter: 'var(--color-trace-current)', capacitor: 'var(--color-trace-carrier)', load: 'var(--color-ink)' } as const;
+
+const selectClass = 'rounded border border-rule bg-panel px-1.5 py-0.5 text-xs';
+
+/** Every figure and chart of a design report, in reading order; each draws what the report holds. */
+export function StudyCharts({ report, fileStem }: { report: StudyReport; fileStem: string }) {
   return (
     <div className="flex flex-col gap-4">
-      <SummaryPanel
-        outputName={preview.outputName}
-        figures={{
-          fundamental: preview.fundamental,
-          thd: preview.thd,
-          wthd: preview.wthd,
-          rmsCurrent: preview.load?.steady.rmsCurrent,
-          power: preview.load?.steady.power,
-          filteredThd: preview.filtered?.thd,
-        }}
-      />
-      <WaveformChart modulator={preview.modulator ?? undefined} output={preview.output} outputName={preview.outputName} fileName={`${fileStem}-waveform`} />
-      <SpectrumChart series={series} fileName={`${fileStem}-spectrum`} title={`Spectrum to order ${preview.maxOrder}`} />
-      {preview.load ? (
-        <LoadCurrentChart
-          angles={preview.load.series.angles}
-          current={preview.load.series.current}
-          rms={preview.load.steady.rmsCurrent}
-          peakToPeak={preview.load.steady.peakToPeakCurrent}
-          voltageName={preview.load.voltageName}
-        />
-      ) : null}
-      <HarmonicTable harmonics={preview.spectrum} fileName={`${fileStem}-harmonics`} />
+      <FigureCards figures={reportFigures(report)} label="Summary" />
+      <VoltageChart report={report} fileStem={fileStem} />
+      <ReportSpectrum report={report} fileStem={fileStem} />
+      {report.currents.length ? <CurrentsChart report={report} fileStem={fileStem} /> : null}
+      <HarmonicTable harmonics={report.bridge.spectrum} title={`Harmonics of the ${report.bridge.name}`} fileName={`${fileStem}-harmonics`} />
+      {report.output ? <HarmonicTable harmonics={report.output.spectrum} title={`Harmonics of the ${report.output.name}`} fileName={`${fileStem}-output-harmonics`} /> : null}
     </div>
+  );
+}
+
+/** The bridge's voltages by the report's names, with the filter's output over phase a. */
+function VoltageChart({ report, fileStem }: { report: StudyReport; fileStem: string }) {
+  const [chosen, setChosen] = useState(0);
+  const voltage = report.voltages[chosen] ?? report.voltages[0];
+  if (!voltage) return null;
+  const overlay = report.output && voltage.name === report.bridge.name ? { name: report.output.name, angles: report.output.series.angles, values: report.output.series.values } : undefined;
+  return (
+    <WaveformChart
+      title="Bridge voltage"
+      output={voltage.waveform}
+      outputName={voltage.name}
+      overlay={overlay}
+      fileName={`${fileStem}-voltage`}
+      controls={
+        report.voltages.length > 1 ? (
+          <select aria-label="Voltage shown" className={selectClass} value={chosen} onChange={(e) => setChosen(Number(e.target.value))}>
+            {report.voltages.map((v, i) => (
+              <option key={v.name} value={i}>
+                {v.name}
+              </option>
+            ))}
+          </select>
+        ) : null
+      }
+    />
+  );
+}
+
+/** The labelled spectrum of the bridge voltage (phase, or line to line), with the filter's output beside it. */
+function ReportSpectrum({ report, fileStem }: { report: StudyReport; fileStem: string }) {
+  const [line, setLine] = useState(false);
+  const shown = line && report.lineToLine ? report.lineToLine : report.bridge;
+  const series: SpectrumSeries[] = [{ name: shown.name, color: 'var(--color-ink)', harmonics: shown.spectrum }];
+  if (report.output && shown === report.bridge) series.push({ name: report.output.name, color: 'var(--color-signal)', harmonics: report.output.spectrum });
+  return (
+    <SpectrumChart
+      series={series}
+      fileName={`${fileStem}-spectrum`}
+      title={`Spectrum to order ${report.maxOrder}`}
+      controls={
+        report.lineToLine ? (
+          <select aria-label="Spectrum of" className={selectClass} value={line ? 'line' : 'phase'} onChange={(e) => setLine(e.target.value === 'line')}>
+            <option value="phase">{report.bridge.name}</option>
+            <option value="line">{report.lineToLine.name}</option>
+          </select>
+        ) : null
+      }
+    />
+  );
+}
+
+function currentTraces(phase: StudyReport['currents'][number]): PeriodTrace[] {
+  const traces: PeriodTrace[] = [{ name: phase.inverter.name, color: CURRENT_COLOURS.inverter, ...phase.inverter.series }];
+  if (phase.capacitor) traces.push({ name: phase.capacitor.name, color: CURRENT_COLOURS.capacitor, ...phase.capacitor.series });
+  // Without a filter the load's current is the switch current: drawn once.
+  if (phase.load && phase.capacitor) traces.push({ name: phase.load.name, color: CURRENT_COLOURS.load, dashed: true, ...phase.load.series });
+  return traces;
+}
+
+/** The currents of one phase over a period: switch, capacitor and load, with their RMS and ripple. */
+function CurrentsChart({ report, fileStem }: { report: StudyReport; fileStem: string }) {
+  const [index, setIndex] = useState(0);
+  const phase = report.currents[index] ?? report.currents[0];
+  if (!phase) return null;
+  const rows = [phase.inverter, phase.capacitor, phase.capacitor ? phase.load : null].filter((c) => c !== null);
+  return (
+    <PeriodChart
+      title={report.phaseCount === 3 ? `Currents of phase ${phase.phase}` : 'Currents'}
+      fileName={`${fileStem}-currents`}
+      unit="amperes"
+      traces={currentTraces(phase)}
+      controls={
+        report.currents.length > 1 ? (
+          <select aria-label="Phase" className={selectClass} value={index} onChange={(e) => setIndex(Number(e.target.value))}>
+            {report.currents.map((c, i) => (
+              <option key={c.phase} value={i}>
+                phase {c.phase}
+              </option>
+            ))}
+          </select>
+        ) : null
+      }
+      footer={
+        <>
+        {phase.capacitor ? null : <p className="mt-1 text-xs text-ink-soft">Without a filter the load carries the switch current.</p>}
+        <table className="mt-2 w-full text-xs" aria-label="Current figures">
+          <thead className="text-left text-ink-soft">
+            <tr>
+              <th className="font-medium">Current</th>
+              <th className="font-medium">RMS (A)</th>
+              <th className="font-medium">Peak (A)</th>
+              <th className="font-medium">Fundamental (A peak)</th>
+              <th className="font-medium">Ripple RMS (A)</th>
+              <th className="font-medium">Ripple peak-to-peak (A)</th>
+            </tr>
+          </thead>
+          <tbody className="num">
+            {rows.map((c) => (
+              <tr key={c.name} className="border-t border-rule/60">
+                <td className="font-sans">{c.name}</td>
+                <td>{formatNumber(c.rms)}</td>
+                <td>{formatNumber(c.peak)}</td>
+                <td>{formatNumber(c.fundamental)}</td>
+                <td>{formatNumber(c.rippleRms)}</td>
+                <td>{formatNumber(c.ripplePeakToPeak)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+        </>
+      }
+    />
   );
 }

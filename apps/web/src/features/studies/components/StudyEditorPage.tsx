@@ -1,4 +1,5 @@
-import { useCallback, useState } from 'react';
+import type { AnalyseDesignOptions } from '@pulsewright/modulation';
+import { useCallback, useMemo, useState } from 'react';
 import { Link, useLocation, useNavigate, useParams, useSearchParams } from 'react-router-dom';
 import { paths } from '../../../config/paths';
 import { errorMessage, fieldErrorOf } from '../../../lib/api';
@@ -7,15 +8,16 @@ import { Button } from '../../../components/ui/Button';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState, Loading } from '../../../components/ui/QueryState';
 import { roleAtLeast, useMe } from '../../../lib/me';
-import { useCreateStudy, useDuplicateStudy, useProjects, useStudy, useStudySpectrum, useUpdateStudy, type Study } from '../api/studies';
-import { defaultDraft, draftFromStudy, draftRangeErrors, modulationOf, studyContentOf, type StudyDraft } from '../model/studyDraft';
+import { useCreateStudy, useDuplicateStudy, useProjects, useStudy, useStudyReport, useUpdateStudy, type Study, type StudyCreate } from '../api/studies';
+import { defaultDraft, designOf, draftFormErrors, draftOf, type StudyDraft } from '../model/studyDraft';
 import { HarmonicLimitsPanel } from './HarmonicLimitsPanel';
+import { ReportCautions } from './ReportCautions';
 import { RevisionHistory } from './RevisionHistory';
 import { StudyCharts } from './StudyCharts';
 import { StudyForm } from './StudyForm';
 import { usePreview } from './usePreview';
 
-/** The study editor: parameters on the left, the library's live preview on the right. */
+/** The study editor: the design on the left, the library's live report on the right. */
 export function StudyEditorPage() {
   const { studyId } = useParams();
   const study = useStudy(studyId);
@@ -23,6 +25,9 @@ export function StudyEditorPage() {
   if (studyId && study.isError) return <ErrorState error={study.error} onRetry={() => study.refetch()} />;
   return <StudyEditor key={`${studyId ?? 'new'}-${study.data?.revision ?? 0}`} study={study.data} />;
 }
+
+/** Fields a save's field errors can land on (the rest are shown above the form). */
+const FORM_PATHS = ['name', 'projectId', 'note', 'design.vdc', 'design.fundamentalFrequency', 'design.carrierFrequency', 'design.modulation', 'design.load', 'design.filter'];
 
 function StudyEditor({ study }: { study: Study | undefined }) {
   const [params] = useSearchParams();
@@ -33,7 +38,7 @@ function StudyEditor({ study }: { study: Study | undefined }) {
   const me = useMe();
   const projects = useProjects();
   const canEdit = roleAtLeast(me.data?.role, 'engineer');
-  const [draft, setDraft] = useState<StudyDraft>(() => (study ? draftFromStudy(study) : defaultDraft(params.get('projectId') ?? '')));
+  const [draft, setDraft] = useState<StudyDraft>(() => (study ? draftOf(study.design, study) : defaultDraft(params.get('projectId') ?? '')));
   const [dirty, setDirty] = useState(false);
   const onChange = useCallback((patch: Partial<StudyDraft>) => {
     setDraft((current) => ({ ...current, ...patch }));
@@ -42,24 +47,28 @@ function StudyEditor({ study }: { study: Study | undefined }) {
   // Pick the first project for a new study once the list arrives.
   if (!study && !draft.projectId && projects.data?.[0]) setDraft((d) => ({ ...d, projectId: projects.data[0]?.id ?? '' }));
 
-  const outcome = usePreview(draft);
+  const design = useMemo(() => designOf(draft), [draft]);
+  const [busVoltage, setBusVoltage] = useState<number | undefined>(undefined);
+  const options = useMemo<AnalyseDesignOptions>(() => (busVoltage === undefined ? {} : { busVoltage }), [busVoltage]);
+  const preview = usePreview(design, options);
+  const saved = useStudyReport(study?.id);
   const create = useCreateStudy();
   const update = useUpdateStudy();
   const duplicate = useDuplicateStudy();
   const saveError = study ? update.error : create.error;
-  const [rangeErrors, setRangeErrors] = useState<{ field: string; message: string }[]>([]);
-  const serverSpectrum = useStudySpectrum(study?.id, outcome.preview?.maxOrder ?? 100);
+  const formErrors = draftFormErrors(draft);
+  // The bus voltage is an option of the check, not part of the design: its refusal does not stop a save.
+  const designErrors = (preview?.errors ?? []).filter((e) => e.field !== 'busVoltage');
+  const blocked = !preview || preview.stale || designErrors.length > 0 || formErrors.length > 0;
 
   const save = () => {
-    const problems = draftRangeErrors(draft);
-    setRangeErrors(problems);
-    if (problems.length) return;
-    const content = studyContentOf(draft);
+    if (blocked) return;
+    const content: StudyCreate = { projectId: draft.projectId, name: draft.name, note: draft.note, design };
     if (study) {
       const { projectId: _projectId, ...rest } = content;
       update.mutate(
         { id: study.id, body: { ...rest, baseRevision: study.revision } },
-        { onSuccess: (saved) => navigate(location.pathname, { replace: true, state: { savedRevision: saved.revision } }) },
+        { onSuccess: (next) => navigate(location.pathname, { replace: true, state: { savedRevision: next.revision } }) },
       );
     } else {
       create.mutate(content, { onSuccess: (created) => navigate(paths.study.getHref(created.id), { replace: true, state: { savedRevision: created.revision } }) });
@@ -67,7 +76,9 @@ function StudyEditor({ study }: { study: Study | undefined }) {
   };
 
   const saving = create.isPending || update.isPending;
-  const generalSaveError = saveError && !['name', 'projectId', 'ma', 'm', 'mf', 'frequencyRatio', 'sequence', 'vdc', 'r', 'l', 'frequency', 'emf', 'method', 'scheme', 'sampling'].some((f) => fieldErrorOf(saveError, f));
+  const generalSaveError = saveError && !FORM_PATHS.some((f) => fieldErrorOf(saveError, f));
+  const report = preview?.report ?? null;
+  const fileStem = draft.name.replace(/\W+/g, '-').toLowerCase() || 'study';
 
   return (
     <div>
@@ -91,7 +102,12 @@ function StudyEditor({ study }: { study: Study | undefined }) {
                 ) : null}
               </>
             ) : null}
-            <Button onClick={save} busy={saving} disabled={!canEdit} title={canEdit ? undefined : 'Viewers can read and compute but not save'}>
+            <Button
+              onClick={save}
+              busy={saving}
+              disabled={!canEdit || blocked}
+              title={!canEdit ? 'Viewers can read and compute but not save' : blocked ? 'Correct the marked fields to save' : undefined}
+            >
               {study ? 'Save revision' : 'Create study'}
             </Button>
           </>
@@ -99,20 +115,18 @@ function StudyEditor({ study }: { study: Study | undefined }) {
       />
       {!canEdit && me.data ? (
         <p className="mb-4 rounded-md border border-rule bg-panel px-3 py-2 text-sm" role="note" data-testid="read-only">
-          You have the <strong>{me.data.role}</strong> role: you can explore the preview, but saving needs an engineer.
+          You have the <strong>{me.data.role}</strong> role: you can change the values to explore the preview, but saving needs an engineer.
         </p>
       ) : null}
       {generalSaveError ? <div className="mb-3"><ErrorState error={saveError} /></div> : null}
-      {rangeErrors.length ? (
-        <ul role="alert" className="mb-3 list-disc rounded-md bg-bad-soft py-2 pl-8 text-sm text-bad">
-          {rangeErrors.map((e) => (
-            <li key={e.field}>{e.message}</li>
-          ))}
-        </ul>
+      {canEdit && (designErrors.length > 0 || formErrors.length > 0) ? (
+        <p role="status" className="mb-3 text-sm text-bad" data-testid="save-blocked">
+          {study ? 'Save revision' : 'Create study'} waits until the marked fields are corrected.
+        </p>
       ) : null}
       {savedRevision && savedRevision === study?.revision && !dirty ? <p role="status" className="mb-3 text-sm text-good">Saved as revision {savedRevision}.</p> : null}
 
-      <div className="grid gap-5 lg:grid-cols-[340px_minmax(0,1fr)]">
+      <div className="grid gap-5 lg:grid-cols-[360px_minmax(0,1fr)]">
         <div className="flex flex-col gap-4">
           <Panel>
             <StudyForm
@@ -121,22 +135,30 @@ function StudyEditor({ study }: { study: Study | undefined }) {
               readOnly={!canEdit && Boolean(me.data)}
               projects={projects.data ?? []}
               saveError={saveError}
-              previewErrors={[...outcome.errors, ...rangeErrors]}
+              previewErrors={[...designErrors, ...(dirty ? formErrors : [])]}
+              filterResonance={report?.filter?.characteristics.resonanceFrequency}
             />
           </Panel>
-          <HarmonicLimitsPanel modulation={modulationOf(draft)} />
+          {report ? (
+            <HarmonicLimitsPanel report={report} busVoltage={busVoltage} onBusVoltage={setBusVoltage} busVoltageError={preview?.errors.find((e) => e.field === 'busVoltage')?.message} />
+          ) : null}
           {study ? <RevisionHistory study={study} canEdit={canEdit} /> : null}
         </div>
         <div className="flex min-w-0 flex-col gap-4" aria-live="off">
           <p className="text-xs text-ink-soft" data-testid="preview-time">
-            Live preview by the library in this browser: {formatNumber(outcome.milliseconds, 3)} ms.
-            {study && serverSpectrum.data ? ` Saved revision on the server: THD ${formatPercent(serverSpectrum.data.thd)}.` : ''}
-            {study && serverSpectrum.isError ? ` Server spectrum unavailable: ${errorMessage(serverSpectrum.error)}` : ''}
+            {preview ? `Live report by the library in this browser: ${formatNumber(preview.milliseconds, 3)} ms${preview.stale ? ' (updating…)' : ''}.` : 'Computing the live report…'}
+            {study && saved.data ? ` Saved revision on the server: THD ${formatPercent(saved.data.bridge.thd)} (exact, ${saved.data.bridge.name}).` : ''}
+            {study && saved.isError ? ` Server report unavailable: ${errorMessage(saved.error)}` : ''}
           </p>
-          {outcome.preview ? (
-            <StudyCharts preview={outcome.preview} fileStem={draft.name.replace(/\W+/g, '-').toLowerCase() || 'study'} />
+          {report ? (
+            <>
+              <ReportCautions cautions={report.cautions} except={[report.limitCheck.caution]} />
+              <StudyCharts report={report} fileStem={fileStem} />
+            </>
+          ) : preview ? (
+            <ErrorState error={new Error(preview.errors.map((e) => e.message).join('; ') || 'No preview')} />
           ) : (
-            <ErrorState error={new Error(outcome.errors.map((e) => e.message).join('; ') || 'No preview')} />
+            <Loading label="Computing the live report…" />
           )}
         </div>
       </div>

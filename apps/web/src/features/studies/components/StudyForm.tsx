@@ -1,9 +1,23 @@
+import { DESIGN_BOUNDS, designFrequencyRatio, MAX_DESIGN_FREQUENCY_RATIO, type DesignBoundsField, type ModulationMethod } from '@pulsewright/modulation';
 import { fieldErrorOf } from '../../../lib/api';
-import { SelectField, SliderField, TextField } from '../../../components/ui/Field';
+import { NumberField, SelectField, SliderField, TextField } from '../../../components/ui/Field';
 import type { Project } from '../api/studies';
-import type { PreviewFieldError } from '../model/computePreview';
+import type { PreviewFieldError } from '../model/designPreview';
 import { formatNumber } from '../../../lib/format';
-import { METHOD_OPTIONS, RANGES, SHE_METHOD_OPTION, SLIDER_LIMITS, ZERO_SEQUENCE_OPTIONS, type ShePattern, type StudyDraft } from '../model/studyDraft';
+import {
+  CLAMPING_OPTIONS,
+  DAMPING_OPTIONS,
+  labelOf,
+  METHOD_OPTIONS,
+  OVERMODULATION_OPTIONS,
+  PATTERN_KIND_OPTIONS,
+  SAMPLING_OPTIONS,
+  SCHEME_OPTIONS,
+  SEQUENCE_OPTIONS,
+  SPACE_VECTOR_SAMPLING_OPTIONS,
+  ZERO_SEQUENCE_OPTIONS,
+} from '../model/designOptions';
+import { isCarrierMethod, isPatternMethod, type StoredPattern, type StudyDraft } from '../model/studyDraft';
 
 export interface StudyFormProps {
   draft: StudyDraft;
@@ -12,26 +26,56 @@ export interface StudyFormProps {
   projects: readonly Project[];
   /** The server's answer to the last save (problem+json field errors). */
   saveError: unknown;
-  /** What the library refused in the live preview. */
+  /** What the library refused in the live preview, by path in the design. */
   previewErrors: readonly PreviewFieldError[];
+  /** The loaded filter's resonance from the live report, hertz (shown beside the filter). */
+  filterResonance?: number | undefined;
 }
 
-const rangeHint = (r: { min: number; max: number }, unit = '') => `${r.min} to ${r.max}${unit ? ` ${unit}` : ''}`;
+/** Sliders cover the useful part of a range; the number box beside takes the whole range. */
+const SLIDERS = { vdc: { min: 10, max: 1000 }, ma: { min: 0.02, max: 1.5 }, mf: { min: 1, max: 201 } } as const;
 
-/** The study's parameters with units and ranges; errors from the server and the library beside each field. */
-export function StudyForm({ draft, onChange, readOnly, projects, saveError, previewErrors }: StudyFormProps) {
-  const error = (field: string, ...serverPaths: string[]) =>
-    [field, ...serverPaths].map((p) => fieldErrorOf(saveError, p)).find(Boolean) ?? previewErrors.find((e) => e.field === field)?.message;
+const RADIANS_TO_DEGREES = 180 / Math.PI;
+
+/** The allowed range of a design field in the unit the form shows (the library's DESIGN_BOUNDS). */
+function boundsHint(path: DesignBoundsField, scale = 1, unit = ''): string {
+  const bounds: { min: number; max: number; minExclusive?: boolean } = DESIGN_BOUNDS[path];
+  const low = `${bounds.minExclusive ? 'above' : 'from'} ${formatNumber(bounds.min * scale, 6)}`;
+  return `${low} to ${formatNumber(bounds.max * scale, 6)}${unit ? ` ${unit}` : ''}`;
+}
+
+/** The study's design with units and the library's ranges; errors from the server and the library beside each field. */
+export function StudyForm({ draft, onChange, readOnly, projects, saveError, previewErrors, filterResonance }: StudyFormProps) {
+  const claimed = new Set<string>();
+  const matches = (field: string, path: string) => field === path || field.startsWith(`${path}.`) || field.startsWith(`${path}[`);
+  /** The error of a field by its design path(s): the server's answer to a save first, then the library's. */
+  const error = (...paths: string[]) => {
+    for (const e of previewErrors) if (paths.some((p) => matches(e.field, p))) claimed.add(e.field);
+    return paths.map((p) => fieldErrorOf(saveError, p)).find(Boolean) ?? previewErrors.find((e) => paths.some((p) => matches(e.field, p)))?.message;
+  };
   const set = <K extends keyof StudyDraft>(key: K) => (value: StudyDraft[K]) => onChange({ [key]: value } as Partial<StudyDraft>);
-  const isPattern = draft.method === 'selective-harmonic-elimination';
-  const isCarrier = draft.method === 'sine-triangle' || draft.method === 'three-phase';
-  // A stored pattern keeps its method in the list; it cannot be chosen for a new study.
-  const methodOptions = isPattern || draft.she ? [...METHOD_OPTIONS, SHE_METHOD_OPTION] : METHOD_OPTIONS;
+  const { method } = draft;
+  const pattern = isPatternMethod(method);
+  const threePhase = method === 'three-phase' || method === 'space-vector';
+  // A pattern method is listed for a study that holds such a pattern; new ones come from the elimination page.
+  const methodOptions = METHOD_OPTIONS.map((o) =>
+    isPatternMethod(o.value) && draft.pattern?.method !== o.value ? { ...o, label: `${o.label} (saved from the elimination page)`, disabled: true } : o,
+  );
+  let ratio = Number.NaN;
+  try {
+    ratio = designFrequencyRatio(draft);
+  } catch {
+    // The library's message goes on the carrier field through the preview's errors.
+  }
+  const setRatio = (mf: number) => onChange({ carrierFrequency: Math.round(mf) * draft.fundamentalFrequency });
+  // Synchronous carrier PWM: a new fundamental keeps the frequency ratio, so the carrier follows.
+  const setFundamental = (f: number) =>
+    onChange(isCarrierMethod(method) && Number.isFinite(ratio) && Number.isFinite(f) ? { fundamentalFrequency: f, carrierFrequency: ratio * f } : { fundamentalFrequency: f });
 
-  return (
-    <form className="flex flex-col gap-4" onSubmit={(e) => e.preventDefault()} aria-label="Study parameters">
+  const body = (
+    <>
       <fieldset disabled={readOnly} className="flex flex-col gap-3">
-        <legend className="mb-1 text-sm font-semibold uppercase tracking-wide">Study</legend>
+        <legend className="mb-1 text-sm font-semibold tracking-wide uppercase">Study</legend>
         <TextField label="Name" value={draft.name} onChange={(e) => set('name')(e.target.value)} error={error('name')} maxLength={120} required />
         <SelectField
           label="Project"
@@ -44,104 +88,133 @@ export function StudyForm({ draft, onChange, readOnly, projects, saveError, prev
       </fieldset>
 
       <fieldset disabled={readOnly} className="flex flex-col gap-3">
-        <legend className="mb-1 text-sm font-semibold uppercase tracking-wide">Modulation</legend>
-        <SelectField label="Method" value={draft.method} onChange={(e) => set('method')(e.target.value as StudyDraft['method'])} error={error('method')} options={methodOptions} />
-        {isPattern ? <PatternSummary pattern={draft.she} vdc={draft.vdc} error={error('angles', 'modulation.angles', 'modulation.eliminate', 'modulation.kind')} /> : null}
-        {draft.method === 'sine-triangle' ? (
-          <SelectField
-            label="Bridge scheme"
-            value={draft.scheme}
-            onChange={(e) => set('scheme')(e.target.value as StudyDraft['scheme'])}
-            error={error('scheme')}
-            options={[
-              { value: 'bipolar', label: 'Bipolar (two-level, ±Vdc)' },
-              { value: 'unipolar', label: 'Unipolar (three-level, +Vdc/0/−Vdc)' },
-            ]}
-          />
-        ) : null}
-        {draft.method === 'three-phase' ? (
-          <SelectField label="Zero sequence" value={draft.zeroSequence} onChange={(e) => set('zeroSequence')(e.target.value as StudyDraft['zeroSequence'])} error={error('zeroSequence')} options={ZERO_SEQUENCE_OPTIONS} />
-        ) : null}
-        {draft.method === 'space-vector' ? (
-          <SelectField
-            label="Switching sequence"
-            value={draft.sequence}
-            onChange={(e) => set('sequence')(e.target.value as StudyDraft['sequence'])}
-            error={error('sequence')}
-            options={[
-              { value: 'seven-segment', label: 'Seven segments (continuous)' },
-              { value: 'five-segment', label: 'Five segments (clamped)' },
-            ]}
-          />
-        ) : null}
-        {isCarrier ? (
-          <SelectField
-            label="Sampling"
-            value={draft.sampling}
-            onChange={(e) => set('sampling')(e.target.value as StudyDraft['sampling'])}
-            error={error('sampling')}
-            options={[
-              { value: 'natural', label: 'Natural (exact intersections)' },
-              { value: 'regular-symmetric', label: 'Regular, symmetric' },
-              { value: 'regular-asymmetric', label: 'Regular, asymmetric' },
-            ]}
-          />
-        ) : null}
-        {isPattern ? null : (
+        <legend className="mb-1 text-sm font-semibold tracking-wide uppercase">Modulation</legend>
+        <SelectField label="Method" value={method} onChange={(e) => set('method')(e.target.value as ModulationMethod)} error={error('modulation.method', 'method')} options={methodOptions} />
+        {pattern ? <PatternSummary pattern={draft.pattern} vdc={draft.vdc} error={error('modulation.angles', 'modulation.eliminate', 'modulation.kind', 'modulation.fundamental', 'modulation')} /> : null}
+        {method === 'sine-triangle' ? <SelectField label="Bridge scheme" value={draft.scheme} onChange={(e) => set('scheme')(e.target.value as StudyDraft['scheme'])} error={error('modulation.scheme')} options={SCHEME_OPTIONS} /> : null}
+        {method === 'three-phase' ? <SelectField label="Zero sequence" value={draft.zeroSequence} onChange={(e) => set('zeroSequence')(e.target.value as StudyDraft['zeroSequence'])} error={error('modulation.zeroSequence')} options={ZERO_SEQUENCE_OPTIONS} /> : null}
+        {method === 'sine-triangle' || method === 'three-phase' ? <SelectField label="Sampling" value={draft.sampling} onChange={(e) => set('sampling')(e.target.value as StudyDraft['sampling'])} error={error('modulation.sampling')} options={SAMPLING_OPTIONS} /> : null}
+        {method === 'space-vector' ? (
           <>
-            <SliderField label="DC bus" unit="V" value={draft.vdc} min={SLIDER_LIMITS.vdc.min} max={SLIDER_LIMITS.vdc.max} step={1} hint={rangeHint(RANGES.vdc, 'V')} error={error('vdc')} onChange={set('vdc')} />
-            <SliderField
-              label="Modulation index ma"
-              value={draft.ma}
-              min={SLIDER_LIMITS.ma.min}
-              max={draft.method === 'space-vector' ? Math.min(SLIDER_LIMITS.ma.max, 1.27) : SLIDER_LIMITS.ma.max}
-              step={0.01}
-              hint={draft.method === 'space-vector' ? 'ma = 2m/√3, above 0 up to 4/π ≈ 1.273 (six-step); above 2/√3 ≈ 1.155 is overmodulation' : 'above 0, up to 4; above 1 is overmodulation'}
-              error={error('ma', 'm', 'modulation.ma', 'modulation.m')}
-              onChange={set('ma')}
-            />
-            <SliderField label="Frequency ratio mf" value={draft.mf} min={SLIDER_LIMITS.mf.min} max={SLIDER_LIMITS.mf.max} step={1} hint={draft.method === 'space-vector' ? 'switching periods per fundamental period, whole number, 1 to 1000' : 'whole number, 1 to 1000; odd values give quarter-wave symmetry'} error={error('mf', 'frequencyRatio', 'modulation.frequencyRatio')} onChange={(v) => set('mf')(Math.round(v))} />
+            <SelectField label="Switching sequence" value={draft.sequence} onChange={(e) => set('sequence')(e.target.value as StudyDraft['sequence'])} error={error('modulation.sequence')} options={SEQUENCE_OPTIONS} />
+            {draft.sequence === 'five-segment' ? (
+              <SelectField label="Zero-vector clamping" value={draft.clamping} onChange={(e) => set('clamping')(e.target.value as StudyDraft['clamping'])} error={error('modulation.clamping')} options={CLAMPING_OPTIONS} />
+            ) : (
+              <NumberField label="Zero split" hint={`share of the zero time on 000, ${boundsHint('modulation.zeroSplit')}; 0.5 is centred`} value={draft.zeroSplit} error={error('modulation.zeroSplit')} onChange={set('zeroSplit')} />
+            )}
+            <SelectField label="Sampling" value={draft.spaceVectorSampling} onChange={(e) => set('spaceVectorSampling')(e.target.value as StudyDraft['spaceVectorSampling'])} error={error('modulation.sampling')} options={SPACE_VECTOR_SAMPLING_OPTIONS} />
+            <SelectField label="Overmodulation" value={draft.overmodulation} onChange={(e) => set('overmodulation')(e.target.value as StudyDraft['overmodulation'])} error={error('modulation.overmodulation')} options={OVERMODULATION_OPTIONS} />
           </>
+        ) : null}
+        {pattern ? null : (
+          <SliderField label="DC bus" unit="V" value={draft.vdc} min={SLIDERS.vdc.min} max={SLIDERS.vdc.max} step={1} hint={boundsHint('vdc', 1, 'V')} error={error('vdc')} onChange={set('vdc')} />
         )}
+        {pattern ? null : (
+          <SliderField
+            label="Modulation index ma"
+            value={draft.ma}
+            min={SLIDERS.ma.min}
+            max={SLIDERS.ma.max}
+            step={0.01}
+            hint={method === 'space-vector' ? `ma = 2m/√3 with m ${boundsHint('modulation.m')} (six-step); m above 1 is overmodulation` : `${boundsHint('modulation.ma')}; above 1 is overmodulation`}
+            error={error('modulation.ma', 'modulation.m')}
+            onChange={set('ma')}
+          />
+        )}
+        <NumberField label="Fundamental frequency" unit="Hz" value={draft.fundamentalFrequency} hint={boundsHint('fundamentalFrequency', 1, 'Hz')} error={error('fundamentalFrequency')} onChange={setFundamental} />
+        {isCarrierMethod(method) ? (
+          <>
+            <SliderField
+              label="Frequency ratio mf"
+              value={Number.isFinite(ratio) ? ratio : draft.carrierFrequency / draft.fundamentalFrequency}
+              min={SLIDERS.mf.min}
+              max={SLIDERS.mf.max}
+              step={1}
+              hint={`carrier ÷ fundamental, a whole number 1 to ${MAX_DESIGN_FREQUENCY_RATIO}${method === 'space-vector' ? ' (switching periods per fundamental period)' : '; odd values give quarter-wave symmetry'}`}
+              onChange={setRatio}
+            />
+            <NumberField
+              label="Carrier frequency"
+              unit="Hz"
+              value={draft.carrierFrequency}
+              hint={Number.isFinite(ratio) ? `mf = ${ratio} · a whole multiple of the fundamental` : 'a whole multiple of the fundamental'}
+              error={error('carrierFrequency')}
+              onChange={set('carrierFrequency')}
+            />
+            {method !== 'space-vector' ? (
+              <NumberField label="Carrier phase" unit="°" value={draft.carrierPhase} scale={RADIANS_TO_DEGREES} hint="0 puts a carrier valley at the reference's positive peak" error={error('modulation.carrierPhase')} onChange={set('carrierPhase')} />
+            ) : null}
+          </>
+        ) : null}
       </fieldset>
 
       <fieldset disabled={readOnly} className="flex flex-col gap-3">
-        <legend className="mb-1 text-sm font-semibold uppercase tracking-wide">Load (series R-L)</legend>
-        <div className="grid grid-cols-2 gap-3">
-          <NumberField label="Fundamental" unit="Hz" value={draft.frequency} range={RANGES.frequency} error={error('frequency', 'load.frequency')} onChange={set('frequency')} />
-          <NumberField label="Resistance R" unit="Ω" value={draft.r} range={RANGES.r} error={error('r', 'load.r')} onChange={set('r')} />
-          <NumberField label="Inductance L" unit="mH" value={draft.l * 1e3} range={RANGES.lMilli} error={error('l', 'load.l')} onChange={(v) => set('l')(v / 1e3)} />
-          <NumberField label="Back-EMF" unit="V peak" value={draft.emf} range={RANGES.emf} error={error('emf', 'load.emf.amplitude', 'amplitude')} onChange={set('emf')} />
-          <NumberField label="Back-EMF phase" unit="°" value={(draft.emfPhase * 180) / Math.PI} range={RANGES.emfPhaseDegrees} error={error('emfPhase', 'load.emf.phase', 'phase')} onChange={(v) => set('emfPhase')((v * Math.PI) / 180)} />
-        </div>
+        <legend className="mb-1 text-sm font-semibold tracking-wide uppercase">{threePhase ? 'Load per phase (star, series R-L)' : 'Load (series R-L)'}</legend>
+        <label className="flex items-center gap-2 text-sm">
+          <input type="checkbox" checked={draft.loadOn} onChange={(e) => set('loadOn')(e.target.checked)} className="accent-signal" />
+          Include a load
+        </label>
+        {draft.loadOn ? (
+          <div className="grid grid-cols-2 gap-3">
+            <NumberField label="Resistance R" unit="Ω" value={draft.loadR} hint={boundsHint('load.r', 1, 'Ω')} error={error('load.r')} onChange={set('loadR')} />
+            <NumberField label="Inductance L" unit="mH" value={draft.loadL} scale={1e3} hint={boundsHint('load.l', 1e3, 'mH')} error={error('load.l')} onChange={set('loadL')} />
+            <NumberField label="Back-EMF" unit="V peak" value={draft.emf} hint={boundsHint('load.emf.amplitude', 1, 'V')} error={error('load.emf.amplitude', 'load.emf')} onChange={set('emf')} />
+            <NumberField label="Back-EMF phase" unit="°" value={draft.emfPhase} scale={RADIANS_TO_DEGREES} hint={boundsHint('load.emf.phase', RADIANS_TO_DEGREES, '°')} error={error('load.emf.phase')} onChange={set('emfPhase')} />
+          </div>
+        ) : null}
       </fieldset>
 
       <fieldset disabled={readOnly} className="flex flex-col gap-3">
-        <legend className="mb-1 text-sm font-semibold uppercase tracking-wide">Output filter (LC)</legend>
+        <legend className="mb-1 text-sm font-semibold tracking-wide uppercase">{threePhase ? 'Output filter per phase (LC, star)' : 'Output filter (LC)'}</legend>
         <label className="flex items-center gap-2 text-sm">
           <input type="checkbox" checked={draft.filterOn} onChange={(e) => set('filterOn')(e.target.checked)} className="accent-signal" />
           Include an LC output filter
         </label>
         {draft.filterOn ? (
-          <div className="grid grid-cols-2 gap-3">
-            <NumberField label="Filter L" unit="mH" value={draft.filterL * 1e3} range={RANGES.filterLMilli} error={error('filter.l', 'filter.l')} onChange={(v) => set('filterL')(v / 1e3)} />
-            <NumberField label="Filter C" unit="µF" value={draft.filterC * 1e6} range={RANGES.filterCMicro} error={error('filter.c', 'filter.c')} onChange={(v) => set('filterC')(v / 1e6)} />
-            <NumberField label="Damping R" unit="Ω" value={draft.filterR} range={RANGES.filterR} error={error('filter.rDamping', 'filter.r')} onChange={set('filterR')} />
-          </div>
+          <>
+            <div className="grid grid-cols-2 gap-3">
+              <NumberField label="Filter L" unit="mH" value={draft.filterL} scale={1e3} hint={boundsHint('filter.l', 1e3, 'mH')} error={error('filter.l')} onChange={set('filterL')} />
+              <NumberField label="Filter C" unit="µF" value={draft.filterC} scale={1e6} hint={boundsHint('filter.c', 1e6, 'µF')} error={error('filter.c')} onChange={set('filterC')} />
+              <NumberField label="Damping R" unit="Ω" value={draft.filterR} hint={boundsHint('filter.rDamping', 1, 'Ω')} error={error('filter.rDamping')} onChange={set('filterR')} />
+              {draft.dampingPlacement === 'parallel-rc' ? (
+                <NumberField label="Damping C" unit="µF" value={draft.cDamping} scale={1e6} hint={boundsHint('filter.cDamping', 1e6, 'µF')} error={error('filter.cDamping')} onChange={set('cDamping')} />
+              ) : null}
+            </div>
+            <SelectField label="Damping" value={draft.dampingPlacement} onChange={(e) => set('dampingPlacement')(e.target.value as StudyDraft['dampingPlacement'])} error={error('filter.dampingPlacement')} options={DAMPING_OPTIONS} />
+            {filterResonance !== undefined ? (
+              <p className="text-xs text-ink-soft" data-testid="filter-resonance">
+                Resonance {formatNumber(filterResonance)} Hz{Number.isFinite(ratio) ? ` (carrier ${formatNumber(draft.carrierFrequency)} Hz)` : ''}
+              </p>
+            ) : null}
+          </>
         ) : null}
       </fieldset>
+    </>
+  );
+  // Refusals no field above claims (the design as a whole, an option): listed at the top.
+  const unclaimed = previewErrors.filter((e) => !claimed.has(e.field));
+  return (
+    <form className="flex flex-col gap-4" onSubmit={(e) => e.preventDefault()} aria-label="Study parameters" noValidate>
+      {unclaimed.length ? (
+        <ul role="alert" className="list-disc rounded-md bg-bad-soft py-2 pl-8 text-sm text-bad">
+          {unclaimed.map((e) => (
+            <li key={e.field}>{e.message}</li>
+          ))}
+        </ul>
+      ) : null}
+      {body}
     </form>
   );
 }
 
-/** The stored pattern of a harmonic-elimination study, read-only: its angles come from the elimination page. */
-function PatternSummary({ pattern, vdc, error }: { pattern: ShePattern | null; vdc: number; error?: string | undefined }) {
-  if (!pattern) return <p role="alert" className="text-sm text-bad">{error ?? 'This study has no pattern.'}</p>;
+/** The stored pattern of a pattern study, read-only: its angles come from the elimination page. */
+function PatternSummary({ pattern, vdc, error }: { pattern: StoredPattern | null; vdc: number; error?: string | undefined }) {
+  if (!pattern) return <p role="alert" className="text-sm text-bad">{error ?? 'This study has no pattern: pick a point on the harmonic-elimination page and save it as a study.'}</p>;
   return (
     <div className="rounded border border-rule bg-panel px-3 py-2 text-sm" data-testid="she-pattern">
       <p>
-        {pattern.kind === 'staircase' ? 'Multilevel staircase' : 'Two-level (bipolar)'} · DC level <span className="num">{formatNumber(vdc)} V</span>
-        {pattern.eliminate.length ? <> · eliminates orders <span className="num">{pattern.eliminate.join(', ')}</span></> : null}
+        {labelOf(PATTERN_KIND_OPTIONS, pattern.kind)} · DC level <span className="num">{formatNumber(vdc)} V</span>
+        {pattern.eliminate?.length ? <> · eliminates orders <span className="num">{pattern.eliminate.join(', ')}</span></> : null}
         {pattern.fundamental !== undefined ? <> · solved for <span className="num">{formatNumber(pattern.fundamental)} V</span></> : null}
       </p>
       <table className="mt-2 w-full text-left text-xs" aria-label="First-quarter switching angles">
@@ -156,41 +229,14 @@ function PatternSummary({ pattern, vdc, error }: { pattern: ShePattern | null; v
           {pattern.angles.map((angle, k) => (
             <tr key={k}>
               <td>α{k + 1}</td>
-              <td>{formatNumber((angle * 180) / Math.PI, 6)}°</td>
+              <td>{formatNumber(angle * RADIANS_TO_DEGREES, 6)}°</td>
               <td>{angle.toFixed(9)}</td>
             </tr>
           ))}
         </tbody>
       </table>
-      <p className="mt-2 text-xs text-ink-soft">The angles were solved on the harmonic-elimination page; pick another point there to change them. Name, note, load and filter can be edited here.</p>
+      <p className="mt-2 text-xs text-ink-soft">The angles were solved on the harmonic-elimination page; pick another point there to change them. Name, note, fundamental frequency, load and filter can be edited here.</p>
       {error ? <p role="alert" className="mt-1 text-xs text-bad">{error}</p> : null}
     </div>
-  );
-}
-
-function NumberField({ label, unit, value, range, error, onChange }: { label: string; unit: string; value: number; range: { min: number; max: number; step: number }; error?: string | undefined; onChange: (v: number) => void }) {
-  return (
-    <TextField
-      label={label}
-      unit={unit}
-      type="number"
-      inputMode="decimal"
-      step={range.step}
-      defaultValue={Number(value.toPrecision(8))}
-      key={value}
-      hint={rangeHint(range)}
-      error={error}
-      className="num"
-      onBlur={(e) => {
-        const n = Number(e.target.value);
-        if (e.target.value.trim() !== '' && Number.isFinite(n)) onChange(n);
-      }}
-      onKeyDown={(e) => {
-        if (e.key === 'Enter') {
-          const n = Number((e.target as HTMLInputElement).value);
-          if (Number.isFinite(n)) onChange(n);
-        }
-      }}
-    />
   );
 }

@@ -1,62 +1,32 @@
 import { useParams } from 'react-router-dom';
-import { CAUTION_TEXT } from '../../../components/ui/Caution';
 import { Button } from '../../../components/ui/Button';
 import { ErrorState, Loading } from '../../../components/ui/QueryState';
-import { formatDate, formatNumber } from '../../../lib/format';
+import { formatDate } from '../../../lib/format';
 import { roleAtLeast, useMe } from '../../../lib/me';
-import { useStudy, useStudyRevisions } from '../api/studies';
-import { computePreview } from '../model/computePreview';
-import { draftFromStudy, type StudyDraft } from '../model/studyDraft';
+import { useStudy, useStudyReport, useStudyRevisions } from '../api/studies';
+import { designRows } from '../model/describeDesign';
+import { HarmonicLimitsPanel } from './HarmonicLimitsPanel';
+import { ReportCautions } from './ReportCautions';
 import { ShareReportForm } from './ShareReportForm';
 import { StudyCharts } from './StudyCharts';
 
-function parameterRows(draft: StudyDraft): [string, string][] {
-  if (draft.method === 'selective-harmonic-elimination' && draft.she) {
-    const she = draft.she;
-    return [
-      ['Method', draft.method],
-      ['Pattern', she.kind],
-      ['DC level', `${formatNumber(draft.vdc)} V`],
-      ['First-quarter angles', she.angles.map((a) => `${formatNumber((a * 180) / Math.PI, 6)}°`).join(', ')],
-      ['Eliminated orders', she.eliminate.join(', ') || '—'],
-      ...(she.fundamental !== undefined ? ([['Solved for', `${formatNumber(she.fundamental)} V peak`]] as [string, string][]) : []),
-      ['Fundamental', `${formatNumber(draft.frequency)} Hz`],
-      ['Load R', `${formatNumber(draft.r)} Ω`],
-      ['Load L', `${formatNumber(draft.l * 1e3)} mH`],
-    ];
-  }
-  const rows: [string, string][] = [
-    ['Method', draft.method],
-    ...(draft.method === 'sine-triangle' ? ([['Bridge scheme', draft.scheme]] as [string, string][]) : []),
-    ...(draft.method === 'three-phase' ? ([['Zero sequence', draft.zeroSequence]] as [string, string][]) : []),
-    ...(draft.method === 'space-vector' ? ([['Switching sequence', draft.sequence]] as [string, string][]) : []),
-    ...(draft.method !== 'space-vector' ? ([['Sampling', draft.sampling]] as [string, string][]) : []),
-    ['DC bus', `${formatNumber(draft.vdc)} V`],
-    ['Modulation index ma', formatNumber(draft.ma)],
-    ['Frequency ratio mf', String(draft.mf)],
-    ['Fundamental', `${formatNumber(draft.frequency)} Hz`],
-    ['Load R', `${formatNumber(draft.r)} Ω`],
-    ['Load L', `${formatNumber(draft.l * 1e3)} mH`],
-    ['Back-EMF', `${formatNumber(draft.emf)} V peak at ${formatNumber((draft.emfPhase * 180) / Math.PI)}°`],
-  ];
-  if (draft.filterOn) rows.push(['Filter L', `${formatNumber(draft.filterL * 1e3)} mH`], ['Filter C', `${formatNumber(draft.filterC * 1e6)} µF`], ['Filter damping R', `${formatNumber(draft.filterR)} Ω`]);
-  return rows;
-}
-
-/** A printable report of one study: parameters with units, charts, summary, revision, author, cautions. */
+/**
+ * A printable report of one study: the whole design with units, and every figure, chart and the
+ * limit check from the service's design report of the current revision, with revision, author
+ * and cautions.
+ */
 export function StudyReportPage() {
   const { studyId } = useParams();
   const study = useStudy(studyId);
+  const report = useStudyReport(studyId);
   const revisions = useStudyRevisions(studyId);
   const me = useMe();
   if (study.isPending) return <Loading label="Preparing the report…" />;
   if (study.isError) return <ErrorState error={study.error} onRetry={() => study.refetch()} />;
-  const draft = draftFromStudy(study.data);
-  const { preview, errors } = computePreview(draft);
   const current = revisions.data?.find((r) => r.revision === study.data.revision);
   const link = `${window.location.origin}/studies/${study.data.id}/report`;
   return (
-    <article className="mx-auto max-w-4xl bg-panel p-6 shadow-sm print:shadow-none">
+    <article className="mx-auto max-w-4xl bg-panel p-6 shadow-sm print:max-w-none print:p-0 print:shadow-none">
       <div className="no-print mb-4 flex flex-wrap gap-2">
         <Button onClick={() => window.print()}>Print</Button>
         <Button variant="secondary" onClick={() => navigator.clipboard?.writeText(link)}>
@@ -73,24 +43,30 @@ export function StudyReportPage() {
         </p>
         {study.data.note ? <p className="mt-2 text-sm">{study.data.note}</p> : null}
       </header>
-      <section aria-label="Caution" className="mb-4 border-l-4 border-signal bg-signal-soft p-3 text-sm">
-        <strong>Caution.</strong> {CAUTION_TEXT}
-      </section>
-      <section className="mb-4">
-        <h2 className="mb-2 text-sm font-semibold tracking-wide uppercase">Parameters</h2>
+      <section className="mb-4" aria-label="Design">
+        <h2 className="mb-2 text-sm font-semibold tracking-wide uppercase">Design</h2>
         <table className="text-sm">
           <tbody>
-            {parameterRows(draft).map(([label, value]) => (
+            {designRows(study.data.design).map(([label, value]) => (
               <tr key={label} className="border-t border-rule/60">
-                <th scope="row" className="py-0.5 pr-6 text-left font-normal text-ink-soft">{label}</th>
+                <th scope="row" className="py-0.5 pr-6 text-left align-top font-normal text-ink-soft">
+                  {label}
+                </th>
                 <td className="num py-0.5">{value}</td>
               </tr>
             ))}
           </tbody>
         </table>
       </section>
-      {errors.length ? <ErrorState error={new Error(errors.map((e) => e.message).join('; '))} /> : null}
-      {preview ? <StudyCharts preview={preview} fileStem={`report-${study.data.id.slice(0, 8)}`} /> : null}
+      {report.isPending ? <Loading label="Analysing the design on the service…" /> : null}
+      {report.isError ? <ErrorState error={report.error} onRetry={() => report.refetch()} /> : null}
+      {report.data ? (
+        <div className="flex flex-col gap-4">
+          <ReportCautions cautions={report.data.cautions} except={[report.data.limitCheck.caution]} />
+          <StudyCharts report={report.data} fileStem={`report-${study.data.id.slice(0, 8)}`} />
+          <HarmonicLimitsPanel report={report.data} expanded />
+        </div>
+      ) : null}
     </article>
   );
 }

@@ -1,0 +1,66 @@
+import { analyseDesign, type InverterDesign } from '@pulsewright/modulation';
+import { render, screen, within } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { formatPercent } from '../../../lib/format';
+import { HarmonicLimitsPanel } from './HarmonicLimitsPanel';
+import { StudyCharts } from './StudyCharts';
+
+const threePhase: InverterDesign = {
+  vdc: 600,
+  fundamentalFrequency: 50,
+  carrierFrequency: 2550,
+  modulation: { method: 'three-phase', ma: 0.9, zeroSequence: 'min-max' },
+  load: { r: 8, l: 0.005 },
+  filter: { l: 0.002, c: 20e-6, rDamping: 1 },
+};
+
+const figure = (label: string) => document.querySelector(`[data-figure="${label}"]`);
+
+describe('StudyCharts', () => {
+  it('shows the report figures as they are: exact THD, per phase and line-to-line, currents and the limit result', () => {
+    const report = analyseDesign(threePhase);
+    render(<StudyCharts report={report} fileStem="t" />);
+    expect(figure('THD')).toHaveTextContent(formatPercent(report.bridge.thd));
+    expect(figure('THD, line-to-line')).toHaveTextContent(formatPercent(report.lineToLine?.thd ?? Number.NaN));
+    const summary = document.querySelector('dl[aria-label="Summary"]');
+    expect(summary).toHaveTextContent('phase a to star point');
+    expect(summary).toHaveTextContent('line a−b');
+    expect(summary).toHaveTextContent(`to order ${report.maxOrder}`);
+    expect(summary).toHaveTextContent('RMS, per phase');
+    expect(figure('Capacitor current')).not.toBeNull();
+    expect(figure('Filter resonance')).toHaveTextContent('Hz');
+    expect(figure('Limit check')).toHaveTextContent(report.limitCheck.pass ? 'Pass' : 'Fail');
+    // The currents of each phase and the voltages by the report's names.
+    expect(within(screen.getByRole('combobox', { name: 'Phase' })).getAllByRole('option')).toHaveLength(3);
+    expect(within(screen.getByRole('combobox', { name: 'Voltage shown' })).getAllByRole('option').map((o) => o.textContent)).toEqual(report.voltages.map((v) => v.name));
+    expect(screen.getByText(`Spectrum to order ${report.maxOrder}`)).toBeInTheDocument();
+  });
+
+  it('labels a pattern spectrum by order, not by mf', () => {
+    const report = analyseDesign({ vdc: 100, fundamentalFrequency: 50, modulation: { method: 'selective-harmonic-elimination', kind: 'bipolar', angles: [0.3, 0.5, 0.9], eliminate: [5, 7] } });
+    const { container } = render(<StudyCharts report={report} fileStem="p" />);
+    const labels = Array.from(container.querySelectorAll('svg[data-chart="spectrum"] [data-labels] text')).map((t) => t.textContent ?? '');
+    expect(labels.length).toBeGreaterThan(0);
+    expect(labels.every((l) => /^\d+$/.test(l))).toBe(true);
+  });
+});
+
+describe('HarmonicLimitsPanel', () => {
+  it("shows the check of the filter's output with the table to order 50, the whole-waveform THD and the caution", () => {
+    const report = analyseDesign(threePhase);
+    render(<HarmonicLimitsPanel report={report} expanded />);
+    const result = screen.getByTestId('limit-result');
+    expect(result).toHaveAttribute('data-pass', String(report.limitCheck.pass));
+    expect(result).toHaveTextContent('filter output');
+    expect(figure('Limit THD, whole waveform')).toHaveTextContent(formatPercent(report.limitCheck.thdWholeWaveform));
+    expect(screen.getByRole('table', { name: 'Limit check by order' }).querySelectorAll('tbody tr')).toHaveLength(49);
+    expect(result).toHaveTextContent(report.limitCheck.caution);
+  });
+
+  it('fails an unfiltered PWM voltage at a high frequency ratio on its whole-waveform THD, with the note', () => {
+    const report = analyseDesign({ vdc: 400, fundamentalFrequency: 50, carrierFrequency: 50 * 201, modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8 } });
+    render(<HarmonicLimitsPanel report={report} />);
+    expect(screen.getByTestId('limit-result')).toHaveAttribute('data-pass', 'false');
+    expect(screen.getByTestId('limit-note')).toHaveTextContent(report.limitCheck.note ?? 'missing note');
+  });
+});

@@ -1,0 +1,71 @@
+import type { StudyReport } from '../api/studies';
+import type { Figure } from '../../../components/charts/FigureCards';
+import { formatGain, formatNumber, formatPercent } from '../../../lib/format';
+
+/** The point of coupling the limit check reads: the filter's output where there is a filter. */
+export function limitPointName(report: StudyReport): string {
+  return report.output ? report.output.name : report.bridge.name;
+}
+
+/**
+ * The report's headline figures as the cards show them, each saying what it is of: exact
+ * whole-waveform THD and WTHD (the truncated spectrum THD only with its order), the fundamental
+ * per phase and line to line, the currents of phase a, load power, filter and limit result.
+ * Display only: every number is a field of the report.
+ */
+export function reportFigures(report: StudyReport): Figure[] {
+  const { bridge, lineToLine, output, filter, limitCheck } = report;
+  const three = report.phaseCount === 3;
+  const perPhase = three ? ', per phase' : '';
+  const figures: Figure[] = [
+    { label: 'Fundamental', value: `${formatNumber(bridge.fundamental)} V`, note: `peak, ${bridge.name}` },
+  ];
+  if (lineToLine) figures.push({ label: 'Fundamental, line-to-line', value: `${formatNumber(lineToLine.fundamental)} V`, note: `peak, ${lineToLine.name}` });
+  figures.push(
+    {
+      label: 'THD',
+      value: formatPercent(bridge.thd),
+      note: `exact, whole waveform, ${bridge.name} (${formatPercent(bridge.spectrumThd)} to order ${report.maxOrder})`,
+    },
+    { label: 'WTHD', value: formatPercent(bridge.wthd, 3), note: `exact, whole waveform, ${bridge.name}` },
+  );
+  if (lineToLine) figures.push({ label: 'THD, line-to-line', value: formatPercent(lineToLine.thd), note: `exact, whole waveform, ${lineToLine.name}` });
+  if (output) {
+    figures.push(
+      { label: 'Output fundamental', value: `${formatNumber(output.fundamental)} V`, note: `peak, ${output.name}` },
+      {
+        label: 'Output THD',
+        value: formatPercent(output.thd),
+        note: `to order ${report.analysisOrder}; at most ${formatPercent(output.thdUpperBound)} over the whole waveform`,
+      },
+    );
+  }
+  const phaseA = report.currents[0];
+  if (phaseA) {
+    figures.push(
+      { label: 'Switch current', value: `${formatNumber(phaseA.inverter.rms)} A`, note: `RMS${perPhase}, ${phaseA.inverter.name}; peak ${formatNumber(phaseA.inverter.peak)} A` },
+      {
+        label: 'Current ripple',
+        value: `${formatNumber(phaseA.inverter.rippleRms)} A`,
+        note: `RMS of i − i₁ of the switch current${perPhase}; ${formatNumber(phaseA.inverter.ripplePeakToPeak)} A peak-to-peak`,
+      },
+    );
+    if (phaseA.capacitor) figures.push({ label: 'Capacitor current', value: `${formatNumber(phaseA.capacitor.rms)} A`, note: `RMS${perPhase}, ${phaseA.capacitor.name}` });
+    if (phaseA.load) figures.push({ label: 'Load current', value: `${formatNumber(phaseA.load.rms)} A`, note: `RMS${perPhase}, ${phaseA.load.name}; fundamental ${formatNumber(phaseA.load.fundamental)} A peak` });
+  }
+  if (report.loadPower !== null) figures.push({ label: 'Load power', value: `${formatNumber(report.loadPower)} W`, note: three ? 'into R, all three phases' : 'into R' });
+  if (filter) {
+    figures.push({
+      label: 'Filter resonance',
+      value: `${formatNumber(filter.characteristics.resonanceFrequency)} Hz`,
+      note: `${filter.gainAtCarrier !== null ? `gain at the carrier ${formatGain(filter.gainAtCarrier)}; ` : ''}at the fundamental ${formatGain(filter.gainAtFundamental)}, loaded`,
+    });
+  }
+  figures.push({
+    label: 'Limit check',
+    value: limitCheck.pass ? 'Pass' : 'Fail',
+    tone: limitCheck.pass ? 'good' : 'bad',
+    note: `${limitCheck.standard.name}, ${limitPointName(report)}`,
+  });
+  return figures;
+}
