@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO, signIn, testApp, type TestApp } from './helpers.js';
-import { captureCsv, SINE_TRIANGLE } from './fixtures.js';
+import { captureCsv, SINE_TRIANGLE_DESIGN as DESIGN, withMa } from './fixtures.js';
 
 describe('capture uploads', () => {
   let t: TestApp;
@@ -83,7 +83,7 @@ describe('capture uploads', () => {
     expect(first.amplitude).toBeLessThan(105);
 
     const projectId = (await request(t.app).post('/api/v1/projects').set(auth).send({ name: 'Bench' })).body.id;
-    const studyId = (await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name: 'Prediction', modulation: { ...SINE_TRIANGLE, ma: 0.25 } })).body.id;
+    const studyId = (await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name: 'Prediction', design: withMa(DESIGN, 0.25) })).body.id;
     const comparison = await request(t.app).post(`/api/v1/captures/${id}/comparison`).set(auth).send({ studyId, fundamentalFrequency: 50, maxOrder: 3 });
     expect(comparison.status, JSON.stringify(comparison.body)).toBe(200);
     const order1 = comparison.body.orders.find((o: { order: number }) => o.order === 1);

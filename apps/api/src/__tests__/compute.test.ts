@@ -2,6 +2,7 @@ import { execFileSync } from 'node:child_process';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
+import { modulationVoltages, waveformThd, waveformWthd } from '@pulsewright/modulation';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO, signIn, testApp, type TestApp } from './helpers.js';
@@ -28,7 +29,8 @@ describe('compute routes', () => {
   it('answers POST /api/v1/spectra with { harmonics, thd, wthd } matching facts of the trade', async () => {
     const res = await request(t.app).post('/api/v1/spectra').set(auth).send({ modulation: SINE_TRIANGLE, maxOrder: 100 });
     expect(res.status).toBe(200);
-    expect(Object.keys(res.body).sort()).toEqual(['harmonics', 'thd', 'wthd']);
+    expect(Object.keys(res.body).sort()).toEqual(['harmonics', 'name', 'spectrumThd', 'thd', 'wthd']);
+    expect(res.body.name).toBe('bridge output');
     expect(res.body.harmonics).toHaveLength(101);
     // Linear range: fundamental = ma·vdc for a bipolar full bridge (common practice; Holmes and Lipo, 2003, ch. 3).
     expect(res.body.harmonics[1].amplitude).toBeCloseTo(320, 6);
@@ -38,6 +40,11 @@ describe('compute routes', () => {
     const largest = res.body.harmonics.slice(2).reduce((a: { amplitude: number }, b: { amplitude: number }) => (b.amplitude > a.amplitude ? b : a));
     expect(Math.abs(largest.order - 21)).toBeLessThanOrEqual(2);
     expect(res.body.thd).toBeGreaterThan(0.5);
+    // thd and wthd are the whole waveform's (every order), spectrumThd stops at maxOrder.
+    const { waveform } = modulationVoltages(SINE_TRIANGLE).phases[0]!;
+    expect(res.body.thd).toBe(waveformThd(waveform));
+    expect(res.body.wthd).toBe(waveformWthd(waveform));
+    expect(res.body.spectrumThd).toBeLessThan(res.body.thd);
   });
 
   it('computes a three-phase line-to-line spectrum, where triplen carrier sidebands cancel', async () => {
@@ -50,6 +57,14 @@ describe('compute routes', () => {
     expect(res.body.harmonics[1].amplitude).toBeCloseTo((Math.sqrt(3) / 2) * 0.8 * 600, 6);
     // The carrier harmonic at mf = 21 (a multiple of 3) is common to all legs and cancels.
     expect(res.body.harmonics[21].amplitude).toBeLessThan(1e-9);
+    expect(res.body.name).toBe('line a−b');
+    // The phase to star point of a balanced star load carries 1/√3 of it (standard circuit analysis).
+    const phase = await request(t.app)
+      .post('/api/v1/spectra')
+      .set(auth)
+      .send({ modulation: { method: 'three-phase', ma: 0.8, mf: 21, vdc: 600 }, maxOrder: 10, output: 'phase' });
+    expect(phase.body.name).toBe('phase a to star point');
+    expect(phase.body.harmonics[1].amplitude).toBeCloseTo(0.8 * 300, 6);
   });
 
   it('downloads timer tables as JSON, CSV and a C header with the right type and file name', async () => {
@@ -89,15 +104,17 @@ describe('compute routes', () => {
     const res = await request(t.app)
       .post('/api/v1/harmonic-limits/check')
       .set(auth)
-      .send({ modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.9, mf: 15, vdc: 400 }, busVoltage: 400 });
+      .send({ design: { vdc: 400, fundamentalFrequency: 50, carrierFrequency: 750, modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.9 } }, busVoltage: 400 });
     expect(res.status).toBe(200);
     // IEEE Std 519-2022 Table 1, bus ≤ 1 kV: individual 5 %, THD 8 % (from memory).
-    expect(res.body.standard).toMatchObject({ name: 'IEEE Std 519', edition: '2022', recalledFromMemory: true });
+    expect(res.body.standard).toMatchObject({ name: 'IEEE Std 519', edition: '2022', recalledFromMemory: true, maxOrder: 50 });
     expect(res.body.limits).toMatchObject({ individual: 0.05, thd: 0.08, maxOrder: 50 });
+    expect(res.body.busVoltage).toBe(400);
     expect(res.body.caution).toContain('confirm them with the standard and the local utility');
+    expect(res.body.table).toHaveLength(49);
     // Unfiltered two-level PWM at mf 15 has large sidebands below the 50th order: it fails.
     expect(res.body.pass).toBe(false);
-    expect(res.body.violations[0]).toMatchObject({ order: 'thd', limit: 0.08 });
+    expect(res.body.violations.map((v: { order: unknown }) => v.order)).toEqual(expect.arrayContaining(['thd-whole-waveform', 'thd', 15]));
   });
 
   it('runs an ma sweep as a job with progress and a result', async () => {
@@ -125,6 +142,14 @@ describe('compute routes', () => {
     expect(job.result.ma[39]).toBeCloseTo(1, 12);
     // Linear range: fundamental = ma·vdc at every point (Holmes and Lipo, 2003, ch. 3).
     job.result.ma.forEach((ma: number, k: number) => expect(job.result.fundamental[k]).toBeCloseTo(ma * 100, 6));
+    // THD and WTHD at every point are the whole waveform's, as the design report gives them;
+    // spectrumThd stops at maxOrder 60 and so holds less.
+    job.result.ma.forEach((ma: number, k: number) => {
+      const { waveform } = modulationVoltages({ method: 'sine-triangle', scheme: 'unipolar', ma, mf: 21, vdc: 100 }).phases[0]!;
+      expect(job.result.thd[k]).toBe(waveformThd(waveform));
+      expect(job.result.wthd[k]).toBe(waveformWthd(waveform));
+      expect(job.result.spectrumThd[k]).toBeLessThanOrEqual(job.result.thd[k] * (1 + 1e-12));
+    });
     const listed = (await request(t.app).get('/api/v1/jobs').set(auth)).body;
     expect(listed.some((j: { id: string }) => j.id === job.id)).toBe(true);
   });

@@ -6,6 +6,22 @@ import type { RoleRequirement } from '../openapi.js';
 export const SINE_TRIANGLE = { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8, mf: 21, vdc: 400 } as const;
 export const THREE_PHASE = { method: 'three-phase', ma: 0.9, mf: 15, vdc: 650, zeroSequence: 'third-harmonic' } as const;
 
+/** The designs of those modulations at 50 Hz (carrier = mf × 50 Hz), as studies store them. */
+export const SINE_TRIANGLE_DESIGN = {
+  vdc: 400,
+  fundamentalFrequency: 50,
+  carrierFrequency: 1050,
+  modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8 },
+} as const;
+export const THREE_PHASE_DESIGN = {
+  vdc: 650,
+  fundamentalFrequency: 50,
+  carrierFrequency: 750,
+  modulation: { method: 'three-phase', ma: 0.9, zeroSequence: 'third-harmonic' },
+} as const;
+/** A design with its modulation index changed. */
+export const withMa = <D extends { modulation: object }>(design: D, ma: number): D => ({ ...design, modulation: { ...design.modulation, ma } });
+
 /** A small valid capture: two 50 Hz periods at 5 kS/s of an invented sine plus a square part. */
 export function captureCsv(rows = 200, sampleRate = 5000): string {
   const lines = ['time,voltage,current'];
@@ -38,7 +54,7 @@ export async function makeIds(app: PulsewrightApp, engineerToken: string): Promi
   const study = await request(app)
     .post('/api/v1/studies')
     .set(auth)
-    .send({ projectId: project.body.id, name: 'Role table study', modulation: SINE_TRIANGLE });
+    .send({ projectId: project.body.id, name: 'Role table study', design: SINE_TRIANGLE_DESIGN });
   const capture = await request(app)
     .post('/api/v1/captures')
     .set(auth)
@@ -88,18 +104,22 @@ export const FIXTURES: Record<string, Fixture> = {
   listOutbox: () => ({ path: '/api/v1/outbox' }),
   computeSpectrum: () => ({ path: '/api/v1/spectra', body: { modulation: SINE_TRIANGLE, maxOrder: 50 } }),
   computeWaveform: () => ({ path: '/api/v1/waveforms', body: { modulation: THREE_PHASE } }),
+  analyseDesign: () => ({ path: '/api/v1/designs/report', body: { design: { ...SINE_TRIANGLE_DESIGN, load: { r: 10, l: 0.02 } }, points: 64 } }),
   computeLoadCurrent: () => ({
     path: '/api/v1/load-current',
-    body: { modulation: SINE_TRIANGLE, load: { r: 10, l: 0.02, frequency: 50 }, points: 16 },
+    body: { design: { ...SINE_TRIANGLE_DESIGN, load: { r: 10, l: 0.02 } }, points: 64 },
   }),
-  computeLcFilter: () => ({ path: '/api/v1/filters/lc', body: { filter: { l: 0.001, c: 0.00001, rDamping: 2 } } }),
+  computeLcFilter: () => ({
+    path: '/api/v1/filters/lc',
+    body: { design: { ...SINE_TRIANGLE_DESIGN, filter: { l: 0.001, c: 0.00001, rDamping: 2 } }, points: 64 },
+  }),
   computeSpaceVector: () => ({ path: '/api/v1/space-vector', body: { m: 0.7, theta: 1.2 } }),
   computeTimerTable: () => ({
     path: '/api/v1/timer-tables',
     query: { format: 'csv' },
     body: { modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.8 }, fundamentalFrequency: 50, carrierFrequency: 5000, timerClock: 16000000 },
   }),
-  checkHarmonicLimits: () => ({ path: '/api/v1/harmonic-limits/check', body: { modulation: SINE_TRIANGLE, busVoltage: 230 } }),
+  checkHarmonicLimits: () => ({ path: '/api/v1/harmonic-limits/check', body: { design: SINE_TRIANGLE_DESIGN, busVoltage: 230 } }),
   listJobs: () => ({ path: '/api/v1/jobs' }),
   createMaSweep: () => ({
     path: '/api/v1/jobs/ma-sweeps',
@@ -115,13 +135,13 @@ export const FIXTURES: Record<string, Fixture> = {
   getProject: ({ ids }) => ({ path: `/api/v1/projects/${ids.projectId}` }),
   updateProject: ({ ids }) => ({ path: `/api/v1/projects/${ids.projectId}`, body: { description: 'changed by the role table' } }),
   listStudies: ({ ids }) => ({ path: '/api/v1/studies', query: { projectId: ids.projectId } }),
-  createStudy: ({ ids }) => ({ path: '/api/v1/studies', body: { projectId: ids.projectId, name: 'Table study', modulation: THREE_PHASE } }),
+  createStudy: ({ ids }) => ({ path: '/api/v1/studies', body: { projectId: ids.projectId, name: 'Table study', design: THREE_PHASE_DESIGN } }),
   getStudy: ({ ids }) => ({ path: `/api/v1/studies/${ids.studyId}` }),
   updateStudy: async ({ app, ids, tokens }) => {
     const current = await request(app).get(`/api/v1/studies/${ids.studyId}`).set('Authorization', `Bearer ${tokens.viewer}`);
     return {
       path: `/api/v1/studies/${ids.studyId}`,
-      body: { baseRevision: current.body.revision, name: 'Role table study', modulation: { ...SINE_TRIANGLE, ma: 0.7 } },
+      body: { baseRevision: current.body.revision, name: 'Role table study', design: withMa(SINE_TRIANGLE_DESIGN, 0.7) },
     };
   },
   duplicateStudy: ({ ids }) => ({ path: `/api/v1/studies/${ids.studyId}/duplicate`, body: {} }),
@@ -132,6 +152,7 @@ export const FIXTURES: Record<string, Fixture> = {
     return { path: `/api/v1/studies/${ids.studyId}/revisions/1/restore`, body: { baseRevision: current.body.revision } };
   },
   getStudySpectrum: ({ ids }) => ({ path: `/api/v1/studies/${ids.studyId}/spectrum`, query: { maxOrder: 30 } }),
+  getStudyReport: ({ ids }) => ({ path: `/api/v1/studies/${ids.studyId}/report`, query: { maxOrder: 60, points: 64 } }),
   listCaptures: () => ({ path: '/api/v1/captures' }),
   uploadCapture: () => ({ path: '/api/v1/captures', upload: { field: 'file', content: captureCsv(), fileName: 'table.csv' } }),
   getCapture: ({ ids }) => ({ path: `/api/v1/captures/${ids.captureId}` }),
@@ -157,3 +178,10 @@ export function send(app: PulsewrightApp, method: string, spec: RequestSpec, tok
 
 /** A space-vector modulation (seven segments, symmetric regular sampling, linear range). */
 export const SPACE_VECTOR = { method: 'space-vector', m: 0.8, vdc: 600, frequencyRatio: 201 } as const;
+/** Its design at 50 Hz (switching periods at 201 × 50 Hz). */
+export const SPACE_VECTOR_DESIGN = {
+  vdc: 600,
+  fundamentalFrequency: 50,
+  carrierFrequency: 10_050,
+  modulation: { method: 'space-vector', m: 0.8 },
+} as const;

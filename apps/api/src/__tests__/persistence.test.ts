@@ -6,7 +6,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { createApp } from '../app.js';
 import { INTERRUPTED_MESSAGE } from '../services/jobs.js';
 import { DEMO, DEMO_PASSWORD, signIn, testApp } from './helpers.js';
-import { SINE_TRIANGLE } from './fixtures.js';
+import { SINE_TRIANGLE_DESIGN as DESIGN, withMa } from './fixtures.js';
 
 describe('storage', () => {
   const dir = mkdtempSync(path.join(tmpdir(), 'pulsewright-restart-'));
@@ -18,8 +18,8 @@ describe('storage', () => {
     const token = await signIn(first.app, DEMO.engineer);
     const auth = { Authorization: `Bearer ${token}` };
     const project = (await request(first.app).post('/api/v1/projects').set(auth).send({ name: 'Survives restarts' })).body;
-    const study = (await request(first.app).post('/api/v1/studies').set(auth).send({ projectId: project.id, name: 'Kept', modulation: SINE_TRIANGLE })).body;
-    await request(first.app).put(`/api/v1/studies/${study.id}`).set(auth).send({ baseRevision: 1, name: 'Kept', modulation: { ...SINE_TRIANGLE, ma: 0.6 } });
+    const study = (await request(first.app).post('/api/v1/studies').set(auth).send({ projectId: project.id, name: 'Kept', design: DESIGN })).body;
+    await request(first.app).put(`/api/v1/studies/${study.id}`).set(auth).send({ baseRevision: 1, name: 'Kept', design: withMa(DESIGN, 0.6) });
     const users = await first.app.services.models.User.count();
     // A job the process was running when it died.
     const team = await first.app.services.models.Team.findOne();
@@ -80,12 +80,12 @@ describe('storage', () => {
       const health = await request(first).get('/api/health');
       expect(health.body.database).toBe('postgres');
       const project = (await request(first).post('/api/v1/projects').set(auth).send({ name: `On PostgreSQL ${Date.now()}` })).body;
-      const study = await request(first).post('/api/v1/studies').set(auth).send({ projectId: project.id, name: 'Kept on PostgreSQL', modulation: SINE_TRIANGLE });
+      const study = await request(first).post('/api/v1/studies').set(auth).send({ projectId: project.id, name: 'Kept on PostgreSQL', design: DESIGN });
       expect(study.status, JSON.stringify(study.body)).toBe(201);
       studyId = study.body.id;
       const edits = await Promise.all(
         [0.5, 0.6, 0.7].map((ma) =>
-          request(first).put(`/api/v1/studies/${studyId}`).set(auth).send({ baseRevision: 1, name: 'Kept on PostgreSQL', modulation: { ...SINE_TRIANGLE, ma } }),
+          request(first).put(`/api/v1/studies/${studyId}`).set(auth).send({ baseRevision: 1, name: 'Kept on PostgreSQL', design: withMa(DESIGN, ma) }),
         ),
       );
       // Optimistic concurrency holds on PostgreSQL too: one edit wins, the stale ones get 409.

@@ -2,7 +2,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { writeQueueOf, WriteQueue } from '../db/database.js';
 import { escapeFormulaCells, formulaCells } from '../services/captureCsv.js';
-import { captureCsv, SINE_TRIANGLE } from './fixtures.js';
+import { captureCsv, SINE_TRIANGLE_DESIGN as DESIGN } from './fixtures.js';
 import { DEMO, signIn, testApp, type TestApp } from './helpers.js';
 
 /**
@@ -70,7 +70,7 @@ describe('F3: control characters in q', () => {
   it('ordinary text still searches, and % _ \\ are literal (LIKE … ESCAPE)', async () => {
     expect((await auth(request(t.app).get('/api/v1/studies?q=a'))).status).toBe(200);
     for (const name of ['Wildcard 50% load', 'Wildcard 50 volts', 'Wildcard a_b', 'Wildcard axb', 'Wildcard c\\d']) {
-      const res = await auth(request(t.app).post('/api/v1/studies')).send({ projectId, name, modulation: SINE_TRIANGLE });
+      const res = await auth(request(t.app).post('/api/v1/studies')).send({ projectId, name, design: DESIGN });
       expect(res.status).toBe(201);
     }
     const names = async (q: string): Promise<string[]> =>
@@ -85,35 +85,43 @@ describe('F3: control characters in q', () => {
 });
 
 describe('F4, F5: extreme but once schema-valid numbers', () => {
-  it('load-current with r 5e-324 Ω (smallest subnormal double, IEEE 754) is 400 naming load.r', async () => {
+  it('load-current with r 5e-324 Ω (smallest subnormal double, IEEE 754) is 400 naming design.load.r', async () => {
     const res = await auth(request(t.app).post('/api/v1/load-current')).send({
-      modulation: { method: 'three-phase', ma: 4, mf: 17, vdc: 2.4e-168 },
-      load: { r: 5e-324, l: 2.8e-50, frequency: 3.4e-174, emf: { amplitude: 5000, phase: 0 } },
+      design: { ...DESIGN, vdc: 2.4e-168, load: { r: 5e-324, l: 2.8e-50, emf: { amplitude: 5000, phase: 0 } } },
     });
-    expectProblem(res, 400, 'load.r');
+    expectProblem(res, 400, 'design.load.r');
   });
-  it('load-current at the documented minimums gives finite figures', async () => {
-    const res = await auth(request(t.app).post('/api/v1/load-current')).send({
-      modulation: SINE_TRIANGLE,
-      load: { r: 1e-6, l: 1e-12, frequency: 1e-3, emf: { amplitude: 100000, phase: 0 } },
-      points: 4,
-    });
-    expect(res.status, JSON.stringify(res.body)).toBe(200);
-    expect(Number.isFinite(res.body.rmsCurrent)).toBe(true);
+  it('load-current at the documented extremes gives finite figures', async () => {
+    // 100 kV across 1 µΩ at 1 mHz: 1e11 A, far outside any real design but finite in double precision.
+    const design = { ...DESIGN, vdc: 100_000, fundamentalFrequency: 0.001, carrierFrequency: 0.021 };
+    for (const load of [
+      { r: 1e-6, l: 0, emf: { amplitude: 100_000, phase: 0 } },
+      { r: 1e-6, l: 100 },
+      { r: 1e6, l: 100 },
+    ]) {
+      const res = await auth(request(t.app).post('/api/v1/load-current')).send({ design: { ...design, load }, points: 64 });
+      expect(res.status, JSON.stringify(res.body).slice(0, 300)).toBe(200);
+      expect(Number.isFinite(res.body.currents[0].load.rms)).toBe(true);
+      expect(Number.isFinite(res.body.loadPower)).toBe(true);
+    }
   });
-  it('filters/lc with subnormal c and l is 400 naming filter.c', async () => {
-    const res = await auth(request(t.app).post('/api/v1/filters/lc')).send({ filter: { l: 1e-110, c: 2.5e-323 } });
-    expectProblem(res, 400, 'filter.c');
+  it('filters/lc with subnormal c and l is 400 naming design.filter.c', async () => {
+    const res = await auth(request(t.app).post('/api/v1/filters/lc')).send({ design: { ...DESIGN, filter: { l: 1e-110, c: 2.5e-323 } } });
+    expectProblem(res, 400, 'design.filter.c');
   });
   it('filters/lc at the documented minimums gives finite figures', async () => {
-    const res = await auth(request(t.app).post('/api/v1/filters/lc')).send({ filter: { l: 1e-9, c: 1e-12, rDamping: 1e6 } });
-    expect(res.status, JSON.stringify(res.body)).toBe(200);
-    expect(Number.isFinite(res.body.characteristics.resonanceFrequency)).toBe(true);
+    const res = await auth(request(t.app).post('/api/v1/filters/lc')).send({
+      design: { ...DESIGN, filter: { l: 1e-9, c: 1e-12, rDamping: 1e6 }, load: { r: 1e-6, l: 0 } },
+      points: 64,
+    });
+    expect(res.status, JSON.stringify(res.body).slice(0, 300)).toBe(200);
+    expect(Number.isFinite(res.body.filter.characteristics.resonanceFrequency)).toBe(true);
+    expect(Number.isFinite(res.body.output.thdUpperBound)).toBe(true);
   });
-  it('harmonic-limits/check with modulation null is 400 naming modulation', async () => {
-    const res = await auth(request(t.app).post('/api/v1/harmonic-limits/check')).send({ modulation: null, busVoltage: 400 });
+  it('harmonic-limits/check with design null is 400 naming design', async () => {
+    const res = await auth(request(t.app).post('/api/v1/harmonic-limits/check')).send({ design: null, busVoltage: 400 });
     expect(res.status).toBe(400);
-    expect(res.body.errors.some((e: { path: string }) => e.path.startsWith('modulation'))).toBe(true);
+    expect(res.body.errors.some((e: { path: string }) => e.path.startsWith('design'))).toBe(true);
   });
 });
 
@@ -125,6 +133,10 @@ describe('F6: integer query parameters take decimal digits only', () => {
     cases.push([`/api/v1/audit-events?limit=${encodeURIComponent(value)}`, 'limit']);
     cases.push([`/api/v1/outbox?offset=${encodeURIComponent(value)}`, 'offset']);
     cases.push([`/api/v1/studies/{id}/spectrum?maxOrder=${encodeURIComponent(value)}`, 'maxOrder']);
+    cases.push([`/api/v1/studies/{id}/report?points=${encodeURIComponent(value)}`, 'points']);
+  }
+  for (const value of ['0x10', 'Infinity', '1e999', '400V', '']) {
+    cases.push([`/api/v1/studies/{id}/report?busVoltage=${encodeURIComponent(value)}`, 'busVoltage']);
   }
   it.each(cases)('%s is 400 naming %s', async (url, field) => {
     expectProblem(await auth(request(t.app).get(url.replace('{id}', studyId))), 400, field);
@@ -132,6 +144,7 @@ describe('F6: integer query parameters take decimal digits only', () => {
   it('plain digits still work', async () => {
     expect((await auth(request(t.app).get('/api/v1/jobs?limit=16&offset=0'))).status).toBe(200);
     expect((await auth(request(t.app).get(`/api/v1/studies/${studyId}/spectrum?maxOrder=16`))).status).toBe(200);
+    expect((await auth(request(t.app).get(`/api/v1/studies/${studyId}/report?maxOrder=60&points=64&busVoltage=4.0e2`))).status).toBe(200);
   });
 });
 
@@ -194,7 +207,7 @@ describe('L1: SQLite writers wait in JavaScript, one at a time', () => {
   it('50 concurrent study creations and edits all complete, and the queue drains', async () => {
     const created = await Promise.all(
       Array.from({ length: 50 }, (_, k) =>
-        auth(request(t.app).post('/api/v1/studies')).send({ projectId, name: `Concurrent ${k}`, modulation: SINE_TRIANGLE }),
+        auth(request(t.app).post('/api/v1/studies')).send({ projectId, name: `Concurrent ${k}`, design: DESIGN }),
       ),
     );
     expect(created.map((r) => r.status)).toEqual(Array(50).fill(201));
@@ -203,7 +216,7 @@ describe('L1: SQLite writers wait in JavaScript, one at a time', () => {
         auth(request(t.app).put(`/api/v1/studies/${r.body.id}`)).send({
           baseRevision: r.body.revision,
           name: `${r.body.name} edited`,
-          modulation: SINE_TRIANGLE,
+          design: DESIGN,
         }),
       ),
     );

@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO, signIn, testApp, type TestApp } from './helpers.js';
-import { SINE_TRIANGLE } from './fixtures.js';
+import { SINE_TRIANGLE_DESIGN as DESIGN, withMa } from './fixtures.js';
 
 interface OutboxItem {
   to: string;
@@ -24,8 +24,8 @@ describe('e-mailing a study report', () => {
     viewer = { Authorization: `Bearer ${await signIn(t.app, DEMO.viewer)}` };
     admin = { Authorization: `Bearer ${await signIn(t.app, DEMO.admin)}` };
     const projectId = (await request(t.app).post('/api/v1/projects').set(engineer).send({ name: 'Sharing', description: 'test' })).body.id;
-    const study = (await request(t.app).post('/api/v1/studies').set(engineer).send({ projectId, name: 'Shared candidate', modulation: SINE_TRIANGLE })).body;
-    await request(t.app).put(`/api/v1/studies/${study.id}`).set(engineer).send({ baseRevision: 1, name: 'Shared candidate', modulation: { ...SINE_TRIANGLE, ma: 0.7 } });
+    const study = (await request(t.app).post('/api/v1/studies').set(engineer).send({ projectId, name: 'Shared candidate', design: DESIGN })).body;
+    await request(t.app).put(`/api/v1/studies/${study.id}`).set(engineer).send({ baseRevision: 1, name: 'Shared candidate', design: withMa(DESIGN, 0.7) });
     studyId = study.id;
   });
   afterAll(async () => t.dispose());
@@ -49,6 +49,10 @@ describe('e-mailing a study report', () => {
     expect(mail!.text).toContain('Please check the 19th sideband.');
     // The caution sentence of REFERENCES.md, "Cautions".
     expect(mail!.text).toContain('Inverter DC buses and outputs are lethal.');
+    // Its figures are the design report's of revision 2 (the exact whole-waveform THD, the limit result).
+    const report = (await request(t.app).get(`/api/v1/studies/${studyId}/report`).set(engineer)).body;
+    expect(mail!.text).toContain(`THD ${(100 * report.bridge.thd).toFixed(2)} %, WTHD ${(100 * report.bridge.wthd).toFixed(2)} % (exact, whole waveform)`);
+    expect(mail!.text).toContain(`voltage limits (recalled from memory): ${report.limitCheck.pass ? 'pass' : 'fail'}`);
     const audit = (await request(t.app).get('/api/v1/audit-events').set(admin)).body as { action: string; subjectId: string; details: Record<string, unknown> }[];
     expect(audit.find((e) => e.action === 'study.share')).toMatchObject({ subjectId: studyId, details: { to: 'reviewer@kestrel.example', revision: 2 } });
   });

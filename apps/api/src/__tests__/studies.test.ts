@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO, signIn, testApp, type TestApp } from './helpers.js';
-import { SINE_TRIANGLE, THREE_PHASE } from './fixtures.js';
+import { SINE_TRIANGLE_DESIGN as DESIGN, THREE_PHASE_DESIGN, withMa } from './fixtures.js';
 
 describe('studies keep every revision', () => {
   let t: TestApp;
@@ -17,22 +17,22 @@ describe('studies keep every revision', () => {
   afterAll(async () => t.dispose());
 
   const create = async (name = 'Candidate A') =>
-    (await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name, modulation: SINE_TRIANGLE, load: { r: 5, l: 0.01, frequency: 50 }, note: 'first' })).body;
+    (await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name, design: { ...DESIGN, load: { r: 5, l: 0.01 } }, note: 'first' })).body;
 
   it('saves an edit as a new revision and refuses a stale one with 409, saving nothing', async () => {
     const study = await create();
     expect(study.revision).toBe(1);
-    const edited = await request(t.app).put(`/api/v1/studies/${study.id}`).set(auth).send({ baseRevision: 1, name: 'Candidate A', modulation: { ...SINE_TRIANGLE, ma: 0.9 } });
+    const edited = await request(t.app).put(`/api/v1/studies/${study.id}`).set(auth).send({ baseRevision: 1, name: 'Candidate A', design: withMa(DESIGN, 0.9) });
     expect(edited.status).toBe(200);
-    expect(edited.body).toMatchObject({ revision: 2, modulation: { ma: 0.9 } });
-    const stale = await request(t.app).put(`/api/v1/studies/${study.id}`).set(auth2).send({ baseRevision: 1, name: 'Candidate A', modulation: { ...SINE_TRIANGLE, ma: 0.5 } });
+    expect(edited.body).toMatchObject({ revision: 2, design: { modulation: { ma: 0.9 } } });
+    const stale = await request(t.app).put(`/api/v1/studies/${study.id}`).set(auth2).send({ baseRevision: 1, name: 'Candidate A', design: withMa(DESIGN, 0.5) });
     expect(stale.status).toBe(409);
     expect(stale.headers['content-type']).toMatch(/problem\+json/);
     expect(stale.body.detail).toContain('you edited revision 1, the latest is 2');
     expect(stale.body.detail).toContain('Nothing was saved');
     const revisions = await request(t.app).get(`/api/v1/studies/${study.id}/revisions`).set(auth);
     expect(revisions.body.map((r: { revision: number }) => r.revision)).toEqual([2, 1]);
-    expect(revisions.body[1]).toMatchObject({ modulation: { ma: 0.8 }, note: 'first', authorEmail: DEMO.engineer });
+    expect(revisions.body[1]).toMatchObject({ design: { modulation: { ma: 0.8 }, load: { r: 5, l: 0.01 } }, note: 'first', authorEmail: DEMO.engineer });
   });
 
   it('concurrent edits from one base: exactly one wins, the others get 409, no revision is lost', async () => {
@@ -41,7 +41,7 @@ describe('studies keep every revision', () => {
       request(t.app)
         .put(`/api/v1/studies/${study.id}`)
         .set(i % 2 ? auth : auth2)
-        .send({ baseRevision: 1, name: `Race ${i}`, modulation: { ...SINE_TRIANGLE, ma: 0.5 + i / 100 } }),
+        .send({ baseRevision: 1, name: `Race ${i}`, design: withMa(DESIGN, 0.5 + i / 100) }),
     );
     const results = await Promise.all(edits);
     expect(results.map((r) => r.status).sort()).toEqual([200, 409, 409, 409, 409, 409]);
@@ -59,7 +59,7 @@ describe('studies keep every revision', () => {
         const res = await request(t.app)
           .put(`/api/v1/studies/${study.id}`)
           .set(auth)
-          .send({ baseRevision: current.revision, name: `Writer ${i}`, modulation: { ...SINE_TRIANGLE, mf: 31 + 2 * i } });
+          .send({ baseRevision: current.revision, name: `Writer ${i}`, design: { ...DESIGN, carrierFrequency: 50 * (31 + 2 * i) } });
         if (res.status === 200) return;
         expect(res.status).toBe(409);
       }
@@ -73,19 +73,19 @@ describe('studies keep every revision', () => {
 
   it('restores an old revision as a new one, and duplicates into a new study', async () => {
     const study = await create('Restore');
-    await request(t.app).put(`/api/v1/studies/${study.id}`).set(auth).send({ baseRevision: 1, name: 'Restore', modulation: THREE_PHASE, note: 'went three-phase' });
+    await request(t.app).put(`/api/v1/studies/${study.id}`).set(auth).send({ baseRevision: 1, name: 'Restore', design: THREE_PHASE_DESIGN, note: 'went three-phase' });
     const restored = await request(t.app).post(`/api/v1/studies/${study.id}/revisions/1/restore`).set(auth).send({ baseRevision: 2 });
     expect(restored.status).toBe(200);
-    expect(restored.body).toMatchObject({ revision: 3, method: 'sine-triangle', modulation: SINE_TRIANGLE, note: 'first' });
+    expect(restored.body).toMatchObject({ revision: 3, method: 'sine-triangle', design: DESIGN, note: 'first' });
     const revisions = (await request(t.app).get(`/api/v1/studies/${study.id}/revisions`).set(auth)).body;
     expect(revisions[0]).toMatchObject({ revision: 3, restoredFrom: 1 });
-    expect(revisions[1]).toMatchObject({ revision: 2, modulation: THREE_PHASE });
+    expect(revisions[1]).toMatchObject({ revision: 2, design: THREE_PHASE_DESIGN });
     const missing = await request(t.app).post(`/api/v1/studies/${study.id}/revisions/9/restore`).set(auth).send({ baseRevision: 3 });
     expect(missing.status).toBe(404);
 
     const copy = await request(t.app).post(`/api/v1/studies/${study.id}/duplicate`).set(auth).send({});
     expect(copy.status).toBe(201);
-    expect(copy.body).toMatchObject({ name: 'Restore (copy)', revision: 1, modulation: SINE_TRIANGLE });
+    expect(copy.body).toMatchObject({ name: 'Restore (copy)', revision: 1, design: DESIGN });
     expect(copy.body.id).not.toBe(study.id);
   });
 

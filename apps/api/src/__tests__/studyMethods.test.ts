@@ -2,7 +2,10 @@ import { solveShe } from '@pulsewright/modulation';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO, signIn, testApp, type TestApp } from './helpers.js';
-import { SINE_TRIANGLE, SPACE_VECTOR } from './fixtures.js';
+import { SINE_TRIANGLE, SPACE_VECTOR, SPACE_VECTOR_DESIGN } from './fixtures.js';
+
+/** A stored pattern's design at 50 Hz (no carrier). */
+const patternDesign = (modulation: object, vdc: number) => ({ vdc, fundamentalFrequency: 50, modulation });
 
 /**
  * Studies of the two methods beyond the carrier ones: space-vector PWM and a solved
@@ -32,10 +35,10 @@ describe('space-vector and harmonic-elimination studies', () => {
     expect(solved.converged).toBe(true);
     // One step removes the 3rd where cos 3α = 0, α = π/6 (Patel and Hoft, IEEE Trans. Ind. Appl., 1973).
     expect(solved.angles[0]).toBeCloseTo(Math.PI / 6, 12);
-    const modulation = { method: 'selective-harmonic-elimination', kind: 'staircase', vdc, angles: solved.angles, eliminate: [3] };
-    const created = await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name: 'One-step staircase', modulation });
+    const design = patternDesign({ method: 'selective-harmonic-elimination', kind: 'staircase', angles: solved.angles, eliminate: [3] }, vdc);
+    const created = await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name: 'One-step staircase', design });
     expect(created.status, JSON.stringify(created.body)).toBe(201);
-    expect(created.body).toMatchObject({ method: 'selective-harmonic-elimination', modulation });
+    expect(created.body).toMatchObject({ method: 'selective-harmonic-elimination', design });
     const spectrum = await spectrumOf(created.body.id, 49);
     const h = spectrum.harmonics;
     // Staircase Fourier series b_n = (4·vdc/(nπ))·Σ cos nα_k (Patel and Hoft 1973): b_1 = (4·vdc/π)·cos(π/6).
@@ -53,15 +56,16 @@ describe('space-vector and harmonic-elimination studies', () => {
     const first = solveShe({ kind: 'bipolar', vdc, count: 3, eliminate: [5, 7], fundamental: 150 });
     const second = solveShe({ kind: 'bipolar', vdc, count: 3, eliminate: [5, 7], fundamental: 170, angles: first.angles });
     expect(first.converged && second.converged).toBe(true);
-    const modulation = (angles: number[], fundamental: number) => ({ method: 'selective-harmonic-elimination', kind: 'bipolar', vdc, angles, eliminate: [5, 7], fundamental });
-    const created = await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name: 'Bipolar 3 angles', modulation: modulation(first.angles, 150) });
+    const design = (angles: number[], fundamental: number) =>
+      patternDesign({ method: 'selective-harmonic-elimination', kind: 'bipolar', angles, eliminate: [5, 7], fundamental }, vdc);
+    const created = await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name: 'Bipolar 3 angles', design: design(first.angles, 150) });
     expect(created.status).toBe(201);
     const updated = await request(t.app)
       .put(`/api/v1/studies/${created.body.id}`)
       .set(auth)
-      .send({ baseRevision: 1, name: 'Bipolar 3 angles', modulation: modulation(second.angles, 170) });
+      .send({ baseRevision: 1, name: 'Bipolar 3 angles', design: design(second.angles, 170) });
     expect(updated.status, JSON.stringify(updated.body)).toBe(200);
-    expect(updated.body).toMatchObject({ revision: 2, modulation: { angles: second.angles, fundamental: 170 } });
+    expect(updated.body).toMatchObject({ revision: 2, design: { modulation: { angles: second.angles, fundamental: 170 } } });
     const h = (await spectrumOf(created.body.id, 25)).harmonics;
     // The solve's goal, checked on the saved study by the exact spectrum (REFERENCES.md, SHE residuals).
     expect(h[1]!.amplitude).toBeCloseTo(170, 6);
@@ -71,19 +75,19 @@ describe('space-vector and harmonic-elimination studies', () => {
 
   it('refuses descending angles, angles at or past π/2 and even orders with 400 naming the field, saving nothing', async () => {
     const before = await studyCount();
-    const base = { method: 'selective-harmonic-elimination', kind: 'bipolar', vdc: 100 };
+    const base = { method: 'selective-harmonic-elimination', kind: 'bipolar' };
     const cases: { modulation: object; path: string; words: string[] }[] = [
-      { modulation: { ...base, angles: [0.5, 0.3] }, path: 'modulation.angles[1]', words: ['strictly greater than'] },
-      { modulation: { ...base, angles: [0.4, 0.4] }, path: 'modulation.angles[1]', words: ['strictly greater than'] },
-      { modulation: { ...base, angles: [0.3, Math.PI / 2] }, path: 'modulation.angles', words: ['< 1.5707963267948966'] },
-      { modulation: { ...base, angles: [0.3, 1.6] }, path: 'modulation.angles', words: ['1.6'] },
-      { modulation: { ...base, angles: [] }, path: 'modulation.angles', words: [] },
-      { modulation: { ...base, angles: Array.from({ length: 32 }, (_, k) => (k + 1) * 0.04) }, path: 'modulation.angles', words: ['31'] },
-      { modulation: { ...base, angles: [0.3], eliminate: [4] }, path: 'modulation.eliminate[0]', words: ['odd'] },
-      { modulation: { ...base, kind: 'tripolar', angles: [0.3] }, path: 'modulation.kind', words: ['bipolar', 'staircase'] },
+      { modulation: { ...base, angles: [0.5, 0.3] }, path: 'design.modulation.angles[1]', words: ['strictly greater than'] },
+      { modulation: { ...base, angles: [0.4, 0.4] }, path: 'design.modulation.angles[1]', words: ['strictly greater than'] },
+      { modulation: { ...base, angles: [0.3, Math.PI / 2] }, path: 'design.modulation.angles', words: ['< 1.5707963267948966'] },
+      { modulation: { ...base, angles: [0.3, 1.6] }, path: 'design.modulation.angles', words: ['1.6'] },
+      { modulation: { ...base, angles: [] }, path: 'design.modulation.angles', words: [] },
+      { modulation: { ...base, angles: Array.from({ length: 32 }, (_, k) => (k + 1) * 0.04) }, path: 'design.modulation.angles', words: ['31'] },
+      { modulation: { ...base, angles: [0.3], eliminate: [4] }, path: 'design.modulation.eliminate[0]', words: ['odd'] },
+      { modulation: { ...base, kind: 'tripolar', angles: [0.3] }, path: 'design.modulation.kind', words: ['bipolar', 'staircase'] },
     ];
     for (const c of cases) {
-      const res = await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name: 'Bad pattern', modulation: c.modulation });
+      const res = await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name: 'Bad pattern', design: patternDesign(c.modulation, 100) });
       expect(res.status, JSON.stringify(c.modulation)).toBe(400);
       expect(res.headers['content-type']).toMatch(/application\/problem\+json/);
       const paths = (res.body.errors as { path: string }[]).map((e) => e.path);
@@ -93,18 +97,22 @@ describe('space-vector and harmonic-elimination studies', () => {
     expect(await studyCount()).toBe(before);
 
     // An edit with bad angles is refused too, and the study keeps its one revision.
-    const study = (await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name: 'Good pattern', modulation: { ...base, angles: [0.3, 0.6] } })).body;
-    const bad = await request(t.app).put(`/api/v1/studies/${study.id}`).set(auth).send({ baseRevision: 1, name: 'Good pattern', modulation: { ...base, angles: [0.6, 0.3] } });
+    const study = (await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name: 'Good pattern', design: patternDesign({ ...base, angles: [0.3, 0.6] }, 100) })).body;
+    const bad = await request(t.app).put(`/api/v1/studies/${study.id}`).set(auth).send({ baseRevision: 1, name: 'Good pattern', design: patternDesign({ ...base, angles: [0.6, 0.3] }, 100) });
     expect(bad.status).toBe(400);
-    expect(bad.body.errors[0].path).toBe('modulation.angles[1]');
+    expect(bad.body.errors[0].path).toBe('design.modulation.angles[1]');
+    // A stored pattern has no carrier: a carrierFrequency is refused naming it.
+    const carrier = await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name: 'Pattern with carrier', design: { ...patternDesign({ ...base, angles: [0.3] }, 100), carrierFrequency: 1000 } });
+    expect(carrier.status).toBe(400);
+    expect(carrier.body.errors[0].path).toBe('design.carrierFrequency');
     const revisions = (await request(t.app).get(`/api/v1/studies/${study.id}/revisions`).set(auth)).body;
     expect(revisions).toHaveLength(1);
   });
 
   it('saves a space-vector study whose line-to-line fundamental is m·vdc', async () => {
-    const created = await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name: 'SVM 0.8', modulation: SPACE_VECTOR, load: { r: 5, l: 0.01, frequency: 50 } });
+    const created = await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name: 'SVM 0.8', design: { ...SPACE_VECTOR_DESIGN, load: { r: 5, l: 0.01 } } });
     expect(created.status, JSON.stringify(created.body)).toBe(201);
-    expect(created.body).toMatchObject({ method: 'space-vector', modulation: SPACE_VECTOR });
+    expect(created.body).toMatchObject({ method: 'space-vector', design: SPACE_VECTOR_DESIGN });
     const { m, vdc, frequencyRatio: n } = SPACE_VECTOR;
     const h = (await spectrumOf(created.body.id, 40)).harmonics;
     // Linear range: |V_LL| = √3·|Vref| = m·vdc (van der Broeck, Skudelny, Stanke, IEEE Trans. Ind.
@@ -117,33 +125,36 @@ describe('space-vector and harmonic-elimination studies', () => {
     // The line-to-line voltage holds no triplen harmonics (balanced three-phase, common practice).
     for (const order of [3, 9, 15, 21, 27, 33, 39]) expect(h[order]!.amplitude).toBeLessThan(1e-9 * h[1]!.amplitude);
 
-    // Revised to the leg output with ma instead of m: leg a's fundamental is |Vref| = ma·vdc/2.
+    // Revised to ma instead of m: the phase-to-star-point fundamental is |Vref| = ma·vdc/2.
     const updated = await request(t.app)
       .put(`/api/v1/studies/${created.body.id}`)
       .set(auth)
-      .send({ baseRevision: 1, name: 'SVM leg', modulation: { method: 'space-vector', ma: 0.9, vdc, frequencyRatio: n, sequence: 'five-segment', clamping: 'dpwm1', output: 'leg' } });
+      .send({ baseRevision: 1, name: 'SVM ma', design: { ...SPACE_VECTOR_DESIGN, modulation: { method: 'space-vector', ma: 0.9, sequence: 'five-segment', clamping: 'dpwm1' } } });
     expect(updated.status, JSON.stringify(updated.body)).toBe(200);
-    const leg = (await spectrumOf(created.body.id, 10)).harmonics;
+    const report = await request(t.app).get(`/api/v1/studies/${created.body.id}/report`).query({ maxOrder: 50, points: 64 }).set(auth);
+    expect(report.status, JSON.stringify(report.body).slice(0, 300)).toBe(200);
+    expect(report.body.bridge.name).toBe('phase a to star point');
     // ma = 2|Vref|/vdc (carrier-style index; Holmes and Lipo 2003, ch. 5), same tolerance as above.
-    expect(Math.abs(leg[1]!.amplitude / ((0.9 * vdc) / 2) - 1)).toBeLessThan(1e-4);
+    expect(Math.abs(report.body.bridge.fundamental / ((0.9 * vdc) / 2) - 1)).toBeLessThan(1e-4);
   });
 
   it('refuses a space-vector study with both or neither of m and ma, or m past six-step, saving nothing', async () => {
     const before = await studyCount();
-    const { m: _m, ...noIndex } = SPACE_VECTOR;
-    const cases: { modulation: object; path: string }[] = [
-      { modulation: { ...SPACE_VECTOR, ma: 0.9 }, path: 'modulation.ma' },
-      { modulation: noIndex, path: 'modulation.m' },
-      { modulation: { ...SPACE_VECTOR, m: 1.2 }, path: 'modulation.m' },
-      { modulation: { ...SPACE_VECTOR, frequencyRatio: 20.5 }, path: 'modulation.frequencyRatio' },
-      { modulation: { ...SPACE_VECTOR, zeroSplit: 2 }, path: 'modulation.zeroSplit' },
-      { modulation: { ...SPACE_VECTOR, sampling: 'natural' }, path: 'modulation.sampling' },
+    const modulation = SPACE_VECTOR_DESIGN.modulation;
+    const cases: { design: object; path: string }[] = [
+      { design: { ...SPACE_VECTOR_DESIGN, modulation: { ...modulation, ma: 0.9 } }, path: 'design.modulation.ma' },
+      { design: { ...SPACE_VECTOR_DESIGN, modulation: { method: 'space-vector' } }, path: 'design.modulation.m' },
+      { design: { ...SPACE_VECTOR_DESIGN, modulation: { ...modulation, m: 1.2 } }, path: 'design.modulation.m' },
+      { design: { ...SPACE_VECTOR_DESIGN, carrierFrequency: 20.5 * 50 }, path: 'design.carrierFrequency' },
+      { design: { ...SPACE_VECTOR_DESIGN, modulation: { ...modulation, zeroSplit: 2 } }, path: 'design.modulation.zeroSplit' },
+      { design: { ...SPACE_VECTOR_DESIGN, modulation: { ...modulation, sampling: 'natural' } }, path: 'design.modulation.sampling' },
+      { design: { ...SPACE_VECTOR_DESIGN, modulation: { ...modulation, frequencyRatio: 201 } }, path: 'design.modulation.frequencyRatio' },
     ];
     for (const c of cases) {
-      const res = await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name: 'Bad SVM', modulation: c.modulation });
-      expect(res.status, JSON.stringify(c.modulation)).toBe(400);
+      const res = await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name: 'Bad SVM', design: c.design });
+      expect(res.status, JSON.stringify(c.design)).toBe(400);
       expect(res.headers['content-type']).toMatch(/application\/problem\+json/);
-      expect((res.body.errors as { path: string }[]).map((e) => e.path)).toContain(c.path);
+      expect((res.body.errors as { path: string }[]).map((e) => e.path), JSON.stringify(c.design)).toContain(c.path);
     }
     expect(await studyCount()).toBe(before);
   });
@@ -155,10 +166,21 @@ describe('space-vector and harmonic-elimination studies', () => {
     expect(Math.abs(spectrum.body.harmonics[1].amplitude / (SPACE_VECTOR.m * SPACE_VECTOR.vdc) - 1)).toBeLessThan(1e-4);
     const waves = await request(t.app).post('/api/v1/waveforms').set(auth).send({ modulation: SPACE_VECTOR });
     expect(waves.status).toBe(200);
-    expect(waves.body.name).toBe('line ab');
-    expect(waves.body.traces.map((x: { name: string }) => x.name)).toEqual(['leg a', 'leg b', 'leg c', 'line ab', 'line bc', 'line ca']);
+    expect(waves.body.name).toBe('line a−b');
+    expect(waves.body.traces.map((x: { name: string }) => x.name)).toEqual([
+      'phase a to star point',
+      'phase b to star point',
+      'phase c to star point',
+      'leg a to DC midpoint',
+      'leg b to DC midpoint',
+      'leg c to DC midpoint',
+      'line a−b',
+      'line b−c',
+      'line c−a',
+    ]);
     // Leg levels ±vdc/2, line levels 0 and ±vdc (two-level legs).
-    expect(new Set(waves.body.traces[0].waveform.levels)).toEqual(new Set([300, -300]));
+    expect(new Set(waves.body.traces[3].waveform.levels)).toEqual(new Set([300, -300]));
+    expect(new Set(waves.body.traces[6].waveform.levels)).toEqual(new Set([600, 0, -600]));
 
     const she = { method: 'selective-harmonic-elimination', kind: 'staircase', vdc: 50, angles: [0.2, 0.5, 0.9] };
     const sheWaves = await request(t.app).post('/api/v1/waveforms').set(auth).send({ modulation: she });

@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO, signIn, testApp, type TestApp } from './helpers.js';
-import { SINE_TRIANGLE } from './fixtures.js';
+import { SINE_TRIANGLE, SINE_TRIANGLE_DESIGN as DESIGN, withMa } from './fixtures.js';
 
 describe('bad input: 400 problem+json naming the field and the range, nothing changed', () => {
   let t: TestApp;
@@ -12,7 +12,7 @@ describe('bad input: 400 problem+json naming the field and the range, nothing ch
     t = await testApp();
     auth = { Authorization: `Bearer ${await signIn(t.app, DEMO.engineer)}` };
     projectId = (await request(t.app).post('/api/v1/projects').set(auth).send({ name: 'Validation' })).body.id;
-    studyId = (await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name: 'S', modulation: SINE_TRIANGLE })).body.id;
+    studyId = (await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name: 'S', design: DESIGN })).body.id;
   });
   afterAll(async () => t.dispose());
 
@@ -36,17 +36,29 @@ describe('bad input: 400 problem+json naming the field and the range, nothing ch
     { name: 'zero sequence unknown', method: 'post', path: () => '/api/v1/spectra', body: { modulation: { method: 'three-phase', ma: 1, mf: 9, vdc: 10, zeroSequence: 'fifth' } }, field: 'modulation.zeroSequence', words: ['min-max'] },
     { name: 'sweep too many points', method: 'post', path: () => '/api/v1/jobs/ma-sweeps', body: { modulation: SINE_TRIANGLE, ma: { from: 0.1, to: 1, points: 401 } }, field: 'ma.points', words: ['≤ 400'] },
     { name: 'SHE too many angles', method: 'post', path: () => '/api/v1/jobs/she-sweeps', body: { kind: 'bipolar', vdc: 1, count: 32, eliminate: [3], fundamental: { from: 0.1, to: 1, points: 3 } }, field: 'count', words: ['≤ 31'] },
-    { name: 'negative load resistance', method: 'post', path: () => '/api/v1/load-current', body: { modulation: SINE_TRIANGLE, load: { r: -1, l: 0.01, frequency: 50 } }, field: 'load.r', words: ['≥ 0'] },
+    { name: 'negative load resistance', method: 'post', path: () => '/api/v1/load-current', body: { design: { ...DESIGN, load: { r: -1, l: 0.01 } } }, field: 'design.load.r', words: ['≥ 0.000001'] },
     { name: 'space vector angle', method: 'post', path: () => '/api/v1/space-vector', body: { m: 0.5, theta: 7 }, field: 'theta', words: ['< 6.28'] },
     { name: 'timer clock zero', method: 'post', path: () => '/api/v1/timer-tables', body: { modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.5 }, fundamentalFrequency: 50, carrierFrequency: 1000, timerClock: 0 }, field: 'timerClock', words: ['> 0'] },
-    { name: 'study edit with ma out of range', method: 'put', path: () => `/api/v1/studies/${studyId}`, body: { baseRevision: 1, name: 'S', modulation: { ...SINE_TRIANGLE, ma: -1 } }, field: 'modulation.ma', words: ['> 0'] },
-    { name: 'study with an empty name', method: 'post', path: () => '/api/v1/studies', body: { projectId, name: '', modulation: SINE_TRIANGLE }, field: 'name', words: ['1 to 120 characters'] },
+    { name: 'study edit with ma out of range', method: 'put', path: () => `/api/v1/studies/${studyId}`, body: { baseRevision: 1, name: 'S', design: withMa(DESIGN, -1) }, field: 'design.modulation.ma', words: ['> 0', '≤ 4', 'got -1'] },
+    { name: 'study with an empty name', method: 'post', path: () => '/api/v1/studies', body: () => ({ projectId, name: '', design: DESIGN }), field: 'name', words: ['1 to 120 characters'] },
+    { name: 'study with the old modulation field', method: 'post', path: () => '/api/v1/studies', body: () => ({ projectId, name: 'S', modulation: SINE_TRIANGLE }), field: 'modulation', words: ['not a known field', 'design'] },
+    { name: 'study with a carrier that is no whole multiple', method: 'post', path: () => '/api/v1/studies', body: () => ({ projectId, name: 'S', design: { ...DESIGN, carrierFrequency: 1075 } }), field: 'design.carrierFrequency', words: ['whole multiple (1 to 1000) of fundamentalFrequency 50 Hz', 'got 1075'] },
+    { name: 'study with a frequency ratio above 1000', method: 'post', path: () => '/api/v1/studies', body: () => ({ projectId, name: 'S', design: { ...DESIGN, carrierFrequency: 50_050 } }), field: 'design.carrierFrequency', words: ['1 to 1000'] },
+    { name: 'design with the filter resistor of the old shape', method: 'post', path: () => '/api/v1/designs/report', body: { design: { ...DESIGN, filter: { l: 0.001, c: 1e-5, loadR: 10 } } }, field: 'design.filter.loadR', words: ['not a known field'] },
+    { name: 'design with vdc inside the modulation', method: 'post', path: () => '/api/v1/designs/report', body: { design: { ...DESIGN, modulation: { ...DESIGN.modulation, vdc: 400 } } }, field: 'design.modulation.vdc', words: ['not a known field'] },
+    { name: 'design with a fundamental frequency of zero', method: 'post', path: () => '/api/v1/designs/report', body: { design: { ...DESIGN, fundamentalFrequency: 0 } }, field: 'design.fundamentalFrequency', words: ['≥ 0.001', '≤ 100000', 'got 0'] },
+    { name: 'design with a capacitance of zero', method: 'post', path: () => '/api/v1/designs/report', body: { design: { ...DESIGN, filter: { l: 0.001, c: 0 } } }, field: 'design.filter.c', words: ['≥ 1e-12', '≤ 1'] },
+    { name: 'report with a maxOrder below 50', method: 'post', path: () => '/api/v1/designs/report', body: { design: DESIGN, maxOrder: 10 }, field: 'maxOrder', words: ['≥ 50', '≤ 5000'] },
+    { name: 'load-current of a design without a load', method: 'post', path: () => '/api/v1/load-current', body: { design: DESIGN }, field: 'design.load', words: ['required'] },
+    { name: 'filters/lc of a design without a filter', method: 'post', path: () => '/api/v1/filters/lc', body: { design: { ...DESIGN, filter: null } }, field: 'design.filter', words: ['required'] },
+    { name: 'spectra asking a leg of a single-phase bridge', method: 'post', path: () => '/api/v1/spectra', body: { modulation: SINE_TRIANGLE, output: 'leg' }, field: 'output', words: ["'phase'", 'single-phase'] },
   ];
 
   for (const c of cases) {
     it(c.name, async () => {
       const before = await snapshot();
-      const res = await request(t.app)[c.method](c.path()).set(auth).send(c.body as object);
+      const body = typeof c.body === 'function' ? (c.body as () => object)() : c.body;
+      const res = await request(t.app)[c.method](c.path()).set(auth).send(body as object);
       expect(res.status, JSON.stringify(res.body)).toBe(400);
       expect(res.headers['content-type']).toMatch(/^application\/problem\+json/);
       expect(res.body).toMatchObject({ type: expect.stringContaining('validation'), title: 'Bad request', status: 400 });

@@ -1,15 +1,20 @@
 import type { Sequelize } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
 import * as initialSchema from '../migrations/0001-initial-schema.js';
+import * as studyDesign from '../migrations/0002-study-design.js';
 
 /** The migrations in order; listed by hand so src/ and dist/ run the same set. */
-const MIGRATIONS = [{ name: '0001-initial-schema', ...initialSchema }];
+export const MIGRATIONS = [
+  { name: '0001-initial-schema', up: initialSchema.up, down: initialSchema.down },
+  { name: '0002-study-design', up: studyDesign.up, down: studyDesign.down },
+];
 
 /**
- * Applies pending migrations. Returns true when the database was new (no migration had run),
+ * Applies pending migrations (up to and including `upTo` when given: tests build a database of
+ * an earlier release that way). Returns true when the database was new (no migration had run),
  * which is when the demo scenario is seeded.
  */
-export async function migrate(sequelize: Sequelize): Promise<{ fresh: boolean; applied: string[] }> {
+export async function migrate(sequelize: Sequelize, upTo?: string): Promise<{ fresh: boolean; applied: string[] }> {
   const umzug = new Umzug({
     migrations: MIGRATIONS.map(({ name, up, down }) => ({
       name,
@@ -21,6 +26,6 @@ export async function migrate(sequelize: Sequelize): Promise<{ fresh: boolean; a
     logger: undefined,
   });
   const executed = await umzug.executed();
-  const applied = await umzug.up();
+  const applied = await umzug.up(upTo === undefined ? {} : { to: upTo });
   return { fresh: executed.length === 0, applied: applied.map((m) => m.name) };
 }

@@ -1,4 +1,5 @@
 import { DataTypes, Model, type ModelStatic, type Optional, type Sequelize } from 'sequelize';
+import type { InverterDesign } from '@pulsewright/modulation';
 
 export type Role = 'viewer' | 'engineer' | 'admin';
 export const ROLES: readonly Role[] = ['viewer', 'engineer', 'admin'];
@@ -58,6 +59,9 @@ export interface StudyRevisionAttributes extends Timestamps {
   revision: number;
   name: string;
   method: string;
+  /** The revision's InverterDesign (migration 0002 filled it for older rows). */
+  design: InverterDesign;
+  /** Columns of the previous release, kept as they were (see services/studies.ts, legacyColumns). */
   parameters: Record<string, unknown>;
   load: Record<string, unknown> | null;
   filter: Record<string, unknown> | null;
@@ -244,6 +248,7 @@ function defineTables(
       revision: { type: DataTypes.INTEGER, allowNull: false },
       name: text(),
       method: text(),
+      design: { type: DataTypes.JSON, allowNull: false },
       parameters: { type: DataTypes.JSON, allowNull: false },
       load: { type: DataTypes.JSON, allowNull: true },
       filter: { type: DataTypes.JSON, allowNull: true },

@@ -2,15 +2,16 @@ import { Router } from 'express';
 import { principalOf } from '../auth/authorize.js';
 import { intQuery } from '../http/query.js';
 import {
+  checkDesignLimits,
   computeFilter,
   computeLoadCurrent,
   computeSpaceVector,
   computeSpectrum,
   computeTimerTable,
-  modulationWaveforms,
+  designReport,
+  modulationOutput,
   type TimerFormat,
 } from '../services/compute.js';
-import { checkHarmonicLimits } from '../services/harmonicLimits.js';
 import type { Services } from '../services/index.js';
 import { maSweepWork, sheSweepWork } from '../services/sweeps.js';
 
@@ -20,17 +21,21 @@ export function computeRoutes(services: Services): Router {
   const { jobs } = services;
 
   router.post('/api/v1/spectra', (req, res) => {
-    res.json(computeSpectrum(req.body.modulation, req.body.maxOrder ?? 100));
+    res.json(computeSpectrum(req.body.modulation, req.body.maxOrder ?? 100, req.body.output));
   });
   router.post('/api/v1/waveforms', (req, res) => {
-    res.json(modulationWaveforms(req.body.modulation));
+    res.json(modulationOutput(req.body.modulation, req.body.output));
+  });
+  router.post('/api/v1/designs/report', (req, res) => {
+    const { design, ...options } = req.body;
+    res.json(designReport(design, options));
   });
   router.post('/api/v1/load-current', (req, res) => {
-    res.json(computeLoadCurrent(req.body.modulation, req.body.load, req.body.points ?? 500));
+    res.json(computeLoadCurrent(req.body.design, req.body.points));
   });
   router.post('/api/v1/filters/lc', (req, res) => {
-    const { filter, modulation, maxOrder = 100, fundamentalFrequency = 50 } = req.body;
-    res.json(computeFilter(filter, modulation ? { modulation, maxOrder, fundamentalFrequency } : undefined));
+    const { design, ...options } = req.body;
+    res.json(computeFilter(design, options));
   });
   router.post('/api/v1/space-vector', (req, res) => {
     const { m, theta, ...options } = req.body;
@@ -47,7 +52,7 @@ export function computeRoutes(services: Services): Router {
       .send(file.body);
   });
   router.post('/api/v1/harmonic-limits/check', (req, res) => {
-    res.json(checkHarmonicLimits(modulationWaveforms(req.body.modulation).waveform, req.body.busVoltage));
+    res.json(checkDesignLimits(req.body.design, req.body.busVoltage));
   });
 
   router.get('/api/v1/jobs', async (req, res) => {

@@ -1,7 +1,7 @@
 import { Router } from 'express';
-import { intQuery } from '../http/query.js';
+import { intQuery, numberQuery, optionalIntQuery } from '../http/query.js';
 import { principalOf } from '../auth/authorize.js';
-import { assertModulation, computeSpectrum, type ModulationInput } from '../services/compute.js';
+import { assertDesign, designReport, designSpectrum } from '../services/compute.js';
 import type { Services } from '../services/index.js';
 
 /** Projects and studies (every study edit is a new revision). */
@@ -35,7 +35,7 @@ export function studyRoutes(services: Services): Router {
   });
   router.post('/api/v1/studies', async (req, res) => {
     const { projectId, ...content } = req.body;
-    assertModulation(content.modulation);
+    assertDesign(content.design);
     res.status(201).json(await studies.create(principalOf(req), projectId, content));
   });
   router.get('/api/v1/studies/:id', async (req, res) => {
@@ -43,7 +43,7 @@ export function studyRoutes(services: Services): Router {
   });
   router.put('/api/v1/studies/:id', async (req, res) => {
     const { baseRevision, ...content } = req.body;
-    assertModulation(content.modulation);
+    assertDesign(content.design);
     res.json(await studies.update(principalOf(req), req.params.id, baseRevision, content));
   });
   router.post('/api/v1/studies/:id/duplicate', async (req, res) => {
@@ -57,7 +57,20 @@ export function studyRoutes(services: Services): Router {
   });
   router.get('/api/v1/studies/:id/spectrum', async (req, res) => {
     const study = await studies.get(principalOf(req).teamId, req.params.id);
-    res.json(computeSpectrum(study.modulation as ModulationInput, intQuery(req, 'maxOrder', 100)));
+    res.json(designSpectrum(study.design, intQuery(req, 'maxOrder', 100)));
+  });
+  router.get('/api/v1/studies/:id/report', async (req, res) => {
+    const maxOrder = optionalIntQuery(req, 'maxOrder', 100);
+    const points = optionalIntQuery(req, 'points', 1200);
+    const busVoltage = numberQuery(req, 'busVoltage');
+    const study = await studies.get(principalOf(req).teamId, req.params.id);
+    res.json(
+      designReport(study.design, {
+        ...(maxOrder !== undefined ? { maxOrder } : {}),
+        ...(points !== undefined ? { points } : {}),
+        ...(busVoltage !== undefined ? { busVoltage } : {}),
+      }),
+    );
   });
   return router;
 }

@@ -1,9 +1,9 @@
-import { fftSpectrum, harmonics, type FftWindowName } from '@pulsewright/modulation';
+import { fftSpectrum, type FftWindowName } from '@pulsewright/modulation';
 import type { CaptureRow, Models } from '../models/index.js';
 import { badRequest, notFound } from '../http/errors.js';
 import type { AuditLog } from './audit.js';
 import { parseCaptureCsv, sanitiseFileName } from './captureCsv.js';
-import { modulationWaveforms, type ModulationInput } from './compute.js';
+import { designSpectrum } from './compute.js';
 import { iso } from './dto.js';
 import { callLibrary } from './library.js';
 import type { Principal } from './principal.js';
@@ -104,12 +104,14 @@ export class CaptureService {
     return { captureId: row.id, column: options.column, ...spectrum };
   }
 
-  /** Measured harmonics of a capture against the exact prediction of a study, order by order. */
+  /**
+   * Measured harmonics of a capture against the exact prediction of a study, order by order: the
+   * study's bridge voltage as GET /studies/{id}/spectrum gives it (line a−b for three-phase).
+   */
   async compare(teamId: string, id: string, studyId: string, options: AnalysisOptions) {
     const measured = await this.analyse(teamId, id, { ...options, column: 'voltage' });
     const study = await this.studies.get(teamId, studyId);
-    const { waveform } = modulationWaveforms(study.modulation as ModulationInput);
-    const predicted = callLibrary('', () => harmonics(waveform, options.maxOrder));
+    const predicted = designSpectrum(study.design, options.maxOrder, 'study.design').harmonics;
     const orders = measured.harmonics.map((h) => {
       const p = predicted[h.order]?.amplitude ?? 0;
       return {

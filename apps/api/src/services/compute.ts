@@ -1,185 +1,167 @@
 import {
-  type SineTriangleOptions,
-  type ThreePhaseOptions,
-  type SpaceVectorWaveformOptions,
-  filteredSpectrum,
+  analyseDesign,
+  designModulation,
   harmonics,
-  lcFilter,
-  rlCurrentSeries,
-  rlSteadyState,
-  sheWaveform,
-  sineTriangle,
+  modulationVoltages,
   spaceVectorSequence,
-  spaceVectorWaveforms,
   thd,
-  threePhase,
   timerTable,
   timerTableToCHeader,
   timerTableToCsv,
   timerTableToJson,
-  wthd,
+  waveformThd,
+  waveformWthd,
+  type AnalyseDesignOptions,
+  type DesignReport,
   type Harmonic,
-  type LcFilterCharacteristics,
-  type LcFilterOptions,
-  type RlLoadOptions,
-  type RlSteadyState,
+  type InverterDesign,
+  type Modulation,
+  type NamedVoltage,
+  type SineTriangleModulation,
   type SpaceVectorSequence,
   type SpaceVectorSequenceOptions,
+  type ThreePhaseCarrierModulation,
   type TimerTableOptions,
   type Waveform,
-  type SheKind,
-  ParameterRangeError,
 } from '@pulsewright/modulation';
+import { badRequest } from '../http/errors.js';
 import { callLibrary, finiteResult } from './library.js';
 
-/** Which output of a three-phase bridge spectra analyse. @default 'line-to-line' */
-type ThreePhaseOutput = { output?: 'line-to-line' | 'leg' };
-
-/** The fields of the library's `sineTriangle`, chosen by `method`. */
-export type SineTriangleInput = { method: 'sine-triangle' } & SineTriangleOptions;
-/** The fields of the library's `threePhase`, chosen by `method`. */
-export type ThreePhaseInput = { method: 'three-phase' } & ThreePhaseOptions & ThreePhaseOutput;
-/** The fields of the library's `spaceVectorWaveforms` (one of m and ma), whole frequency ratio. */
-export type SpaceVectorInput = { method: 'space-vector' } & SpaceVectorWaveformOptions & ThreePhaseOutput;
 /**
- * A solved selective-harmonic-elimination pattern: the first-quarter angles define the
- * waveform (the library's sheWaveform); `eliminate` and `fundamental` record the solve's goal.
+ * Which voltage of a three-phase bridge the spectrum and waveform routes analyse: line a−b (the
+ * default, as scripts have always read it), leg a to the DC midpoint, or phase a to the star
+ * point of a balanced star load. A single-phase bridge has one output, its `phase` voltage.
  */
-export type SheInput = {
-  method: 'selective-harmonic-elimination';
-  kind: SheKind;
-  vdc: number;
-  angles: number[];
-  eliminate?: number[];
-  fundamental?: number;
-};
-export type ModulationInput = SineTriangleInput | ThreePhaseInput | SpaceVectorInput | SheInput;
+export type VoltageOutput = 'line-to-line' | 'leg' | 'phase';
+
 /** The methods whose modulation index a sweep can vary. */
-export type CarrierModulationInput = SineTriangleInput | ThreePhaseInput;
+export type CarrierModulation = SineTriangleModulation | ThreePhaseCarrierModulation;
 
 export interface SpectrumResult {
+  /** The voltage analysed, named by the library (e.g. `bridge output`, `line a−b`). */
+  name: string;
   harmonics: Harmonic[];
+  /** Exact over the whole waveform (waveformThd, waveformWthd). */
   thd: number;
   wthd: number;
+  /** THD of orders 2..maxOrder only. */
+  spectrumThd: number;
 }
 
 export interface WaveformResult {
   name: string;
   waveform: Waveform;
-  traces: { name: string; waveform: Waveform }[];
+  traces: NamedVoltage[];
 }
 
-/** The analysed output waveform (and every trace) of a modulation, from the library. */
-export function modulationWaveforms(modulation: ModulationInput, prefix = 'modulation.'): WaveformResult {
-  return callLibrary(prefix, () => {
-    if (modulation.method === 'sine-triangle') {
-      const { method: _method, ...options } = modulation;
-      const waveform = sineTriangle(options);
-      return { name: 'bridge output', waveform, traces: [{ name: 'bridge output', waveform }] };
+/** Report options the library names by themselves (the rest of its fields sit in the design). */
+const OPTION_FIELDS = ['maxOrder', 'points', 'busVoltage'] as const;
+
+/**
+ * The voltage of a modulation that spectra and waveforms analyse, with every named voltage of
+ * the bridge, from the library's `modulationVoltages` (the one dispatch over methods).
+ * @param prefix - where the modulation sits in the request, for the field names of errors
+ */
+export function modulationOutput(modulation: Modulation, output?: VoltageOutput, prefix = 'modulation.'): WaveformResult {
+  const voltages = callLibrary(prefix, () => modulationVoltages(modulation));
+  const traces = [...voltages.phases, ...voltages.legs, ...voltages.lines];
+  if (voltages.phaseCount === 1) {
+    if (output !== undefined && output !== 'phase') {
+      const message = `output must be 'phase' or left out for method '${modulation.method}': a single-phase bridge has one output voltage; got ${JSON.stringify(output)}`;
+      throw badRequest(message, [{ path: 'output', message }]);
     }
-    if (modulation.method === 'space-vector') return spaceVectorOutput(modulation);
-    if (modulation.method === 'selective-harmonic-elimination') return sheOutput(modulation);
-    const { method: _method, output = 'line-to-line', ...options } = modulation;
-    const result = threePhase(options);
-    const traces = [
-      { name: 'leg a', waveform: result.legs.a },
-      { name: 'leg b', waveform: result.legs.b },
-      { name: 'leg c', waveform: result.legs.c },
-      { name: 'line ab', waveform: result.lineToLine.ab },
-      { name: 'line bc', waveform: result.lineToLine.bc },
-      { name: 'line ca', waveform: result.lineToLine.ca },
-    ];
-    return output === 'leg'
-      ? { name: 'leg a', waveform: result.legs.a, traces }
-      : { name: 'line ab', waveform: result.lineToLine.ab, traces };
-  });
+    const [bridge] = voltages.phases as [NamedVoltage];
+    return { name: bridge.name, waveform: bridge.waveform, traces };
+  }
+  const chosen = (output === 'leg' ? voltages.legs : output === 'phase' ? voltages.phases : voltages.lines)[0] as NamedVoltage;
+  return { name: chosen.name, waveform: chosen.waveform, traces };
 }
 
-function spaceVectorOutput(modulation: SpaceVectorInput): WaveformResult {
-  const { method: _method, output = 'line-to-line', ...options } = modulation;
-  const result = spaceVectorWaveforms(options);
-  const traces = [
-    { name: 'leg a', waveform: result.a },
-    { name: 'leg b', waveform: result.b },
-    { name: 'leg c', waveform: result.c },
-    { name: 'line ab', waveform: result.ab },
-    { name: 'line bc', waveform: result.bc },
-    { name: 'line ca', waveform: result.ca },
-  ];
-  return output === 'leg' ? { name: 'leg a', waveform: result.a, traces } : { name: 'line ab', waveform: result.ab, traces };
+/** Exact spectrum to maxOrder of one voltage, with THD and WTHD exact over the whole waveform. */
+export function voltageSpectrum(voltage: NamedVoltage, maxOrder: number, field = 'modulation'): SpectrumResult {
+  const result = callLibrary(`${field}.`, () => {
+    const spectrum = harmonics(voltage.waveform, maxOrder);
+    return {
+      name: voltage.name,
+      harmonics: spectrum,
+      thd: waveformThd(voltage.waveform),
+      wthd: waveformWthd(voltage.waveform),
+      spectrumThd: thd(spectrum),
+    };
+  });
+  return finiteResult(field, result);
 }
 
-function sheOutput(modulation: SheInput): WaveformResult {
-  const { kind, vdc, angles, eliminate = [] } = modulation;
-  // The schema bounds each order; oddness is the library's rule for what can be eliminated
-  // (quarter-wave symmetry leaves no even harmonics), checked here because the pattern is
-  // stored, not solved.
-  eliminate.forEach((order, i) => {
-    if (order % 2 === 0) {
-      throw new ParameterRangeError(`eliminate[${i}]`, 'an odd order ≥ 3 (quarter-wave symmetry leaves no even harmonics)', order);
-    }
-  });
-  const waveform = sheWaveform(angles, { kind, vdc });
-  const name = kind === 'staircase' ? 'staircase output' : 'bridge output';
-  return { name, waveform, traces: [{ name, waveform }] };
+export function computeSpectrum(modulation: Modulation, maxOrder: number, output?: VoltageOutput): SpectrumResult {
+  return voltageSpectrum(modulationOutput(modulation, output), maxOrder);
+}
+
+/** The spectrum of a design's bridge as /spectra gives it for the design's full modulation. */
+export function designSpectrum(design: InverterDesign, maxOrder: number, field = 'design'): SpectrumResult {
+  const modulation = callLibrary(`${field}.`, () => designModulation(design));
+  return voltageSpectrum(modulationOutput(modulation, undefined, `${field}.modulation.`), maxOrder, field);
 }
 
 /**
- * Refuses (400 naming the field) a modulation the library will not build, so a study is
- * never stored with one: the schema bounds each field, the library checks what a schema
- * cannot (first-quarter angles ascending, exactly one of m and ma).
+ * The design report (the library's analyseDesign). Errors name the field by its path in the
+ * request: `design.modulation.ma`, `design.carrierFrequency`, or the option (`maxOrder`).
  */
-export function assertModulation(modulation: ModulationInput, prefix = 'modulation.'): void {
-  modulationWaveforms(modulation, prefix);
+export function designReport(design: InverterDesign, options: AnalyseDesignOptions = {}, field = 'design'): DesignReport {
+  const report = callLibrary(`${field}.`, () => analyseDesign(design, options), OPTION_FIELDS);
+  return finiteResult(field, report);
+}
+
+/**
+ * Refuses (400 naming `design.<field>` in the library's words) a design the library will not
+ * analyse, so a study is never stored with one: the schema bounds each field, assertInverterDesign
+ * and a trial analysis check what a schema cannot (a whole frequency ratio, ascending angles,
+ * exactly one of m and ma, a filter or load so extreme its figures leave double precision).
+ */
+export function assertDesign(design: InverterDesign, field = 'design'): void {
+  designReport(design, { maxOrder: 50, points: 64 }, field);
 }
 
 /** A function from ma to the analysed waveform, for sweeps of the carrier methods. */
-export function waveformAtMa(modulation: CarrierModulationInput): (ma: number) => Waveform {
-  return (ma) => modulationWaveforms({ ...modulation, ma }).waveform;
+export function waveformAtMa(modulation: CarrierModulation): (ma: number) => Waveform {
+  return (ma) => modulationOutput({ ...modulation, ma }).waveform;
 }
 
-export function spectrumOf(waveform: Waveform, maxOrder: number): SpectrumResult {
-  const result = callLibrary('', () => {
-    const spectrum = harmonics(waveform, maxOrder);
-    return { harmonics: spectrum, thd: thd(spectrum), wthd: wthd(spectrum) };
-  });
-  return finiteResult('modulation', result);
+/** The part of a design's report that the load-current route returns (currents of each phase). */
+export interface LoadCurrentResult {
+  phaseCount: 1 | 3;
+  voltage: string;
+  currents: DesignReport['currents'];
+  loadPower: number;
 }
 
-export function computeSpectrum(modulation: ModulationInput, maxOrder: number): SpectrumResult {
-  return spectrumOf(modulationWaveforms(modulation).waveform, maxOrder);
+export function computeLoadCurrent(design: InverterDesign, points?: number): LoadCurrentResult {
+  if (!design.load) {
+    const message = 'design.load is required: the currents are those of the design\'s load (r, l and an optional emf)';
+    throw badRequest(message, [{ path: 'design.load', message }]);
+  }
+  const report = designReport(design, points === undefined ? {} : { points });
+  return { phaseCount: report.phaseCount, voltage: report.bridge.name, currents: report.currents, loadPower: report.loadPower ?? 0 };
 }
 
-export interface LoadCurrentResult extends RlSteadyState {
-  series: { angles: number[]; current: number[] };
-}
-
-export function computeLoadCurrent(modulation: ModulationInput, load: RlLoadOptions, points: number): LoadCurrentResult {
-  const { waveform } = modulationWaveforms(modulation);
-  const result = callLibrary('load.', () => ({
-    ...rlSteadyState(waveform, load),
-    series: rlCurrentSeries(waveform, { ...load, points }),
-  }));
-  return finiteResult('load', result);
-}
-
+/** The part of a design's report that the filter route returns. */
 export interface FilterResult {
-  characteristics: LcFilterCharacteristics;
-  output: SpectrumResult | null;
+  filter: NonNullable<DesignReport['filter']>;
+  bridge: DesignReport['bridge'];
+  output: NonNullable<DesignReport['output']>;
 }
 
-export function computeFilter(
-  filter: LcFilterOptions,
-  spectrumInput?: { modulation: ModulationInput; maxOrder: number; fundamentalFrequency: number },
-): FilterResult {
-  const characteristics = finiteResult('filter', callLibrary('filter.', () => lcFilter(filter)));
-  if (!spectrumInput) return { characteristics, output: null };
-  const input = computeSpectrum(spectrumInput.modulation, spectrumInput.maxOrder);
-  const output = callLibrary('', () => {
-    const spectrum = filteredSpectrum(input.harmonics, { filter, fundamentalFrequency: spectrumInput.fundamentalFrequency });
-    return { harmonics: spectrum, thd: thd(spectrum), wthd: wthd(spectrum) };
-  });
-  return { characteristics, output: finiteResult('filter', output) };
+export function computeFilter(design: InverterDesign, options: Pick<AnalyseDesignOptions, 'maxOrder' | 'points'>): FilterResult {
+  if (!design.filter) {
+    const message = 'design.filter is required: give the LC filter (l, c and optional damping) to analyse';
+    throw badRequest(message, [{ path: 'design.filter', message }]);
+  }
+  const report = designReport(design, options);
+  return { filter: report.filter as FilterResult['filter'], bridge: report.bridge, output: report.output as FilterResult['output'] };
+}
+
+/** The harmonic-limit check of a design's report (at the filter's output where there is one). */
+export function checkDesignLimits(design: InverterDesign, busVoltage?: number): DesignReport['limitCheck'] {
+  return designReport(design, busVoltage === undefined ? {} : { busVoltage }).limitCheck;
 }
 
 export function computeSpaceVector(m: number, theta: number, options: SpaceVectorSequenceOptions): SpaceVectorSequence {

@@ -3,21 +3,22 @@ import { HttpError } from '../http/errors.js';
 /**
  * Calls the modulation library and turns its input errors (ParameterRangeError,
  * ParameterTypeError, any RangeError) into a 400 whose path is the API field: the library
- * names `ma`, the request names `modulation.ma`, so `prefix` is prepended to path and message.
+ * names `ma`, the request names `modulation.ma`, so `prefix` is prepended to path and message,
+ * except for the `unprefixed` fields, which sit at the top of the request (e.g. `maxOrder`).
  */
-export function callLibrary<T>(prefix: string, work: () => T): T {
+export function callLibrary<T>(prefix: string, work: () => T, unprefixed: readonly string[] = []): T {
   try {
     return work();
   } catch (error) {
-    throw asBadRequest(prefix, error);
+    throw asBadRequest(prefix, error, unprefixed);
   }
 }
 
-export function asBadRequest(prefix: string, error: unknown): unknown {
+export function asBadRequest(prefix: string, error: unknown, unprefixed: readonly string[] = []): unknown {
   if (!(error instanceof RangeError || error instanceof TypeError)) return error;
   const field = (error as { field?: unknown }).field;
   if (typeof field === 'string') {
-    const path = `${prefix}${field}`;
+    const path = unprefixed.includes(field) ? field : `${prefix}${field}`;
     const message = error.message.startsWith(field) ? `${path}${error.message.slice(field.length)}` : error.message;
     return new HttpError(400, message, [{ path, message }]);
   }

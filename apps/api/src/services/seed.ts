@@ -1,6 +1,5 @@
-import { rlCurrentAt, TAU, waveformValueAt } from '@pulsewright/modulation';
+import { designModulation, modulationVoltages, rlCurrentAt, TAU, waveformValueAt, type InverterDesign, type Waveform } from '@pulsewright/modulation';
 import type { Role } from '../models/index.js';
-import { modulationWaveforms, type ModulationInput } from './compute.js';
 import type { Services } from './index.js';
 import type { Principal } from './principal.js';
 import type { StudyContent } from './studies.js';
@@ -13,16 +12,33 @@ export const DEMO_USERS: readonly { email: string; name: string; role: Role }[] 
   { email: 'viewer@kestrel.example', name: 'Tomas Reyes', role: 'viewer' },
 ];
 
+/** The pump motor at rated slip, modelled per phase as R–L (invented values). */
+const PUMP_LOAD = { r: 15.5, l: 0.021 };
+
 const PUMP_BASELINE: StudyContent = {
   name: 'Unipolar 20 kHz baseline',
-  modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.86, mf: 400, vdc: 375, sampling: 'natural', carrierPhase: 0 },
-  load: { r: 15.5, l: 0.021, frequency: 50 },
-  filter: { l: 0.0011, c: 0.0000068, rDamping: 2.2, dampingPlacement: 'series-with-capacitor' },
+  design: {
+    vdc: 375,
+    fundamentalFrequency: 50,
+    carrierFrequency: 20_000,
+    modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.86, sampling: 'natural', carrierPhase: 0 },
+    filter: { l: 0.0011, c: 0.0000068, rDamping: 2.2, dampingPlacement: 'series-with-capacitor' },
+    load: PUMP_LOAD,
+  },
   note: 'Pump motor modelled as RL at the rated slip; filter sized for about 1.8 kHz resonance.',
 };
 
-/** The bench capture is taken at a low frequency ratio so its pulses are visible at 250 kS/s. */
-const BENCH_MODULATION: ModulationInput = { method: 'sine-triangle', scheme: 'unipolar', ma: 0.8, mf: 42, vdc: 360 };
+/** The bench capture is taken at a low frequency ratio (42) so its pulses are visible at 250 kS/s. */
+const BENCH_DESIGN: InverterDesign = {
+  vdc: 360,
+  fundamentalFrequency: 50,
+  carrierFrequency: 2100,
+  modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.8 },
+  load: { r: 12, l: 0.018 },
+};
+
+/** The 7.5 kW drive's motor per phase (star), invented. */
+const DRIVE_LOAD = { r: 2.4, l: 0.0085 };
 
 /**
  * Seeds a new database with the Kestrel Drives scenario: the team, four people sharing the
@@ -60,35 +76,46 @@ export async function seedDemo(services: Services, password: string): Promise<vo
   // A second revision: the team settled on a slightly higher index after a bus-voltage review.
   await studies.update(ravi, baseline.id, baseline.revision, {
     ...PUMP_BASELINE,
-    modulation: { ...PUMP_BASELINE.modulation, ma: 0.88 },
+    design: { ...PUMP_BASELINE.design, modulation: { ...PUMP_BASELINE.design.modulation, ma: 0.88 } as InverterDesign['modulation'] },
     note: `${PUMP_BASELINE.note} Index raised to 0.88 for the low-line case.`,
   });
   await studies.create(ravi, pump.id, {
     name: 'Bipolar comparison',
-    modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.88, mf: 399, vdc: 375, sampling: 'natural', carrierPhase: 0 },
-    load: PUMP_BASELINE.load ?? null,
-    filter: null,
+    design: {
+      vdc: 375,
+      fundamentalFrequency: 50,
+      carrierFrequency: 19_950,
+      modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.88, sampling: 'natural', carrierPhase: 0 },
+      filter: null,
+      load: PUMP_LOAD,
+    },
     note: 'Two-level switching for comparison: simpler gate drive, larger ripple.',
   });
   await studies.create(lena, drive.id, {
     name: 'Third-harmonic injection, 8 kHz',
-    modulation: { method: 'three-phase', ma: 1.08, mf: 160, vdc: 650, zeroSequence: 'third-harmonic', sampling: 'natural', carrierPhase: 0 },
-    load: { r: 2.4, l: 0.0085, frequency: 50 },
-    filter: null,
+    design: {
+      vdc: 650,
+      fundamentalFrequency: 50,
+      carrierFrequency: 8000,
+      modulation: { method: 'three-phase', ma: 1.08, zeroSequence: 'third-harmonic', sampling: 'natural', carrierPhase: 0 },
+      load: DRIVE_LOAD,
+    },
     note: 'Linear up to ma ≈ 1.15 with 1/6 third-harmonic injection.',
   });
   await studies.create(lena, drive.id, {
     name: 'Centred space vector (min-max), 8 kHz',
-    modulation: { method: 'three-phase', ma: 1.1, mf: 160, vdc: 650, zeroSequence: 'min-max', sampling: 'regular-symmetric', carrierPhase: 0 },
-    load: { r: 2.4, l: 0.0085, frequency: 50 },
-    filter: null,
+    design: {
+      vdc: 650,
+      fundamentalFrequency: 50,
+      carrierFrequency: 8000,
+      modulation: { method: 'three-phase', ma: 1.1, zeroSequence: 'min-max', sampling: 'regular-symmetric', carrierPhase: 0 },
+      load: DRIVE_LOAD,
+    },
     note: 'Regular-symmetric sampling as the controller will run it.',
   });
   await studies.create(ravi, pump.id, {
     name: 'Bench prototype (42 × 50 Hz carrier)',
-    modulation: BENCH_MODULATION as StudyContent['modulation'],
-    load: { r: 12, l: 0.018, frequency: 50 },
-    filter: null,
+    design: BENCH_DESIGN,
     note: 'Settings of the first bench prototype, for comparison with the capture.',
   });
 
@@ -118,11 +145,11 @@ function mulberry32(seed: number): () => number {
  */
 export function benchCaptureCsv(): string {
   const sampleRate = 250_000;
-  const frequency = 50;
+  const frequency = BENCH_DESIGN.fundamentalFrequency;
   const rows = (2 * sampleRate) / frequency;
-  const { waveform } = modulationWaveforms(BENCH_MODULATION);
+  const waveform = modulationVoltages(designModulation(BENCH_DESIGN)).phases[0]?.waveform as Waveform;
   const angles = Array.from({ length: rows }, (_, k) => ((TAU * frequency * k) / sampleRate) % TAU);
-  const current = rlCurrentAt(waveform, angles, { r: 12, l: 0.018, frequency });
+  const current = rlCurrentAt(waveform, angles, { ...(BENCH_DESIGN.load as { r: number; l: number }), frequency });
   const random = mulberry32(0x6b657374); // "kest"
   const noise = (scale: number) => (random() + random() + random() - 1.5) * scale;
   const lines = ['time_s,voltage_v,current_a'];

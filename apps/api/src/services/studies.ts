@@ -1,3 +1,4 @@
+import { designModulation, type InverterDesign } from '@pulsewright/modulation';
 import { Op, Transaction, UniqueConstraintError } from 'sequelize';
 import type { Models, StudyRevisionRow, StudyRow } from '../models/index.js';
 import { conflict, notFound } from '../http/errors.js';
@@ -6,12 +7,10 @@ import { iso } from './dto.js';
 import type { Principal } from './principal.js';
 import { containsText, type ProjectService } from './projects.js';
 
-/** The content of one revision as the API reads and writes it. */
+/** The content of one revision as the API reads and writes it: a name, the design, a note. */
 export interface StudyContent {
   name: string;
-  modulation: Record<string, unknown> & { method: string };
-  load?: Record<string, unknown> | null;
-  filter?: Record<string, unknown> | null;
+  design: InverterDesign;
   note?: string;
 }
 
@@ -21,9 +20,7 @@ export interface StudyDto {
   revision: number;
   name: string;
   method: string;
-  modulation: Record<string, unknown>;
-  load: Record<string, unknown> | null;
-  filter: Record<string, unknown> | null;
+  design: InverterDesign;
   note: string;
   createdAt: string;
   updatedAt: string;
@@ -32,9 +29,7 @@ export interface StudyDto {
 export interface StudyRevisionDto {
   revision: number;
   name: string;
-  modulation: Record<string, unknown>;
-  load: Record<string, unknown> | null;
-  filter: Record<string, unknown> | null;
+  design: InverterDesign;
   note: string;
   authorEmail: string | null;
   restoredFrom: number | null;
@@ -88,7 +83,7 @@ export class StudyService {
     await this.projects.find(principal.teamId, projectId);
     return this.transaction(async (transaction) => {
       const study = await this.models.Study.create(
-        { teamId: principal.teamId, projectId, currentRevision: 1, name: content.name, method: content.modulation.method },
+        { teamId: principal.teamId, projectId, currentRevision: 1, name: content.name, method: content.design.modulation.method },
         { transaction },
       );
       const revision = await this.insertRevision(study.id, 1, content, principal.user.id, null, transaction);
@@ -164,7 +159,7 @@ export class StudyService {
         // Conditional on the revision we read: a concurrent writer that got there first makes
         // this update match no row.
         const [changed] = await this.models.Study.update(
-          { currentRevision: next, name: content.name, method: content.modulation.method },
+          { currentRevision: next, name: content.name, method: content.design.modulation.method },
           { where: { id, currentRevision: baseRevision }, transaction },
         );
         if (changed !== 1) throw stale(next);
@@ -197,16 +192,15 @@ export class StudyService {
     restoredFrom: number | null,
     transaction: Transaction,
   ): Promise<StudyRevisionRow> {
-    const { method, ...parameters } = content.modulation;
+    const { design } = content;
     return this.models.StudyRevision.create(
       {
         studyId,
         revision,
         name: content.name,
-        method,
-        parameters,
-        load: content.load ?? null,
-        filter: content.filter ?? null,
+        method: design.modulation.method,
+        design,
+        ...legacyColumns(design),
         note: content.note ?? '',
         authorId,
         restoredFrom,
@@ -216,19 +210,29 @@ export class StudyService {
   }
 }
 
+/**
+ * The columns the previous release read (`parameters`, `load`, `filter`), still written for
+ * each new revision so a database stays readable by it after a rollback: the full modulation
+ * without its method (with vdc and mf or frequencyRatio), the load with the fundamental
+ * frequency, and the filter. The service itself reads only `design`.
+ */
+function legacyColumns(design: InverterDesign): Pick<StudyRevisionRow, 'parameters' | 'load' | 'filter'> {
+  const { method: _method, ...parameters } = designModulation(design);
+  const { load, filter } = design;
+  return {
+    parameters,
+    load: load ? { ...load, frequency: design.fundamentalFrequency } : null,
+    filter: filter ? { ...filter } : null,
+  };
+}
+
 function contentOf(row: StudyRevisionRow): StudyContent {
-  const dto = contentDto(row);
-  return { ...dto, modulation: dto.modulation as StudyContent['modulation'] };
+  return contentDto(row);
 }
 
 function contentDto(row: StudyRevisionRow): Omit<StudyRevisionDto, 'revision' | 'authorEmail' | 'restoredFrom' | 'createdAt'> {
-  return {
-    name: row.name,
-    modulation: { method: row.method, ...row.parameters },
-    load: row.load ?? null,
-    filter: row.filter ?? null,
-    note: row.note,
-  };
+  if (!row.design) throw new Error(`study revision ${row.id} has no design (migration 0002 not applied?)`);
+  return { name: row.name, design: row.design, note: row.note };
 }
 
 function toDto(study: StudyRow, revision: StudyRevisionRow): StudyDto {

@@ -1,4 +1,6 @@
+import type { DesignReport } from '@pulsewright/modulation';
 import type { Models } from '../models/index.js';
+import { designReport } from './compute.js';
 import type { AuditLog } from './audit.js';
 import type { Mailer } from './mail.js';
 import type { Principal } from './principal.js';
@@ -40,6 +42,7 @@ export class StudyShareService {
   async share(principal: Principal, studyId: string, input: ShareInput): Promise<StudyShareDto> {
     const study = await this.studies.find(principal.teamId, studyId);
     const revision = await this.models.StudyRevision.findOne({ where: { studyId: study.id, revision: study.currentRevision } });
+    const report = revision?.design ? designReport(revision.design, {}, 'study.design') : null;
     const author = revision?.authorId ? await this.models.User.findByPk(revision.authorId) : null;
     const to = input.email.toLowerCase();
     const link = `${this.publicUrl}/studies/${study.id}/report`;
@@ -49,6 +52,7 @@ export class StudyShareService {
     const text =
       `${principal.user.name} (${principal.user.email}) shared a Pulsewright study report with you.\n\n` +
       `Study: ${name}\nRevision: ${study.currentRevision}, saved by ${by}\nReport: ${link}\n\n` +
+      (report ? `${reportFigures(report)}\n\n` : '') +
       (message ? `Message from ${principal.user.name}:\n${message}\n\n` : '') +
       `Caution. ${REPORT_CAUTION}\n`;
     await this.mailer.send({ to, subject: `Pulsewright study report: ${name}`, text });
@@ -59,4 +63,30 @@ export class StudyShareService {
     });
     return { sent: true, to, revision: study.currentRevision, link };
   }
+}
+
+const percent = (ratio: number): string => `${(100 * ratio).toFixed(2)} %`;
+const fixed = (value: number, unit: string): string => `${Number(value.toPrecision(4))} ${unit}`;
+
+/** The headline figures of the design report, as plain text lines (every figure from the report). */
+export function reportFigures(report: DesignReport): string {
+  const lines = [`Key figures (revision's design report): ${report.methodLabel}${report.frequencyRatio === null ? '' : `, mf ${report.frequencyRatio}`}`];
+  const { bridge, lineToLine, output, limitCheck } = report;
+  lines.push(
+    `- ${bridge.name}: fundamental ${fixed(bridge.fundamental, 'V peak')}, THD ${percent(bridge.thd)}, WTHD ${percent(bridge.wthd)} (exact, whole waveform)`,
+  );
+  if (lineToLine) lines.push(`- ${lineToLine.name}: fundamental ${fixed(lineToLine.fundamental, 'V peak')}, THD ${percent(lineToLine.thd)}`);
+  if (output) lines.push(`- ${output.name}: fundamental ${fixed(output.fundamental, 'V peak')}, THD ${percent(output.thd)} (to order ${report.analysisOrder}; at most ${percent(output.thdUpperBound)} over the whole waveform)`);
+  const phase = report.currents[0];
+  if (phase) {
+    lines.push(`- ${phase.inverter.name}: ${fixed(phase.inverter.rms, 'A rms')}, ripple ${fixed(phase.inverter.ripplePeakToPeak, 'A peak-to-peak')}`);
+    if (phase.load) lines.push(`- ${phase.load.name}: ${fixed(phase.load.rms, 'A rms')}`);
+  }
+  if (report.loadPower !== null) lines.push(`- power into the load resistance: ${fixed(report.loadPower, 'W')}`);
+  if (report.filter) lines.push(`- filter resonance: ${fixed(report.filter.characteristics.resonanceFrequency, 'Hz')}`);
+  lines.push(
+    `- ${limitCheck.standard.name}-${limitCheck.standard.edition} voltage limits (recalled from memory): ${limitCheck.pass ? 'pass' : 'fail'}` +
+      ` (THD ${percent(limitCheck.thdWholeWaveform)} whole waveform, limit ${percent(limitCheck.limits.thd)})`,
+  );
+  return lines.join('\n');
 }

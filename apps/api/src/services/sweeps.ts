@@ -1,6 +1,14 @@
-import { sheSweep, sweepModulationIndex, type ModulationIndexSweep, type SheKind } from '@pulsewright/modulation';
+import {
+  sheSweep,
+  sweepModulationIndex,
+  waveformThd,
+  waveformWthd,
+  type ModulationIndexSweep,
+  type SheKind,
+  type Waveform,
+} from '@pulsewright/modulation';
 import type { ChunkedWork } from './jobs.js';
-import { waveformAtMa, type CarrierModulationInput } from './compute.js';
+import { waveformAtMa, type CarrierModulation } from './compute.js';
 import { asBadRequest } from './library.js';
 
 /** Points per chunk: each chunk is a few milliseconds of work at the largest allowed inputs. */
@@ -18,22 +26,41 @@ const gridValue = (from: number, to: number, points: number, k: number): number 
   k === points - 1 ? to : from + ((to - from) * k) / (points - 1);
 
 export interface MaSweepInput {
-  modulation: CarrierModulationInput;
+  modulation: CarrierModulation;
   ma: { from: number; to: number; points: number };
   maxOrder: number;
   orders?: number[];
+}
+
+/**
+ * The result of an ma sweep: at each point the fundamental, THD and WTHD exact over the whole
+ * waveform (waveformThd, waveformWthd, as the design report gives them), the THD and WTHD of
+ * orders up to maxOrder only (`spectrumThd`, `spectrumWthd`), and the requested orders.
+ */
+export interface MaSweepResult extends ModulationIndexSweep {
+  spectrumThd: number[];
+  spectrumWthd: number[];
 }
 
 /** A sweep of the modulation index by the library's sweepModulationIndex, chunk by chunk. */
 export function maSweepWork(input: MaSweepInput): ChunkedWork {
   const { from, to, points } = input.ma;
   const bounds = chunkBounds(points, MA_POINTS_PER_CHUNK);
-  const waveformAt = waveformAtMa(input.modulation);
-  const total: ModulationIndexSweep = {
+  const build = waveformAtMa(input.modulation);
+  // sweepModulationIndex builds each point's waveform once; keep them for the exact figures.
+  let built: Waveform[] = [];
+  const waveformAt = (ma: number): Waveform => {
+    const waveform = build(ma);
+    built.push(waveform);
+    return waveform;
+  };
+  const total: MaSweepResult = {
     ma: [],
     fundamental: [],
     thd: [],
     wthd: [],
+    spectrumThd: [],
+    spectrumWthd: [],
     harmonics: (input.orders ?? []).map((order) => ({ order, amplitude: [] })),
   };
   return {
@@ -41,6 +68,8 @@ export function maSweepWork(input: MaSweepInput): ChunkedWork {
     runChunk(index) {
       const [k0, k1] = bounds[index] as [number, number];
       let part: ModulationIndexSweep;
+      let exact: { thd: number[]; wthd: number[] };
+      built = [];
       try {
         part = sweepModulationIndex(waveformAt, {
           from: gridValue(from, to, points, k0),
@@ -49,14 +78,17 @@ export function maSweepWork(input: MaSweepInput): ChunkedWork {
           maxOrder: input.maxOrder,
           orders: input.orders ?? [],
         });
+        exact = { thd: built.map(waveformThd), wthd: built.map(waveformWthd) };
       } catch (error) {
         throw asBadRequest('', error);
       }
       const skip = index === 0 ? 0 : 1; // the first point repeats the previous chunk's last
       total.ma.push(...part.ma.slice(skip));
       total.fundamental.push(...part.fundamental.slice(skip));
-      total.thd.push(...part.thd.slice(skip));
-      total.wthd.push(...part.wthd.slice(skip));
+      total.thd.push(...exact.thd.slice(skip));
+      total.wthd.push(...exact.wthd.slice(skip));
+      total.spectrumThd.push(...part.thd.slice(skip));
+      total.spectrumWthd.push(...part.wthd.slice(skip));
       part.harmonics.forEach((series, i) => total.harmonics[i]?.amplitude.push(...series.amplitude.slice(skip)));
     },
     result: () => total,
