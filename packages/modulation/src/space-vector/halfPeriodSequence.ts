@@ -28,9 +28,16 @@ export interface HalfPeriodSequence {
  * five-segment Z-N-F with t0/2, tN/2, tF/2, where N is the active vector one switch away from
  * the zero vector Z. Consecutive states differ in one leg, so each leg switches at most twice
  * per period (Holmes and Lipo 2003, ch. 5 and 7). Internal helper, inputs already validated.
+ *
+ * @param dwell - the dwell times of the reference, from `spaceVector`
+ * @param secondHalf - the reference lies in the second half of its sector, from
+ *   `locateSector` on the same angle: the five-segment clamping choices switch there.
+ *   Not t2 ≥ t1: at the sector's middle t1 and t2 are equal sines rounded two ways, and the
+ *   comparison would choose the zero vector by rounding.
  */
 export function halfPeriodSequence(
   dwell: SpaceVectorDwell,
+  secondHalf: boolean,
   { sequence, zeroSplit, clamping }: HalfPeriodOptions,
 ): HalfPeriodSequence {
   const { sector, t1, t2, t0 } = dwell;
@@ -48,7 +55,7 @@ export function halfPeriodSequence(
       durations: [(zeroSplit * t0) / 2, tSingle / 2, tDouble / 2, ((1 - zeroSplit) * t0) / 2],
     };
   }
-  const zero = fiveSegmentZero(clamping, oddSector, t1 >= t2);
+  const zero = fiveSegmentZero(clamping, oddSector, !secondHalf);
   return zero === '000'
     ? { states: ['000', single, double], durations: [t0 / 2, tSingle / 2, tDouble / 2] }
     : { states: ['111', double, single], durations: [t0 / 2, tDouble / 2, tSingle / 2] };
@@ -56,7 +63,7 @@ export function halfPeriodSequence(
 
 /**
  * Zero vector of a five-segment period. `nearFirst`: the reference is in the first half of its
- * sector (t1 ≥ t2), nearer Vk than Vk+1.
+ * sector, [0, π/6), nearer Vk than Vk+1.
  */
 function fiveSegmentZero(
   clamping: ZeroVectorClamping,

@@ -1,5 +1,6 @@
 import { assertNumberInRange, assertOneOf } from '../validation/assertions.js';
 import { halfPeriodSequence } from './halfPeriodSequence.js';
+import { locateSector } from './locateSector.js';
 import { spaceVector } from './spaceVector.js';
 import type {
   LegDuties,
@@ -53,6 +54,12 @@ export interface SpaceVectorSequenceOptions {
  * (van der Broeck et al., IEEE Trans. Ind. Appl., 1988; Holmes and Lipo 2003, ch. 5 and 7).
  * A leg's duty is the total duration of the states in which it is high.
  *
+ * Sectors and their halves are half-open, like [0, π/3) and [0, π/6): a reference exactly on a
+ * sector boundary belongs to the sector that starts there, one exactly at a sector's middle
+ * (t1 = t2) to the second half, and an angle within about 1e-12 rad of either counts as on it.
+ * So the clamping choices of DPWM0–3 switch by the same rule at θ, θ + 2π/3 and θ + π however θ
+ * was computed.
+ *
  * @param reference - `{ m, theta }` as for {@link spaceVector}
  * @returns dwell times plus `states`, `durations` (7 or 5 entries, zeros kept) and `duties`
  * @throws ParameterRangeError naming the field (`m`, `theta`, `sequence`, `zeroSplit`, `clamping`)
@@ -65,7 +72,8 @@ export function spaceVectorSequence(
   assertNumberInRange('zeroSplit', zeroSplit, { min: 0, max: 1 });
   assertOneOf('clamping', clamping, ZERO_VECTOR_CLAMPINGS);
   const dwell = spaceVector(reference);
-  const half = halfPeriodSequence(dwell, { sequence, zeroSplit, clamping });
+  const { secondHalf } = locateSector(reference.theta);
+  const half = halfPeriodSequence(dwell, secondHalf, { sequence, zeroSplit, clamping });
   const count = half.states.length;
   // Mirror the half period; the middle state appears twice and becomes one segment.
   const states: SwitchingState[] = [...half.states, ...half.states.slice(0, count - 1).reverse()];

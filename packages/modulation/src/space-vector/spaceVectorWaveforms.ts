@@ -7,6 +7,7 @@ import type { Waveform } from '../waveform/Waveform.js';
 import { waveformFromTransitions, type Transition } from '../waveform/waveformFromTransitions.js';
 import { applyOvermodulation } from './applyOvermodulation.js';
 import { halfPeriodSequence, type HalfPeriodOptions } from './halfPeriodSequence.js';
+import { locateSector } from './locateSector.js';
 import { OVERMODULATION_METHODS, overmodulationSetting } from './overmodulationSetting.js';
 import { rationalFrequencyRatio } from './rationalFrequencyRatio.js';
 import { spaceVector } from './spaceVector.js';
@@ -98,6 +99,14 @@ export interface SpaceVectorWaveforms {
  * period equal the sampled reference's (van der Broeck et al., IEEE Trans. Ind. Appl., 1988;
  * Holmes and Lipo 2003, ch. 5).
  *
+ * Samples on the π/6 grid (every sector middle when N is a multiple of 6, every boundary when
+ * it is a multiple of 12, and θ = 0 always) follow the one rule of {@link spaceVectorSequence}:
+ * the later sector, the second half. With N a multiple of 3 the three legs are then exactly one
+ * waveform 2π/3 apart (no triplen line harmonics), and with N even and DPWM0–3 the waveforms
+ * are half-wave symmetric (no even harmonics). DPWMMIN/MAX are not half-wave symmetric
+ * (DPWMMAX at θ + π is DPWMMIN at θ negated), nor is the seven-segment sequence at even N (it
+ * equals carrier PWM with min-max injection, even sidebands included).
+ *
  * Non-integer frequency ratio: the pattern repeats only after q fundamental periods, where q is
  * the smallest integer (≤ maxFundamentalPeriods) making N = q·frequencyRatio whole (to 1e−9).
  * The returned waveforms cover that whole span on [0, 2π); their order-q harmonic is the
@@ -130,9 +139,13 @@ export function spaceVectorWaveforms({
   const setting = overmodulationSetting(index, { method: overmodulation });
   const options: HalfPeriodOptions = { sequence, zeroSplit, clamping };
   const { switchingPeriods: n, fundamentalPeriods: q } = span;
-  // First half of the sequence for a sample at fraction `cycle` of the fundamental period.
-  const halfAt = (cycle: number) =>
-    halfPeriodSequence(spaceVector(applyOvermodulation(setting, TAU * cycle - HALF_PI)), options);
+  // First half of the sequence for a sample at fraction `cycle` of the fundamental period. The
+  // sector, its half and the dwell times all come from the vector actually applied (after any
+  // overmodulation shaping), each located by the one rule of locateSector.
+  const halfAt = (cycle: number) => {
+    const applied = applyOvermodulation(setting, TAU * cycle - HALF_PI);
+    return halfPeriodSequence(spaceVector(applied), locateSector(applied.theta).secondHalf, options);
+  };
   const legs: Transition[][] = [[], [], []];
   const width = TAU / n;
   for (let k = 0; k < n; k++) {

@@ -1,9 +1,6 @@
 import { SECTOR_ANGLE } from './locateSector.js';
 import { HEXAGON_VERTEX_M } from './spaceVectorLimits.js';
 
-/** Radians within which an angle counts as on six-step's mid-sector jump (see heldAngle). */
-const SIX_STEP_SNAP = 1e-12;
-
 /** Simpson intervals over a sector for mode II; the integrand is smooth, error < 1e−13. */
 const SIMPSON_INTERVALS = 1024;
 
@@ -30,9 +27,10 @@ export function modeOneFundamental(radius: number): number {
  */
 export function heldAngle(angle: number, holdingAngle: number): number {
   const half = SECTOR_ANGLE / 2;
-  // Six-step jumps at mid-sector; a sample that should land on the jump (2πk/N for N a multiple
-  // of 6) may miss it by one rounding step, so within SIX_STEP_SNAP it counts as past it.
-  if (holdingAngle >= half) return angle < half - SIX_STEP_SNAP ? 0 : SECTOR_ANGLE;
+  // Six-step jumps at mid-sector, and the middle belongs to the second half: the rule of
+  // locateSector, whose angle (snapped onto the π/6 grid within rounding) arrives here, so a
+  // sample 2πk/N that should land on the jump (N a multiple of 6) is exactly on it.
+  if (holdingAngle >= half) return angle < half ? 0 : SECTOR_ANGLE;
   if (angle < holdingAngle) return 0;
   if (angle >= SECTOR_ANGLE - holdingAngle) return SECTOR_ANGLE;
   return ((angle - holdingAngle) * half) / (half - holdingAngle);
