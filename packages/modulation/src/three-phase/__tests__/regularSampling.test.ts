@@ -171,7 +171,7 @@ describe('regular-sampled line-to-line fundamental', () => {
           const label = `${zeroSequence} ${sampling} mf=${mf}`;
           // Ideal: the zero sequence cancels in the line voltage (Holmes and Lipo 2003, ch. 5
           // and 7). Before the fix a clamped sample of exactly +1 after a carrier peak gave a
-          // low half period and the clamps lost 25–65 % here.
+          // low half period and the clamps lost between 4 % and 67 % here (mostly 30–60 %).
           assertInDelta(regular, ideal, bound, `${label} vs ideal`);
           // Natural sampling of a clamped reference departs from the ideal by O(1/mf) itself:
           // the jumps spread the reference's spectrum as 1/n, so the first carrier group's
