@@ -152,6 +152,71 @@ export const scenarios: Scenario[] = [
     },
   },
   {
+    name: 'a design with a filter and a load: the same exact THD in the editor, Compare and the printed report; the limit check follows the filter',
+    async run(context) {
+      const page = await newPage(context);
+      await signIn(page, context.baseUrl, 'engineer@kestrel.example');
+      await page.goto(`${context.baseUrl}/studies/new`);
+      const name = `E2E filtered 10 kHz ${Date.now()}`;
+      await page.getByLabel('Name', { exact: true }).fill(name);
+      // Bipolar, ma 0.9, 400 V, 50 Hz, carrier 10.05 kHz (mf 201); load 10 Ω + 2 mH (invented values).
+      await page.getByLabel('Modulation index ma', { exact: true }).fill('0.9');
+      await page.getByLabel('Carrier frequency').fill('10050');
+      await page.getByText('mf = 201').waitFor();
+      await page.getByLabel('Inductance L').fill('2');
+      const limit = page.getByTestId('limit-result');
+      // Unfiltered, the PWM voltage passes the table to order 50 but not its whole-waveform THD (issue 9).
+      await page.locator('[data-testid="limit-result"][data-pass="false"]').waitFor();
+      assert((await page.getByTestId('limit-note').count()) === 1, 'the note on the content above order 50 is shown');
+      await screenshot(page, 'filtered-editor-no-filter');
+      const filterBox = page.getByLabel('Include an LC output filter');
+      await filterBox.check();
+      await page.locator('[data-testid="limit-result"][data-pass="true"]').waitFor();
+      await page.getByTestId('filter-resonance').waitFor();
+      await filterBox.uncheck();
+      await page.locator('[data-testid="limit-result"][data-pass="false"]').waitFor();
+      await filterBox.check();
+      await page.locator('[data-testid="limit-result"][data-pass="true"]').waitFor();
+      assert((await limit.textContent())?.includes('filter output'), 'the check reads the filter output');
+      await page.locator('[data-figure="Output THD"]').waitFor();
+      await page.locator('[data-figure="Capacitor current"]').waitFor();
+      await page.getByRole('button', { name: 'Create study' }).click();
+      await page.waitForURL(/\/studies\/[0-9a-f-]{36}$/);
+      const id = page.url().split('/').pop() ?? '';
+      await page.getByText(/Saved revision on the server: THD/).waitFor();
+      const editorThd = (await page.locator('[data-figure="THD"]').textContent())?.trim() ?? '';
+      const serverLine = (await page.getByTestId('preview-time').textContent()) ?? '';
+      assert(/^\d+\.\d\d %$/.test(editorThd), `the editor shows an exact THD (got ${editorThd})`);
+      assert(serverLine.includes(`THD ${editorThd}`), `the saved revision on the server reads the same THD as the live preview (${editorThd}; ${serverLine})`);
+      await screenshot(page, 'filtered-editor');
+
+      // Compare: the same figure in the table, from the service's report.
+      const listed = (await (await fetch(`${context.baseUrl}/api/v1/studies`, { headers: { Authorization: `Bearer ${await token(page)}` } })).json()) as { id: string; name: string }[];
+      const other = listed.find((s) => s.name === 'Centred space vector (min-max), 8 kHz') ?? listed.find((s) => s.id !== id);
+      assert(other, 'a second study to compare with');
+      await page.goto(`${context.baseUrl}/compare?ids=${id},${other.id}`);
+      const cell = page.locator(`tr[data-study="${name}"] [data-column="THD, exact"]`);
+      await cell.waitFor();
+      const compareThd = (await cell.textContent())?.trim();
+      assert(compareThd === editorThd, `Compare shows the editor's THD (${compareThd} vs ${editorThd})`);
+      const compareLimit = (await page.locator(`tr[data-study="${name}"] [data-column="Limit check"]`).textContent())?.trim();
+      assert(compareLimit === 'pass', `Compare shows the filtered design passing (got ${compareLimit})`);
+      await page.locator('svg[data-chart="spectrum"] g[data-series]').nth(1).waitFor();
+      await screenshot(page, 'filtered-compare');
+
+      // The printed report: the same figure again, the limit result and the cautions.
+      await page.goto(`${context.baseUrl}/studies/${id}/report`);
+      await page.getByText('Pulsewright study report').waitFor();
+      const reportThd = (await page.locator('[data-figure="THD"]').textContent())?.trim();
+      assert(reportThd === editorThd, `the printed report shows the editor's THD (${reportThd} vs ${editorThd})`);
+      await page.locator('[data-testid="limit-result"][data-pass="true"]').waitFor();
+      await page.getByTestId('cautions').getByText(/lethal/).waitFor();
+      await page.getByText('Carrier frequency').first().waitFor();
+      await screenshot(page, 'filtered-report');
+      await page.close();
+    },
+  },
+  {
     name: 'a sweep of ma runs as a job and its progress reaches the end',
     async run(context) {
       const page = await newPage(context);
@@ -237,12 +302,15 @@ export const scenarios: Scenario[] = [
       const response = await fetch(`${context.baseUrl}/api/v1/studies/${id}`, {
         method: 'PUT',
         headers: { Authorization: `Bearer ${bearer}`, 'Content-Type': 'application/json' },
-        body: JSON.stringify({ baseRevision: revision, name: 'viewer edit', modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.5, mf: 21, vdc: 400 } }),
+        body: JSON.stringify({
+          baseRevision: revision,
+          name: 'viewer edit',
+          design: { vdc: 400, fundamentalFrequency: 50, carrierFrequency: 1050, modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.5 } },
+        }),
       });
       assert(response.status === 403, `the API refuses a viewer's edit (got ${response.status})`);
-      // Viewers may compute: the harmonic-limit check answers them.
-      await page.getByRole('button', { name: 'Check the spectrum' }).click();
-      await page.getByTestId('limit-result').getByText(/IEEE Std 519/).waitFor();
+      // Viewers may compute: the live report's harmonic-limit check is shown to them.
+      await page.getByTestId('limit-result').getByText(/IEEE Std 519/).first().waitFor();
       await screenshot(page, 'viewer-study');
       await page.close();
     },
@@ -255,8 +323,10 @@ export const scenarios: Scenario[] = [
       // A three-phase demo study: line-to-line output, star-load phase current.
       await page.getByRole('link', { name: 'Centred space vector (min-max), 8 kHz', exact: true }).click();
       await page.locator('svg[data-chart="spectrum"] rect[data-bar]').first().waitFor();
-      await page.getByText('Line-to-line a−b').first().waitFor();
-      await page.getByText(/Saved revision on the server: THD/).waitFor();
+      // Three-phase figures say what they are of: per phase to the star point, and line to line.
+      await page.locator('[data-figure="Fundamental, line-to-line"]').waitFor();
+      await page.getByText(/peak, phase a to star point/).first().waitFor();
+      await page.getByText(/Saved revision on the server: THD .* \(exact, phase a to star point\)/).waitFor();
       await screenshot(page, 'study-three-phase');
       await page.getByRole('link', { name: 'Compare', exact: true }).first().click();
       await page.getByRole('heading', { name: 'Compare studies' }).waitFor();
@@ -327,12 +397,15 @@ export const scenarios: Scenario[] = [
       await page.getByLabel('Name', { exact: true }).fill(`E2E space vector ${Date.now()}`);
       await page.getByLabel('Method').selectOption('space-vector');
       await page.getByLabel('Switching sequence').selectOption('five-segment');
+      await page.getByLabel('Zero-vector clamping').selectOption('dpwm2');
       await page.locator('svg[data-chart="spectrum"] rect[data-bar]').first().waitFor();
       await page.getByRole('button', { name: 'Create study' }).click();
       await page.waitForURL(/\/studies\/[0-9a-f-]{36}$/);
+      const saved = (await (await fetch(`${context.baseUrl}/api/v1/studies/${page.url().split('/').pop()}`, { headers: { Authorization: `Bearer ${await token(page)}` } })).json()) as { design: { modulation: { clamping?: string; sequence?: string } } };
+      assert(saved.design.modulation.sequence === 'five-segment' && saved.design.modulation.clamping === 'dpwm2', `the clamping chosen is saved (${JSON.stringify(saved.design.modulation)})`);
       await page.getByText(/Revision 1 · space-vector/).waitFor();
       await page.getByText(/Saved revision on the server: THD/).waitFor();
-      await page.getByText('Line-to-line a−b').first().waitFor();
+      await page.locator('[data-figure="THD, line-to-line"]').waitFor();
       await screenshot(page, 'study-space-vector');
       await page.close();
     },

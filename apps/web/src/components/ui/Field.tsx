@@ -11,7 +11,7 @@ interface FieldShellProps {
 
 function FieldShell({ id, label, unit, hint, error, children }: FieldShellProps) {
   return (
-    <div className="flex flex-col gap-1">
+    <div className="flex min-w-0 flex-col gap-1">
       <label htmlFor={id} className="text-xs font-medium tracking-wide text-ink-soft uppercase">
         {label}
         {unit ? <span className="ml-1 normal-case text-ink-soft/80">({unit})</span> : null}
@@ -71,7 +71,7 @@ export function SelectField({ label, hint, error, options, className = '', ...re
         id={id}
         aria-invalid={error ? true : undefined}
         aria-describedby={error ? `${id}-error` : hint ? `${id}-hint` : undefined}
-        className={`${inputClass} ${className}`}
+        className={`${inputClass} w-full min-w-0 ${className}`}
         {...rest}
       >
         {options.map((option) => (

@@ -127,7 +127,7 @@ export function ComparePage() {
                               key={c.heading}
                               data-column={c.heading}
                               title={c.title?.(report)}
-                              className={c.heading === 'Method' ? 'font-sans text-xs' : c.heading === 'Limit check' ? `font-sans font-semibold ${report.limitCheck.pass ? 'text-good' : 'text-bad'}` : ''}
+                              className={c.heading === 'Method' ? 'font-sans text-xs' : c.heading === 'Limit check' ? `font-sans font-semibold ${report.limitCheck.pass ? 'text-good' : 'text-bad'}` : 'whitespace-nowrap'}
                             >
                               {c.cell(report)}
                             </td>

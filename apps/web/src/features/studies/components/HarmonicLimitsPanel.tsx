@@ -27,9 +27,8 @@ export function HarmonicLimitsPanel({ report, busVoltage, onBusVoltage, busVolta
   return (
     <Panel title="Harmonic limits">
       <div data-testid="limit-result" data-pass={check.pass ? 'true' : 'false'} className="text-sm">
-        <p className={`font-semibold ${check.pass ? 'text-good' : 'text-bad'}`}>
-          {check.pass ? 'Within the limits' : `${check.violations.length} limit(s) exceeded`} at the {limitPointName(report)}
-        </p>
+        <p className={`font-semibold ${check.pass ? 'text-good' : 'text-bad'}`}>{check.pass ? 'Within the limits' : `${check.violations.length} limit(s) exceeded`}</p>
+        <p className="text-xs text-ink-soft">Voltage checked: {limitPointName(report)}</p>
         {onBusVoltage ? (
           <div className="no-print my-2">
             <NumberField
@@ -63,12 +62,16 @@ export function HarmonicLimitsPanel({ report, busVoltage, onBusVoltage, busVolta
         {expanded ? (
           <>
             <h3 className="mt-3 text-xs font-semibold tracking-wide uppercase">Order by order to {check.limits.maxOrder}</h3>
-            <OrderTable check={check} />
+            <div className="grid grid-cols-1 gap-x-6 sm:grid-cols-3">
+              {[0, 1, 2].map((part) => (
+                <OrderTable key={part} rows={check.table.filter((_, i) => Math.floor((i * 3) / check.table.length) === part)} />
+              ))}
+            </div>
           </>
         ) : (
           <details className="mt-2 text-xs">
             <summary className="cursor-pointer text-ink-soft">Order by order to {check.limits.maxOrder}</summary>
-            <OrderTable check={check} />
+            <OrderTable rows={check.table} />
           </details>
         )}
         <p className="mt-2 text-xs text-ink-soft">
@@ -81,9 +84,9 @@ export function HarmonicLimitsPanel({ report, busVoltage, onBusVoltage, busVolta
   );
 }
 
-function OrderTable({ check }: { check: StudyReport['limitCheck'] }) {
+function OrderTable({ rows }: { rows: StudyReport['limitCheck']['table'] }) {
   return (
-    <table className="mt-1 w-full" aria-label="Limit check by order">
+    <table className="mt-1 w-full" aria-label={`Limit check, orders ${rows[0]?.order ?? ''} to ${rows[rows.length - 1]?.order ?? ''}`}>
       <thead className="text-left text-ink-soft">
         <tr>
           <th className="font-medium">Order</th>
@@ -93,7 +96,7 @@ function OrderTable({ check }: { check: StudyReport['limitCheck'] }) {
         </tr>
       </thead>
       <tbody className="num">
-        {check.table.map((row) => (
+        {rows.map((row) => (
           <tr key={row.order} className={row.pass ? '' : 'text-bad'}>
             <td>{row.order}</td>
             <td>{formatPercent(row.ratio, 3)}</td>

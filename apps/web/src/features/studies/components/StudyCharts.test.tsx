@@ -26,7 +26,7 @@ describe('StudyCharts', () => {
     expect(summary).toHaveTextContent('phase a to star point');
     expect(summary).toHaveTextContent('line a−b');
     expect(summary).toHaveTextContent(`to order ${report.maxOrder}`);
-    expect(summary).toHaveTextContent('RMS, per phase');
+    expect(summary).toHaveTextContent('RMS per phase (phase a)');
     expect(figure('Capacitor current')).not.toBeNull();
     expect(figure('Filter resonance')).toHaveTextContent('Hz');
     expect(figure('Limit check')).toHaveTextContent(report.limitCheck.pass ? 'Pass' : 'Fail');
@@ -53,7 +53,9 @@ describe('HarmonicLimitsPanel', () => {
     expect(result).toHaveAttribute('data-pass', String(report.limitCheck.pass));
     expect(result).toHaveTextContent('filter output');
     expect(figure('Limit THD, whole waveform')).toHaveTextContent(formatPercent(report.limitCheck.thdWholeWaveform));
-    expect(screen.getByRole('table', { name: 'Limit check by order' }).querySelectorAll('tbody tr')).toHaveLength(49);
+    const tables = screen.getAllByRole('table', { name: /^Limit check, orders/ });
+    expect(tables.map((t) => t.getAttribute('aria-label'))).toEqual(['Limit check, orders 2 to 18', 'Limit check, orders 19 to 34', 'Limit check, orders 35 to 50']);
+    expect(tables.reduce((rows, t) => rows + t.querySelectorAll('tbody tr').length, 0)).toBe(49);
     expect(result).toHaveTextContent(report.limitCheck.caution);
   });
 

@@ -20,8 +20,8 @@ export function StudyCharts({ report, fileStem }: { report: StudyReport; fileSte
       <VoltageChart report={report} fileStem={fileStem} />
       <ReportSpectrum report={report} fileStem={fileStem} />
       {report.currents.length ? <CurrentsChart report={report} fileStem={fileStem} /> : null}
-      <HarmonicTable harmonics={report.bridge.spectrum} title={`Harmonics of the ${report.bridge.name}`} fileName={`${fileStem}-harmonics`} />
-      {report.output ? <HarmonicTable harmonics={report.output.spectrum} title={`Harmonics of the ${report.output.name}`} fileName={`${fileStem}-output-harmonics`} /> : null}
+      <HarmonicTable harmonics={report.bridge.spectrum} title={`Harmonics, ${report.bridge.name}`} fileName={`${fileStem}-harmonics`} />
+      {report.output ? <HarmonicTable harmonics={report.output.spectrum} title={`Harmonics, ${report.output.name}`} fileName={`${fileStem}-output-harmonics`} /> : null}
     </div>
   );
 }

@@ -37,11 +37,14 @@ const SLIDERS = { vdc: { min: 10, max: 1000 }, ma: { min: 0.02, max: 1.5 }, mf: 
 
 const RADIANS_TO_DEGREES = 180 / Math.PI;
 
+/** A bound as people write it: 100,000 and 0.000001, six significant digits at most. */
+const formatBound = (value: number) => value.toLocaleString('en-US', { maximumSignificantDigits: 6 });
+
 /** The allowed range of a design field in the unit the form shows (the library's DESIGN_BOUNDS). */
 function boundsHint(path: DesignBoundsField, scale = 1, unit = ''): string {
   const bounds: { min: number; max: number; minExclusive?: boolean } = DESIGN_BOUNDS[path];
-  const low = `${bounds.minExclusive ? 'above' : 'from'} ${formatNumber(bounds.min * scale, 6)}`;
-  return `${low} to ${formatNumber(bounds.max * scale, 6)}${unit ? ` ${unit}` : ''}`;
+  const low = `${bounds.minExclusive ? 'above' : 'from'} ${formatBound(bounds.min * scale)}`;
+  return `${low} to ${formatBound(bounds.max * scale)}${unit ? ` ${unit}` : ''}`;
 }
 
 /** The study's design with units and the library's ranges; errors from the server and the library beside each field. */

@@ -42,16 +42,18 @@ export function reportFigures(report: StudyReport): Figure[] {
   }
   const phaseA = report.currents[0];
   if (phaseA) {
+    // Every phase carries the same RMS in a balanced design: the figures are phase a's.
+    const rms = three ? `RMS per phase (phase ${phaseA.phase})` : 'RMS';
     figures.push(
-      { label: 'Switch current', value: `${formatNumber(phaseA.inverter.rms)} A`, note: `RMS${perPhase}, ${phaseA.inverter.name}; peak ${formatNumber(phaseA.inverter.peak)} A` },
+      { label: 'Switch current', value: `${formatNumber(phaseA.inverter.rms)} A`, note: `${rms}; peak ${formatNumber(phaseA.inverter.peak)} A` },
       {
         label: 'Current ripple',
         value: `${formatNumber(phaseA.inverter.rippleRms)} A`,
         note: `RMS of i − i₁ of the switch current${perPhase}; ${formatNumber(phaseA.inverter.ripplePeakToPeak)} A peak-to-peak`,
       },
     );
-    if (phaseA.capacitor) figures.push({ label: 'Capacitor current', value: `${formatNumber(phaseA.capacitor.rms)} A`, note: `RMS${perPhase}, ${phaseA.capacitor.name}` });
-    if (phaseA.load) figures.push({ label: 'Load current', value: `${formatNumber(phaseA.load.rms)} A`, note: `RMS${perPhase}, ${phaseA.load.name}; fundamental ${formatNumber(phaseA.load.fundamental)} A peak` });
+    if (phaseA.capacitor) figures.push({ label: 'Capacitor current', value: `${formatNumber(phaseA.capacitor.rms)} A`, note: rms });
+    if (phaseA.load) figures.push({ label: 'Load current', value: `${formatNumber(phaseA.load.rms)} A`, note: `${rms}; fundamental ${formatNumber(phaseA.load.fundamental)} A peak` });
   }
   if (report.loadPower !== null) figures.push({ label: 'Load power', value: `${formatNumber(report.loadPower)} W`, note: three ? 'into R, all three phases' : 'into R' });
   if (filter) {
