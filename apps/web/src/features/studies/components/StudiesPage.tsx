@@ -1,3 +1,4 @@
+import { MODULATION_METHOD_LABELS } from '@pulsewright/modulation';
 import { useDeferredValue, useState, type FormEvent } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
 import { paths } from '../../../config/paths';
@@ -102,7 +103,7 @@ export function StudiesPage() {
                         {s.note ? <p className="text-xs text-ink-soft">{s.note}</p> : null}
                       </td>
                       <td className="py-1.5 text-xs">
-                        {s.method}
+                        {MODULATION_METHOD_LABELS[s.method]}
                         <br />
                         <span className="num text-ink-soft">{describeDesign(s.design)}</span>
                       </td>

@@ -131,8 +131,8 @@ function SweepJob({ job, error }: { job: Job | undefined; error: unknown }) {
             yLabel="ratio"
             yFormat={(v) => formatPercent(v, 0)}
             series={[
-              { name: 'THD', color: 'var(--color-ink)', x: result.ma, y: result.thd },
-              { name: 'WTHD', color: 'var(--color-signal)', x: result.ma, y: result.wthd },
+              { name: 'THD, exact over the whole waveform', color: 'var(--color-ink)', x: result.ma, y: result.thd },
+              { name: 'WTHD, exact over the whole waveform', color: 'var(--color-signal)', x: result.ma, y: result.wthd },
             ]}
           />
           {result.harmonics?.length || result.fundamental ? (
