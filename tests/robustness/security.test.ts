@@ -206,6 +206,28 @@ describe('secrets stay out of logs', () => {
   }, 60_000);
 });
 
+describe('malformed URLs', () => {
+  it('GET /% and other broken percent-escapes answer 400 problem+json and write nothing to the log (issue 11)', async () => {
+    const dir = tempDir('security-malformed');
+    const server = await startChildServer({
+      databaseUrl: `sqlite:${path.join(dir, 'malformed.sqlite')}`,
+    });
+    try {
+      const before = server.output().length;
+      for (const url of ['/%', '/%E0%A4%A', '/studies/%zz', '/api/v1/%']) {
+        const res = await fetch(`${server.baseUrl}${url}`);
+        expect(res.status, url).toBe(400);
+        expect(res.headers.get('content-type'), url).toMatch(/^application\/problem\+json/);
+      }
+      await new Promise((r) => setTimeout(r, 200));
+      expect(server.output().slice(before)).toBe('');
+    } finally {
+      await server.kill();
+      rmSync(dir, { recursive: true, force: true });
+    }
+  }, 60_000);
+});
+
 describe('uploads', () => {
   const upload = (file: Buffer, filename: string, contentType = 'text/csv') =>
     request(setup.app)

@@ -4,6 +4,8 @@ import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+// The reader of the service's own mail drop format, from its source (as the in-process suites do).
+import { readMailDrop, type DeliveredMail } from '../../apps/api/src/services/mail.js';
 
 /** The repository root (tests/support → two levels up). */
 export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
@@ -70,6 +72,8 @@ export async function freePort(): Promise<number> {
 export interface ChildServer {
   baseUrl: string;
   port: number;
+  /** Where the service's local mail transport delivers (MAIL_DIR). */
+  mailDir: string;
   child: ChildProcess;
   /** Everything the process wrote to stdout and stderr so far. */
   output(): string;
@@ -100,6 +104,7 @@ export async function startChildServer(options: {
   if (!existsSync(apiEntry))
     throw new Error(`${apiEntry} is missing: run \`npm run build\` first.`);
   const port = options.port ?? (await freePort());
+  const mailDir = options.env?.MAIL_DIR ?? mailDirBeside(options.databaseUrl);
   let output = '';
   const command = options.boundByWritePermissions
     ? boundByWritePermissions(process.execPath, [apiEntry])
@@ -116,7 +121,12 @@ export async function startChildServer(options: {
       PUBLIC_URL: `http://127.0.0.1:${port}`,
       BCRYPT_ROUNDS: '4',
       LOGIN_RATE_LIMIT: '100000',
+      LOGIN_ACCOUNT_RATE_LIMIT: '100000',
+      RESET_RATE_LIMIT: '100000',
+      RESET_ACCOUNT_RATE_LIMIT: '100000',
+      ACCEPT_RATE_LIMIT: '100000',
       KEY_RATE_LIMIT: '100000',
+      MAIL_DIR: mailDir,
       SMTP_URL: '',
       SCARF_ANALYTICS: 'false',
       WEB_DIST: path.join(tmpdir(), 'pulsewright-no-web'),
@@ -130,9 +140,11 @@ export async function startChildServer(options: {
     child.once('exit', (code, signal) => resolve(code ?? signal));
   });
   const baseUrl = `http://127.0.0.1:${port}`;
+  mailDirs.set(baseUrl, mailDir);
   const server: ChildServer = {
     baseUrl,
     port,
+    mailDir,
     child,
     output: () => output,
     exited,
@@ -213,4 +225,41 @@ export async function call(
     }
   }
   return { status: response.status, type, body: parsed };
+}
+
+/** The mail drop of each service started here, by base URL. */
+const mailDirs = new Map<string, string>();
+
+/** A `mail` folder beside a SQLite database file (the service's own default), else a new one. */
+function mailDirBeside(databaseUrl: string): string {
+  const file = databaseUrl.startsWith('sqlite:') ? databaseUrl.slice('sqlite:'.length) : '';
+  return file && file !== ':memory:' ? path.join(path.dirname(path.resolve(file)), 'mail') : path.join(tempDir('mail'), 'mail');
+}
+
+/**
+ * Messages the service at `baseUrl` delivered to `to`, oldest first, read from its local mail
+ * drop: where a one-time link is usable (the outbox masks it). A service started elsewhere
+ * (E2E_BASE_URL) is read from MAIL_DIR, else from `data/mail` (the default database's folder).
+ */
+export function deliveredMail(baseUrl: string, to: string): DeliveredMail[] {
+  const dir = mailDirs.get(baseUrl) ?? process.env.MAIL_DIR ?? path.join(repoRoot, 'data', 'mail');
+  return readMailDrop(dir).filter((mail) => mail.to === to);
+}
+
+/** Waits (up to `timeoutMs`) for a message to `to` whose text matches `pattern`; returns the match. */
+export async function waitForDeliveredMail(
+  baseUrl: string,
+  to: string,
+  pattern: RegExp,
+  timeoutMs = 10_000,
+): Promise<RegExpExecArray> {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    for (const mail of deliveredMail(baseUrl, to).reverse()) {
+      const match = pattern.exec(mail.text);
+      if (match) return match;
+    }
+    if (Date.now() > deadline) throw new Error(`no mail to ${to} matching ${pattern} was delivered within ${timeoutMs} ms`);
+    await new Promise((r) => setTimeout(r, 100));
+  }
 }

@@ -8,6 +8,7 @@ import { loadConfig, type AppConfig } from './config.js';
 import { openDatabase } from './db/database.js';
 import { migrate } from './db/migrate.js';
 import { HttpError } from './http/errors.js';
+import { refuseMalformedPath } from './http/malformedPath.js';
 import { problemHandler } from './http/problemHandler.js';
 import { staticWeb } from './http/staticWeb.js';
 import { defineModels } from './models/index.js';
@@ -59,7 +60,7 @@ export type PulsewrightApp = Express & {
  * running as failed, and assembles the middleware. It never listens; src/index.ts does.
  */
 export async function createApp(overrides: Partial<AppConfig> = {}): Promise<PulsewrightApp> {
-  const config = { ...loadConfig(), ...overrides };
+  const config = loadConfig(process.env, overrides);
   const document = loadOpenApiDocument();
   listOperations(document); // throws when an operation has no role requirement
   const sequelize = await openDatabase(config.databaseUrl);
@@ -71,7 +72,8 @@ export async function createApp(overrides: Partial<AppConfig> = {}): Promise<Pul
 
   const app = express() as PulsewrightApp;
   app.disable('x-powered-by');
-  app.set('trust proxy', false);
+  // Which proxies may name the client address (X-Forwarded-For); off unless TRUST_PROXY says so.
+  app.set('trust proxy', config.trustProxy);
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -86,6 +88,7 @@ export async function createApp(overrides: Partial<AppConfig> = {}): Promise<Pul
       strictTransportSecurity: false,
     }),
   );
+  app.use(refuseMalformedPath);
   // No CORS headers: the dashboard is served from this origin, and scripts are not browsers.
   app.use('/api', express.json({ limit: '1mb' }));
 

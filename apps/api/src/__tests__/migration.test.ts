@@ -258,7 +258,7 @@ describe('migration 0002 on a database of the previous release', () => {
     const executed = await app.services.models.sequelize.query<{ name: string }>('SELECT "name" FROM "schema_migrations" ORDER BY "name"', {
       type: QueryTypes.SELECT,
     });
-    expect(executed.map((m) => m.name)).toEqual(['0001-initial-schema', '0002-study-design']);
+    expect(executed.map((m) => m.name)).toEqual(['0001-initial-schema', '0002-study-design', '0003-account-credentials']);
     expect(await app.services.models.User.count()).toBe(1);
   });
 

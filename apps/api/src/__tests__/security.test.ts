@@ -1,7 +1,7 @@
 import { readFileSync, existsSync } from 'node:fs';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO, DEMO_PASSWORD, signIn, testApp, type TestApp } from './helpers.js';
+import { DEMO, DEMO_PASSWORD, deliveredToken, signIn, testApp, type TestApp } from './helpers.js';
 import { SINE_TRIANGLE } from './fixtures.js';
 
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
@@ -76,14 +76,16 @@ describe('sign-in, keys and roles', () => {
     expect((await request(t.app).get('/api/v1/me').set(bearer(session))).status).toBe(401);
   });
 
-  it('invites by e-mail into the outbox; accepting sets the password and joins with the role', async () => {
+  it('invites by e-mail (the outbox copy masked); accepting the delivered link sets the password and joins with the role', async () => {
     const admin = await signIn(t.app, DEMO.admin);
     const invited = await request(t.app).post('/api/v1/invitations').set(bearer(admin)).send({ email: 'Mira@Kestrel.example', role: 'engineer' });
     expect(invited.status).toBe(201);
     const outbox = await request(t.app).get('/api/v1/outbox').set(bearer(admin));
     const mail = outbox.body.find((m: { to: string }) => m.to === 'mira@kestrel.example');
     expect(mail.subject).toContain('Kestrel Drives');
-    const token = /pwt_[A-Za-z0-9_-]+/.exec(mail.text)?.[0] as string;
+    expect(mail.text).toContain('accept-invitation?token=pwt_[hidden]');
+    const token = deliveredToken(t, 'mira@kestrel.example');
+    expect(mail.text).not.toContain(token);
     const accepted = await request(t.app).post('/api/v1/invitations/accept').send({ token, name: 'Mira Holt', password: 'mira-long-password' });
     expect(accepted.status).toBe(200);
     const me = await request(t.app).get('/api/v1/me').set(bearer(accepted.body.token));
@@ -96,9 +98,7 @@ describe('sign-in, keys and roles', () => {
   it('resets a password by e-mail and ends the old sessions', async () => {
     const old = await signIn(t.app, DEMO.engineer2);
     expect((await request(t.app).post('/api/v1/auth/password-reset').send({ email: DEMO.engineer2 })).status).toBe(202);
-    const admin = await signIn(t.app, DEMO.admin);
-    const mail = (await request(t.app).get('/api/v1/outbox').set(bearer(admin))).body.find((m: { to: string; subject: string }) => m.to === DEMO.engineer2);
-    const token = /pwt_[A-Za-z0-9_-]+/.exec(mail.text)?.[0] as string;
+    const token = deliveredToken(t, DEMO.engineer2);
     expect((await request(t.app).post('/api/v1/auth/password-reset/confirm').send({ token, password: 'lena-new-password' })).status).toBe(204);
     expect((await request(t.app).get('/api/v1/me').set(bearer(old))).status).toBe(401);
     expect(await signIn(t.app, DEMO.engineer2, 'lena-new-password')).toMatch(/^pws_/);
@@ -111,8 +111,7 @@ describe('sign-in, keys and roles', () => {
     const admin = await signIn(t.app, DEMO.admin);
     const invited = await request(t.app).post('/api/v1/invitations').set(bearer(admin)).send({ email: 'leaver@kestrel.example', role: 'engineer' });
     expect(invited.status).toBe(201);
-    const mail = (await request(t.app).get('/api/v1/outbox').set(bearer(admin))).body.find((m: { to: string }) => m.to === 'leaver@kestrel.example');
-    const token = /pwt_[A-Za-z0-9_-]+/.exec(mail.text)?.[0] as string;
+    const token = deliveredToken(t, 'leaver@kestrel.example');
     const session = (await request(t.app).post('/api/v1/invitations/accept').send({ token, name: 'Leaver', password: 'leaver-password' })).body.token;
     const key = (await request(t.app).post('/api/v1/api-keys').set(bearer(session)).send({ name: 'k', role: 'engineer' })).body.key;
     const me = await request(t.app).get('/api/v1/me').set(bearer(session));

@@ -37,6 +37,8 @@ export interface ApiKeyAttributes extends Timestamps {
   lastUsedAt: Date | null;
   expiresAt: Date | null;
   revokedAt: Date | null;
+  /** The API key this key was made with (null when made in a signed-in session). */
+  createdWithKeyId: string | null;
 }
 export interface ProjectAttributes extends Timestamps {
   id: string;
@@ -129,6 +131,8 @@ export interface PasswordResetAttributes extends Timestamps {
 }
 export interface OutboxAttributes extends Timestamps {
   id: string;
+  /** The team whose admins may read the message; null for mail of no team. */
+  teamId: string | null;
   to: string;
   subject: string;
   text: string;
@@ -141,7 +145,7 @@ export type TeamRow = Row<TeamAttributes, Generated>;
 export type UserRow = Row<UserAttributes, Generated | 'passwordHash'>;
 export type MembershipRow = Row<MembershipAttributes, Generated>;
 export type SessionRow = Row<SessionAttributes, Generated | 'lastUsedAt' | 'revokedAt'>;
-export type ApiKeyRow = Row<ApiKeyAttributes, Generated | 'lastUsedAt' | 'revokedAt' | 'expiresAt'>;
+export type ApiKeyRow = Row<ApiKeyAttributes, Generated | 'lastUsedAt' | 'revokedAt' | 'expiresAt' | 'createdWithKeyId'>;
 export type ProjectRow = Row<ProjectAttributes, Generated | 'description' | 'createdById'>;
 export type StudyRow = Row<StudyAttributes, Generated>;
 export type StudyRevisionRow = Row<StudyRevisionAttributes, Generated | 'load' | 'filter' | 'note' | 'authorId' | 'restoredFrom'>;
@@ -150,7 +154,7 @@ export type JobRow = Row<JobAttributes, Generated | 'progress' | 'result' | 'err
 export type AuditEventRow = Row<AuditEventAttributes, Generated | 'teamId' | 'actorId' | 'actorEmail' | 'subjectId' | 'details'>;
 export type InvitationRow = Row<InvitationAttributes, Generated | 'acceptedAt' | 'withdrawnAt' | 'invitedById'>;
 export type PasswordResetRow = Row<PasswordResetAttributes, Generated | 'usedAt'>;
-export type OutboxRow = Row<OutboxAttributes, Generated | 'error'>;
+export type OutboxRow = Row<OutboxAttributes, Generated | 'error' | 'teamId'>;
 
 /** The models bound to one database; every service receives this object. */
 export interface Models {
@@ -226,6 +230,7 @@ function defineTables(
       lastUsedAt: date(),
       expiresAt: date(),
       revokedAt: date(),
+      createdWithKeyId: uuid(true),
     }),
     Project: define<ProjectRow>('Project', 'projects', {
       id,
@@ -315,6 +320,7 @@ function defineTables(
     }),
     Outbox: define<OutboxRow>('Outbox', 'outbox', {
       id,
+      teamId: uuid(true),
       to: text(),
       subject: text(),
       text: { type: DataTypes.TEXT, allowNull: false },

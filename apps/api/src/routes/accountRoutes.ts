@@ -1,37 +1,54 @@
-import { Router } from 'express';
+import { Router, type Request } from 'express';
+import { rateLimit, type Options as RateLimitOptions } from 'express-rate-limit';
+import type { AppConfig } from '../config.js';
 import { intQuery } from '../http/query.js';
-import { rateLimit } from 'express-rate-limit';
 import { principalOf } from '../auth/authorize.js';
 import { HttpError } from '../http/errors.js';
 import type { Services } from '../services/index.js';
 import { dialectOf } from '../db/database.js';
 
-const tooMany = (what: string) => () => {
-  throw new HttpError(429, `Too many ${what}; wait a few minutes and try again.`);
+const tooMany = (what: string, wait: string) => () => {
+  throw new HttpError(429, `Too many ${what}; wait ${wait} and try again.`);
 };
+
+const FIFTEEN_MINUTES = 15 * 60_000;
+const ONE_HOUR = 60 * 60_000;
+
+/** The e-mail address a public account request names, as the key of its per-account bucket. */
+const accountOf = (req: Request): string => `account:${String((req.body as { email?: unknown } | undefined)?.email ?? '').toLowerCase()}`;
 
 /** Health, sign-in, the caller, API keys, members, invitations, audit log and outbox. */
 export function accountRoutes(
   services: Services,
-  options: { loginRateLimit: number; keyRateLimit: number; databaseUrl: string; version: string },
+  options: Pick<
+    AppConfig,
+    'loginRateLimit' | 'loginAccountRateLimit' | 'resetRateLimit' | 'resetAccountRateLimit' | 'acceptRateLimit' | 'keyRateLimit' | 'databaseUrl'
+  > & { version: string },
 ): Router {
   const router = Router();
   const { auth, apiKeys, team, audit, mailer } = services;
 
-  const signInLimiter = rateLimit({
-    windowMs: 15 * 60_000,
-    limit: options.loginRateLimit,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    handler: tooMany('sign-in attempts from this address'),
+  // Separate buckets (one store each) for sign-in, password reset and invitation acceptance, per
+  // client address (Express's req.ip, which honours TRUST_PROXY) and, where a request names an
+  // account, per account. Buckets of attempts that can succeed count failures only
+  // (skipSuccessfulRequests), so people signing in behind one proxy address do not lock each
+  // other out, while guesses at one account from many addresses still meet the account's limit.
+  const limiter = (limit: number, windowMs: number, what: string, wait: string, extra: Partial<RateLimitOptions> = {}) =>
+    rateLimit({ windowMs, limit, standardHeaders: 'draft-8', legacyHeaders: false, handler: tooMany(what, wait), ...extra });
+  const failuresOnly = { skipSuccessfulRequests: true };
+  const signInPerAddress = limiter(options.loginRateLimit, FIFTEEN_MINUTES, 'failed sign-ins from this network address', '15 minutes', failuresOnly);
+  const signInPerAccount = limiter(options.loginAccountRateLimit, FIFTEEN_MINUTES, 'failed sign-ins to this account', '15 minutes', {
+    ...failuresOnly,
+    keyGenerator: accountOf,
   });
-  const keyLimiter = rateLimit({
-    windowMs: 60 * 60_000,
-    limit: options.keyRateLimit,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
+  const resetPerAddress = limiter(options.resetRateLimit, FIFTEEN_MINUTES, 'password-reset requests from this network address', '15 minutes');
+  const resetPerAccount = limiter(options.resetAccountRateLimit, ONE_HOUR, 'password-reset e-mails to this address', 'an hour', {
+    keyGenerator: accountOf,
+  });
+  const resetConfirmPerAddress = limiter(options.resetRateLimit, FIFTEEN_MINUTES, 'failed password-reset confirmations from this network address', '15 minutes', failuresOnly);
+  const acceptPerAddress = limiter(options.acceptRateLimit, FIFTEEN_MINUTES, 'failed invitation acceptances from this network address', '15 minutes', failuresOnly);
+  const keyLimiter = limiter(options.keyRateLimit, ONE_HOUR, 'API keys made in the last hour', 'a few minutes', {
     keyGenerator: (req) => principalOf(req).user.id,
-    handler: tooMany('API keys made in the last hour'),
   });
 
   router.get('/api/health', async (_req, res) => {
@@ -39,18 +56,18 @@ export function accountRoutes(
     res.json({ status: 'ok', version: options.version, database: dialectOf(options.databaseUrl) });
   });
 
-  router.post('/api/v1/auth/login', signInLimiter, async (req, res) => {
+  router.post('/api/v1/auth/login', signInPerAddress, signInPerAccount, async (req, res) => {
     res.json(await auth.login(req.body.email, req.body.password));
   });
   router.post('/api/v1/auth/logout', async (req, res) => {
     await auth.logout(principalOf(req));
     res.status(204).end();
   });
-  router.post('/api/v1/auth/password-reset', signInLimiter, async (req, res) => {
+  router.post('/api/v1/auth/password-reset', resetPerAddress, resetPerAccount, async (req, res) => {
     await team.requestPasswordReset(req.body.email);
     res.status(202).json({ status: 'accepted' });
   });
-  router.post('/api/v1/auth/password-reset/confirm', signInLimiter, async (req, res) => {
+  router.post('/api/v1/auth/password-reset/confirm', resetConfirmPerAddress, async (req, res) => {
     await team.confirmPasswordReset(req.body.token, req.body.password);
     res.status(204).end();
   });
@@ -88,7 +105,7 @@ export function accountRoutes(
   router.post('/api/v1/invitations', async (req, res) => {
     res.status(201).json(await team.invite(principalOf(req), req.body.email, req.body.role));
   });
-  router.post('/api/v1/invitations/accept', signInLimiter, async (req, res) => {
+  router.post('/api/v1/invitations/accept', acceptPerAddress, async (req, res) => {
     res.json(await team.accept(req.body.token, req.body.name, req.body.password));
   });
   router.delete('/api/v1/invitations/:id', async (req, res) => {
@@ -100,7 +117,7 @@ export function accountRoutes(
     res.json(await audit.list(principalOf(req).teamId, intQuery(req, 'limit', 50), intQuery(req, 'offset', 0)));
   });
   router.get('/api/v1/outbox', async (req, res) => {
-    res.json(await mailer.list(intQuery(req, 'limit', 50), intQuery(req, 'offset', 0)));
+    res.json(await mailer.list(principalOf(req).teamId, intQuery(req, 'limit', 50), intQuery(req, 'offset', 0)));
   });
   return router;
 }

@@ -1,6 +1,7 @@
+import { randomBytes } from 'node:crypto';
 import bcrypt from 'bcryptjs';
-import { Op } from 'sequelize';
-import type { MembershipRow, Models, Role, TeamRow, UserRow } from '../models/index.js';
+import { Op, type Transaction } from 'sequelize';
+import type { ApiKeyRow, MembershipRow, Models, Role, TeamRow, UserRow } from '../models/index.js';
 import type { AuditLog } from './audit.js';
 import { iso } from './dto.js';
 import { lowerRole, type Principal } from './principal.js';
@@ -10,6 +11,9 @@ import { unauthenticated } from '../http/errors.js';
 /** Touch `lastUsedAt` at most this often, so reads do not each become a write. */
 const LAST_USED_RESOLUTION_MS = 60_000;
 
+/** Keys made with keys made with keys…: a chain deeper than this is refused (and never made). */
+export const MAX_KEY_LINEAGE = 8;
+
 export interface SessionTokenDto {
   token: string;
   expiresAt: string;
@@ -17,29 +21,42 @@ export interface SessionTokenDto {
 
 /** Sign-in, sessions and the lookup of bearer tokens (sessions and API keys). */
 export class AuthService {
-  /** A real bcrypt hash to compare against when the e-mail is unknown, so timing tells nothing. */
-  private readonly dummyHash: string;
+  /**
+   * A bcrypt hash of a random password at the same cost as stored passwords: an unknown address
+   * (or an account without a password) costs the same compare as a wrong password, so the time
+   * of an answer does not tell which addresses have accounts.
+   */
+  private readonly dummyHash: Promise<string>;
 
   constructor(
     private readonly models: Models,
     private readonly audit: AuditLog,
     private readonly options: { sessionHours: number; bcryptRounds: number },
   ) {
-    this.dummyHash = bcrypt.hashSync('pulsewright-no-such-user', 4);
+    this.dummyHash = bcrypt.hash(randomBytes(16).toString('base64url'), options.bcryptRounds);
   }
 
   hashPassword(password: string): Promise<string> {
     return bcrypt.hash(password, this.options.bcryptRounds);
   }
 
+  /**
+   * Whether `password` is the user's password. Takes one bcrypt compare whether or not there is
+   * a user or a stored hash (see {@link dummyHash}).
+   */
+  async checkPassword(user: UserRow | null, password: string): Promise<boolean> {
+    const ok = await bcrypt.compare(password, user?.passwordHash ?? (await this.dummyHash));
+    return ok && Boolean(user?.passwordHash);
+  }
+
   async login(email: string, password: string): Promise<SessionTokenDto> {
     const user = await this.models.User.findOne({ where: { email: email.toLowerCase() } });
-    const ok = await bcrypt.compare(password, user?.passwordHash ?? this.dummyHash);
-    if (!user || !user.passwordHash || !ok) {
+    const ok = await this.checkPassword(user, password);
+    if (!user || !ok) {
       // Filed under the account's team when the address is known, so its admins see attempts.
-      const known = user ? await this.models.Membership.findOne({ where: { userId: user.id }, order: [['createdAt', 'ASC']] }) : null;
+      const known = user ? await this.firstTeamOf(user.id) : null;
       await this.audit.record(
-        { userId: null, email: null, teamId: known?.teamId ?? null },
+        { userId: null, email: null, teamId: known },
         'auth.login-failed',
         'user',
         user?.id ?? null,
@@ -47,11 +64,17 @@ export class AuthService {
       );
       throw unauthenticated('The e-mail address or the password is wrong.');
     }
-    const membership = await this.models.Membership.findOne({ where: { userId: user.id }, order: [['createdAt', 'ASC']] });
-    if (!membership) throw unauthenticated('This account is not a member of any team.');
-    const session = await this.startSession(user.id, membership.teamId);
-    await this.audit.record({ userId: user.id, email: user.email, teamId: membership.teamId }, 'auth.login', 'user', user.id);
+    const teamId = await this.firstTeamOf(user.id);
+    if (!teamId) throw unauthenticated('This account is not a member of any team.');
+    const session = await this.startSession(user.id, teamId);
+    await this.audit.record({ userId: user.id, email: user.email, teamId }, 'auth.login', 'user', user.id);
     return session;
+  }
+
+  /** The team a person signs in to: their oldest membership (one team per sign-in for now). */
+  async firstTeamOf(userId: string): Promise<string | null> {
+    const membership = await this.models.Membership.findOne({ where: { userId }, order: [['createdAt', 'ASC']] });
+    return membership?.teamId ?? null;
   }
 
   async startSession(userId: string, teamId: string): Promise<SessionTokenDto> {
@@ -67,12 +90,13 @@ export class AuthService {
     await this.audit.record(principal, 'auth.logout', 'user', principal.user.id);
   }
 
-  /** Ends every session of a user (password change, removal from the team). */
-  async endSessions(userId: string, teamId?: string): Promise<void> {
-    await this.models.Session.update(
+  /** Ends every session of a user (password change, removal from the team); returns how many. */
+  async endSessions(userId: string, teamId?: string, transaction?: Transaction): Promise<number> {
+    const [ended] = await this.models.Session.update(
       { revokedAt: new Date() },
-      { where: { userId, revokedAt: null, ...(teamId ? { teamId } : {}) } },
+      { where: { userId, revokedAt: null, ...(teamId ? { teamId } : {}) }, transaction },
     );
+    return ended;
   }
 
   /** The principal a bearer token stands for, or null when it is unknown, expired or revoked. */
@@ -91,7 +115,7 @@ export class AuthService {
     }
     if (token.startsWith(API_KEY_PREFIX)) {
       const key = await this.models.ApiKey.findOne({ where: { keyHash: hashToken(token), revokedAt: null } });
-      if (!key || (key.expiresAt && key.expiresAt <= now)) return null;
+      if (!key || (key.expiresAt && key.expiresAt <= now) || !(await this.lineageStands(key, now))) return null;
       const principal = await this.principalFor(key.userId, key.teamId, key.role, 'api-key', key.id);
       if (principal && (!key.lastUsedAt || now.getTime() - key.lastUsedAt.getTime() > LAST_USED_RESOLUTION_MS)) {
         await key.update({ lastUsedAt: now });
@@ -99,6 +123,22 @@ export class AuthService {
       return principal;
     }
     return null;
+  }
+
+  /**
+   * Whether every key a key was made with (its parent, the parent's parent, …) is still
+   * unrevoked and unexpired. Revoking a key revokes its descendants too (ApiKeyService.revoke);
+   * this check also covers a key made while its parent was being revoked.
+   */
+  private async lineageStands(key: ApiKeyRow, now: Date): Promise<boolean> {
+    let parentId = key.createdWithKeyId;
+    for (let depth = 0; parentId; depth++) {
+      if (depth >= MAX_KEY_LINEAGE) return false;
+      const parent = await this.models.ApiKey.findByPk(parentId);
+      if (!parent || parent.revokedAt || (parent.expiresAt && parent.expiresAt <= now)) return false;
+      parentId = parent.createdWithKeyId;
+    }
+    return true;
   }
 
   private async principalFor(

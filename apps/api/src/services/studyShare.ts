@@ -55,7 +55,7 @@ export class StudyShareService {
       (report ? `${reportFigures(report)}\n\n` : '') +
       (message ? `Message from ${principal.user.name}:\n${message}\n\n` : '') +
       `Caution. ${REPORT_CAUTION}\n`;
-    await this.mailer.send({ to, subject: `Pulsewright study report: ${name}`, text });
+    await this.mailer.send({ to, subject: `Pulsewright study report: ${name}`, text, teamId: principal.teamId });
     await this.audit.record(principal, 'study.share', 'study', study.id, {
       to,
       revision: study.currentRevision,

@@ -1,6 +1,6 @@
-import { Op } from 'sequelize';
+import { Op, type Model, type ModelStatic, type Transaction } from 'sequelize';
 import type { InvitationRow, Models, Role } from '../models/index.js';
-import { badRequest, conflict, notFound } from '../http/errors.js';
+import { badRequest, conflict, notFound, unauthenticated, type HttpError } from '../http/errors.js';
 import type { AuditLog } from './audit.js';
 import type { AuthService, SessionTokenDto } from './auth.js';
 import { iso } from './dto.js';
@@ -100,7 +100,11 @@ export class TeamService {
       subject: `You are invited to ${principal.teamName} on Pulsewright`,
       text:
         `${principal.user.name} invited you to join ${principal.teamName} on Pulsewright as ${role}.\n\n` +
-        `Accept within ${INVITATION_DAYS} days: ${link}\n(or POST /api/v1/invitations/accept with this token: ${token})\n`,
+        `Accept within ${INVITATION_DAYS} days: ${link}\n(or POST /api/v1/invitations/accept with this token: ${token})\n` +
+        (existing
+          ? `\n${address} already has a Pulsewright account: sign in with its current password to join; nothing about the account changes.\n`
+          : ''),
+      teamId: principal.teamId,
       secrets: [token],
     });
     await this.audit.record(principal, 'invitation.create', 'invitation', row.id, { email: address, role });
@@ -110,30 +114,72 @@ export class TeamService {
   async withdraw(principal: Principal, id: string): Promise<void> {
     const row = await this.models.Invitation.findOne({ where: { id, teamId: principal.teamId } });
     if (!row) throw notFound('That invitation');
-    if (row.acceptedAt) throw conflict('That invitation was already accepted.');
-    await row.update({ withdrawnAt: new Date() });
+    // Conditional, like acceptance: an invitation accepted meanwhile stays accepted.
+    const [changed] = await this.models.Invitation.update({ withdrawnAt: new Date() }, { where: { id: row.id, acceptedAt: null } });
+    if (!changed) throw conflict('That invitation was already accepted.');
     await this.audit.record(principal, 'invitation.withdraw', 'invitation', row.id, { email: row.email });
   }
 
+  /**
+   * Accepts an invitation. For a new address it makes the account with `name` and `password`.
+   * For an address that already has an account, the membership is added only when `password` is
+   * that account's current password (a sign-in); the account's password and name never change
+   * here, so the holder of an invitation cannot take over the account it is addressed to.
+   * The token is consumed by one conditional update, so of concurrent acceptances one wins.
+   */
   async accept(token: string, name: string, password: string): Promise<SessionTokenDto> {
     const row = await this.models.Invitation.findOne({ where: { tokenHash: hashToken(token) } });
-    if (!row || row.acceptedAt || row.withdrawnAt || row.expiresAt <= new Date()) {
-      throw badRequest('This invitation is unknown, used, withdrawn or expired; ask an admin for a new one.', [
-        { path: 'token', message: 'token is not an open invitation' },
-      ]);
+    if (!row || !isOpen(row)) throw invitationClosed();
+    const existing = await this.models.User.findOne({ where: { email: row.email } });
+    if (existing) {
+      if (!(await this.auth.checkPassword(existing, password))) {
+        throw unauthenticated(
+          `${row.email} already has a Pulsewright account: enter that account's current password to join (it is not changed here). Forgot it? Ask for a password reset first.`,
+        );
+      }
     }
-    const passwordHash = await this.auth.hashPassword(password);
+    const passwordHash = existing ? null : await this.auth.hashPassword(password);
     const userId = await this.models.sequelize.transaction(async (transaction) => {
-      let user = await this.models.User.findOne({ where: { email: row.email }, transaction });
-      if (user) await user.update({ name, passwordHash }, { transaction });
-      else user = await this.models.User.create({ email: row.email, name, passwordHash }, { transaction });
+      await this.consume(this.models.Invitation, { id: row.id, acceptedAt: null, withdrawnAt: null }, 'acceptedAt', transaction, invitationClosed);
+      let user = existing;
+      if (!user) {
+        // Made meanwhile (two invitations to one new address accepted at once): the unique
+        // e-mail index refuses the second, and it is asked to sign in instead.
+        user = await this.models.User.create({ email: row.email, name, passwordHash }, { transaction });
+      }
       const already = await this.models.Membership.findOne({ where: { teamId: row.teamId, userId: user.id }, transaction });
       if (!already) await this.models.Membership.create({ teamId: row.teamId, userId: user.id, role: row.role }, { transaction });
-      await row.update({ acceptedAt: new Date() }, { transaction });
-      await this.audit.record({ userId: user.id, email: user.email, teamId: row.teamId }, 'invitation.accept', 'invitation', row.id, { role: row.role }, transaction);
+      await this.audit.record(
+        { userId: user.id, email: user.email, teamId: row.teamId },
+        'invitation.accept',
+        'invitation',
+        row.id,
+        { role: row.role, existingAccount: Boolean(existing) },
+        transaction,
+      );
       return user.id;
     });
     return this.auth.startSession(userId, row.teamId);
+  }
+
+  /**
+   * Marks a one-time token used with one conditional UPDATE (`… WHERE id = ? AND <field> IS
+   * NULL AND expiresAt > now`): of concurrent uses exactly one changes the row; the others
+   * change nothing and are refused with `refusal()`.
+   */
+  private async consume<R extends Model>(
+    model: ModelStatic<R>,
+    where: Record<string, unknown>,
+    field: 'acceptedAt' | 'usedAt',
+    transaction: Transaction,
+    refusal: () => Error,
+  ): Promise<void> {
+    const now = new Date();
+    const [changed] = await model.update({ [field]: now } as never, {
+      where: { ...where, [field]: null, expiresAt: { [Op.gt]: now } } as never,
+      transaction,
+    });
+    if (changed !== 1) throw refusal();
   }
 
   /** Always succeeds from the caller's view, so it does not reveal which addresses exist. */
@@ -146,32 +192,63 @@ export class TeamService {
       tokenHash: hashToken(token),
       expiresAt: new Date(Date.now() + RESET_MINUTES * 60_000),
     });
+    const teamId = await this.auth.firstTeamOf(user.id);
     await this.mailer.send({
       to: user.email,
       subject: 'Reset your Pulsewright password',
       text:
         `Someone asked to reset the password of ${user.email}. If it was you, open within ${RESET_MINUTES} minutes:\n` +
         `${this.publicUrl}/reset-password?token=${token}\n(or POST /api/v1/auth/password-reset/confirm with this token: ${token})\n` +
-        'If it was not you, ignore this message; the password stays as it is.\n',
+        'If it was not you, ignore this message; the password stays as it is.\n' +
+        'A reset signs you out everywhere and revokes every API key you made; make new keys afterwards.\n',
+      teamId,
       secrets: [token],
     });
-    await this.audit.record({ userId: user.id, email: user.email, teamId: null }, 'auth.password-reset-request', 'user', user.id);
+    await this.audit.record({ userId: user.id, email: user.email, teamId }, 'auth.password-reset-request', 'user', user.id);
   }
 
+  /**
+   * Sets a new password with a reset token. The token is consumed by one conditional update (one
+   * winner under concurrency). Policy (docs/security.md): a reset ends every session of the user
+   * and revokes every API key they made, in every team, and voids their other open reset links;
+   * whoever knew the old password may have made keys with it, and a reset is what a person does
+   * when they fear exactly that.
+   */
   async confirmPasswordReset(token: string, password: string): Promise<void> {
     const row = await this.models.PasswordReset.findOne({ where: { tokenHash: hashToken(token) } });
-    if (!row || row.usedAt || row.expiresAt <= new Date()) {
-      throw badRequest('This reset link is unknown, used or expired; ask for a new one.', [
-        { path: 'token', message: 'token is not an open password reset' },
-      ]);
-    }
+    if (!row || row.usedAt || row.expiresAt <= new Date()) throw resetClosed();
     const passwordHash = await this.auth.hashPassword(password);
-    await this.models.User.update({ passwordHash }, { where: { id: row.userId } });
-    await row.update({ usedAt: new Date() });
-    await this.auth.endSessions(row.userId);
-    await this.audit.record({ userId: row.userId, email: null, teamId: null }, 'auth.password-reset', 'user', row.userId);
+    const teamId = await this.auth.firstTeamOf(row.userId);
+    await this.models.sequelize.transaction(async (transaction) => {
+      await this.consume(this.models.PasswordReset, { id: row.id }, 'usedAt', transaction, resetClosed);
+      const now = new Date();
+      await this.models.User.update({ passwordHash }, { where: { id: row.userId }, transaction });
+      const sessionsEnded = await this.auth.endSessions(row.userId, undefined, transaction);
+      const [keysRevoked] = await this.models.ApiKey.update({ revokedAt: now }, { where: { userId: row.userId, revokedAt: null }, transaction });
+      await this.models.PasswordReset.update({ usedAt: now }, { where: { userId: row.userId, usedAt: null }, transaction });
+      await this.audit.record(
+        { userId: row.userId, email: null, teamId },
+        'auth.password-reset',
+        'user',
+        row.userId,
+        { sessionsEnded, keysRevoked },
+        transaction,
+      );
+    });
   }
 }
+
+const isOpen = (row: InvitationRow): boolean => !row.acceptedAt && !row.withdrawnAt && row.expiresAt > new Date();
+
+const invitationClosed = (): HttpError =>
+  badRequest('This invitation is unknown, used, withdrawn or expired; ask an admin for a new one.', [
+    { path: 'token', message: 'token is not an open invitation' },
+  ]);
+
+const resetClosed = (): HttpError =>
+  badRequest('This reset link is unknown, used or expired; ask for a new one.', [
+    { path: 'token', message: 'token is not an open password reset' },
+  ]);
 
 function invitationDto(row: InvitationRow): InvitationDto {
   const status = row.acceptedAt ? 'accepted' : row.withdrawnAt ? 'withdrawn' : row.expiresAt <= new Date() ? 'expired' : 'open';
