@@ -11,6 +11,7 @@ import { paths } from '../../../config/paths';
 import { errorMessage, fieldErrorOf } from '../../../lib/api';
 import { formatNumber, formatPercent } from '../../../lib/format';
 import { roleAtLeast, useMe } from '../../../lib/me';
+import { PATTERN_KIND_OPTIONS } from '../../../lib/modulationOptions';
 import { branchesOf, getEliminationProjects, pointSpectrum, useCreateSheSweep, useSaveSheStudy, useSheJob } from '../api/elimination';
 
 /** The fundamental frequency a saved pattern study starts with, hertz (edited in the study). */
@@ -104,7 +105,7 @@ export function EliminationPage() {
       <div className="grid gap-5 lg:grid-cols-[320px_minmax(0,1fr)]">
         <Panel title="Pattern">
           <form onSubmit={submit} className="flex flex-col gap-3" noValidate>
-            <SelectField label="Pattern" value={form.kind} onChange={(e) => setForm({ ...form, kind: e.target.value as 'bipolar' | 'staircase' })} options={[{ value: 'bipolar', label: 'Two-level (bipolar)' }, { value: 'staircase', label: 'Multilevel staircase' }]} />
+            <SelectField label="Pattern" value={form.kind} onChange={(e) => setForm({ ...form, kind: e.target.value as 'bipolar' | 'staircase' })} options={PATTERN_KIND_OPTIONS} />
             <TextField label="DC level" unit="V" type="number" value={form.vdc} onChange={(e) => setForm({ ...form, vdc: Number(e.target.value) })} error={fieldErrorOf(start.error, 'vdc')} />
             <TextField label="Orders to eliminate" value={form.eliminate} onChange={(e) => setForm({ ...form, eliminate: e.target.value })} hint={`odd orders ≥ 3; ${count} angles per quarter`} error={fieldErrorOf(start.error, 'eliminate') ?? fieldErrorOf(start.error, 'count')} />
             <div className="grid grid-cols-2 gap-3">

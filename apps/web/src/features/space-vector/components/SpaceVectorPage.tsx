@@ -3,6 +3,7 @@ import { SelectField, SliderField } from '../../../components/ui/Field';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState } from '../../../components/ui/QueryState';
 import { formatNumber } from '../../../lib/format';
+import { CLAMPING_OPTIONS, SEQUENCE_OPTIONS } from '../../../lib/modulationOptions';
 import { MAX_M, sequenceFor, type SpaceVectorInput } from '../api/spaceVectorModel';
 import { HexagonChart } from './HexagonChart';
 import { SequenceChart } from './SequenceChart';
@@ -19,9 +20,9 @@ export function SpaceVectorPage() {
           <div className="flex flex-col gap-3">
             <SliderField label="Modulation index m" value={input.m} min={0} max={Number(MAX_M.toFixed(3))} step={0.005} hint="m = √3·|Vref|/Vdc; 1 is the inscribed circle" onChange={(m) => setInput({ ...input, m })} />
             <SliderField label="Angle θ" unit="degrees" value={input.thetaDegrees} min={0} max={359} step={1} onChange={(thetaDegrees) => setInput({ ...input, thetaDegrees })} />
-            <SelectField label="Sequence" value={input.sequence} onChange={(e) => setInput({ ...input, sequence: e.target.value as SpaceVectorInput['sequence'] })} options={[{ value: 'seven-segment', label: 'Seven segments' }, { value: 'five-segment', label: 'Five segments (clamped)' }]} />
+            <SelectField label="Sequence" value={input.sequence} onChange={(e) => setInput({ ...input, sequence: e.target.value as SpaceVectorInput['sequence'] })} options={SEQUENCE_OPTIONS} />
             {input.sequence === 'five-segment' ? (
-              <SelectField label="Clamping" value={input.clamping} onChange={(e) => setInput({ ...input, clamping: e.target.value as SpaceVectorInput['clamping'] })} options={['dpwm1', 'dpwm-min', 'dpwm-max', 'dpwm0', 'dpwm2', 'dpwm3'].map((v) => ({ value: v, label: v }))} />
+              <SelectField label="Clamping" value={input.clamping} onChange={(e) => setInput({ ...input, clamping: e.target.value as SpaceVectorInput['clamping'] })} options={CLAMPING_OPTIONS} />
             ) : null}
           </div>
           {result ? (

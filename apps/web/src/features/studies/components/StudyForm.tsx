@@ -16,7 +16,7 @@ import {
   SEQUENCE_OPTIONS,
   SPACE_VECTOR_SAMPLING_OPTIONS,
   ZERO_SEQUENCE_OPTIONS,
-} from '../model/designOptions';
+} from '../../../lib/modulationOptions';
 import { isCarrierMethod, isPatternMethod, type StoredPattern, type StudyDraft } from '../model/studyDraft';
 
 export interface StudyFormProps {

@@ -11,7 +11,7 @@ import {
   SEQUENCE_OPTIONS,
   SPACE_VECTOR_SAMPLING_OPTIONS,
   ZERO_SEQUENCE_OPTIONS,
-} from './designOptions';
+} from '../../../lib/modulationOptions';
 import { designOf, draftOf } from './studyDraft';
 
 const degrees = (radians: number) => `${formatNumber((radians * 180) / Math.PI, 6)}°`;

@@ -6,6 +6,7 @@ import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState, QueryView } from '../../../components/ui/QueryState';
 import { errorMessage, fieldErrorOf } from '../../../lib/api';
 import { formatDate, formatPercent } from '../../../lib/format';
+import { METHOD_OPTIONS, SCHEME_OPTIONS, ZERO_SEQUENCE_OPTIONS } from '../../../lib/modulationOptions';
 import { useCreateMaSweep, useJob, useJobs, type Job, type ZeroSequence } from '../api/jobs';
 
 /** The result of an ma sweep as the API returns it (the library's ModulationIndexSweep). */
@@ -64,16 +65,16 @@ export function SweepsPage() {
       <div className="grid gap-5 lg:grid-cols-[320px_minmax(0,1fr)]">
         <Panel title="Sweep">
           <form onSubmit={submit} className="flex flex-col gap-3" noValidate>
-            <SelectField label="Method" value={form.method} onChange={(e) => setForm({ ...form, method: e.target.value })} options={[{ value: 'sine-triangle', label: 'Sine-triangle, single-phase bridge' }, { value: 'three-phase', label: 'Three-phase carrier' }]} />
+            <SelectField label="Method" value={form.method} onChange={(e) => setForm({ ...form, method: e.target.value })} options={METHOD_OPTIONS.filter((o) => o.value === 'sine-triangle' || o.value === 'three-phase')} />
             {form.method === 'three-phase' ? (
               <SelectField
                 label="Zero sequence"
                 value={form.zeroSequence}
                 onChange={(e) => setForm({ ...form, zeroSequence: e.target.value })}
-                options={['none', 'third-harmonic', 'min-max', 'clamp-60-peak', 'clamp-60-lead', 'clamp-60-lag', 'clamp-120-top', 'clamp-120-bottom'].map((v) => ({ value: v, label: v }))}
+                options={ZERO_SEQUENCE_OPTIONS}
               />
             ) : (
-              <SelectField label="Bridge scheme" value={form.scheme} onChange={(e) => setForm({ ...form, scheme: e.target.value })} options={[{ value: 'bipolar', label: 'Bipolar' }, { value: 'unipolar', label: 'Unipolar' }]} />
+              <SelectField label="Bridge scheme" value={form.scheme} onChange={(e) => setForm({ ...form, scheme: e.target.value })} options={SCHEME_OPTIONS} />
             )}
             <TextField label="Frequency ratio mf" type="number" value={form.mf} onChange={num('mf')} hint="whole number, 1 to 1000" error={err('mf')} />
             <TextField label="DC bus" unit="V" type="number" value={form.vdc} onChange={num('vdc')} hint="above 0, up to 100000" error={err('vdc')} />

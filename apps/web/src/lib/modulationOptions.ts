@@ -1,3 +1,4 @@
+// Option lists of the modulation model for every form of the dashboard.
 import {
   BRIDGE_SCHEMES,
   CARRIER_SAMPLINGS,
