@@ -49,6 +49,7 @@ describe('invitations to an address that already has an account', () => {
     expect(takeover.status).toBe(401);
     expect(takeover.headers['content-type']).toMatch(/problem\+json/);
     expect(takeover.body.detail).toContain('already has a Pulsewright account');
+    expect(takeover.body.errors[0]).toMatchObject({ path: 'password' });
     expect((await request(t.app).post('/api/v1/auth/login').send({ email: DEMO.engineer, password: 'attacker-chosen-password' })).status).toBe(401);
     const own = await signIn(t.app, DEMO.engineer);
     const me = await request(t.app).get('/api/v1/me').set(bearer(own));

@@ -1,6 +1,6 @@
 import { Op, type Model, type ModelStatic, type Transaction } from 'sequelize';
 import type { InvitationRow, Models, Role } from '../models/index.js';
-import { badRequest, conflict, notFound, unauthenticated, type HttpError } from '../http/errors.js';
+import { badRequest, conflict, HttpError, notFound } from '../http/errors.js';
 import type { AuditLog } from './audit.js';
 import type { AuthService, SessionTokenDto } from './auth.js';
 import { iso } from './dto.js';
@@ -133,9 +133,9 @@ export class TeamService {
     const existing = await this.models.User.findOne({ where: { email: row.email } });
     if (existing) {
       if (!(await this.auth.checkPassword(existing, password))) {
-        throw unauthenticated(
-          `${row.email} already has a Pulsewright account: enter that account's current password to join (it is not changed here). Forgot it? Ask for a password reset first.`,
-        );
+        const detail = `${row.email} already has a Pulsewright account: enter that account's current password to join (it is not changed here). Forgot it? Ask for a password reset first.`;
+        // 401 as for a failed sign-in; the item lets a form mark the password field.
+        throw new HttpError(401, detail, [{ path: 'password', message: "password must be the account's current password" }]);
       }
     }
     const passwordHash = existing ? null : await this.auth.hashPassword(password);
