@@ -62,7 +62,7 @@ export function HarmonicLimitsPanel({ report, busVoltage, onBusVoltage, busVolta
         {expanded ? (
           <>
             <h3 className="mt-3 text-xs font-semibold tracking-wide uppercase">Order by order to {check.limits.maxOrder}</h3>
-            <div className="grid grid-cols-1 gap-x-6 sm:grid-cols-3">
+            <div className="grid grid-cols-1 gap-x-6 text-xs sm:grid-cols-3">
               {[0, 1, 2].map((part) => (
                 <OrderTable key={part} rows={check.table.filter((_, i) => Math.floor((i * 3) / check.table.length) === part)} />
               ))}
@@ -86,11 +86,11 @@ export function HarmonicLimitsPanel({ report, busVoltage, onBusVoltage, busVolta
 
 function OrderTable({ rows }: { rows: StudyReport['limitCheck']['table'] }) {
   return (
-    <table className="mt-1 w-full" aria-label={`Limit check, orders ${rows[0]?.order ?? ''} to ${rows[rows.length - 1]?.order ?? ''}`}>
+    <table className="mt-1 w-full whitespace-nowrap [&_td]:pr-2 [&_th]:pr-2" aria-label={`Limit check, orders ${rows[0]?.order ?? ''} to ${rows[rows.length - 1]?.order ?? ''}`}>
       <thead className="text-left text-ink-soft">
         <tr>
           <th className="font-medium">Order</th>
-          <th className="font-medium">% of fundamental</th>
+          <th className="font-medium">% of order 1</th>
           <th className="font-medium">Limit</th>
           <th className="font-medium">Result</th>
         </tr>
