@@ -120,6 +120,37 @@ function bodyRequired(op: Operation): boolean {
   return (op.operation.requestBody as { required?: boolean } | undefined)?.required === true;
 }
 
+const PATTERN_METHODS = ['selective-harmonic-elimination', 'optimal-pattern'];
+
+/**
+ * An InverterDesign the library can analyse, from a schema-valid one: what the schema cannot
+ * say (a carrier frequency that is a whole multiple of the fundamental for the carrier methods
+ * and none for a stored pattern, ascending pattern angles, one of m and ma) is made so, with a
+ * small frequency ratio (1 to 60) to keep the analysis cheap. Without this almost every random
+ * design stops at the library's 400 and the analysis itself is never fuzzed.
+ */
+function coherentDesign(design: Record<string, unknown>, pick: number): Record<string, unknown> {
+  const copy = { ...design };
+  const modulation = copy.modulation as Record<string, unknown> | undefined;
+  if (!modulation || typeof modulation !== 'object') return copy;
+  const method = String(modulation.method);
+  if (PATTERN_METHODS.includes(method)) {
+    delete copy.carrierFrequency;
+    if (Array.isArray(modulation.angles)) {
+      const angles = [...new Set(modulation.angles as number[])].sort((a, b) => a - b);
+      copy.modulation = { ...modulation, angles };
+    }
+  } else if (typeof copy.fundamentalFrequency === 'number') {
+    const carrier = copy.fundamentalFrequency * (1 + (pick % 60));
+    if (carrier <= 1e8) copy.carrierFrequency = carrier;
+    if (method === 'space-vector' && 'm' in modulation && 'ma' in modulation) {
+      const { [pick % 2 === 0 ? 'm' : 'ma']: _dropped, ...rest } = modulation;
+      copy.modulation = rest;
+    }
+  }
+  return copy;
+}
+
 const INVALID_IDS = [
   'not-a-uuid',
   '..%2F..%2Fetc%2Fpasswd',
@@ -393,6 +424,8 @@ export function requestArbitrary(
             if (typeof copy[field] === 'string' && pool.length)
               copy[field] = pool[pick % pool.length];
           }
+          if (copy.design && typeof copy.design === 'object')
+            copy.design = coherentDesign(copy.design as Record<string, unknown>, pick);
           return copy;
         })
     : fc.constant(undefined);

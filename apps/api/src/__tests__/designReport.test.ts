@@ -240,4 +240,24 @@ describe('design report routes', () => {
       for (const w of c.words) expect(item!.message).toContain(w);
     }
   });
+
+  it('refuses before any work a report whose time series would exceed the budget, naming points and the most allowed', async () => {
+    const design: InverterDesign = {
+      vdc: 650,
+      fundamentalFrequency: 50,
+      carrierFrequency: 50 * 1000,
+      modulation: { method: 'three-phase', ma: 0.9 },
+      filter: FILTER,
+      load: LOAD,
+    };
+    // Three phases × (switch, capacitor, load current) + the output voltage = 10 series of `points`.
+    const res = await request(t.app).post('/api/v1/designs/report').set(auth).send({ design, points: 20_000 });
+    expect(res.status).toBe(400);
+    expect(res.body.errors[0].path).toBe('points');
+    expect(res.body.errors[0].message).toContain('points must be ≤ 4000 for this design');
+    const study = await createStudy('Large three-phase', design);
+    const stored = await request(t.app).get(`/api/v1/studies/${study}/report`).query({ points: 4001 }).set(auth);
+    expect(stored.status).toBe(400);
+    expect(stored.body.errors[0].path).toBe('points');
+  });
 });

@@ -1,10 +1,15 @@
 import {
   analyseDesign,
+  assertInverterDesign,
+  CARRIER_METHODS,
+  defaultSpectrumOrder,
   designModulation,
+  MAX_ANALYSIS_ORDER,
   harmonics,
   modulationVoltages,
   spaceVectorSequence,
   thd,
+  THREE_PHASE_METHODS,
   timerTable,
   timerTableToCHeader,
   timerTableToCsv,
@@ -58,6 +63,67 @@ export interface WaveformResult {
 const OPTION_FIELDS = ['maxOrder', 'points', 'busVoltage'] as const;
 
 /**
+ * Most harmonic-sum work one report request may ask for: switching edges × orders summed (the
+ * exact spectra and, with a filter, every phase to the analysis order). Every design the schema
+ * allows fits (a three-phase design at mf 1000 with a filter is about 2.1·10⁸, some 1.5 s); the
+ * budget stops a later widening of the bounds from making one request block the service.
+ */
+export const REPORT_WORK_BUDGET = 2.5e8;
+
+/**
+ * Most time-series values one report may return (points × the currents and voltages sampled):
+ * 40 000 keeps the answer near 1 MB; a three-phase design with a filter and a load samples ten
+ * series, so up to 4000 points a period.
+ */
+export const REPORT_SERIES_BUDGET = 40_000;
+
+/** Upper bound of the switching edges per period of one phase's voltage, from the design alone. */
+function edgesPerPhase(design: InverterDesign, ratio: number): { phase: number; line: number } {
+  const { modulation } = design;
+  switch (modulation.method) {
+    case 'sine-triangle':
+      return { phase: (modulation.scheme === 'unipolar' ? 4 : 2) * (ratio + 1), line: 0 };
+    case 'three-phase':
+    case 'space-vector':
+      // Each leg switches twice a carrier period; a phase-to-star voltage holds all three legs' edges.
+      return { phase: 6 * (ratio + 1), line: 4 * (ratio + 1) };
+    case 'selective-harmonic-elimination':
+    case 'optimal-pattern':
+      return { phase: 4 * (Array.isArray(modulation.angles) ? modulation.angles.length : 0), line: 0 };
+  }
+}
+
+/**
+ * Refuses, before any work, a report whose cost would exceed the budgets above (400 naming the
+ * option to lower). The estimates follow analyseDesign's documented analysis (its analysisOrder,
+ * its series); the schema has already bounded every input.
+ */
+export function assertReportBudget(design: InverterDesign, options: AnalyseDesignOptions, field = 'design'): void {
+  const pattern = !CARRIER_METHODS.includes(design.modulation.method);
+  const ratio = pattern ? 0 : Math.round((design.carrierFrequency ?? 0) / design.fundamentalFrequency);
+  const maxOrder = options.maxOrder ?? defaultSpectrumOrder(design);
+  const points = options.points ?? 1200;
+  const phases = THREE_PHASE_METHODS.includes(design.modulation.method) ? 3 : 1;
+  const edges = edgesPerPhase(design, ratio);
+  const filtered = design.filter !== undefined && design.filter !== null;
+  const analysisOrder = filtered ? Math.min(MAX_ANALYSIS_ORDER, Math.max(maxOrder, pattern ? 2000 : 10 * ratio + 10)) : maxOrder;
+  const work = (edges.phase + edges.line) * maxOrder + (filtered ? phases * edges.phase * analysisOrder : 0);
+  if (work > REPORT_WORK_BUDGET) {
+    const path = filtered && analysisOrder > maxOrder ? `${field}.carrierFrequency` : 'maxOrder';
+    const message =
+      `${path} asks for about ${work.toPrecision(2)} edge-order sums, more than the ${REPORT_WORK_BUDGET.toPrecision(2)} one request may take; ` +
+      'lower the carrier frequency or maxOrder, or run the study as a sweep job';
+    throw badRequest(message, [{ path, message }]);
+  }
+  const series = (filtered ? 1 + 3 * phases : 0) + (!filtered && design.load ? phases : 0);
+  if (series * points > REPORT_SERIES_BUDGET) {
+    const most = Math.floor(REPORT_SERIES_BUDGET / series);
+    const message = `points must be ≤ ${most} for this design (${series} time series of points samples each, at most ${REPORT_SERIES_BUDGET} values); got ${points}`;
+    throw badRequest(message, [{ path: 'points', message }]);
+  }
+}
+
+/**
  * The voltage of a modulation that spectra and waveforms analyse, with every named voltage of
  * the bridge, from the library's `modulationVoltages` (the one dispatch over methods).
  * @param prefix - where the modulation sits in the request, for the field names of errors
@@ -107,6 +173,9 @@ export function designSpectrum(design: InverterDesign, maxOrder: number, field =
  * request: `design.modulation.ma`, `design.carrierFrequency`, or the option (`maxOrder`).
  */
 export function designReport(design: InverterDesign, options: AnalyseDesignOptions = {}, field = 'design'): DesignReport {
+  // The design's own checks first (cheap), so the budget estimate reads a valid design.
+  callLibrary(`${field}.`, () => assertInverterDesign(design));
+  assertReportBudget(design, options, field);
   const report = callLibrary(`${field}.`, () => analyseDesign(design, options), OPTION_FIELDS);
   return finiteResult(field, report);
 }
