@@ -1,0 +1,32 @@
+import type { Harmonic } from '../spectrum/Harmonic.js';
+import { harmonics } from '../spectrum/harmonics.js';
+import { combineWaveforms } from '../waveform/combineWaveforms.js';
+import type { Waveform } from '../waveform/Waveform.js';
+import { waveformMeanSquare } from '../waveform/waveformMeanSquare.js';
+import type { CommonModeFigures } from './DesignReport.js';
+
+/**
+ * The common-mode voltage (v_a + v_b + v_c)/3 of three leg voltages, exact: its levels, RMS,
+ * steps (edges) per period and per carrier period, and spectrum (standard circuit analysis;
+ * A. M. Hava and E. Ün, IEEE Trans. Power Electronics, 2009, for why the steps matter).
+ * Internal: part of analyseDesign.
+ */
+export function commonModeFigures(
+  legs: readonly Waveform[],
+  context: { maxOrder: number; frequencyRatio: number | null; label: (s: readonly Harmonic[]) => CommonModeFigures['spectrum'] },
+): CommonModeFigures {
+  const { maxOrder, frequencyRatio, label } = context;
+  const waveform = combineWaveforms(legs, ([a = 0, b = 0, c = 0]) => (a + b + c) / 3);
+  // Levels are sums of ±vdc/2 thirds: round away the last bits so equal levels compare equal.
+  const levels = [...new Set(waveform.levels.map((level) => Number(level.toPrecision(12))))].sort((x, y) => x - y);
+  const steps = waveform.edges.length;
+  return {
+    name: 'common mode, star point to DC midpoint',
+    waveform,
+    levels,
+    rms: Math.sqrt(waveformMeanSquare(waveform)),
+    stepsPerPeriod: steps,
+    stepsPerCarrierPeriod: frequencyRatio === null ? null : steps / frequencyRatio,
+    spectrum: label(harmonics(waveform, maxOrder)),
+  };
+}

@@ -1,0 +1,55 @@
+import type { Harmonic } from '../spectrum/Harmonic.js';
+import { waveformValueAt } from '../waveform/waveformValueAt.js';
+import type { Waveform } from '../waveform/Waveform.js';
+import { TAU } from '../math.js';
+import type { DcLinkFigures } from './DesignReport.js';
+import { sampledSpectrum } from './sampledSpectrum.js';
+
+/**
+ * The DC-link current from each leg's switching function and its inverter current, sampled on
+ * the currents' grid (the same S angles 2πj/S for every phase): i_dc = Σ s_k·i_k. For a
+ * three-phase bridge s_k = ½ + v_k/vdc with v_k the leg voltage (±vdc/2), and Σ i_k = 0 for a
+ * star-connected load and filter, so i_dc = Σ (v_k/vdc)·i_k; for a single-phase bridge
+ * i_dc = (v_bridge/vdc)·i (standard circuit analysis; J. W. Kolar and S. D. Round, 2006).
+ * At a sample that falls exactly on an edge the level that starts there is used.
+ * Internal: part of analyseDesign.
+ */
+export function dcLinkFigures(
+  switching: readonly Waveform[],
+  inverterSamples: readonly Float64Array[],
+  context: { vdc: number; phaseCount: 1 | 3; maxOrder: number; points: number; label: (s: readonly Harmonic[]) => DcLinkFigures['spectrum'] },
+): DcLinkFigures {
+  const { vdc, phaseCount, maxOrder, points, label } = context;
+  const size = inverterSamples[0]?.length ?? 0;
+  const current = new Float64Array(size);
+  switching.forEach((waveform, k) => {
+    const phaseCurrent = inverterSamples[k] as Float64Array;
+    for (let j = 0; j < size; j++) current[j] = (current[j] as number) + (waveformValueAt(waveform, (TAU * j) / size) / vdc) * (phaseCurrent[j] as number);
+  });
+  let sum = 0;
+  let sumOfSquares = 0;
+  for (const value of current) {
+    sum += value;
+    sumOfSquares += value * value;
+  }
+  const mean = sum / size;
+  const rms = Math.sqrt(sumOfSquares / size);
+  const spectrum = sampledSpectrum(current, Math.min(maxOrder, size / 2 - 1));
+  const stride = Math.max(1, Math.floor(size / points));
+  const angles: number[] = [];
+  const values: number[] = [];
+  for (let j = 0; j < size; j += stride) {
+    angles.push((TAU * j) / size);
+    values.push(current[j] as number);
+  }
+  return {
+    mean,
+    rms,
+    rippleRms: Math.sqrt(Math.max(0, rms * rms - mean * mean)),
+    secondHarmonic: phaseCount === 1 ? (spectrum[2]?.amplitude ?? 0) : null,
+    spectrum: label(spectrum),
+    series: { angles, values },
+    samplesPerPeriod: size,
+  };
+}
+
