@@ -30,7 +30,13 @@ import { integrityCheck, mountSmallDisk, queryFile, type SmallDisk } from './sup
  * §15.6.4: the server is temporarily unable to handle the request).
  */
 
-const MODULATION = { method: 'sine-triangle', scheme: 'unipolar', ma: 0.86, mf: 41, vdc: 375 };
+/** The same bridge as a stored study's design (the design supplies vdc and the carrier frequency). */
+const DESIGN = {
+  vdc: 375,
+  fundamentalFrequency: 50,
+  carrierFrequency: 41 * 50,
+  modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.86 },
+};
 
 const cleanups: (() => Promise<void> | void)[] = [];
 afterEach(async () => {
@@ -74,7 +80,7 @@ async function studyBurst(
         const res = await call(server.baseUrl, 'POST', '/api/v1/studies', token, {
           projectId,
           name,
-          modulation: MODULATION,
+          design: DESIGN,
           note: 'x'.repeat(500),
         });
         if (res.status === 201) acknowledged.push({ id: (res.body as { id: string }).id, name });
@@ -223,7 +229,7 @@ describe('faults', () => {
       const before = await call(server.baseUrl, 'POST', '/api/v1/studies', token, {
         projectId,
         name: 'before read-only',
-        modulation: MODULATION,
+        design: DESIGN,
       });
       expect(before.status).toBe(201);
 
@@ -237,7 +243,7 @@ describe('faults', () => {
       const refused = await call(server.baseUrl, 'POST', '/api/v1/studies', token, {
         projectId,
         name: 'during read-only',
-        modulation: MODULATION,
+        design: DESIGN,
       });
       const read = await call(
         server.baseUrl,
@@ -272,7 +278,7 @@ describe('faults', () => {
       const after = await call(again.baseUrl, 'POST', '/api/v1/studies', token2, {
         projectId,
         name: 'after read-only',
-        modulation: MODULATION,
+        design: DESIGN,
       });
       expect(after.status).toBe(201);
       console.log(
@@ -308,7 +314,7 @@ describe('faults', () => {
         const res = await call(server.baseUrl, 'POST', '/api/v1/studies', token, {
           projectId,
           name,
-          modulation: MODULATION,
+          design: DESIGN,
           note: 'n'.repeat(2000),
         });
         if (res.status === 201) acknowledged.push({ id: (res.body as { id: string }).id, name });
@@ -325,7 +331,7 @@ describe('faults', () => {
       const after = await call(server.baseUrl, 'POST', '/api/v1/studies', token, {
         projectId,
         name: 'after the disk was freed',
-        modulation: MODULATION,
+        design: DESIGN,
       });
       expect.soft(after.status, 'a write once there is room again').toBe(201);
       expect(await missingStudies(server, token, acknowledged)).toEqual([]);

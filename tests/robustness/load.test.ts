@@ -160,6 +160,13 @@ async function readBack<T>(items: T[], check: (item: T) => Promise<boolean>): Pr
 }
 
 const MODULATION = { method: 'sine-triangle', scheme: 'unipolar', ma: 0.86, mf: 41, vdc: 375 };
+/** The same bridge as a stored study's design (the design supplies vdc and the carrier frequency). */
+const DESIGN = {
+  vdc: 375,
+  fundamentalFrequency: 50,
+  carrierFrequency: 41 * 50,
+  modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.86 },
+};
 
 describe(`load: ${CONNECTIONS} connections for ${SECONDS} s each`, () => {
   it(
@@ -197,7 +204,7 @@ describe(`load: ${CONNECTIONS} connections for ${SECONDS} s each`, () => {
                 body: JSON.stringify({
                   projectId,
                   name,
-                  modulation: { ...MODULATION, ma: 0.5 + (counter % 40) / 100 },
+                  design: { ...DESIGN, modulation: { ...DESIGN.modulation, ma: 0.5 + (counter % 40) / 100 } },
                   note: name,
                 }),
               };
@@ -242,7 +249,7 @@ describe(`load: ${CONNECTIONS} connections for ${SECONDS} s each`, () => {
         const res = await call(server.baseUrl, 'POST', '/api/v1/studies', token, {
           projectId,
           name: `edited under load ${i}`,
-          modulation: MODULATION,
+          design: DESIGN,
         });
         expect(res.status).toBe(201);
         pool.push((res.body as { id: string }).id);
@@ -269,7 +276,7 @@ describe(`load: ${CONNECTIONS} connections for ${SECONDS} s each`, () => {
                 body: JSON.stringify({
                   baseRevision: study.revision,
                   name: 'edited under load',
-                  modulation: { ...MODULATION, ma: 0.5 + (edits % 40) / 100 },
+                  design: { ...DESIGN, modulation: { ...DESIGN.modulation, ma: 0.5 + (edits % 40) / 100 } },
                   note,
                 }),
               };
