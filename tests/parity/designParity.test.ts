@@ -90,7 +90,7 @@ const designs: fc.Arbitrary<InverterDesign> = fc.oneof(
       {
         method: fc.constant('three-phase' as const),
         ma: fc.double({ min: 0.05, max: 1.15, noNaN: true }),
-        zeroSequence: fc.constantFrom('none' as const, 'third-harmonic' as const, 'min-max' as const, 'clamp-60-peak' as const, 'clamp-60-lead' as const, 'clamp-60-lag' as const, 'clamp-120-top' as const, 'clamp-120-bottom' as const),
+        zeroSequence: fc.constantFrom('none' as const, 'third-harmonic' as const, 'min-max' as const, 'dpwm1' as const, 'dpwm0' as const, 'dpwm2' as const, 'dpwm-max' as const, 'dpwm-min' as const),
         sampling: fc.constantFrom('natural' as const, 'regular-symmetric' as const, 'regular-asymmetric' as const),
         carrierPhase,
       },

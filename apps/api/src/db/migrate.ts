@@ -3,12 +3,14 @@ import { SequelizeStorage, Umzug } from 'umzug';
 import * as initialSchema from '../migrations/0001-initial-schema.js';
 import * as studyDesign from '../migrations/0002-study-design.js';
 import * as accountCredentials from '../migrations/0003-account-credentials.js';
+import * as dpwmNames from '../migrations/0004-dpwm-names.js';
 
 /** The migrations in order; listed by hand so src/ and dist/ run the same set. */
 export const MIGRATIONS = [
   { name: '0001-initial-schema', up: initialSchema.up, down: initialSchema.down },
   { name: '0002-study-design', up: studyDesign.up, down: studyDesign.down },
   { name: '0003-account-credentials', up: accountCredentials.up, down: accountCredentials.down },
+  { name: '0004-dpwm-names', up: dpwmNames.up, down: dpwmNames.down },
 ];
 
 /**

@@ -29,7 +29,10 @@ export interface Option<T extends string> {
   label: string;
 }
 
-const options = <T extends string>(values: readonly T[], labels: Readonly<Record<T, string>>): Option<T>[] => values.map((value) => ({ value, label: labels[value] }));
+const options = <T extends string>(
+  values: readonly T[],
+  labels: Readonly<Record<T, string>>,
+): Option<T>[] => values.map((value) => ({ value, label: labels[value] }));
 
 export const METHOD_OPTIONS = options(MODULATION_METHODS, MODULATION_METHOD_LABELS);
 
@@ -48,11 +51,11 @@ export const ZERO_SEQUENCE_OPTIONS = options<ZeroSequence>(ZERO_SEQUENCES, {
   none: 'None (sine references, SPWM)',
   'third-harmonic': 'Third harmonic (1/6)',
   'min-max': 'Min-max (centred, equals SVPWM)',
-  'clamp-60-peak': 'DPWM1: clamp 60° at the peaks',
-  'clamp-60-lead': 'DPWM0: clamp 60°, leading 30°',
-  'clamp-60-lag': 'DPWM2: clamp 60°, lagging 30°',
-  'clamp-120-top': 'DPWMMAX: clamp 120° to the top rail',
-  'clamp-120-bottom': 'DPWMMIN: clamp 120° to the bottom rail',
+  dpwm1: 'DPWM1: clamp 60° at the peaks',
+  dpwm0: 'DPWM0: clamp 60°, leading 30°',
+  dpwm2: 'DPWM2: clamp 60°, lagging 30°',
+  'dpwm-max': 'DPWMMAX: clamp 120° to the top rail',
+  'dpwm-min': 'DPWMMIN: clamp 120° to the bottom rail',
 });
 
 export const SEQUENCE_OPTIONS = options<SpaceVectorSequenceKind>(SPACE_VECTOR_SEQUENCES, {
@@ -65,7 +68,10 @@ const SPACE_VECTOR_SAMPLING_LABELS: Readonly<Record<SpaceVectorSampling, string>
   symmetric: 'Regular, symmetric (once per period)',
   asymmetric: 'Regular, asymmetric (twice per period)',
 };
-export const SPACE_VECTOR_SAMPLING_OPTIONS = options(Object.keys(SPACE_VECTOR_SAMPLING_LABELS) as SpaceVectorSampling[], SPACE_VECTOR_SAMPLING_LABELS);
+export const SPACE_VECTOR_SAMPLING_OPTIONS = options(
+  Object.keys(SPACE_VECTOR_SAMPLING_LABELS) as SpaceVectorSampling[],
+  SPACE_VECTOR_SAMPLING_LABELS,
+);
 
 export const CLAMPING_OPTIONS = options<ZeroVectorClamping>(ZERO_VECTOR_CLAMPINGS, {
   'dpwm-min': 'DPWMMIN: always 000',

@@ -32,6 +32,6 @@ export function threePhaseReference(
     slopeBound: zeroSequence === 'none' ? ma : 2 * ma,
     breakpoints: zeroSequence === 'none' ? [] : Array.from({ length: 12 }, (_, k) => k * THIRTY_DEGREES),
     // Negating the three sines negates every offset except the 120° clamps, which swap rails.
-    halfWaveAntisymmetric: zeroSequence !== 'clamp-120-top' && zeroSequence !== 'clamp-120-bottom',
+    halfWaveAntisymmetric: zeroSequence !== 'dpwm-max' && zeroSequence !== 'dpwm-min',
   };
 }

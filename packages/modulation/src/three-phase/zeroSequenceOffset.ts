@@ -10,7 +10,7 @@ import type { ZeroSequence } from './ZeroSequence.js';
  * and the others follow the same offset.
  *
  * The 60° clamps choose the rail by the 30° interval θ lies in, not by comparing the sines
- * (Holmes and Lipo 2003, ch. 7: clamp-60-peak takes the positive rail on [60°, 120°),
+ * (Holmes and Lipo 2003, ch. 7: dpwm1 takes the positive rail on [60°, 120°),
  * [180°, 240°) and [300°, 360°), where phase a, b or c is at its positive peak, and the negative
  * rail between; lead advances those blocks by 30°, lag delays them by 30°). The blocks are
  * half-open, [start, end); at a boundary the two candidate phases tie in magnitude, and the
@@ -40,13 +40,13 @@ export function zeroSequenceOffset(
       return (ma / 6) * Math.sin(3 * theta);
     case 'min-max':
       return -(max + min) / 2;
-    case 'clamp-120-top':
+    case 'dpwm-max':
       return 1 - max;
-    case 'clamp-120-bottom':
+    case 'dpwm-min':
       return -1 - min;
-    case 'clamp-60-peak':
-    case 'clamp-60-lead':
-    case 'clamp-60-lag':
+    case 'dpwm1':
+    case 'dpwm0':
+    case 'dpwm2':
       return clampsHigh(zeroSequence, thirtyDegreeSector(theta)) ? 1 - max : -1 - min;
   }
 }
@@ -56,7 +56,7 @@ export function zeroSequenceOffset(
  * blocks [60°, 120°), [180°, 240°), [300°, 360°) for the peak clamp, advanced by 30° for lead
  * and delayed by 30° for lag (the block moves against the peak, Holmes and Lipo ch. 7).
  */
-function clampsHigh(zeroSequence: 'clamp-60-peak' | 'clamp-60-lead' | 'clamp-60-lag', sector: number): boolean {
-  const shift = zeroSequence === 'clamp-60-peak' ? 0 : zeroSequence === 'clamp-60-lead' ? 1 : 11;
+function clampsHigh(zeroSequence: 'dpwm1' | 'dpwm0' | 'dpwm2', sector: number): boolean {
+  const shift = zeroSequence === 'dpwm1' ? 0 : zeroSequence === 'dpwm0' ? 1 : 11;
   return Math.floor(((sector + shift) % 12) / 2) % 2 === 1;
 }

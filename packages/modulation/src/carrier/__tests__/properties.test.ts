@@ -104,7 +104,7 @@ describe('threePhase properties', () => {
         fc.record({
           ma: fc.double({ min: 0.05, max: 1.5, noNaN: true }),
           mf: fc.integer({ min: 1, max: 40 }),
-          zeroSequence: fc.constantFrom('none', 'third-harmonic', 'min-max', 'clamp-60-peak', 'clamp-120-top'),
+          zeroSequence: fc.constantFrom('none', 'third-harmonic', 'min-max', 'dpwm1', 'dpwm-max'),
           sampling: fc.constantFrom('natural', 'regular-symmetric', 'regular-asymmetric'),
         }),
         fc.array(fc.double({ min: 0, max: 2 * Math.PI, noNaN: true, maxExcluded: true }), { minLength: 5, maxLength: 5 }),

@@ -219,7 +219,7 @@ describe('analyseDesign: one report of a design', () => {
     // Standard circuit analysis of (v_a + v_b + v_c)/3 with legs at ±vdc/2; a discontinuous
     // (clamped) method leaves one leg still for 120° of every 360°, so 2/3 of the steps remain
     // (Hava and Ün, 2009).
-    const design = (zeroSequence: 'min-max' | 'clamp-60-peak'): InverterDesign => ({
+    const design = (zeroSequence: 'min-max' | 'dpwm1'): InverterDesign => ({
       vdc: 600,
       fundamentalFrequency: 50,
       carrierFrequency: 50 * 99,
@@ -228,7 +228,7 @@ describe('analyseDesign: one report of a design', () => {
     const continuous = analyseDesign(design('min-max')).commonMode;
     expect(continuous?.levels).toEqual([-300, -100, 100, 300]);
     expect(continuous?.stepsPerCarrierPeriod).toBe(6);
-    const clamped = analyseDesign(design('clamp-60-peak')).commonMode;
+    const clamped = analyseDesign(design('dpwm1')).commonMode;
     // A few extra steps where a clamp begins or ends inside a carrier period: 4 ± 0.2.
     expect(Math.abs((clamped?.stepsPerCarrierPeriod ?? 0) - 4)).toBeLessThan(0.2);
     expect(analyseDesign(bipolar(0.8, 21)).commonMode).toBeNull();

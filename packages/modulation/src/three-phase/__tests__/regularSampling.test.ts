@@ -20,11 +20,11 @@ import { assertInDelta } from '../../testing/assertInDelta.js';
 const vdc = 600;
 const REGULAR: readonly CarrierSampling[] = ['regular-symmetric', 'regular-asymmetric'];
 const CLAMPS: readonly ZeroSequence[] = [
-  'clamp-60-peak',
-  'clamp-60-lead',
-  'clamp-60-lag',
-  'clamp-120-top',
-  'clamp-120-bottom',
+  'dpwm1',
+  'dpwm0',
+  'dpwm2',
+  'dpwm-max',
+  'dpwm-min',
 ];
 /** Odd, even, multiples of 3 and of 6, and neither. */
 const RATIOS = [7, 8, 9, 10, 12, 15, 18, 21, 24, 30, 36, 45, 48, 96, 99];
@@ -83,11 +83,11 @@ describe('clamped legs under regular sampling hold their rail (Holmes and Lipo 2
   // its positive peak at 90° and its negative peak at 270° (lead 30° earlier, lag 30° later),
   // the 120° clamps for 120° round one peak (the ZeroSequence definitions).
   const blocks: Record<string, [number, number, 1 | -1][]> = {
-    'clamp-60-peak': [[60, 120, 1], [240, 300, -1]],
-    'clamp-60-lead': [[30, 90, 1], [210, 270, -1]],
-    'clamp-60-lag': [[90, 150, 1], [270, 330, -1]],
-    'clamp-120-top': [[30, 150, 1]],
-    'clamp-120-bottom': [[210, 330, -1]],
+    'dpwm1': [[60, 120, 1], [240, 300, -1]],
+    'dpwm0': [[30, 90, 1], [210, 270, -1]],
+    'dpwm2': [[90, 150, 1], [270, 330, -1]],
+    'dpwm-max': [[30, 150, 1]],
+    'dpwm-min': [[210, 330, -1]],
   };
   for (const zeroSequence of CLAMPS) {
     for (const sampling of REGULAR) {
@@ -153,7 +153,7 @@ describe('regular-sampled line-to-line fundamental', () => {
   // The 60° clamps jump by 2 − √3·ma at each of the six 60° boundaries (the offset switches
   // rail where the two candidate phases have equal magnitude √3·ma/2); the others are
   // continuous. Slope bounds as threePhaseReference states them.
-  const jumpsOf = (z: ZeroSequence): number => (z.startsWith('clamp-60') ? 6 : 0);
+  const jumpsOf = (z: ZeroSequence): number => (z === 'dpwm0' || z === 'dpwm1' || z === 'dpwm2' ? 6 : 0);
   const jump = 2 - SQRT3 * ma;
 
   for (const zeroSequence of ZERO_SEQUENCES) {
@@ -176,7 +176,7 @@ describe('regular-sampled line-to-line fundamental', () => {
           // Natural sampling of a clamped reference departs from the ideal by O(1/mf) itself:
           // the jumps spread the reference's spectrum as 1/n, so the first carrier group's
           // sidebands reach order 1 (Black 1953; Holmes and Lipo ch. 3). Measured here at most
-          // 0.86·ideal/mf (clamp-60-peak, odd mf; the brute-force test in threePhase.test.ts
+          // 0.86·ideal/mf (dpwm1, odd mf; the brute-force test in threePhase.test.ts
           // confirms the natural waveform); allowed ideal/mf on top of the sampling bound.
           const natural = fundamental(threePhase({ ma, mf, vdc, zeroSequence }).lineToLine.ab);
           assertInDelta(regular, natural, bound + ideal / mf, `${label} vs natural`);
@@ -232,7 +232,7 @@ describe('symmetry of regular-sampled clamps where samples land on the clamp bou
   // sampling samples only at peaks, which map to valleys at θ + π, so its pulses (centred on
   // valleys) have no mirror image there: it has even harmonics at odd mf by construction, not
   // checked here. The 120° clamps are not antisymmetric (top and bottom swap at θ + π).
-  const antisymmetric = ZERO_SEQUENCES.filter((z) => !z.startsWith('clamp-120'));
+  const antisymmetric = ZERO_SEQUENCES.filter((z) => z !== 'dpwm-max' && z !== 'dpwm-min');
   for (const zeroSequence of antisymmetric) {
     it(`${zeroSequence}: half-wave symmetric at odd mf (natural, regular-asymmetric)`, () => {
       for (const sampling of ['natural', 'regular-asymmetric'] as const) {

@@ -115,11 +115,11 @@ describe('discontinuous clamping', () => {
   // Holmes and Lipo (2003, ch. 7): each discontinuous method clamps every leg for 120° of the
   // fundamental period (two 60° blocks or one 120° block), cutting switching losses by a third.
   const cases: [ZeroSequence, number][] = [
-    ['clamp-60-peak', (2 * Math.PI) / 3],
-    ['clamp-60-lead', (2 * Math.PI) / 3],
-    ['clamp-60-lag', (2 * Math.PI) / 3],
-    ['clamp-120-top', (2 * Math.PI) / 3],
-    ['clamp-120-bottom', (2 * Math.PI) / 3],
+    ['dpwm1', (2 * Math.PI) / 3],
+    ['dpwm0', (2 * Math.PI) / 3],
+    ['dpwm2', (2 * Math.PI) / 3],
+    ['dpwm-max', (2 * Math.PI) / 3],
+    ['dpwm-min', (2 * Math.PI) / 3],
   ];
   for (const [zeroSequence, expected] of cases) {
     it(`${zeroSequence} clamps each leg for 120°`, () => {
@@ -131,7 +131,7 @@ describe('discontinuous clamping', () => {
   }
 
   it('places the 60° blocks round the peak, 30° before it (lead) or 30° after it (lag)', () => {
-    // clamp-60-peak holds leg a high on (60°, 120°); lead on (30°, 90°); lag on (90°, 150°)
+    // dpwm1 holds leg a high on (60°, 120°); lead on (30°, 90°); lag on (90°, 150°)
     // (Holmes and Lipo 2003, ch. 7; which shift is called which is from memory).
     const mf = 96;
     const carrierPeriod = (2 * Math.PI) / mf;
@@ -141,15 +141,15 @@ describe('discontinuous clamping', () => {
       const to = (toDegrees * Math.PI) / 180 - carrierPeriod;
       return legs.a.edges.every((e) => e <= from || e >= to) && waveformValueAt(legs.a, (from + to) / 2) === vdc / 2;
     };
-    expect(heldHigh('clamp-60-peak', 60, 120)).toBe(true);
-    expect(heldHigh('clamp-60-lead', 30, 90)).toBe(true);
-    expect(heldHigh('clamp-60-lag', 90, 150)).toBe(true);
-    expect(heldHigh('clamp-60-lead', 90, 150)).toBe(false);
-    expect(heldHigh('clamp-60-lag', 30, 90)).toBe(false);
+    expect(heldHigh('dpwm1', 60, 120)).toBe(true);
+    expect(heldHigh('dpwm0', 30, 90)).toBe(true);
+    expect(heldHigh('dpwm2', 90, 150)).toBe(true);
+    expect(heldHigh('dpwm0', 90, 150)).toBe(false);
+    expect(heldHigh('dpwm2', 30, 90)).toBe(false);
   });
 
-  it('clamp-120-top holds leg a at +vdc/2 round its positive peak', () => {
-    const { legs } = threePhase({ ma: 0.9, mf: 96, vdc, zeroSequence: 'clamp-120-top' });
+  it('dpwm-max holds leg a at +vdc/2 round its positive peak', () => {
+    const { legs } = threePhase({ ma: 0.9, mf: 96, vdc, zeroSequence: 'dpwm-max' });
     const i = legs.a.edges.findIndex((e, k) => e <= Math.PI / 2 && (legs.a.edges[k + 1] ?? 7) > Math.PI / 2);
     expect(legs.a.levels[i]).toBe(vdc / 2);
   });

@@ -18,7 +18,7 @@ const DESIGNS: InverterDesign[] = [
     vdc: 600,
     fundamentalFrequency: 60,
     carrierFrequency: 2460,
-    modulation: { method: 'three-phase', ma: 1.1, zeroSequence: 'clamp-60-lag', sampling: 'regular-symmetric', carrierPhase: 0 },
+    modulation: { method: 'three-phase', ma: 1.1, zeroSequence: 'dpwm2', sampling: 'regular-symmetric', carrierPhase: 0 },
     load: { r: 5, l: 0.004 },
     filter: null,
   },
