@@ -1,5 +1,5 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { harmonics, labelHarmonics, sheWaveform, thd } from '@pulsewright/modulation';
+import { analyseDesign } from '@pulsewright/modulation';
 import type { Schema } from '@pulsewright/client';
 import { api, unwrap } from '../../../lib/api';
 
@@ -21,11 +21,28 @@ export interface SheBranchView {
  * The branches of a finished SHE job. The service answers one followed branch
  * (`{ points, solvedFraction }`); the library's multi-branch form (`{ branches }`) is read too.
  */
-export function branchesOf(result: unknown): { branches: SheBranchView[]; solvedFraction: number | null; message: string | null } {
-  const r = result as { points?: ShePoint[]; branches?: SheBranchView[]; solvedFraction?: number; message?: string } | null;
+export function branchesOf(result: unknown): {
+  branches: SheBranchView[];
+  solvedFraction: number | null;
+  message: string | null;
+} {
+  const r = result as {
+    points?: ShePoint[];
+    branches?: SheBranchView[];
+    solvedFraction?: number;
+    message?: string;
+  } | null;
   if (!r) return { branches: [], solvedFraction: null, message: null };
-  const branches = Array.isArray(r.branches) ? r.branches : Array.isArray(r.points) ? [{ points: r.points }] : [];
-  return { branches, solvedFraction: typeof r.solvedFraction === 'number' ? r.solvedFraction : null, message: typeof r.message === 'string' ? r.message : null };
+  const branches = Array.isArray(r.branches)
+    ? r.branches
+    : Array.isArray(r.points)
+      ? [{ points: r.points }]
+      : [];
+  return {
+    branches,
+    solvedFraction: typeof r.solvedFraction === 'number' ? r.solvedFraction : null,
+    message: typeof r.message === 'string' ? r.message : null,
+  };
 }
 
 export async function createSheSweep(body: SheSweepRequest): Promise<Job> {
@@ -33,7 +50,10 @@ export async function createSheSweep(body: SheSweepRequest): Promise<Job> {
 }
 export function useCreateSheSweep() {
   const client = useQueryClient();
-  return useMutation({ mutationFn: createSheSweep, onSuccess: () => client.invalidateQueries({ queryKey: ['jobs', 'list'] }) });
+  return useMutation({
+    mutationFn: createSheSweep,
+    onSuccess: () => client.invalidateQueries({ queryKey: ['jobs', 'list'] }),
+  });
 }
 
 export async function getSheJob(id: string): Promise<Job> {
@@ -44,18 +64,32 @@ export const sheJobQueryOptions = (id: string) =>
   queryOptions({
     queryKey: ['jobs', 'one', id],
     queryFn: () => getSheJob(id),
-    refetchInterval: (query) => (query.state.data?.status === 'succeeded' || query.state.data?.status === 'failed' ? false : 400),
+    refetchInterval: (query) =>
+      query.state.data?.status === 'succeeded' || query.state.data?.status === 'failed'
+        ? false
+        : 400,
   });
 export function useSheJob(id: string | null) {
   return useQuery({ ...sheJobQueryOptions(id ?? ''), enabled: Boolean(id) });
 }
 
-/** The spectrum of one solved point (quarter-wave angles) by the library, for the picked point. */
-export function pointSpectrum(kind: 'bipolar' | 'staircase', vdc: number, angles: number[], maxOrder = 49) {
-  const waveform = sheWaveform(angles, { kind, vdc });
-  const spectrum = harmonics(waveform, maxOrder);
-  // No carrier: a ratio past every analysed order labels each harmonic by its order alone.
-  return { spectrum: labelHarmonics(spectrum, 2 * maxOrder + 1), thd: thd(spectrum) };
+/**
+ * The picked point's figures from the library's design report (the same model as every other
+ * page): the bridge or staircase voltage's labelled spectrum and its exact whole-waveform THD.
+ * The fundamental frequency does not change a voltage spectrum; 50 Hz is only a placeholder.
+ */
+export function pointSpectrum(
+  kind: 'bipolar' | 'staircase',
+  vdc: number,
+  angles: number[],
+  eliminate: number[],
+) {
+  const report = analyseDesign({
+    vdc,
+    fundamentalFrequency: 50,
+    modulation: { method: 'selective-harmonic-elimination', kind, angles, eliminate },
+  });
+  return { spectrum: report.bridge.spectrum, thd: report.bridge.thd };
 }
 
 export async function saveSheStudy(body: Schema<'StudyCreate'>) {
@@ -66,5 +100,8 @@ export async function getEliminationProjects() {
 }
 export function useSaveSheStudy() {
   const client = useQueryClient();
-  return useMutation({ mutationFn: saveSheStudy, onSuccess: () => client.invalidateQueries({ queryKey: ['studies'] }) });
+  return useMutation({
+    mutationFn: saveSheStudy,
+    onSuccess: () => client.invalidateQueries({ queryKey: ['studies'] }),
+  });
 }
