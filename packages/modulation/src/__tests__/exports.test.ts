@@ -84,6 +84,7 @@ const PUBLIC_NAMES = [
   'legReferences',
   'minimumPulseEffect',
   'modulationVoltages',
+  'modulatorSignals',
   'optimalPulsePattern',
   'optimalPulseSweep',
   'outputNetworkResponse',

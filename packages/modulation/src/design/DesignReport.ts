@@ -4,6 +4,7 @@ import type { LabelledHarmonic } from '../spectrum/labelHarmonics.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import type { ModulationMethod } from './Modulation.js';
 import type { NamedVoltage } from './modulationVoltages.js';
+import type { ModulatorSignals } from './modulatorSignals.js';
 
 /** One period sampled at evenly spaced angles [0, 2π): plain arrays of equal length. */
 export interface PeriodSeries {
@@ -126,6 +127,8 @@ export interface DesignReport {
   analysisOrder: number;
   /** The bridge's output voltages, named (phases to the load, and legs and lines for three-phase). */
   voltages: NamedVoltage[];
+  /** Reference and carrier the modulator compares, for the modulator chart; null for a stored pattern. */
+  modulator: ModulatorSignals | null;
   /** The bridge voltage across phase a of the load side (before any filter). */
   bridge: VoltageFigures;
   /** Line-to-line a−b of the bridge (three-phase only). */

@@ -28,10 +28,12 @@ export interface StoredPatternFields {
 }
 
 /** A pattern solved by selective harmonic elimination (H. S. Patel and R. G. Hoft, 1973). */
-export type HarmonicEliminationModulation = { method: 'selective-harmonic-elimination' } & StoredPatternFields & {
-  /** Odd orders the angles were solved to eliminate (a record). */
-  eliminate?: number[];
-};
+export type HarmonicEliminationModulation = {
+  method: 'selective-harmonic-elimination';
+} & StoredPatternFields & {
+    /** Odd orders the angles were solved to eliminate (a record). */
+    eliminate?: number[];
+  };
 
 /** An optimal pulse pattern (minimum weighted distortion, see `optimalPulsePattern`). */
 export type OptimalPatternModulation = { method: 'optimal-pattern' } & StoredPatternFields;
@@ -73,7 +75,14 @@ export const MODULATION_METHOD_LABELS: Readonly<Record<ModulationMethod, string>
 export const THREE_PHASE_METHODS: readonly ModulationMethod[] = ['three-phase', 'space-vector'];
 
 /** The methods with a carrier (or switching period) whose frequency the design sets. */
-export const CARRIER_METHODS: readonly ModulationMethod[] = ['sine-triangle', 'three-phase', 'space-vector'];
+export const CARRIER_METHODS: readonly ModulationMethod[] = [
+  'sine-triangle',
+  'three-phase',
+  'space-vector',
+];
 
 /** The methods given by stored first-quarter angles. */
-export const PATTERN_METHODS: readonly ModulationMethod[] = ['selective-harmonic-elimination', 'optimal-pattern'];
+export const PATTERN_METHODS: readonly ModulationMethod[] = [
+  'selective-harmonic-elimination',
+  'optimal-pattern',
+];

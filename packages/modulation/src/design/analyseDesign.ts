@@ -1,13 +1,23 @@
 import { assertLcFilter } from '../filter/assertLcFilter.js';
 import { lcFilter } from '../filter/lcFilter.js';
-import { outputNetworkResponse, type OutputNetwork, type OutputNetworkPhasors } from '../filter/outputNetworkResponse.js';
+import {
+  outputNetworkResponse,
+  type OutputNetwork,
+  type OutputNetworkPhasors,
+} from '../filter/outputNetworkResponse.js';
 import { checkVoltageHarmonicLimits } from '../limits/checkVoltageHarmonicLimits.js';
 import { HARMONIC_LIMIT_CAUTION } from '../limits/voltageHarmonicLimits.js';
 import { rlCurrentAt } from '../load/rlCurrentAt.js';
 import type { RlLoadOptions } from '../load/RlLoad.js';
 import { rlSteadyState } from '../load/rlSteadyState.js';
 import { TAU } from '../math.js';
-import { complexAbs, complexDivide, complexSubtract, phasorOf, type Complex } from '../numeric/complex.js';
+import {
+  complexAbs,
+  complexDivide,
+  complexSubtract,
+  phasorOf,
+  type Complex,
+} from '../numeric/complex.js';
 import { weightedDistortion } from '../spectrum/distortion.js';
 import type { Harmonic } from '../spectrum/Harmonic.js';
 import { harmonics } from '../spectrum/harmonics.js';
@@ -24,10 +34,17 @@ import { defaultSpectrumOrder } from './defaultSpectrumOrder.js';
 import { designModulation } from './designModulation.js';
 import { commonModeFigures } from './commonModeFigures.js';
 import { dcLinkFigures } from './dcLinkFigures.js';
-import type { CurrentFigures, DesignReport, PeriodSeries, PhaseCurrents, VoltageFigures } from './DesignReport.js';
+import type {
+  CurrentFigures,
+  DesignReport,
+  PeriodSeries,
+  PhaseCurrents,
+  VoltageFigures,
+} from './DesignReport.js';
 import type { InverterDesign } from './InverterDesign.js';
 import { MODULATION_METHOD_LABELS } from './Modulation.js';
 import { modulationVoltages } from './modulationVoltages.js';
+import { modulatorSignals } from './modulatorSignals.js';
 import { synthesisePeriod, synthesisSize } from './synthesisePeriod.js';
 
 /** Options of {@link analyseDesign}. */
@@ -80,23 +97,41 @@ const PHASES = ['a', 'b', 'c'] as const;
  * @throws ParameterRangeError / ParameterTypeError naming the field by its path in the design
  *   (`vdc`, `carrierFrequency`, `modulation.ma`, `load.r`, `filter.c`, …) or the option
  */
-export function analyseDesign(design: InverterDesign, options: AnalyseDesignOptions = {}): DesignReport {
+export function analyseDesign(
+  design: InverterDesign,
+  options: AnalyseDesignOptions = {},
+): DesignReport {
   assertInverterDesign(design);
   const { maxOrder = defaultSpectrumOrder(design), points = 1200, busVoltage } = options;
   assertNumberInRange('maxOrder', maxOrder, { min: 50, max: 5000, integer: true });
   assertNumberInRange('points', points, { min: 64, max: 20_000, integer: true });
-  if (busVoltage !== undefined) assertNumberInRange('busVoltage', busVoltage, { min: 0, minExclusive: true, max: 1e7 });
+  if (busVoltage !== undefined)
+    assertNumberInRange('busVoltage', busVoltage, { min: 0, minExclusive: true, max: 1e7 });
   const filter = design.filter ?? null;
   if (filter !== null) withFieldPrefix('filter.', () => assertLcFilter(filter));
   const modulation = withFieldPrefix('modulation.', () => designModulation(design));
   const voltages = withFieldPrefix('modulation.', () => modulationVoltages(modulation));
-  const frequencyRatio = 'mf' in modulation ? modulation.mf : 'frequencyRatio' in modulation ? modulation.frequencyRatio : null;
+  const frequencyRatio =
+    'mf' in modulation
+      ? modulation.mf
+      : 'frequencyRatio' in modulation
+        ? modulation.frequencyRatio
+        : null;
   const labelRatio = frequencyRatio ?? 2 * maxOrder + 1;
-  const analysisOrder = filter === null ? maxOrder : Math.min(MAX_ANALYSIS_ORDER, Math.max(maxOrder, 10 * (frequencyRatio ?? 200) + 10));
-  const label = (spectrum: readonly Harmonic[]) => labelHarmonics(spectrum.slice(0, maxOrder + 1), labelRatio);
+  const analysisOrder =
+    filter === null
+      ? maxOrder
+      : Math.min(MAX_ANALYSIS_ORDER, Math.max(maxOrder, 10 * (frequencyRatio ?? 200) + 10));
+  const label = (spectrum: readonly Harmonic[]) =>
+    labelHarmonics(spectrum.slice(0, maxOrder + 1), labelRatio);
 
   const phaseVoltages = voltages.phases.map((v) => v.waveform);
-  const bridge = exactVoltageFigures(voltages.phases[0]?.name ?? 'bridge output', phaseVoltages[0] as Waveform, maxOrder, label);
+  const bridge = exactVoltageFigures(
+    voltages.phases[0]?.name ?? 'bridge output',
+    phaseVoltages[0] as Waveform,
+    maxOrder,
+    label,
+  );
   const line = voltages.lines[0];
   const lineToLine = line ? exactVoltageFigures(line.name, line.waveform, maxOrder, label) : null;
   const load = design.load ?? null;
@@ -109,7 +144,9 @@ export function analyseDesign(design: InverterDesign, options: AnalyseDesignOpti
   let inverterSamples: Float64Array[] = [];
   if (filter === null) {
     if (load !== null) {
-      const solved = phaseVoltages.map((waveform, k) => exactLoadCurrents(waveform, rlLoadOf(design, k), PHASES[k] ?? 'a', points, frequencyRatio));
+      const solved = phaseVoltages.map((waveform, k) =>
+        exactLoadCurrents(waveform, rlLoadOf(design, k), PHASES[k] ?? 'a', points, frequencyRatio),
+      );
       currents = solved.map((s) => s.currents);
       loadPower = solved.reduce((sum, s) => sum + s.power, 0);
       inverterSamples = solved.map((s) => s.inverterSamples);
@@ -121,7 +158,11 @@ export function analyseDesign(design: InverterDesign, options: AnalyseDesignOpti
     const first = solved[0] as FilteredPhase;
     const outputSpectrum = first.outputSpectrum;
     output = {
-      ...distortionFigures(`filter output, ${voltages.phaseCount === 3 ? 'phase a to star point' : 'across the capacitor'}`, outputSpectrum, label),
+      ...distortionFigures(
+        `filter output, ${voltages.phaseCount === 3 ? 'phase a to star point' : 'across the capacitor'}`,
+        outputSpectrum,
+        label,
+      ),
       thdUpperBound: first.outputThdUpperBound,
       series: first.outputSeries,
     };
@@ -132,17 +173,35 @@ export function analyseDesign(design: InverterDesign, options: AnalyseDesignOpti
   // The switching function of each leg: a two-level leg's upper switch is on at +vdc/2; a
   // single-phase bridge draws (v_bridge/vdc)·i. A staircase has a source per cell: no one DC link.
   const staircase = 'kind' in design.modulation && design.modulation.kind === 'staircase';
-  const switching = voltages.phaseCount === 3 ? voltages.legs.map((v) => v.waveform) : voltages.phases.map((v) => v.waveform);
+  const switching =
+    voltages.phaseCount === 3
+      ? voltages.legs.map((v) => v.waveform)
+      : voltages.phases.map((v) => v.waveform);
   const dcLink =
     inverterSamples.length === 0 || staircase
       ? null
-      : dcLinkFigures(switching, inverterSamples, { vdc: design.vdc, phaseCount: voltages.phaseCount, maxOrder, points, label });
-  const commonMode = voltages.phaseCount === 3 ? commonModeFigures(voltages.legs.map((v) => v.waveform), { maxOrder, frequencyRatio, label }) : null;
+      : dcLinkFigures(switching, inverterSamples, {
+          vdc: design.vdc,
+          phaseCount: voltages.phaseCount,
+          maxOrder,
+          points,
+          label,
+        });
+  const commonMode =
+    voltages.phaseCount === 3
+      ? commonModeFigures(
+          voltages.legs.map((v) => v.waveform),
+          { maxOrder, frequencyRatio, label },
+        )
+      : null;
 
   const pcc = output ?? bridge;
   const pccSpectrum = output === null ? bridge.spectrum : output.spectrum;
   const nominal = ((voltages.phaseCount === 3 ? Math.sqrt(3) : 1) * pcc.fundamental) / Math.SQRT2;
-  const limitCheck = checkVoltageHarmonicLimits(pccSpectrum, { busVoltage: busVoltage ?? nominal, thdWholeWaveform: pcc.thdUpperBound });
+  const limitCheck = checkVoltageHarmonicLimits(pccSpectrum, {
+    busVoltage: busVoltage ?? nominal,
+    thdWholeWaveform: pcc.thdUpperBound,
+  });
 
   return {
     method: design.modulation.method,
@@ -153,6 +212,7 @@ export function analyseDesign(design: InverterDesign, options: AnalyseDesignOpti
     maxOrder,
     analysisOrder,
     voltages: [...voltages.phases, ...voltages.legs, ...voltages.lines],
+    modulator: modulatorSignals(modulation, points),
     bridge,
     lineToLine,
     output,
@@ -169,10 +229,15 @@ export function analyseDesign(design: InverterDesign, options: AnalyseDesignOpti
 type Labeller = (spectrum: readonly Harmonic[]) => DesignReport['bridge']['spectrum'];
 
 /** Figures of a voltage whose THD is a sum over its spectrum (thdUpperBound set by the caller). */
-function distortionFigures(name: string, spectrum: readonly Harmonic[], label: Labeller): VoltageFigures {
+function distortionFigures(
+  name: string,
+  spectrum: readonly Harmonic[],
+  label: Labeller,
+): VoltageFigures {
   const fundamental = spectrum[1] as Harmonic;
   let meanSquare = 0;
-  for (const h of spectrum) meanSquare += h.order === 0 ? h.amplitude * h.amplitude : (h.amplitude * h.amplitude) / 2;
+  for (const h of spectrum)
+    meanSquare += h.order === 0 ? h.amplitude * h.amplitude : (h.amplitude * h.amplitude) / 2;
   const labelled = label(spectrum);
   const thd = weightedDistortion(spectrum, 0);
   return {
@@ -190,7 +255,12 @@ function distortionFigures(name: string, spectrum: readonly Harmonic[], label: L
 }
 
 /** Figures of a piecewise-constant voltage, THD and WTHD exact over the whole waveform. */
-function exactVoltageFigures(name: string, waveform: Waveform, maxOrder: number, label: Labeller): VoltageFigures {
+function exactVoltageFigures(
+  name: string,
+  waveform: Waveform,
+  maxOrder: number,
+  label: Labeller,
+): VoltageFigures {
   const spectrum = harmonics(waveform, maxOrder);
   const fundamental = spectrum[1] as Harmonic;
   const thd = waveformThd(waveform);
@@ -212,7 +282,9 @@ function exactVoltageFigures(name: string, waveform: Waveform, maxOrder: number,
 /** The load of phase k (0, 1, 2) as rlSteadyState takes it: the EMF lags by k·2π/3. */
 function rlLoadOf(design: InverterDesign, phaseIndex: number): RlLoadOptions {
   const load = design.load as NonNullable<InverterDesign['load']>;
-  const emf = load.emf ? { amplitude: load.emf.amplitude, phase: load.emf.phase - (phaseIndex * TAU) / 3 } : undefined;
+  const emf = load.emf
+    ? { amplitude: load.emf.amplitude, phase: load.emf.phase - (phaseIndex * TAU) / 3 }
+    : undefined;
   return { r: load.r, l: load.l, frequency: design.fundamentalFrequency, ...(emf ? { emf } : {}) };
 }
 
@@ -228,11 +300,18 @@ function exactLoadCurrents(
   const voltage = harmonics(waveform, 1)[1] as Harmonic;
   const emf = load.emf ? phasorOf(load.emf.amplitude, load.emf.phase) : { re: 0, im: 0 };
   const impedance = { re: load.r, im: TAU * load.frequency * load.l };
-  const first = complexDivide(complexSubtract(phasorOf(voltage.amplitude, voltage.phase), emf), impedance);
+  const first = complexDivide(
+    complexSubtract(phasorOf(voltage.amplitude, voltage.phase), emf),
+    impedance,
+  );
   const fundamental = complexAbs(first);
-  const fundamentalAt = (theta: number): number => first.re * Math.sin(theta) + first.im * Math.cos(theta);
+  const fundamentalAt = (theta: number): number =>
+    first.re * Math.sin(theta) + first.im * Math.cos(theta);
   // The ripple's extremes sit at or near the switching edges: sample every edge and a fine grid.
-  const grid = synthesisSize(1, Math.min(MAX_GRID_SAMPLES, Math.max(points, 64 * (frequencyRatio ?? 64))));
+  const grid = synthesisSize(
+    1,
+    Math.min(MAX_GRID_SAMPLES, Math.max(points, 64 * (frequencyRatio ?? 64))),
+  );
   const angles = [...waveform.edges, ...Array.from({ length: grid }, (_, k) => (TAU * k) / grid)];
   const sampled = rlCurrentAt(waveform, angles, load);
   let low = Infinity;
@@ -253,7 +332,12 @@ function exactLoadCurrents(
     series: { angles: seriesAngles, values: rlCurrentAt(waveform, seriesAngles, load) },
   };
   return {
-    currents: { phase, inverter: { ...figures, name: `inverter (switch) current, phase ${phase}` }, capacitor: null, load: figures },
+    currents: {
+      phase,
+      inverter: { ...figures, name: `inverter (switch) current, phase ${phase}` },
+      capacitor: null,
+      load: figures,
+    },
     power: steady.power,
     inverterSamples: Float64Array.from(sampled.slice(waveform.edges.length)),
   };
@@ -271,23 +355,37 @@ interface FilteredPhase {
 /** One phase through the loaded filter, per harmonic to the analysis order. */
 function filteredPhase(
   waveform: Waveform,
-  context: { network: OutputNetwork; design: InverterDesign; phaseIndex: number; analysisOrder: number; points: number },
+  context: {
+    network: OutputNetwork;
+    design: InverterDesign;
+    phaseIndex: number;
+    analysisOrder: number;
+    points: number;
+  },
 ): FilteredPhase {
   const { network, design, phaseIndex, analysisOrder, points } = context;
   const phase = PHASES[phaseIndex] ?? 'a';
   const omega = TAU * design.fundamentalFrequency;
   const bridge = harmonics(waveform, analysisOrder);
   const load = design.load ?? null;
-  const emf = load?.emf ? phasorOf(load.emf.amplitude, load.emf.phase - (phaseIndex * TAU) / 3) : { re: 0, im: 0 };
+  const emf = load?.emf
+    ? phasorOf(load.emf.amplitude, load.emf.phase - (phaseIndex * TAU) / 3)
+    : { re: 0, im: 0 };
   const solved: OutputNetworkPhasors[] = bridge.map((h) =>
-    outputNetworkResponse(network, omega * h.order, phasorOf(h.amplitude, h.phase), h.order === 1 ? emf : { re: 0, im: 0 }),
+    outputNetworkResponse(
+      network,
+      omega * h.order,
+      phasorOf(h.amplitude, h.phase),
+      h.order === 1 ? emf : { re: 0, im: 0 },
+    ),
   );
   const outputSpectrum = solved.map((s, order) => harmonicOf(order, s.output));
 
   // Parseval tail bound: the bridge's mean square above the analysis order is exact; the
   // filter passes at most the largest gain found above that order.
   let bridgeSum = 0;
-  for (const h of bridge) bridgeSum += h.order === 0 ? h.amplitude * h.amplitude : (h.amplitude * h.amplitude) / 2;
+  for (const h of bridge)
+    bridgeSum += h.order === 0 ? h.amplitude * h.amplitude : (h.amplitude * h.amplitude) / 2;
   const bridgeTail = Math.max(0, waveformMeanSquare(waveform) - bridgeSum);
   let tailGain = 0;
   for (let k = 0, order = analysisOrder + 1; k <= 10; k++, order *= 2) {
@@ -297,7 +395,8 @@ function filteredPhase(
   const fundamental = outputSpectrum[1]?.amplitude ?? 0;
   let harmonicSum = 0;
   for (const h of outputSpectrum) if (h.order >= 2) harmonicSum += (h.amplitude * h.amplitude) / 2;
-  const outputThdUpperBound = Math.sqrt(2 * (harmonicSum + tailGain * tailGain * bridgeTail)) / fundamental;
+  const outputThdUpperBound =
+    Math.sqrt(2 * (harmonicSum + tailGain * tailGain * bridgeTail)) / fundamental;
 
   const size = synthesisSize(analysisOrder, Math.max(points, 16 * analysisOrder));
   const series = (values: Float64Array): PeriodSeries => {
@@ -312,7 +411,11 @@ function filteredPhase(
   };
   const tail = switchingTail(waveform, bridge, network.filter, omega, size);
   let inverterSamples: Float64Array = new Float64Array(0);
-  const current = (name: string, pick: (s: OutputNetworkPhasors) => Complex, withTail: boolean): CurrentFigures => {
+  const current = (
+    name: string,
+    pick: (s: OutputNetworkPhasors) => Complex,
+    withTail: boolean,
+  ): CurrentFigures => {
     const phasors = solved.map(pick);
     const samples = synthesisePeriod(phasors, size);
     if (name.startsWith('inverter')) inverterSamples = samples;
@@ -352,14 +455,20 @@ function filteredPhase(
     inverterSamples,
     outputSpectrum,
     outputThdUpperBound,
-    outputSeries: series(synthesisePeriod(solved.map((s) => s.output), size)),
+    outputSeries: series(
+      synthesisePeriod(
+        solved.map((s) => s.output),
+        size,
+      ),
+    ),
     currents: {
       phase,
       inverter,
       capacitor: current('capacitor current', (s) => s.capacitorCurrent, true),
       load: loadCurrent,
     },
-    loadPower: load === null || loadCurrent === null ? 0 : load.r * loadCurrent.rms * loadCurrent.rms,
+    loadPower:
+      load === null || loadCurrent === null ? 0 : load.r * loadCurrent.rms * loadCurrent.rms,
   };
 }
 
@@ -392,10 +501,14 @@ function switchingTail(
   const whole = integral.at(size);
   const reactance = omega * filter.l;
   const samples = new Float64Array(size);
-  for (let j = 0; j < size; j++) samples[j] = ((whole[j] as number) - integral.mean - (truncated[j] as number)) / reactance;
+  for (let j = 0; j < size; j++)
+    samples[j] = ((whole[j] as number) - integral.mean - (truncated[j] as number)) / reactance;
   let heldVariance = 0;
   for (const h of bridge) if (h.order > 0) heldVariance += (h.amplitude / h.order) ** 2 / 2;
-  return { samples, meanSquare: Math.max(0, integral.variance - heldVariance) / (reactance * reactance) };
+  return {
+    samples,
+    meanSquare: Math.max(0, integral.variance - heldVariance) / (reactance * reactance),
+  };
 }
 
 /** A phasor as a harmonic in the `harmonics` convention (order 0 keeps its sign). */
@@ -410,7 +523,8 @@ function filterFigures(
   frequency: number,
   frequencyRatio: number | null,
 ): NonNullable<DesignReport['filter']> {
-  const gainAt = (order: number): number => complexAbs(outputNetworkResponse(network, TAU * frequency * order, { re: 1, im: 0 }).output);
+  const gainAt = (order: number): number =>
+    complexAbs(outputNetworkResponse(network, TAU * frequency * order, { re: 1, im: 0 }).output);
   return {
     characteristics: withFieldPrefix('filter.', () => lcFilter(filter)),
     gainAtFundamental: gainAt(1),

@@ -13,22 +13,33 @@ import { CARRIER_METHODS, MODULATION_METHODS } from './Modulation.js';
  * @throws ParameterRangeError / ParameterTypeError naming the field by its path in the design
  */
 export function assertInverterDesign(design: unknown): asserts design is InverterDesign {
-  if (typeof design !== 'object' || design === null) throw new ParameterTypeError('design', 'an object', design);
+  if (typeof design !== 'object' || design === null)
+    throw new ParameterTypeError('design', 'an object', design);
   const value = design as Record<string, unknown>;
-  const check = (field: DesignBoundsField, entry: unknown): void => assertNumberInRange(field, entry, DESIGN_BOUNDS[field]);
+  const check = (field: DesignBoundsField, entry: unknown): void =>
+    assertNumberInRange(field, entry, DESIGN_BOUNDS[field]);
   check('vdc', value.vdc);
   check('fundamentalFrequency', value.fundamentalFrequency);
   const modulation = value.modulation as Record<string, unknown> | undefined;
-  if (typeof modulation !== 'object' || modulation === null) throw new ParameterTypeError('modulation', 'an object', modulation);
+  if (typeof modulation !== 'object' || modulation === null)
+    throw new ParameterTypeError('modulation', 'an object', modulation);
   assertOneOf('modulation.method', modulation.method, MODULATION_METHODS);
   if ('vdc' in modulation || 'mf' in modulation || 'frequencyRatio' in modulation) {
-    throw new ParameterRangeError('modulation', 'a modulation without vdc, mf or frequencyRatio (the design sets the DC bus and the carrier frequency)', modulation);
+    throw new ParameterRangeError(
+      'modulation',
+      'a modulation without vdc, mf or frequencyRatio (the design sets the DC bus and the carrier frequency)',
+      modulation,
+    );
   }
   if (CARRIER_METHODS.includes(modulation.method)) {
     check('carrierFrequency', value.carrierFrequency);
     designFrequencyRatio(value as unknown as InverterDesign);
   } else if (value.carrierFrequency !== undefined) {
-    throw new ParameterRangeError('carrierFrequency', `left out for method '${modulation.method}' (a stored pattern has no carrier)`, value.carrierFrequency);
+    throw new ParameterRangeError(
+      'carrierFrequency',
+      `left out for method '${modulation.method}' (a stored pattern has no carrier)`,
+      value.carrierFrequency,
+    );
   }
   for (const [field, entry] of [
     ['modulation.ma', modulation.ma],
@@ -40,39 +51,66 @@ export function assertInverterDesign(design: unknown): asserts design is Inverte
     if (entry !== undefined) check(field, entry);
   }
   if (Array.isArray(modulation.angles) && modulation.angles.length > MAX_PATTERN_ANGLES) {
-    throw new ParameterRangeError('modulation.angles.length', `at most ${MAX_PATTERN_ANGLES} angles`, modulation.angles.length);
+    throw new ParameterRangeError(
+      'modulation.angles.length',
+      `at most ${MAX_PATTERN_ANGLES} angles`,
+      modulation.angles.length,
+    );
   }
   if (Array.isArray(modulation.eliminate)) {
     modulation.eliminate.forEach((order: unknown, i: number) => {
-      assertNumberInRange(`modulation.eliminate[${i}]`, order, DESIGN_BOUNDS['modulation.eliminate']);
-      if (order % 2 === 0) throw new ParameterRangeError(`modulation.eliminate[${i}]`, 'an odd order ≥ 3 (quarter-wave symmetry leaves no even harmonics)', order);
+      assertNumberInRange(
+        `modulation.eliminate[${i}]`,
+        order,
+        DESIGN_BOUNDS['modulation.eliminate'],
+      );
+      if (order % 2 === 0)
+        throw new ParameterRangeError(
+          `modulation.eliminate[${i}]`,
+          'an odd order ≥ 3 (quarter-wave symmetry leaves no even harmonics)',
+          order,
+        );
     });
   }
   assertDesignLoad(value.load, check);
   assertDesignFilter(value.filter, check);
 }
 
-function assertDesignLoad(load: unknown, check: (field: DesignBoundsField, entry: unknown) => void): void {
+function assertDesignLoad(
+  load: unknown,
+  check: (field: DesignBoundsField, entry: unknown) => void,
+): void {
   if (load === undefined || load === null) return;
   if (typeof load !== 'object') throw new ParameterTypeError('load', 'an object or null', load);
   const { r, l, emf } = load as Record<string, unknown>;
   check('load.r', r);
   check('load.l', l);
   if (emf === undefined) return;
-  if (typeof emf !== 'object' || emf === null) throw new ParameterTypeError('load.emf', 'an object { amplitude, phase }', emf);
+  if (typeof emf !== 'object' || emf === null)
+    throw new ParameterTypeError('load.emf', 'an object { amplitude, phase }', emf);
   const { amplitude, phase } = emf as Record<string, unknown>;
   check('load.emf.amplitude', amplitude);
   check('load.emf.phase', phase);
 }
 
-function assertDesignFilter(filter: unknown, check: (field: DesignBoundsField, entry: unknown) => void): void {
+function assertDesignFilter(
+  filter: unknown,
+  check: (field: DesignBoundsField, entry: unknown) => void,
+): void {
   if (filter === undefined || filter === null) return;
-  if (typeof filter !== 'object') throw new ParameterTypeError('filter', 'an object or null', filter);
+  if (typeof filter !== 'object')
+    throw new ParameterTypeError('filter', 'an object or null', filter);
   const { l, c, rDamping, dampingPlacement, cDamping } = filter as Record<string, unknown>;
   check('filter.l', l);
   check('filter.c', c);
   if (rDamping !== undefined) check('filter.rDamping', rDamping);
-  if (dampingPlacement !== undefined) assertOneOf('filter.dampingPlacement', dampingPlacement, DAMPING_PLACEMENTS);
+  if (dampingPlacement !== undefined)
+    assertOneOf('filter.dampingPlacement', dampingPlacement, DAMPING_PLACEMENTS);
   if (cDamping !== undefined) check('filter.cDamping', cDamping);
-  if ('loadR' in filter) throw new ParameterRangeError('filter.loadR', 'left out (the design\'s load is the filter\'s load)', (filter as Record<string, unknown>).loadR);
+  if ('loadR' in filter)
+    throw new ParameterRangeError(
+      'filter.loadR',
+      "left out (the design's load is the filter's load)",
+      (filter as Record<string, unknown>).loadR,
+    );
 }

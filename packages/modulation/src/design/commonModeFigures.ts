@@ -13,12 +13,18 @@ import type { CommonModeFigures } from './DesignReport.js';
  */
 export function commonModeFigures(
   legs: readonly Waveform[],
-  context: { maxOrder: number; frequencyRatio: number | null; label: (s: readonly Harmonic[]) => CommonModeFigures['spectrum'] },
+  context: {
+    maxOrder: number;
+    frequencyRatio: number | null;
+    label: (s: readonly Harmonic[]) => CommonModeFigures['spectrum'];
+  },
 ): CommonModeFigures {
   const { maxOrder, frequencyRatio, label } = context;
   const waveform = combineWaveforms(legs, ([a = 0, b = 0, c = 0]) => (a + b + c) / 3);
   // Levels are sums of ±vdc/2 thirds: round away the last bits so equal levels compare equal.
-  const levels = [...new Set(waveform.levels.map((level) => Number(level.toPrecision(12))))].sort((x, y) => x - y);
+  const levels = [...new Set(waveform.levels.map((level) => Number(level.toPrecision(12))))].sort(
+    (x, y) => x - y,
+  );
   const steps = waveform.edges.length;
   return {
     name: 'common mode, star point to DC midpoint',

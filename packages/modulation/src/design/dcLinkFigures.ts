@@ -17,14 +17,23 @@ import { sampledSpectrum } from './sampledSpectrum.js';
 export function dcLinkFigures(
   switching: readonly Waveform[],
   inverterSamples: readonly Float64Array[],
-  context: { vdc: number; phaseCount: 1 | 3; maxOrder: number; points: number; label: (s: readonly Harmonic[]) => DcLinkFigures['spectrum'] },
+  context: {
+    vdc: number;
+    phaseCount: 1 | 3;
+    maxOrder: number;
+    points: number;
+    label: (s: readonly Harmonic[]) => DcLinkFigures['spectrum'];
+  },
 ): DcLinkFigures {
   const { vdc, phaseCount, maxOrder, points, label } = context;
   const size = inverterSamples[0]?.length ?? 0;
   const current = new Float64Array(size);
   switching.forEach((waveform, k) => {
     const phaseCurrent = inverterSamples[k] as Float64Array;
-    for (let j = 0; j < size; j++) current[j] = (current[j] as number) + (waveformValueAt(waveform, (TAU * j) / size) / vdc) * (phaseCurrent[j] as number);
+    for (let j = 0; j < size; j++)
+      current[j] =
+        (current[j] as number) +
+        (waveformValueAt(waveform, (TAU * j) / size) / vdc) * (phaseCurrent[j] as number);
   });
   let sum = 0;
   let sumOfSquares = 0;
@@ -52,4 +61,3 @@ export function dcLinkFigures(
     samplesPerPeriod: size,
   };
 }
-

@@ -7,8 +7,12 @@ import type { InverterDesign } from './InverterDesign.js';
  */
 export function defaultSpectrumOrder(design: InverterDesign): number {
   const { modulation, carrierFrequency, fundamentalFrequency } = design;
-  if (modulation.method === 'selective-harmonic-elimination' || modulation.method === 'optimal-pattern') {
-    const eliminate = modulation.method === 'selective-harmonic-elimination' ? (modulation.eliminate ?? []) : [];
+  if (
+    modulation.method === 'selective-harmonic-elimination' ||
+    modulation.method === 'optimal-pattern'
+  ) {
+    const eliminate =
+      modulation.method === 'selective-harmonic-elimination' ? (modulation.eliminate ?? []) : [];
     return Math.min(5000, Math.max(99, 2 * Math.max(0, ...eliminate) + 21));
   }
   const ratio = Math.round((carrierFrequency ?? 0) / fundamentalFrequency);

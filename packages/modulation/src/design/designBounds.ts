@@ -16,7 +16,7 @@ export const DESIGN_BOUNDS = {
   fundamentalFrequency: { min: 0.001, max: 100_000 },
   carrierFrequency: { min: 0.001, max: 100_000_000 },
   'modulation.ma': { min: 0, minExclusive: true, max: 4 },
-  'modulation.m': { min: 0, minExclusive: true, max: 2 * Math.sqrt(3) / Math.PI },
+  'modulation.m': { min: 0, minExclusive: true, max: (2 * Math.sqrt(3)) / Math.PI },
   'modulation.carrierPhase': { min: -2 * Math.PI, max: 2 * Math.PI },
   'modulation.zeroSplit': { min: 0, max: 1 },
   'modulation.angles': { min: 0, minExclusive: true, max: Math.PI / 2, maxExclusive: true },

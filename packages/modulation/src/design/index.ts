@@ -8,3 +8,4 @@ export * from './modulationVoltages.js';
 export * from './defaultSpectrumOrder.js';
 export * from './DesignReport.js';
 export * from './analyseDesign.js';
+export * from './modulatorSignals.js';

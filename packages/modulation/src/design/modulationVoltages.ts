@@ -45,8 +45,14 @@ export function modulationVoltages(modulation: Modulation): ModulationVoltages {
     }
     case 'selective-harmonic-elimination':
     case 'optimal-pattern': {
-      const waveform = sheWaveform(modulation.angles, { kind: modulation.kind, vdc: modulation.vdc });
-      return singlePhase(modulation.kind === 'staircase' ? 'staircase output' : 'bridge output', waveform);
+      const waveform = sheWaveform(modulation.angles, {
+        kind: modulation.kind,
+        vdc: modulation.vdc,
+      });
+      return singlePhase(
+        modulation.kind === 'staircase' ? 'staircase output' : 'bridge output',
+        waveform,
+      );
     }
     case 'three-phase': {
       const { method: _method, ...options } = modulation;
@@ -72,7 +78,10 @@ function threePhaseVoltages(legs: [Waveform, Waveform, Waveform]): ModulationVol
     legs: PHASE_NAMES.map((p, k) => ({ name: `leg ${p} to DC midpoint`, waveform: at(k) })),
     phases: PHASE_NAMES.map((p, k) => ({
       name: `phase ${p} to star point`,
-      waveform: combineWaveforms([at(k), at(k + 1), at(k + 2)], ([own = 0, next = 0, last = 0]) => (2 * own - next - last) / 3),
+      waveform: combineWaveforms(
+        [at(k), at(k + 1), at(k + 2)],
+        ([own = 0, next = 0, last = 0]) => (2 * own - next - last) / 3,
+      ),
     })),
     lines: PHASE_NAMES.map((p, k) => ({
       name: `line ${p}−${PHASE_NAMES[(k + 1) % 3]}`,

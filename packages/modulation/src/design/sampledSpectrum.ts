@@ -18,7 +18,11 @@ export function sampledSpectrum(samples: Float64Array, maxOrder: number): Harmon
     const re = output[2 * n] as number;
     const im = output[2 * n + 1] as number;
     // (2/S)·j·(re + j·im) = (2/S)·(−im + j·re)
-    spectrum.push({ order: n, amplitude: (2 / size) * Math.hypot(re, im), phase: Math.atan2(re, -im) });
+    spectrum.push({
+      order: n,
+      amplitude: (2 / size) * Math.hypot(re, im),
+      phase: Math.atan2(re, -im),
+    });
   }
   return spectrum;
 }

@@ -18,7 +18,8 @@ const bipolar = (ma: number, mf: number, extra: Partial<InverterDesign> = {}): I
   ...extra,
 });
 
-const relative = (actual: number, expected: number): number => Math.abs(actual - expected) / Math.abs(expected);
+const relative = (actual: number, expected: number): number =>
+  Math.abs(actual - expected) / Math.abs(expected);
 
 describe('analyseDesign: one report of a design', () => {
   it('reports the exact THD of the whole waveform, not of the shown spectrum (issue 9: 145.8 %)', () => {
@@ -34,7 +35,10 @@ describe('analyseDesign: one report of a design', () => {
   });
 
   it('a high-mf unipolar design keeps its distortion (Compare showed 0.00 % when spectra stopped at 150)', () => {
-    const report = analyseDesign({ ...bipolar(0.8, 400), modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.8 } });
+    const report = analyseDesign({
+      ...bipolar(0.8, 400),
+      modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.8 },
+    });
     expect(report.bridge.thd).toBeGreaterThan(0.5);
   });
 
@@ -49,15 +53,21 @@ describe('analyseDesign: one report of a design', () => {
     const report = analyseDesign(design);
     // Standard circuit analysis of a balanced star load.
     const { legs } = threePhase({ ma: 0.9, mf: 33, vdc: 600, zeroSequence: 'third-harmonic' });
-    const phaseA = combineWaveforms([legs.a, legs.b, legs.c], ([a = 0, b = 0, c = 0]) => (2 * a - b - c) / 3);
+    const phaseA = combineWaveforms(
+      [legs.a, legs.b, legs.c],
+      ([a = 0, b = 0, c = 0]) => (2 * a - b - c) / 3,
+    );
     const steady = rlSteadyState(phaseA, { r: 4, l: 0.01, frequency: 50 });
     expect(relative(report.currents[0]?.load?.rms ?? 0, steady.rmsCurrent)).toBeLessThan(1e-12);
-    expect(relative(report.lineToLine?.fundamental ?? 0, SQRT3 * report.bridge.fundamental)).toBeLessThan(1e-9);
+    expect(
+      relative(report.lineToLine?.fundamental ?? 0, SQRT3 * report.bridge.fundamental),
+    ).toBeLessThan(1e-9);
     // Linear range: the phase fundamental is ma·vdc/2 (Holmes and Lipo ch. 5).
     assertInDelta(report.bridge.fundamental, 270, 2.7, 'phase fundamental');
     expect(report.currents).toHaveLength(3);
     // Balanced: the three phases carry the same RMS current (mf a multiple of 3 here).
-    for (const phase of report.currents) expect(relative(phase.load?.rms ?? 0, steady.rmsCurrent)).toBeLessThan(1e-9);
+    for (const phase of report.currents)
+      expect(relative(phase.load?.rms ?? 0, steady.rmsCurrent)).toBeLessThan(1e-9);
     // Power into r: R·I²rms per phase (REFERENCES.md, RL load).
     expect(relative(report.loadPower ?? 0, 3 * 4 * steady.rmsCurrent ** 2)).toBeLessThan(1e-12);
   });
@@ -66,7 +76,10 @@ describe('analyseDesign: one report of a design', () => {
     const report = analyseDesign(bipolar(0.7, 15, { load: { r: 3, l: 0.004 } }));
     const voltage = harmonics(report.voltages[0]?.waveform ?? { edges: [], levels: [] }, 6000);
     const current = harmonicLoadCurrent(voltage, { r: 3, l: 0.004, frequency: 50 });
-    const meanSquare = current.reduce((s, h) => s + (h.order === 0 ? h.amplitude ** 2 : h.amplitude ** 2 / 2), 0);
+    const meanSquare = current.reduce(
+      (s, h) => s + (h.order === 0 ? h.amplitude ** 2 : h.amplitude ** 2 / 2),
+      0,
+    );
     const load = report.currents[0]?.load;
     expect(relative(load?.rms ?? 0, Math.sqrt(meanSquare))).toBeLessThan(1e-6);
     expect(relative(load?.fundamental ?? 0, current[1]?.amplitude ?? 0)).toBeLessThan(1e-12);
@@ -93,16 +106,28 @@ describe('analyseDesign: one report of a design', () => {
     // Resonance near 5 MHz against a 1.05 kHz carrier: the filter passes everything unchanged
     // to about 1e-6, so both computation paths must give the same currents.
     const filtered = analyseDesign(bipolar(0.8, 21, { load, filter: { l: 1e-9, c: 1e-12 } }));
-    expect(relative(filtered.currents[0]?.load?.rms ?? 0, plain.currents[0]?.load?.rms ?? 0)).toBeLessThan(1e-4);
+    expect(
+      relative(filtered.currents[0]?.load?.rms ?? 0, plain.currents[0]?.load?.rms ?? 0),
+    ).toBeLessThan(1e-4);
     // The peak-to-peak of a harmonic sum to order 10·mf + 10 misses the corners of the exact
     // piecewise-exponential current by a few per cent (its harmonics fall as 1/n²).
-    expect(relative(filtered.currents[0]?.load?.ripplePeakToPeak ?? 0, plain.currents[0]?.load?.ripplePeakToPeak ?? 0)).toBeLessThan(0.05);
+    expect(
+      relative(
+        filtered.currents[0]?.load?.ripplePeakToPeak ?? 0,
+        plain.currents[0]?.load?.ripplePeakToPeak ?? 0,
+      ),
+    ).toBeLessThan(0.05);
     expect(relative(filtered.loadPower ?? 0, plain.loadPower ?? 0)).toBeLessThan(1e-4);
-    expect(relative(filtered.output?.fundamental ?? 0, plain.bridge.fundamental)).toBeLessThan(1e-6);
+    expect(relative(filtered.output?.fundamental ?? 0, plain.bridge.fundamental)).toBeLessThan(
+      1e-6,
+    );
   });
 
   it('the loaded filter: output = divider of the series branch and (shunt ∥ load); switch current = capacitor + load', () => {
-    const design = bipolar(0.8, 99, { load: { r: 5, l: 0.002 }, filter: { l: 0.002, c: 20e-6, rDamping: 1 } });
+    const design = bipolar(0.8, 99, {
+      load: { r: 5, l: 0.002 },
+      filter: { l: 0.002, c: 20e-6, rDamping: 1 },
+    });
     const report = analyseDesign(design);
     const bridge = report.bridge.spectrum;
     const output = report.output?.spectrum ?? [];
@@ -114,23 +139,37 @@ describe('analyseDesign: one report of a design', () => {
       const num = { re: zsh.re * zl.re - zsh.im * zl.im, im: zsh.re * zl.im + zsh.im * zl.re };
       const den = { re: zsh.re + zl.re, im: zsh.im + zl.im };
       const d2 = den.re ** 2 + den.im ** 2;
-      const zp = { re: (num.re * den.re + num.im * den.im) / d2, im: (num.im * den.re - num.re * den.im) / d2 };
+      const zp = {
+        re: (num.re * den.re + num.im * den.im) / d2,
+        im: (num.im * den.re - num.re * den.im) / d2,
+      };
       const total = { re: zp.re, im: zp.im + w * 0.002 };
       const gain = Math.hypot(zp.re, zp.im) / Math.hypot(total.re, total.im);
       const vin = bridge[order]?.amplitude ?? 0;
-      if (vin > 1e-9) expect(relative(output[order]?.amplitude ?? 0, gain * vin)).toBeLessThan(1e-10);
+      if (vin > 1e-9)
+        expect(relative(output[order]?.amplitude ?? 0, gain * vin)).toBeLessThan(1e-10);
     }
     const phase = report.currents[0];
-    const sum = phase?.inverter.series.values.map((_, j) => (phase.capacitor?.series.values[j] ?? 0) + (phase.load?.series.values[j] ?? 0)) ?? [];
-    const worst = Math.max(...sum.map((v, j) => Math.abs(v - (phase?.inverter.series.values[j] ?? 0))));
+    const sum =
+      phase?.inverter.series.values.map(
+        (_, j) => (phase.capacitor?.series.values[j] ?? 0) + (phase.load?.series.values[j] ?? 0),
+      ) ?? [];
+    const worst = Math.max(
+      ...sum.map((v, j) => Math.abs(v - (phase?.inverter.series.values[j] ?? 0))),
+    );
     expect(worst).toBeLessThan(1e-9 * (phase?.inverter.peak ?? 1));
     // The exact THD of the output lies between the sum to the analysis order and its bound.
     expect(report.output?.thd ?? 1).toBeLessThanOrEqual(report.output?.thdUpperBound ?? 0);
-    expect((report.output?.thdUpperBound ?? 0) - (report.output?.thd ?? 0)).toBeLessThan(1e-3 * (report.output?.thd ?? 0));
+    expect((report.output?.thdUpperBound ?? 0) - (report.output?.thd ?? 0)).toBeLessThan(
+      1e-3 * (report.output?.thd ?? 0),
+    );
   });
 
   it('the switch current above the analysis order: the inductor tail agrees with a sum to a far higher order', () => {
-    const design = bipolar(0.8, 21, { load: { r: 5, l: 0.002 }, filter: { l: 0.003, c: 20e-6, rDamping: 1 } });
+    const design = bipolar(0.8, 21, {
+      load: { r: 5, l: 0.002 },
+      filter: { l: 0.003, c: 20e-6, rDamping: 1 },
+    });
     const usual = analyseDesign(design);
     const far = analyseDesign(design, { maxOrder: 5000 });
     expect(usual.analysisOrder).toBe(220);
@@ -141,7 +180,9 @@ describe('analyseDesign: one report of a design', () => {
     // filter's response above order 220 (|Z_s| ≫ |Z_sh| there): 1e-3 relative.
     expect(relative(a?.rms ?? 0, b?.rms ?? 0)).toBeLessThan(1e-4);
     expect(relative(a?.ripplePeakToPeak ?? 0, b?.ripplePeakToPeak ?? 0)).toBeLessThan(1e-2);
-    expect(relative(usual.currents[0]?.capacitor?.rms ?? 0, far.currents[0]?.capacitor?.rms ?? 0)).toBeLessThan(1e-3);
+    expect(
+      relative(usual.currents[0]?.capacitor?.rms ?? 0, far.currents[0]?.capacitor?.rms ?? 0),
+    ).toBeLessThan(1e-3);
   });
 
   it('the limit check reads the voltage at the point of coupling: unfiltered PWM fails, a filter makes it pass', () => {
@@ -151,7 +192,9 @@ describe('analyseDesign: one report of a design', () => {
     expect(plain.limitCheck.table).toHaveLength(49);
     expect(plain.limitCheck.note).toMatch(/above order 50/);
     expect(plain.limitCheck.violations[0]?.order).toBe('thd-whole-waveform');
-    const filtered = analyseDesign(bipolar(0.9, 99, { load: { r: 10, l: 0.001 }, filter: { l: 0.003, c: 20e-6, rDamping: 2 } }));
+    const filtered = analyseDesign(
+      bipolar(0.9, 99, { load: { r: 10, l: 0.001 }, filter: { l: 0.003, c: 20e-6, rDamping: 2 } }),
+    );
     expect(filtered.limitCheck.pass).toBe(true);
     expect(filtered.limitCheck.thdWholeWaveform).toBe(filtered.output?.thdUpperBound);
   });
@@ -162,7 +205,12 @@ describe('analyseDesign: one report of a design', () => {
     const report = analyseDesign({
       vdc: 100,
       fundamentalFrequency: 50,
-      modulation: { method: 'selective-harmonic-elimination', kind: 'bipolar', angles: [Math.PI / 9], eliminate: [3] },
+      modulation: {
+        method: 'selective-harmonic-elimination',
+        kind: 'bipolar',
+        angles: [Math.PI / 9],
+        eliminate: [3],
+      },
     });
     expect(report.frequencyRatio).toBeNull();
     expect(report.bridge.spectrum[3]?.amplitude).toBeLessThan(1e-12 * report.bridge.fundamental);
@@ -170,12 +218,22 @@ describe('analyseDesign: one report of a design', () => {
   });
 
   it('names the design field of bad input', () => {
-    expect(rangeErrorField(() => analyseDesign({ ...bipolar(0.8, 21), carrierFrequency: 1060 }))).toBe('carrierFrequency');
+    expect(
+      rangeErrorField(() => analyseDesign({ ...bipolar(0.8, 21), carrierFrequency: 1060 })),
+    ).toBe('carrierFrequency');
     expect(rangeErrorField(() => analyseDesign(bipolar(-1, 21)))).toBe('modulation.ma');
-    expect(rangeErrorField(() => analyseDesign(bipolar(0.8, 21, { load: { r: 0, l: 0.01 } })))).toBe('load.r');
-    expect(rangeErrorField(() => analyseDesign(bipolar(0.8, 21, { filter: { l: 1e-3, c: 0 } })))).toBe('filter.c');
-    expect(rangeErrorField(() => analyseDesign(bipolar(0.8, 21), { maxOrder: 10 }))).toBe('maxOrder');
-    expect(() => analyseDesign({ ...bipolar(0.8, 21), carrierFrequency: 1060 })).toThrow(/whole multiple .* of fundamentalFrequency 50 Hz/);
+    expect(
+      rangeErrorField(() => analyseDesign(bipolar(0.8, 21, { load: { r: 0, l: 0.01 } }))),
+    ).toBe('load.r');
+    expect(
+      rangeErrorField(() => analyseDesign(bipolar(0.8, 21, { filter: { l: 1e-3, c: 0 } }))),
+    ).toBe('filter.c');
+    expect(rangeErrorField(() => analyseDesign(bipolar(0.8, 21), { maxOrder: 10 }))).toBe(
+      'maxOrder',
+    );
+    expect(() => analyseDesign({ ...bipolar(0.8, 21), carrierFrequency: 1060 })).toThrow(
+      /whole multiple .* of fundamentalFrequency 50 Hz/,
+    );
   });
 
   it('DC-link ripple current of a three-phase bridge agrees with Kolar and Round (2006)', () => {
@@ -199,7 +257,13 @@ describe('analyseDesign: one report of a design', () => {
         load: { r, l },
       });
       const phaseRms = (report.currents[0]?.load?.fundamental ?? 0) / Math.SQRT2;
-      const kolar = phaseRms * Math.sqrt(2 * ma * (SQRT3 / (4 * Math.PI) + Math.cos(angle) ** 2 * (SQRT3 / Math.PI - (9 * ma) / 16)));
+      const kolar =
+        phaseRms *
+        Math.sqrt(
+          2 *
+            ma *
+            (SQRT3 / (4 * Math.PI) + Math.cos(angle) ** 2 * (SQRT3 / Math.PI - (9 * ma) / 16)),
+        );
       expect(relative(report.dcLink?.rippleRms ?? 0, kolar)).toBeLessThan(5e-3);
       // Power balance: mean DC current × vdc = power into the load (ideal switches).
       expect(relative((report.dcLink?.mean ?? 0) * 600, report.loadPower ?? 0)).toBeLessThan(5e-3);
@@ -210,9 +274,15 @@ describe('analyseDesign: one report of a design', () => {
   it('a single-phase bridge draws a DC-link current at twice the output frequency of ma·I₁/2', () => {
     // i_dc = (v/vdc)·i; with v₁ = ma·vdc·sin θ and i₁ = I₁·sin(θ − φ) the product holds
     // (ma·I₁/2)·cos φ at DC and ma·I₁/2 at 2f (standard circuit analysis).
-    const report = analyseDesign({ ...bipolar(0.9, 201), modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.9 }, load: { r: 4, l: 0.01 } });
+    const report = analyseDesign({
+      ...bipolar(0.9, 201),
+      modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.9 },
+      load: { r: 4, l: 0.01 },
+    });
     const fundamental = report.currents[0]?.load?.fundamental ?? 0;
-    expect(relative(report.dcLink?.secondHarmonic ?? 0, (0.9 * fundamental) / 2)).toBeLessThan(5e-3);
+    expect(relative(report.dcLink?.secondHarmonic ?? 0, (0.9 * fundamental) / 2)).toBeLessThan(
+      5e-3,
+    );
   });
 
   it('common-mode voltage of a two-level bridge: levels ±vdc/6, ±vdc/2; 6 steps a carrier period, 4 when clamped', () => {

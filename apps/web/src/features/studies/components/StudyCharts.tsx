@@ -8,7 +8,11 @@ import { WaveformChart } from '../../../components/charts/WaveformChart';
 import { formatNumber } from '../../../lib/format';
 import { reportFigures } from '../model/reportFigures';
 
-const CURRENT_COLOURS = { inverter: 'var(--color-trace-current)', capacitor: 'var(--color-trace-carrier)', load: 'var(--color-ink)' } as const;
+const CURRENT_COLOURS = {
+  inverter: 'var(--color-trace-current)',
+  capacitor: 'var(--color-trace-carrier)',
+  load: 'var(--color-ink)',
+} as const;
 
 const selectClass = 'rounded border border-rule bg-panel px-1.5 py-0.5 text-xs';
 
@@ -20,8 +24,18 @@ export function StudyCharts({ report, fileStem }: { report: StudyReport; fileSte
       <VoltageChart report={report} fileStem={fileStem} />
       <ReportSpectrum report={report} fileStem={fileStem} />
       {report.currents.length ? <CurrentsChart report={report} fileStem={fileStem} /> : null}
-      <HarmonicTable harmonics={report.bridge.spectrum} title={`Harmonics, ${report.bridge.name}`} fileName={`${fileStem}-harmonics`} />
-      {report.output ? <HarmonicTable harmonics={report.output.spectrum} title={`Harmonics, ${report.output.name}`} fileName={`${fileStem}-output-harmonics`} /> : null}
+      <HarmonicTable
+        harmonics={report.bridge.spectrum}
+        title={`Harmonics, ${report.bridge.name}`}
+        fileName={`${fileStem}-harmonics`}
+      />
+      {report.output ? (
+        <HarmonicTable
+          harmonics={report.output.spectrum}
+          title={`Harmonics, ${report.output.name}`}
+          fileName={`${fileStem}-output-harmonics`}
+        />
+      ) : null}
     </div>
   );
 }
@@ -31,17 +45,30 @@ function VoltageChart({ report, fileStem }: { report: StudyReport; fileStem: str
   const [chosen, setChosen] = useState(0);
   const voltage = report.voltages[chosen] ?? report.voltages[0];
   if (!voltage) return null;
-  const overlay = report.output && voltage.name === report.bridge.name ? { name: report.output.name, angles: report.output.series.angles, values: report.output.series.values } : undefined;
+  const overlay =
+    report.output && voltage.name === report.bridge.name
+      ? {
+          name: report.output.name,
+          angles: report.output.series.angles,
+          values: report.output.series.values,
+        }
+      : undefined;
   return (
     <WaveformChart
-      title="Bridge voltage"
+      title={report.modulator ? 'Modulator and bridge voltage' : 'Bridge voltage'}
+      modulator={report.modulator ?? undefined}
       output={voltage.waveform}
       outputName={voltage.name}
       overlay={overlay}
       fileName={`${fileStem}-voltage`}
       controls={
         report.voltages.length > 1 ? (
-          <select aria-label="Voltage shown" className={selectClass} value={chosen} onChange={(e) => setChosen(Number(e.target.value))}>
+          <select
+            aria-label="Voltage shown"
+            className={selectClass}
+            value={chosen}
+            onChange={(e) => setChosen(Number(e.target.value))}
+          >
             {report.voltages.map((v, i) => (
               <option key={v.name} value={i}>
                 {v.name}
@@ -58,8 +85,15 @@ function VoltageChart({ report, fileStem }: { report: StudyReport; fileStem: str
 function ReportSpectrum({ report, fileStem }: { report: StudyReport; fileStem: string }) {
   const [line, setLine] = useState(false);
   const shown = line && report.lineToLine ? report.lineToLine : report.bridge;
-  const series: SpectrumSeries[] = [{ name: shown.name, color: 'var(--color-ink)', harmonics: shown.spectrum }];
-  if (report.output && shown === report.bridge) series.push({ name: report.output.name, color: 'var(--color-signal)', harmonics: report.output.spectrum });
+  const series: SpectrumSeries[] = [
+    { name: shown.name, color: 'var(--color-ink)', harmonics: shown.spectrum },
+  ];
+  if (report.output && shown === report.bridge)
+    series.push({
+      name: report.output.name,
+      color: 'var(--color-signal)',
+      harmonics: report.output.spectrum,
+    });
   return (
     <SpectrumChart
       series={series}
@@ -67,7 +101,12 @@ function ReportSpectrum({ report, fileStem }: { report: StudyReport; fileStem: s
       title={`Spectrum to order ${report.maxOrder}`}
       controls={
         report.lineToLine ? (
-          <select aria-label="Spectrum of" className={selectClass} value={line ? 'line' : 'phase'} onChange={(e) => setLine(e.target.value === 'line')}>
+          <select
+            aria-label="Spectrum of"
+            className={selectClass}
+            value={line ? 'line' : 'phase'}
+            onChange={(e) => setLine(e.target.value === 'line')}
+          >
             <option value="phase">{report.bridge.name}</option>
             <option value="line">{report.lineToLine.name}</option>
           </select>
@@ -78,10 +117,23 @@ function ReportSpectrum({ report, fileStem }: { report: StudyReport; fileStem: s
 }
 
 function currentTraces(phase: StudyReport['currents'][number]): PeriodTrace[] {
-  const traces: PeriodTrace[] = [{ name: phase.inverter.name, color: CURRENT_COLOURS.inverter, ...phase.inverter.series }];
-  if (phase.capacitor) traces.push({ name: phase.capacitor.name, color: CURRENT_COLOURS.capacitor, ...phase.capacitor.series });
+  const traces: PeriodTrace[] = [
+    { name: phase.inverter.name, color: CURRENT_COLOURS.inverter, ...phase.inverter.series },
+  ];
+  if (phase.capacitor)
+    traces.push({
+      name: phase.capacitor.name,
+      color: CURRENT_COLOURS.capacitor,
+      ...phase.capacitor.series,
+    });
   // Without a filter the load's current is the switch current: drawn once.
-  if (phase.load && phase.capacitor) traces.push({ name: phase.load.name, color: CURRENT_COLOURS.load, dashed: true, ...phase.load.series });
+  if (phase.load && phase.capacitor)
+    traces.push({
+      name: phase.load.name,
+      color: CURRENT_COLOURS.load,
+      dashed: true,
+      ...phase.load.series,
+    });
   return traces;
 }
 
@@ -90,7 +142,9 @@ function CurrentsChart({ report, fileStem }: { report: StudyReport; fileStem: st
   const [index, setIndex] = useState(0);
   const phase = report.currents[index] ?? report.currents[0];
   if (!phase) return null;
-  const rows = [phase.inverter, phase.capacitor, phase.capacitor ? phase.load : null].filter((c) => c !== null);
+  const rows = [phase.inverter, phase.capacitor, phase.capacitor ? phase.load : null].filter(
+    (c) => c !== null,
+  );
   return (
     <PeriodChart
       title={report.phaseCount === 3 ? `Currents of phase ${phase.phase}` : 'Currents'}
@@ -99,7 +153,12 @@ function CurrentsChart({ report, fileStem }: { report: StudyReport; fileStem: st
       traces={currentTraces(phase)}
       controls={
         report.currents.length > 1 ? (
-          <select aria-label="Phase" className={selectClass} value={index} onChange={(e) => setIndex(Number(e.target.value))}>
+          <select
+            aria-label="Phase"
+            className={selectClass}
+            value={index}
+            onChange={(e) => setIndex(Number(e.target.value))}
+          >
             {report.currents.map((c, i) => (
               <option key={c.phase} value={i}>
                 phase {c.phase}
@@ -110,31 +169,35 @@ function CurrentsChart({ report, fileStem }: { report: StudyReport; fileStem: st
       }
       footer={
         <>
-        {phase.capacitor ? null : <p className="mt-1 text-xs text-ink-soft">Without a filter the load carries the switch current.</p>}
-        <table className="mt-2 w-full text-xs" aria-label="Current figures">
-          <thead className="text-left text-ink-soft">
-            <tr>
-              <th className="font-medium">Current</th>
-              <th className="font-medium">RMS (A)</th>
-              <th className="font-medium">Peak (A)</th>
-              <th className="font-medium">Fundamental (A peak)</th>
-              <th className="font-medium">Ripple RMS (A)</th>
-              <th className="font-medium">Ripple peak-to-peak (A)</th>
-            </tr>
-          </thead>
-          <tbody className="num">
-            {rows.map((c) => (
-              <tr key={c.name} className="border-t border-rule/60">
-                <td className="font-sans">{c.name}</td>
-                <td>{formatNumber(c.rms)}</td>
-                <td>{formatNumber(c.peak)}</td>
-                <td>{formatNumber(c.fundamental)}</td>
-                <td>{formatNumber(c.rippleRms)}</td>
-                <td>{formatNumber(c.ripplePeakToPeak)}</td>
+          {phase.capacitor ? null : (
+            <p className="mt-1 text-xs text-ink-soft">
+              Without a filter the load carries the switch current.
+            </p>
+          )}
+          <table className="mt-2 w-full text-xs" aria-label="Current figures">
+            <thead className="text-left text-ink-soft">
+              <tr>
+                <th className="font-medium">Current</th>
+                <th className="font-medium">RMS (A)</th>
+                <th className="font-medium">Peak (A)</th>
+                <th className="font-medium">Fundamental (A peak)</th>
+                <th className="font-medium">Ripple RMS (A)</th>
+                <th className="font-medium">Ripple peak-to-peak (A)</th>
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody className="num">
+              {rows.map((c) => (
+                <tr key={c.name} className="border-t border-rule/60">
+                  <td className="font-sans">{c.name}</td>
+                  <td>{formatNumber(c.rms)}</td>
+                  <td>{formatNumber(c.peak)}</td>
+                  <td>{formatNumber(c.fundamental)}</td>
+                  <td>{formatNumber(c.rippleRms)}</td>
+                  <td>{formatNumber(c.ripplePeakToPeak)}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
         </>
       }
     />
