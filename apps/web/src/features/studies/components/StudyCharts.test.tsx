@@ -1,7 +1,7 @@
 import { analyseDesign, type InverterDesign } from '@pulsewright/modulation';
 import { render, screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { formatPercent } from '../../../lib/format';
+import { formatNumber, formatPercent } from '../../../lib/format';
 import { HarmonicLimitsPanel } from './HarmonicLimitsPanel';
 import { StudyCharts } from './StudyCharts';
 
@@ -21,7 +21,9 @@ describe('StudyCharts', () => {
     const report = analyseDesign(threePhase);
     render(<StudyCharts report={report} fileStem="t" />);
     expect(figure('THD')).toHaveTextContent(formatPercent(report.bridge.thd));
-    expect(figure('THD, line-to-line')).toHaveTextContent(formatPercent(report.lineToLine?.thd ?? Number.NaN));
+    expect(figure('THD, line-to-line')).toHaveTextContent(
+      formatPercent(report.lineToLine?.thd ?? Number.NaN),
+    );
     const summary = document.querySelector('dl[aria-label="Summary"]');
     expect(summary).toHaveTextContent('phase a to star point');
     expect(summary).toHaveTextContent('line a−b');
@@ -30,16 +32,39 @@ describe('StudyCharts', () => {
     expect(figure('Capacitor current')).not.toBeNull();
     expect(figure('Filter resonance')).toHaveTextContent('Hz');
     expect(figure('Limit check')).toHaveTextContent(report.limitCheck.pass ? 'Pass' : 'Fail');
+    expect(figure('DC-link ripple')).toHaveTextContent(
+      `${formatNumber(report.dcLink?.rippleRms ?? Number.NaN)} A`,
+    );
+    expect(figure('Common-mode voltage')).toHaveTextContent(
+      `${report.commonMode?.stepsPerPeriod} a period`,
+    );
     // The currents of each phase and the voltages by the report's names.
-    expect(within(screen.getByRole('combobox', { name: 'Phase' })).getAllByRole('option')).toHaveLength(3);
-    expect(within(screen.getByRole('combobox', { name: 'Voltage shown' })).getAllByRole('option').map((o) => o.textContent)).toEqual(report.voltages.map((v) => v.name));
+    expect(
+      within(screen.getByRole('combobox', { name: 'Phase' })).getAllByRole('option'),
+    ).toHaveLength(3);
+    expect(
+      within(screen.getByRole('combobox', { name: 'Voltage shown' }))
+        .getAllByRole('option')
+        .map((o) => o.textContent),
+    ).toEqual(report.voltages.map((v) => v.name));
     expect(screen.getByText(`Spectrum to order ${report.maxOrder}`)).toBeInTheDocument();
   });
 
   it('labels a pattern spectrum by order, not by mf', () => {
-    const report = analyseDesign({ vdc: 100, fundamentalFrequency: 50, modulation: { method: 'selective-harmonic-elimination', kind: 'bipolar', angles: [0.3, 0.5, 0.9], eliminate: [5, 7] } });
+    const report = analyseDesign({
+      vdc: 100,
+      fundamentalFrequency: 50,
+      modulation: {
+        method: 'selective-harmonic-elimination',
+        kind: 'bipolar',
+        angles: [0.3, 0.5, 0.9],
+        eliminate: [5, 7],
+      },
+    });
     const { container } = render(<StudyCharts report={report} fileStem="p" />);
-    const labels = Array.from(container.querySelectorAll('svg[data-chart="spectrum"] [data-labels] text')).map((t) => t.textContent ?? '');
+    const labels = Array.from(
+      container.querySelectorAll('svg[data-chart="spectrum"] [data-labels] text'),
+    ).map((t) => t.textContent ?? '');
     expect(labels.length).toBeGreaterThan(0);
     expect(labels.every((l) => /^\d+$/.test(l))).toBe(true);
   });
@@ -52,17 +77,30 @@ describe('HarmonicLimitsPanel', () => {
     const result = screen.getByTestId('limit-result');
     expect(result).toHaveAttribute('data-pass', String(report.limitCheck.pass));
     expect(result).toHaveTextContent('filter output');
-    expect(figure('Limit THD, whole waveform')).toHaveTextContent(formatPercent(report.limitCheck.thdWholeWaveform));
+    expect(figure('Limit THD, whole waveform')).toHaveTextContent(
+      formatPercent(report.limitCheck.thdWholeWaveform),
+    );
     const tables = screen.getAllByRole('table', { name: /^Limit check, orders/ });
-    expect(tables.map((t) => t.getAttribute('aria-label'))).toEqual(['Limit check, orders 2 to 18', 'Limit check, orders 19 to 34', 'Limit check, orders 35 to 50']);
+    expect(tables.map((t) => t.getAttribute('aria-label'))).toEqual([
+      'Limit check, orders 2 to 18',
+      'Limit check, orders 19 to 34',
+      'Limit check, orders 35 to 50',
+    ]);
     expect(tables.reduce((rows, t) => rows + t.querySelectorAll('tbody tr').length, 0)).toBe(49);
     expect(result).toHaveTextContent(report.limitCheck.caution);
   });
 
   it('fails an unfiltered PWM voltage at a high frequency ratio on its whole-waveform THD, with the note', () => {
-    const report = analyseDesign({ vdc: 400, fundamentalFrequency: 50, carrierFrequency: 50 * 201, modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8 } });
+    const report = analyseDesign({
+      vdc: 400,
+      fundamentalFrequency: 50,
+      carrierFrequency: 50 * 201,
+      modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8 },
+    });
     render(<HarmonicLimitsPanel report={report} />);
     expect(screen.getByTestId('limit-result')).toHaveAttribute('data-pass', 'false');
-    expect(screen.getByTestId('limit-note')).toHaveTextContent(report.limitCheck.note ?? 'missing note');
+    expect(screen.getByTestId('limit-note')).toHaveTextContent(
+      report.limitCheck.note ?? 'missing note',
+    );
   });
 });

@@ -10,7 +10,8 @@ export function limitPointName(report: StudyReport): string {
 /**
  * The report's headline figures as the cards show them, each saying what it is of: exact
  * whole-waveform THD and WTHD (the truncated spectrum THD only with its order), the fundamental
- * per phase and line to line, the currents of phase a, load power, filter and limit result.
+ * per phase and line to line, the currents of phase a, the DC-link ripple and common-mode voltage,
+ * load power, filter and limit result.
  * Display only: every number is a field of the report.
  */
 export function reportFigures(report: StudyReport): Figure[] {
@@ -18,21 +19,43 @@ export function reportFigures(report: StudyReport): Figure[] {
   const three = report.phaseCount === 3;
   const perPhase = three ? ', per phase' : '';
   const figures: Figure[] = [
-    { label: 'Fundamental', value: `${formatNumber(bridge.fundamental)} V`, note: `peak, ${bridge.name}` },
+    {
+      label: 'Fundamental',
+      value: `${formatNumber(bridge.fundamental)} V`,
+      note: `peak, ${bridge.name}`,
+    },
   ];
-  if (lineToLine) figures.push({ label: 'Fundamental, line-to-line', value: `${formatNumber(lineToLine.fundamental)} V`, note: `peak, ${lineToLine.name}` });
+  if (lineToLine)
+    figures.push({
+      label: 'Fundamental, line-to-line',
+      value: `${formatNumber(lineToLine.fundamental)} V`,
+      note: `peak, ${lineToLine.name}`,
+    });
   figures.push(
     {
       label: 'THD',
       value: formatPercent(bridge.thd),
       note: `exact, whole waveform, ${bridge.name} (${formatPercent(bridge.spectrumThd)} to order ${report.maxOrder})`,
     },
-    { label: 'WTHD', value: formatPercent(bridge.wthd, 3), note: `exact, whole waveform, ${bridge.name}` },
+    {
+      label: 'WTHD',
+      value: formatPercent(bridge.wthd, 3),
+      note: `exact, whole waveform, ${bridge.name}`,
+    },
   );
-  if (lineToLine) figures.push({ label: 'THD, line-to-line', value: formatPercent(lineToLine.thd), note: `exact, whole waveform, ${lineToLine.name}` });
+  if (lineToLine)
+    figures.push({
+      label: 'THD, line-to-line',
+      value: formatPercent(lineToLine.thd),
+      note: `exact, whole waveform, ${lineToLine.name}`,
+    });
   if (output) {
     figures.push(
-      { label: 'Output fundamental', value: `${formatNumber(output.fundamental)} V`, note: `peak, ${output.name}` },
+      {
+        label: 'Output fundamental',
+        value: `${formatNumber(output.fundamental)} V`,
+        note: `peak, ${output.name}`,
+      },
       {
         label: 'Output THD',
         value: formatPercent(output.thd),
@@ -45,17 +68,59 @@ export function reportFigures(report: StudyReport): Figure[] {
     // Every phase carries the same RMS in a balanced design: the figures are phase a's.
     const rms = three ? `RMS per phase (phase ${phaseA.phase})` : 'RMS';
     figures.push(
-      { label: 'Switch current', value: `${formatNumber(phaseA.inverter.rms)} A`, note: `${rms}; peak ${formatNumber(phaseA.inverter.peak)} A` },
+      {
+        label: 'Switch current',
+        value: `${formatNumber(phaseA.inverter.rms)} A`,
+        note: `${rms}; peak ${formatNumber(phaseA.inverter.peak)} A`,
+      },
       {
         label: 'Current ripple',
         value: `${formatNumber(phaseA.inverter.rippleRms)} A`,
         note: `RMS of i − i₁ of the switch current${perPhase}; ${formatNumber(phaseA.inverter.ripplePeakToPeak)} A peak-to-peak`,
       },
     );
-    if (phaseA.capacitor) figures.push({ label: 'Capacitor current', value: `${formatNumber(phaseA.capacitor.rms)} A`, note: rms });
-    if (phaseA.load) figures.push({ label: 'Load current', value: `${formatNumber(phaseA.load.rms)} A`, note: `${rms}; fundamental ${formatNumber(phaseA.load.fundamental)} A peak` });
+    if (phaseA.capacitor)
+      figures.push({
+        label: 'Capacitor current',
+        value: `${formatNumber(phaseA.capacitor.rms)} A`,
+        note: rms,
+      });
+    if (phaseA.load)
+      figures.push({
+        label: 'Load current',
+        value: `${formatNumber(phaseA.load.rms)} A`,
+        note: `${rms}; fundamental ${formatNumber(phaseA.load.fundamental)} A peak`,
+      });
   }
-  if (report.loadPower !== null) figures.push({ label: 'Load power', value: `${formatNumber(report.loadPower)} W`, note: three ? 'into R, all three phases' : 'into R' });
+  const { dcLink, commonMode } = report;
+  if (dcLink) {
+    figures.push({
+      label: 'DC-link ripple',
+      value: `${formatNumber(dcLink.rippleRms)} A`,
+      note: `RMS of the AC part the capacitor carries; mean ${formatNumber(dcLink.mean)} A${
+        dcLink.secondHarmonic !== null
+          ? `; ${formatNumber(dcLink.secondHarmonic)} A peak at twice the output frequency`
+          : ''
+      }`,
+    });
+  }
+  if (commonMode) {
+    figures.push({
+      label: 'Common-mode voltage',
+      value: `${formatNumber(commonMode.rms)} V`,
+      note: `RMS, star point to DC midpoint; ${
+        commonMode.stepsPerCarrierPeriod !== null
+          ? `${formatNumber(commonMode.stepsPerCarrierPeriod)} steps a carrier period, `
+          : ''
+      }${commonMode.stepsPerPeriod} a period`,
+    });
+  }
+  if (report.loadPower !== null)
+    figures.push({
+      label: 'Load power',
+      value: `${formatNumber(report.loadPower)} W`,
+      note: three ? 'into R, all three phases' : 'into R',
+    });
   if (filter) {
     figures.push({
       label: 'Filter resonance',
