@@ -36,8 +36,9 @@ describe('StudyCharts', () => {
       `${formatNumber(report.dcLink?.rippleRms ?? Number.NaN)} A`,
     );
     expect(figure('Common-mode voltage')).toHaveTextContent(
-      `${report.commonMode?.stepsPerPeriod} a period`,
+      `${formatNumber(report.commonMode?.rms ?? Number.NaN)} V`,
     );
+    expect(summary).toHaveTextContent(`${report.commonMode?.stepsPerPeriod} a period`);
     // The currents of each phase and the voltages by the report's names.
     expect(
       within(screen.getByRole('combobox', { name: 'Phase' })).getAllByRole('option'),
