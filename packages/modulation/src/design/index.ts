@@ -9,3 +9,4 @@ export * from './defaultSpectrumOrder.js';
 export * from './DesignReport.js';
 export * from './analyseDesign.js';
 export * from './modulatorSignals.js';
+export * from './optionLabels.js';

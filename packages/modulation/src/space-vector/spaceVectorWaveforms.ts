@@ -27,7 +27,8 @@ export const MAX_SPACE_VECTOR_PERIODS = 100_000;
 /** Regular sampling of the reference: once per switching period, or twice (each half). */
 export type SpaceVectorSampling = 'symmetric' | 'asymmetric';
 
-const SAMPLINGS: readonly SpaceVectorSampling[] = ['symmetric', 'asymmetric'];
+/** The space-vector samplings, in the order the API and the dashboard list them. */
+export const SPACE_VECTOR_SAMPLINGS: readonly SpaceVectorSampling[] = ['symmetric', 'asymmetric'];
 
 /** Options of {@link spaceVectorWaveforms}. Give exactly one of `m` and `ma`. */
 export interface SpaceVectorWaveformOptions {
@@ -130,12 +131,20 @@ export function spaceVectorWaveforms({
   const index = modulationIndex(m, ma);
   assertNumberInRange('vdc', vdc, { min: 0, minExclusive: true });
   assertOneOf('sequence', sequence, SPACE_VECTOR_SEQUENCES);
-  assertOneOf('sampling', sampling, SAMPLINGS);
+  assertOneOf('sampling', sampling, SPACE_VECTOR_SAMPLINGS);
   assertNumberInRange('zeroSplit', zeroSplit, { min: 0, max: 1 });
   assertOneOf('clamping', clamping, ZERO_VECTOR_CLAMPINGS);
   assertOneOf('overmodulation', overmodulation, OVERMODULATION_METHODS);
-  assertNumberInRange('maxFundamentalPeriods', maxFundamentalPeriods, { min: 1, max: 10_000, integer: true });
-  const span = rationalFrequencyRatio(frequencyRatio, maxFundamentalPeriods, MAX_SPACE_VECTOR_PERIODS);
+  assertNumberInRange('maxFundamentalPeriods', maxFundamentalPeriods, {
+    min: 1,
+    max: 10_000,
+    integer: true,
+  });
+  const span = rationalFrequencyRatio(
+    frequencyRatio,
+    maxFundamentalPeriods,
+    MAX_SPACE_VECTOR_PERIODS,
+  );
   const setting = overmodulationSetting(index, { method: overmodulation });
   const options: HalfPeriodOptions = { sequence, zeroSplit, clamping };
   const { switchingPeriods: n, fundamentalPeriods: q } = span;
@@ -144,14 +153,17 @@ export function spaceVectorWaveforms({
   // overmodulation shaping), each located by the one rule of locateSector.
   const halfAt = (cycle: number) => {
     const applied = applyOvermodulation(setting, TAU * cycle - HALF_PI);
-    return halfPeriodSequence(spaceVector(applied), locateSector(applied.theta).secondHalf, options);
+    return halfPeriodSequence(
+      spaceVector(applied),
+      locateSector(applied.theta).secondHalf,
+      options,
+    );
   };
   const legs: Transition[][] = [[], [], []];
   const width = TAU / n;
   for (let k = 0; k < n; k++) {
     const first = halfAt(((q * k) % n) / n);
-    const second =
-      sampling === 'symmetric' ? first : halfAt(((2 * q * k + q) % (2 * n)) / (2 * n));
+    const second = sampling === 'symmetric' ? first : halfAt(((2 * q * k + q) % (2 * n)) / (2 * n));
     const states = [...first.states, ...[...second.states].reverse()];
     const durations = [...first.durations, ...[...second.durations].reverse()];
     let elapsed = 0;
@@ -159,7 +171,8 @@ export function spaceVectorWaveforms({
       const duration = durations[i] as number;
       // A segment too short to be an edge is left out rather than pushed: pushed, rounding
       // could place it a hair after the next period's first transition, where it would win.
-      if (duration * width >= EDGE_EPSILON) pushState(legs, k * width + elapsed * width, state, vdc);
+      if (duration * width >= EDGE_EPSILON)
+        pushState(legs, k * width + elapsed * width, state, vdc);
       elapsed += duration;
     });
   }
