@@ -1,0 +1,50 @@
+import { readFileSync } from 'node:fs';
+import { parse as parseYaml } from 'yaml';
+import { describe, expect, it } from 'vitest';
+import { analyseDesign, type InverterDesign } from '@pulsewright/modulation';
+import { example, runCli, viaJson } from './runCli.js';
+
+// The command line adds no math: every figure must be the library's own, so these tests compare
+// the CLI's JSON with the library's result for the same input exactly (same code, same doubles).
+
+const pump = parseYaml(readFileSync(example('pump-inverter.yaml'), 'utf8')) as InverterDesign;
+const drive = JSON.parse(readFileSync(example('drive.json'), 'utf8')) as InverterDesign;
+
+describe('pulsewright report', () => {
+  it('prints the library\'s design report for a YAML design file, as JSON', async () => {
+    const run = await runCli(['report', example('pump-inverter.yaml'), '--json', '--points', '256']);
+    expect(run.code).toBe(0);
+    expect(run.stderr).toBe('');
+    expect(JSON.parse(run.stdout)).toEqual(viaJson(analyseDesign(pump, { points: 256 })));
+  });
+
+  it('reads the same design from flags alone, and from an API request body on standard input', async () => {
+    const flags = ['--method', 'three-phase', '--ma', '0.9', '--zero-sequence', 'third-harmonic', '--sampling', 'regular-asymmetric', '--vdc', '560', '--fundamental-frequency', '50', '--carrier-frequency', '4050', '--load-r', '5.3', '--load-l', '0.011'];
+    const fromFlags = await runCli(['report', ...flags, '--json', '--max-order', '300']);
+    const fromFile = await runCli(['report', example('drive.json'), '--json', '--max-order', '300']);
+    const fromRequest = await runCli(['report', '-', '--json'], { input: JSON.stringify({ design: drive, maxOrder: 300 }) });
+    expect(fromFlags.code).toBe(0);
+    expect(fromFlags.stdout).toBe(fromFile.stdout);
+    expect(fromRequest.stdout).toBe(fromFile.stdout);
+    expect(JSON.parse(fromFile.stdout)).toEqual(viaJson(analyseDesign(drive, { maxOrder: 300 })));
+  });
+
+  it('prints a summary a person reads, with the report\'s figures and its cautions', async () => {
+    const run = await runCli(['report', example('pump-inverter.yaml')]);
+    expect(run.code).toBe(0);
+    const report = analyseDesign(pump);
+    expect(run.stdout).toContain(report.methodLabel);
+    expect(run.stdout).toContain(`load power (all phases): ${Number(report.loadPower?.toPrecision(6))} W`);
+    expect(run.stdout).toContain('Inverter DC buses and outputs are lethal');
+    expect(run.stdout).toMatch(/limit check \(IEEE Std 519-2022/);
+  });
+
+  it('gives byte-identical output for the same design (no timestamps)', async () => {
+    const [first, second] = await Promise.all([
+      runCli(['report', example('drive.json'), '--json']),
+      runCli(['report', example('drive.json'), '--json']),
+    ]);
+    expect(first.stdout.length).toBeGreaterThan(1000);
+    expect(second.stdout).toBe(first.stdout);
+  });
+});
