@@ -99,7 +99,7 @@ describe('small mf: a second, independent method confirms the exact engine', () 
     let b = 0;
     for (let k = 0; k < N; k++) {
       const theta = ((k + 0.5) * 2 * Math.PI) / N;
-      const x = mf * (theta - Math.PI / 2); // carrier valley at π/2 (DESIGN.md)
+      const x = mf * (theta - Math.PI / 2); // carrier valley at π/2 (docs/architecture.md)
       const u = x - 2 * Math.PI * Math.floor(x / (2 * Math.PI));
       const carrier = u <= Math.PI ? -1 + (2 * u) / Math.PI : 3 - (2 * u) / Math.PI;
       const v = ma * Math.sin(theta) > carrier ? vdc : -vdc;

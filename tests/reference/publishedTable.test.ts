@@ -4,7 +4,7 @@ import { harmonics, sineTriangle } from '@pulsewright/modulation';
 // Generalised harmonics of bipolar sinusoidal PWM, normalised to the bridge output level (vdc),
 // large mf: N. Mohan, T. M. Undeland, W. P. Robbins, *Power Electronics: Converters,
 // Applications, and Design*, Wiley, 3rd ed. 2003, ch. 8 (entries recalled from memory, as
-// printed to three decimals; REFERENCES.md). Tolerance 2e-3: the printed rounding plus memory.
+// printed to three decimals; docs/references.md). Tolerance 2e-3: the printed rounding plus memory.
 const table = [
   { ma: 0.6, mf: 1.006, mfPlusMinus2: 0.131, twoMfPlusMinus1: 0.37 },
   { ma: 1.0, mf: 0.601, mfPlusMinus2: 0.318, twoMfPlusMinus1: 0.181 },

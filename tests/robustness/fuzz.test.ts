@@ -19,7 +19,7 @@ import { DEMO, DEMO_PASSWORD } from '../support/server.js';
  * one mutation, with the admin's token, without one, or with a garbage one, all sent through
  * supertest to createApp on a fresh temporary SQLite file (loopback only).
  *
- * The checks are the service's own contract (DESIGN.md, "Service"): bad input never gives a
+ * The checks are the service's own contract (docs/architecture.md, "Service"): bad input never gives a
  * 500; errors are application/problem+json (RFC 9457) naming the field; a route that needs a
  * token answers 401 without one.
  */

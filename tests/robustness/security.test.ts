@@ -88,7 +88,7 @@ describe('sessions', () => {
     expect(res.status).toBe(200);
     const hours = loadConfig({}).sessionHours;
     expect(hours).toBe(12);
-    // DESIGN.md/config.ts: sessions last sessionHours; one minute of slack for the request itself.
+    // docs/architecture.md/config.ts: sessions last sessionHours; one minute of slack for the request itself.
     expect(Math.abs(Date.parse(res.body.expiresAt) - Date.now() - hours * 3600_000)).toBeLessThan(
       60_000,
     );

@@ -1,5 +1,5 @@
 /**
- * Compile-time checks of the paths DESIGN.md promises to scripts. The build fails when the
+ * Compile-time checks of the paths docs/architecture.md promises to scripts. The build fails when the
  * OpenAPI document drops or reshapes one of them, before any caller notices at run time.
  */
 import type { paths } from './schema.js';

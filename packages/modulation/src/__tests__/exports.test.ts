@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import * as modulation from '../index.js';
 
-// The public names of @pulsewright/modulation. Outside code and checks rely on them (DESIGN.md),
+// The public names of @pulsewright/modulation. Outside code and checks rely on them (docs/architecture.md),
 // so adding, renaming or removing one must be a conscious change to this list.
 const PUBLIC_NAMES = [
   'BRIDGE_SCHEMES',
@@ -147,7 +147,7 @@ describe('package exports', () => {
     expect(Object.keys(modulation).sort()).toEqual(PUBLIC_NAMES);
   });
 
-  it('include the contract names of DESIGN.md', () => {
+  it('include the contract names of docs/architecture.md', () => {
     for (const name of [
       'sineTriangle',
       'threePhase',

@@ -9,7 +9,7 @@ import { FFT_WINDOWS, type FftWindowName } from './FftWindowName.js';
  * - Flat-top: the widely published five-term set 0.21557895, 0.41663158, 0.277263158,
  *   0.083578947, 0.006947368 (G. D'Antona and A. Ferrero, Digital Signal Processing for
  *   Measurement Systems, Springer, 2006; also the flat-top of common signal-processing
- *   libraries). Its coherent gain a₀ ≈ 0.2156 is the value REFERENCES.md attributes to Harris.
+ *   libraries). Its coherent gain a₀ ≈ 0.2156 is the value docs/references.md attributes to Harris.
  */
 export const WINDOW_COEFFICIENTS: Readonly<Record<FftWindowName, readonly number[]>> = {
   rectangular: [1],

@@ -66,7 +66,7 @@ const MAX_GRID_SAMPLES = 1 << 17;
 /** Most orders summed for a filtered design (bounds its cost; the tail beyond is bounded, not dropped). */
 export const MAX_ANALYSIS_ORDER = 20_000;
 
-/** The general caution shown with every report (REFERENCES.md). */
+/** The general caution shown with every report (docs/references.md). */
 export const DESIGN_CAUTION =
   'Inverter DC buses and outputs are lethal. These predictions are idealised (ideal switches, no dead time or losses unless ' +
   'a model is chosen) and are no substitute for measurement, protective design, and the codes and licensed practice that ' +

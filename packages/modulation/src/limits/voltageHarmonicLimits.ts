@@ -32,7 +32,7 @@ export const IEEE_519_2022_VOLTAGE: LimitStandard = {
 
 /**
  * Voltage distortion limits of IEEE Std 519-2022, Table 1, recalled from memory (see
- * REFERENCES.md): confirm with the standard itself and the local utility.
+ * docs/references.md): confirm with the standard itself and the local utility.
  */
 export const IEEE_519_2022_VOLTAGE_LIMITS: readonly VoltageLimitRow[] = [
   { maxBusVoltage: 1_000, busRange: 'V ≤ 1.0 kV', individual: 0.05, thd: 0.08 },

@@ -20,7 +20,7 @@ export interface RippleInductanceOptions {
  * The smallest inductance that keeps the peak-to-peak current ripple within `ripple` at any
  * duty cycle, from v_L = L·di/dt with R neglected (common practice):
  * - bipolar H-bridge: ΔI = 2·vdc·d·(1 − d)·T/L ≤ vdc·T/(2L) (at d = ½), so L = vdc/(2·fsw·ΔI)
- *   (the bound listed in REFERENCES.md);
+ *   (the bound listed in docs/references.md);
  * - unipolar H-bridge: the output steps by vdc at twice the carrier frequency,
  *   ΔI ≤ vdc·T/(8L), L = vdc/(8·fsw·ΔI);
  * - half-bridge leg into an inductor returning to the DC midpoint: ΔI ≤ vdc·T/(4L),

@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
 import { paths } from '../../config/paths';
 
-/** The hazard caution every page shows (REFERENCES.md, "Cautions"). */
+/** The hazard caution every page shows (docs/references.md, "Cautions"). */
 export const CAUTION_TEXT =
   'Inverter DC buses and outputs are lethal. Predictions here are idealised (ideal switches unless a loss or dead-time model is chosen) and are no substitute for measurement, protective design, and the codes and licensed practice that apply where the equipment is built and installed.';
 

@@ -21,7 +21,7 @@ describe('fftWindow gains (F. J. Harris, Proc. IEEE 66(1), 1978, Table I)', () =
   it('has coherent gains 1, 0.50 and ≈ 0.2156', () => {
     assertInDelta(sum(fftWindow(n, { window: 'rectangular' })) / n, 1, 1e-15, 'rectangular');
     assertInDelta(sum(fftWindow(n, { window: 'hann' })) / n, 0.5, 1e-12, 'Hann (Harris: 0.50)');
-    // Flat-top ≈ 0.2156 (REFERENCES.md, after Harris 1978).
+    // Flat-top ≈ 0.2156 (docs/references.md, after Harris 1978).
     assertInDelta(sum(fftWindow(n, { window: 'flat-top' })) / n, 0.2156, 5e-5, 'flat-top');
   });
 

@@ -32,7 +32,7 @@ describe('sineTriangle in the linear range', () => {
   });
 
   it('has quarter-wave symmetry at odd mf with carrierPhase 0: v(θ) = v(π − θ)', () => {
-    // DESIGN.md: a carrier valley at θ = π/2 gives quarter-wave symmetry for odd mf, so every
+    // docs/architecture.md: a carrier valley at θ = π/2 gives quarter-wave symmetry for odd mf, so every
     // harmonic is in phase (0) or antiphase (π) with sin nθ.
     const spectrum = harmonics(sineTriangle({ scheme: 'bipolar', ma: 0.61, mf: 15, vdc }), 300);
     for (const { order, amplitude, phase } of spectrum) {
@@ -106,7 +106,7 @@ describe('sineTriangle regular sampling', () => {
 });
 
 describe('sineTriangle carrier phase', () => {
-  it('delays the carrier: its valley moves from π/2 to π/2 + carrierPhase/mf (DESIGN.md)', () => {
+  it('delays the carrier: its valley moves from π/2 to π/2 + carrierPhase/mf (docs/architecture.md)', () => {
     const mf = 9;
     const carrierPhase = 0.8;
     assertInDelta(triangleCarrier(Math.PI / 2, { mf }), -1, 1e-12);

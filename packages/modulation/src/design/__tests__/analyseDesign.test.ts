@@ -68,7 +68,7 @@ describe('analyseDesign: one report of a design', () => {
     // Balanced: the three phases carry the same RMS current (mf a multiple of 3 here).
     for (const phase of report.currents)
       expect(relative(phase.load?.rms ?? 0, steady.rmsCurrent)).toBeLessThan(1e-9);
-    // Power into r: R·I²rms per phase (REFERENCES.md, RL load).
+    // Power into r: R·I²rms per phase (docs/references.md, RL load).
     expect(relative(report.loadPower ?? 0, 3 * 4 * steady.rmsCurrent ** 2)).toBeLessThan(1e-12);
   });
 
@@ -89,7 +89,7 @@ describe('analyseDesign: one report of a design', () => {
     expect(report.currents[0]?.inverter.rms).toBe(load?.rms);
   });
 
-  it('ripple peak-to-peak stays within the two-level bound Vdc·T_carrier/(2L) (REFERENCES.md, common practice)', () => {
+  it('ripple peak-to-peak stays within the two-level bound Vdc·T_carrier/(2L) (docs/references.md, common practice)', () => {
     const l = 0.02;
     const report = analyseDesign(bipolar(0.5, 81, { load: { r: 0.01, l } }));
     const bound = (100 * (1 / (50 * 81))) / (2 * l);

@@ -16,7 +16,7 @@ describe('modulatorSignals: what the chart shows is what the comparator compared
     modulator?.angles.forEach((theta, k) => {
       const margin = (modulator.reference[k] ?? 0) - (modulator.carrier?.[k] ?? 0);
       // Natural sampling: the leg is high exactly while the reference is above the carrier
-      // (DESIGN.md's convention; Holmes and Lipo 2003 ch. 3). Skip samples next to a crossing.
+      // (docs/architecture.md's convention; Holmes and Lipo 2003 ch. 3). Skip samples next to a crossing.
       if (Math.abs(margin) < 1e-6) return;
       expect(waveformValueAt(leg, theta) > 0).toBe(margin > 0);
       compared++;

@@ -175,7 +175,7 @@ describe('rlSteadyState, resistive load', () => {
 
 describe('rlSteadyState ripple of a high-frequency square wave', () => {
   it('stays below Vdc·T_carrier/(2L) and approaches it as R → 0', () => {
-    // Ripple bound Vdc·T_c/(2L) from v_L = L di/dt ignoring R (common practice, REFERENCES.md).
+    // Ripple bound Vdc·T_c/(2L) from v_L = L di/dt ignoring R (common practice, docs/references.md).
     // Square wave at 21 times the fundamental: T_c = 1/(21·f).
     const vdc = 400;
     const pulses = 21;

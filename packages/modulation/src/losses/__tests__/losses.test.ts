@@ -124,7 +124,7 @@ describe('switchingFrequencyTradeoff', () => {
     const series = switchingFrequencyTradeoff(frequencies, { ...point, device: igbt, topology: 'h-bridge', filter: { target: 'ripple', ripple: 4 } });
     expect(series.frequencies).toEqual(frequencies);
     frequencies.forEach((f, k) => {
-      // L = vdc/(2·fsw·ΔI) for a bipolar bridge (ripple bound vdc·T/(2L), REFERENCES.md).
+      // L = vdc/(2·fsw·ΔI) for a bipolar bridge (ripple bound vdc·T/(2L), docs/references.md).
       assertInDelta(series.inductance[k]!, 650 / (2 * f * 4), 1e-15);
       if (k > 0) expect(series.totalLoss[k]!).toBeGreaterThan(series.totalLoss[k - 1]!);
     });

@@ -75,7 +75,7 @@ describe('sheSweep', () => {
     for (const branch of result.branches) {
       expect(largestJump(branch)).toBeLessThan(0.1);
       for (const point of branch.points.filter((p) => p.converged)) {
-        // Residual criterion of REFERENCES.md on the library's exact spectrum (Patel and Hoft, 1973).
+        // Residual criterion of docs/references.md on the library's exact spectrum (Patel and Hoft, 1973).
         const spectrum = harmonics(sheWaveform(point.angles, { kind: 'bipolar', vdc }), 13);
         assertInDelta(spectrum[1]?.amplitude ?? NaN, point.fundamental, 1e-9 * point.fundamental, 'V₁');
         for (const n of [5, 7, 11, 13]) expect(spectrum[n]?.amplitude ?? NaN).toBeLessThan(1e-9 * point.fundamental);

@@ -12,7 +12,7 @@ function expectSolved(result: SheResult, fundamental: number | null): void {
   const spectrum = harmonics(result.waveform, maxOrder);
   const first = spectrum[1];
   const v1 = (first?.amplitude ?? NaN) * Math.cos(first?.phase ?? NaN);
-  // Acceptance criteria of REFERENCES.md (Patel and Hoft, 1973, method): eliminated orders below
+  // Acceptance criteria of docs/references.md (Patel and Hoft, 1973, method): eliminated orders below
   // 1e-9 of the fundamental; the fundamental in phase with sin θ and met to 1e-9.
   expect(v1).toBeGreaterThan(0);
   if (fundamental !== null) assertInDelta(v1, fundamental, 1e-9 * fundamental, 'fundamental');

@@ -51,7 +51,7 @@ describe('spaceVector dwell times', () => {
   });
 
   it('numbers sectors 1…6 from 0, π/3, … and wraps any angle', () => {
-    // Sector k spans [(k−1)π/3, kπ/3) (DESIGN.md; Holmes and Lipo ch. 5).
+    // Sector k spans [(k−1)π/3, kπ/3) (docs/architecture.md; Holmes and Lipo ch. 5).
     for (let k = 1; k <= 6; k++) {
       const middle = ((k - 0.5) * Math.PI) / 3;
       expect(spaceVector({ m: 0.5, theta: middle }).sector).toBe(k);
@@ -62,7 +62,7 @@ describe('spaceVector dwell times', () => {
 
   it('ends the linear range at m = 1, |Vref| = vdc/√3: t0 = 0 at mid-sector', () => {
     // Linear limit: the inscribed circle of the hexagon touches its side at mid-sector
-    // (Holmes and Lipo 2003 ch. 5; REFERENCES.md).
+    // (Holmes and Lipo 2003 ch. 5; docs/references.md).
     for (let k = 0; k < 6; k++) {
       const { t0, t1, t2 } = spaceVector({ m: 1, theta: ((k + 0.5) * Math.PI) / 3 });
       assertInDelta(t0, 0, 1e-15, 't0');

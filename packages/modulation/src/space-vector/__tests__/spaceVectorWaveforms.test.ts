@@ -138,7 +138,7 @@ describe('spaceVectorWaveforms: six-step', () => {
       assertInDelta(leg.phase, 0, 1e-9, 'leg phase');
       const phase = harmonics(result.an, 1)[1] as { amplitude: number };
       assertInDelta(phase.amplitude, (2 / Math.PI) * vdc, 1e-9 * vdc, 'phase fundamental');
-      // Six-step line voltage THD = √(π²/9 − 1) ≈ 31.08 % (REFERENCES.md; standard Fourier
+      // Six-step line voltage THD = √(π²/9 − 1) ≈ 31.08 % (docs/references.md; standard Fourier
       // analysis). Orders 6k ± 1 above N = 20001 hold ≈ 1/(3N) of THD², which lowers the
       // truncated THD by ≈ 1/(6N·0.31) ≈ 2.7e-5; the check allows 3.5e-5 and must be below.
       const truncated = thd(harmonics(result.ab, 20001));

@@ -6,7 +6,7 @@ import { assertInDelta } from '../../testing/assertInDelta.js';
  * Quasi-square wave: +V on (π/2 − β, π/2 + β), −V on the same span half a period later, 0
  * elsewhere. Standard Fourier analysis: b_n = (4V/(nπ))·sin(nπ/2)·sin(nβ), the mean square is
  * 2βV²/π, so THD² = πβ/(4·sin²β) − 1. At β = π/3 (120° blocks, the six-step line-to-line
- * shape) THD = √(π²/9 − 1) ≈ 31.08 % (REFERENCES.md).
+ * shape) THD = √(π²/9 − 1) ≈ 31.08 % (docs/references.md).
  */
 function quasiSquare(volts: number, halfWidth: number) {
   const start = Math.PI / 2 - halfWidth;

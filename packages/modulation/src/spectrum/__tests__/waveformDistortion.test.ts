@@ -20,12 +20,12 @@ describe('waveformThd and waveformWthd: exact over the whole waveform', () => {
     assertInDelta(waveformWthd(square), Math.sqrt(Math.PI ** 4 / 96 - 1), 1e-14, 'WTHD');
   });
 
-  it('six-step line-to-line voltage: THD ≈ 31.08 % (REFERENCES.md, standard Fourier analysis)', () => {
+  it('six-step line-to-line voltage: THD ≈ 31.08 % (docs/references.md, standard Fourier analysis)', () => {
     // 120° blocks of +V and −V separated by 60° of zero; its harmonics are 6k ± 1 with V_n = V_1/n,
     // so THD² = Σ_{n = 6k±1 ≥ 5} 1/n² = π²/9 − 1 (closed form of the series, from memory).
     const sixStep: Waveform = { edges: [Math.PI / 6, (5 * Math.PI) / 6, (7 * Math.PI) / 6, (11 * Math.PI) / 6], levels: [1, 0, -1, 0] };
     assertInDelta(waveformThd(sixStep), Math.sqrt(Math.PI ** 2 / 9 - 1), 1e-14, 'THD');
-    assertInDelta(waveformThd(sixStep), 0.3108, 5e-5, 'THD, REFERENCES.md');
+    assertInDelta(waveformThd(sixStep), 0.3108, 5e-5, 'THD, docs/references.md');
   });
 
   it('agrees with the Fourier sum to a high order within a rigorous Parseval tail bound', () => {
