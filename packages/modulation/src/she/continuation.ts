@@ -22,12 +22,18 @@ export interface ContinuationCounter {
 
 function largestChange(a: readonly number[], b: readonly number[]): number {
   let change = 0;
-  for (let k = 0; k < a.length; k++) change = Math.max(change, Math.abs((a[k] as number) - (b[k] as number)));
+  for (let k = 0; k < a.length; k++)
+    change = Math.max(change, Math.abs((a[k] as number) - (b[k] as number)));
   return change;
 }
 
 /** Tangent predictor; falls back to the previous angles when it would leave the ordered region. */
-function predict(system: SheSystem, angles: readonly number[], deltaM: number, maxAngleStep: number): number[] {
+function predict(
+  system: SheSystem,
+  angles: readonly number[],
+  deltaM: number,
+  maxAngleStep: number,
+): number[] {
   const e1 = system.orders.map((_, j) => (j === 0 ? -1 : 0));
   // newtonStep solves J·δ = −rhs, so −e₁ as the "residual" gives J⁻¹e₁.
   const tangent = newtonStep(systemJacobian(system, angles), e1);
@@ -50,13 +56,21 @@ export function continueSolution(
 ): number[] | null {
   const target = withTarget(system, to);
   const start = predict(system, angles, to - from, settings.maxAngleStep);
-  const outcome = newtonSolve(target, start, { maxIterations: 25, stopNorm: 4e-16 * (system.count + 1) });
+  const outcome = newtonSolve(target, start, {
+    maxIterations: 25,
+    stopNorm: 4e-16 * (system.count + 1),
+  });
   counter.iterations += outcome.iterations;
-  if (rejection(target, outcome, settings) === '' && largestChange(outcome.angles, angles) <= settings.maxAngleStep) {
+  if (
+    rejection(target, outcome, settings) === '' &&
+    largestChange(outcome.angles, angles) <= settings.maxAngleStep
+  ) {
     return outcome.angles;
   }
   if (depth >= settings.maxHalvings) return null;
   const middle = (from + to) / 2;
   const halfway = continueSolution(system, angles, from, middle, settings, counter, depth + 1);
-  return halfway === null ? null : continueSolution(system, halfway, middle, to, settings, counter, depth + 1);
+  return halfway === null
+    ? null
+    : continueSolution(system, halfway, middle, to, settings, counter, depth + 1);
 }

@@ -54,19 +54,26 @@ function squaredNorm(values: readonly number[]): number {
 }
 
 /** Damped Newton from `start` (ordered in (0, π/2)); never leaves the ordered region. */
-export function newtonSolve(system: SheSystem, start: readonly number[], settings: NewtonSettings): NewtonOutcome {
+export function newtonSolve(
+  system: SheSystem,
+  start: readonly number[],
+  settings: NewtonSettings,
+): NewtonOutcome {
   let angles = [...start];
   const residual = new Array<number>(system.orders.length);
   const trial = new Array<number>(system.orders.length);
   evaluateSystem(system, angles, residual);
   for (let iteration = 0; iteration < settings.maxIterations; iteration++) {
     const norm = infinityNorm(residual);
-    if (norm <= settings.stopNorm) return { angles, residualNorm: norm, iterations: iteration, stop: 'converged' };
+    if (norm <= settings.stopNorm)
+      return { angles, residualNorm: norm, iterations: iteration, stop: 'converged' };
     const step = newtonStep(systemJacobian(system, angles), residual);
-    if (step === null) return { angles, residualNorm: norm, iterations: iteration, stop: 'stalled' };
+    if (step === null)
+      return { angles, residualNorm: norm, iterations: iteration, stop: 'stalled' };
     const longest = infinityNorm(step);
     // A step below rounding of the angles cannot lower F further.
-    if (longest < 1e-16) return { angles, residualNorm: norm, iterations: iteration, stop: 'stalled' };
+    if (longest < 1e-16)
+      return { angles, residualNorm: norm, iterations: iteration, stop: 'stalled' };
     let t = Math.min(maxOrderedStep(angles, step), longest > MAX_STEP ? MAX_STEP / longest : 1);
     const merit = squaredNorm(residual);
     let accepted: number[] | null = null;
@@ -79,7 +86,8 @@ export function newtonSolve(system: SheSystem, start: readonly number[], setting
         break;
       }
     }
-    if (accepted === null) return { angles, residualNorm: norm, iterations: iteration + 1, stop: 'stalled' };
+    if (accepted === null)
+      return { angles, residualNorm: norm, iterations: iteration + 1, stop: 'stalled' };
     angles = accepted;
     for (let j = 0; j < trial.length; j++) residual[j] = trial[j] as number;
   }

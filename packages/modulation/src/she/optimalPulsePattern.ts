@@ -2,7 +2,10 @@ import { resolvePulseBase, type PulseSolverSettings } from './pulseOptions.js';
 import { bestOptimum, describeOptimum } from './pulseSearch.js';
 import { seededStarts } from './seededStarts.js';
 import { assertFundamental } from './validateShe.js';
-import type { QuarterWavePattern, SheKind } from './SheKind.js';
+import type { OptimalPulseResult } from './OptimalPulseResult.js';
+import type { SheKind } from './SheKind.js';
+
+export type { OptimalPulseResult } from './OptimalPulseResult.js';
 
 /** Options of {@link optimalPulsePattern}. */
 export interface OptimalPulseOptions extends PulseSolverSettings {
@@ -16,14 +19,6 @@ export interface OptimalPulseOptions extends PulseSolverSettings {
   angles?: number[];
   /** Wanted fundamental, peak volts in phase with sin θ, inside the achievable range. */
   fundamental: number;
-}
-
-/** The outcome of {@link optimalPulsePattern}; plain data. */
-export interface OptimalPulseResult extends QuarterWavePattern {
-  /** True when a strict local minimum was found (stationary, positive curvature on the constraint). */
-  converged: boolean;
-  /** √(Σ w_n·V_n²)/V₁ from the exact spectrum (for 'wthd', the WTHD over orders ≤ maxOrder). */
-  objective: number;
 }
 
 /**

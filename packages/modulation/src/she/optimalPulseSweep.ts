@@ -81,19 +81,36 @@ export function optimalPulseSweep(options: OptimalPulseSweepOptions): OptimalPul
       const followed = bestOptimum(base, fundamental, [previous]);
       iterations += followed.iterations;
       const angles = followed.best.angles;
-      const change = Math.max(...angles.map((a, k) => Math.abs(a - ((previous as number[])[k] as number))));
+      const change = Math.max(
+        ...angles.map((a, k) => Math.abs(a - ((previous as number[])[k] as number))),
+      );
       if (followed.best.converged && change <= maxAngleStep) {
         const described = describeOptimum(base, followed.best, 0, 1, 1);
-        point = { fundamental, angles: [...angles], converged: true, objective: described.objective, continued: true };
+        point = {
+          fundamental,
+          angles: [...angles],
+          converged: true,
+          objective: described.objective,
+          continued: true,
+        };
       }
     }
     if (point === null) {
       const given = i === 0 && options.angles !== undefined ? [options.angles] : [];
-      const search = bestOptimum(base, fundamental, [...given, ...seededStarts(base.count, base.starts, base.seed + i)]);
+      const search = bestOptimum(base, fundamental, [
+        ...given,
+        ...seededStarts(base.count, base.starts, base.seed + i),
+      ]);
       iterations += search.iterations;
       const described = describeOptimum(base, search.best, 0, 1, 1);
       point = search.best.converged
-        ? { fundamental, angles: [...search.best.angles], converged: true, objective: described.objective, continued: false }
+        ? {
+            fundamental,
+            angles: [...search.best.angles],
+            converged: true,
+            objective: described.objective,
+            continued: false,
+          }
         : { fundamental, angles: [], converged: false, objective: NaN, continued: false };
     }
     points.push(point);
@@ -102,9 +119,12 @@ export function optimalPulseSweep(options: OptimalPulseSweepOptions): OptimalPul
   });
   const solved = points.filter((p) => p.converged).length;
   const unsolved = points.filter((p) => !p.converged).map((p) => p.fundamental.toPrecision(5));
-  const jumps = points.filter((p, i) => i > 0 && p.converged && !p.continued).map((p) => p.fundamental.toPrecision(5));
+  const jumps = points
+    .filter((p, i) => i > 0 && p.converged && !p.continued)
+    .map((p) => p.fundamental.toPrecision(5));
   let message = `Optimum found at ${solved} of ${points.length} fundamentals.`;
   if (unsolved.length > 0) message += ` None found at ${unsolved.join(', ')} V.`;
-  if (jumps.length > 0) message += ` The followed optimum was lost and searched afresh at ${jumps.join(', ')} V (the angles may jump there).`;
+  if (jumps.length > 0)
+    message += ` The followed optimum was lost and searched afresh at ${jumps.join(', ')} V (the angles may jump there).`;
   return { points, solvedFraction: solved / points.length, message, iterations };
 }

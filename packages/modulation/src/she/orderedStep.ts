@@ -7,7 +7,11 @@
 import { HALF_PI } from '../math.js';
 
 /** The largest t ≤ 1 such that α + t·δ keeps every gap above (1 − fraction) of its size. */
-export function maxOrderedStep(angles: readonly number[], step: readonly number[], fraction = 0.9): number {
+export function maxOrderedStep(
+  angles: readonly number[],
+  step: readonly number[],
+  fraction = 0.9,
+): number {
   let t = 1;
   const count = angles.length;
   for (let k = 0; k <= count; k++) {

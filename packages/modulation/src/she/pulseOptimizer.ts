@@ -96,7 +96,10 @@ function dot(a: readonly number[], b: readonly number[]): number {
 }
 
 /** Moves `angles` onto c(α) = 0 along ∇c, staying ordered; null when it cannot. */
-export function restoreFundamental(problem: PulseProblem, angles: readonly number[]): number[] | null {
+export function restoreFundamental(
+  problem: PulseProblem,
+  angles: readonly number[],
+): number[] | null {
   let current = [...angles];
   const a = new Array<number>(current.length);
   const stop = 4e-16 * (problem.count + 1);
@@ -118,7 +121,10 @@ function positiveOnTangent(k: number[][], a: readonly number[]): boolean {
   const n = a.length;
   const norm2 = dot(a, a);
   const projector = Array.from({ length: n }, (_, i) =>
-    Array.from({ length: n }, (_, j) => (i === j ? 1 : 0) - ((a[i] as number) * (a[j] as number)) / norm2),
+    Array.from(
+      { length: n },
+      (_, j) => (i === j ? 1 : 0) - ((a[i] as number) * (a[j] as number)) / norm2,
+    ),
   );
   const p = new Matrix(projector);
   const reduced = p.mmul(new Matrix(k)).mmul(p).to2DArray();
@@ -137,7 +143,11 @@ function positiveOnTangent(k: number[][], a: readonly number[]): boolean {
   return new CholeskyDecomposition(test).isPositiveDefinite();
 }
 
-function kktStep(k: number[][], a: readonly number[], gradient: readonly number[]): number[] | null {
+function kktStep(
+  k: number[][],
+  a: readonly number[],
+  gradient: readonly number[],
+): number[] | null {
   const n = a.length;
   const rows = k.map((row, i) => [...row, a[i] as number]);
   rows.push([...a, 0]);
@@ -153,10 +163,20 @@ function kktStep(k: number[][], a: readonly number[], gradient: readonly number[
 }
 
 /** Minimises the weighted harmonic objective from `start`, see the file comment. */
-export function optimisePulses(problem: PulseProblem, start: readonly number[], settings: PulseSettings): PulseOutcome {
+export function optimisePulses(
+  problem: PulseProblem,
+  start: readonly number[],
+  settings: PulseSettings,
+): PulseOutcome {
   const restored = restoreFundamental(problem, start);
   if (restored === null) {
-    return { angles: [...start], value: Infinity, converged: false, iterations: 0, reason: 'the start could not be moved onto the wanted fundamental' };
+    return {
+      angles: [...start],
+      value: Infinity,
+      converged: false,
+      iterations: 0,
+      reason: 'the start could not be moved onto the wanted fundamental',
+    };
   }
   let angles = restored;
   const weightSum = problem.orderWeights.reduce((s, w) => s + w, 0);
@@ -170,7 +190,9 @@ export function optimisePulses(problem: PulseProblem, start: readonly number[], 
     const lambda = dot(gradient, a) / dot(a, a);
     const projected = gradient.map((g, k) => g - lambda * (a[k] as number));
     const stationarity = Math.max(...projected.map(Math.abs));
-    const lagrangian = hessian.map((row, k) => row.map((h, j) => (j === k ? h - lambda * (curvature[k] as number) : h)));
+    const lagrangian = hessian.map((row, k) =>
+      row.map((h, j) => (j === k ? h - lambda * (curvature[k] as number) : h)),
+    );
     const tolerance = 1e-9 * 4 * Math.sqrt(value * weightSum) + 1e-14 * weightSum;
     if (stationarity <= tolerance) {
       const minimum = positiveOnTangent(lagrangian, a);
@@ -193,21 +215,43 @@ export function optimisePulses(problem: PulseProblem, start: readonly number[], 
     const step = kktStep(shifted, a, gradient);
     const slope = step === null ? 0 : dot(gradient, step);
     if (step === null || !(slope < 0)) {
-      return { angles, value, converged: false, iterations: iteration, reason: 'no descent direction was found' };
+      return {
+        angles,
+        value,
+        converged: false,
+        iterations: iteration,
+        reason: 'no descent direction was found',
+      };
     }
     const longest = Math.max(...step.map(Math.abs));
     let t = Math.min(maxOrderedStep(angles, step), longest > 0.3 ? 0.3 / longest : 1);
     let accepted: number[] | null = null;
     for (let b = 0; b < 50 && accepted === null; b++, t /= 2) {
-      const candidate = restoreFundamental(problem, angles.map((x, k) => x + t * (step[k] as number)));
-      if (candidate !== null && objectiveValue(problem, candidate) <= value + 1e-4 * t * slope) accepted = candidate;
+      const candidate = restoreFundamental(
+        problem,
+        angles.map((x, k) => x + t * (step[k] as number)),
+      );
+      if (candidate !== null && objectiveValue(problem, candidate) <= value + 1e-4 * t * slope)
+        accepted = candidate;
     }
     if (accepted === null) {
       // Rounding floor: f cannot be lowered measurably; accept if nearly stationary.
       const near = stationarity <= 1e3 * tolerance && positiveOnTangent(lagrangian, a);
-      return { angles, value, converged: near, iterations: iteration + 1, reason: near ? '' : 'the line search could not lower the objective' };
+      return {
+        angles,
+        value,
+        converged: near,
+        iterations: iteration + 1,
+        reason: near ? '' : 'the line search could not lower the objective',
+      };
     }
     angles = accepted;
   }
-  return { angles, value: objectiveValue(problem, angles), converged: false, iterations: settings.maxIterations, reason: 'the iteration limit was reached' };
+  return {
+    angles,
+    value: objectiveValue(problem, angles),
+    converged: false,
+    iterations: settings.maxIterations,
+    reason: 'the iteration limit was reached',
+  };
 }

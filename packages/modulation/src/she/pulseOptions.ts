@@ -60,17 +60,27 @@ export function resolvePulseBase(
       throw new ParameterTypeError('weights', 'a non-empty array of { order, weight }', weights);
     }
     weights.forEach((entry: unknown, i) => {
-      if (typeof entry !== 'object' || entry === null) throw new ParameterTypeError(`weights[${i}]`, 'an object { order, weight }', entry);
+      if (typeof entry !== 'object' || entry === null)
+        throw new ParameterTypeError(`weights[${i}]`, 'an object { order, weight }', entry);
       const { order, weight } = entry as Partial<OrderWeight>;
-      assertNumberInRange(`weights[${i}].order`, order, { min: 3, max: MAX_SHE_ORDER, integer: true });
+      assertNumberInRange(`weights[${i}].order`, order, {
+        min: 3,
+        max: MAX_SHE_ORDER,
+        integer: true,
+      });
       if (order % 2 === 0 || orders.includes(order)) {
-        throw new ParameterRangeError(`weights[${i}].order`, 'an odd order ≥ 3 not listed before', order);
+        throw new ParameterRangeError(
+          `weights[${i}].order`,
+          'an odd order ≥ 3 not listed before',
+          order,
+        );
       }
       assertNumberInRange(`weights[${i}].weight`, weight, { min: 0 });
       orders.push(order);
       orderWeights.push(weight);
     });
-    if (!orderWeights.some((w) => w > 0)) throw new ParameterRangeError('weights', 'at least one weight > 0', 0);
+    if (!orderWeights.some((w) => w > 0))
+      throw new ParameterRangeError('weights', 'at least one weight > 0', 0);
   } else {
     for (let n = 3; n <= maxOrder; n += 2) orders.push(n);
     orderWeights = orders.map((n) => (objective === 'wthd' ? 1 / (n * n) : 1));

@@ -1,7 +1,7 @@
 // Internal search steps shared by optimalPulsePattern and optimalPulseSweep (not exported).
 import { harmonics } from '../spectrum/harmonics.js';
 import { buildSheWaveform } from './buildSheWaveform.js';
-import type { OptimalPulseResult } from './optimalPulsePattern.js';
+import type { OptimalPulseResult } from './OptimalPulseResult.js';
 import { optimisePulses, type PulseOutcome } from './pulseOptimizer.js';
 import { pulseProblem, type ResolvedPulseBase } from './pulseOptions.js';
 

@@ -26,8 +26,11 @@ export function seededStarts(count: number, howMany: number, seed: number): numb
   const random = mulberry32(seed);
   while (starts.length < howMany) {
     const angles = Array.from({ length: count }, () => random() * HALF_PI).sort((a, b) => a - b);
-    let ok = (angles[0] as number) > 0.01 * spacing && HALF_PI - (angles[count - 1] as number) > 0.01 * spacing;
-    for (let k = 1; k < count && ok; k++) ok = (angles[k] as number) - (angles[k - 1] as number) > 0.01 * spacing;
+    let ok =
+      (angles[0] as number) > 0.01 * spacing &&
+      HALF_PI - (angles[count - 1] as number) > 0.01 * spacing;
+    for (let k = 1; k < count && ok; k++)
+      ok = (angles[k] as number) - (angles[k - 1] as number) > 0.01 * spacing;
     if (ok) starts.push(angles);
   }
   return starts;

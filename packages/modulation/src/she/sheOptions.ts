@@ -40,14 +40,25 @@ export interface ResolvedSheBase {
   search: SearchSettings;
 }
 
-export function resolveSheBase(options: {
-  kind: unknown;
-  vdc: unknown;
-  angles?: unknown;
-  count?: unknown;
-  eliminate: unknown;
-} & SheSolverSettings): ResolvedSheBase {
-  const { kind, vdc, angles, count, eliminate, starts = 24, seed = 1, maxIterations = 60 } = options;
+export function resolveSheBase(
+  options: {
+    kind: unknown;
+    vdc: unknown;
+    angles?: unknown;
+    count?: unknown;
+    eliminate: unknown;
+  } & SheSolverSettings,
+): ResolvedSheBase {
+  const {
+    kind,
+    vdc,
+    angles,
+    count,
+    eliminate,
+    starts = 24,
+    seed = 1,
+    maxIterations = 60,
+  } = options;
   const { tolerance = 1e-10, minimumSpacing = 1e-6 } = options;
   assertOneOf('kind', kind, SHE_KINDS);
   assertNumberInRange('vdc', vdc, { min: 0, minExclusive: true });
@@ -70,7 +81,11 @@ export function resolveSheBase(options: {
 }
 
 /** Asserts eliminate has count − equations entries left for the fundamental (a square system). */
-export function assertSquare(eliminate: readonly number[], count: number, withFundamental: boolean): void {
+export function assertSquare(
+  eliminate: readonly number[],
+  count: number,
+  withFundamental: boolean,
+): void {
   const wanted = withFundamental ? count - 1 : count;
   if (eliminate.length !== wanted) {
     throw new ParameterRangeError(

@@ -41,7 +41,11 @@ export function relativeResidual(system: SheSystem, outcome: NewtonOutcome): num
 }
 
 /** '' when the outcome is an acceptable solution, else the reason in plain words. */
-export function rejection(system: SheSystem, outcome: NewtonOutcome, settings: SearchSettings): string {
+export function rejection(
+  system: SheSystem,
+  outcome: NewtonOutcome,
+  settings: SearchSettings,
+): string {
   const g1 = normalisedCoefficient(system.weights, outcome.angles, 1);
   if (!(g1 > 0)) return 'the closest attempt has no fundamental in phase with sin θ';
   if (outcome.residualNorm > Math.max(settings.tolerance * g1, ROUNDING_FLOOR)) {
@@ -71,7 +75,10 @@ export function searchSolutions(
   let tried = 0;
   for (const start of starts) {
     tried++;
-    const outcome = newtonSolve(system, start, { maxIterations: settings.maxIterations, stopNorm: 4e-16 * (system.count + 1) });
+    const outcome = newtonSolve(system, start, {
+      maxIterations: settings.maxIterations,
+      stopNorm: 4e-16 * (system.count + 1),
+    });
     iterations += outcome.iterations;
     const accepted = rejection(system, outcome, settings) === '';
     const score = accepted ? -1 : relativeResidual(system, outcome);
@@ -85,5 +92,11 @@ export function searchSolutions(
     }
   }
   const chosen = best as NewtonOutcome;
-  return { solutions, best: chosen, reason: rejection(system, chosen, settings), iterations, tried };
+  return {
+    solutions,
+    best: chosen,
+    reason: rejection(system, chosen, settings),
+    iterations,
+    tried,
+  };
 }

@@ -96,7 +96,13 @@ interface ActiveBranch {
 export function sheSweep(options: SheSweepOptions): SheSweepResult {
   const base = resolveSheBase(options);
   const { kind, vdc, count, eliminate } = base;
-  const { fundamentals, maxHalvings = 8, maxAngleStep = 0.1, maxBranches = 8, onProgress } = options;
+  const {
+    fundamentals,
+    maxHalvings = 8,
+    maxAngleStep = 0.1,
+    maxBranches = 8,
+    onProgress,
+  } = options;
   assertSquare(eliminate, count, true);
   assertFundamentalRange('fundamentals', fundamentals, kind, count, vdc);
   assertNumberInRange('maxHalvings', maxHalvings, { min: 0, max: 30, integer: true });
@@ -107,7 +113,7 @@ export function sheSweep(options: SheSweepOptions): SheSweepResult {
   }
   const scale = (4 * vdc) / Math.PI;
   const grid = fundamentalGrid(fundamentals);
-  const system = createSheSystem(kind, count, eliminate, grid[0] as number / scale);
+  const system = createSheSystem(kind, count, eliminate, (grid[0] as number) / scale);
   const settings: ContinuationSettings = { ...base.search, maxHalvings, maxAngleStep };
   const counter = { iterations: 0 };
   const followed: ActiveBranch[] = [];
@@ -139,7 +145,10 @@ export function sheSweep(options: SheSweepOptions): SheSweepResult {
       for (const angles of search.solutions.slice(0, maxBranches - followed.length)) {
         here.push(angles);
         followed.push({
-          branch: { points: [{ fundamental, angles: [...angles], converged: true }], end: 'reaches the end of the range' },
+          branch: {
+            points: [{ fundamental, angles: [...angles], converged: true }],
+            end: 'reaches the end of the range',
+          },
           angles,
           m,
           active: true,
@@ -174,9 +183,16 @@ function findGaps(grid: readonly number[], solved: readonly boolean[]): SheGap[]
   return gaps;
 }
 
-function sweepMessage(solvedCount: number, total: number, branchCount: number, gaps: readonly SheGap[]): string {
+function sweepMessage(
+  solvedCount: number,
+  total: number,
+  branchCount: number,
+  gaps: readonly SheGap[],
+): string {
   const summary = `Solved at ${solvedCount} of ${total} fundamentals on ${branchCount} branch(es).`;
   if (gaps.length === 0) return summary;
-  const ranges = gaps.map((g) => `${g.from.toPrecision(5)}–${g.to.toPrecision(5)} V (${g.points} point(s))`);
+  const ranges = gaps.map(
+    (g) => `${g.from.toPrecision(5)}–${g.to.toPrecision(5)} V (${g.points} point(s))`,
+  );
   return `${summary} No solution found at ${ranges.join(', ')}.`;
 }

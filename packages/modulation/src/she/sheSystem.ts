@@ -5,7 +5,12 @@
  * others the eliminated orders (target 0). The Jacobian is analytic:
  * ∂F_j/∂α_k = −σ_k·sin(n_j·α_k) (Patel and Hoft, 1973).
  */
-import { coefficientGradient, normalisedCoefficient, patternWeights, type PatternWeights } from './sheModel.js';
+import {
+  coefficientGradient,
+  normalisedCoefficient,
+  patternWeights,
+  type PatternWeights,
+} from './sheModel.js';
 import type { SheKind } from './SheKind.js';
 
 export interface SheSystem {
@@ -28,7 +33,13 @@ export function createSheSystem(
   if (target === undefined) {
     return { kind, count, weights, orders: [...eliminate], targets: eliminate.map(() => 0) };
   }
-  return { kind, count, weights, orders: [1, ...eliminate], targets: [target, ...eliminate.map(() => 0)] };
+  return {
+    kind,
+    count,
+    weights,
+    orders: [1, ...eliminate],
+    targets: [target, ...eliminate.map(() => 0)],
+  };
 }
 
 /** The system with a new fundamental target (the first equation must be the fundamental). */

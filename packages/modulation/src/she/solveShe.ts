@@ -65,7 +65,12 @@ export function solveShe(options: SolveSheOptions): SheResult {
   if (fundamental !== undefined) assertFundamental('fundamental', fundamental, kind, count, vdc);
   assertSquare(eliminate, count, fundamental !== undefined);
   const scale = (4 * vdc) / Math.PI;
-  const system = createSheSystem(kind, count, eliminate, fundamental === undefined ? undefined : fundamental / scale);
+  const system = createSheSystem(
+    kind,
+    count,
+    eliminate,
+    fundamental === undefined ? undefined : fundamental / scale,
+  );
   const given = options.angles === undefined ? [] : [options.angles];
   const starts = [...given, ...seededStarts(count, base.starts, base.seed)];
   const search = searchSolutions(system, starts, base.search, false);

@@ -45,7 +45,8 @@ export function assertOddOrders(field: string, orders: unknown): asserts orders 
         order,
       );
     }
-    if (seen.has(order)) throw new ParameterRangeError(`${field}[${i}]`, 'an order not listed twice', order);
+    if (seen.has(order))
+      throw new ParameterRangeError(`${field}[${i}]`, 'an order not listed twice', order);
     seen.add(order);
   });
 }
@@ -75,7 +76,11 @@ export function resolveCount(angles: unknown, count: unknown): number {
     return angles.length;
   }
   if (count === undefined) {
-    throw new ParameterTypeError('angles', 'an array of first-quarter angles (or give count)', angles);
+    throw new ParameterTypeError(
+      'angles',
+      'an array of first-quarter angles (or give count)',
+      angles,
+    );
   }
   assertNumberInRange('count', count, { min: 1, max: MAX_SHE_ANGLES, integer: true });
   return count;
