@@ -6,6 +6,11 @@ import { existsSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { ensureBuilt } from './ensureBuilt.js';
 
+// A reader that stops early (`| head`) closes the pipe: end quietly, as other command-line tools do.
+process.stdout.on('error', (error) => {
+  if (error.code === 'EPIPE') process.exit(0);
+  throw error;
+});
 const main = fileURLToPath(new URL('../dist/main.js', import.meta.url));
 if (!existsSync(main)) ensureBuilt();
 const { main: run } = await import('../dist/main.js');
