@@ -14,6 +14,7 @@ export const DEMO_PASSWORD = 'pulsewright-demo';
 export const DEMO = {
   admin: 'admin@kestrel.example',
   engineer: 'engineer@kestrel.example',
+  engineer2: 'engineer2@kestrel.example',
   viewer: 'viewer@kestrel.example',
 } as const;
 

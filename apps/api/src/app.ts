@@ -4,7 +4,7 @@ import helmet from 'helmet';
 import multer from 'multer';
 import swaggerUi from 'swagger-ui-express';
 import { createAuthorizer } from './auth/authorize.js';
-import { loadConfig, type AppConfig } from './config.js';
+import { loadConfig, type ConfigOverrides } from './config.js';
 import { openDatabase } from './db/database.js';
 import { migrate } from './db/migrate.js';
 import { HttpError } from './http/errors.js';
@@ -21,7 +21,7 @@ import { shareRoutes } from './routes/shareRoutes.js';
 import { createServices, type Services } from './services/index.js';
 import { seedDemo } from './services/seed.js';
 
-export { loadConfig, type AppConfig } from './config.js';
+export { loadConfig, type AppConfig, type ConfigOverrides } from './config.js';
 
 /**
  * A copy of the document for express-openapi-validator. Ajv's discriminator support (which
@@ -59,7 +59,7 @@ export type PulsewrightApp = Express & {
  * Builds the service: opens and migrates the database, seeds a new one, marks jobs a crash left
  * running as failed, and assembles the middleware. It never listens; src/index.ts does.
  */
-export async function createApp(overrides: Partial<AppConfig> = {}): Promise<PulsewrightApp> {
+export async function createApp(overrides: ConfigOverrides = {}): Promise<PulsewrightApp> {
   const config = loadConfig(process.env, overrides);
   const document = loadOpenApiDocument();
   listOperations(document); // throws when an operation has no role requirement
@@ -120,7 +120,7 @@ export async function createApp(overrides: Partial<AppConfig> = {}): Promise<Pul
   app.services = services;
   app.freshDatabase = fresh;
   app.close = async () => {
-    await services.jobs.close();
+    await services.jobs.close(); // and the compute pool
     services.mailer.close();
     await sequelize.close();
   };

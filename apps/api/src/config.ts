@@ -1,4 +1,5 @@
 import { fileURLToPath } from 'node:url';
+import { availableParallelism } from 'node:os';
 import path from 'node:path';
 
 /** Everything the service reads from its environment, resolved once. */
@@ -50,7 +51,43 @@ export interface AppConfig {
   webDist: string;
   /** Write request errors (5xx) to stderr. @default true */
   logErrors: boolean;
+  /** Budgets and limits of the compute routes and jobs (services/cost.ts, services/computePool.ts). */
+  compute: ComputeLimits;
 }
+
+/**
+ * What one request or job may cost, and where it runs. Work is counted in the cost model's units
+ * (services/cost.ts: about one term of an exact Fourier sum, some 5 ns of one core here).
+ */
+export interface ComputeLimits {
+  /** Most work one compute request may ask for (COMPUTE_WORK_BUDGET). @default 2.5e8 (about 1.5 s) */
+  requestWorkBudget: number;
+  /** Most work one job may ask for (JOB_WORK_BUDGET). @default 2e10 (about 100 s of one core) */
+  jobWorkBudget: number;
+  /** Largest answer one request may produce, estimated before work (RESPONSE_BYTES_BUDGET). @default 8 MB */
+  responseBytesBudget: number;
+  /** Requests estimated below this run on the request thread; the rest in the pool (INLINE_WORK_LIMIT). @default 4e5 */
+  inlineWorkLimit: number;
+  /** Worker threads of the compute pool (COMPUTE_THREADS). @default the machine's cores (os.availableParallelism) */
+  threads: number;
+  /** A task running longer is ended (its worker terminated) and answered 503 (COMPUTE_TIME_LIMIT_MS). @default 30 000 */
+  taskTimeLimitMs: number;
+  /** A request that waits longer than this for a free worker is answered 503 (COMPUTE_QUEUE_LIMIT_MS). @default 20 000 */
+  queueTimeLimitMs: number;
+  /** Jobs of one process that run at once; the rest wait as `queued` (JOB_CONCURRENCY). @default max(1, threads − 1) */
+  jobConcurrency: number;
+  /** Queued and running jobs one user may have (JOB_QUOTA_USER). @default 2 */
+  userJobQuota: number;
+  /** Queued and running jobs one team may have (JOB_QUOTA_TEAM). @default 6 */
+  teamJobQuota: number;
+  /** Niceness added to the worker threads (Linux), so the request thread wins a busy CPU (COMPUTE_NICE). @default 10 */
+  workerNice: number;
+  /** Heap of one worker thread, MB; a task that needs more ends that worker, not the service (COMPUTE_WORKER_HEAP_MB). @default 1024 */
+  workerHeapMb: number;
+}
+
+/** Settings a caller (a test) gives instead of the environment's; compute limits one by one. */
+export type ConfigOverrides = Partial<Omit<AppConfig, 'compute'>> & { compute?: Partial<ComputeLimits> };
 
 /** The repository root (apps/api/src or apps/api/dist → three levels up). */
 export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../..');
@@ -61,7 +98,7 @@ export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)
  */
 export function loadConfig(
   env: NodeJS.ProcessEnv = process.env,
-  overrides: Partial<AppConfig> = {},
+  overrides: ConfigOverrides = {},
 ): AppConfig {
   const number = (name: string, fallback: number): number => {
     const raw = env[name];
@@ -94,6 +131,31 @@ export function loadConfig(
     webDist: env.WEB_DIST || path.join(repoRoot, 'apps', 'web', 'dist'),
     logErrors: env.LOG_ERRORS !== 'false',
     ...overrides,
+    compute: { ...computeLimits(env, number), ...overrides.compute },
+  };
+}
+
+/** The compute budgets and pool settings from the environment (docs/api.md, "Cost model and limits"). */
+function computeLimits(env: NodeJS.ProcessEnv, number: (name: string, fallback: number) => number): ComputeLimits {
+  const whole = (name: string, fallback: number): number => {
+    const value = number(name, fallback);
+    if (!Number.isInteger(value)) throw new RangeError(`${name} must be a whole number; got ${value}`);
+    return value;
+  };
+  const threads = whole('COMPUTE_THREADS', Math.max(1, availableParallelism()));
+  return {
+    requestWorkBudget: number('COMPUTE_WORK_BUDGET', 2.5e8),
+    jobWorkBudget: number('JOB_WORK_BUDGET', 2e10),
+    responseBytesBudget: number('RESPONSE_BYTES_BUDGET', 8 * 1024 * 1024),
+    inlineWorkLimit: number('INLINE_WORK_LIMIT', 4e5),
+    threads,
+    taskTimeLimitMs: number('COMPUTE_TIME_LIMIT_MS', 30_000),
+    queueTimeLimitMs: number('COMPUTE_QUEUE_LIMIT_MS', 20_000),
+    jobConcurrency: whole('JOB_CONCURRENCY', Math.max(1, threads - 1)),
+    userJobQuota: whole('JOB_QUOTA_USER', 2),
+    teamJobQuota: whole('JOB_QUOTA_TEAM', 6),
+    workerHeapMb: whole('COMPUTE_WORKER_HEAP_MB', 1024),
+    workerNice: env.COMPUTE_NICE === '0' ? 0 : whole('COMPUTE_NICE', 10),
   };
 }
 

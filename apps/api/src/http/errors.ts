@@ -33,8 +33,8 @@ const TYPES: Record<number, string> = {
 };
 
 /** The URI naming a kind of problem (RFC 9457 `type`). */
-export function problemType(status: number): string {
-  return `urn:pulsewright:problem:${TYPES[status] ?? 'error'}`;
+export function problemType(status: number, kind?: string): string {
+  return `urn:pulsewright:problem:${kind ?? TYPES[status] ?? 'error'}`;
 }
 
 export function problemTitle(status: number): string {
@@ -52,6 +52,8 @@ export class HttpError extends Error {
     readonly status: number,
     readonly detail: string,
     readonly errors: ProblemItem[] = [],
+    /** The problem's kind where the status alone does not say it (`job-quota`, `compute-time-limit`). */
+    readonly kind?: string,
   ) {
     super(detail);
   }

@@ -50,6 +50,7 @@ export function problemHandler(document: OpenApiDocument, logErrors: boolean): E
     }
     if (problem.status === 401) res.setHeader('WWW-Authenticate', 'Bearer realm="pulsewright"');
     if (problem.status === 503) res.setHeader('Retry-After', '30');
+    if (problem.status === 429 && !res.getHeader('Retry-After')) res.setHeader('Retry-After', '10');
     // send (not json): the body never goes through response validation hooks, whose failure
     // would come back here.
     res
@@ -57,7 +58,7 @@ export function problemHandler(document: OpenApiDocument, logErrors: boolean): E
       .type('application/problem+json')
       .send(
         JSON.stringify({
-          type: problemType(problem.status),
+          type: problemType(problem.status, problem.kind),
           title: problemTitle(problem.status),
           status: problem.status,
           detail: problem.detail,
@@ -71,10 +72,11 @@ interface Problem {
   status: number;
   detail: string;
   errors: ProblemItem[];
+  kind?: string;
 }
 
 function toProblem(document: OpenApiDocument, err: unknown, req: Request): Problem {
-  if (err instanceof HttpError) return { status: err.status, detail: err.detail, errors: err.errors };
+  if (err instanceof HttpError) return { status: err.status, detail: err.detail, errors: err.errors, ...(err.kind ? { kind: err.kind } : {}) };
   if (isParameterError(err)) {
     return { status: 400, detail: err.message, errors: [{ path: err.field, message: err.message }] };
   }

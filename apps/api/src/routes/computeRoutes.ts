@@ -1,58 +1,51 @@
 import { Router } from 'express';
 import { principalOf } from '../auth/authorize.js';
 import { intQuery } from '../http/query.js';
-import {
-  checkDesignLimits,
-  computeFilter,
-  computeLoadCurrent,
-  computeSpaceVector,
-  computeSpectrum,
-  computeTimerTable,
-  designReport,
-  modulationOutput,
-  type TimerFormat,
-} from '../services/compute.js';
+import type { TimerFormat } from '../services/cost.js';
 import type { Services } from '../services/index.js';
-import { maSweepWork, sheSweepWork } from '../services/sweeps.js';
+import { maSweepPlan, sheSweepPlan } from '../services/sweepJobs.js';
 
-/** Compute routes: validate (done by the OpenAPI validator), call the library, respond. */
+/**
+ * Compute routes: validate (done by the OpenAPI validator), hand the work to the compute service
+ * (cost checked, then run on this thread or in the worker pool) or the job service, respond.
+ */
 export function computeRoutes(services: Services): Router {
   const router = Router();
-  const { jobs } = services;
+  const { compute, jobs } = services;
 
-  router.post('/api/v1/spectra', (req, res) => {
-    res.json(computeSpectrum(req.body.modulation, req.body.maxOrder ?? 100, req.body.output));
+  router.post('/api/v1/spectra', async (req, res) => {
+    res.json(await compute.spectrum(req.body.modulation, req.body.maxOrder ?? 100, req.body.output));
   });
-  router.post('/api/v1/waveforms', (req, res) => {
-    res.json(modulationOutput(req.body.modulation, req.body.output));
+  router.post('/api/v1/waveforms', async (req, res) => {
+    res.json(await compute.waveform(req.body.modulation, req.body.output));
   });
-  router.post('/api/v1/designs/report', (req, res) => {
+  router.post('/api/v1/designs/report', async (req, res) => {
     const { design, ...options } = req.body;
-    res.json(designReport(design, options));
+    res.json(await compute.report(design, options));
   });
-  router.post('/api/v1/load-current', (req, res) => {
-    res.json(computeLoadCurrent(req.body.design, req.body.points));
+  router.post('/api/v1/load-current', async (req, res) => {
+    res.json(await compute.loadCurrent(req.body.design, req.body.points));
   });
-  router.post('/api/v1/filters/lc', (req, res) => {
+  router.post('/api/v1/filters/lc', async (req, res) => {
     const { design, ...options } = req.body;
-    res.json(computeFilter(design, options));
+    res.json(await compute.filter(design, options));
   });
   router.post('/api/v1/space-vector', (req, res) => {
     const { m, theta, ...options } = req.body;
-    res.json(computeSpaceVector(m, theta, options));
+    res.json(compute.spaceVector(m, theta, options));
   });
-  router.post('/api/v1/timer-tables', (req, res) => {
+  router.post('/api/v1/timer-tables', async (req, res) => {
     const { prefix, ...options } = req.body;
     const format = (typeof req.query.format === 'string' ? req.query.format : 'json') as TimerFormat;
-    const file = computeTimerTable(options, format, prefix);
+    const file = await compute.timerTable(options, format, prefix);
     res
       .status(200)
       .type(file.contentType)
       .setHeader('Content-Disposition', `attachment; filename="${file.fileName}"`)
       .send(file.body);
   });
-  router.post('/api/v1/harmonic-limits/check', (req, res) => {
-    res.json(checkDesignLimits(req.body.design, req.body.busVoltage));
+  router.post('/api/v1/harmonic-limits/check', async (req, res) => {
+    res.json(await compute.harmonicLimits(req.body.design, req.body.busVoltage));
   });
 
   router.get('/api/v1/jobs', async (req, res) => {
@@ -60,10 +53,10 @@ export function computeRoutes(services: Services): Router {
   });
   router.post('/api/v1/jobs/ma-sweeps', async (req, res) => {
     const input = { ...req.body, maxOrder: req.body.maxOrder ?? 100 };
-    res.status(202).json(await jobs.start(principalOf(req), 'ma-sweep', input, maSweepWork(input)));
+    res.status(202).json(await jobs.start(principalOf(req), input, maSweepPlan(input)));
   });
   router.post('/api/v1/jobs/she-sweeps', async (req, res) => {
-    res.status(202).json(await jobs.start(principalOf(req), 'she-sweep', req.body, sheSweepWork(req.body)));
+    res.status(202).json(await jobs.start(principalOf(req), req.body, sheSweepPlan(req.body)));
   });
   router.get('/api/v1/jobs/:id', async (req, res) => {
     res.json(await jobs.get(principalOf(req).teamId, req.params.id));

@@ -1,13 +1,12 @@
 import { Router } from 'express';
 import { intQuery, numberQuery, optionalIntQuery } from '../http/query.js';
 import { principalOf } from '../auth/authorize.js';
-import { assertDesign, designReport, designSpectrum } from '../services/compute.js';
 import type { Services } from '../services/index.js';
 
 /** Projects and studies (every study edit is a new revision). */
 export function studyRoutes(services: Services): Router {
   const router = Router();
-  const { projects, studies } = services;
+  const { projects, studies, compute } = services;
   const text = (value: unknown): string | undefined => (typeof value === 'string' ? value : undefined);
 
   router.get('/api/v1/projects', async (req, res) => {
@@ -35,7 +34,7 @@ export function studyRoutes(services: Services): Router {
   });
   router.post('/api/v1/studies', async (req, res) => {
     const { projectId, ...content } = req.body;
-    assertDesign(content.design);
+    await compute.assertDesign(content.design);
     res.status(201).json(await studies.create(principalOf(req), projectId, content));
   });
   router.get('/api/v1/studies/:id', async (req, res) => {
@@ -43,7 +42,7 @@ export function studyRoutes(services: Services): Router {
   });
   router.put('/api/v1/studies/:id', async (req, res) => {
     const { baseRevision, ...content } = req.body;
-    assertDesign(content.design);
+    await compute.assertDesign(content.design);
     res.json(await studies.update(principalOf(req), req.params.id, baseRevision, content));
   });
   router.post('/api/v1/studies/:id/duplicate', async (req, res) => {
@@ -57,7 +56,7 @@ export function studyRoutes(services: Services): Router {
   });
   router.get('/api/v1/studies/:id/spectrum', async (req, res) => {
     const study = await studies.get(principalOf(req).teamId, req.params.id);
-    res.json(designSpectrum(study.design, intQuery(req, 'maxOrder', 100)));
+    res.json(await compute.designSpectrum(study.design, intQuery(req, 'maxOrder', 100)));
   });
   router.get('/api/v1/studies/:id/report', async (req, res) => {
     const maxOrder = optionalIntQuery(req, 'maxOrder', 100);
@@ -65,7 +64,7 @@ export function studyRoutes(services: Services): Router {
     const busVoltage = numberQuery(req, 'busVoltage');
     const study = await studies.get(principalOf(req).teamId, req.params.id);
     res.json(
-      designReport(study.design, {
+      await compute.report(study.design, {
         ...(maxOrder !== undefined ? { maxOrder } : {}),
         ...(points !== undefined ? { points } : {}),
         ...(busVoltage !== undefined ? { busVoltage } : {}),

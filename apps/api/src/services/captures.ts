@@ -1,11 +1,10 @@
-import { fftSpectrum, type FftWindowName } from '@pulsewright/modulation';
+import type { FftWindowName } from '@pulsewright/modulation';
 import type { CaptureRow, Models } from '../models/index.js';
 import { badRequest, notFound } from '../http/errors.js';
 import type { AuditLog } from './audit.js';
 import { parseCaptureCsv, sanitiseFileName } from './captureCsv.js';
-import { designSpectrum } from './compute.js';
+import type { ComputeService } from './computeService.js';
 import { iso } from './dto.js';
-import { callLibrary } from './library.js';
 import type { Principal } from './principal.js';
 import type { ProjectService } from './projects.js';
 import type { StudyService } from './studies.js';
@@ -37,6 +36,7 @@ export class CaptureService {
     private readonly audit: AuditLog,
     private readonly projects: ProjectService,
     private readonly studies: StudyService,
+    private readonly compute: ComputeService,
   ) {}
 
   async upload(
@@ -94,13 +94,11 @@ export class CaptureService {
       const message = 'column must be voltage: this capture has no current column';
       throw badRequest(message, [{ path: 'column', message }]);
     }
-    const { bins: _bins, ...spectrum } = callLibrary('', () =>
-      fftSpectrum(samples, row.sampleRate, {
-        window: options.window,
-        maxOrder: options.maxOrder,
-        ...(options.fundamentalFrequency ? { fundamentalFrequency: options.fundamentalFrequency } : {}),
-      }),
-    );
+    const spectrum = await this.compute.captureSpectrum(samples, row.sampleRate, {
+      window: options.window,
+      maxOrder: options.maxOrder,
+      ...(options.fundamentalFrequency ? { fundamentalFrequency: options.fundamentalFrequency } : {}),
+    });
     return { captureId: row.id, column: options.column, ...spectrum };
   }
 
@@ -111,7 +109,7 @@ export class CaptureService {
   async compare(teamId: string, id: string, studyId: string, options: AnalysisOptions) {
     const measured = await this.analyse(teamId, id, { ...options, column: 'voltage' });
     const study = await this.studies.get(teamId, studyId);
-    const predicted = designSpectrum(study.design, options.maxOrder, 'study.design').harmonics;
+    const predicted = (await this.compute.designSpectrum(study.design, options.maxOrder, 'study.design')).harmonics;
     const orders = measured.harmonics.map((h) => {
       const p = predicted[h.order]?.amplitude ?? 0;
       return {

@@ -1,15 +1,12 @@
 import {
   analyseDesign,
   assertInverterDesign,
-  CARRIER_METHODS,
-  defaultSpectrumOrder,
   designModulation,
-  MAX_ANALYSIS_ORDER,
+  fftSpectrum,
   harmonics,
   modulationVoltages,
   spaceVectorSequence,
   thd,
-  THREE_PHASE_METHODS,
   timerTable,
   timerTableToCHeader,
   timerTableToCsv,
@@ -18,6 +15,7 @@ import {
   waveformWthd,
   type AnalyseDesignOptions,
   type DesignReport,
+  type FftWindowName,
   type Harmonic,
   type InverterDesign,
   type Modulation,
@@ -30,6 +28,7 @@ import {
   type Waveform,
 } from '@pulsewright/modulation';
 import { badRequest } from '../http/errors.js';
+import type { TimerFormat } from './cost.js';
 import { callLibrary, finiteResult } from './library.js';
 
 /**
@@ -61,67 +60,6 @@ export interface WaveformResult {
 
 /** Report options the library names by themselves (the rest of its fields sit in the design). */
 const OPTION_FIELDS = ['maxOrder', 'points', 'busVoltage'] as const;
-
-/**
- * Most harmonic-sum work one report request may ask for: switching edges × orders summed (the
- * exact spectra and, with a filter, every phase to the analysis order). Every design the schema
- * allows fits (a three-phase design at mf 1000 with a filter is about 2.1·10⁸, some 1.5 s); the
- * budget stops a later widening of the bounds from making one request block the service.
- */
-export const REPORT_WORK_BUDGET = 2.5e8;
-
-/**
- * Most time-series values one report may return (points × the currents and voltages sampled):
- * 40 000 keeps the answer near 1 MB; a three-phase design with a filter and a load samples ten
- * series, so up to 4000 points a period.
- */
-export const REPORT_SERIES_BUDGET = 40_000;
-
-/** Upper bound of the switching edges per period of one phase's voltage, from the design alone. */
-function edgesPerPhase(design: InverterDesign, ratio: number): { phase: number; line: number } {
-  const { modulation } = design;
-  switch (modulation.method) {
-    case 'sine-triangle':
-      return { phase: (modulation.scheme === 'unipolar' ? 4 : 2) * (ratio + 1), line: 0 };
-    case 'three-phase':
-    case 'space-vector':
-      // Each leg switches twice a carrier period; a phase-to-star voltage holds all three legs' edges.
-      return { phase: 6 * (ratio + 1), line: 4 * (ratio + 1) };
-    case 'selective-harmonic-elimination':
-    case 'optimal-pattern':
-      return { phase: 4 * (Array.isArray(modulation.angles) ? modulation.angles.length : 0), line: 0 };
-  }
-}
-
-/**
- * Refuses, before any work, a report whose cost would exceed the budgets above (400 naming the
- * option to lower). The estimates follow analyseDesign's documented analysis (its analysisOrder,
- * its series); the schema has already bounded every input.
- */
-export function assertReportBudget(design: InverterDesign, options: AnalyseDesignOptions, field = 'design'): void {
-  const pattern = !CARRIER_METHODS.includes(design.modulation.method);
-  const ratio = pattern ? 0 : Math.round((design.carrierFrequency ?? 0) / design.fundamentalFrequency);
-  const maxOrder = options.maxOrder ?? defaultSpectrumOrder(design);
-  const points = options.points ?? 1200;
-  const phases = THREE_PHASE_METHODS.includes(design.modulation.method) ? 3 : 1;
-  const edges = edgesPerPhase(design, ratio);
-  const filtered = design.filter !== undefined && design.filter !== null;
-  const analysisOrder = filtered ? Math.min(MAX_ANALYSIS_ORDER, Math.max(maxOrder, pattern ? 2000 : 10 * ratio + 10)) : maxOrder;
-  const work = (edges.phase + edges.line) * maxOrder + (filtered ? phases * edges.phase * analysisOrder : 0);
-  if (work > REPORT_WORK_BUDGET) {
-    const path = filtered && analysisOrder > maxOrder ? `${field}.carrierFrequency` : 'maxOrder';
-    const message =
-      `${path} asks for about ${work.toPrecision(2)} edge-order sums, more than the ${REPORT_WORK_BUDGET.toPrecision(2)} one request may take; ` +
-      'lower the carrier frequency or maxOrder, or run the study as a sweep job';
-    throw badRequest(message, [{ path, message }]);
-  }
-  const series = (filtered ? 1 + 3 * phases : 0) + (!filtered && design.load ? phases : 0);
-  if (series * points > REPORT_SERIES_BUDGET) {
-    const most = Math.floor(REPORT_SERIES_BUDGET / series);
-    const message = `points must be ≤ ${most} for this design (${series} time series of points samples each, at most ${REPORT_SERIES_BUDGET} values); got ${points}`;
-    throw badRequest(message, [{ path: 'points', message }]);
-  }
-}
 
 /**
  * The voltage of a modulation that spectra and waveforms analyse, with every named voltage of
@@ -169,13 +107,12 @@ export function designSpectrum(design: InverterDesign, maxOrder: number, field =
 }
 
 /**
- * The design report (the library's analyseDesign). Errors name the field by its path in the
+ * The design report (the library's analyseDesign). Its cost is checked before it is called
+ * (services/cost.ts `reportCost`, by ComputeService). Errors name the field by its path in the
  * request: `design.modulation.ma`, `design.carrierFrequency`, or the option (`maxOrder`).
  */
 export function designReport(design: InverterDesign, options: AnalyseDesignOptions = {}, field = 'design'): DesignReport {
-  // The design's own checks first (cheap), so the budget estimate reads a valid design.
   callLibrary(`${field}.`, () => assertInverterDesign(design));
-  assertReportBudget(design, options, field);
   const report = callLibrary(`${field}.`, () => analyseDesign(design, options), OPTION_FIELDS);
   return finiteResult(field, report);
 }
@@ -237,7 +174,7 @@ export function computeSpaceVector(m: number, theta: number, options: SpaceVecto
   return callLibrary('', () => spaceVectorSequence({ m, theta }, options));
 }
 
-export type TimerFormat = 'json' | 'csv' | 'c-header';
+export type { TimerFormat } from './cost.js';
 
 export interface TimerDownload {
   body: string;
@@ -255,4 +192,22 @@ export function computeTimerTable(options: TimerTableOptions, format: TimerForma
     }
     return { body: timerTableToJson(table), contentType: 'application/json; charset=utf-8', fileName: `${prefix}.json` };
   });
+}
+
+export interface SampleAnalysisOptions {
+  window: FftWindowName;
+  maxOrder: number;
+  fundamentalFrequency?: number;
+}
+
+/** The library's fftSpectrum of a capture's samples, without its bins (the routes never return them). */
+export function analyseSamples(samples: ArrayLike<number>, sampleRate: number, options: SampleAnalysisOptions) {
+  const { bins: _bins, ...spectrum } = callLibrary('', () =>
+    fftSpectrum(Array.isArray(samples) ? samples : Array.from(samples), sampleRate, {
+      window: options.window,
+      maxOrder: options.maxOrder,
+      ...(options.fundamentalFrequency ? { fundamentalFrequency: options.fundamentalFrequency } : {}),
+    }),
+  );
+  return spectrum;
 }

@@ -4,6 +4,8 @@ import { ApiKeyService } from './apiKeys.js';
 import { AuditLog } from './audit.js';
 import { AuthService } from './auth.js';
 import { CaptureService } from './captures.js';
+import { ComputePool } from './computePool.js';
+import { ComputeService } from './computeService.js';
 import { JobService } from './jobs.js';
 import { Mailer } from './mail.js';
 import { ProjectService } from './projects.js';
@@ -23,6 +25,9 @@ export interface Services {
   studies: StudyService;
   shares: StudyShareService;
   captures: CaptureService;
+  /** The worker threads for compute (closed by JobService.close). */
+  pool: ComputePool;
+  compute: ComputeService;
   jobs: JobService;
 }
 
@@ -32,6 +37,8 @@ export function createServices(models: Models, config: AppConfig): Services {
   const mailer = new Mailer(models, config.smtpUrl, config.mailFrom, config.mailDir);
   const projects = new ProjectService(models, audit);
   const studies = new StudyService(models, audit, projects);
+  const pool = new ComputePool(config.compute);
+  const compute = new ComputeService(pool, config.compute);
   return {
     models,
     audit,
@@ -41,8 +48,10 @@ export function createServices(models: Models, config: AppConfig): Services {
     team: new TeamService(models, audit, auth, mailer, config.publicUrl),
     projects,
     studies,
-    shares: new StudyShareService(models, audit, mailer, studies, config.publicUrl),
-    captures: new CaptureService(models, audit, projects, studies),
-    jobs: new JobService(models, audit),
+    shares: new StudyShareService(models, audit, mailer, studies, compute, config.publicUrl),
+    captures: new CaptureService(models, audit, projects, studies, compute),
+    pool,
+    compute,
+    jobs: new JobService(models, audit, pool, config.compute),
   };
 }

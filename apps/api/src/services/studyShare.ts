@@ -1,6 +1,6 @@
 import type { DesignReport } from '@pulsewright/modulation';
 import type { Models } from '../models/index.js';
-import { designReport } from './compute.js';
+import type { ComputeService } from './computeService.js';
 import type { AuditLog } from './audit.js';
 import type { Mailer } from './mail.js';
 import type { Principal } from './principal.js';
@@ -36,13 +36,14 @@ export class StudyShareService {
     private readonly audit: AuditLog,
     private readonly mailer: Mailer,
     private readonly studies: StudyService,
+    private readonly compute: ComputeService,
     private readonly publicUrl: string,
   ) {}
 
   async share(principal: Principal, studyId: string, input: ShareInput): Promise<StudyShareDto> {
     const study = await this.studies.find(principal.teamId, studyId);
     const revision = await this.models.StudyRevision.findOne({ where: { studyId: study.id, revision: study.currentRevision } });
-    const report = revision?.design ? designReport(revision.design, {}, 'study.design') : null;
+    const report = revision?.design ? await this.compute.report(revision.design, {}, 'study.design') : null;
     const author = revision?.authorId ? await this.models.User.findByPk(revision.authorId) : null;
     const to = input.email.toLowerCase();
     const link = `${this.publicUrl}/studies/${study.id}/report`;

@@ -7,7 +7,6 @@ import {
   type SheKind,
   type Waveform,
 } from '@pulsewright/modulation';
-import type { ChunkedWork } from './jobs.js';
 import { waveformAtMa, type CarrierModulation } from './compute.js';
 import { asBadRequest } from './library.js';
 
@@ -42,19 +41,56 @@ export interface MaSweepResult extends ModulationIndexSweep {
   spectrumWthd: number[];
 }
 
-/** A sweep of the modulation index by the library's sweepModulationIndex, chunk by chunk. */
-export function maSweepWork(input: MaSweepInput): ChunkedWork {
+/** Chunks of an ma sweep (at least one). */
+export function maSweepChunkCount(input: MaSweepInput): number {
+  return chunkBounds(input.ma.points, MA_POINTS_PER_CHUNK).length;
+}
+
+/**
+ * Chunk `index` of an ma sweep by the library's sweepModulationIndex: the chunk's points (the
+ * first one left out after chunk 0, as it repeats the previous chunk's last). Pure: it runs in a
+ * compute worker, and the job appends the parts in order ({@link appendMaSweepPart}).
+ */
+export function maSweepChunk(input: MaSweepInput, index: number): MaSweepResult {
   const { from, to, points } = input.ma;
-  const bounds = chunkBounds(points, MA_POINTS_PER_CHUNK);
+  const [k0, k1] = chunkBounds(points, MA_POINTS_PER_CHUNK)[index] as [number, number];
   const build = waveformAtMa(input.modulation);
   // sweepModulationIndex builds each point's waveform once; keep them for the exact figures.
-  let built: Waveform[] = [];
+  const built: Waveform[] = [];
   const waveformAt = (ma: number): Waveform => {
     const waveform = build(ma);
     built.push(waveform);
     return waveform;
   };
-  const total: MaSweepResult = {
+  let part: ModulationIndexSweep;
+  let exact: { thd: number[]; wthd: number[] };
+  try {
+    part = sweepModulationIndex(waveformAt, {
+      from: gridValue(from, to, points, k0),
+      to: gridValue(from, to, points, k1),
+      points: k1 - k0 + 1,
+      maxOrder: input.maxOrder,
+      orders: input.orders ?? [],
+    });
+    exact = { thd: built.map(waveformThd), wthd: built.map(waveformWthd) };
+  } catch (error) {
+    throw asBadRequest('', error);
+  }
+  const skip = index === 0 ? 0 : 1;
+  return {
+    ma: part.ma.slice(skip),
+    fundamental: part.fundamental.slice(skip),
+    thd: exact.thd.slice(skip),
+    wthd: exact.wthd.slice(skip),
+    spectrumThd: part.thd.slice(skip),
+    spectrumWthd: part.wthd.slice(skip),
+    harmonics: part.harmonics.map((series) => ({ order: series.order, amplitude: series.amplitude.slice(skip) })),
+  };
+}
+
+/** An empty ma sweep result, for {@link appendMaSweepPart}. */
+export function emptyMaSweep(input: MaSweepInput): MaSweepResult {
+  return {
     ma: [],
     fundamental: [],
     thd: [],
@@ -63,36 +99,17 @@ export function maSweepWork(input: MaSweepInput): ChunkedWork {
     spectrumWthd: [],
     harmonics: (input.orders ?? []).map((order) => ({ order, amplitude: [] })),
   };
-  return {
-    chunks: bounds.length,
-    runChunk(index) {
-      const [k0, k1] = bounds[index] as [number, number];
-      let part: ModulationIndexSweep;
-      let exact: { thd: number[]; wthd: number[] };
-      built = [];
-      try {
-        part = sweepModulationIndex(waveformAt, {
-          from: gridValue(from, to, points, k0),
-          to: gridValue(from, to, points, k1),
-          points: k1 - k0 + 1,
-          maxOrder: input.maxOrder,
-          orders: input.orders ?? [],
-        });
-        exact = { thd: built.map(waveformThd), wthd: built.map(waveformWthd) };
-      } catch (error) {
-        throw asBadRequest('', error);
-      }
-      const skip = index === 0 ? 0 : 1; // the first point repeats the previous chunk's last
-      total.ma.push(...part.ma.slice(skip));
-      total.fundamental.push(...part.fundamental.slice(skip));
-      total.thd.push(...exact.thd.slice(skip));
-      total.wthd.push(...exact.wthd.slice(skip));
-      total.spectrumThd.push(...part.thd.slice(skip));
-      total.spectrumWthd.push(...part.wthd.slice(skip));
-      part.harmonics.forEach((series, i) => total.harmonics[i]?.amplitude.push(...series.amplitude.slice(skip)));
-    },
-    result: () => total,
-  };
+}
+
+/** Appends a chunk's part to the sweep so far. */
+export function appendMaSweepPart(total: MaSweepResult, part: MaSweepResult): void {
+  total.ma.push(...part.ma);
+  total.fundamental.push(...part.fundamental);
+  total.thd.push(...part.thd);
+  total.wthd.push(...part.wthd);
+  total.spectrumThd.push(...part.spectrumThd);
+  total.spectrumWthd.push(...part.spectrumWthd);
+  part.harmonics.forEach((series, i) => total.harmonics[i]?.amplitude.push(...series.amplitude));
 }
 
 export interface SheSweepInput {
@@ -110,51 +127,52 @@ export interface SheSweepPointResult {
   converged: boolean;
 }
 
+export interface SheSweepResult {
+  points: SheSweepPointResult[];
+  solvedFraction: number;
+  iterations: number;
+}
+
+/** Chunks of a SHE sweep (at least one). */
+export function sheSweepChunkCount(input: SheSweepInput): number {
+  return chunkBounds(input.fundamental.points, SHE_POINTS_PER_CHUNK).length;
+}
+
 /**
- * Selective harmonic elimination over a range of fundamentals by the library's sheSweep, chunk
- * by chunk, each chunk seeded with the last solution of the one before so the sweep follows
- * one branch (Patel and Hoft, 1973, with continuation).
+ * Chunk `index` of a selective harmonic elimination sweep over a range of fundamentals by the
+ * library's sheSweep, seeded with the last solution of the chunks before (`seed`) so the sweep
+ * follows one branch (Patel and Hoft, 1973, with continuation). Pure: it runs in a compute
+ * worker; the job appends the points in order and passes the last solved angles on.
  */
-export function sheSweepWork(input: SheSweepInput): ChunkedWork {
+export function sheSweepChunk(input: SheSweepInput, index: number, seed: number[] | undefined): { points: SheSweepPointResult[]; iterations: number } {
   const { from, to, points } = input.fundamental;
-  const bounds = chunkBounds(points, SHE_POINTS_PER_CHUNK);
-  const solved: SheSweepPointResult[] = [];
-  let seed = input.initialAngles;
-  let iterations = 0;
-  return {
-    chunks: bounds.length,
-    runChunk(index) {
-      const [k0, k1] = bounds[index] as [number, number];
-      const grid = Array.from({ length: k1 - k0 + 1 }, (_, i) => gridValue(from, to, points, k0 + i));
-      let part;
-      try {
-        part = sheSweep({
-          kind: input.kind,
-          vdc: input.vdc,
-          count: input.count,
-          eliminate: input.eliminate,
-          fundamentals: { from: grid[0] as number, to: grid[grid.length - 1] as number, points: grid.length },
-          ...(seed ? { angles: seed } : {}),
-          maxBranches: 1,
-        });
-      } catch (error) {
-        throw asBadRequest('', error);
-      }
-      iterations += part.iterations;
-      const skip = index === 0 ? 0 : 1;
-      grid.slice(skip).forEach((fundamental) => {
-        const hit = part.branches
-          .flatMap((b) => b.points)
-          .find((p) => p.converged && Math.abs(p.fundamental - fundamental) <= 1e-9 * Math.max(1, Math.abs(fundamental)));
-        solved.push(hit ? { fundamental, angles: hit.angles, converged: true } : { fundamental, angles: [], converged: false });
-      });
-      const last = [...solved].reverse().find((p) => p.converged);
-      seed = last ? last.angles : undefined;
-    },
-    result: () => ({
-      points: solved,
-      solvedFraction: solved.filter((p) => p.converged).length / Math.max(1, solved.length),
-      iterations,
-    }),
-  };
+  const [k0, k1] = chunkBounds(points, SHE_POINTS_PER_CHUNK)[index] as [number, number];
+  const grid = Array.from({ length: k1 - k0 + 1 }, (_, i) => gridValue(from, to, points, k0 + i));
+  let part;
+  try {
+    part = sheSweep({
+      kind: input.kind,
+      vdc: input.vdc,
+      count: input.count,
+      eliminate: input.eliminate,
+      fundamentals: { from: grid[0] as number, to: grid[grid.length - 1] as number, points: grid.length },
+      ...(seed ? { angles: seed } : {}),
+      maxBranches: 1,
+    });
+  } catch (error) {
+    throw asBadRequest('', error);
+  }
+  const skip = index === 0 ? 0 : 1;
+  const solved = grid.slice(skip).map((fundamental): SheSweepPointResult => {
+    const hit = part.branches
+      .flatMap((b) => b.points)
+      .find((p) => p.converged && Math.abs(p.fundamental - fundamental) <= 1e-9 * Math.max(1, Math.abs(fundamental)));
+    return hit ? { fundamental, angles: hit.angles, converged: true } : { fundamental, angles: [], converged: false };
+  });
+  return { points: solved, iterations: part.iterations };
+}
+
+/** The seed of the next chunk: the last converged angles of the sweep so far (none: the library's own start). */
+export function nextSheSeed(points: SheSweepPointResult[]): number[] | undefined {
+  return [...points].reverse().find((p) => p.converged)?.angles;
 }

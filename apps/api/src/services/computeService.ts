@@ -1,0 +1,106 @@
+import type {
+  AnalyseDesignOptions,
+  FftWindowName,
+  InverterDesign,
+  Modulation,
+  SpaceVectorSequenceOptions,
+  TimerTableOptions,
+} from '@pulsewright/modulation';
+import type { ComputeLimits } from '../config.js';
+import { computeSpaceVector, type VoltageOutput } from './compute.js';
+import type { ComputePool } from './computePool.js';
+import {
+  assertReportSeries,
+  assertWithinBudget,
+  captureSpectrumCost,
+  designSpectrumCost,
+  reportCost,
+  spaceVectorCost,
+  spectrumCost,
+  timerTableCost,
+  waveformCost,
+  type CostEstimate,
+  type TimerFormat,
+} from './cost.js';
+import { COMPUTE_TASKS, type ComputeTaskName, type TaskArgs, type TaskResult } from '../workers/computeTasks.js';
+
+/**
+ * Every compute a request asks for, in one place: its cost is estimated from the inputs
+ * (services/cost.ts) and refused with a 400 beyond the request budget or the answer budget; what
+ * is cheap runs on the request thread, the rest in the worker pool, through the same service
+ * functions either way (workers/computeTasks.ts). Routes and services call this, never the pool.
+ */
+export class ComputeService {
+  constructor(
+    private readonly pool: ComputePool,
+    private readonly limits: ComputeLimits,
+  ) {}
+
+  /** Runs a task where its cost says, after the budget check. */
+  private async run<N extends ComputeTaskName>(name: N, args: TaskArgs<N>, cost: CostEstimate, what: string): Promise<TaskResult<N>> {
+    assertWithinBudget(cost, 'request', this.limits);
+    if (cost.work <= this.limits.inlineWorkLimit) {
+      return (COMPUTE_TASKS[name] as (a: TaskArgs<N>) => TaskResult<N>)(args);
+    }
+    return this.pool.run(name, args, { what });
+  }
+
+  spectrum(modulation: Modulation, maxOrder: number, output?: VoltageOutput) {
+    return this.run('spectrum', { modulation, maxOrder, ...(output ? { output } : {}) }, spectrumCost(modulation, maxOrder, output), 'This spectrum');
+  }
+
+  waveform(modulation: Modulation, output?: VoltageOutput) {
+    return this.run('waveform', { modulation, ...(output ? { output } : {}) }, waveformCost(modulation), 'This waveform');
+  }
+
+  /** The cost of a design report, with the report's own bound on its time series. */
+  private reportCost(design: InverterDesign, options: AnalyseDesignOptions, field: string): CostEstimate {
+    const cost = reportCost(design, options, field);
+    assertReportSeries(cost);
+    return cost;
+  }
+
+  report(design: InverterDesign, options: AnalyseDesignOptions = {}, field = 'design') {
+    return this.run('designReport', { design, options, field }, this.reportCost(design, options, field), 'This design report');
+  }
+
+  loadCurrent(design: InverterDesign, points?: number) {
+    const cost = this.reportCost(design, points === undefined ? {} : { points }, 'design');
+    return this.run('loadCurrent', { design, ...(points === undefined ? {} : { points }) }, cost, 'This load-current analysis');
+  }
+
+  filter(design: InverterDesign, options: Pick<AnalyseDesignOptions, 'maxOrder' | 'points'>) {
+    return this.run('filter', { design, options }, this.reportCost(design, options, 'design'), 'This filter analysis');
+  }
+
+  harmonicLimits(design: InverterDesign, busVoltage?: number) {
+    const cost = this.reportCost(design, busVoltage === undefined ? {} : { busVoltage }, 'design');
+    return this.run('limits', { design, ...(busVoltage === undefined ? {} : { busVoltage }) }, cost, 'This limit check');
+  }
+
+  /** A study's design checked by a trial analysis before it is stored (compute.ts assertDesign). */
+  async assertDesign(design: InverterDesign, field = 'design'): Promise<void> {
+    await this.run('assertDesign', { design, field }, this.reportCost(design, { maxOrder: 50, points: 64 }, field), 'The check of this design');
+  }
+
+  designSpectrum(design: InverterDesign, maxOrder: number, field = 'design') {
+    return this.run('designSpectrum', { design, maxOrder, field }, designSpectrumCost(design, maxOrder, field), 'This spectrum');
+  }
+
+  timerTable(options: TimerTableOptions, format: TimerFormat, prefix?: string) {
+    const cost = timerTableCost(options, format);
+    return this.run('timerTable', { options, format, ...(prefix ? { prefix } : {}) }, cost, 'This timer table');
+  }
+
+  spaceVector(m: number, theta: number, options: SpaceVectorSequenceOptions) {
+    assertWithinBudget(spaceVectorCost(), 'request', this.limits);
+    return computeSpaceVector(m, theta, options);
+  }
+
+  captureSpectrum(samples: readonly number[], sampleRate: number, options: { window: FftWindowName; maxOrder: number; fundamentalFrequency?: number }) {
+    const cost = captureSpectrumCost(samples.length, options.maxOrder);
+    // A typed copy crosses to a worker as one block of memory rather than a million numbers.
+    const args = { samples: cost.work <= this.limits.inlineWorkLimit ? (samples as number[]) : Float64Array.from(samples), sampleRate, options };
+    return this.run('captureSpectrum', args, cost, 'This capture analysis');
+  }
+}

@@ -1,0 +1,292 @@
+import {
+  CARRIER_METHODS,
+  defaultSpectrumOrder,
+  MAX_ANALYSIS_ORDER,
+  THREE_PHASE_METHODS,
+  type AnalyseDesignOptions,
+  type InverterDesign,
+  type Modulation,
+  type TimerTableOptions,
+} from '@pulsewright/modulation';
+import type { ComputeLimits } from '../config.js';
+import { badRequest } from '../http/errors.js';
+import type { MaSweepInput, SheSweepInput } from './sweeps.js';
+
+/**
+ * The cost model: what a compute request or a job will cost, estimated from its inputs alone
+ * before any work, so that what exceeds a budget is refused with a 400 naming the fields to
+ * lower, and what is cheap runs on the request thread while the rest goes to the worker pool.
+ *
+ * Work is counted in one unit: one term of an exact Fourier sum (one switching edge at one
+ * harmonic order, `harmonics` in the library), about 5 ns of one core on the 2-core build
+ * machine (a three-phase report at mf 999 with a filter, 2.1·10⁸ units, took 0.98 s). Other
+ * kinds of work are converted to it by factors measured on the same machine, rounded up, so an
+ * estimate errs on the high side:
+ *
+ * - building a waveform: 100 units an edge (natural sampling finds each edge by root-finding);
+ * - SHE: 4·10⁴ units × count² a point, the worst case (a point that does not converge runs
+ *   Newton to its iteration limit from several starts: 0.19–0.22 ms × count² measured for
+ *   staircase patterns of 8–31 angles; a converging bipolar point costs a tenth of that);
+ * - timer tables: 250 units a row and channel (65 536 rows × 3 channels as JSON took 0.25 s);
+ * - FFT of a capture: 10 units a sample and stage (N·log₂N);
+ * - sampled time series: 20 units a value.
+ *
+ * Answers are bounded the same way: each estimate carries the size of the JSON (or file) it
+ * will produce, from bytes per value measured on the largest answers (about 18 bytes a number).
+ */
+export interface CostEstimate {
+  /** What the request asks for, in the cost model's units. */
+  work: number;
+  /** How the work was counted, in the request's words (e.g. `4000 edges × 2001 orders`). */
+  basis: string;
+  /** The request fields that drive the work, the one to lower first. */
+  fields: string[];
+  /** Estimated size of the answer, bytes. */
+  responseBytes: number;
+  /** The request fields that drive the size of the answer. */
+  responseFields: string[];
+}
+
+/** Units of work per edge to build a waveform (root-finding for natural sampling). */
+const BUILD_PER_EDGE = 100;
+/** Worst-case units per SHE point per angle² (see above). */
+const SHE_PER_ANGLE_SQUARED = 4e4;
+/** Units per timer-table row and channel. */
+const TIMER_PER_ROW_CHANNEL = 250;
+/** Bytes per timer-table row and channel, by format (measured 79, 44 and 17; rounded up). */
+const TIMER_BYTES_PER_ROW_CHANNEL = { json: 90, csv: 50, 'c-header': 20 } as const;
+/** Bytes of one number in a JSON answer, with its key and punctuation where it is in an object. */
+const BYTES_PER_NUMBER = 20;
+
+const sci = (value: number): string => value.toPrecision(3);
+
+/** Switching edges per period of a modulation's voltages: one phase (or leg) and one line. */
+export function modulationEdges(modulation: Modulation): { phase: number; leg: number; line: number } {
+  switch (modulation.method) {
+    case 'sine-triangle': {
+      const edges = (modulation.scheme === 'unipolar' ? 4 : 2) * (modulation.mf + 1);
+      return { phase: edges, leg: edges, line: 0 };
+    }
+    case 'three-phase':
+      return { phase: 6 * (modulation.mf + 1), leg: 2 * (modulation.mf + 1), line: 4 * (modulation.mf + 1) };
+    case 'space-vector': {
+      // A ratio that is not whole repeats over up to 64 fundamental periods (the library's default).
+      const ratio = Number.isInteger(modulation.frequencyRatio) ? modulation.frequencyRatio : 64 * Math.ceil(modulation.frequencyRatio);
+      return { phase: 6 * (ratio + 1), leg: 2 * (ratio + 1), line: 4 * (ratio + 1) };
+    }
+    case 'selective-harmonic-elimination':
+    case 'optimal-pattern': {
+      const edges = 4 * (Array.isArray(modulation.angles) ? modulation.angles.length : 0);
+      return { phase: edges, leg: edges, line: 0 };
+    }
+  }
+}
+
+/** The request field that sets a modulation's switching frequency (its edges). */
+function edgeField(modulation: Modulation, prefix: string): string {
+  if (modulation.method === 'space-vector') return `${prefix}frequencyRatio`;
+  if (modulation.method === 'sine-triangle' || modulation.method === 'three-phase') return `${prefix}mf`;
+  return `${prefix}angles`;
+}
+
+/** Every edge of every voltage of the bridge (what modulationVoltages builds). */
+function allEdges(modulation: Modulation): number {
+  const edges = modulationEdges(modulation);
+  return THREE_PHASE_METHODS.includes(modulation.method) ? 3 * (edges.phase + edges.leg + edges.line) : edges.phase;
+}
+
+/** POST /spectra: the voltages built, then one voltage's spectrum to maxOrder and its exact THD. */
+export function spectrumCost(modulation: Modulation, maxOrder: number, output?: string, prefix = 'modulation.'): CostEstimate {
+  const edges = modulationEdges(modulation);
+  const analysed = edges.line > 0 && (output === undefined || output === 'line-to-line') ? edges.line : output === 'leg' ? edges.leg : edges.phase;
+  return {
+    work: allEdges(modulation) * BUILD_PER_EDGE + analysed * (maxOrder + 1),
+    basis: `${analysed} edges × ${maxOrder + 1} orders`,
+    fields: ['maxOrder', edgeField(modulation, prefix)],
+    responseBytes: (maxOrder + 1) * 3 * BYTES_PER_NUMBER,
+    responseFields: ['maxOrder'],
+  };
+}
+
+/** POST /waveforms: every named voltage of the bridge, edges and levels. */
+export function waveformCost(modulation: Modulation, prefix = 'modulation.'): CostEstimate {
+  const edges = allEdges(modulation);
+  return {
+    work: edges * BUILD_PER_EDGE,
+    basis: `${edges} edges`,
+    fields: [edgeField(modulation, prefix)],
+    responseBytes: (edges + modulationEdges(modulation).line) * 2 * BYTES_PER_NUMBER,
+    responseFields: [edgeField(modulation, prefix)],
+  };
+}
+
+/** Upper bound of the switching edges per period of one phase's voltage, from the design alone. */
+function designEdges(design: InverterDesign, ratio: number): { phase: number; line: number } {
+  const { modulation } = design;
+  switch (modulation.method) {
+    case 'sine-triangle':
+      return { phase: (modulation.scheme === 'unipolar' ? 4 : 2) * (ratio + 1), line: 0 };
+    case 'three-phase':
+    case 'space-vector':
+      // Each leg switches twice a carrier period; a phase-to-star voltage holds all three legs' edges.
+      return { phase: 6 * (ratio + 1), line: 4 * (ratio + 1) };
+    case 'selective-harmonic-elimination':
+    case 'optimal-pattern':
+      return { phase: 4 * (Array.isArray(modulation.angles) ? modulation.angles.length : 0), line: 0 };
+  }
+}
+
+/**
+ * The design report (POST /designs/report, /load-current, /filters/lc, /harmonic-limits/check,
+ * GET /studies/{id}/report, a study's check on save and its shared report). The estimate follows
+ * analyseDesign's documented analysis: the exact spectra of every voltage to maxOrder and, with a
+ * filter, every phase to its analysis order (10·mf + 10, at most MAX_ANALYSIS_ORDER); time series
+ * of `points` samples (1 + 3 per phase with a filter, one per phase with a load alone).
+ * @param field - where the design sits in the request (`design`, `study.design`)
+ */
+export function reportCost(design: InverterDesign, options: AnalyseDesignOptions, field = 'design'): CostEstimate & { series: number; points: number } {
+  const pattern = !CARRIER_METHODS.includes(design.modulation.method);
+  const ratio = pattern ? 0 : Math.round((design.carrierFrequency ?? 0) / design.fundamentalFrequency);
+  const maxOrder = options.maxOrder ?? defaultSpectrumOrder(design);
+  const points = options.points ?? 1200;
+  const phases = THREE_PHASE_METHODS.includes(design.modulation.method) ? 3 : 1;
+  const edges = designEdges(design, ratio);
+  const filtered = design.filter !== undefined && design.filter !== null;
+  const analysisOrder = filtered ? Math.min(MAX_ANALYSIS_ORDER, Math.max(maxOrder, pattern ? 2000 : 10 * ratio + 10)) : maxOrder;
+  const spectra = (edges.phase + edges.line) * maxOrder + (filtered ? phases * edges.phase * analysisOrder : 0);
+  const series = (filtered ? 1 + 3 * phases : 0) + (!filtered && design.load ? phases : 0);
+  const build = (phases === 3 ? 3 : 1) * (edges.phase + edges.line) * BUILD_PER_EDGE;
+  const voltages = phases === 3 ? 9 : 1;
+  const lead = filtered && analysisOrder > maxOrder ? `${field}.carrierFrequency` : 'maxOrder';
+  return {
+    work: spectra + build + series * points * 20,
+    basis: `${edges.phase + edges.line} edges × ${maxOrder} orders${filtered ? ` + ${phases} × ${edges.phase} edges × ${analysisOrder} orders through the filter` : ''}`,
+    fields: [lead, lead === 'maxOrder' ? `${field}.carrierFrequency` : 'maxOrder'],
+    // Labelled spectra (about five numbers an order and voltage), time series, and the edges of each voltage.
+    responseBytes: BYTES_PER_NUMBER * (5 * (maxOrder + 1) * (filtered ? 3 : 2) + series * points + 2 * voltages * (edges.phase + edges.line)),
+    responseFields: ['maxOrder', 'points'],
+    series,
+    points,
+  };
+}
+
+/** GET /studies/{id}/spectrum and a capture comparison's prediction: the design's bridge voltage. */
+export function designSpectrumCost(design: InverterDesign, maxOrder: number, field = 'design'): CostEstimate {
+  const pattern = !CARRIER_METHODS.includes(design.modulation.method);
+  const ratio = pattern ? 0 : Math.round((design.carrierFrequency ?? 0) / design.fundamentalFrequency);
+  const edges = designEdges(design, ratio);
+  const analysed = edges.line || edges.phase;
+  return {
+    work: 3 * (edges.phase + edges.line) * BUILD_PER_EDGE + analysed * (maxOrder + 1),
+    basis: `${analysed} edges × ${maxOrder + 1} orders`,
+    fields: ['maxOrder', `${field}.carrierFrequency`],
+    responseBytes: (maxOrder + 1) * 3 * BYTES_PER_NUMBER,
+    responseFields: ['maxOrder'],
+  };
+}
+
+export type TimerFormat = 'json' | 'csv' | 'c-header';
+
+/**
+ * POST /timer-tables: rows (tableLength, by default one per compare update: carrier ÷
+ * fundamental, twice that with asymmetric sampling) × channels (legs), and the file's size.
+ */
+export function timerTableCost(options: TimerTableOptions, format: TimerFormat): CostEstimate {
+  const ratio = options.carrierFrequency / options.fundamentalFrequency;
+  const updates = Math.round(ratio) * (options.sampling === 'regular-asymmetric' ? 2 : 1);
+  const rows = options.tableLength ?? (Number.isFinite(updates) ? Math.max(1, updates) : Number.MAX_VALUE);
+  const channels = options.modulation.method === 'three-phase' ? 3 : 2;
+  const sizeFields = options.tableLength === undefined ? ['tableLength', 'carrierFrequency', 'fundamentalFrequency'] : ['tableLength'];
+  return {
+    work: rows * channels * TIMER_PER_ROW_CHANNEL,
+    basis: `${rows} rows × ${channels} channels${options.tableLength === undefined ? ' (the default table length, one row per compare update)' : ''}`,
+    fields: sizeFields,
+    responseBytes: rows * channels * TIMER_BYTES_PER_ROW_CHANNEL[format],
+    responseFields: sizeFields,
+  };
+}
+
+/** POST /captures/{id}/spectrum: an FFT of the capture's samples, harmonics to maxOrder. */
+export function captureSpectrumCost(samples: number, maxOrder: number): CostEstimate {
+  const stages = Math.max(1, Math.ceil(Math.log2(Math.max(2, samples))));
+  return {
+    work: 10 * samples * stages,
+    basis: `${samples} samples × ${stages} FFT stages`,
+    fields: ['file'],
+    responseBytes: (maxOrder + 1) * 5 * BYTES_PER_NUMBER,
+    responseFields: ['maxOrder'],
+  };
+}
+
+/** POST /space-vector: one reference's dwell times and sequence. */
+export function spaceVectorCost(): CostEstimate {
+  return { work: 1000, basis: 'one reference vector', fields: [], responseBytes: 2000, responseFields: [] };
+}
+
+/** An ma sweep job: at each point the waveform built and its spectrum to maxOrder. */
+export function maSweepCost(input: MaSweepInput): CostEstimate {
+  const { points } = input.ma;
+  const edges = modulationEdges(input.modulation);
+  const analysed = edges.line || edges.phase;
+  const perPoint = allEdges(input.modulation) * BUILD_PER_EDGE + analysed * (input.maxOrder + 1);
+  return {
+    work: points * perPoint,
+    basis: `${points} points × ${analysed} edges × ${input.maxOrder + 1} orders`,
+    fields: ['ma.points', 'maxOrder', edgeField(input.modulation, 'modulation.')],
+    responseBytes: points * (6 + (input.orders?.length ?? 0)) * BYTES_PER_NUMBER,
+    responseFields: ['ma.points'],
+  };
+}
+
+/** A SHE sweep job: a Newton solve of `count` angles at each point, costed at its worst. */
+export function sheSweepCost(input: SheSweepInput): CostEstimate {
+  const { points } = input.fundamental;
+  return {
+    work: points * input.count * input.count * SHE_PER_ANGLE_SQUARED,
+    basis: `${points} points × ${input.count} angles squared, a Newton solve that does not converge at worst`,
+    fields: ['fundamental.points', 'count'],
+    responseBytes: points * (input.count + 3) * BYTES_PER_NUMBER,
+    responseFields: ['fundamental.points', 'count'],
+  };
+}
+
+/** Which budget an estimate is held to. */
+export type CostKind = 'request' | 'job';
+
+/**
+ * Refuses, before any work, what exceeds the budget of its kind (400 naming the fields and the
+ * limit, in the words of the setting that raises it), and an answer larger than the response
+ * budget. Returns the estimate so a caller can decide where the work runs.
+ */
+export function assertWithinBudget(cost: CostEstimate, kind: CostKind, limits: ComputeLimits): CostEstimate {
+  const budget = kind === 'job' ? limits.jobWorkBudget : limits.requestWorkBudget;
+  if (cost.work > budget) {
+    const names = cost.fields.length ? cost.fields.join(' and ') : 'this request';
+    const setting = kind === 'job' ? 'JOB_WORK_BUDGET' : 'COMPUTE_WORK_BUDGET';
+    const advice = kind === 'job' ? 'lower them or split the sweep' : 'lower them, or run the work as a sweep job';
+    const message =
+      `${names} ask for about ${sci(cost.work)} units of work (${cost.basis}), more than the ${sci(budget)} one ${kind} may take (${setting}); ${advice}`;
+    throw badRequest(message, (cost.fields.length ? cost.fields : ['']).map((path) => ({ path, message })));
+  }
+  if (cost.responseBytes > limits.responseBytesBudget) {
+    const names = cost.responseFields.join(' and ');
+    const message =
+      `${names} would make an answer of about ${(cost.responseBytes / 1e6).toFixed(1)} MB, more than the ${(limits.responseBytesBudget / 1e6).toFixed(1)} MB one answer may hold (RESPONSE_BYTES_BUDGET); lower them`;
+    throw badRequest(message, cost.responseFields.map((path) => ({ path, message })));
+  }
+  return cost;
+}
+
+/**
+ * The report's own bound on its time series: at most REPORT_SERIES_BUDGET values (points ×
+ * series), named by `points` with the most this design allows.
+ */
+export const REPORT_SERIES_BUDGET = 40_000;
+
+export function assertReportSeries(cost: { series: number; points: number }): void {
+  if (cost.series * cost.points > REPORT_SERIES_BUDGET) {
+    const most = Math.floor(REPORT_SERIES_BUDGET / cost.series);
+    const message = `points must be ≤ ${most} for this design (${cost.series} time series of points samples each, at most ${REPORT_SERIES_BUDGET} values); got ${cost.points}`;
+    throw badRequest(message, [{ path: 'points', message }]);
+  }
+}
