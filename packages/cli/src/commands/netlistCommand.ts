@@ -1,4 +1,4 @@
-import { Command } from 'commander';
+import { Command, Option } from 'commander';
 import { assertNumberInRange } from '@pulsewright/modulation';
 import { InputError } from '../errors.js';
 import { callLibrary } from '../input/callLibrary.js';
@@ -25,11 +25,12 @@ export function netlistCommand(io: CliIo): Command {
     'the switching pattern as a SPICE netlist of piecewise-linear sources: each switch\'s gate and each leg\'s voltage, with ramp times and the timer table\'s dead time',
   );
   addTimerOptions(command);
-  command.addOption(numberOption('--rise-time <seconds>', 'time each rising edge takes (default 1e-7)').default(1e-7).helpGroup('Netlist:'));
+  command.addOption(numberOption('--rise-time <seconds>', 'time each rising edge takes, seconds').default(1e-7).helpGroup('Netlist:'));
   command.addOption(numberOption('--fall-time <seconds>', 'time each falling edge takes (default: the rise time)').helpGroup('Netlist:'));
-  command.addOption(numberOption('--periods <count>', 'whole fundamental periods to write, 1..1000 (default 1)').default(1).helpGroup('Netlist:'));
-  command.addOption(numberOption('--gate-voltage <volts>', 'gate signal level while a switch is on (default 1; off is 0)').default(1).helpGroup('Netlist:'));
-  command.addOption(numberOption('--current-angle <radians>', 'phase of the load current behind sin θ on leg a, for the leg voltages during dead time (default 0)').default(0).helpGroup('Netlist:'));
+  command.addOption(numberOption('--periods <count>', 'whole fundamental periods to write, 1..1000').default(1).helpGroup('Netlist:'));
+  command.addOption(numberOption('--gate-voltage <volts>', 'gate signal level while a switch is on (off is 0 V)').default(1).helpGroup('Netlist:'));
+  command.addOption(numberOption('--current-angle <radians>', 'phase of the load current behind sin θ on leg a, for the leg voltages during dead time').default(0).helpGroup('Netlist:'));
+  command.addOption(new Option('-q, --quiet', 'do not print the table\'s warnings on standard error').helpGroup('Output:'));
   addOutputOptions(command);
   command.addHelpText('after', '\nThe input is that of timer-table: a design with the timer options, or a timer-table request file.');
   command.action((file: string | undefined, flags: NetlistFlags) => {

@@ -1,4 +1,4 @@
-import { Command } from 'commander';
+import { Command, Option } from 'commander';
 import { sheSweep, solveShe, type SheResult, type SheSweepOptions, type SheSweepResult, type SolveSheOptions } from '@pulsewright/modulation';
 import { FailureError } from '../errors.js';
 import { callLibrary } from '../input/callLibrary.js';
@@ -26,7 +26,12 @@ export function sheCommand(io: CliIo): Command {
     'selective harmonic elimination: first-quarter angles at one fundamental, or a table over a range of fundamentals',
   );
   addPatternOptions(command);
-  command.requiredOption('--eliminate <orders>', 'odd orders to eliminate, comma-separated (count − 1 of them with a fundamental)', parseNumberList);
+  command.addOption(
+    new Option('--eliminate <orders>', 'odd orders to eliminate, comma-separated (count − 1 of them with a fundamental)')
+      .argParser(parseNumberList)
+      .makeOptionMandatory()
+      .helpGroup('Pattern:'),
+  );
   command.addOption(numberOption('--branches <count>', 'solution branches a table follows (default 1)').helpGroup('Table over the fundamental:'));
   addOutputOptions(command, { csv: true, progress: true });
   command.addHelpText('after', '\nExit status 1 when no solution is found at the one fundamental, or at none of the table\'s.');
