@@ -7,6 +7,7 @@ import { sheCommand } from './commands/sheCommand.js';
 import { spectrumCommand } from './commands/spectrumCommand.js';
 import { timerTableCommand } from './commands/timerTableCommand.js';
 import { netlistCommand } from './commands/netlistCommand.js';
+import { waveformCommand } from './commands/waveformCommand.js';
 import type { CliIo } from './output/CliIo.js';
 
 /** This package's version, from its package.json (dist/ and src/ sit one level below it). */
@@ -34,7 +35,7 @@ export function createProgram(io: CliIo): Command {
       writeErr: (text) => void io.stderr.write(text),
     })
     .exitOverride();
-  for (const command of [reportCommand, spectrumCommand, timerTableCommand, sheCommand, optimalPatternCommand, maSweepCommand, netlistCommand]) {
+  for (const command of [reportCommand, spectrumCommand, timerTableCommand, sheCommand, optimalPatternCommand, maSweepCommand, waveformCommand, netlistCommand]) {
     program.addCommand(command(io).exitOverride().showHelpAfterError('(run with --help for the options)'));
   }
   return program;

@@ -93,7 +93,7 @@ describe('help and version', () => {
   it('lists every subcommand and exits 0', async () => {
     const run = await runCli(['--help']);
     expect(run.code).toBe(0);
-    for (const command of ['report', 'spectrum', 'timer-table', 'she', 'optimal-pattern', 'ma-sweep', 'netlist']) expect(run.stdout).toContain(`  ${command} `);
+    for (const command of ['report', 'spectrum', 'timer-table', 'she', 'optimal-pattern', 'ma-sweep', 'waveform', 'netlist']) expect(run.stdout).toContain(`  ${command} `);
     const version = await runCli(['--version']);
     expect(version.stdout).toBe('0.1.0\n');
   });
