@@ -11,7 +11,10 @@ export function ensureBuilt() {
   const npm = process.platform === 'win32' ? 'npm.cmd' : 'npm';
   const build = (workspace) => {
     process.stderr.write(`pulsewright: building ${workspace} (first run in this checkout) ...\n`);
-    execFileSync(npm, ['run', 'build', `--workspace=${workspace}`], { cwd: root, stdio: ['ignore', 2, 2] });
+    execFileSync(npm, ['run', 'build', `--workspace=${workspace}`], {
+      cwd: root,
+      stdio: ['ignore', 2, 2],
+    });
   };
   if (!existsSync(library)) build('@pulsewright/modulation');
   build('@pulsewright/cli');

@@ -43,6 +43,7 @@ export function isFieldError(error: unknown): error is FieldError {
  * field is a defect, not the caller's input, so it stays 1.
  */
 export function exitCodeOf(error: unknown): number {
-  if (error instanceof InputError || error instanceof RangeError || isFieldError(error)) return EXIT_BAD_INPUT;
+  if (error instanceof InputError || error instanceof RangeError || isFieldError(error))
+    return EXIT_BAD_INPUT;
   return EXIT_FAILURE;
 }

@@ -1,17 +1,32 @@
 import { CommanderError } from 'commander';
-import { EXIT_BAD_INPUT, EXIT_FAILURE, EXIT_OK, exitCodeOf, FailureError, InputError, isFieldError } from './errors.js';
+import {
+  EXIT_BAD_INPUT,
+  EXIT_FAILURE,
+  EXIT_OK,
+  exitCodeOf,
+  FailureError,
+  InputError,
+  isFieldError,
+} from './errors.js';
 import type { CliIo } from './output/CliIo.js';
 import { createProgram } from './program.js';
 
 /** Commander's codes for help and version, which end a run successfully. */
-const DONE_CODES = new Set(['commander.helpDisplayed', 'commander.version', 'commander.executeSubCommandAsync']);
+const DONE_CODES = new Set([
+  'commander.helpDisplayed',
+  'commander.version',
+  'commander.executeSubCommandAsync',
+]);
 
 /**
  * Runs `pulsewright` with `argv` (the arguments after the program name) and returns the exit
  * status: 0 done, 1 failure, 2 bad input. Errors go to `io.stderr` as one line
  * `pulsewright: <message>`, or with `--json` as a JSON object { error: { status, field, message } }.
  */
-export async function main(argv: readonly string[], io: CliIo = { stdout: process.stdout, stderr: process.stderr }): Promise<number> {
+export async function main(
+  argv: readonly string[],
+  io: CliIo = { stdout: process.stdout, stderr: process.stderr },
+): Promise<number> {
   const program = createProgram(io);
   try {
     await program.parseAsync([...argv], { from: 'user' });
@@ -29,7 +44,12 @@ export async function main(argv: readonly string[], io: CliIo = { stdout: proces
     } else {
       io.stderr.write(`pulsewright: ${message}\n`);
       // An unexpected error is a defect: its stack helps whoever reports it.
-      if (status === EXIT_FAILURE && !(error instanceof FailureError) && error instanceof Error && error.stack) {
+      if (
+        status === EXIT_FAILURE &&
+        !(error instanceof FailureError) &&
+        error instanceof Error &&
+        error.stack
+      ) {
         io.stderr.write(`${error.stack}\n`);
       }
     }

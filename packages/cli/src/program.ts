@@ -35,8 +35,19 @@ export function createProgram(io: CliIo): Command {
       writeErr: (text) => void io.stderr.write(text),
     })
     .exitOverride();
-  for (const command of [reportCommand, spectrumCommand, timerTableCommand, sheCommand, optimalPatternCommand, maSweepCommand, waveformCommand, netlistCommand]) {
-    program.addCommand(command(io).exitOverride().showHelpAfterError('(run with --help for the options)'));
+  for (const command of [
+    reportCommand,
+    spectrumCommand,
+    timerTableCommand,
+    sheCommand,
+    optimalPatternCommand,
+    maSweepCommand,
+    waveformCommand,
+    netlistCommand,
+  ]) {
+    program.addCommand(
+      command(io).exitOverride().showHelpAfterError('(run with --help for the options)'),
+    );
   }
   return program;
 }

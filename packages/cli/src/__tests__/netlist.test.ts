@@ -2,7 +2,13 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { timerTable, timerTableWaveforms, type TimerTable, type TimerTableOptions, type Waveform } from '@pulsewright/modulation';
+import {
+  timerTable,
+  timerTableWaveforms,
+  type TimerTable,
+  type TimerTableOptions,
+  type Waveform,
+} from '@pulsewright/modulation';
 import { runCli } from './runCli.js';
 import { parseSpiceNetlist, spiceValue, type ParsedSource } from './spiceNetlist.js';
 
@@ -31,21 +37,33 @@ function rampsOf(source: ParsedSource): Edge[] {
 }
 
 /** The library waveform's level changes over `periods` periods of `period` seconds, from t = 0. */
-function libraryEdges(waveform: Waveform, period: number, periods: number, scale = 1): { time: number; from: number; to: number }[] {
+function libraryEdges(
+  waveform: Waveform,
+  period: number,
+  periods: number,
+  scale = 1,
+): { time: number; from: number; to: number }[] {
   const { edges, levels } = waveform;
   const result: { time: number; from: number; to: number }[] = [];
   let previous = (levels[levels.length - 1] as number) * scale;
   for (let p = 0; p < periods; p++) {
     edges.forEach((angle, i) => {
       const level = (levels[i] as number) * scale;
-      if (level !== previous) result.push({ time: (angle / (2 * Math.PI) + p) * period, from: previous, to: level });
+      if (level !== previous)
+        result.push({ time: (angle / (2 * Math.PI) + p) * period, from: previous, to: level });
       previous = level;
     });
   }
   return result;
 }
 
-function expectSource(source: ParsedSource | undefined, expected: ReturnType<typeof libraryEdges>, rise: number, fall: number, end: number): void {
+function expectSource(
+  source: ParsedSource | undefined,
+  expected: ReturnType<typeof libraryEdges>,
+  rise: number,
+  fall: number,
+  end: number,
+): void {
   expect(source).toBeDefined();
   const ramps = rampsOf(source as ParsedSource);
   expect(ramps).toHaveLength(expected.length);
@@ -54,11 +72,15 @@ function expectSource(source: ParsedSource | undefined, expected: ReturnType<typ
     expect(Math.abs(ramp.start - edge.time)).toBeLessThan(TIME_RESOLUTION);
     expect(ramp.from).toBe(edge.from);
     expect(ramp.to).toBe(edge.to);
-    expect(Math.abs(ramp.duration - (edge.to > edge.from ? rise : fall))).toBeLessThan(TIME_RESOLUTION);
+    expect(Math.abs(ramp.duration - (edge.to > edge.from ? rise : fall))).toBeLessThan(
+      TIME_RESOLUTION,
+    );
   });
   const points = (source as ParsedSource).points;
   expect(points[0]?.[0]).toBe(0);
-  expect((points[points.length - 1] as [number, number])[0]).toBeGreaterThanOrEqual(end - TIME_RESOLUTION);
+  expect((points[points.length - 1] as [number, number])[0]).toBeGreaterThanOrEqual(
+    end - TIME_RESOLUTION,
+  );
 }
 
 /** The value of a PWL source at time t (linear between points, held after the last). */
@@ -80,7 +102,7 @@ function valueAt(source: ParsedSource, t: number): number {
 }
 
 describe('pulsewright netlist', () => {
-  it('writes each gate and leg of a three-phase table as a PWL source whose edges are the library\'s, over the periods asked', async () => {
+  it("writes each gate and leg of a three-phase table as a PWL source whose edges are the library's, over the periods asked", async () => {
     const request: TimerTableOptions & { prefix?: string } = {
       modulation: { method: 'three-phase', zeroSequence: 'third-harmonic', ma: 0.95 },
       fundamentalFrequency: 50,
@@ -92,7 +114,20 @@ describe('pulsewright netlist', () => {
     };
     const file = path.join(dir, 'request.yaml');
     writeFileSync(file, JSON.stringify(request));
-    const run = await runCli(['netlist', file, '--rise-time', '5e-8', '--fall-time', '2e-8', '--periods', '2', '--gate-voltage', '15', '--current-angle', '0.4']);
+    const run = await runCli([
+      'netlist',
+      file,
+      '--rise-time',
+      '5e-8',
+      '--fall-time',
+      '2e-8',
+      '--periods',
+      '2',
+      '--gate-voltage',
+      '15',
+      '--current-angle',
+      '0.4',
+    ]);
     expect(run.code, run.stderr).toBe(0);
     const netlist = parseSpiceNetlist(run.stdout);
     const table: TimerTable = timerTable(request);
@@ -100,22 +135,73 @@ describe('pulsewright netlist', () => {
     const high = timerTableWaveforms(table, { currentSign: () => 1 }).legs;
     const low = timerTableWaveforms(table, { currentSign: () => -1 }).legs;
     const legs = timerTableWaveforms(table, { currentAngle: 0.4 }).legs;
-    expect(netlist.sources.map((s) => s.name)).toEqual(['Vgate_a_high', 'Vgate_a_low', 'Vgate_b_high', 'Vgate_b_low', 'Vgate_c_high', 'Vgate_c_low', 'Vleg_a', 'Vleg_b', 'Vleg_c']);
+    expect(netlist.sources.map((s) => s.name)).toEqual([
+      'Vgate_a_high',
+      'Vgate_a_low',
+      'Vgate_b_high',
+      'Vgate_b_low',
+      'Vgate_c_high',
+      'Vgate_c_low',
+      'Vleg_a',
+      'Vleg_b',
+      'Vleg_c',
+    ]);
     const byName = new Map(netlist.sources.map((s) => [s.name, s]));
     ['a', 'b', 'c'].forEach((leg, k) => {
       // Gate on while the leg sits at +vdc/2 with the current forced out of it (the high side),
       // or at −vdc/2 with it forced in (the low side): the library's dead-time model.
-      const gateOn = (w: Waveform, sign: number): Waveform => ({ edges: w.edges, levels: w.levels.map((v) => (v * sign > 0 ? 15 : 0)) });
-      expectSource(byName.get(`Vgate_${leg}_high`), libraryEdges(gateOn(high[k] as Waveform, 1), period, 2), 5e-8, 2e-8, 2 * period);
-      expectSource(byName.get(`Vgate_${leg}_low`), libraryEdges(gateOn(low[k] as Waveform, -1), period, 2), 5e-8, 2e-8, 2 * period);
-      expectSource(byName.get(`Vleg_${leg}`), libraryEdges(legs[k] as Waveform, period, 2), 5e-8, 2e-8, 2 * period);
+      const gateOn = (w: Waveform, sign: number): Waveform => ({
+        edges: w.edges,
+        levels: w.levels.map((v) => (v * sign > 0 ? 15 : 0)),
+      });
+      expectSource(
+        byName.get(`Vgate_${leg}_high`),
+        libraryEdges(gateOn(high[k] as Waveform, 1), period, 2),
+        5e-8,
+        2e-8,
+        2 * period,
+      );
+      expectSource(
+        byName.get(`Vgate_${leg}_low`),
+        libraryEdges(gateOn(low[k] as Waveform, -1), period, 2),
+        5e-8,
+        2e-8,
+        2 * period,
+      );
+      expectSource(
+        byName.get(`Vleg_${leg}`),
+        libraryEdges(legs[k] as Waveform, period, 2),
+        5e-8,
+        2e-8,
+        2 * period,
+      );
       expect(byName.get(`Vleg_${leg}`)?.nodes).toEqual([`leg_${leg}`, '0']);
     });
     expect(netlist.controls).toContainEqual(['.tran', '2e-8', (2 * period).toExponential()]);
   });
 
-  it('keeps the dead time between the two gates of a leg, and the bipolar bridge\'s crosswise leg b', async () => {
-    const run = await runCli(['netlist', '--method', 'sine-triangle', '--scheme', 'bipolar', '--ma', '0.9', '--sampling', 'regular-symmetric', '--vdc', '300', '--fundamental-frequency', '60', '--carrier-frequency', '3600', '--timer-clock', '72e6', '--dead-time', '5e-7']);
+  it("keeps the dead time between the two gates of a leg, and the bipolar bridge's crosswise leg b", async () => {
+    const run = await runCli([
+      'netlist',
+      '--method',
+      'sine-triangle',
+      '--scheme',
+      'bipolar',
+      '--ma',
+      '0.9',
+      '--sampling',
+      'regular-symmetric',
+      '--vdc',
+      '300',
+      '--fundamental-frequency',
+      '60',
+      '--carrier-frequency',
+      '3600',
+      '--timer-clock',
+      '72e6',
+      '--dead-time',
+      '5e-7',
+    ]);
     expect(run.code, run.stderr).toBe(0);
     const netlist = parseSpiceNetlist(run.stdout);
     const byName = new Map(netlist.sources.map((s) => [s.name, s]));
@@ -123,12 +209,23 @@ describe('pulsewright netlist', () => {
     const lowA = byName.get('Vgate_a_low') as ParsedSource;
     expect(byName.get('Vgate_b_high')?.points).toEqual(lowA.points);
     expect(byName.get('Vgate_b_low')?.points).toEqual(highA.points);
-    expect(byName.get('Vleg_b')?.points).toEqual((byName.get('Vleg_a') as ParsedSource).points.map(([t, v]) => [t, -v]));
+    expect(byName.get('Vleg_b')?.points).toEqual(
+      (byName.get('Vleg_a') as ParsedSource).points.map(([t, v]) => [t, -v]),
+    );
     // Between a gate's turn-off and the other gate's turn-on there is the table's dead time,
     // 36 ticks of 72 MHz = 0.5 µs (compare-offset splits it over both edges of each pulse).
-    const onsets = (s: ParsedSource) => rampsOf(s).filter((r) => r.to > r.from).map((r) => r.start);
-    const offsets = (s: ParsedSource) => rampsOf(s).filter((r) => r.to < r.from).map((r) => r.start);
-    for (const [on, off] of [[onsets(highA), offsets(lowA)], [onsets(lowA), offsets(highA)]] as const) {
+    const onsets = (s: ParsedSource) =>
+      rampsOf(s)
+        .filter((r) => r.to > r.from)
+        .map((r) => r.start);
+    const offsets = (s: ParsedSource) =>
+      rampsOf(s)
+        .filter((r) => r.to < r.from)
+        .map((r) => r.start);
+    for (const [on, off] of [
+      [onsets(highA), offsets(lowA)],
+      [onsets(lowA), offsets(highA)],
+    ] as const) {
       on.forEach((t) => {
         const before = off.filter((u) => u <= t).at(-1);
         if (before !== undefined) expect(t - before).toBeGreaterThanOrEqual(5e-7 - TIME_RESOLUTION);
@@ -136,14 +233,35 @@ describe('pulsewright netlist', () => {
     }
     // And never both on, sampled finely over the period (every 20 ns, a fifth of a ramp).
     let overlap = 0;
-    for (let t = 0; t < 1 / 60; t += 2e-8) overlap = Math.max(overlap, Math.min(valueAt(highA, t), valueAt(lowA, t)));
+    for (let t = 0; t < 1 / 60; t += 2e-8)
+      overlap = Math.max(overlap, Math.min(valueAt(highA, t), valueAt(lowA, t)));
     expect(overlap).toBe(0);
   });
 
   it('refuses a ramp longer than the time between two edges, naming the option', async () => {
-    const run = await runCli(['netlist', '--method', 'sine-triangle', '--scheme', 'unipolar', '--ma', '0.95', '--vdc', '300', '--fundamental-frequency', '50', '--carrier-frequency', '20000', '--timer-clock', '72e6', '--rise-time', '2e-5']);
+    const run = await runCli([
+      'netlist',
+      '--method',
+      'sine-triangle',
+      '--scheme',
+      'unipolar',
+      '--ma',
+      '0.95',
+      '--vdc',
+      '300',
+      '--fundamental-frequency',
+      '50',
+      '--carrier-frequency',
+      '20000',
+      '--timer-clock',
+      '72e6',
+      '--rise-time',
+      '2e-5',
+    ]);
     expect(run.code).toBe(2);
-    expect(run.stderr).toMatch(/^pulsewright: --(rise|fall)-time must be shorter than the shortest time between two edges/);
+    expect(run.stderr).toMatch(
+      /^pulsewright: --(rise|fall)-time must be shorter than the shortest time between two edges/,
+    );
   });
 
   it('reads scale factors as the format describes them', () => {

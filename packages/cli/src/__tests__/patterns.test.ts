@@ -1,12 +1,36 @@
 import { describe, expect, it } from 'vitest';
-import { optimalPulsePattern, optimalPulseSweep, sheSweep, solveShe } from '@pulsewright/modulation';
+import {
+  optimalPulsePattern,
+  optimalPulseSweep,
+  sheSweep,
+  solveShe,
+} from '@pulsewright/modulation';
 import { runCli, viaJson } from './runCli.js';
 
 describe('pulsewright she', () => {
-  it('solves one pattern as the library\'s solveShe does', async () => {
-    const run = await runCli(['she', '--kind', 'bipolar', '--vdc', '400', '--count', '5', '--eliminate', '5,7,11,13', '--fundamental', '400', '--json']);
+  it("solves one pattern as the library's solveShe does", async () => {
+    const run = await runCli([
+      'she',
+      '--kind',
+      'bipolar',
+      '--vdc',
+      '400',
+      '--count',
+      '5',
+      '--eliminate',
+      '5,7,11,13',
+      '--fundamental',
+      '400',
+      '--json',
+    ]);
     expect(run.code, run.stderr).toBe(0);
-    const expected = solveShe({ kind: 'bipolar', vdc: 400, count: 5, eliminate: [5, 7, 11, 13], fundamental: 400 });
+    const expected = solveShe({
+      kind: 'bipolar',
+      vdc: 400,
+      count: 5,
+      eliminate: [5, 7, 11, 13],
+      fundamental: 400,
+    });
     expect(JSON.parse(run.stdout)).toEqual(viaJson(expected));
     // Patel and Hoft (1973): the solved angles null the listed orders; checked on the exact
     // spectrum by the library, below 1e-9 of the fundamental (REFERENCES.md).
@@ -22,10 +46,32 @@ describe('pulsewright she', () => {
   });
 
   it('tabulates a range of fundamentals as sheSweep does, following one branch, as CSV', async () => {
-    const run = await runCli(['she', '--vdc', '400', '--count', '3', '--eliminate', '5,7', '--from', '100', '--to', '450', '--points', '8', '--csv']);
+    const run = await runCli([
+      'she',
+      '--vdc',
+      '400',
+      '--count',
+      '3',
+      '--eliminate',
+      '5,7',
+      '--from',
+      '100',
+      '--to',
+      '450',
+      '--points',
+      '8',
+      '--csv',
+    ]);
     expect(run.code, run.stderr).toBe(0);
     expect(run.stderr).toBe(''); // no progress bar without a terminal
-    const expected = sheSweep({ kind: 'bipolar', vdc: 400, count: 3, eliminate: [5, 7], fundamentals: { from: 100, to: 450, points: 8 }, maxBranches: 1 });
+    const expected = sheSweep({
+      kind: 'bipolar',
+      vdc: 400,
+      count: 3,
+      eliminate: [5, 7],
+      fundamentals: { from: 100, to: 450, points: 8 },
+      maxBranches: 1,
+    });
     const rows = run.stdout.trimEnd().split('\r\n');
     expect(rows[0]).toBe('branch,fundamental_V_peak,converged,alpha1_rad,alpha2_rad,alpha3_rad');
     const points = expected.branches.flatMap((b) => b.points);
@@ -38,8 +84,20 @@ describe('pulsewright she', () => {
     });
   });
 
-  it('exits 1 with the library\'s reason when no solution is found', async () => {
-    const run = await runCli(['she', '--vdc', '100', '--count', '2', '--eliminate', '3', '--fundamental', '126', '--starts', '3']);
+  it("exits 1 with the library's reason when no solution is found", async () => {
+    const run = await runCli([
+      'she',
+      '--vdc',
+      '100',
+      '--count',
+      '2',
+      '--eliminate',
+      '3',
+      '--fundamental',
+      '126',
+      '--starts',
+      '3',
+    ]);
     expect(run.code).toBe(1);
     expect(run.stdout).toMatch(/NOT converged/);
     expect(run.stderr).toMatch(/^pulsewright: No solution found from 3 start\(s\)/);
@@ -47,16 +105,53 @@ describe('pulsewright she', () => {
 });
 
 describe('pulsewright optimal-pattern', () => {
-  it('gives the library\'s optimal pulse pattern at one fundamental', async () => {
-    const run = await runCli(['optimal-pattern', '--vdc', '400', '--count', '5', '--fundamental', '400', '--json']);
+  it("gives the library's optimal pulse pattern at one fundamental", async () => {
+    const run = await runCli([
+      'optimal-pattern',
+      '--vdc',
+      '400',
+      '--count',
+      '5',
+      '--fundamental',
+      '400',
+      '--json',
+    ]);
     expect(run.code, run.stderr).toBe(0);
-    expect(JSON.parse(run.stdout)).toEqual(viaJson(optimalPulsePattern({ kind: 'bipolar', vdc: 400, count: 5, fundamental: 400 })));
+    expect(JSON.parse(run.stdout)).toEqual(
+      viaJson(optimalPulsePattern({ kind: 'bipolar', vdc: 400, count: 5, fundamental: 400 })),
+    );
   });
 
-  it('gives the library\'s table over a range of fundamentals', async () => {
-    const run = await runCli(['optimal-pattern', '--kind', 'staircase', '--vdc', '100', '--count', '3', '--objective', 'thd', '--max-order', '49', '--from', '150', '--to', '350', '--points', '5', '--json']);
+  it("gives the library's table over a range of fundamentals", async () => {
+    const run = await runCli([
+      'optimal-pattern',
+      '--kind',
+      'staircase',
+      '--vdc',
+      '100',
+      '--count',
+      '3',
+      '--objective',
+      'thd',
+      '--max-order',
+      '49',
+      '--from',
+      '150',
+      '--to',
+      '350',
+      '--points',
+      '5',
+      '--json',
+    ]);
     expect(run.code, run.stderr).toBe(0);
-    const expected = optimalPulseSweep({ kind: 'staircase', vdc: 100, count: 3, objective: 'thd', maxOrder: 49, fundamentals: { from: 150, to: 350, points: 5 } });
+    const expected = optimalPulseSweep({
+      kind: 'staircase',
+      vdc: 100,
+      count: 3,
+      objective: 'thd',
+      maxOrder: 49,
+      fundamentals: { from: 150, to: 350, points: 5 },
+    });
     expect(JSON.parse(run.stdout)).toEqual(viaJson(expected));
   });
 });

@@ -24,7 +24,10 @@ describe('the progress bar', () => {
   });
 
   it('never writes when standard error is not a terminal, or with --no-progress', async () => {
-    for (const [isTTY, enabled] of [[false, true], [true, false]] as const) {
+    for (const [isTTY, enabled] of [
+      [false, true],
+      [true, false],
+    ] as const) {
       const { io, written } = recordingIo(isTTY);
       const progress = await createProgress('SHE table', io, enabled);
       await sleep(300);

@@ -11,30 +11,65 @@ const pump = parseYaml(readFileSync(example('pump-inverter.yaml'), 'utf8')) as I
 const drive = JSON.parse(readFileSync(example('drive.json'), 'utf8')) as InverterDesign;
 
 describe('pulsewright report', () => {
-  it('prints the library\'s design report for a YAML design file, as JSON', async () => {
-    const run = await runCli(['report', example('pump-inverter.yaml'), '--json', '--points', '256']);
+  it("prints the library's design report for a YAML design file, as JSON", async () => {
+    const run = await runCli([
+      'report',
+      example('pump-inverter.yaml'),
+      '--json',
+      '--points',
+      '256',
+    ]);
     expect(run.code).toBe(0);
     expect(run.stderr).toBe('');
     expect(JSON.parse(run.stdout)).toEqual(viaJson(analyseDesign(pump, { points: 256 })));
   });
 
   it('reads the same design from flags alone, and from an API request body on standard input', async () => {
-    const flags = ['--method', 'three-phase', '--ma', '0.9', '--zero-sequence', 'third-harmonic', '--sampling', 'regular-asymmetric', '--vdc', '560', '--fundamental-frequency', '50', '--carrier-frequency', '4050', '--load-r', '5.3', '--load-l', '0.011'];
+    const flags = [
+      '--method',
+      'three-phase',
+      '--ma',
+      '0.9',
+      '--zero-sequence',
+      'third-harmonic',
+      '--sampling',
+      'regular-asymmetric',
+      '--vdc',
+      '560',
+      '--fundamental-frequency',
+      '50',
+      '--carrier-frequency',
+      '4050',
+      '--load-r',
+      '5.3',
+      '--load-l',
+      '0.011',
+    ];
     const fromFlags = await runCli(['report', ...flags, '--json', '--max-order', '300']);
-    const fromFile = await runCli(['report', example('drive.json'), '--json', '--max-order', '300']);
-    const fromRequest = await runCli(['report', '-', '--json'], { input: JSON.stringify({ design: drive, maxOrder: 300 }) });
+    const fromFile = await runCli([
+      'report',
+      example('drive.json'),
+      '--json',
+      '--max-order',
+      '300',
+    ]);
+    const fromRequest = await runCli(['report', '-', '--json'], {
+      input: JSON.stringify({ design: drive, maxOrder: 300 }),
+    });
     expect(fromFlags.code).toBe(0);
     expect(fromFlags.stdout).toBe(fromFile.stdout);
     expect(fromRequest.stdout).toBe(fromFile.stdout);
     expect(JSON.parse(fromFile.stdout)).toEqual(viaJson(analyseDesign(drive, { maxOrder: 300 })));
   });
 
-  it('prints a summary a person reads, with the report\'s figures and its cautions', async () => {
+  it("prints a summary a person reads, with the report's figures and its cautions", async () => {
     const run = await runCli(['report', example('pump-inverter.yaml')]);
     expect(run.code).toBe(0);
     const report = analyseDesign(pump);
     expect(run.stdout).toContain(report.methodLabel);
-    expect(run.stdout).toContain(`load power (all phases): ${Number(report.loadPower?.toPrecision(6))} W`);
+    expect(run.stdout).toContain(
+      `load power (all phases): ${Number(report.loadPower?.toPrecision(6))} W`,
+    );
     expect(run.stdout).toContain('Inverter DC buses and outputs are lethal');
     expect(run.stdout).toMatch(/limit check \(IEEE Std 519-2022/);
   });

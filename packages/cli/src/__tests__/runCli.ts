@@ -5,7 +5,8 @@ import { fileURLToPath } from 'node:url';
 export const BIN = fileURLToPath(new URL('../../bin/pulsewright.js', import.meta.url));
 
 /** An example design shipped with the package (packages/cli/examples/). */
-export const example = (name: string): string => fileURLToPath(new URL(`../../examples/${name}`, import.meta.url));
+export const example = (name: string): string =>
+  fileURLToPath(new URL(`../../examples/${name}`, import.meta.url));
 
 export interface CliRun {
   code: number;
@@ -14,13 +15,21 @@ export interface CliRun {
 }
 
 /** Runs `pulsewright` as a child process (no terminal: standard output and error are pipes). */
-export function runCli(args: readonly string[], options: { cwd?: string; input?: string } = {}): Promise<CliRun> {
+export function runCli(
+  args: readonly string[],
+  options: { cwd?: string; input?: string } = {},
+): Promise<CliRun> {
   return new Promise((resolve, reject) => {
-    const child = execFile(process.execPath, [BIN, ...args], { cwd: options.cwd, maxBuffer: 64 << 20, encoding: 'utf8' }, (error, stdout, stderr) => {
-      const code = error === null ? 0 : typeof error.code === 'number' ? error.code : NaN;
-      if (Number.isNaN(code)) reject(error as Error);
-      else resolve({ code, stdout, stderr });
-    });
+    const child = execFile(
+      process.execPath,
+      [BIN, ...args],
+      { cwd: options.cwd, maxBuffer: 64 << 20, encoding: 'utf8' },
+      (error, stdout, stderr) => {
+        const code = error === null ? 0 : typeof error.code === 'number' ? error.code : NaN;
+        if (Number.isNaN(code)) reject(error as Error);
+        else resolve({ code, stdout, stderr });
+      },
+    );
     child.stdin?.end(options.input ?? '');
   });
 }

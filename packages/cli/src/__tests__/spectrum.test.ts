@@ -15,10 +15,23 @@ const bipolar: InverterDesign = {
   carrierFrequency: 1050,
   modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8 },
 };
-const bipolarFlags = ['--method', 'sine-triangle', '--scheme', 'bipolar', '--ma', '0.8', '--vdc', '400', '--fundamental-frequency', '50', '--carrier-frequency', '1050'];
+const bipolarFlags = [
+  '--method',
+  'sine-triangle',
+  '--scheme',
+  'bipolar',
+  '--ma',
+  '0.8',
+  '--vdc',
+  '400',
+  '--fundamental-frequency',
+  '50',
+  '--carrier-frequency',
+  '1050',
+];
 
 describe('pulsewright spectrum', () => {
-  it('gives the design report\'s bridge figures and labelled spectrum, as JSON', async () => {
+  it("gives the design report's bridge figures and labelled spectrum, as JSON", async () => {
     const run = await runCli(['spectrum', ...bipolarFlags, '--max-order', '100', '--json']);
     expect(run.code).toBe(0);
     const expected = analyseDesign(bipolar, { maxOrder: 100, points: 64 }).bridge;
@@ -31,16 +44,33 @@ describe('pulsewright spectrum', () => {
   it('gives the line-to-line and the filter-output voltages of a design when asked', async () => {
     const line = await runCli(['spectrum', example('drive.json'), '--voltage', 'line', '--json']);
     const drive = JSON.parse(readFileSync(example('drive.json'), 'utf8')) as InverterDesign;
-    expect(JSON.parse(line.stdout)).toEqual(viaJson(analyseDesign(drive, { points: 64 }).lineToLine));
-    const output = await runCli(['spectrum', example('pump-inverter.yaml'), '--voltage', 'output', '--json']);
+    expect(JSON.parse(line.stdout)).toEqual(
+      viaJson(analyseDesign(drive, { points: 64 }).lineToLine),
+    );
+    const output = await runCli([
+      'spectrum',
+      example('pump-inverter.yaml'),
+      '--voltage',
+      'output',
+      '--json',
+    ]);
     const pump = parseYaml(readFileSync(example('pump-inverter.yaml'), 'utf8')) as InverterDesign;
-    const { series: _series, ...figures } = analyseDesign(pump, { points: 64 }).output as NonNullable<ReturnType<typeof analyseDesign>['output']>;
+    const { series: _series, ...figures } = analyseDesign(pump, { points: 64 })
+      .output as NonNullable<ReturnType<typeof analyseDesign>['output']>;
     expect(JSON.parse(output.stdout)).toEqual(viaJson(figures));
   });
 
   it('writes CSV with units in the header to --output, and nothing to standard output', async () => {
     const file = path.join(dir, 'spectrum.csv');
-    const run = await runCli(['spectrum', ...bipolarFlags, '--max-order', '60', '--csv', '--output', file]);
+    const run = await runCli([
+      'spectrum',
+      ...bipolarFlags,
+      '--max-order',
+      '60',
+      '--csv',
+      '--output',
+      file,
+    ]);
     expect(run.code).toBe(0);
     expect(run.stdout).toBe('');
     const lines = readFileSync(file, 'utf8').trimEnd().split('\r\n');
@@ -62,8 +92,27 @@ describe('pulsewright spectrum', () => {
     // component is 1.006, mf±2 0.131 and 2mf±1 0.370 of the bridge's level (vdc = 1 here). The
     // table holds three digits and assumes a large mf; mf = 41 leaves the groups apart, so
     // ±0.0006 covers its rounding.
-    const run = await runCli(['spectrum', '--method', 'sine-triangle', '--scheme', 'bipolar', '--ma', '0.6', '--vdc', '1', '--fundamental-frequency', '50', '--carrier-frequency', '2050', '--max-order', '100', '--json']);
-    const spectrum = (JSON.parse(run.stdout) as { spectrum: { order: number; amplitude: number }[] }).spectrum;
+    const run = await runCli([
+      'spectrum',
+      '--method',
+      'sine-triangle',
+      '--scheme',
+      'bipolar',
+      '--ma',
+      '0.6',
+      '--vdc',
+      '1',
+      '--fundamental-frequency',
+      '50',
+      '--carrier-frequency',
+      '2050',
+      '--max-order',
+      '100',
+      '--json',
+    ]);
+    const spectrum = (
+      JSON.parse(run.stdout) as { spectrum: { order: number; amplitude: number }[] }
+    ).spectrum;
     const at = (order: number): number => spectrum[order]?.amplitude ?? NaN;
     expect(Math.abs(at(41) - 1.006)).toBeLessThan(6e-4);
     expect(Math.abs(at(39) - 0.131)).toBeLessThan(6e-4);

@@ -75,10 +75,15 @@ export function parseSpiceNetlist(text: string): ParsedNetlist {
     for (let i = 0; i < values.length; i += 2) {
       const point: [number, number] = [values[i] as number, values[i + 1] as number];
       const last = points[points.length - 1];
-      if (last !== undefined && !(point[0] > last[0])) throw new Error(`PWL times of ${fields[0]} do not increase at ${point[0]}`);
+      if (last !== undefined && !(point[0] > last[0]))
+        throw new Error(`PWL times of ${fields[0]} do not increase at ${point[0]}`);
       points.push(point);
     }
-    sources.push({ name: fields[0] as string, nodes: [fields[1] as string, fields[2] as string], points });
+    sources.push({
+      name: fields[0] as string,
+      nodes: [fields[1] as string, fields[2] as string],
+      points,
+    });
   }
   return { title, sources, controls };
 }

@@ -6,7 +6,12 @@ import request from 'supertest';
 import { parse as parseYaml } from 'yaml';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp, type PulsewrightApp } from '@pulsewright/api';
-import { timerTable, timerTableToCHeader, type InverterDesign, type TimerTable } from '@pulsewright/modulation';
+import {
+  timerTable,
+  timerTableToCHeader,
+  type InverterDesign,
+  type TimerTable,
+} from '@pulsewright/modulation';
 import { example, runCli } from './runCli.js';
 
 // The C header a firmware build generates with the CLI must be the one the service downloads for
@@ -28,7 +33,9 @@ beforeAll(async () => {
     smtpUrl: '',
     mailDir: path.join(dir, 'mail'),
   });
-  const login = await request(app).post('/api/v1/auth/login').send({ email: 'viewer@kestrel.example', password: PASSWORD });
+  const login = await request(app)
+    .post('/api/v1/auth/login')
+    .send({ email: 'viewer@kestrel.example', password: PASSWORD });
   expect(login.status).toBe(200);
   token = login.body.token as string;
 });
@@ -60,7 +67,11 @@ async function apiTable(body: object, format: 'c-header' | 'csv' | 'json'): Prom
  * runs it, and returns the numbers it printed (so the values are read by a C compiler, not by
  * parsing the text).
  */
-function compileAndRead(header: string, prefix: string, channels: readonly string[]): { macros: number[]; arrays: Record<string, number[]> } {
+function compileAndRead(
+  header: string,
+  prefix: string,
+  channels: readonly string[],
+): { macros: number[]; arrays: Record<string, number[]> } {
   const headerFile = path.join(dir, `${prefix}.h`);
   writeFileSync(headerFile, header);
   const upper = prefix.toUpperCase();
@@ -71,7 +82,10 @@ function compileAndRead(header: string, prefix: string, channels: readonly strin
     'int main(void) {',
     `  unsigned long i;`,
     `  printf("%lu %lu %lu %lu %lu\\n", (unsigned long)${upper}_LENGTH, (unsigned long)${upper}_UPDATES_PER_ENTRY, (unsigned long)${upper}_PERIOD_REGISTER, (unsigned long)${upper}_FULL_SCALE, (unsigned long)${upper}_DEAD_TIME_TICKS);`,
-    ...names.map((name) => `  for (i = 0; i < ${upper}_LENGTH; i++) printf("%lu%c", (unsigned long)${name}[i], i + 1 == ${upper}_LENGTH ? '\\n' : ' ');`),
+    ...names.map(
+      (name) =>
+        `  for (i = 0; i < ${upper}_LENGTH; i++) printf("%lu%c", (unsigned long)${name}[i], i + 1 == ${upper}_LENGTH ? '\\n' : ' ');`,
+    ),
     '  return 0;',
     '}',
     '',
@@ -79,16 +93,29 @@ function compileAndRead(header: string, prefix: string, channels: readonly strin
   const source = path.join(dir, `${prefix}_main.c`);
   const binary = path.join(dir, `${prefix}_main`);
   writeFileSync(source, program);
-  execFileSync('cc', ['-std=c99', '-Wall', '-Wextra', '-pedantic', '-Werror', '-o', binary, source], { stdio: 'pipe' });
+  execFileSync(
+    'cc',
+    ['-std=c99', '-Wall', '-Wextra', '-pedantic', '-Werror', '-o', binary, source],
+    { stdio: 'pipe' },
+  );
   const lines = execFileSync(binary, { encoding: 'utf8' }).trimEnd().split('\n');
   const numbers = lines.map((line) => line.split(' ').map(Number));
-  return { macros: numbers[0] as number[], arrays: Object.fromEntries(names.map((name, i) => [name, numbers[i + 1] as number[]])) };
+  return {
+    macros: numbers[0] as number[],
+    arrays: Object.fromEntries(names.map((name, i) => [name, numbers[i + 1] as number[]])),
+  };
 }
 
 function expectHeaderValues(header: string, prefix: string, table: TimerTable): void {
   const channels = table.channels.map((c) => c.name);
   const { macros, arrays } = compileAndRead(header, prefix, channels);
-  expect(macros).toEqual([table.parameters.tableLength, table.updatesPerEntry, table.periodRegister, table.fullScaleCounts, table.deadTimeCounts]);
+  expect(macros).toEqual([
+    table.parameters.tableLength,
+    table.updatesPerEntry,
+    table.periodRegister,
+    table.fullScaleCounts,
+    table.deadTimeCounts,
+  ]);
   for (const channel of table.channels) {
     expect(arrays[`${prefix}_${channel.name}_high`]).toEqual(channel.highSide);
     expect(arrays[`${prefix}_${channel.name}_low`]).toEqual(channel.lowSide);
@@ -99,7 +126,11 @@ describe('pulsewright timer-table', () => {
   const pump = parseYaml(readFileSync(example('pump-inverter.yaml'), 'utf8')) as InverterDesign;
   /** The API request body for the pump design with the timer options the CLI is given below. */
   const pumpRequest = {
-    modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: pump.modulation.method === 'sine-triangle' ? pump.modulation.ma : 0 },
+    modulation: {
+      method: 'sine-triangle',
+      scheme: 'unipolar',
+      ma: pump.modulation.method === 'sine-triangle' ? pump.modulation.ma : 0,
+    },
     fundamentalFrequency: pump.fundamentalFrequency,
     carrierFrequency: pump.carrierFrequency,
     sampling: 'regular-symmetric',
@@ -111,9 +142,22 @@ describe('pulsewright timer-table', () => {
     prefix: 'pump_pwm',
   };
 
-  it('writes a C header from a design file that is the API\'s download byte for byte, and compiles', async () => {
+  it("writes a C header from a design file that is the API's download byte for byte, and compiles", async () => {
     const file = path.join(dir, 'cli_pump.h');
-    const run = await runCli(['timer-table', example('pump-inverter.yaml'), '--timer-clock', '72000000', '--dead-time', '1e-6', '--table-length', '200', '--prefix', 'pump_pwm', '--output', file]);
+    const run = await runCli([
+      'timer-table',
+      example('pump-inverter.yaml'),
+      '--timer-clock',
+      '72000000',
+      '--dead-time',
+      '1e-6',
+      '--table-length',
+      '200',
+      '--prefix',
+      'pump_pwm',
+      '--output',
+      file,
+    ]);
     expect(run.code, run.stderr).toBe(0);
     expect(run.stdout).toBe('');
     const header = readFileSync(file, 'utf8');
@@ -122,10 +166,14 @@ describe('pulsewright timer-table', () => {
     expectHeaderValues(header, 'pump_pwm', table);
     // And the library's own table for the same options (the API calls the same function).
     const { prefix: _prefix, ...options } = pumpRequest;
-    expect(header).toBe(timerTableToCHeader(timerTable(options as Parameters<typeof timerTable>[0]), { prefix: 'pump_pwm' }));
+    expect(header).toBe(
+      timerTableToCHeader(timerTable(options as Parameters<typeof timerTable>[0]), {
+        prefix: 'pump_pwm',
+      }),
+    );
   });
 
-  it('takes the API\'s request body as its input file and gives the same C header, CSV and JSON', async () => {
+  it("takes the API's request body as its input file and gives the same C header, CSV and JSON", async () => {
     const body = {
       modulation: { method: 'three-phase', zeroSequence: 'min-max', ma: 1.1 },
       fundamentalFrequency: 60,
@@ -152,17 +200,54 @@ describe('pulsewright timer-table', () => {
   });
 
   it('is deterministic: the same design file gives the same bytes', async () => {
-    const args = ['timer-table', example('drive.json'), '--sampling', 'regular-symmetric', '--timer-clock', '80e6', '--counting-mode', 'edge-aligned', '--format', 'csv'];
+    const args = [
+      'timer-table',
+      example('drive.json'),
+      '--sampling',
+      'regular-symmetric',
+      '--timer-clock',
+      '80e6',
+      '--counting-mode',
+      'edge-aligned',
+      '--format',
+      'csv',
+    ];
     const [first, second] = await Promise.all([runCli(args), runCli(args)]);
     expect(first.code, first.stderr).toBe(0);
     expect(second.stdout).toBe(first.stdout);
-    expect(first.stdout.split('\r\n')[0]).toBe('entry,angle_rad,a_duty,a_compare,a_high,a_low,b_duty,b_compare,b_high,b_low,c_duty,c_compare,c_high,c_low');
+    expect(first.stdout.split('\r\n')[0]).toBe(
+      'entry,angle_rad,a_duty,a_compare,a_high,a_low,b_duty,b_compare,b_high,b_low,c_duty,c_compare,c_high,c_low',
+    );
+    // The same design on standard input (read once, as a pipe can be).
+    const piped = await runCli(['timer-table', '-', ...args.slice(2)], {
+      input: readFileSync(example('drive.json'), 'utf8'),
+    });
+    expect(piped.stdout).toBe(first.stdout);
   });
 
   it('says on standard error when a naturally sampled design becomes a regular-sampled table', async () => {
-    const run = await runCli(['timer-table', '--method', 'sine-triangle', '--scheme', 'bipolar', '--ma', '0.7', '--vdc', '48', '--fundamental-frequency', '400', '--carrier-frequency', '20000', '--timer-clock', '64e6', '--json']);
+    const run = await runCli([
+      'timer-table',
+      '--method',
+      'sine-triangle',
+      '--scheme',
+      'bipolar',
+      '--ma',
+      '0.7',
+      '--vdc',
+      '48',
+      '--fundamental-frequency',
+      '400',
+      '--carrier-frequency',
+      '20000',
+      '--timer-clock',
+      '64e6',
+      '--json',
+    ]);
     expect(run.code).toBe(0);
-    expect(run.stderr).toMatch(/^pulsewright: note: the design's natural sampling becomes regular-symmetric/);
+    expect(run.stderr).toMatch(
+      /^pulsewright: note: the design's natural sampling becomes regular-symmetric/,
+    );
     const table = JSON.parse(run.stdout) as TimerTable;
     expect(table.parameters.sampling).toBe('regular-symmetric');
     expect(table.channels.map((c) => c.name)).toEqual(['a']);

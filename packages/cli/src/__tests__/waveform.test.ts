@@ -10,10 +10,15 @@ describe('pulsewright waveform', () => {
     const run = await runCli(['waveform', example('drive.json'), '--json']);
     expect(run.code, run.stderr).toBe(0);
     const voltages = modulationVoltages(designModulation(drive));
-    expect(JSON.parse(run.stdout)).toEqual(viaJson({ fundamentalFrequency: 50, voltages: [...voltages.phases, ...voltages.legs, ...voltages.lines] }));
+    expect(JSON.parse(run.stdout)).toEqual(
+      viaJson({
+        fundamentalFrequency: 50,
+        voltages: [...voltages.phases, ...voltages.legs, ...voltages.lines],
+      }),
+    );
   });
 
-  it('lists every edge as CSV with units in the header, the time being the angle\'s share of the period', async () => {
+  it("lists every edge as CSV with units in the header, the time being the angle's share of the period", async () => {
     const run = await runCli(['waveform', example('drive.json'), '--csv']);
     expect(run.code, run.stderr).toBe(0);
     const rows = run.stdout.trimEnd().split('\r\n');
@@ -27,7 +32,9 @@ describe('pulsewright waveform', () => {
       expect(angle).toBe(line?.waveform.edges[i]);
       expect(level).toBe(line?.waveform.levels[i]);
       // One period is 1/50 s: t = θ/2π · 20 ms, to double rounding.
-      expect(Math.abs((time as number) - ((angle as number) / (2 * Math.PI)) * 0.02)).toBeLessThan(1e-18);
+      expect(Math.abs((time as number) - ((angle as number) / (2 * Math.PI)) * 0.02)).toBeLessThan(
+        1e-18,
+      );
     });
   });
 });

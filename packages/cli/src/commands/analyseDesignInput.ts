@@ -9,7 +9,11 @@ import { callLibrary } from '../input/callLibrary.js';
 import { readDesignInput, type DesignInput } from '../input/designInput.js';
 
 /** The report options, as the library names them, and the flag that sets each. */
-const REPORT_OPTION_FLAGS = { maxOrder: '--max-order', points: '--points', busVoltage: '--bus-voltage' } as const;
+const REPORT_OPTION_FLAGS = {
+  maxOrder: '--max-order',
+  points: '--points',
+  busVoltage: '--bus-voltage',
+} as const;
 
 export const REPORT_OPTION_FIELDS = Object.keys(REPORT_OPTION_FLAGS);
 
@@ -23,8 +27,12 @@ export interface CheckedDesign {
  * Reads the design (file and flags) and checks it with the library's `assertInverterDesign`;
  * errors name the field as `design.<path>`.
  */
-export function readCheckedDesign(file: string | undefined, flags: Record<string, unknown>): CheckedDesign {
-  const input = readDesignInput(file, flags);
+export function readCheckedDesign(
+  file: string | undefined,
+  flags: Record<string, unknown>,
+  read?: { document: unknown },
+): CheckedDesign {
+  const input = readDesignInput(file, flags, read);
   const { design, notes } = input;
   callLibrary(() => assertInverterDesign(design), { prefix: 'design.', notes });
   return { design: design as InverterDesign, input };
@@ -34,7 +42,10 @@ export function readCheckedDesign(file: string | undefined, flags: Record<string
  * The design report of the design on the command line, by the library's `analyseDesign`.
  * Options come from the flags, else from an API request file, else the library's defaults.
  */
-export function analyseDesignInput(file: string | undefined, flags: Record<string, unknown>): { design: InverterDesign; report: DesignReport } {
+export function analyseDesignInput(
+  file: string | undefined,
+  flags: Record<string, unknown>,
+): { design: InverterDesign; report: DesignReport } {
   const { design, input } = readCheckedDesign(file, flags);
   const options: AnalyseDesignOptions = { ...input.options };
   const notes = new Map(input.notes);
@@ -45,6 +56,10 @@ export function analyseDesignInput(file: string | undefined, flags: Record<strin
       notes.set(field, `from ${flag}`);
     }
   }
-  const report = callLibrary(() => analyseDesign(design, options), { prefix: 'design.', keep: REPORT_OPTION_FIELDS, notes });
+  const report = callLibrary(() => analyseDesign(design, options), {
+    prefix: 'design.',
+    keep: REPORT_OPTION_FIELDS,
+    notes,
+  });
   return { design, report };
 }

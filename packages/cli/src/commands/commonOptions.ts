@@ -10,14 +10,33 @@ export interface OutputFlags {
 }
 
 /** Adds `--json`, `-o/--output` and, where asked, `--csv` and `--no-progress`. */
-export function addOutputOptions(command: Command, extras: { csv?: boolean; progress?: boolean } = {}): Command {
-  command.addOption(new Option('--json', 'machine-readable JSON output (the library\'s result as it is)').helpGroup('Output:'));
+export function addOutputOptions(
+  command: Command,
+  extras: { csv?: boolean; progress?: boolean } = {},
+): Command {
+  command.addOption(
+    new Option('--json', "machine-readable JSON output (the library's result as it is)").helpGroup(
+      'Output:',
+    ),
+  );
   if (extras.csv === true) {
-    command.addOption(new Option('--csv', 'CSV output, units in the header').conflicts('json').helpGroup('Output:'));
+    command.addOption(
+      new Option('--csv', 'CSV output, units in the header').conflicts('json').helpGroup('Output:'),
+    );
   }
-  command.addOption(new Option('-o, --output <file>', 'write the result to this file instead of standard output').helpGroup('Output:'));
+  command.addOption(
+    new Option(
+      '-o, --output <file>',
+      'write the result to this file instead of standard output',
+    ).helpGroup('Output:'),
+  );
   if (extras.progress === true) {
-    command.addOption(new Option('--no-progress', 'never show the progress bar (it shows on long work when standard error is a terminal)').helpGroup('Output:'));
+    command.addOption(
+      new Option(
+        '--no-progress',
+        'never show the progress bar (it shows on long work when standard error is a terminal)',
+      ).helpGroup('Output:'),
+    );
   }
   return command;
 }

@@ -45,7 +45,10 @@ type SweepFlags = Record<string, unknown> & OutputFlags & { voltage: SweepVoltag
  * index replaced (space vector's `m` dropped in favour of `ma`), built by the library's
  * designModulation and modulationVoltages.
  */
-export function designWaveformAt(design: InverterDesign, voltage: SweepVoltage): { name: string; at: (ma: number) => Waveform } {
+export function designWaveformAt(
+  design: InverterDesign,
+  voltage: SweepVoltage,
+): { name: string; at: (ma: number) => Waveform } {
   const pick = (ma: number): NamedVoltage => {
     const { m: _m, ...rest } = design.modulation as DesignModulation & { m?: number };
     const modulation = { ...rest, ma } as DesignModulation;
@@ -62,28 +65,65 @@ export function maSweepCommand(io: CliIo): Command {
     'fundamental, THD and WTHD (exact, whole waveform) and chosen harmonic orders across a range of modulation index',
   );
   addDesignOptions(command);
-  command.addOption(numberOption('--from <ma>', 'first modulation index (default 0.05)').helpGroup('Sweep:'));
-  command.addOption(numberOption('--to <ma>', 'last modulation index (default 1.3)').helpGroup('Sweep:'));
-  command.addOption(numberOption('--points <count>', 'evenly spaced points, 2..1000 (default 100)').helpGroup('Sweep:'));
-  command.addOption(new Option('--orders <orders>', 'harmonic orders whose amplitude to list, comma-separated').argParser(parseNumberList).helpGroup('Sweep:'));
-  command.addOption(new Option('--voltage <voltage>', 'bridge (across phase a of the load) or line (a−b, three-phase)').choices(SWEEP_VOLTAGES).default('bridge').helpGroup('Sweep:'));
+  command.addOption(
+    numberOption('--from <ma>', 'first modulation index (default 0.05)').helpGroup('Sweep:'),
+  );
+  command.addOption(
+    numberOption('--to <ma>', 'last modulation index (default 1.3)').helpGroup('Sweep:'),
+  );
+  command.addOption(
+    numberOption('--points <count>', 'evenly spaced points, 2..1000 (default 100)').helpGroup(
+      'Sweep:',
+    ),
+  );
+  command.addOption(
+    new Option('--orders <orders>', 'harmonic orders whose amplitude to list, comma-separated')
+      .argParser(parseNumberList)
+      .helpGroup('Sweep:'),
+  );
+  command.addOption(
+    new Option(
+      '--voltage <voltage>',
+      'bridge (across phase a of the load) or line (a−b, three-phase)',
+    )
+      .choices(SWEEP_VOLTAGES)
+      .default('bridge')
+      .helpGroup('Sweep:'),
+  );
   addOutputOptions(command, { csv: true, progress: true });
   command.action(async (file: string | undefined, flags: SweepFlags) => {
     const { design, input } = readCheckedDesign(file, flags);
     const method = design.modulation.method;
     if (!CARRIER_METHODS.includes(method)) {
-      throw new InputError('design.modulation.method', `design.modulation.method must be one of ${CARRIER_METHODS.map((m) => `'${m}'`).join(', ')} for an ma sweep (a stored pattern has no modulation index); got ${JSON.stringify(method)}`);
+      throw new InputError(
+        'design.modulation.method',
+        `design.modulation.method must be one of ${CARRIER_METHODS.map((m) => `'${m}'`).join(', ')} for an ma sweep (a stored pattern has no modulation index); got ${JSON.stringify(method)}`,
+      );
     }
     if (flags.voltage === 'line' && !THREE_PHASE_METHODS.includes(method)) {
-      throw new InputError('--voltage', `--voltage must be 'bridge' for method '${method}' (a single-phase bridge has no line-to-line voltage); got "line"`);
+      throw new InputError(
+        '--voltage',
+        `--voltage must be 'bridge' for method '${method}' (a single-phase bridge has no line-to-line voltage); got "line"`,
+      );
     }
-    const notes = new Map([...input.notes, ['from', 'option --from'], ['to', 'option --to'], ['points', 'option --points'], ['orders', 'option --orders']]);
+    const notes = new Map([
+      ...input.notes,
+      ['from', 'option --from'],
+      ['to', 'option --to'],
+      ['points', 'option --points'],
+      ['orders', 'option --orders'],
+    ]);
     const range = { from: (flags.from ?? 0.05) as number, to: (flags.to ?? 1.3) as number };
     // The sweep stays inside the range a design may hold, so every point is a design the API would take.
     for (const [field, value] of Object.entries(range)) {
-      callLibrary(() => assertNumberInRange(field, value, DESIGN_BOUNDS['modulation.ma']), { notes });
+      callLibrary(() => assertNumberInRange(field, value, DESIGN_BOUNDS['modulation.ma']), {
+        notes,
+      });
     }
-    const { name, at } = callLibrary(() => designWaveformAt(design, flags.voltage), { prefix: 'design.', notes });
+    const { name, at } = callLibrary(() => designWaveformAt(design, flags.voltage), {
+      prefix: 'design.',
+      notes,
+    });
     const progress = await createProgress('ma sweep', io, flags.progress !== false);
     const options: ModulationIndexSweepOptions = {
       ...range,
@@ -94,19 +134,36 @@ export function maSweepCommand(io: CliIo): Command {
     };
     let sweep: ModulationIndexSweep;
     try {
-      sweep = callLibrary(() => sweepModulationIndex(at, options), { rename: { ma: 'design.modulation.ma' }, notes });
+      sweep = callLibrary(() => sweepModulationIndex(at, options), {
+        rename: { ma: 'design.modulation.ma' },
+        notes,
+      });
     } finally {
       progress.stop();
     }
     const result: MaSweepOutput = { voltage: name, ...sweep };
-    writeOutput(flags.json === true ? toJson(result) : flags.csv === true ? sweepCsv(result) : sweepText(result, design), flags.output, io);
+    writeOutput(
+      flags.json === true
+        ? toJson(result)
+        : flags.csv === true
+          ? sweepCsv(result)
+          : sweepText(result, design),
+      flags.output,
+      io,
+    );
   });
   return command;
 }
 
 function sweepText(result: MaSweepOutput, design: InverterDesign): string {
   const head = `${result.voltage}: ${design.modulation.method}, ma ${formatNumber(result.ma[0])} to ${formatNumber(result.ma[result.ma.length - 1])}, ${result.ma.length} points (THD and WTHD exact over the whole waveform)\n\n`;
-  const headers = ['ma', 'fundamental (V peak)', 'THD (%)', 'WTHD (%)', ...result.harmonics.map((h) => `order ${h.order} (V peak)`)];
+  const headers = [
+    'ma',
+    'fundamental (V peak)',
+    'THD (%)',
+    'WTHD (%)',
+    ...result.harmonics.map((h) => `order ${h.order} (V peak)`),
+  ];
   const rows = result.ma.map((ma, i) => [
     formatNumber(ma),
     formatNumber(result.fundamental[i]),
@@ -119,7 +176,19 @@ function sweepText(result: MaSweepOutput, design: InverterDesign): string {
 
 function sweepCsv(result: MaSweepOutput): string {
   return toCsv([
-    ['ma', 'fundamental_V_peak', 'thd_ratio', 'wthd_ratio', ...result.harmonics.map((h) => `order${h.order}_V_peak`)],
-    ...result.ma.map((ma, i) => [ma, result.fundamental[i] ?? null, result.thd[i] ?? null, result.wthd[i] ?? null, ...result.harmonics.map((h) => h.amplitude[i] ?? null)]),
+    [
+      'ma',
+      'fundamental_V_peak',
+      'thd_ratio',
+      'wthd_ratio',
+      ...result.harmonics.map((h) => `order${h.order}_V_peak`),
+    ],
+    ...result.ma.map((ma, i) => [
+      ma,
+      result.fundamental[i] ?? null,
+      result.thd[i] ?? null,
+      result.wthd[i] ?? null,
+      ...result.harmonics.map((h) => h.amplitude[i] ?? null),
+    ]),
   ]);
 }

@@ -31,10 +31,23 @@ export function optimalPatternCommand(io: CliIo): Command {
     'optimal pulse pattern (least WTHD or THD) at one fundamental, or a table over a range of fundamentals',
   );
   addPatternOptions(command);
-  command.addOption(new Option('--objective <objective>', 'wthd (weights 1/n²) or thd (weights 1) over the odd orders 3..max-order (default wthd)').helpGroup('Pattern:'));
-  command.addOption(numberOption('--max-order <order>', 'highest order in the objective, 3..10000 (default 99)').helpGroup('Pattern:'));
+  command.addOption(
+    new Option(
+      '--objective <objective>',
+      'wthd (weights 1/n²) or thd (weights 1) over the odd orders 3..max-order (default wthd)',
+    ).helpGroup('Pattern:'),
+  );
+  command.addOption(
+    numberOption(
+      '--max-order <order>',
+      'highest order in the objective, 3..10000 (default 99)',
+    ).helpGroup('Pattern:'),
+  );
   addOutputOptions(command, { csv: true, progress: true });
-  command.addHelpText('after', '\nExit status 1 when no optimum is found at the one fundamental, or at none of the table\'s.');
+  command.addHelpText(
+    'after',
+    "\nExit status 1 when no optimum is found at the one fundamental, or at none of the table's.",
+  );
   command.action(async (flags: OptimalFlags) => {
     const base = patternBase(flags);
     if (flags.objective !== undefined) base.objective = flags.objective;
@@ -44,31 +57,61 @@ export function optimalPatternCommand(io: CliIo): Command {
     if (range === null) {
       const options = { ...base, fundamental: flags.fundamental } as OptimalPulseOptions;
       const result = callLibrary(() => optimalPulsePattern(options), { notes });
-      writeOutput(flags.json === true ? toJson(result) : flags.csv === true ? patternCsv(result) : patternText(result), flags.output, io);
+      writeOutput(
+        flags.json === true
+          ? toJson(result)
+          : flags.csv === true
+            ? patternCsv(result)
+            : patternText(result),
+        flags.output,
+        io,
+      );
       if (!result.converged) throw new FailureError(result.message);
       return;
     }
     const progress = await createProgress('optimal patterns', io, flags.progress !== false);
-    const options = { ...base, fundamentals: range, onProgress: progress.update } as OptimalPulseSweepOptions;
+    const options = {
+      ...base,
+      fundamentals: range,
+      onProgress: progress.update,
+    } as OptimalPulseSweepOptions;
     let result: OptimalPulseSweepResult;
     try {
       result = callLibrary(() => optimalPulseSweep(options), { notes });
     } finally {
       progress.stop();
     }
-    writeOutput(flags.json === true ? toJson(result) : flags.csv === true ? sweepCsv(result) : sweepText(result, options), flags.output, io);
+    writeOutput(
+      flags.json === true
+        ? toJson(result)
+        : flags.csv === true
+          ? sweepCsv(result)
+          : sweepText(result, options),
+      flags.output,
+      io,
+    );
     if (result.solvedFraction === 0) throw new FailureError(result.message);
   });
   return command;
 }
 
 function patternText(result: OptimalPulseResult): string {
-  const title = patternTitle('Optimal pulse pattern', result.kind, result.angles.length, result.vdc);
-  return formatPattern(title, result, [`objective (weighted distortion) ${formatPercent(result.objective)} %`]);
+  const title = patternTitle(
+    'Optimal pulse pattern',
+    result.kind,
+    result.angles.length,
+    result.vdc,
+  );
+  return formatPattern(title, result, [
+    `objective (weighted distortion) ${formatPercent(result.objective)} %`,
+  ]);
 }
 
 function patternCsv(result: OptimalPulseResult): string {
-  return toCsv([['angle', 'radians', 'degrees'], ...result.angles.map((a, k) => [`alpha${k + 1}`, a, (a * 180) / Math.PI])]);
+  return toCsv([
+    ['angle', 'radians', 'degrees'],
+    ...result.angles.map((a, k) => [`alpha${k + 1}`, a, (a * 180) / Math.PI]),
+  ]);
 }
 
 function angleCount(result: OptimalPulseSweepResult): number {
@@ -78,12 +121,19 @@ function angleCount(result: OptimalPulseSweepResult): number {
 function sweepText(result: OptimalPulseSweepResult, options: OptimalPulseSweepOptions): string {
   const count = angleCount(result);
   const head = `${patternTitle('Optimal pulse pattern table', options.kind, count, options.vdc)}, objective ${options.objective ?? 'wthd'}\n${result.message}\n\n`;
-  const headers = ['fundamental (V peak)', 'objective (%)', 'followed', ...Array.from({ length: count }, (_, k) => `α${k + 1} (°)`)];
+  const headers = [
+    'fundamental (V peak)',
+    'objective (%)',
+    'followed',
+    ...Array.from({ length: count }, (_, k) => `α${k + 1} (°)`),
+  ];
   const rows = result.points.map((p) => [
     formatNumber(p.fundamental),
     p.converged ? formatPercent(p.objective) : 'none',
     p.continued ? 'yes' : 'no',
-    ...Array.from({ length: count }, (_, k) => (p.converged ? formatDegrees(p.angles[k] as number) : '—')),
+    ...Array.from({ length: count }, (_, k) =>
+      p.converged ? formatDegrees(p.angles[k] as number) : '—',
+    ),
   ]);
   return head + formatTable(headers, rows);
 }
@@ -91,7 +141,19 @@ function sweepText(result: OptimalPulseSweepResult, options: OptimalPulseSweepOp
 function sweepCsv(result: OptimalPulseSweepResult): string {
   const count = angleCount(result);
   return toCsv([
-    ['fundamental_V_peak', 'converged', 'continued', 'objective_ratio', ...Array.from({ length: count }, (_, k) => `alpha${k + 1}_rad`)],
-    ...result.points.map((p) => [p.fundamental, p.converged, p.continued, p.converged ? p.objective : null, ...Array.from({ length: count }, (_, k) => p.angles[k] ?? null)]),
+    [
+      'fundamental_V_peak',
+      'converged',
+      'continued',
+      'objective_ratio',
+      ...Array.from({ length: count }, (_, k) => `alpha${k + 1}_rad`),
+    ],
+    ...result.points.map((p) => [
+      p.fundamental,
+      p.converged,
+      p.continued,
+      p.converged ? p.objective : null,
+      ...Array.from({ length: count }, (_, k) => p.angles[k] ?? null),
+    ]),
   ]);
 }

@@ -9,9 +9,25 @@ import { addOutputOptions, numberOption, type OutputFlags } from './commonOption
 
 /** Adds `--max-order`, `--points` and `--bus-voltage`, the options of analyseDesign. */
 export function addReportOptions(command: Command, withSeries = true): Command {
-  command.addOption(numberOption('--max-order <order>', 'highest order of the spectra, 50..5000 (default: past the third carrier group)'));
-  if (withSeries) command.addOption(numberOption('--points <count>', 'samples per period of the time series, 64..20000 (default 1200)'));
-  command.addOption(numberOption('--bus-voltage <volts>', 'bus voltage at the point of coupling for the limit check, V rms line to line'));
+  command.addOption(
+    numberOption(
+      '--max-order <order>',
+      'highest order of the spectra, 50..5000 (default: past the third carrier group)',
+    ),
+  );
+  if (withSeries)
+    command.addOption(
+      numberOption(
+        '--points <count>',
+        'samples per period of the time series, 64..20000 (default 1200)',
+      ),
+    );
+  command.addOption(
+    numberOption(
+      '--bus-voltage <volts>',
+      'bus voltage at the point of coupling for the limit check, V rms line to line',
+    ),
+  );
   return command;
 }
 

@@ -1,5 +1,12 @@
 import { Command, Option } from 'commander';
-import { sheSweep, solveShe, type SheResult, type SheSweepOptions, type SheSweepResult, type SolveSheOptions } from '@pulsewright/modulation';
+import {
+  sheSweep,
+  solveShe,
+  type SheResult,
+  type SheSweepOptions,
+  type SheSweepResult,
+  type SolveSheOptions,
+} from '@pulsewright/modulation';
 import { FailureError } from '../errors.js';
 import { callLibrary } from '../input/callLibrary.js';
 import { parseNumberList } from '../input/parseValue.js';
@@ -27,67 +34,128 @@ export function sheCommand(io: CliIo): Command {
   );
   addPatternOptions(command);
   command.addOption(
-    new Option('--eliminate <orders>', 'odd orders to eliminate, comma-separated (count − 1 of them with a fundamental)')
+    new Option(
+      '--eliminate <orders>',
+      'odd orders to eliminate, comma-separated (count − 1 of them with a fundamental)',
+    )
       .argParser(parseNumberList)
       .makeOptionMandatory()
       .helpGroup('Pattern:'),
   );
-  command.addOption(numberOption('--branches <count>', 'solution branches a table follows (default 1)').helpGroup('Table over the fundamental:'));
+  command.addOption(
+    numberOption('--branches <count>', 'solution branches a table follows (default 1)').helpGroup(
+      'Table over the fundamental:',
+    ),
+  );
   addOutputOptions(command, { csv: true, progress: true });
-  command.addHelpText('after', '\nExit status 1 when no solution is found at the one fundamental, or at none of the table\'s.');
+  command.addHelpText(
+    'after',
+    "\nExit status 1 when no solution is found at the one fundamental, or at none of the table's.",
+  );
   command.action(async (flags: SheFlags) => {
     const base = { ...patternBase(flags), eliminate: flags.eliminate };
     const notes = patternNotes();
     const range = fundamentalRange(flags);
     if (range === null) {
-      const options = { ...base, ...(flags.fundamental === undefined ? {} : { fundamental: flags.fundamental }) } as SolveSheOptions;
+      const options = {
+        ...base,
+        ...(flags.fundamental === undefined ? {} : { fundamental: flags.fundamental }),
+      } as SolveSheOptions;
       const result = callLibrary(() => solveShe(options), { notes });
-      writeOutput(flags.json === true ? toJson(result) : flags.csv === true ? sheCsv(result) : sheText(result, options), flags.output, io);
+      writeOutput(
+        flags.json === true
+          ? toJson(result)
+          : flags.csv === true
+            ? sheCsv(result)
+            : sheText(result, options),
+        flags.output,
+        io,
+      );
       if (!result.converged) throw new FailureError(result.message);
       return;
     }
     const progress = await createProgress('SHE table', io, flags.progress !== false);
-    const options = { ...base, fundamentals: range, maxBranches: flags.branches ?? 1, onProgress: progress.update } as SheSweepOptions;
+    const options = {
+      ...base,
+      fundamentals: range,
+      maxBranches: flags.branches ?? 1,
+      onProgress: progress.update,
+    } as SheSweepOptions;
     let result: SheSweepResult;
     try {
       result = callLibrary(() => sheSweep(options), { notes });
     } finally {
       progress.stop();
     }
-    writeOutput(flags.json === true ? toJson(result) : flags.csv === true ? sheSweepCsv(result) : sheSweepText(result, options), flags.output, io);
+    writeOutput(
+      flags.json === true
+        ? toJson(result)
+        : flags.csv === true
+          ? sheSweepCsv(result)
+          : sheSweepText(result, options),
+      flags.output,
+      io,
+    );
     if (result.solvedFraction === 0) throw new FailureError(result.message);
   });
   return command;
 }
 
 function sheText(result: SheResult, options: SolveSheOptions): string {
-  const title = patternTitle('Selective harmonic elimination', result.kind, result.angles.length, result.vdc);
+  const title = patternTitle(
+    'Selective harmonic elimination',
+    result.kind,
+    result.angles.length,
+    result.vdc,
+  );
   const orders = `eliminating ${options.eliminate.join(', ')}`;
   return (
     formatPattern(title, result, [orders]) +
     '\n' +
-    formatTable(['order', 'remaining (V peak)', '% of fundamental'], result.residual.map((r) => [String(r.order), formatNumber(r.amplitude), formatNumber((100 * r.amplitude) / Math.abs(result.fundamental))]))
+    formatTable(
+      ['order', 'remaining (V peak)', '% of fundamental'],
+      result.residual.map((r) => [
+        String(r.order),
+        formatNumber(r.amplitude),
+        formatNumber((100 * r.amplitude) / Math.abs(result.fundamental)),
+      ]),
+    )
   );
 }
 
 function sheCsv(result: SheResult): string {
-  return toCsv([['angle', 'radians', 'degrees'], ...result.angles.map((a, k) => [`alpha${k + 1}`, a, (a * 180) / Math.PI])]);
+  return toCsv([
+    ['angle', 'radians', 'degrees'],
+    ...result.angles.map((a, k) => [`alpha${k + 1}`, a, (a * 180) / Math.PI]),
+  ]);
 }
 
 /** Every point of every branch, in branch order. */
-function sweepRows(result: SheSweepResult): { branch: number; fundamental: number; converged: boolean; angles: number[] }[] {
-  return result.branches.flatMap((branch, b) => branch.points.map((p) => ({ branch: b + 1, ...p })));
+function sweepRows(
+  result: SheSweepResult,
+): { branch: number; fundamental: number; converged: boolean; angles: number[] }[] {
+  return result.branches.flatMap((branch, b) =>
+    branch.points.map((p) => ({ branch: b + 1, ...p })),
+  );
 }
 
 function angleCount(result: SheSweepResult, options: SheSweepOptions): number {
-  return options.angles?.length ?? options.count ?? Math.max(0, ...sweepRows(result).map((r) => r.angles.length));
+  return (
+    options.angles?.length ??
+    options.count ??
+    Math.max(0, ...sweepRows(result).map((r) => r.angles.length))
+  );
 }
 
 function sheSweepText(result: SheSweepResult, options: SheSweepOptions): string {
   const count = angleCount(result, options);
   const head = `${patternTitle('Selective harmonic elimination table', options.kind, count, options.vdc)}, eliminating ${options.eliminate.join(', ')}\n${result.message}\n`;
   const ends = result.branches.map((b, i) => `branch ${i + 1} ${b.end}`).join('; ');
-  const headers = ['branch', 'fundamental (V peak)', ...Array.from({ length: count }, (_, k) => `α${k + 1} (°)`)];
+  const headers = [
+    'branch',
+    'fundamental (V peak)',
+    ...Array.from({ length: count }, (_, k) => `α${k + 1} (°)`),
+  ];
   const rows = sweepRows(result).map((r) => [
     String(r.branch),
     formatNumber(r.fundamental),
@@ -99,7 +167,17 @@ function sheSweepText(result: SheSweepResult, options: SheSweepOptions): string 
 function sheSweepCsv(result: SheSweepResult): string {
   const count = Math.max(0, ...sweepRows(result).map((r) => r.angles.length));
   return toCsv([
-    ['branch', 'fundamental_V_peak', 'converged', ...Array.from({ length: count }, (_, k) => `alpha${k + 1}_rad`)],
-    ...sweepRows(result).map((r) => [r.branch, r.fundamental, r.converged, ...Array.from({ length: count }, (_, k) => r.angles[k] ?? null)]),
+    [
+      'branch',
+      'fundamental_V_peak',
+      'converged',
+      ...Array.from({ length: count }, (_, k) => `alpha${k + 1}_rad`),
+    ],
+    ...sweepRows(result).map((r) => [
+      r.branch,
+      r.fundamental,
+      r.converged,
+      ...Array.from({ length: count }, (_, k) => r.angles[k] ?? null),
+    ]),
   ]);
 }

@@ -31,12 +31,20 @@ export function waveformCommand(io: CliIo): Command {
   addOutputOptions(command, { csv: true });
   command.action((file: string | undefined, flags: Record<string, unknown> & OutputFlags) => {
     const { design, input } = readCheckedDesign(file, flags);
-    const voltages = callLibrary(() => modulationVoltages(designModulation(design)), { prefix: 'design.', notes: input.notes });
+    const voltages = callLibrary(() => modulationVoltages(designModulation(design)), {
+      prefix: 'design.',
+      notes: input.notes,
+    });
     const result: WaveformOutput = {
       fundamentalFrequency: design.fundamentalFrequency,
       voltages: [...voltages.phases, ...voltages.legs, ...voltages.lines],
     };
-    const text = flags.json === true ? toJson(result) : flags.csv === true ? waveformCsv(result) : waveformText(result);
+    const text =
+      flags.json === true
+        ? toJson(result)
+        : flags.csv === true
+          ? waveformCsv(result)
+          : waveformText(result);
     writeOutput(text, flags.output, io);
   });
   return command;
@@ -47,7 +55,15 @@ function waveformCsv(result: WaveformOutput): string {
   const period = 1 / result.fundamentalFrequency;
   return toCsv([
     ['voltage', 'edge', 'angle_rad', 'time_s', 'level_V'],
-    ...result.voltages.flatMap((v) => v.waveform.edges.map((angle, i) => [v.name, i, angle, (angle / (2 * Math.PI)) * period, v.waveform.levels[i] ?? null])),
+    ...result.voltages.flatMap((v) =>
+      v.waveform.edges.map((angle, i) => [
+        v.name,
+        i,
+        angle,
+        (angle / (2 * Math.PI)) * period,
+        v.waveform.levels[i] ?? null,
+      ]),
+    ),
   ]);
 }
 

@@ -28,7 +28,8 @@ export function callLibrary<T>(work: () => T, naming: FieldNaming = {}): T {
 function renamed(error: unknown, naming: FieldNaming): unknown {
   if (!(error instanceof ParameterRangeError || error instanceof ParameterTypeError)) return error;
   const { prefix = '', keep = [], rename = {}, notes } = naming;
-  const field = rename[error.field] ?? (keep.includes(error.field) ? error.field : prefix + error.field);
+  const field =
+    rename[error.field] ?? (keep.includes(error.field) ? error.field : prefix + error.field);
   const copy =
     error instanceof ParameterRangeError
       ? new ParameterRangeError(field, error.allowed, error.value)

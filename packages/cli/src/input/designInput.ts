@@ -19,28 +19,113 @@ const text = (value: string): string => value;
 
 /** Flags that set a field of the design; a value given here replaces the design file's. */
 export const DESIGN_FLAGS: readonly DesignFlag[] = [
-  { flag: '--method <method>', key: 'method', path: 'modulation.method', read: text, help: 'modulation method (sine-triangle, three-phase, space-vector, selective-harmonic-elimination, optimal-pattern)' },
-  { flag: '--scheme <scheme>', key: 'scheme', path: 'modulation.scheme', read: text, help: 'sine-triangle scheme: bipolar or unipolar' },
-  { flag: '--ma <ma>', key: 'ma', path: 'modulation.ma', read: parseNumber, help: 'modulation index' },
-  { flag: '--sampling <sampling>', key: 'sampling', path: 'modulation.sampling', read: text, help: 'carrier sampling: natural, regular-symmetric, regular-asymmetric' },
-  { flag: '--zero-sequence <name>', key: 'zeroSequence', path: 'modulation.zeroSequence', read: text, help: 'three-phase zero sequence (none, third-harmonic, min-max, dpwm…)' },
-  { flag: '--kind <kind>', key: 'kind', path: 'modulation.kind', read: text, help: 'stored pattern kind: bipolar or staircase' },
-  { flag: '--angles <radians>', key: 'angles', path: 'modulation.angles', read: parseNumberList, help: 'stored pattern first-quarter angles, comma-separated radians' },
+  {
+    flag: '--method <method>',
+    key: 'method',
+    path: 'modulation.method',
+    read: text,
+    help: 'modulation method (sine-triangle, three-phase, space-vector, selective-harmonic-elimination, optimal-pattern)',
+  },
+  {
+    flag: '--scheme <scheme>',
+    key: 'scheme',
+    path: 'modulation.scheme',
+    read: text,
+    help: 'sine-triangle scheme: bipolar or unipolar',
+  },
+  {
+    flag: '--ma <ma>',
+    key: 'ma',
+    path: 'modulation.ma',
+    read: parseNumber,
+    help: 'modulation index',
+  },
+  {
+    flag: '--sampling <sampling>',
+    key: 'sampling',
+    path: 'modulation.sampling',
+    read: text,
+    help: 'carrier sampling: natural, regular-symmetric, regular-asymmetric',
+  },
+  {
+    flag: '--zero-sequence <name>',
+    key: 'zeroSequence',
+    path: 'modulation.zeroSequence',
+    read: text,
+    help: 'three-phase zero sequence (none, third-harmonic, min-max, dpwm…)',
+  },
+  {
+    flag: '--kind <kind>',
+    key: 'kind',
+    path: 'modulation.kind',
+    read: text,
+    help: 'stored pattern kind: bipolar or staircase',
+  },
+  {
+    flag: '--angles <radians>',
+    key: 'angles',
+    path: 'modulation.angles',
+    read: parseNumberList,
+    help: 'stored pattern first-quarter angles, comma-separated radians',
+  },
   { flag: '--vdc <volts>', key: 'vdc', path: 'vdc', read: parseNumber, help: 'DC bus, volts' },
-  { flag: '--fundamental-frequency <hertz>', key: 'fundamentalFrequency', path: 'fundamentalFrequency', read: parseNumber, help: 'output frequency, hertz' },
-  { flag: '--carrier-frequency <hertz>', key: 'carrierFrequency', path: 'carrierFrequency', read: parseNumber, help: 'carrier frequency, hertz (a whole multiple of the fundamental)' },
-  { flag: '--load-r <ohms>', key: 'loadR', path: 'load.r', read: parseNumber, help: 'load resistance per phase, ohms' },
-  { flag: '--load-l <henries>', key: 'loadL', path: 'load.l', read: parseNumber, help: 'load inductance per phase, henries' },
-  { flag: '--filter-l <henries>', key: 'filterL', path: 'filter.l', read: parseNumber, help: 'LC filter inductance per phase, henries' },
-  { flag: '--filter-c <farads>', key: 'filterC', path: 'filter.c', read: parseNumber, help: 'LC filter capacitance per phase, farads' },
+  {
+    flag: '--fundamental-frequency <hertz>',
+    key: 'fundamentalFrequency',
+    path: 'fundamentalFrequency',
+    read: parseNumber,
+    help: 'output frequency, hertz',
+  },
+  {
+    flag: '--carrier-frequency <hertz>',
+    key: 'carrierFrequency',
+    path: 'carrierFrequency',
+    read: parseNumber,
+    help: 'carrier frequency, hertz (a whole multiple of the fundamental)',
+  },
+  {
+    flag: '--load-r <ohms>',
+    key: 'loadR',
+    path: 'load.r',
+    read: parseNumber,
+    help: 'load resistance per phase, ohms',
+  },
+  {
+    flag: '--load-l <henries>',
+    key: 'loadL',
+    path: 'load.l',
+    read: parseNumber,
+    help: 'load inductance per phase, henries',
+  },
+  {
+    flag: '--filter-l <henries>',
+    key: 'filterL',
+    path: 'filter.l',
+    read: parseNumber,
+    help: 'LC filter inductance per phase, henries',
+  },
+  {
+    flag: '--filter-c <farads>',
+    key: 'filterC',
+    path: 'filter.c',
+    read: parseNumber,
+    help: 'LC filter capacitance per phase, farads',
+  },
 ];
 
 /** Adds the design argument and flags to a command. */
 export function addDesignOptions(command: Command): Command {
-  command.argument('[design]', 'design file, JSON or YAML (an InverterDesign, or an API request { design, ... }); - reads standard input');
-  for (const { flag, help } of DESIGN_FLAGS) command.addOption(new Option(flag, help).helpGroup('Design:'));
+  command.argument(
+    '[design]',
+    'design file, JSON or YAML (an InverterDesign, or an API request { design, ... }); - reads standard input',
+  );
+  for (const { flag, help } of DESIGN_FLAGS)
+    command.addOption(new Option(flag, help).helpGroup('Design:'));
   command.addOption(
-    new Option('--set <path=value>', 'set any design field by its path, e.g. load.emf.amplitude=300 (JSON value); repeatable')
+    new Option(
+      '--set <path=value>',
+      'set any design field by its path, e.g. load.emf.amplitude=300 (JSON value); repeatable',
+    )
       .argParser((value: string, previous: string[] | undefined) => [...(previous ?? []), value])
       .helpGroup('Design:'),
   );
@@ -63,16 +148,24 @@ export interface DesignInput {
 const UNSAFE_KEYS = new Set(['__proto__', 'prototype', 'constructor']);
 
 /**
- * Reads the design from the file (when given) and applies the flags over it.
+ * Reads the design from the file (when given; `read` holds its document when the caller has
+ * read it already, standard input being readable once) and applies the flags over it.
  * @throws InputError for an unreadable file, a document that is not an object, or a bad --set
  */
-export function readDesignInput(file: string | undefined, flags: Record<string, unknown>): DesignInput {
+export function readDesignInput(
+  file: string | undefined,
+  flags: Record<string, unknown>,
+  read?: { document: unknown },
+): DesignInput {
   let design: Record<string, unknown> = {};
   let options: AnalyseDesignOptions = {};
   if (file !== undefined) {
-    const document = readDataFile(file, 'design file');
+    const document = read === undefined ? readDataFile(file, 'design file') : read.document;
     if (typeof document !== 'object' || document === null || Array.isArray(document)) {
-      throw new InputError('design', `design file ${file} must hold an object (an InverterDesign: vdc, fundamentalFrequency, carrierFrequency, modulation, …)`);
+      throw new InputError(
+        'design',
+        `design file ${file} must hold an object (an InverterDesign: vdc, fundamentalFrequency, carrierFrequency, modulation, …)`,
+      );
     }
     const record = document as Record<string, unknown>;
     if (!('modulation' in record) && typeof record.design === 'object' && record.design !== null) {
@@ -101,7 +194,10 @@ export function readDesignInput(file: string | undefined, flags: Record<string, 
     const at = entry.indexOf('=');
     const path = at > 0 ? entry.slice(0, at) : '';
     if (path === '' || path.split('.').some((key) => key === '' || UNSAFE_KEYS.has(key))) {
-      throw new InputError('--set', `--set must be path=value with a dotted design path such as load.r=4.2; got ${JSON.stringify(entry)}`);
+      throw new InputError(
+        '--set',
+        `--set must be path=value with a dotted design path such as load.r=4.2; got ${JSON.stringify(entry)}`,
+      );
     }
     setPath(design, path, parseSetValue(entry.slice(at + 1)));
     notes.set(`design.${path}`, `from --set ${path}`);

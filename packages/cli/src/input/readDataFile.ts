@@ -14,7 +14,12 @@ export function readDataFile(path: string, field: string): unknown {
     text = readFileSync(path === '-' ? 0 : path, 'utf8');
   } catch (error) {
     const code = (error as NodeJS.ErrnoException).code;
-    const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a directory' : (error as Error).message;
+    const why =
+      code === 'ENOENT'
+        ? 'no such file'
+        : code === 'EISDIR'
+          ? 'it is a directory'
+          : (error as Error).message;
     throw new InputError(field, `${field} ${path} cannot be read: ${why}`);
   }
   const name = path === '-' ? 'standard input' : path;
@@ -22,12 +27,18 @@ export function readDataFile(path: string, field: string): unknown {
     try {
       return JSON.parse(text) as unknown;
     } catch (error) {
-      throw new InputError(field, `${field} ${name} is not valid JSON: ${(error as Error).message}`);
+      throw new InputError(
+        field,
+        `${field} ${name} is not valid JSON: ${(error as Error).message}`,
+      );
     }
   }
   try {
     return parseYaml(text, { prettyErrors: true }) as unknown;
   } catch (error) {
-    throw new InputError(field, `${field} ${name} is not valid YAML or JSON: ${(error as Error).message.split('\n')[0]}`);
+    throw new InputError(
+      field,
+      `${field} ${name} is not valid YAML or JSON: ${(error as Error).message.split('\n')[0]}`,
+    );
   }
 }

@@ -45,7 +45,10 @@ export function pwlPoints(waveform: Waveform, options: PwlOptions): [number, num
       const ramp = level > previous ? riseTime : fallTime;
       if (start <= lastEnd) {
         const flag = level > previous ? '--rise-time' : '--fall-time';
-        throw new InputError(flag, `${flag} must be shorter than the shortest time between two edges of a signal (a ramp would reach the next edge at ${start} s); got ${ramp}`);
+        throw new InputError(
+          flag,
+          `${flag} must be shorter than the shortest time between two edges of a signal (a ramp would reach the next edge at ${start} s); got ${ramp}`,
+        );
       }
       if (start > 0) points.push([start, previous]);
       else points[0] = [0, previous];

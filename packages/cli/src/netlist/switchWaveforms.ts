@@ -48,20 +48,44 @@ export function switchWaveforms(table: TimerTable, currentAngle = 0): SwitchWave
     const high = mapLevels(out[k] as Waveform, (v) => (v > 0 ? 1 : 0));
     const low = mapLevels(into[k] as Waveform, (v) => (v < 0 ? 1 : 0));
     gates.push(
-      { name: `gate_${channel.name}_high`, description: `high-side switch of leg ${channel.name}`, waveform: high },
-      { name: `gate_${channel.name}_low`, description: `low-side switch of leg ${channel.name}`, waveform: low },
+      {
+        name: `gate_${channel.name}_high`,
+        description: `high-side switch of leg ${channel.name}`,
+        waveform: high,
+      },
+      {
+        name: `gate_${channel.name}_low`,
+        description: `low-side switch of leg ${channel.name}`,
+        waveform: low,
+      },
     );
-    legList.push({ name: `leg_${channel.name}`, description: `leg ${channel.name} to the DC midpoint (${channel.description})`, waveform: legs[k] as Waveform });
+    legList.push({
+      name: `leg_${channel.name}`,
+      description: `leg ${channel.name} to the DC midpoint (${channel.description})`,
+      waveform: legs[k] as Waveform,
+    });
   });
   const { modulation } = table.parameters;
   if (modulation.method === 'sine-triangle' && modulation.scheme === 'bipolar') {
     const [high, low] = gates as [NamedWaveform, NamedWaveform];
     const legA = legList[0] as NamedWaveform;
     gates.push(
-      { name: 'gate_b_high', description: 'high-side switch of leg b (driven with leg a\'s low side)', waveform: low.waveform },
-      { name: 'gate_b_low', description: 'low-side switch of leg b (driven with leg a\'s high side)', waveform: high.waveform },
+      {
+        name: 'gate_b_high',
+        description: "high-side switch of leg b (driven with leg a's low side)",
+        waveform: low.waveform,
+      },
+      {
+        name: 'gate_b_low',
+        description: "low-side switch of leg b (driven with leg a's high side)",
+        waveform: high.waveform,
+      },
     );
-    legList.push({ name: 'leg_b', description: 'leg b to the DC midpoint (the complement of leg a: vB = −vA)', waveform: mapLevels(legA.waveform, (v) => -v) });
+    legList.push({
+      name: 'leg_b',
+      description: 'leg b to the DC midpoint (the complement of leg a: vB = −vA)',
+      waveform: mapLevels(legA.waveform, (v) => -v),
+    });
   }
   return { gates, legs: legList };
 }

@@ -12,13 +12,23 @@ export function patternTitle(what: string, kind: string, count: number, vdc: num
  * modulation index m = V₁/(4·vdc/π) (N·4·vdc/π for a staircase of N cells), and its angles in
  * radians and degrees.
  */
-export function formatPattern(title: string, pattern: QuarterWavePattern, extra: string[] = []): string {
+export function formatPattern(
+  title: string,
+  pattern: QuarterWavePattern,
+  extra: string[] = [],
+): string {
   const cells = pattern.kind === 'staircase' ? pattern.angles.length : 1;
   const m = pattern.fundamental / ((cells * 4 * pattern.vdc) / Math.PI);
   const head =
     `${title}: ${pattern.converged ? 'converged' : 'NOT converged'}\n${pattern.message}\n` +
-    `fundamental ${formatNumber(pattern.fundamental)} V peak (m = ${formatNumber(m)} of the ${pattern.kind === 'staircase' ? 'staircase\'s' : 'square wave\'s'} 4·vdc/π${cells > 1 ? ` × ${cells}` : ''})\n` +
+    `fundamental ${formatNumber(pattern.fundamental)} V peak (m = ${formatNumber(m)} of the ${pattern.kind === 'staircase' ? "staircase's" : "square wave's"} 4·vdc/π${cells > 1 ? ` × ${cells}` : ''})\n` +
     extra.map((line) => `${line}\n`).join('') +
     '\n';
-  return head + formatTable(['angle', 'radians', 'degrees'], pattern.angles.map((a, k) => [`α${k + 1}`, formatNumber(a, 10), formatDegrees(a)]));
+  return (
+    head +
+    formatTable(
+      ['angle', 'radians', 'degrees'],
+      pattern.angles.map((a, k) => [`α${k + 1}`, formatNumber(a, 10), formatDegrees(a)]),
+    )
+  );
 }

@@ -10,12 +10,19 @@ import { formatTable } from './formatTable.js';
  */
 export function formatReport(report: DesignReport): string {
   const parts: string[] = [];
-  const ratio = report.frequencyRatio === null ? 'no carrier (stored pattern)' : `frequency ratio mf ${report.frequencyRatio}`;
+  const ratio =
+    report.frequencyRatio === null
+      ? 'no carrier (stored pattern)'
+      : `frequency ratio mf ${report.frequencyRatio}`;
   parts.push(
     `${report.methodLabel} (${report.method}), ${report.phaseCount === 3 ? 'three-phase' : 'single-phase'} bridge\n` +
       `fundamental frequency ${formatNumber(report.fundamentalFrequency)} Hz, ${ratio}, spectra to order ${report.maxOrder}\n`,
   );
-  const voltages: VoltageFigures[] = [report.bridge, ...(report.lineToLine ? [report.lineToLine] : []), ...(report.output ? [report.output] : [])];
+  const voltages: VoltageFigures[] = [
+    report.bridge,
+    ...(report.lineToLine ? [report.lineToLine] : []),
+    ...(report.output ? [report.output] : []),
+  ];
   parts.push(
     formatTable(
       ['voltage', 'fundamental (V peak)', 'rms (V)', 'THD (%)', 'WTHD (%)', 'THD to maxOrder (%)'],
@@ -23,7 +30,9 @@ export function formatReport(report: DesignReport): string {
         v.name,
         formatNumber(v.fundamental),
         formatNumber(v.rms),
-        v.exact ? formatPercent(v.thd) : `${formatPercent(v.thd)} (≤ ${formatPercent(v.thdUpperBound)})`,
+        v.exact
+          ? formatPercent(v.thd)
+          : `${formatPercent(v.thd)} (≤ ${formatPercent(v.thdUpperBound)})`,
         formatPercent(v.wthd),
         formatPercent(v.spectrumThd),
       ]),
@@ -37,22 +46,47 @@ export function formatReport(report: DesignReport): string {
   if (currents.length > 0) {
     parts.push(
       formatTable(
-        ['current', 'rms (A)', 'peak (A)', 'fundamental (A peak)', 'ripple rms (A)', 'ripple p-p (A)'],
-        currents.map((c) => [c.name, formatNumber(c.rms), formatNumber(c.peak), formatNumber(c.fundamental), formatNumber(c.rippleRms), formatNumber(c.ripplePeakToPeak)]),
+        [
+          'current',
+          'rms (A)',
+          'peak (A)',
+          'fundamental (A peak)',
+          'ripple rms (A)',
+          'ripple p-p (A)',
+        ],
+        currents.map((c) => [
+          c.name,
+          formatNumber(c.rms),
+          formatNumber(c.peak),
+          formatNumber(c.fundamental),
+          formatNumber(c.rippleRms),
+          formatNumber(c.ripplePeakToPeak),
+        ]),
       ),
     );
   }
   const lines: string[] = [];
-  if (report.loadPower !== null) lines.push(`load power (all phases): ${formatNumber(report.loadPower)} W`);
+  if (report.loadPower !== null)
+    lines.push(`load power (all phases): ${formatNumber(report.loadPower)} W`);
   if (report.dcLink !== null) {
     const d = report.dcLink;
-    const second = d.secondHarmonic === null ? '' : `, at twice the output frequency ${formatNumber(d.secondHarmonic)} A peak`;
-    lines.push(`DC-link current: mean ${formatNumber(d.mean)} A, rms ${formatNumber(d.rms)} A, capacitor ripple rms ${formatNumber(d.rippleRms)} A${second}`);
+    const second =
+      d.secondHarmonic === null
+        ? ''
+        : `, at twice the output frequency ${formatNumber(d.secondHarmonic)} A peak`;
+    lines.push(
+      `DC-link current: mean ${formatNumber(d.mean)} A, rms ${formatNumber(d.rms)} A, capacitor ripple rms ${formatNumber(d.rippleRms)} A${second}`,
+    );
   }
   if (report.commonMode !== null) {
     const c = report.commonMode;
-    const perCarrier = c.stepsPerCarrierPeriod === null ? '' : `, ${formatNumber(c.stepsPerCarrierPeriod)} per carrier period`;
-    lines.push(`${c.name}: rms ${formatNumber(c.rms)} V, levels ${c.levels.map((l) => formatNumber(l)).join(', ')} V, ${c.stepsPerPeriod} steps per period${perCarrier}`);
+    const perCarrier =
+      c.stepsPerCarrierPeriod === null
+        ? ''
+        : `, ${formatNumber(c.stepsPerCarrierPeriod)} per carrier period`;
+    lines.push(
+      `${c.name}: rms ${formatNumber(c.rms)} V, levels ${c.levels.map((l) => formatNumber(l)).join(', ')} V, ${c.stepsPerPeriod} steps per period${perCarrier}`,
+    );
   }
   if (report.filter !== null) {
     const f = report.filter;
@@ -69,7 +103,12 @@ export function formatReport(report: DesignReport): string {
   const violations =
     check.violations.length === 0
       ? 'none'
-      : check.violations.map((v) => `${v.order === 'thd' ? 'THD' : v.order === 'thd-whole-waveform' ? 'THD (whole waveform)' : `order ${v.order}`} ${formatPercent(v.ratio)} % > ${formatPercent(v.limit)} %`).join('; ');
+      : check.violations
+          .map(
+            (v) =>
+              `${v.order === 'thd' ? 'THD' : v.order === 'thd-whole-waveform' ? 'THD (whole waveform)' : `order ${v.order}`} ${formatPercent(v.ratio)} % > ${formatPercent(v.limit)} %`,
+          )
+          .join('; ');
   parts.push(
     `limit check (${check.standard.name}-${check.standard.edition} ${check.standard.table}, bus ${formatNumber(check.busVoltage)} V rms line to line, ${check.limits.busRange}): ${check.pass ? 'PASS' : 'FAIL'}\n` +
       `  individual limit ${formatPercent(check.limits.individual)} %, worst order ${worst.order} at ${formatPercent(worst.ratio)} %; ` +
@@ -77,6 +116,11 @@ export function formatReport(report: DesignReport): string {
       `  over the limit: ${violations}\n` +
       (check.note === null ? '' : `  note: ${check.note}\n`),
   );
-  parts.push(`cautions:\n${[...report.cautions, check.caution].filter((c, i, all) => all.indexOf(c) === i).map((c) => `  - ${c}`).join('\n')}\n`);
+  parts.push(
+    `cautions:\n${[...report.cautions, check.caution]
+      .filter((c, i, all) => all.indexOf(c) === i)
+      .map((c) => `  - ${c}`)
+      .join('\n')}\n`,
+  );
   return parts.join('\n');
 }

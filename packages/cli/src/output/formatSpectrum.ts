@@ -6,9 +6,15 @@ import { formatTable } from './formatTable.js';
 const SHOWN_FRACTION = 1e-3;
 
 /** The spectrum of one voltage as text a person reads: headline figures, then a table of orders. */
-export function formatSpectrum(report: DesignReport, figures: VoltageFigures, all: boolean): string {
+export function formatSpectrum(
+  report: DesignReport,
+  figures: VoltageFigures,
+  all: boolean,
+): string {
   const ratio = report.frequencyRatio === null ? '' : `, mf ${report.frequencyRatio}`;
-  const thd = figures.exact ? `${formatPercent(figures.thd)} % (exact, whole waveform)` : `${formatPercent(figures.thd)} % to order ${report.analysisOrder} (≤ ${formatPercent(figures.thdUpperBound)} % over the whole waveform)`;
+  const thd = figures.exact
+    ? `${formatPercent(figures.thd)} % (exact, whole waveform)`
+    : `${formatPercent(figures.thd)} % to order ${report.analysisOrder} (≤ ${formatPercent(figures.thdUpperBound)} % over the whole waveform)`;
   const head =
     `${figures.name}: ${report.methodLabel}${ratio}, ${formatNumber(report.fundamentalFrequency)} Hz\n` +
     `fundamental ${formatNumber(figures.fundamental)} V peak (phase ${formatRadians(figures.fundamentalPhase)} rad), rms ${formatNumber(figures.rms)} V\n` +
@@ -26,6 +32,9 @@ export function formatSpectrum(report: DesignReport, figures: VoltageFigures, al
     ]),
   );
   const left = figures.spectrum.length - shown.length;
-  const foot = left > 0 ? `(${left} orders below 0.1 % of the fundamental left out; --all lists them, --json or --csv gives every order in full)\n` : '';
+  const foot =
+    left > 0
+      ? `(${left} orders below 0.1 % of the fundamental left out; --all lists them, --json or --csv gives every order in full)\n`
+      : '';
   return head + table + foot;
 }

@@ -17,7 +17,11 @@ const NO_PROGRESS: Progress = { update() {}, stop() {} };
  * quarter of a second, so short runs and every pipe, file or test stay free of it. Standard
  * output, which holds the result, is never touched.
  */
-export async function createProgress(label: string, io: CliIo, enabled: boolean): Promise<Progress> {
+export async function createProgress(
+  label: string,
+  io: CliIo,
+  enabled: boolean,
+): Promise<Progress> {
   if (!enabled || io.stderr.isTTY !== true) return NO_PROGRESS;
   const { default: cliProgress } = await import('cli-progress');
   const started = Date.now();

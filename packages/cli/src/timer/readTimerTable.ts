@@ -36,12 +36,39 @@ export type TimerInputFlags = Record<string, unknown> & { prefix?: string };
 /** Adds the design argument and flags and the timer's own options to a command. */
 export function addTimerOptions(command: Command): Command {
   addDesignOptions(command);
-  command.addOption(numberOption('--timer-clock <hertz>', 'timer input clock after the prescaler, Hz (required unless the input file is a timer-table request)').helpGroup('Timer:'));
-  command.addOption(new Option('--counting-mode <mode>', 'edge-aligned or centre-aligned (default centre-aligned)').helpGroup('Timer:'));
-  command.addOption(numberOption('--counter-bits <bits>', 'counter width, 8..32 (default 16)').helpGroup('Timer:'));
-  command.addOption(numberOption('--dead-time <seconds>', 'dead time between complementary outputs, s (default 0)').helpGroup('Timer:'));
-  command.addOption(new Option('--dead-time-method <method>', 'compare-offset or dead-time-register (default by counting mode)').helpGroup('Timer:'));
-  command.addOption(numberOption('--table-length <entries>', 'entries per fundamental period, a divisor of the compare updates per period').helpGroup('Timer:'));
+  command.addOption(
+    numberOption(
+      '--timer-clock <hertz>',
+      'timer input clock after the prescaler, Hz (required unless the input file is a timer-table request)',
+    ).helpGroup('Timer:'),
+  );
+  command.addOption(
+    new Option(
+      '--counting-mode <mode>',
+      'edge-aligned or centre-aligned (default centre-aligned)',
+    ).helpGroup('Timer:'),
+  );
+  command.addOption(
+    numberOption('--counter-bits <bits>', 'counter width, 8..32 (default 16)').helpGroup('Timer:'),
+  );
+  command.addOption(
+    numberOption(
+      '--dead-time <seconds>',
+      'dead time between complementary outputs, s (default 0)',
+    ).helpGroup('Timer:'),
+  );
+  command.addOption(
+    new Option(
+      '--dead-time-method <method>',
+      'compare-offset or dead-time-register (default by counting mode)',
+    ).helpGroup('Timer:'),
+  );
+  command.addOption(
+    numberOption(
+      '--table-length <entries>',
+      'entries per fundamental period, a divisor of the compare updates per period',
+    ).helpGroup('Timer:'),
+  );
   return command;
 }
 
@@ -60,7 +87,10 @@ export interface TimerInput {
  */
 export function readTimerTable(file: string | undefined, flags: TimerInputFlags): TimerInput {
   const { options, prefix, fromDesign, notes, messages } = timerInput(file, flags);
-  const table = callLibrary(() => timerTable(options), fromDesign ? { rename: DESIGN_FIELD_PATHS, notes } : { notes });
+  const table = callLibrary(
+    () => timerTable(options),
+    fromDesign ? { rename: DESIGN_FIELD_PATHS, notes } : { notes },
+  );
   return { table, ...(prefix === undefined ? {} : { prefix }), messages };
 }
 
@@ -72,23 +102,42 @@ export function readTimerTable(file: string | undefined, flags: TimerInputFlags)
 function timerInput(
   file: string | undefined,
   flags: TimerInputFlags,
-): { options: TimerTableOptions; prefix?: string; fromDesign: boolean; notes: Map<string, string>; messages: string[] } {
+): {
+  options: TimerTableOptions;
+  prefix?: string;
+  fromDesign: boolean;
+  notes: Map<string, string>;
+  messages: string[];
+} {
   const notes = new Map<string, string>();
   const messages: string[] = [];
   let options: Record<string, unknown>;
   let prefix: unknown = flags.prefix;
-  const request = file === undefined ? undefined : readDataFile(file, 'input file');
-  const isRequest = typeof request === 'object' && request !== null && !Array.isArray(request) && 'timerClock' in request;
+  const request = file === undefined ? undefined : readDataFile(file, 'design file');
+  const isRequest =
+    typeof request === 'object' &&
+    request !== null &&
+    !Array.isArray(request) &&
+    'timerClock' in request;
   if (isRequest) {
-    const given = DESIGN_FLAGS.filter(({ key }) => flags[key] !== undefined).map(({ flag }) => flag.split(' ')[0]);
+    const given = DESIGN_FLAGS.filter(({ key }) => flags[key] !== undefined).map(
+      ({ flag }) => flag.split(' ')[0],
+    );
     if (given.length > 0 || flags.set !== undefined) {
-      throw new InputError(given[0] ?? '--set', `${given[0] ?? '--set'} sets a design field, but ${file} is a timer-table request (it holds timerClock); change the request or give a design instead`);
+      throw new InputError(
+        given[0] ?? '--set',
+        `${given[0] ?? '--set'} sets a design field, but ${file} is a timer-table request (it holds timerClock); change the request or give a design instead`,
+      );
     }
     const { prefix: requestPrefix, ...rest } = request as Record<string, unknown>;
     options = rest;
     prefix ??= requestPrefix;
   } else {
-    const { design } = readCheckedDesign(file, flags);
+    const { design } = readCheckedDesign(
+      file,
+      flags,
+      file === undefined ? undefined : { document: request },
+    );
     const { fields, notes: designNotes } = timerOptionsFromDesign(design);
     options = { ...fields };
     messages.push(...designNotes);
@@ -96,7 +145,12 @@ function timerInput(
       const flag = DESIGN_FLAGS.find((d) => `design.${d.path}` === path);
       if (flag === undefined) continue;
       const name = flag.flag.split(' ')[0] as string;
-      notes.set(path, flags[flag.key] !== undefined ? `from ${name}` : `set it in the design file or with ${name}`);
+      notes.set(
+        path,
+        flags[flag.key] !== undefined
+          ? `from ${name}`
+          : `set it in the design file or with ${name}`,
+      );
     }
   }
   for (const { flag, key } of TIMER_FLAGS) {
@@ -107,7 +161,8 @@ function timerInput(
       notes.set(key, `give ${flag}`);
     }
   }
-  if (prefix !== undefined && typeof prefix !== 'string') throw new InputError('prefix', `prefix must be a C identifier; got ${JSON.stringify(prefix)}`);
+  if (prefix !== undefined && typeof prefix !== 'string')
+    throw new InputError('prefix', `prefix must be a C identifier; got ${JSON.stringify(prefix)}`);
   return {
     options: options as unknown as TimerTableOptions,
     ...(prefix === undefined ? {} : { prefix }),
@@ -116,4 +171,3 @@ function timerInput(
     messages,
   };
 }
-

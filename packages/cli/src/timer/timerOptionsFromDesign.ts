@@ -2,7 +2,10 @@ import type { InverterDesign, TimerModulation, TimerTableOptions } from '@pulsew
 import { InputError } from '../errors.js';
 
 /** The timer-table fields a design supplies (the rest are the timer's: clock, counting mode, dead time, …). */
-export type DesignTimerFields = Pick<TimerTableOptions, 'modulation' | 'fundamentalFrequency' | 'carrierFrequency' | 'vdc' | 'sampling'>;
+export type DesignTimerFields = Pick<
+  TimerTableOptions,
+  'modulation' | 'fundamentalFrequency' | 'carrierFrequency' | 'vdc' | 'sampling'
+>;
 
 /**
  * The fields of a timer table that a checked {@link InverterDesign} supplies: its modulation as
@@ -13,7 +16,10 @@ export type DesignTimerFields = Pick<TimerTableOptions, 'modulation' | 'fundamen
  * @throws InputError naming the design field a timer table cannot follow (the method, a carrier
  *   phase, a zero sequence the table does not offer)
  */
-export function timerOptionsFromDesign(design: InverterDesign): { fields: DesignTimerFields; notes: string[] } {
+export function timerOptionsFromDesign(design: InverterDesign): {
+  fields: DesignTimerFields;
+  notes: string[];
+} {
   const { modulation } = design;
   const notes: string[] = [];
   if (modulation.method !== 'sine-triangle' && modulation.method !== 'three-phase') {
@@ -33,17 +39,29 @@ export function timerOptionsFromDesign(design: InverterDesign): { fields: Design
     timerModulation = { method: 'sine-triangle', scheme: modulation.scheme, ma: modulation.ma };
   } else {
     const zeroSequence = modulation.zeroSequence;
-    if (zeroSequence !== undefined && zeroSequence !== 'none' && zeroSequence !== 'third-harmonic' && zeroSequence !== 'min-max') {
+    if (
+      zeroSequence !== undefined &&
+      zeroSequence !== 'none' &&
+      zeroSequence !== 'third-harmonic' &&
+      zeroSequence !== 'min-max'
+    ) {
       throw new InputError(
         'design.modulation.zeroSequence',
         `design.modulation.zeroSequence must be one of 'none', 'third-harmonic', 'min-max' for a timer table; got ${JSON.stringify(zeroSequence)}`,
       );
     }
-    timerModulation = { method: 'three-phase', ma: modulation.ma, ...(zeroSequence === undefined ? {} : { zeroSequence }) };
+    timerModulation = {
+      method: 'three-phase',
+      ma: modulation.ma,
+      ...(zeroSequence === undefined ? {} : { zeroSequence }),
+    };
   }
-  const sampling = modulation.sampling === 'regular-asymmetric' ? 'regular-asymmetric' : 'regular-symmetric';
+  const sampling =
+    modulation.sampling === 'regular-asymmetric' ? 'regular-asymmetric' : 'regular-symmetric';
   if (modulation.sampling === undefined || modulation.sampling === 'natural') {
-    notes.push("the design's natural sampling becomes regular-symmetric in the timer table (one compare value per carrier period)");
+    notes.push(
+      "the design's natural sampling becomes regular-symmetric in the timer table (one compare value per carrier period)",
+    );
   }
   return {
     fields: {
