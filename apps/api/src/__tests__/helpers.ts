@@ -2,7 +2,7 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
-import { createApp, type AppConfig, type PulsewrightApp } from '../app.js';
+import { createApp, type ConfigOverrides, type PulsewrightApp } from '../app.js';
 import { readMailDrop, type DeliveredMail } from '../services/mail.js';
 
 export const DEMO_PASSWORD = 'test-demo-password';
@@ -25,7 +25,7 @@ export interface TestApp {
 }
 
 /** A fresh app on a new temporary SQLite file, seeded with the demo (bcrypt cost 4 for speed). */
-export async function testApp(overrides: Partial<AppConfig> = {}, dir?: string): Promise<TestApp> {
+export async function testApp(overrides: ConfigOverrides = {}, dir?: string): Promise<TestApp> {
   const folder = dir ?? mkdtempSync(path.join(tmpdir(), 'pulsewright-api-'));
   const file = path.join(folder, 'test.sqlite');
   const app = await createApp({

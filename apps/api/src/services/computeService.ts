@@ -54,18 +54,19 @@ export class ComputeService {
   }
 
   /** The cost of a design report, with the report's own bound on its time series. */
-  private reportCost(design: InverterDesign, options: AnalyseDesignOptions, field: string): CostEstimate {
-    const cost = reportCost(design, options, field);
+  private reportCost(design: InverterDesign, options: AnalyseDesignOptions, field: string, optionFields?: readonly string[]): CostEstimate {
+    const cost = reportCost(design, options, field, optionFields);
     assertReportSeries(cost);
     return cost;
   }
 
-  report(design: InverterDesign, options: AnalyseDesignOptions = {}, field = 'design') {
-    return this.run('designReport', { design, options, field }, this.reportCost(design, options, field), 'This design report');
+  /** The design report; `optionFields` are the options the caller can lower (none for a shared report). */
+  report(design: InverterDesign, options: AnalyseDesignOptions = {}, field = 'design', optionFields?: readonly string[]) {
+    return this.run('designReport', { design, options, field }, this.reportCost(design, options, field, optionFields), 'This design report');
   }
 
   loadCurrent(design: InverterDesign, points?: number) {
-    const cost = this.reportCost(design, points === undefined ? {} : { points }, 'design');
+    const cost = this.reportCost(design, points === undefined ? {} : { points }, 'design', ['points']);
     return this.run('loadCurrent', { design, ...(points === undefined ? {} : { points }) }, cost, 'This load-current analysis');
   }
 
@@ -74,13 +75,13 @@ export class ComputeService {
   }
 
   harmonicLimits(design: InverterDesign, busVoltage?: number) {
-    const cost = this.reportCost(design, busVoltage === undefined ? {} : { busVoltage }, 'design');
+    const cost = this.reportCost(design, busVoltage === undefined ? {} : { busVoltage }, 'design', []);
     return this.run('limits', { design, ...(busVoltage === undefined ? {} : { busVoltage }) }, cost, 'This limit check');
   }
 
   /** A study's design checked by a trial analysis before it is stored (compute.ts assertDesign). */
   async assertDesign(design: InverterDesign, field = 'design'): Promise<void> {
-    await this.run('assertDesign', { design, field }, this.reportCost(design, { maxOrder: 50, points: 64 }, field), 'The check of this design');
+    await this.run('assertDesign', { design, field }, this.reportCost(design, { maxOrder: 50, points: 64 }, field, []), 'The check of this design');
   }
 
   designSpectrum(design: InverterDesign, maxOrder: number, field = 'design') {

@@ -144,7 +144,12 @@ function designEdges(design: InverterDesign, ratio: number): { phase: number; li
  * of `points` samples (1 + 3 per phase with a filter, one per phase with a load alone).
  * @param field - where the design sits in the request (`design`, `study.design`)
  */
-export function reportCost(design: InverterDesign, options: AnalyseDesignOptions, field = 'design'): CostEstimate & { series: number; points: number } {
+export function reportCost(
+  design: InverterDesign,
+  options: AnalyseDesignOptions,
+  field = 'design',
+  optionFields: readonly string[] = ['maxOrder', 'points'],
+): CostEstimate & { series: number; points: number } {
   const pattern = !CARRIER_METHODS.includes(design.modulation.method);
   const ratio = pattern ? 0 : Math.round((design.carrierFrequency ?? 0) / design.fundamentalFrequency);
   const maxOrder = options.maxOrder ?? defaultSpectrumOrder(design);
@@ -153,18 +158,32 @@ export function reportCost(design: InverterDesign, options: AnalyseDesignOptions
   const edges = designEdges(design, ratio);
   const filtered = design.filter !== undefined && design.filter !== null;
   const analysisOrder = filtered ? Math.min(MAX_ANALYSIS_ORDER, Math.max(maxOrder, pattern ? 2000 : 10 * ratio + 10)) : maxOrder;
-  const spectra = (edges.phase + edges.line) * maxOrder + (filtered ? phases * edges.phase * analysisOrder : 0);
+  const spectra = (edges.phase + edges.line) * maxOrder;
+  const throughFilter = filtered ? phases * edges.phase * analysisOrder : 0;
   const series = (filtered ? 1 + 3 * phases : 0) + (!filtered && design.load ? phases : 0);
+  const sampled = series * points * 20;
   const build = (phases === 3 ? 3 : 1) * (edges.phase + edges.line) * BUILD_PER_EDGE;
   const voltages = phases === 3 ? 9 : 1;
-  const lead = filtered && analysisOrder > maxOrder ? `${field}.carrierFrequency` : 'maxOrder';
+  // The fields to lower, the largest share of the work first (the carrier sets the edges of every
+  // sum, but is named first only where it also sets the filter's analysis order); options the
+  // route does not take are left out.
+  const fromCarrier = analysisOrder > maxOrder ? throughFilter : 0;
+  const shares: [string, number][] = [
+    [`${field}.carrierFrequency`, pattern ? 0 : build + fromCarrier],
+    ['maxOrder', spectra + throughFilter - fromCarrier],
+    ['points', sampled],
+  ];
+  const fields = shares
+    .filter(([name, share]) => share > 0 && (name.startsWith(`${field}.`) || optionFields.includes(name)))
+    .sort((a, b) => b[1] - a[1])
+    .map(([name]) => name);
   return {
-    work: spectra + build + series * points * 20,
-    basis: `${edges.phase + edges.line} edges × ${maxOrder} orders${filtered ? ` + ${phases} × ${edges.phase} edges × ${analysisOrder} orders through the filter` : ''}`,
-    fields: [lead, lead === 'maxOrder' ? `${field}.carrierFrequency` : 'maxOrder'],
+    work: spectra + throughFilter + build + sampled,
+    basis: `${edges.phase + edges.line} edges × ${maxOrder} orders${filtered ? ` + ${phases} × ${edges.phase} edges × ${analysisOrder} orders through the filter` : ''}${series ? ` + ${series} series × ${points} points` : ''}`,
+    fields: fields.length ? fields : [field],
     // Labelled spectra (about five numbers an order and voltage), time series, and the edges of each voltage.
     responseBytes: BYTES_PER_NUMBER * (5 * (maxOrder + 1) * (filtered ? 3 : 2) + series * points + 2 * voltages * (edges.phase + edges.line)),
-    responseFields: ['maxOrder', 'points'],
+    responseFields: ['maxOrder', 'points'].filter((name) => optionFields.includes(name)),
     series,
     points,
   };
@@ -179,7 +198,7 @@ export function designSpectrumCost(design: InverterDesign, maxOrder: number, fie
   return {
     work: 3 * (edges.phase + edges.line) * BUILD_PER_EDGE + analysed * (maxOrder + 1),
     basis: `${analysed} edges × ${maxOrder + 1} orders`,
-    fields: ['maxOrder', `${field}.carrierFrequency`],
+    fields: pattern ? ['maxOrder'] : ['maxOrder', `${field}.carrierFrequency`],
     responseBytes: (maxOrder + 1) * 3 * BYTES_PER_NUMBER,
     responseFields: ['maxOrder'],
   };
@@ -211,8 +230,8 @@ export function captureSpectrumCost(samples: number, maxOrder: number): CostEsti
   const stages = Math.max(1, Math.ceil(Math.log2(Math.max(2, samples))));
   return {
     work: 10 * samples * stages,
-    basis: `${samples} samples × ${stages} FFT stages`,
-    fields: ['file'],
+    basis: `the capture's ${samples} samples × ${stages} FFT stages`,
+    fields: ['id'],
     responseBytes: (maxOrder + 1) * 5 * BYTES_PER_NUMBER,
     responseFields: ['maxOrder'],
   };

@@ -193,9 +193,9 @@ export class JobService {
     await Promise.allSettled([...this.running]);
   }
 
-  /** Resolves when every background job has finished (tests). */
+  /** Resolves when every running job has finished, and those that started after them (tests). */
   async idle(): Promise<void> {
-    while (this.running.size || this.waiting.length) await Promise.allSettled([...this.running]);
+    while (this.running.size) await Promise.allSettled([...this.running]);
   }
 }
 

@@ -43,7 +43,7 @@ export class StudyShareService {
   async share(principal: Principal, studyId: string, input: ShareInput): Promise<StudyShareDto> {
     const study = await this.studies.find(principal.teamId, studyId);
     const revision = await this.models.StudyRevision.findOne({ where: { studyId: study.id, revision: study.currentRevision } });
-    const report = revision?.design ? await this.compute.report(revision.design, {}, 'study.design') : null;
+    const report = revision?.design ? await this.compute.report(revision.design, {}, 'study.design', []) : null;
     const author = revision?.authorId ? await this.models.User.findByPk(revision.authorId) : null;
     const to = input.email.toLowerCase();
     const link = `${this.publicUrl}/studies/${study.id}/report`;
