@@ -194,6 +194,21 @@ describe('compute pool', () => {
       expect(refusedHere.status).toBe(400);
       expect(refusedHere.body.errors[0].path).toMatch(/^modulation\.angles/);
       expect(refusedThere.body).toEqual(refusedHere.body);
+      // A capture is read in a worker too: the same capture stored, the same refusal naming the line.
+      const engineerHere = `Bearer ${await signIn(inline.app, DEMO.engineer)}`;
+      const engineerThere = `Bearer ${await signIn(pooled.app, DEMO.engineer)}`;
+      const upload = (app: TestApp['app'], token: string, content: string) =>
+        request(app).post('/api/v1/captures').set('Authorization', token).attach('file', Buffer.from(content), 'bench.csv');
+      const good = captureCsv(2000, 20000);
+      const storedHere = await upload(inline.app, engineerHere, good);
+      const storedThere = await upload(pooled.app, engineerThere, good);
+      expect(storedThere.status).toBe(201);
+      expect({ ...storedThere.body, id: '', createdAt: '' }).toEqual({ ...storedHere.body, id: '', createdAt: '' });
+      const hostile = good.replace(/\n[^\n]*\n/, '\n0.1,=HYPERLINK("x"),1\n');
+      const badHere = await upload(inline.app, engineerHere, hostile);
+      const badThere = await upload(pooled.app, engineerThere, hostile);
+      expect(badHere.status).toBe(400);
+      expect(badThere.body).toEqual(badHere.body);
     } finally {
       await inline.dispose();
       await pooled.dispose();

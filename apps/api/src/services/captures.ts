@@ -2,7 +2,7 @@ import type { FftWindowName } from '@pulsewright/modulation';
 import type { CaptureRow, Models } from '../models/index.js';
 import { badRequest, notFound } from '../http/errors.js';
 import type { AuditLog } from './audit.js';
-import { parseCaptureCsv, sanitiseFileName } from './captureCsv.js';
+import { sanitiseFileName } from './captureCsv.js';
 import type { ComputeService } from './computeService.js';
 import { iso } from './dto.js';
 import type { Principal } from './principal.js';
@@ -46,7 +46,7 @@ export class CaptureService {
   ): Promise<CaptureDto> {
     // Everything is checked before anything is written: a rejected file stores nothing.
     if (fields.projectId) await this.projects.find(principal.teamId, fields.projectId);
-    const parsed = parseCaptureCsv(file.buffer);
+    const parsed = await this.compute.parseCapture(file.buffer);
     const fileName = sanitiseFileName(file.originalname);
     const row = await this.models.Capture.create({
       teamId: principal.teamId,

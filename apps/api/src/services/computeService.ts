@@ -13,6 +13,7 @@ import {
   assertReportSeries,
   assertWithinBudget,
   captureSpectrumCost,
+  captureUploadCost,
   designSpectrumCost,
   reportCost,
   spaceVectorCost,
@@ -37,8 +38,8 @@ export class ComputeService {
   ) {}
 
   /** Runs a task where its cost says, after the budget check. */
-  private async run<N extends ComputeTaskName>(name: N, args: TaskArgs<N>, cost: CostEstimate, what: string): Promise<TaskResult<N>> {
-    assertWithinBudget(cost, 'request', this.limits);
+  private async run<N extends ComputeTaskName>(name: N, args: TaskArgs<N>, cost: CostEstimate, what: string, budgeted = true): Promise<TaskResult<N>> {
+    if (budgeted) assertWithinBudget(cost, 'request', this.limits);
     if (cost.work <= this.limits.inlineWorkLimit) {
       return (COMPUTE_TASKS[name] as (a: TaskArgs<N>) => TaskResult<N>)(args);
     }
@@ -96,6 +97,12 @@ export class ComputeService {
   spaceVector(m: number, theta: number, options: SpaceVectorSequenceOptions) {
     assertWithinBudget(spaceVectorCost(), 'request', this.limits);
     return computeSpaceVector(m, theta, options);
+  }
+
+  /** An uploaded capture checked and parsed (services/captureCsv.ts), in a worker unless it is small. */
+  parseCapture(file: Buffer) {
+    // Bounded by the upload limit (5 MB) rather than by the request budget.
+    return this.run('parseCapture', { file }, captureUploadCost(file.length), 'Reading this capture', false);
   }
 
   captureSpectrum(samples: readonly number[], sampleRate: number, options: { window: FftWindowName; maxOrder: number; fundamentalFrequency?: number }) {

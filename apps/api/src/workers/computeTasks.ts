@@ -13,6 +13,7 @@ import {
   type TimerFormat,
   type VoltageOutput,
 } from '../services/compute.js';
+import { parseCaptureCsv } from '../services/captureCsv.js';
 import { maSweepChunk, sheSweepChunk, type MaSweepInput, type SheSweepInput } from '../services/sweeps.js';
 
 /**
@@ -38,6 +39,8 @@ export const COMPUTE_TASKS = {
     sampleRate: number;
     options: { window: FftWindowName; maxOrder: number; fundamentalFrequency?: number };
   }) => analyseSamples(a.samples, a.sampleRate, a.options),
+  // A Buffer arrives as a Uint8Array over the same memory.
+  parseCapture: (a: { file: Uint8Array }) => parseCaptureCsv(Buffer.from(a.file.buffer, a.file.byteOffset, a.file.byteLength)),
   maSweepChunk: (a: { input: MaSweepInput; index: number }) => maSweepChunk(a.input, a.index),
   sheSweepChunk: (a: { input: SheSweepInput; index: number; seed?: number[] }) => sheSweepChunk(a.input, a.index, a.seed),
 } as const;
