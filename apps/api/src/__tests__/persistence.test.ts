@@ -73,7 +73,8 @@ describe('storage', () => {
   }
   it.skipIf(!postgresUrl)('migrates, seeds, keeps revisions and survives a restart on PostgreSQL', async () => {
     const options = { databaseUrl: postgresUrl as string, bcryptRounds: 4, logErrors: false, demoPassword: DEMO_PASSWORD };
-    const first = await createApp(options);
+    // No job slot, so started jobs stay queued and the quota's count is exact.
+    const first = await createApp({ ...options, compute: { jobConcurrency: 0, userJobQuota: 2 } });
     let studyId: number;
     const auth = { Authorization: `Bearer ${await signIn(first, DEMO.engineer)}` };
     try {
@@ -90,6 +91,10 @@ describe('storage', () => {
       );
       // Optimistic concurrency holds on PostgreSQL too: one edit wins, the stale ones get 409.
       expect(edits.map((e) => e.status).sort()).toEqual([200, 409, 409]);
+      // So does the job quota (an advisory lock per team): of five concurrent starts, two win.
+      const sweep = { kind: 'bipolar', vdc: 100, count: 3, eliminate: [3, 5], fundamental: { from: 30, to: 90, points: 25 } };
+      const starts = await Promise.all(Array.from({ length: 5 }, () => request(first).post('/api/v1/jobs/she-sweeps').set(auth).send(sweep)));
+      expect(starts.map((s) => s.status).sort()).toEqual([202, 202, 429, 429, 429]);
     } finally {
       await first.close();
     }

@@ -96,12 +96,17 @@ export class JobService {
 
   /**
    * Counts the caller's and the team's queued and running jobs and stores the new one as queued,
-   * in one write transaction (SQLite's writers take turns), so concurrent starts cannot both slip
-   * under a quota.
+   * in one write transaction, so concurrent starts cannot both slip under a quota: SQLite's
+   * writers take turns; on PostgreSQL a transaction-scoped advisory lock on the team does the
+   * same across replicas.
    */
   private async reserve(principal: Principal, kind: string, input: Record<string, unknown>): Promise<JobRow> {
     const active = { status: { [Op.in]: ['queued', 'running'] } };
-    return this.models.sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
+    const { sequelize } = this.models;
+    return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
+      if (sequelize.getDialect() === 'postgres') {
+        await sequelize.query('SELECT pg_advisory_xact_lock(hashtext(:key))', { replacements: { key: `jobs:${principal.teamId}` }, transaction });
+      }
       const mine = await this.models.Job.count({ where: { ...active, userId: principal.user.id }, transaction });
       if (mine >= this.limits.userJobQuota) {
         throw new HttpError(
