@@ -101,7 +101,7 @@ export async function createApp(overrides: ConfigOverrides = {}): Promise<Pulsew
     OpenApiValidator.middleware({
       apiSpec: documentForValidator(document) as never,
       validateRequests: { allErrors: true, discriminator: true, allowUnknownQueryParameters: false },
-      validateResponses: true,
+      validateResponses: config.validateResponses,
       validateSecurity: { handlers: { bearerAuth: createAuthorizer(services.auth) } },
       ignorePaths: (path: string) => !path.startsWith('/api/') || path.startsWith('/api/docs') || path === '/api/openapi.json',
       fileUploader: { storage: multer.memoryStorage(), limits: { fileSize: MAX_UPLOAD_BYTES, files: 1, fields: 10 } },

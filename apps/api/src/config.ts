@@ -51,6 +51,12 @@ export interface AppConfig {
   webDist: string;
   /** Write request errors (5xx) to stderr. @default true */
   logErrors: boolean;
+  /**
+   * Check every JSON answer against the OpenAPI document before sending it (a mismatch is a 500,
+   * logged). VALIDATE_RESPONSES=false turns it off (bench/throughput.ts measures both); the tests
+   * keep it on. @default true
+   */
+  validateResponses: boolean;
   /** Budgets and limits of the compute routes and jobs (services/cost.ts, services/computePool.ts). */
   compute: ComputeLimits;
 }
@@ -130,6 +136,7 @@ export function loadConfig(
     bcryptRounds: number('BCRYPT_ROUNDS', 12),
     webDist: env.WEB_DIST || path.join(repoRoot, 'apps', 'web', 'dist'),
     logErrors: env.LOG_ERRORS !== 'false',
+    validateResponses: env.VALIDATE_RESPONSES !== 'false',
     ...overrides,
     compute: { ...computeLimits(env, number), ...overrides.compute },
   };

@@ -28,6 +28,20 @@ export function asBadRequest(prefix: string, error: unknown, unprefixed: readonl
   return error;
 }
 
+/** Whether every number in `value` (to the depth firstNonFinite looks) is finite; builds no strings. */
+function allFinite(value: unknown, depth = 0): boolean {
+  if (typeof value === 'number') return Number.isFinite(value);
+  if (depth > 8 || value === null || typeof value !== 'object') return true;
+  if (Array.isArray(value)) {
+    for (let i = 0; i < value.length; i++) if (!allFinite(value[i], depth + 1)) return false;
+    return true;
+  }
+  for (const key in value) {
+    if (Object.hasOwn(value, key) && !allFinite((value as Record<string, unknown>)[key], depth + 1)) return false;
+  }
+  return true;
+}
+
 /** The JSON path of the first number in `value` that is NaN or ±∞, or undefined when all are finite. */
 function firstNonFinite(value: unknown, at: string, depth = 0): string | undefined {
   if (typeof value === 'number') return Number.isFinite(value) ? undefined : at;
@@ -52,8 +66,9 @@ function firstNonFinite(value: unknown, at: string, depth = 0): string | undefin
  * whose values are too extreme, never a 500.
  */
 export function finiteResult<T>(field: string, result: T): T {
-  const where = firstNonFinite(result, '');
-  if (where === undefined) return result;
+  // The common case (all finite) is checked without building a path for every element.
+  if (allFinite(result)) return result;
+  const where = firstNonFinite(result, '') as string;
   const message = `${field} holds values so extreme that ${where} is not a finite number in double precision; use values nearer the documented working range`;
   throw new HttpError(400, message, [{ path: field, message }]);
 }
