@@ -8,7 +8,8 @@
 // RESTART_MAX_DELAY_MS (default 30 s) and back to 1 s once a run has lasted a minute. Each start
 // marks the jobs the last run left queued or running as failed. Five runs in a row that each end
 // within 10 s of their start are a crash loop (a bad setting, a database that cannot open): the
-// supervisor then stops with exit code 1 rather than retry forever. SIGINT and SIGTERM are passed
+// supervisor then stops with exit code 1 rather than retry forever (RESTART_DELAY_MS sets the first
+// pause, 1 s by default). SIGINT and SIGTERM are passed
 // to the service, and the supervisor exits with the service's code once it has stopped.
 // PULSEWRIGHT_NO_BUILD=1 skips the build (the tests use it on a tree built already).
 import { spawn, spawnSync } from 'node:child_process';
@@ -52,7 +53,7 @@ if (process.env.PULSEWRIGHT_NO_BUILD !== '1') {
   process.exit(1);
 }
 
-const FIRST_DELAY_MS = 1000;
+const FIRST_DELAY_MS = Number(process.env.RESTART_DELAY_MS) > 0 ? Number(process.env.RESTART_DELAY_MS) : 1000;
 const MAX_DELAY_MS = Number(process.env.RESTART_MAX_DELAY_MS) > 0 ? Number(process.env.RESTART_MAX_DELAY_MS) : 30_000;
 /** A run this long resets the back-off. */
 const HEALTHY_RUN_MS = 60_000;

@@ -50,34 +50,56 @@ const alive = (pid: number): boolean => {
   }
 };
 
+function supervise(dir: string, port: number, extra: Record<string, string> = {}) {
+  const child = spawn(process.execPath, [path.join(repoRoot, 'scripts', 'start.mjs')], {
+    cwd: repoRoot,
+    env: {
+      PATH: process.env.PATH ?? '',
+      PULSEWRIGHT_NO_BUILD: '1',
+      NODE_ENV: 'production',
+      PORT: String(port),
+      HOST: '127.0.0.1',
+      DATABASE_URL: `sqlite:${path.join(dir, 'supervised.sqlite')}`,
+      DEMO_PASSWORD,
+      BCRYPT_ROUNDS: '4',
+      MAIL_DIR: path.join(dir, 'mail'),
+      WEB_DIST: path.join(tmpdir(), 'pulsewright-no-web'),
+      SCARF_ANALYTICS: 'false',
+      ...extra,
+    },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  let output = '';
+  child.stdout.on('data', (chunk: Buffer) => (output += chunk.toString()));
+  child.stderr.on('data', (chunk: Buffer) => (output += chunk.toString()));
+  const exited = new Promise<number | string | null>((resolve) => child.once('exit', (code, signal) => resolve(code ?? signal)));
+  return { child, exited, output: () => output };
+}
+
 describe('supervision of npm start', () => {
+  it('stops with exit code 1 on a crash loop (a setting the service refuses at start), after five quick exits', async () => {
+    const dir = tempDir('supervisor-loop');
+    dirs.push(dir);
+    const { child, exited, output } = supervise(dir, await freePort(), { TRUST_PROXY: 'true', RESTART_DELAY_MS: '50' });
+    try {
+      expect(await exited).toBe(1);
+      expect(output().match(/service started \(pid \d+\)/g)).toHaveLength(5);
+      expect(output()).toContain('restarting it in 0.05 s');
+      expect(output()).toContain('restarting it in 0.4 s');
+      expect(output()).toContain('5 times in a row within 10 s of starting; not restarting it');
+      expect(output()).toContain('TRUST_PROXY=true would trust any X-Forwarded-For');
+    } finally {
+      if (child.exitCode === null && child.signalCode === null) child.kill('SIGKILL');
+    }
+  });
+
   it('restarts the service after SIGKILL, marks the interrupted job failed, and stops on SIGTERM', async () => {
     const dir = tempDir('supervisor');
     dirs.push(dir);
     const port = await freePort();
     const baseUrl = `http://127.0.0.1:${port}`;
-    const supervisor = spawn(process.execPath, [path.join(repoRoot, 'scripts', 'start.mjs')], {
-      cwd: repoRoot,
-      env: {
-        PATH: process.env.PATH ?? '',
-        PULSEWRIGHT_NO_BUILD: '1',
-        NODE_ENV: 'production',
-        PORT: String(port),
-        HOST: '127.0.0.1',
-        DATABASE_URL: `sqlite:${path.join(dir, 'supervised.sqlite')}`,
-        DEMO_PASSWORD,
-        BCRYPT_ROUNDS: '4',
-        MAIL_DIR: path.join(dir, 'mail'),
-        WEB_DIST: path.join(tmpdir(), 'pulsewright-no-web'),
-        SCARF_ANALYTICS: 'false',
-      },
-      stdio: ['ignore', 'pipe', 'pipe'],
-    });
-    let output = '';
-    supervisor.stdout.on('data', (chunk: Buffer) => (output += chunk.toString()));
-    supervisor.stderr.on('data', (chunk: Buffer) => (output += chunk.toString()));
-    const exited = new Promise<number | string | null>((resolve) => supervisor.once('exit', (code, signal) => resolve(code ?? signal)));
-    const pids = () => [...output.matchAll(/service started \(pid (\d+)\)/g)].map((m) => Number(m[1]));
+    const { child: supervisor, exited, output: log } = supervise(dir, port);
+    const pids = () => [...log().matchAll(/service started \(pid (\d+)\)/g)].map((m) => Number(m[1]));
     try {
       await waitFor('the first start', () => healthy(baseUrl));
       const [first] = pids();
@@ -94,8 +116,8 @@ describe('supervision of npm start', () => {
       expect(second).not.toBe(first);
       expect(alive(first!)).toBe(false);
       await waitFor('the restarted service', () => healthy(baseUrl));
-      expect(output).toContain('the service exited (signal SIGKILL)');
-      expect(output).toMatch(/restarting it in 1 s/);
+      expect(log()).toContain('the service exited (signal SIGKILL)');
+      expect(log()).toMatch(/restarting it in 1 s/);
 
       // Sessions live in the database, so the old token still works; a new sign-in does too.
       const again = await signInOver(baseUrl, DEMO.viewer);
