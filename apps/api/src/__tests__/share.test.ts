@@ -47,7 +47,7 @@ describe('e-mailing a study report', () => {
     expect(mail!.text).toContain('Revision: 2');
     expect(mail!.text).toContain(DEMO.engineer); // author of revision 2 and the sender
     expect(mail!.text).toContain('Please check the 19th sideband.');
-    // The caution sentence of REFERENCES.md, "Cautions".
+    // The caution sentence of docs/references.md, "Cautions".
     expect(mail!.text).toContain('Inverter DC buses and outputs are lethal.');
     // Its figures are the design report's of revision 2 (the exact whole-waveform THD, the limit result).
     const report = (await request(t.app).get(`/api/v1/studies/${studyId}/report`).set(engineer)).body;

@@ -43,7 +43,7 @@ describe('space-vector and harmonic-elimination studies', () => {
     const h = spectrum.harmonics;
     // Staircase Fourier series b_n = (4·vdc/(nπ))·Σ cos nα_k (Patel and Hoft 1973): b_1 = (4·vdc/π)·cos(π/6).
     expect(h[1]!.amplitude).toBeCloseTo(((4 * vdc) / Math.PI) * Math.cos(Math.PI / 6), 9);
-    // The eliminated order, by the exact spectrum, below 1e-9 of the fundamental (REFERENCES.md, SHE).
+    // The eliminated order, by the exact spectrum, below 1e-9 of the fundamental (docs/references.md, SHE).
     expect(h[3]!.amplitude / h[1]!.amplitude).toBeLessThan(1e-9);
     // b_5 = (4·vdc/(5π))·|cos(5π/6)| from the same series.
     expect(h[5]!.amplitude).toBeCloseTo(((4 * vdc) / (5 * Math.PI)) * Math.cos(Math.PI / 6), 9);
@@ -67,7 +67,7 @@ describe('space-vector and harmonic-elimination studies', () => {
     expect(updated.status, JSON.stringify(updated.body)).toBe(200);
     expect(updated.body).toMatchObject({ revision: 2, design: { modulation: { angles: second.angles, fundamental: 170 } } });
     const h = (await spectrumOf(created.body.id, 25)).harmonics;
-    // The solve's goal, checked on the saved study by the exact spectrum (REFERENCES.md, SHE residuals).
+    // The solve's goal, checked on the saved study by the exact spectrum (docs/references.md, SHE residuals).
     expect(h[1]!.amplitude).toBeCloseTo(170, 6);
     expect(h[5]!.amplitude / h[1]!.amplitude).toBeLessThan(1e-9);
     expect(h[7]!.amplitude / h[1]!.amplitude).toBeLessThan(1e-9);

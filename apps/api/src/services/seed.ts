@@ -4,7 +4,7 @@ import type { Services } from './index.js';
 import type { Principal } from './principal.js';
 import type { StudyContent } from './studies.js';
 
-/** The invented demo team (DESIGN.md, "Demo scenario"); every value below is made up. */
+/** The invented demo team (docs/architecture.md, "Demo scenario"); every value below is made up. */
 export const DEMO_USERS: readonly { email: string; name: string; role: Role }[] = [
   { email: 'admin@kestrel.example', name: 'Ada Marsh', role: 'admin' },
   { email: 'engineer@kestrel.example', name: 'Ravi Okafor', role: 'engineer' },

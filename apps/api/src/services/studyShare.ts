@@ -6,7 +6,7 @@ import type { Mailer } from './mail.js';
 import type { Principal } from './principal.js';
 import type { StudyService } from './studies.js';
 
-/** The hazard caution every shared report carries (REFERENCES.md, "Cautions"). */
+/** The hazard caution every shared report carries (docs/references.md, "Cautions"). */
 export const REPORT_CAUTION =
   'Inverter DC buses and outputs are lethal. Predictions here are idealised (ideal switches unless a loss or ' +
   'dead-time model is chosen) and are no substitute for measurement, protective design, and the codes and ' +

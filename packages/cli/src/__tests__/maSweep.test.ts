@@ -89,7 +89,7 @@ describe('pulsewright ma-sweep', () => {
       ]);
     });
     // In the linear range (ma ≤ 1) the fundamental of naturally sampled sine-triangle PWM is
-    // ma·vdc (common practice, REFERENCES.md); 1e-9 of vdc allows for rounding only.
+    // ma·vdc (common practice, docs/references.md); 1e-9 of vdc allows for rounding only.
     rows.slice(1).forEach((row) => {
       const [ma = NaN, fundamental = NaN] = row.split(',').map(Number);
       if (ma <= 1) expect(Math.abs(fundamental - 200 * ma)).toBeLessThan(200e-9);

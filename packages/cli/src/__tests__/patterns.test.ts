@@ -33,7 +33,7 @@ describe('pulsewright she', () => {
     });
     expect(JSON.parse(run.stdout)).toEqual(viaJson(expected));
     // Patel and Hoft (1973): the solved angles null the listed orders; checked on the exact
-    // spectrum by the library, below 1e-9 of the fundamental (REFERENCES.md).
+    // spectrum by the library, below 1e-9 of the fundamental (docs/references.md).
     for (const { amplitude } of expected.residual) expect(amplitude).toBeLessThan(1e-9 * 400);
   });
 

@@ -37,7 +37,7 @@ describe('pulsewright spectrum', () => {
     const expected = analyseDesign(bipolar, { maxOrder: 100, points: 64 }).bridge;
     expect(JSON.parse(run.stdout)).toEqual(viaJson(expected));
     // A check value the library did not compute: in the linear range the fundamental of bipolar
-    // sine-triangle PWM is ma·vdc = 320 V (common practice, REFERENCES.md), to rounding.
+    // sine-triangle PWM is ma·vdc = 320 V (common practice, docs/references.md), to rounding.
     expect(Math.abs(expected.fundamental - 320)).toBeLessThan(1e-9);
   });
 
@@ -88,7 +88,7 @@ describe('pulsewright spectrum', () => {
 
   it('agrees with the generalised harmonics table of bipolar PWM', async () => {
     // N. Mohan, T. M. Undeland, W. P. Robbins, Power Electronics, 3rd ed., 2003, ch. 8, the
-    // generalised harmonics table (recalled from memory, REFERENCES.md): at ma = 0.6 the mf
+    // generalised harmonics table (recalled from memory, docs/references.md): at ma = 0.6 the mf
     // component is 1.006, mf±2 0.131 and 2mf±1 0.370 of the bridge's level (vdc = 1 here). The
     // table holds three digits and assumes a large mf; mf = 41 leaves the groups apart, so
     // ±0.0006 covers its rounding.
