@@ -7,14 +7,23 @@ import globals from 'globals';
 
 export default tseslint.config(
   {
-    ignores: ['**/dist/**', '**/node_modules/**', '**/.turbo/**', '**/coverage/**', 'packages/client/src/schema.d.ts'],
+    ignores: [
+      '**/dist/**',
+      '**/node_modules/**',
+      '**/.turbo/**',
+      '**/coverage/**',
+      'packages/client/src/schema.d.ts',
+    ],
   },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {
     languageOptions: { globals: { ...globals.node } },
     rules: {
-      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_' },
+      ],
       'no-restricted-syntax': [
         'error',
         { selector: 'ExportDefaultDeclaration', message: 'Use named exports.' },
@@ -34,7 +43,15 @@ export default tseslint.config(
     rules: {
       'no-restricted-imports': [
         'error',
-        { patterns: [{ regex: '^\\.\\./\\.\\./[a-z-]+/', message: 'Features do not import other features; move shared code to lib/ or components/.' }] },
+        {
+          patterns: [
+            {
+              regex: '^\\.\\./\\.\\./[a-z-]+/',
+              message:
+                'Features do not import other features; move shared code to lib/ or components/.',
+            },
+          ],
+        },
       ],
     },
   },

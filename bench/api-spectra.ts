@@ -29,10 +29,19 @@ export interface ApiSpectraBenchReport {
   non2xx: number;
 }
 
-const MODULATION = { method: 'sine-triangle', scheme: 'bipolar', ma: 0.9, mf: 21, vdc: 400 } as const;
+const MODULATION = {
+  method: 'sine-triangle',
+  scheme: 'bipolar',
+  ma: 0.9,
+  mf: 21,
+  vdc: 400,
+} as const;
 const MAX_ORDER = 1050;
 
-export async function runApiSpectraBench({ durationSeconds = 5, connections = 8 } = {}): Promise<ApiSpectraBenchReport> {
+export async function runApiSpectraBench({
+  durationSeconds = 5,
+  connections = 8,
+} = {}): Promise<ApiSpectraBenchReport> {
   const dir = mkdtempSync(path.join(tmpdir(), 'pulsewright-bench-'));
   const app = await createApp({
     databaseUrl: `sqlite:${path.join(dir, 'bench.sqlite')}`,
@@ -45,20 +54,35 @@ export async function runApiSpectraBench({ durationSeconds = 5, connections = 8 
   await new Promise<void>((resolve) => server.once('listening', () => resolve()));
   try {
     const { port } = server.address() as AddressInfo;
-    const engineer = await app.services.models.User.findOne({ where: { email: 'engineer@kestrel.example' } });
-    const membership = await app.services.models.Membership.findOne({ where: { userId: engineer!.id } });
+    const engineer = await app.services.models.User.findOne({
+      where: { email: 'engineer@kestrel.example' },
+    });
+    const membership = await app.services.models.Membership.findOne({
+      where: { userId: engineer!.id },
+    });
     const team = await app.services.models.Team.findByPk(membership!.teamId);
     const { key } = await app.services.apiKeys.create(
-      { user: { id: engineer!.id, email: engineer!.email, name: engineer!.name }, teamId: team!.id, teamName: team!.name, role: 'engineer', authMethod: 'session', credentialId: 'bench' },
+      {
+        user: { id: engineer!.id, email: engineer!.email, name: engineer!.name },
+        teamId: team!.id,
+        teamName: team!.name,
+        role: 'engineer',
+        authMethod: 'session',
+        credentialId: 'bench',
+      },
       { name: 'bench', role: 'viewer' },
     );
 
     // The library's part of one request: the same waveform, spectrum, THD and WTHD.
     const { method: _method, ...options } = MODULATION;
-    const libraryComputeMs = medianTime(() => {
-      const spectrum = harmonics(sineTriangle(options), MAX_ORDER);
-      return thd(spectrum) + wthd(spectrum);
-    }, 100, 100);
+    const libraryComputeMs = medianTime(
+      () => {
+        const spectrum = harmonics(sineTriangle(options), MAX_ORDER);
+        return thd(spectrum) + wthd(spectrum);
+      },
+      100,
+      100,
+    );
 
     const result = await autocannon({
       url: `http://127.0.0.1:${port}/api/v1/spectra`,
@@ -77,14 +101,17 @@ export async function runApiSpectraBench({ durationSeconds = 5, connections = 8 
       errors: result.errors,
       non2xx: result.non2xx,
     };
-    printTable(`POST /api/v1/spectra, mf = 21, maxOrder ${MAX_ORDER}, ${connections} connections, ${durationSeconds} s on 127.0.0.1`, [
-      ['requests per second', report.requestsPerSecond.toFixed(1)],
-      ['p99 latency', `${report.p99LatencyMs.toFixed(1)} ms`],
-      ['mean latency', `${report.meanLatencyMs.toFixed(2)} ms`],
-      ['library compute time (median, same run)', `${report.libraryComputeMs.toFixed(3)} ms`],
-      ['ratio mean API latency / library compute', report.ratio.toFixed(1)],
-      ['errors / non-2xx answers', `${report.errors} / ${report.non2xx}`],
-    ]);
+    printTable(
+      `POST /api/v1/spectra, mf = 21, maxOrder ${MAX_ORDER}, ${connections} connections, ${durationSeconds} s on 127.0.0.1`,
+      [
+        ['requests per second', report.requestsPerSecond.toFixed(1)],
+        ['p99 latency', `${report.p99LatencyMs.toFixed(1)} ms`],
+        ['mean latency', `${report.meanLatencyMs.toFixed(2)} ms`],
+        ['library compute time (median, same run)', `${report.libraryComputeMs.toFixed(3)} ms`],
+        ['ratio mean API latency / library compute', report.ratio.toFixed(1)],
+        ['errors / non-2xx answers', `${report.errors} / ${report.non2xx}`],
+      ],
+    );
     console.log(
       `\nWith ${connections} connections the mean latency includes queueing (about connections / requests per second); ` +
         `the per-request service overhead is about 1000 / (requests per second) − library time = ` +

@@ -9,7 +9,13 @@
  * compensated summation. Both the engine and the baseline are scored against it.
  */
 import FFT from 'fft.js';
-import { harmonics, sineTriangle, sweepModulationIndex, triangleCarrier, type Harmonic } from '@pulsewright/modulation';
+import {
+  harmonics,
+  sineTriangle,
+  sweepModulationIndex,
+  triangleCarrier,
+  type Harmonic,
+} from '@pulsewright/modulation';
 import { medianTime, printTable } from './measure.js';
 
 const mf = 21;
@@ -34,13 +40,18 @@ function sampledSpectrum(fft: FFT, input: Float64Array, output: Float64Array): H
     const re = output[2 * n] as number;
     const im = output[2 * n + 1] as number;
     // X_n = (N/2)·(a_n − j·b_n) for v = a_n cos nθ + b_n sin nθ; phase as in `harmonics`.
-    spectrum.push({ order: n, amplitude: ((n === 0 ? 1 : 2) * Math.sqrt(re * re + im * im)) / samples, phase: Math.atan2(re, -im) });
+    spectrum.push({
+      order: n,
+      amplitude: ((n === 0 ? 1 : 2) * Math.sqrt(re * re + im * im)) / samples,
+      phase: Math.atan2(re, -im),
+    });
   }
   return spectrum;
 }
 
 function independentReference(): number[] {
-  const difference = (theta: number): number => ma * Math.sin(theta) - triangleCarrier(theta, { mf });
+  const difference = (theta: number): number =>
+    ma * Math.sin(theta) - triangleCarrier(theta, { mf });
   const edges: { angle: number; jump: number }[] = [];
   // Carrier half periods start at π/2 + kπ/mf; each holds one crossing for ma < 1.
   for (let k = 0; k < 2 * mf; k++) {
@@ -76,7 +87,10 @@ function kahanAdd(sum: number, compensation: number, value: number): [number, nu
 }
 
 function maxError(values: readonly Harmonic[], reference: readonly number[]): number {
-  return values.reduce((worst, v, i) => Math.max(worst, Math.abs(v.amplitude - (reference[i] as number))), 0);
+  return values.reduce(
+    (worst, v, i) => Math.max(worst, Math.abs(v.amplitude - (reference[i] as number))),
+    0,
+  );
 }
 
 const fft = new FFT(samples);
@@ -89,17 +103,32 @@ const sampledTime = medianTime(() => sampledSpectrum(fft, input, output), 100, 5
 const exactError = maxError(exactSpectrum(), reference);
 const sampledError = maxError(sampledSpectrum(fft, input, output), reference);
 const sweepTime = medianTime(
-  () => sweepModulationIndex((m) => sineTriangle({ scheme: 'bipolar', ma: m, mf, vdc }), { from: 0.05, to: 1.3, points: 100, maxOrder }),
+  () =>
+    sweepModulationIndex((m) => sineTriangle({ scheme: 'bipolar', ma: m, mf, vdc }), {
+      from: 0.05,
+      to: 1.3,
+      points: 100,
+      maxOrder,
+    }),
   15,
   3,
 );
 
-printTable(`Exact spectrum vs sampled FFT baseline (bipolar natural PWM, mf = ${mf}, orders 0..${maxOrder})`, [
-  ['exact engine, median time', `${exactTime.toFixed(3)} ms`],
-  [`sampled baseline (2^16 samples + fft.js), median time`, `${sampledTime.toFixed(3)} ms`],
-  ['speed ratio (baseline / exact), goal ≥ 20', `${(sampledTime / exactTime).toFixed(1)}×`],
-  ['exact engine, max amplitude error (of vdc)', exactError.toExponential(2)],
-  ['sampled baseline, max amplitude error (of vdc)', sampledError.toExponential(2)],
-  ['accuracy ratio (baseline error / exact error), goal ≥ 1000', `${(sampledError / Math.max(exactError, Number.MIN_VALUE)).toExponential(2)}×`],
-  [`100-point ma sweep (0.05..1.3) to order ${maxOrder}, goal < 50 ms`, `${sweepTime.toFixed(1)} ms`],
-]);
+printTable(
+  `Exact spectrum vs sampled FFT baseline (bipolar natural PWM, mf = ${mf}, orders 0..${maxOrder})`,
+  [
+    ['exact engine, median time', `${exactTime.toFixed(3)} ms`],
+    [`sampled baseline (2^16 samples + fft.js), median time`, `${sampledTime.toFixed(3)} ms`],
+    ['speed ratio (baseline / exact), goal ≥ 20', `${(sampledTime / exactTime).toFixed(1)}×`],
+    ['exact engine, max amplitude error (of vdc)', exactError.toExponential(2)],
+    ['sampled baseline, max amplitude error (of vdc)', sampledError.toExponential(2)],
+    [
+      'accuracy ratio (baseline error / exact error), goal ≥ 1000',
+      `${(sampledError / Math.max(exactError, Number.MIN_VALUE)).toExponential(2)}×`,
+    ],
+    [
+      `100-point ma sweep (0.05..1.3) to order ${maxOrder}, goal < 50 ms`,
+      `${sweepTime.toFixed(1)} ms`,
+    ],
+  ],
+);

@@ -14,7 +14,9 @@ const benchmarks = readdirSync(folder)
   .filter((name) => name.endsWith('.ts') && !name.endsWith('.d.ts') && !skip.has(name))
   .sort();
 
-const sections: string[] = [`# Benchmark results\n\nMeasured ${new Date().toISOString()} on ${process.platform}/${process.arch}, Node.js ${process.version}.\n`];
+const sections: string[] = [
+  `# Benchmark results\n\nMeasured ${new Date().toISOString()} on ${process.platform}/${process.arch}, Node.js ${process.version}.\n`,
+];
 for (const name of benchmarks) {
   console.log(`bench: running ${name} ...`);
   try {
@@ -24,7 +26,9 @@ for (const name of benchmarks) {
       timeout: 5 * 60_000,
     });
     console.log(output);
-    sections.push(`## ${name}\n\n${output.trim().startsWith('###') || output.includes('|') ? output.trim() : '```\n' + output.trim() + '\n```'}\n`);
+    sections.push(
+      `## ${name}\n\n${output.trim().startsWith('###') || output.includes('|') ? output.trim() : '```\n' + output.trim() + '\n```'}\n`,
+    );
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
     console.error(`bench: ${name} failed: ${message}`);

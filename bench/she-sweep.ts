@@ -12,7 +12,13 @@
  * `runSheBench()`.
  */
 import { pathToFileURL } from 'node:url';
-import { harmonics, sheSweep, sheWaveform, solveShe, type SheSweepResult } from '@pulsewright/modulation';
+import {
+  harmonics,
+  sheSweep,
+  sheWaveform,
+  solveShe,
+  type SheSweepResult,
+} from '@pulsewright/modulation';
 import { medianTime } from './measure.js';
 
 /** What {@link runSheBench} measured: printable lines and the raw figures. */
@@ -45,7 +51,11 @@ function check(result: SheSweepResult): { solved: number; worstResidual: number 
       if (!point.converged) continue;
       solved.add(point.fundamental);
       const spectrum = harmonics(sheWaveform(point.angles, { kind: 'bipolar', vdc }), 13);
-      for (const n of eliminate) worstResidual = Math.max(worstResidual, (spectrum[n]?.amplitude ?? Infinity) / point.fundamental);
+      for (const n of eliminate)
+        worstResidual = Math.max(
+          worstResidual,
+          (spectrum[n]?.amplitude ?? Infinity) / point.fundamental,
+        );
     }
   }
   return { solved: solved.size / points, worstResidual };
@@ -54,7 +64,8 @@ function check(result: SheSweepResult): { solved: number; worstResidual: number 
 function multiStart(from: number, to: number): { solved: number } {
   let solved = 0;
   grid(from, to).forEach((fundamental, i) => {
-    if (solveShe({ kind: 'bipolar', vdc, count, eliminate, fundamental, seed: i + 1 }).converged) solved++;
+    if (solveShe({ kind: 'bipolar', vdc, count, eliminate, fundamental, seed: i + 1 }).converged)
+      solved++;
   });
   return { solved: solved / points };
 }
@@ -67,7 +78,9 @@ export async function runSheBench(): Promise<SheBenchReport> {
     ['0.05–0.90 of 4vdc/π (solutions everywhere)', 0.05, 0.9],
     ['0.02–0.98 of 4vdc/π (with a range of no solution)', 0.02, 0.98],
   ];
-  lines.push(`SHE sweep: bipolar, ${count} angles, eliminating ${eliminate.join(', ')}, ${points} fundamentals`);
+  lines.push(
+    `SHE sweep: bipolar, ${count} angles, eliminating ${eliminate.join(', ')}, ${points} fundamentals`,
+  );
   ranges.forEach(([label, a, b], r) => {
     const from = a * scale;
     const to = b * scale;
@@ -92,7 +105,9 @@ export async function runSheBench(): Promise<SheBenchReport> {
       `    worst eliminated residual on the exact spectrum: ${sweep.worstResidual.toExponential(2)} of the fundamental`,
     );
   });
-  lines.push('  (the multi-start time includes the waveform and exact residual solveShe builds per point.)');
+  lines.push(
+    '  (the multi-start time includes the waveform and exact residual solveShe builds per point.)',
+  );
   return { name: 'she-sweep', lines, figures };
 }
 

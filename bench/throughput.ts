@@ -17,13 +17,23 @@ import type { AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import autocannon from 'autocannon';
-import { harmonics, modulationVoltages, thd, waveformThd, waveformWthd, type Modulation } from '@pulsewright/modulation';
+import {
+  harmonics,
+  modulationVoltages,
+  thd,
+  waveformThd,
+  waveformWthd,
+  type Modulation,
+} from '@pulsewright/modulation';
 import { createApp } from '@pulsewright/api';
 import { printTable } from './measure.js';
 
 const SECONDS = Number(process.env.THROUGHPUT_SECONDS ?? 5);
 const CONNECTIONS = Number(process.env.THROUGHPUT_CONNECTIONS ?? 50);
-const BODY = JSON.stringify({ modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.9, mf: 21, vdc: 400 }, maxOrder: 1050 });
+const BODY = JSON.stringify({
+  modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.9, mf: 21, vdc: 400 },
+  maxOrder: 1050,
+});
 
 interface Run {
   rps: number;
@@ -39,8 +49,20 @@ async function listen(server: Server): Promise<number> {
 }
 
 async function load(url: string, headers: Record<string, string>): Promise<Run> {
-  const result = await autocannon({ url, method: 'POST', headers: { 'content-type': 'application/json', ...headers }, body: BODY, connections: CONNECTIONS, duration: SECONDS });
-  return { rps: result.requests.average, p99: result.latency.p99, errors: result.errors + result.timeouts, non2xx: result.non2xx };
+  const result = await autocannon({
+    url,
+    method: 'POST',
+    headers: { 'content-type': 'application/json', ...headers },
+    body: BODY,
+    connections: CONNECTIONS,
+    duration: SECONDS,
+  });
+  return {
+    rps: result.requests.average,
+    p99: result.latency.p99,
+    errors: result.errors + result.timeouts,
+    non2xx: result.non2xx,
+  };
 }
 
 /** The same work as the route: the bridge voltage, its spectrum, exact THD and WTHD, JSON. */
@@ -49,7 +71,10 @@ async function bare(): Promise<Run> {
     const chunks: Buffer[] = [];
     req.on('data', (chunk: Buffer) => chunks.push(chunk));
     req.on('end', () => {
-      const { modulation, maxOrder } = JSON.parse(Buffer.concat(chunks).toString('utf8')) as { modulation: Modulation; maxOrder: number };
+      const { modulation, maxOrder } = JSON.parse(Buffer.concat(chunks).toString('utf8')) as {
+        modulation: Modulation;
+        maxOrder: number;
+      };
       const voltage = modulationVoltages(modulation).phases[0]!;
       const spectrum = harmonics(voltage.waveform, maxOrder);
       const body = JSON.stringify({
@@ -93,7 +118,9 @@ async function service(validateResponses: boolean): Promise<Run> {
       body: JSON.stringify({ name: 'throughput', role: 'viewer' }),
     });
     const { key } = (await made.json()) as { key: string };
-    return await load(`http://127.0.0.1:${port}/api/v1/spectra`, { authorization: `Bearer ${key}` });
+    return await load(`http://127.0.0.1:${port}/api/v1/spectra`, {
+      authorization: `Bearer ${key}`,
+    });
   } finally {
     await new Promise<void>((resolve) => server.close(() => resolve()));
     await app.close();
@@ -104,11 +131,23 @@ async function service(validateResponses: boolean): Promise<Run> {
 const base = await bare();
 const full = await service(false);
 const checked = await service(true);
-printTable(`POST /api/v1/spectra (mf 21, maxOrder 1050) against a bare node:http server doing the same work, ${CONNECTIONS} connections, ${SECONDS} s each`, [
-  ['bare server: requests per second, p99', `${base.rps.toFixed(0)}, ${base.p99} ms`],
-  ['service: requests per second, p99', `${full.rps.toFixed(0)}, ${full.p99} ms`],
-  ['service ÷ bare, requests per second (goal ≥ 70 %)', `${((100 * full.rps) / base.rps).toFixed(0)} %`],
-  ['service ÷ bare, p99 (goal ≤ 2)', (full.p99 / base.p99).toFixed(1)],
-  ['errors and non-2xx (bare; service)', `${base.errors + base.non2xx}; ${full.errors + full.non2xx}`],
-  ['service with response validation (development, tests): requests per second, p99', `${checked.rps.toFixed(0)}, ${checked.p99} ms`],
-]);
+printTable(
+  `POST /api/v1/spectra (mf 21, maxOrder 1050) against a bare node:http server doing the same work, ${CONNECTIONS} connections, ${SECONDS} s each`,
+  [
+    ['bare server: requests per second, p99', `${base.rps.toFixed(0)}, ${base.p99} ms`],
+    ['service: requests per second, p99', `${full.rps.toFixed(0)}, ${full.p99} ms`],
+    [
+      'service ÷ bare, requests per second (goal ≥ 70 %)',
+      `${((100 * full.rps) / base.rps).toFixed(0)} %`,
+    ],
+    ['service ÷ bare, p99 (goal ≤ 2)', (full.p99 / base.p99).toFixed(1)],
+    [
+      'errors and non-2xx (bare; service)',
+      `${base.errors + base.non2xx}; ${full.errors + full.non2xx}`,
+    ],
+    [
+      'service with response validation (development, tests): requests per second, p99',
+      `${checked.rps.toFixed(0)}, ${checked.p99} ms`,
+    ],
+  ],
+);

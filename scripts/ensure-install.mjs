@@ -5,9 +5,12 @@ import { execSync } from 'node:child_process';
 
 const marker = 'node_modules/.package-lock.json';
 const lock = 'package-lock.json';
-const stale = !existsSync(marker) || (existsSync(lock) && statSync(lock).mtimeMs > statSync(marker).mtimeMs);
+const stale =
+  !existsSync(marker) || (existsSync(lock) && statSync(lock).mtimeMs > statSync(marker).mtimeMs);
 if (stale) {
-  const command = existsSync(lock) ? 'npm ci --no-audit --no-fund' : 'npm install --no-audit --no-fund';
+  const command = existsSync(lock)
+    ? 'npm ci --no-audit --no-fund'
+    : 'npm install --no-audit --no-fund';
   console.log(`pulsewright: installing dependencies (${command}) ...`);
   execSync(command, {
     stdio: 'inherit',

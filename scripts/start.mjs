@@ -19,15 +19,24 @@ import { fileURLToPath } from 'node:url';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const env = { ...process.env, TURBO_TELEMETRY_DISABLED: '1', SCARF_ANALYTICS: 'false' };
-const turbo = path.join(root, 'node_modules', '.bin', process.platform === 'win32' ? 'turbo.cmd' : 'turbo');
+const turbo = path.join(
+  root,
+  'node_modules',
+  '.bin',
+  process.platform === 'win32' ? 'turbo.cmd' : 'turbo',
+);
 const entry = path.join(root, 'apps', 'api', 'dist', 'index.js');
 
 function build(filter) {
-  const result = spawnSync(turbo, ['run', 'build', `--filter=${filter}`, '--output-logs=errors-only'], {
-    cwd: root,
-    env,
-    stdio: 'inherit',
-  });
+  const result = spawnSync(
+    turbo,
+    ['run', 'build', `--filter=${filter}`, '--output-logs=errors-only'],
+    {
+      cwd: root,
+      env,
+      stdio: 'inherit',
+    },
+  );
   return result.status === 0;
 }
 
@@ -49,12 +58,16 @@ if (process.env.PULSEWRIGHT_NO_BUILD !== '1') {
     }
   }
 } else if (!existsSync(entry)) {
-  console.error(`pulsewright: ${entry} is missing; build first (npm run build) or leave PULSEWRIGHT_NO_BUILD unset.`);
+  console.error(
+    `pulsewright: ${entry} is missing; build first (npm run build) or leave PULSEWRIGHT_NO_BUILD unset.`,
+  );
   process.exit(1);
 }
 
-const FIRST_DELAY_MS = Number(process.env.RESTART_DELAY_MS) > 0 ? Number(process.env.RESTART_DELAY_MS) : 1000;
-const MAX_DELAY_MS = Number(process.env.RESTART_MAX_DELAY_MS) > 0 ? Number(process.env.RESTART_MAX_DELAY_MS) : 30_000;
+const FIRST_DELAY_MS =
+  Number(process.env.RESTART_DELAY_MS) > 0 ? Number(process.env.RESTART_DELAY_MS) : 1000;
+const MAX_DELAY_MS =
+  Number(process.env.RESTART_MAX_DELAY_MS) > 0 ? Number(process.env.RESTART_MAX_DELAY_MS) : 30_000;
 /** A run this long resets the back-off. */
 const HEALTHY_RUN_MS = 60_000;
 /** A run shorter than this counts towards a crash loop. */
@@ -83,7 +96,9 @@ function startService() {
       );
       process.exit(1);
     }
-    console.error(`pulsewright: the service exited (${how}) after ${(ran / 1000).toFixed(1)} s; restarting it in ${delay / 1000} s`);
+    console.error(
+      `pulsewright: the service exited (${how}) after ${(ran / 1000).toFixed(1)} s; restarting it in ${delay / 1000} s`,
+    );
     restartTimer = setTimeout(startService, delay);
     delay = Math.min(2 * delay, MAX_DELAY_MS);
   });

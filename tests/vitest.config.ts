@@ -1,5 +1,9 @@
 import { defineConfig } from 'vitest/config';
 
 export default defineConfig({
-  test: { include: ['reference/**/*.test.ts', 'parity/**/*.test.ts'], environment: 'node', testTimeout: 20_000 },
+  test: {
+    include: ['reference/**/*.test.ts', 'parity/**/*.test.ts'],
+    environment: 'node',
+    testTimeout: 20_000,
+  },
 });

@@ -27,7 +27,8 @@ async function newPage(context: Context): Promise<Page> {
 }
 
 async function token(page: Page): Promise<string> {
-  const value = (await page.evaluate('sessionStorage.getItem("pulsewright.session")')) as string | null;
+  const value = (await page.evaluate('sessionStorage.getItem("pulsewright.session")')) as
+    string | null;
   assert(value, 'the session token is kept in sessionStorage');
   return value;
 }
@@ -47,10 +48,19 @@ export const scenarios: Scenario[] = [
         await signIn(page, context.baseUrl, email);
         const shown = (await page.getByTestId('role').textContent())?.trim();
         assert(shown === role, `role badge shows ${role} (got ${shown})`);
-        assert(await page.getByRole('complementary', { name: 'Safety caution' }).isVisible(), 'the hazard caution is visible');
-        assert((await page.getByRole('link', { name: 'Team' }).count()) === (role === 'viewer' ? 0 : 1), 'Team link only for engineers and admins');
+        assert(
+          await page.getByRole('complementary', { name: 'Safety caution' }).isVisible(),
+          'the hazard caution is visible',
+        );
+        assert(
+          (await page.getByRole('link', { name: 'Team' }).count()) === (role === 'viewer' ? 0 : 1),
+          'Team link only for engineers and admins',
+        );
         await page.getByRole('heading', { name: 'Studies', exact: true }).waitFor();
-        await page.getByRole('link', { name: /Bench prototype/ }).first().waitFor();
+        await page
+          .getByRole('link', { name: /Bench prototype/ })
+          .first()
+          .waitFor();
         await screenshot(page, `studies-${role}`);
         await page.getByRole('button', { name: 'Sign out' }).click();
         await page.getByRole('button', { name: 'Sign in' }).waitFor();
@@ -82,8 +92,16 @@ export const scenarios: Scenario[] = [
       await page.getByRole('button', { name: `${projectName} (0)`, pressed: true }).waitFor();
       await page.getByRole('link', { name: 'New study' }).click();
       await page.getByLabel('Name', { exact: true }).fill('E2E unipolar mf 31');
-      const chosen = await page.getByLabel('Project').evaluate((el) => (el as unknown as { selectedOptions: { text: string }[] }).selectedOptions[0]?.text);
-      assert(chosen === projectName, `the new study goes into the project just made (got ${chosen})`);
+      const chosen = await page
+        .getByLabel('Project')
+        .evaluate(
+          (el) =>
+            (el as unknown as { selectedOptions: { text: string }[] }).selectedOptions[0]?.text,
+        );
+      assert(
+        chosen === projectName,
+        `the new study goes into the project just made (got ${chosen})`,
+      );
       await page.getByLabel('Bridge scheme').selectOption('unipolar');
       const mf = page.getByLabel('Frequency ratio mf', { exact: true });
       await mf.fill('31');
@@ -112,8 +130,13 @@ export const scenarios: Scenario[] = [
       context.state.studyId = page.url().split('/').pop();
       await page.getByText('Revision 1', { exact: false }).first().waitFor();
       await page.getByText(/Saved revision on the server: THD/).waitFor();
-      const labels = await page.locator('svg[data-chart="spectrum"] [data-labels] text').allTextContents();
-      assert(labels.some((l) => l.startsWith('2mf')), `unipolar spectrum labels the 2mf group (labels: ${labels.join(' ')})`);
+      const labels = await page
+        .locator('svg[data-chart="spectrum"] [data-labels] text')
+        .allTextContents();
+      assert(
+        labels.some((l) => l.startsWith('2mf')),
+        `unipolar spectrum labels the 2mf group (labels: ${labels.join(' ')})`,
+      );
       await screenshot(page, 'study-editor');
       await page.close();
     },
@@ -123,7 +146,9 @@ export const scenarios: Scenario[] = [
     async run(context) {
       const page = await newPage(context);
       await signIn(page, context.baseUrl, 'engineer@kestrel.example');
-      await page.getByRole('link', { name: 'Bench prototype (42 × 50 Hz carrier)', exact: true }).click();
+      await page
+        .getByRole('link', { name: 'Bench prototype (42 × 50 Hz carrier)', exact: true })
+        .click();
       await page.getByRole('link', { name: 'Printable report' }).waitFor();
       await page.getByRole('button', { name: 'Duplicate', exact: true }).click();
       await page.getByRole('heading', { name: /\(copy\)$/ }).waitFor();
@@ -168,7 +193,10 @@ export const scenarios: Scenario[] = [
       const limit = page.getByTestId('limit-result');
       // Unfiltered, the PWM voltage passes the table to order 50 but not its whole-waveform THD (issue 9).
       await page.locator('[data-testid="limit-result"][data-pass="false"]').waitFor();
-      assert((await page.getByTestId('limit-note').count()) === 1, 'the note on the content above order 50 is shown');
+      assert(
+        (await page.getByTestId('limit-note').count()) === 1,
+        'the note on the content above order 50 is shown',
+      );
       await screenshot(page, 'filtered-editor-no-filter');
       const filterBox = page.getByLabel('Include an LC output filter');
       await filterBox.check();
@@ -178,7 +206,10 @@ export const scenarios: Scenario[] = [
       await page.locator('[data-testid="limit-result"][data-pass="false"]').waitFor();
       await filterBox.check();
       await page.locator('[data-testid="limit-result"][data-pass="true"]').waitFor();
-      assert((await limit.textContent())?.includes('filter output'), 'the check reads the filter output');
+      assert(
+        (await limit.textContent())?.includes('filter output'),
+        'the check reads the filter output',
+      );
       await page.locator('[data-figure="Output THD"]').waitFor();
       await page.locator('[data-figure="Capacitor current"]').waitFor();
       await page.getByRole('button', { name: 'Create study' }).click();
@@ -188,20 +219,37 @@ export const scenarios: Scenario[] = [
       const editorThd = (await page.locator('[data-figure="THD"]').textContent())?.trim() ?? '';
       const serverLine = (await page.getByTestId('preview-time').textContent()) ?? '';
       assert(/^\d+\.\d\d %$/.test(editorThd), `the editor shows an exact THD (got ${editorThd})`);
-      assert(serverLine.includes(`THD ${editorThd}`), `the saved revision on the server reads the same THD as the live preview (${editorThd}; ${serverLine})`);
+      assert(
+        serverLine.includes(`THD ${editorThd}`),
+        `the saved revision on the server reads the same THD as the live preview (${editorThd}; ${serverLine})`,
+      );
       await screenshot(page, 'filtered-editor');
 
       // Compare: the same figure in the table, from the service's report.
-      const listed = (await (await fetch(`${context.baseUrl}/api/v1/studies`, { headers: { Authorization: `Bearer ${await token(page)}` } })).json()) as { id: string; name: string }[];
-      const other = listed.find((s) => s.name === 'Centred space vector (min-max), 8 kHz') ?? listed.find((s) => s.id !== id);
+      const listed = (await (
+        await fetch(`${context.baseUrl}/api/v1/studies`, {
+          headers: { Authorization: `Bearer ${await token(page)}` },
+        })
+      ).json()) as { id: string; name: string }[];
+      const other =
+        listed.find((s) => s.name === 'Centred space vector (min-max), 8 kHz') ??
+        listed.find((s) => s.id !== id);
       assert(other, 'a second study to compare with');
       await page.goto(`${context.baseUrl}/compare?ids=${id},${other.id}`);
       const cell = page.locator(`tr[data-study="${name}"] [data-column="THD, exact"]`);
       await cell.waitFor();
       const compareThd = (await cell.textContent())?.trim();
-      assert(compareThd === editorThd, `Compare shows the editor's THD (${compareThd} vs ${editorThd})`);
-      const compareLimit = (await page.locator(`tr[data-study="${name}"] [data-column="Limit check"]`).textContent())?.trim();
-      assert(compareLimit === 'pass', `Compare shows the filtered design passing (got ${compareLimit})`);
+      assert(
+        compareThd === editorThd,
+        `Compare shows the editor's THD (${compareThd} vs ${editorThd})`,
+      );
+      const compareLimit = (
+        await page.locator(`tr[data-study="${name}"] [data-column="Limit check"]`).textContent()
+      )?.trim();
+      assert(
+        compareLimit === 'pass',
+        `Compare shows the filtered design passing (got ${compareLimit})`,
+      );
       await page.locator('svg[data-chart="spectrum"] g[data-series]').nth(1).waitFor();
       await screenshot(page, 'filtered-compare');
 
@@ -209,9 +257,15 @@ export const scenarios: Scenario[] = [
       await page.goto(`${context.baseUrl}/studies/${id}/report`);
       await page.getByText('Pulsewright study report').waitFor();
       const reportThd = (await page.locator('[data-figure="THD"]').textContent())?.trim();
-      assert(reportThd === editorThd, `the printed report shows the editor's THD (${reportThd} vs ${editorThd})`);
+      assert(
+        reportThd === editorThd,
+        `the printed report shows the editor's THD (${reportThd} vs ${editorThd})`,
+      );
       await page.locator('[data-testid="limit-result"][data-pass="true"]').waitFor();
-      await page.getByTestId('cautions').getByText(/lethal/).waitFor();
+      await page
+        .getByTestId('cautions')
+        .getByText(/lethal/)
+        .waitFor();
       await page.getByText('Carrier frequency').first().waitFor();
       await screenshot(page, 'filtered-report');
       await page.close();
@@ -239,7 +293,9 @@ export const scenarios: Scenario[] = [
       const rows = ['time,voltage'];
       for (let k = 0; k < 4000; k++) {
         const t = k / 20_000;
-        rows.push(`${t.toFixed(7)},${(300 * Math.sin(2 * Math.PI * 50 * t) + 12 * Math.sin(2 * Math.PI * 1550 * t)).toFixed(4)}`);
+        rows.push(
+          `${t.toFixed(7)},${(300 * Math.sin(2 * Math.PI * 50 * t) + 12 * Math.sin(2 * Math.PI * 1550 * t)).toFixed(4)}`,
+        );
       }
       const dir = mkdtempSync(path.join(tmpdir(), 'pulsewright-capture-'));
       const file = path.join(dir, 'bench-e2e.csv');
@@ -250,13 +306,18 @@ export const scenarios: Scenario[] = [
       await page.getByLabel(/CSV file/).setInputFiles(file);
       await page.getByRole('button', { name: 'Upload' }).click();
       await page.getByText('Uploaded').waitFor();
-      const value = await page.getByRole('progressbar', { name: 'Upload progress' }).getAttribute('aria-valuenow');
+      const value = await page
+        .getByRole('progressbar', { name: 'Upload progress' })
+        .getAttribute('aria-valuenow');
       assert(value === '100', `upload progress at 100 % (got ${value})`);
       await page.getByTestId('capture-analysis').waitFor();
       await page.locator('svg[data-chart="spectrum"] rect[data-bar]').first().waitFor();
       await page.getByLabel('Compare with study').selectOption({ index: 1 });
       await page.getByRole('region', { name: 'Order by order' }).waitFor();
-      assert((await page.locator('svg[data-chart="spectrum"] g[data-series]').count()) === 2, 'capture and prediction overlaid');
+      assert(
+        (await page.locator('svg[data-chart="spectrum"] g[data-series]').count()) === 2,
+        'capture and prediction overlaid',
+      );
       await screenshot(page, 'capture');
       await page.close();
     },
@@ -272,12 +333,19 @@ export const scenarios: Scenario[] = [
       await page.getByRole('button', { name: 'Create key' }).click();
       const key = (await page.getByTestId('new-key').textContent())?.trim() ?? '';
       assert(key.length > 20, 'the new key is shown');
-      const before = await fetch(`${context.baseUrl}/api/v1/me`, { headers: { Authorization: `Bearer ${key}` } });
+      const before = await fetch(`${context.baseUrl}/api/v1/me`, {
+        headers: { Authorization: `Bearer ${key}` },
+      });
       assert(before.status === 200, `the key signs a request in (got ${before.status})`);
       await screenshot(page, 'api-key');
       await page.getByRole('button', { name: `Revoke ${keyName}` }).click();
-      await page.locator(`tr[data-key-name="${keyName}"]`).getByText(/revoked/).waitFor();
-      const after = await fetch(`${context.baseUrl}/api/v1/me`, { headers: { Authorization: `Bearer ${key}` } });
+      await page
+        .locator(`tr[data-key-name="${keyName}"]`)
+        .getByText(/revoked/)
+        .waitFor();
+      const after = await fetch(`${context.baseUrl}/api/v1/me`, {
+        headers: { Authorization: `Bearer ${key}` },
+      });
       assert(after.status === 401, `a revoked key is refused (got ${after.status})`);
       await page.close();
     },
@@ -288,16 +356,27 @@ export const scenarios: Scenario[] = [
       const page = await newPage(context);
       await signIn(page, context.baseUrl, 'viewer@kestrel.example');
       // The study the engineer made, or else the first one of the demo.
-      const listed = await fetch(`${context.baseUrl}/api/v1/studies`, { headers: { Authorization: `Bearer ${await token(page)}` } });
+      const listed = await fetch(`${context.baseUrl}/api/v1/studies`, {
+        headers: { Authorization: `Bearer ${await token(page)}` },
+      });
       const studies = (await listed.json()) as { id: string; revision: number }[];
       const id = context.state.studyId ?? studies[0]?.id;
       const revision = studies.find((s) => s.id === id)?.revision ?? 1;
       assert(id, 'there is a study to open');
       await page.goto(`${context.baseUrl}/studies/${id}`);
       await page.getByTestId('read-only').waitFor();
-      assert(await page.getByRole('button', { name: 'Save revision' }).isDisabled(), 'save is disabled for a viewer');
-      assert(await page.getByLabel('Name', { exact: true }).isDisabled(), 'fields are disabled for a viewer');
-      assert((await page.getByRole('button', { name: 'Duplicate' }).count()) === 0, 'no duplicate for a viewer');
+      assert(
+        await page.getByRole('button', { name: 'Save revision' }).isDisabled(),
+        'save is disabled for a viewer',
+      );
+      assert(
+        await page.getByLabel('Name', { exact: true }).isDisabled(),
+        'fields are disabled for a viewer',
+      );
+      assert(
+        (await page.getByRole('button', { name: 'Duplicate' }).count()) === 0,
+        'no duplicate for a viewer',
+      );
       await page.locator('svg[data-chart="spectrum"] rect[data-bar]').first().waitFor();
       const bearer = await token(page);
       const response = await fetch(`${context.baseUrl}/api/v1/studies/${id}`, {
@@ -306,12 +385,21 @@ export const scenarios: Scenario[] = [
         body: JSON.stringify({
           baseRevision: revision,
           name: 'viewer edit',
-          design: { vdc: 400, fundamentalFrequency: 50, carrierFrequency: 1050, modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.5 } },
+          design: {
+            vdc: 400,
+            fundamentalFrequency: 50,
+            carrierFrequency: 1050,
+            modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.5 },
+          },
         }),
       });
       assert(response.status === 403, `the API refuses a viewer's edit (got ${response.status})`);
       // Viewers may compute: the live report's harmonic-limit check is shown to them.
-      await page.getByTestId('limit-result').getByText(/IEEE Std 519/).first().waitFor();
+      await page
+        .getByTestId('limit-result')
+        .getByText(/IEEE Std 519/)
+        .first()
+        .waitFor();
       await screenshot(page, 'viewer-study');
       await page.close();
     },
@@ -322,12 +410,19 @@ export const scenarios: Scenario[] = [
       const page = await newPage(context);
       await signIn(page, context.baseUrl, 'engineer@kestrel.example');
       // A three-phase demo study: line-to-line output, star-load phase current.
-      await page.getByRole('link', { name: 'Centred space vector (min-max), 8 kHz', exact: true }).click();
+      await page
+        .getByRole('link', { name: 'Centred space vector (min-max), 8 kHz', exact: true })
+        .click();
       await page.locator('svg[data-chart="spectrum"] rect[data-bar]').first().waitFor();
       // Three-phase figures say what they are of: per phase to the star point, and line to line.
       await page.locator('[data-figure="Fundamental, line-to-line"]').waitFor();
-      await page.getByText(/peak, phase a to star point/).first().waitFor();
-      await page.getByText(/Saved revision on the server: THD .* \(exact, phase a to star point\)/).waitFor();
+      await page
+        .getByText(/peak, phase a to star point/)
+        .first()
+        .waitFor();
+      await page
+        .getByText(/Saved revision on the server: THD .* \(exact, phase a to star point\)/)
+        .waitFor();
       await screenshot(page, 'study-three-phase');
       await page.getByRole('link', { name: 'Compare', exact: true }).first().click();
       await page.getByRole('heading', { name: 'Compare studies' }).waitFor();
@@ -344,7 +439,11 @@ export const scenarios: Scenario[] = [
       await page.getByText('Picked point').waitFor();
       // The picked pattern nulls the orders asked (Patel and Hoft, 1973): its 5th and 7th bars are empty.
       for (const order of [5, 7]) {
-        const height = Number(await page.locator(`svg[data-chart="spectrum"] rect[data-order="${order}"]`).getAttribute('height'));
+        const height = Number(
+          await page
+            .locator(`svg[data-chart="spectrum"] rect[data-order="${order}"]`)
+            .getAttribute('height'),
+        );
         assert(height < 0.01, `order ${order} is eliminated (bar height ${height})`);
       }
       await screenshot(page, 'elimination');
@@ -371,7 +470,11 @@ export const scenarios: Scenario[] = [
       await page.locator('svg[data-chart="line"] circle').nth(8).click();
       await page.getByText('Picked point').waitFor();
       const project = page.getByLabel('Project');
-      const projectValue = await project.locator('option').nth(1).getAttribute('value').catch(() => null);
+      const projectValue = await project
+        .locator('option')
+        .nth(1)
+        .getAttribute('value')
+        .catch(() => null);
       if (projectValue) await project.selectOption(projectValue);
       const chosen = await project.evaluate((el) => (el as unknown as { value: string }).value);
       const name = `E2E picked pattern ${Date.now()}`;
@@ -379,18 +482,35 @@ export const scenarios: Scenario[] = [
       await page.getByRole('button', { name: 'Save as study' }).click();
       await page.waitForURL(/\/studies\/[0-9a-f-]{36}$/);
       await page.getByRole('heading', { name }).waitFor();
-      const study = (await (await fetch(`${context.baseUrl}/api/v1/studies/${page.url().split('/').pop()}`, { headers: { Authorization: `Bearer ${await token(page)}` } })).json()) as { projectId: string; method: string };
-      assert(study.method === 'selective-harmonic-elimination' && study.projectId === chosen, `saved as a pattern study in the chosen project (${study.method}, ${study.projectId} vs ${chosen})`);
+      const study = (await (
+        await fetch(`${context.baseUrl}/api/v1/studies/${page.url().split('/').pop()}`, {
+          headers: { Authorization: `Bearer ${await token(page)}` },
+        })
+      ).json()) as { projectId: string; method: string };
+      assert(
+        study.method === 'selective-harmonic-elimination' && study.projectId === chosen,
+        `saved as a pattern study in the chosen project (${study.method}, ${study.projectId} vs ${chosen})`,
+      );
       // Orders 5, 7 eliminated with the fundamental set: three first-quarter angles, listed read-only.
-      const rows = page.getByRole('table', { name: 'First-quarter switching angles' }).locator('tbody tr');
+      const rows = page
+        .getByRole('table', { name: 'First-quarter switching angles' })
+        .locator('tbody tr');
       await rows.first().waitFor();
       assert((await rows.count()) === 3, `three angles listed (got ${await rows.count()})`);
       await page.getByText(/Saved revision on the server: THD/).waitFor();
       await page.locator('svg[data-chart="spectrum"] rect[data-bar]').first().waitFor();
       // The saved pattern still nulls the eliminated orders (Patel and Hoft, 1973).
       for (const order of [5, 7]) {
-        const height = Number(await page.locator(`svg[data-chart="spectrum"] rect[data-order="${order}"]`).first().getAttribute('height'));
-        assert(height < 0.01, `order ${order} stays eliminated in the saved study (bar height ${height})`);
+        const height = Number(
+          await page
+            .locator(`svg[data-chart="spectrum"] rect[data-order="${order}"]`)
+            .first()
+            .getAttribute('height'),
+        );
+        assert(
+          height < 0.01,
+          `order ${order} stays eliminated in the saved study (bar height ${height})`,
+        );
       }
       await screenshot(page, 'study-she');
 
@@ -402,8 +522,16 @@ export const scenarios: Scenario[] = [
       await page.locator('svg[data-chart="spectrum"] rect[data-bar]').first().waitFor();
       await page.getByRole('button', { name: 'Create study' }).click();
       await page.waitForURL(/\/studies\/[0-9a-f-]{36}$/);
-      const saved = (await (await fetch(`${context.baseUrl}/api/v1/studies/${page.url().split('/').pop()}`, { headers: { Authorization: `Bearer ${await token(page)}` } })).json()) as { design: { modulation: { clamping?: string; sequence?: string } } };
-      assert(saved.design.modulation.sequence === 'five-segment' && saved.design.modulation.clamping === 'dpwm2', `the clamping chosen is saved (${JSON.stringify(saved.design.modulation)})`);
+      const saved = (await (
+        await fetch(`${context.baseUrl}/api/v1/studies/${page.url().split('/').pop()}`, {
+          headers: { Authorization: `Bearer ${await token(page)}` },
+        })
+      ).json()) as { design: { modulation: { clamping?: string; sequence?: string } } };
+      assert(
+        saved.design.modulation.sequence === 'five-segment' &&
+          saved.design.modulation.clamping === 'dpwm2',
+        `the clamping chosen is saved (${JSON.stringify(saved.design.modulation)})`,
+      );
       await page.getByText(/Revision 1 · space-vector/).waitFor();
       await page.getByText(/Saved revision on the server: THD/).waitFor();
       await page.locator('[data-figure="THD, line-to-line"]').waitFor();
@@ -423,12 +551,21 @@ export const scenarios: Scenario[] = [
       await page.getByRole('button', { name: 'Send invitation' }).click();
       await page.getByText(`Invitation sent to ${email}.`).waitFor();
       await page.getByRole('tab', { name: 'Mail outbox' }).click();
-      const message = page.getByRole('listitem').filter({ hasText: `to ${email}` }).first();
+      const message = page
+        .getByRole('listitem')
+        .filter({ hasText: `to ${email}` })
+        .first();
       await message.waitFor();
       const text = (await message.textContent()) ?? '';
       // The outbox masks the one-time token; the link works only in the message delivered (issue 11).
       assert(!/token=pwt_[\w-]{16,}/.test(text), 'the outbox shows no live invitation token');
-      const link = (await waitForDeliveredMail(context.baseUrl, email, /https?:\/\/\S+accept-invitation\?token=[\w-]+/))[0];
+      const link = (
+        await waitForDeliveredMail(
+          context.baseUrl,
+          email,
+          /https?:\/\/\S+accept-invitation\?token=[\w-]+/,
+        )
+      )[0];
       assert(link, 'the delivered invitation e-mail holds a link');
       const path = new URL(link).pathname + new URL(link).search;
       await screenshot(page, 'team-outbox');
@@ -457,7 +594,9 @@ export const scenarios: Scenario[] = [
       await page.getByRole('tabpanel').getByRole('cell', { name: 'auth.login' }).first().waitFor();
       await screenshot(page, 'team-admin');
       // A password-reset request writes a mail; the outbox must show it to the admin.
-      const reset = await page.request.post(`${context.baseUrl}/api/v1/auth/password-reset`, { data: { email: 'viewer@kestrel.example' } });
+      const reset = await page.request.post(`${context.baseUrl}/api/v1/auth/password-reset`, {
+        data: { email: 'viewer@kestrel.example' },
+      });
       if (!reset.ok()) throw new Error(`password reset answered ${reset.status()}`);
       await page.getByRole('tab', { name: 'Mail outbox' }).click();
       await page.getByRole('tabpanel').getByText('viewer@kestrel.example').first().waitFor();

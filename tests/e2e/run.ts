@@ -13,10 +13,14 @@ import { repoRoot } from '../support/server.js';
 import { launchBrowser, screenshot, startService, type Service } from './harness.js';
 
 const dir = path.join(repoRoot, 'tests', 'e2e');
-const files = readdirSync(dir).filter((f) => f.endsWith('.e2e.ts')).sort();
+const files = readdirSync(dir)
+  .filter((f) => f.endsWith('.e2e.ts'))
+  .sort();
 const scenarios: Scenario[] = [];
 for (const file of files) {
-  const module = (await import(pathToFileURL(path.join(dir, file)).href)) as { scenarios?: Scenario[] };
+  const module = (await import(pathToFileURL(path.join(dir, file)).href)) as {
+    scenarios?: Scenario[];
+  };
   scenarios.push(...(module.scenarios ?? []));
 }
 const filter = process.argv[2];
@@ -44,7 +48,9 @@ try {
           await screenshot(last, `failed-${failures}`).catch(() => undefined);
           await last.close().catch(() => undefined);
         }
-        console.log(`  ✗ ${scenario.name}\n    ${error instanceof Error ? error.message.split('\n').join('\n    ') : String(error)}`);
+        console.log(
+          `  ✗ ${scenario.name}\n    ${error instanceof Error ? error.message.split('\n').join('\n    ') : String(error)}`,
+        );
       }
     }
   } finally {
@@ -57,5 +63,7 @@ try {
   if (failures && service) console.log(`--- service log ---\n${service.log().slice(-4000)}`);
   await service?.stop();
 }
-console.log(`e2e: ${scenarios.length} scenarios, ${failures} failed, ${((Date.now() - started) / 1000).toFixed(1)} s`);
+console.log(
+  `e2e: ${scenarios.length} scenarios, ${failures} failed, ${((Date.now() - started) / 1000).toFixed(1)} s`,
+);
 process.exit(failures ? 1 : 0);

@@ -34,7 +34,10 @@ const load = fc.option(
     {
       r: fc.double({ min: 0.5, max: 50, noNaN: true }),
       l: fc.double({ min: 0, max: 0.05, noNaN: true }),
-      emf: fc.record({ amplitude: fc.oneof(fc.constant(0), fc.double({ min: 0.1, max: 100, noNaN: true })), phase: fc.double({ min: -TAU, max: TAU, noNaN: true }) }),
+      emf: fc.record({
+        amplitude: fc.oneof(fc.constant(0), fc.double({ min: 0.1, max: 100, noNaN: true })),
+        phase: fc.double({ min: -TAU, max: TAU, noNaN: true }),
+      }),
     },
     { requiredKeys: ['r', 'l'] },
   ),
@@ -43,7 +46,11 @@ const load = fc.option(
 
 const filter = fc.option(
   fc.oneof(
-    fc.record({ l: fc.double({ min: 2e-4, max: 5e-3, noNaN: true }), c: fc.double({ min: 2e-6, max: 60e-6, noNaN: true }), rDamping: fc.oneof(fc.constant(0), fc.double({ min: 0.01, max: 5, noNaN: true })) }),
+    fc.record({
+      l: fc.double({ min: 2e-4, max: 5e-3, noNaN: true }),
+      c: fc.double({ min: 2e-6, max: 60e-6, noNaN: true }),
+      rDamping: fc.oneof(fc.constant(0), fc.double({ min: 0.01, max: 5, noNaN: true })),
+    }),
     fc.record({
       l: fc.double({ min: 2e-4, max: 5e-3, noNaN: true }),
       c: fc.double({ min: 2e-6, max: 60e-6, noNaN: true }),
@@ -63,14 +70,25 @@ const filter = fc.option(
 
 /** First-quarter angles: 1 to 7 distinct, ascending, well inside (0, π/2). */
 const angles = fc
-  .uniqueArray(fc.double({ min: 0.02, max: Math.PI / 2 - 0.02, noNaN: true }), { minLength: 1, maxLength: 7, comparator: (a, b) => Math.abs(a - b) < 1e-3 })
+  .uniqueArray(fc.double({ min: 0.02, max: Math.PI / 2 - 0.02, noNaN: true }), {
+    minLength: 1,
+    maxLength: 7,
+    comparator: (a, b) => Math.abs(a - b) < 1e-3,
+  })
   .map((list) => [...list].sort((a, b) => a - b));
 
 const carrier = <T extends InverterDesign['modulation']>(modulation: fc.Arbitrary<T>) =>
-  fc.record({ vdc, fundamentalFrequency: frequency, ratio, modulation, load, filter }).map(({ ratio: mf, ...rest }): InverterDesign => ({ ...rest, carrierFrequency: mf * rest.fundamentalFrequency }));
+  fc
+    .record({ vdc, fundamentalFrequency: frequency, ratio, modulation, load, filter })
+    .map(({ ratio: mf, ...rest }): InverterDesign => ({
+      ...rest,
+      carrierFrequency: mf * rest.fundamentalFrequency,
+    }));
 
 const pattern = <T extends InverterDesign['modulation']>(modulation: fc.Arbitrary<T>) =>
-  fc.record({ vdc, fundamentalFrequency: frequency, modulation, load, filter }).map((design): InverterDesign => design);
+  fc
+    .record({ vdc, fundamentalFrequency: frequency, modulation, load, filter })
+    .map((design): InverterDesign => design);
 
 const designs: fc.Arbitrary<InverterDesign> = fc.oneof(
   carrier(
@@ -79,7 +97,11 @@ const designs: fc.Arbitrary<InverterDesign> = fc.oneof(
         method: fc.constant('sine-triangle' as const),
         scheme: fc.constantFrom('bipolar' as const, 'unipolar' as const),
         ma: fc.double({ min: 0.05, max: 1.3, noNaN: true }),
-        sampling: fc.constantFrom('natural' as const, 'regular-symmetric' as const, 'regular-asymmetric' as const),
+        sampling: fc.constantFrom(
+          'natural' as const,
+          'regular-symmetric' as const,
+          'regular-asymmetric' as const,
+        ),
         carrierPhase,
       },
       { requiredKeys: ['method', 'scheme', 'ma'] },
@@ -90,8 +112,21 @@ const designs: fc.Arbitrary<InverterDesign> = fc.oneof(
       {
         method: fc.constant('three-phase' as const),
         ma: fc.double({ min: 0.05, max: 1.15, noNaN: true }),
-        zeroSequence: fc.constantFrom('none' as const, 'third-harmonic' as const, 'min-max' as const, 'dpwm1' as const, 'dpwm0' as const, 'dpwm2' as const, 'dpwm-max' as const, 'dpwm-min' as const),
-        sampling: fc.constantFrom('natural' as const, 'regular-symmetric' as const, 'regular-asymmetric' as const),
+        zeroSequence: fc.constantFrom(
+          'none' as const,
+          'third-harmonic' as const,
+          'min-max' as const,
+          'dpwm1' as const,
+          'dpwm0' as const,
+          'dpwm2' as const,
+          'dpwm-max' as const,
+          'dpwm-min' as const,
+        ),
+        sampling: fc.constantFrom(
+          'natural' as const,
+          'regular-symmetric' as const,
+          'regular-asymmetric' as const,
+        ),
         carrierPhase,
       },
       { requiredKeys: ['method', 'ma'] },
@@ -116,7 +151,14 @@ const designs: fc.Arbitrary<InverterDesign> = fc.oneof(
           ma: fc.double({ min: 0.05, max: 1.27, noNaN: true }),
           sequence: fc.constant('five-segment' as const),
           sampling: fc.constantFrom('symmetric' as const, 'asymmetric' as const),
-          clamping: fc.constantFrom('dpwm-min' as const, 'dpwm-max' as const, 'dpwm0' as const, 'dpwm1' as const, 'dpwm2' as const, 'dpwm3' as const),
+          clamping: fc.constantFrom(
+            'dpwm-min' as const,
+            'dpwm-max' as const,
+            'dpwm0' as const,
+            'dpwm1' as const,
+            'dpwm2' as const,
+            'dpwm3' as const,
+          ),
           overmodulation: fc.constantFrom('two-mode' as const, 'hexagon-limit' as const),
         },
         { requiredKeys: ['method', 'ma', 'sequence'] },
@@ -129,7 +171,10 @@ const designs: fc.Arbitrary<InverterDesign> = fc.oneof(
         method: fc.constant('selective-harmonic-elimination' as const),
         kind: fc.constantFrom('bipolar' as const, 'staircase' as const),
         angles,
-        eliminate: fc.uniqueArray(fc.integer({ min: 1, max: 20 }).map((k) => 2 * k + 1), { maxLength: 4 }),
+        eliminate: fc.uniqueArray(
+          fc.integer({ min: 1, max: 20 }).map((k) => 2 * k + 1),
+          { maxLength: 4 },
+        ),
         fundamental: fc.double({ min: 1, max: 1000, noNaN: true }),
       },
       { requiredKeys: ['method', 'kind', 'angles'] },
@@ -149,13 +194,19 @@ const designs: fc.Arbitrary<InverterDesign> = fc.oneof(
 );
 
 /** Asserts a and b agree to RELATIVE of the larger magnitude (exactly, for zero). */
-function expectClose(a: number | null | undefined, b: number | null | undefined, what: string): void {
+function expectClose(
+  a: number | null | undefined,
+  b: number | null | undefined,
+  what: string,
+): void {
   if (a === null || a === undefined || b === null || b === undefined) {
     expect(a ?? null, what).toBe(b ?? null);
     return;
   }
   const scale = Math.max(Math.abs(a), Math.abs(b));
-  expect(Math.abs(a - b), `${what}: service ${a}, dashboard ${b}`).toBeLessThanOrEqual(RELATIVE * scale);
+  expect(Math.abs(a - b), `${what}: service ${a}, dashboard ${b}`).toBeLessThanOrEqual(
+    RELATIVE * scale,
+  );
 }
 
 /** Every figure the product shows, compared. */
@@ -168,10 +219,22 @@ function expectSameFigures(service: DesignReport, dashboard: DesignReport): void
     expect(s === null, `${key} present on both sides`).toBe(d === null);
     if (!s || !d) continue;
     expect(s.name).toBe(d.name);
-    for (const figure of ['fundamental', 'rms', 'thd', 'thdUpperBound', 'wthd', 'spectrumThd'] as const) expectClose(s[figure], d[figure], `${key}.${figure}`);
+    for (const figure of [
+      'fundamental',
+      'rms',
+      'thd',
+      'thdUpperBound',
+      'wthd',
+      'spectrumThd',
+    ] as const)
+      expectClose(s[figure], d[figure], `${key}.${figure}`);
     // The labelled spectrum: same labels, same amplitudes (compared against the fundamental).
     expect(s.spectrum.map((h) => h.label)).toEqual(d.spectrum.map((h) => h.label));
-    s.spectrum.forEach((h, i) => expect(Math.abs(h.amplitude - (d.spectrum[i]?.amplitude ?? Number.NaN))).toBeLessThanOrEqual(RELATIVE * s.fundamental));
+    s.spectrum.forEach((h, i) =>
+      expect(Math.abs(h.amplitude - (d.spectrum[i]?.amplitude ?? Number.NaN))).toBeLessThanOrEqual(
+        RELATIVE * s.fundamental,
+      ),
+    );
   }
   expect(service.currents.length).toBe(dashboard.currents.length);
   service.currents.forEach((phase, k) => {
@@ -181,12 +244,21 @@ function expectSameFigures(service: DesignReport, dashboard: DesignReport): void
       const d = other?.[which] ?? null;
       expect(s === null, `${which} current of phase ${phase.phase} on both sides`).toBe(d === null);
       if (!s || !d) continue;
-      for (const figure of ['rms', 'peak', 'fundamental', 'rippleRms', 'ripplePeakToPeak'] as const) expectClose(s[figure], d[figure], `${which} current ${phase.phase}.${figure}`);
+      for (const figure of ['rms', 'peak', 'fundamental', 'rippleRms', 'ripplePeakToPeak'] as const)
+        expectClose(s[figure], d[figure], `${which} current ${phase.phase}.${figure}`);
     }
   });
   expectClose(service.loadPower, dashboard.loadPower, 'loadPower');
-  expectClose(service.filter?.characteristics.resonanceFrequency, dashboard.filter?.characteristics.resonanceFrequency, 'filter resonance');
-  expectClose(service.filter?.gainAtCarrier, dashboard.filter?.gainAtCarrier, 'filter gain at the carrier');
+  expectClose(
+    service.filter?.characteristics.resonanceFrequency,
+    dashboard.filter?.characteristics.resonanceFrequency,
+    'filter resonance',
+  );
+  expectClose(
+    service.filter?.gainAtCarrier,
+    dashboard.filter?.gainAtCarrier,
+    'filter gain at the carrier',
+  );
   const s = service.limitCheck;
   const d = dashboard.limitCheck;
   expect(s.pass).toBe(d.pass);
@@ -212,15 +284,27 @@ describe('service and dashboard give the same figures for the same design', () =
     await fc.assert(
       fc.asyncProperty(designs, async (design) => {
         methods.add(design.modulation.method);
-        const response = await request(api.app).post('/api/v1/designs/report').set('Authorization', `Bearer ${token}`).send({ design, ...OPTIONS });
+        const response = await request(api.app)
+          .post('/api/v1/designs/report')
+          .set('Authorization', `Bearer ${token}`)
+          .send({ design, ...OPTIONS });
         expect(response.status, JSON.stringify(response.body).slice(0, 400)).toBe(200);
         // What the editor shows for this design once saved: read into its draft, written back, analysed.
-        const { report, errors } = previewDesign(designOf(draftOf(design, { name: 'parity', projectId: 'p' })), OPTIONS);
+        const { report, errors } = previewDesign(
+          designOf(draftOf(design, { name: 'parity', projectId: 'p' })),
+          OPTIONS,
+        );
         expect(errors).toEqual([]);
         expectSameFigures(response.body as DesignReport, report as DesignReport);
       }),
       { numRuns: 60, seed: 20260901 },
     );
-    expect([...methods].sort()).toEqual(['optimal-pattern', 'selective-harmonic-elimination', 'sine-triangle', 'space-vector', 'three-phase']);
+    expect([...methods].sort()).toEqual([
+      'optimal-pattern',
+      'selective-harmonic-elimination',
+      'sine-triangle',
+      'space-vector',
+      'three-phase',
+    ]);
   }, 60_000);
 });

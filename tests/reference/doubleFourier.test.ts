@@ -75,7 +75,9 @@ describe('small mf: the exact spectrum departs from the single-term table by sid
         largestDeparture = Math.max(largestDeparture, departure);
       }
       departures.set(mf, largestDeparture / vdc);
-      console.log(`mf = ${mf}: largest departure from the single-term table ${(largestDeparture / vdc).toExponential(2)} of vdc`);
+      console.log(
+        `mf = ${mf}: largest departure from the single-term table ${(largestDeparture / vdc).toExponential(2)} of vdc`,
+      );
     });
   }
 
@@ -115,7 +117,9 @@ describe('small mf: a second, independent method confirms the exact engine', () 
       const exact = harmonics(sineTriangle({ scheme: 'bipolar', ma, mf, vdc }), 2 * mf + 1);
       const tolerance = 2 * mf * vdc * (2 / Math.PI) * ((2 * Math.PI) / N);
       for (const order of [1, mf - 2, mf, mf + 2, 2 * mf - 1, 2 * mf + 1].filter((h) => h > 0)) {
-        expect(Math.abs(amplitudeAt(exact, order) - bruteForce(mf, ma, order))).toBeLessThan(tolerance);
+        expect(Math.abs(amplitudeAt(exact, order) - bruteForce(mf, ma, order))).toBeLessThan(
+          tolerance,
+        );
       }
     });
   }

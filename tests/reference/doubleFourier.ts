@@ -22,7 +22,8 @@ export function doubleFourierAmplitude(
 ): number {
   const bessel = besselj((m * Math.PI * ma) / 2, n);
   const base = (4 * vdc) / (m * Math.PI);
-  if (kind === 'unipolar') return m % 2 === 0 && Math.abs(n) % 2 === 1 ? base * Math.abs(bessel) : 0;
+  if (kind === 'unipolar')
+    return m % 2 === 0 && Math.abs(n) % 2 === 1 ? base * Math.abs(bessel) : 0;
   const carrierSideband = Math.abs(Math.sin(((m + n) * Math.PI) / 2));
   const threePhaseFactor = kind === 'line-to-line' ? Math.abs(Math.sin((n * Math.PI) / 3)) : 1;
   return base * Math.abs(bessel) * carrierSideband * threePhaseFactor;

@@ -15,7 +15,10 @@ describe('the generalised harmonics table (Mohan et al., 2003, ch. 8, from memor
   const vdc = 1;
   for (const row of table) {
     it(`ma = ${row.ma}`, () => {
-      const spectrum = harmonics(sineTriangle({ scheme: 'bipolar', ma: row.ma, mf, vdc }), 2 * mf + 1);
+      const spectrum = harmonics(
+        sineTriangle({ scheme: 'bipolar', ma: row.ma, mf, vdc }),
+        2 * mf + 1,
+      );
       const at = (order: number): number => spectrum[order]?.amplitude ?? NaN;
       expect(Math.abs(at(mf) - row.mf)).toBeLessThan(2e-3);
       expect(Math.abs(at(mf - 2) - row.mfPlusMinus2)).toBeLessThan(2e-3);

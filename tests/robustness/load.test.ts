@@ -204,7 +204,10 @@ describe(`load: ${CONNECTIONS} connections for ${SECONDS} s each`, () => {
                 body: JSON.stringify({
                   projectId,
                   name,
-                  design: { ...DESIGN, modulation: { ...DESIGN.modulation, ma: 0.5 + (counter % 40) / 100 } },
+                  design: {
+                    ...DESIGN,
+                    modulation: { ...DESIGN.modulation, ma: 0.5 + (counter % 40) / 100 },
+                  },
                   note: name,
                 }),
               };
@@ -276,7 +279,10 @@ describe(`load: ${CONNECTIONS} connections for ${SECONDS} s each`, () => {
                 body: JSON.stringify({
                   baseRevision: study.revision,
                   name: 'edited under load',
-                  design: { ...DESIGN, modulation: { ...DESIGN.modulation, ma: 0.5 + (edits % 40) / 100 } },
+                  design: {
+                    ...DESIGN,
+                    modulation: { ...DESIGN.modulation, ma: 0.5 + (edits % 40) / 100 },
+                  },
                   note,
                 }),
               };

@@ -97,7 +97,9 @@ function heavyLoad(baseUrl: string, loops: { token: string; path: string; body: 
     env: { ...process.env, STALL_LOAD: JSON.stringify({ baseUrl, loops }) },
     stdio: ['ignore', 'inherit', 'inherit', 'ipc'],
   });
-  const counts = new Promise<Record<string, number>>((resolve) => child.once('message', (m) => resolve(m as Record<string, number>)));
+  const counts = new Promise<Record<string, number>>((resolve) =>
+    child.once('message', (m) => resolve(m as Record<string, number>)),
+  );
   return {
     async stop(): Promise<Record<string, number>> {
       child.send('stop');
@@ -126,7 +128,9 @@ describe('no request stalls the service', () => {
     const tokens = await Promise.all(users.map((email) => signInOver(baseUrl, email)));
 
     // Four of the largest jobs, one per user.
-    const jobs = await Promise.all(tokens.map((token) => call(baseUrl, 'POST', '/api/v1/jobs/she-sweeps', token, SHE_LARGEST)));
+    const jobs = await Promise.all(
+      tokens.map((token) => call(baseUrl, 'POST', '/api/v1/jobs/she-sweeps', token, SHE_LARGEST)),
+    );
     for (const job of jobs) expect(job.status, JSON.stringify(job.body)).toBe(202);
     const jobIds = jobs.map((job) => (job.body as { id: string }).id);
 
@@ -168,7 +172,13 @@ describe('no request stalls the service', () => {
     const heavy = await load.stop();
 
     const states = await Promise.all(
-      jobIds.map(async (id, i) => (await call(baseUrl, 'GET', `/api/v1/jobs/${id}`, tokens[i])).body as { status: string; progress: number }),
+      jobIds.map(
+        async (id, i) =>
+          (await call(baseUrl, 'GET', `/api/v1/jobs/${id}`, tokens[i])).body as {
+            status: string;
+            progress: number;
+          },
+      ),
     );
     const figures = {
       healthSamples: health.length,

@@ -3,7 +3,15 @@ import { rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { call, DEMO, DEMO_PASSWORD, freePort, repoRoot, signInOver, tempDir } from '../support/server.js';
+import {
+  call,
+  DEMO,
+  DEMO_PASSWORD,
+  freePort,
+  repoRoot,
+  signInOver,
+  tempDir,
+} from '../support/server.js';
 
 /**
  * Supervision: `node scripts/start.mjs` (what `npm start` runs after installing), without its
@@ -23,7 +31,11 @@ const SHE_LONG = {
 const dirs: string[] = [];
 afterAll(() => dirs.forEach((dir) => rmSync(dir, { recursive: true, force: true })));
 
-async function waitFor<T>(what: string, probe: () => Promise<T | undefined> | T | undefined, timeoutMs = 30_000): Promise<T> {
+async function waitFor<T>(
+  what: string,
+  probe: () => Promise<T | undefined> | T | undefined,
+  timeoutMs = 30_000,
+): Promise<T> {
   const deadline = Date.now() + timeoutMs;
   for (;;) {
     const value = await probe();
@@ -72,7 +84,9 @@ function supervise(dir: string, port: number, extra: Record<string, string> = {}
   let output = '';
   child.stdout.on('data', (chunk: Buffer) => (output += chunk.toString()));
   child.stderr.on('data', (chunk: Buffer) => (output += chunk.toString()));
-  const exited = new Promise<number | string | null>((resolve) => child.once('exit', (code, signal) => resolve(code ?? signal)));
+  const exited = new Promise<number | string | null>((resolve) =>
+    child.once('exit', (code, signal) => resolve(code ?? signal)),
+  );
   return { child, exited, output: () => output };
 }
 
@@ -80,7 +94,10 @@ describe('supervision of npm start', () => {
   it('stops with exit code 1 on a crash loop (a setting the service refuses at start), after five quick exits', async () => {
     const dir = tempDir('supervisor-loop');
     dirs.push(dir);
-    const { child, exited, output } = supervise(dir, await freePort(), { TRUST_PROXY: 'true', RESTART_DELAY_MS: '50' });
+    const { child, exited, output } = supervise(dir, await freePort(), {
+      TRUST_PROXY: 'true',
+      RESTART_DELAY_MS: '50',
+    });
     try {
       expect(await exited).toBe(1);
       expect(output().match(/service started \(pid \d+\)/g)).toHaveLength(5);
@@ -99,7 +116,8 @@ describe('supervision of npm start', () => {
     const port = await freePort();
     const baseUrl = `http://127.0.0.1:${port}`;
     const { child: supervisor, exited, output: log } = supervise(dir, port);
-    const pids = () => [...log().matchAll(/service started \(pid (\d+)\)/g)].map((m) => Number(m[1]));
+    const pids = () =>
+      [...log().matchAll(/service started \(pid (\d+)\)/g)].map((m) => Number(m[1]));
     try {
       await waitFor('the first start', () => healthy(baseUrl));
       const [first] = pids();
@@ -123,7 +141,10 @@ describe('supervision of npm start', () => {
       const again = await signInOver(baseUrl, DEMO.viewer);
       const after = await call(baseUrl, 'GET', `/api/v1/jobs/${jobId}`, again);
       expect(after.status).toBe(200);
-      expect(after.body).toMatchObject({ status: 'failed', error: 'The service stopped while this job was running; start it again.' });
+      expect(after.body).toMatchObject({
+        status: 'failed',
+        error: 'The service stopped while this job was running; start it again.',
+      });
       expect((await call(baseUrl, 'GET', '/api/v1/me', token)).status).toBe(200);
 
       supervisor.kill('SIGTERM');
@@ -131,7 +152,8 @@ describe('supervision of npm start', () => {
       expect(alive(second!)).toBe(false);
       expect(await healthy(baseUrl)).toBeUndefined();
     } finally {
-      if (supervisor.exitCode === null && supervisor.signalCode === null) supervisor.kill('SIGKILL');
+      if (supervisor.exitCode === null && supervisor.signalCode === null)
+        supervisor.kill('SIGKILL');
       for (const pid of pids()) if (alive(pid)) process.kill(pid, 'SIGKILL');
     }
   });

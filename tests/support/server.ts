@@ -234,7 +234,9 @@ const mailDirs = new Map<string, string>();
 /** A `mail` folder beside a SQLite database file (the service's own default), else a new one. */
 function mailDirBeside(databaseUrl: string): string {
   const file = databaseUrl.startsWith('sqlite:') ? databaseUrl.slice('sqlite:'.length) : '';
-  return file && file !== ':memory:' ? path.join(path.dirname(path.resolve(file)), 'mail') : path.join(tempDir('mail'), 'mail');
+  return file && file !== ':memory:'
+    ? path.join(path.dirname(path.resolve(file)), 'mail')
+    : path.join(tempDir('mail'), 'mail');
 }
 
 /**
@@ -260,7 +262,8 @@ export async function waitForDeliveredMail(
       const match = pattern.exec(mail.text);
       if (match) return match;
     }
-    if (Date.now() > deadline) throw new Error(`no mail to ${to} matching ${pattern} was delivered within ${timeoutMs} ms`);
+    if (Date.now() > deadline)
+      throw new Error(`no mail to ${to} matching ${pattern} was delivered within ${timeoutMs} ms`);
     await new Promise((r) => setTimeout(r, 100));
   }
 }

@@ -95,16 +95,28 @@ export async function createApp(overrides: ConfigOverrides = {}): Promise<Pulsew
   app.get('/api/openapi.json', (_req, res) => {
     res.json(document);
   });
-  app.use('/api/docs', swaggerUi.serve, swaggerUi.setup(document, { customSiteTitle: 'Pulsewright API' }));
+  app.use(
+    '/api/docs',
+    swaggerUi.serve,
+    swaggerUi.setup(document, { customSiteTitle: 'Pulsewright API' }),
+  );
 
   app.use(
     OpenApiValidator.middleware({
       apiSpec: documentForValidator(document) as never,
-      validateRequests: { allErrors: true, discriminator: true, allowUnknownQueryParameters: false },
+      validateRequests: {
+        allErrors: true,
+        discriminator: true,
+        allowUnknownQueryParameters: false,
+      },
       validateResponses: config.validateResponses,
       validateSecurity: { handlers: { bearerAuth: createAuthorizer(services.auth) } },
-      ignorePaths: (path: string) => !path.startsWith('/api/') || path.startsWith('/api/docs') || path === '/api/openapi.json',
-      fileUploader: { storage: multer.memoryStorage(), limits: { fileSize: MAX_UPLOAD_BYTES, files: 1, fields: 10 } },
+      ignorePaths: (path: string) =>
+        !path.startsWith('/api/') || path.startsWith('/api/docs') || path === '/api/openapi.json',
+      fileUploader: {
+        storage: multer.memoryStorage(),
+        limits: { fileSize: MAX_UPLOAD_BYTES, files: 1, fields: 10 },
+      },
     }),
   );
   const version = document.info.version;
@@ -113,7 +125,9 @@ export async function createApp(overrides: ConfigOverrides = {}): Promise<Pulsew
   app.use(shareRoutes(services, config));
   app.use(computeRoutes(services));
   app.use(captureRoutes(services));
-  app.use('/api', (req, _res, next) => next(new HttpError(404, `No route ${req.method} ${req.originalUrl}.`)));
+  app.use('/api', (req, _res, next) =>
+    next(new HttpError(404, `No route ${req.method} ${req.originalUrl}.`)),
+  );
   app.use(staticWeb(config.webDist));
   app.use(problemHandler(document, config.logErrors));
 

@@ -93,7 +93,9 @@ export interface ComputeLimits {
 }
 
 /** Settings a caller (a test) gives instead of the environment's; compute limits one by one. */
-export type ConfigOverrides = Partial<Omit<AppConfig, 'compute'>> & { compute?: Partial<ComputeLimits> };
+export type ConfigOverrides = Partial<Omit<AppConfig, 'compute'>> & {
+  compute?: Partial<ComputeLimits>;
+};
 
 /** The repository root (apps/api/src or apps/api/dist → three levels up). */
 export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../..');
@@ -115,7 +117,9 @@ export function loadConfig(
     }
     return value;
   };
-  const databaseUrl = overrides.databaseUrl ?? (env.DATABASE_URL || `sqlite:${path.join(repoRoot, 'data', 'pulsewright.sqlite')}`);
+  const databaseUrl =
+    overrides.databaseUrl ??
+    (env.DATABASE_URL || `sqlite:${path.join(repoRoot, 'data', 'pulsewright.sqlite')}`);
   return {
     databaseUrl,
     seedDemo: env.SEED_DEMO !== 'false',
@@ -143,10 +147,14 @@ export function loadConfig(
 }
 
 /** The compute budgets and pool settings from the environment (docs/api.md, "Cost model and limits"). */
-function computeLimits(env: NodeJS.ProcessEnv, number: (name: string, fallback: number) => number): ComputeLimits {
+function computeLimits(
+  env: NodeJS.ProcessEnv,
+  number: (name: string, fallback: number) => number,
+): ComputeLimits {
   const whole = (name: string, fallback: number): number => {
     const value = number(name, fallback);
-    if (!Number.isInteger(value)) throw new RangeError(`${name} must be a whole number; got ${value}`);
+    if (!Number.isInteger(value))
+      throw new RangeError(`${name} must be a whole number; got ${value}`);
     return value;
   };
   const threads = whole('COMPUTE_THREADS', Math.max(1, availableParallelism()));
@@ -168,7 +176,9 @@ function computeLimits(env: NodeJS.ProcessEnv, number: (name: string, fallback: 
 
 /** The `mail` folder beside a SQLite database file; `data/mail` otherwise. */
 export function defaultMailDir(databaseUrl: string): string {
-  const file = databaseUrl.startsWith('sqlite:') ? databaseUrl.slice('sqlite:'.length).replace(/^\/\/(?=\/)/, '') : '';
+  const file = databaseUrl.startsWith('sqlite:')
+    ? databaseUrl.slice('sqlite:'.length).replace(/^\/\/(?=\/)/, '')
+    : '';
   if (file === '' || file === ':memory:') return path.join(repoRoot, 'data', 'mail');
   return path.join(path.dirname(path.resolve(file)), 'mail');
 }

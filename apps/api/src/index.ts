@@ -5,7 +5,8 @@ const host = process.env.HOST || '0.0.0.0';
 const app = await createApp();
 const server = app.listen(port, host, () => {
   console.log(`pulsewright: API and dashboard on http://localhost:${port} (docs at /api/docs)`);
-  if (app.freshDatabase) console.log('pulsewright: new database migrated and seeded with the Kestrel Drives demo');
+  if (app.freshDatabase)
+    console.log('pulsewright: new database migrated and seeded with the Kestrel Drives demo');
 });
 
 const stop = (signal: string) => {

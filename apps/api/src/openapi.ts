@@ -50,7 +50,9 @@ export function listOperations(document: OpenApiDocument): OperationInfo[] {
       }
       const isPublic = Array.isArray(operation.security) && operation.security.length === 0;
       if ((role === 'public') !== isPublic) {
-        throw new Error(`${method.toUpperCase()} ${path}: x-pulsewright-role and security disagree`);
+        throw new Error(
+          `${method.toUpperCase()} ${path}: x-pulsewright-role and security disagree`,
+        );
       }
       result.push({
         method,
@@ -65,7 +67,10 @@ export function listOperations(document: OpenApiDocument): OperationInfo[] {
 }
 
 /** Follows `#/...` references inside the document. */
-export function resolveRef(document: OpenApiDocument, schema: JsonSchema | undefined): JsonSchema | undefined {
+export function resolveRef(
+  document: OpenApiDocument,
+  schema: JsonSchema | undefined,
+): JsonSchema | undefined {
   let current = schema;
   for (let depth = 0; current && typeof current.$ref === 'string' && depth < 20; depth++) {
     const pointer = (current.$ref as string).replace(/^#\//, '').split('/');

@@ -9,7 +9,11 @@ type JsonBody<P extends keyof paths, M extends keyof paths[P]> = paths[P][M] ext
 }
   ? B
   : never;
-type JsonAnswer<P extends keyof paths, M extends keyof paths[P], S extends number> = paths[P][M] extends {
+type JsonAnswer<
+  P extends keyof paths,
+  M extends keyof paths[P],
+  S extends number,
+> = paths[P][M] extends {
   responses: { [K in S]: { content: { 'application/json': infer B } } };
 }
   ? B
@@ -18,12 +22,26 @@ type JsonAnswer<P extends keyof paths, M extends keyof paths[P], S extends numbe
 const login: JsonBody<'/api/v1/auth/login', 'post'> = { email: 'a@b.example', password: 'x' };
 const token: JsonAnswer<'/api/v1/auth/login', 'post', 200>['token'] = '';
 const key: JsonBody<'/api/v1/api-keys', 'post'> = { name: 'ci', role: 'viewer' };
-const keyAnswer: Pick<JsonAnswer<'/api/v1/api-keys', 'post', 201>, 'id' | 'key'> = { id: '', key: '' };
+const keyAnswer: Pick<JsonAnswer<'/api/v1/api-keys', 'post', 201>, 'id' | 'key'> = {
+  id: '',
+  key: '',
+};
 const spectrum: JsonBody<'/api/v1/spectra', 'post'> = {
-  modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8, mf: 21, vdc: 400, sampling: 'natural', carrierPhase: 0 },
+  modulation: {
+    method: 'sine-triangle',
+    scheme: 'bipolar',
+    ma: 0.8,
+    mf: 21,
+    vdc: 400,
+    sampling: 'natural',
+    carrierPhase: 0,
+  },
   maxOrder: 50,
 };
-const spectrumAnswer: Pick<JsonAnswer<'/api/v1/spectra', 'post', 200>, 'harmonics' | 'thd' | 'wthd'> = {
+const spectrumAnswer: Pick<
+  JsonAnswer<'/api/v1/spectra', 'post', 200>,
+  'harmonics' | 'thd' | 'wthd'
+> = {
   harmonics: [{ order: 1, amplitude: 0, phase: 0 }],
   thd: 0,
   wthd: 0,
@@ -37,7 +55,10 @@ const design: JsonBody<'/api/v1/designs/report', 'post'>['design'] = {
   filter: null,
 };
 const studyCreate: JsonBody<'/api/v1/studies', 'post'> = { projectId: '', name: 'x', design };
-const reportFigures: Pick<JsonAnswer<'/api/v1/studies/{id}/report', 'get', 200>['bridge'], 'thd' | 'wthd' | 'exact'> = {
+const reportFigures: Pick<
+  JsonAnswer<'/api/v1/studies/{id}/report', 'get', 200>['bridge'],
+  'thd' | 'wthd' | 'exact'
+> = {
   thd: 0,
   wthd: 0,
   exact: true,

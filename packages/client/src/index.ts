@@ -29,7 +29,11 @@ export type PulsewrightClient = Client<paths>;
  * const api = createPulsewrightClient({ baseUrl: 'http://localhost:3000', token });
  * const { data, error } = await api.POST('/api/v1/spectra', { body: { modulation, maxOrder: 50 } });
  */
-export function createPulsewrightClient({ baseUrl, token, fetch }: PulsewrightClientOptions): PulsewrightClient {
+export function createPulsewrightClient({
+  baseUrl,
+  token,
+  fetch,
+}: PulsewrightClientOptions): PulsewrightClient {
   const client = createClient<paths>({ baseUrl, ...(fetch ? { fetch } : {}) });
   const auth: Middleware = {
     onRequest({ request }) {

@@ -544,12 +544,10 @@ export function requestArbitrary(
     const bad = s.type === 'integer' ? ['abc', '0', '1.5', '99999999999'] : INVALID_IDS;
     variants.push({
       weight: 1,
-      arbitrary: fc
-        .constantFrom(...bad)
-        .map((value) => ({
-          variant: { kind: 'invalid-path', field: p.name } as Variant,
-          path: { [p.name]: value },
-        })),
+      arbitrary: fc.constantFrom(...bad).map((value) => ({
+        variant: { kind: 'invalid-path', field: p.name } as Variant,
+        path: { [p.name]: value },
+      })),
     });
   }
 

@@ -8,7 +8,15 @@ import { createApp } from '../app.js';
 import { loadConfig } from '../config.js';
 import { openDatabase } from '../db/database.js';
 import { migrate } from '../db/migrate.js';
-import { DEMO, DEMO_PASSWORD, deliveredTo, deliveredToken, signIn, testApp, type TestApp } from './helpers.js';
+import {
+  DEMO,
+  DEMO_PASSWORD,
+  deliveredTo,
+  deliveredToken,
+  signIn,
+  testApp,
+  type TestApp,
+} from './helpers.js';
 
 // Regression tests for the account findings of issue 11 (docs/security.md, "Issue 11"): each
 // failed on the code before the fix.
@@ -26,7 +34,10 @@ async function secondTeam(t: TestApp): Promise<{ teamId: string; admin: string }
     passwordHash: await auth.hashPassword('osprey-admin-password'),
   });
   await models.Membership.create({ teamId: team.id, userId: user.id, role: 'admin' });
-  return { teamId: team.id, admin: await signIn(t.app, 'admin@osprey.example', 'osprey-admin-password') };
+  return {
+    teamId: team.id,
+    admin: await signIn(t.app, 'admin@osprey.example', 'osprey-admin-password'),
+  };
 }
 
 describe('invitations to an address that already has an account', () => {
@@ -39,7 +50,10 @@ describe('invitations to an address that already has an account', () => {
   afterAll(async () => t.dispose());
 
   it('never set the password or the name: accepting with a new password is refused and changes nothing', async () => {
-    const invited = await request(t.app).post('/api/v1/invitations').set(bearer(osprey.admin)).send({ email: DEMO.engineer, role: 'admin' });
+    const invited = await request(t.app)
+      .post('/api/v1/invitations')
+      .set(bearer(osprey.admin))
+      .send({ email: DEMO.engineer, role: 'admin' });
     expect(invited.status).toBe(201);
     // Even the holder of the delivered link cannot take the account over with it.
     const token = deliveredToken(t, DEMO.engineer);
@@ -50,16 +64,31 @@ describe('invitations to an address that already has an account', () => {
     expect(takeover.headers['content-type']).toMatch(/problem\+json/);
     expect(takeover.body.detail).toContain('already has a Pulsewright account');
     expect(takeover.body.errors[0]).toMatchObject({ path: 'password' });
-    expect((await request(t.app).post('/api/v1/auth/login').send({ email: DEMO.engineer, password: 'attacker-chosen-password' })).status).toBe(401);
+    expect(
+      (
+        await request(t.app)
+          .post('/api/v1/auth/login')
+          .send({ email: DEMO.engineer, password: 'attacker-chosen-password' })
+      ).status,
+    ).toBe(401);
     const own = await signIn(t.app, DEMO.engineer);
     const me = await request(t.app).get('/api/v1/me').set(bearer(own));
-    expect(me.body).toMatchObject({ team: { name: 'Kestrel Drives' }, user: { name: expect.not.stringContaining('Mallory') } });
+    expect(me.body).toMatchObject({
+      team: { name: 'Kestrel Drives' },
+      user: { name: expect.not.stringContaining('Mallory') },
+    });
     const user = await t.app.services.models.User.findOne({ where: { email: DEMO.engineer } });
-    expect(await t.app.services.models.Membership.count({ where: { userId: user!.id, teamId: osprey.teamId } })).toBe(0);
+    expect(
+      await t.app.services.models.Membership.count({
+        where: { userId: user!.id, teamId: osprey.teamId },
+      }),
+    ).toBe(0);
     const listed = await request(t.app).get('/api/v1/invitations').set(bearer(osprey.admin));
     expect(listed.body.find((i: { id: string }) => i.id === invited.body.id).status).toBe('open');
     // The invitation itself tells the person how to join.
-    expect(deliveredTo(t, DEMO.engineer).text).toContain('already has a Pulsewright account: sign in with its current password');
+    expect(deliveredTo(t, DEMO.engineer).text).toContain(
+      'already has a Pulsewright account: sign in with its current password',
+    );
   });
 
   it('add the membership once the account signs in with its own password, which stays as it was', async () => {
@@ -71,11 +100,17 @@ describe('invitations to an address that already has an account', () => {
       .send({ token, name: 'Ignored Name', password: DEMO_PASSWORD });
     expect(accepted.status).toBe(200);
     const me = await request(t.app).get('/api/v1/me').set(bearer(accepted.body.token));
-    expect(me.body).toMatchObject({ role: 'admin', team: { id: osprey.teamId, name: 'Osprey Power' }, user: { email: DEMO.engineer, name: before.name } });
+    expect(me.body).toMatchObject({
+      role: 'admin',
+      team: { id: osprey.teamId, name: 'Osprey Power' },
+      user: { email: DEMO.engineer, name: before.name },
+    });
     await user!.reload();
     expect({ name: user!.name, passwordHash: user!.passwordHash }).toEqual(before);
     expect(await signIn(t.app, DEMO.engineer)).toMatch(/^pws_/);
-    const again = await request(t.app).post('/api/v1/invitations/accept').send({ token, name: 'x', password: DEMO_PASSWORD });
+    const again = await request(t.app)
+      .post('/api/v1/invitations/accept')
+      .send({ token, name: 'x', password: DEMO_PASSWORD });
     expect(again.status).toBe(400);
   });
 });
@@ -88,18 +123,38 @@ describe('the outbox', () => {
     t = await testApp();
     osprey = await secondTeam(t);
     kestrelAdmin = await signIn(t.app, DEMO.admin);
-    await request(t.app).post('/api/v1/auth/password-reset').send({ email: DEMO.viewer }).expect(202);
-    await request(t.app).post('/api/v1/invitations').set(bearer(kestrelAdmin)).send({ email: 'newcomer@kestrel.example', role: 'viewer' }).expect(201);
-    await request(t.app).post('/api/v1/invitations').set(bearer(osprey.admin)).send({ email: 'newcomer@osprey.example', role: 'viewer' }).expect(201);
-    await request(t.app).post('/api/v1/auth/password-reset').send({ email: 'admin@osprey.example' }).expect(202);
+    await request(t.app)
+      .post('/api/v1/auth/password-reset')
+      .send({ email: DEMO.viewer })
+      .expect(202);
+    await request(t.app)
+      .post('/api/v1/invitations')
+      .set(bearer(kestrelAdmin))
+      .send({ email: 'newcomer@kestrel.example', role: 'viewer' })
+      .expect(201);
+    await request(t.app)
+      .post('/api/v1/invitations')
+      .set(bearer(osprey.admin))
+      .send({ email: 'newcomer@osprey.example', role: 'viewer' })
+      .expect(201);
+    await request(t.app)
+      .post('/api/v1/auth/password-reset')
+      .send({ email: 'admin@osprey.example' })
+      .expect(202);
   });
   afterAll(async () => t.dispose());
 
   it("shows an admin only their own team's mail", async () => {
-    const kestrel = (await request(t.app).get('/api/v1/outbox').set(bearer(kestrelAdmin))).body as { to: string }[];
-    const ospreyMail = (await request(t.app).get('/api/v1/outbox').set(bearer(osprey.admin))).body as { to: string }[];
+    const kestrel = (await request(t.app).get('/api/v1/outbox').set(bearer(kestrelAdmin))).body as {
+      to: string;
+    }[];
+    const ospreyMail = (await request(t.app).get('/api/v1/outbox').set(bearer(osprey.admin)))
+      .body as { to: string }[];
     expect(kestrel.map((m) => m.to).sort()).toEqual(['newcomer@kestrel.example', DEMO.viewer]);
-    expect(ospreyMail.map((m) => m.to).sort()).toEqual(['admin@osprey.example', 'newcomer@osprey.example']);
+    expect(ospreyMail.map((m) => m.to).sort()).toEqual([
+      'admin@osprey.example',
+      'newcomer@osprey.example',
+    ]);
   });
 
   it('never shows a live one-time token: the outbox masks it, the delivered message holds it', async () => {
@@ -112,15 +167,31 @@ describe('the outbox', () => {
     const delivered = deliveredToken(t, DEMO.viewer);
     expect(delivered).toMatch(LIVE_ONE_TIME_TOKEN);
     // The delivered link works (the mask is not a broken token in the real message).
-    expect((await request(t.app).post('/api/v1/auth/password-reset/confirm').send({ token: delivered, password: 'viewer-new-password' })).status).toBe(204);
-    await request(t.app).post('/api/v1/auth/password-reset/confirm').send({ token: delivered, password: 'x-long-password' }).expect(400);
+    expect(
+      (
+        await request(t.app)
+          .post('/api/v1/auth/password-reset/confirm')
+          .send({ token: delivered, password: 'viewer-new-password' })
+      ).status,
+    ).toBe(204);
+    await request(t.app)
+      .post('/api/v1/auth/password-reset/confirm')
+      .send({ token: delivered, password: 'x-long-password' })
+      .expect(400);
   });
 
   it('keeps no live one-time token in the database either (scan of the SQLite file and its WAL)', async () => {
-    const tokens = [deliveredToken(t, 'newcomer@kestrel.example'), deliveredToken(t, 'newcomer@osprey.example'), deliveredToken(t, 'admin@osprey.example')];
+    const tokens = [
+      deliveredToken(t, 'newcomer@kestrel.example'),
+      deliveredToken(t, 'newcomer@osprey.example'),
+      deliveredToken(t, 'admin@osprey.example'),
+    ];
     const bytes = [t.file, `${t.file}-wal`].filter(existsSync).map((f) => readFileSync(f));
     for (const token of tokens) {
-      for (const content of bytes) expect(content.includes(Buffer.from(token.slice(4))), `found ${token.slice(0, 8)}…`).toBe(false);
+      for (const content of bytes)
+        expect(content.includes(Buffer.from(token.slice(4))), `found ${token.slice(0, 8)}…`).toBe(
+          false,
+        );
     }
   });
 });
@@ -136,14 +207,30 @@ describe('migration 0003 on a database of the previous release', () => {
       const stamps = { createdAt: new Date(), updatedAt: new Date() };
       const text = `Accept within 7 days: http://localhost:3000/accept-invitation?token=${live}\n`;
       await sequelize.getQueryInterface().bulkInsert('outbox', [
-        { id: randomUUID(), to: 'someone@kestrel.example', subject: 'Invitation', text, message: JSON.stringify({ text }), status: 'saved', ...stamps },
+        {
+          id: randomUUID(),
+          to: 'someone@kestrel.example',
+          subject: 'Invitation',
+          text,
+          message: JSON.stringify({ text }),
+          status: 'saved',
+          ...stamps,
+        },
       ]);
       await sequelize.close();
 
-      const app = await createApp({ databaseUrl: `sqlite:${file}`, bcryptRounds: 4, logErrors: false, webDist: path.join(dir, 'none'), demoPassword: DEMO_PASSWORD });
+      const app = await createApp({
+        databaseUrl: `sqlite:${file}`,
+        bcryptRounds: 4,
+        logErrors: false,
+        webDist: path.join(dir, 'none'),
+        demoPassword: DEMO_PASSWORD,
+      });
       try {
         const [row] = await app.services.models.Outbox.findAll();
-        expect(row!.text).toBe('Accept within 7 days: http://localhost:3000/accept-invitation?token=pwt_[hidden]\n');
+        expect(row!.text).toBe(
+          'Accept within 7 days: http://localhost:3000/accept-invitation?token=pwt_[hidden]\n',
+        );
         expect(row!.message).not.toContain(live.slice(4));
         expect(row!.teamId).toBeNull();
         const team = await app.services.models.Team.create({ name: 'Any team' });
@@ -165,26 +252,47 @@ describe('single-use tokens under concurrency', () => {
   afterAll(async () => t.dispose());
 
   it('three concurrent confirmations of one reset token: one 204, the others a 400 naming the token, one password set', async () => {
-    await request(t.app).post('/api/v1/auth/password-reset').send({ email: DEMO.viewer }).expect(202);
+    await request(t.app)
+      .post('/api/v1/auth/password-reset')
+      .send({ email: DEMO.viewer })
+      .expect(202);
     const token = deliveredToken(t, DEMO.viewer);
     const passwords = ['first-new-password', 'second-new-password', 'third-new-password'];
-    const answers = await Promise.all(passwords.map((password) => request(t.app).post('/api/v1/auth/password-reset/confirm').send({ token, password })));
+    const answers = await Promise.all(
+      passwords.map((password) =>
+        request(t.app).post('/api/v1/auth/password-reset/confirm').send({ token, password }),
+      ),
+    );
     expect(answers.map((a) => a.status).sort()).toEqual([204, 400, 400]);
     for (const refused of answers.filter((a) => a.status === 400)) {
       expect(refused.body.errors[0]).toMatchObject({ path: 'token' });
       expect(refused.body.detail).toMatch(/used/);
     }
     const winner = passwords[answers.findIndex((a) => a.status === 204)];
-    const signIns = await Promise.all(passwords.map((password) => request(t.app).post('/api/v1/auth/login').send({ email: DEMO.viewer, password })));
-    expect(signIns.map((s, i) => [passwords[i], s.status])).toEqual(passwords.map((p) => [p, p === winner ? 200 : 401]));
+    const signIns = await Promise.all(
+      passwords.map((password) =>
+        request(t.app).post('/api/v1/auth/login').send({ email: DEMO.viewer, password }),
+      ),
+    );
+    expect(signIns.map((s, i) => [passwords[i], s.status])).toEqual(
+      passwords.map((p) => [p, p === winner ? 200 : 401]),
+    );
   });
 
   it('three concurrent acceptances of one invitation: one session, the others 400, one account and one membership', async () => {
     const admin = await signIn(t.app, DEMO.admin);
-    await request(t.app).post('/api/v1/invitations').set(bearer(admin)).send({ email: 'racer@kestrel.example', role: 'engineer' }).expect(201);
+    await request(t.app)
+      .post('/api/v1/invitations')
+      .set(bearer(admin))
+      .send({ email: 'racer@kestrel.example', role: 'engineer' })
+      .expect(201);
     const token = deliveredToken(t, 'racer@kestrel.example');
     const answers = await Promise.all(
-      [1, 2, 3].map((n) => request(t.app).post('/api/v1/invitations/accept').send({ token, name: `Racer ${n}`, password: `racer-password-${n}` })),
+      [1, 2, 3].map((n) =>
+        request(t.app)
+          .post('/api/v1/invitations/accept')
+          .send({ token, name: `Racer ${n}`, password: `racer-password-${n}` }),
+      ),
     );
     expect(answers.map((a) => a.status).sort()).toEqual([200, 400, 400]);
     const { models } = t.app.services;
@@ -205,7 +313,10 @@ describe('API key lineage', () => {
   afterAll(async () => t.dispose());
 
   const makeKey = (credential: string, body: Record<string, unknown>) =>
-    request(t.app).post('/api/v1/api-keys').set(bearer(credential)).send({ name: 'lineage', ...body });
+    request(t.app)
+      .post('/api/v1/api-keys')
+      .set(bearer(credential))
+      .send({ name: 'lineage', ...body });
 
   it('a key made with a key that expires in a day cannot outlive it: no expiry inherits the parent’s, a later one is refused', async () => {
     const parent = await makeKey(session, { role: 'engineer', expiresInDays: 1 });
@@ -219,7 +330,9 @@ describe('API key lineage', () => {
     expect(longer.body.detail).toMatch(/cannot outlive/);
     const shorter = await makeKey(parent.body.key, { role: 'viewer', expiresInDays: 1 });
     expect(shorter.status).toBe(201);
-    expect(Date.parse(shorter.body.expiresAt)).toBeLessThanOrEqual(Date.parse(parent.body.expiresAt));
+    expect(Date.parse(shorter.body.expiresAt)).toBeLessThanOrEqual(
+      Date.parse(parent.body.expiresAt),
+    );
   });
 
   it('cannot outrank its parent', async () => {
@@ -241,25 +354,38 @@ describe('API key lineage', () => {
       expect(key.status).toBe(201);
       expect((await request(t.app).get('/api/v1/me').set(bearer(key.body.key))).status).toBe(200);
     }
-    expect((await request(t.app).delete(`/api/v1/api-keys/${parent.body.id}`).set(bearer(session))).status).toBe(204);
+    expect(
+      (await request(t.app).delete(`/api/v1/api-keys/${parent.body.id}`).set(bearer(session)))
+        .status,
+    ).toBe(204);
     for (const key of [parent, child, grandchild]) {
       expect((await request(t.app).get('/api/v1/me').set(bearer(key.body.key))).status).toBe(401);
     }
     expect((await request(t.app).get('/api/v1/me').set(bearer(sibling.body.key))).status).toBe(200);
-    const listed = (await request(t.app).get('/api/v1/api-keys').set(bearer(session))).body as { id: string; revokedAt: string | null }[];
-    for (const key of [child, grandchild]) expect(listed.find((k) => k.id === key.body.id)?.revokedAt).not.toBeNull();
+    const listed = (await request(t.app).get('/api/v1/api-keys').set(bearer(session))).body as {
+      id: string;
+      revokedAt: string | null;
+    }[];
+    for (const key of [child, grandchild])
+      expect(listed.find((k) => k.id === key.body.id)?.revokedAt).not.toBeNull();
   });
 
   it('a key whose parent was revoked by other means (a race with its creation) is refused all the same', async () => {
     const parent = await makeKey(session, { role: 'engineer' });
     const child = await makeKey(parent.body.key, { role: 'viewer' });
-    await t.app.services.models.ApiKey.update({ revokedAt: new Date() }, { where: { id: parent.body.id } });
+    await t.app.services.models.ApiKey.update(
+      { revokedAt: new Date() },
+      { where: { id: parent.body.id } },
+    );
     expect((await request(t.app).get('/api/v1/me').set(bearer(child.body.key))).status).toBe(401);
   });
 
   it('a key made with a revoked key is refused before it exists', async () => {
     const parent = await makeKey(session, { role: 'engineer' });
-    await request(t.app).delete(`/api/v1/api-keys/${parent.body.id}`).set(bearer(session)).expect(204);
+    await request(t.app)
+      .delete(`/api/v1/api-keys/${parent.body.id}`)
+      .set(bearer(session))
+      .expect(204);
     expect((await makeKey(parent.body.key, { role: 'viewer' })).status).toBe(401);
   });
 });
@@ -273,31 +399,69 @@ describe('password reset policy: every session and every API key of the user end
 
   it('ends all sessions, revokes all keys (made in a session or with a key) and voids other open reset links', async () => {
     const sessions = [await signIn(t.app, DEMO.engineer), await signIn(t.app, DEMO.engineer)];
-    const key = (await request(t.app).post('/api/v1/api-keys').set(bearer(sessions[0]!)).send({ name: 'ci', role: 'engineer' })).body;
-    const derived = (await request(t.app).post('/api/v1/api-keys').set(bearer(key.key)).send({ name: 'derived', role: 'viewer' })).body;
-    const otherUser = (await request(t.app).post('/api/v1/api-keys').set(bearer(await signIn(t.app, DEMO.engineer2))).send({ name: 'lena', role: 'viewer' })).body;
+    const key = (
+      await request(t.app)
+        .post('/api/v1/api-keys')
+        .set(bearer(sessions[0]!))
+        .send({ name: 'ci', role: 'engineer' })
+    ).body;
+    const derived = (
+      await request(t.app)
+        .post('/api/v1/api-keys')
+        .set(bearer(key.key))
+        .send({ name: 'derived', role: 'viewer' })
+    ).body;
+    const otherUser = (
+      await request(t.app)
+        .post('/api/v1/api-keys')
+        .set(bearer(await signIn(t.app, DEMO.engineer2)))
+        .send({ name: 'lena', role: 'viewer' })
+    ).body;
     for (const credential of [...sessions, key.key, derived.key, otherUser.key]) {
       expect((await request(t.app).get('/api/v1/me').set(bearer(credential))).status).toBe(200);
     }
-    await request(t.app).post('/api/v1/auth/password-reset').send({ email: DEMO.engineer }).expect(202);
+    await request(t.app)
+      .post('/api/v1/auth/password-reset')
+      .send({ email: DEMO.engineer })
+      .expect(202);
     const older = deliveredToken(t, DEMO.engineer);
-    await request(t.app).post('/api/v1/auth/password-reset').send({ email: DEMO.engineer }).expect(202);
+    await request(t.app)
+      .post('/api/v1/auth/password-reset')
+      .send({ email: DEMO.engineer })
+      .expect(202);
     const newer = deliveredToken(t, DEMO.engineer);
     expect(newer).not.toBe(older);
-    await request(t.app).post('/api/v1/auth/password-reset/confirm').send({ token: newer, password: 'engineer-new-password' }).expect(204);
+    await request(t.app)
+      .post('/api/v1/auth/password-reset/confirm')
+      .send({ token: newer, password: 'engineer-new-password' })
+      .expect(204);
 
     for (const credential of [...sessions, key.key, derived.key]) {
       expect((await request(t.app).get('/api/v1/me').set(bearer(credential))).status).toBe(401);
     }
     // Someone else's key is untouched; the older link no longer works.
     expect((await request(t.app).get('/api/v1/me').set(bearer(otherUser.key))).status).toBe(200);
-    expect((await request(t.app).post('/api/v1/auth/password-reset/confirm').send({ token: older, password: 'another-new-password' })).status).toBe(400);
+    expect(
+      (
+        await request(t.app)
+          .post('/api/v1/auth/password-reset/confirm')
+          .send({ token: older, password: 'another-new-password' })
+      ).status,
+    ).toBe(400);
     const fresh = await signIn(t.app, DEMO.engineer, 'engineer-new-password');
-    const listed = (await request(t.app).get('/api/v1/api-keys').set(bearer(fresh))).body as { id: string; revokedAt: string | null }[];
+    const listed = (await request(t.app).get('/api/v1/api-keys').set(bearer(fresh))).body as {
+      id: string;
+      revokedAt: string | null;
+    }[];
     expect(listed.filter((k) => k.revokedAt === null)).toEqual([]);
     const admin = await signIn(t.app, DEMO.admin);
-    const events = (await request(t.app).get('/api/v1/audit-events').set(bearer(admin)).query({ limit: 200 })).body as { action: string; details: Record<string, unknown> }[];
-    expect(events.find((e) => e.action === 'auth.password-reset')?.details).toMatchObject({ sessionsEnded: 2, keysRevoked: 2 });
+    const events = (
+      await request(t.app).get('/api/v1/audit-events').set(bearer(admin)).query({ limit: 200 })
+    ).body as { action: string; details: Record<string, unknown> }[];
+    expect(events.find((e) => e.action === 'auth.password-reset')?.details).toMatchObject({
+      sessionsEnded: 2,
+      keysRevoked: 2,
+    });
   });
 });
 
@@ -317,7 +481,9 @@ describe('sign-in timing', () => {
   it('takes the same time for an unknown address as for a known one with a wrong password', async () => {
     const time = async (email: string): Promise<number> => {
       const started = performance.now();
-      const res = await request(t.app).post('/api/v1/auth/login').send({ email, password: 'a-wrong-password' });
+      const res = await request(t.app)
+        .post('/api/v1/auth/login')
+        .send({ email, password: 'a-wrong-password' });
       expect(res.status).toBe(401);
       return performance.now() - started;
     };
@@ -330,7 +496,9 @@ describe('sign-in timing', () => {
       unknown.push(await time(`nobody${i}@nowhere.example`));
     }
     const ratio = median(unknown) / median(known);
-    console.info(`sign-in median: known ${median(known).toFixed(1)} ms, unknown ${median(unknown).toFixed(1)} ms, ratio ${ratio.toFixed(2)}`);
+    console.info(
+      `sign-in median: known ${median(known).toFixed(1)} ms, unknown ${median(unknown).toFixed(1)} ms, ratio ${ratio.toFixed(2)}`,
+    );
     // Before the fix the ratio was about 0.03 (a cost-4 dummy hash against cost-10 hashes);
     // equal costs give about 1. Generous bounds for a busy test machine.
     expect(ratio).toBeGreaterThan(0.6);
@@ -343,11 +511,20 @@ describe('rate limits', () => {
     const t = await testApp({ loginRateLimit: 3 });
     try {
       for (let i = 0; i < 8; i++) {
-        expect((await request(t.app).post('/api/v1/auth/login').send({ email: DEMO.viewer, password: DEMO_PASSWORD })).status).toBe(200);
+        expect(
+          (
+            await request(t.app)
+              .post('/api/v1/auth/login')
+              .send({ email: DEMO.viewer, password: DEMO_PASSWORD })
+          ).status,
+        ).toBe(200);
       }
       const statuses: number[] = [];
       for (const email of [DEMO.admin, DEMO.engineer, DEMO.engineer2, DEMO.viewer]) {
-        statuses.push((await request(t.app).post('/api/v1/auth/login').send({ email, password: 'guess' })).status);
+        statuses.push(
+          (await request(t.app).post('/api/v1/auth/login').send({ email, password: 'guess' }))
+            .status,
+        );
       }
       expect(statuses).toEqual([401, 401, 401, 429]);
     } finally {
@@ -356,17 +533,44 @@ describe('rate limits', () => {
   });
 
   it('sign-in, password reset and invitation acceptance have separate buckets', async () => {
-    const t = await testApp({ loginRateLimit: 2, loginAccountRateLimit: 2, resetRateLimit: 2, acceptRateLimit: 2 });
+    const t = await testApp({
+      loginRateLimit: 2,
+      loginAccountRateLimit: 2,
+      resetRateLimit: 2,
+      acceptRateLimit: 2,
+    });
     try {
-      const wrong = () => request(t.app).post('/api/v1/auth/login').send({ email: DEMO.viewer, password: 'guess' });
-      expect([(await wrong()).status, (await wrong()).status, (await wrong()).status]).toEqual([401, 401, 429]);
+      const wrong = () =>
+        request(t.app).post('/api/v1/auth/login').send({ email: DEMO.viewer, password: 'guess' });
+      expect([(await wrong()).status, (await wrong()).status, (await wrong()).status]).toEqual([
+        401, 401, 429,
+      ]);
       // Sign-in is exhausted; the other doors are not.
-      expect((await request(t.app).post('/api/v1/auth/password-reset').send({ email: DEMO.viewer })).status).toBe(202);
+      expect(
+        (await request(t.app).post('/api/v1/auth/password-reset').send({ email: DEMO.viewer }))
+          .status,
+      ).toBe(202);
       const badToken = { token: 'pwt_not-a-real-token-at-all', password: 'a-long-password' };
-      expect((await request(t.app).post('/api/v1/auth/password-reset/confirm').send(badToken)).status).toBe(400);
-      expect((await request(t.app).post('/api/v1/invitations/accept').send({ ...badToken, name: 'X' })).status).toBe(400);
-      expect((await request(t.app).post('/api/v1/invitations/accept').send({ ...badToken, name: 'X' })).status).toBe(400);
-      const limited = await request(t.app).post('/api/v1/invitations/accept').send({ ...badToken, name: 'X' });
+      expect(
+        (await request(t.app).post('/api/v1/auth/password-reset/confirm').send(badToken)).status,
+      ).toBe(400);
+      expect(
+        (
+          await request(t.app)
+            .post('/api/v1/invitations/accept')
+            .send({ ...badToken, name: 'X' })
+        ).status,
+      ).toBe(400);
+      expect(
+        (
+          await request(t.app)
+            .post('/api/v1/invitations/accept')
+            .send({ ...badToken, name: 'X' })
+        ).status,
+      ).toBe(400);
+      const limited = await request(t.app)
+        .post('/api/v1/invitations/accept')
+        .send({ ...badToken, name: 'X' });
       expect(limited.status).toBe(429);
       expect(limited.body.detail).toMatch(/invitation acceptances/);
     } finally {
@@ -375,20 +579,37 @@ describe('rate limits', () => {
   });
 
   it('limits failed sign-ins per account from any address (TRUST_PROXY names the client), and resets per address', async () => {
-    const t = await testApp({ trustProxy: 1, loginRateLimit: 100, loginAccountRateLimit: 3, resetAccountRateLimit: 2 });
+    const t = await testApp({
+      trustProxy: 1,
+      loginRateLimit: 100,
+      loginAccountRateLimit: 3,
+      resetAccountRateLimit: 2,
+    });
     try {
       const from = (ip: string, email: string) =>
-        request(t.app).post('/api/v1/auth/login').set('X-Forwarded-For', ip).send({ email, password: 'guess' });
+        request(t.app)
+          .post('/api/v1/auth/login')
+          .set('X-Forwarded-For', ip)
+          .send({ email, password: 'guess' });
       const statuses: number[] = [];
-      for (const ip of ['192.0.2.1', '192.0.2.2', '192.0.2.3', '192.0.2.4']) statuses.push((await from(ip, DEMO.admin)).status);
+      for (const ip of ['192.0.2.1', '192.0.2.2', '192.0.2.3', '192.0.2.4'])
+        statuses.push((await from(ip, DEMO.admin)).status);
       expect(statuses).toEqual([401, 401, 401, 429]);
       const limited = await from('192.0.2.5', DEMO.admin);
       expect(limited.body.detail).toMatch(/failed sign-ins to this account/);
       // Another account from the same addresses is not affected.
       expect((await from('192.0.2.1', DEMO.engineer)).status).toBe(401);
 
-      const reset = (email: string) => request(t.app).post('/api/v1/auth/password-reset').set('X-Forwarded-For', '198.51.100.7').send({ email });
-      expect([(await reset(DEMO.viewer)).status, (await reset(DEMO.viewer)).status, (await reset(DEMO.viewer)).status]).toEqual([202, 202, 429]);
+      const reset = (email: string) =>
+        request(t.app)
+          .post('/api/v1/auth/password-reset')
+          .set('X-Forwarded-For', '198.51.100.7')
+          .send({ email });
+      expect([
+        (await reset(DEMO.viewer)).status,
+        (await reset(DEMO.viewer)).status,
+        (await reset(DEMO.viewer)).status,
+      ]).toEqual([202, 202, 429]);
       expect((await reset(DEMO.engineer)).status).toBe(202);
     } finally {
       await t.dispose();
@@ -402,7 +623,14 @@ describe('rate limits', () => {
     try {
       const statuses: number[] = [];
       for (const [n, email] of [DEMO.admin, DEMO.engineer, DEMO.engineer2, DEMO.viewer].entries()) {
-        statuses.push((await request(t.app).post('/api/v1/auth/login').set('X-Forwarded-For', `203.0.113.${n + 1}`).send({ email, password: 'guess' })).status);
+        statuses.push(
+          (
+            await request(t.app)
+              .post('/api/v1/auth/login')
+              .set('X-Forwarded-For', `203.0.113.${n + 1}`)
+              .send({ email, password: 'guess' })
+          ).status,
+        );
       }
       expect(statuses).toEqual([401, 401, 401, 429]);
       expect(String(warnings.mock.calls[0]?.[0])).toMatch(/trust proxy/);
@@ -415,7 +643,9 @@ describe('rate limits', () => {
   it('TRUST_PROXY is off by default, takes hop counts and addresses, and refuses `true`', () => {
     expect(loadConfig({}).trustProxy).toBe(false);
     expect(loadConfig({ TRUST_PROXY: '1' }).trustProxy).toBe(1);
-    expect(loadConfig({ TRUST_PROXY: 'loopback, 10.0.0.0/8' }).trustProxy).toBe('loopback, 10.0.0.0/8');
+    expect(loadConfig({ TRUST_PROXY: 'loopback, 10.0.0.0/8' }).trustProxy).toBe(
+      'loopback, 10.0.0.0/8',
+    );
     expect(() => loadConfig({ TRUST_PROXY: 'true' })).toThrow(/TRUST_PROXY=true/);
   });
 });

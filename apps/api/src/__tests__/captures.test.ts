@@ -13,23 +13,79 @@ describe('capture uploads', () => {
   afterAll(async () => t.dispose());
 
   const upload = (content: string | Buffer, fileName = 'bench.csv') =>
-    request(t.app).post('/api/v1/captures').set(auth).attach('file', Buffer.from(content), fileName);
+    request(t.app)
+      .post('/api/v1/captures')
+      .set(auth)
+      .attach('file', Buffer.from(content), fileName);
   const stored = () => t.app.services.models.Capture.count();
 
   const good = captureCsv().split('\n');
-  const withLine = (line: number, text: string) => good.map((l, i) => (i === line - 1 ? text : l)).join('\n');
+  const withLine = (line: number, text: string) =>
+    good.map((l, i) => (i === line - 1 ? text : l)).join('\n');
 
-  const bad: { name: string; content: () => string | Buffer; file?: string; status: number; words: string[] }[] = [
+  const bad: {
+    name: string;
+    content: () => string | Buffer;
+    file?: string;
+    status: number;
+    words: string[];
+  }[] = [
     { name: 'an empty file', content: () => '', status: 400, words: ['empty'] },
-    { name: 'a header only', content: () => 'time,voltage\n', status: 400, words: ['0 data rows', 'at least 16'] },
-    { name: 'wrong columns', content: () => good.join('\n').replace('time,voltage,current', 'time,pressure,current'), status: 400, words: ['line 1', '"pressure"', 'time, voltage'] },
-    { name: 'no voltage column', content: () => good.map((l) => l.split(',').slice(0, 1).join(',')).join('\n'), status: 400, words: ['no voltage column'] },
-    { name: 'a non-numeric cell', content: () => withLine(7, '0.001000,twelve,0.1'), status: 400, words: ['line 7', 'voltage', '"twelve"', 'not a finite number'] },
-    { name: 'time going backwards', content: () => withLine(10, '0.000100,1,0.1'), status: 400, words: ['line 10', 'does not rise'] },
-    { name: 'uneven time', content: () => withLine(10, '0.001750,1,0.1'), status: 400, words: ['line 10', 'evenly spaced'] },
-    { name: 'a ragged row', content: () => withLine(5, '0.000800,1'), status: 400, words: ['not valid CSV'] },
-    { name: 'binary content named .csv', content: () => Buffer.from([0x89, 0x50, 0x4e, 0x47, 0, 0, 0, 0x0d]), file: 'photo.csv', status: 400, words: ['not text'] },
-    { name: 'a file above 5 MB', content: () => 'time,voltage\n' + '0.000001,1.000000000000000000\n'.repeat(190_000), status: 413, words: ['5 MB'] },
+    {
+      name: 'a header only',
+      content: () => 'time,voltage\n',
+      status: 400,
+      words: ['0 data rows', 'at least 16'],
+    },
+    {
+      name: 'wrong columns',
+      content: () => good.join('\n').replace('time,voltage,current', 'time,pressure,current'),
+      status: 400,
+      words: ['line 1', '"pressure"', 'time, voltage'],
+    },
+    {
+      name: 'no voltage column',
+      content: () => good.map((l) => l.split(',').slice(0, 1).join(',')).join('\n'),
+      status: 400,
+      words: ['no voltage column'],
+    },
+    {
+      name: 'a non-numeric cell',
+      content: () => withLine(7, '0.001000,twelve,0.1'),
+      status: 400,
+      words: ['line 7', 'voltage', '"twelve"', 'not a finite number'],
+    },
+    {
+      name: 'time going backwards',
+      content: () => withLine(10, '0.000100,1,0.1'),
+      status: 400,
+      words: ['line 10', 'does not rise'],
+    },
+    {
+      name: 'uneven time',
+      content: () => withLine(10, '0.001750,1,0.1'),
+      status: 400,
+      words: ['line 10', 'evenly spaced'],
+    },
+    {
+      name: 'a ragged row',
+      content: () => withLine(5, '0.000800,1'),
+      status: 400,
+      words: ['not valid CSV'],
+    },
+    {
+      name: 'binary content named .csv',
+      content: () => Buffer.from([0x89, 0x50, 0x4e, 0x47, 0, 0, 0, 0x0d]),
+      file: 'photo.csv',
+      status: 400,
+      words: ['not text'],
+    },
+    {
+      name: 'a file above 5 MB',
+      content: () => 'time,voltage\n' + '0.000001,1.000000000000000000\n'.repeat(190_000),
+      status: 413,
+      words: ['5 MB'],
+    },
   ];
 
   for (const c of bad) {
@@ -55,13 +111,22 @@ describe('capture uploads', () => {
     const content = captureCsv();
     const res = await upload(content, '../../etc/<bench> run.csv');
     expect(res.status, JSON.stringify(res.body)).toBe(201);
-    expect(res.body).toMatchObject({ fileName: '_bench_ run.csv', rows: 200, sampleRate: expect.any(Number), columns: ['time', 'voltage', 'current'] });
-    expect(res.body.sampleRate).toBeCloseTo(5000, 6);
-    const file = await request(t.app).get(`/api/v1/captures/${res.body.id}/file`).set(auth).buffer(true).parse((r, cb) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => cb(null, Buffer.concat(chunks)));
+    expect(res.body).toMatchObject({
+      fileName: '_bench_ run.csv',
+      rows: 200,
+      sampleRate: expect.any(Number),
+      columns: ['time', 'voltage', 'current'],
     });
+    expect(res.body.sampleRate).toBeCloseTo(5000, 6);
+    const file = await request(t.app)
+      .get(`/api/v1/captures/${res.body.id}/file`)
+      .set(auth)
+      .buffer(true)
+      .parse((r, cb) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => cb(null, Buffer.concat(chunks)));
+      });
     expect(file.headers['content-type']).toMatch(/^text\/csv/);
     expect(file.headers['content-disposition']).toBe('attachment; filename="_bench_ run.csv"');
     expect((file.body as Buffer).equals(Buffer.from(content))).toBe(true);
@@ -72,9 +137,15 @@ describe('capture uploads', () => {
   it('analyses a capture with the window gain corrected and compares it with a study', async () => {
     // A pure 50 Hz sine of 100 V peak sampled at 10 kS/s for 0.2 s (10 whole periods).
     const lines = ['t,v'];
-    for (let k = 0; k < 2000; k++) lines.push(`${(k / 10000).toFixed(6)},${(100 * Math.sin(2 * Math.PI * 50 * (k / 10000))).toFixed(6)}`);
+    for (let k = 0; k < 2000; k++)
+      lines.push(
+        `${(k / 10000).toFixed(6)},${(100 * Math.sin(2 * Math.PI * 50 * (k / 10000))).toFixed(6)}`,
+      );
     const id = (await upload(lines.join('\n'), 'sine.csv')).body.id;
-    const spectrum = await request(t.app).post(`/api/v1/captures/${id}/spectrum`).set(auth).send({ window: 'hann', fundamentalFrequency: 50, maxOrder: 5 });
+    const spectrum = await request(t.app)
+      .post(`/api/v1/captures/${id}/spectrum`)
+      .set(auth)
+      .send({ window: 'hann', fundamentalFrequency: 50, maxOrder: 5 });
     expect(spectrum.status, JSON.stringify(spectrum.body)).toBe(200);
     // Hann coherent gain 0.5 (Harris, Proc. IEEE, 1978); corrected, the peak reads 100 V.
     expect(spectrum.body.coherentGain).toBeCloseTo(0.5, 3);
@@ -82,16 +153,29 @@ describe('capture uploads', () => {
     expect(first.amplitude).toBeGreaterThan(95);
     expect(first.amplitude).toBeLessThan(105);
 
-    const projectId = (await request(t.app).post('/api/v1/projects').set(auth).send({ name: 'Bench' })).body.id;
-    const studyId = (await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name: 'Prediction', design: withMa(DESIGN, 0.25) })).body.id;
-    const comparison = await request(t.app).post(`/api/v1/captures/${id}/comparison`).set(auth).send({ studyId, fundamentalFrequency: 50, maxOrder: 3 });
+    const projectId = (
+      await request(t.app).post('/api/v1/projects').set(auth).send({ name: 'Bench' })
+    ).body.id;
+    const studyId = (
+      await request(t.app)
+        .post('/api/v1/studies')
+        .set(auth)
+        .send({ projectId, name: 'Prediction', design: withMa(DESIGN, 0.25) })
+    ).body.id;
+    const comparison = await request(t.app)
+      .post(`/api/v1/captures/${id}/comparison`)
+      .set(auth)
+      .send({ studyId, fundamentalFrequency: 50, maxOrder: 3 });
     expect(comparison.status, JSON.stringify(comparison.body)).toBe(200);
     const order1 = comparison.body.orders.find((o: { order: number }) => o.order === 1);
     // Predicted fundamental = ma·vdc = 0.25·400 = 100 V (linear range; Holmes and Lipo, 2003, ch. 3).
     expect(order1.predicted).toBeCloseTo(100, 6);
     expect(Math.abs(order1.ratio - 1)).toBeLessThan(0.05);
 
-    const noCurrent = await request(t.app).post(`/api/v1/captures/${id}/spectrum`).set(auth).send({ column: 'current' });
+    const noCurrent = await request(t.app)
+      .post(`/api/v1/captures/${id}/spectrum`)
+      .set(auth)
+      .send({ column: 'current' });
     expect(noCurrent.status).toBe(400);
     expect(noCurrent.body.errors[0].path).toBe('column');
   });

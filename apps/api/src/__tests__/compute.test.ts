@@ -27,17 +27,31 @@ describe('compute routes', () => {
   afterAll(async () => t.dispose());
 
   it('answers POST /api/v1/spectra with { harmonics, thd, wthd } matching facts of the trade', async () => {
-    const res = await request(t.app).post('/api/v1/spectra').set(auth).send({ modulation: SINE_TRIANGLE, maxOrder: 100 });
+    const res = await request(t.app)
+      .post('/api/v1/spectra')
+      .set(auth)
+      .send({ modulation: SINE_TRIANGLE, maxOrder: 100 });
     expect(res.status).toBe(200);
-    expect(Object.keys(res.body).sort()).toEqual(['harmonics', 'name', 'spectrumThd', 'thd', 'wthd']);
+    expect(Object.keys(res.body).sort()).toEqual([
+      'harmonics',
+      'name',
+      'spectrumThd',
+      'thd',
+      'wthd',
+    ]);
     expect(res.body.name).toBe('bridge output');
     expect(res.body.harmonics).toHaveLength(101);
     // Linear range: fundamental = ma·vdc for a bipolar full bridge (common practice; Holmes and Lipo, 2003, ch. 3).
     expect(res.body.harmonics[1].amplitude).toBeCloseTo(320, 6);
     // Odd mf gives half-wave symmetry: no even harmonics, no DC (common practice).
-    for (const h of res.body.harmonics.filter((x: { order: number }) => x.order % 2 === 0)) expect(h.amplitude).toBeLessThan(1e-9);
+    for (const h of res.body.harmonics.filter((x: { order: number }) => x.order % 2 === 0))
+      expect(h.amplitude).toBeLessThan(1e-9);
     // The first significant harmonics sit at and around mf (common practice).
-    const largest = res.body.harmonics.slice(2).reduce((a: { amplitude: number }, b: { amplitude: number }) => (b.amplitude > a.amplitude ? b : a));
+    const largest = res.body.harmonics
+      .slice(2)
+      .reduce((a: { amplitude: number }, b: { amplitude: number }) =>
+        b.amplitude > a.amplitude ? b : a,
+      );
     expect(Math.abs(largest.order - 21)).toBeLessThanOrEqual(2);
     expect(res.body.thd).toBeGreaterThan(0.5);
     // thd and wthd are the whole waveform's (every order), spectrumThd stops at maxOrder.
@@ -62,7 +76,11 @@ describe('compute routes', () => {
     const phase = await request(t.app)
       .post('/api/v1/spectra')
       .set(auth)
-      .send({ modulation: { method: 'three-phase', ma: 0.8, mf: 21, vdc: 600 }, maxOrder: 10, output: 'phase' });
+      .send({
+        modulation: { method: 'three-phase', ma: 0.8, mf: 21, vdc: 600 },
+        maxOrder: 10,
+        output: 'phase',
+      });
     expect(phase.body.name).toBe('phase a to star point');
     expect(phase.body.harmonics[1].amplitude).toBeCloseTo(0.8 * 300, 6);
   });
@@ -83,7 +101,12 @@ describe('compute routes', () => {
       'c-header': [/^text\/x-c/, 'pump_pwm.h'],
     } as const;
     for (const [format, [type, file]] of Object.entries(expected)) {
-      const res = await request(t.app).post('/api/v1/timer-tables').query({ format }).set(auth).send(body).buffer(true);
+      const res = await request(t.app)
+        .post('/api/v1/timer-tables')
+        .query({ format })
+        .set(auth)
+        .send(body)
+        .buffer(true);
       expect(res.status, res.text).toBe(200);
       expect(res.headers['content-type']).toMatch(type);
       expect(res.headers['content-disposition']).toBe(`attachment; filename="${file}"`);
@@ -93,8 +116,17 @@ describe('compute routes', () => {
         if (hasCompiler()) {
           const dir = mkdtempSync(path.join(tmpdir(), 'pulsewright-h-'));
           writeFileSync(path.join(dir, 'pump_pwm.h'), res.text);
-          writeFileSync(path.join(dir, 'main.c'), '#include "pump_pwm.h"\nint main(void) { return 0; }\n');
-          execFileSync('cc', ['-std=c99', '-Wall', '-Werror', '-fsyntax-only', path.join(dir, 'main.c')]);
+          writeFileSync(
+            path.join(dir, 'main.c'),
+            '#include "pump_pwm.h"\nint main(void) { return 0; }\n',
+          );
+          execFileSync('cc', [
+            '-std=c99',
+            '-Wall',
+            '-Werror',
+            '-fsyntax-only',
+            path.join(dir, 'main.c'),
+          ]);
         }
       }
     }
@@ -104,24 +136,44 @@ describe('compute routes', () => {
     const res = await request(t.app)
       .post('/api/v1/harmonic-limits/check')
       .set(auth)
-      .send({ design: { vdc: 400, fundamentalFrequency: 50, carrierFrequency: 750, modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.9 } }, busVoltage: 400 });
+      .send({
+        design: {
+          vdc: 400,
+          fundamentalFrequency: 50,
+          carrierFrequency: 750,
+          modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.9 },
+        },
+        busVoltage: 400,
+      });
     expect(res.status).toBe(200);
     // IEEE Std 519-2022 Table 1, bus ≤ 1 kV: individual 5 %, THD 8 % (from memory).
-    expect(res.body.standard).toMatchObject({ name: 'IEEE Std 519', edition: '2022', recalledFromMemory: true, maxOrder: 50 });
+    expect(res.body.standard).toMatchObject({
+      name: 'IEEE Std 519',
+      edition: '2022',
+      recalledFromMemory: true,
+      maxOrder: 50,
+    });
     expect(res.body.limits).toMatchObject({ individual: 0.05, thd: 0.08, maxOrder: 50 });
     expect(res.body.busVoltage).toBe(400);
     expect(res.body.caution).toContain('confirm them with the standard and the local utility');
     expect(res.body.table).toHaveLength(49);
     // Unfiltered two-level PWM at mf 15 has large sidebands below the 50th order: it fails.
     expect(res.body.pass).toBe(false);
-    expect(res.body.violations.map((v: { order: unknown }) => v.order)).toEqual(expect.arrayContaining(['thd-whole-waveform', 'thd', 15]));
+    expect(res.body.violations.map((v: { order: unknown }) => v.order)).toEqual(
+      expect.arrayContaining(['thd-whole-waveform', 'thd', 15]),
+    );
   });
 
   it('runs an ma sweep as a job with progress and a result', async () => {
     const created = await request(t.app)
       .post('/api/v1/jobs/ma-sweeps')
       .set(auth)
-      .send({ modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.5, mf: 21, vdc: 100 }, ma: { from: 0.1, to: 1, points: 40 }, maxOrder: 60, orders: [1] });
+      .send({
+        modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.5, mf: 21, vdc: 100 },
+        ma: { from: 0.1, to: 1, points: 40 },
+        maxOrder: 60,
+        orders: [1],
+      });
     expect(created.status).toBe(202);
     expect(created.body.status).toBe('running');
     expect(created.body.progress).toBeGreaterThan(0);
@@ -136,16 +188,25 @@ describe('compute routes', () => {
     const job = (await request(t.app).get(`/api/v1/jobs/${created.body.id}`).set(auth)).body;
     expect(job.status).toBe('succeeded');
     expect(job.progress).toBe(1);
-    for (let i = 1; i < seen.length; i++) expect(seen[i]).toBeGreaterThanOrEqual(seen[i - 1] as number);
+    for (let i = 1; i < seen.length; i++)
+      expect(seen[i]).toBeGreaterThanOrEqual(seen[i - 1] as number);
     expect(job.result.ma).toHaveLength(40);
     expect(job.result.ma[0]).toBeCloseTo(0.1, 12);
     expect(job.result.ma[39]).toBeCloseTo(1, 12);
     // Linear range: fundamental = ma·vdc at every point (Holmes and Lipo, 2003, ch. 3).
-    job.result.ma.forEach((ma: number, k: number) => expect(job.result.fundamental[k]).toBeCloseTo(ma * 100, 6));
+    job.result.ma.forEach((ma: number, k: number) =>
+      expect(job.result.fundamental[k]).toBeCloseTo(ma * 100, 6),
+    );
     // THD and WTHD at every point are the whole waveform's, as the design report gives them;
     // spectrumThd stops at maxOrder 60 and so holds less.
     job.result.ma.forEach((ma: number, k: number) => {
-      const { waveform } = modulationVoltages({ method: 'sine-triangle', scheme: 'unipolar', ma, mf: 21, vdc: 100 }).phases[0]!;
+      const { waveform } = modulationVoltages({
+        method: 'sine-triangle',
+        scheme: 'unipolar',
+        ma,
+        mf: 21,
+        vdc: 100,
+      }).phases[0]!;
       expect(job.result.thd[k]).toBe(waveformThd(waveform));
       expect(job.result.wthd[k]).toBe(waveformWthd(waveform));
       expect(job.result.spectrumThd[k]).toBeLessThanOrEqual(job.result.thd[k] * (1 + 1e-12));
@@ -158,7 +219,13 @@ describe('compute routes', () => {
     const created = await request(t.app)
       .post('/api/v1/jobs/she-sweeps')
       .set(auth)
-      .send({ kind: 'bipolar', vdc: 100, count: 3, eliminate: [3, 5], fundamental: { from: 30, to: 90, points: 25 } });
+      .send({
+        kind: 'bipolar',
+        vdc: 100,
+        count: 3,
+        eliminate: [3, 5],
+        fundamental: { from: 30, to: 90, points: 25 },
+      });
     expect(created.status, JSON.stringify(created.body)).toBe(202);
     await t.app.services.jobs.idle();
     const job = (await request(t.app).get(`/api/v1/jobs/${created.body.id}`).set(auth)).body;
@@ -180,7 +247,13 @@ describe('compute routes', () => {
     const res = await request(t.app)
       .post('/api/v1/jobs/she-sweeps')
       .set(auth)
-      .send({ kind: 'bipolar', vdc: 100, count: 3, eliminate: [3], fundamental: { from: 30, to: 90, points: 5 } });
+      .send({
+        kind: 'bipolar',
+        vdc: 100,
+        count: 3,
+        eliminate: [3],
+        fundamental: { from: 30, to: 90, points: 5 },
+      });
     expect(res.status).toBe(400);
     expect(res.body.detail).toContain('eliminate');
     expect(await t.app.services.models.Job.count()).toBe(before);

@@ -2,7 +2,13 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { loadConfig } from '../config.js';
 import { maSweepCost, reportCost, sheSweepCost } from '../services/cost.js';
-import { captureCsv, SINE_TRIANGLE, SINE_TRIANGLE_DESIGN, THREE_PHASE, THREE_PHASE_DESIGN } from './fixtures.js';
+import {
+  captureCsv,
+  SINE_TRIANGLE,
+  SINE_TRIANGLE_DESIGN,
+  THREE_PHASE,
+  THREE_PHASE_DESIGN,
+} from './fixtures.js';
 import { DEMO, demoTokens, signIn, testApp, type TestApp } from './helpers.js';
 
 /**
@@ -12,7 +18,12 @@ import { DEMO, demoTokens, signIn, testApp, type TestApp } from './helpers.js';
  * answer; a task past its time limit is ended with a 503; quotas answer 429 problem+json.
  */
 
-type Problem = { type: string; status: number; detail: string; errors: { path: string; message: string }[] };
+type Problem = {
+  type: string;
+  status: number;
+  detail: string;
+  errors: { path: string; message: string }[];
+};
 
 /** The largest design the schema allows for a report: three-phase, mf 999, with a filter and a load. */
 const HEAVY_DESIGN = {
@@ -33,14 +44,22 @@ const RUNAWAY_TIMER_TABLE = {
   sampling: 'regular-asymmetric',
 };
 
-const SHE_SWEEP = { kind: 'bipolar', vdc: 100, count: 3, eliminate: [3, 5], fundamental: { from: 30, to: 90, points: 25 } };
+const SHE_SWEEP = {
+  kind: 'bipolar',
+  vdc: 100,
+  count: 3,
+  eliminate: [3, 5],
+  fundamental: { from: 30, to: 90, points: 25 },
+};
 
 function expectRefusal(res: request.Response, fields: string[], words: string[]): void {
   expect(res.status, JSON.stringify(res.body)).toBe(400);
   const body = res.body as Problem;
   expect(res.headers['content-type']).toContain('application/problem+json');
   // The fields in order of their share of the work (the first is the one to lower first).
-  expect(fields.length > 2 ? [...body.errors.map((e) => e.path)].sort() : body.errors.map((e) => e.path)).toEqual(fields.length > 2 ? [...fields].sort() : fields);
+  expect(
+    fields.length > 2 ? [...body.errors.map((e) => e.path)].sort() : body.errors.map((e) => e.path),
+  ).toEqual(fields.length > 2 ? [...fields].sort() : fields);
   for (const word of words) expect(body.detail).toContain(word);
 }
 
@@ -61,39 +80,80 @@ describe('cost model: refused before work, naming the fields and the limit', () 
       .send({ projectId: projects.body[0].id, name: 'Cost model', design: SINE_TRIANGLE_DESIGN });
     expect(study.status, JSON.stringify(study.body)).toBe(201);
     studyId = study.body.id;
-    const capture = await request(t.app).post('/api/v1/captures').set(auth).attach('file', Buffer.from(captureCsv(4000, 20000)), 'bench.csv');
+    const capture = await request(t.app)
+      .post('/api/v1/captures')
+      .set(auth)
+      .attach('file', Buffer.from(captureCsv(4000, 20000)), 'bench.csv');
     expect(capture.status, JSON.stringify(capture.body)).toBe(201);
     captureId = capture.body.id;
   });
   afterAll(async () => t.dispose());
 
   it('POST /spectra: maxOrder and the carrier ratio', async () => {
-    const res = await request(t.app).post('/api/v1/spectra').set(auth).send({ modulation: SINE_TRIANGLE, maxOrder: 5000 });
-    expectRefusal(res, ['maxOrder', 'modulation.mf'], ['44 edges × 5001 orders', 'COMPUTE_WORK_BUDGET', '1.00e+5']);
+    const res = await request(t.app)
+      .post('/api/v1/spectra')
+      .set(auth)
+      .send({ modulation: SINE_TRIANGLE, maxOrder: 5000 });
+    expectRefusal(
+      res,
+      ['maxOrder', 'modulation.mf'],
+      ['44 edges × 5001 orders', 'COMPUTE_WORK_BUDGET', '1.00e+5'],
+    );
     // Within the budget the same route answers.
-    expect((await request(t.app).post('/api/v1/spectra').set(auth).send({ modulation: SINE_TRIANGLE, maxOrder: 50 })).status).toBe(200);
+    expect(
+      (
+        await request(t.app)
+          .post('/api/v1/spectra')
+          .set(auth)
+          .send({ modulation: SINE_TRIANGLE, maxOrder: 50 })
+      ).status,
+    ).toBe(200);
   });
 
   it('POST /waveforms: the carrier ratio', async () => {
-    const res = await request(t.app).post('/api/v1/waveforms').set(auth).send({ modulation: { ...THREE_PHASE, mf: 999 } });
+    const res = await request(t.app)
+      .post('/api/v1/waveforms')
+      .set(auth)
+      .send({ modulation: { ...THREE_PHASE, mf: 999 } });
     expectRefusal(res, ['modulation.mf'], ['edges', 'COMPUTE_WORK_BUDGET']);
   });
 
   it('the design report and the routes built on it: the carrier, maxOrder and points the route takes', async () => {
-    const report = await request(t.app).post('/api/v1/designs/report').set(auth).send({ design: THREE_PHASE_DESIGN, maxOrder: 5000 });
-    expectRefusal(report, ['maxOrder', 'design.carrierFrequency'], ['orders', 'COMPUTE_WORK_BUDGET']);
+    const report = await request(t.app)
+      .post('/api/v1/designs/report')
+      .set(auth)
+      .send({ design: THREE_PHASE_DESIGN, maxOrder: 5000 });
+    expectRefusal(
+      report,
+      ['maxOrder', 'design.carrierFrequency'],
+      ['orders', 'COMPUTE_WORK_BUDGET'],
+    );
     const load = await request(t.app)
       .post('/api/v1/load-current')
       .set(auth)
       .send({ design: { ...SINE_TRIANGLE_DESIGN, load: { r: 10, l: 1e-3 } }, points: 20000 });
     expectRefusal(load, ['points', 'design.carrierFrequency'], ['1 series × 20000 points']);
-    const filter = await request(t.app).post('/api/v1/filters/lc').set(auth).send({ design: { ...THREE_PHASE_DESIGN, filter: { l: 1e-3, c: 10e-6 } } });
-    expectRefusal(filter, ['design.carrierFrequency', 'maxOrder', 'points'], ['through the filter']);
-    const limits = await request(t.app).post('/api/v1/harmonic-limits/check').set(auth).send({ design: { ...THREE_PHASE_DESIGN, filter: { l: 1e-3, c: 10e-6 } } });
+    const filter = await request(t.app)
+      .post('/api/v1/filters/lc')
+      .set(auth)
+      .send({ design: { ...THREE_PHASE_DESIGN, filter: { l: 1e-3, c: 10e-6 } } });
+    expectRefusal(
+      filter,
+      ['design.carrierFrequency', 'maxOrder', 'points'],
+      ['through the filter'],
+    );
+    const limits = await request(t.app)
+      .post('/api/v1/harmonic-limits/check')
+      .set(auth)
+      .send({ design: { ...THREE_PHASE_DESIGN, filter: { l: 1e-3, c: 10e-6 } } });
     expectRefusal(limits, ['design.carrierFrequency'], ['COMPUTE_WORK_BUDGET']);
-    const stored = await request(t.app).get(`/api/v1/studies/${studyId}/report?maxOrder=5000`).set(auth);
+    const stored = await request(t.app)
+      .get(`/api/v1/studies/${studyId}/report?maxOrder=5000`)
+      .set(auth);
     expectRefusal(stored, ['maxOrder', 'design.carrierFrequency'], ['COMPUTE_WORK_BUDGET']);
-    const spectrum = await request(t.app).get(`/api/v1/studies/${studyId}/spectrum?maxOrder=5000`).set(auth);
+    const spectrum = await request(t.app)
+      .get(`/api/v1/studies/${studyId}/spectrum?maxOrder=5000`)
+      .set(auth);
     expectRefusal(spectrum, ['maxOrder', 'design.carrierFrequency'], ['COMPUTE_WORK_BUDGET']);
   });
 
@@ -103,30 +163,56 @@ describe('cost model: refused before work, naming the fields and the limit', () 
     const res = await request(t.app)
       .post('/api/v1/studies')
       .set(auth)
-      .send({ projectId: projects.body[0].id, name: 'Too costly to check', design: { ...THREE_PHASE_DESIGN, carrierFrequency: 50 * 999, filter: { l: 1e-3, c: 10e-6 } } });
+      .send({
+        projectId: projects.body[0].id,
+        name: 'Too costly to check',
+        design: {
+          ...THREE_PHASE_DESIGN,
+          carrierFrequency: 50 * 999,
+          filter: { l: 1e-3, c: 10e-6 },
+        },
+      });
     expectRefusal(res, ['design.carrierFrequency'], ['through the filter']);
     expect(await t.app.services.models.Study.count()).toBe(before);
   });
 
   it('POST /timer-tables: rows × channels, and the default table length by the two frequencies', async () => {
-    const res = await request(t.app).post('/api/v1/timer-tables').set(auth).send({ ...RUNAWAY_TIMER_TABLE });
-    expectRefusal(res, ['tableLength', 'carrierFrequency', 'fundamentalFrequency'], ['40000000 rows × 3 channels', 'the default table length']);
+    const res = await request(t.app)
+      .post('/api/v1/timer-tables')
+      .set(auth)
+      .send({ ...RUNAWAY_TIMER_TABLE });
+    expectRefusal(
+      res,
+      ['tableLength', 'carrierFrequency', 'fundamentalFrequency'],
+      ['40000000 rows × 3 channels', 'the default table length'],
+    );
   });
 
-  it('POST /captures/{id}/spectrum: the capture\'s samples', async () => {
-    const res = await request(t.app).post(`/api/v1/captures/${captureId}/spectrum`).set(auth).send({ maxOrder: 20 });
+  it("POST /captures/{id}/spectrum: the capture's samples", async () => {
+    const res = await request(t.app)
+      .post(`/api/v1/captures/${captureId}/spectrum`)
+      .set(auth)
+      .send({ maxOrder: 20 });
     expectRefusal(res, ['id'], ["the capture's 4000 samples"]);
   });
 
   it('jobs: the job budget, before any job is stored', async () => {
     const before = await t.app.services.models.Job.count();
     const she = await request(t.app).post('/api/v1/jobs/she-sweeps').set(auth).send(SHE_SWEEP);
-    expectRefusal(she, ['fundamental.points', 'count'], ['25 points × 3 angles squared', 'JOB_WORK_BUDGET']);
+    expectRefusal(
+      she,
+      ['fundamental.points', 'count'],
+      ['25 points × 3 angles squared', 'JOB_WORK_BUDGET'],
+    );
     const ma = await request(t.app)
       .post('/api/v1/jobs/ma-sweeps')
       .set(auth)
       .send({ modulation: SINE_TRIANGLE, ma: { from: 0.1, to: 1, points: 400 }, maxOrder: 2000 });
-    expectRefusal(ma, ['ma.points', 'maxOrder', 'modulation.mf'], ['400 points × 44 edges × 2001 orders', 'JOB_WORK_BUDGET']);
+    expectRefusal(
+      ma,
+      ['ma.points', 'maxOrder', 'modulation.mf'],
+      ['400 points × 44 edges × 2001 orders', 'JOB_WORK_BUDGET'],
+    );
     expect(await t.app.services.models.Job.count()).toBe(before);
   });
 });
@@ -142,27 +228,55 @@ describe('cost model at the default budgets', () => {
 
   it("refuses issue 11's runaway timer table at once, naming tableLength, and the service goes on", async () => {
     const started = performance.now();
-    const res = await request(t.app).post('/api/v1/timer-tables').set(auth).send(RUNAWAY_TIMER_TABLE);
-    expectRefusal(res, ['tableLength', 'carrierFrequency', 'fundamentalFrequency'], ['COMPUTE_WORK_BUDGET']);
+    const res = await request(t.app)
+      .post('/api/v1/timer-tables')
+      .set(auth)
+      .send(RUNAWAY_TIMER_TABLE);
+    expectRefusal(
+      res,
+      ['tableLength', 'carrierFrequency', 'fundamentalFrequency'],
+      ['COMPUTE_WORK_BUDGET'],
+    );
     expect(performance.now() - started).toBeLessThan(1000);
     expect((await request(t.app).get('/api/health')).status).toBe(200);
   });
 
   it('bounds the size of an answer: a 4096-row three-phase table as JSON is over 1 MB, as a C header it is not', async () => {
-    const table = { ...RUNAWAY_TIMER_TABLE, fundamentalFrequency: 50, carrierFrequency: 50 * 2048, tableLength: 4096 };
+    const table = {
+      ...RUNAWAY_TIMER_TABLE,
+      fundamentalFrequency: 50,
+      carrierFrequency: 50 * 2048,
+      tableLength: 4096,
+    };
     const json = await request(t.app).post('/api/v1/timer-tables').set(auth).send(table);
     expectRefusal(json, ['tableLength'], ['RESPONSE_BYTES_BUDGET', '1.1 MB']);
-    const header = await request(t.app).post('/api/v1/timer-tables?format=c-header').set(auth).send(table);
+    const header = await request(t.app)
+      .post('/api/v1/timer-tables?format=c-header')
+      .set(auth)
+      .send(table);
     expect(header.status, header.text).toBe(200);
     expect(header.text.length).toBeLessThan(1e6);
   });
 
   it('allows the largest report and the largest jobs the schema allows', async () => {
     const limits = loadConfig({}).compute;
-    expect(reportCost(HEAVY_DESIGN as never, { maxOrder: 5000, points: 4000 }).work).toBeLessThan(limits.requestWorkBudget);
-    const she = { kind: 'staircase' as const, vdc: 1, count: 31, eliminate: [], fundamental: { from: 1, to: 2, points: 400 } };
+    expect(reportCost(HEAVY_DESIGN as never, { maxOrder: 5000, points: 4000 }).work).toBeLessThan(
+      limits.requestWorkBudget,
+    );
+    const she = {
+      kind: 'staircase' as const,
+      vdc: 1,
+      count: 31,
+      eliminate: [],
+      fundamental: { from: 1, to: 2, points: 400 },
+    };
     expect(sheSweepCost(she).work).toBeLessThan(limits.jobWorkBudget);
-    const ma = { modulation: { ...THREE_PHASE, mf: 1000 }, ma: { from: 0.1, to: 1.1, points: 400 }, maxOrder: 2000, orders: [] };
+    const ma = {
+      modulation: { ...THREE_PHASE, mf: 1000 },
+      ma: { from: 0.1, to: 1.1, points: 400 },
+      maxOrder: 2000,
+      orders: [],
+    };
     expect(maSweepCost(ma as never).work).toBeLessThan(limits.jobWorkBudget);
   });
 });
@@ -174,8 +288,26 @@ describe('compute pool', () => {
     try {
       const bodies = [
         ['/api/v1/spectra', { modulation: { ...THREE_PHASE, mf: 99 }, maxOrder: 400 }],
-        ['/api/v1/designs/report', { design: { ...THREE_PHASE_DESIGN, filter: { l: 1e-3, c: 10e-6 }, load: { r: 10, l: 1e-3 } }, points: 256 }],
-        ['/api/v1/timer-tables?format=csv', { ...RUNAWAY_TIMER_TABLE, fundamentalFrequency: 50, carrierFrequency: 10_000, tableLength: 200 }],
+        [
+          '/api/v1/designs/report',
+          {
+            design: {
+              ...THREE_PHASE_DESIGN,
+              filter: { l: 1e-3, c: 10e-6 },
+              load: { r: 10, l: 1e-3 },
+            },
+            points: 256,
+          },
+        ],
+        [
+          '/api/v1/timer-tables?format=csv',
+          {
+            ...RUNAWAY_TIMER_TABLE,
+            fundamentalFrequency: 50,
+            carrierFrequency: 10_000,
+            tableLength: 200,
+          },
+        ],
       ] as const;
       const a = `Bearer ${await signIn(inline.app, DEMO.viewer)}`;
       const b = `Bearer ${await signIn(pooled.app, DEMO.viewer)}`;
@@ -188,9 +320,23 @@ describe('compute pool', () => {
       }
       expect(pooled.app.services.pool.pending).toBe(0);
       // A library refusal inside a worker comes back as the same 400 naming the field.
-      const bad = { modulation: { method: 'selective-harmonic-elimination', kind: 'bipolar', vdc: 100, angles: [0.5, 0.3] }, maxOrder: 50 };
-      const refusedHere = await request(inline.app).post('/api/v1/spectra').set('Authorization', a).send(bad);
-      const refusedThere = await request(pooled.app).post('/api/v1/spectra').set('Authorization', b).send(bad);
+      const bad = {
+        modulation: {
+          method: 'selective-harmonic-elimination',
+          kind: 'bipolar',
+          vdc: 100,
+          angles: [0.5, 0.3],
+        },
+        maxOrder: 50,
+      };
+      const refusedHere = await request(inline.app)
+        .post('/api/v1/spectra')
+        .set('Authorization', a)
+        .send(bad);
+      const refusedThere = await request(pooled.app)
+        .post('/api/v1/spectra')
+        .set('Authorization', b)
+        .send(bad);
       expect(refusedHere.status).toBe(400);
       expect(refusedHere.body.errors[0].path).toMatch(/^modulation\.angles/);
       expect(refusedThere.body).toEqual(refusedHere.body);
@@ -198,12 +344,19 @@ describe('compute pool', () => {
       const engineerHere = `Bearer ${await signIn(inline.app, DEMO.engineer)}`;
       const engineerThere = `Bearer ${await signIn(pooled.app, DEMO.engineer)}`;
       const upload = (app: TestApp['app'], token: string, content: string) =>
-        request(app).post('/api/v1/captures').set('Authorization', token).attach('file', Buffer.from(content), 'bench.csv');
+        request(app)
+          .post('/api/v1/captures')
+          .set('Authorization', token)
+          .attach('file', Buffer.from(content), 'bench.csv');
       const good = captureCsv(2000, 20000);
       const storedHere = await upload(inline.app, engineerHere, good);
       const storedThere = await upload(pooled.app, engineerThere, good);
       expect(storedThere.status).toBe(201);
-      expect({ ...storedThere.body, id: '', createdAt: '' }).toEqual({ ...storedHere.body, id: '', createdAt: '' });
+      expect({ ...storedThere.body, id: '', createdAt: '' }).toEqual({
+        ...storedHere.body,
+        id: '',
+        createdAt: '',
+      });
       const hostile = good.replace(/\n[^\n]*\n/, '\n0.1,=HYPERLINK("x"),1\n');
       const badHere = await upload(inline.app, engineerHere, hostile);
       const badThere = await upload(pooled.app, engineerThere, hostile);
@@ -220,20 +373,32 @@ describe('compute pool', () => {
     const t = await testApp({ compute: { taskTimeLimitMs: 400, inlineWorkLimit: 0 } });
     try {
       const auth = { Authorization: `Bearer ${await signIn(t.app, DEMO.viewer)}` };
-      const res = await request(t.app).post('/api/v1/designs/report').set(auth).send({ design: HEAVY_DESIGN, points: 4000 });
+      const res = await request(t.app)
+        .post('/api/v1/designs/report')
+        .set(auth)
+        .send({ design: HEAVY_DESIGN, points: 4000 });
       expect(res.status, JSON.stringify(res.body).slice(0, 300)).toBe(503);
       expect(res.headers['content-type']).toContain('application/problem+json');
       expect(res.body.type).toBe('urn:pulsewright:problem:compute-time-limit');
       expect(res.body.detail).toContain('This design report was stopped after 0.4 s');
       expect(res.body.detail).toContain('COMPUTE_TIME_LIMIT_MS');
       // The worker was replaced: pooled work goes on.
-      const next = await request(t.app).post('/api/v1/spectra').set(auth).send({ modulation: SINE_TRIANGLE, maxOrder: 100 });
+      const next = await request(t.app)
+        .post('/api/v1/spectra')
+        .set(auth)
+        .send({ modulation: SINE_TRIANGLE, maxOrder: 100 });
       expect(next.status, JSON.stringify(next.body)).toBe(200);
       // A staircase SHE chunk of 31 angles takes about 2 s: the job is failed with the reason.
       const job = await request(t.app)
         .post('/api/v1/jobs/she-sweeps')
         .set(auth)
-        .send({ kind: 'staircase', vdc: 100, count: 31, eliminate: Array.from({ length: 30 }, (_, i) => 5 + 2 * i), fundamental: { from: 100, to: 2000, points: 40 } });
+        .send({
+          kind: 'staircase',
+          vdc: 100,
+          count: 31,
+          eliminate: Array.from({ length: 30 }, (_, i) => 5 + 2 * i),
+          fundamental: { from: 100, to: 2000, points: 40 },
+        });
       expect(job.status, JSON.stringify(job.body)).toBe(503);
       expect(job.body.detail).toContain('Chunk 1 of 4 of this SHE sweep was stopped after 0.4 s');
       const listed = await request(t.app).get('/api/v1/jobs').set(auth);
@@ -256,7 +421,11 @@ describe('job quotas', () => {
   });
   afterAll(async () => t.dispose());
 
-  const start = (token: string) => request(t.app).post('/api/v1/jobs/she-sweeps').set('Authorization', `Bearer ${token}`).send(SHE_SWEEP);
+  const start = (token: string) =>
+    request(t.app)
+      .post('/api/v1/jobs/she-sweeps')
+      .set('Authorization', `Bearer ${token}`)
+      .send(SHE_SWEEP);
 
   it('answers 429 problem+json past the per-user quota, naming the setting, and stores nothing', async () => {
     expect((await start(tokens.viewer)).status).toBe(202);
@@ -268,7 +437,11 @@ describe('job quotas', () => {
     expect(third.status).toBe(429);
     expect(third.headers['content-type']).toContain('application/problem+json');
     expect(third.headers['retry-after']).toBe('10');
-    expect(third.body).toMatchObject({ type: 'urn:pulsewright:problem:job-quota', status: 429, errors: [] });
+    expect(third.body).toMatchObject({
+      type: 'urn:pulsewright:problem:job-quota',
+      status: 429,
+      errors: [],
+    });
     expect(third.body.detail).toContain('You have 2 jobs queued or running');
     expect(third.body.detail).toContain('JOB_QUOTA_USER is 2');
     expect(await t.app.services.models.Job.count()).toBe(before);
@@ -283,11 +456,18 @@ describe('job quotas', () => {
   });
 
   it('counts concurrent starts exactly: of five at once from one user under a fresh quota, two win', async () => {
-    const fresh = await testApp({ compute: { jobConcurrency: 0, userJobQuota: 2, teamJobQuota: 10 } });
+    const fresh = await testApp({
+      compute: { jobConcurrency: 0, userJobQuota: 2, teamJobQuota: 10 },
+    });
     try {
       const token = `Bearer ${await signIn(fresh.app, DEMO.admin)}`;
       const answers = await Promise.all(
-        Array.from({ length: 5 }, () => request(fresh.app).post('/api/v1/jobs/she-sweeps').set('Authorization', token).send(SHE_SWEEP)),
+        Array.from({ length: 5 }, () =>
+          request(fresh.app)
+            .post('/api/v1/jobs/she-sweeps')
+            .set('Authorization', token)
+            .send(SHE_SWEEP),
+        ),
       );
       expect(answers.map((a) => a.status).sort()).toEqual([202, 202, 429, 429, 429]);
       expect(await fresh.app.services.models.Job.count()).toBe(2);

@@ -17,7 +17,8 @@ function expectSameFigures(actual: unknown, expected: unknown, path = 'report'):
   if (typeof expected === 'number') {
     expect(typeof actual, path).toBe('number');
     const a = actual as number;
-    if (a !== expected) expect(Math.abs(a - expected), path).toBeLessThanOrEqual(SAME * Math.abs(expected));
+    if (a !== expected)
+      expect(Math.abs(a - expected), path).toBeLessThanOrEqual(SAME * Math.abs(expected));
     return;
   }
   if (Array.isArray(expected)) {
@@ -28,8 +29,11 @@ function expectSameFigures(actual: unknown, expected: unknown, path = 'report'):
   }
   if (expected !== null && typeof expected === 'object') {
     expect(actual !== null && typeof actual === 'object', path).toBe(true);
-    expect(Object.keys(actual as object).sort(), `${path} keys`).toEqual(Object.keys(expected).sort());
-    for (const [key, value] of Object.entries(expected)) expectSameFigures((actual as Record<string, unknown>)[key], value, `${path}.${key}`);
+    expect(Object.keys(actual as object).sort(), `${path} keys`).toEqual(
+      Object.keys(expected).sort(),
+    );
+    for (const [key, value] of Object.entries(expected))
+      expectSameFigures((actual as Record<string, unknown>)[key], value, `${path}.${key}`);
     return;
   }
   expect(actual, path).toEqual(expected);
@@ -68,7 +72,8 @@ const DESIGNS: Record<string, InverterDesign> = {
     modulation: {
       method: 'selective-harmonic-elimination',
       kind: 'bipolar',
-      angles: solveShe({ kind: 'bipolar', vdc: 100, count: 3, eliminate: [5, 7], fundamental: 80 }).angles,
+      angles: solveShe({ kind: 'bipolar', vdc: 100, count: 3, eliminate: [5, 7], fundamental: 80 })
+        .angles,
       eliminate: [5, 7],
     },
     load: LOAD,
@@ -87,12 +92,16 @@ describe('design report routes', () => {
   beforeAll(async () => {
     t = await testApp();
     auth = { Authorization: `Bearer ${await signIn(t.app, DEMO.engineer)}` };
-    projectId = (await request(t.app).post('/api/v1/projects').set(auth).send({ name: 'Reports' })).body.id;
+    projectId = (await request(t.app).post('/api/v1/projects').set(auth).send({ name: 'Reports' }))
+      .body.id;
   });
   afterAll(async () => t.dispose());
 
   const createStudy = async (name: string, design: InverterDesign): Promise<string> => {
-    const res = await request(t.app).post('/api/v1/studies').set(auth).send({ projectId, name, design });
+    const res = await request(t.app)
+      .post('/api/v1/studies')
+      .set(auth)
+      .send({ projectId, name, design });
     expect(res.status, JSON.stringify(res.body).slice(0, 400)).toBe(201);
     return res.body.id as string;
   };
@@ -101,12 +110,18 @@ describe('design report routes', () => {
     it(`POST /designs/report and GET /studies/{id}/report return the library's figures exactly: ${name}`, async () => {
       const options = { maxOrder: 120, points: 256 };
       const expected = analyseDesign(design, options);
-      const res = await request(t.app).post('/api/v1/designs/report').set(auth).send({ design, ...options });
+      const res = await request(t.app)
+        .post('/api/v1/designs/report')
+        .set(auth)
+        .send({ design, ...options });
       expect(res.status, JSON.stringify(res.body).slice(0, 400)).toBe(200);
       expectSameFigures(res.body, expected);
 
       const studyId = await createStudy(name, design);
-      const stored = await request(t.app).get(`/api/v1/studies/${studyId}/report`).query(options).set(auth);
+      const stored = await request(t.app)
+        .get(`/api/v1/studies/${studyId}/report`)
+        .query(options)
+        .set(auth);
       expect(stored.status).toBe(200);
       expectSameFigures(stored.body, expected);
     });
@@ -141,11 +156,19 @@ describe('design report routes', () => {
     const spectra = await request(t.app)
       .post('/api/v1/spectra')
       .set(auth)
-      .send({ modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8, mf: 21, vdc: 100 }, maxOrder: 50 });
+      .send({
+        modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8, mf: 21, vdc: 100 },
+        maxOrder: 50,
+      });
     expect(spectra.status).toBe(200);
     expect(Math.abs(spectra.body.thd / report.bridge.thd - 1)).toBeLessThanOrEqual(SAME);
     expect(Math.abs(spectra.body.wthd / report.bridge.wthd - 1)).toBeLessThanOrEqual(SAME);
-    const study = (await request(t.app).get(`/api/v1/studies/${studyId}/spectrum`).query({ maxOrder: 30 }).set(auth)).body;
+    const study = (
+      await request(t.app)
+        .get(`/api/v1/studies/${studyId}/spectrum`)
+        .query({ maxOrder: 30 })
+        .set(auth)
+    ).body;
     expect(Math.abs(study.thd / report.bridge.thd - 1)).toBeLessThanOrEqual(SAME);
     expect(study.spectrumThd).toBeLessThan(spectra.body.spectrumThd);
   });
@@ -171,18 +194,25 @@ describe('design report routes', () => {
     expect(report.lineToLine.name).toBe('line a−b');
     // Balanced three-phase: |V_ab,1| = √3·|V_an,1| (standard circuit analysis); linear range,
     // |V_an,1| = ma·vdc/2 (Holmes and Lipo, 2003, ch. 5).
-    expect(Math.abs(report.lineToLine.fundamental / (Math.sqrt(3) * report.bridge.fundamental) - 1)).toBeLessThan(1e-9);
+    expect(
+      Math.abs(report.lineToLine.fundamental / (Math.sqrt(3) * report.bridge.fundamental) - 1),
+    ).toBeLessThan(1e-9);
     expect(Math.abs(report.bridge.fundamental / ((0.9 * 650) / 2) - 1)).toBeLessThan(1e-9);
     // The load's fundamental current is the phase voltage over the load impedance |r + jωL|
     // (standard circuit analysis), not the line-to-line voltage's.
     const impedance = Math.hypot(design.load!.r, 2 * Math.PI * 50 * design.load!.l);
     const phaseA = current.body.currents[0];
     expect(phaseA.phase).toBe('a');
-    expect(Math.abs(phaseA.load.fundamental / (report.bridge.fundamental / impedance) - 1)).toBeLessThan(1e-9);
+    expect(
+      Math.abs(phaseA.load.fundamental / (report.bridge.fundamental / impedance) - 1),
+    ).toBeLessThan(1e-9);
     // Without a filter the switches carry the load current.
     expect(phaseA.inverter.rms).toBeCloseTo(phaseA.load.rms, 12);
     // Power into r: three phases of r·I_rms² (the load current's RMS of each phase).
-    const power = current.body.currents.reduce((sum: number, p: { load: { rms: number } }) => sum + design.load!.r * p.load.rms ** 2, 0);
+    const power = current.body.currents.reduce(
+      (sum: number, p: { load: { rms: number } }) => sum + design.load!.r * p.load.rms ** 2,
+      0,
+    );
     expect(Math.abs(current.body.loadPower / power - 1)).toBeLessThan(1e-6);
   });
 
@@ -194,7 +224,10 @@ describe('design report routes', () => {
       modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8 },
       load: LOAD,
     };
-    const bare = await request(t.app).post('/api/v1/harmonic-limits/check').set(auth).send({ design });
+    const bare = await request(t.app)
+      .post('/api/v1/harmonic-limits/check')
+      .set(auth)
+      .send({ design });
     expect(bare.status).toBe(200);
     // IEEE Std 519-2022 Table 1, bus ≤ 1 kV: THD 8 % (recalled from memory). The orders to 50
     // hold almost nothing at mf 99, but the whole waveform's THD is 146 %: it fails on that.
@@ -206,7 +239,10 @@ describe('design report routes', () => {
 
     // L = 2 mH, C = 50 µF: resonance 1/(2π√(LC)) ≈ 503 Hz, a tenth of the carrier (standard LC
     // divider), damped by 2 Ω in series with C.
-    const filtered = await request(t.app).post('/api/v1/harmonic-limits/check').set(auth).send({ design: { ...design, filter: FILTER } });
+    const filtered = await request(t.app)
+      .post('/api/v1/harmonic-limits/check')
+      .set(auth)
+      .send({ design: { ...design, filter: FILTER } });
     expect(filtered.status).toBe(200);
     expect(filtered.body.pass).toBe(true);
     expect(filtered.body.thdWholeWaveform).toBeLessThan(0.08);
@@ -214,28 +250,63 @@ describe('design report routes', () => {
     const report = analyseDesign({ ...design, filter: FILTER });
     expectSameFigures(filtered.body, report.limitCheck, 'limitCheck');
 
-    const lc = await request(t.app).post('/api/v1/filters/lc').set(auth).send({ design: { ...design, filter: FILTER } });
+    const lc = await request(t.app)
+      .post('/api/v1/filters/lc')
+      .set(auth)
+      .send({ design: { ...design, filter: FILTER } });
     expect(lc.status).toBe(200);
-    expectSameFigures(lc.body, { filter: report.filter, bridge: report.bridge, output: report.output }, 'filters/lc');
-    expect(Math.abs(lc.body.filter.characteristics.resonanceFrequency / (1 / (2 * Math.PI * Math.sqrt(0.002 * 50e-6))) - 1)).toBeLessThan(1e-12);
+    expectSameFigures(
+      lc.body,
+      { filter: report.filter, bridge: report.bridge, output: report.output },
+      'filters/lc',
+    );
+    expect(
+      Math.abs(
+        lc.body.filter.characteristics.resonanceFrequency /
+          (1 / (2 * Math.PI * Math.sqrt(0.002 * 50e-6))) -
+          1,
+      ),
+    ).toBeLessThan(1e-12);
   });
 
   it('bad design fields are 400 naming design.<field> with the allowed range, in the library’s words where the schema cannot tell', async () => {
     const design = DESIGNS['sine-triangle, unipolar, filter and load'] as InverterDesign;
     const cases: { body: object; path: string; words: string[] }[] = [
-      { body: { design: { ...design, modulation: { ...design.modulation, ma: 7 } } }, path: 'design.modulation.ma', words: ['> 0', '≤ 4', 'got 7'] },
+      {
+        body: { design: { ...design, modulation: { ...design.modulation, ma: 7 } } },
+        path: 'design.modulation.ma',
+        words: ['> 0', '≤ 4', 'got 7'],
+      },
       { body: { design: { ...design, vdc: -1 } }, path: 'design.vdc', words: ['> 0', '≤ 100000'] },
-      { body: { design: { ...design, load: { r: 0, l: 0.01 } } }, path: 'design.load.r', words: ['≥ 0.000001'] },
-      { body: { design: { ...design, carrierFrequency: 2075 } }, path: 'design.carrierFrequency', words: ['whole multiple (1 to 1000)', 'got 2075'] },
-      { body: { design: { ...design, carrierFrequency: undefined } }, path: 'design.carrierFrequency', words: ['a number'] },
-      { body: { design: { ...design, modulation: { method: 'space-vector', m: 0.5, ma: 0.5 } } }, path: 'design.modulation', words: [] },
+      {
+        body: { design: { ...design, load: { r: 0, l: 0.01 } } },
+        path: 'design.load.r',
+        words: ['≥ 0.000001'],
+      },
+      {
+        body: { design: { ...design, carrierFrequency: 2075 } },
+        path: 'design.carrierFrequency',
+        words: ['whole multiple (1 to 1000)', 'got 2075'],
+      },
+      {
+        body: { design: { ...design, carrierFrequency: undefined } },
+        path: 'design.carrierFrequency',
+        words: ['a number'],
+      },
+      {
+        body: { design: { ...design, modulation: { method: 'space-vector', m: 0.5, ma: 0.5 } } },
+        path: 'design.modulation',
+        words: [],
+      },
       { body: { design, points: 10 }, path: 'points', words: ['≥ 64'] },
     ];
     for (const c of cases) {
       const res = await request(t.app).post('/api/v1/designs/report').set(auth).send(c.body);
       expect(res.status, JSON.stringify(c.body)).toBe(400);
       expect(res.headers['content-type']).toMatch(/application\/problem\+json/);
-      const item = (res.body.errors as { path: string; message: string }[]).find((e) => e.path.startsWith(c.path));
+      const item = (res.body.errors as { path: string; message: string }[]).find((e) =>
+        e.path.startsWith(c.path),
+      );
       expect(item, `${JSON.stringify(res.body.errors)} names ${c.path}`).toBeDefined();
       for (const w of c.words) expect(item!.message).toContain(w);
     }
@@ -251,12 +322,18 @@ describe('design report routes', () => {
       load: LOAD,
     };
     // Three phases × (switch, capacitor, load current) + the output voltage = 10 series of `points`.
-    const res = await request(t.app).post('/api/v1/designs/report').set(auth).send({ design, points: 20_000 });
+    const res = await request(t.app)
+      .post('/api/v1/designs/report')
+      .set(auth)
+      .send({ design, points: 20_000 });
     expect(res.status).toBe(400);
     expect(res.body.errors[0].path).toBe('points');
     expect(res.body.errors[0].message).toContain('points must be ≤ 4000 for this design');
     const study = await createStudy('Large three-phase', design);
-    const stored = await request(t.app).get(`/api/v1/studies/${study}/report`).query({ points: 4001 }).set(auth);
+    const stored = await request(t.app)
+      .get(`/api/v1/studies/${study}/report`)
+      .query({ points: 4001 })
+      .set(auth);
     expect(stored.status).toBe(400);
     expect(stored.body.errors[0].path).toBe('points');
   });

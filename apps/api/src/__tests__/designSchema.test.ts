@@ -51,7 +51,11 @@ const fromSchema = (s: JsonSchema): Bounds => ({
 });
 
 /** Every numeric leaf under `schema`, by its dotted path (an array's items take the array's path). */
-function numericLeaves(schema: JsonSchema | undefined, path: string, out = new Map<string, JsonSchema[]>()): Map<string, JsonSchema[]> {
+function numericLeaves(
+  schema: JsonSchema | undefined,
+  path: string,
+  out = new Map<string, JsonSchema[]>(),
+): Map<string, JsonSchema[]> {
   const node = resolve(schema);
   const branches = (node.oneOf ?? node.anyOf) as JsonSchema[] | undefined;
   if (Array.isArray(branches)) {
@@ -59,9 +63,12 @@ function numericLeaves(schema: JsonSchema | undefined, path: string, out = new M
     return out;
   }
   const type = Array.isArray(node.type) ? (node.type as string[]) : [node.type as string];
-  if (type.includes('number') || type.includes('integer')) out.set(path, [...(out.get(path) ?? []), node]);
+  if (type.includes('number') || type.includes('integer'))
+    out.set(path, [...(out.get(path) ?? []), node]);
   if (type.includes('array')) numericLeaves(node.items as JsonSchema, path, out);
-  for (const [key, child] of Object.entries((node.properties as Record<string, JsonSchema> | undefined) ?? {})) {
+  for (const [key, child] of Object.entries(
+    (node.properties as Record<string, JsonSchema> | undefined) ?? {},
+  )) {
     numericLeaves(child, path ? `${path}.${key}` : key, out);
   }
   return out;
@@ -82,13 +89,21 @@ describe('the OpenAPI design schemas agree with the library', () => {
     const leaves = numericLeaves(schemas.Modulation, 'modulation');
     for (const [path, nodes] of leaves) {
       for (const node of nodes) {
-        if (path === 'modulation.vdc') expect(fromSchema(node), path).toEqual(fromLibrary(DESIGN_BOUNDS.vdc));
+        if (path === 'modulation.vdc')
+          expect(fromSchema(node), path).toEqual(fromLibrary(DESIGN_BOUNDS.vdc));
         else if (path === 'modulation.mf' || path === 'modulation.frequencyRatio') {
-          expect(fromSchema(node), path).toEqual(fromLibrary({ min: 1, max: MAX_DESIGN_FREQUENCY_RATIO, integer: true }));
-        } else expect(fromSchema(node), path).toEqual(fromLibrary(DESIGN_BOUNDS[path as keyof typeof DESIGN_BOUNDS]));
+          expect(fromSchema(node), path).toEqual(
+            fromLibrary({ min: 1, max: MAX_DESIGN_FREQUENCY_RATIO, integer: true }),
+          );
+        } else
+          expect(fromSchema(node), path).toEqual(
+            fromLibrary(DESIGN_BOUNDS[path as keyof typeof DESIGN_BOUNDS]),
+          );
       }
     }
-    expect([...leaves.keys()]).toEqual(expect.arrayContaining(['modulation.vdc', 'modulation.mf', 'modulation.frequencyRatio']));
+    expect([...leaves.keys()]).toEqual(
+      expect.arrayContaining(['modulation.vdc', 'modulation.mf', 'modulation.frequencyRatio']),
+    );
   });
 
   it('a stored pattern holds at most MAX_PATTERN_ANGLES angles', () => {
@@ -105,10 +120,15 @@ describe('the OpenAPI design schemas agree with the library', () => {
     expect(enumOf('ZeroVectorClamping')).toEqual(ZERO_VECTOR_CLAMPINGS);
     expect(enumOf('OvermodulationMethod')).toEqual(OVERMODULATION_METHODS);
     expect(enumOf('SheKind')).toEqual(SHE_KINDS);
-    expect((resolve(schemas.DesignFilter).properties as Record<string, JsonSchema>).dampingPlacement?.enum).toEqual(DAMPING_PLACEMENTS);
+    expect(
+      (resolve(schemas.DesignFilter).properties as Record<string, JsonSchema>).dampingPlacement
+        ?.enum,
+    ).toEqual(DAMPING_PLACEMENTS);
     // One branch per method in both unions, each tagged with its method.
     for (const union of ['Modulation', 'DesignModulation']) {
-      const tags = ((resolve(schemas[union]).oneOf as JsonSchema[]).map((b) => (resolve(b).properties as Record<string, JsonSchema>).method?.const));
+      const tags = (resolve(schemas[union]).oneOf as JsonSchema[]).map(
+        (b) => (resolve(b).properties as Record<string, JsonSchema>).method?.const,
+      );
       expect(tags, union).toEqual(MODULATION_METHODS);
     }
   });

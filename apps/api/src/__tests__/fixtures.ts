@@ -3,8 +3,20 @@ import type { PulsewrightApp } from '../app.js';
 import type { RoleRequirement } from '../openapi.js';
 
 /** A modulation every compute route accepts. */
-export const SINE_TRIANGLE = { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8, mf: 21, vdc: 400 } as const;
-export const THREE_PHASE = { method: 'three-phase', ma: 0.9, mf: 15, vdc: 650, zeroSequence: 'third-harmonic' } as const;
+export const SINE_TRIANGLE = {
+  method: 'sine-triangle',
+  scheme: 'bipolar',
+  ma: 0.8,
+  mf: 21,
+  vdc: 400,
+} as const;
+export const THREE_PHASE = {
+  method: 'three-phase',
+  ma: 0.9,
+  mf: 15,
+  vdc: 650,
+  zeroSequence: 'third-harmonic',
+} as const;
 
 /** The designs of those modulations at 50 Hz (carrier = mf × 50 Hz), as studies store them. */
 export const SINE_TRIANGLE_DESIGN = {
@@ -20,7 +32,10 @@ export const THREE_PHASE_DESIGN = {
   modulation: { method: 'three-phase', ma: 0.9, zeroSequence: 'third-harmonic' },
 } as const;
 /** A design with its modulation index changed. */
-export const withMa = <D extends { modulation: object }>(design: D, ma: number): D => ({ ...design, modulation: { ...design.modulation, ma } });
+export const withMa = <D extends { modulation: object }>(design: D, ma: number): D => ({
+  ...design,
+  modulation: { ...design.modulation, ma },
+});
 
 /** A small valid capture: two 50 Hz periods at 5 kS/s of an invented sine plus a square part. */
 export function captureCsv(rows = 200, sampleRate = 5000): string {
@@ -50,7 +65,10 @@ export interface Ids {
 /** Ids of things made by the engineer before the table runs. */
 export async function makeIds(app: PulsewrightApp, engineerToken: string): Promise<Ids> {
   const auth = { Authorization: `Bearer ${engineerToken}` };
-  const project = await request(app).post('/api/v1/projects').set(auth).send({ name: 'Role table project' });
+  const project = await request(app)
+    .post('/api/v1/projects')
+    .set(auth)
+    .send({ name: 'Role table project' });
   const study = await request(app)
     .post('/api/v1/studies')
     .set(auth)
@@ -66,7 +84,12 @@ export async function makeIds(app: PulsewrightApp, engineerToken: string): Promi
   for (const r of [project, study, capture, job]) {
     if (r.status >= 300) throw new Error(`setup failed: ${r.status} ${JSON.stringify(r.body)}`);
   }
-  return { projectId: project.body.id, studyId: study.body.id, captureId: capture.body.id, jobId: job.body.id };
+  return {
+    projectId: project.body.id,
+    studyId: study.body.id,
+    captureId: capture.body.id,
+    jobId: job.body.id,
+  };
 }
 
 /** What each operation needs to succeed; `make` may create fresh things (keys, members). */
@@ -74,14 +97,26 @@ export type Fixture = (context: {
   app: PulsewrightApp;
   ids: Ids;
   tokens: Record<'viewer' | 'engineer' | 'admin', string>;
-  fresh: () => Promise<{ userId: string; keyId: string; invitationId: string; invitationToken: string; resetToken: string }>;
+  fresh: () => Promise<{
+    userId: string;
+    keyId: string;
+    invitationId: string;
+    invitationToken: string;
+    resetToken: string;
+  }>;
 }) => Promise<RequestSpec> | RequestSpec;
 
 export const FIXTURES: Record<string, Fixture> = {
   getHealth: () => ({ path: '/api/health' }),
-  login: () => ({ path: '/api/v1/auth/login', body: { email: 'viewer@kestrel.example', password: 'test-demo-password' } }),
+  login: () => ({
+    path: '/api/v1/auth/login',
+    body: { email: 'viewer@kestrel.example', password: 'test-demo-password' },
+  }),
   logout: () => ({ path: '/api/v1/auth/logout' }),
-  requestPasswordReset: () => ({ path: '/api/v1/auth/password-reset', body: { email: 'nobody@kestrel.example' } }),
+  requestPasswordReset: () => ({
+    path: '/api/v1/auth/password-reset',
+    body: { email: 'nobody@kestrel.example' },
+  }),
   confirmPasswordReset: async ({ fresh }) => ({
     path: '/api/v1/auth/password-reset/confirm',
     body: { token: (await fresh()).resetToken, password: 'a-new-long-password' },
@@ -91,35 +126,64 @@ export const FIXTURES: Record<string, Fixture> = {
   createApiKey: () => ({ path: '/api/v1/api-keys', body: { name: 'table key', role: 'viewer' } }),
   revokeApiKey: async ({ fresh }) => ({ path: `/api/v1/api-keys/${(await fresh()).keyId}` }),
   listMembers: () => ({ path: '/api/v1/members' }),
-  updateMember: async ({ fresh }) => ({ path: `/api/v1/members/${(await fresh()).userId}`, body: { role: 'engineer' } }),
+  updateMember: async ({ fresh }) => ({
+    path: `/api/v1/members/${(await fresh()).userId}`,
+    body: { role: 'engineer' },
+  }),
   removeMember: async ({ fresh }) => ({ path: `/api/v1/members/${(await fresh()).userId}` }),
   listInvitations: () => ({ path: '/api/v1/invitations' }),
-  createInvitation: () => ({ path: '/api/v1/invitations', body: { email: `new${Math.random().toString(36).slice(2)}@kestrel.example`, role: 'viewer' } }),
+  createInvitation: () => ({
+    path: '/api/v1/invitations',
+    body: { email: `new${Math.random().toString(36).slice(2)}@kestrel.example`, role: 'viewer' },
+  }),
   acceptInvitation: async ({ fresh }) => ({
     path: '/api/v1/invitations/accept',
-    body: { token: (await fresh()).invitationToken, name: 'New Member', password: 'a-long-password-1' },
+    body: {
+      token: (await fresh()).invitationToken,
+      name: 'New Member',
+      password: 'a-long-password-1',
+    },
   }),
-  revokeInvitation: async ({ fresh }) => ({ path: `/api/v1/invitations/${(await fresh()).invitationId}` }),
+  revokeInvitation: async ({ fresh }) => ({
+    path: `/api/v1/invitations/${(await fresh()).invitationId}`,
+  }),
   listAuditEvents: () => ({ path: '/api/v1/audit-events', query: { limit: 5 } }),
   listOutbox: () => ({ path: '/api/v1/outbox' }),
-  computeSpectrum: () => ({ path: '/api/v1/spectra', body: { modulation: SINE_TRIANGLE, maxOrder: 50 } }),
+  computeSpectrum: () => ({
+    path: '/api/v1/spectra',
+    body: { modulation: SINE_TRIANGLE, maxOrder: 50 },
+  }),
   computeWaveform: () => ({ path: '/api/v1/waveforms', body: { modulation: THREE_PHASE } }),
-  analyseDesign: () => ({ path: '/api/v1/designs/report', body: { design: { ...SINE_TRIANGLE_DESIGN, load: { r: 10, l: 0.02 } }, points: 64 } }),
+  analyseDesign: () => ({
+    path: '/api/v1/designs/report',
+    body: { design: { ...SINE_TRIANGLE_DESIGN, load: { r: 10, l: 0.02 } }, points: 64 },
+  }),
   computeLoadCurrent: () => ({
     path: '/api/v1/load-current',
     body: { design: { ...SINE_TRIANGLE_DESIGN, load: { r: 10, l: 0.02 } }, points: 64 },
   }),
   computeLcFilter: () => ({
     path: '/api/v1/filters/lc',
-    body: { design: { ...SINE_TRIANGLE_DESIGN, filter: { l: 0.001, c: 0.00001, rDamping: 2 } }, points: 64 },
+    body: {
+      design: { ...SINE_TRIANGLE_DESIGN, filter: { l: 0.001, c: 0.00001, rDamping: 2 } },
+      points: 64,
+    },
   }),
   computeSpaceVector: () => ({ path: '/api/v1/space-vector', body: { m: 0.7, theta: 1.2 } }),
   computeTimerTable: () => ({
     path: '/api/v1/timer-tables',
     query: { format: 'csv' },
-    body: { modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.8 }, fundamentalFrequency: 50, carrierFrequency: 5000, timerClock: 16000000 },
+    body: {
+      modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.8 },
+      fundamentalFrequency: 50,
+      carrierFrequency: 5000,
+      timerClock: 16000000,
+    },
   }),
-  checkHarmonicLimits: () => ({ path: '/api/v1/harmonic-limits/check', body: { design: SINE_TRIANGLE_DESIGN, busVoltage: 230 } }),
+  checkHarmonicLimits: () => ({
+    path: '/api/v1/harmonic-limits/check',
+    body: { design: SINE_TRIANGLE_DESIGN, busVoltage: 230 },
+  }),
   listJobs: () => ({ path: '/api/v1/jobs' }),
   createMaSweep: () => ({
     path: '/api/v1/jobs/ma-sweeps',
@@ -127,36 +191,74 @@ export const FIXTURES: Record<string, Fixture> = {
   }),
   createSheSweep: () => ({
     path: '/api/v1/jobs/she-sweeps',
-    body: { kind: 'bipolar', vdc: 100, count: 3, eliminate: [3, 5], fundamental: { from: 30, to: 60, points: 3 } },
+    body: {
+      kind: 'bipolar',
+      vdc: 100,
+      count: 3,
+      eliminate: [3, 5],
+      fundamental: { from: 30, to: 60, points: 3 },
+    },
   }),
   getJob: ({ ids }) => ({ path: `/api/v1/jobs/${ids.jobId}` }),
   listProjects: () => ({ path: '/api/v1/projects', query: { q: 'pump' } }),
   createProject: () => ({ path: '/api/v1/projects', body: { name: 'Table project' } }),
   getProject: ({ ids }) => ({ path: `/api/v1/projects/${ids.projectId}` }),
-  updateProject: ({ ids }) => ({ path: `/api/v1/projects/${ids.projectId}`, body: { description: 'changed by the role table' } }),
+  updateProject: ({ ids }) => ({
+    path: `/api/v1/projects/${ids.projectId}`,
+    body: { description: 'changed by the role table' },
+  }),
   listStudies: ({ ids }) => ({ path: '/api/v1/studies', query: { projectId: ids.projectId } }),
-  createStudy: ({ ids }) => ({ path: '/api/v1/studies', body: { projectId: ids.projectId, name: 'Table study', design: THREE_PHASE_DESIGN } }),
+  createStudy: ({ ids }) => ({
+    path: '/api/v1/studies',
+    body: { projectId: ids.projectId, name: 'Table study', design: THREE_PHASE_DESIGN },
+  }),
   getStudy: ({ ids }) => ({ path: `/api/v1/studies/${ids.studyId}` }),
   updateStudy: async ({ app, ids, tokens }) => {
-    const current = await request(app).get(`/api/v1/studies/${ids.studyId}`).set('Authorization', `Bearer ${tokens.viewer}`);
+    const current = await request(app)
+      .get(`/api/v1/studies/${ids.studyId}`)
+      .set('Authorization', `Bearer ${tokens.viewer}`);
     return {
       path: `/api/v1/studies/${ids.studyId}`,
-      body: { baseRevision: current.body.revision, name: 'Role table study', design: withMa(SINE_TRIANGLE_DESIGN, 0.7) },
+      body: {
+        baseRevision: current.body.revision,
+        name: 'Role table study',
+        design: withMa(SINE_TRIANGLE_DESIGN, 0.7),
+      },
     };
   },
   duplicateStudy: ({ ids }) => ({ path: `/api/v1/studies/${ids.studyId}/duplicate`, body: {} }),
-  shareStudyReport: ({ ids }) => ({ path: `/api/v1/studies/${ids.studyId}/share`, body: { email: 'reviewer@kestrel.example' } }),
+  shareStudyReport: ({ ids }) => ({
+    path: `/api/v1/studies/${ids.studyId}/share`,
+    body: { email: 'reviewer@kestrel.example' },
+  }),
   listStudyRevisions: ({ ids }) => ({ path: `/api/v1/studies/${ids.studyId}/revisions` }),
   restoreStudyRevision: async ({ app, ids, tokens }) => {
-    const current = await request(app).get(`/api/v1/studies/${ids.studyId}`).set('Authorization', `Bearer ${tokens.viewer}`);
-    return { path: `/api/v1/studies/${ids.studyId}/revisions/1/restore`, body: { baseRevision: current.body.revision } };
+    const current = await request(app)
+      .get(`/api/v1/studies/${ids.studyId}`)
+      .set('Authorization', `Bearer ${tokens.viewer}`);
+    return {
+      path: `/api/v1/studies/${ids.studyId}/revisions/1/restore`,
+      body: { baseRevision: current.body.revision },
+    };
   },
-  getStudySpectrum: ({ ids }) => ({ path: `/api/v1/studies/${ids.studyId}/spectrum`, query: { maxOrder: 30 } }),
-  getStudyReport: ({ ids }) => ({ path: `/api/v1/studies/${ids.studyId}/report`, query: { maxOrder: 60, points: 64 } }),
+  getStudySpectrum: ({ ids }) => ({
+    path: `/api/v1/studies/${ids.studyId}/spectrum`,
+    query: { maxOrder: 30 },
+  }),
+  getStudyReport: ({ ids }) => ({
+    path: `/api/v1/studies/${ids.studyId}/report`,
+    query: { maxOrder: 60, points: 64 },
+  }),
   listCaptures: () => ({ path: '/api/v1/captures' }),
-  uploadCapture: () => ({ path: '/api/v1/captures', upload: { field: 'file', content: captureCsv(), fileName: 'table.csv' } }),
+  uploadCapture: () => ({
+    path: '/api/v1/captures',
+    upload: { field: 'file', content: captureCsv(), fileName: 'table.csv' },
+  }),
   getCapture: ({ ids }) => ({ path: `/api/v1/captures/${ids.captureId}` }),
-  analyseCapture: ({ ids }) => ({ path: `/api/v1/captures/${ids.captureId}/spectrum`, body: { maxOrder: 10, fundamentalFrequency: 50 } }),
+  analyseCapture: ({ ids }) => ({
+    path: `/api/v1/captures/${ids.captureId}/spectrum`,
+    body: { maxOrder: 10, fundamentalFrequency: 50 },
+  }),
   compareCapture: ({ ids }) => ({
     path: `/api/v1/captures/${ids.captureId}/comparison`,
     body: { studyId: ids.studyId, maxOrder: 10, fundamentalFrequency: 50 },
@@ -167,17 +269,30 @@ export const FIXTURES: Record<string, Fixture> = {
 export const ROLE_ORDER: readonly RoleRequirement[] = ['public', 'viewer', 'engineer', 'admin'];
 
 /** Sends a fixture's request with the method of the operation and an optional token. */
-export function send(app: PulsewrightApp, method: string, spec: RequestSpec, token?: string): request.Test {
-  let test = (request(app) as unknown as Record<string, (path: string) => request.Test>)[method]!(spec.path);
+export function send(
+  app: PulsewrightApp,
+  method: string,
+  spec: RequestSpec,
+  token?: string,
+): request.Test {
+  let test = (request(app) as unknown as Record<string, (path: string) => request.Test>)[method]!(
+    spec.path,
+  );
   if (token) test = test.set('Authorization', `Bearer ${token}`);
   if (spec.query) test = test.query(spec.query);
-  if (spec.upload) return test.attach(spec.upload.field, Buffer.from(spec.upload.content), spec.upload.fileName);
+  if (spec.upload)
+    return test.attach(spec.upload.field, Buffer.from(spec.upload.content), spec.upload.fileName);
   if (spec.body !== undefined) return test.send(spec.body as object);
   return test;
 }
 
 /** A space-vector modulation (seven segments, symmetric regular sampling, linear range). */
-export const SPACE_VECTOR = { method: 'space-vector', m: 0.8, vdc: 600, frequencyRatio: 201 } as const;
+export const SPACE_VECTOR = {
+  method: 'space-vector',
+  m: 0.8,
+  vdc: 600,
+  frequencyRatio: 201,
+} as const;
 /** Its design at 50 Hz (switching periods at 201 × 50 Hz). */
 export const SPACE_VECTOR_DESIGN = {
   vdc: 600,

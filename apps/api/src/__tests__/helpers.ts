@@ -56,23 +56,32 @@ export async function testApp(overrides: ConfigOverrides = {}, dir?: string): Pr
   };
 }
 
-export async function signIn(app: PulsewrightApp, email: string, password = DEMO_PASSWORD): Promise<string> {
+export async function signIn(
+  app: PulsewrightApp,
+  email: string,
+  password = DEMO_PASSWORD,
+): Promise<string> {
   const res = await request(app).post('/api/v1/auth/login').send({ email, password });
-  if (res.status !== 200) throw new Error(`sign-in of ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
+  if (res.status !== 200)
+    throw new Error(`sign-in of ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
   return res.body.token as string;
 }
 
 /** Session tokens of the four demo users. */
 export async function demoTokens(app: PulsewrightApp): Promise<Record<keyof typeof DEMO, string>> {
   const entries = await Promise.all(
-    (Object.keys(DEMO) as (keyof typeof DEMO)[]).map(async (k) => [k, await signIn(app, DEMO[k])] as const),
+    (Object.keys(DEMO) as (keyof typeof DEMO)[]).map(
+      async (k) => [k, await signIn(app, DEMO[k])] as const,
+    ),
   );
   return Object.fromEntries(entries) as Record<keyof typeof DEMO, string>;
 }
 
 /** The newest message delivered to `to` (as the recipient's mail client would show it). */
 export function deliveredTo(t: TestApp, to: string): DeliveredMail {
-  const mail = readMailDrop(t.mailDir).filter((m) => m.to === to).at(-1);
+  const mail = readMailDrop(t.mailDir)
+    .filter((m) => m.to === to)
+    .at(-1);
   if (!mail) throw new Error(`no mail was delivered to ${to}`);
   return mail;
 }

@@ -64,22 +64,39 @@ describe('F2: an unreadable multipart upload is 400 naming file', () => {
 });
 
 describe('F3: control characters in q', () => {
-  it.each(['/api/v1/studies?q=a%00b', '/api/v1/projects?q=a%00b', '/api/v1/studies?q=%1b'])('%s is 400 naming q', async (url) => {
-    expectProblem(await auth(request(t.app).get(url)), 400, 'q');
-  });
+  it.each(['/api/v1/studies?q=a%00b', '/api/v1/projects?q=a%00b', '/api/v1/studies?q=%1b'])(
+    '%s is 400 naming q',
+    async (url) => {
+      expectProblem(await auth(request(t.app).get(url)), 400, 'q');
+    },
+  );
   it('ordinary text still searches, and % _ \\ are literal (LIKE … ESCAPE)', async () => {
     expect((await auth(request(t.app).get('/api/v1/studies?q=a'))).status).toBe(200);
-    for (const name of ['Wildcard 50% load', 'Wildcard 50 volts', 'Wildcard a_b', 'Wildcard axb', 'Wildcard c\\d']) {
-      const res = await auth(request(t.app).post('/api/v1/studies')).send({ projectId, name, design: DESIGN });
+    for (const name of [
+      'Wildcard 50% load',
+      'Wildcard 50 volts',
+      'Wildcard a_b',
+      'Wildcard axb',
+      'Wildcard c\\d',
+    ]) {
+      const res = await auth(request(t.app).post('/api/v1/studies')).send({
+        projectId,
+        name,
+        design: DESIGN,
+      });
       expect(res.status).toBe(201);
     }
     const names = async (q: string): Promise<string[]> =>
-      (await auth(request(t.app).get(`/api/v1/studies?q=${encodeURIComponent(q)}`))).body.map((s: { name: string }) => s.name);
+      (await auth(request(t.app).get(`/api/v1/studies?q=${encodeURIComponent(q)}`))).body.map(
+        (s: { name: string }) => s.name,
+      );
     expect(await names('50%')).toEqual(['Wildcard 50% load']);
     expect(await names('a_b')).toEqual(['Wildcard a_b']);
     expect(await names('c\\d')).toEqual(['Wildcard c\\d']);
     expect((await names('WILDCARD 50')).sort()).toEqual(['Wildcard 50 volts', 'Wildcard 50% load']);
-    const projects = (await auth(request(t.app).get('/api/v1/projects?q=%25'))).body as { name: string }[];
+    const projects = (await auth(request(t.app).get('/api/v1/projects?q=%25'))).body as {
+      name: string;
+    }[];
     expect(projects.every((p) => p.name.includes('%'))).toBe(true);
   });
 });
@@ -87,26 +104,40 @@ describe('F3: control characters in q', () => {
 describe('F4, F5: extreme but once schema-valid numbers', () => {
   it('load-current with r 5e-324 Ω (smallest subnormal double, IEEE 754) is 400 naming design.load.r', async () => {
     const res = await auth(request(t.app).post('/api/v1/load-current')).send({
-      design: { ...DESIGN, vdc: 2.4e-168, load: { r: 5e-324, l: 2.8e-50, emf: { amplitude: 5000, phase: 0 } } },
+      design: {
+        ...DESIGN,
+        vdc: 2.4e-168,
+        load: { r: 5e-324, l: 2.8e-50, emf: { amplitude: 5000, phase: 0 } },
+      },
     });
     expectProblem(res, 400, 'design.load.r');
   });
   it('load-current at the documented extremes gives finite figures', async () => {
     // 100 kV across 1 µΩ at 1 mHz: 1e11 A, far outside any real design but finite in double precision.
-    const design = { ...DESIGN, vdc: 100_000, fundamentalFrequency: 0.001, carrierFrequency: 0.021 };
+    const design = {
+      ...DESIGN,
+      vdc: 100_000,
+      fundamentalFrequency: 0.001,
+      carrierFrequency: 0.021,
+    };
     for (const load of [
       { r: 1e-6, l: 0, emf: { amplitude: 100_000, phase: 0 } },
       { r: 1e-6, l: 100 },
       { r: 1e6, l: 100 },
     ]) {
-      const res = await auth(request(t.app).post('/api/v1/load-current')).send({ design: { ...design, load }, points: 64 });
+      const res = await auth(request(t.app).post('/api/v1/load-current')).send({
+        design: { ...design, load },
+        points: 64,
+      });
       expect(res.status, JSON.stringify(res.body).slice(0, 300)).toBe(200);
       expect(Number.isFinite(res.body.currents[0].load.rms)).toBe(true);
       expect(Number.isFinite(res.body.loadPower)).toBe(true);
     }
   });
   it('filters/lc with subnormal c and l is 400 naming design.filter.c', async () => {
-    const res = await auth(request(t.app).post('/api/v1/filters/lc')).send({ design: { ...DESIGN, filter: { l: 1e-110, c: 2.5e-323 } } });
+    const res = await auth(request(t.app).post('/api/v1/filters/lc')).send({
+      design: { ...DESIGN, filter: { l: 1e-110, c: 2.5e-323 } },
+    });
     expectProblem(res, 400, 'design.filter.c');
   });
   it('filters/lc at the documented minimums gives finite figures', async () => {
@@ -119,7 +150,10 @@ describe('F4, F5: extreme but once schema-valid numbers', () => {
     expect(Number.isFinite(res.body.output.thdUpperBound)).toBe(true);
   });
   it('harmonic-limits/check with design null is 400 naming design', async () => {
-    const res = await auth(request(t.app).post('/api/v1/harmonic-limits/check')).send({ design: null, busVoltage: 400 });
+    const res = await auth(request(t.app).post('/api/v1/harmonic-limits/check')).send({
+      design: null,
+      busVoltage: 400,
+    });
     expect(res.status).toBe(400);
     expect(res.body.errors.some((e: { path: string }) => e.path.startsWith('design'))).toBe(true);
   });
@@ -136,15 +170,28 @@ describe('F6: integer query parameters take decimal digits only', () => {
     cases.push([`/api/v1/studies/{id}/report?points=${encodeURIComponent(value)}`, 'points']);
   }
   for (const value of ['0x10', 'Infinity', '1e999', '400V', '']) {
-    cases.push([`/api/v1/studies/{id}/report?busVoltage=${encodeURIComponent(value)}`, 'busVoltage']);
+    cases.push([
+      `/api/v1/studies/{id}/report?busVoltage=${encodeURIComponent(value)}`,
+      'busVoltage',
+    ]);
   }
   it.each(cases)('%s is 400 naming %s', async (url, field) => {
     expectProblem(await auth(request(t.app).get(url.replace('{id}', studyId))), 400, field);
   });
   it('plain digits still work', async () => {
     expect((await auth(request(t.app).get('/api/v1/jobs?limit=16&offset=0'))).status).toBe(200);
-    expect((await auth(request(t.app).get(`/api/v1/studies/${studyId}/spectrum?maxOrder=16`))).status).toBe(200);
-    expect((await auth(request(t.app).get(`/api/v1/studies/${studyId}/report?maxOrder=60&points=64&busVoltage=4.0e2`))).status).toBe(200);
+    expect(
+      (await auth(request(t.app).get(`/api/v1/studies/${studyId}/spectrum?maxOrder=16`))).status,
+    ).toBe(200);
+    expect(
+      (
+        await auth(
+          request(t.app).get(
+            `/api/v1/studies/${studyId}/report?maxOrder=60&points=64&busVoltage=4.0e2`,
+          ),
+        )
+      ).status,
+    ).toBe(200);
   });
 });
 
@@ -164,7 +211,7 @@ describe('S1: CSV formula injection in captures', () => {
       [3, '@SUM(A1)'],
       [3, '-x'],
     ]);
-    expect(escapeFormulaCells(text)).toBe('a,b\n#x,\'=1+1\n"\'@SUM(A1)";\'-x\n');
+    expect(escapeFormulaCells(text)).toBe("a,b\n#x,'=1+1\n\"'@SUM(A1)\";'-x\n");
   });
   it('a hostile file stored before the check is served escaped', async () => {
     const upload = await auth(request(t.app).post('/api/v1/captures'))
@@ -172,7 +219,10 @@ describe('S1: CSV formula injection in captures', () => {
       .attach('file', Buffer.from(captureCsv(40)), { filename: 'ok.csv', contentType: 'text/csv' });
     expect(upload.status).toBe(201);
     const { Capture } = t.app.services.models;
-    await Capture.update({ original: Buffer.from('time,voltage\n#n,=HYPERLINK("x")\n0,1\n') }, { where: { id: upload.body.id } });
+    await Capture.update(
+      { original: Buffer.from('time,voltage\n#n,=HYPERLINK("x")\n0,1\n') },
+      { where: { id: upload.body.id } },
+    );
     const file = await auth(request(t.app).get(`/api/v1/captures/${upload.body.id}/file`));
     expect(file.status).toBe(200);
     expect(file.text).toBe('time,voltage\n#n,\'=HYPERLINK("x")\n0,1\n');
@@ -207,7 +257,11 @@ describe('L1: SQLite writers wait in JavaScript, one at a time', () => {
   it('50 concurrent study creations and edits all complete, and the queue drains', async () => {
     const created = await Promise.all(
       Array.from({ length: 50 }, (_, k) =>
-        auth(request(t.app).post('/api/v1/studies')).send({ projectId, name: `Concurrent ${k}`, design: DESIGN }),
+        auth(request(t.app).post('/api/v1/studies')).send({
+          projectId,
+          name: `Concurrent ${k}`,
+          design: DESIGN,
+        }),
       ),
     );
     expect(created.map((r) => r.status)).toEqual(Array(50).fill(201));

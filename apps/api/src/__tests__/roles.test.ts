@@ -73,7 +73,11 @@ describe('every route against every role', () => {
           const res = await send(t.app, op.method, spec, token);
           expect(res.status, `${label} token ${token}`).toBe(401);
           expect(res.headers['content-type']).toMatch(/^application\/problem\+json/);
-          expect(res.body).toMatchObject({ status: 401, title: expect.any(String), detail: expect.any(String) });
+          expect(res.body).toMatchObject({
+            status: 401,
+            title: expect.any(String),
+            detail: expect.any(String),
+          });
         }
       });
     }
@@ -85,7 +89,10 @@ describe('every route against every role', () => {
         const token = op.operationId === 'logout' ? await signIn(t.app, DEMO[role]) : tokens[role];
         const res = await send(t.app, op.method, spec, token);
         if (allowed) {
-          expect(res.status, `${label} as ${role}: ${JSON.stringify(res.body)}`).toBeGreaterThanOrEqual(200);
+          expect(
+            res.status,
+            `${label} as ${role}: ${JSON.stringify(res.body)}`,
+          ).toBeGreaterThanOrEqual(200);
           expect(res.status, `${label} as ${role}: ${JSON.stringify(res.body)}`).toBeLessThan(300);
         } else {
           expect(res.status, `${label} as ${role}: ${JSON.stringify(res.body)}`).toBe(403);
@@ -97,7 +104,16 @@ describe('every route against every role', () => {
   }
 
   it('marks exactly the sign-in, reset, invitation-accept and health operations public', () => {
-    const publicOps = operations.filter((o: OperationInfo) => o.role === 'public').map((o) => o.operationId).sort();
-    expect(publicOps).toEqual(['acceptInvitation', 'confirmPasswordReset', 'getHealth', 'login', 'requestPasswordReset']);
+    const publicOps = operations
+      .filter((o: OperationInfo) => o.role === 'public')
+      .map((o) => o.operationId)
+      .sort();
+    expect(publicOps).toEqual([
+      'acceptInvitation',
+      'confirmPasswordReset',
+      'getHealth',
+      'login',
+      'requestPasswordReset',
+    ]);
   });
 });

@@ -23,14 +23,28 @@ describe('e-mailing a study report', () => {
     engineer = { Authorization: `Bearer ${await signIn(t.app, DEMO.engineer)}` };
     viewer = { Authorization: `Bearer ${await signIn(t.app, DEMO.viewer)}` };
     admin = { Authorization: `Bearer ${await signIn(t.app, DEMO.admin)}` };
-    const projectId = (await request(t.app).post('/api/v1/projects').set(engineer).send({ name: 'Sharing', description: 'test' })).body.id;
-    const study = (await request(t.app).post('/api/v1/studies').set(engineer).send({ projectId, name: 'Shared candidate', design: DESIGN })).body;
-    await request(t.app).put(`/api/v1/studies/${study.id}`).set(engineer).send({ baseRevision: 1, name: 'Shared candidate', design: withMa(DESIGN, 0.7) });
+    const projectId = (
+      await request(t.app)
+        .post('/api/v1/projects')
+        .set(engineer)
+        .send({ name: 'Sharing', description: 'test' })
+    ).body.id;
+    const study = (
+      await request(t.app)
+        .post('/api/v1/studies')
+        .set(engineer)
+        .send({ projectId, name: 'Shared candidate', design: DESIGN })
+    ).body;
+    await request(t.app)
+      .put(`/api/v1/studies/${study.id}`)
+      .set(engineer)
+      .send({ baseRevision: 1, name: 'Shared candidate', design: withMa(DESIGN, 0.7) });
     studyId = study.id;
   });
   afterAll(async () => t.dispose());
 
-  const outbox = async (): Promise<OutboxItem[]> => (await request(t.app).get('/api/v1/outbox').set(admin)).body as OutboxItem[];
+  const outbox = async (): Promise<OutboxItem[]> =>
+    (await request(t.app).get('/api/v1/outbox').set(admin)).body as OutboxItem[];
 
   it('an engineer shares: 202, and the outbox holds a mail to that address with the link, revision, author, sender, message and caution', async () => {
     const res = await request(t.app)
@@ -50,33 +64,57 @@ describe('e-mailing a study report', () => {
     // The caution sentence of docs/references.md, "Cautions".
     expect(mail!.text).toContain('Inverter DC buses and outputs are lethal.');
     // Its figures are the design report's of revision 2 (the exact whole-waveform THD, the limit result).
-    const report = (await request(t.app).get(`/api/v1/studies/${studyId}/report`).set(engineer)).body;
-    expect(mail!.text).toContain(`THD ${(100 * report.bridge.thd).toFixed(2)} %, WTHD ${(100 * report.bridge.wthd).toFixed(2)} % (exact, whole waveform)`);
-    expect(mail!.text).toContain(`voltage limits (recalled from memory): ${report.limitCheck.pass ? 'pass' : 'fail'}`);
-    const audit = (await request(t.app).get('/api/v1/audit-events').set(admin)).body as { action: string; subjectId: string; details: Record<string, unknown> }[];
-    expect(audit.find((e) => e.action === 'study.share')).toMatchObject({ subjectId: studyId, details: { to: 'reviewer@kestrel.example', revision: 2 } });
+    const report = (await request(t.app).get(`/api/v1/studies/${studyId}/report`).set(engineer))
+      .body;
+    expect(mail!.text).toContain(
+      `THD ${(100 * report.bridge.thd).toFixed(2)} %, WTHD ${(100 * report.bridge.wthd).toFixed(2)} % (exact, whole waveform)`,
+    );
+    expect(mail!.text).toContain(
+      `voltage limits (recalled from memory): ${report.limitCheck.pass ? 'pass' : 'fail'}`,
+    );
+    const audit = (await request(t.app).get('/api/v1/audit-events').set(admin)).body as {
+      action: string;
+      subjectId: string;
+      details: Record<string, unknown>;
+    }[];
+    expect(audit.find((e) => e.action === 'study.share')).toMatchObject({
+      subjectId: studyId,
+      details: { to: 'reviewer@kestrel.example', revision: 2 },
+    });
   });
 
   it('refuses a viewer with 403 and sends nothing', async () => {
     const before = (await outbox()).length;
-    const res = await request(t.app).post(`/api/v1/studies/${studyId}/share`).set(viewer).send({ email: 'someone@kestrel.example' });
+    const res = await request(t.app)
+      .post(`/api/v1/studies/${studyId}/share`)
+      .set(viewer)
+      .send({ email: 'someone@kestrel.example' });
     expect(res.status).toBe(403);
     expect(res.headers['content-type']).toMatch(/problem\+json/);
     expect((await outbox()).length).toBe(before);
   });
 
   it('answers 400 naming email for a bad address, and message for one over 2000 characters', async () => {
-    const bad = await request(t.app).post(`/api/v1/studies/${studyId}/share`).set(engineer).send({ email: 'not an address' });
+    const bad = await request(t.app)
+      .post(`/api/v1/studies/${studyId}/share`)
+      .set(engineer)
+      .send({ email: 'not an address' });
     expect(bad.status).toBe(400);
     expect(bad.headers['content-type']).toMatch(/problem\+json/);
     expect(bad.body.errors.map((e: { path: string }) => e.path)).toContain('email');
-    const long = await request(t.app).post(`/api/v1/studies/${studyId}/share`).set(engineer).send({ email: 'a@kestrel.example', message: 'x'.repeat(2001) });
+    const long = await request(t.app)
+      .post(`/api/v1/studies/${studyId}/share`)
+      .set(engineer)
+      .send({ email: 'a@kestrel.example', message: 'x'.repeat(2001) });
     expect(long.status).toBe(400);
     expect(long.body.errors.map((e: { path: string }) => e.path)).toContain('message');
   });
 
   it('answers 404 for an unknown study', async () => {
-    const res = await request(t.app).post('/api/v1/studies/00000000-0000-4000-8000-000000000000/share').set(engineer).send({ email: 'a@kestrel.example' });
+    const res = await request(t.app)
+      .post('/api/v1/studies/00000000-0000-4000-8000-000000000000/share')
+      .set(engineer)
+      .send({ email: 'a@kestrel.example' });
     expect(res.status).toBe(404);
     expect(res.headers['content-type']).toMatch(/problem\+json/);
   });
@@ -86,10 +124,20 @@ describe('e-mailing a study report', () => {
     // reach the limiter; the first test's share and the 404 did, so one share is left.
     const statuses: number[] = [];
     for (let i = 0; i < 3; i++) {
-      statuses.push((await request(t.app).post(`/api/v1/studies/${studyId}/share`).set(engineer).send({ email: `r${i}@kestrel.example` })).status);
+      statuses.push(
+        (
+          await request(t.app)
+            .post(`/api/v1/studies/${studyId}/share`)
+            .set(engineer)
+            .send({ email: `r${i}@kestrel.example` })
+        ).status,
+      );
     }
     expect(statuses).toEqual([202, 429, 429]);
-    const limited = await request(t.app).post(`/api/v1/studies/${studyId}/share`).set(engineer).send({ email: 'r9@kestrel.example' });
+    const limited = await request(t.app)
+      .post(`/api/v1/studies/${studyId}/share`)
+      .set(engineer)
+      .send({ email: 'r9@kestrel.example' });
     expect(limited.headers['content-type']).toMatch(/problem\+json/);
   });
 });

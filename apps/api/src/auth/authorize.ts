@@ -43,25 +43,37 @@ export function createAuthorizer(auth: AuthService): (req: Request) => Promise<b
   );
   const authenticate = (req: Request): Promise<Principal | false> =>
     new Promise((resolve, reject) => {
-      const middleware = passport.authenticate('bearer', { session: false }, (error: unknown, user: Principal | false) => {
-        if (error) reject(error instanceof Error ? error : new Error(String(error)));
-        else resolve(user);
-      }) as (req: Request, res: unknown, next: (error?: unknown) => void) => void;
+      const middleware = passport.authenticate(
+        'bearer',
+        { session: false },
+        (error: unknown, user: Principal | false) => {
+          if (error) reject(error instanceof Error ? error : new Error(String(error)));
+          else resolve(user);
+        },
+      ) as (req: Request, res: unknown, next: (error?: unknown) => void) => void;
       middleware(req, {}, (error) => (error ? reject(error) : resolve(false)));
     });
 
   return async (req) => {
-    const required = (req as Request & { openapi?: { schema?: Record<string, unknown> } }).openapi?.schema?.[
-      'x-pulsewright-role'
-    ] as RoleRequirement | undefined;
-    if (!required) throw new AuthError(403, 'This operation has no role requirement; refusing by default.');
-    if (!req.headers.authorization) throw new AuthError(401, 'Sign in first: send Authorization: Bearer <token>.');
+    const required = (req as Request & { openapi?: { schema?: Record<string, unknown> } }).openapi
+      ?.schema?.['x-pulsewright-role'] as RoleRequirement | undefined;
+    if (!required)
+      throw new AuthError(403, 'This operation has no role requirement; refusing by default.');
+    if (!req.headers.authorization)
+      throw new AuthError(401, 'Sign in first: send Authorization: Bearer <token>.');
     const principal = await authenticate(req);
-    if (!principal) throw new AuthError(401, 'The bearer token is unknown, expired or revoked; sign in again or use a current API key.');
+    if (!principal)
+      throw new AuthError(
+        401,
+        'The bearer token is unknown, expired or revoked; sign in again or use a current API key.',
+      );
     principals.set(req, principal);
     if (required !== 'public' && !roleAtLeast(principal.role, required as Role)) {
       const who = principal.authMethod === 'api-key' ? 'this API key acts' : 'you are signed in';
-      throw new AuthError(403, `This needs the ${required} role or higher; ${who} as ${principal.role}.`);
+      throw new AuthError(
+        403,
+        `This needs the ${required} role or higher; ${who} as ${principal.role}.`,
+      );
     }
     return true;
   };

@@ -30,7 +30,10 @@ export async function openDatabase(databaseUrl: string): Promise<Sequelize> {
     return sequelize;
   }
   const target = databaseUrl.slice('sqlite:'.length);
-  const storage = target === ':memory:' || target === '' ? ':memory:' : path.resolve(target.replace(/^\/\/(?=\/)/, ''));
+  const storage =
+    target === ':memory:' || target === ''
+      ? ':memory:'
+      : path.resolve(target.replace(/^\/\/(?=\/)/, ''));
   if (storage !== ':memory:') mkdirSync(path.dirname(storage), { recursive: true });
   const sequelize = new Sequelize({
     dialect: 'sqlite',
@@ -104,7 +107,9 @@ export function writeQueueOf(sequelize: Sequelize): WriteQueue | undefined {
 function serialiseWrites(sequelize: Sequelize): void {
   const queue = new WriteQueue();
   (sequelize as Sequelize & { pulsewrightWriteQueue?: WriteQueue }).pulsewrightWriteQueue = queue;
-  const transaction = sequelize.transaction.bind(sequelize) as (...args: unknown[]) => Promise<unknown>;
+  const transaction = sequelize.transaction.bind(sequelize) as (
+    ...args: unknown[]
+  ) => Promise<unknown>;
   const query = sequelize.query.bind(sequelize) as (...args: unknown[]) => Promise<unknown>;
   const patched = sequelize as unknown as {
     transaction: (...args: unknown[]) => Promise<unknown>;

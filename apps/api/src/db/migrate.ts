@@ -18,7 +18,10 @@ export const MIGRATIONS = [
  * an earlier release that way). Returns true when the database was new (no migration had run),
  * which is when the demo scenario is seeded.
  */
-export async function migrate(sequelize: Sequelize, upTo?: string): Promise<{ fresh: boolean; applied: string[] }> {
+export async function migrate(
+  sequelize: Sequelize,
+  upTo?: string,
+): Promise<{ fresh: boolean; applied: string[] }> {
   const umzug = new Umzug({
     migrations: MIGRATIONS.map(({ name, up, down }) => ({
       name,

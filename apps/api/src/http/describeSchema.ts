@@ -31,7 +31,11 @@ export function schemaAt(
   return keepChoices ? resolveRef(document, raw) : schema;
 }
 
-function flatten(document: OpenApiDocument, input: JsonSchema | undefined, value: unknown): JsonSchema | undefined {
+function flatten(
+  document: OpenApiDocument,
+  input: JsonSchema | undefined,
+  value: unknown,
+): JsonSchema | undefined {
   let schema = resolveRef(document, input);
   if (!schema) return undefined;
   if (Array.isArray(schema.allOf)) {
@@ -41,17 +45,23 @@ function flatten(document: OpenApiDocument, input: JsonSchema | undefined, value
       const flat = flatten(document, part, value);
       if (!flat) continue;
       Object.assign(merged.properties as object, flat.properties ?? {});
-      for (const key of Object.keys(flat)) if (key !== 'properties' && !(key in merged)) merged[key] = flat[key];
+      for (const key of Object.keys(flat))
+        if (key !== 'properties' && !(key in merged)) merged[key] = flat[key];
     }
     schema = merged;
   }
   const choices = (schema.oneOf ?? schema.anyOf) as JsonSchema[] | undefined;
   if (Array.isArray(choices)) {
-    const branches = choices.map((choice) => resolveRef(document, choice)).filter((b): b is JsonSchema => !!b);
+    const branches = choices
+      .map((choice) => resolveRef(document, choice))
+      .filter((b): b is JsonSchema => !!b);
     const tag = (schema.discriminator as { propertyName?: string } | undefined)?.propertyName;
     const given = tag ? (value as Record<string, unknown> | undefined)?.[tag] : undefined;
     const picked =
-      (tag && branches.find((b) => (b.properties as Record<string, JsonSchema> | undefined)?.[tag]?.const === given)) ||
+      (tag &&
+        branches.find(
+          (b) => (b.properties as Record<string, JsonSchema> | undefined)?.[tag]?.const === given,
+        )) ||
       branches.find((b) => b.type !== 'null');
     if (picked) return flatten(document, picked, value);
   }
@@ -59,18 +69,28 @@ function flatten(document: OpenApiDocument, input: JsonSchema | undefined, value
 }
 
 /** The allowed values of a schema in words, e.g. `a number > 0 and ≤ 4`. */
-export function describeAllowed(document: OpenApiDocument, schema: JsonSchema | undefined): string | undefined {
+export function describeAllowed(
+  document: OpenApiDocument,
+  schema: JsonSchema | undefined,
+): string | undefined {
   if (!schema) return undefined;
   if (schema.const !== undefined) return JSON.stringify(schema.const);
-  if (Array.isArray(schema.enum)) return `one of ${(schema.enum as unknown[]).map((v) => JSON.stringify(v)).join(', ')}`;
+  if (Array.isArray(schema.enum))
+    return `one of ${(schema.enum as unknown[]).map((v) => JSON.stringify(v)).join(', ')}`;
   if (Array.isArray(schema.oneOf) && schema.discriminator) {
     const tag = (schema.discriminator as { propertyName: string }).propertyName;
     const values = (schema.oneOf as JsonSchema[])
-      .map((b) => (resolveRef(document, b)?.properties as Record<string, JsonSchema> | undefined)?.[tag]?.const)
+      .map(
+        (b) =>
+          (resolveRef(document, b)?.properties as Record<string, JsonSchema> | undefined)?.[tag]
+            ?.const,
+      )
       .filter((v) => v !== undefined);
     return `an object whose ${tag} is one of ${values.map((v) => JSON.stringify(v)).join(', ')}`;
   }
-  const type = Array.isArray(schema.type) ? (schema.type as string[]).filter((t) => t !== 'null')[0] : schema.type;
+  const type = Array.isArray(schema.type)
+    ? (schema.type as string[]).filter((t) => t !== 'null')[0]
+    : schema.type;
   if (type === 'integer' || type === 'number') {
     const bounds: string[] = [];
     if (typeof schema.exclusiveMinimum === 'number') bounds.push(`> ${schema.exclusiveMinimum}`);
@@ -93,7 +113,8 @@ export function describeAllowed(document: OpenApiDocument, schema: JsonSchema | 
   if (type === 'array') {
     const parts = ['a list'];
     if (typeof schema.minItems === 'number') parts.push(`of at least ${schema.minItems} items`);
-    if (typeof schema.maxItems === 'number') parts.push(`${parts.length > 1 ? 'and' : 'of'} at most ${schema.maxItems} items`);
+    if (typeof schema.maxItems === 'number')
+      parts.push(`${parts.length > 1 ? 'and' : 'of'} at most ${schema.maxItems} items`);
     return parts.join(' ');
   }
   if (type === 'boolean') return 'true or false';
@@ -107,7 +128,8 @@ export function describeAllowed(document: OpenApiDocument, schema: JsonSchema | 
 /** The value as the errors of the library describe it (same words as ParameterRangeError). */
 export function describeValue(value: unknown): string {
   if (typeof value === 'number') return String(value);
-  if (typeof value === 'string') return JSON.stringify(value.length > 60 ? `${value.slice(0, 57)}...` : value);
+  if (typeof value === 'string')
+    return JSON.stringify(value.length > 60 ? `${value.slice(0, 57)}...` : value);
   if (Array.isArray(value)) return `an array of length ${value.length}`;
   if (value === null) return 'null';
   if (value === undefined) return 'nothing';

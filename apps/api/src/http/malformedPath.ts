@@ -11,9 +11,10 @@ export const refuseMalformedPath: RequestHandler = (req, _res, next) => {
     decodeURIComponent(req.path);
   } catch {
     next(
-      badRequest('The request path is not valid percent-encoding: each % must be followed by two hexadecimal digits of UTF-8.', [
-        { path: 'path', message: 'path holds a malformed percent-escape' },
-      ]),
+      badRequest(
+        'The request path is not valid percent-encoding: each % must be followed by two hexadecimal digits of UTF-8.',
+        [{ path: 'path', message: 'path holds a malformed percent-escape' }],
+      ),
     );
     return;
   }

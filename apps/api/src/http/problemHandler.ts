@@ -76,13 +76,33 @@ interface Problem {
 }
 
 function toProblem(document: OpenApiDocument, err: unknown, req: Request): Problem {
-  if (err instanceof HttpError) return { status: err.status, detail: err.detail, errors: err.errors, ...(err.kind ? { kind: err.kind } : {}) };
+  if (err instanceof HttpError)
+    return {
+      status: err.status,
+      detail: err.detail,
+      errors: err.errors,
+      ...(err.kind ? { kind: err.kind } : {}),
+    };
   if (isParameterError(err)) {
-    return { status: 400, detail: err.message, errors: [{ path: err.field, message: err.message }] };
+    return {
+      status: 400,
+      detail: err.message,
+      errors: [{ path: err.field, message: err.message }],
+    };
   }
-  const bodyParser = err as { type?: string; status?: number; charset?: string; encoding?: string; message?: string };
+  const bodyParser = err as {
+    type?: string;
+    status?: number;
+    charset?: string;
+    encoding?: string;
+    message?: string;
+  };
   if (bodyParser?.type === 'entity.parse.failed') {
-    return { status: 400, detail: 'The request body is not valid JSON.', errors: [{ path: 'body', message: 'The request body is not valid JSON.' }] };
+    return {
+      status: 400,
+      detail: 'The request body is not valid JSON.',
+      errors: [{ path: 'body', message: 'The request body is not valid JSON.' }],
+    };
   }
   if (bodyParser?.type === 'entity.too.large') {
     return { status: 413, detail: 'The request body is larger than 1 MB.', errors: [] };
@@ -94,38 +114,72 @@ function toProblem(document: OpenApiDocument, err: unknown, req: Request): Probl
   if (isValidatorError(err)) {
     if (err.status === 400) {
       const errors = (err.errors ?? []).map((item) => validationItem(document, req, item));
-      const detail = errors.length === 1 ? (errors[0] as ProblemItem).message : `${errors.length} fields are not valid: ${errors.map((e) => e.message).join('; ')}`;
+      const detail =
+        errors.length === 1
+          ? (errors[0] as ProblemItem).message
+          : `${errors.length} fields are not valid: ${errors.map((e) => e.message).join('; ')}`;
       return { status: 400, detail, errors };
     }
     if (err.status === 413) {
-      return { status: 413, detail: 'The upload is larger than allowed (5 MB).', errors: [{ path: 'file', message: 'file must be at most 5 MB' }] };
+      return {
+        status: 413,
+        detail: 'The upload is larger than allowed (5 MB).',
+        errors: [{ path: 'file', message: 'file must be at most 5 MB' }],
+      };
     }
-    if (err.status >= 500 && !(err.errors ?? []).every((item) => (item.path ?? '').startsWith('/response'))) {
+    if (
+      err.status >= 500 &&
+      !(err.errors ?? []).every((item) => (item.path ?? '').startsWith('/response'))
+    ) {
       // A 500 the validator raised while reading the request (not checking our answer) is the
       // request's fault: name what it reported.
-      const errors = (err.errors ?? []).map((item) => ({ path: requestField(item.path), message: sentence(item.message ?? err.message) }));
-      return { status: 400, detail: `The request could not be read: ${sentence(err.message)}`, errors: errors.length ? errors : [{ path: 'body', message: sentence(err.message) }] };
+      const errors = (err.errors ?? []).map((item) => ({
+        path: requestField(item.path),
+        message: sentence(item.message ?? err.message),
+      }));
+      return {
+        status: 400,
+        detail: `The request could not be read: ${sentence(err.message)}`,
+        errors: errors.length ? errors : [{ path: 'body', message: sentence(err.message) }],
+      };
     }
     if (err.status >= 500) {
       return {
         status: 500,
         detail: 'The service produced an answer that breaks its own contract; this is a bug.',
-        errors: (err.errors ?? []).map((item) => ({ path: item.path ?? '', message: item.message ?? '' })),
+        errors: (err.errors ?? []).map((item) => ({
+          path: item.path ?? '',
+          message: item.message ?? '',
+        })),
       };
     }
     if (err.status === 401 && /authorization header/i.test(err.message)) {
-      return { status: 401, detail: 'Sign in first: send Authorization: Bearer <session token or API key>.', errors: [] };
+      return {
+        status: 401,
+        detail: 'Sign in first: send Authorization: Bearer <session token or API key>.',
+        errors: [],
+      };
     }
     return { status: err.status, detail: sentence(err.message), errors: [] };
   }
   if (err instanceof Error && err.name === 'SequelizeUniqueConstraintError') {
-    return { status: 409, detail: 'That conflicts with data saved meanwhile; reload and try again.', errors: [] };
+    return {
+      status: 409,
+      detail: 'That conflicts with data saved meanwhile; reload and try again.',
+      errors: [],
+    };
   }
-  return { status: 500, detail: 'Something went wrong inside the service; it has been logged.', errors: [] };
+  return {
+    status: 500,
+    detail: 'Something went wrong inside the service; it has been logged.',
+    errors: [],
+  };
 }
 
 /** body-parser's own errors (http-errors with a `type` such as `charset.unsupported`). */
-function isBodyParserError(err: unknown): err is { type: string; status: number; message: string; charset?: string; encoding?: string } {
+function isBodyParserError(
+  err: unknown,
+): err is { type: string; status: number; message: string; charset?: string; encoding?: string } {
   const e = err as { type?: unknown; status?: unknown } | null;
   return (
     err instanceof Error &&
@@ -137,7 +191,13 @@ function isBodyParserError(err: unknown): err is { type: string; status: number;
   );
 }
 
-function bodyParserProblem(err: { type: string; status: number; message: string; charset?: string; encoding?: string }): Problem {
+function bodyParserProblem(err: {
+  type: string;
+  status: number;
+  message: string;
+  charset?: string;
+  encoding?: string;
+}): Problem {
   if (err.type === 'charset.unsupported') {
     const detail = `The request body's charset ${JSON.stringify(err.charset ?? '')} is not supported; send JSON as UTF-8 (Content-Type: application/json or application/json; charset=utf-8).`;
     return { status: 415, detail, errors: [{ path: 'body', message: detail }] };
@@ -164,7 +224,11 @@ function uploadProblem(err: ValidatorError): Problem {
   const reason = sentence(err.message);
   const status = err.status === 413 ? 413 : 400;
   if (status === 413) {
-    return { status, detail: 'The upload is larger than allowed (5 MB, one file).', errors: [{ path: 'file', message: 'file must be one file of at most 5 MB' }] };
+    return {
+      status,
+      detail: 'The upload is larger than allowed (5 MB, one file).',
+      errors: [{ path: 'file', message: 'file must be one file of at most 5 MB' }],
+    };
   }
   const fieldProblem = /field/i.test(err.message) && !/unexpected field/i.test(err.message);
   const path = fieldProblem ? 'body' : 'file';
@@ -178,7 +242,12 @@ function uploadProblem(err: ValidatorError): Problem {
 /** `/body/x/y` → `x.y`; `/query/limit` → `limit`; anything else → `body`. */
 function requestField(path: string | undefined): string {
   const parts = (path ?? '').split('/').filter(Boolean);
-  if (parts[0] === 'body' || parts[0] === 'query' || parts[0] === 'params' || parts[0] === 'headers') {
+  if (
+    parts[0] === 'body' ||
+    parts[0] === 'query' ||
+    parts[0] === 'params' ||
+    parts[0] === 'headers'
+  ) {
     return parts.slice(1).join('.') || parts[0];
   }
   return 'body';
@@ -195,10 +264,12 @@ const STORAGE_PROBLEMS: Record<string, string> = {
   SQLITE_FULL:
     'The database disk is full; nothing was saved. Free space on the storage that holds the database, then try again.',
   SQLITE_BUSY: 'The database is busy with other writes; nothing was saved. Try again in a moment.',
-  SQLITE_LOCKED: 'The database is busy with other writes; nothing was saved. Try again in a moment.',
+  SQLITE_LOCKED:
+    'The database is busy with other writes; nothing was saved. Try again in a moment.',
   // PostgreSQL SQLSTATEs: read_only_sql_transaction, disk_full, insufficient_resources.
   '25006': 'The database is read-only; nothing was saved. Try again once it accepts writes.',
-  '53100': 'The database disk is full; nothing was saved. Free space on the database server, then try again.',
+  '53100':
+    'The database disk is full; nothing was saved. Free space on the database server, then try again.',
   '53000': 'The database has run out of resources; nothing was saved. Try again in a moment.',
 };
 
@@ -208,9 +279,16 @@ function driverCode(err: unknown): string | undefined {
   let current: unknown = err;
   while (current && typeof current === 'object' && !seen.has(current)) {
     seen.add(current);
-    const e = current as { code?: unknown; message?: unknown; parent?: unknown; original?: unknown; cause?: unknown };
+    const e = current as {
+      code?: unknown;
+      message?: unknown;
+      parent?: unknown;
+      original?: unknown;
+      cause?: unknown;
+    };
     if (typeof e.code === 'string' && e.code in STORAGE_PROBLEMS) return e.code;
-    const named = typeof e.message === 'string' ? /\b(SQLITE_[A-Z]+)\b/.exec(e.message)?.[1] : undefined;
+    const named =
+      typeof e.message === 'string' ? /\b(SQLITE_[A-Z]+)\b/.exec(e.message)?.[1] : undefined;
     if (named && named in STORAGE_PROBLEMS) return named;
     current = e.parent ?? e.original ?? e.cause;
   }
@@ -240,8 +318,11 @@ function validationItem(document: OpenApiDocument, req: Request, item: Validator
   const code = (item.errorCode ?? '').replace('.openapi.validation', '');
   if (code === 'discriminator') {
     const union = locate(document, req, location, segments, true).schema;
-    const tag = (union?.discriminator as { propertyName?: string } | undefined)?.propertyName ?? 'method';
-    const mapping = Object.keys(((union?.discriminator as { mapping?: object } | undefined)?.mapping ?? {}) as object);
+    const tag =
+      (union?.discriminator as { propertyName?: string } | undefined)?.propertyName ?? 'method';
+    const mapping = Object.keys(
+      ((union?.discriminator as { mapping?: object } | undefined)?.mapping ?? {}) as object,
+    );
     const field = [...segments, tag].join('.');
     const given = locate(document, req, location, [...segments, tag]).value;
     const message = `${field} must be one of ${mapping.map((v) => JSON.stringify(v)).join(', ') || 'the documented values'}; got ${describeValue(given)}`;
@@ -275,22 +356,29 @@ function locate(
   const operation = operationOf(document, req);
   if (!operation) return { schema: undefined, value: undefined };
   if (location === 'body') {
-    const content = (operation.requestBody as { content?: Record<string, { schema?: JsonSchema }> } | undefined)?.content;
+    const content = (
+      operation.requestBody as { content?: Record<string, { schema?: JsonSchema }> } | undefined
+    )?.content;
     const root = content?.['application/json']?.schema ?? content?.['multipart/form-data']?.schema;
     let value: unknown = req.body;
-    for (const segment of segments) value = (value as Record<string, unknown> | undefined)?.[segment];
+    for (const segment of segments)
+      value = (value as Record<string, unknown> | undefined)?.[segment];
     return { schema: schemaAt(document, root, segments, req.body, { keepChoices }), value };
   }
   const name = segments[0];
   const where = location === 'params' ? 'path' : location;
   const pathItem = document.paths[openApiRouteOf(req) ?? ''] ?? {};
   const parameters = [
-    ...(((pathItem.parameters as JsonSchema[] | undefined) ?? [])),
-    ...(((operation.parameters as JsonSchema[] | undefined) ?? [])),
+    ...((pathItem.parameters as JsonSchema[] | undefined) ?? []),
+    ...((operation.parameters as JsonSchema[] | undefined) ?? []),
   ].map((p) => (p.$ref ? (resolveParameter(document, p) ?? p) : p));
   const parameter = parameters.find((p) => p.name === name && p.in === where);
-  const source = location === 'params' ? req.params : location === 'query' ? req.query : req.headers;
-  return { schema: schemaAt(document, parameter?.schema as JsonSchema | undefined, [], undefined), value: (source as Record<string, unknown>)[name ?? ''] };
+  const source =
+    location === 'params' ? req.params : location === 'query' ? req.query : req.headers;
+  return {
+    schema: schemaAt(document, parameter?.schema as JsonSchema | undefined, [], undefined),
+    value: (source as Record<string, unknown>)[name ?? ''],
+  };
 }
 
 function resolveParameter(document: OpenApiDocument, ref: JsonSchema): JsonSchema | undefined {

@@ -16,7 +16,9 @@ export function intQuery(req: Request, name: string, fallback: number): number {
 
 /** As {@link intQuery}, but undefined when the parameter is absent (`example` shows in the error). */
 export function optionalIntQuery(req: Request, name: string, example: number): number | undefined {
-  const search = req.originalUrl.includes('?') ? req.originalUrl.slice(req.originalUrl.indexOf('?') + 1) : '';
+  const search = req.originalUrl.includes('?')
+    ? req.originalUrl.slice(req.originalUrl.indexOf('?') + 1)
+    : '';
   const values = new URLSearchParams(search).getAll(name);
   if (values.length === 0) return undefined;
   const text = values[0] as string;
@@ -34,11 +36,14 @@ const DECIMAL_NUMBER = /^(?:[0-9]{1,30}(?:\.[0-9]{0,30})?|\.[0-9]{1,30})(?:[eE][
  * notation with an optional exponent only, finite, else a 400 naming the parameter.
  */
 export function numberQuery(req: Request, name: string): number | undefined {
-  const search = req.originalUrl.includes('?') ? req.originalUrl.slice(req.originalUrl.indexOf('?') + 1) : '';
+  const search = req.originalUrl.includes('?')
+    ? req.originalUrl.slice(req.originalUrl.indexOf('?') + 1)
+    : '';
   const values = new URLSearchParams(search).getAll(name);
   if (values.length === 0) return undefined;
   const text = values[0] as string;
-  if (values.length === 1 && DECIMAL_NUMBER.test(text) && Number.isFinite(Number(text))) return Number(text);
+  if (values.length === 1 && DECIMAL_NUMBER.test(text) && Number.isFinite(Number(text)))
+    return Number(text);
   const given = values.length === 1 ? JSON.stringify(text.slice(0, 40)) : `${values.length} values`;
   const message = `${name} must be one finite number in decimal notation, e.g. 400; got ${given}`;
   throw badRequest(message, [{ path: name, message }]);

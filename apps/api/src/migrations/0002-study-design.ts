@@ -32,8 +32,10 @@ export interface PreviousRevision {
 export function designOfPreviousRevision(row: PreviousRevision): Json {
   const { vdc, mf, frequencyRatio, output: _output, ...modulation } = row.parameters;
   const oldLoad = row.load;
-  const fundamentalFrequency = typeof oldLoad?.frequency === 'number' ? oldLoad.frequency : DEFAULT_FUNDAMENTAL_FREQUENCY;
-  const ratio = typeof mf === 'number' ? mf : typeof frequencyRatio === 'number' ? frequencyRatio : undefined;
+  const fundamentalFrequency =
+    typeof oldLoad?.frequency === 'number' ? oldLoad.frequency : DEFAULT_FUNDAMENTAL_FREQUENCY;
+  const ratio =
+    typeof mf === 'number' ? mf : typeof frequencyRatio === 'number' ? frequencyRatio : undefined;
   const design: Json = {
     vdc,
     fundamentalFrequency,
@@ -68,13 +70,20 @@ function json(value: unknown): Json | null {
 export async function up({ context: q }: { context: QueryInterface }): Promise<void> {
   const columns = await q.describeTable('study_revisions');
   // Idempotent: a run stopped after adding the column (no migration record yet) can run again.
-  if (!('design' in columns)) await q.addColumn('study_revisions', 'design', { type: DataTypes.JSON, allowNull: true });
+  if (!('design' in columns))
+    await q.addColumn('study_revisions', 'design', { type: DataTypes.JSON, allowNull: true });
   const sequelize = q.sequelize;
   await sequelize.transaction(async (transaction) => {
-    const rows = await sequelize.query<{ id: string; method: string; parameters: unknown; load: unknown; filter: unknown }>(
-      'SELECT "id", "method", "parameters", "load", "filter" FROM "study_revisions"',
-      { type: QueryTypes.SELECT, transaction },
-    );
+    const rows = await sequelize.query<{
+      id: string;
+      method: string;
+      parameters: unknown;
+      load: unknown;
+      filter: unknown;
+    }>('SELECT "id", "method", "parameters", "load", "filter" FROM "study_revisions"', {
+      type: QueryTypes.SELECT,
+      transaction,
+    });
     for (const row of rows) {
       const design = designOfPreviousRevision({
         method: row.method,

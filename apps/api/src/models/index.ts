@@ -9,14 +9,22 @@ type Timestamps = { createdAt: Date; updatedAt: Date };
 type Row<A extends object, K extends keyof A> = Model<A, Optional<A, K>> & A;
 type Generated = 'id' | 'createdAt' | 'updatedAt';
 
-export interface TeamAttributes extends Timestamps { id: string; name: string }
+export interface TeamAttributes extends Timestamps {
+  id: string;
+  name: string;
+}
 export interface UserAttributes extends Timestamps {
   id: string;
   email: string;
   name: string;
   passwordHash: string | null;
 }
-export interface MembershipAttributes extends Timestamps { id: string; teamId: string; userId: string; role: Role }
+export interface MembershipAttributes extends Timestamps {
+  id: string;
+  teamId: string;
+  userId: string;
+  role: Role;
+}
 export interface SessionAttributes extends Timestamps {
   id: string;
   userId: string;
@@ -71,7 +79,11 @@ export interface StudyRevisionAttributes extends Timestamps {
   authorId: string | null;
   restoredFrom: number | null;
 }
-export interface CaptureSeries { time: number[]; voltage: number[]; current?: number[] }
+export interface CaptureSeries {
+  time: number[];
+  voltage: number[];
+  current?: number[];
+}
 export interface CaptureAttributes extends Timestamps {
   id: string;
   teamId: string;
@@ -145,14 +157,29 @@ export type TeamRow = Row<TeamAttributes, Generated>;
 export type UserRow = Row<UserAttributes, Generated | 'passwordHash'>;
 export type MembershipRow = Row<MembershipAttributes, Generated>;
 export type SessionRow = Row<SessionAttributes, Generated | 'lastUsedAt' | 'revokedAt'>;
-export type ApiKeyRow = Row<ApiKeyAttributes, Generated | 'lastUsedAt' | 'revokedAt' | 'expiresAt' | 'createdWithKeyId'>;
+export type ApiKeyRow = Row<
+  ApiKeyAttributes,
+  Generated | 'lastUsedAt' | 'revokedAt' | 'expiresAt' | 'createdWithKeyId'
+>;
 export type ProjectRow = Row<ProjectAttributes, Generated | 'description' | 'createdById'>;
 export type StudyRow = Row<StudyAttributes, Generated>;
-export type StudyRevisionRow = Row<StudyRevisionAttributes, Generated | 'load' | 'filter' | 'note' | 'authorId' | 'restoredFrom'>;
+export type StudyRevisionRow = Row<
+  StudyRevisionAttributes,
+  Generated | 'load' | 'filter' | 'note' | 'authorId' | 'restoredFrom'
+>;
 export type CaptureRow = Row<CaptureAttributes, Generated | 'projectId' | 'uploadedById'>;
-export type JobRow = Row<JobAttributes, Generated | 'progress' | 'result' | 'error' | 'startedAt' | 'finishedAt' | 'userId'>;
-export type AuditEventRow = Row<AuditEventAttributes, Generated | 'teamId' | 'actorId' | 'actorEmail' | 'subjectId' | 'details'>;
-export type InvitationRow = Row<InvitationAttributes, Generated | 'acceptedAt' | 'withdrawnAt' | 'invitedById'>;
+export type JobRow = Row<
+  JobAttributes,
+  Generated | 'progress' | 'result' | 'error' | 'startedAt' | 'finishedAt' | 'userId'
+>;
+export type AuditEventRow = Row<
+  AuditEventAttributes,
+  Generated | 'teamId' | 'actorId' | 'actorEmail' | 'subjectId' | 'details'
+>;
+export type InvitationRow = Row<
+  InvitationAttributes,
+  Generated | 'acceptedAt' | 'withdrawnAt' | 'invitedById'
+>;
 export type PasswordResetRow = Row<PasswordResetAttributes, Generated | 'usedAt'>;
 export type OutboxRow = Row<OutboxAttributes, Generated | 'error' | 'teamId'>;
 
@@ -179,7 +206,11 @@ const id = { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: t
 const uuid = (allowNull = false) => ({ type: DataTypes.UUID, allowNull });
 const text = (allowNull = false) => ({ type: DataTypes.STRING(255), allowNull });
 const date = (allowNull = true) => ({ type: DataTypes.DATE, allowNull });
-const role = { type: DataTypes.STRING(16), allowNull: false, validate: { isIn: [['viewer', 'engineer', 'admin']] } };
+const role = {
+  type: DataTypes.STRING(16),
+  allowNull: false,
+  validate: { isIn: [['viewer', 'engineer', 'admin']] },
+};
 
 /**
  * Defines the models on one Sequelize instance (a function, not module-level classes, so
@@ -187,8 +218,11 @@ const role = { type: DataTypes.STRING(16), allowNull: false, validate: { isIn: [
  * created by the migrations in src/migrations/.
  */
 export function defineModels(sequelize: Sequelize): Models {
-  const define = <R extends Model>(name: string, tableName: string, attributes: Record<string, unknown>) =>
-    sequelize.define<R>(name, attributes as never, { tableName, timestamps: true });
+  const define = <R extends Model>(
+    name: string,
+    tableName: string,
+    attributes: Record<string, unknown>,
+  ) => sequelize.define<R>(name, attributes as never, { tableName, timestamps: true });
   const models = defineTables(sequelize, define);
   // Lets the bearer lookup read membership, user and team in one query.
   models.Membership.belongsTo(models.User, { foreignKey: 'userId', as: 'user' });
@@ -198,7 +232,11 @@ export function defineModels(sequelize: Sequelize): Models {
 
 function defineTables(
   sequelize: Sequelize,
-  define: <R extends Model>(name: string, tableName: string, attributes: Record<string, unknown>) => ModelStatic<R>,
+  define: <R extends Model>(
+    name: string,
+    tableName: string,
+    attributes: Record<string, unknown>,
+  ) => ModelStatic<R>,
 ): Models {
   return {
     sequelize,
@@ -209,7 +247,12 @@ function defineTables(
       name: text(),
       passwordHash: text(true),
     }),
-    Membership: define<MembershipRow>('Membership', 'memberships', { id, teamId: uuid(), userId: uuid(), role }),
+    Membership: define<MembershipRow>('Membership', 'memberships', {
+      id,
+      teamId: uuid(),
+      userId: uuid(),
+      role,
+    }),
     Session: define<SessionRow>('Session', 'sessions', {
       id,
       userId: uuid(),

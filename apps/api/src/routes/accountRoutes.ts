@@ -15,14 +15,21 @@ const FIFTEEN_MINUTES = 15 * 60_000;
 const ONE_HOUR = 60 * 60_000;
 
 /** The e-mail address a public account request names, as the key of its per-account bucket. */
-const accountOf = (req: Request): string => `account:${String((req.body as { email?: unknown } | undefined)?.email ?? '').toLowerCase()}`;
+const accountOf = (req: Request): string =>
+  `account:${String((req.body as { email?: unknown } | undefined)?.email ?? '').toLowerCase()}`;
 
 /** Health, sign-in, the caller, API keys, members, invitations, audit log and outbox. */
 export function accountRoutes(
   services: Services,
   options: Pick<
     AppConfig,
-    'loginRateLimit' | 'loginAccountRateLimit' | 'resetRateLimit' | 'resetAccountRateLimit' | 'acceptRateLimit' | 'keyRateLimit' | 'databaseUrl'
+    | 'loginRateLimit'
+    | 'loginAccountRateLimit'
+    | 'resetRateLimit'
+    | 'resetAccountRateLimit'
+    | 'acceptRateLimit'
+    | 'keyRateLimit'
+    | 'databaseUrl'
   > & { version: string },
 ): Router {
   const router = Router();
@@ -33,23 +40,77 @@ export function accountRoutes(
   // account, per account. Buckets of attempts that can succeed count failures only
   // (skipSuccessfulRequests), so people signing in behind one proxy address do not lock each
   // other out, while guesses at one account from many addresses still meet the account's limit.
-  const limiter = (limit: number, windowMs: number, what: string, wait: string, extra: Partial<RateLimitOptions> = {}) =>
-    rateLimit({ windowMs, limit, standardHeaders: 'draft-8', legacyHeaders: false, handler: tooMany(what, wait), ...extra });
+  const limiter = (
+    limit: number,
+    windowMs: number,
+    what: string,
+    wait: string,
+    extra: Partial<RateLimitOptions> = {},
+  ) =>
+    rateLimit({
+      windowMs,
+      limit,
+      standardHeaders: 'draft-8',
+      legacyHeaders: false,
+      handler: tooMany(what, wait),
+      ...extra,
+    });
   const failuresOnly = { skipSuccessfulRequests: true };
-  const signInPerAddress = limiter(options.loginRateLimit, FIFTEEN_MINUTES, 'failed sign-ins from this network address', '15 minutes', failuresOnly);
-  const signInPerAccount = limiter(options.loginAccountRateLimit, FIFTEEN_MINUTES, 'failed sign-ins to this account', '15 minutes', {
-    ...failuresOnly,
-    keyGenerator: accountOf,
-  });
-  const resetPerAddress = limiter(options.resetRateLimit, FIFTEEN_MINUTES, 'password-reset requests from this network address', '15 minutes');
-  const resetPerAccount = limiter(options.resetAccountRateLimit, ONE_HOUR, 'password-reset e-mails to this address', 'an hour', {
-    keyGenerator: accountOf,
-  });
-  const resetConfirmPerAddress = limiter(options.resetRateLimit, FIFTEEN_MINUTES, 'failed password-reset confirmations from this network address', '15 minutes', failuresOnly);
-  const acceptPerAddress = limiter(options.acceptRateLimit, FIFTEEN_MINUTES, 'failed invitation acceptances from this network address', '15 minutes', failuresOnly);
-  const keyLimiter = limiter(options.keyRateLimit, ONE_HOUR, 'API keys made in the last hour', 'a few minutes', {
-    keyGenerator: (req) => principalOf(req).user.id,
-  });
+  const signInPerAddress = limiter(
+    options.loginRateLimit,
+    FIFTEEN_MINUTES,
+    'failed sign-ins from this network address',
+    '15 minutes',
+    failuresOnly,
+  );
+  const signInPerAccount = limiter(
+    options.loginAccountRateLimit,
+    FIFTEEN_MINUTES,
+    'failed sign-ins to this account',
+    '15 minutes',
+    {
+      ...failuresOnly,
+      keyGenerator: accountOf,
+    },
+  );
+  const resetPerAddress = limiter(
+    options.resetRateLimit,
+    FIFTEEN_MINUTES,
+    'password-reset requests from this network address',
+    '15 minutes',
+  );
+  const resetPerAccount = limiter(
+    options.resetAccountRateLimit,
+    ONE_HOUR,
+    'password-reset e-mails to this address',
+    'an hour',
+    {
+      keyGenerator: accountOf,
+    },
+  );
+  const resetConfirmPerAddress = limiter(
+    options.resetRateLimit,
+    FIFTEEN_MINUTES,
+    'failed password-reset confirmations from this network address',
+    '15 minutes',
+    failuresOnly,
+  );
+  const acceptPerAddress = limiter(
+    options.acceptRateLimit,
+    FIFTEEN_MINUTES,
+    'failed invitation acceptances from this network address',
+    '15 minutes',
+    failuresOnly,
+  );
+  const keyLimiter = limiter(
+    options.keyRateLimit,
+    ONE_HOUR,
+    'API keys made in the last hour',
+    'a few minutes',
+    {
+      keyGenerator: (req) => principalOf(req).user.id,
+    },
+  );
 
   router.get('/api/health', async (_req, res) => {
     await services.models.sequelize.authenticate();
@@ -74,7 +135,12 @@ export function accountRoutes(
 
   router.get('/api/v1/me', (req, res) => {
     const p = principalOf(req);
-    res.json({ user: p.user, team: { id: p.teamId, name: p.teamName }, role: p.role, authMethod: p.authMethod });
+    res.json({
+      user: p.user,
+      team: { id: p.teamId, name: p.teamName },
+      role: p.role,
+      authMethod: p.authMethod,
+    });
   });
 
   router.get('/api/v1/api-keys', async (req, res) => {
@@ -114,10 +180,22 @@ export function accountRoutes(
   });
 
   router.get('/api/v1/audit-events', async (req, res) => {
-    res.json(await audit.list(principalOf(req).teamId, intQuery(req, 'limit', 50), intQuery(req, 'offset', 0)));
+    res.json(
+      await audit.list(
+        principalOf(req).teamId,
+        intQuery(req, 'limit', 50),
+        intQuery(req, 'offset', 0),
+      ),
+    );
   });
   router.get('/api/v1/outbox', async (req, res) => {
-    res.json(await mailer.list(principalOf(req).teamId, intQuery(req, 'limit', 50), intQuery(req, 'offset', 0)));
+    res.json(
+      await mailer.list(
+        principalOf(req).teamId,
+        intQuery(req, 'limit', 50),
+        intQuery(req, 'offset', 0),
+      ),
+    );
   });
   return router;
 }

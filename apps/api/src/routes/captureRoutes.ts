@@ -17,16 +17,28 @@ export function captureRoutes(services: Services): Router {
   const { captures } = services;
 
   router.post('/api/v1/captures', async (req, res) => {
-    const files = ((req as unknown as { files?: UploadedFile[] }).files ?? []).filter((f) => f.fieldname === 'file');
+    const files = ((req as unknown as { files?: UploadedFile[] }).files ?? []).filter(
+      (f) => f.fieldname === 'file',
+    );
     const file = files[0];
     if (!file || files.length !== 1) {
-      throw badRequest('Send exactly one file in the multipart field "file".', [{ path: 'file', message: 'file is required (one CSV file)' }]);
+      throw badRequest('Send exactly one file in the multipart field "file".', [
+        { path: 'file', message: 'file is required (one CSV file)' },
+      ]);
     }
-    const fields = { name: req.body?.name as string | undefined, projectId: req.body?.projectId as string | undefined };
+    const fields = {
+      name: req.body?.name as string | undefined,
+      projectId: req.body?.projectId as string | undefined,
+    };
     res.status(201).json(await captures.upload(principalOf(req), file, fields));
   });
   router.get('/api/v1/captures', async (req, res) => {
-    res.json(await captures.list(principalOf(req).teamId, typeof req.query.projectId === 'string' ? req.query.projectId : undefined));
+    res.json(
+      await captures.list(
+        principalOf(req).teamId,
+        typeof req.query.projectId === 'string' ? req.query.projectId : undefined,
+      ),
+    );
   });
   router.get('/api/v1/captures/:id', async (req, res) => {
     res.json(await captures.get(principalOf(req).teamId, req.params.id));
@@ -35,7 +47,9 @@ export function captureRoutes(services: Services): Router {
     const row = await captures.find(principalOf(req).teamId, req.params.id);
     // Uploads with formula cells are refused, but a file stored before that check is escaped
     // (cells beginning with = + - @ get a leading ') rather than sent as it was.
-    const original = Buffer.isBuffer(row.original) ? row.original : Buffer.from(String(row.original));
+    const original = Buffer.isBuffer(row.original)
+      ? row.original
+      : Buffer.from(String(row.original));
     const text = original.toString('utf8');
     const safe = escapeFormulaCells(text);
     res
@@ -45,13 +59,30 @@ export function captureRoutes(services: Services): Router {
       .send(safe === text ? original : Buffer.from(safe, 'utf8'));
   });
   router.post('/api/v1/captures/:id/spectrum', async (req, res) => {
-    const { window = 'hann', fundamentalFrequency, maxOrder = 50, column = 'voltage' } = req.body ?? {};
-    res.json(await captures.analyse(principalOf(req).teamId, req.params.id, { window, fundamentalFrequency, maxOrder, column }));
+    const {
+      window = 'hann',
+      fundamentalFrequency,
+      maxOrder = 50,
+      column = 'voltage',
+    } = req.body ?? {};
+    res.json(
+      await captures.analyse(principalOf(req).teamId, req.params.id, {
+        window,
+        fundamentalFrequency,
+        maxOrder,
+        column,
+      }),
+    );
   });
   router.post('/api/v1/captures/:id/comparison', async (req, res) => {
     const { studyId, window = 'hann', fundamentalFrequency, maxOrder = 50 } = req.body;
     res.json(
-      await captures.compare(principalOf(req).teamId, req.params.id, studyId, { window, fundamentalFrequency, maxOrder, column: 'voltage' }),
+      await captures.compare(principalOf(req).teamId, req.params.id, studyId, {
+        window,
+        fundamentalFrequency,
+        maxOrder,
+        column: 'voltage',
+      }),
     );
   });
   return router;

@@ -14,7 +14,9 @@ export function computeRoutes(services: Services): Router {
   const { compute, jobs } = services;
 
   router.post('/api/v1/spectra', async (req, res) => {
-    res.json(await compute.spectrum(req.body.modulation, req.body.maxOrder ?? 100, req.body.output));
+    res.json(
+      await compute.spectrum(req.body.modulation, req.body.maxOrder ?? 100, req.body.output),
+    );
   });
   router.post('/api/v1/waveforms', async (req, res) => {
     res.json(await compute.waveform(req.body.modulation, req.body.output));
@@ -36,7 +38,9 @@ export function computeRoutes(services: Services): Router {
   });
   router.post('/api/v1/timer-tables', async (req, res) => {
     const { prefix, ...options } = req.body;
-    const format = (typeof req.query.format === 'string' ? req.query.format : 'json') as TimerFormat;
+    const format = (
+      typeof req.query.format === 'string' ? req.query.format : 'json'
+    ) as TimerFormat;
     const file = await compute.timerTable(options, format, prefix);
     res
       .status(200)
@@ -49,7 +53,13 @@ export function computeRoutes(services: Services): Router {
   });
 
   router.get('/api/v1/jobs', async (req, res) => {
-    res.json(await jobs.list(principalOf(req).teamId, intQuery(req, 'limit', 50), intQuery(req, 'offset', 0)));
+    res.json(
+      await jobs.list(
+        principalOf(req).teamId,
+        intQuery(req, 'limit', 50),
+        intQuery(req, 'offset', 0),
+      ),
+    );
   });
   router.post('/api/v1/jobs/ma-sweeps', async (req, res) => {
     const input = { ...req.body, maxOrder: req.body.maxOrder ?? 100 };

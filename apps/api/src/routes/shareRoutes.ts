@@ -14,11 +14,16 @@ export function shareRoutes(services: Services, options: { shareRateLimit: numbe
     legacyHeaders: false,
     keyGenerator: (req) => principalOf(req).user.id,
     handler: () => {
-      throw new HttpError(429, 'Too many reports e-mailed in the last hour; wait a while and try again.');
+      throw new HttpError(
+        429,
+        'Too many reports e-mailed in the last hour; wait a while and try again.',
+      );
     },
   });
   router.post('/api/v1/studies/:id/share', limiter, async (req, res) => {
-    res.status(202).json(await services.shares.share(principalOf(req), String(req.params.id), req.body));
+    res
+      .status(202)
+      .json(await services.shares.share(principalOf(req), String(req.params.id), req.body));
   });
   return router;
 }

@@ -7,7 +7,8 @@ import type { Services } from '../services/index.js';
 export function studyRoutes(services: Services): Router {
   const router = Router();
   const { projects, studies, compute } = services;
-  const text = (value: unknown): string | undefined => (typeof value === 'string' ? value : undefined);
+  const text = (value: unknown): string | undefined =>
+    typeof value === 'string' ? value : undefined;
 
   router.get('/api/v1/projects', async (req, res) => {
     res.json(await projects.list(principalOf(req).teamId, text(req.query.q)));
@@ -46,13 +47,22 @@ export function studyRoutes(services: Services): Router {
     res.json(await studies.update(principalOf(req), req.params.id, baseRevision, content));
   });
   router.post('/api/v1/studies/:id/duplicate', async (req, res) => {
-    res.status(201).json(await studies.duplicate(principalOf(req), req.params.id, text(req.body?.name)));
+    res
+      .status(201)
+      .json(await studies.duplicate(principalOf(req), req.params.id, text(req.body?.name)));
   });
   router.get('/api/v1/studies/:id/revisions', async (req, res) => {
     res.json(await studies.revisions(principalOf(req).teamId, req.params.id));
   });
   router.post('/api/v1/studies/:id/revisions/:revision/restore', async (req, res) => {
-    res.json(await studies.restore(principalOf(req), req.params.id, Number(req.params.revision), req.body.baseRevision));
+    res.json(
+      await studies.restore(
+        principalOf(req),
+        req.params.id,
+        Number(req.params.revision),
+        req.body.baseRevision,
+      ),
+    );
   });
   router.get('/api/v1/studies/:id/spectrum', async (req, res) => {
     const study = await studies.get(principalOf(req).teamId, req.params.id);

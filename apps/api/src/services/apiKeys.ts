@@ -37,14 +37,19 @@ export class ApiKeyService {
     input: { name: string; role: Role; expiresInDays?: number },
   ): Promise<ApiKeyDto & { key: string }> {
     if (!roleAtLeast(principal.role, input.role)) {
-      throw forbidden(`role ${input.role} is above your own role (${principal.role}); a key may have at most the role of the person who makes it.`);
+      throw forbidden(
+        `role ${input.role} is above your own role (${principal.role}); a key may have at most the role of the person who makes it.`,
+      );
     }
     const { key, prefix } = newApiKey();
     const now = Date.now();
     const requested = input.expiresInDays ? new Date(now + input.expiresInDays * 86400_000) : null;
     const row = await this.models.sequelize.transaction(async (transaction) => {
-      const parent = principal.authMethod === 'api-key' ? await this.parentKey(principal, transaction) : null;
-      const expiresAt = parent ? this.expiryUnder(parent, requested, input.expiresInDays, now) : requested;
+      const parent =
+        principal.authMethod === 'api-key' ? await this.parentKey(principal, transaction) : null;
+      const expiresAt = parent
+        ? this.expiryUnder(parent, requested, input.expiresInDays, now)
+        : requested;
       return this.models.ApiKey.create(
         {
           userId: principal.user.id,
@@ -71,7 +76,11 @@ export class ApiKeyService {
   /** The key the caller authenticated with, re-read inside the transaction that makes its child. */
   private async parentKey(principal: Principal, transaction: Transaction): Promise<ApiKeyRow> {
     const parent = await this.models.ApiKey.findByPk(principal.credentialId, { transaction });
-    if (!parent || parent.revokedAt || (parent.expiresAt && parent.expiresAt.getTime() <= Date.now())) {
+    if (
+      !parent ||
+      parent.revokedAt ||
+      (parent.expiresAt && parent.expiresAt.getTime() <= Date.now())
+    ) {
       throw unauthenticated('The API key this request was made with is revoked or expired.');
     }
     let depth = 1;
@@ -79,7 +88,9 @@ export class ApiKeyService {
       id = (await this.models.ApiKey.findByPk(id, { transaction }))?.createdWithKeyId ?? null;
     }
     if (depth >= MAX_KEY_LINEAGE) {
-      throw forbidden(`This key is already ${depth} keys down from a signed-in session; make new keys from a session instead.`);
+      throw forbidden(
+        `This key is already ${depth} keys down from a signed-in session; make new keys from a session instead.`,
+      );
     }
     return parent;
   }
@@ -89,7 +100,12 @@ export class ApiKeyService {
    * requested whole days reach past it by less than a day (rounding), the requested one when it is
    * earlier; further out is refused naming the field and the most it may be.
    */
-  private expiryUnder(parent: ApiKeyRow, requested: Date | null, days: number | undefined, now: number): Date | null {
+  private expiryUnder(
+    parent: ApiKeyRow,
+    requested: Date | null,
+    days: number | undefined,
+    now: number,
+  ): Date | null {
     if (!parent.expiresAt) return requested;
     if (!requested || requested <= parent.expiresAt) return requested ?? parent.expiresAt;
     const most = Math.ceil((parent.expiresAt.getTime() - now) / 86400_000);
@@ -100,9 +116,14 @@ export class ApiKeyService {
 
   /** Own keys; an admin sees every key of the team. */
   async list(principal: Principal): Promise<ApiKeyDto[]> {
-    const where = principal.role === 'admin' ? { teamId: principal.teamId } : { teamId: principal.teamId, userId: principal.user.id };
+    const where =
+      principal.role === 'admin'
+        ? { teamId: principal.teamId }
+        : { teamId: principal.teamId, userId: principal.user.id };
     const rows = await this.models.ApiKey.findAll({ where, order: [['createdAt', 'DESC']] });
-    const users = await this.models.User.findAll({ where: { id: [...new Set(rows.map((r) => r.userId))] } });
+    const users = await this.models.User.findAll({
+      where: { id: [...new Set(rows.map((r) => r.userId))] },
+    });
     const emails = new Map(users.map((u) => [u.id, u.email]));
     return rows.map((row) => toDto(row, emails.get(row.userId) ?? ''));
   }
@@ -110,10 +131,14 @@ export class ApiKeyService {
   /** Revokes a key and every key made with it, directly or through other keys. */
   async revoke(principal: Principal, id: string): Promise<void> {
     const row = await this.models.ApiKey.findOne({ where: { id, teamId: principal.teamId } });
-    if (!row || (row.userId !== principal.user.id && principal.role !== 'admin')) throw notFound('That API key');
+    if (!row || (row.userId !== principal.user.id && principal.role !== 'admin'))
+      throw notFound('That API key');
     const revoked = await this.models.sequelize.transaction(async (transaction) => {
       const now = new Date();
-      const [own] = await this.models.ApiKey.update({ revokedAt: now }, { where: { id: row.id, revokedAt: null }, transaction });
+      const [own] = await this.models.ApiKey.update(
+        { revokedAt: now },
+        { where: { id: row.id, revokedAt: null }, transaction },
+      );
       const descendants = await this.revokeDescendants([row.id], now, transaction);
       return { own, descendants };
     });
@@ -130,17 +155,27 @@ export class ApiKeyService {
    * Revokes every unrevoked key made (directly or not) with one of `parentIds`; returns their
    * ids. Walks the whole lineage, including already revoked links, so no descendant survives.
    */
-  async revokeDescendants(parentIds: string[], now: Date, transaction: Transaction): Promise<string[]> {
+  async revokeDescendants(
+    parentIds: string[],
+    now: Date,
+    transaction: Transaction,
+  ): Promise<string[]> {
     const revoked: string[] = [];
     const seen = new Set(parentIds);
     let frontier = parentIds;
     while (frontier.length) {
-      const children = await this.models.ApiKey.findAll({ where: { createdWithKeyId: frontier }, transaction });
+      const children = await this.models.ApiKey.findAll({
+        where: { createdWithKeyId: frontier },
+        transaction,
+      });
       const fresh = children.filter((child) => !seen.has(child.id));
       fresh.forEach((child) => seen.add(child.id));
       const live = fresh.filter((child) => !child.revokedAt).map((child) => child.id);
       if (live.length) {
-        await this.models.ApiKey.update({ revokedAt: now }, { where: { id: live, revokedAt: null }, transaction });
+        await this.models.ApiKey.update(
+          { revokedAt: now },
+          { where: { id: live, revokedAt: null }, transaction },
+        );
         revoked.push(...live);
       }
       frontier = fresh.map((child) => child.id);

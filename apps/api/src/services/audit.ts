@@ -18,7 +18,8 @@ export class AuditLog {
   constructor(private readonly models: Models) {}
 
   async record(
-    actor: Principal | { userId: string | null; email: string | null; teamId: string | null } | null,
+    actor:
+      Principal | { userId: string | null; email: string | null; teamId: string | null } | null,
     action: string,
     subjectType: string,
     subjectId: string | null,
@@ -28,9 +29,19 @@ export class AuditLog {
     const who =
       actor && 'user' in actor
         ? { teamId: actor.teamId, actorId: actor.user.id, actorEmail: actor.user.email }
-        : { teamId: actor?.teamId ?? null, actorId: actor?.userId ?? null, actorEmail: actor?.email ?? null };
+        : {
+            teamId: actor?.teamId ?? null,
+            actorId: actor?.userId ?? null,
+            actorEmail: actor?.email ?? null,
+          };
     await this.models.AuditEvent.create(
-      { ...who, action, subjectType, subjectId, details: actor && 'user' in actor ? { ...details, via: actor.authMethod } : details },
+      {
+        ...who,
+        action,
+        subjectType,
+        subjectId,
+        details: actor && 'user' in actor ? { ...details, via: actor.authMethod } : details,
+      },
       { transaction },
     );
   }

@@ -67,13 +67,21 @@ export class AuthService {
     const teamId = await this.firstTeamOf(user.id);
     if (!teamId) throw unauthenticated('This account is not a member of any team.');
     const session = await this.startSession(user.id, teamId);
-    await this.audit.record({ userId: user.id, email: user.email, teamId }, 'auth.login', 'user', user.id);
+    await this.audit.record(
+      { userId: user.id, email: user.email, teamId },
+      'auth.login',
+      'user',
+      user.id,
+    );
     return session;
   }
 
   /** The team a person signs in to: their oldest membership (one team per sign-in for now). */
   async firstTeamOf(userId: string): Promise<string | null> {
-    const membership = await this.models.Membership.findOne({ where: { userId }, order: [['createdAt', 'ASC']] });
+    const membership = await this.models.Membership.findOne({
+      where: { userId },
+      order: [['createdAt', 'ASC']],
+    });
     return membership?.teamId ?? null;
   }
 
@@ -86,7 +94,10 @@ export class AuthService {
 
   async logout(principal: Principal): Promise<void> {
     if (principal.authMethod !== 'session') return;
-    await this.models.Session.update({ revokedAt: new Date() }, { where: { id: principal.credentialId } });
+    await this.models.Session.update(
+      { revokedAt: new Date() },
+      { where: { id: principal.credentialId } },
+    );
     await this.audit.record(principal, 'auth.logout', 'user', principal.user.id);
   }
 
@@ -107,17 +118,39 @@ export class AuthService {
         where: { tokenHash: hashToken(token), revokedAt: null, expiresAt: { [Op.gt]: now } },
       });
       if (!session) return null;
-      const principal = await this.principalFor(session.userId, session.teamId, null, 'session', session.id);
-      if (principal && (!session.lastUsedAt || now.getTime() - session.lastUsedAt.getTime() > LAST_USED_RESOLUTION_MS)) {
+      const principal = await this.principalFor(
+        session.userId,
+        session.teamId,
+        null,
+        'session',
+        session.id,
+      );
+      if (
+        principal &&
+        (!session.lastUsedAt ||
+          now.getTime() - session.lastUsedAt.getTime() > LAST_USED_RESOLUTION_MS)
+      ) {
         await session.update({ lastUsedAt: now });
       }
       return principal;
     }
     if (token.startsWith(API_KEY_PREFIX)) {
-      const key = await this.models.ApiKey.findOne({ where: { keyHash: hashToken(token), revokedAt: null } });
-      if (!key || (key.expiresAt && key.expiresAt <= now) || !(await this.lineageStands(key, now))) return null;
-      const principal = await this.principalFor(key.userId, key.teamId, key.role, 'api-key', key.id);
-      if (principal && (!key.lastUsedAt || now.getTime() - key.lastUsedAt.getTime() > LAST_USED_RESOLUTION_MS)) {
+      const key = await this.models.ApiKey.findOne({
+        where: { keyHash: hashToken(token), revokedAt: null },
+      });
+      if (!key || (key.expiresAt && key.expiresAt <= now) || !(await this.lineageStands(key, now)))
+        return null;
+      const principal = await this.principalFor(
+        key.userId,
+        key.teamId,
+        key.role,
+        'api-key',
+        key.id,
+      );
+      if (
+        principal &&
+        (!key.lastUsedAt || now.getTime() - key.lastUsedAt.getTime() > LAST_USED_RESOLUTION_MS)
+      ) {
         await key.update({ lastUsedAt: now });
       }
       return principal;
@@ -135,7 +168,8 @@ export class AuthService {
     for (let depth = 0; parentId; depth++) {
       if (depth >= MAX_KEY_LINEAGE) return false;
       const parent = await this.models.ApiKey.findByPk(parentId);
-      if (!parent || parent.revokedAt || (parent.expiresAt && parent.expiresAt <= now)) return false;
+      if (!parent || parent.revokedAt || (parent.expiresAt && parent.expiresAt <= now))
+        return false;
       parentId = parent.createdWithKeyId;
     }
     return true;

@@ -22,7 +22,8 @@ export interface ParsedCapture {
   duration: number;
 }
 
-const reject = (message: string, path = 'file'): HttpError => new HttpError(400, message, [{ path, message }]);
+const reject = (message: string, path = 'file'): HttpError =>
+  new HttpError(400, message, [{ path, message }]);
 
 /**
  * Checks and parses a bench capture: UTF-8 text, a header naming time and voltage (and
@@ -30,7 +31,8 @@ const reject = (message: string, path = 'file'): HttpError => new HttpError(400,
  * error names the line of the file and the reason.
  */
 export function parseCaptureCsv(buffer: Buffer): ParsedCapture {
-  if (buffer.length === 0) throw reject('file is empty; upload a CSV with a header and at least 16 rows');
+  if (buffer.length === 0)
+    throw reject('file is empty; upload a CSV with a header and at least 16 rows');
   // Content, not the file name, decides: text without NUL bytes, valid UTF-8.
   if (buffer.includes(0)) throw reject('file is not text (it holds NUL bytes); upload a CSV file');
   const text = new TextDecoder('utf-8', { fatal: false }).decode(buffer);
@@ -55,10 +57,13 @@ export function parseCaptureCsv(buffer: Buffer): ParsedCapture {
     }) as string[][];
   } catch (error) {
     const line = (error as { lines?: number }).lines;
-    throw reject(`file is not valid CSV${line ? ` at line ${line}` : ''}: ${(error as Error).message.replace(/^.*?: /, '')}`);
+    throw reject(
+      `file is not valid CSV${line ? ` at line ${line}` : ''}: ${(error as Error).message.replace(/^.*?: /, '')}`,
+    );
   }
   const header = records[0];
-  if (!header) throw reject('file has no header row; the first line must name the columns, e.g. time,voltage');
+  if (!header)
+    throw reject('file has no header row; the first line must name the columns, e.g. time,voltage');
   const columns = header.map((name) => columnOf(name));
   const unknown = header.filter((_, i) => columns[i] === undefined);
   if (unknown.length) {
@@ -67,22 +72,34 @@ export function parseCaptureCsv(buffer: Buffer): ParsedCapture {
     );
   }
   for (const name of ['time', 'voltage'] as const) {
-    if (!columns.includes(name)) throw reject(`line 1: the header has no ${name} column; columns must be time, voltage and optionally current`);
+    if (!columns.includes(name))
+      throw reject(
+        `line 1: the header has no ${name} column; columns must be time, voltage and optionally current`,
+      );
   }
   const duplicate = columns.find((c, i) => columns.indexOf(c) !== i);
   if (duplicate) throw reject(`line 1: the ${duplicate} column appears twice`);
   const rows = records.length - 1;
-  if (rows < MIN_CAPTURE_ROWS) throw reject(`file has ${rows} data rows; at least ${MIN_CAPTURE_ROWS} are needed`);
-  if (rows > MAX_CAPTURE_ROWS) throw reject(`file has ${rows} data rows; at most ${MAX_CAPTURE_ROWS} are allowed`);
+  if (rows < MIN_CAPTURE_ROWS)
+    throw reject(`file has ${rows} data rows; at least ${MIN_CAPTURE_ROWS} are needed`);
+  if (rows > MAX_CAPTURE_ROWS)
+    throw reject(`file has ${rows} data rows; at most ${MAX_CAPTURE_ROWS} are allowed`);
 
-  const series: CaptureSeries = { time: [], voltage: [], ...(columns.includes('current') ? { current: [] } : {}) };
+  const series: CaptureSeries = {
+    time: [],
+    voltage: [],
+    ...(columns.includes('current') ? { current: [] } : {}),
+  };
   for (let r = 1; r < records.length; r++) {
     const record = records[r] as string[];
     record.forEach((cell, c) => {
       const value = cell === '' ? NaN : Number(cell);
       const column = columns[c] as 'time' | 'voltage' | 'current';
       if (!Number.isFinite(value)) {
-        throw reject(`line ${r + 1}: ${column} is ${JSON.stringify(cell.slice(0, 30))}, not a finite number`, `file.line${r + 1}.${column}`);
+        throw reject(
+          `line ${r + 1}: ${column} is ${JSON.stringify(cell.slice(0, 30))}, not a finite number`,
+          `file.line${r + 1}.${column}`,
+        );
       }
       (series[column] as number[]).push(value);
     });
@@ -90,7 +107,10 @@ export function parseCaptureCsv(buffer: Buffer): ParsedCapture {
   const time = series.time;
   for (let i = 1; i < time.length; i++) {
     if (!((time[i] as number) > (time[i - 1] as number))) {
-      throw reject(`line ${i + 2}: time ${time[i]} does not rise after ${time[i - 1]} (line ${i + 1}); time must increase strictly`, `file.line${i + 2}.time`);
+      throw reject(
+        `line ${i + 2}: time ${time[i]} does not rise after ${time[i - 1]} (line ${i + 1}); time must increase strictly`,
+        `file.line${i + 2}.time`,
+      );
     }
   }
   const duration = (time[time.length - 1] as number) - (time[0] as number);
@@ -138,7 +158,8 @@ export function formulaCells(text: string): FormulaCell[] {
   let start = -1;
   let quoted = false;
   const end = (): void => {
-    if (start >= 0 && FORMULA_START.test(cell) && !PLAIN_NUMBER.test(cell.trim())) found.push({ line, cell, offset: start });
+    if (start >= 0 && FORMULA_START.test(cell) && !PLAIN_NUMBER.test(cell.trim()))
+      found.push({ line, cell, offset: start });
     cell = '';
     start = -1;
   };
@@ -183,8 +204,14 @@ export function escapeFormulaCells(text: string): string {
 }
 
 function columnOf(name: string): 'time' | 'voltage' | 'current' | undefined {
-  const key = name.toLowerCase().replace(/\s*[([].*[)\]]\s*$/, '').trim().replace(/\s+/g, '_');
-  return (Object.keys(COLUMN_NAMES) as (keyof typeof COLUMN_NAMES)[]).find((c) => COLUMN_NAMES[c].includes(key));
+  const key = name
+    .toLowerCase()
+    .replace(/\s*[([].*[)\]]\s*$/, '')
+    .trim()
+    .replace(/\s+/g, '_');
+  return (Object.keys(COLUMN_NAMES) as (keyof typeof COLUMN_NAMES)[]).find((c) =>
+    COLUMN_NAMES[c].includes(key),
+  );
 }
 
 /** A file name safe to store and to put in a Content-Disposition header. */

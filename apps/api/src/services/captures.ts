@@ -63,7 +63,10 @@ export class CaptureService {
       columns: parsed.columns,
       uploadedById: principal.user.id,
     });
-    await this.audit.record(principal, 'capture.upload', 'capture', row.id, { fileName, rows: parsed.rows });
+    await this.audit.record(principal, 'capture.upload', 'capture', row.id, {
+      fileName,
+      rows: parsed.rows,
+    });
     return toDto(row);
   }
 
@@ -97,7 +100,9 @@ export class CaptureService {
     const spectrum = await this.compute.captureSpectrum(samples, row.sampleRate, {
       window: options.window,
       maxOrder: options.maxOrder,
-      ...(options.fundamentalFrequency ? { fundamentalFrequency: options.fundamentalFrequency } : {}),
+      ...(options.fundamentalFrequency
+        ? { fundamentalFrequency: options.fundamentalFrequency }
+        : {}),
     });
     return { captureId: row.id, column: options.column, ...spectrum };
   }
@@ -109,7 +114,9 @@ export class CaptureService {
   async compare(teamId: string, id: string, studyId: string, options: AnalysisOptions) {
     const measured = await this.analyse(teamId, id, { ...options, column: 'voltage' });
     const study = await this.studies.get(teamId, studyId);
-    const predicted = (await this.compute.designSpectrum(study.design, options.maxOrder, 'study.design')).harmonics;
+    const predicted = (
+      await this.compute.designSpectrum(study.design, options.maxOrder, 'study.design')
+    ).harmonics;
     const orders = measured.harmonics.map((h) => {
       const p = predicted[h.order]?.amplitude ?? 0;
       return {

@@ -66,7 +66,11 @@ const OPTION_FIELDS = ['maxOrder', 'points', 'busVoltage'] as const;
  * the bridge, from the library's `modulationVoltages` (the one dispatch over methods).
  * @param prefix - where the modulation sits in the request, for the field names of errors
  */
-export function modulationOutput(modulation: Modulation, output?: VoltageOutput, prefix = 'modulation.'): WaveformResult {
+export function modulationOutput(
+  modulation: Modulation,
+  output?: VoltageOutput,
+  prefix = 'modulation.',
+): WaveformResult {
   const voltages = callLibrary(prefix, () => modulationVoltages(modulation));
   const traces = [...voltages.phases, ...voltages.legs, ...voltages.lines];
   if (voltages.phaseCount === 1) {
@@ -77,12 +81,18 @@ export function modulationOutput(modulation: Modulation, output?: VoltageOutput,
     const [bridge] = voltages.phases as [NamedVoltage];
     return { name: bridge.name, waveform: bridge.waveform, traces };
   }
-  const chosen = (output === 'leg' ? voltages.legs : output === 'phase' ? voltages.phases : voltages.lines)[0] as NamedVoltage;
+  const chosen = (
+    output === 'leg' ? voltages.legs : output === 'phase' ? voltages.phases : voltages.lines
+  )[0] as NamedVoltage;
   return { name: chosen.name, waveform: chosen.waveform, traces };
 }
 
 /** Exact spectrum to maxOrder of one voltage, with THD and WTHD exact over the whole waveform. */
-export function voltageSpectrum(voltage: NamedVoltage, maxOrder: number, field = 'modulation'): SpectrumResult {
+export function voltageSpectrum(
+  voltage: NamedVoltage,
+  maxOrder: number,
+  field = 'modulation',
+): SpectrumResult {
   const result = callLibrary(`${field}.`, () => {
     const spectrum = harmonics(voltage.waveform, maxOrder);
     return {
@@ -96,14 +106,26 @@ export function voltageSpectrum(voltage: NamedVoltage, maxOrder: number, field =
   return finiteResult(field, result);
 }
 
-export function computeSpectrum(modulation: Modulation, maxOrder: number, output?: VoltageOutput): SpectrumResult {
+export function computeSpectrum(
+  modulation: Modulation,
+  maxOrder: number,
+  output?: VoltageOutput,
+): SpectrumResult {
   return voltageSpectrum(modulationOutput(modulation, output), maxOrder);
 }
 
 /** The spectrum of a design's bridge as /spectra gives it for the design's full modulation. */
-export function designSpectrum(design: InverterDesign, maxOrder: number, field = 'design'): SpectrumResult {
+export function designSpectrum(
+  design: InverterDesign,
+  maxOrder: number,
+  field = 'design',
+): SpectrumResult {
   const modulation = callLibrary(`${field}.`, () => designModulation(design));
-  return voltageSpectrum(modulationOutput(modulation, undefined, `${field}.modulation.`), maxOrder, field);
+  return voltageSpectrum(
+    modulationOutput(modulation, undefined, `${field}.modulation.`),
+    maxOrder,
+    field,
+  );
 }
 
 /**
@@ -111,7 +133,11 @@ export function designSpectrum(design: InverterDesign, maxOrder: number, field =
  * (services/cost.ts `reportCost`, by ComputeService). Errors name the field by its path in the
  * request: `design.modulation.ma`, `design.carrierFrequency`, or the option (`maxOrder`).
  */
-export function designReport(design: InverterDesign, options: AnalyseDesignOptions = {}, field = 'design'): DesignReport {
+export function designReport(
+  design: InverterDesign,
+  options: AnalyseDesignOptions = {},
+  field = 'design',
+): DesignReport {
   callLibrary(`${field}.`, () => assertInverterDesign(design));
   const report = callLibrary(`${field}.`, () => analyseDesign(design, options), OPTION_FIELDS);
   return finiteResult(field, report);
@@ -142,11 +168,17 @@ export interface LoadCurrentResult {
 
 export function computeLoadCurrent(design: InverterDesign, points?: number): LoadCurrentResult {
   if (!design.load) {
-    const message = 'design.load is required: the currents are those of the design\'s load (r, l and an optional emf)';
+    const message =
+      "design.load is required: the currents are those of the design's load (r, l and an optional emf)";
     throw badRequest(message, [{ path: 'design.load', message }]);
   }
   const report = designReport(design, points === undefined ? {} : { points });
-  return { phaseCount: report.phaseCount, voltage: report.bridge.name, currents: report.currents, loadPower: report.loadPower ?? 0 };
+  return {
+    phaseCount: report.phaseCount,
+    voltage: report.bridge.name,
+    currents: report.currents,
+    loadPower: report.loadPower ?? 0,
+  };
 }
 
 /** The part of a design's report that the filter route returns. */
@@ -156,21 +188,36 @@ export interface FilterResult {
   output: NonNullable<DesignReport['output']>;
 }
 
-export function computeFilter(design: InverterDesign, options: Pick<AnalyseDesignOptions, 'maxOrder' | 'points'>): FilterResult {
+export function computeFilter(
+  design: InverterDesign,
+  options: Pick<AnalyseDesignOptions, 'maxOrder' | 'points'>,
+): FilterResult {
   if (!design.filter) {
-    const message = 'design.filter is required: give the LC filter (l, c and optional damping) to analyse';
+    const message =
+      'design.filter is required: give the LC filter (l, c and optional damping) to analyse';
     throw badRequest(message, [{ path: 'design.filter', message }]);
   }
   const report = designReport(design, options);
-  return { filter: report.filter as FilterResult['filter'], bridge: report.bridge, output: report.output as FilterResult['output'] };
+  return {
+    filter: report.filter as FilterResult['filter'],
+    bridge: report.bridge,
+    output: report.output as FilterResult['output'],
+  };
 }
 
 /** The harmonic-limit check of a design's report (at the filter's output where there is one). */
-export function checkDesignLimits(design: InverterDesign, busVoltage?: number): DesignReport['limitCheck'] {
+export function checkDesignLimits(
+  design: InverterDesign,
+  busVoltage?: number,
+): DesignReport['limitCheck'] {
   return designReport(design, busVoltage === undefined ? {} : { busVoltage }).limitCheck;
 }
 
-export function computeSpaceVector(m: number, theta: number, options: SpaceVectorSequenceOptions): SpaceVectorSequence {
+export function computeSpaceVector(
+  m: number,
+  theta: number,
+  options: SpaceVectorSequenceOptions,
+): SpaceVectorSequence {
   return callLibrary('', () => spaceVectorSequence({ m, theta }, options));
 }
 
@@ -183,14 +230,31 @@ export interface TimerDownload {
 }
 
 /** A timer table rendered by the library in the format asked for, ready to download. */
-export function computeTimerTable(options: TimerTableOptions, format: TimerFormat, prefix = 'pwm_table'): TimerDownload {
+export function computeTimerTable(
+  options: TimerTableOptions,
+  format: TimerFormat,
+  prefix = 'pwm_table',
+): TimerDownload {
   return callLibrary('', () => {
     const table = timerTable(options);
-    if (format === 'csv') return { body: timerTableToCsv(table), contentType: 'text/csv; charset=utf-8', fileName: `${prefix}.csv` };
+    if (format === 'csv')
+      return {
+        body: timerTableToCsv(table),
+        contentType: 'text/csv; charset=utf-8',
+        fileName: `${prefix}.csv`,
+      };
     if (format === 'c-header') {
-      return { body: timerTableToCHeader(table, { prefix }), contentType: 'text/x-c; charset=utf-8', fileName: `${prefix}.h` };
+      return {
+        body: timerTableToCHeader(table, { prefix }),
+        contentType: 'text/x-c; charset=utf-8',
+        fileName: `${prefix}.h`,
+      };
     }
-    return { body: timerTableToJson(table), contentType: 'application/json; charset=utf-8', fileName: `${prefix}.json` };
+    return {
+      body: timerTableToJson(table),
+      contentType: 'application/json; charset=utf-8',
+      fileName: `${prefix}.json`,
+    };
   });
 }
 
@@ -201,12 +265,18 @@ export interface SampleAnalysisOptions {
 }
 
 /** The library's fftSpectrum of a capture's samples, without its bins (the routes never return them). */
-export function analyseSamples(samples: ArrayLike<number>, sampleRate: number, options: SampleAnalysisOptions) {
+export function analyseSamples(
+  samples: ArrayLike<number>,
+  sampleRate: number,
+  options: SampleAnalysisOptions,
+) {
   const { bins: _bins, ...spectrum } = callLibrary('', () =>
     fftSpectrum(Array.isArray(samples) ? samples : Array.from(samples), sampleRate, {
       window: options.window,
       maxOrder: options.maxOrder,
-      ...(options.fundamentalFrequency ? { fundamentalFrequency: options.fundamentalFrequency } : {}),
+      ...(options.fundamentalFrequency
+        ? { fundamentalFrequency: options.fundamentalFrequency }
+        : {}),
     }),
   );
   return spectrum;

@@ -11,7 +11,10 @@ import type { WorkerAnswer, WorkerTask } from '../workers/computeWorker.js';
  */
 function workerFile(): string {
   const fromSource = import.meta.url.endsWith('.ts');
-  return new URL(fromSource ? '../workers/computeWorker.dev.mjs' : '../workers/computeWorker.js', import.meta.url).href;
+  return new URL(
+    fromSource ? '../workers/computeWorker.dev.mjs' : '../workers/computeWorker.js',
+    import.meta.url,
+  ).href;
 }
 
 export interface RunOptions {
@@ -47,7 +50,8 @@ export class ComputePool {
   }
 
   private piscina(): Piscina {
-    if (this.closed) throw new HttpError(503, 'The service is shutting down; try again in a moment.');
+    if (this.closed)
+      throw new HttpError(503, 'The service is shutting down; try again in a moment.');
     this.pool ??= new Piscina({
       filename: workerFile(),
       name: 'runComputeTask',
@@ -64,16 +68,26 @@ export class ComputePool {
   }
 
   /** Runs a named task of workers/computeTasks.ts in the pool and returns its result. */
-  async run<N extends ComputeTaskName>(name: N, args: TaskArgs<N>, options: RunOptions = {}): Promise<TaskResult<N>> {
+  async run<N extends ComputeTaskName>(
+    name: N,
+    args: TaskArgs<N>,
+    options: RunOptions = {},
+  ): Promise<TaskResult<N>> {
     const pool = this.piscina();
     const what = options.what ?? 'This computation';
-    const queueLimit = options.queueTimeLimitMs === undefined ? this.limits.queueTimeLimitMs : options.queueTimeLimitMs;
+    const queueLimit =
+      options.queueTimeLimitMs === undefined
+        ? this.limits.queueTimeLimitMs
+        : options.queueTimeLimitMs;
     const runLimit = this.limits.taskTimeLimitMs;
     const abort = new AbortController();
     const channel = new MessageChannel();
     let started = false;
     let stop: 'queue' | 'time' | undefined;
-    let timer = queueLimit === null ? undefined : setTimeout(() => ((stop = 'queue'), abort.abort()), queueLimit);
+    let timer =
+      queueLimit === null
+        ? undefined
+        : setTimeout(() => ((stop = 'queue'), abort.abort()), queueLimit);
     channel.port1.once('message', () => {
       started = true;
       clearTimeout(timer);
@@ -81,7 +95,10 @@ export class ComputePool {
     });
     const task: WorkerTask = { name, args, started: channel.port2 };
     try {
-      const answer = (await pool.run(task, { transferList: [channel.port2], signal: abort.signal })) as WorkerAnswer;
+      const answer = (await pool.run(task, {
+        transferList: [channel.port2],
+        signal: abort.signal,
+      })) as WorkerAnswer;
       if (!answer.ok) throw new HttpError(answer.status, answer.detail, answer.errors);
       return answer.value as TaskResult<N>;
     } catch (error) {
@@ -111,7 +128,8 @@ export class ComputePool {
           'compute-memory',
         );
       }
-      if (this.closed) throw new ComputeStopped(503, 'The service is shutting down; try again in a moment.');
+      if (this.closed)
+        throw new ComputeStopped(503, 'The service is shutting down; try again in a moment.');
       throw error;
     } finally {
       clearTimeout(timer);

@@ -23,7 +23,12 @@ import {
   type CostEstimate,
   type TimerFormat,
 } from './cost.js';
-import { COMPUTE_TASKS, type ComputeTaskName, type TaskArgs, type TaskResult } from '../workers/computeTasks.js';
+import {
+  COMPUTE_TASKS,
+  type ComputeTaskName,
+  type TaskArgs,
+  type TaskResult,
+} from '../workers/computeTasks.js';
 
 /**
  * Every compute a request asks for, in one place: its cost is estimated from the inputs
@@ -38,7 +43,13 @@ export class ComputeService {
   ) {}
 
   /** Runs a task where its cost says, after the budget check. */
-  private async run<N extends ComputeTaskName>(name: N, args: TaskArgs<N>, cost: CostEstimate, what: string, budgeted = true): Promise<TaskResult<N>> {
+  private async run<N extends ComputeTaskName>(
+    name: N,
+    args: TaskArgs<N>,
+    cost: CostEstimate,
+    what: string,
+    budgeted = true,
+  ): Promise<TaskResult<N>> {
     if (budgeted) assertWithinBudget(cost, 'request', this.limits);
     if (cost.work <= this.limits.inlineWorkLimit) {
       return (COMPUTE_TASKS[name] as (a: TaskArgs<N>) => TaskResult<N>)(args);
@@ -47,51 +58,113 @@ export class ComputeService {
   }
 
   spectrum(modulation: Modulation, maxOrder: number, output?: VoltageOutput) {
-    return this.run('spectrum', { modulation, maxOrder, ...(output ? { output } : {}) }, spectrumCost(modulation, maxOrder, output), 'This spectrum');
+    return this.run(
+      'spectrum',
+      { modulation, maxOrder, ...(output ? { output } : {}) },
+      spectrumCost(modulation, maxOrder, output),
+      'This spectrum',
+    );
   }
 
   waveform(modulation: Modulation, output?: VoltageOutput) {
-    return this.run('waveform', { modulation, ...(output ? { output } : {}) }, waveformCost(modulation), 'This waveform');
+    return this.run(
+      'waveform',
+      { modulation, ...(output ? { output } : {}) },
+      waveformCost(modulation),
+      'This waveform',
+    );
   }
 
   /** The cost of a design report, with the report's own bound on its time series. */
-  private reportCost(design: InverterDesign, options: AnalyseDesignOptions, field: string, optionFields?: readonly string[]): CostEstimate {
+  private reportCost(
+    design: InverterDesign,
+    options: AnalyseDesignOptions,
+    field: string,
+    optionFields?: readonly string[],
+  ): CostEstimate {
     const cost = reportCost(design, options, field, optionFields);
     assertReportSeries(cost);
     return cost;
   }
 
   /** The design report; `optionFields` are the options the caller can lower (none for a shared report). */
-  report(design: InverterDesign, options: AnalyseDesignOptions = {}, field = 'design', optionFields?: readonly string[]) {
-    return this.run('designReport', { design, options, field }, this.reportCost(design, options, field, optionFields), 'This design report');
+  report(
+    design: InverterDesign,
+    options: AnalyseDesignOptions = {},
+    field = 'design',
+    optionFields?: readonly string[],
+  ) {
+    return this.run(
+      'designReport',
+      { design, options, field },
+      this.reportCost(design, options, field, optionFields),
+      'This design report',
+    );
   }
 
   loadCurrent(design: InverterDesign, points?: number) {
-    const cost = this.reportCost(design, points === undefined ? {} : { points }, 'design', ['points']);
-    return this.run('loadCurrent', { design, ...(points === undefined ? {} : { points }) }, cost, 'This load-current analysis');
+    const cost = this.reportCost(design, points === undefined ? {} : { points }, 'design', [
+      'points',
+    ]);
+    return this.run(
+      'loadCurrent',
+      { design, ...(points === undefined ? {} : { points }) },
+      cost,
+      'This load-current analysis',
+    );
   }
 
   filter(design: InverterDesign, options: Pick<AnalyseDesignOptions, 'maxOrder' | 'points'>) {
-    return this.run('filter', { design, options }, this.reportCost(design, options, 'design'), 'This filter analysis');
+    return this.run(
+      'filter',
+      { design, options },
+      this.reportCost(design, options, 'design'),
+      'This filter analysis',
+    );
   }
 
   harmonicLimits(design: InverterDesign, busVoltage?: number) {
-    const cost = this.reportCost(design, busVoltage === undefined ? {} : { busVoltage }, 'design', []);
-    return this.run('limits', { design, ...(busVoltage === undefined ? {} : { busVoltage }) }, cost, 'This limit check');
+    const cost = this.reportCost(
+      design,
+      busVoltage === undefined ? {} : { busVoltage },
+      'design',
+      [],
+    );
+    return this.run(
+      'limits',
+      { design, ...(busVoltage === undefined ? {} : { busVoltage }) },
+      cost,
+      'This limit check',
+    );
   }
 
   /** A study's design checked by a trial analysis before it is stored (compute.ts assertDesign). */
   async assertDesign(design: InverterDesign, field = 'design'): Promise<void> {
-    await this.run('assertDesign', { design, field }, this.reportCost(design, { maxOrder: 50, points: 64 }, field, []), 'The check of this design');
+    await this.run(
+      'assertDesign',
+      { design, field },
+      this.reportCost(design, { maxOrder: 50, points: 64 }, field, []),
+      'The check of this design',
+    );
   }
 
   designSpectrum(design: InverterDesign, maxOrder: number, field = 'design') {
-    return this.run('designSpectrum', { design, maxOrder, field }, designSpectrumCost(design, maxOrder, field), 'This spectrum');
+    return this.run(
+      'designSpectrum',
+      { design, maxOrder, field },
+      designSpectrumCost(design, maxOrder, field),
+      'This spectrum',
+    );
   }
 
   timerTable(options: TimerTableOptions, format: TimerFormat, prefix?: string) {
     const cost = timerTableCost(options, format);
-    return this.run('timerTable', { options, format, ...(prefix ? { prefix } : {}) }, cost, 'This timer table');
+    return this.run(
+      'timerTable',
+      { options, format, ...(prefix ? { prefix } : {}) },
+      cost,
+      'This timer table',
+    );
   }
 
   spaceVector(m: number, theta: number, options: SpaceVectorSequenceOptions) {
@@ -102,13 +175,30 @@ export class ComputeService {
   /** An uploaded capture checked and parsed (services/captureCsv.ts), in a worker unless it is small. */
   parseCapture(file: Buffer) {
     // Bounded by the upload limit (5 MB) rather than by the request budget.
-    return this.run('parseCapture', { file }, captureUploadCost(file.length), 'Reading this capture', false);
+    return this.run(
+      'parseCapture',
+      { file },
+      captureUploadCost(file.length),
+      'Reading this capture',
+      false,
+    );
   }
 
-  captureSpectrum(samples: readonly number[], sampleRate: number, options: { window: FftWindowName; maxOrder: number; fundamentalFrequency?: number }) {
+  captureSpectrum(
+    samples: readonly number[],
+    sampleRate: number,
+    options: { window: FftWindowName; maxOrder: number; fundamentalFrequency?: number },
+  ) {
     const cost = captureSpectrumCost(samples.length, options.maxOrder);
     // A typed copy crosses to a worker as one block of memory rather than a million numbers.
-    const args = { samples: cost.work <= this.limits.inlineWorkLimit ? (samples as number[]) : Float64Array.from(samples), sampleRate, options };
+    const args = {
+      samples:
+        cost.work <= this.limits.inlineWorkLimit
+          ? (samples as number[])
+          : Float64Array.from(samples),
+      sampleRate,
+      options,
+    };
     return this.run('captureSpectrum', args, cost, 'This capture analysis');
   }
 }

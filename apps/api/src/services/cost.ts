@@ -61,17 +61,27 @@ const BYTES_PER_NUMBER = 20;
 const sci = (value: number): string => value.toPrecision(3);
 
 /** Switching edges per period of a modulation's voltages: one phase (or leg) and one line. */
-export function modulationEdges(modulation: Modulation): { phase: number; leg: number; line: number } {
+export function modulationEdges(modulation: Modulation): {
+  phase: number;
+  leg: number;
+  line: number;
+} {
   switch (modulation.method) {
     case 'sine-triangle': {
       const edges = (modulation.scheme === 'unipolar' ? 4 : 2) * (modulation.mf + 1);
       return { phase: edges, leg: edges, line: 0 };
     }
     case 'three-phase':
-      return { phase: 6 * (modulation.mf + 1), leg: 2 * (modulation.mf + 1), line: 4 * (modulation.mf + 1) };
+      return {
+        phase: 6 * (modulation.mf + 1),
+        leg: 2 * (modulation.mf + 1),
+        line: 4 * (modulation.mf + 1),
+      };
     case 'space-vector': {
       // A ratio that is not whole repeats over up to 64 fundamental periods (the library's default).
-      const ratio = Number.isInteger(modulation.frequencyRatio) ? modulation.frequencyRatio : 64 * Math.ceil(modulation.frequencyRatio);
+      const ratio = Number.isInteger(modulation.frequencyRatio)
+        ? modulation.frequencyRatio
+        : 64 * Math.ceil(modulation.frequencyRatio);
       return { phase: 6 * (ratio + 1), leg: 2 * (ratio + 1), line: 4 * (ratio + 1) };
     }
     case 'selective-harmonic-elimination':
@@ -85,20 +95,33 @@ export function modulationEdges(modulation: Modulation): { phase: number; leg: n
 /** The request field that sets a modulation's switching frequency (its edges). */
 function edgeField(modulation: Modulation, prefix: string): string {
   if (modulation.method === 'space-vector') return `${prefix}frequencyRatio`;
-  if (modulation.method === 'sine-triangle' || modulation.method === 'three-phase') return `${prefix}mf`;
+  if (modulation.method === 'sine-triangle' || modulation.method === 'three-phase')
+    return `${prefix}mf`;
   return `${prefix}angles`;
 }
 
 /** Every edge of every voltage of the bridge (what modulationVoltages builds). */
 function allEdges(modulation: Modulation): number {
   const edges = modulationEdges(modulation);
-  return THREE_PHASE_METHODS.includes(modulation.method) ? 3 * (edges.phase + edges.leg + edges.line) : edges.phase;
+  return THREE_PHASE_METHODS.includes(modulation.method)
+    ? 3 * (edges.phase + edges.leg + edges.line)
+    : edges.phase;
 }
 
 /** POST /spectra: the voltages built, then one voltage's spectrum to maxOrder and its exact THD. */
-export function spectrumCost(modulation: Modulation, maxOrder: number, output?: string, prefix = 'modulation.'): CostEstimate {
+export function spectrumCost(
+  modulation: Modulation,
+  maxOrder: number,
+  output?: string,
+  prefix = 'modulation.',
+): CostEstimate {
   const edges = modulationEdges(modulation);
-  const analysed = edges.line > 0 && (output === undefined || output === 'line-to-line') ? edges.line : output === 'leg' ? edges.leg : edges.phase;
+  const analysed =
+    edges.line > 0 && (output === undefined || output === 'line-to-line')
+      ? edges.line
+      : output === 'leg'
+        ? edges.leg
+        : edges.phase;
   return {
     work: allEdges(modulation) * BUILD_PER_EDGE + analysed * (maxOrder + 1),
     basis: `${analysed} edges × ${maxOrder + 1} orders`,
@@ -132,7 +155,10 @@ function designEdges(design: InverterDesign, ratio: number): { phase: number; li
       return { phase: 6 * (ratio + 1), line: 4 * (ratio + 1) };
     case 'selective-harmonic-elimination':
     case 'optimal-pattern':
-      return { phase: 4 * (Array.isArray(modulation.angles) ? modulation.angles.length : 0), line: 0 };
+      return {
+        phase: 4 * (Array.isArray(modulation.angles) ? modulation.angles.length : 0),
+        line: 0,
+      };
   }
 }
 
@@ -151,13 +177,17 @@ export function reportCost(
   optionFields: readonly string[] = ['maxOrder', 'points'],
 ): CostEstimate & { series: number; points: number } {
   const pattern = !CARRIER_METHODS.includes(design.modulation.method);
-  const ratio = pattern ? 0 : Math.round((design.carrierFrequency ?? 0) / design.fundamentalFrequency);
+  const ratio = pattern
+    ? 0
+    : Math.round((design.carrierFrequency ?? 0) / design.fundamentalFrequency);
   const maxOrder = options.maxOrder ?? defaultSpectrumOrder(design);
   const points = options.points ?? 1200;
   const phases = THREE_PHASE_METHODS.includes(design.modulation.method) ? 3 : 1;
   const edges = designEdges(design, ratio);
   const filtered = design.filter !== undefined && design.filter !== null;
-  const analysisOrder = filtered ? Math.min(MAX_ANALYSIS_ORDER, Math.max(maxOrder, pattern ? 2000 : 10 * ratio + 10)) : maxOrder;
+  const analysisOrder = filtered
+    ? Math.min(MAX_ANALYSIS_ORDER, Math.max(maxOrder, pattern ? 2000 : 10 * ratio + 10))
+    : maxOrder;
   const spectra = (edges.phase + edges.line) * maxOrder;
   const throughFilter = filtered ? phases * edges.phase * analysisOrder : 0;
   const series = (filtered ? 1 + 3 * phases : 0) + (!filtered && design.load ? phases : 0);
@@ -174,7 +204,9 @@ export function reportCost(
     ['points', sampled],
   ];
   const fields = shares
-    .filter(([name, share]) => share > 0 && (name.startsWith(`${field}.`) || optionFields.includes(name)))
+    .filter(
+      ([name, share]) => share > 0 && (name.startsWith(`${field}.`) || optionFields.includes(name)),
+    )
     .sort((a, b) => b[1] - a[1])
     .map(([name]) => name);
   return {
@@ -182,7 +214,11 @@ export function reportCost(
     basis: `${edges.phase + edges.line} edges × ${maxOrder} orders${filtered ? ` + ${phases} × ${edges.phase} edges × ${analysisOrder} orders through the filter` : ''}${series ? ` + ${series} series × ${points} points` : ''}`,
     fields: fields.length ? fields : [field],
     // Labelled spectra (about five numbers an order and voltage), time series, and the edges of each voltage.
-    responseBytes: BYTES_PER_NUMBER * (5 * (maxOrder + 1) * (filtered ? 3 : 2) + series * points + 2 * voltages * (edges.phase + edges.line)),
+    responseBytes:
+      BYTES_PER_NUMBER *
+      (5 * (maxOrder + 1) * (filtered ? 3 : 2) +
+        series * points +
+        2 * voltages * (edges.phase + edges.line)),
     responseFields: ['maxOrder', 'points'].filter((name) => optionFields.includes(name)),
     series,
     points,
@@ -190,9 +226,15 @@ export function reportCost(
 }
 
 /** GET /studies/{id}/spectrum and a capture comparison's prediction: the design's bridge voltage. */
-export function designSpectrumCost(design: InverterDesign, maxOrder: number, field = 'design'): CostEstimate {
+export function designSpectrumCost(
+  design: InverterDesign,
+  maxOrder: number,
+  field = 'design',
+): CostEstimate {
   const pattern = !CARRIER_METHODS.includes(design.modulation.method);
-  const ratio = pattern ? 0 : Math.round((design.carrierFrequency ?? 0) / design.fundamentalFrequency);
+  const ratio = pattern
+    ? 0
+    : Math.round((design.carrierFrequency ?? 0) / design.fundamentalFrequency);
   const edges = designEdges(design, ratio);
   const analysed = edges.line || edges.phase;
   return {
@@ -213,9 +255,13 @@ export type TimerFormat = 'json' | 'csv' | 'c-header';
 export function timerTableCost(options: TimerTableOptions, format: TimerFormat): CostEstimate {
   const ratio = options.carrierFrequency / options.fundamentalFrequency;
   const updates = Math.round(ratio) * (options.sampling === 'regular-asymmetric' ? 2 : 1);
-  const rows = options.tableLength ?? (Number.isFinite(updates) ? Math.max(1, updates) : Number.MAX_VALUE);
+  const rows =
+    options.tableLength ?? (Number.isFinite(updates) ? Math.max(1, updates) : Number.MAX_VALUE);
   const channels = options.modulation.method === 'three-phase' ? 3 : 2;
-  const sizeFields = options.tableLength === undefined ? ['tableLength', 'carrierFrequency', 'fundamentalFrequency'] : ['tableLength'];
+  const sizeFields =
+    options.tableLength === undefined
+      ? ['tableLength', 'carrierFrequency', 'fundamentalFrequency']
+      : ['tableLength'];
   return {
     work: rows * channels * TIMER_PER_ROW_CHANNEL,
     basis: `${rows} rows × ${channels} channels${options.tableLength === undefined ? ' (the default table length, one row per compare update)' : ''}`,
@@ -242,12 +288,24 @@ export function captureSpectrumCost(samples: number, maxOrder: number): CostEsti
  * 160 000 rows took 0.43 s). Its size is bounded by the upload limit (5 MB), not by a budget.
  */
 export function captureUploadCost(bytes: number): CostEstimate {
-  return { work: 20 * bytes, basis: `${bytes} bytes of CSV`, fields: ['file'], responseBytes: 1000, responseFields: [] };
+  return {
+    work: 20 * bytes,
+    basis: `${bytes} bytes of CSV`,
+    fields: ['file'],
+    responseBytes: 1000,
+    responseFields: [],
+  };
 }
 
 /** POST /space-vector: one reference's dwell times and sequence. */
 export function spaceVectorCost(): CostEstimate {
-  return { work: 1000, basis: 'one reference vector', fields: [], responseBytes: 2000, responseFields: [] };
+  return {
+    work: 1000,
+    basis: 'one reference vector',
+    fields: [],
+    responseBytes: 2000,
+    responseFields: [],
+  };
 }
 
 /** An ma sweep job: at each point the waveform built and its spectrum to maxOrder. */
@@ -285,21 +343,32 @@ export type CostKind = 'request' | 'job';
  * limit, in the words of the setting that raises it), and an answer larger than the response
  * budget. Returns the estimate so a caller can decide where the work runs.
  */
-export function assertWithinBudget(cost: CostEstimate, kind: CostKind, limits: ComputeLimits): CostEstimate {
+export function assertWithinBudget(
+  cost: CostEstimate,
+  kind: CostKind,
+  limits: ComputeLimits,
+): CostEstimate {
   const budget = kind === 'job' ? limits.jobWorkBudget : limits.requestWorkBudget;
   if (cost.work > budget) {
     const names = cost.fields.length ? cost.fields.join(' and ') : 'this request';
     const setting = kind === 'job' ? 'JOB_WORK_BUDGET' : 'COMPUTE_WORK_BUDGET';
-    const advice = kind === 'job' ? 'lower them or split the sweep' : 'lower them, or run the work as a sweep job';
-    const message =
-      `${names} ask for about ${sci(cost.work)} units of work (${cost.basis}), more than the ${sci(budget)} one ${kind} may take (${setting}); ${advice}`;
-    throw badRequest(message, (cost.fields.length ? cost.fields : ['']).map((path) => ({ path, message })));
+    const advice =
+      kind === 'job'
+        ? 'lower them or split the sweep'
+        : 'lower them, or run the work as a sweep job';
+    const message = `${names} ask for about ${sci(cost.work)} units of work (${cost.basis}), more than the ${sci(budget)} one ${kind} may take (${setting}); ${advice}`;
+    throw badRequest(
+      message,
+      (cost.fields.length ? cost.fields : ['']).map((path) => ({ path, message })),
+    );
   }
   if (cost.responseBytes > limits.responseBytesBudget) {
     const names = cost.responseFields.join(' and ');
-    const message =
-      `${names} would make an answer of about ${(cost.responseBytes / 1e6).toFixed(1)} MB, more than the ${(limits.responseBytesBudget / 1e6).toFixed(1)} MB one answer may hold (RESPONSE_BYTES_BUDGET); lower them`;
-    throw badRequest(message, cost.responseFields.map((path) => ({ path, message })));
+    const message = `${names} would make an answer of about ${(cost.responseBytes / 1e6).toFixed(1)} MB, more than the ${(limits.responseBytesBudget / 1e6).toFixed(1)} MB one answer may hold (RESPONSE_BYTES_BUDGET); lower them`;
+    throw badRequest(
+      message,
+      cost.responseFields.map((path) => ({ path, message })),
+    );
   }
   return cost;
 }

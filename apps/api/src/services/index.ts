@@ -33,7 +33,10 @@ export interface Services {
 
 export function createServices(models: Models, config: AppConfig): Services {
   const audit = new AuditLog(models);
-  const auth = new AuthService(models, audit, { sessionHours: config.sessionHours, bcryptRounds: config.bcryptRounds });
+  const auth = new AuthService(models, audit, {
+    sessionHours: config.sessionHours,
+    bcryptRounds: config.bcryptRounds,
+  });
   const mailer = new Mailer(models, config.smtpUrl, config.mailFrom, config.mailDir);
   const projects = new ProjectService(models, audit);
   const studies = new StudyService(models, audit, projects);

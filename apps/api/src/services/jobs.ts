@@ -34,7 +34,8 @@ export interface JobPlan {
   result(): unknown;
 }
 
-export const INTERRUPTED_MESSAGE = 'The service stopped while this job was running; start it again.';
+export const INTERRUPTED_MESSAGE =
+  'The service stopped while this job was running; start it again.';
 
 interface Entry {
   job: JobRow;
@@ -69,7 +70,11 @@ export class JobService {
     return count;
   }
 
-  async start(principal: Principal, input: Record<string, unknown>, plan: JobPlan): Promise<JobDto> {
+  async start(
+    principal: Principal,
+    input: Record<string, unknown>,
+    plan: JobPlan,
+  ): Promise<JobDto> {
     assertWithinBudget(plan.cost, 'job', this.limits);
     const job = await this.reserve(principal, plan.kind, input);
     try {
@@ -85,7 +90,13 @@ export class JobService {
     await this.audit.record(principal, 'job.start', 'job', job.id, { kind: plan.kind });
     if (plan.chunks <= 1) {
       const now = new Date();
-      await job.update({ status: 'succeeded', progress: 1, result: plan.result(), startedAt: now, finishedAt: now });
+      await job.update({
+        status: 'succeeded',
+        progress: 1,
+        result: plan.result(),
+        startedAt: now,
+        finishedAt: now,
+      });
       return toDto(job);
     }
     await job.update({ progress: 1 / plan.chunks });
@@ -100,14 +111,24 @@ export class JobService {
    * writers take turns; on PostgreSQL a transaction-scoped advisory lock on the team does the
    * same across replicas.
    */
-  private async reserve(principal: Principal, kind: string, input: Record<string, unknown>): Promise<JobRow> {
+  private async reserve(
+    principal: Principal,
+    kind: string,
+    input: Record<string, unknown>,
+  ): Promise<JobRow> {
     const active = { status: { [Op.in]: ['queued', 'running'] } };
     const { sequelize } = this.models;
     return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
       if (sequelize.getDialect() === 'postgres') {
-        await sequelize.query('SELECT pg_advisory_xact_lock(hashtext(:key))', { replacements: { key: `jobs:${principal.teamId}` }, transaction });
+        await sequelize.query('SELECT pg_advisory_xact_lock(hashtext(:key))', {
+          replacements: { key: `jobs:${principal.teamId}` },
+          transaction,
+        });
       }
-      const mine = await this.models.Job.count({ where: { ...active, userId: principal.user.id }, transaction });
+      const mine = await this.models.Job.count({
+        where: { ...active, userId: principal.user.id },
+        transaction,
+      });
       if (mine >= this.limits.userJobQuota) {
         throw new HttpError(
           429,
@@ -116,7 +137,10 @@ export class JobService {
           'job-quota',
         );
       }
-      const team = await this.models.Job.count({ where: { ...active, teamId: principal.teamId }, transaction });
+      const team = await this.models.Job.count({
+        where: { ...active, teamId: principal.teamId },
+        transaction,
+      });
       if (team >= this.limits.teamJobQuota) {
         throw new HttpError(
           429,
@@ -126,7 +150,14 @@ export class JobService {
         );
       }
       return this.models.Job.create(
-        { teamId: principal.teamId, userId: principal.user.id, kind, status: 'queued', progress: 0, input },
+        {
+          teamId: principal.teamId,
+          userId: principal.user.id,
+          kind,
+          status: 'queued',
+          progress: 0,
+          input,
+        },
         { transaction },
       );
     });
@@ -158,7 +189,12 @@ export class JobService {
         await plan.runChunk(index, this.pool);
         if (index < plan.chunks - 1) await job.update({ progress: (index + 1) / plan.chunks });
       }
-      await job.update({ status: 'succeeded', progress: 1, result: plan.result(), finishedAt: new Date() });
+      await job.update({
+        status: 'succeeded',
+        progress: 1,
+        result: plan.result(),
+        finishedAt: new Date(),
+      });
     } catch (error) {
       if (this.closing) return;
       await this.fail(job, error);
@@ -166,8 +202,15 @@ export class JobService {
   }
 
   private async fail(job: JobRow, error: unknown): Promise<void> {
-    const message = error instanceof HttpError ? error.detail : error instanceof Error ? error.message : String(error);
-    await job.update({ status: 'failed', error: message, finishedAt: new Date() }).catch(() => undefined);
+    const message =
+      error instanceof HttpError
+        ? error.detail
+        : error instanceof Error
+          ? error.message
+          : String(error);
+    await job
+      .update({ status: 'failed', error: message, finishedAt: new Date() })
+      .catch(() => undefined);
   }
 
   async get(teamId: string, id: string): Promise<JobDto> {

@@ -6,7 +6,11 @@ import { HttpError } from '../http/errors.js';
  * names `ma`, the request names `modulation.ma`, so `prefix` is prepended to path and message,
  * except for the `unprefixed` fields, which sit at the top of the request (e.g. `maxOrder`).
  */
-export function callLibrary<T>(prefix: string, work: () => T, unprefixed: readonly string[] = []): T {
+export function callLibrary<T>(
+  prefix: string,
+  work: () => T,
+  unprefixed: readonly string[] = [],
+): T {
   try {
     return work();
   } catch (error) {
@@ -14,17 +18,26 @@ export function callLibrary<T>(prefix: string, work: () => T, unprefixed: readon
   }
 }
 
-export function asBadRequest(prefix: string, error: unknown, unprefixed: readonly string[] = []): unknown {
+export function asBadRequest(
+  prefix: string,
+  error: unknown,
+  unprefixed: readonly string[] = [],
+): unknown {
   if (!(error instanceof RangeError || error instanceof TypeError)) return error;
   const field = (error as { field?: unknown }).field;
   if (typeof field === 'string') {
     const path = unprefixed.includes(field) ? field : `${prefix}${field}`;
-    const message = error.message.startsWith(field) ? `${path}${error.message.slice(field.length)}` : error.message;
+    const message = error.message.startsWith(field)
+      ? `${path}${error.message.slice(field.length)}`
+      : error.message;
     return new HttpError(400, message, [{ path, message }]);
   }
   // Only the library's own checks raise these here; a TypeError from a bug has no field but
   // the library always names one, so a field-less TypeError stays a 500.
-  if (error instanceof RangeError) return new HttpError(400, error.message, [{ path: prefix.replace(/\.$/, ''), message: error.message }]);
+  if (error instanceof RangeError)
+    return new HttpError(400, error.message, [
+      { path: prefix.replace(/\.$/, ''), message: error.message },
+    ]);
   return error;
 }
 
@@ -37,7 +50,8 @@ function allFinite(value: unknown, depth = 0): boolean {
     return true;
   }
   for (const key in value) {
-    if (Object.hasOwn(value, key) && !allFinite((value as Record<string, unknown>)[key], depth + 1)) return false;
+    if (Object.hasOwn(value, key) && !allFinite((value as Record<string, unknown>)[key], depth + 1))
+      return false;
   }
   return true;
 }

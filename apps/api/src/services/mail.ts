@@ -75,7 +75,12 @@ export class Mailer {
   }
 
   async send(message: MailMessage): Promise<void> {
-    const envelope = { from: this.from, to: message.to, subject: message.subject, text: message.text };
+    const envelope = {
+      from: this.from,
+      to: message.to,
+      subject: message.subject,
+      text: message.text,
+    };
     const copy = { ...envelope, text: maskSecrets(message.text, message.secrets) };
     const id = randomUUID();
     let status: OutboxRow['status'] = this.local ? 'saved' : 'sent';
@@ -87,14 +92,25 @@ export class Mailer {
       status = 'failed';
       error = failure instanceof Error ? failure.message : String(failure);
     }
-    await this.models.Outbox.create({ id, teamId: message.teamId, ...copy, message: JSON.stringify(copy), status, error });
+    await this.models.Outbox.create({
+      id,
+      teamId: message.teamId,
+      ...copy,
+      message: JSON.stringify(copy),
+      status,
+      error,
+    });
   }
 
   /** Writes one delivered message into the mail drop, readable by its owner only. */
   private drop(id: string, rendered: unknown): void {
     mkdirSync(this.mailDir, { recursive: true, mode: 0o700 });
     const name = `${new Date().toISOString().replace(/[:.]/g, '-')}-${id}.eml`;
-    writeFileSync(path.join(this.mailDir, name), Buffer.isBuffer(rendered) ? rendered : String(rendered), { mode: 0o600 });
+    writeFileSync(
+      path.join(this.mailDir, name),
+      Buffer.isBuffer(rendered) ? rendered : String(rendered),
+      { mode: 0o600 },
+    );
   }
 
   /** The team's mail, newest first, secrets masked. */
@@ -176,9 +192,11 @@ function decodeQuotedPrintable(body: string): string {
 function decodeWords(value: string): string {
   return value
     .replace(/\?=\s+=\?/g, '?==?')
-    .replace(/=\?([^?]+)\?([QqBb])\?([^?]*)\?=/g, (_all, _charset: string, kind: string, data: string) =>
-      kind.toUpperCase() === 'B'
-        ? Buffer.from(data, 'base64').toString('utf8')
-        : decodeQuotedPrintable(data.replace(/_/g, ' ')),
+    .replace(
+      /=\?([^?]+)\?([QqBb])\?([^?]*)\?=/g,
+      (_all, _charset: string, kind: string, data: string) =>
+        kind.toUpperCase() === 'B'
+          ? Buffer.from(data, 'base64').toString('utf8')
+          : decodeQuotedPrintable(data.replace(/_/g, ' ')),
     );
 }

@@ -35,7 +35,11 @@ export function likePattern(text: string): string {
  * and `\` of the text are literal (SQLite has no default LIKE escape character, so the clause
  * must name it; PostgreSQL accepts the same clause).
  */
-export function containsText(sequelize: Sequelize, column: string, text: string): ReturnType<Sequelize['where']> {
+export function containsText(
+  sequelize: Sequelize,
+  column: string,
+  text: string,
+): ReturnType<Sequelize['where']> {
   const pattern = sequelize.literal(`${sequelize.escape(likePattern(text))} ESCAPE '\\'`);
   return sequelize.where(fn('lower', col(column)), Op.like, pattern);
 }
@@ -64,7 +68,10 @@ export class ProjectService {
     return row;
   }
 
-  async create(principal: Principal, input: { name: string; description?: string }): Promise<ProjectDto> {
+  async create(
+    principal: Principal,
+    input: { name: string; description?: string },
+  ): Promise<ProjectDto> {
     const row = await this.models.Project.create({
       teamId: principal.teamId,
       name: input.name,
@@ -75,7 +82,11 @@ export class ProjectService {
     return this.toDto(row);
   }
 
-  async update(principal: Principal, id: string, input: { name?: string; description?: string }): Promise<ProjectDto> {
+  async update(
+    principal: Principal,
+    id: string,
+    input: { name?: string; description?: string },
+  ): Promise<ProjectDto> {
     const row = await this.find(principal.teamId, id);
     await row.update(input);
     await this.audit.record(principal, 'project.update', 'project', row.id, { ...input });

@@ -1,4 +1,12 @@
-import { designModulation, modulationVoltages, rlCurrentAt, TAU, waveformValueAt, type InverterDesign, type Waveform } from '@pulsewright/modulation';
+import {
+  designModulation,
+  modulationVoltages,
+  rlCurrentAt,
+  TAU,
+  waveformValueAt,
+  type InverterDesign,
+  type Waveform,
+} from '@pulsewright/modulation';
 import type { Role } from '../models/index.js';
 import type { Services } from './index.js';
 import type { Principal } from './principal.js';
@@ -21,7 +29,13 @@ const PUMP_BASELINE: StudyContent = {
     vdc: 375,
     fundamentalFrequency: 50,
     carrierFrequency: 20_000,
-    modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.86, sampling: 'natural', carrierPhase: 0 },
+    modulation: {
+      method: 'sine-triangle',
+      scheme: 'unipolar',
+      ma: 0.86,
+      sampling: 'natural',
+      carrierPhase: 0,
+    },
     filter: { l: 0.0011, c: 0.0000068, rDamping: 2.2, dampingPlacement: 'series-with-capacitor' },
     load: PUMP_LOAD,
   },
@@ -68,7 +82,8 @@ export async function seedDemo(services: Services, password: string): Promise<vo
 
   const pump = await projects.create(ravi, {
     name: '3 kVA pump inverter',
-    description: 'Single-phase H-bridge for irrigation pumps: 230 V rms, 50 Hz output from a 375 V bus.',
+    description:
+      'Single-phase H-bridge for irrigation pumps: 230 V rms, 50 Hz output from a 375 V bus.',
   });
   const drive = await projects.create(lena, {
     name: '7.5 kW drive',
@@ -79,7 +94,10 @@ export async function seedDemo(services: Services, password: string): Promise<vo
   // A second revision: the team settled on a slightly higher index after a bus-voltage review.
   await studies.update(ravi, baseline.id, baseline.revision, {
     ...PUMP_BASELINE,
-    design: { ...PUMP_BASELINE.design, modulation: { ...PUMP_BASELINE.design.modulation, ma: 0.88 } as InverterDesign['modulation'] },
+    design: {
+      ...PUMP_BASELINE.design,
+      modulation: { ...PUMP_BASELINE.design.modulation, ma: 0.88 } as InverterDesign['modulation'],
+    },
     note: `${PUMP_BASELINE.note} Index raised to 0.88 for the low-line case.`,
   });
   await studies.create(ravi, pump.id, {
@@ -88,7 +106,13 @@ export async function seedDemo(services: Services, password: string): Promise<vo
       vdc: 375,
       fundamentalFrequency: 50,
       carrierFrequency: 19_950,
-      modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.88, sampling: 'natural', carrierPhase: 0 },
+      modulation: {
+        method: 'sine-triangle',
+        scheme: 'bipolar',
+        ma: 0.88,
+        sampling: 'natural',
+        carrierPhase: 0,
+      },
       filter: null,
       load: PUMP_LOAD,
     },
@@ -100,7 +124,13 @@ export async function seedDemo(services: Services, password: string): Promise<vo
       vdc: 650,
       fundamentalFrequency: 50,
       carrierFrequency: 8000,
-      modulation: { method: 'three-phase', ma: 1.08, zeroSequence: 'third-harmonic', sampling: 'natural', carrierPhase: 0 },
+      modulation: {
+        method: 'three-phase',
+        ma: 1.08,
+        zeroSequence: 'third-harmonic',
+        sampling: 'natural',
+        carrierPhase: 0,
+      },
       load: DRIVE_LOAD,
     },
     note: 'Linear up to ma ≈ 1.15 with 1/6 third-harmonic injection.',
@@ -111,7 +141,13 @@ export async function seedDemo(services: Services, password: string): Promise<vo
       vdc: 650,
       fundamentalFrequency: 50,
       carrierFrequency: 8000,
-      modulation: { method: 'three-phase', ma: 1.1, zeroSequence: 'min-max', sampling: 'regular-symmetric', carrierPhase: 0 },
+      modulation: {
+        method: 'three-phase',
+        ma: 1.1,
+        zeroSequence: 'min-max',
+        sampling: 'regular-symmetric',
+        carrierPhase: 0,
+      },
       load: DRIVE_LOAD,
     },
     note: 'Regular-symmetric sampling as the controller will run it.',
@@ -123,10 +159,14 @@ export async function seedDemo(services: Services, password: string): Promise<vo
   });
 
   const csv = benchCaptureCsv();
-  await captures.upload(ravi, { buffer: Buffer.from(csv, 'utf8'), originalname: 'kestrel-bench-prototype-run1.csv' }, {
-    name: 'Bench prototype, run 1',
-    projectId: pump.id,
-  });
+  await captures.upload(
+    ravi,
+    { buffer: Buffer.from(csv, 'utf8'), originalname: 'kestrel-bench-prototype-run1.csv' },
+    {
+      name: 'Bench prototype, run 1',
+      projectId: pump.id,
+    },
+  );
 }
 
 /** Small deterministic PRNG (mulberry32), so every new database gets the same capture. */
@@ -150,9 +190,13 @@ export function benchCaptureCsv(): string {
   const sampleRate = 250_000;
   const frequency = BENCH_DESIGN.fundamentalFrequency;
   const rows = (2 * sampleRate) / frequency;
-  const waveform = modulationVoltages(designModulation(BENCH_DESIGN)).phases[0]?.waveform as Waveform;
+  const waveform = modulationVoltages(designModulation(BENCH_DESIGN)).phases[0]
+    ?.waveform as Waveform;
   const angles = Array.from({ length: rows }, (_, k) => ((TAU * frequency * k) / sampleRate) % TAU);
-  const current = rlCurrentAt(waveform, angles, { ...(BENCH_DESIGN.load as { r: number; l: number }), frequency });
+  const current = rlCurrentAt(waveform, angles, {
+    ...(BENCH_DESIGN.load as { r: number; l: number }),
+    frequency,
+  });
   const random = mulberry32(0x6b657374); // "kest"
   const noise = (scale: number) => (random() + random() + random() - 1.5) * scale;
   const lines = ['time_s,voltage_v,current_a'];

@@ -55,7 +55,10 @@ export class StudyService {
     return this.models.sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, work);
   }
 
-  async list(teamId: string, filter: { projectId?: string; q?: string; limit: number; offset: number }): Promise<StudyDto[]> {
+  async list(
+    teamId: string,
+    filter: { projectId?: string; q?: string; limit: number; offset: number },
+  ): Promise<StudyDto[]> {
     const and: unknown[] = [];
     if (filter.q) {
       and.push({
@@ -66,12 +69,18 @@ export class StudyService {
       });
     }
     const studies = await this.models.Study.findAll({
-      where: { teamId, ...(filter.projectId ? { projectId: filter.projectId } : {}), ...(and.length ? { [Op.and]: and } : {}) },
+      where: {
+        teamId,
+        ...(filter.projectId ? { projectId: filter.projectId } : {}),
+        ...(and.length ? { [Op.and]: and } : {}),
+      },
       order: [['updatedAt', 'DESC']],
       limit: filter.limit,
       offset: filter.offset,
     });
-    return Promise.all(studies.map(async (study) => toDto(study, await this.currentRevision(study))));
+    return Promise.all(
+      studies.map(async (study) => toDto(study, await this.currentRevision(study))),
+    );
   }
 
   async get(teamId: string, id: string): Promise<StudyDto> {
@@ -83,22 +92,57 @@ export class StudyService {
     await this.projects.find(principal.teamId, projectId);
     return this.transaction(async (transaction) => {
       const study = await this.models.Study.create(
-        { teamId: principal.teamId, projectId, currentRevision: 1, name: content.name, method: content.design.modulation.method },
+        {
+          teamId: principal.teamId,
+          projectId,
+          currentRevision: 1,
+          name: content.name,
+          method: content.design.modulation.method,
+        },
         { transaction },
       );
-      const revision = await this.insertRevision(study.id, 1, content, principal.user.id, null, transaction);
-      await this.audit.record(principal, 'study.create', 'study', study.id, { name: content.name, projectId }, transaction);
+      const revision = await this.insertRevision(
+        study.id,
+        1,
+        content,
+        principal.user.id,
+        null,
+        transaction,
+      );
+      await this.audit.record(
+        principal,
+        'study.create',
+        'study',
+        study.id,
+        { name: content.name, projectId },
+        transaction,
+      );
       return toDto(study, revision);
     });
   }
 
-  async update(principal: Principal, id: string, baseRevision: number, content: StudyContent): Promise<StudyDto> {
-    return this.saveRevision(principal, id, baseRevision, () => Promise.resolve({ content, restoredFrom: null }));
+  async update(
+    principal: Principal,
+    id: string,
+    baseRevision: number,
+    content: StudyContent,
+  ): Promise<StudyDto> {
+    return this.saveRevision(principal, id, baseRevision, () =>
+      Promise.resolve({ content, restoredFrom: null }),
+    );
   }
 
-  async restore(principal: Principal, id: string, revision: number, baseRevision: number): Promise<StudyDto> {
+  async restore(
+    principal: Principal,
+    id: string,
+    revision: number,
+    baseRevision: number,
+  ): Promise<StudyDto> {
     return this.saveRevision(principal, id, baseRevision, async (study, transaction) => {
-      const old = await this.models.StudyRevision.findOne({ where: { studyId: study.id, revision }, transaction });
+      const old = await this.models.StudyRevision.findOne({
+        where: { studyId: study.id, revision },
+        transaction,
+      });
       if (!old) throw notFound(`Revision ${revision} of this study`);
       return { content: contentOf(old), restoredFrom: revision };
     });
@@ -108,13 +152,21 @@ export class StudyService {
     const study = await this.find(principal.teamId, id);
     const current = await this.currentRevision(study);
     const content = contentOf(current);
-    return this.create(principal, study.projectId, { ...content, name: name ?? `${content.name} (copy)`.slice(0, 120) });
+    return this.create(principal, study.projectId, {
+      ...content,
+      name: name ?? `${content.name} (copy)`.slice(0, 120),
+    });
   }
 
   async revisions(teamId: string, id: string): Promise<StudyRevisionDto[]> {
     const study = await this.find(teamId, id);
-    const rows = await this.models.StudyRevision.findAll({ where: { studyId: study.id }, order: [['revision', 'DESC']] });
-    const authors = await this.models.User.findAll({ where: { id: rows.map((r) => r.authorId).filter((v): v is string => !!v) } });
+    const rows = await this.models.StudyRevision.findAll({
+      where: { studyId: study.id },
+      order: [['revision', 'DESC']],
+    });
+    const authors = await this.models.User.findAll({
+      where: { id: rows.map((r) => r.authorId).filter((v): v is string => !!v) },
+    });
     const emails = new Map(authors.map((a) => [a.id, a.email]));
     return rows.map((row) => ({
       revision: row.revision,
@@ -132,7 +184,9 @@ export class StudyService {
   }
 
   private async currentRevision(study: StudyRow): Promise<StudyRevisionRow> {
-    const row = await this.models.StudyRevision.findOne({ where: { studyId: study.id, revision: study.currentRevision } });
+    const row = await this.models.StudyRevision.findOne({
+      where: { studyId: study.id, revision: study.currentRevision },
+    });
     if (!row) throw new Error(`study ${study.id} has no revision ${study.currentRevision}`);
     return row;
   }
@@ -141,17 +195,28 @@ export class StudyService {
     principal: Principal,
     id: string,
     baseRevision: number,
-    makeContent: (study: StudyRow, t: Transaction) => Promise<{ content: StudyContent; restoredFrom: number | null }>,
+    makeContent: (
+      study: StudyRow,
+      t: Transaction,
+    ) => Promise<{ content: StudyContent; restoredFrom: number | null }>,
   ): Promise<StudyDto> {
     const stale = (current: number) =>
       conflict(
         `This study changed since you loaded it: you edited revision ${baseRevision}, the latest is ${current}. ` +
           'Nothing was saved; reload the study, re-apply your change and save again.',
-        [{ path: 'baseRevision', message: `baseRevision must be the current revision ${current}; got ${baseRevision}` }],
+        [
+          {
+            path: 'baseRevision',
+            message: `baseRevision must be the current revision ${current}; got ${baseRevision}`,
+          },
+        ],
       );
     try {
       return await this.transaction(async (transaction) => {
-        const study = await this.models.Study.findOne({ where: { id, teamId: principal.teamId }, transaction });
+        const study = await this.models.Study.findOne({
+          where: { id, teamId: principal.teamId },
+          transaction,
+        });
         if (!study) throw notFound('That study');
         if (study.currentRevision !== baseRevision) throw stale(study.currentRevision);
         const { content, restoredFrom } = await makeContent(study, transaction);
@@ -163,7 +228,14 @@ export class StudyService {
           { where: { id, currentRevision: baseRevision }, transaction },
         );
         if (changed !== 1) throw stale(next);
-        const revision = await this.insertRevision(id, next, content, principal.user.id, restoredFrom, transaction);
+        const revision = await this.insertRevision(
+          id,
+          next,
+          content,
+          principal.user.id,
+          restoredFrom,
+          transaction,
+        );
         await this.audit.record(
           principal,
           restoredFrom ? 'study.restore' : 'study.update',
@@ -216,7 +288,9 @@ export class StudyService {
  * without its method (with vdc and mf or frequencyRatio), the load with the fundamental
  * frequency, and the filter. The service itself reads only `design`.
  */
-function legacyColumns(design: InverterDesign): Pick<StudyRevisionRow, 'parameters' | 'load' | 'filter'> {
+function legacyColumns(
+  design: InverterDesign,
+): Pick<StudyRevisionRow, 'parameters' | 'load' | 'filter'> {
   const { method: _method, ...parameters } = designModulation(design);
   const { load, filter } = design;
   return {
@@ -230,8 +304,11 @@ function contentOf(row: StudyRevisionRow): StudyContent {
   return contentDto(row);
 }
 
-function contentDto(row: StudyRevisionRow): Omit<StudyRevisionDto, 'revision' | 'authorEmail' | 'restoredFrom' | 'createdAt'> {
-  if (!row.design) throw new Error(`study revision ${row.id} has no design (migration 0002 not applied?)`);
+function contentDto(
+  row: StudyRevisionRow,
+): Omit<StudyRevisionDto, 'revision' | 'authorEmail' | 'restoredFrom' | 'createdAt'> {
+  if (!row.design)
+    throw new Error(`study revision ${row.id} has no design (migration 0002 not applied?)`);
   return { name: row.name, design: row.design, note: row.note };
 }
 

@@ -26,8 +26,11 @@ export interface StudyShareDto {
 
 /** Control characters (other than tab and newline) never reach a mail body or subject. */
 const stripControls = (text: string, keepNewlines: boolean): string =>
-  // eslint-disable-next-line no-control-regex
-  text.replace(keepNewlines ? /[\u0000-\u0008\u000b-\u001f\u007f]/g : /[\u0000-\u001f\u007f]/g, keepNewlines ? '' : ' ');
+  text.replace(
+    // eslint-disable-next-line no-control-regex
+    keepNewlines ? /[\u0000-\u0008\u000b-\u001f\u007f]/g : /[\u0000-\u001f\u007f]/g,
+    keepNewlines ? '' : ' ',
+  );
 
 /** E-mails a link to a study's printable report through the mail path, and audits it. */
 export class StudyShareService {
@@ -42,8 +45,12 @@ export class StudyShareService {
 
   async share(principal: Principal, studyId: string, input: ShareInput): Promise<StudyShareDto> {
     const study = await this.studies.find(principal.teamId, studyId);
-    const revision = await this.models.StudyRevision.findOne({ where: { studyId: study.id, revision: study.currentRevision } });
-    const report = revision?.design ? await this.compute.report(revision.design, {}, 'study.design', []) : null;
+    const revision = await this.models.StudyRevision.findOne({
+      where: { studyId: study.id, revision: study.currentRevision },
+    });
+    const report = revision?.design
+      ? await this.compute.report(revision.design, {}, 'study.design', [])
+      : null;
     const author = revision?.authorId ? await this.models.User.findByPk(revision.authorId) : null;
     const to = input.email.toLowerCase();
     const link = `${this.publicUrl}/studies/${study.id}/report`;
@@ -56,7 +63,12 @@ export class StudyShareService {
       (report ? `${reportFigures(report)}\n\n` : '') +
       (message ? `Message from ${principal.user.name}:\n${message}\n\n` : '') +
       `Caution. ${REPORT_CAUTION}\n`;
-    await this.mailer.send({ to, subject: `Pulsewright study report: ${name}`, text, teamId: principal.teamId });
+    await this.mailer.send({
+      to,
+      subject: `Pulsewright study report: ${name}`,
+      text,
+      teamId: principal.teamId,
+    });
     await this.audit.record(principal, 'study.share', 'study', study.id, {
       to,
       revision: study.currentRevision,
@@ -71,20 +83,34 @@ const fixed = (value: number, unit: string): string => `${Number(value.toPrecisi
 
 /** The headline figures of the design report, as plain text lines (every figure from the report). */
 export function reportFigures(report: DesignReport): string {
-  const lines = [`Key figures (revision's design report): ${report.methodLabel}${report.frequencyRatio === null ? '' : `, mf ${report.frequencyRatio}`}`];
+  const lines = [
+    `Key figures (revision's design report): ${report.methodLabel}${report.frequencyRatio === null ? '' : `, mf ${report.frequencyRatio}`}`,
+  ];
   const { bridge, lineToLine, output, limitCheck } = report;
   lines.push(
     `- ${bridge.name}: fundamental ${fixed(bridge.fundamental, 'V peak')}, THD ${percent(bridge.thd)}, WTHD ${percent(bridge.wthd)} (exact, whole waveform)`,
   );
-  if (lineToLine) lines.push(`- ${lineToLine.name}: fundamental ${fixed(lineToLine.fundamental, 'V peak')}, THD ${percent(lineToLine.thd)}`);
-  if (output) lines.push(`- ${output.name}: fundamental ${fixed(output.fundamental, 'V peak')}, THD ${percent(output.thd)} (to order ${report.analysisOrder}; at most ${percent(output.thdUpperBound)} over the whole waveform)`);
+  if (lineToLine)
+    lines.push(
+      `- ${lineToLine.name}: fundamental ${fixed(lineToLine.fundamental, 'V peak')}, THD ${percent(lineToLine.thd)}`,
+    );
+  if (output)
+    lines.push(
+      `- ${output.name}: fundamental ${fixed(output.fundamental, 'V peak')}, THD ${percent(output.thd)} (to order ${report.analysisOrder}; at most ${percent(output.thdUpperBound)} over the whole waveform)`,
+    );
   const phase = report.currents[0];
   if (phase) {
-    lines.push(`- ${phase.inverter.name}: ${fixed(phase.inverter.rms, 'A rms')}, ripple ${fixed(phase.inverter.ripplePeakToPeak, 'A peak-to-peak')}`);
+    lines.push(
+      `- ${phase.inverter.name}: ${fixed(phase.inverter.rms, 'A rms')}, ripple ${fixed(phase.inverter.ripplePeakToPeak, 'A peak-to-peak')}`,
+    );
     if (phase.load) lines.push(`- ${phase.load.name}: ${fixed(phase.load.rms, 'A rms')}`);
   }
-  if (report.loadPower !== null) lines.push(`- power into the load resistance: ${fixed(report.loadPower, 'W')}`);
-  if (report.filter) lines.push(`- filter resonance: ${fixed(report.filter.characteristics.resonanceFrequency, 'Hz')}`);
+  if (report.loadPower !== null)
+    lines.push(`- power into the load resistance: ${fixed(report.loadPower, 'W')}`);
+  if (report.filter)
+    lines.push(
+      `- filter resonance: ${fixed(report.filter.characteristics.resonanceFrequency, 'Hz')}`,
+    );
   lines.push(
     `- ${limitCheck.standard.name}-${limitCheck.standard.edition} voltage limits (recalled from memory): ${limitCheck.pass ? 'pass' : 'fail'}` +
       ` (THD ${percent(limitCheck.thdWholeWaveform)} whole waveform, limit ${percent(limitCheck.limits.thd)})`,

@@ -22,7 +22,14 @@ export function maSweepPlan(input: MaSweepInput): JobPlan {
     cost: maSweepCost(input),
     chunks,
     async runChunk(index: number, pool: ComputePool) {
-      const part = await pool.run('maSweepChunk', { input, index }, { ...(index === 0 ? {} : { queueTimeLimitMs: null }), what: `Chunk ${index + 1} of ${chunks} of this ma sweep` });
+      const part = await pool.run(
+        'maSweepChunk',
+        { input, index },
+        {
+          ...(index === 0 ? {} : { queueTimeLimitMs: null }),
+          what: `Chunk ${index + 1} of ${chunks} of this ma sweep`,
+        },
+      );
       appendMaSweepPart(total, part);
     },
     result: () => total,
@@ -43,7 +50,10 @@ export function sheSweepPlan(input: SheSweepInput): JobPlan {
       const part = await pool.run(
         'sheSweepChunk',
         { input, index, ...(seed ? { seed } : {}) },
-        { ...(index === 0 ? {} : { queueTimeLimitMs: null }), what: `Chunk ${index + 1} of ${chunks} of this SHE sweep` },
+        {
+          ...(index === 0 ? {} : { queueTimeLimitMs: null }),
+          what: `Chunk ${index + 1} of ${chunks} of this SHE sweep`,
+        },
       );
       solved.push(...part.points);
       iterations += part.iterations;

@@ -84,7 +84,10 @@ export function maSweepChunk(input: MaSweepInput, index: number): MaSweepResult 
     wthd: exact.wthd.slice(skip),
     spectrumThd: part.thd.slice(skip),
     spectrumWthd: part.wthd.slice(skip),
-    harmonics: part.harmonics.map((series) => ({ order: series.order, amplitude: series.amplitude.slice(skip) })),
+    harmonics: part.harmonics.map((series) => ({
+      order: series.order,
+      amplitude: series.amplitude.slice(skip),
+    })),
   };
 }
 
@@ -144,7 +147,11 @@ export function sheSweepChunkCount(input: SheSweepInput): number {
  * follows one branch (Patel and Hoft, 1973, with continuation). Pure: it runs in a compute
  * worker; the job appends the points in order and passes the last solved angles on.
  */
-export function sheSweepChunk(input: SheSweepInput, index: number, seed: number[] | undefined): { points: SheSweepPointResult[]; iterations: number } {
+export function sheSweepChunk(
+  input: SheSweepInput,
+  index: number,
+  seed: number[] | undefined,
+): { points: SheSweepPointResult[]; iterations: number } {
   const { from, to, points } = input.fundamental;
   const [k0, k1] = chunkBounds(points, SHE_POINTS_PER_CHUNK)[index] as [number, number];
   const grid = Array.from({ length: k1 - k0 + 1 }, (_, i) => gridValue(from, to, points, k0 + i));
@@ -155,7 +162,11 @@ export function sheSweepChunk(input: SheSweepInput, index: number, seed: number[
       vdc: input.vdc,
       count: input.count,
       eliminate: input.eliminate,
-      fundamentals: { from: grid[0] as number, to: grid[grid.length - 1] as number, points: grid.length },
+      fundamentals: {
+        from: grid[0] as number,
+        to: grid[grid.length - 1] as number,
+        points: grid.length,
+      },
       ...(seed ? { angles: seed } : {}),
       maxBranches: 1,
     });
@@ -166,8 +177,14 @@ export function sheSweepChunk(input: SheSweepInput, index: number, seed: number[
   const solved = grid.slice(skip).map((fundamental): SheSweepPointResult => {
     const hit = part.branches
       .flatMap((b) => b.points)
-      .find((p) => p.converged && Math.abs(p.fundamental - fundamental) <= 1e-9 * Math.max(1, Math.abs(fundamental)));
-    return hit ? { fundamental, angles: hit.angles, converged: true } : { fundamental, angles: [], converged: false };
+      .find(
+        (p) =>
+          p.converged &&
+          Math.abs(p.fundamental - fundamental) <= 1e-9 * Math.max(1, Math.abs(fundamental)),
+      );
+    return hit
+      ? { fundamental, angles: hit.angles, converged: true }
+      : { fundamental, angles: [], converged: false };
   });
   return { points: solved, iterations: part.iterations };
 }

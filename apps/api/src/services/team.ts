@@ -37,53 +37,99 @@ export class TeamService {
   ) {}
 
   async listMembers(teamId: string): Promise<MemberDto[]> {
-    const memberships = await this.models.Membership.findAll({ where: { teamId }, order: [['createdAt', 'ASC']] });
-    const users = await this.models.User.findAll({ where: { id: memberships.map((m) => m.userId) } });
+    const memberships = await this.models.Membership.findAll({
+      where: { teamId },
+      order: [['createdAt', 'ASC']],
+    });
+    const users = await this.models.User.findAll({
+      where: { id: memberships.map((m) => m.userId) },
+    });
     const byId = new Map(users.map((u) => [u.id, u]));
     return memberships.flatMap((m) => {
       const user = byId.get(m.userId);
-      return user ? [{ user: { id: user.id, email: user.email, name: user.name }, role: m.role, joinedAt: iso(m.createdAt) }] : [];
+      return user
+        ? [
+            {
+              user: { id: user.id, email: user.email, name: user.name },
+              role: m.role,
+              joinedAt: iso(m.createdAt),
+            },
+          ]
+        : [];
     });
   }
 
   async changeRole(principal: Principal, userId: string, role: Role): Promise<MemberDto> {
     return this.models.sequelize.transaction(async (transaction) => {
-      const membership = await this.models.Membership.findOne({ where: { teamId: principal.teamId, userId }, transaction });
+      const membership = await this.models.Membership.findOne({
+        where: { teamId: principal.teamId, userId },
+        transaction,
+      });
       if (!membership) throw notFound('That member');
-      if (membership.role === 'admin' && role !== 'admin') await this.assertAnotherAdmin(principal.teamId, userId);
+      if (membership.role === 'admin' && role !== 'admin')
+        await this.assertAnotherAdmin(principal.teamId, userId);
       const before = membership.role;
       await membership.update({ role }, { transaction });
-      await this.audit.record(principal, 'member.role-change', 'user', userId, { from: before, to: role }, transaction);
+      await this.audit.record(
+        principal,
+        'member.role-change',
+        'user',
+        userId,
+        { from: before, to: role },
+        transaction,
+      );
       const user = await this.models.User.findByPk(userId, { transaction });
-      return { user: { id: userId, email: user?.email ?? '', name: user?.name ?? '' }, role, joinedAt: iso(membership.createdAt) };
+      return {
+        user: { id: userId, email: user?.email ?? '', name: user?.name ?? '' },
+        role,
+        joinedAt: iso(membership.createdAt),
+      };
     });
   }
 
   async removeMember(principal: Principal, userId: string): Promise<void> {
-    const membership = await this.models.Membership.findOne({ where: { teamId: principal.teamId, userId } });
+    const membership = await this.models.Membership.findOne({
+      where: { teamId: principal.teamId, userId },
+    });
     if (!membership) throw notFound('That member');
     if (membership.role === 'admin') await this.assertAnotherAdmin(principal.teamId, userId);
     await membership.destroy();
     await this.auth.endSessions(userId, principal.teamId);
-    await this.models.ApiKey.update({ revokedAt: new Date() }, { where: { userId, teamId: principal.teamId, revokedAt: null } });
+    await this.models.ApiKey.update(
+      { revokedAt: new Date() },
+      { where: { userId, teamId: principal.teamId, revokedAt: null } },
+    );
     await this.audit.record(principal, 'member.remove', 'user', userId);
   }
 
   private async assertAnotherAdmin(teamId: string, userId: string): Promise<void> {
-    const others = await this.models.Membership.count({ where: { teamId, role: 'admin', userId: { [Op.ne]: userId } } });
-    if (others === 0) throw conflict('The team must keep at least one admin; make someone else admin first.');
+    const others = await this.models.Membership.count({
+      where: { teamId, role: 'admin', userId: { [Op.ne]: userId } },
+    });
+    if (others === 0)
+      throw conflict('The team must keep at least one admin; make someone else admin first.');
   }
 
   async listInvitations(teamId: string): Promise<InvitationDto[]> {
-    const rows = await this.models.Invitation.findAll({ where: { teamId }, order: [['createdAt', 'DESC']] });
+    const rows = await this.models.Invitation.findAll({
+      where: { teamId },
+      order: [['createdAt', 'DESC']],
+    });
     return rows.map(invitationDto);
   }
 
   async invite(principal: Principal, email: string, role: Role): Promise<InvitationDto> {
     const address = email.toLowerCase();
     const existing = await this.models.User.findOne({ where: { email: address } });
-    if (existing && (await this.models.Membership.count({ where: { userId: existing.id, teamId: principal.teamId } }))) {
-      throw conflict(`${address} is already a member of the team.`, [{ path: 'email', message: `email ${address} is already a member` }]);
+    if (
+      existing &&
+      (await this.models.Membership.count({
+        where: { userId: existing.id, teamId: principal.teamId },
+      }))
+    ) {
+      throw conflict(`${address} is already a member of the team.`, [
+        { path: 'email', message: `email ${address} is already a member` },
+      ]);
     }
     const token = newSecret(ONE_TIME_PREFIX);
     const row = await this.models.Invitation.create({
@@ -107,7 +153,10 @@ export class TeamService {
       teamId: principal.teamId,
       secrets: [token],
     });
-    await this.audit.record(principal, 'invitation.create', 'invitation', row.id, { email: address, role });
+    await this.audit.record(principal, 'invitation.create', 'invitation', row.id, {
+      email: address,
+      role,
+    });
     return invitationDto(row);
   }
 
@@ -115,9 +164,14 @@ export class TeamService {
     const row = await this.models.Invitation.findOne({ where: { id, teamId: principal.teamId } });
     if (!row) throw notFound('That invitation');
     // Conditional, like acceptance: an invitation accepted meanwhile stays accepted.
-    const [changed] = await this.models.Invitation.update({ withdrawnAt: new Date() }, { where: { id: row.id, acceptedAt: null } });
+    const [changed] = await this.models.Invitation.update(
+      { withdrawnAt: new Date() },
+      { where: { id: row.id, acceptedAt: null } },
+    );
     if (!changed) throw conflict('That invitation was already accepted.');
-    await this.audit.record(principal, 'invitation.withdraw', 'invitation', row.id, { email: row.email });
+    await this.audit.record(principal, 'invitation.withdraw', 'invitation', row.id, {
+      email: row.email,
+    });
   }
 
   /**
@@ -135,20 +189,38 @@ export class TeamService {
       if (!(await this.auth.checkPassword(existing, password))) {
         const detail = `${row.email} already has a Pulsewright account: enter that account's current password to join (it is not changed here). Forgot it? Ask for a password reset first.`;
         // 401 as for a failed sign-in; the item lets a form mark the password field.
-        throw new HttpError(401, detail, [{ path: 'password', message: "password must be the account's current password" }]);
+        throw new HttpError(401, detail, [
+          { path: 'password', message: "password must be the account's current password" },
+        ]);
       }
     }
     const passwordHash = existing ? null : await this.auth.hashPassword(password);
     const userId = await this.models.sequelize.transaction(async (transaction) => {
-      await this.consume(this.models.Invitation, { id: row.id, acceptedAt: null, withdrawnAt: null }, 'acceptedAt', transaction, invitationClosed);
+      await this.consume(
+        this.models.Invitation,
+        { id: row.id, acceptedAt: null, withdrawnAt: null },
+        'acceptedAt',
+        transaction,
+        invitationClosed,
+      );
       let user = existing;
       if (!user) {
         // Made meanwhile (two invitations to one new address accepted at once): the unique
         // e-mail index refuses the second, and it is asked to sign in instead.
-        user = await this.models.User.create({ email: row.email, name, passwordHash }, { transaction });
+        user = await this.models.User.create(
+          { email: row.email, name, passwordHash },
+          { transaction },
+        );
       }
-      const already = await this.models.Membership.findOne({ where: { teamId: row.teamId, userId: user.id }, transaction });
-      if (!already) await this.models.Membership.create({ teamId: row.teamId, userId: user.id, role: row.role }, { transaction });
+      const already = await this.models.Membership.findOne({
+        where: { teamId: row.teamId, userId: user.id },
+        transaction,
+      });
+      if (!already)
+        await this.models.Membership.create(
+          { teamId: row.teamId, userId: user.id, role: row.role },
+          { transaction },
+        );
       await this.audit.record(
         { userId: user.id, email: user.email, teamId: row.teamId },
         'invitation.accept',
@@ -204,7 +276,12 @@ export class TeamService {
       teamId,
       secrets: [token],
     });
-    await this.audit.record({ userId: user.id, email: user.email, teamId }, 'auth.password-reset-request', 'user', user.id);
+    await this.audit.record(
+      { userId: user.id, email: user.email, teamId },
+      'auth.password-reset-request',
+      'user',
+      user.id,
+    );
   }
 
   /**
@@ -220,12 +297,24 @@ export class TeamService {
     const passwordHash = await this.auth.hashPassword(password);
     const teamId = await this.auth.firstTeamOf(row.userId);
     await this.models.sequelize.transaction(async (transaction) => {
-      await this.consume(this.models.PasswordReset, { id: row.id }, 'usedAt', transaction, resetClosed);
+      await this.consume(
+        this.models.PasswordReset,
+        { id: row.id },
+        'usedAt',
+        transaction,
+        resetClosed,
+      );
       const now = new Date();
       await this.models.User.update({ passwordHash }, { where: { id: row.userId }, transaction });
       const sessionsEnded = await this.auth.endSessions(row.userId, undefined, transaction);
-      const [keysRevoked] = await this.models.ApiKey.update({ revokedAt: now }, { where: { userId: row.userId, revokedAt: null }, transaction });
-      await this.models.PasswordReset.update({ usedAt: now }, { where: { userId: row.userId, usedAt: null }, transaction });
+      const [keysRevoked] = await this.models.ApiKey.update(
+        { revokedAt: now },
+        { where: { userId: row.userId, revokedAt: null }, transaction },
+      );
+      await this.models.PasswordReset.update(
+        { usedAt: now },
+        { where: { userId: row.userId, usedAt: null }, transaction },
+      );
       await this.audit.record(
         { userId: row.userId, email: null, teamId },
         'auth.password-reset',
@@ -238,12 +327,14 @@ export class TeamService {
   }
 }
 
-const isOpen = (row: InvitationRow): boolean => !row.acceptedAt && !row.withdrawnAt && row.expiresAt > new Date();
+const isOpen = (row: InvitationRow): boolean =>
+  !row.acceptedAt && !row.withdrawnAt && row.expiresAt > new Date();
 
 const invitationClosed = (): HttpError =>
-  badRequest('This invitation is unknown, used, withdrawn or expired; ask an admin for a new one.', [
-    { path: 'token', message: 'token is not an open invitation' },
-  ]);
+  badRequest(
+    'This invitation is unknown, used, withdrawn or expired; ask an admin for a new one.',
+    [{ path: 'token', message: 'token is not an open invitation' }],
+  );
 
 const resetClosed = (): HttpError =>
   badRequest('This reset link is unknown, used or expired; ask for a new one.', [
@@ -251,6 +342,19 @@ const resetClosed = (): HttpError =>
   ]);
 
 function invitationDto(row: InvitationRow): InvitationDto {
-  const status = row.acceptedAt ? 'accepted' : row.withdrawnAt ? 'withdrawn' : row.expiresAt <= new Date() ? 'expired' : 'open';
-  return { id: row.id, email: row.email, role: row.role, status, createdAt: iso(row.createdAt), expiresAt: iso(row.expiresAt) };
+  const status = row.acceptedAt
+    ? 'accepted'
+    : row.withdrawnAt
+      ? 'withdrawn'
+      : row.expiresAt <= new Date()
+        ? 'expired'
+        : 'open';
+  return {
+    id: row.id,
+    email: row.email,
+    role: row.role,
+    status,
+    createdAt: iso(row.createdAt),
+    expiresAt: iso(row.expiresAt),
+  };
 }

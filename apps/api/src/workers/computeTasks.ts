@@ -1,4 +1,10 @@
-import type { AnalyseDesignOptions, FftWindowName, InverterDesign, Modulation, TimerTableOptions } from '@pulsewright/modulation';
+import type {
+  AnalyseDesignOptions,
+  FftWindowName,
+  InverterDesign,
+  Modulation,
+  TimerTableOptions,
+} from '@pulsewright/modulation';
 import {
   analyseSamples,
   assertDesign,
@@ -14,7 +20,12 @@ import {
   type VoltageOutput,
 } from '../services/compute.js';
 import { parseCaptureCsv } from '../services/captureCsv.js';
-import { maSweepChunk, sheSweepChunk, type MaSweepInput, type SheSweepInput } from '../services/sweeps.js';
+import {
+  maSweepChunk,
+  sheSweepChunk,
+  type MaSweepInput,
+  type SheSweepInput,
+} from '../services/sweeps.js';
 
 /**
  * The work the compute pool runs, by name: each entry calls the same service function (and so the
@@ -22,27 +33,39 @@ import { maSweepChunk, sheSweepChunk, type MaSweepInput, type SheSweepInput } fr
  * Arguments and results cross the thread boundary by structured clone: plain data only.
  */
 export const COMPUTE_TASKS = {
-  spectrum: (a: { modulation: Modulation; maxOrder: number; output?: VoltageOutput }) => computeSpectrum(a.modulation, a.maxOrder, a.output),
-  waveform: (a: { modulation: Modulation; output?: VoltageOutput }) => modulationOutput(a.modulation, a.output),
-  designReport: (a: { design: InverterDesign; options: AnalyseDesignOptions; field: string }) => designReport(a.design, a.options, a.field),
-  designSpectrum: (a: { design: InverterDesign; maxOrder: number; field: string }) => designSpectrum(a.design, a.maxOrder, a.field),
+  spectrum: (a: { modulation: Modulation; maxOrder: number; output?: VoltageOutput }) =>
+    computeSpectrum(a.modulation, a.maxOrder, a.output),
+  waveform: (a: { modulation: Modulation; output?: VoltageOutput }) =>
+    modulationOutput(a.modulation, a.output),
+  designReport: (a: { design: InverterDesign; options: AnalyseDesignOptions; field: string }) =>
+    designReport(a.design, a.options, a.field),
+  designSpectrum: (a: { design: InverterDesign; maxOrder: number; field: string }) =>
+    designSpectrum(a.design, a.maxOrder, a.field),
   assertDesign: (a: { design: InverterDesign; field: string }) => {
     assertDesign(a.design, a.field);
     return true;
   },
-  loadCurrent: (a: { design: InverterDesign; points?: number }) => computeLoadCurrent(a.design, a.points),
-  filter: (a: { design: InverterDesign; options: Pick<AnalyseDesignOptions, 'maxOrder' | 'points'> }) => computeFilter(a.design, a.options),
-  limits: (a: { design: InverterDesign; busVoltage?: number }) => checkDesignLimits(a.design, a.busVoltage),
-  timerTable: (a: { options: TimerTableOptions; format: TimerFormat; prefix?: string }) => computeTimerTable(a.options, a.format, a.prefix),
+  loadCurrent: (a: { design: InverterDesign; points?: number }) =>
+    computeLoadCurrent(a.design, a.points),
+  filter: (a: {
+    design: InverterDesign;
+    options: Pick<AnalyseDesignOptions, 'maxOrder' | 'points'>;
+  }) => computeFilter(a.design, a.options),
+  limits: (a: { design: InverterDesign; busVoltage?: number }) =>
+    checkDesignLimits(a.design, a.busVoltage),
+  timerTable: (a: { options: TimerTableOptions; format: TimerFormat; prefix?: string }) =>
+    computeTimerTable(a.options, a.format, a.prefix),
   captureSpectrum: (a: {
     samples: Float64Array | number[];
     sampleRate: number;
     options: { window: FftWindowName; maxOrder: number; fundamentalFrequency?: number };
   }) => analyseSamples(a.samples, a.sampleRate, a.options),
   // A Buffer arrives as a Uint8Array over the same memory.
-  parseCapture: (a: { file: Uint8Array }) => parseCaptureCsv(Buffer.from(a.file.buffer, a.file.byteOffset, a.file.byteLength)),
+  parseCapture: (a: { file: Uint8Array }) =>
+    parseCaptureCsv(Buffer.from(a.file.buffer, a.file.byteOffset, a.file.byteLength)),
   maSweepChunk: (a: { input: MaSweepInput; index: number }) => maSweepChunk(a.input, a.index),
-  sheSweepChunk: (a: { input: SheSweepInput; index: number; seed?: number[] }) => sheSweepChunk(a.input, a.index, a.seed),
+  sheSweepChunk: (a: { input: SheSweepInput; index: number; seed?: number[] }) =>
+    sheSweepChunk(a.input, a.index, a.seed),
 } as const;
 
 export type ComputeTasks = typeof COMPUTE_TASKS;

@@ -14,7 +14,9 @@ export interface WorkerTask {
  * What a worker answers: the value, or the problem a request must answer with (an HttpError does
  * not survive structured clone with its status and items, so it crosses as plain data).
  */
-export type WorkerAnswer = { ok: true; value: unknown } | { ok: false; status: number; detail: string; errors: ProblemItem[] };
+export type WorkerAnswer =
+  | { ok: true; value: unknown }
+  | { ok: false; status: number; detail: string; errors: ProblemItem[] };
 
 /**
  * The compute pool's worker (the export piscina calls by name): says it started (the pool's time limit
@@ -30,7 +32,8 @@ export function runComputeTask(task: WorkerTask): WorkerAnswer {
     return { ok: true, value: run(task.args) };
   } catch (error) {
     const problem = asBadRequest('', error);
-    if (problem instanceof HttpError) return { ok: false, status: problem.status, detail: problem.detail, errors: problem.errors };
+    if (problem instanceof HttpError)
+      return { ok: false, status: problem.status, detail: problem.detail, errors: problem.errors };
     throw problem;
   }
 }

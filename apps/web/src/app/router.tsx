@@ -10,22 +10,53 @@ import { CautionsPage } from './CautionsPage';
 const named = <K extends string>(loader: () => Promise<Record<K, React.ComponentType>>, name: K) =>
   lazy(async () => ({ default: (await loader())[name] }));
 
-const StudiesPage = named(() => import('../features/studies/components/StudiesPage'), 'StudiesPage');
-const StudyEditorPage = named(() => import('../features/studies/components/StudyEditorPage'), 'StudyEditorPage');
-const StudyReportPage = named(() => import('../features/studies/components/StudyReportPage'), 'StudyReportPage');
-const ComparePage = named(() => import('../features/studies/components/ComparePage'), 'ComparePage');
+const StudiesPage = named(
+  () => import('../features/studies/components/StudiesPage'),
+  'StudiesPage',
+);
+const StudyEditorPage = named(
+  () => import('../features/studies/components/StudyEditorPage'),
+  'StudyEditorPage',
+);
+const StudyReportPage = named(
+  () => import('../features/studies/components/StudyReportPage'),
+  'StudyReportPage',
+);
+const ComparePage = named(
+  () => import('../features/studies/components/ComparePage'),
+  'ComparePage',
+);
 const SweepsPage = named(() => import('../features/sweeps/components/SweepsPage'), 'SweepsPage');
-const EliminationPage = named(() => import('../features/elimination/components/EliminationPage'), 'EliminationPage');
-const SpaceVectorPage = named(() => import('../features/space-vector/components/SpaceVectorPage'), 'SpaceVectorPage');
-const FirmwarePage = named(() => import('../features/firmware/components/FirmwarePage'), 'FirmwarePage');
-const CapturesPage = named(() => import('../features/captures/components/CapturesPage'), 'CapturesPage');
+const EliminationPage = named(
+  () => import('../features/elimination/components/EliminationPage'),
+  'EliminationPage',
+);
+const SpaceVectorPage = named(
+  () => import('../features/space-vector/components/SpaceVectorPage'),
+  'SpaceVectorPage',
+);
+const FirmwarePage = named(
+  () => import('../features/firmware/components/FirmwarePage'),
+  'FirmwarePage',
+);
+const CapturesPage = named(
+  () => import('../features/captures/components/CapturesPage'),
+  'CapturesPage',
+);
 const TeamPage = named(() => import('../features/team/components/TeamPage'), 'TeamPage');
 
 const router = createBrowserRouter([
   { path: paths.signIn.path, element: <SignInPage /> },
   { path: paths.acceptInvitation.path, element: <AcceptInvitationPage /> },
   { path: paths.resetPassword.path, element: <ResetPasswordPage /> },
-  { path: paths.cautions.path, element: <div className="mx-auto max-w-3xl p-6"><CautionsPage /></div> },
+  {
+    path: paths.cautions.path,
+    element: (
+      <div className="mx-auto max-w-3xl p-6">
+        <CautionsPage />
+      </div>
+    ),
+  },
   {
     path: '/',
     element: <AppShell />,
@@ -42,7 +73,18 @@ const router = createBrowserRouter([
       { path: paths.firmware.path, element: <FirmwarePage /> },
       { path: paths.captures.path, element: <CapturesPage /> },
       { path: paths.team.path, element: <TeamPage /> },
-      { path: '*', element: <p className="text-sm">No page here. <a className="underline" href={paths.studies.getHref()}>Go to the studies</a>.</p> },
+      {
+        path: '*',
+        element: (
+          <p className="text-sm">
+            No page here.{' '}
+            <a className="underline" href={paths.studies.getHref()}>
+              Go to the studies
+            </a>
+            .
+          </p>
+        ),
+      },
     ],
   },
 ]);

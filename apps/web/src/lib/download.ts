@@ -15,7 +15,10 @@ export function downloadText(text: string, fileName: string, type = 'text/plain'
 }
 
 /** RFC 4180 CSV of rows with a header line. */
-export function toCsv(header: readonly string[], rows: readonly (readonly (string | number)[])[]): string {
+export function toCsv(
+  header: readonly string[],
+  rows: readonly (readonly (string | number)[])[],
+): string {
   const cell = (value: string | number) => {
     const text = String(value);
     return /[",\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;

@@ -12,7 +12,13 @@ export async function getMe(): Promise<Me> {
   return unwrap(await api.GET('/api/v1/me'));
 }
 
-export const meQueryOptions = () => queryOptions({ queryKey: ['me', session.getToken()], queryFn: getMe, staleTime: 60_000, retry: false });
+export const meQueryOptions = () =>
+  queryOptions({
+    queryKey: ['me', session.getToken()],
+    queryFn: getMe,
+    staleTime: 60_000,
+    retry: false,
+  });
 
 export function useMe(enabled = true) {
   return useQuery({ ...meQueryOptions(), enabled });

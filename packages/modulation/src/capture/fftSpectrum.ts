@@ -68,7 +68,11 @@ export const MIN_CAPTURE_SAMPLES = 16;
 export const MAX_CAPTURE_SAMPLES = 2 ** 21;
 
 /** Half-width of each window's main lobe, in bins: the DC-leakage zone skipped by the estimate. */
-const MAIN_LOBE_HALF_WIDTH: Readonly<Record<FftWindowName, number>> = { rectangular: 1, hann: 2, 'flat-top': 5 };
+const MAIN_LOBE_HALF_WIDTH: Readonly<Record<FftWindowName, number>> = {
+  rectangular: 1,
+  hann: 2,
+  'flat-top': 5,
+};
 
 /** A harmonic sits on a bin ("coherent sampling") when its bin position is this close to an integer. */
 const COHERENCE_TOLERANCE = 1e-6;
@@ -98,7 +102,12 @@ export function fftSpectrum(
   sampleRate: number,
   options: FftSpectrumOptions = {},
 ): FftSpectrum {
-  const { window = 'hann', fundamentalFrequency, maxOrder = 50, lengthPolicy = 'zero-pad' } = options;
+  const {
+    window = 'hann',
+    fundamentalFrequency,
+    maxOrder = 50,
+    lengthPolicy = 'zero-pad',
+  } = options;
   assertFiniteArray('samples', samples, MIN_CAPTURE_SAMPLES, MAX_CAPTURE_SAMPLES);
   assertNumberInRange('sampleRate', sampleRate, { min: 0, minExclusive: true });
   assertOneOf('window', window, FFT_WINDOWS);
@@ -129,8 +138,20 @@ export function fftSpectrum(
   const resolution = sampleRate / sampleCount;
   const binWidth = sampleRate / fftSize;
   const estimated = fundamentalFrequency === undefined;
-  const f0 = fundamentalFrequency ?? estimateFundamental(bins.amplitude, samples, sampleCount, sampleRate, fftSize, window);
-  const harmonicList = readHarmonics(bins, out, fftSize, weightSum, f0, binWidth, resolution, maxOrder, sampleRate);
+  const f0 =
+    fundamentalFrequency ??
+    estimateFundamental(bins.amplitude, samples, sampleCount, sampleRate, fftSize, window);
+  const harmonicList = readHarmonics(
+    bins,
+    out,
+    fftSize,
+    weightSum,
+    f0,
+    binWidth,
+    resolution,
+    maxOrder,
+    sampleRate,
+  );
   const fundamental = harmonicList[0];
   const distortion =
     fundamental !== undefined && fundamental.amplitude > 0
@@ -204,12 +225,18 @@ function readHarmonics(
       const first = Math.max(1, Math.ceil(position - reach));
       const last = Math.min(half, Math.floor(position + reach));
       chosen = first;
-      for (let k = first; k <= last; k++) if ((bins.amplitude[k] as number) > (bins.amplitude[chosen] as number)) chosen = k;
+      for (let k = first; k <= last; k++)
+        if ((bins.amplitude[k] as number) > (bins.amplitude[chosen] as number)) chosen = k;
     }
     const re = out[2 * chosen] as number;
     const im = out[2 * chosen + 1] as number;
     const scale = chosen === half ? 1 : 2;
-    result.push({ order, frequency, amplitude: (scale * Math.hypot(re, im)) / weightSum, phase: sinePhase(re, im) });
+    result.push({
+      order,
+      frequency,
+      amplitude: (scale * Math.hypot(re, im)) / weightSum,
+      phase: sinePhase(re, im),
+    });
   }
   return result;
 }
@@ -231,7 +258,8 @@ function estimateFundamental(
   const reach = fftSize / sampleCount;
   const skip = Math.ceil(Math.max(MAIN_LOBE_HALF_WIDTH[window], MAIN_LOBE_HALF_WIDTH.hann) * reach);
   let best = Math.min(skip, amplitude.length - 2);
-  for (let k = best; k < amplitude.length - 1; k++) if ((amplitude[k] as number) > (amplitude[best] as number)) best = k;
+  for (let k = best; k < amplitude.length - 1; k++)
+    if ((amplitude[k] as number) > (amplitude[best] as number)) best = k;
   const hann = fftWindow(sampleCount, { window: 'hann' });
   const weighted = hann.map((w, i) => w * (samples[i] as number));
   const magnitude = (bin: number): number => {

@@ -59,7 +59,14 @@ export function compareWithCarrier(
         sampling === 'regular-asymmetric' || !rising
           ? start
           : fundamentalAngleOfCarrier((j - 1) * Math.PI, alignment);
-      pushRegularHalfPeriod(transitions, heldSample(reference, sampleAngle), start, end, rising, level);
+      pushRegularHalfPeriod(
+        transitions,
+        heldSample(reference, sampleAngle),
+        start,
+        end,
+        rising,
+        level,
+      );
     }
   }
   if (mirrored) {

@@ -24,7 +24,10 @@ export function carrierAngle(theta: number, { mf, carrierPhase = 0 }: CarrierAli
  * The fundamental angle θ (radians, unwrapped) at which the carrier's phase is x; the inverse of
  * {@link carrierAngle}.
  */
-export function fundamentalAngleOfCarrier(x: number, { mf, carrierPhase = 0 }: CarrierAlignment): number {
+export function fundamentalAngleOfCarrier(
+  x: number,
+  { mf, carrierPhase = 0 }: CarrierAlignment,
+): number {
   return HALF_PI + (x + carrierPhase) / mf;
 }
 

@@ -14,14 +14,30 @@ const SMALLEST_NORMAL = 2.2250738585072014e-308;
  */
 export function assertLcFilter(value: unknown, prefix = ''): asserts value is LcFilterOptions {
   if (typeof value !== 'object' || value === null) {
-    throw new ParameterTypeError(prefix === '' ? 'filter' : prefix.slice(0, -1), 'an object { l, c, ... }', value);
+    throw new ParameterTypeError(
+      prefix === '' ? 'filter' : prefix.slice(0, -1),
+      'an object { l, c, ... }',
+      value,
+    );
   }
-  const { l, c, rDamping = 0, dampingPlacement = 'series-with-capacitor', cDamping, loadR } = value as LcFilterOptions;
+  const {
+    l,
+    c,
+    rDamping = 0,
+    dampingPlacement = 'series-with-capacitor',
+    cDamping,
+    loadR,
+  } = value as LcFilterOptions;
   assertNumberInRange(`${prefix}l`, l, { min: 0, minExclusive: true });
   assertNumberInRange(`${prefix}c`, c, { min: 0, minExclusive: true });
   const product = l * c;
   const ratio = l / c;
-  if (!(product >= SMALLEST_NORMAL) || !(ratio >= SMALLEST_NORMAL) || !Number.isFinite(product) || !Number.isFinite(ratio)) {
+  if (
+    !(product >= SMALLEST_NORMAL) ||
+    !(ratio >= SMALLEST_NORMAL) ||
+    !Number.isFinite(product) ||
+    !Number.isFinite(ratio)
+  ) {
     // Name the one further from 1 in orders of magnitude: it is what pushed l·c or l/c out.
     const cIsExtreme = Math.abs(Math.log10(c)) >= Math.abs(Math.log10(l));
     const [field, value] = cIsExtreme ? [`${prefix}c`, c] : [`${prefix}l`, l];
@@ -34,5 +50,6 @@ export function assertLcFilter(value: unknown, prefix = ''): asserts value is Lc
   if (dampingPlacement === 'parallel-rc') {
     assertNumberInRange(`${prefix}cDamping`, cDamping, { min: 0, minExclusive: true });
   }
-  if (loadR !== undefined) assertNumberInRange(`${prefix}loadR`, loadR, { min: 0, minExclusive: true });
+  if (loadR !== undefined)
+    assertNumberInRange(`${prefix}loadR`, loadR, { min: 0, minExclusive: true });
 }

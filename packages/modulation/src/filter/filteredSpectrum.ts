@@ -23,8 +23,12 @@ export interface FilteredSpectrumOptions {
  * @param options - `filter` and `fundamentalFrequency` (hertz)
  * @returns one entry per input entry, same orders; phases wrapped into (−π, π]
  */
-export function filteredSpectrum(spectrum: readonly Harmonic[], options: FilteredSpectrumOptions): Harmonic[] {
-  if (!Array.isArray(spectrum)) throw new ParameterTypeError('spectrum', 'an array of harmonics', spectrum);
+export function filteredSpectrum(
+  spectrum: readonly Harmonic[],
+  options: FilteredSpectrumOptions,
+): Harmonic[] {
+  if (!Array.isArray(spectrum))
+    throw new ParameterTypeError('spectrum', 'an array of harmonics', spectrum);
   const { filter, fundamentalFrequency } = options ?? ({} as FilteredSpectrumOptions);
   assertLcFilter(filter, 'filter.');
   assertNumberInRange('fundamentalFrequency', fundamentalFrequency, { min: 0, minExclusive: true });

@@ -49,7 +49,10 @@ export function lcFilter(filter: LcFilterOptions): LcFilterCharacteristics {
  * Returns `result` when every figure is finite or `null`; otherwise throws naming the option
  * furthest from 1 in orders of magnitude (l·c and l/c are checked by assertLcFilter already).
  */
-function assertFiniteCharacteristics(filter: LcFilterOptions, result: LcFilterCharacteristics): LcFilterCharacteristics {
+function assertFiniteCharacteristics(
+  filter: LcFilterOptions,
+  result: LcFilterCharacteristics,
+): LcFilterCharacteristics {
   const bad = (Object.keys(result) as (keyof LcFilterCharacteristics)[]).find((key) => {
     const value = result[key];
     return value !== null && !Number.isFinite(value);
@@ -62,9 +65,14 @@ function assertFiniteCharacteristics(filter: LcFilterOptions, result: LcFilterCh
     ['cDamping', filter.cDamping],
     ['loadR', filter.loadR],
   ];
-  const magnitude = (x: number | undefined): number => (x !== undefined && x > 0 ? Math.abs(Math.log10(x)) : -1);
+  const magnitude = (x: number | undefined): number =>
+    x !== undefined && x > 0 ? Math.abs(Math.log10(x)) : -1;
   const [field, value] = candidates.reduce((a, b) => (magnitude(b[1]) > magnitude(a[1]) ? b : a));
-  throw new ParameterRangeError(field, `a less extreme finite number (it makes ${bad} non-finite in double precision)`, value);
+  throw new ParameterRangeError(
+    field,
+    `a less extreme finite number (it makes ${bad} non-finite in double precision)`,
+    value,
+  );
 }
 
 function characteristicsOf(filter: LcFilterOptions): LcFilterCharacteristics {
@@ -77,7 +85,8 @@ function characteristicsOf(filter: LcFilterOptions): LcFilterCharacteristics {
       : dampingPlacement === 'parallel-with-inductor'
         ? characteristicImpedance / (2 * rDamping)
         : null;
-  const undamped = dampingPlacement === 'series-with-capacitor' && rDamping === 0 && loadR === undefined;
+  const undamped =
+    dampingPlacement === 'series-with-capacitor' && rDamping === 0 && loadR === undefined;
   if (undamped) {
     return {
       resonanceFrequency,
@@ -104,10 +113,15 @@ function characteristicsOf(filter: LcFilterOptions): LcFilterCharacteristics {
 }
 
 /** Maximum of `gain` over f₀·10^[−2, 2]: a log scan, then golden section on log frequency. */
-function findPeak(gain: (f: number) => number, centre: number): { gain: number; frequency: number } {
-  const logAt = (k: number): number => Math.log(centre) + Math.LN10 * SCAN_DECADES * ((2 * k) / (SCAN_POINTS - 1) - 1);
+function findPeak(
+  gain: (f: number) => number,
+  centre: number,
+): { gain: number; frequency: number } {
+  const logAt = (k: number): number =>
+    Math.log(centre) + Math.LN10 * SCAN_DECADES * ((2 * k) / (SCAN_POINTS - 1) - 1);
   let best = 0;
-  for (let k = 1; k < SCAN_POINTS; k++) if (gain(Math.exp(logAt(k))) > gain(Math.exp(logAt(best)))) best = k;
+  for (let k = 1; k < SCAN_POINTS; k++)
+    if (gain(Math.exp(logAt(k))) > gain(Math.exp(logAt(best)))) best = k;
   // H(0) = 1 is the peak when the response falls monotonically (heavily damped).
   if (best === 0) return { gain: Math.max(1, gain(Math.exp(logAt(0)))), frequency: 0 };
   let low = logAt(Math.max(0, best - 1));

@@ -23,8 +23,14 @@ export function lcFilterBranches(filter: LcFilterOptions, omega: number): LcFilt
     };
   }
   if (dampingPlacement === 'parallel-rc') {
-    const branch = divide({ re: 0, im: omega * cDamping }, { re: 1, im: omega * rDamping * cDamping });
-    return { seriesImpedance: { re: 0, im: omega * l }, shuntAdmittance: { re: branch.re, im: branch.im + omega * c } };
+    const branch = divide(
+      { re: 0, im: omega * cDamping },
+      { re: 1, im: omega * rDamping * cDamping },
+    );
+    return {
+      seriesImpedance: { re: 0, im: omega * l },
+      shuntAdmittance: { re: branch.re, im: branch.im + omega * c },
+    };
   }
   return {
     seriesImpedance: divide({ re: 0, im: omega * l * rDamping }, { re: rDamping, im: omega * l }),

@@ -30,7 +30,10 @@ export interface LcFilterResponse {
  *   finite non-zero double (an undamped filter exactly at resonance, or ω²LC overflowing),
  *   so `magnitudeDb` and `phase` are always finite
  */
-export function lcFilterResponse(frequencies: readonly number[], filter: LcFilterOptions): LcFilterResponse {
+export function lcFilterResponse(
+  frequencies: readonly number[],
+  filter: LcFilterOptions,
+): LcFilterResponse {
   assertFiniteArray('frequencies', frequencies, 0, MAX_RESPONSE_FREQUENCIES);
   frequencies.forEach((f, i) => {
     if (f < 0) throw new ParameterRangeError(`frequencies[${i}]`, 'a finite number ≥ 0 (hertz)', f);

@@ -1,4 +1,8 @@
-import { complexDivide as divide, complexMultiply as multiply, type Complex } from '../numeric/complex.js';
+import {
+  complexDivide as divide,
+  complexMultiply as multiply,
+  type Complex,
+} from '../numeric/complex.js';
 import { lcFilterBranches } from './lcFilterBranches.js';
 import type { LcFilterOptions } from './LcFilterOptions.js';
 
@@ -9,7 +13,10 @@ import type { LcFilterOptions } from './LcFilterOptions.js';
  */
 export function lcFilterTransfer(filter: LcFilterOptions, omega: number): Complex {
   const { seriesImpedance, shuntAdmittance } = lcFilterBranches(filter, omega);
-  const shunt = filter.loadR === undefined ? shuntAdmittance : { re: shuntAdmittance.re + 1 / filter.loadR, im: shuntAdmittance.im };
+  const shunt =
+    filter.loadR === undefined
+      ? shuntAdmittance
+      : { re: shuntAdmittance.re + 1 / filter.loadR, im: shuntAdmittance.im };
   const product = multiply(seriesImpedance, shunt);
   return divide({ re: 1, im: 0 }, { re: 1 + product.re, im: product.im });
 }

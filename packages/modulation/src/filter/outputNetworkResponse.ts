@@ -50,10 +50,16 @@ export function outputNetworkResponse(
   emf: Complex = ZERO,
 ): OutputNetworkPhasors {
   const { filter, load } = network;
-  const loadAdmittance = load === null ? ZERO : divide({ re: 1, im: 0 }, { re: load.r, im: omega * load.l });
+  const loadAdmittance =
+    load === null ? ZERO : divide({ re: 1, im: 0 }, { re: load.r, im: omega * load.l });
   if (filter === null) {
     const loadCurrent = multiply(subtract(bridgeVoltage, emf), loadAdmittance);
-    return { output: bridgeVoltage, inverterCurrent: loadCurrent, capacitorCurrent: ZERO, loadCurrent };
+    return {
+      output: bridgeVoltage,
+      inverterCurrent: loadCurrent,
+      capacitorCurrent: ZERO,
+      loadCurrent,
+    };
   }
   const { seriesImpedance, shuntAdmittance } = lcFilterBranches(filter, omega);
   let output: Complex;
@@ -66,5 +72,10 @@ export function outputNetworkResponse(
   }
   const loadCurrent = multiply(subtract(output, emf), loadAdmittance);
   const capacitorCurrent = multiply(output, shuntAdmittance);
-  return { output, inverterCurrent: add(loadCurrent, capacitorCurrent), capacitorCurrent, loadCurrent };
+  return {
+    output,
+    inverterCurrent: add(loadCurrent, capacitorCurrent),
+    capacitorCurrent,
+    loadCurrent,
+  };
 }

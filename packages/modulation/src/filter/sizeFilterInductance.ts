@@ -59,15 +59,26 @@ export function sizeFilterInductance(
   spectrum: readonly Harmonic[],
   options: SizeFilterInductanceOptions,
 ): FilterInductanceSizing {
-  const { fundamentalFrequency, maxThd, maxIndividual, lMax: lMaxOption, lMin: lMinOption, ...rest } =
-    options ?? ({} as SizeFilterInductanceOptions);
+  const {
+    fundamentalFrequency,
+    maxThd,
+    maxIndividual,
+    lMax: lMaxOption,
+    lMin: lMinOption,
+    ...rest
+  } = options ?? ({} as SizeFilterInductanceOptions);
   assertNumberInRange('fundamentalFrequency', fundamentalFrequency, { min: 0, minExclusive: true });
   assertNumberInRange('c', rest.c, { min: 0, minExclusive: true });
   if (maxThd === undefined && maxIndividual === undefined) {
-    throw new ParameterRangeError('maxThd', 'a ratio > 0 (give maxThd, maxIndividual or both)', undefined);
+    throw new ParameterRangeError(
+      'maxThd',
+      'a ratio > 0 (give maxThd, maxIndividual or both)',
+      undefined,
+    );
   }
   if (maxThd !== undefined) assertNumberInRange('maxThd', maxThd, { min: 0, minExclusive: true });
-  if (maxIndividual !== undefined) assertNumberInRange('maxIndividual', maxIndividual, { min: 0, minExclusive: true });
+  if (maxIndividual !== undefined)
+    assertNumberInRange('maxIndividual', maxIndividual, { min: 0, minExclusive: true });
   const lMax = lMaxOption ?? 1 / ((TAU * 2 * fundamentalFrequency) ** 2 * rest.c);
   assertNumberInRange('lMax', lMax, { min: 0, minExclusive: true });
   const lMin = lMinOption ?? lMax * 1e-8;
@@ -98,7 +109,8 @@ export function sizeFilterInductance(
     };
   };
   const meets = (s: FilterInductanceSizing): boolean =>
-    (maxThd === undefined || s.thd <= maxThd) && (maxIndividual === undefined || s.worstIndividual <= maxIndividual);
+    (maxThd === undefined || s.thd <= maxThd) &&
+    (maxIndividual === undefined || s.worstIndividual <= maxIndividual);
 
   const steps = Math.max(1, Math.ceil(Math.log10(lMax / lMin) * POINTS_PER_DECADE));
   const lAt = (k: number): number => lMin * (lMax / lMin) ** (k / steps);

@@ -10,7 +10,11 @@ export function defaultMaxOrder(table: TimerTable): number {
 }
 
 /** Internal: fundamental and THD of two waveforms, reference against realised. */
-export function compareOutputs(reference: Waveform, realised: Waveform, maxOrder: number): FirmwareEffect {
+export function compareOutputs(
+  reference: Waveform,
+  realised: Waveform,
+  maxOrder: number,
+): FirmwareEffect {
   const before = harmonics(reference, maxOrder);
   const after = harmonics(realised, maxOrder);
   const b1 = before[1] as { amplitude: number; phase: number };

@@ -38,17 +38,31 @@ export interface DeadTimeEffect extends FirmwareEffect {
  * fundamental falls by (8/π)·td·fsw·vdc (H-bridge). The model ignores pulses swallowed by the
  * dead time (near 0 and 100 % duty) and the carrier period in which the current changes sign.
  */
-export function deadTimeEffect(table: TimerTable, options: DeadTimeEffectOptions = {}): DeadTimeEffect {
+export function deadTimeEffect(
+  table: TimerTable,
+  options: DeadTimeEffectOptions = {},
+): DeadTimeEffect {
   const { currentAngle = 0, maxOrder = defaultMaxOrder(table) } = options;
   assertNumberInRange('currentAngle', currentAngle, { min: -1e6, max: 1e6 });
   assertNumberInRange('maxOrder', maxOrder, { min: 1, max: 100_000, integer: true });
   const without = timerTableWaveforms(table, { includeDeadTime: false, currentAngle });
   const withDead = timerTableWaveforms(table, { includeDeadTime: true, currentAngle });
-  const effect = compareOutputs(without.outputs[0] as Waveform, withDead.outputs[0] as Waveform, maxOrder);
-  const legVoltageError = (table.parameters.vdc * table.deadTimeCounts) / table.ticksPerCarrierPeriod;
-  const reference = harmonics(without.outputs[0] as Waveform, 1)[1] as { amplitude: number; phase: number };
+  const effect = compareOutputs(
+    without.outputs[0] as Waveform,
+    withDead.outputs[0] as Waveform,
+    maxOrder,
+  );
+  const legVoltageError =
+    (table.parameters.vdc * table.deadTimeCounts) / table.ticksPerCarrierPeriod;
+  const reference = harmonics(without.outputs[0] as Waveform, 1)[1] as {
+    amplitude: number;
+    phase: number;
+  };
   // Phasors in the sine basis: X·sin(θ + p) ↔ X·e^{jp}; leg error −(4/π)·ΔV·e^{−jψ}.
-  const legError = (psi: number): [number, number] => [-(4 / Math.PI) * legVoltageError * Math.cos(-psi), -(4 / Math.PI) * legVoltageError * Math.sin(-psi)];
+  const legError = (psi: number): [number, number] => [
+    -(4 / Math.PI) * legVoltageError * Math.cos(-psi),
+    -(4 / Math.PI) * legVoltageError * Math.sin(-psi),
+  ];
   const { modulation } = table.parameters;
   let error: [number, number];
   if (modulation.method === 'three-phase') {
@@ -59,7 +73,10 @@ export function deadTimeEffect(table: TimerTable, options: DeadTimeEffectOptions
     const [ar, ai] = legError(currentAngle);
     error = [2 * ar, 2 * ai];
   }
-  const predictedFundamental = Math.hypot(reference.amplitude * Math.cos(reference.phase) + error[0], reference.amplitude * Math.sin(reference.phase) + error[1]);
+  const predictedFundamental = Math.hypot(
+    reference.amplitude * Math.cos(reference.phase) + error[0],
+    reference.amplitude * Math.sin(reference.phase) + error[1],
+  );
   return {
     ...effect,
     legVoltageError,

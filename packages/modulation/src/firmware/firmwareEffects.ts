@@ -35,8 +35,16 @@ export interface FirmwareEffects {
  * against the ideal duties. See {@link quantisationEffect}, {@link deadTimeEffect},
  * {@link minimumPulseEffect} for the models and sources.
  */
-export function firmwareEffects(table: TimerTable, options: FirmwareEffectsOptions = {}): FirmwareEffects {
-  const { currentAngle = 0, minPulseWidth = 0, action = 'drop', maxOrder = defaultMaxOrder(table) } = options;
+export function firmwareEffects(
+  table: TimerTable,
+  options: FirmwareEffectsOptions = {},
+): FirmwareEffects {
+  const {
+    currentAngle = 0,
+    minPulseWidth = 0,
+    action = 'drop',
+    maxOrder = defaultMaxOrder(table),
+  } = options;
   const quantisation = quantisationEffect(table, { maxOrder });
   const deadTime = deadTimeEffect(table, { currentAngle, maxOrder });
   const minimumPulse = minimumPulseEffect(table, { minPulseWidth, action, maxOrder });
@@ -50,6 +58,10 @@ export function firmwareEffects(table: TimerTable, options: FirmwareEffectsOptio
     quantisation,
     deadTime,
     minimumPulse,
-    combined: compareOutputs(ideal.outputs[0] as Waveform, realised.outputs[0] as Waveform, maxOrder),
+    combined: compareOutputs(
+      ideal.outputs[0] as Waveform,
+      realised.outputs[0] as Waveform,
+      maxOrder,
+    ),
   };
 }

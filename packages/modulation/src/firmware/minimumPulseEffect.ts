@@ -30,13 +30,22 @@ export interface MinimumPulseEffect extends FirmwareEffect {
  * (dropping narrow off-pulses raises it) and adds low-order distortion. Common practice
  * (gate drivers and switches need a minimum on- and off-time).
  */
-export function minimumPulseEffect(table: TimerTable, options: MinimumPulseEffectOptions): MinimumPulseEffect {
+export function minimumPulseEffect(
+  table: TimerTable,
+  options: MinimumPulseEffectOptions,
+): MinimumPulseEffect {
   const { minPulseWidth, action = 'drop', maxOrder = defaultMaxOrder(table) } = options;
-  assertNumberInRange('minPulseWidth', minPulseWidth, { min: 0, max: 1 / table.realisedCarrierFrequency });
+  assertNumberInRange('minPulseWidth', minPulseWidth, {
+    min: 0,
+    max: 1 / table.realisedCarrierFrequency,
+  });
   assertOneOf('action', action, ['drop', 'clamp'] as const);
   assertNumberInRange('maxOrder', maxOrder, { min: 1, max: 100_000, integer: true });
   const before = timerTableWaveforms(table, { includeDeadTime: false });
-  const after = timerTableWaveforms(table, { includeDeadTime: false, minimumPulse: { width: minPulseWidth, action } });
+  const after = timerTableWaveforms(table, {
+    includeDeadTime: false,
+    minimumPulse: { width: minPulseWidth, action },
+  });
   return {
     ...compareOutputs(before.outputs[0] as Waveform, after.outputs[0] as Waveform, maxOrder),
     adjustedPulses: after.adjustedPulses,

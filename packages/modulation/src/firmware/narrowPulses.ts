@@ -19,7 +19,12 @@ export function applyMinimumPulse(
   return { on: complementCyclic(lows.intervals, period), adjusted: highs.adjusted + lows.adjusted };
 }
 
-function adjust(intervals: readonly Interval[], period: number, width: number, action: NarrowPulseAction): { intervals: Interval[]; adjusted: number } {
+function adjust(
+  intervals: readonly Interval[],
+  period: number,
+  width: number,
+  action: NarrowPulseAction,
+): { intervals: Interval[]; adjusted: number } {
   let adjusted = 0;
   const kept: Interval[] = [];
   for (const [start, end] of intervals) {

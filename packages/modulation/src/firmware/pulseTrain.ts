@@ -31,12 +31,19 @@ export function mergeCyclic(intervals: readonly Interval[], period: number): Int
   }
   const first = merged[0];
   const last = merged[merged.length - 1];
-  if (first !== undefined && last !== undefined && merged.length > 1 && first[0] <= TICK_TOLERANCE && last[1] >= period - TICK_TOLERANCE) {
+  if (
+    first !== undefined &&
+    last !== undefined &&
+    merged.length > 1 &&
+    first[0] <= TICK_TOLERANCE &&
+    last[1] >= period - TICK_TOLERANCE
+  ) {
     last[1] = period + first[1];
     merged.shift();
   }
   const only = merged[0];
-  if (merged.length === 1 && only !== undefined && only[1] - only[0] >= period - TICK_TOLERANCE) return [[0, period]];
+  if (merged.length === 1 && only !== undefined && only[1] - only[0] >= period - TICK_TOLERANCE)
+    return [[0, period]];
   return merged;
 }
 
@@ -69,7 +76,12 @@ export function complementCyclic(on: readonly Interval[], period: number): Inter
  * Each interval shortened by `delayStart` at its start and `advanceEnd` at its end; those left
  * with no width vanish (a pulse swallowed by the dead time).
  */
-export function shrinkIntervals(intervals: readonly Interval[], delayStart: number, advanceEnd: number, period: number): Interval[] {
+export function shrinkIntervals(
+  intervals: readonly Interval[],
+  delayStart: number,
+  advanceEnd: number,
+  period: number,
+): Interval[] {
   if (isAlwaysOn(intervals, period)) return [[0, period]];
   const result: Interval[] = [];
   for (const [start, end] of intervals) {

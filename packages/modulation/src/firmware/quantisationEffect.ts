@@ -21,13 +21,20 @@ export interface QuantisationEffect extends FirmwareEffect {
  * table's compare values against the one the unrounded duties (duty·fullScale, fractional
  * counts) would give, both without dead time. Exact waveforms, exact harmonics.
  */
-export function quantisationEffect(table: TimerTable, options: QuantisationEffectOptions = {}): QuantisationEffect {
+export function quantisationEffect(
+  table: TimerTable,
+  options: QuantisationEffectOptions = {},
+): QuantisationEffect {
   const { maxOrder = defaultMaxOrder(table) } = options;
   assertNumberInRange('maxOrder', maxOrder, { min: 1, max: 100_000, integer: true });
   const ideal = timerTableWaveforms(table, { counts: 'ideal', includeDeadTime: false });
   const quantised = timerTableWaveforms(table, { counts: 'quantised', includeDeadTime: false });
   return {
-    ...compareOutputs(ideal.outputs[0] as FirmwareEffect['reference'], quantised.outputs[0] as FirmwareEffect['reference'], maxOrder),
+    ...compareOutputs(
+      ideal.outputs[0] as FirmwareEffect['reference'],
+      quantised.outputs[0] as FirmwareEffect['reference'],
+      maxOrder,
+    ),
     maxQuantisationError: table.maxQuantisationError,
   };
 }

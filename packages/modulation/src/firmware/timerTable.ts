@@ -70,22 +70,39 @@ export function timerTable(options: TimerTableOptions): TimerTable {
     vdc = 1,
   } = options;
   const checkedModulation = checkModulation(modulation);
-  assertNumberInRange('fundamentalFrequency', fundamentalFrequency, { min: 0, minExclusive: true, max: 1e6 });
+  assertNumberInRange('fundamentalFrequency', fundamentalFrequency, {
+    min: 0,
+    minExclusive: true,
+    max: 1e6,
+  });
   assertNumberInRange('timerClock', timerClock, { min: 0, minExclusive: true, max: 1e11 });
-  assertNumberInRange('carrierFrequency', carrierFrequency, { min: 0, minExclusive: true, max: timerClock / 2 });
+  assertNumberInRange('carrierFrequency', carrierFrequency, {
+    min: 0,
+    minExclusive: true,
+    max: timerClock / 2,
+  });
   assertOneOf('sampling', sampling, ['regular-symmetric', 'regular-asymmetric'] as const);
   assertOneOf('countingMode', countingMode, ['edge-aligned', 'centre-aligned'] as const);
   assertNumberInRange('counterBits', counterBits, { min: 8, max: 32, integer: true });
   assertNumberInRange('deadTime', deadTime, { min: 0 });
   assertNumberInRange('vdc', vdc, { min: 0, minExclusive: true });
   const deadTimeMethod: DeadTimeMethod =
-    options.deadTimeMethod ?? (countingMode === 'centre-aligned' ? 'compare-offset' : 'dead-time-register');
+    options.deadTimeMethod ??
+    (countingMode === 'centre-aligned' ? 'compare-offset' : 'dead-time-register');
   assertOneOf('deadTimeMethod', deadTimeMethod, ['compare-offset', 'dead-time-register'] as const);
   if (countingMode === 'edge-aligned' && sampling === 'regular-asymmetric') {
-    throw new ParameterRangeError('sampling', "'regular-symmetric' when countingMode is 'edge-aligned' (asymmetric sampling needs an up-down counter)", sampling);
+    throw new ParameterRangeError(
+      'sampling',
+      "'regular-symmetric' when countingMode is 'edge-aligned' (asymmetric sampling needs an up-down counter)",
+      sampling,
+    );
   }
   if (countingMode === 'edge-aligned' && deadTimeMethod === 'compare-offset') {
-    throw new ParameterRangeError('deadTimeMethod', "'dead-time-register' when countingMode is 'edge-aligned' (an up-counter has no second edge to offset at its reset)", deadTimeMethod);
+    throw new ParameterRangeError(
+      'deadTimeMethod',
+      "'dead-time-register' when countingMode is 'edge-aligned' (an up-counter has no second edge to offset at its reset)",
+      deadTimeMethod,
+    );
   }
   const warnings: TimerWarning[] = [];
 
@@ -101,13 +118,24 @@ export function timerTable(options: TimerTableOptions): TimerTable {
     );
   }
   const tableLength = options.tableLength ?? updatesPerFundamental;
-  assertNumberInRange('tableLength', tableLength, { min: 1, max: Math.min(updatesPerFundamental, MAX_TIMER_TABLE_LENGTH), integer: true });
+  assertNumberInRange('tableLength', tableLength, {
+    min: 1,
+    max: Math.min(updatesPerFundamental, MAX_TIMER_TABLE_LENGTH),
+    integer: true,
+  });
   if (updatesPerFundamental % tableLength !== 0) {
-    throw new ParameterRangeError('tableLength', `a divisor of ${updatesPerFundamental} (compare updates per fundamental period)`, tableLength);
+    throw new ParameterRangeError(
+      'tableLength',
+      `a divisor of ${updatesPerFundamental} (compare updates per fundamental period)`,
+      tableLength,
+    );
   }
 
   const timing = periodTiming(countingMode, timerClock, carrierFrequency, counterBits);
-  if (Math.abs(timing.exactTicks - timing.ticksPerCarrierPeriod) > RATIO_TOLERANCE * timing.exactTicks) {
+  if (
+    Math.abs(timing.exactTicks - timing.ticksPerCarrierPeriod) >
+    RATIO_TOLERANCE * timing.exactTicks
+  ) {
     warnings.push({
       field: 'timerClock',
       message: `timerClock/carrierFrequency is not a whole number of ${countingMode === 'centre-aligned' ? 'double ' : ''}counts; the period register is rounded and the carrier runs at ${realised(timerClock, timing.ticksPerCarrierPeriod)} Hz`,
@@ -115,14 +143,25 @@ export function timerTable(options: TimerTableOptions): TimerTable {
   }
   const carrierPeriodSeconds = 1 / carrierFrequency;
   if (deadTime >= carrierPeriodSeconds / 2) {
-    throw new ParameterRangeError('deadTime', `a time in seconds ≥ 0 and < half the carrier period (${carrierPeriodSeconds / 2} s)`, deadTime);
+    throw new ParameterRangeError(
+      'deadTime',
+      `a time in seconds ≥ 0 and < half the carrier period (${carrierPeriodSeconds / 2} s)`,
+      deadTime,
+    );
   }
   const deadTimeCounts = Math.ceil(deadTime * timerClock - RATIO_TOLERANCE);
   if (2 * deadTimeCounts >= timing.ticksPerCarrierPeriod) {
-    throw new ParameterRangeError('deadTime', `shorter than half the carrier period in counts (${timing.ticksPerCarrierPeriod / 2} ticks); got ${deadTimeCounts} ticks`, deadTime);
+    throw new ParameterRangeError(
+      'deadTime',
+      `shorter than half the carrier period in counts (${timing.ticksPerCarrierPeriod / 2} ticks); got ${deadTimeCounts} ticks`,
+      deadTime,
+    );
   }
 
-  const entryAngles = Array.from({ length: tableLength }, (_, i) => ((i + 0.5) * TAU) / tableLength);
+  const entryAngles = Array.from(
+    { length: tableLength },
+    (_, i) => ((i + 0.5) * TAU) / tableLength,
+  );
   const references = entryAngles.map((theta) => legReferences(theta, checkedModulation));
   const channelCount = (references[0] as number[]).length;
   const full = timing.fullScaleCounts;
@@ -139,17 +178,47 @@ export function timerTable(options: TimerTableOptions): TimerTable {
     duty.forEach((d, i) => {
       maxError = Math.max(maxError, Math.abs((compare[i] as number) - d * full));
     });
-    const { highSide, lowSide } = complementaryCompares(compare, full, deadTimeMethod === 'compare-offset' ? deadTimeCounts : 0);
-    channels.push({ name: CHANNEL_NAMES[k] as string, description: describeChannel(checkedModulation, k), duty, compare, highSide, lowSide });
+    const { highSide, lowSide } = complementaryCompares(
+      compare,
+      full,
+      deadTimeMethod === 'compare-offset' ? deadTimeCounts : 0,
+    );
+    channels.push({
+      name: CHANNEL_NAMES[k] as string,
+      description: describeChannel(checkedModulation, k),
+      duty,
+      compare,
+      highSide,
+      lowSide,
+    });
   }
   if (overmodulated > 0) {
-    warnings.push({ field: 'modulation.ma', message: `${overmodulated} references beyond ±1 (overmodulation) were clamped to 0 or 100 % duty` });
+    warnings.push({
+      field: 'modulation.ma',
+      message: `${overmodulated} references beyond ±1 (overmodulation) were clamped to 0 or 100 % duty`,
+    });
   }
-  if (countingMode === 'edge-aligned' && full > 2 ** counterBits - 1 && channels.some((c) => c.compare.includes(full))) {
-    for (const c of channels) for (const list of [c.compare, c.highSide, c.lowSide]) list.forEach((v, i) => { if (v > 2 ** counterBits - 1) list[i] = 2 ** counterBits - 1; });
-    warnings.push({ field: 'counterBits', message: `100 % duty needs compare ${full}, which a ${counterBits}-bit register cannot hold; clamped to ${2 ** counterBits - 1}` });
+  if (
+    countingMode === 'edge-aligned' &&
+    full > 2 ** counterBits - 1 &&
+    channels.some((c) => c.compare.includes(full))
+  ) {
+    for (const c of channels)
+      for (const list of [c.compare, c.highSide, c.lowSide])
+        list.forEach((v, i) => {
+          if (v > 2 ** counterBits - 1) list[i] = 2 ** counterBits - 1;
+        });
+    warnings.push({
+      field: 'counterBits',
+      message: `100 % duty needs compare ${full}, which a ${counterBits}-bit register cannot hold; clamped to ${2 ** counterBits - 1}`,
+    });
   }
-  const narrow = narrowPulseCount(channels, full, timing.ticksPerCarrierPeriod / full, deadTimeCounts);
+  const narrow = narrowPulseCount(
+    channels,
+    full,
+    timing.ticksPerCarrierPeriod / full,
+    deadTimeCounts,
+  );
   if (deadTimeCounts > 0 && narrow.count > 0) {
     warnings.push({
       field: 'deadTime',
@@ -160,9 +229,14 @@ export function timerTable(options: TimerTableOptions): TimerTable {
   const ticksPerFundamental = timing.ticksPerCarrierPeriod * carrierPeriods;
   return {
     parameters: {
-      modulation: checkedModulation.method === 'sine-triangle'
-        ? { method: 'sine-triangle', scheme: checkedModulation.scheme, ma: checkedModulation.ma }
-        : { method: 'three-phase', zeroSequence: checkedModulation.zeroSequence ?? 'none', ma: checkedModulation.ma },
+      modulation:
+        checkedModulation.method === 'sine-triangle'
+          ? { method: 'sine-triangle', scheme: checkedModulation.scheme, ma: checkedModulation.ma }
+          : {
+              method: 'three-phase',
+              zeroSequence: checkedModulation.zeroSequence ?? 'none',
+              ma: checkedModulation.ma,
+            },
       fundamentalFrequency,
       carrierFrequency,
       sampling,
@@ -223,7 +297,11 @@ const UNITS: Record<string, string> = {
 
 function checkModulation(modulation: unknown): TimerModulation {
   if (typeof modulation !== 'object' || modulation === null) {
-    throw new ParameterTypeError('modulation', "an object { method: 'sine-triangle' | 'three-phase', ma, ... }", modulation);
+    throw new ParameterTypeError(
+      'modulation',
+      "an object { method: 'sine-triangle' | 'three-phase', ma, ... }",
+      modulation,
+    );
   }
   const m = modulation as Record<string, unknown>;
   assertOneOf('modulation.method', m.method, ['sine-triangle', 'three-phase'] as const);
@@ -233,7 +311,11 @@ function checkModulation(modulation: unknown): TimerModulation {
     return { method: 'sine-triangle', scheme: m.scheme, ma: m.ma };
   }
   const zeroSequence = m.zeroSequence ?? 'none';
-  assertOneOf('modulation.zeroSequence', zeroSequence, ['none', 'third-harmonic', 'min-max'] as const);
+  assertOneOf('modulation.zeroSequence', zeroSequence, [
+    'none',
+    'third-harmonic',
+    'min-max',
+  ] as const);
   return { method: 'three-phase', zeroSequence, ma: m.ma };
 }
 
@@ -257,7 +339,12 @@ interface PeriodTiming {
   fullScaleCounts: number;
 }
 
-function periodTiming(mode: CountingMode, clock: number, carrier: number, bits: number): PeriodTiming {
+function periodTiming(
+  mode: CountingMode,
+  clock: number,
+  carrier: number,
+  bits: number,
+): PeriodTiming {
   const maxCount = 2 ** bits;
   if (mode === 'edge-aligned') {
     const exact = clock / carrier;
@@ -269,7 +356,12 @@ function periodTiming(mode: CountingMode, clock: number, carrier: number, bits: 
         exact,
       );
     }
-    return { exactTicks: exact, ticksPerCarrierPeriod: ticks, periodRegister: ticks - 1, fullScaleCounts: ticks };
+    return {
+      exactTicks: exact,
+      ticksPerCarrierPeriod: ticks,
+      periodRegister: ticks - 1,
+      fullScaleCounts: ticks,
+    };
   }
   const exactPeriod = clock / (2 * carrier);
   const period = Math.round(exactPeriod);
@@ -280,14 +372,23 @@ function periodTiming(mode: CountingMode, clock: number, carrier: number, bits: 
       exactPeriod,
     );
   }
-  return { exactTicks: 2 * exactPeriod, ticksPerCarrierPeriod: 2 * period, periodRegister: period, fullScaleCounts: period };
+  return {
+    exactTicks: 2 * exactPeriod,
+    ticksPerCarrierPeriod: 2 * period,
+    periodRegister: period,
+    fullScaleCounts: period,
+  };
 }
 
 function realised(clock: number, ticks: number): number {
   return clock / ticks;
 }
 
-function complementaryCompares(compare: number[], full: number, deadTimeCounts: number): { highSide: number[]; lowSide: number[] } {
+function complementaryCompares(
+  compare: number[],
+  full: number,
+  deadTimeCounts: number,
+): { highSide: number[]; lowSide: number[] } {
   const before = Math.floor(deadTimeCounts / 2);
   const after = deadTimeCounts - before;
   const highSide: number[] = [];
@@ -331,7 +432,11 @@ function narrowPulseCount(
   return { count, shortest };
 }
 
-function conventionLines(mode: CountingMode, sampling: string, deadTimeMethod: DeadTimeMethod): string[] {
+function conventionLines(
+  mode: CountingMode,
+  sampling: string,
+  deadTimeMethod: DeadTimeMethod,
+): string[] {
   const lines = [
     'Outputs active-high: a high-side switch is on while the counter is below its compare value; the compare match turns it off.',
     mode === 'edge-aligned'
@@ -341,7 +446,9 @@ function conventionLines(mode: CountingMode, sampling: string, deadTimeMethod: D
     'Entry i is sampled at angle (i + 0.5) * 2*pi / tableLength of the fundamental, the centre of the interval it governs; each entry serves updatesPerEntry consecutive compare updates.',
   ];
   if (sampling === 'regular-asymmetric') {
-    lines.push('Asymmetric sampling: entry 2j is loaded for the down-counting half and entry 2j + 1 for the up-counting half of carrier period j.');
+    lines.push(
+      'Asymmetric sampling: entry 2j is loaded for the down-counting half and entry 2j + 1 for the up-counting half of carrier period j.',
+    );
   }
   lines.push(
     deadTimeMethod === 'compare-offset'
@@ -353,9 +460,10 @@ function conventionLines(mode: CountingMode, sampling: string, deadTimeMethod: D
 }
 
 function describeChannel(modulation: TimerModulation, k: number): string {
-  if (modulation.method === 'three-phase') return `leg ${'abc'[k]} (phase ${'abc'[k]}, reference at −${2 * k}π/3)`;
+  if (modulation.method === 'three-phase')
+    return `leg ${'abc'[k]} (phase ${'abc'[k]}, reference at −${2 * k}π/3)`;
   if (modulation.scheme === 'bipolar') {
-    return 'leg A; drive leg B high side from this channel\'s low-side output and leg B low side from its high-side output (diagonal pairs switch together)';
+    return "leg A; drive leg B high side from this channel's low-side output and leg B low side from its high-side output (diagonal pairs switch together)";
   }
   return k === 0 ? 'leg A, reference +ma·sin θ' : 'leg B, reference −ma·sin θ';
 }

@@ -20,10 +20,17 @@ export interface TimerTableCHeaderOptions {
  *
  * @throws ParameterRangeError when `prefix` is not a C identifier
  */
-export function timerTableToCHeader(table: TimerTable, options: TimerTableCHeaderOptions = {}): string {
+export function timerTableToCHeader(
+  table: TimerTable,
+  options: TimerTableCHeaderOptions = {},
+): string {
   const { prefix = 'pwm_table' } = options;
   if (typeof prefix !== 'string' || !/^[A-Za-z_][A-Za-z0-9_]{0,39}$/.test(prefix)) {
-    throw new ParameterRangeError('prefix', 'a C identifier of 1 to 40 characters (letters, digits, _; not starting with a digit)', prefix);
+    throw new ParameterRangeError(
+      'prefix',
+      'a C identifier of 1 to 40 characters (letters, digits, _; not starting with a digit)',
+      prefix,
+    );
   }
   const lower = prefix.toLowerCase();
   const upper = prefix.toUpperCase();
@@ -35,18 +42,34 @@ export function timerTableToCHeader(table: TimerTable, options: TimerTableCHeade
   const modulation = p.modulation;
   const parameterLines: [string, string][] = [
     ['modulation.method', modulation.method],
-    ...(modulation.scheme !== undefined ? [['modulation.scheme', modulation.scheme] as [string, string]] : []),
-    ...(modulation.zeroSequence !== undefined ? [['modulation.zeroSequence', modulation.zeroSequence] as [string, string]] : []),
+    ...(modulation.scheme !== undefined
+      ? [['modulation.scheme', modulation.scheme] as [string, string]]
+      : []),
+    ...(modulation.zeroSequence !== undefined
+      ? [['modulation.zeroSequence', modulation.zeroSequence] as [string, string]]
+      : []),
     ['modulation.ma', `${modulation.ma} (peak reference / (vdc/2))`],
-    ['fundamentalFrequency', `${p.fundamentalFrequency} Hz (realised ${table.realisedFundamentalFrequency} Hz)`],
-    ['carrierFrequency', `${p.carrierFrequency} Hz (realised ${table.realisedCarrierFrequency} Hz)`],
+    [
+      'fundamentalFrequency',
+      `${p.fundamentalFrequency} Hz (realised ${table.realisedFundamentalFrequency} Hz)`,
+    ],
+    [
+      'carrierFrequency',
+      `${p.carrierFrequency} Hz (realised ${table.realisedCarrierFrequency} Hz)`,
+    ],
     ['sampling', p.sampling],
     ['timerClock', `${p.timerClock} Hz`],
     ['countingMode', p.countingMode],
     ['counterBits', `${p.counterBits} bits`],
-    ['deadTime', `${p.deadTime} s requested, ${table.deadTimeCounts} ticks = ${table.realisedDeadTime} s realised`],
+    [
+      'deadTime',
+      `${p.deadTime} s requested, ${table.deadTimeCounts} ticks = ${table.realisedDeadTime} s realised`,
+    ],
     ['deadTimeMethod', p.deadTimeMethod],
-    ['tableLength', `${p.tableLength} entries per fundamental period, ${table.updatesPerEntry} compare update(s) per entry`],
+    [
+      'tableLength',
+      `${p.tableLength} entries per fundamental period, ${table.updatesPerEntry} compare update(s) per entry`,
+    ],
     ['vdc', `${p.vdc} V`],
     ['periodRegister', `${table.periodRegister} counts`],
     ['fullScaleCounts', `${table.fullScaleCounts} counts (100 % duty)`],
@@ -69,16 +92,28 @@ export function timerTableToCHeader(table: TimerTable, options: TimerTableCHeade
     ...table.channels.map((c) => ` *   ${commentSafe(c.name)}: ${commentSafe(c.description)}`),
     ...(table.warnings.length === 0
       ? []
-      : [' *', ' * Warnings', ...table.warnings.map((w) => ` *   ${commentSafe(w.field)}: ${commentSafe(w.message)}`)]),
+      : [
+          ' *',
+          ' * Warnings',
+          ...table.warnings.map((w) => ` *   ${commentSafe(w.field)}: ${commentSafe(w.message)}`),
+        ]),
     ' */',
   ];
   const arrays: string[] = [];
   for (const channel of table.channels) {
     const name = `${lower}_${channel.name.toLowerCase().replace(/[^a-z0-9_]/g, '_')}`;
-    for (const [side, values] of [['high', channel.highSide], ['low', channel.lowSide]] as const) {
+    for (const [side, values] of [
+      ['high', channel.highSide],
+      ['low', channel.lowSide],
+    ] as const) {
       arrays.push(`static const ${type} ${name}_${side}[${upper}_LENGTH] = {`);
       for (let i = 0; i < values.length; i += 10) {
-        arrays.push(`  ${values.slice(i, i + 10).map((v) => `${Math.round(v)}${suffix}`).join(', ')},`);
+        arrays.push(
+          `  ${values
+            .slice(i, i + 10)
+            .map((v) => `${Math.round(v)}${suffix}`)
+            .join(', ')},`,
+        );
       }
       arrays.push('};', '');
     }
@@ -107,4 +142,13 @@ function commentSafe(text: string): string {
   return text.replace(/\*\//g, '* /').replace(/[^\x20-\x7e]/g, (ch) => ASCII_FOR[ch] ?? '?');
 }
 
-const ASCII_FOR: Record<string, string> = { 'θ': 'theta', 'π': 'pi', '−': '-', '±': '+/-', '·': '*', '≥': '>=', '≤': '<=', 'Δ': 'delta' };
+const ASCII_FOR: Record<string, string> = {
+  θ: 'theta',
+  π: 'pi',
+  '−': '-',
+  '±': '+/-',
+  '·': '*',
+  '≥': '>=',
+  '≤': '<=',
+  Δ: 'delta',
+};

@@ -13,13 +13,23 @@ import type { TimerTable } from './timerTableTypes.js';
 export function timerTableToCsv(table: TimerTable): string {
   const header = ['entry', 'angle_rad'];
   for (const channel of table.channels) {
-    header.push(`${channel.name}_duty`, `${channel.name}_compare`, `${channel.name}_high`, `${channel.name}_low`);
+    header.push(
+      `${channel.name}_duty`,
+      `${channel.name}_compare`,
+      `${channel.name}_high`,
+      `${channel.name}_low`,
+    );
   }
   const rows = [header];
   table.entryAngles.forEach((angle, i) => {
     const row = [String(i), String(angle)];
     for (const channel of table.channels) {
-      row.push(String(channel.duty[i]), String(channel.compare[i]), String(channel.highSide[i]), String(channel.lowSide[i]));
+      row.push(
+        String(channel.duty[i]),
+        String(channel.compare[i]),
+        String(channel.highSide[i]),
+        String(channel.lowSide[i]),
+      );
     }
     rows.push(row);
   });

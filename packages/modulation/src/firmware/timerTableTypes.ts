@@ -99,7 +99,12 @@ export interface TimerWarning {
 export interface TimerTable {
   /** Every input, defaults filled in. */
   parameters: {
-    modulation: { method: 'sine-triangle' | 'three-phase'; scheme?: 'bipolar' | 'unipolar'; zeroSequence?: 'none' | 'third-harmonic' | 'min-max'; ma: number };
+    modulation: {
+      method: 'sine-triangle' | 'three-phase';
+      scheme?: 'bipolar' | 'unipolar';
+      zeroSequence?: 'none' | 'third-harmonic' | 'min-max';
+      ma: number;
+    };
     fundamentalFrequency: number;
     carrierFrequency: number;
     sampling: 'regular-symmetric' | 'regular-asymmetric';

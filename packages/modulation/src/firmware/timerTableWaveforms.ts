@@ -5,7 +5,15 @@ import type { Waveform } from '../waveform/Waveform.js';
 import { subtractWaveforms } from '../waveform/subtractWaveforms.js';
 import { waveformFromTransitions, type Transition } from '../waveform/waveformFromTransitions.js';
 import { applyMinimumPulse } from './narrowPulses.js';
-import { TICK_TOLERANCE, complementCyclic, insidePieces, mergeCyclic, shrinkIntervals, splitAtPeriod, type Interval } from './pulseTrain.js';
+import {
+  TICK_TOLERANCE,
+  complementCyclic,
+  insidePieces,
+  mergeCyclic,
+  shrinkIntervals,
+  splitAtPeriod,
+  type Interval,
+} from './pulseTrain.js';
 import type { NarrowPulseAction, TimerTable } from './timerTableTypes.js';
 
 /** Options of {@link timerTableWaveforms}. */
@@ -59,30 +67,52 @@ export interface TimerTableWaveforms {
  * switching lag-times", IEEE Trans. Ind. Appl., 1987, from memory, rests on the same rule).
  * Angles: 0..2π over the realised fundamental period (the table's ticks per fundamental).
  */
-export function timerTableWaveforms(table: TimerTable, options: TimerTableWaveformOptions = {}): TimerTableWaveforms {
-  const { counts = 'quantised', includeDeadTime = true, currentAngle = 0, currentSign, minimumPulse } = options;
+export function timerTableWaveforms(
+  table: TimerTable,
+  options: TimerTableWaveformOptions = {},
+): TimerTableWaveforms {
+  const {
+    counts = 'quantised',
+    includeDeadTime = true,
+    currentAngle = 0,
+    currentSign,
+    minimumPulse,
+  } = options;
   assertOneOf('counts', counts, ['quantised', 'ideal'] as const);
   assertNumberInRange('currentAngle', currentAngle, { min: -1e6, max: 1e6 });
   if (currentSign !== undefined && typeof currentSign !== 'function') {
-    throw new ParameterTypeError('currentSign', 'a function (channel, theta) => number', currentSign);
+    throw new ParameterTypeError(
+      'currentSign',
+      'a function (channel, theta) => number',
+      currentSign,
+    );
   }
   const period = table.ticksPerCarrierPeriod * table.carrierPeriodsPerFundamental;
   let minimumTicks = 0;
   if (minimumPulse !== undefined) {
-    assertNumberInRange('minimumPulse.width', minimumPulse.width, { min: 0, max: 1 / table.realisedCarrierFrequency });
+    assertNumberInRange('minimumPulse.width', minimumPulse.width, {
+      min: 0,
+      max: 1 / table.realisedCarrierFrequency,
+    });
     assertOneOf('minimumPulse.action', minimumPulse.action, ['drop', 'clamp'] as const);
     minimumTicks = minimumPulse.width * table.parameters.timerClock;
   }
   const deadTicks = includeDeadTime ? table.deadTimeCounts : 0;
   const [highDelay, highAdvance, lowDelay, lowAdvance] =
     table.parameters.deadTimeMethod === 'compare-offset'
-      ? [Math.floor(deadTicks / 2), Math.floor(deadTicks / 2), deadTicks - Math.floor(deadTicks / 2), deadTicks - Math.floor(deadTicks / 2)]
+      ? [
+          Math.floor(deadTicks / 2),
+          Math.floor(deadTicks / 2),
+          deadTicks - Math.floor(deadTicks / 2),
+          deadTicks - Math.floor(deadTicks / 2),
+        ]
       : [deadTicks, 0, deadTicks, 0];
   const vdc = table.parameters.vdc;
   const currentPhases = channelCurrentPhases(table, currentAngle);
   let adjustedPulses = 0;
   const legs = table.channels.map((channel, k) => {
-    const values = counts === 'ideal' ? channel.duty.map((d) => d * table.fullScaleCounts) : channel.compare;
+    const values =
+      counts === 'ideal' ? channel.duty.map((d) => d * table.fullScaleCounts) : channel.compare;
     let on = idealGate(table, values, period);
     if (minimumTicks > 0) {
       const adjusted = applyMinimumPulse(on, period, minimumTicks, minimumPulse?.action ?? 'drop');
@@ -90,10 +120,19 @@ export function timerTableWaveforms(table: TimerTable, options: TimerTableWavefo
       adjustedPulses += adjusted.adjusted;
     }
     const high = splitAtPeriod(shrinkIntervals(on, highDelay, highAdvance, period), period);
-    const low = splitAtPeriod(shrinkIntervals(complementCyclic(on, period), lowDelay, lowAdvance, period), period);
+    const low = splitAtPeriod(
+      shrinkIntervals(complementCyclic(on, period), lowDelay, lowAdvance, period),
+      period,
+    );
     const phase = currentPhases[k] as number;
-    const sign = currentSign === undefined ? (theta: number) => Math.sign(Math.sin(theta - phase)) : (theta: number) => currentSign(k, theta);
-    const crossings = currentSign === undefined ? [0, 1].map((n) => period * (((phase + n * Math.PI) / TAU) % 1 + 1) % period) : [];
+    const sign =
+      currentSign === undefined
+        ? (theta: number) => Math.sign(Math.sin(theta - phase))
+        : (theta: number) => currentSign(k, theta);
+    const crossings =
+      currentSign === undefined
+        ? [0, 1].map((n) => (period * ((((phase + n * Math.PI) / TAU) % 1) + 1)) % period)
+        : [];
     return legWaveform(high, low, crossings, period, vdc, sign);
   });
   return { legs, ...outputsOf(table, legs), adjustedPulses };
@@ -101,7 +140,8 @@ export function timerTableWaveforms(table: TimerTable, options: TimerTableWavefo
 
 function channelCurrentPhases(table: TimerTable, currentAngle: number): number[] {
   const { modulation } = table.parameters;
-  if (modulation.method === 'three-phase') return [0, 1, 2].map((k) => currentAngle + (TAU * k) / 3);
+  if (modulation.method === 'three-phase')
+    return [0, 1, 2].map((k) => currentAngle + (TAU * k) / 3);
   return modulation.scheme === 'bipolar' ? [currentAngle] : [currentAngle, currentAngle + Math.PI];
 }
 
@@ -110,7 +150,8 @@ function idealGate(table: TimerTable, values: readonly number[], period: number)
   const full = table.fullScaleCounts;
   const perEntry = table.updatesPerEntry;
   const raw: Interval[] = [];
-  const valueAt = (update: number): number => Math.min(full, Math.max(0, values[Math.floor(update / perEntry)] as number));
+  const valueAt = (update: number): number =>
+    Math.min(full, Math.max(0, values[Math.floor(update / perEntry)] as number));
   if (table.parameters.countingMode === 'edge-aligned') {
     for (let j = 0; j < table.carrierPeriodsPerFundamental; j++) {
       const start = j * full;
@@ -136,15 +177,20 @@ function legWaveform(
   vdc: number,
   sign: (theta: number) => number,
 ): Waveform {
-  const points = [0, ...high.flat(), ...low.flat(), ...crossings].filter((t) => t >= 0 && t < period).sort((a, b) => a - b);
+  const points = [0, ...high.flat(), ...low.flat(), ...crossings]
+    .filter((t) => t >= 0 && t < period)
+    .sort((a, b) => a - b);
   const breaks: number[] = [];
-  for (const t of points) if (breaks.length === 0 || t - (breaks[breaks.length - 1] as number) > TICK_TOLERANCE) breaks.push(t);
+  for (const t of points)
+    if (breaks.length === 0 || t - (breaks[breaks.length - 1] as number) > TICK_TOLERANCE)
+      breaks.push(t);
   const transitions: Transition[] = breaks.map((t, i) => {
     const next = i + 1 < breaks.length ? (breaks[i + 1] as number) : period + (breaks[0] as number);
     const middle = ((t + next) / 2) % period;
     const highOn = insidePieces(high, middle);
     const lowOn = insidePieces(low, middle);
-    if (highOn && lowOn) throw new Error(`internal error: both switches of a leg on at tick ${middle}`);
+    if (highOn && lowOn)
+      throw new Error(`internal error: both switches of a leg on at tick ${middle}`);
     let level: number;
     if (highOn) level = vdc / 2;
     else if (lowOn) level = -vdc / 2;
@@ -157,16 +203,25 @@ function legWaveform(
   return waveformFromTransitions(transitions);
 }
 
-function outputsOf(table: TimerTable, legs: Waveform[]): { outputs: Waveform[]; outputNames: string[] } {
+function outputsOf(
+  table: TimerTable,
+  legs: Waveform[],
+): { outputs: Waveform[]; outputNames: string[] } {
   const { modulation } = table.parameters;
   const [a, b, c] = legs as [Waveform, Waveform, Waveform];
   if (modulation.method === 'three-phase') {
-    return { outputs: [subtractWaveforms(a, b), subtractWaveforms(b, c), subtractWaveforms(c, a)], outputNames: ['vab', 'vbc', 'vca'] };
+    return {
+      outputs: [subtractWaveforms(a, b), subtractWaveforms(b, c), subtractWaveforms(c, a)],
+      outputNames: ['vab', 'vbc', 'vca'],
+    };
   }
   if (modulation.scheme === 'bipolar') {
     // Leg B's switches are leg A's complement, so vB = −vA at every instant (dead time too:
     // leg B carries the opposite current): vAB = 2·vA.
-    return { outputs: [{ edges: [...a.edges], levels: a.levels.map((v) => 2 * v) }], outputNames: ['vAB'] };
+    return {
+      outputs: [{ edges: [...a.edges], levels: a.levels.map((v) => 2 * v) }],
+      outputNames: ['vAB'],
+    };
   }
   return { outputs: [subtractWaveforms(a, b)], outputNames: ['vAB'] };
 }

@@ -57,17 +57,31 @@ export interface HarmonicLimitOptions {
  * @param spectrum - harmonics in the `harmonics` convention, orders 0..50 at least (peak volts)
  * @throws ParameterRangeError when the spectrum stops before order 50 or its fundamental is zero
  */
-export function checkVoltageHarmonicLimits(spectrum: readonly Harmonic[], options: HarmonicLimitOptions): HarmonicLimitCheck {
+export function checkVoltageHarmonicLimits(
+  spectrum: readonly Harmonic[],
+  options: HarmonicLimitOptions,
+): HarmonicLimitCheck {
   const { busVoltage, thdWholeWaveform } = options;
   assertNumberInRange('busVoltage', busVoltage, { min: 0, minExclusive: true });
   assertNumberInRange('thdWholeWaveform', thdWholeWaveform, { min: 0 });
   const standard = IEEE_519_2022_VOLTAGE;
-  const row = IEEE_519_2022_VOLTAGE_LIMITS.find((r) => busVoltage <= r.maxBusVoltage) as VoltageLimitRow;
+  const row = IEEE_519_2022_VOLTAGE_LIMITS.find(
+    (r) => busVoltage <= r.maxBusVoltage,
+  ) as VoltageLimitRow;
   const byOrder = new Map(spectrum.map((h) => [h.order, h.amplitude]));
   const fundamental = byOrder.get(1) ?? 0;
-  if (!(fundamental > 0)) throw new ParameterRangeError('spectrum', 'a spectrum whose fundamental has an amplitude > 0', fundamental);
+  if (!(fundamental > 0))
+    throw new ParameterRangeError(
+      'spectrum',
+      'a spectrum whose fundamental has an amplitude > 0',
+      fundamental,
+    );
   if (!byOrder.has(standard.maxOrder)) {
-    throw new ParameterRangeError('spectrum', `a spectrum holding orders up to ${standard.maxOrder}`, spectrum.length);
+    throw new ParameterRangeError(
+      'spectrum',
+      `a spectrum holding orders up to ${standard.maxOrder}`,
+      spectrum.length,
+    );
   }
   const table = [];
   let sumOfSquares = 0;
@@ -80,9 +94,12 @@ export function checkVoltageHarmonicLimits(spectrum: readonly Harmonic[], option
   const thdAboveTable = Math.sqrt(Math.max(0, thdWholeWaveform * thdWholeWaveform - sumOfSquares));
   const worst = table.reduce((a, b) => (b.ratio > a.ratio ? b : a));
   const violations: LimitViolation[] = [];
-  if (thdWholeWaveform > row.thd) violations.push({ order: 'thd-whole-waveform', ratio: thdWholeWaveform, limit: row.thd });
+  if (thdWholeWaveform > row.thd)
+    violations.push({ order: 'thd-whole-waveform', ratio: thdWholeWaveform, limit: row.thd });
   if (thd > row.thd) violations.push({ order: 'thd', ratio: thd, limit: row.thd });
-  for (const entry of table) if (!entry.pass) violations.push({ order: entry.order, ratio: entry.ratio, limit: entry.limit });
+  for (const entry of table)
+    if (!entry.pass)
+      violations.push({ order: entry.order, ratio: entry.ratio, limit: entry.limit });
   const note =
     thdAboveTable > row.thd
       ? `The harmonics above order ${standard.maxOrder} alone amount to ${(100 * thdAboveTable).toFixed(2)} % of the fundamental, ` +
@@ -91,7 +108,12 @@ export function checkVoltageHarmonicLimits(spectrum: readonly Harmonic[], option
   return {
     standard,
     busVoltage,
-    limits: { individual: row.individual, thd: row.thd, maxOrder: standard.maxOrder, busRange: row.busRange },
+    limits: {
+      individual: row.individual,
+      thd: row.thd,
+      maxOrder: standard.maxOrder,
+      busRange: row.busRange,
+    },
     table,
     thd,
     thdWholeWaveform,

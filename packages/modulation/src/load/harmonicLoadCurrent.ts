@@ -21,29 +21,35 @@ import type { RlLoadOptions } from './RlLoad.js';
  * @param options - `r` ohm > 0, `l` henry ≥ 0, `frequency` hertz > 0, optional `emf`
  * @returns one entry per input entry, same orders
  */
-export function harmonicLoadCurrent(spectrum: readonly Harmonic[], options: RlLoadOptions): Harmonic[] {
-  if (!Array.isArray(spectrum)) throw new ParameterTypeError('spectrum', 'an array of harmonics', spectrum);
+export function harmonicLoadCurrent(
+  spectrum: readonly Harmonic[],
+  options: RlLoadOptions,
+): Harmonic[] {
+  if (!Array.isArray(spectrum))
+    throw new ParameterTypeError('spectrum', 'an array of harmonics', spectrum);
   assertRlLoad(options);
   const { r, l, frequency, emf } = options;
-  return spectrum.map((h, i) => {
-    assertNumberInRange(`spectrum[${i}].order`, h?.order, { min: 0, integer: true });
-    assertNumberInRange(`spectrum[${i}].amplitude`, h.amplitude);
-    assertNumberInRange(`spectrum[${i}].phase`, h.phase);
-    if (h.order === 0) return { order: 0, amplitude: h.amplitude / r, phase: 0 };
-    // Phasor of a·sin(nθ + φ) as a·e^{jφ}; subtract the EMF's at the fundamental.
-    let re = h.amplitude * Math.cos(h.phase);
-    let im = h.amplitude * Math.sin(h.phase);
-    if (h.order === 1 && emf !== undefined) {
-      re -= emf.amplitude * Math.cos(emf.phase);
-      im -= emf.amplitude * Math.sin(emf.phase);
-    }
-    const reactance = TAU * frequency * l * h.order;
-    return {
-      order: h.order,
-      amplitude: Math.hypot(re, im) / Math.hypot(r, reactance),
-      phase: Math.atan2(im, re) - Math.atan2(reactance, r),
-    };
-  }).map(wrapPhase);
+  return spectrum
+    .map((h, i) => {
+      assertNumberInRange(`spectrum[${i}].order`, h?.order, { min: 0, integer: true });
+      assertNumberInRange(`spectrum[${i}].amplitude`, h.amplitude);
+      assertNumberInRange(`spectrum[${i}].phase`, h.phase);
+      if (h.order === 0) return { order: 0, amplitude: h.amplitude / r, phase: 0 };
+      // Phasor of a·sin(nθ + φ) as a·e^{jφ}; subtract the EMF's at the fundamental.
+      let re = h.amplitude * Math.cos(h.phase);
+      let im = h.amplitude * Math.sin(h.phase);
+      if (h.order === 1 && emf !== undefined) {
+        re -= emf.amplitude * Math.cos(emf.phase);
+        im -= emf.amplitude * Math.sin(emf.phase);
+      }
+      const reactance = TAU * frequency * l * h.order;
+      return {
+        order: h.order,
+        amplitude: Math.hypot(re, im) / Math.hypot(r, reactance),
+        phase: Math.atan2(im, re) - Math.atan2(reactance, r),
+      };
+    })
+    .map(wrapPhase);
 }
 
 function wrapPhase(h: Harmonic): Harmonic {

@@ -25,7 +25,10 @@ export interface RlCurrentSeries {
  * @param waveform - one period of the source voltage, volts
  * @param options - the load (`r`, `l`, `frequency`, `emf`) and `points`
  */
-export function rlCurrentSeries(waveform: Waveform, options: RlCurrentSeriesOptions): RlCurrentSeries {
+export function rlCurrentSeries(
+  waveform: Waveform,
+  options: RlCurrentSeriesOptions,
+): RlCurrentSeries {
   const { points = 1000, ...load } = options ?? ({} as RlCurrentSeriesOptions);
   assertNumberInRange('points', points, { min: 2, max: MAX_CURRENT_ANGLES, integer: true });
   const angles = Array.from({ length: points }, (_, k) => (TAU * k) / points);

@@ -38,7 +38,10 @@ export interface RlPiecewiseSolution {
  * responses chained over the segments, with i(0) = i(2π) solved in closed form).
  * The options must already be validated.
  */
-export function rlPiecewiseSolution(waveform: Waveform, options: RlLoadOptions): RlPiecewiseSolution {
+export function rlPiecewiseSolution(
+  waveform: Waveform,
+  options: RlLoadOptions,
+): RlPiecewiseSolution {
   const { r, l, frequency, emf } = options;
   const reactance = TAU * frequency * l;
   const tau = reactance / r;
@@ -69,7 +72,10 @@ export function rlPiecewiseSolution(waveform: Waveform, options: RlLoadOptions):
 }
 
 /** The waveform's levels as intervals starting at θ = 0 and ending at 2π. */
-function intervalsFromZero({ edges, levels }: Waveform): { start: number; width: number; level: number }[] {
+function intervalsFromZero({
+  edges,
+  levels,
+}: Waveform): { start: number; width: number; level: number }[] {
   const count = edges.length;
   const intervals: { start: number; width: number; level: number }[] = [];
   const first = edges[0] as number;

@@ -12,17 +12,46 @@ export function assertLossInputs(
   }
   const d = device as Record<string, unknown>;
   assertOneOf('device.kind', d.kind, ['igbt', 'mosfet'] as const);
-  const nonNegative = d.kind === 'igbt' ? ['vce0', 'rce', 'vf0', 'rf', 'eon', 'eoff', 'err'] : ['rdsOn', 'eon', 'eoff', 'err'];
+  const nonNegative =
+    d.kind === 'igbt'
+      ? ['vce0', 'rce', 'vf0', 'rf', 'eon', 'eoff', 'err']
+      : ['rdsOn', 'eon', 'eoff', 'err'];
   for (const field of nonNegative) assertNumberInRange(`device.${field}`, d[field], { min: 0 });
-  assertNumberInRange('device.referenceVoltage', d.referenceVoltage, { min: 0, minExclusive: true });
-  assertNumberInRange('device.referenceCurrent', d.referenceCurrent, { min: 0, minExclusive: true });
-  const { vdc, ma, peakCurrent, currentAngle = 0, switchingFrequency, topology = 'three-phase', zeroSequence = 'none' } = options;
+  assertNumberInRange('device.referenceVoltage', d.referenceVoltage, {
+    min: 0,
+    minExclusive: true,
+  });
+  assertNumberInRange('device.referenceCurrent', d.referenceCurrent, {
+    min: 0,
+    minExclusive: true,
+  });
+  const {
+    vdc,
+    ma,
+    peakCurrent,
+    currentAngle = 0,
+    switchingFrequency,
+    topology = 'three-phase',
+    zeroSequence = 'none',
+  } = options;
   assertNumberInRange('vdc', vdc, { min: 0, minExclusive: true });
   assertNumberInRange('ma', ma, { min: 0, max: 4 });
   assertNumberInRange('peakCurrent', peakCurrent, { min: 0 });
   assertNumberInRange('currentAngle', currentAngle, { min: -Math.PI, max: Math.PI });
-  assertNumberInRange('switchingFrequency', switchingFrequency, { min: 0, minExclusive: true, max: 1e8 });
+  assertNumberInRange('switchingFrequency', switchingFrequency, {
+    min: 0,
+    minExclusive: true,
+    max: 1e8,
+  });
   assertOneOf('topology', topology, ['h-bridge', 'three-phase'] as const);
   assertOneOf('zeroSequence', zeroSequence, ['none', 'third-harmonic', 'min-max'] as const);
-  return { vdc, ma, peakCurrent, currentAngle, switchingFrequency, topology, zeroSequence } as Required<LossOperatingPoint> & { device: SemiconductorDevice };
+  return {
+    vdc,
+    ma,
+    peakCurrent,
+    currentAngle,
+    switchingFrequency,
+    topology,
+    zeroSequence,
+  } as Required<LossOperatingPoint> & { device: SemiconductorDevice };
 }

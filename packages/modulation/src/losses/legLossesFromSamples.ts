@@ -37,13 +37,22 @@ export interface LegLosses {
  * @param duties - high-side duty per carrier period, fractions in [0, 1]
  * @param currents - leg current per carrier period, A (same length)
  */
-export function legLossesFromSamples(duties: readonly number[], currents: readonly number[], options: LegLossSampleOptions): LegLosses {
+export function legLossesFromSamples(
+  duties: readonly number[],
+  currents: readonly number[],
+  options: LegLossSampleOptions,
+): LegLosses {
   assertFiniteArray('duties', duties, 1);
   assertFiniteArray('currents', currents, duties.length, duties.length);
   const { device, vdc, switchingFrequency: fsw } = options;
   assertNumberInRange('vdc', vdc, { min: 0, minExclusive: true });
   assertNumberInRange('switchingFrequency', fsw, { min: 0, minExclusive: true });
-  const sums: Record<'ut' | 'lt' | 'ud' | 'ld', [number, number]> = { ut: [0, 0], lt: [0, 0], ud: [0, 0], ld: [0, 0] };
+  const sums: Record<'ut' | 'lt' | 'ud' | 'ld', [number, number]> = {
+    ut: [0, 0],
+    lt: [0, 0],
+    ud: [0, 0],
+    ld: [0, 0],
+  };
   for (let j = 0; j < duties.length; j++) {
     const d = duties[j] as number;
     if (d < 0 || d > 1) throw new ParameterRangeError(`duties[${j}]`, 'a fraction in [0, 1]', d);
@@ -76,6 +85,18 @@ export function legLossesFromSamples(duties: readonly number[], currents: readon
     switching: switching / n,
     total: (conduction + switching) / n,
   });
-  const result = { upperTransistor: loss(sums.ut), lowerTransistor: loss(sums.lt), upperDiode: loss(sums.ud), lowerDiode: loss(sums.ld) };
-  return { ...result, total: result.upperTransistor.total + result.lowerTransistor.total + result.upperDiode.total + result.lowerDiode.total };
+  const result = {
+    upperTransistor: loss(sums.ut),
+    lowerTransistor: loss(sums.lt),
+    upperDiode: loss(sums.ud),
+    lowerDiode: loss(sums.ld),
+  };
+  return {
+    ...result,
+    total:
+      result.upperTransistor.total +
+      result.lowerTransistor.total +
+      result.upperDiode.total +
+      result.lowerDiode.total,
+  };
 }

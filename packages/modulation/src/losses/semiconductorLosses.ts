@@ -29,15 +29,33 @@ import { summariseLosses } from './summariseLosses.js';
  * @param device - datasheet values of one switch position
  * @throws ParameterRangeError for zeroSequence 'min-max' or ma outside the linear range
  */
-export function semiconductorLosses(device: SemiconductorDevice, options: LossOperatingPoint): SemiconductorLosses {
+export function semiconductorLosses(
+  device: SemiconductorDevice,
+  options: LossOperatingPoint,
+): SemiconductorLosses {
   const point = assertLossInputs(device, options);
-  const { vdc, ma: m, peakCurrent: i, currentAngle: phi, switchingFrequency: fsw, zeroSequence } = point;
+  const {
+    vdc,
+    ma: m,
+    peakCurrent: i,
+    currentAngle: phi,
+    switchingFrequency: fsw,
+    zeroSequence,
+  } = point;
   if (zeroSequence === 'min-max') {
-    throw new ParameterRangeError('zeroSequence', "'none' or 'third-harmonic' for the closed form (use semiconductorLossesByIntegration for 'min-max')", zeroSequence);
+    throw new ParameterRangeError(
+      'zeroSequence',
+      "'none' or 'third-harmonic' for the closed form (use semiconductorLossesByIntegration for 'min-max')",
+      zeroSequence,
+    );
   }
   const linearLimit = zeroSequence === 'none' ? 1 : 2 / Math.sqrt(3);
   if (m > linearLimit + 1e-12) {
-    throw new ParameterRangeError('ma', `≤ ${linearLimit} (the linear range of zeroSequence '${zeroSequence}'; use semiconductorLossesByIntegration beyond it)`, m);
+    throw new ParameterRangeError(
+      'ma',
+      `≤ ${linearLimit} (the linear range of zeroSequence '${zeroSequence}'; use semiconductorLossesByIntegration beyond it)`,
+      m,
+    );
   }
   const cos = Math.cos(phi);
   const m3 = zeroSequence === 'third-harmonic' ? m / 6 : 0;
@@ -45,17 +63,24 @@ export function semiconductorLosses(device: SemiconductorDevice, options: LossOp
   const scale = ((vdc / device.referenceVoltage) * (i / device.referenceCurrent)) / Math.PI;
   if (device.kind === 'mosfet') {
     return summariseLosses(
-      { conduction: (device.rdsOn * i * i) / 4, switching: fsw * (device.eon + device.eoff) * scale },
+      {
+        conduction: (device.rdsOn * i * i) / 4,
+        switching: fsw * (device.eon + device.eoff) * scale,
+      },
       { conduction: 0, switching: fsw * device.err * scale },
       point,
     );
   }
   const transistor = {
-    conduction: device.vce0 * i * (1 / (2 * Math.PI) + (m * cos) / 8) + device.rce * i * i * (1 / 8 + (m * cos) / (3 * Math.PI) - third),
+    conduction:
+      device.vce0 * i * (1 / (2 * Math.PI) + (m * cos) / 8) +
+      device.rce * i * i * (1 / 8 + (m * cos) / (3 * Math.PI) - third),
     switching: fsw * (device.eon + device.eoff) * scale,
   };
   const diode = {
-    conduction: device.vf0 * i * (1 / (2 * Math.PI) - (m * cos) / 8) + device.rf * i * i * (1 / 8 - (m * cos) / (3 * Math.PI) + third),
+    conduction:
+      device.vf0 * i * (1 / (2 * Math.PI) - (m * cos) / 8) +
+      device.rf * i * i * (1 / 8 - (m * cos) / (3 * Math.PI) + third),
     switching: fsw * device.err * scale,
   };
   return summariseLosses(transistor, diode, point);

@@ -23,10 +23,17 @@ export interface LossIntegrationOptions extends LossOperatingPoint {
  * O(1/N²) in the linear range; this one also covers 'min-max' and overmodulation (clamped
  * periods do not switch). Leg a is evaluated; every leg has the same average by symmetry.
  */
-export function semiconductorLossesByIntegration(device: SemiconductorDevice, options: LossIntegrationOptions): SemiconductorLosses {
+export function semiconductorLossesByIntegration(
+  device: SemiconductorDevice,
+  options: LossIntegrationOptions,
+): SemiconductorLosses {
   const point = assertLossInputs(device, options);
   const { fundamentalFrequency = 50 } = options;
-  assertNumberInRange('fundamentalFrequency', fundamentalFrequency, { min: 0, minExclusive: true, max: point.switchingFrequency / 3 });
+  assertNumberInRange('fundamentalFrequency', fundamentalFrequency, {
+    min: 0,
+    minExclusive: true,
+    max: point.switchingFrequency / 3,
+  });
   const n = Math.round(point.switchingFrequency / fundamentalFrequency);
   const modulation =
     point.topology === 'h-bridge'
@@ -39,11 +46,22 @@ export function semiconductorLossesByIntegration(device: SemiconductorDevice, op
     duties.push(dutyFromReference(legReferences(theta, modulation)[0] as number));
     currents.push(point.peakCurrent * Math.sin(theta - point.currentAngle));
   }
-  const leg = legLossesFromSamples(duties, currents, { device, vdc: point.vdc, switchingFrequency: point.switchingFrequency });
+  const leg = legLossesFromSamples(duties, currents, {
+    device,
+    vdc: point.vdc,
+    switchingFrequency: point.switchingFrequency,
+  });
   // One transistor / one diode: the mean of the upper and lower positions.
-  const mean = (a: { conduction: number; switching: number }, b: { conduction: number; switching: number }) => ({
+  const mean = (
+    a: { conduction: number; switching: number },
+    b: { conduction: number; switching: number },
+  ) => ({
     conduction: (a.conduction + b.conduction) / 2,
     switching: (a.switching + b.switching) / 2,
   });
-  return summariseLosses(mean(leg.upperTransistor, leg.lowerTransistor), mean(leg.upperDiode, leg.lowerDiode), point);
+  return summariseLosses(
+    mean(leg.upperTransistor, leg.lowerTransistor),
+    mean(leg.upperDiode, leg.lowerDiode),
+    point,
+  );
 }

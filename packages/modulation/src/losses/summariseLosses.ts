@@ -4,7 +4,13 @@ import type { DeviceLoss, SemiconductorLosses } from './lossTypes.js';
 export function summariseLosses(
   transistor: Omit<DeviceLoss, 'total'>,
   diode: Omit<DeviceLoss, 'total'>,
-  point: { vdc: number; ma: number; peakCurrent: number; currentAngle: number; topology: 'h-bridge' | 'three-phase' },
+  point: {
+    vdc: number;
+    ma: number;
+    peakCurrent: number;
+    currentAngle: number;
+    topology: 'h-bridge' | 'three-phase';
+  },
 ): SemiconductorLosses {
   const legs = point.topology === 'h-bridge' ? 2 : 3;
   const t = { ...transistor, total: transistor.conduction + transistor.switching };
@@ -13,7 +19,8 @@ export function summariseLosses(
   const total = legs * perLeg;
   // Average leg voltage (vdc/2)·ma·sin θ times Î·sin(θ − φ): mean vdc·ma·Î·cos φ/4 per leg
   // (zero-sequence voltage carries no power into a balanced load with isolated neutral).
-  const outputPower = (legs * point.vdc * point.ma * point.peakCurrent * Math.cos(point.currentAngle)) / 4;
+  const outputPower =
+    (legs * point.vdc * point.ma * point.peakCurrent * Math.cos(point.currentAngle)) / 4;
   return {
     transistor: t,
     diode: d,

@@ -5,6 +5,10 @@ import type { SemiconductorDevice } from './lossTypes.js';
  * current magnitude, (vdc/Vref)·(|i|/Iref): linear in both (common practice; the form
  * used by Bierhoff and Fuchs, PESC 2004, from memory).
  */
-export function switchingEnergyScale(device: SemiconductorDevice, vdc: number, current: number): number {
+export function switchingEnergyScale(
+  device: SemiconductorDevice,
+  vdc: number,
+  current: number,
+): number {
   return (vdc / device.referenceVoltage) * (Math.abs(current) / device.referenceCurrent);
 }

@@ -36,7 +36,10 @@ export type InductanceTarget =
     };
 
 /** Options of {@link switchingFrequencyTradeoff}. */
-export interface SwitchingFrequencyTradeoffOptions extends Omit<LossOperatingPoint, 'switchingFrequency'> {
+export interface SwitchingFrequencyTradeoffOptions extends Omit<
+  LossOperatingPoint,
+  'switchingFrequency'
+> {
   device: SemiconductorDevice;
   filter: InductanceTarget;
   /** H-bridge scheme (sets the ripple bound and the THD spectrum). @default 'bipolar' */
@@ -66,9 +69,14 @@ export interface SwitchingFrequencyTradeoff {
  *
  * @param frequencies - carrier frequencies, Hz, 1 to 1000 values
  */
-export function switchingFrequencyTradeoff(frequencies: readonly number[], options: SwitchingFrequencyTradeoffOptions): SwitchingFrequencyTradeoff {
+export function switchingFrequencyTradeoff(
+  frequencies: readonly number[],
+  options: SwitchingFrequencyTradeoffOptions,
+): SwitchingFrequencyTradeoff {
   assertFiniteArray('frequencies', frequencies, 1, 1000);
-  frequencies.forEach((f, i) => assertNumberInRange(`frequencies[${i}]`, f, { min: 0, minExclusive: true, max: 1e8 }));
+  frequencies.forEach((f, i) =>
+    assertNumberInRange(`frequencies[${i}]`, f, { min: 0, minExclusive: true, max: 1e8 }),
+  );
   const { device, filter, scheme = 'bipolar', fundamentalFrequency = 50, ...point } = options;
   assertOneOf('scheme', scheme, ['bipolar', 'unipolar'] as const);
   if (typeof filter !== 'object' || filter === null) {
@@ -77,13 +85,30 @@ export function switchingFrequencyTradeoff(frequencies: readonly number[], optio
   assertOneOf('filter.target', filter.target, ['ripple', 'thd'] as const);
   const topology = point.topology ?? 'three-phase';
   if (filter.target === 'thd' && topology !== 'h-bridge') {
-    throw new ParameterRangeError('filter.target', "'ripple' for topology 'three-phase' (the THD target is sized on the H-bridge spectrum)", filter.target);
+    throw new ParameterRangeError(
+      'filter.target',
+      "'ripple' for topology 'three-phase' (the THD target is sized on the H-bridge spectrum)",
+      filter.target,
+    );
   }
   const zeroSequence = point.zeroSequence ?? 'none';
-  const linear = zeroSequence !== 'min-max' && point.ma <= (zeroSequence === 'none' || topology === 'h-bridge' ? 1 : 2 / Math.sqrt(3));
-  const series: SwitchingFrequencyTradeoff = { frequencies: [...frequencies], totalLoss: [], conductionLoss: [], switchingLoss: [], efficiency: [], inductance: [] };
+  const linear =
+    zeroSequence !== 'min-max' &&
+    point.ma <= (zeroSequence === 'none' || topology === 'h-bridge' ? 1 : 2 / Math.sqrt(3));
+  const series: SwitchingFrequencyTradeoff = {
+    frequencies: [...frequencies],
+    totalLoss: [],
+    conductionLoss: [],
+    switchingLoss: [],
+    efficiency: [],
+    inductance: [],
+  };
   frequencies.forEach((switchingFrequency, index) => {
-    const operatingPoint = { ...point, zeroSequence: topology === 'h-bridge' ? ('none' as const) : zeroSequence, switchingFrequency };
+    const operatingPoint = {
+      ...point,
+      zeroSequence: topology === 'h-bridge' ? ('none' as const) : zeroSequence,
+      switchingFrequency,
+    };
     const losses: SemiconductorLosses = linear
       ? semiconductorLosses(device, operatingPoint)
       : semiconductorLossesByIntegration(device, { ...operatingPoint, fundamentalFrequency });
@@ -91,26 +116,64 @@ export function switchingFrequencyTradeoff(frequencies: readonly number[], optio
     series.conductionLoss.push(losses.conduction);
     series.switchingLoss.push(losses.switching);
     series.efficiency.push(losses.efficiency);
-    series.inductance.push(inductanceFor(filter, { switchingFrequency, index, vdc: point.vdc, ma: point.ma, scheme, topology, fundamentalFrequency }));
+    series.inductance.push(
+      inductanceFor(filter, {
+        switchingFrequency,
+        index,
+        vdc: point.vdc,
+        ma: point.ma,
+        scheme,
+        topology,
+        fundamentalFrequency,
+      }),
+    );
   });
   return series;
 }
 
 function inductanceFor(
   filter: InductanceTarget,
-  at: { switchingFrequency: number; index: number; vdc: number; ma: number; scheme: 'bipolar' | 'unipolar'; topology: string; fundamentalFrequency: number },
+  at: {
+    switchingFrequency: number;
+    index: number;
+    vdc: number;
+    ma: number;
+    scheme: 'bipolar' | 'unipolar';
+    topology: string;
+    fundamentalFrequency: number;
+  },
 ): number {
   if (filter.target === 'ripple') {
     const bridge = at.topology === 'h-bridge' ? at.scheme : 'half-bridge';
-    return rippleInductance({ vdc: at.vdc, switchingFrequency: at.switchingFrequency, ripple: filter.ripple, bridge });
+    return rippleInductance({
+      vdc: at.vdc,
+      switchingFrequency: at.switchingFrequency,
+      ripple: filter.ripple,
+      bridge,
+    });
   }
   const ratio = at.switchingFrequency / at.fundamentalFrequency;
   const mf = Math.round(ratio);
   if (Math.abs(ratio - mf) > 1e-9 * ratio || mf < 3) {
-    throw new ParameterRangeError(`frequencies[${at.index}]`, `an integer multiple (≥ 3) of fundamentalFrequency = ${at.fundamentalFrequency} Hz for the THD target`, at.switchingFrequency);
+    throw new ParameterRangeError(
+      `frequencies[${at.index}]`,
+      `an integer multiple (≥ 3) of fundamentalFrequency = ${at.fundamentalFrequency} Hz for the THD target`,
+      at.switchingFrequency,
+    );
   }
-  const { maxThd, c, rDamping, dampingPlacement, cDamping, loadR, maxOrder = Math.min(100_000, 3 * mf + 10) } = filter;
-  const spectrum = harmonics(sineTriangle({ scheme: at.scheme, ma: at.ma, mf, vdc: at.vdc }), maxOrder);
+  const {
+    maxThd,
+    c,
+    rDamping,
+    dampingPlacement,
+    cDamping,
+    loadR,
+    maxOrder = Math.min(100_000, 3 * mf + 10),
+  } = filter;
+  const spectrum = harmonics(
+    sineTriangle({ scheme: at.scheme, ma: at.ma, mf, vdc: at.vdc }),
+    maxOrder,
+  );
   return sizeFilterInductance(spectrum, {
     c,
     maxThd,

@@ -15,7 +15,8 @@ export function findBracketedRoot(
 ): number {
   if (fa === 0) return a;
   if (fb === 0) return b;
-  if (fa > 0 === fb > 0) throw new RangeError('findBracketedRoot: f(a) and f(b) must differ in sign');
+  if (fa > 0 === fb > 0)
+    throw new RangeError('findBracketedRoot: f(a) and f(b) must differ in sign');
   let c = a;
   let fc = fa;
   let d = b - a;

@@ -1,7 +1,10 @@
 import { ParameterTypeError } from '../validation/errors.js';
 import { assertNumberInRange } from '../validation/assertions.js';
 import { applyOvermodulation } from './applyOvermodulation.js';
-import { overmodulationSetting, type OvermodulationSettingOptions } from './overmodulationSetting.js';
+import {
+  overmodulationSetting,
+  type OvermodulationSettingOptions,
+} from './overmodulationSetting.js';
 import type { OvermodulationMode, SpaceVectorReference } from './spaceVectorTypes.js';
 
 /** A reference vector after overmodulation shaping, ready for {@link spaceVector}. */

@@ -5,8 +5,10 @@ import type { OvermodulationMode } from './spaceVectorTypes.js';
 import { spaceVectorWaveforms, type SpaceVectorWaveformOptions } from './spaceVectorWaveforms.js';
 
 /** Options of {@link overmodulationGainCurve}: the waveform options without m/ma, plus the sweep. */
-export interface OvermodulationGainCurveOptions
-  extends Omit<SpaceVectorWaveformOptions, 'm' | 'ma'> {
+export interface OvermodulationGainCurveOptions extends Omit<
+  SpaceVectorWaveformOptions,
+  'm' | 'ma'
+> {
   /** First commanded m of the sweep, in [0, 2√3/π). @default 0 */
   mStart?: number;
   /** Number of commanded values, evenly spaced from mStart to six-step 2√3/π inclusive. @default 45 */

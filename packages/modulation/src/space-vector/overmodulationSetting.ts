@@ -10,7 +10,10 @@ import type { OvermodulationMethod, OvermodulationMode } from './spaceVectorType
 import { modeOneFundamental, modeTwoFundamental } from './trajectoryFundamental.js';
 
 /** Overmodulation methods accepted by the space-vector functions. */
-export const OVERMODULATION_METHODS: readonly OvermodulationMethod[] = ['two-mode', 'hexagon-limit'];
+export const OVERMODULATION_METHODS: readonly OvermodulationMethod[] = [
+  'two-mode',
+  'hexagon-limit',
+];
 
 /** Bisection steps: halves a bracket of width ≤ π/6 to below 1e−16. */
 const BISECTION_STEPS = 60;
@@ -67,7 +70,8 @@ export function overmodulationSetting(
   assertNumberInRange('m', m, { min: 0, max: SIX_STEP_M });
   assertOneOf('method', method, OVERMODULATION_METHODS);
   if (m <= LINEAR_LIMIT_M) return { m, mode: 'linear', radius: m, holdingAngle: 0 };
-  if (method === 'hexagon-limit') return { m, mode: 'magnitude-limited', radius: m, holdingAngle: 0 };
+  if (method === 'hexagon-limit')
+    return { m, mode: 'magnitude-limited', radius: m, holdingAngle: 0 };
   if (m <= HEXAGON_TRAJECTORY_M) {
     const radius = bisect(modeOneFundamental, m, LINEAR_LIMIT_M, HEXAGON_VERTEX_M);
     return { m, mode: 'overmodulation-i', radius, holdingAngle: 0 };

@@ -66,7 +66,11 @@ export interface SpaceVectorSequenceOptions {
  */
 export function spaceVectorSequence(
   reference: SpaceVectorReference,
-  { sequence = 'seven-segment', zeroSplit = 0.5, clamping = 'dpwm1' }: SpaceVectorSequenceOptions = {},
+  {
+    sequence = 'seven-segment',
+    zeroSplit = 0.5,
+    clamping = 'dpwm1',
+  }: SpaceVectorSequenceOptions = {},
 ): SpaceVectorSequence {
   assertOneOf('sequence', sequence, SPACE_VECTOR_SEQUENCES);
   assertNumberInRange('zeroSplit', zeroSplit, { min: 0, max: 1 });

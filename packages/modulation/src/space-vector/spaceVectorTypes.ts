@@ -93,11 +93,7 @@ export interface SpaceVectorSequence extends SpaceVectorDwell {
  * - `'magnitude-limited'`: the simple uncompensated hexagon limit (method `'hexagon-limit'`).
  */
 export type OvermodulationMode =
-  | 'linear'
-  | 'overmodulation-i'
-  | 'overmodulation-ii'
-  | 'six-step'
-  | 'magnitude-limited';
+  'linear' | 'overmodulation-i' | 'overmodulation-ii' | 'six-step' | 'magnitude-limited';
 
 /**
  * Overmodulation methods:

@@ -9,7 +9,11 @@ import { harmonics } from './harmonics.js';
 export function fundamentalAmplitude(waveform: Waveform): number {
   const amplitude = harmonics(waveform, 1)[1]?.amplitude ?? 0;
   if (!(amplitude > 0)) {
-    throw new ParameterRangeError('waveform', 'a waveform whose fundamental (order 1) has an amplitude > 0', amplitude);
+    throw new ParameterRangeError(
+      'waveform',
+      'a waveform whose fundamental (order 1) has an amplitude > 0',
+      amplitude,
+    );
   }
   return amplitude;
 }

@@ -96,8 +96,18 @@ function accumulateFourEdges(
 ): void {
   const edge = (k: number): { theta: number; jump: number } => group[k] ?? { theta: 0, jump: 0 };
   const [e0, e1, e2, e3] = [edge(0), edge(1), edge(2), edge(3)];
-  const [k0, k1, k2, k3] = [e0, e1, e2, e3].map((e) => Math.cos(orderStep * e.theta)) as [number, number, number, number];
-  const [q0, q1, q2, q3] = [e0, e1, e2, e3].map((e) => Math.sin(orderStep * e.theta)) as [number, number, number, number];
+  const [k0, k1, k2, k3] = [e0, e1, e2, e3].map((e) => Math.cos(orderStep * e.theta)) as [
+    number,
+    number,
+    number,
+    number,
+  ];
+  const [q0, q1, q2, q3] = [e0, e1, e2, e3].map((e) => Math.sin(orderStep * e.theta)) as [
+    number,
+    number,
+    number,
+    number,
+  ];
   const blockSpan = RESEED_INTERVAL * orderStep;
   for (let blockStart = 1; blockStart <= maxOrder; blockStart += blockSpan) {
     let c0 = e0.jump * Math.cos(blockStart * e0.theta);

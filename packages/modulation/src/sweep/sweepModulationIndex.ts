@@ -52,7 +52,9 @@ export function sweepModulationIndex(
   assertNumberInRange('points', points, { min: 2, max: 1000, integer: true });
   assertNumberInRange('maxOrder', maxOrder, { min: 1, max: MAX_HARMONIC_ORDER, integer: true });
   assertFiniteArray('orders', orders, 0, maxOrder + 1);
-  orders.forEach((order, i) => assertNumberInRange(`orders[${i}]`, order, { min: 0, max: maxOrder, integer: true }));
+  orders.forEach((order, i) =>
+    assertNumberInRange(`orders[${i}]`, order, { min: 0, max: maxOrder, integer: true }),
+  );
 
   const result: ModulationIndexSweep = {
     ma: [],
@@ -69,7 +71,9 @@ export function sweepModulationIndex(
     result.fundamental.push(spectrum[1]?.amplitude ?? 0);
     result.thd.push(waveformThd(waveform));
     result.wthd.push(waveformWthd(waveform));
-    result.harmonics.forEach((series) => series.amplitude.push(spectrum[series.order]?.amplitude ?? 0));
+    result.harmonics.forEach((series) =>
+      series.amplitude.push(spectrum[series.order]?.amplitude ?? 0),
+    );
     onProgress?.((k + 1) / points);
   }
   return result;

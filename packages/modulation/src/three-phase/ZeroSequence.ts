@@ -17,14 +17,7 @@
  *   single 120° block per period (Holmes and Lipo, 2003, ch. 7).
  */
 export type ZeroSequence =
-  | 'none'
-  | 'third-harmonic'
-  | 'min-max'
-  | 'dpwm1'
-  | 'dpwm0'
-  | 'dpwm2'
-  | 'dpwm-max'
-  | 'dpwm-min';
+  'none' | 'third-harmonic' | 'min-max' | 'dpwm1' | 'dpwm0' | 'dpwm2' | 'dpwm-max' | 'dpwm-min';
 
 /** The zero-sequence choices, in the order the API and the dashboard list them. */
 export const ZERO_SEQUENCES: readonly ZeroSequence[] = [

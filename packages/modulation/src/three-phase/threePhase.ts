@@ -60,6 +60,10 @@ export function threePhase(options: ThreePhaseOptions): ThreePhaseWaveforms {
   const c = leg(2);
   return {
     legs: { a, b, c },
-    lineToLine: { ab: subtractWaveforms(a, b), bc: subtractWaveforms(b, c), ca: subtractWaveforms(c, a) },
+    lineToLine: {
+      ab: subtractWaveforms(a, b),
+      bc: subtractWaveforms(b, c),
+      ca: subtractWaveforms(c, a),
+    },
   };
 }

@@ -30,7 +30,8 @@ export function threePhaseReference(
     // |d/dθ| of a sine is ≤ ma; each offset above adds at most one more sine's slope (or ma/2
     // for the third harmonic).
     slopeBound: zeroSequence === 'none' ? ma : 2 * ma,
-    breakpoints: zeroSequence === 'none' ? [] : Array.from({ length: 12 }, (_, k) => k * THIRTY_DEGREES),
+    breakpoints:
+      zeroSequence === 'none' ? [] : Array.from({ length: 12 }, (_, k) => k * THIRTY_DEGREES),
     // Negating the three sines negates every offset except the 120° clamps, which swap rails.
     halfWaveAntisymmetric: zeroSequence !== 'dpwm-max' && zeroSequence !== 'dpwm-min',
   };

@@ -40,7 +40,11 @@ export function assertOneOf<T extends string>(
   choices: readonly T[],
 ): asserts value is T {
   if (typeof value !== 'string' || !(choices as readonly string[]).includes(value)) {
-    throw new ParameterRangeError(field, `one of ${choices.map((c) => `'${c}'`).join(', ')}`, value);
+    throw new ParameterRangeError(
+      field,
+      `one of ${choices.map((c) => `'${c}'`).join(', ')}`,
+      value,
+    );
   }
 }
 
@@ -76,7 +80,9 @@ export function assertFiniteArray(
 function describeBounds(bounds: NumberBounds): string {
   const kind = bounds.integer === true ? 'an integer' : 'a finite number';
   const parts: string[] = [];
-  if (bounds.min !== undefined) parts.push(`${bounds.minExclusive === true ? '>' : '≥'} ${bounds.min}`);
-  if (bounds.max !== undefined) parts.push(`${bounds.maxExclusive === true ? '<' : '≤'} ${bounds.max}`);
+  if (bounds.min !== undefined)
+    parts.push(`${bounds.minExclusive === true ? '>' : '≥'} ${bounds.min}`);
+  if (bounds.max !== undefined)
+    parts.push(`${bounds.maxExclusive === true ? '<' : '≤'} ${bounds.max}`);
   return parts.length === 0 ? kind : `${kind} ${parts.join(' and ')}`;
 }

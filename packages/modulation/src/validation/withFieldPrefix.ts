@@ -9,8 +9,10 @@ export function withFieldPrefix<T>(prefix: string, work: () => T): T {
   try {
     return work();
   } catch (error) {
-    if (error instanceof ParameterRangeError) throw new ParameterRangeError(prefix + error.field, error.allowed, error.value);
-    if (error instanceof ParameterTypeError) throw new ParameterTypeError(prefix + error.field, error.expected, error.value);
+    if (error instanceof ParameterRangeError)
+      throw new ParameterRangeError(prefix + error.field, error.allowed, error.value);
+    if (error instanceof ParameterTypeError)
+      throw new ParameterTypeError(prefix + error.field, error.expected, error.value);
     throw error;
   }
 }

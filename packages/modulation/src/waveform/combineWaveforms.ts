@@ -24,7 +24,7 @@ export function combineWaveforms(
   });
   events.sort((a, b) => a.angle - b.angle);
   const transitions: Transition[] = [];
-  for (let i = 0; i < events.length; ) {
+  for (let i = 0; i < events.length;) {
     const angle = (events[i] as (typeof events)[number]).angle;
     // Apply every input's change at this exact angle before evaluating.
     while (i < events.length && (events[i] as (typeof events)[number]).angle === angle) {

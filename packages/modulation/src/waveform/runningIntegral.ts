@@ -37,7 +37,10 @@ export function runningIntegral(waveform: Waveform): RunningIntegral {
     const slope = (levels[i] as number) - mean;
     valueAtEdge.push(flux);
     sum += flux * width + (slope * width * width) / 2;
-    sumOfSquares += flux * flux * width + flux * slope * width * width + (slope * slope * width * width * width) / 3;
+    sumOfSquares +=
+      flux * flux * width +
+      flux * slope * width * width +
+      (slope * slope * width * width * width) / 3;
     flux += slope * width;
   }
   const meanFlux = sum / TAU;
@@ -53,7 +56,8 @@ export function runningIntegral(waveform: Waveform): RunningIntegral {
         values[j] =
           segment < 0
             ? startValue + wrapLevel * theta
-            : (valueAtEdge[segment] as number) + ((levels[segment] as number) - mean) * (theta - (edges[segment] as number));
+            : (valueAtEdge[segment] as number) +
+              ((levels[segment] as number) - mean) * (theta - (edges[segment] as number));
       }
       return values;
     },

@@ -35,7 +35,10 @@ export function waveformFromTransitions(transitions: readonly Transition[]): Wav
   }
   // A cluster straddling 2π: the transition just after 0 is the later one (it sits at 2π plus a
   // little), so its level stands and the one just before 2π is dropped.
-  if (angles.length > 1 && (angles[0] as number) + TAU - (angles[angles.length - 1] as number) < EDGE_EPSILON) {
+  if (
+    angles.length > 1 &&
+    (angles[0] as number) + TAU - (angles[angles.length - 1] as number) < EDGE_EPSILON
+  ) {
     angles.pop();
     levels.pop();
   }
@@ -57,9 +60,12 @@ function ascendingOrder(wrapped: readonly number[]): number[] {
       start = i;
     }
   }
-  const rotation = descents === 0 || (descents === 1 && (wrapped[count - 1] as number) <= (wrapped[0] as number));
+  const rotation =
+    descents === 0 || (descents === 1 && (wrapped[count - 1] as number) <= (wrapped[0] as number));
   if (rotation) return Array.from({ length: count }, (_, k) => (start + k) % count);
-  return Array.from({ length: count }, (_, k) => k).sort((a, b) => (wrapped[a] as number) - (wrapped[b] as number) || a - b);
+  return Array.from({ length: count }, (_, k) => k).sort(
+    (a, b) => (wrapped[a] as number) - (wrapped[b] as number) || a - b,
+  );
 }
 
 function dropRepeatedLevels(angles: readonly number[], levels: readonly number[]): Waveform {

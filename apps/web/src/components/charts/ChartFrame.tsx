@@ -25,7 +25,14 @@ export function ChartFrame({
         <span className="text-sm font-semibold tracking-wide uppercase">{title}</span>
         <span className="no-print flex flex-wrap items-center gap-1">
           {controls}
-          <Button variant="ghost" onClick={() => { const el = svg(); if (el) exportSvg(el, fileName); }} aria-label={`Download ${title} as SVG`}>
+          <Button
+            variant="ghost"
+            onClick={() => {
+              const el = svg();
+              if (el) exportSvg(el, fileName);
+            }}
+            aria-label={`Download ${title} as SVG`}
+          >
             SVG
           </Button>
           <Button
@@ -33,7 +40,8 @@ export function ChartFrame({
             aria-label={`Download ${title} as PNG`}
             onClick={() => {
               const el = svg();
-              if (el) exportPng(el, fileName).catch((error: unknown) => setExportError(String(error)));
+              if (el)
+                exportPng(el, fileName).catch((error: unknown) => setExportError(String(error)));
             }}
           >
             PNG
@@ -43,7 +51,11 @@ export function ChartFrame({
       <div ref={holder} className="relative">
         {children}
       </div>
-      {exportError ? <p role="alert" className="text-xs text-bad">{exportError}</p> : null}
+      {exportError ? (
+        <p role="alert" className="text-xs text-bad">
+          {exportError}
+        </p>
+      ) : null}
       {footer}
     </figure>
   );

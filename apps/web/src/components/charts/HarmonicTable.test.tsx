@@ -3,14 +3,22 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { HarmonicTable } from './HarmonicTable';
 
 // Square wave of ±1 V: amplitude 4/(nπ) on odd n (standard Fourier series, any signals text).
-const square = Array.from({ length: 10 }, (_, i) => ({ order: i, amplitude: i % 2 === 1 ? 4 / (i * Math.PI) : 0, phase: 0 }));
+const square = Array.from({ length: 10 }, (_, i) => ({
+  order: i,
+  amplitude: i % 2 === 1 ? 4 / (i * Math.PI) : 0,
+  phase: 0,
+}));
 
 afterEach(() => vi.restoreAllMocks());
 
 describe('HarmonicTable', () => {
   it('lists the non-zero orders, largest first, and sorts by order on request', () => {
     render(<HarmonicTable harmonics={square} />);
-    const orders = () => screen.getAllByRole('row').slice(1).map((row) => within(row).getAllByRole('cell')[0]?.textContent);
+    const orders = () =>
+      screen
+        .getAllByRole('row')
+        .slice(1)
+        .map((row) => within(row).getAllByRole('cell')[0]?.textContent);
     expect(orders()).toEqual(['1', '3', '5', '7', '9']);
     // The third harmonic of a square wave is 1/3 of the fundamental.
     expect(screen.getAllByRole('row')[2]?.textContent).toContain('33.333 %');

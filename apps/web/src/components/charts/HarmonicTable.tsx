@@ -13,18 +13,45 @@ export interface HarmonicRow {
 type SortKey = 'order' | 'amplitude' | 'ratio';
 
 /** Sortable table of harmonics with the ratio to the fundamental, and CSV download. */
-export function HarmonicTable({ harmonics, title = 'Harmonic table', fileName = 'harmonics', minRatio = 1e-4, unit = 'V' }: { harmonics: readonly HarmonicRow[]; title?: string; fileName?: string; minRatio?: number; unit?: string }) {
-  const [sort, setSort] = useState<{ key: SortKey; descending: boolean }>({ key: 'amplitude', descending: true });
+export function HarmonicTable({
+  harmonics,
+  title = 'Harmonic table',
+  fileName = 'harmonics',
+  minRatio = 1e-4,
+  unit = 'V',
+}: {
+  harmonics: readonly HarmonicRow[];
+  title?: string;
+  fileName?: string;
+  minRatio?: number;
+  unit?: string;
+}) {
+  const [sort, setSort] = useState<{ key: SortKey; descending: boolean }>({
+    key: 'amplitude',
+    descending: true,
+  });
   const fundamental = harmonics.find((h) => h.order === 1)?.amplitude ?? 0;
   const rows = useMemo(() => {
-    const kept = harmonics.filter((h) => h.order >= 1 && (fundamental === 0 || h.amplitude >= minRatio * fundamental));
+    const kept = harmonics.filter(
+      (h) => h.order >= 1 && (fundamental === 0 || h.amplitude >= minRatio * fundamental),
+    );
     const value = (h: HarmonicRow) => (sort.key === 'order' ? h.order : h.amplitude);
     return [...kept].sort((a, b) => (sort.descending ? value(b) - value(a) : value(a) - value(b)));
   }, [harmonics, sort, fundamental, minRatio]);
 
   const header = (key: SortKey, text: string) => (
-    <th scope="col" aria-sort={sort.key === key ? (sort.descending ? 'descending' : 'ascending') : 'none'} className="px-2 py-1 text-left">
-      <button type="button" className="font-semibold underline-offset-2 hover:underline" onClick={() => setSort({ key, descending: sort.key === key ? !sort.descending : key !== 'order' })}>
+    <th
+      scope="col"
+      aria-sort={sort.key === key ? (sort.descending ? 'descending' : 'ascending') : 'none'}
+      className="px-2 py-1 text-left"
+    >
+      <button
+        type="button"
+        className="font-semibold underline-offset-2 hover:underline"
+        onClick={() =>
+          setSort({ key, descending: sort.key === key ? !sort.descending : key !== 'order' })
+        }
+      >
         {text} {sort.key === key ? (sort.descending ? '↓' : '↑') : ''}
       </button>
     </th>
@@ -34,7 +61,13 @@ export function HarmonicTable({ harmonics, title = 'Harmonic table', fileName = 
     downloadText(
       toCsv(
         ['order', 'label', `amplitude_${unit}_peak`, 'phase_rad', 'ratio_to_fundamental'],
-        harmonics.map((h) => [h.order, h.label ?? '', h.amplitude, h.phase, fundamental > 0 ? h.amplitude / fundamental : '']),
+        harmonics.map((h) => [
+          h.order,
+          h.label ?? '',
+          h.amplitude,
+          h.phase,
+          fundamental > 0 ? h.amplitude / fundamental : '',
+        ]),
       ),
       `${fileName}.csv`,
       'text/csv',
@@ -50,11 +83,15 @@ export function HarmonicTable({ harmonics, title = 'Harmonic table', fileName = 
       </div>
       <div className="max-h-80 overflow-auto print:max-h-none print:overflow-visible">
         <table className="w-full text-sm">
-          <caption className="sr-only">Harmonics at or above {formatPercent(minRatio, 2)} of the fundamental</caption>
+          <caption className="sr-only">
+            Harmonics at or above {formatPercent(minRatio, 2)} of the fundamental
+          </caption>
           <thead className="sticky top-0 bg-panel text-xs text-ink-soft">
             <tr>
               {header('order', 'Order')}
-              <th scope="col" className="px-2 py-1 text-left">Group</th>
+              <th scope="col" className="px-2 py-1 text-left">
+                Group
+              </th>
               {header('amplitude', `Amplitude (${unit})`)}
               {header('ratio', '% of order 1')}
             </tr>
@@ -65,7 +102,9 @@ export function HarmonicTable({ harmonics, title = 'Harmonic table', fileName = 
                 <td className="px-2 py-0.5">{h.order}</td>
                 <td className="px-2 py-0.5">{h.label ?? ''}</td>
                 <td className="px-2 py-0.5">{formatNumber(h.amplitude)}</td>
-                <td className="px-2 py-0.5">{fundamental > 0 ? formatPercent(h.amplitude / fundamental, 3) : '—'}</td>
+                <td className="px-2 py-0.5">
+                  {fundamental > 0 ? formatPercent(h.amplitude / fundamental, 3) : '—'}
+                </td>
               </tr>
             ))}
           </tbody>

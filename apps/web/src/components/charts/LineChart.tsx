@@ -27,12 +27,29 @@ export interface LineChartProps {
 }
 
 /** Several y(x) series on shared linear axes (sweeps against ma, solution branches). */
-export function LineChart({ title, fileName, series, xLabel, yLabel, width = 760, height = 280, onPick, picked, yFormat }: LineChartProps) {
+export function LineChart({
+  title,
+  fileName,
+  series,
+  xLabel,
+  yLabel,
+  width = 760,
+  height = 280,
+  onPick,
+  picked,
+  yFormat,
+}: LineChartProps) {
   const margin = { top: 14, right: 14, bottom: 40, left: 60 };
   const xs = series.flatMap((s) => s.x as number[]);
   const ys = series.flatMap((s) => (s.y as number[]).filter(Number.isFinite));
-  const x = scaleLinear().domain([Math.min(...xs, 0), Math.max(...xs, 1)]).range([margin.left, width - margin.right]).nice();
-  const y = scaleLinear().domain([Math.min(0, ...ys), Math.max(1e-12, ...ys) * 1.05]).range([height - margin.bottom, margin.top]).nice();
+  const x = scaleLinear()
+    .domain([Math.min(...xs, 0), Math.max(...xs, 1)])
+    .range([margin.left, width - margin.right])
+    .nice();
+  const y = scaleLinear()
+    .domain([Math.min(0, ...ys), Math.max(1e-12, ...ys) * 1.05])
+    .range([height - margin.bottom, margin.top])
+    .nice();
   const path = line<number>().defined((d) => Number.isFinite(d));
   return (
     <ChartFrame
@@ -40,8 +57,20 @@ export function LineChart({ title, fileName, series, xLabel, yLabel, width = 760
       fileName={fileName}
       footer={<ChartLegend series={series} swatch="line" />}
     >
-      <svg data-chart="line" viewBox={`0 0 ${width} ${height}`} className="w-full text-ink" role="img" aria-label={`${title}: ${series.map((s) => s.name).join(', ')} against ${xLabel}`}>
-        <AxisLeft scale={y} x={margin.left} width={width - margin.left - margin.right} label={yLabel} format={yFormat} />
+      <svg
+        data-chart="line"
+        viewBox={`0 0 ${width} ${height}`}
+        className="w-full text-ink"
+        role="img"
+        aria-label={`${title}: ${series.map((s) => s.name).join(', ')} against ${xLabel}`}
+      >
+        <AxisLeft
+          scale={y}
+          x={margin.left}
+          width={width - margin.left - margin.right}
+          label={yLabel}
+          format={yFormat}
+        />
         {series.map((s, si) => (
           <g key={s.name}>
             <path
@@ -59,7 +88,11 @@ export function LineChart({ title, fileName, series, xLabel, yLabel, width = 760
                       cx={x(s.x[pi] ?? 0)}
                       cy={y(value)}
                       r={picked?.series === si && picked.point === pi ? 6 : 3}
-                      fill={picked?.series === si && picked.point === pi ? 'var(--color-signal)' : s.color}
+                      fill={
+                        picked?.series === si && picked.point === pi
+                          ? 'var(--color-signal)'
+                          : s.color
+                      }
                       tabIndex={0}
                       role="button"
                       aria-label={`${s.name}: ${xLabel} ${formatNumber(s.x[pi] ?? 0)}, ${formatNumber(value)}`}

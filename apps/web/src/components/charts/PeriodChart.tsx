@@ -25,12 +25,25 @@ export interface PeriodChartProps {
 }
 
 /** Currents or voltages over one period on a shared angle axis (0 to 2π), one line each. */
-export function PeriodChart({ title, fileName, traces, unit, footer, controls, width = 760 }: PeriodChartProps) {
+export function PeriodChart({
+  title,
+  fileName,
+  traces,
+  unit,
+  footer,
+  controls,
+  width = 760,
+}: PeriodChartProps) {
   const height = 240;
   const margin = { top: 12, right: 14, bottom: 36, left: 56 };
-  const x = scaleLinear().domain([0, 2 * Math.PI]).range([margin.left, width - margin.right]);
+  const x = scaleLinear()
+    .domain([0, 2 * Math.PI])
+    .range([margin.left, width - margin.right]);
   const extent = Math.max(1e-9, ...traces.flatMap((t) => t.values.map(Math.abs)));
-  const y = scaleLinear().domain([-extent * 1.08, extent * 1.08]).range([height - margin.bottom, margin.top]).nice();
+  const y = scaleLinear()
+    .domain([-extent * 1.08, extent * 1.08])
+    .range([height - margin.bottom, margin.top])
+    .nice();
   return (
     <ChartFrame
       title={title}
@@ -43,20 +56,41 @@ export function PeriodChart({ title, fileName, traces, unit, footer, controls, w
         </>
       }
     >
-      <svg data-chart="period" viewBox={`0 0 ${width} ${height}`} className="w-full text-ink" role="img" aria-label={`${title}: ${traces.map((t) => t.name).join(', ')} over one period`}>
-        <AxisLeft scale={y} x={margin.left} width={width - margin.left - margin.right} label={unit} ticks={5} />
+      <svg
+        data-chart="period"
+        viewBox={`0 0 ${width} ${height}`}
+        className="w-full text-ink"
+        role="img"
+        aria-label={`${title}: ${traces.map((t) => t.name).join(', ')} over one period`}
+      >
+        <AxisLeft
+          scale={y}
+          x={margin.left}
+          width={width - margin.left - margin.right}
+          label={unit}
+          ticks={5}
+        />
         {traces.map((t) => (
           <path
             key={t.name}
             data-trace={t.name}
-            d={line<number>().x((_, i) => x(t.angles[i] ?? 0)).y((d) => y(d))(t.values as number[]) ?? ''}
+            d={
+              line<number>()
+                .x((_, i) => x(t.angles[i] ?? 0))
+                .y((d) => y(d))(t.values as number[]) ?? ''
+            }
             fill="none"
             stroke={t.color}
             strokeWidth={1.4}
             strokeDasharray={t.dashed ? '5 4' : undefined}
           />
         ))}
-        <AxisBottom scale={x} y={height - margin.bottom} label="angle θ (rad)" format={formatRadians} />
+        <AxisBottom
+          scale={x}
+          y={height - margin.bottom}
+          label="angle θ (rad)"
+          format={formatRadians}
+        />
       </svg>
     </ChartFrame>
   );

@@ -37,7 +37,11 @@ export function drawnHarmonics(harmonics: readonly SpectrumBar[]): SpectrumBar[]
 }
 
 /** Keeps the tallest bars' labels that do not collide with one already placed (greedy, by amplitude). */
-function placeLabels(candidates: readonly SpectrumBar[], xOf: (h: SpectrumBar) => number, minGap = 34): SpectrumBar[] {
+function placeLabels(
+  candidates: readonly SpectrumBar[],
+  xOf: (h: SpectrumBar) => number,
+  minGap = 34,
+): SpectrumBar[] {
   const placed: SpectrumBar[] = [];
   for (const h of [...candidates].sort((a, b) => b.amplitude - a.amplitude)) {
     if (placed.every((p) => Math.abs(xOf(p) - xOf(h)) >= minGap)) placed.push(h);
@@ -46,7 +50,15 @@ function placeLabels(candidates: readonly SpectrumBar[], xOf: (h: SpectrumBar) =
 }
 
 /** Harmonic amplitudes as bars, linear or logarithmic, carrier groups labelled, value on hover. */
-export function SpectrumChart({ series, title = 'Spectrum', fileName = 'spectrum', labelThreshold = 0.15, width = 760, unit = 'V', controls }: SpectrumChartProps) {
+export function SpectrumChart({
+  series,
+  title = 'Spectrum',
+  fileName = 'spectrum',
+  labelThreshold = 0.15,
+  width = 760,
+  unit = 'V',
+  controls,
+}: SpectrumChartProps) {
   const [scaleKind, setScaleKind] = useState<'linear' | 'log'>('linear');
   const [hover, setHover] = useState<number | null>(null);
   const height = 280;
@@ -54,12 +66,20 @@ export function SpectrumChart({ series, title = 'Spectrum', fileName = 'spectrum
   const all = series.map((s) => drawnHarmonics(s.harmonics));
   const maxOrder = Math.max(1, ...all.flat().map((h) => h.order));
   const peak = Math.max(1e-12, ...all.flat().map((h) => h.amplitude));
-  const x = scaleLinear().domain([0.5, maxOrder + 0.5]).range([margin.left, width - margin.right]);
+  const x = scaleLinear()
+    .domain([0.5, maxOrder + 0.5])
+    .range([margin.left, width - margin.right]);
   const floor = peak * 1e-5;
   const y =
     scaleKind === 'linear'
-      ? scaleLinear().domain([0, peak * 1.08]).range([height - margin.bottom, margin.top]).nice()
-      : scaleLog().domain([floor, peak * 1.5]).range([height - margin.bottom, margin.top]).clamp(true);
+      ? scaleLinear()
+          .domain([0, peak * 1.08])
+          .range([height - margin.bottom, margin.top])
+          .nice()
+      : scaleLog()
+          .domain([floor, peak * 1.5])
+          .range([height - margin.bottom, margin.top])
+          .clamp(true);
   const step = (width - margin.left - margin.right) / maxOrder;
   const barWidth = Math.max(0.6, (step * 0.82) / series.length);
   const base = height - margin.bottom;
@@ -67,10 +87,23 @@ export function SpectrumChart({ series, title = 'Spectrum', fileName = 'spectrum
   const fundamental = first.find((h) => h.order === 1)?.amplitude ?? 0;
   const largestHarmonic = Math.max(0, ...first.filter((h) => h.order >= 2).map((h) => h.amplitude));
   const labelled = placeLabels(
-    first.filter((h) => h.label !== undefined && h.order >= 2 && h.amplitude >= labelThreshold * largestHarmonic && largestHarmonic > 0),
+    first.filter(
+      (h) =>
+        h.label !== undefined &&
+        h.order >= 2 &&
+        h.amplitude >= labelThreshold * largestHarmonic &&
+        largestHarmonic > 0,
+    ),
     (h) => x(h.order),
   );
-  const hovered = hover === null ? null : series.map((s, i) => ({ name: s.name, color: s.color, bar: all[i]?.find((h) => h.order === hover) }));
+  const hovered =
+    hover === null
+      ? null
+      : series.map((s, i) => ({
+          name: s.name,
+          color: s.color,
+          bar: all[i]?.find((h) => h.order === hover),
+        }));
   const hoverWidth = series.length > 1 ? 300 : 200;
   const significant = first.filter((h) => h.amplitude > peak * 1e-3).map((h) => h.order);
 
@@ -87,15 +120,17 @@ export function SpectrumChart({ series, title = 'Spectrum', fileName = 'spectrum
       fileName={fileName}
       controls={
         <>
-        {controls}
-        <Button variant="ghost" aria-pressed={scaleKind === 'log'} onClick={() => setScaleKind(scaleKind === 'linear' ? 'log' : 'linear')}>
-          {scaleKind === 'linear' ? 'Log scale' : 'Linear scale'}
-        </Button>
+          {controls}
+          <Button
+            variant="ghost"
+            aria-pressed={scaleKind === 'log'}
+            onClick={() => setScaleKind(scaleKind === 'linear' ? 'log' : 'linear')}
+          >
+            {scaleKind === 'linear' ? 'Log scale' : 'Linear scale'}
+          </Button>
         </>
       }
-      footer={
-        series.length > 1 ? <ChartLegend series={series} swatch="square" /> : null
-      }
+      footer={series.length > 1 ? <ChartLegend series={series} swatch="square" /> : null}
     >
       <svg
         data-chart="spectrum"
@@ -114,7 +149,14 @@ export function SpectrumChart({ series, title = 'Spectrum', fileName = 'spectrum
         }}
         onMouseLeave={() => setHover(null)}
       >
-        <AxisLeft scale={y} x={margin.left} width={width - margin.left - margin.right} label={`amplitude (${unit} peak)`} ticks={scaleKind === 'log' ? 5 : 5} format={scaleKind === 'log' ? (v) => formatNumber(v, 2) : undefined} />
+        <AxisLeft
+          scale={y}
+          x={margin.left}
+          width={width - margin.left - margin.right}
+          label={`amplitude (${unit} peak)`}
+          ticks={scaleKind === 'log' ? 5 : 5}
+          format={scaleKind === 'log' ? (v) => formatNumber(v, 2) : undefined}
+        />
         {series.map((s, i) => (
           <g key={s.name} fill={s.color} data-series={s.name}>
             {(all[i] ?? []).map((h) => {
@@ -124,7 +166,7 @@ export function SpectrumChart({ series, title = 'Spectrum', fileName = 'spectrum
                   key={h.order}
                   data-order={h.order}
                   data-bar=""
-                  x={x(h.order) - (step * 0.41) + i * barWidth}
+                  x={x(h.order) - step * 0.41 + i * barWidth}
                   width={barWidth}
                   y={top}
                   height={Math.max(0, base - top)}
@@ -137,30 +179,56 @@ export function SpectrumChart({ series, title = 'Spectrum', fileName = 'spectrum
         ))}
         <g fontSize={9} fill="currentColor" textAnchor="middle" data-labels="">
           {labelled.map((h) => (
-            <text key={h.order} data-label-order={h.order} x={x(h.order)} y={y(Math.max(h.amplitude, floor)) - 4}>
+            <text
+              key={h.order}
+              data-label-order={h.order}
+              x={x(h.order)}
+              y={y(Math.max(h.amplitude, floor)) - 4}
+            >
               {h.label}
             </text>
           ))}
         </g>
-        <AxisBottom scale={x} y={base} label="harmonic order" ticks={10} format={(v) => String(v)} />
+        <AxisBottom
+          scale={x}
+          y={base}
+          label="harmonic order"
+          ticks={10}
+          format={(v) => String(v)}
+        />
         {hovered && hover !== null ? (
-          <g transform={`translate(${Math.min(x(hover) + 8, width - hoverWidth - 10)},${margin.top})`} pointerEvents="none">
-            <rect width={hoverWidth} height={18 + hovered.length * 14} rx={4} fill="var(--color-panel)" stroke="var(--color-rule)" />
+          <g
+            transform={`translate(${Math.min(x(hover) + 8, width - hoverWidth - 10)},${margin.top})`}
+            pointerEvents="none"
+          >
+            <rect
+              width={hoverWidth}
+              height={18 + hovered.length * 14}
+              rx={4}
+              fill="var(--color-panel)"
+              stroke="var(--color-rule)"
+            />
             <text x={8} y={13} fontSize={10} fontWeight={600} fill="currentColor">
               order {hover}
-              {first.find((h) => h.order === hover)?.label ? ` (${first.find((h) => h.order === hover)?.label})` : ''}
+              {first.find((h) => h.order === hover)?.label
+                ? ` (${first.find((h) => h.order === hover)?.label})`
+                : ''}
             </text>
             {hovered.map((entry, i) => (
               <text key={entry.name} x={8} y={27 + i * 14} fontSize={10} fill={entry.color}>
                 {series.length > 1 ? `${entry.name}: ` : ''}
-                {entry.bar ? `${formatNumber(entry.bar.amplitude)} ${unit}${fundamental > 0 && i === 0 ? ` · ${formatPercent(entry.bar.amplitude / fundamental)} of order 1` : ''}${i > 0 && entry.bar.label !== undefined && entry.bar.label !== first.find((h) => h.order === hover)?.label ? ` (${entry.bar.label})` : ''}` : '—'}
+                {entry.bar
+                  ? `${formatNumber(entry.bar.amplitude)} ${unit}${fundamental > 0 && i === 0 ? ` · ${formatPercent(entry.bar.amplitude / fundamental)} of order 1` : ''}${i > 0 && entry.bar.label !== undefined && entry.bar.label !== first.find((h) => h.order === hover)?.label ? ` (${entry.bar.label})` : ''}`
+                  : '—'}
               </text>
             ))}
           </g>
         ) : null}
       </svg>
       <p className="sr-only" aria-live="polite">
-        {hover !== null && hovered?.[0]?.bar ? `Order ${hover}: ${formatNumber(hovered[0].bar.amplitude)} ${unit}` : ''}
+        {hover !== null && hovered?.[0]?.bar
+          ? `Order ${hover}: ${formatNumber(hovered[0].bar.amplitude)} ${unit}`
+          : ''}
       </p>
     </ChartFrame>
   );

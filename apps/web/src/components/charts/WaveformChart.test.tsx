@@ -6,18 +6,26 @@ import { WaveformChart } from './WaveformChart';
 const mf = 9;
 const output = sineTriangle({ scheme: 'bipolar', ma: 0.8, mf, vdc: 200 });
 const angles = Array.from({ length: 401 }, (_, k) => (2 * Math.PI * k) / 400);
-const modulator = { angles, reference: angles.map(sineReference(0.8).value), carrier: angles.map((t) => triangleCarrier(t, { mf })) };
+const modulator = {
+  angles,
+  reference: angles.map(sineReference(0.8).value),
+  carrier: angles.map((t) => triangleCarrier(t, { mf })),
+};
 
 afterEach(() => vi.restoreAllMocks());
 
 describe('WaveformChart', () => {
   it('draws reference, carrier and the switched output, and names its edges', () => {
-    const { container } = render(<WaveformChart modulator={modulator} output={output} outputName="Bridge output" />);
+    const { container } = render(
+      <WaveformChart modulator={modulator} output={output} outputName="Bridge output" />,
+    );
     const svg = container.querySelector('svg[data-chart="waveform"]');
     // Bipolar at odd mf switches twice per carrier cycle: 2·mf edges per period (a fact of the trade).
     expect(svg?.getAttribute('aria-label')).toContain(`${2 * mf} switching edges`);
     expect(output.edges).toHaveLength(2 * mf);
-    const paths = Array.from(container.querySelectorAll('svg[data-chart="waveform"] path')).filter((p) => (p.getAttribute('d') ?? '').length > 20);
+    const paths = Array.from(container.querySelectorAll('svg[data-chart="waveform"] path')).filter(
+      (p) => (p.getAttribute('d') ?? '').length > 20,
+    );
     expect(paths.length).toBeGreaterThanOrEqual(3);
   });
 

@@ -1,4 +1,13 @@
-import { line, curveStepAfter, scaleLinear, select, zoom, zoomIdentity, type ZoomBehavior, type ZoomTransform } from 'd3';
+import {
+  line,
+  curveStepAfter,
+  scaleLinear,
+  select,
+  zoom,
+  zoomIdentity,
+  type ZoomBehavior,
+  type ZoomTransform,
+} from 'd3';
 import { useEffect, useId, useMemo, useRef, useState, type ReactNode } from 'react';
 import { Button } from '../ui/Button';
 import { AxisBottom, AxisLeft, formatRadians } from './axes';
@@ -13,7 +22,9 @@ export interface WaveformChartProps {
   title?: string;
   fileName?: string;
   /** Reference and carrier sampled over [0, 2π], per unit of the carrier peak. */
-  modulator?: { angles: readonly number[]; reference: readonly number[]; carrier: readonly number[] | null } | undefined;
+  modulator?:
+    | { angles: readonly number[]; reference: readonly number[]; carrier: readonly number[] | null }
+    | undefined;
   /** The switched output (volts). */
   output: StepWaveform;
   outputName: string;
@@ -37,7 +48,16 @@ function stepPoints({ edges, levels }: StepWaveform): [number, number][] {
 }
 
 /** Reference and carrier above, the switched output below, over a zoomable, pannable angle window. */
-export function WaveformChart({ title = 'Modulator and output', fileName = 'waveform', modulator, output, outputName, overlay, controls, width = 760 }: WaveformChartProps) {
+export function WaveformChart({
+  title = 'Modulator and output',
+  fileName = 'waveform',
+  modulator,
+  output,
+  outputName,
+  overlay,
+  controls,
+  width = 760,
+}: WaveformChartProps) {
   const svgRef = useRef<SVGSVGElement>(null);
   const zoomRef = useRef<ZoomBehavior<SVGSVGElement, unknown> | null>(null);
   const [transform, setTransform] = useState<ZoomTransform>(zoomIdentity);
@@ -48,7 +68,13 @@ export function WaveformChart({ title = 'Modulator and output', fileName = 'wave
   const height = margin.top + topHeight + gap + bottomHeight + margin.bottom;
   const innerWidth = width - margin.left - margin.right;
 
-  const baseX = useMemo(() => scaleLinear().domain([0, TAU]).range([margin.left, margin.left + innerWidth]), [innerWidth, margin.left]);
+  const baseX = useMemo(
+    () =>
+      scaleLinear()
+        .domain([0, TAU])
+        .range([margin.left, margin.left + innerWidth]),
+    [innerWidth, margin.left],
+  );
   const x = useMemo(() => transform.rescaleX(baseX), [transform, baseX]);
 
   useEffect(() => {
@@ -78,14 +104,20 @@ export function WaveformChart({ title = 'Modulator and output', fileName = 'wave
   };
   const panBy = (fraction: number) => {
     const svg = svgRef.current;
-    if (svg && zoomRef.current) select(svg).call(zoomRef.current.translateBy, (-fraction * innerWidth) / transform.k, 0);
+    if (svg && zoomRef.current)
+      select(svg).call(zoomRef.current.translateBy, (-fraction * innerWidth) / transform.k, 0);
   };
 
-  const topY = scaleLinear().domain([-1.6, 1.6]).range([margin.top + topHeight, margin.top]);
+  const topY = scaleLinear()
+    .domain([-1.6, 1.6])
+    .range([margin.top + topHeight, margin.top]);
   const levels = output.levels.length ? output.levels : [0];
   const peak = Math.max(1e-9, ...levels.map(Math.abs), ...(overlay?.values ?? []).map(Math.abs));
   const bottomTop = margin.top + topHeight + gap;
-  const bottomY = scaleLinear().domain([-peak * 1.15, peak * 1.15]).range([bottomTop + bottomHeight, bottomTop]).nice();
+  const bottomY = scaleLinear()
+    .domain([-peak * 1.15, peak * 1.15])
+    .range([bottomTop + bottomHeight, bottomTop])
+    .nice();
 
   const [lo, hi] = x.domain() as [number, number];
   const visible = (angles: readonly number[], values: readonly number[]) => {
@@ -95,9 +127,15 @@ export function WaveformChart({ title = 'Modulator and output', fileName = 'wave
     });
     return points;
   };
-  const topLineOf = (scale: (v: number) => number) => line<[number, number]>().x((d) => x(d[0])).y((d) => scale(d[1]));
+  const topLineOf = (scale: (v: number) => number) =>
+    line<[number, number]>()
+      .x((d) => x(d[0]))
+      .y((d) => scale(d[1]));
   const topLine = topLineOf(topY);
-  const stepLine = line<[number, number]>().x((d) => x(d[0])).y((d) => bottomY(d[1])).curve(curveStepAfter);
+  const stepLine = line<[number, number]>()
+    .x((d) => x(d[0]))
+    .y((d) => bottomY(d[1]))
+    .curve(curveStepAfter);
   const clipId = `clip-${useId().replace(/:/g, '')}`;
 
   return (
@@ -119,14 +157,32 @@ export function WaveformChart({ title = 'Modulator and output', fileName = 'wave
           <Button variant="ghost" onClick={() => panBy(0.25)} aria-label="Pan right">
             →
           </Button>
-          <Button variant="ghost" onClick={() => { const svg = svgRef.current; if (svg && zoomRef.current) select(svg).call(zoomRef.current.transform, zoomIdentity); }}>
+          <Button
+            variant="ghost"
+            onClick={() => {
+              const svg = svgRef.current;
+              if (svg && zoomRef.current) select(svg).call(zoomRef.current.transform, zoomIdentity);
+            }}
+          >
             Reset
           </Button>
         </>
       }
-      footer={<p className="no-print mt-1 text-xs text-ink-soft">Scroll or pinch to zoom, drag to pan; window {formatRadians(lo)} to {formatRadians(hi)} of the fundamental period.</p>}
+      footer={
+        <p className="no-print mt-1 text-xs text-ink-soft">
+          Scroll or pinch to zoom, drag to pan; window {formatRadians(lo)} to {formatRadians(hi)} of
+          the fundamental period.
+        </p>
+      }
     >
-      <svg ref={svgRef} data-chart="waveform" viewBox={`0 0 ${width} ${height}`} className="w-full cursor-grab touch-none select-none text-ink" role="img" aria-label={`${title}: ${outputName}, ${output.edges.length} switching edges per period`}>
+      <svg
+        ref={svgRef}
+        data-chart="waveform"
+        viewBox={`0 0 ${width} ${height}`}
+        className="w-full cursor-grab touch-none select-none text-ink"
+        role="img"
+        aria-label={`${title}: ${outputName}, ${output.edges.length} switching edges per period`}
+      >
         <defs>
           <clipPath id={clipId}>
             <rect x={margin.left} y={0} width={innerWidth} height={height} />
@@ -136,16 +192,30 @@ export function WaveformChart({ title = 'Modulator and output', fileName = 'wave
           <>
             <AxisLeft scale={topY} x={margin.left} width={innerWidth} label="per unit" ticks={4} />
             <g clipPath={`url(#${clipId})`} fill="none" strokeWidth={1.4}>
-              {modulator.carrier ? <path d={topLine(visible(modulator.angles, modulator.carrier)) ?? ''} stroke="var(--color-trace-carrier)" strokeWidth={1} /> : null}
-              <path d={topLine(visible(modulator.angles, modulator.reference)) ?? ''} stroke="var(--color-trace-ref)" strokeWidth={2} />
+              {modulator.carrier ? (
+                <path
+                  d={topLine(visible(modulator.angles, modulator.carrier)) ?? ''}
+                  stroke="var(--color-trace-carrier)"
+                  strokeWidth={1}
+                />
+              ) : null}
+              <path
+                d={topLine(visible(modulator.angles, modulator.reference)) ?? ''}
+                stroke="var(--color-trace-ref)"
+                strokeWidth={2}
+              />
             </g>
             <g fontSize={10} transform={`translate(${margin.left + 8},${margin.top + 10})`}>
               <rect width={10} height={3} y={-4} fill="var(--color-trace-ref)" />
-              <text x={14} fill="currentColor">reference</text>
+              <text x={14} fill="currentColor">
+                reference
+              </text>
               {modulator.carrier ? (
                 <>
                   <rect x={80} width={10} height={3} y={-4} fill="var(--color-trace-carrier)" />
-                  <text x={94} fill="currentColor">carrier</text>
+                  <text x={94} fill="currentColor">
+                    carrier
+                  </text>
                 </>
               ) : null}
             </g>
@@ -153,14 +223,32 @@ export function WaveformChart({ title = 'Modulator and output', fileName = 'wave
         ) : null}
         <AxisLeft scale={bottomY} x={margin.left} width={innerWidth} label="volts" ticks={4} />
         <g clipPath={`url(#${clipId})`}>
-          <path d={stepLine(stepPoints(output)) ?? ''} fill="none" stroke="var(--color-trace-out)" strokeWidth={1.3} />
-          {overlay ? <path data-trace={overlay.name} d={topLineOf(bottomY)(visible(overlay.angles, overlay.values)) ?? ''} fill="none" stroke="var(--color-signal)" strokeWidth={2} /> : null}
+          <path
+            d={stepLine(stepPoints(output)) ?? ''}
+            fill="none"
+            stroke="var(--color-trace-out)"
+            strokeWidth={1.3}
+          />
+          {overlay ? (
+            <path
+              data-trace={overlay.name}
+              d={topLineOf(bottomY)(visible(overlay.angles, overlay.values)) ?? ''}
+              fill="none"
+              stroke="var(--color-signal)"
+              strokeWidth={2}
+            />
+          ) : null}
         </g>
         <text x={margin.left + 8} y={bottomTop + 12} fontSize={10} fill="currentColor">
           {outputName}
           {overlay ? <tspan fill="var(--color-signal)"> · {overlay.name}</tspan> : null}
         </text>
-        <AxisBottom scale={x} y={bottomTop + bottomHeight} label="angle θ (rad)" format={formatRadians} />
+        <AxisBottom
+          scale={x}
+          y={bottomTop + bottomHeight}
+          label="angle θ (rad)"
+          format={formatRadians}
+        />
       </svg>
     </ChartFrame>
   );

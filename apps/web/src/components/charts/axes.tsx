@@ -12,7 +12,19 @@ export const DEFAULT_MARGIN: Margin = { top: 12, right: 16, bottom: 36, left: 56
 type Continuous = ScaleLinear<number, number> | ScaleLogarithmic<number, number>;
 
 /** Bottom axis drawn from a d3 scale's ticks. */
-export function AxisBottom({ scale, y, label, ticks = 8, format }: { scale: Continuous; y: number; label?: string; ticks?: number; format?: (v: number) => string }) {
+export function AxisBottom({
+  scale,
+  y,
+  label,
+  ticks = 8,
+  format,
+}: {
+  scale: Continuous;
+  y: number;
+  label?: string;
+  ticks?: number;
+  format?: (v: number) => string;
+}) {
   const [x0, x1] = scale.range() as [number, number];
   const tickFormat = format ?? scale.tickFormat(ticks);
   return (
@@ -36,7 +48,21 @@ export function AxisBottom({ scale, y, label, ticks = 8, format }: { scale: Cont
 }
 
 /** Left axis with light grid lines across `width`. */
-export function AxisLeft({ scale, x, width, label, ticks = 5, format }: { scale: Continuous; x: number; width: number; label?: string; ticks?: number; format?: (v: number) => string }) {
+export function AxisLeft({
+  scale,
+  x,
+  width,
+  label,
+  ticks = 5,
+  format,
+}: {
+  scale: Continuous;
+  x: number;
+  width: number;
+  label?: string;
+  ticks?: number;
+  format?: (v: number) => string;
+}) {
   const [y0, y1] = scale.range() as [number, number];
   const tickFormat = format ?? scale.tickFormat(ticks);
   const values = scale.ticks(ticks);
@@ -53,7 +79,12 @@ export function AxisLeft({ scale, x, width, label, ticks = 5, format }: { scale:
         </g>
       ))}
       {label ? (
-        <text transform={`translate(-44,${(y0 + y1) / 2}) rotate(-90)`} textAnchor="middle" fontSize={11} fill="currentColor">
+        <text
+          transform={`translate(-44,${(y0 + y1) / 2}) rotate(-90)`}
+          textAnchor="middle"
+          fontSize={11}
+          fill="currentColor"
+        >
           {label}
         </text>
       ) : null}

@@ -14,7 +14,15 @@ export interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> {
   busy?: boolean;
 }
 
-export function Button({ variant = 'primary', busy = false, className = '', children, disabled, type = 'button', ...rest }: ButtonProps) {
+export function Button({
+  variant = 'primary',
+  busy = false,
+  className = '',
+  children,
+  disabled,
+  type = 'button',
+  ...rest
+}: ButtonProps) {
   return (
     <button
       type={type}
@@ -23,7 +31,12 @@ export function Button({ variant = 'primary', busy = false, className = '', chil
       className={`inline-flex items-center gap-2 rounded-md px-3 py-1.5 text-sm font-medium transition disabled:cursor-not-allowed disabled:opacity-50 ${variants[variant]} ${className}`}
       {...rest}
     >
-      {busy ? <span className="inline-block h-3 w-3 animate-spin rounded-full border-2 border-current border-t-transparent" aria-hidden /> : null}
+      {busy ? (
+        <span
+          className="inline-block h-3 w-3 animate-spin rounded-full border-2 border-current border-t-transparent"
+          aria-hidden
+        />
+      ) : null}
       {children}
     </button>
   );

@@ -15,7 +15,10 @@ export function CautionBanner({ compact = false }: { compact?: boolean }) {
         ⚠
       </span>
       <p>
-        <strong>High voltage.</strong> {compact ? 'Inverter DC buses and outputs are lethal; predictions are idealised.' : CAUTION_TEXT}{' '}
+        <strong>High voltage.</strong>{' '}
+        {compact
+          ? 'Inverter DC buses and outputs are lethal; predictions are idealised.'
+          : CAUTION_TEXT}{' '}
         <Link to={paths.cautions.getHref()} className="font-medium underline">
           Read the cautions
         </Link>

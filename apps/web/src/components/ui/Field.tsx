@@ -1,4 +1,10 @@
-import { useId, useState, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes } from 'react';
+import {
+  useId,
+  useState,
+  type InputHTMLAttributes,
+  type ReactNode,
+  type SelectHTMLAttributes,
+} from 'react';
 
 interface FieldShellProps {
   id: string;
@@ -63,7 +69,14 @@ export interface SelectFieldProps extends Omit<SelectHTMLAttributes<HTMLSelectEl
   options: readonly { value: string; label: string; disabled?: boolean }[];
 }
 
-export function SelectField({ label, hint, error, options, className = '', ...rest }: SelectFieldProps) {
+export function SelectField({
+  label,
+  hint,
+  error,
+  options,
+  className = '',
+  ...rest
+}: SelectFieldProps) {
   const id = useId();
   return (
     <FieldShell id={id} label={label} hint={hint} error={error}>
@@ -115,7 +128,10 @@ function useNumberText(value: number, scale: number, onChange: (value: number) =
   };
 }
 
-export interface NumberFieldProps extends Omit<InputHTMLAttributes<HTMLInputElement>, 'id' | 'value' | 'onChange' | 'type'> {
+export interface NumberFieldProps extends Omit<
+  InputHTMLAttributes<HTMLInputElement>,
+  'id' | 'value' | 'onChange' | 'type'
+> {
   label: string;
   unit?: string | undefined;
   hint?: string | undefined;
@@ -128,7 +144,17 @@ export interface NumberFieldProps extends Omit<InputHTMLAttributes<HTMLInputElem
 }
 
 /** A number box that shows exactly what was typed and reports it while typing (NaN when it is not a number). */
-export function NumberField({ label, unit, hint, error, value, scale = 1, onChange, className = '', ...rest }: NumberFieldProps) {
+export function NumberField({
+  label,
+  unit,
+  hint,
+  error,
+  value,
+  scale = 1,
+  onChange,
+  className = '',
+  ...rest
+}: NumberFieldProps) {
   const id = useId();
   const { text, change } = useNumberText(value, scale, onChange);
   return (
@@ -164,7 +190,18 @@ export interface SliderFieldProps {
 }
 
 /** A number box and a slider bound to one value; both labelled, both keyboard-operable; the box reports while typing. */
-export function SliderField({ label, unit, value, min, max, step, hint, error, disabled, onChange }: SliderFieldProps) {
+export function SliderField({
+  label,
+  unit,
+  value,
+  min,
+  max,
+  step,
+  hint,
+  error,
+  disabled,
+  onChange,
+}: SliderFieldProps) {
   const id = useId();
   const { text, change } = useNumberText(value, 1, onChange);
   return (

@@ -5,19 +5,29 @@ import { Button } from './Button';
 export function Loading({ label = 'Loading…' }: { label?: string }) {
   return (
     <div role="status" className="flex items-center gap-2 p-4 text-sm text-ink-soft">
-      <span className="inline-block h-4 w-4 animate-spin rounded-full border-2 border-signal border-t-transparent" aria-hidden />
+      <span
+        className="inline-block h-4 w-4 animate-spin rounded-full border-2 border-signal border-t-transparent"
+        aria-hidden
+      />
       {label}
     </div>
   );
 }
 
 export function Empty({ children }: { children: ReactNode }) {
-  return <div className="rounded-md border border-dashed border-rule p-6 text-center text-sm text-ink-soft">{children}</div>;
+  return (
+    <div className="rounded-md border border-dashed border-rule p-6 text-center text-sm text-ink-soft">
+      {children}
+    </div>
+  );
 }
 
 export function ErrorState({ error, onRetry }: { error: unknown; onRetry?: () => void }) {
   return (
-    <div role="alert" className="flex flex-wrap items-center gap-3 rounded-md border border-bad/40 bg-bad-soft p-3 text-sm text-bad">
+    <div
+      role="alert"
+      className="flex flex-wrap items-center gap-3 rounded-md border border-bad/40 bg-bad-soft p-3 text-sm text-bad"
+    >
       <span>{errorMessage(error)}</span>
       {onRetry ? (
         <Button variant="secondary" onClick={onRetry}>

@@ -7,15 +7,23 @@ import { assertInDelta } from '../../testing/assertInDelta.js';
 
 const TAU = 2 * Math.PI;
 
-function tone(count: number, sampleRate: number, parts: { frequency: number; amplitude: number; phase: number }[]): number[] {
+function tone(
+  count: number,
+  sampleRate: number,
+  parts: { frequency: number; amplitude: number; phase: number }[],
+): number[] {
   return Array.from({ length: count }, (_, i) =>
-    parts.reduce((sum, p) => sum + p.amplitude * Math.sin((TAU * p.frequency * i) / sampleRate + p.phase), 0),
+    parts.reduce(
+      (sum, p) => sum + p.amplitude * Math.sin((TAU * p.frequency * i) / sampleRate + p.phase),
+      0,
+    ),
   );
 }
 
 describe('fftWindow gains (F. J. Harris, Proc. IEEE 66(1), 1978, Table I)', () => {
   const sum = (w: number[]): number => w.reduce((a, b) => a + b, 0);
-  const equivalentNoiseBandwidth = (w: number[]): number => (w.length * w.reduce((a, b) => a + b * b, 0)) / sum(w) ** 2;
+  const equivalentNoiseBandwidth = (w: number[]): number =>
+    (w.length * w.reduce((a, b) => a + b * b, 0)) / sum(w) ** 2;
   const n = 4096;
 
   it('has coherent gains 1, 0.50 and ≈ 0.2156', () => {
@@ -30,7 +38,12 @@ describe('fftWindow gains (F. J. Harris, Proc. IEEE 66(1), 1978, Table I)', () =
     // flat-top windows, e.g. G. Heinzel et al., "Spectrum and spectral density estimation by
     // the DFT", 2002).
     assertInDelta(equivalentNoiseBandwidth(fftWindow(n, { window: 'hann' })), 1.5, 1e-9, 'Hann');
-    assertInDelta(equivalentNoiseBandwidth(fftWindow(n, { window: 'flat-top' })), 3.77, 0.005, 'flat-top');
+    assertInDelta(
+      equivalentNoiseBandwidth(fftWindow(n, { window: 'flat-top' })),
+      3.77,
+      0.005,
+      'flat-top',
+    );
   });
 
   it('is periodic (DFT-even): w(0) is the minimum and the window is symmetric about N/2', () => {
@@ -48,11 +61,15 @@ describe('fftSpectrum of synthesized sines', () => {
   it('reads a coherent sine back in peak volts and phase with every window', () => {
     // 50 Hz with 2048 samples at 12.8 kHz: exactly 8 periods, so the tone sits on bin 8.
     for (const window of ['rectangular', 'hann', 'flat-top'] as const) {
-      const result = fftSpectrum(tone(count, sampleRate, [{ frequency: 50, amplitude: 311, phase: -0.7 }]), sampleRate, {
-        window,
-        fundamentalFrequency: 50,
-        maxOrder: 5,
-      });
+      const result = fftSpectrum(
+        tone(count, sampleRate, [{ frequency: 50, amplitude: 311, phase: -0.7 }]),
+        sampleRate,
+        {
+          window,
+          fundamentalFrequency: 50,
+          maxOrder: 5,
+        },
+      );
       const [first] = result.harmonics;
       assertInDelta(first?.amplitude ?? NaN, 311, 1e-10 * 311, `${window} amplitude`);
       assertInDelta(first?.phase ?? NaN, -0.7, 1e-10, `${window} phase`);
@@ -67,7 +84,10 @@ describe('fftSpectrum of synthesized sines', () => {
       { frequency: 250, amplitude: 20, phase: 1.0 },
       { frequency: 350, amplitude: 10, phase: -2.0 },
     ];
-    const result = fftSpectrum(tone(count, sampleRate, parts), sampleRate, { fundamentalFrequency: 50, maxOrder: 9 });
+    const result = fftSpectrum(tone(count, sampleRate, parts), sampleRate, {
+      fundamentalFrequency: 50,
+      maxOrder: 9,
+    });
     assertInDelta(result.harmonics[4]?.amplitude ?? NaN, 20, 1e-9, 'order 5');
     assertInDelta(result.harmonics[6]?.phase ?? NaN, -2.0, 1e-10, 'order 7 phase');
     assertInDelta(result.harmonics[2]?.amplitude ?? NaN, 0, 1e-9, 'order 3');
@@ -83,11 +103,15 @@ describe('fftSpectrum of synthesized sines', () => {
       let worst = 1;
       for (let offset = 0; offset <= 1.0001; offset += 0.05) {
         const frequency = ((100 + offset) * sampleRate) / count;
-        const result = fftSpectrum(tone(count, sampleRate, [{ frequency, amplitude: 1, phase: 0.3 }]), sampleRate, {
-          window,
-          fundamentalFrequency: frequency,
-          maxOrder: 1,
-        });
+        const result = fftSpectrum(
+          tone(count, sampleRate, [{ frequency, amplitude: 1, phase: 0.3 }]),
+          sampleRate,
+          {
+            window,
+            fundamentalFrequency: frequency,
+            maxOrder: 1,
+          },
+        );
         worst = Math.min(worst, result.harmonics[0]?.amplitude ?? NaN);
         expect(result.harmonics[0]?.amplitude ?? NaN).toBeLessThanOrEqual(1 + 1e-3);
       }
@@ -102,10 +126,14 @@ describe('fftSpectrum of synthesized sines', () => {
 
   it('estimates an off-bin fundamental and reads its amplitude with the flat-top window', () => {
     const frequency = 53.3;
-    const result = fftSpectrum(tone(count, sampleRate, [{ frequency, amplitude: 2.5, phase: 0 }]), sampleRate, {
-      window: 'flat-top',
-      maxOrder: 3,
-    });
+    const result = fftSpectrum(
+      tone(count, sampleRate, [{ frequency, amplitude: 2.5, phase: 0 }]),
+      sampleRate,
+      {
+        window: 'flat-top',
+        maxOrder: 3,
+      },
+    );
     expect(result.fundamentalEstimated).toBe(true);
     assertInDelta(result.fundamentalFrequency, frequency, 1e-4 * frequency, 'estimate');
     // Flat-top amplitude flatness ≈ 0.01 dB ≈ 0.12 % (as above).
@@ -115,19 +143,37 @@ describe('fftSpectrum of synthesized sines', () => {
   it('zero-pads or truncates a capture whose length is not a power of two', () => {
     // 1000 samples at 10 kHz of 50 Hz: exactly 5 periods.
     const samples = tone(1000, 10_000, [{ frequency: 50, amplitude: 10, phase: 0 }]);
-    const padded = fftSpectrum(samples, 10_000, { window: 'flat-top', fundamentalFrequency: 50, maxOrder: 1 });
+    const padded = fftSpectrum(samples, 10_000, {
+      window: 'flat-top',
+      fundamentalFrequency: 50,
+      maxOrder: 1,
+    });
     expect(padded.fftSize).toBe(1024);
     expect(padded.sampleCount).toBe(1000);
     assertInDelta(padded.resolution, 10, 1e-12);
-    assertInDelta(padded.harmonics[0]?.amplitude ?? NaN, 10, 0.0012 * 10, 'zero-padded, flat-top flatness');
-    const truncated = fftSpectrum(samples, 10_000, { window: 'flat-top', fundamentalFrequency: 50, lengthPolicy: 'truncate', maxOrder: 1 });
+    assertInDelta(
+      padded.harmonics[0]?.amplitude ?? NaN,
+      10,
+      0.0012 * 10,
+      'zero-padded, flat-top flatness',
+    );
+    const truncated = fftSpectrum(samples, 10_000, {
+      window: 'flat-top',
+      fundamentalFrequency: 50,
+      lengthPolicy: 'truncate',
+      maxOrder: 1,
+    });
     expect(truncated.fftSize).toBe(512);
     expect(truncated.sampleCount).toBe(512);
     assertInDelta(truncated.harmonics[0]?.amplitude ?? NaN, 10, 0.0012 * 10, 'truncated');
   });
 
   it('returns one-sided bins up to Nyquist', () => {
-    const result = fftSpectrum(tone(256, 1000, [{ frequency: 125, amplitude: 1, phase: 0 }]), 1000, { window: 'rectangular' });
+    const result = fftSpectrum(
+      tone(256, 1000, [{ frequency: 125, amplitude: 1, phase: 0 }]),
+      1000,
+      { window: 'rectangular' },
+    );
     expect(result.bins.frequency).toHaveLength(129);
     assertInDelta(result.bins.frequency[128] as number, 500, 1e-12);
     assertInDelta(result.bins.amplitude[32] as number, 1, 1e-12, 'bin 32 = 125 Hz');
@@ -144,10 +190,19 @@ describe('fftSpectrum of sampled PWM against the exact harmonics', () => {
     const volts = 200;
     const perPeriod = 512;
     const periods = 4;
-    const samples = Array.from({ length: perPeriod * periods }, (_, i) => ((i % perPeriod) + 0.5 < perPeriod / 2 ? volts : -volts));
-    const result = fftSpectrum(samples, perPeriod * 50, { window: 'rectangular', fundamentalFrequency: 50, maxOrder: 31 });
+    const samples = Array.from({ length: perPeriod * periods }, (_, i) =>
+      (i % perPeriod) + 0.5 < perPeriod / 2 ? volts : -volts,
+    );
+    const result = fftSpectrum(samples, perPeriod * 50, {
+      window: 'rectangular',
+      fundamentalFrequency: 50,
+      maxOrder: 31,
+    });
     for (const h of result.harmonics) {
-      const expected = h.order % 2 === 1 ? (4 * volts) / (perPeriod * Math.sin((Math.PI * h.order) / perPeriod)) : 0;
+      const expected =
+        h.order % 2 === 1
+          ? (4 * volts) / (perPeriod * Math.sin((Math.PI * h.order) / perPeriod))
+          : 0;
       assertInDelta(h.amplitude, expected, 1e-9 * volts, `order ${h.order}`);
     }
   });
@@ -174,8 +229,14 @@ describe('fftSpectrum of sampled PWM against the exact harmonics', () => {
     const perPeriod = 2 ** 15;
     const periods = 4;
     const f1 = 50;
-    const samples = Array.from({ length: perPeriod * periods }, (_, i) => waveformValueAt(waveform, (TAU * (i + 0.5)) / perPeriod));
-    const result = fftSpectrum(samples, perPeriod * f1, { window: 'hann', fundamentalFrequency: f1, maxOrder: 40 });
+    const samples = Array.from({ length: perPeriod * periods }, (_, i) =>
+      waveformValueAt(waveform, (TAU * (i + 0.5)) / perPeriod),
+    );
+    const result = fftSpectrum(samples, perPeriod * f1, {
+      window: 'hann',
+      fundamentalFrequency: f1,
+      maxOrder: 40,
+    });
     const exact = harmonics(waveform, 40);
     // Aliasing bound, derived for this test: the DFT of M samples a period gives
     // c_n + Σ_{k≠0} c_{n+kM}, with c_m = Σᵢ Δᵢ e^{−jmθᵢ}/(2πjm). Splitting 1/(n+kM) and using
@@ -184,7 +245,9 @@ describe('fftSpectrum of sampled PWM against the exact harmonics', () => {
     const jumps = waveform.levels.length * vdc;
     for (const h of result.harmonics) {
       const reference = exact[h.order]?.amplitude ?? NaN;
-      const bound = (jumps / Math.PI) * (3.704 / perPeriod + (3.29 * h.order) / (perPeriod * (perPeriod - h.order)));
+      const bound =
+        (jumps / Math.PI) *
+        (3.704 / perPeriod + (3.29 * h.order) / (perPeriod * (perPeriod - h.order)));
       assertInDelta(h.amplitude, reference, bound, `order ${h.order}`);
     }
   });
@@ -193,11 +256,19 @@ describe('fftSpectrum of sampled PWM against the exact harmonics', () => {
 describe('capture input checks', () => {
   it('names the field and the range', () => {
     const ok = tone(64, 1000, [{ frequency: 50, amplitude: 1, phase: 0 }]);
-    expect(() => fftSpectrum([...ok.slice(0, 3), NaN, ...ok.slice(4)], 1000)).toThrow(/samples\[3\] must be a finite number/);
-    expect(() => fftSpectrum(ok.slice(0, 8), 1000)).toThrow(/samples.length must be an array of 16 to 2097152 numbers/);
+    expect(() => fftSpectrum([...ok.slice(0, 3), NaN, ...ok.slice(4)], 1000)).toThrow(
+      /samples\[3\] must be a finite number/,
+    );
+    expect(() => fftSpectrum(ok.slice(0, 8), 1000)).toThrow(
+      /samples.length must be an array of 16 to 2097152 numbers/,
+    );
     expect(() => fftSpectrum(ok, 0)).toThrow(/sampleRate must be a finite number > 0/);
-    expect(() => fftSpectrum(ok, 1000, { fundamentalFrequency: 500 })).toThrow(/fundamentalFrequency must be .* < 500/);
-    expect(() => fftSpectrum(ok, 1000, { window: 'triangle' as 'hann' })).toThrow(/window must be one of/);
+    expect(() => fftSpectrum(ok, 1000, { fundamentalFrequency: 500 })).toThrow(
+      /fundamentalFrequency must be .* < 500/,
+    );
+    expect(() => fftSpectrum(ok, 1000, { window: 'triangle' as 'hann' })).toThrow(
+      /window must be one of/,
+    );
     expect(() => fftSpectrum(ok, 1000, { maxOrder: 0 })).toThrow(/maxOrder/);
     expect(() => fftWindow(0)).toThrow(/length must be an integer ≥ 1/);
   });

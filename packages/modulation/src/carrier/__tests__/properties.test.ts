@@ -26,7 +26,11 @@ const sineTriangleOptions = fc.record({
 
 /** Σ|jumps| of a waveform: each harmonic obeys amplitude_n ≤ Σ|Δ|/(πn). */
 function totalJump({ levels }: Waveform): number {
-  return levels.reduce((sum, level, i) => sum + Math.abs(level - (levels[(i + levels.length - 1) % levels.length] as number)), 0);
+  return levels.reduce(
+    (sum, level, i) =>
+      sum + Math.abs(level - (levels[(i + levels.length - 1) % levels.length] as number)),
+    0,
+  );
 }
 
 describe('sineTriangle properties', () => {
@@ -35,7 +39,10 @@ describe('sineTriangle properties', () => {
       fc.property(sineTriangleOptions, (options) => {
         const waveform = sineTriangle(options);
         assertWaveform(waveform);
-        const allowed = options.scheme === 'bipolar' ? [options.vdc, -options.vdc] : [options.vdc, 0, -options.vdc];
+        const allowed =
+          options.scheme === 'bipolar'
+            ? [options.vdc, -options.vdc]
+            : [options.vdc, 0, -options.vdc];
         return waveform.levels.every((level) => allowed.includes(level));
       }),
       runs,
@@ -58,7 +65,9 @@ describe('sineTriangle properties', () => {
         const meanSquare = waveformMeanSquare(waveform);
         const bound = totalJump(waveform) ** 2 / (2 * Math.PI ** 2 * maxOrder);
         const rounding = 1e-9 * options.vdc ** 2;
-        return fromHarmonics <= meanSquare + rounding && fromHarmonics >= meanSquare - bound - rounding;
+        return (
+          fromHarmonics <= meanSquare + rounding && fromHarmonics >= meanSquare - bound - rounding
+        );
       }),
       runs,
     );
@@ -107,7 +116,10 @@ describe('threePhase properties', () => {
           zeroSequence: fc.constantFrom('none', 'third-harmonic', 'min-max', 'dpwm1', 'dpwm-max'),
           sampling: fc.constantFrom('natural', 'regular-symmetric', 'regular-asymmetric'),
         }),
-        fc.array(fc.double({ min: 0, max: 2 * Math.PI, noNaN: true, maxExcluded: true }), { minLength: 5, maxLength: 5 }),
+        fc.array(fc.double({ min: 0, max: 2 * Math.PI, noNaN: true, maxExcluded: true }), {
+          minLength: 5,
+          maxLength: 5,
+        }),
         ({ ma, mf, zeroSequence, sampling }, angles) => {
           const { legs, lineToLine } = threePhase({ ma, mf, vdc: 100, zeroSequence, sampling });
           return angles.every((theta) => {
@@ -127,7 +139,10 @@ describe('waveform consistency', () => {
   it('any valid waveform literal is accepted and analysed', () => {
     fc.assert(
       fc.property(
-        fc.uniqueArray(fc.double({ min: 0, max: 2 * Math.PI, noNaN: true, maxExcluded: true }), { minLength: 1, maxLength: 30 }),
+        fc.uniqueArray(fc.double({ min: 0, max: 2 * Math.PI, noNaN: true, maxExcluded: true }), {
+          minLength: 1,
+          maxLength: 30,
+        }),
         fc.array(fc.double({ min: -500, max: 500, noNaN: true }), { minLength: 30, maxLength: 30 }),
         (rawEdges, rawLevels) => {
           const edges = [...rawEdges].sort((a, b) => a - b);

@@ -28,9 +28,23 @@ describe('a reference on or beyond a carrier extreme', () => {
     it(`${sampling}: ±1 and beyond give a constant output, no edges`, () => {
       for (const mf of [1, 2, 3, 7, 8, 12, 96]) {
         for (const carrierPhase of [0, Math.PI, 0.3]) {
-          for (const [value, level] of [[1, vdc], [1.5, vdc], [-1, -vdc], [-3, -vdc]] as const) {
-            const waveform = compareWithCarrier(constant(value), { mf, carrierPhase, sampling, high: vdc, low: -vdc });
-            expect(waveform, `${sampling} mf=${mf} carrierPhase=${carrierPhase} value=${value}`).toEqual({
+          for (const [value, level] of [
+            [1, vdc],
+            [1.5, vdc],
+            [-1, -vdc],
+            [-3, -vdc],
+          ] as const) {
+            const waveform = compareWithCarrier(constant(value), {
+              mf,
+              carrierPhase,
+              sampling,
+              high: vdc,
+              low: -vdc,
+            });
+            expect(
+              waveform,
+              `${sampling} mf=${mf} carrierPhase=${carrierPhase} value=${value}`,
+            ).toEqual({
               edges: [0],
               levels: [level],
             });
@@ -48,11 +62,22 @@ describe('a sampled sine reaching ±1 (ma ≥ 1), half period by half period', (
   // θ = π/2, where ma·sin θ = ma exactly: with ma = 1 the sample there is exactly +1 (and −1
   // at 3π/2 for the negated reference of a unipolar bridge's second leg). The integrals are
   // exact sums of segments; 1e-9·vdc·h leaves room only for rounding.
-  function expectDefinition(ma: number, mf: number, carrierPhase: number, sampling: CarrierSampling): void {
+  function expectDefinition(
+    ma: number,
+    mf: number,
+    carrierPhase: number,
+    sampling: CarrierSampling,
+  ): void {
     const h = Math.PI / mf;
     for (const amplitude of [ma, -ma]) {
       const reference = sineReference(amplitude);
-      const leg = compareWithCarrier(reference, { mf, carrierPhase, sampling, high: vdc, low: -vdc });
+      const leg = compareWithCarrier(reference, {
+        mf,
+        carrierPhase,
+        sampling,
+        high: vdc,
+        low: -vdc,
+      });
       for (let j = 0; j < 2 * mf; j++) {
         // Valleys at π/2 + (2πk + carrierPhase)/mf: even j start at a valley (carrier rising).
         const start = Math.PI / 2 + (j * Math.PI + carrierPhase) / mf;
@@ -64,8 +89,18 @@ describe('a sampled sine reaching ±1 (ma ≥ 1), half period by half period', (
         const lowFrom = rising ? highTo : start;
         const lowTo = rising ? start + h : highFrom;
         const label = `${sampling} ma=${amplitude} mf=${mf} carrierPhase=${carrierPhase} half ${j}`;
-        assertInDelta(waveformIntegral(leg, highFrom, highTo), vdc * (highTo - highFrom), 1e-9 * vdc * h, `${label} high`);
-        assertInDelta(waveformIntegral(leg, lowFrom, lowTo), -vdc * (lowTo - lowFrom), 1e-9 * vdc * h, `${label} low`);
+        assertInDelta(
+          waveformIntegral(leg, highFrom, highTo),
+          vdc * (highTo - highFrom),
+          1e-9 * vdc * h,
+          `${label} high`,
+        );
+        assertInDelta(
+          waveformIntegral(leg, lowFrom, lowTo),
+          -vdc * (lowTo - lowFrom),
+          1e-9 * vdc * h,
+          `${label} low`,
+        );
       }
     }
   }
@@ -74,7 +109,8 @@ describe('a sampled sine reaching ±1 (ma ≥ 1), half period by half period', (
     it(`${sampling}: ma = 1, 1.5, 4 at several carrier phases`, () => {
       for (const ma of [1, 1.5, 4]) {
         for (const mf of [3, 7, 8, 12, 21]) {
-          for (const carrierPhase of [0, Math.PI, 0.7]) expectDefinition(ma, mf, carrierPhase, sampling);
+          for (const carrierPhase of [0, Math.PI, 0.7])
+            expectDefinition(ma, mf, carrierPhase, sampling);
         }
       }
     });
@@ -105,12 +141,27 @@ describe('symmetric regular sampling of ma·sin θ, closed-form fundamental', ()
     // before the fix it gave 17 % less at mf = 12.
     for (const mf of [12, 21, 60, 96]) {
       for (const ma of [0.5, 1]) {
-        const expected = ((4 * mf * vdc) / Math.PI) * besselJ1((Math.PI * ma) / (2 * mf)) * Math.cos(Math.PI / (2 * mf));
+        const expected =
+          ((4 * mf * vdc) / Math.PI) *
+          besselJ1((Math.PI * ma) / (2 * mf)) *
+          Math.cos(Math.PI / (2 * mf));
         for (const carrierPhase of [0, Math.PI, 0.7]) {
-          const waveform = sineTriangle({ scheme: 'bipolar', ma, mf, vdc, sampling: 'regular-symmetric', carrierPhase });
+          const waveform = sineTriangle({
+            scheme: 'bipolar',
+            ma,
+            mf,
+            vdc,
+            sampling: 'regular-symmetric',
+            carrierPhase,
+          });
           const [, fundamental] = harmonics(waveform, 1);
           // Exact waveform and exact harmonics: only rounding (≈ 1e-13 of vdc) is left.
-          assertInDelta(fundamental?.amplitude ?? NaN, expected, 1e-11 * vdc, `mf=${mf} ma=${ma} carrierPhase=${carrierPhase}`);
+          assertInDelta(
+            fundamental?.amplitude ?? NaN,
+            expected,
+            1e-11 * vdc,
+            `mf=${mf} ma=${ma} carrierPhase=${carrierPhase}`,
+          );
         }
       }
     }

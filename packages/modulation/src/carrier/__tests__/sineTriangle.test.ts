@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { harmonics, sineTriangle, thd, triangleCarrier, waveformIntegral, waveformValueAt } from '../../index.js';
+import {
+  harmonics,
+  sineTriangle,
+  thd,
+  triangleCarrier,
+  waveformIntegral,
+  waveformValueAt,
+} from '../../index.js';
 import { assertInDelta } from '../../testing/assertInDelta.js';
 
 const vdc = 350;
@@ -86,8 +93,14 @@ describe('sineTriangle regular sampling', () => {
     // Symmetric sampling takes the sample half a carrier period (π/mf rad) before the pulse
     // centre, asymmetric a quarter period (π/(2mf)) on average: the fundamental lags by that.
     const mf = 21;
-    const symmetric = harmonics(sineTriangle({ scheme: 'bipolar', ma: 0.8, mf, vdc, sampling: 'regular-symmetric' }), 1);
-    const asymmetric = harmonics(sineTriangle({ scheme: 'bipolar', ma: 0.8, mf, vdc, sampling: 'regular-asymmetric' }), 1);
+    const symmetric = harmonics(
+      sineTriangle({ scheme: 'bipolar', ma: 0.8, mf, vdc, sampling: 'regular-symmetric' }),
+      1,
+    );
+    const asymmetric = harmonics(
+      sineTriangle({ scheme: 'bipolar', ma: 0.8, mf, vdc, sampling: 'regular-asymmetric' }),
+      1,
+    );
     assertInDelta(symmetric[1]?.phase ?? NaN, -Math.PI / mf, 1e-9);
     assertInDelta(asymmetric[1]?.phase ?? NaN, -Math.PI / (2 * mf), 1e-9);
   });
@@ -95,11 +108,18 @@ describe('sineTriangle regular sampling', () => {
   it('matches each sample in volt-seconds over its carrier period (symmetric)', () => {
     const mf = 9;
     const ma = 0.7;
-    const waveform = sineTriangle({ scheme: 'bipolar', ma, mf, vdc, sampling: 'regular-symmetric' });
+    const waveform = sineTriangle({
+      scheme: 'bipolar',
+      ma,
+      mf,
+      vdc,
+      sampling: 'regular-symmetric',
+    });
     for (let k = 0; k < mf; k++) {
       // Carrier period k runs peak to peak round the valley at π/2 + 2πk/mf.
       const start = Math.PI / 2 + (2 * Math.PI * k - Math.PI) / mf;
-      const mean = waveformIntegral(waveform, start, start + (2 * Math.PI) / mf) / ((2 * Math.PI) / mf);
+      const mean =
+        waveformIntegral(waveform, start, start + (2 * Math.PI) / mf) / ((2 * Math.PI) / mf);
       assertInDelta(mean, vdc * ma * Math.sin(start), 1e-9 * vdc, `period ${k}`);
     }
   });
@@ -110,11 +130,26 @@ describe('sineTriangle carrier phase', () => {
     const mf = 9;
     const carrierPhase = 0.8;
     assertInDelta(triangleCarrier(Math.PI / 2, { mf }), -1, 1e-12);
-    assertInDelta(triangleCarrier(Math.PI / 2 + carrierPhase / mf, { mf, carrierPhase }), -1, 1e-12);
-    assertInDelta(triangleCarrier(Math.PI / 2 + (carrierPhase + Math.PI) / mf, { mf, carrierPhase }), 1, 1e-12);
+    assertInDelta(
+      triangleCarrier(Math.PI / 2 + carrierPhase / mf, { mf, carrierPhase }),
+      -1,
+      1e-12,
+    );
+    assertInDelta(
+      triangleCarrier(Math.PI / 2 + (carrierPhase + Math.PI) / mf, { mf, carrierPhase }),
+      1,
+      1e-12,
+    );
     // The bipolar pulse round that valley is high (reference ma·sin θ > −1 there) and, with
     // regular sampling, centred on it.
-    const waveform = sineTriangle({ scheme: 'bipolar', ma: 0.5, mf, vdc, carrierPhase, sampling: 'regular-symmetric' });
+    const waveform = sineTriangle({
+      scheme: 'bipolar',
+      ma: 0.5,
+      mf,
+      vdc,
+      carrierPhase,
+      sampling: 'regular-symmetric',
+    });
     const valley = Math.PI / 2 + carrierPhase / mf;
     const rise = waveform.edges.filter((e) => e < valley).at(-1) ?? NaN;
     const fall = waveform.edges.find((e) => e > valley) ?? NaN;

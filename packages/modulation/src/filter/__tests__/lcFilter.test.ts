@@ -87,7 +87,11 @@ describe('lcFilter characteristics', () => {
     const zeta = rDamping / (2 * z0);
     const result = lcFilter({ l, c, rDamping });
     assertInDelta(result.dampingRatio ?? NaN, zeta, 1e-14);
-    assertInDelta(result.gainAtResonance ?? NaN, Math.sqrt(1 + 4 * zeta * zeta) / (2 * zeta), 1e-12);
+    assertInDelta(
+      result.gainAtResonance ?? NaN,
+      Math.sqrt(1 + 4 * zeta * zeta) / (2 * zeta),
+      1e-12,
+    );
     expect(result.peakGain ?? NaN).toBeGreaterThanOrEqual((result.gainAtResonance ?? NaN) - 1e-12);
   });
 
@@ -134,8 +138,14 @@ describe('lcFilterResponse', () => {
   it('passes DC with a load: H(0) = 1 for every placement', () => {
     const placements: [DampingPlacement, LcFilterOptions][] = [
       ['series-with-capacitor', { l, c, rDamping: 3, loadR: 20 }],
-      ['parallel-rc', { l, c, rDamping: 8, cDamping: 36e-6, dampingPlacement: 'parallel-rc', loadR: 20 }],
-      ['parallel-with-inductor', { l, c, rDamping: 40, dampingPlacement: 'parallel-with-inductor', loadR: 20 }],
+      [
+        'parallel-rc',
+        { l, c, rDamping: 8, cDamping: 36e-6, dampingPlacement: 'parallel-rc', loadR: 20 },
+      ],
+      [
+        'parallel-with-inductor',
+        { l, c, rDamping: 40, dampingPlacement: 'parallel-with-inductor', loadR: 20 },
+      ],
     ];
     for (const [name, filter] of placements) {
       const { magnitude, phase } = lcFilterResponse([0, 1e-3], filter);
@@ -153,9 +163,22 @@ describe('lcFilterResponse', () => {
       return (magnitudeDb[1] as number) - (magnitudeDb[0] as number);
     };
     assertInDelta(slope({ l, c }, 1000 * f0), -40, 1e-4, 'undamped');
-    assertInDelta(slope({ l, c, rDamping: 8, cDamping: 36e-6, dampingPlacement: 'parallel-rc', loadR: 20 }, 1e4 * f0), -40, 1e-3, 'parallel-rc');
+    assertInDelta(
+      slope(
+        { l, c, rDamping: 8, cDamping: 36e-6, dampingPlacement: 'parallel-rc', loadR: 20 },
+        1e4 * f0,
+      ),
+      -40,
+      1e-3,
+      'parallel-rc',
+    );
     assertInDelta(slope({ l, c, rDamping: 3 }, 1e5 * f0), -20, 1e-3, 'series R');
-    assertInDelta(slope({ l, c, rDamping: 40, dampingPlacement: 'parallel-with-inductor' }, 1e5 * f0), -20, 1e-3, 'R across L');
+    assertInDelta(
+      slope({ l, c, rDamping: 40, dampingPlacement: 'parallel-with-inductor' }, 1e5 * f0),
+      -20,
+      1e-3,
+      'R across L',
+    );
   });
 
   it('agrees with an independent nodal solve (ml-matrix) for every placement', () => {
@@ -172,8 +195,18 @@ describe('lcFilterResponse', () => {
       frequencies.forEach((f, k) => {
         const h = nodalTransfer(filter, f);
         const m = Math.hypot(h.re, h.im);
-        assertInDelta(magnitude[k] as number, m, 1e-10 * m, `${filter.dampingPlacement ?? 'series'} |H(${f})|`);
-        assertInDelta(Math.cos((phase[k] as number) - Math.atan2(h.im, h.re)), 1, 1e-12, `phase ${f}`);
+        assertInDelta(
+          magnitude[k] as number,
+          m,
+          1e-10 * m,
+          `${filter.dampingPlacement ?? 'series'} |H(${f})|`,
+        );
+        assertInDelta(
+          Math.cos((phase[k] as number) - Math.atan2(h.im, h.re)),
+          1,
+          1e-12,
+          `phase ${f}`,
+        );
       });
     }
   });
@@ -184,10 +217,13 @@ describe('filteredSpectrum', () => {
     // Fourier series 4V/(nπ) (standard Fourier analysis) times the hand-derived |H|.
     const volts = 325;
     const f1 = 60;
-    const filtered = filteredSpectrum(harmonics({ edges: [0, Math.PI], levels: [volts, -volts] }, 41), {
-      filter: { l, c },
-      fundamentalFrequency: f1,
-    });
+    const filtered = filteredSpectrum(
+      harmonics({ edges: [0, Math.PI], levels: [volts, -volts] }, 41),
+      {
+        filter: { l, c },
+        fundamentalFrequency: f1,
+      },
+    );
     for (const h of filtered) {
       if (h.order % 2 === 0) continue;
       const gain = 1 / (1 - ((h.order * f1) / f0) ** 2);
@@ -198,8 +234,12 @@ describe('filteredSpectrum', () => {
   });
 
   it('names the bad filter field', () => {
-    expect(() => filteredSpectrum([], { filter: { l: 0, c }, fundamentalFrequency: 50 })).toThrow(/filter.l must be/);
-    expect(() => filteredSpectrum([], { filter: { l, c }, fundamentalFrequency: -1 })).toThrow(/fundamentalFrequency/);
+    expect(() => filteredSpectrum([], { filter: { l: 0, c }, fundamentalFrequency: 50 })).toThrow(
+      /filter.l must be/,
+    );
+    expect(() => filteredSpectrum([], { filter: { l, c }, fundamentalFrequency: -1 })).toThrow(
+      /fundamentalFrequency/,
+    );
   });
 });
 
@@ -219,7 +259,11 @@ describe('sizeFilterInductance', () => {
     const t = 0.05;
     const x2 = (0.8 + t) / (0.8 + 441 * t);
     const expectedL = x2 / ((TAU * f1) ** 2 * c);
-    const result = sizeFilterInductance(spectrum, { c, fundamentalFrequency: f1, maxIndividual: t });
+    const result = sizeFilterInductance(spectrum, {
+      c,
+      fundamentalFrequency: f1,
+      maxIndividual: t,
+    });
     assertInDelta(result.l, expectedL, 1e-8 * expectedL, 'l');
     expect(result.worstOrder).toBe(21);
     assertInDelta(result.worstIndividual, t, 1e-8 * t);
@@ -228,10 +272,25 @@ describe('sizeFilterInductance', () => {
 
   it('returns the smallest L that meets a THD target on a damped, loaded filter', () => {
     const square = harmonics({ edges: [0, Math.PI], levels: [400, -400] }, 199);
-    const damping = { rDamping: 6, cDamping: 3 * c, dampingPlacement: 'parallel-rc' as const, loadR: 25 };
-    const result = sizeFilterInductance(square, { c, ...damping, fundamentalFrequency: f1, maxThd: 0.08 });
+    const damping = {
+      rDamping: 6,
+      cDamping: 3 * c,
+      dampingPlacement: 'parallel-rc' as const,
+      loadR: 25,
+    };
+    const result = sizeFilterInductance(square, {
+      c,
+      ...damping,
+      fundamentalFrequency: f1,
+      maxThd: 0.08,
+    });
     const at = (lValue: number): number =>
-      thd(filteredSpectrum(square, { filter: { c, ...damping, l: lValue }, fundamentalFrequency: f1 }));
+      thd(
+        filteredSpectrum(square, {
+          filter: { c, ...damping, l: lValue },
+          fundamentalFrequency: f1,
+        }),
+      );
     expect(at(result.l)).toBeLessThanOrEqual(0.08);
     expect(at(result.l * (1 - 1e-8))).toBeGreaterThan(0.08);
     assertInDelta(result.thd, 0.08, 1e-8);
@@ -242,16 +301,24 @@ describe('sizeFilterInductance', () => {
       sizeFilterInductance(spectrum, { c, fundamentalFrequency: f1, maxIndividual: 1e-9 }),
     ).toThrow(/maxIndividual must be a target reachable/);
     expect(() => sizeFilterInductance(spectrum, { c, fundamentalFrequency: f1 })).toThrow(/maxThd/);
-    expect(() => sizeFilterInductance(spectrum, { c: -1, fundamentalFrequency: f1, maxThd: 0.05 })).toThrow(/c must be/);
+    expect(() =>
+      sizeFilterInductance(spectrum, { c: -1, fundamentalFrequency: f1, maxThd: 0.05 }),
+    ).toThrow(/c must be/);
   });
 });
 
 describe('filter input checks', () => {
   it('names the field and the range', () => {
     expect(() => lcFilter({ l, c: 0 })).toThrow(/c must be a finite number > 0/);
-    expect(() => lcFilter({ l, c, rDamping: 0, dampingPlacement: 'parallel-rc', cDamping: 1e-6 })).toThrow(/rDamping must be a finite number > 0/);
-    expect(() => lcFilter({ l, c, rDamping: 1, dampingPlacement: 'parallel-rc' })).toThrow(/cDamping/);
-    expect(() => lcFilter({ l, c, dampingPlacement: 'across' as DampingPlacement })).toThrow(/dampingPlacement must be one of/);
+    expect(() =>
+      lcFilter({ l, c, rDamping: 0, dampingPlacement: 'parallel-rc', cDamping: 1e-6 }),
+    ).toThrow(/rDamping must be a finite number > 0/);
+    expect(() => lcFilter({ l, c, rDamping: 1, dampingPlacement: 'parallel-rc' })).toThrow(
+      /cDamping/,
+    );
+    expect(() => lcFilter({ l, c, dampingPlacement: 'across' as DampingPlacement })).toThrow(
+      /dampingPlacement must be one of/,
+    );
     expect(() => lcFilter({ l, c, loadR: 0 })).toThrow(/loadR/);
     expect(() => lcFilterResponse([10, -1], { l, c })).toThrow(/frequencies\[1\]/);
   });

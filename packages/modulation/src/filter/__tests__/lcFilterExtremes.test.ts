@@ -10,7 +10,9 @@ import { lcFilter, lcFilterResponse } from '../index.js';
 describe('LC filter at the edges of double precision', () => {
   it('names c when l·c underflows (the fuzzer’s c 2.5e-323 F, l 1e-110 H)', () => {
     expect(rangeErrorField(() => lcFilter({ l: 1e-110, c: 2.5e-323 }))).toBe('c');
-    expect(rangeErrorField(() => lcFilterResponse([50], { l: 1e-110, c: 2.5e-323, rDamping: 1 }))).toBe('c');
+    expect(
+      rangeErrorField(() => lcFilterResponse([50], { l: 1e-110, c: 2.5e-323, rDamping: 1 })),
+    ).toBe('c');
   });
 
   it('names l when l/c overflows', () => {
@@ -24,7 +26,14 @@ describe('LC filter at the edges of double precision', () => {
   });
 
   it('keeps every figure finite or null over the documented ranges', () => {
-    const result = lcFilter({ l: 1e-9, c: 1e-12, rDamping: 1e6, dampingPlacement: 'parallel-with-inductor', loadR: 1e-3 });
-    for (const value of Object.values(result)) expect(value === null || Number.isFinite(value)).toBe(true);
+    const result = lcFilter({
+      l: 1e-9,
+      c: 1e-12,
+      rDamping: 1e6,
+      dampingPlacement: 'parallel-with-inductor',
+      loadR: 1e-3,
+    });
+    for (const value of Object.values(result))
+      expect(value === null || Number.isFinite(value)).toBe(true);
   });
 });

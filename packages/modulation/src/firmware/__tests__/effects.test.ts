@@ -28,7 +28,10 @@ const bipolar: TimerTableOptions = {
  * (height/π)·2·sin(w/2)·(cos θc, sin θc) (Fourier series of a rectangular pulse, standard
  * Fourier analysis).
  */
-function pulsePhasor(pulses: { centre: number; width: number }[], height: number): [number, number] {
+function pulsePhasor(
+  pulses: { centre: number; width: number }[],
+  height: number,
+): [number, number] {
   let a = 0;
   let b = 0;
   for (const { centre, width } of pulses) {
@@ -75,11 +78,24 @@ describe('realised waveforms', () => {
   });
 
   it('give a three-level unipolar output and √3·ma·vdc/2 line-to-line for three-phase', () => {
-    const unipolar = timerTableWaveforms(timerTable({ ...bipolar, modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.8 } }), { includeDeadTime: false });
+    const unipolar = timerTableWaveforms(
+      timerTable({
+        ...bipolar,
+        modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.8 },
+      }),
+      { includeDeadTime: false },
+    );
     expect([...new Set(unipolar.outputs[0]!.levels)].sort((x, y) => x - y)).toEqual([-vdc, 0, vdc]);
-    const three = timerTableWaveforms(timerTable({ ...bipolar, modulation: { method: 'three-phase', ma: 0.8 } }), { includeDeadTime: false });
+    const three = timerTableWaveforms(
+      timerTable({ ...bipolar, modulation: { method: 'three-phase', ma: 0.8 } }),
+      { includeDeadTime: false },
+    );
     // Line-to-line fundamental √3·ma·vdc/2 in the linear range (Holmes and Lipo 2003 ch. 5).
-    assertInDelta(harmonics(three.outputs[0]!, 1)[1]!.amplitude, (Math.sqrt(3) * 0.8 * vdc) / 2, 1e-3 * vdc);
+    assertInDelta(
+      harmonics(three.outputs[0]!, 1)[1]!.amplitude,
+      (Math.sqrt(3) * 0.8 * vdc) / 2,
+      1e-3 * vdc,
+    );
   });
 });
 
@@ -91,7 +107,9 @@ describe('quantisationEffect', () => {
     // Each pulse moves by at most half a count (an average error of at most q/2 per carrier
     // period), so the fundamental moves by at most (4/π)·(q/2) per leg (Fourier integral of a
     // bounded error: |b1| ≤ (1/π)∫|e·sin θ| dθ), twice that for the bipolar bridge.
-    expect(Math.abs(effect.fundamentalChange)).toBeLessThanOrEqual(2 * (4 / Math.PI) * effect.maxQuantisationError);
+    expect(Math.abs(effect.fundamentalChange)).toBeLessThanOrEqual(
+      2 * (4 / Math.PI) * effect.maxQuantisationError,
+    );
     expect(effect.fundamentalChange).not.toBe(0);
     // The realised output is the exact pulse sum of the rounded compare values.
     const [a, b] = pulsePhasor(centreAlignedPulses(table, 0), 2 * vdc);
@@ -112,7 +130,12 @@ describe('deadTimeEffect', () => {
       assertInDelta(effect.fundamentalChange, -lossBridge, 0.01 * lossBridge, countingMode);
       assertInDelta(effect.legVoltageError, 1e-6 * 10_000 * vdc, 1e-9);
     }
-    const unipolar = deadTimeEffect(timerTable({ ...bipolar, modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.8 } }));
+    const unipolar = deadTimeEffect(
+      timerTable({
+        ...bipolar,
+        modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.8 },
+      }),
+    );
     assertInDelta(unipolar.fundamentalChange, -lossBridge, 0.01 * lossBridge, 'unipolar');
   });
 
@@ -121,7 +144,11 @@ describe('deadTimeEffect', () => {
     // Error phasor (8/π)·ΔV·e^{j(π−φ)} = +j·(8/π)ΔV at φ = π/2: the phase advances by
     // atan(E/V), the amplitude grows by √(V² + E²) − V (same model).
     const v = effect.referenceFundamental;
-    assertInDelta(effect.fundamentalPhaseChange, Math.atan(lossBridge / v), 0.02 * Math.atan(lossBridge / v));
+    assertInDelta(
+      effect.fundamentalPhaseChange,
+      Math.atan(lossBridge / v),
+      0.02 * Math.atan(lossBridge / v),
+    );
     assertInDelta(effect.fundamentalChange, Math.hypot(v, lossBridge) - v, 0.05);
   });
 
@@ -134,7 +161,9 @@ describe('deadTimeEffect', () => {
   });
 
   it('lowers a line-to-line fundamental by √3·(4/π)·td·fsw·vdc', () => {
-    const effect = deadTimeEffect(timerTable({ ...bipolar, modulation: { method: 'three-phase', ma: 0.8 } }));
+    const effect = deadTimeEffect(
+      timerTable({ ...bipolar, modulation: { method: 'three-phase', ma: 0.8 } }),
+    );
     const loss = Math.sqrt(3) * (4 / Math.PI) * 1e-6 * 10_000 * vdc;
     assertInDelta(effect.fundamentalChange, -loss, 0.01 * loss);
     assertInDelta(effect.predictedFundamentalChange, -loss, 0.01 * loss);
@@ -142,7 +171,10 @@ describe('deadTimeEffect', () => {
 });
 
 describe('minimumPulseEffect', () => {
-  const table = timerTable({ ...bipolar, modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.95 } });
+  const table = timerTable({
+    ...bipolar,
+    modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.95 },
+  });
   const minPulseWidth = 3e-6;
   const minTicks = minPulseWidth * 64e6;
   const p = table.fullScaleCounts;
@@ -151,10 +183,15 @@ describe('minimumPulseEffect', () => {
   const tickAngle = (2 * Math.PI) / (windows * table.ticksPerCarrierPeriod);
   // High pulse j: 2·c_j ticks centred on valley j; low pulse between valleys j and j + 1:
   // (P − c_j) + (P − c_{j+1}) ticks centred on the counter peak between them.
-  const narrowHighs = compare.flatMap((c, j) => (c > 0 && 2 * c < minTicks ? [{ centre: ((j + 0.5) * 2 * Math.PI) / windows, width: 2 * c * tickAngle }] : []));
+  const narrowHighs = compare.flatMap((c, j) =>
+    c > 0 && 2 * c < minTicks
+      ? [{ centre: ((j + 0.5) * 2 * Math.PI) / windows, width: 2 * c * tickAngle }]
+      : [],
+  );
   const narrowLows = compare.flatMap((c, j) => {
     const width = 2 * p - c - compare[(j + 1) % windows]!;
-    const centre = ((j + 1) * 2 * Math.PI) / windows + ((c - compare[(j + 1) % windows]!) / 2) * tickAngle;
+    const centre =
+      ((j + 1) * 2 * Math.PI) / windows + ((c - compare[(j + 1) % windows]!) / 2) * tickAngle;
     return width > 0 && width < minTicks ? [{ centre, width: width * tickAngle }] : [];
   });
 
@@ -201,14 +238,25 @@ describe('minimumPulseEffect', () => {
 
 describe('firmwareEffects', () => {
   it('reports the three effects and their combination', () => {
-    const table = timerTable({ ...bipolar, timerClock: 8e6, modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.95 } });
+    const table = timerTable({
+      ...bipolar,
+      timerClock: 8e6,
+      modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.95 },
+    });
     const all = firmwareEffects(table, { minPulseWidth: 2e-6, currentAngle: 0.3 });
     expect(all.quantisation.fundamentalChange).toBe(quantisationEffect(table).fundamentalChange);
-    expect(all.deadTime.fundamentalChange).toBe(deadTimeEffect(table, { currentAngle: 0.3 }).fundamentalChange);
-    expect(all.minimumPulse.adjustedPulses).toBe(minimumPulseEffect(table, { minPulseWidth: 2e-6 }).adjustedPulses);
+    expect(all.deadTime.fundamentalChange).toBe(
+      deadTimeEffect(table, { currentAngle: 0.3 }).fundamentalChange,
+    );
+    expect(all.minimumPulse.adjustedPulses).toBe(
+      minimumPulseEffect(table, { minPulseWidth: 2e-6 }).adjustedPulses,
+    );
     // The effects are small and nearly independent, so the total change is close to their sum
     // (first-order superposition; the tolerance covers their interaction near the peaks).
-    const sum = all.quantisation.fundamentalChange + all.deadTime.fundamentalChange + all.minimumPulse.fundamentalChange;
+    const sum =
+      all.quantisation.fundamentalChange +
+      all.deadTime.fundamentalChange +
+      all.minimumPulse.fundamentalChange;
     assertInDelta(all.combined.fundamentalChange, sum, 0.1 * Math.abs(sum));
   });
 });

@@ -4,7 +4,13 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { timerTable, timerTableToCHeader, timerTableToCsv, timerTableToJson, type TimerTableOptions } from '../index.js';
+import {
+  timerTable,
+  timerTableToCHeader,
+  timerTableToCsv,
+  timerTableToJson,
+  type TimerTableOptions,
+} from '../index.js';
 
 const options: TimerTableOptions = {
   modulation: { method: 'three-phase', zeroSequence: 'min-max', ma: 1.05 },
@@ -30,7 +36,9 @@ describe('timerTableToCsv', () => {
     const table = timerTable(options);
     const lines = timerTableToCsv(table).trimEnd().split('\r\n');
     expect(lines).toHaveLength(table.parameters.tableLength + 1);
-    expect(lines[0]).toBe('entry,angle_rad,a_duty,a_compare,a_high,a_low,b_duty,b_compare,b_high,b_low,c_duty,c_compare,c_high,c_low');
+    expect(lines[0]).toBe(
+      'entry,angle_rad,a_duty,a_compare,a_high,a_low,b_duty,b_compare,b_high,b_low,c_duty,c_compare,c_high,c_low',
+    );
     const row = lines[6]!.split(','); // line 0 is the header
     expect(Number(row[0])).toBe(5);
     expect(Number(row[3])).toBe(table.channels[0]!.compare[5]);
@@ -41,7 +49,13 @@ describe('timerTableToCsv', () => {
     // CSV formula injection: cells starting with = + - @ are prefixed with ' (OWASP guidance,
     // from memory); RFC 4180 quoting for the embedded quote and comma.
     const table = timerTable(options);
-    const hostile = { ...table, channels: table.channels.map((c, i) => ({ ...c, name: ['=HYPERLINK("http://x","y")', '+1', '@SUM(A1)'][i]! })) };
+    const hostile = {
+      ...table,
+      channels: table.channels.map((c, i) => ({
+        ...c,
+        name: ['=HYPERLINK("http://x","y")', '+1', '@SUM(A1)'][i]!,
+      })),
+    };
     const header = timerTableToCsv(hostile).split('\r\n')[0]!;
     expect(header).toContain(`"'=HYPERLINK(""http://x"",""y"")_duty"`);
     expect(header).toContain("'+1_duty");
@@ -54,7 +68,17 @@ describe('timerTableToCHeader', () => {
   it('records every parameter with its unit and the conventions', () => {
     const table = timerTable(options);
     const header = timerTableToCHeader(table);
-    for (const field of ['modulation.ma', 'fundamentalFrequency', 'carrierFrequency', 'timerClock', 'countingMode', 'counterBits', 'deadTime', 'tableLength', 'vdc']) {
+    for (const field of [
+      'modulation.ma',
+      'fundamentalFrequency',
+      'carrierFrequency',
+      'timerClock',
+      'countingMode',
+      'counterBits',
+      'deadTime',
+      'tableLength',
+      'vdc',
+    ]) {
       expect(header).toContain(field);
     }
     expect(header).toContain('80000000 Hz');
@@ -65,8 +89,12 @@ describe('timerTableToCHeader', () => {
     expect(header.trimEnd().endsWith('#endif /* PWM_TABLE_H */')).toBe(true);
     // Only printable ASCII inside the comment, so any C compiler accepts it.
     expect(/[^\x20-\x7e\n]/.test(header)).toBe(false);
-    expect(timerTableToCHeader(timerTable({ ...options, counterBits: 32 }))).toContain('static const uint32_t');
-    expect(() => timerTableToCHeader(table, { prefix: '9bad' })).toThrow(/prefix must be a C identifier/);
+    expect(timerTableToCHeader(timerTable({ ...options, counterBits: 32 }))).toContain(
+      'static const uint32_t',
+    );
+    expect(() => timerTableToCHeader(table, { prefix: '9bad' })).toThrow(
+      /prefix must be a C identifier/,
+    );
   });
 
   it.runIf(compilerAvailable)('compiles with the C compiler and holds the same numbers', () => {
@@ -78,7 +106,17 @@ describe('timerTableToCHeader', () => {
         const table = timerTable({ ...options, counterBits });
         const headerPath = join(directory, `table${counterBits}.h`);
         writeFileSync(headerPath, timerTableToCHeader(table, { prefix: 'kestrel_drive' }));
-        execFileSync('cc', ['-std=c99', '-pedantic', '-Wall', '-Wextra', '-Werror', '-fsyntax-only', '-x', 'c', headerPath]);
+        execFileSync('cc', [
+          '-std=c99',
+          '-pedantic',
+          '-Wall',
+          '-Wextra',
+          '-Werror',
+          '-fsyntax-only',
+          '-x',
+          'c',
+          headerPath,
+        ]);
         const program = join(directory, `main${counterBits}.c`);
         writeFileSync(
           program,

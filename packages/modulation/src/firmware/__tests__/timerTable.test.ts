@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { legReferences, MAX_TIMER_TABLE_LENGTH, timerTable, timerTableWaveforms, type TimerTableOptions } from '../index.js';
+import {
+  legReferences,
+  MAX_TIMER_TABLE_LENGTH,
+  timerTable,
+  timerTableWaveforms,
+  type TimerTableOptions,
+} from '../index.js';
 import { rangeErrorField } from '../../testing/rangeErrorField.js';
 import { harmonics } from '../../spectrum/index.js';
 import { ParameterRangeError } from '../../validation/index.js';
@@ -50,7 +56,10 @@ describe('timerTable period and compare values', () => {
   it('doubles the entries for asymmetric sampling and gives the fundamental ma·vdc', () => {
     const table = timerTable({ ...base, sampling: 'regular-asymmetric' });
     expect(table.parameters.tableLength).toBe(640);
-    const [fundamental] = harmonics(timerTableWaveforms(table, { counts: 'ideal' }).outputs[0]!, 1).slice(1);
+    const [fundamental] = harmonics(
+      timerTableWaveforms(table, { counts: 'ideal' }).outputs[0]!,
+      1,
+    ).slice(1);
     // Linear range: the fundamental of sine-triangle PWM is ma·vdc for a bipolar full bridge
     // (fact of the trade); regular sampling at mf = 320 changes it by order (π/mf)² ≈ 1e-4.
     assertInDelta(fundamental!.amplitude, 0.8 * 400, 1e-3 * 320);
@@ -72,14 +81,22 @@ describe('timerTable period and compare values', () => {
     expect(table.channels.map((c) => c.name)).toEqual(['a', 'b', 'c']);
     // Balanced sines sum to zero, so the three duties sum to 3/2 (trigonometric identity).
     table.entryAngles.forEach((_, i) => {
-      assertInDelta(table.channels.reduce((s, c) => s + c.duty[i]!, 0), 1.5, 1e-12);
+      assertInDelta(
+        table.channels.reduce((s, c) => s + c.duty[i]!, 0),
+        1.5,
+        1e-12,
+      );
     });
     // Third-harmonic (1/6) and min-max injection reach the rail at ma = 2/√3: the peak of the
     // injected reference is (√3/2)·ma (Holmes and Lipo 2003 ch. 5; Houldsworth and Grant 1984).
     for (const zeroSequence of ['third-harmonic', 'min-max'] as const) {
       let peak = 0;
       for (let i = 0; i < 6000; i++) {
-        const r = legReferences((i * 2 * Math.PI) / 6000, { method: 'three-phase', zeroSequence, ma: 2 / Math.sqrt(3) });
+        const r = legReferences((i * 2 * Math.PI) / 6000, {
+          method: 'three-phase',
+          zeroSequence,
+          ma: 2 / Math.sqrt(3),
+        });
         peak = Math.max(peak, ...r.map(Math.abs));
       }
       assertInDelta(peak, 1, 1e-9, zeroSequence);
@@ -90,38 +107,71 @@ describe('timerTable period and compare values', () => {
 describe('timerTable input checks', () => {
   it('rejects a period that does not fit the counter, naming the fields and the range', () => {
     // 64 MHz / 500 Hz = 128000 ticks > 2^16.
-    expect(() => timerTable({ ...base, carrierFrequency: 500, fundamentalFrequency: 50, countingMode: 'edge-aligned' })).toThrow(
-      /timerClock\/carrierFrequency must be 2 to 2\^16 = 65536 counts/,
+    expect(() =>
+      timerTable({
+        ...base,
+        carrierFrequency: 500,
+        fundamentalFrequency: 50,
+        countingMode: 'edge-aligned',
+      }),
+    ).toThrow(/timerClock\/carrierFrequency must be 2 to 2\^16 = 65536 counts/);
+    expect(() => timerTable({ ...base, carrierFrequency: 400, fundamentalFrequency: 50 })).toThrow(
+      /timerClock\/\(2·carrierFrequency\)/,
     );
-    expect(() => timerTable({ ...base, carrierFrequency: 400, fundamentalFrequency: 50 })).toThrow(/timerClock\/\(2·carrierFrequency\)/);
     // The same period fits a 32-bit counter.
-    expect(timerTable({ ...base, carrierFrequency: 400, counterBits: 32 }).periodRegister).toBe(80_000);
+    expect(timerTable({ ...base, carrierFrequency: 400, counterBits: 32 }).periodRegister).toBe(
+      80_000,
+    );
   });
 
   it('rejects a non-integer carrier/fundamental ratio and a table length that does not divide it', () => {
     expect(() => timerTable({ ...base, carrierFrequency: 1000, fundamentalFrequency: 60 })).toThrow(
       /carrierFrequency\/fundamentalFrequency must be an integer ≥ 3/,
     );
-    expect(() => timerTable({ ...base, tableLength: 7 })).toThrow(/tableLength must be a divisor of 320/);
+    expect(() => timerTable({ ...base, tableLength: 7 })).toThrow(
+      /tableLength must be a divisor of 320/,
+    );
     expect(() => timerTable({ ...base, tableLength: 7 })).toThrow(ParameterRangeError);
   });
 
   it('rejects a dead time of half a carrier period or more', () => {
-    expect(() => timerTable({ ...base, deadTime: 1 / 32_000 })).toThrow(/deadTime must be a time in seconds ≥ 0 and < half the carrier period/);
+    expect(() => timerTable({ ...base, deadTime: 1 / 32_000 })).toThrow(
+      /deadTime must be a time in seconds ≥ 0 and < half the carrier period/,
+    );
     expect(() => timerTable({ ...base, deadTime: -1e-6 })).toThrow(/deadTime/);
   });
 
   it('rejects asymmetric sampling and compare-offset dead time on an up-counter', () => {
-    expect(() => timerTable({ ...base, countingMode: 'edge-aligned', sampling: 'regular-asymmetric' })).toThrow(/sampling must be 'regular-symmetric'/);
-    expect(() => timerTable({ ...base, countingMode: 'edge-aligned', deadTimeMethod: 'compare-offset' })).toThrow(/deadTimeMethod/);
-    expect(() => timerTable({ ...base, counterBits: 7 })).toThrow(/counterBits must be an integer ≥ 8 and ≤ 32/);
-    expect(() => timerTable({ ...base, modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: Number.NaN } })).toThrow(/modulation.ma/);
-    expect(() => timerTable({ ...base, modulation: { method: 'sine-triangle', scheme: 'tri' as 'bipolar', ma: 0.5 } })).toThrow(/modulation.scheme/);
+    expect(() =>
+      timerTable({ ...base, countingMode: 'edge-aligned', sampling: 'regular-asymmetric' }),
+    ).toThrow(/sampling must be 'regular-symmetric'/);
+    expect(() =>
+      timerTable({ ...base, countingMode: 'edge-aligned', deadTimeMethod: 'compare-offset' }),
+    ).toThrow(/deadTimeMethod/);
+    expect(() => timerTable({ ...base, counterBits: 7 })).toThrow(
+      /counterBits must be an integer ≥ 8 and ≤ 32/,
+    );
+    expect(() =>
+      timerTable({
+        ...base,
+        modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: Number.NaN },
+      }),
+    ).toThrow(/modulation.ma/);
+    expect(() =>
+      timerTable({
+        ...base,
+        modulation: { method: 'sine-triangle', scheme: 'tri' as 'bipolar', ma: 0.5 },
+      }),
+    ).toThrow(/modulation.scheme/);
   });
 
   it('warns when pulses are shorter than the dead time and when the clock does not divide', () => {
     // ma = 0.98: the narrowest duty (1 − 0.98)/2 = 1 % of 62.5 µs ≈ 0.6 µs < 2 µs dead time.
-    const narrow = timerTable({ ...base, modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.98 }, deadTime: 2e-6 });
+    const narrow = timerTable({
+      ...base,
+      modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.98 },
+      deadTime: 2e-6,
+    });
     expect(narrow.warnings.map((w) => w.field)).toContain('deadTime');
     expect(timerTable({ ...base, deadTime: 2e-6 }).warnings).toEqual([]);
     const rounded = timerTable({ ...base, timerClock: 64_000_123 });
@@ -151,8 +201,12 @@ describe('timerTable: size bounded before work (issue 11: a default table length
       sampling: 'regular-asymmetric' as const,
     };
     expect(rangeErrorField(() => timerTable(options))).toBe('tableLength');
-    expect(() => timerTable(options)).toThrow(/tableLength must be given when .* \(40000000 compare updates per period\) exceeds 65536/);
-    expect(rangeErrorField(() => timerTable({ ...options, tableLength: 2 * MAX_TIMER_TABLE_LENGTH }))).toBe('tableLength');
+    expect(() => timerTable(options)).toThrow(
+      /tableLength must be given when .* \(40000000 compare updates per period\) exceeds 65536/,
+    );
+    expect(
+      rangeErrorField(() => timerTable({ ...options, tableLength: 2 * MAX_TIMER_TABLE_LENGTH })),
+    ).toBe('tableLength');
     expect(timerTable({ ...options, tableLength: 50_000 }).entryAngles).toHaveLength(50_000);
   });
 });

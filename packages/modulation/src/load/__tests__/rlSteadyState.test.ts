@@ -13,7 +13,10 @@ const TAU = 2 * Math.PI;
 
 /** Mean square of a current from its harmonics: I_0² + Σ I_n²/2 (Parseval). */
 function harmonicMeanSquare(spectrum: readonly Harmonic[]): number {
-  return spectrum.reduce((sum, h) => sum + (h.order === 0 ? h.amplitude ** 2 : h.amplitude ** 2 / 2), 0);
+  return spectrum.reduce(
+    (sum, h) => sum + (h.order === 0 ? h.amplitude ** 2 : h.amplitude ** 2 / 2),
+    0,
+  );
 }
 
 /**
@@ -26,7 +29,9 @@ function tailBound(waveform: Waveform, { l, frequency }: RlLoadOptions, maxOrder
   const { levels } = waveform;
   let jumps = 0;
   for (let i = 0; i < levels.length; i++) {
-    jumps += Math.abs((levels[i] as number) - (levels[(i + levels.length - 1) % levels.length] as number));
+    jumps += Math.abs(
+      (levels[i] as number) - (levels[(i + levels.length - 1) % levels.length] as number),
+    );
   }
   const reactance = TAU * frequency * l;
   return (jumps * jumps) / (2 * Math.PI ** 2 * reactance ** 2) / (3 * maxOrder ** 3);
@@ -73,8 +78,14 @@ describe('rlSteadyState of a square wave (closed form)', () => {
       assertInDelta(current[k] as number, expected, 1e-11 * (volts / load.r), `θ = ${theta}`);
     });
     // Half-wave symmetry of the square wave carries over to the current: i(θ + π) = −i(θ).
-    const shifted = rlCurrentAt(square, angles.map((a) => a + Math.PI), load);
-    angles.forEach((_, k) => assertInDelta(shifted[k] as number, -(current[k] as number), 1e-11 * volts));
+    const shifted = rlCurrentAt(
+      square,
+      angles.map((a) => a + Math.PI),
+      load,
+    );
+    angles.forEach((_, k) =>
+      assertInDelta(shifted[k] as number, -(current[k] as number), 1e-11 * volts),
+    );
   });
 });
 
@@ -106,7 +117,11 @@ describe('rlSteadyState against the harmonic sum (standard circuit analysis)', (
 
   it('mean current is V_0/R', () => {
     const [dc] = harmonics(waveform, 0);
-    assertInDelta(rlSteadyState(waveform, load).meanCurrent, (dc?.amplitude ?? NaN) / load.r, 1e-12 * 100);
+    assertInDelta(
+      rlSteadyState(waveform, load).meanCurrent,
+      (dc?.amplitude ?? NaN) / load.r,
+      1e-12 * 100,
+    );
   });
 
   it('pointwise current agrees with the reconstructed harmonic sum within Σ_{n>N} I_n', () => {
@@ -118,7 +133,8 @@ describe('rlSteadyState against the harmonic sum (standard circuit analysis)', (
     const exact = rlCurrentAt(waveform, angles, load);
     angles.forEach((theta, k) => {
       const summed = spectrum.reduce(
-        (sum, h) => sum + (h.order === 0 ? h.amplitude : h.amplitude * Math.sin(h.order * theta + h.phase)),
+        (sum, h) =>
+          sum + (h.order === 0 ? h.amplitude : h.amplitude * Math.sin(h.order * theta + h.phase)),
         0,
       );
       assertInDelta(exact[k] as number, summed, bound, `θ = ${theta}`);
@@ -127,10 +143,16 @@ describe('rlSteadyState against the harmonic sum (standard circuit analysis)', (
 
   it('holds for random waveforms and loads (property, Parseval)', () => {
     const arbitraryWaveform = fc
-      .array(fc.record({ angle: fc.double({ min: 0, max: 6.28, noNaN: true }), level: fc.integer({ min: -400, max: 400 }) }), {
-        minLength: 1,
-        maxLength: 12,
-      })
+      .array(
+        fc.record({
+          angle: fc.double({ min: 0, max: 6.28, noNaN: true }),
+          level: fc.integer({ min: -400, max: 400 }),
+        }),
+        {
+          minLength: 1,
+          maxLength: 12,
+        },
+      )
       .map((transitions) => waveformFromTransitions(transitions));
     const arbitraryLoad = fc.record({
       r: fc.double({ min: 0.1, max: 50, noNaN: true }),
@@ -169,7 +191,11 @@ describe('rlSteadyState, resistive load', () => {
 
   it('matches mean(v²)/R for a multilevel waveform', () => {
     const w = { edges: [0.2, 1, 2.5, 4], levels: [10, 30, -5, 0] };
-    assertInDelta(rlSteadyState(w, { r: 2, l: 0, frequency: 50 }).power, waveformMeanSquare(w) / 2, 1e-12 * 300);
+    assertInDelta(
+      rlSteadyState(w, { r: 2, l: 0, frequency: 50 }).power,
+      waveformMeanSquare(w) / 2,
+      1e-12 * 300,
+    );
   });
 });
 
@@ -181,7 +207,10 @@ describe('rlSteadyState ripple of a high-frequency square wave', () => {
     const pulses = 21;
     const transitions = [];
     for (let k = 0; k < pulses; k++) {
-      transitions.push({ angle: (TAU * k) / pulses, level: vdc }, { angle: (TAU * (k + 0.5)) / pulses, level: -vdc });
+      transitions.push(
+        { angle: (TAU * k) / pulses, level: vdc },
+        { angle: (TAU * (k + 0.5)) / pulses, level: -vdc },
+      );
     }
     const waveform = waveformFromTransitions(transitions);
     const load = { r: 0.5, l: 0.005, frequency: 50 };
@@ -218,7 +247,7 @@ describe('rlSteadyState with back-EMF', () => {
       assertInDelta(current[k] as number, -peak * Math.sin(theta + emf.phase - lag), 1e-12 * peak);
     });
     // The EMF delivers the power R absorbs: emfPower = −R·I_rms².
-    assertInDelta(result.emfPower, -load.r * (peak * peak) / 2, 1e-10 * peak * peak);
+    assertInDelta(result.emfPower, (-load.r * (peak * peak)) / 2, 1e-10 * peak * peak);
     expect(result.sourcePower).toBe(0);
   });
 
@@ -227,7 +256,12 @@ describe('rlSteadyState with back-EMF', () => {
     const options = { ...load, emf };
     const result = rlSteadyState(square, options);
     // Energy balance over a period: mean(v·i) = R·I_rms² + mean(e·i).
-    assertInDelta(result.sourcePower, result.power + result.emfPower, 1e-10 * result.sourcePower, 'balance');
+    assertInDelta(
+      result.sourcePower,
+      result.power + result.emfPower,
+      1e-10 * result.sourcePower,
+      'balance',
+    );
     const maxOrder = 3000;
     const summed = harmonicMeanSquare(harmonicLoadCurrent(harmonics(square, maxOrder), options));
     const exact = result.rmsCurrent ** 2;
@@ -235,7 +269,8 @@ describe('rlSteadyState with back-EMF', () => {
     assertInDelta(summed, exact, 1e-9 * exact, 'mean square');
     // Only the fundamental carries EMF power: mean(e·i) = (E·I_1/2)·cos(φ_e − φ_i1).
     const fundamental = harmonicLoadCurrent(harmonics(square, 1), options)[1] as Harmonic;
-    const emfPower = ((emf.amplitude * fundamental.amplitude) / 2) * Math.cos(emf.phase - fundamental.phase);
+    const emfPower =
+      ((emf.amplitude * fundamental.amplitude) / 2) * Math.cos(emf.phase - fundamental.phase);
     assertInDelta(result.emfPower, emfPower, 1e-10 * Math.abs(emfPower), 'emf power');
   });
 
@@ -270,23 +305,35 @@ describe('rlCurrentSeries', () => {
 describe('load input checks', () => {
   const square = { edges: [0, Math.PI], levels: [1, -1] };
   it('names the field and the range', () => {
-    expect(() => rlSteadyState(square, { r: 0, l: 0.01, frequency: 50 })).toThrow(/r must be a finite number > 0/);
-    expect(() => rlSteadyState(square, { r: 1, l: -1, frequency: 50 })).toThrow(/l must be a finite number ≥ 0/);
-    expect(() => rlSteadyState(square, { r: 1, l: 0, frequency: NaN })).toThrow(/frequency must be/);
-    expect(() => rlSteadyState(square, { r: 1, l: 0, frequency: 50, emf: { amplitude: -1, phase: 0 } })).toThrow(
-      /emf.amplitude must be a finite number ≥ 0/,
+    expect(() => rlSteadyState(square, { r: 0, l: 0.01, frequency: 50 })).toThrow(
+      /r must be a finite number > 0/,
     );
+    expect(() => rlSteadyState(square, { r: 1, l: -1, frequency: 50 })).toThrow(
+      /l must be a finite number ≥ 0/,
+    );
+    expect(() => rlSteadyState(square, { r: 1, l: 0, frequency: NaN })).toThrow(
+      /frequency must be/,
+    );
+    expect(() =>
+      rlSteadyState(square, { r: 1, l: 0, frequency: 50, emf: { amplitude: -1, phase: 0 } }),
+    ).toThrow(/emf.amplitude must be a finite number ≥ 0/);
     expect(() =>
       rlSteadyState(square, { r: 1, l: 0, frequency: 50, emf: { amplitude: 1, phase: Infinity } }),
     ).toThrow(/emf.phase/);
-    expect(() => rlSteadyState({ edges: [2, 1], levels: [1, 1] }, { r: 1, l: 0, frequency: 50 })).toThrow(
-      /waveform.edges\[1\]/,
+    expect(() =>
+      rlSteadyState({ edges: [2, 1], levels: [1, 1] }, { r: 1, l: 0, frequency: 50 }),
+    ).toThrow(/waveform.edges\[1\]/);
+    expect(() => rlCurrentAt(square, [0, NaN], { r: 1, l: 0, frequency: 50 })).toThrow(
+      /angles\[1\]/,
     );
-    expect(() => rlCurrentAt(square, [0, NaN], { r: 1, l: 0, frequency: 50 })).toThrow(/angles\[1\]/);
-    expect(() => rlCurrentSeries(square, { r: 1, l: 0, frequency: 50, points: 1 })).toThrow(/points must be an integer ≥ 2/);
-    expect(() => harmonicLoadCurrent([{ order: 1.5, amplitude: 1, phase: 0 }], { r: 1, l: 0, frequency: 50 })).toThrow(
-      /spectrum\[0\].order/,
+    expect(() => rlCurrentSeries(square, { r: 1, l: 0, frequency: 50, points: 1 })).toThrow(
+      /points must be an integer ≥ 2/,
     );
-    expect(() => rlSteadyState(square, { r: '1', l: 0, frequency: 50 } as unknown as RlLoadOptions)).toThrow(TypeError);
+    expect(() =>
+      harmonicLoadCurrent([{ order: 1.5, amplitude: 1, phase: 0 }], { r: 1, l: 0, frequency: 50 }),
+    ).toThrow(/spectrum\[0\].order/);
+    expect(() =>
+      rlSteadyState(square, { r: '1', l: 0, frequency: 50 } as unknown as RlLoadOptions),
+    ).toThrow(TypeError);
   });
 });

@@ -17,7 +17,11 @@ function fundamentalOf(angles: readonly number[]): number {
 }
 
 /** Moves angles along `direction` until the exact spectrum's V₁ equals `target` (secant). */
-function backToFundamental(angles: number[], direction: readonly number[], target: number): number[] {
+function backToFundamental(
+  angles: number[],
+  direction: readonly number[],
+  target: number,
+): number[] {
   let t0 = 0;
   let t1 = 1e-4;
   const at = (t: number): number[] => angles.map((a, k) => a + t * (direction[k] as number));
@@ -37,7 +41,13 @@ describe('optimalPulsePattern', () => {
     // α₂ follows from α₁; scan α₁ finely and measure WTHD by the exact spectrum.
     const m = 0.55;
     const maxOrder = 61;
-    const result = optimalPulsePattern({ kind: 'bipolar', vdc, count: 2, fundamental: m * scale, maxOrder });
+    const result = optimalPulsePattern({
+      kind: 'bipolar',
+      vdc,
+      count: 2,
+      fundamental: m * scale,
+      maxOrder,
+    });
     expect(result.converged, result.message).toBe(true);
     let best = Infinity;
     for (let i = 1; i < 20000; i++) {
@@ -74,7 +84,9 @@ describe('optimalPulsePattern', () => {
         const moved = result.angles.map((a, k) => a + eps * (tangent[k] as number));
         const feasible = backToFundamental(moved, normal, fundamental);
         assertInDelta(fundamentalOf(feasible), fundamental, 1e-9 * fundamental, 'perturbed V₁');
-        expect(measuredWthd(feasible, maxOrder), `trial ${trial}, ε ${eps}`).toBeGreaterThan(optimum);
+        expect(measuredWthd(feasible, maxOrder), `trial ${trial}, ε ${eps}`).toBeGreaterThan(
+          optimum,
+        );
       }
     }
   });
@@ -83,7 +95,10 @@ describe('optimalPulsePattern', () => {
     // Minimising V₅² + V₇² with 3 angles has zero as its least value wherever an SHE solution
     // eliminating 5 and 7 exists (Patel and Hoft, 1973), so the two methods must agree on zero.
     const fundamental = 0.6 * scale;
-    const weights = [{ order: 5, weight: 1 }, { order: 7, weight: 1 }];
+    const weights = [
+      { order: 5, weight: 1 },
+      { order: 7, weight: 1 },
+    ];
     const result = optimalPulsePattern({ kind: 'bipolar', vdc, count: 3, fundamental, weights });
     const she = solveShe({ kind: 'bipolar', vdc, count: 3, eliminate: [5, 7], fundamental });
     expect(she.converged).toBe(true);
@@ -100,18 +115,42 @@ describe('optimalPulsePattern', () => {
     const fundamental = 0.8 * 3 * scale;
     const she = solveShe({ kind: 'staircase', vdc, count: 3, eliminate: [5, 7], fundamental });
     expect(she.converged).toBe(true);
-    const result = optimalPulsePattern({ kind: 'staircase', vdc, angles: she.angles, fundamental, maxOrder: 49 });
+    const result = optimalPulsePattern({
+      kind: 'staircase',
+      vdc,
+      angles: she.angles,
+      fundamental,
+      maxOrder: 49,
+    });
     expect(result.converged, result.message).toBe(true);
     const sheWthd = wthd(harmonics(she.waveform, 49));
     expect(result.objective).toBeLessThan(sheWthd);
   });
 
   it('throws RangeError for bad input', () => {
-    expect(() => optimalPulsePattern({ kind: 'bipolar', vdc, count: 3, fundamental: 2 * scale })).toThrow(/fundamental/);
     expect(() =>
-      optimalPulsePattern({ kind: 'bipolar', vdc, count: 3, fundamental: 100, weights: [{ order: 4, weight: 1 }] }),
+      optimalPulsePattern({ kind: 'bipolar', vdc, count: 3, fundamental: 2 * scale }),
+    ).toThrow(/fundamental/);
+    expect(() =>
+      optimalPulsePattern({
+        kind: 'bipolar',
+        vdc,
+        count: 3,
+        fundamental: 100,
+        weights: [{ order: 4, weight: 1 }],
+      }),
     ).toThrow(/weights\[0\]\.order/);
-    expect(() => optimalPulsePattern({ kind: 'bipolar', vdc, count: 3, fundamental: 100, maxOrder: 2 })).toThrow(/maxOrder/);
-    expect(() => optimalPulsePattern({ kind: 'bipolar', vdc, count: 3, fundamental: 100, objective: 'peak' as never })).toThrow(/objective/);
+    expect(() =>
+      optimalPulsePattern({ kind: 'bipolar', vdc, count: 3, fundamental: 100, maxOrder: 2 }),
+    ).toThrow(/maxOrder/);
+    expect(() =>
+      optimalPulsePattern({
+        kind: 'bipolar',
+        vdc,
+        count: 3,
+        fundamental: 100,
+        objective: 'peak' as never,
+      }),
+    ).toThrow(/objective/);
   });
 });

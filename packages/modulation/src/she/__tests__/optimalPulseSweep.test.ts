@@ -23,11 +23,18 @@ describe('optimalPulseSweep', () => {
       if (point === undefined) continue;
       // Fundamental met and objective equal to the exact spectrum's WTHD (Holmes and Lipo, 2003, ch. 3).
       const spectrum = harmonics(sheWaveform(point.angles, { kind: 'bipolar', vdc }), 59);
-      assertInDelta(spectrum[1]?.amplitude ?? NaN, point.fundamental, 1e-9 * point.fundamental, 'V₁');
+      assertInDelta(
+        spectrum[1]?.amplitude ?? NaN,
+        point.fundamental,
+        1e-9 * point.fundamental,
+        'V₁',
+      );
       assertInDelta(point.objective, wthd(spectrum), 1e-12, 'WTHD');
       const before = result.points[i - 1];
       if (before !== undefined && point.continued) {
-        const jump = Math.max(...point.angles.map((a, k) => Math.abs(a - (before.angles[k] as number))));
+        const jump = Math.max(
+          ...point.angles.map((a, k) => Math.abs(a - (before.angles[k] as number))),
+        );
         expect(jump).toBeLessThan(0.1);
       }
     }

@@ -54,9 +54,12 @@ describe('sheSweep', () => {
     }
     // Every grid point with S in (0.87, 1.49) ∪ (1.51, 1.7) is solved.
     const solvedAt = new Set(
-      result.branches.flatMap((b) => b.points.filter((p) => p.converged).map((p) => Math.round((100 * p.fundamental) / scale))),
+      result.branches.flatMap((b) =>
+        b.points.filter((p) => p.converged).map((p) => Math.round((100 * p.fundamental) / scale)),
+      ),
     );
-    for (let s = 87; s <= 170; s++) if (s !== 150) expect(solvedAt.has(s), `S = ${s / 100}`).toBe(true);
+    for (let s = 87; s <= 170; s++)
+      if (s !== 150) expect(solvedAt.has(s), `S = ${s / 100}`).toBe(true);
   });
 
   it('bipolar, 5 angles: every point checked on the exact spectrum, branches continuous', () => {
@@ -77,18 +80,36 @@ describe('sheSweep', () => {
       for (const point of branch.points.filter((p) => p.converged)) {
         // Residual criterion of docs/references.md on the library's exact spectrum (Patel and Hoft, 1973).
         const spectrum = harmonics(sheWaveform(point.angles, { kind: 'bipolar', vdc }), 13);
-        assertInDelta(spectrum[1]?.amplitude ?? NaN, point.fundamental, 1e-9 * point.fundamental, 'V₁');
-        for (const n of [5, 7, 11, 13]) expect(spectrum[n]?.amplitude ?? NaN).toBeLessThan(1e-9 * point.fundamental);
+        assertInDelta(
+          spectrum[1]?.amplitude ?? NaN,
+          point.fundamental,
+          1e-9 * point.fundamental,
+          'V₁',
+        );
+        for (const n of [5, 7, 11, 13])
+          expect(spectrum[n]?.amplitude ?? NaN).toBeLessThan(1e-9 * point.fundamental);
       }
     }
   });
 
   it('rejects a range outside the achievable fundamentals', () => {
     expect(() =>
-      sheSweep({ kind: 'bipolar', vdc: 100, count: 3, eliminate: [5, 7], fundamentals: { from: 10, to: 130, points: 5 } }),
+      sheSweep({
+        kind: 'bipolar',
+        vdc: 100,
+        count: 3,
+        eliminate: [5, 7],
+        fundamentals: { from: 10, to: 130, points: 5 },
+      }),
     ).toThrow(/fundamentals\.to/);
     expect(() =>
-      sheSweep({ kind: 'bipolar', vdc: 100, count: 3, eliminate: [5, 7], fundamentals: { from: 10, to: 100, points: 0 } }),
+      sheSweep({
+        kind: 'bipolar',
+        vdc: 100,
+        count: 3,
+        eliminate: [5, 7],
+        fundamentals: { from: 10, to: 100, points: 0 },
+      }),
     ).toThrow(/fundamentals\.points/);
   });
 });

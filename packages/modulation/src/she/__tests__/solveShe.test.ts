@@ -59,7 +59,13 @@ describe('solveShe closed cases', () => {
     // b = a + π/3 (a < π/6), on which cos a + cos b = √3·cos((b − a)/2) resp. √3·cos(a + π/6)
     // (pen and paper, sum-to-product). At S = cos a + cos b = 1.2 only the second exists.
     const S = 1.2;
-    const result = solveShe({ kind: 'staircase', vdc, count: 2, eliminate: [3], fundamental: S * ((4 * vdc) / Math.PI) });
+    const result = solveShe({
+      kind: 'staircase',
+      vdc,
+      count: 2,
+      eliminate: [3],
+      fundamental: S * ((4 * vdc) / Math.PI),
+    });
     expectSolved(result, S * ((4 * vdc) / Math.PI));
     assertInDelta(result.angles[0] ?? NaN, Math.acos(S / Math.sqrt(3)) - Math.PI / 6, 1e-10, 'a');
     assertInDelta(result.angles[1] ?? NaN, Math.acos(S / Math.sqrt(3)) + Math.PI / 6, 1e-10, 'b');
@@ -67,7 +73,13 @@ describe('solveShe closed cases', () => {
 
   it('says plainly when no solution exists, without throwing', () => {
     // Same families: cos a + cos b > √3/2 on both, so S = 0.5 has no solution (pen and paper).
-    const result = solveShe({ kind: 'staircase', vdc, count: 2, eliminate: [3], fundamental: 0.5 * ((4 * vdc) / Math.PI) });
+    const result = solveShe({
+      kind: 'staircase',
+      vdc,
+      count: 2,
+      eliminate: [3],
+      fundamental: 0.5 * ((4 * vdc) / Math.PI),
+    });
     expect(result.converged).toBe(false);
     expect(result.message).toMatch(/No solution found from 24 start/);
     expect(result.starts).toBe(24);
@@ -79,7 +91,13 @@ describe('solveShe on larger patterns', () => {
   const scale = (4 * vdc) / Math.PI;
 
   it('bipolar, 5 angles, eliminating 5, 7, 11, 13 at 0.8 of the square-wave fundamental', () => {
-    const result = solveShe({ kind: 'bipolar', vdc, count: 5, eliminate: [5, 7, 11, 13], fundamental: 0.8 * scale });
+    const result = solveShe({
+      kind: 'bipolar',
+      vdc,
+      count: 5,
+      eliminate: [5, 7, 11, 13],
+      fundamental: 0.8 * scale,
+    });
     expectSolved(result, 0.8 * scale);
     // Half-wave symmetry: no even harmonics and no DC (fact of the trade).
     harmonics(result.waveform, 12)
@@ -101,7 +119,13 @@ describe('solveShe on larger patterns', () => {
   });
 
   it('bipolar, 7 angles, eliminating the non-triplen orders up to 19', () => {
-    const result = solveShe({ kind: 'bipolar', vdc, count: 7, eliminate: [5, 7, 11, 13, 17, 19], fundamental: 0.5 * scale });
+    const result = solveShe({
+      kind: 'bipolar',
+      vdc,
+      count: 7,
+      eliminate: [5, 7, 11, 13, 17, 19],
+      fundamental: 0.5 * scale,
+    });
     expectSolved(result, 0.5 * scale);
   });
 });
@@ -115,8 +139,12 @@ describe('solveShe input checks', () => {
     expect(() => solveShe({ ...base, eliminate: [5] })).toThrow(/eliminate\.length/);
     expect(() => solveShe({ ...base, fundamental: 200 })).toThrow(/fundamental must be .*< 127\.3/);
     expect(() => solveShe({ ...base, fundamental: -1 })).toThrow(RangeError);
-    expect(() => solveShe({ ...base, count: undefined, angles: [0.3, 0.2, 0.9] })).toThrow(/angles\[1\]/);
-    expect(() => solveShe({ ...base, count: undefined, angles: [0.3, 0.5, 1.6] })).toThrow(/angles\[2\]/);
+    expect(() => solveShe({ ...base, count: undefined, angles: [0.3, 0.2, 0.9] })).toThrow(
+      /angles\[1\]/,
+    );
+    expect(() => solveShe({ ...base, count: undefined, angles: [0.3, 0.5, 1.6] })).toThrow(
+      /angles\[2\]/,
+    );
     expect(() => solveShe({ ...base, vdc: 0 })).toThrow(/vdc/);
     expect(() => solveShe({ ...base, kind: 'square' as never })).toThrow(/kind/);
     expect(() => solveShe({ ...base, count: 2.5 })).toThrow(/count/);

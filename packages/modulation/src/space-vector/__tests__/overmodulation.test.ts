@@ -20,7 +20,11 @@ const TAU = 2 * Math.PI;
  * `steps` commanded angles: the in-phase component mean of m'·cos(θ' − θ) (Fourier
  * coefficient of a vector signal). Independent of the library's closed forms and quadrature.
  */
-function trajectoryFundamental(m: number, options: OvermodulationSettingOptions, steps = 72_000): number {
+function trajectoryFundamental(
+  m: number,
+  options: OvermodulationSettingOptions,
+  steps = 72_000,
+): number {
   const setting = overmodulationSetting(m, options);
   let sum = 0;
   for (let k = 0; k < steps; k++) {
@@ -74,7 +78,9 @@ describe('overmodulation (Holtz, Lotzkat, Khambadkone, IEEE Trans. Power Electro
     expect(shaped.mode).toBe('overmodulation-ii');
     assertInDelta(spaceVector(shaped).t0, 0, 1e-12);
     expect(() => overmodulatedReference({ m: 1.2, theta: 0 })).toThrow(/^m must be/);
-    expect(() => overmodulatedReference({ m: 1, theta: 0 }, { method: 'x' as never })).toThrow(/^method must be/);
+    expect(() => overmodulatedReference({ m: 1, theta: 0 }, { method: 'x' as never })).toThrow(
+      /^method must be/,
+    );
   });
 });
 
@@ -115,7 +121,11 @@ describe('overmodulationGainCurve', () => {
   });
 
   it('names bad sweep options', () => {
-    expect(() => overmodulationGainCurve({ vdc: 1, frequencyRatio: 12, points: 1 })).toThrow(/^points must be/);
-    expect(() => overmodulationGainCurve({ vdc: 1, frequencyRatio: 12, mStart: 2 })).toThrow(/^mStart must be/);
+    expect(() => overmodulationGainCurve({ vdc: 1, frequencyRatio: 12, points: 1 })).toThrow(
+      /^points must be/,
+    );
+    expect(() => overmodulationGainCurve({ vdc: 1, frequencyRatio: 12, mStart: 2 })).toThrow(
+      /^mStart must be/,
+    );
   });
 });

@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { spaceVectorSequence, spaceVectorWaveforms, SIX_STEP_M, ZERO_VECTOR_CLAMPINGS } from '../index.js';
+import {
+  spaceVectorSequence,
+  spaceVectorWaveforms,
+  SIX_STEP_M,
+  ZERO_VECTOR_CLAMPINGS,
+} from '../index.js';
 import type { SpaceVectorSampling, SwitchingState, ZeroVectorClamping } from '../index.js';
 import { harmonics } from '../../spectrum/harmonics.js';
 import { threePhase } from '../../three-phase/threePhase.js';
@@ -25,7 +30,10 @@ const HALF_WAVE_CLAMPINGS: readonly ZeroVectorClamping[] = ['dpwm0', 'dpwm1', 'd
 
 /** The waveform delayed by `shift` radians, w(θ − shift), levels scaled by `sign`. */
 function delayed({ edges, levels }: Waveform, shift: number, sign = 1): Waveform {
-  const moved = edges.map((e, i) => ({ e: (((e + shift) % TAU) + TAU) % TAU, l: sign * (levels[i] as number) + 0 }));
+  const moved = edges.map((e, i) => ({
+    e: (((e + shift) % TAU) + TAU) % TAU,
+    l: sign * (levels[i] as number) + 0,
+  }));
   moved.sort((x, y) => x.e - y.e);
   return { edges: moved.map((m) => m.e), levels: moved.map((m) => m.l) };
 }
@@ -35,16 +43,23 @@ function expectSameWaveform(actual: Waveform, expected: Waveform, label: string)
   actual.edges.forEach((e, i) => {
     // Edges built from samples 2π/3 or π apart agree to rounding of the dwell times (~1e-15).
     assertInDelta(e, expected.edges[i] as number, 1e-12, `${label} edge ${i}`);
-    expect((actual.levels[i] as number) + 0, `${label} level ${i}`).toBe((expected.levels[i] as number) + 0);
+    expect((actual.levels[i] as number) + 0, `${label} level ${i}`).toBe(
+      (expected.levels[i] as number) + 0,
+    );
   });
 }
 
 /** Largest amplitude among orders 1 < n ≤ maxOrder that `select` picks, over the fundamental. */
-function worstRelative(waveform: Waveform, maxOrder: number, select: (order: number) => boolean): number {
+function worstRelative(
+  waveform: Waveform,
+  maxOrder: number,
+  select: (order: number) => boolean,
+): number {
   const spectrum = harmonics(waveform, maxOrder);
   const first = spectrum[1]?.amplitude ?? NaN;
   let worst = 0;
-  for (const { order, amplitude } of spectrum) if (order > 1 && select(order)) worst = Math.max(worst, amplitude / first);
+  for (const { order, amplitude } of spectrum)
+    if (order > 1 && select(order)) worst = Math.max(worst, amplitude / first);
   return worst;
 }
 
@@ -65,7 +80,14 @@ describe('five-segment DPWM0–3 at ratios that sample the π/6 grid', () => {
         for (const m of INDICES) {
           for (const frequencyRatio of ON_GRID) {
             const label = `${clamping} ${sampling} m=${m.toFixed(4)} N=${frequencyRatio}`;
-            const w = spaceVectorWaveforms({ m, vdc, frequencyRatio, sequence: 'five-segment', clamping, sampling });
+            const w = spaceVectorWaveforms({
+              m,
+              vdc,
+              frequencyRatio,
+              sequence: 'five-segment',
+              clamping,
+              sampling,
+            });
             expectSameWaveform(w.b, delayed(w.a, TAU / 3), `${label} b`);
             expectSameWaveform(w.c, delayed(w.a, (2 * TAU) / 3), `${label} c`);
             expectSameWaveform(w.a, delayed(w.a, Math.PI, -1), `${label} a half-wave`);
@@ -98,7 +120,10 @@ describe('every five-segment clamping and the seven-segment sequence: three-phas
             const w = spaceVectorWaveforms({ m, vdc, frequencyRatio, sampling, ...options });
             expectSameWaveform(w.b, delayed(w.a, TAU / 3), `${label} b`);
             expectSameWaveform(w.c, delayed(w.a, (2 * TAU) / 3), `${label} c`);
-            expect(worstRelative(w.ab, 4 * frequencyRatio, isTriplen), `${label} triplens`).toBeLessThan(1e-9);
+            expect(
+              worstRelative(w.ab, 4 * frequencyRatio, isTriplen),
+              `${label} triplens`,
+            ).toBeLessThan(1e-9);
           }
         }
       });
@@ -110,8 +135,17 @@ describe('every five-segment clamping and the seven-segment sequence: three-phas
     // is not vacuous): at least 1e-4 of the fundamental here.
     for (const frequencyRatio of [7, 10, 20, 25]) {
       for (const clamping of ZERO_VECTOR_CLAMPINGS) {
-        const w = spaceVectorWaveforms({ m: 0.8, vdc, frequencyRatio, sequence: 'five-segment', clamping });
-        expect(worstRelative(w.ab, 4 * frequencyRatio, isTriplen), `${clamping} N=${frequencyRatio}`).toBeGreaterThan(1e-4);
+        const w = spaceVectorWaveforms({
+          m: 0.8,
+          vdc,
+          frequencyRatio,
+          sequence: 'five-segment',
+          clamping,
+        });
+        expect(
+          worstRelative(w.ab, 4 * frequencyRatio, isTriplen),
+          `${clamping} N=${frequencyRatio}`,
+        ).toBeGreaterThan(1e-4);
       }
     }
   });
@@ -165,7 +199,8 @@ describe('where even harmonics are inherent', () => {
 describe('spaceVectorSequence on the π/6 grid: one rule however the angle was computed', () => {
   /** The state with the legs rotated a → b → c (the state of the vector 2π/3 further on). */
   const rotated = (s: SwitchingState): string => `${s[2]}${s[0]}${s[1]}`;
-  const complement = (s: SwitchingState): string => [...s].map((bit) => (bit === '1' ? '0' : '1')).join('');
+  const complement = (s: SwitchingState): string =>
+    [...s].map((bit) => (bit === '1' ? '0' : '1')).join('');
 
   // The same grid angles computed several ways, as a sampler might: they differ by ulps.
   const representations = (k: number): number[] => [

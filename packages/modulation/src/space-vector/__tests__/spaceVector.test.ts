@@ -79,10 +79,14 @@ describe('spaceVector dwell times', () => {
     const vertex = spaceVector({ m: HEXAGON_VERTEX_M, theta: 0 });
     assertInDelta(vertex.t1, 1, 1e-15);
     expect(() => spaceVector({ m: 1.01, theta: Math.PI / 6 })).toThrow(ParameterRangeError);
-    expect(() => spaceVector({ m: 1.01, theta: Math.PI / 6 })).toThrow(/^m must be .*overmodulatedReference/);
+    expect(() => spaceVector({ m: 1.01, theta: Math.PI / 6 })).toThrow(
+      /^m must be .*overmodulatedReference/,
+    );
     expect(() => spaceVector({ m: -0.1, theta: 0 })).toThrow(/^m must be/);
     expect(() => spaceVector({ m: Number.NaN, theta: 0 })).toThrow(RangeError);
-    expect(() => spaceVector({ m: 0.5, theta: Number.POSITIVE_INFINITY })).toThrow(/^theta must be/);
+    expect(() => spaceVector({ m: 0.5, theta: Number.POSITIVE_INFINITY })).toThrow(
+      /^theta must be/,
+    );
     expect(() => spaceVector({ m: '0.5', theta: 0 } as never)).toThrow(TypeError);
     expect(() => spaceVector(null as never)).toThrow(/^reference must be/);
   });

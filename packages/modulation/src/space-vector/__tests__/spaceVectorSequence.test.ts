@@ -30,7 +30,9 @@ describe('spaceVectorSequence', () => {
         const v = references(m, gamma);
         const v0 = -(Math.max(...v) + Math.min(...v)) / 2;
         const got = duties(spaceVectorSequence({ m, theta: gamma }).duties);
-        v.forEach((vx, leg) => assertInDelta(got[leg] as number, 0.5 + vx + v0, 1e-14, `leg ${leg}`));
+        v.forEach((vx, leg) =>
+          assertInDelta(got[leg] as number, 0.5 + vx + v0, 1e-14, `leg ${leg}`),
+        );
       }
     }
   });
@@ -82,7 +84,10 @@ describe('spaceVectorSequence', () => {
     // high, dpwm1 the phase of largest |reference| to its sign's rail; dpwm2 clamps phase a
     // high for γ in (0, π/3) (60° after its peak), dpwm0 for γ in (−π/3, 0) (60° before).
     const clamped = (clamping: ZeroVectorClamping, gamma: number) => {
-      const d = duties(spaceVectorSequence({ m: 0.6, theta: gamma }, { sequence: 'five-segment', clamping }).duties);
+      const d = duties(
+        spaceVectorSequence({ m: 0.6, theta: gamma }, { sequence: 'five-segment', clamping })
+          .duties,
+      );
       // A clamped leg's duty is a sum of durations: 0 or 1 up to rounding.
       const legs = d
         .map((x, leg) => ({ x: Math.round(x), leg, off: Math.abs(x - Math.round(x)) }))
@@ -120,7 +125,11 @@ describe('spaceVectorSequence', () => {
         (m, theta, zeroSplit, sequence, clamping) => {
           const result = spaceVectorSequence({ m, theta }, { sequence, zeroSplit, clamping });
           expect(Math.min(...result.durations)).toBeGreaterThanOrEqual(0);
-          assertInDelta(result.durations.reduce((s, d) => s + d, 0), 1, 1e-15);
+          assertInDelta(
+            result.durations.reduce((s, d) => s + d, 0),
+            1,
+            1e-15,
+          );
           for (const d of duties(result.duties)) {
             expect(d).toBeGreaterThanOrEqual(0);
             expect(d).toBeLessThanOrEqual(1 + 1e-15);
@@ -133,8 +142,12 @@ describe('spaceVectorSequence', () => {
 
   it('names the bad option', () => {
     const reference = { m: 0.5, theta: 1 };
-    expect(() => spaceVectorSequence(reference, { sequence: 'nine' as never })).toThrow(/^sequence must be/);
+    expect(() => spaceVectorSequence(reference, { sequence: 'nine' as never })).toThrow(
+      /^sequence must be/,
+    );
     expect(() => spaceVectorSequence(reference, { zeroSplit: 1.5 })).toThrow(/^zeroSplit must be/);
-    expect(() => spaceVectorSequence(reference, { clamping: 'x' as never })).toThrow(/^clamping must be/);
+    expect(() => spaceVectorSequence(reference, { clamping: 'x' as never })).toThrow(
+      /^clamping must be/,
+    );
   });
 });

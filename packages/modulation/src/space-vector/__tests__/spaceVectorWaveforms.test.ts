@@ -43,7 +43,14 @@ describe('spaceVectorWaveforms: volt-second balance', () => {
     { m: 0.9, vdc, frequencyRatio: 9 },
     { m: 0.45, vdc, frequencyRatio: 24, sampling: 'asymmetric' },
     { m: 1, vdc, frequencyRatio: 15, sequence: 'five-segment', clamping: 'dpwm1' },
-    { m: 0.7, vdc, frequencyRatio: 7.5, sequence: 'five-segment', clamping: 'dpwm2', sampling: 'asymmetric' },
+    {
+      m: 0.7,
+      vdc,
+      frequencyRatio: 7.5,
+      sequence: 'five-segment',
+      clamping: 'dpwm2',
+      sampling: 'asymmetric',
+    },
     { m: 0.8, vdc, frequencyRatio: 10.25, zeroSplit: 0.3 },
     { ma: 0.6, vdc, frequencyRatio: 21 },
   ];
@@ -68,10 +75,14 @@ describe('spaceVectorWaveforms: levels, fundamental, frequency ratio', () => {
   it('switches legs between ±vdc/2 and line voltages among 0, ±vdc', () => {
     // Two-level leg (definition); line-to-line = difference of two legs.
     const { a, b, c, ab, bc, ca, an } = spaceVectorWaveforms({ m: 0.8, vdc, frequencyRatio: 12 });
-    for (const leg of [a, b, c]) for (const level of leg.levels) expect(Math.abs(level)).toBe(vdc / 2);
-    for (const line of [ab, bc, ca]) for (const level of line.levels) expect([0, vdc]).toContain(Math.abs(level));
+    for (const leg of [a, b, c])
+      for (const level of leg.levels) expect(Math.abs(level)).toBe(vdc / 2);
+    for (const line of [ab, bc, ca])
+      for (const level of line.levels) expect([0, vdc]).toContain(Math.abs(level));
     for (const level of an.levels) {
-      expect([0, vdc / 3, (2 * vdc) / 3].some((x) => Math.abs(Math.abs(level) - x) < 1e-9)).toBe(true);
+      expect([0, vdc / 3, (2 * vdc) / 3].some((x) => Math.abs(Math.abs(level) - x) < 1e-9)).toBe(
+        true,
+      );
     }
     // Seven-segment: each leg switches twice per switching period (Holmes and Lipo ch. 5).
     expect(a.edges.length).toBe(2 * 12);
@@ -107,12 +118,20 @@ describe('spaceVectorWaveforms: levels, fundamental, frequency ratio', () => {
   });
 
   it('refuses bad input, naming the field', () => {
-    expect(() => spaceVectorWaveforms({ m: 0.5, vdc, frequencyRatio: Math.PI })).toThrow(/^frequencyRatio must be/);
-    expect(() => spaceVectorWaveforms({ m: 0.5, vdc, frequencyRatio: 0.5 })).toThrow(/^frequencyRatio must be/);
+    expect(() => spaceVectorWaveforms({ m: 0.5, vdc, frequencyRatio: Math.PI })).toThrow(
+      /^frequencyRatio must be/,
+    );
+    expect(() => spaceVectorWaveforms({ m: 0.5, vdc, frequencyRatio: 0.5 })).toThrow(
+      /^frequencyRatio must be/,
+    );
     expect(() => spaceVectorWaveforms({ m: 1.2, vdc, frequencyRatio: 12 })).toThrow(/^m must be/);
-    expect(() => spaceVectorWaveforms({ m: 0.5, ma: 0.5, vdc, frequencyRatio: 12 })).toThrow(/^ma must be/);
+    expect(() => spaceVectorWaveforms({ m: 0.5, ma: 0.5, vdc, frequencyRatio: 12 })).toThrow(
+      /^ma must be/,
+    );
     expect(() => spaceVectorWaveforms({ vdc, frequencyRatio: 12 })).toThrow(/^m must be/);
-    expect(() => spaceVectorWaveforms({ m: 0.5, vdc: 0, frequencyRatio: 12 })).toThrow(/^vdc must be/);
+    expect(() => spaceVectorWaveforms({ m: 0.5, vdc: 0, frequencyRatio: 12 })).toThrow(
+      /^vdc must be/,
+    );
     expect(() =>
       spaceVectorWaveforms({ m: 0.5, vdc, frequencyRatio: 12, sampling: 'natural' as never }),
     ).toThrow(/^sampling must be/);

@@ -16,7 +16,10 @@ describe('carrierGroupOf', () => {
 
   it('labels a whole spectrum and the strongest sidebands sit where the theory puts them', () => {
     const mf = 33;
-    const spectrum = labelHarmonics(harmonics(sineTriangle({ scheme: 'bipolar', ma: 0.8, mf, vdc: 1 }), 3 * mf), mf);
+    const spectrum = labelHarmonics(
+      harmonics(sineTriangle({ scheme: 'bipolar', ma: 0.8, mf, vdc: 1 }), 3 * mf),
+      mf,
+    );
     // Bipolar PWM: carrier group 1 is strongest at n = 0, group 2 at n = ±1 (m + n odd).
     const strongestIn = (group: number) =>
       spectrum.filter((h) => h.carrierGroup === group).sort((a, b) => b.amplitude - a.amplitude)[0];

@@ -23,7 +23,11 @@ describe('quasi-square waves', () => {
     for (const halfWidth of [0.3, Math.PI / 3, 1.2]) {
       for (const { order, amplitude } of harmonics(quasiSquare(volts, halfWidth), 301)) {
         if (order === 0) continue;
-        const expected = Math.abs(((4 * volts) / (order * Math.PI)) * Math.sin((order * Math.PI) / 2) * Math.sin(order * halfWidth));
+        const expected = Math.abs(
+          ((4 * volts) / (order * Math.PI)) *
+            Math.sin((order * Math.PI) / 2) *
+            Math.sin(order * halfWidth),
+        );
         assertInDelta(amplitude, expected, 1e-10 * volts, `β = ${halfWidth}, order ${order}`);
       }
     }
@@ -44,6 +48,10 @@ describe('quasi-square waves', () => {
   });
 
   it('have the mean square 2βV²/π', () => {
-    assertInDelta(waveformMeanSquare(quasiSquare(volts, 0.7)), (2 * 0.7 * volts ** 2) / Math.PI, 1e-9 * volts ** 2);
+    assertInDelta(
+      waveformMeanSquare(quasiSquare(volts, 0.7)),
+      (2 * 0.7 * volts ** 2) / Math.PI,
+      1e-9 * volts ** 2,
+    );
   });
 });

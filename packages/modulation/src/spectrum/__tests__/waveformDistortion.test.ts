@@ -23,7 +23,10 @@ describe('waveformThd and waveformWthd: exact over the whole waveform', () => {
   it('six-step line-to-line voltage: THD ≈ 31.08 % (docs/references.md, standard Fourier analysis)', () => {
     // 120° blocks of +V and −V separated by 60° of zero; its harmonics are 6k ± 1 with V_n = V_1/n,
     // so THD² = Σ_{n = 6k±1 ≥ 5} 1/n² = π²/9 − 1 (closed form of the series, from memory).
-    const sixStep: Waveform = { edges: [Math.PI / 6, (5 * Math.PI) / 6, (7 * Math.PI) / 6, (11 * Math.PI) / 6], levels: [1, 0, -1, 0] };
+    const sixStep: Waveform = {
+      edges: [Math.PI / 6, (5 * Math.PI) / 6, (7 * Math.PI) / 6, (11 * Math.PI) / 6],
+      levels: [1, 0, -1, 0],
+    };
     assertInDelta(waveformThd(sixStep), Math.sqrt(Math.PI ** 2 / 9 - 1), 1e-14, 'THD');
     assertInDelta(waveformThd(sixStep), 0.3108, 5e-5, 'THD, docs/references.md');
   });
@@ -32,11 +35,18 @@ describe('waveformThd and waveformWthd: exact over the whole waveform', () => {
     // For a piecewise-constant v with jumps J_k, |V_n| ≤ Σ|J_k|/(nπ) (integrate by parts), so the
     // mean square above order N is at most (ΣJ)²/(2π²)·Σ_{n>N} 1/n² < (ΣJ)²/(2π²N).
     const waveformArbitrary = fc
-      .uniqueArray(fc.double({ min: 0.001, max: TAU - 0.001, noNaN: true }), { minLength: 2, maxLength: 24, selector: (x) => Math.round(x * 1e6) })
+      .uniqueArray(fc.double({ min: 0.001, max: TAU - 0.001, noNaN: true }), {
+        minLength: 2,
+        maxLength: 24,
+        selector: (x) => Math.round(x * 1e6),
+      })
       .chain((edges) =>
         fc.record({
           edges: fc.constant([...edges].sort((a, b) => a - b)),
-          levels: fc.array(fc.integer({ min: -3, max: 3 }), { minLength: edges.length, maxLength: edges.length }),
+          levels: fc.array(fc.integer({ min: -3, max: 3 }), {
+            minLength: edges.length,
+            maxLength: edges.length,
+          }),
         }),
       );
     fc.assert(
@@ -45,7 +55,11 @@ describe('waveformThd and waveformWthd: exact over the whole waveform', () => {
         const spectrum = harmonics(waveform, order);
         const fundamental = spectrum[1]?.amplitude ?? 0;
         fc.pre(fundamental > 1e-3);
-        const jumps = waveform.levels.reduce((sum, level, i, all) => sum + Math.abs(level - (all[(i + all.length - 1) % all.length] as number)), 0);
+        const jumps = waveform.levels.reduce(
+          (sum, level, i, all) =>
+            sum + Math.abs(level - (all[(i + all.length - 1) % all.length] as number)),
+          0,
+        );
         const tail = (jumps * jumps) / (2 * Math.PI ** 2 * order);
         const truncated = thd(spectrum) ** 2;
         const exact = waveformThd(waveform) ** 2;
@@ -54,13 +68,17 @@ describe('waveformThd and waveformWthd: exact over the whole waveform', () => {
         expect(exact - truncated).toBeLessThanOrEqual(tail / scale + 1e-12);
         // WTHD's tail falls as 1/n⁴: the sum to 4000 already holds it to ~1e-11 of the bound.
         const weightedTail = tail / (order * order);
-        expect(Math.abs(waveformWthd(waveform) ** 2 - wthd(spectrum) ** 2)).toBeLessThanOrEqual(weightedTail / scale + 1e-10);
+        expect(Math.abs(waveformWthd(waveform) ** 2 - wthd(spectrum) ** 2)).toBeLessThanOrEqual(
+          weightedTail / scale + 1e-10,
+        );
       }),
       { numRuns: 60, seed: 20261202 },
     );
   });
 
   it('refuses a waveform without a fundamental, naming it', () => {
-    expect(() => waveformThd({ edges: [0], levels: [1] })).toThrow(/waveform must be a waveform whose fundamental/);
+    expect(() => waveformThd({ edges: [0], levels: [1] })).toThrow(
+      /waveform must be a waveform whose fundamental/,
+    );
   });
 });

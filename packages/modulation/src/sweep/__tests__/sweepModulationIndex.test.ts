@@ -29,7 +29,11 @@ describe('sweepModulationIndex', () => {
     const truncated = thd(harmonics(waveform, 50 * mf));
     expect(sweep.thd[40] ?? NaN).toBeGreaterThan(truncated);
     expect((sweep.thd[40] ?? NaN) - truncated).toBeLessThan(0.02 * truncated);
-    assertInDelta(sweep.harmonics[0]?.amplitude[40] ?? NaN, harmonics(waveform, mf)[mf]?.amplitude ?? NaN, 1e-12);
+    assertInDelta(
+      sweep.harmonics[0]?.amplitude[40] ?? NaN,
+      harmonics(waveform, mf)[mf]?.amplitude ?? NaN,
+      1e-12,
+    );
   });
 
   it('follows fundamental = ma·vdc up to ma = 1 and saturates past it (common practice)', () => {
@@ -45,8 +49,14 @@ describe('sweepModulationIndex', () => {
   });
 
   it('rejects bad ranges naming the field', () => {
-    expect(() => sweepModulationIndex(waveformAt, { from: 1, to: 0.5, maxOrder: 10 })).toThrow(/to must be/);
-    expect(() => sweepModulationIndex(waveformAt, { points: 1, maxOrder: 10 })).toThrow(/points must be an integer ≥ 2/);
-    expect(() => sweepModulationIndex(waveformAt, { maxOrder: 10, orders: [11] })).toThrow(/orders\[0\]/);
+    expect(() => sweepModulationIndex(waveformAt, { from: 1, to: 0.5, maxOrder: 10 })).toThrow(
+      /to must be/,
+    );
+    expect(() => sweepModulationIndex(waveformAt, { points: 1, maxOrder: 10 })).toThrow(
+      /points must be an integer ≥ 2/,
+    );
+    expect(() => sweepModulationIndex(waveformAt, { maxOrder: 10, orders: [11] })).toThrow(
+      /orders\[0\]/,
+    );
   });
 });

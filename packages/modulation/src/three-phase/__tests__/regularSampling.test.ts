@@ -19,13 +19,7 @@ import { assertInDelta } from '../../testing/assertInDelta.js';
 
 const vdc = 600;
 const REGULAR: readonly CarrierSampling[] = ['regular-symmetric', 'regular-asymmetric'];
-const CLAMPS: readonly ZeroSequence[] = [
-  'dpwm1',
-  'dpwm0',
-  'dpwm2',
-  'dpwm-max',
-  'dpwm-min',
-];
+const CLAMPS: readonly ZeroSequence[] = ['dpwm1', 'dpwm0', 'dpwm2', 'dpwm-max', 'dpwm-min'];
 /** Odd, even, multiples of 3 and of 6, and neither. */
 const RATIOS = [7, 8, 9, 10, 12, 15, 18, 21, 24, 30, 36, 45, 48, 96, 99];
 const THIRTY_DEGREES = Math.PI / 6;
@@ -43,7 +37,12 @@ describe('regular sampling against the definition, half period by half period', 
   // takes the value of the interval that starts there (the documented convention), read 1e-12
   // rad inside it. That moves an edge by at most slope·1e-12·h/2 ≪ 1e-9·h, so the integrals
   // must match to 1e-9·vdc·h; rounding is far below.
-  function expectDefinition(zeroSequence: ZeroSequence, sampling: CarrierSampling, mf: number, ma: number): void {
+  function expectDefinition(
+    zeroSequence: ZeroSequence,
+    sampling: CarrierSampling,
+    mf: number,
+    ma: number,
+  ): void {
     const { legs } = threePhase({ ma, mf, vdc, zeroSequence, sampling });
     const reference = threePhaseReference(0, { ma, zeroSequence });
     const h = Math.PI / mf;
@@ -60,10 +59,20 @@ describe('regular sampling against the definition, half period by half period', 
       const highFrom = rising ? start : start + (1 - f) * h;
       const highTo = rising ? start + f * h : start + h;
       const label = `${zeroSequence} ${sampling} mf=${mf} ma=${ma} half ${j}`;
-      assertInDelta(waveformIntegral(legs.a, highFrom, highTo), (vdc / 2) * (highTo - highFrom), 1e-9 * vdc * h, `${label} high`);
+      assertInDelta(
+        waveformIntegral(legs.a, highFrom, highTo),
+        (vdc / 2) * (highTo - highFrom),
+        1e-9 * vdc * h,
+        `${label} high`,
+      );
       const lowFrom = rising ? highTo : start;
       const lowTo = rising ? start + h : highFrom;
-      assertInDelta(waveformIntegral(legs.a, lowFrom, lowTo), (-vdc / 2) * (lowTo - lowFrom), 1e-9 * vdc * h, `${label} low`);
+      assertInDelta(
+        waveformIntegral(legs.a, lowFrom, lowTo),
+        (-vdc / 2) * (lowTo - lowFrom),
+        1e-9 * vdc * h,
+        `${label} low`,
+      );
     }
   }
 
@@ -83,9 +92,18 @@ describe('clamped legs under regular sampling hold their rail (Holmes and Lipo 2
   // its positive peak at 90° and its negative peak at 270° (lead 30° earlier, lag 30° later),
   // the 120° clamps for 120° round one peak (the ZeroSequence definitions).
   const blocks: Record<string, [number, number, 1 | -1][]> = {
-    'dpwm1': [[60, 120, 1], [240, 300, -1]],
-    'dpwm0': [[30, 90, 1], [210, 270, -1]],
-    'dpwm2': [[90, 150, 1], [270, 330, -1]],
+    dpwm1: [
+      [60, 120, 1],
+      [240, 300, -1],
+    ],
+    dpwm0: [
+      [30, 90, 1],
+      [210, 270, -1],
+    ],
+    dpwm2: [
+      [90, 150, 1],
+      [270, 330, -1],
+    ],
     'dpwm-max': [[30, 150, 1]],
     'dpwm-min': [[210, 330, -1]],
   };
@@ -102,10 +120,18 @@ describe('clamped legs under regular sampling hold their rail (Holmes and Lipo 2
             const from = (fromDegrees * Math.PI) / 180 + period;
             const to = (toDegrees * Math.PI) / 180 - 1e-9;
             const label = `${zeroSequence} ${sampling} mf=${mf} block ${fromDegrees}°`;
-            expect(legs.a.edges.filter((e) => e > from && e < to), label).toEqual([]);
+            expect(
+              legs.a.edges.filter((e) => e > from && e < to),
+              label,
+            ).toEqual([]);
             expect(waveformValueAt(legs.a, (from + to) / 2), label).toBe((rail * vdc) / 2);
             // Fully clamped: the block's volt-seconds are all at the rail.
-            assertInDelta(waveformIntegral(legs.a, from, to), ((rail * vdc) / 2) * (to - from), 1e-9 * vdc, label);
+            assertInDelta(
+              waveformIntegral(legs.a, from, to),
+              ((rail * vdc) / 2) * (to - from),
+              1e-9 * vdc,
+              label,
+            );
           }
         }
       });
@@ -133,7 +159,13 @@ describe('clamped legs under regular sampling hold their rail (Holmes and Lipo 2
  */
 function regularSamplingBound(
   sampling: CarrierSampling,
-  { mf, ma, slopeBound, jumpsPerLeg, jump }: { mf: number; ma: number; slopeBound: number; jumpsPerLeg: number; jump: number },
+  {
+    mf,
+    ma,
+    slopeBound,
+    jumpsPerLeg,
+    jump,
+  }: { mf: number; ma: number; slopeBound: number; jumpsPerLeg: number; jump: number },
 ): number {
   const h = Math.PI / mf;
   const ideal = (SQRT3 * ma * vdc) / 2;
@@ -153,7 +185,8 @@ describe('regular-sampled line-to-line fundamental', () => {
   // The 60° clamps jump by 2 − √3·ma at each of the six 60° boundaries (the offset switches
   // rail where the two candidate phases have equal magnitude √3·ma/2); the others are
   // continuous. Slope bounds as threePhaseReference states them.
-  const jumpsOf = (z: ZeroSequence): number => (z === 'dpwm0' || z === 'dpwm1' || z === 'dpwm2' ? 6 : 0);
+  const jumpsOf = (z: ZeroSequence): number =>
+    z === 'dpwm0' || z === 'dpwm1' || z === 'dpwm2' ? 6 : 0;
   const jump = 2 - SQRT3 * ma;
 
   for (const zeroSequence of ZERO_SEQUENCES) {
@@ -167,7 +200,9 @@ describe('regular-sampled line-to-line fundamental', () => {
             jumpsPerLeg: jumpsOf(zeroSequence),
             jump,
           });
-          const regular = fundamental(threePhase({ ma, mf, vdc, zeroSequence, sampling }).lineToLine.ab);
+          const regular = fundamental(
+            threePhase({ ma, mf, vdc, zeroSequence, sampling }).lineToLine.ab,
+          );
           const label = `${zeroSequence} ${sampling} mf=${mf}`;
           // Ideal: the zero sequence cancels in the line voltage (Holmes and Lipo 2003, ch. 5
           // and 7). Before the fix a clamped sample of exactly +1 after a carrier peak gave a
@@ -188,18 +223,30 @@ describe('regular-sampled line-to-line fundamental', () => {
 
 describe('symmetry of regular-sampled clamps where samples land on the clamp boundaries', () => {
   /** The waveform delayed by `shift` radians: w(θ − shift). */
-  function delayed({ edges, levels }: Waveform, shift: number): { edges: number[]; levels: number[] } {
-    const moved = edges.map((e, i) => ({ e: (((e + shift) % (2 * Math.PI)) + 2 * Math.PI) % (2 * Math.PI), l: levels[i] as number }));
+  function delayed(
+    { edges, levels }: Waveform,
+    shift: number,
+  ): { edges: number[]; levels: number[] } {
+    const moved = edges.map((e, i) => ({
+      e: (((e + shift) % (2 * Math.PI)) + 2 * Math.PI) % (2 * Math.PI),
+      l: levels[i] as number,
+    }));
     moved.sort((x, y) => x.e - y.e);
     return { edges: moved.map((m) => m.e), levels: moved.map((m) => m.l) };
   }
 
-  function expectSameWaveform(actual: Waveform, expected: { edges: number[]; levels: number[] }, label: string): void {
+  function expectSameWaveform(
+    actual: Waveform,
+    expected: { edges: number[]; levels: number[] },
+    label: string,
+  ): void {
     expect(actual.edges.length, label).toBe(expected.edges.length);
     actual.edges.forEach((e, i) => {
       // Edges from samples 2π/3 apart agree to rounding (the sines differ by ulps).
       assertInDelta(e, expected.edges[i] as number, 1e-12, `${label} edge ${i}`);
-      expect((actual.levels[i] as number) + 0, `${label} level ${i}`).toBe((expected.levels[i] as number) + 0);
+      expect((actual.levels[i] as number) + 0, `${label} level ${i}`).toBe(
+        (expected.levels[i] as number) + 0,
+      );
     });
   }
 
@@ -219,7 +266,8 @@ describe('symmetry of regular-sampled clamps where samples land on the clamp bou
           const spectrum = harmonics(lineToLine.ab, 4 * mf);
           const first = spectrum[1]?.amplitude ?? NaN;
           for (const { order, amplitude } of spectrum) {
-            if (order > 0 && order % 3 === 0) assertInDelta(amplitude, 0, 1e-9 * first, `${label} order ${order}`);
+            if (order > 0 && order % 3 === 0)
+              assertInDelta(amplitude, 0, 1e-9 * first, `${label} order ${order}`);
           }
         }
       });
@@ -240,11 +288,16 @@ describe('symmetry of regular-sampled clamps where samples land on the clamp bou
           const { lineToLine } = threePhase({ ma: 0.9, mf, vdc, zeroSequence, sampling });
           const label = `${zeroSequence} ${sampling} mf=${mf}`;
           const mirror = delayed(lineToLine.ab, Math.PI);
-          expectSameWaveform(lineToLine.ab, { edges: mirror.edges, levels: mirror.levels.map((l) => -l) }, label);
+          expectSameWaveform(
+            lineToLine.ab,
+            { edges: mirror.edges, levels: mirror.levels.map((l) => -l) },
+            label,
+          );
           const spectrum = harmonics(lineToLine.ab, 4 * mf);
           const first = spectrum[1]?.amplitude ?? NaN;
           for (const { order, amplitude } of spectrum) {
-            if (order % 2 === 0) assertInDelta(amplitude, 0, 1e-9 * first, `${label} order ${order}`);
+            if (order % 2 === 0)
+              assertInDelta(amplitude, 0, 1e-9 * first, `${label} order ${order}`);
           }
         }
       }

@@ -32,7 +32,12 @@ describe('threePhase line-to-line voltages', () => {
       // fundamental departs by O(1/mf): under 0.5 % here, confirmed by brute force below.
       const continuous = ['none', 'third-harmonic', 'min-max'].includes(zeroSequence);
       const ideal = (SQRT3 * 0.9 * vdc) / 2;
-      assertInDelta(fundamental?.amplitude ?? NaN, ideal, (continuous ? 2e-4 * vdc : 5e-3 * ideal), zeroSequence);
+      assertInDelta(
+        fundamental?.amplitude ?? NaN,
+        ideal,
+        continuous ? 2e-4 * vdc : 5e-3 * ideal,
+        zeroSequence,
+      );
     }
   });
 
@@ -105,7 +110,10 @@ describe('discontinuous clamping', () => {
     const carrierPeriod = (2 * Math.PI) / mf;
     let clamped = 0;
     leg.edges.forEach((start, i) => {
-      const end = i + 1 < leg.edges.length ? (leg.edges[i + 1] as number) : (leg.edges[0] as number) + 2 * Math.PI;
+      const end =
+        i + 1 < leg.edges.length
+          ? (leg.edges[i + 1] as number)
+          : (leg.edges[0] as number) + 2 * Math.PI;
       // A run longer than a carrier period can only be a clamp.
       if (end - start > 1.5 * carrierPeriod) clamped += end - start;
     });
@@ -135,11 +143,18 @@ describe('discontinuous clamping', () => {
     // (Holmes and Lipo 2003, ch. 7; which shift is called which is from memory).
     const mf = 96;
     const carrierPeriod = (2 * Math.PI) / mf;
-    const heldHigh = (zeroSequence: ZeroSequence, fromDegrees: number, toDegrees: number): boolean => {
+    const heldHigh = (
+      zeroSequence: ZeroSequence,
+      fromDegrees: number,
+      toDegrees: number,
+    ): boolean => {
       const { legs } = threePhase({ ma: 0.9, mf, vdc, zeroSequence });
       const from = (fromDegrees * Math.PI) / 180 + carrierPeriod;
       const to = (toDegrees * Math.PI) / 180 - carrierPeriod;
-      return legs.a.edges.every((e) => e <= from || e >= to) && waveformValueAt(legs.a, (from + to) / 2) === vdc / 2;
+      return (
+        legs.a.edges.every((e) => e <= from || e >= to) &&
+        waveformValueAt(legs.a, (from + to) / 2) === vdc / 2
+      );
     };
     expect(heldHigh('dpwm1', 60, 120)).toBe(true);
     expect(heldHigh('dpwm0', 30, 90)).toBe(true);
@@ -150,7 +165,9 @@ describe('discontinuous clamping', () => {
 
   it('dpwm-max holds leg a at +vdc/2 round its positive peak', () => {
     const { legs } = threePhase({ ma: 0.9, mf: 96, vdc, zeroSequence: 'dpwm-max' });
-    const i = legs.a.edges.findIndex((e, k) => e <= Math.PI / 2 && (legs.a.edges[k + 1] ?? 7) > Math.PI / 2);
+    const i = legs.a.edges.findIndex(
+      (e, k) => e <= Math.PI / 2 && (legs.a.edges[k + 1] ?? 7) > Math.PI / 2,
+    );
     expect(legs.a.levels[i]).toBe(vdc / 2);
   });
 
@@ -158,7 +175,9 @@ describe('discontinuous clamping', () => {
     // Sanity of magnitudes (common practice): all methods stay within a factor 1.5 of each other.
     const reference = thd(harmonics(threePhase({ ma: 0.9, mf: 45, vdc }).lineToLine.ab, 2000));
     for (const zeroSequence of ZERO_SEQUENCES) {
-      const value = thd(harmonics(threePhase({ ma: 0.9, mf: 45, vdc, zeroSequence }).lineToLine.ab, 2000));
+      const value = thd(
+        harmonics(threePhase({ ma: 0.9, mf: 45, vdc, zeroSequence }).lineToLine.ab, 2000),
+      );
       expect(value / reference).toBeGreaterThan(1 / 1.5);
       expect(value / reference).toBeLessThan(1.5);
     }

@@ -33,7 +33,12 @@ describe('waveformFromTransitions', () => {
   });
 
   it('makes a constant signal from a single level', () => {
-    expect(waveformFromTransitions([{ angle: 2, level: 3 }, { angle: 5, level: 3 }])).toEqual({ edges: [0], levels: [3] });
+    expect(
+      waveformFromTransitions([
+        { angle: 2, level: 3 },
+        { angle: 5, level: 3 },
+      ]),
+    ).toEqual({ edges: [0], levels: [3] });
   });
 });
 
@@ -44,7 +49,9 @@ describe('waveform arithmetic', () => {
   it('subtracts exactly: the difference of two square waves in quadrature', () => {
     const difference = subtractWaveforms(a, b);
     for (const theta of [0.1, 1.7, 3.3, 5]) {
-      expect(waveformValueAt(difference, theta)).toBe(waveformValueAt(a, theta) - waveformValueAt(b, theta));
+      expect(waveformValueAt(difference, theta)).toBe(
+        waveformValueAt(a, theta) - waveformValueAt(b, theta),
+      );
     }
     expect(waveformMean(difference)).toBeCloseTo(0, 15);
   });
@@ -53,6 +60,9 @@ describe('waveform arithmetic', () => {
     // ∫ over one period of a ±1 square wave is 0; over (0, π/2) it is π/2.
     expect(waveformIntegral(a, 0, Math.PI / 2)).toBeCloseTo(Math.PI / 2, 14);
     expect(waveformIntegral(a, 0.3, 0.3 + 4 * Math.PI)).toBeCloseTo(0, 13);
-    expect(waveformIntegral(a, 7, 7 + Math.PI / 2)).toBeCloseTo(waveformIntegral(a, 7 - 2 * Math.PI, 7 - 1.5 * Math.PI), 13);
+    expect(waveformIntegral(a, 7, 7 + Math.PI / 2)).toBeCloseTo(
+      waveformIntegral(a, 7 - 2 * Math.PI, 7 - 1.5 * Math.PI),
+      13,
+    );
   });
 });

@@ -25,14 +25,36 @@ export function AcceptInvitationPage() {
   const navigate = useNavigate();
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    accept.mutate({ token, name, password }, { onSuccess: () => navigate(paths.studies.getHref(), { replace: true }) });
+    accept.mutate(
+      { token, name, password },
+      { onSuccess: () => navigate(paths.studies.getHref(), { replace: true }) },
+    );
   };
   return (
     <AuthLayout title="Join your team">
       <form onSubmit={submit} className="flex flex-col gap-3" noValidate>
-        <TextField label="Invitation code" value={token} onChange={(e) => setToken(e.target.value)} error={fieldErrorOf(accept.error, 'token')} hint="From the invitation e-mail" />
-        <TextField label="Your name" value={name} onChange={(e) => setName(e.target.value)} error={fieldErrorOf(accept.error, 'name')} />
-        <TextField label="New password" type="password" autoComplete="new-password" value={password} onChange={(e) => setPassword(e.target.value)} error={fieldErrorOf(accept.error, 'password')} hint="At least 10 characters" />
+        <TextField
+          label="Invitation code"
+          value={token}
+          onChange={(e) => setToken(e.target.value)}
+          error={fieldErrorOf(accept.error, 'token')}
+          hint="From the invitation e-mail"
+        />
+        <TextField
+          label="Your name"
+          value={name}
+          onChange={(e) => setName(e.target.value)}
+          error={fieldErrorOf(accept.error, 'name')}
+        />
+        <TextField
+          label="New password"
+          type="password"
+          autoComplete="new-password"
+          value={password}
+          onChange={(e) => setPassword(e.target.value)}
+          error={fieldErrorOf(accept.error, 'password')}
+          hint="At least 10 characters"
+        />
         <GeneralError error={accept.error} fields={['token', 'name', 'password']} />
         <Button type="submit" busy={accept.isPending}>
           Join
@@ -57,7 +79,10 @@ export function ResetPasswordPage() {
       <AuthLayout title="Choose a new password">
         {confirm.isSuccess ? (
           <p className="text-sm">
-            Password changed. <Link className="underline" to={paths.signIn.getHref()}>Sign in</Link>
+            Password changed.{' '}
+            <Link className="underline" to={paths.signIn.getHref()}>
+              Sign in
+            </Link>
           </p>
         ) : (
           <form
@@ -68,7 +93,15 @@ export function ResetPasswordPage() {
               confirm.mutate({ token, password });
             }}
           >
-            <TextField label="New password" type="password" autoComplete="new-password" value={password} onChange={(e) => setPassword(e.target.value)} error={fieldErrorOf(confirm.error, 'password')} hint="At least 10 characters" />
+            <TextField
+              label="New password"
+              type="password"
+              autoComplete="new-password"
+              value={password}
+              onChange={(e) => setPassword(e.target.value)}
+              error={fieldErrorOf(confirm.error, 'password')}
+              hint="At least 10 characters"
+            />
             <GeneralError error={confirm.error} fields={['password']} />
             <Button type="submit" busy={confirm.isPending}>
               Set password
@@ -91,7 +124,13 @@ export function ResetPasswordPage() {
             request.mutate({ email });
           }}
         >
-          <TextField label="E-mail" type="email" value={email} onChange={(e) => setEmail(e.target.value)} error={fieldErrorOf(request.error, 'email')} />
+          <TextField
+            label="E-mail"
+            type="email"
+            value={email}
+            onChange={(e) => setEmail(e.target.value)}
+            error={fieldErrorOf(request.error, 'email')}
+          />
           <GeneralError error={request.error} fields={['email']} />
           <Button type="submit" busy={request.isPending}>
             Send the link

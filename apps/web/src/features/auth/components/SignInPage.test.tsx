@@ -21,7 +21,8 @@ function renderPage() {
   );
 }
 
-const json = (status: number, body: unknown, type = 'application/json') => new Response(JSON.stringify(body), { status, headers: { 'Content-Type': type } });
+const json = (status: number, body: unknown, type = 'application/json') =>
+  new Response(JSON.stringify(body), { status, headers: { 'Content-Type': type } });
 
 afterEach(() => {
   vi.unstubAllGlobals();
@@ -30,7 +31,22 @@ afterEach(() => {
 
 describe('SignInPage', () => {
   it('shows the server field error beside the e-mail field', async () => {
-    vi.stubGlobal('fetch', vi.fn(async () => json(400, { type: 'x', title: 'Bad request', status: 400, detail: 'email is not an e-mail address', errors: [{ path: '/body/email', message: 'email must be an e-mail address' }] }, 'application/problem+json')));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () =>
+        json(
+          400,
+          {
+            type: 'x',
+            title: 'Bad request',
+            status: 400,
+            detail: 'email is not an e-mail address',
+            errors: [{ path: '/body/email', message: 'email must be an e-mail address' }],
+          },
+          'application/problem+json',
+        ),
+      ),
+    );
     renderPage();
     await userEvent.type(screen.getByLabelText('E-mail'), 'nobody');
     await userEvent.type(screen.getByLabelText('Password'), 'x');
@@ -40,7 +56,9 @@ describe('SignInPage', () => {
   });
 
   it('keeps the token and moves on after a good sign-in, with the keyboard only', async () => {
-    const fetch = vi.fn(async () => json(200, { token: 'pws_test_token', expiresAt: '2030-01-01T00:00:00Z' }));
+    const fetch = vi.fn(async () =>
+      json(200, { token: 'pws_test_token', expiresAt: '2030-01-01T00:00:00Z' }),
+    );
     vi.stubGlobal('fetch', fetch);
     renderPage();
     await userEvent.tab();

@@ -39,16 +39,36 @@ export function SignInPage() {
     event.preventDefault();
     login.mutate(
       { email, password },
-      { onSuccess: () => navigate(params.get('redirectTo') || paths.studies.getHref(), { replace: true }) },
+      {
+        onSuccess: () =>
+          navigate(params.get('redirectTo') || paths.studies.getHref(), { replace: true }),
+      },
     );
   };
 
-  const general = login.isError && !fieldErrorOf(login.error, 'email') && !fieldErrorOf(login.error, 'password');
+  const general =
+    login.isError && !fieldErrorOf(login.error, 'email') && !fieldErrorOf(login.error, 'password');
   return (
     <AuthLayout title="Sign in">
       <form onSubmit={submit} className="flex flex-col gap-3" noValidate>
-        <TextField label="E-mail" type="email" autoComplete="username" required value={email} onChange={(e) => setEmail(e.target.value)} error={fieldErrorOf(login.error, 'email')} />
-        <TextField label="Password" type="password" autoComplete="current-password" required value={password} onChange={(e) => setPassword(e.target.value)} error={fieldErrorOf(login.error, 'password')} />
+        <TextField
+          label="E-mail"
+          type="email"
+          autoComplete="username"
+          required
+          value={email}
+          onChange={(e) => setEmail(e.target.value)}
+          error={fieldErrorOf(login.error, 'email')}
+        />
+        <TextField
+          label="Password"
+          type="password"
+          autoComplete="current-password"
+          required
+          value={password}
+          onChange={(e) => setPassword(e.target.value)}
+          error={fieldErrorOf(login.error, 'password')}
+        />
         {general ? (
           <p role="alert" className="text-sm text-bad">
             {errorMessage(login.error)}

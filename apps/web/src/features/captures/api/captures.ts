@@ -10,7 +10,8 @@ export type CaptureWithSeries = Schema<'CaptureWithSeries'>;
 export async function getCaptures(): Promise<Capture[]> {
   return unwrap(await api.GET('/api/v1/captures'));
 }
-export const capturesQueryOptions = () => queryOptions({ queryKey: ['captures', 'list'], queryFn: getCaptures });
+export const capturesQueryOptions = () =>
+  queryOptions({ queryKey: ['captures', 'list'], queryFn: getCaptures });
 export function useCaptures() {
   return useQuery(capturesQueryOptions());
 }
@@ -18,7 +19,12 @@ export function useCaptures() {
 export async function getCapture(id: string): Promise<CaptureWithSeries> {
   return unwrap(await api.GET('/api/v1/captures/{id}', { params: { path: { id } } }));
 }
-export const captureQueryOptions = (id: string) => queryOptions({ queryKey: ['captures', 'one', id], queryFn: () => getCapture(id), staleTime: Infinity });
+export const captureQueryOptions = (id: string) =>
+  queryOptions({
+    queryKey: ['captures', 'one', id],
+    queryFn: () => getCapture(id),
+    staleTime: Infinity,
+  });
 export function useCapture(id: string | null) {
   return useQuery({ ...captureQueryOptions(id ?? ''), enabled: Boolean(id) });
 }
@@ -35,7 +41,12 @@ export interface UploadInput {
  * Uploads a capture as multipart form data with XMLHttpRequest, whose upload events give the
  * progress bar (fetch has no upload progress in most browsers). Same path and auth as the client.
  */
-export function uploadCapture({ file, name, projectId, onProgress }: UploadInput): Promise<Capture> {
+export function uploadCapture({
+  file,
+  name,
+  projectId,
+  onProgress,
+}: UploadInput): Promise<Capture> {
   return new Promise((resolve, reject) => {
     const form = new FormData();
     form.append('file', file);
@@ -63,35 +74,73 @@ export function uploadCapture({ file, name, projectId, onProgress }: UploadInput
         reject(new ApiError(request.status, body as Problem | undefined));
       }
     };
-    request.onerror = () => reject(new Error('The upload failed: the service could not be reached.'));
+    request.onerror = () =>
+      reject(new Error('The upload failed: the service could not be reached.'));
     request.send(form);
   });
 }
 
 export function useUploadCapture() {
   const client = useQueryClient();
-  return useMutation({ mutationFn: uploadCapture, onSuccess: () => client.invalidateQueries({ queryKey: ['captures'] }) });
+  return useMutation({
+    mutationFn: uploadCapture,
+    onSuccess: () => client.invalidateQueries({ queryKey: ['captures'] }),
+  });
 }
 
 export type CaptureSpectrum = Schema<'CaptureSpectrum'>;
 export type CaptureComparison = Schema<'CaptureComparison'>;
 export type FftWindow = 'rectangular' | 'hann' | 'flat-top';
 
-export async function getCaptureSpectrum(id: string, window: FftWindow, maxOrder = 50): Promise<CaptureSpectrum> {
-  return unwrap(await api.POST('/api/v1/captures/{id}/spectrum', { params: { path: { id } }, body: { window, maxOrder } }));
+export async function getCaptureSpectrum(
+  id: string,
+  window: FftWindow,
+  maxOrder = 50,
+): Promise<CaptureSpectrum> {
+  return unwrap(
+    await api.POST('/api/v1/captures/{id}/spectrum', {
+      params: { path: { id } },
+      body: { window, maxOrder },
+    }),
+  );
 }
 /** The windowed FFT the service computes; a read, so a query (keyed by the window). */
 export const captureSpectrumQueryOptions = (id: string, window: FftWindow, maxOrder = 50) =>
-  queryOptions({ queryKey: ['captures', 'spectrum', id, window, maxOrder], queryFn: () => getCaptureSpectrum(id, window, maxOrder), staleTime: Infinity });
+  queryOptions({
+    queryKey: ['captures', 'spectrum', id, window, maxOrder],
+    queryFn: () => getCaptureSpectrum(id, window, maxOrder),
+    staleTime: Infinity,
+  });
 export function useCaptureSpectrum(id: string, window: FftWindow) {
   return useQuery(captureSpectrumQueryOptions(id, window));
 }
 
-export async function getCaptureComparison(id: string, studyId: string, window: FftWindow, maxOrder = 50): Promise<CaptureComparison> {
-  return unwrap(await api.POST('/api/v1/captures/{id}/comparison', { params: { path: { id } }, body: { studyId, window, maxOrder } }));
+export async function getCaptureComparison(
+  id: string,
+  studyId: string,
+  window: FftWindow,
+  maxOrder = 50,
+): Promise<CaptureComparison> {
+  return unwrap(
+    await api.POST('/api/v1/captures/{id}/comparison', {
+      params: { path: { id } },
+      body: { studyId, window, maxOrder },
+    }),
+  );
 }
-export const captureComparisonQueryOptions = (id: string, studyId: string, window: FftWindow, maxOrder = 50) =>
-  queryOptions({ queryKey: ['captures', 'comparison', id, studyId, window, maxOrder], queryFn: () => getCaptureComparison(id, studyId, window, maxOrder) });
+export const captureComparisonQueryOptions = (
+  id: string,
+  studyId: string,
+  window: FftWindow,
+  maxOrder = 50,
+) =>
+  queryOptions({
+    queryKey: ['captures', 'comparison', id, studyId, window, maxOrder],
+    queryFn: () => getCaptureComparison(id, studyId, window, maxOrder),
+  });
 export function useCaptureComparison(id: string, studyId: string | null, window: FftWindow) {
-  return useQuery({ ...captureComparisonQueryOptions(id, studyId ?? '', window), enabled: Boolean(studyId) });
+  return useQuery({
+    ...captureComparisonQueryOptions(id, studyId ?? '', window),
+    enabled: Boolean(studyId),
+  });
 }

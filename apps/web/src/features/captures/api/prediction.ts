@@ -8,7 +8,8 @@ import { api, unwrap } from '../../../lib/api';
 export async function getCaptureStudies(): Promise<Schema<'Study'>[]> {
   return unwrap(await api.GET('/api/v1/studies', { params: { query: { limit: 200 } } }));
 }
-export const captureStudiesQueryOptions = () => queryOptions({ queryKey: ['studies', 'list', '', ''], queryFn: getCaptureStudies });
+export const captureStudiesQueryOptions = () =>
+  queryOptions({ queryKey: ['studies', 'list', '', ''], queryFn: getCaptureStudies });
 export function useCaptureStudies() {
   return useQuery(captureStudiesQueryOptions());
 }

@@ -8,7 +8,16 @@ import { ErrorState, Loading, QueryView } from '../../../components/ui/QueryStat
 import { errorMessage, fieldErrorOf } from '../../../lib/api';
 import { formatDate, formatNumber, formatPercent } from '../../../lib/format';
 import { roleAtLeast, useMe } from '../../../lib/me';
-import { useCapture, useCaptureComparison, useCaptureSpectrum, useCaptures, useUploadCapture, type CaptureComparison, type CaptureWithSeries, type FftWindow } from '../api/captures';
+import {
+  useCapture,
+  useCaptureComparison,
+  useCaptureSpectrum,
+  useCaptures,
+  useUploadCapture,
+  type CaptureComparison,
+  type CaptureWithSeries,
+  type FftWindow,
+} from '../api/captures';
 import { useCaptureStudies } from '../api/prediction';
 
 function UploadForm({ onUploaded }: { onUploaded: (id: string) => void }) {
@@ -38,21 +47,59 @@ function UploadForm({ onUploaded }: { onUploaded: (id: string) => void }) {
     <Panel title="Upload a capture">
       <form onSubmit={submit} className="flex flex-col gap-3" noValidate>
         <div className="flex flex-col gap-1">
-          <label htmlFor="capture-file" className="text-xs font-medium tracking-wide text-ink-soft uppercase">CSV file (time, voltage, optional current; at most 5 MB)</label>
-          <input id="capture-file" ref={input} type="file" accept=".csv,text/csv" onChange={(e) => setFile(e.target.files?.[0] ?? null)} className="text-sm" aria-describedby="capture-file-error" />
-          {fieldErrorOf(upload.error, 'file') ? <p id="capture-file-error" role="alert" className="text-xs text-bad">{fieldErrorOf(upload.error, 'file')}</p> : null}
+          <label
+            htmlFor="capture-file"
+            className="text-xs font-medium tracking-wide text-ink-soft uppercase"
+          >
+            CSV file (time, voltage, optional current; at most 5 MB)
+          </label>
+          <input
+            id="capture-file"
+            ref={input}
+            type="file"
+            accept=".csv,text/csv"
+            onChange={(e) => setFile(e.target.files?.[0] ?? null)}
+            className="text-sm"
+            aria-describedby="capture-file-error"
+          />
+          {fieldErrorOf(upload.error, 'file') ? (
+            <p id="capture-file-error" role="alert" className="text-xs text-bad">
+              {fieldErrorOf(upload.error, 'file')}
+            </p>
+          ) : null}
         </div>
-        <TextField label="Name" value={name} onChange={(e) => setName(e.target.value)} error={fieldErrorOf(upload.error, 'name')} />
+        <TextField
+          label="Name"
+          value={name}
+          onChange={(e) => setName(e.target.value)}
+          error={fieldErrorOf(upload.error, 'name')}
+        />
         {upload.isPending || upload.isSuccess ? (
           <div>
-            <div className="mb-1 flex justify-between text-xs"><span>{upload.isSuccess ? 'Uploaded' : 'Uploading'}</span><span className="num">{percent} %</span></div>
-            <div role="progressbar" aria-label="Upload progress" aria-valuemin={0} aria-valuemax={100} aria-valuenow={percent} className="h-3 overflow-hidden rounded-full bg-rule">
+            <div className="mb-1 flex justify-between text-xs">
+              <span>{upload.isSuccess ? 'Uploaded' : 'Uploading'}</span>
+              <span className="num">{percent} %</span>
+            </div>
+            <div
+              role="progressbar"
+              aria-label="Upload progress"
+              aria-valuemin={0}
+              aria-valuemax={100}
+              aria-valuenow={percent}
+              className="h-3 overflow-hidden rounded-full bg-rule"
+            >
               <div className="h-full bg-signal" style={{ width: `${percent}%` }} />
             </div>
           </div>
         ) : null}
-        {upload.isError && !fieldErrorOf(upload.error, 'file') ? <p role="alert" className="text-sm text-bad">{errorMessage(upload.error)}</p> : null}
-        <Button type="submit" busy={upload.isPending} disabled={!file}>Upload</Button>
+        {upload.isError && !fieldErrorOf(upload.error, 'file') ? (
+          <p role="alert" className="text-sm text-bad">
+            {errorMessage(upload.error)}
+          </p>
+        ) : null}
+        <Button type="submit" busy={upload.isPending} disabled={!file}>
+          Upload
+        </Button>
       </form>
     </Panel>
   );
@@ -66,19 +113,36 @@ export function CapturesPage() {
   const [selected, setSelected] = useState<string | null>(null);
   return (
     <div>
-      <PageHeader title="Bench captures" subtitle="Measured output voltage from the bench, analysed with a windowed FFT and set against a study's prediction." />
+      <PageHeader
+        title="Bench captures"
+        subtitle="Measured output voltage from the bench, analysed with a windowed FFT and set against a study's prediction."
+      />
       <div className="grid gap-5 lg:grid-cols-[320px_minmax(0,1fr)]">
         <div className="flex flex-col gap-4">
-          {canUpload ? <UploadForm onUploaded={setSelected} /> : <Panel><p className="text-sm">Uploading needs the engineer role.</p></Panel>}
+          {canUpload ? (
+            <UploadForm onUploaded={setSelected} />
+          ) : (
+            <Panel>
+              <p className="text-sm">Uploading needs the engineer role.</p>
+            </Panel>
+          )}
           <Panel title="Captures">
             <QueryView query={captures} empty="No captures uploaded yet.">
               {(list) => (
                 <ul className="flex flex-col gap-1 text-sm">
                   {list.map((c) => (
                     <li key={c.id}>
-                      <button type="button" aria-pressed={selected === c.id} className={`w-full rounded px-2 py-1 text-left ${selected === c.id ? 'bg-signal-soft' : 'hover:bg-paper'}`} onClick={() => setSelected(c.id)}>
+                      <button
+                        type="button"
+                        aria-pressed={selected === c.id}
+                        className={`w-full rounded px-2 py-1 text-left ${selected === c.id ? 'bg-signal-soft' : 'hover:bg-paper'}`}
+                        onClick={() => setSelected(c.id)}
+                      >
                         <span className="font-medium">{c.name}</span>
-                        <span className="block text-xs text-ink-soft">{c.rows} rows · {formatNumber(c.sampleRate)} S/s · {formatDate(c.createdAt)}</span>
+                        <span className="block text-xs text-ink-soft">
+                          {c.rows} rows · {formatNumber(c.sampleRate)} S/s ·{' '}
+                          {formatDate(c.createdAt)}
+                        </span>
                       </button>
                     </li>
                   ))}
@@ -87,7 +151,15 @@ export function CapturesPage() {
             </QueryView>
           </Panel>
         </div>
-        <div className="min-w-0">{selected ? <CaptureDetail id={selected} /> : <Panel><p className="text-sm text-ink-soft">Pick or upload a capture.</p></Panel>}</div>
+        <div className="min-w-0">
+          {selected ? (
+            <CaptureDetail id={selected} />
+          ) : (
+            <Panel>
+              <p className="text-sm text-ink-soft">Pick or upload a capture.</p>
+            </Panel>
+          )}
+        </div>
       </div>
     </div>
   );
@@ -96,7 +168,8 @@ export function CapturesPage() {
 function CaptureDetail({ id }: { id: string }) {
   const capture = useCapture(id);
   if (capture.isPending) return <Loading label="Loading the capture…" />;
-  if (capture.isError) return <ErrorState error={capture.error} onRetry={() => capture.refetch()} />;
+  if (capture.isError)
+    return <ErrorState error={capture.error} onRetry={() => capture.refetch()} />;
   return <CaptureAnalysis capture={capture.data} />;
 }
 
@@ -108,47 +181,116 @@ function CaptureAnalysis({ capture }: { capture: CaptureWithSeries }) {
   const spectrum = useCaptureSpectrum(capture.id, windowName);
   const comparison = useCaptureComparison(capture.id, studyId || null, windowName);
   const mf = study ? frequencyRatioOf(study.design) : 0;
-  const label = (bars: { order: number; amplitude: number }[]) => (mf ? labelHarmonics(bars.map((b) => ({ ...b, phase: 0 })), mf) : bars);
+  const label = (bars: { order: number; amplitude: number }[]) =>
+    mf
+      ? labelHarmonics(
+          bars.map((b) => ({ ...b, phase: 0 })),
+          mf,
+        )
+      : bars;
   const series: SpectrumSeries[] = [];
   if (comparison.data) {
-    series.push({ name: `Capture (${windowName} window)`, color: 'var(--color-trace-current)', harmonics: label(comparison.data.orders.map((o) => ({ order: o.order, amplitude: o.measured }))) });
-    series.push({ name: `Prediction: ${study?.name ?? 'study'} (revision ${comparison.data.studyRevision})`, color: 'var(--color-ink)', harmonics: label(comparison.data.orders.map((o) => ({ order: o.order, amplitude: o.predicted }))) });
+    series.push({
+      name: `Capture (${windowName} window)`,
+      color: 'var(--color-trace-current)',
+      harmonics: label(
+        comparison.data.orders.map((o) => ({ order: o.order, amplitude: o.measured })),
+      ),
+    });
+    series.push({
+      name: `Prediction: ${study?.name ?? 'study'} (revision ${comparison.data.studyRevision})`,
+      color: 'var(--color-ink)',
+      harmonics: label(
+        comparison.data.orders.map((o) => ({ order: o.order, amplitude: o.predicted })),
+      ),
+    });
   } else if (spectrum.data) {
-    series.push({ name: `Capture (${windowName} window)`, color: 'var(--color-trace-current)', harmonics: spectrum.data.harmonics });
+    series.push({
+      name: `Capture (${windowName} window)`,
+      color: 'var(--color-trace-current)',
+      harmonics: spectrum.data.harmonics,
+    });
   }
 
   return (
     <div className="flex flex-col gap-4" data-testid="capture-analysis">
       <Panel title={capture.name}>
-        <p className="text-sm">{capture.fileName} · {capture.rows} samples at {formatNumber(capture.sampleRate)} S/s ({formatNumber(capture.duration * 1e3)} ms) · columns {capture.columns.join(', ')}</p>
+        <p className="text-sm">
+          {capture.fileName} · {capture.rows} samples at {formatNumber(capture.sampleRate)} S/s (
+          {formatNumber(capture.duration * 1e3)} ms) · columns {capture.columns.join(', ')}
+        </p>
         <div className="mt-3 grid gap-3 sm:grid-cols-2">
-          <SelectField label="FFT window" value={windowName} onChange={(e) => setWindowName(e.target.value as FftWindow)} options={[{ value: 'hann', label: 'Hann' }, { value: 'flat-top', label: 'Flat-top' }, { value: 'rectangular', label: 'Rectangular' }]} />
-          <SelectField label="Compare with study" value={studyId} onChange={(e) => setStudyId(e.target.value)} options={[{ value: '', label: 'No study' }, ...(studies.data ?? []).map((s) => ({ value: s.id, label: s.name }))]} />
+          <SelectField
+            label="FFT window"
+            value={windowName}
+            onChange={(e) => setWindowName(e.target.value as FftWindow)}
+            options={[
+              { value: 'hann', label: 'Hann' },
+              { value: 'flat-top', label: 'Flat-top' },
+              { value: 'rectangular', label: 'Rectangular' },
+            ]}
+          />
+          <SelectField
+            label="Compare with study"
+            value={studyId}
+            onChange={(e) => setStudyId(e.target.value)}
+            options={[
+              { value: '', label: 'No study' },
+              ...(studies.data ?? []).map((s) => ({ value: s.id, label: s.name })),
+            ]}
+          />
         </div>
         {spectrum.isPending ? <Loading label="Analysing the capture…" /> : null}
-        {spectrum.isError ? <ErrorState error={spectrum.error} onRetry={() => spectrum.refetch()} /> : null}
+        {spectrum.isError ? (
+          <ErrorState error={spectrum.error} onRetry={() => spectrum.refetch()} />
+        ) : null}
         {spectrum.data ? (
           <p className="mt-2 text-sm">
-            Fundamental {formatNumber(spectrum.data.fundamentalFrequency)} Hz{spectrum.data.fundamentalEstimated ? ' (estimated from the strongest bin)' : ''} · FFT of {spectrum.data.fftSize} points, coherent gain {formatNumber(spectrum.data.coherentGain)} · capture THD {formatPercent(spectrum.data.thd)} to order 50
+            Fundamental {formatNumber(spectrum.data.fundamentalFrequency)} Hz
+            {spectrum.data.fundamentalEstimated ? ' (estimated from the strongest bin)' : ''} · FFT
+            of {spectrum.data.fftSize} points, coherent gain{' '}
+            {formatNumber(spectrum.data.coherentGain)} · capture THD{' '}
+            {formatPercent(spectrum.data.thd)} to order 50
           </p>
         ) : null}
-        {comparison.isPending && studyId ? <Loading label="Comparing with the prediction…" /> : null}
-        {comparison.isError ? <ErrorState error={comparison.error} onRetry={() => comparison.refetch()} /> : null}
+        {comparison.isPending && studyId ? (
+          <Loading label="Comparing with the prediction…" />
+        ) : null}
+        {comparison.isError ? (
+          <ErrorState error={comparison.error} onRetry={() => comparison.refetch()} />
+        ) : null}
       </Panel>
-      {series.length ? <SpectrumChart series={series} title={comparison.data ? 'Capture against prediction' : 'Capture spectrum'} fileName="capture-spectrum" /> : null}
+      {series.length ? (
+        <SpectrumChart
+          series={series}
+          title={comparison.data ? 'Capture against prediction' : 'Capture spectrum'}
+          fileName="capture-spectrum"
+        />
+      ) : null}
       {comparison.data ? <ComparisonTable comparison={comparison.data} /> : null}
     </div>
   );
 }
 
 function ComparisonTable({ comparison }: { comparison: CaptureComparison }) {
-  const rows = comparison.orders.filter((o) => o.order === 1 || o.predicted > 1e-3 * (comparison.orders[0]?.predicted ?? 1) || o.measured > 1e-3 * (comparison.orders[0]?.measured ?? 1));
+  const rows = comparison.orders.filter(
+    (o) =>
+      o.order === 1 ||
+      o.predicted > 1e-3 * (comparison.orders[0]?.predicted ?? 1) ||
+      o.measured > 1e-3 * (comparison.orders[0]?.measured ?? 1),
+  );
   return (
     <Panel title="Order by order">
       <div className="max-h-72 overflow-auto">
         <table className="num w-full text-sm">
           <thead className="sticky top-0 bg-panel text-left text-xs text-ink-soft">
-            <tr><th scope="col">Order</th><th scope="col">Hz</th><th scope="col">Measured (V)</th><th scope="col">Predicted (V)</th><th scope="col">Measured / predicted</th></tr>
+            <tr>
+              <th scope="col">Order</th>
+              <th scope="col">Hz</th>
+              <th scope="col">Measured (V)</th>
+              <th scope="col">Predicted (V)</th>
+              <th scope="col">Measured / predicted</th>
+            </tr>
           </thead>
           <tbody>
             {rows.map((o) => (
@@ -157,7 +299,11 @@ function ComparisonTable({ comparison }: { comparison: CaptureComparison }) {
                 <td>{formatNumber(o.frequency)}</td>
                 <td>{formatNumber(o.measured)}</td>
                 <td>{formatNumber(o.predicted)}</td>
-                <td>{o.ratio === null || o.predicted < 1e-6 * (comparison.orders[0]?.predicted ?? 1) ? '—' : formatNumber(o.ratio)}</td>
+                <td>
+                  {o.ratio === null || o.predicted < 1e-6 * (comparison.orders[0]?.predicted ?? 1)
+                    ? '—'
+                    : formatNumber(o.ratio)}
+                </td>
               </tr>
             ))}
           </tbody>

@@ -1,4 +1,15 @@
-import { firmwareEffects, harmonics, labelHarmonics, timerTable, timerTableToCHeader, timerTableToCsv, timerTableToJson, type FirmwareEffects, type TimerTable, type TimerTableOptions } from '@pulsewright/modulation';
+import {
+  firmwareEffects,
+  harmonics,
+  labelHarmonics,
+  timerTable,
+  timerTableToCHeader,
+  timerTableToCsv,
+  timerTableToJson,
+  type FirmwareEffects,
+  type TimerTable,
+  type TimerTableOptions,
+} from '@pulsewright/modulation';
 
 // The service has no timer-table endpoint; the library (integrators' npm package) builds the
 // table in the browser. This module is the feature's single door to it.
@@ -9,14 +20,21 @@ export interface TimerTableOutcome {
   error: { field: string; message: string } | null;
 }
 
-export function buildTimerTable(options: TimerTableOptions, effectOptions: { minPulseWidth: number }): TimerTableOutcome {
+export function buildTimerTable(
+  options: TimerTableOptions,
+  effectOptions: { minPulseWidth: number },
+): TimerTableOutcome {
   try {
     const table = timerTable(options);
     const effects = firmwareEffects(table, { minPulseWidth: effectOptions.minPulseWidth });
     return { table, effects, error: null };
   } catch (error) {
     const field = (error as { field?: string }).field ?? 'table';
-    return { table: null, effects: null, error: { field, message: error instanceof Error ? error.message : String(error) } };
+    return {
+      table: null,
+      effects: null,
+      error: { field, message: error instanceof Error ? error.message : String(error) },
+    };
   }
 }
 

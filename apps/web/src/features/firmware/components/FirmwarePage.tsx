@@ -43,7 +43,10 @@ export function FirmwarePage() {
     () =>
       buildTimerTable(
         {
-          modulation: form.method === 'sine-triangle' ? { method: 'sine-triangle', scheme: form.scheme, ma: form.ma } : { method: 'three-phase', zeroSequence: form.zeroSequence, ma: form.ma },
+          modulation:
+            form.method === 'sine-triangle'
+              ? { method: 'sine-triangle', scheme: form.scheme, ma: form.ma }
+              : { method: 'three-phase', zeroSequence: form.zeroSequence, ma: form.ma },
           fundamentalFrequency: form.fundamentalFrequency,
           carrierFrequency: form.carrierFrequency,
           timerClock: form.timerClock,
@@ -60,7 +63,8 @@ export function FirmwarePage() {
     const value = Number(e.target.value);
     if (e.target.value !== '' && Number.isFinite(value)) setForm({ ...form, [key]: value });
   };
-  const err = (field: string) => (outcome.error && outcome.error.field.startsWith(field) ? outcome.error.message : undefined);
+  const err = (field: string) =>
+    outcome.error && outcome.error.field.startsWith(field) ? outcome.error.message : undefined;
   const table = outcome.table;
   const mf = table ? table.carrierPeriodsPerFundamental : 1;
   const spectra = outcome.effects ? effectSpectra(outcome.effects.combined, mf) : null;
@@ -68,25 +72,124 @@ export function FirmwarePage() {
 
   return (
     <div>
-      <PageHeader title="Controller tables" subtitle="Compare values for a PWM timer, with dead time and the effect of rounding, dead time and minimum pulse on the spectrum. Check on the real gate drive before full voltage." />
+      <PageHeader
+        title="Controller tables"
+        subtitle="Compare values for a PWM timer, with dead time and the effect of rounding, dead time and minimum pulse on the spectrum. Check on the real gate drive before full voltage."
+      />
       <div className="grid gap-5 lg:grid-cols-[320px_minmax(0,1fr)]">
         <Panel title="Timer">
           <form className="flex flex-col gap-3" onSubmit={(e) => e.preventDefault()}>
-            <SelectField label="Inverter" value={form.method} onChange={(e) => setForm({ ...form, method: e.target.value as FormState['method'] })} options={[{ value: 'sine-triangle', label: 'Single-phase bridge' }, { value: 'three-phase', label: 'Three-phase' }]} />
+            <SelectField
+              label="Inverter"
+              value={form.method}
+              onChange={(e) => setForm({ ...form, method: e.target.value as FormState['method'] })}
+              options={[
+                { value: 'sine-triangle', label: 'Single-phase bridge' },
+                { value: 'three-phase', label: 'Three-phase' },
+              ]}
+            />
             {form.method === 'sine-triangle' ? (
-              <SelectField label="Scheme" value={form.scheme} onChange={(e) => setForm({ ...form, scheme: e.target.value as FormState['scheme'] })} options={[{ value: 'unipolar', label: 'Unipolar (two channels)' }, { value: 'bipolar', label: 'Bipolar (one channel)' }]} />
+              <SelectField
+                label="Scheme"
+                value={form.scheme}
+                onChange={(e) =>
+                  setForm({ ...form, scheme: e.target.value as FormState['scheme'] })
+                }
+                options={[
+                  { value: 'unipolar', label: 'Unipolar (two channels)' },
+                  { value: 'bipolar', label: 'Bipolar (one channel)' },
+                ]}
+              />
             ) : (
-              <SelectField label="Zero sequence" value={form.zeroSequence} onChange={(e) => setForm({ ...form, zeroSequence: e.target.value as FormState['zeroSequence'] })} options={[{ value: 'none', label: 'None' }, { value: 'third-harmonic', label: 'Third harmonic' }, { value: 'min-max', label: 'Min-max' }]} />
+              <SelectField
+                label="Zero sequence"
+                value={form.zeroSequence}
+                onChange={(e) =>
+                  setForm({ ...form, zeroSequence: e.target.value as FormState['zeroSequence'] })
+                }
+                options={[
+                  { value: 'none', label: 'None' },
+                  { value: 'third-harmonic', label: 'Third harmonic' },
+                  { value: 'min-max', label: 'Min-max' },
+                ]}
+              />
             )}
-            <TextField label="Modulation index ma" type="number" step={0.01} defaultValue={form.ma} onChange={num('ma')} error={err('ma') ?? err('modulation')} />
-            <TextField label="Fundamental" unit="Hz" type="number" defaultValue={form.fundamentalFrequency} onChange={num('fundamentalFrequency')} error={err('fundamentalFrequency')} />
-            <TextField label="Carrier" unit="Hz" type="number" defaultValue={form.carrierFrequency} onChange={num('carrierFrequency')} error={err('carrierFrequency')} hint="a whole multiple of the fundamental" />
-            <TextField label="Timer clock" unit="Hz" type="number" defaultValue={form.timerClock} onChange={num('timerClock')} error={err('timerClock')} />
-            <SelectField label="Counting mode" value={form.countingMode} onChange={(e) => setForm({ ...form, countingMode: e.target.value as FormState['countingMode'] })} options={[{ value: 'centre-aligned', label: 'Centre-aligned (up-down)' }, { value: 'edge-aligned', label: 'Edge-aligned (up)' }]} />
-            <TextField label="Counter width" unit="bits" type="number" defaultValue={form.counterBits} onChange={num('counterBits')} error={err('counterBits')} />
-            <TextField label="Dead time" unit="ns" type="number" defaultValue={form.deadTimeNs} onChange={num('deadTimeNs')} error={err('deadTime')} />
-            <TextField label="Minimum pulse" unit="ns" type="number" defaultValue={form.minPulseNs} onChange={num('minPulseNs')} error={err('minPulseWidth')} />
-            <TextField label="DC bus" unit="V" type="number" defaultValue={form.vdc} onChange={num('vdc')} error={err('vdc')} />
+            <TextField
+              label="Modulation index ma"
+              type="number"
+              step={0.01}
+              defaultValue={form.ma}
+              onChange={num('ma')}
+              error={err('ma') ?? err('modulation')}
+            />
+            <TextField
+              label="Fundamental"
+              unit="Hz"
+              type="number"
+              defaultValue={form.fundamentalFrequency}
+              onChange={num('fundamentalFrequency')}
+              error={err('fundamentalFrequency')}
+            />
+            <TextField
+              label="Carrier"
+              unit="Hz"
+              type="number"
+              defaultValue={form.carrierFrequency}
+              onChange={num('carrierFrequency')}
+              error={err('carrierFrequency')}
+              hint="a whole multiple of the fundamental"
+            />
+            <TextField
+              label="Timer clock"
+              unit="Hz"
+              type="number"
+              defaultValue={form.timerClock}
+              onChange={num('timerClock')}
+              error={err('timerClock')}
+            />
+            <SelectField
+              label="Counting mode"
+              value={form.countingMode}
+              onChange={(e) =>
+                setForm({ ...form, countingMode: e.target.value as FormState['countingMode'] })
+              }
+              options={[
+                { value: 'centre-aligned', label: 'Centre-aligned (up-down)' },
+                { value: 'edge-aligned', label: 'Edge-aligned (up)' },
+              ]}
+            />
+            <TextField
+              label="Counter width"
+              unit="bits"
+              type="number"
+              defaultValue={form.counterBits}
+              onChange={num('counterBits')}
+              error={err('counterBits')}
+            />
+            <TextField
+              label="Dead time"
+              unit="ns"
+              type="number"
+              defaultValue={form.deadTimeNs}
+              onChange={num('deadTimeNs')}
+              error={err('deadTime')}
+            />
+            <TextField
+              label="Minimum pulse"
+              unit="ns"
+              type="number"
+              defaultValue={form.minPulseNs}
+              onChange={num('minPulseNs')}
+              error={err('minPulseWidth')}
+            />
+            <TextField
+              label="DC bus"
+              unit="V"
+              type="number"
+              defaultValue={form.vdc}
+              onChange={num('vdc')}
+              error={err('vdc')}
+            />
           </form>
         </Panel>
         <div className="flex min-w-0 flex-col gap-4">
@@ -97,18 +200,47 @@ export function FirmwarePage() {
                 title="Table"
                 actions={
                   <>
-                    <Button variant="secondary" onClick={() => downloadText(timerTableExports(table).json(), `${stem}.json`, 'application/json')}>JSON</Button>
-                    <Button variant="secondary" onClick={() => downloadText(timerTableExports(table).csv(), `${stem}.csv`, 'text/csv')}>CSV</Button>
-                    <Button variant="secondary" onClick={() => downloadText(timerTableExports(table).cHeader(), `${stem}.h`, 'text/x-c')}>C header</Button>
+                    <Button
+                      variant="secondary"
+                      onClick={() =>
+                        downloadText(
+                          timerTableExports(table).json(),
+                          `${stem}.json`,
+                          'application/json',
+                        )
+                      }
+                    >
+                      JSON
+                    </Button>
+                    <Button
+                      variant="secondary"
+                      onClick={() =>
+                        downloadText(timerTableExports(table).csv(), `${stem}.csv`, 'text/csv')
+                      }
+                    >
+                      CSV
+                    </Button>
+                    <Button
+                      variant="secondary"
+                      onClick={() =>
+                        downloadText(timerTableExports(table).cHeader(), `${stem}.h`, 'text/x-c')
+                      }
+                    >
+                      C header
+                    </Button>
                   </>
                 }
               >
                 <p className="mb-2 text-sm">
-                  Period register {table.periodRegister} · {table.parameters.tableLength} entries · carrier realised {formatNumber(table.realisedCarrierFrequency)} Hz · dead time {table.deadTimeCounts} ticks ({formatNumber(table.realisedDeadTime * 1e9)} ns)
+                  Period register {table.periodRegister} · {table.parameters.tableLength} entries ·
+                  carrier realised {formatNumber(table.realisedCarrierFrequency)} Hz · dead time{' '}
+                  {table.deadTimeCounts} ticks ({formatNumber(table.realisedDeadTime * 1e9)} ns)
                 </p>
                 {table.warnings.length ? (
                   <ul className="mb-2 list-disc pl-5 text-sm text-signal">
-                    {table.warnings.map((w) => <li key={w.field + w.message}>{w.message}</li>)}
+                    {table.warnings.map((w) => (
+                      <li key={w.field + w.message}>{w.message}</li>
+                    ))}
                   </ul>
                 ) : null}
                 <div className="max-h-72 overflow-auto">
@@ -118,7 +250,9 @@ export function FirmwarePage() {
                         <th scope="col">#</th>
                         <th scope="col">angle (rad)</th>
                         {table.channels.map((c) => (
-                          <th key={c.name} scope="col">{c.name}: duty / high / low</th>
+                          <th key={c.name} scope="col">
+                            {c.name}: duty / high / low
+                          </th>
                         ))}
                       </tr>
                     </thead>
@@ -128,7 +262,9 @@ export function FirmwarePage() {
                           <td>{i}</td>
                           <td>{formatNumber(angle)}</td>
                           {table.channels.map((c) => (
-                            <td key={c.name}>{formatNumber(c.duty[i] ?? 0, 4)} / {c.highSide[i]} / {c.lowSide[i]}</td>
+                            <td key={c.name}>
+                              {formatNumber(c.duty[i] ?? 0, 4)} / {c.highSide[i]} / {c.lowSide[i]}
+                            </td>
                           ))}
                         </tr>
                       ))}
@@ -138,7 +274,11 @@ export function FirmwarePage() {
               </Panel>
               <Panel title="Effect on the output">
                 <p className="text-sm">
-                  Fundamental {formatNumber(outcome.effects.combined.referenceFundamental)} → {formatNumber(outcome.effects.combined.realisedFundamental)} V; THD {formatPercent(outcome.effects.combined.referenceThd)} → {formatPercent(outcome.effects.combined.realisedThd)} (rounding, minimum pulse and dead time together).
+                  Fundamental {formatNumber(outcome.effects.combined.referenceFundamental)} →{' '}
+                  {formatNumber(outcome.effects.combined.realisedFundamental)} V; THD{' '}
+                  {formatPercent(outcome.effects.combined.referenceThd)} →{' '}
+                  {formatPercent(outcome.effects.combined.realisedThd)} (rounding, minimum pulse and
+                  dead time together).
                 </p>
               </Panel>
               {spectra ? (
@@ -146,8 +286,16 @@ export function FirmwarePage() {
                   title="Spectrum: ideal against the table"
                   fileName={`${stem}-spectrum`}
                   series={[
-                    { name: 'Ideal duties', color: 'var(--color-ink)', harmonics: spectra.reference },
-                    { name: 'Realised by the table', color: 'var(--color-signal)', harmonics: spectra.realised },
+                    {
+                      name: 'Ideal duties',
+                      color: 'var(--color-ink)',
+                      harmonics: spectra.reference,
+                    },
+                    {
+                      name: 'Realised by the table',
+                      color: 'var(--color-signal)',
+                      harmonics: spectra.realised,
+                    },
                   ]}
                 />
               ) : null}

@@ -1,4 +1,10 @@
-import { spaceVectorSequence, SIX_STEP_M, type SpaceVectorSequence, type SpaceVectorSequenceKind, type ZeroVectorClamping } from '@pulsewright/modulation';
+import {
+  spaceVectorSequence,
+  SIX_STEP_M,
+  type SpaceVectorSequence,
+  type SpaceVectorSequenceKind,
+  type ZeroVectorClamping,
+} from '@pulsewright/modulation';
 
 // The service has no space-vector endpoint for a single reference; the library answers here.
 
@@ -9,10 +15,16 @@ export interface SpaceVectorInput {
   clamping: ZeroVectorClamping;
 }
 
-export function sequenceFor(input: SpaceVectorInput): { result: SpaceVectorSequence | null; error: string | null } {
+export function sequenceFor(input: SpaceVectorInput): {
+  result: SpaceVectorSequence | null;
+  error: string | null;
+} {
   try {
     return {
-      result: spaceVectorSequence({ m: input.m, theta: (input.thetaDegrees * Math.PI) / 180 }, { sequence: input.sequence, clamping: input.clamping }),
+      result: spaceVectorSequence(
+        { m: input.m, theta: (input.thetaDegrees * Math.PI) / 180 },
+        { sequence: input.sequence, clamping: input.clamping },
+      ),
       error: null,
     };
   } catch (error) {

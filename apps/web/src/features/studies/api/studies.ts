@@ -1,4 +1,10 @@
-import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import {
+  keepPreviousData,
+  queryOptions,
+  useMutation,
+  useQuery,
+  useQueryClient,
+} from '@tanstack/react-query';
 import type { Schema } from '@pulsewright/client';
 import { api, unwrap } from '../../../lib/api';
 
@@ -16,7 +22,8 @@ export type StudyReportOptions = Schema<'AnalyseDesignOptions'>;
 export async function getProjects(q?: string): Promise<Project[]> {
   return unwrap(await api.GET('/api/v1/projects', { params: { query: q ? { q } : {} } }));
 }
-export const projectsQueryOptions = (q?: string) => queryOptions({ queryKey: ['projects', q ?? ''], queryFn: () => getProjects(q) });
+export const projectsQueryOptions = (q?: string) =>
+  queryOptions({ queryKey: ['projects', q ?? ''], queryFn: () => getProjects(q) });
 export function useProjects(q?: string) {
   return useQuery(projectsQueryOptions(q));
 }
@@ -26,7 +33,10 @@ export async function createProject(body: Schema<'ProjectInput'>): Promise<Proje
 }
 export function useCreateProject() {
   const client = useQueryClient();
-  return useMutation({ mutationFn: createProject, onSuccess: () => client.invalidateQueries({ queryKey: ['projects'] }) });
+  return useMutation({
+    mutationFn: createProject,
+    onSuccess: () => client.invalidateQueries({ queryKey: ['projects'] }),
+  });
 }
 
 // Studies -----------------------------------------------------------------------------------
@@ -43,7 +53,11 @@ export async function getStudies({ projectId, q }: StudyFilter = {}): Promise<St
   return unwrap(await api.GET('/api/v1/studies', { params: { query } }));
 }
 export const studiesQueryOptions = (filter: StudyFilter = {}) =>
-  queryOptions({ queryKey: ['studies', 'list', filter.projectId ?? '', filter.q ?? ''], queryFn: () => getStudies(filter), placeholderData: keepPreviousData });
+  queryOptions({
+    queryKey: ['studies', 'list', filter.projectId ?? '', filter.q ?? ''],
+    queryFn: () => getStudies(filter),
+    placeholderData: keepPreviousData,
+  });
 export function useStudies(filter: StudyFilter = {}) {
   return useQuery(studiesQueryOptions(filter));
 }
@@ -51,7 +65,8 @@ export function useStudies(filter: StudyFilter = {}) {
 export async function getStudy(id: string): Promise<Study> {
   return unwrap(await api.GET('/api/v1/studies/{id}', { params: { path: { id } } }));
 }
-export const studyQueryOptions = (id: string) => queryOptions({ queryKey: ['studies', 'one', id], queryFn: () => getStudy(id) });
+export const studyQueryOptions = (id: string) =>
+  queryOptions({ queryKey: ['studies', 'one', id], queryFn: () => getStudy(id) });
 export function useStudy(id: string | undefined) {
   return useQuery({ ...studyQueryOptions(id ?? ''), enabled: Boolean(id) });
 }
@@ -87,17 +102,38 @@ export function useUpdateStudy() {
 }
 
 export async function duplicateStudy({ id, name }: { id: string; name?: string }): Promise<Study> {
-  return unwrap(await api.POST('/api/v1/studies/{id}/duplicate', { params: { path: { id } }, body: name ? { name } : {} }));
+  return unwrap(
+    await api.POST('/api/v1/studies/{id}/duplicate', {
+      params: { path: { id } },
+      body: name ? { name } : {},
+    }),
+  );
 }
 export function useDuplicateStudy() {
   const client = useQueryClient();
-  return useMutation({ mutationFn: duplicateStudy, onSuccess: () => client.invalidateQueries({ queryKey: ['studies', 'list'] }) });
+  return useMutation({
+    mutationFn: duplicateStudy,
+    onSuccess: () => client.invalidateQueries({ queryKey: ['studies', 'list'] }),
+  });
 }
 
 export type StudyShareResult = Schema<'StudyShareResult'>;
 
-export async function shareStudyReport({ id, email, message }: { id: string; email: string; message?: string }): Promise<StudyShareResult> {
-  return unwrap(await api.POST('/api/v1/studies/{id}/share', { params: { path: { id } }, body: message ? { email, message } : { email } }));
+export async function shareStudyReport({
+  id,
+  email,
+  message,
+}: {
+  id: string;
+  email: string;
+  message?: string;
+}): Promise<StudyShareResult> {
+  return unwrap(
+    await api.POST('/api/v1/studies/{id}/share', {
+      params: { path: { id } },
+      body: message ? { email, message } : { email },
+    }),
+  );
 }
 export function useShareStudyReport() {
   return useMutation({ mutationFn: shareStudyReport });
@@ -106,13 +142,27 @@ export function useShareStudyReport() {
 export async function getStudyRevisions(id: string): Promise<StudyRevision[]> {
   return unwrap(await api.GET('/api/v1/studies/{id}/revisions', { params: { path: { id } } }));
 }
-export const studyRevisionsQueryOptions = (id: string) => queryOptions({ queryKey: ['studies', 'revisions', id], queryFn: () => getStudyRevisions(id) });
+export const studyRevisionsQueryOptions = (id: string) =>
+  queryOptions({ queryKey: ['studies', 'revisions', id], queryFn: () => getStudyRevisions(id) });
 export function useStudyRevisions(id: string | undefined) {
   return useQuery({ ...studyRevisionsQueryOptions(id ?? ''), enabled: Boolean(id) });
 }
 
-export async function restoreStudyRevision({ id, revision, baseRevision }: { id: string; revision: number; baseRevision: number }): Promise<Study> {
-  return unwrap(await api.POST('/api/v1/studies/{id}/revisions/{revision}/restore', { params: { path: { id, revision } }, body: { baseRevision } }));
+export async function restoreStudyRevision({
+  id,
+  revision,
+  baseRevision,
+}: {
+  id: string;
+  revision: number;
+  baseRevision: number;
+}): Promise<Study> {
+  return unwrap(
+    await api.POST('/api/v1/studies/{id}/revisions/{revision}/restore', {
+      params: { path: { id, revision } },
+      body: { baseRevision },
+    }),
+  );
 }
 export function useRestoreStudyRevision() {
   const client = useQueryClient();
@@ -125,12 +175,20 @@ export function useRestoreStudyRevision() {
   });
 }
 
-export async function getStudyReport(id: string, options: StudyReportOptions = {}): Promise<StudyReport> {
-  return unwrap(await api.GET('/api/v1/studies/{id}/report', { params: { path: { id }, query: options } }));
+export async function getStudyReport(
+  id: string,
+  options: StudyReportOptions = {},
+): Promise<StudyReport> {
+  return unwrap(
+    await api.GET('/api/v1/studies/{id}/report', { params: { path: { id }, query: options } }),
+  );
 }
 /** The report of a study's current revision; the key holds the id, so a save of that study refetches it. */
 export const studyReportQueryOptions = (id: string, options: StudyReportOptions = {}) =>
-  queryOptions({ queryKey: ['studies', 'report', id, options], queryFn: () => getStudyReport(id, options) });
+  queryOptions({
+    queryKey: ['studies', 'report', id, options],
+    queryFn: () => getStudyReport(id, options),
+  });
 export function useStudyReport(id: string | undefined, options: StudyReportOptions = {}) {
   return useQuery({ ...studyReportQueryOptions(id ?? '', options), enabled: Boolean(id) });
 }

@@ -5,7 +5,12 @@ import { SpectrumChart, type SpectrumSeries } from '../../../components/charts/S
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { Empty, ErrorState, Loading, QueryView } from '../../../components/ui/QueryState';
 import { formatGain, formatNumber, formatPercent } from '../../../lib/format';
-import { studyQueryOptions, studyReportQueryOptions, useStudies, type StudyReport } from '../api/studies';
+import {
+  studyQueryOptions,
+  studyReportQueryOptions,
+  useStudies,
+  type StudyReport,
+} from '../api/studies';
 import { limitPointName } from '../model/reportFigures';
 
 const COLOURS = ['#12263a', '#d9822b', '#2a8c82', '#8e3b6e', '#c2462e', '#5b6fa8'];
@@ -25,19 +30,54 @@ const phaseA = (report: StudyReport) => report.currents[0];
 /** Every column comes from the same design report of each study. */
 const COLUMNS: Column[] = [
   { heading: 'Method', cell: (r) => r.methodLabel },
-  { heading: 'Fundamental (V peak)', cell: (r) => formatNumber(r.bridge.fundamental), title: (r) => r.bridge.name },
-  { heading: 'THD, exact', cell: (r) => formatPercent(r.bridge.thd), title: (r) => `whole waveform, ${r.bridge.name}` },
-  { heading: 'WTHD, exact', cell: (r) => formatPercent(r.bridge.wthd, 3), title: (r) => `whole waveform, ${r.bridge.name}` },
-  { heading: 'Output THD', cell: (r) => (r.output ? formatPercent(r.output.thd) : '—'), title: (r) => (r.output ? `${r.output.name}, to order ${r.analysisOrder}` : 'no filter') },
-  { heading: 'Current ripple (A rms)', cell: (r) => (phaseA(r) ? formatNumber(phaseA(r)?.inverter.rippleRms ?? Number.NaN) : '—'), title: (r) => phaseA(r)?.inverter.name ?? 'no load or filter' },
-  { heading: 'Switch current (A rms)', cell: (r) => (phaseA(r) ? formatNumber(phaseA(r)?.inverter.rms ?? Number.NaN) : '—'), title: (r) => phaseA(r)?.inverter.name ?? 'no load or filter' },
-  { heading: 'Load power (W)', cell: (r) => (r.loadPower === null ? '—' : formatNumber(r.loadPower)), title: (r) => (r.phaseCount === 3 ? 'into R, all three phases' : 'into R') },
+  {
+    heading: 'Fundamental (V peak)',
+    cell: (r) => formatNumber(r.bridge.fundamental),
+    title: (r) => r.bridge.name,
+  },
+  {
+    heading: 'THD, exact',
+    cell: (r) => formatPercent(r.bridge.thd),
+    title: (r) => `whole waveform, ${r.bridge.name}`,
+  },
+  {
+    heading: 'WTHD, exact',
+    cell: (r) => formatPercent(r.bridge.wthd, 3),
+    title: (r) => `whole waveform, ${r.bridge.name}`,
+  },
+  {
+    heading: 'Output THD',
+    cell: (r) => (r.output ? formatPercent(r.output.thd) : '—'),
+    title: (r) => (r.output ? `${r.output.name}, to order ${r.analysisOrder}` : 'no filter'),
+  },
+  {
+    heading: 'Current ripple (A rms)',
+    cell: (r) => (phaseA(r) ? formatNumber(phaseA(r)?.inverter.rippleRms ?? Number.NaN) : '—'),
+    title: (r) => phaseA(r)?.inverter.name ?? 'no load or filter',
+  },
+  {
+    heading: 'Switch current (A rms)',
+    cell: (r) => (phaseA(r) ? formatNumber(phaseA(r)?.inverter.rms ?? Number.NaN) : '—'),
+    title: (r) => phaseA(r)?.inverter.name ?? 'no load or filter',
+  },
+  {
+    heading: 'Load power (W)',
+    cell: (r) => (r.loadPower === null ? '—' : formatNumber(r.loadPower)),
+    title: (r) => (r.phaseCount === 3 ? 'into R, all three phases' : 'into R'),
+  },
   {
     heading: 'Filter resonance (Hz)',
     cell: (r) => (r.filter ? formatNumber(r.filter.characteristics.resonanceFrequency) : '—'),
-    title: (r) => (r.filter?.gainAtCarrier != null ? `gain at the carrier ${formatGain(r.filter.gainAtCarrier)}` : 'no filter'),
+    title: (r) =>
+      r.filter?.gainAtCarrier != null
+        ? `gain at the carrier ${formatGain(r.filter.gainAtCarrier)}`
+        : 'no filter',
   },
-  { heading: 'Limit check', cell: (r) => (r.limitCheck.pass ? 'pass' : 'fail'), title: (r) => `${r.limitCheck.standard.name}, ${limitPointName(r)}` },
+  {
+    heading: 'Limit check',
+    cell: (r) => (r.limitCheck.pass ? 'pass' : 'fail'),
+    title: (r) => `${r.limitCheck.standard.name}, ${limitPointName(r)}`,
+  },
 ];
 
 /** Two or more studies side by side: a table of their report figures and overlaid labelled spectra (from the service). */
@@ -61,14 +101,19 @@ export function ComparePage() {
   const all = useStudies();
   const studies = useQueries({ queries: ids.map((id) => studyQueryOptions(id)) });
   const reports = useQueries({ queries: ids.map((id) => studyReportQueryOptions(id)) });
-  const toggle = (id: string) => setIds((current) => (current.includes(id) ? current.filter((x) => x !== id) : [...current, id]));
+  const toggle = (id: string) =>
+    setIds((current) =>
+      current.includes(id) ? current.filter((x) => x !== id) : [...current, id],
+    );
 
   const pending = [...studies, ...reports].some((q) => q.isPending);
   const failed = [...studies, ...reports].find((q) => q.isError);
   const rows = ids.flatMap((id, i) => {
     const study = studies[i]?.data;
     const report = reports[i]?.data;
-    return study && report ? [{ id, study, report, color: COLOURS[i % COLOURS.length] ?? '#12263a' }] : [];
+    return study && report
+      ? [{ id, study, report, color: COLOURS[i % COLOURS.length] ?? '#12263a' }]
+      : [];
   });
   // Each spectrum keeps its own report's labels: carrier groups for a carrier method, orders for a pattern.
   const series: SpectrumSeries[] = rows.map(({ study, report, color }) => {
@@ -78,7 +123,10 @@ export function ComparePage() {
 
   return (
     <div>
-      <PageHeader title="Compare studies" subtitle="Pick two or more studies: their figures and spectra come from each one's design report, computed by the service at its current revision." />
+      <PageHeader
+        title="Compare studies"
+        subtitle="Pick two or more studies: their figures and spectra come from each one's design report, computed by the service at its current revision."
+      />
       <div className="grid gap-5 lg:grid-cols-[280px_minmax(0,1fr)]">
         <Panel title="Studies">
           <QueryView query={all} empty="No studies to compare yet.">
@@ -87,7 +135,12 @@ export function ComparePage() {
                 {list.map((s) => (
                   <li key={s.id}>
                     <label className="flex items-center gap-2">
-                      <input type="checkbox" className="accent-signal" checked={ids.includes(s.id)} onChange={() => toggle(s.id)} />
+                      <input
+                        type="checkbox"
+                        className="accent-signal"
+                        checked={ids.includes(s.id)}
+                        onChange={() => toggle(s.id)}
+                      />
                       {s.name}
                     </label>
                   </li>
@@ -97,14 +150,19 @@ export function ComparePage() {
           </QueryView>
         </Panel>
         <div className="flex min-w-0 flex-col gap-4">
-          {ids.length < 2 ? <Empty>Select at least two studies to compare their figures and spectra.</Empty> : null}
+          {ids.length < 2 ? (
+            <Empty>Select at least two studies to compare their figures and spectra.</Empty>
+          ) : null}
           {ids.length > 0 && pending ? <Loading label="Analysing the designs…" /> : null}
           {failed ? <ErrorState error={failed.error} onRetry={() => failed.refetch()} /> : null}
           {rows.length ? (
             <>
               <Panel title="Figures">
                 <div className="overflow-x-auto">
-                  <table className="w-full text-sm [&_td]:px-2 [&_td]:py-1 [&_th]:px-2" data-testid="compare-figures">
+                  <table
+                    className="w-full text-sm [&_td]:px-2 [&_td]:py-1 [&_th]:px-2"
+                    data-testid="compare-figures"
+                  >
                     <thead className="text-left align-bottom text-xs text-ink-soft uppercase">
                       <tr>
                         <th scope="col">Study</th>
@@ -119,7 +177,10 @@ export function ComparePage() {
                       {rows.map(({ id, study, report, color }) => (
                         <tr key={id} className="border-t border-rule/60" data-study={study.name}>
                           <th scope="row" className="text-left font-sans font-medium">
-                            <span className="mr-1 inline-block h-2.5 w-2.5 rounded-sm" style={{ background: color }} />
+                            <span
+                              className="mr-1 inline-block h-2.5 w-2.5 rounded-sm"
+                              style={{ background: color }}
+                            />
                             {study.name}
                           </th>
                           {COLUMNS.map((c) => (
@@ -127,7 +188,13 @@ export function ComparePage() {
                               key={c.heading}
                               data-column={c.heading}
                               title={c.title?.(report)}
-                              className={c.heading === 'Method' ? 'font-sans text-xs' : c.heading === 'Limit check' ? `font-sans font-semibold ${report.limitCheck.pass ? 'text-good' : 'text-bad'}` : 'whitespace-nowrap'}
+                              className={
+                                c.heading === 'Method'
+                                  ? 'font-sans text-xs'
+                                  : c.heading === 'Limit check'
+                                    ? `font-sans font-semibold ${report.limitCheck.pass ? 'text-good' : 'text-bad'}`
+                                    : 'whitespace-nowrap'
+                              }
                             >
                               {c.cell(report)}
                             </td>
@@ -138,7 +205,10 @@ export function ComparePage() {
                   </table>
                 </div>
                 <p className="mt-2 text-xs text-ink-soft">
-                  THD and WTHD are exact over the whole waveform of each bridge voltage (per phase, phase to star point, for three-phase designs); currents are of phase a; the limit check reads the voltage at the point of coupling (the filter's output where there is one).
+                  THD and WTHD are exact over the whole waveform of each bridge voltage (per phase,
+                  phase to star point, for three-phase designs); currents are of phase a; the limit
+                  check reads the voltage at the point of coupling (the filter's output where there
+                  is one).
                 </p>
               </Panel>
               <SpectrumChart
@@ -146,13 +216,24 @@ export function ComparePage() {
                 title="Spectra overlaid"
                 fileName="compare-spectra"
                 controls={
-                  <select aria-label="Spectra of" className="rounded border border-rule bg-panel px-1.5 py-0.5 text-xs" value={choice} onChange={(e) => setChoice(e.target.value as SpectrumChoice)}>
+                  <select
+                    aria-label="Spectra of"
+                    className="rounded border border-rule bg-panel px-1.5 py-0.5 text-xs"
+                    value={choice}
+                    onChange={(e) => setChoice(e.target.value as SpectrumChoice)}
+                  >
                     <option value="bridge">Bridge voltage</option>
                     <option value="coupling">Point of coupling (filter output)</option>
                   </select>
                 }
               />
-              <p className="-mt-2 text-xs text-ink-soft">Labels are those of the first study's report ({rows[0]?.report.frequencyRatio === null ? 'orders of a stored pattern' : 'carrier groups of its mf'}); hover a bar to read every study at that order.</p>
+              <p className="-mt-2 text-xs text-ink-soft">
+                Labels are those of the first study's report (
+                {rows[0]?.report.frequencyRatio === null
+                  ? 'orders of a stored pattern'
+                  : 'carrier groups of its mf'}
+                ); hover a bar to read every study at that order.
+              </p>
             </>
           ) : null}
         </div>

@@ -15,11 +15,16 @@ export function RevisionHistory({ study, canEdit }: { study: Study; canEdit: boo
         {(list) => (
           <ol className="flex flex-col gap-2 text-sm" aria-label="Revisions">
             {list.map((r) => (
-              <li key={r.revision} className="flex items-start justify-between gap-2 border-b border-rule/60 pb-2">
+              <li
+                key={r.revision}
+                className="flex items-start justify-between gap-2 border-b border-rule/60 pb-2"
+              >
                 <div>
                   <p className="font-medium">
                     Revision {r.revision}
-                    {r.revision === study.revision ? <span className="ml-2 rounded bg-signal-soft px-1 text-xs">current</span> : null}
+                    {r.revision === study.revision ? (
+                      <span className="ml-2 rounded bg-signal-soft px-1 text-xs">current</span>
+                    ) : null}
                   </p>
                   <p className="text-xs text-ink-soft">
                     {r.authorEmail ?? 'unknown author'} · {formatDate(r.createdAt)}
@@ -30,7 +35,13 @@ export function RevisionHistory({ study, canEdit }: { study: Study; canEdit: boo
                   <Button
                     variant="secondary"
                     busy={restore.isPending && restore.variables?.revision === r.revision}
-                    onClick={() => restore.mutate({ id: study.id, revision: r.revision, baseRevision: study.revision })}
+                    onClick={() =>
+                      restore.mutate({
+                        id: study.id,
+                        revision: r.revision,
+                        baseRevision: study.revision,
+                      })
+                    }
                   >
                     Restore
                   </Button>
@@ -40,7 +51,11 @@ export function RevisionHistory({ study, canEdit }: { study: Study; canEdit: boo
           </ol>
         )}
       </QueryView>
-      {restore.isError ? <p role="alert" className="mt-2 text-xs text-bad">{errorMessage(restore.error)}</p> : null}
+      {restore.isError ? (
+        <p role="alert" className="mt-2 text-xs text-bad">
+          {errorMessage(restore.error)}
+        </p>
+      ) : null}
     </Panel>
   );
 }

@@ -22,9 +22,16 @@ export function ShareReportForm({ studyId, canShare }: { studyId: string; canSha
     share.mutate({ id: studyId, email: email.trim(), ...(message.trim() ? { message } : {}) });
   };
   return (
-    <form onSubmit={submit} noValidate aria-label="E-mail this report" className="no-print mb-4 flex flex-col gap-3 rounded-md border border-rule p-3">
+    <form
+      onSubmit={submit}
+      noValidate
+      aria-label="E-mail this report"
+      className="no-print mb-4 flex flex-col gap-3 rounded-md border border-rule p-3"
+    >
       <h2 className="text-sm font-semibold tracking-wide uppercase">E-mail this report</h2>
-      {!canShare ? <p className="text-xs text-ink-soft">E-mailing a report needs the engineer role.</p> : null}
+      {!canShare ? (
+        <p className="text-xs text-ink-soft">E-mailing a report needs the engineer role.</p>
+      ) : null}
       <TextField
         label="Recipient e-mail"
         type="email"
@@ -39,7 +46,10 @@ export function ShareReportForm({ studyId, canShare }: { studyId: string; canSha
         error={emailError}
       />
       <div className="flex flex-col gap-1">
-        <label htmlFor={messageId} className="text-xs font-medium tracking-wide text-ink-soft uppercase">
+        <label
+          htmlFor={messageId}
+          className="text-xs font-medium tracking-wide text-ink-soft uppercase"
+        >
           Message <span className="ml-1 normal-case text-ink-soft/80">(optional)</span>
         </label>
         <textarea

@@ -32,11 +32,18 @@ export function StudiesPage() {
         subtitle="Every saved modulation study of the team, at its current revision."
         actions={
           <>
-            <Button variant="secondary" disabled={selected.length < 2} onClick={() => navigate(paths.compare.getHref(selected))}>
+            <Button
+              variant="secondary"
+              disabled={selected.length < 2}
+              onClick={() => navigate(paths.compare.getHref(selected))}
+            >
               Compare selected ({selected.length})
             </Button>
             {canEdit ? (
-              <Link to={paths.newStudy.getHref(projectId || undefined)} className="rounded-md bg-ink px-3 py-1.5 text-sm font-medium text-paper">
+              <Link
+                to={paths.newStudy.getHref(projectId || undefined)}
+                className="rounded-md bg-ink px-3 py-1.5 text-sm font-medium text-paper"
+              >
                 New study
               </Link>
             ) : null}
@@ -50,13 +57,23 @@ export function StudiesPage() {
               {(list) => (
                 <ul className="flex flex-col gap-1 text-sm">
                   <li>
-                    <button type="button" className={`w-full rounded px-2 py-1 text-left ${projectId === '' ? 'bg-signal-soft font-medium' : 'hover:bg-paper'}`} onClick={() => setProjectId('')} aria-pressed={projectId === ''}>
+                    <button
+                      type="button"
+                      className={`w-full rounded px-2 py-1 text-left ${projectId === '' ? 'bg-signal-soft font-medium' : 'hover:bg-paper'}`}
+                      onClick={() => setProjectId('')}
+                      aria-pressed={projectId === ''}
+                    >
                       All projects
                     </button>
                   </li>
                   {list.map((p) => (
                     <li key={p.id}>
-                      <button type="button" className={`w-full rounded px-2 py-1 text-left ${projectId === p.id ? 'bg-signal-soft font-medium' : 'hover:bg-paper'}`} onClick={() => setProjectId(p.id)} aria-pressed={projectId === p.id}>
+                      <button
+                        type="button"
+                        className={`w-full rounded px-2 py-1 text-left ${projectId === p.id ? 'bg-signal-soft font-medium' : 'hover:bg-paper'}`}
+                        onClick={() => setProjectId(p.id)}
+                        aria-pressed={projectId === p.id}
+                      >
                         {p.name} <span className="text-xs text-ink-soft">({p.studyCount})</span>
                       </button>
                     </li>
@@ -69,19 +86,41 @@ export function StudiesPage() {
         </div>
         <Panel>
           <div className="mb-3 max-w-md">
-            <TextField label="Search studies" type="search" placeholder="Name or note" value={search} onChange={(e) => setSearch(e.target.value)} />
+            <TextField
+              label="Search studies"
+              type="search"
+              placeholder="Name or note"
+              value={search}
+              onChange={(e) => setSearch(e.target.value)}
+            />
           </div>
-          <QueryView query={studies} empty={q ? `No study matches “${q}”.` : 'No studies here yet. Create one to start.'} loadingLabel="Loading studies…">
+          <QueryView
+            query={studies}
+            empty={q ? `No study matches “${q}”.` : 'No studies here yet. Create one to start.'}
+            loadingLabel="Loading studies…"
+          >
             {(list) => (
               <table className="w-full text-sm [&_td]:px-2 [&_th]:px-2">
                 <thead className="text-left text-xs text-ink-soft uppercase">
                   <tr>
-                    <th scope="col" className="w-8 py-1"><span className="sr-only">Select</span></th>
-                    <th scope="col" className="py-1">Study</th>
-                    <th scope="col" className="py-1">Method</th>
-                    <th scope="col" className="py-1">Revision</th>
-                    <th scope="col" className="py-1">Updated</th>
-                    <th scope="col" className="py-1"><span className="sr-only">Actions</span></th>
+                    <th scope="col" className="w-8 py-1">
+                      <span className="sr-only">Select</span>
+                    </th>
+                    <th scope="col" className="py-1">
+                      Study
+                    </th>
+                    <th scope="col" className="py-1">
+                      Method
+                    </th>
+                    <th scope="col" className="py-1">
+                      Revision
+                    </th>
+                    <th scope="col" className="py-1">
+                      Updated
+                    </th>
+                    <th scope="col" className="py-1">
+                      <span className="sr-only">Actions</span>
+                    </th>
                   </tr>
                 </thead>
                 <tbody>
@@ -93,11 +132,18 @@ export function StudiesPage() {
                           className="accent-signal"
                           aria-label={`Select ${s.name} to compare`}
                           checked={selected.includes(s.id)}
-                          onChange={(e) => setSelected((cur) => (e.target.checked ? [...cur, s.id] : cur.filter((id) => id !== s.id)))}
+                          onChange={(e) =>
+                            setSelected((cur) =>
+                              e.target.checked ? [...cur, s.id] : cur.filter((id) => id !== s.id),
+                            )
+                          }
                         />
                       </td>
                       <td className="py-1.5">
-                        <Link className="font-medium underline-offset-2 hover:underline" to={paths.study.getHref(s.id)}>
+                        <Link
+                          className="font-medium underline-offset-2 hover:underline"
+                          to={paths.study.getHref(s.id)}
+                        >
                           {s.name}
                         </Link>
                         {s.note ? <p className="text-xs text-ink-soft">{s.note}</p> : null}
@@ -111,7 +157,14 @@ export function StudiesPage() {
                       <td className="py-1.5 text-xs">{formatDate(s.updatedAt)}</td>
                       <td className="py-1.5 text-right">
                         {canEdit ? (
-                          <Button variant="ghost" aria-label={`Duplicate ${s.name}`} busy={duplicate.isPending && duplicate.variables?.id === s.id} onClick={() => duplicate.mutate({ id: s.id, name: `${s.name} (copy)`.slice(0, 120) })}>
+                          <Button
+                            variant="ghost"
+                            aria-label={`Duplicate ${s.name}`}
+                            busy={duplicate.isPending && duplicate.variables?.id === s.id}
+                            onClick={() =>
+                              duplicate.mutate({ id: s.id, name: `${s.name} (copy)`.slice(0, 120) })
+                            }
+                          >
                             Duplicate
                           </Button>
                         ) : null}
@@ -122,7 +175,11 @@ export function StudiesPage() {
               </table>
             )}
           </QueryView>
-          {duplicate.isError ? <p role="alert" className="mt-2 text-sm text-bad">{errorMessage(duplicate.error)}</p> : null}
+          {duplicate.isError ? (
+            <p role="alert" className="mt-2 text-sm text-bad">
+              {errorMessage(duplicate.error)}
+            </p>
+          ) : null}
         </Panel>
       </div>
     </div>
@@ -135,14 +192,39 @@ function NewProjectForm({ onCreated }: { onCreated: (id: string) => void }) {
   const create = useCreateProject();
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    create.mutate({ name, description }, { onSuccess: (p) => { setName(''); setDescription(''); onCreated(p.id); } });
+    create.mutate(
+      { name, description },
+      {
+        onSuccess: (p) => {
+          setName('');
+          setDescription('');
+          onCreated(p.id);
+        },
+      },
+    );
   };
   return (
     <Panel title="New project">
       <form onSubmit={submit} className="flex flex-col gap-2" noValidate>
-        <TextField label="Project name" value={name} onChange={(e) => setName(e.target.value)} error={fieldErrorOf(create.error, 'name')} />
-        <TextField label="Description" value={description} onChange={(e) => setDescription(e.target.value)} error={fieldErrorOf(create.error, 'description')} />
-        {create.isError && !fieldErrorOf(create.error, 'name') && !fieldErrorOf(create.error, 'description') ? <p role="alert" className="text-xs text-bad">{errorMessage(create.error)}</p> : null}
+        <TextField
+          label="Project name"
+          value={name}
+          onChange={(e) => setName(e.target.value)}
+          error={fieldErrorOf(create.error, 'name')}
+        />
+        <TextField
+          label="Description"
+          value={description}
+          onChange={(e) => setDescription(e.target.value)}
+          error={fieldErrorOf(create.error, 'description')}
+        />
+        {create.isError &&
+        !fieldErrorOf(create.error, 'name') &&
+        !fieldErrorOf(create.error, 'description') ? (
+          <p role="alert" className="text-xs text-bad">
+            {errorMessage(create.error)}
+          </p>
+        ) : null}
         <Button type="submit" busy={create.isPending}>
           Create project
         </Button>

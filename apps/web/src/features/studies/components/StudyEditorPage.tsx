@@ -8,8 +8,23 @@ import { Button } from '../../../components/ui/Button';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState, Loading } from '../../../components/ui/QueryState';
 import { roleAtLeast, useMe } from '../../../lib/me';
-import { useCreateStudy, useDuplicateStudy, useProjects, useStudy, useStudyReport, useUpdateStudy, type Study, type StudyCreate } from '../api/studies';
-import { defaultDraft, designOf, draftFormErrors, draftOf, type StudyDraft } from '../model/studyDraft';
+import {
+  useCreateStudy,
+  useDuplicateStudy,
+  useProjects,
+  useStudy,
+  useStudyReport,
+  useUpdateStudy,
+  type Study,
+  type StudyCreate,
+} from '../api/studies';
+import {
+  defaultDraft,
+  designOf,
+  draftFormErrors,
+  draftOf,
+  type StudyDraft,
+} from '../model/studyDraft';
 import { HarmonicLimitsPanel } from './HarmonicLimitsPanel';
 import { ReportCautions } from './ReportCautions';
 import { RevisionHistory } from './RevisionHistory';
@@ -22,12 +37,25 @@ export function StudyEditorPage() {
   const { studyId } = useParams();
   const study = useStudy(studyId);
   if (studyId && study.isPending) return <Loading label="Loading the study…" />;
-  if (studyId && study.isError) return <ErrorState error={study.error} onRetry={() => study.refetch()} />;
-  return <StudyEditor key={`${studyId ?? 'new'}-${study.data?.revision ?? 0}`} study={study.data} />;
+  if (studyId && study.isError)
+    return <ErrorState error={study.error} onRetry={() => study.refetch()} />;
+  return (
+    <StudyEditor key={`${studyId ?? 'new'}-${study.data?.revision ?? 0}`} study={study.data} />
+  );
 }
 
 /** Fields a save's field errors can land on (the rest are shown above the form). */
-const FORM_PATHS = ['name', 'projectId', 'note', 'design.vdc', 'design.fundamentalFrequency', 'design.carrierFrequency', 'design.modulation', 'design.load', 'design.filter'];
+const FORM_PATHS = [
+  'name',
+  'projectId',
+  'note',
+  'design.vdc',
+  'design.fundamentalFrequency',
+  'design.carrierFrequency',
+  'design.modulation',
+  'design.load',
+  'design.filter',
+];
 
 function StudyEditor({ study }: { study: Study | undefined }) {
   const [params] = useSearchParams();
@@ -38,18 +66,24 @@ function StudyEditor({ study }: { study: Study | undefined }) {
   const me = useMe();
   const projects = useProjects();
   const canEdit = roleAtLeast(me.data?.role, 'engineer');
-  const [draft, setDraft] = useState<StudyDraft>(() => (study ? draftOf(study.design, study) : defaultDraft(params.get('projectId') ?? '')));
+  const [draft, setDraft] = useState<StudyDraft>(() =>
+    study ? draftOf(study.design, study) : defaultDraft(params.get('projectId') ?? ''),
+  );
   const [dirty, setDirty] = useState(false);
   const onChange = useCallback((patch: Partial<StudyDraft>) => {
     setDraft((current) => ({ ...current, ...patch }));
     setDirty(true);
   }, []);
   // Pick the first project for a new study once the list arrives.
-  if (!study && !draft.projectId && projects.data?.[0]) setDraft((d) => ({ ...d, projectId: projects.data[0]?.id ?? '' }));
+  if (!study && !draft.projectId && projects.data?.[0])
+    setDraft((d) => ({ ...d, projectId: projects.data[0]?.id ?? '' }));
 
   const design = useMemo(() => designOf(draft), [draft]);
   const [busVoltage, setBusVoltage] = useState<number | undefined>(undefined);
-  const options = useMemo<AnalyseDesignOptions>(() => (busVoltage === undefined ? {} : { busVoltage }), [busVoltage]);
+  const options = useMemo<AnalyseDesignOptions>(
+    () => (busVoltage === undefined ? {} : { busVoltage }),
+    [busVoltage],
+  );
   const preview = usePreview(design, options);
   const saved = useStudyReport(study?.id);
   const create = useCreateStudy();
@@ -63,15 +97,29 @@ function StudyEditor({ study }: { study: Study | undefined }) {
 
   const save = () => {
     if (blocked) return;
-    const content: StudyCreate = { projectId: draft.projectId, name: draft.name, note: draft.note, design };
+    const content: StudyCreate = {
+      projectId: draft.projectId,
+      name: draft.name,
+      note: draft.note,
+      design,
+    };
     if (study) {
       const { projectId: _projectId, ...rest } = content;
       update.mutate(
         { id: study.id, body: { ...rest, baseRevision: study.revision } },
-        { onSuccess: (next) => navigate(location.pathname, { replace: true, state: { savedRevision: next.revision } }) },
+        {
+          onSuccess: (next) =>
+            navigate(location.pathname, { replace: true, state: { savedRevision: next.revision } }),
+        },
       );
     } else {
-      create.mutate(content, { onSuccess: (created) => navigate(paths.study.getHref(created.id), { replace: true, state: { savedRevision: created.revision } }) });
+      create.mutate(content, {
+        onSuccess: (created) =>
+          navigate(paths.study.getHref(created.id), {
+            replace: true,
+            state: { savedRevision: created.revision },
+          }),
+      });
     }
   };
 
@@ -84,19 +132,38 @@ function StudyEditor({ study }: { study: Study | undefined }) {
     <div>
       <PageHeader
         title={study ? study.name : 'New study'}
-        subtitle={study ? `Revision ${study.revision} · ${study.method}` : 'Choose a method and its parameters; the preview follows every change.'}
+        subtitle={
+          study
+            ? `Revision ${study.revision} · ${study.method}`
+            : 'Choose a method and its parameters; the preview follows every change.'
+        }
         actions={
           <>
             {study ? (
               <>
-                <Link className="rounded-md border border-rule px-3 py-1.5 text-sm" to={paths.studyReport.getHref(study.id)}>
+                <Link
+                  className="rounded-md border border-rule px-3 py-1.5 text-sm"
+                  to={paths.studyReport.getHref(study.id)}
+                >
                   Printable report
                 </Link>
-                <Link className="rounded-md border border-rule px-3 py-1.5 text-sm" to={paths.compare.getHref([study.id])}>
+                <Link
+                  className="rounded-md border border-rule px-3 py-1.5 text-sm"
+                  to={paths.compare.getHref([study.id])}
+                >
                   Compare
                 </Link>
                 {canEdit ? (
-                  <Button variant="secondary" busy={duplicate.isPending} onClick={() => duplicate.mutate({ id: study.id, name: `${study.name} (copy)`.slice(0, 120) }, { onSuccess: (copy) => navigate(paths.study.getHref(copy.id)) })}>
+                  <Button
+                    variant="secondary"
+                    busy={duplicate.isPending}
+                    onClick={() =>
+                      duplicate.mutate(
+                        { id: study.id, name: `${study.name} (copy)`.slice(0, 120) },
+                        { onSuccess: (copy) => navigate(paths.study.getHref(copy.id)) },
+                      )
+                    }
+                  >
                     Duplicate
                   </Button>
                 ) : null}
@@ -106,7 +173,13 @@ function StudyEditor({ study }: { study: Study | undefined }) {
               onClick={save}
               busy={saving}
               disabled={!canEdit || blocked}
-              title={!canEdit ? 'Viewers can read and compute but not save' : blocked ? 'Correct the marked fields to save' : undefined}
+              title={
+                !canEdit
+                  ? 'Viewers can read and compute but not save'
+                  : blocked
+                    ? 'Correct the marked fields to save'
+                    : undefined
+              }
             >
               {study ? 'Save revision' : 'Create study'}
             </Button>
@@ -114,17 +187,30 @@ function StudyEditor({ study }: { study: Study | undefined }) {
         }
       />
       {!canEdit && me.data ? (
-        <p className="mb-4 rounded-md border border-rule bg-panel px-3 py-2 text-sm" role="note" data-testid="read-only">
-          You have the <strong>{me.data.role}</strong> role: you can change the values to explore the preview, but saving needs an engineer.
+        <p
+          className="mb-4 rounded-md border border-rule bg-panel px-3 py-2 text-sm"
+          role="note"
+          data-testid="read-only"
+        >
+          You have the <strong>{me.data.role}</strong> role: you can change the values to explore
+          the preview, but saving needs an engineer.
         </p>
       ) : null}
-      {generalSaveError ? <div className="mb-3"><ErrorState error={saveError} /></div> : null}
+      {generalSaveError ? (
+        <div className="mb-3">
+          <ErrorState error={saveError} />
+        </div>
+      ) : null}
       {canEdit && (designErrors.length > 0 || formErrors.length > 0) ? (
         <p role="status" className="mb-3 text-sm text-bad" data-testid="save-blocked">
           {study ? 'Save revision' : 'Create study'} waits until the marked fields are corrected.
         </p>
       ) : null}
-      {savedRevision && savedRevision === study?.revision && !dirty ? <p role="status" className="mb-3 text-sm text-good">Saved as revision {savedRevision}.</p> : null}
+      {savedRevision && savedRevision === study?.revision && !dirty ? (
+        <p role="status" className="mb-3 text-sm text-good">
+          Saved as revision {savedRevision}.
+        </p>
+      ) : null}
 
       <div className="grid gap-5 lg:grid-cols-[360px_minmax(0,1fr)]">
         <div className="flex flex-col gap-4">
@@ -140,15 +226,26 @@ function StudyEditor({ study }: { study: Study | undefined }) {
             />
           </Panel>
           {report ? (
-            <HarmonicLimitsPanel report={report} busVoltage={busVoltage} onBusVoltage={setBusVoltage} busVoltageError={preview?.errors.find((e) => e.field === 'busVoltage')?.message} />
+            <HarmonicLimitsPanel
+              report={report}
+              busVoltage={busVoltage}
+              onBusVoltage={setBusVoltage}
+              busVoltageError={preview?.errors.find((e) => e.field === 'busVoltage')?.message}
+            />
           ) : null}
           {study ? <RevisionHistory study={study} canEdit={canEdit} /> : null}
         </div>
         <div className="flex min-w-0 flex-col gap-4" aria-live="off">
           <p className="text-xs text-ink-soft" data-testid="preview-time">
-            {preview ? `Live report by the library in this browser: ${formatNumber(preview.milliseconds, 3)} ms${preview.stale ? ' (updating…)' : ''}.` : 'Computing the live report…'}
-            {study && saved.data ? ` Saved revision on the server: THD ${formatPercent(saved.data.bridge.thd)} (exact, ${saved.data.bridge.name}).` : ''}
-            {study && saved.isError ? ` Server report unavailable: ${errorMessage(saved.error)}` : ''}
+            {preview
+              ? `Live report by the library in this browser: ${formatNumber(preview.milliseconds, 3)} ms${preview.stale ? ' (updating…)' : ''}.`
+              : 'Computing the live report…'}
+            {study && saved.data
+              ? ` Saved revision on the server: THD ${formatPercent(saved.data.bridge.thd)} (exact, ${saved.data.bridge.name}).`
+              : ''}
+            {study && saved.isError
+              ? ` Server report unavailable: ${errorMessage(saved.error)}`
+              : ''}
           </p>
           {report ? (
             <>
@@ -156,7 +253,9 @@ function StudyEditor({ study }: { study: Study | undefined }) {
               <StudyCharts report={report} fileStem={fileStem} />
             </>
           ) : preview ? (
-            <ErrorState error={new Error(preview.errors.map((e) => e.message).join('; ') || 'No preview')} />
+            <ErrorState
+              error={new Error(preview.errors.map((e) => e.message).join('; ') || 'No preview')}
+            />
           ) : (
             <Loading label="Computing the live report…" />
           )}

@@ -1,4 +1,10 @@
-import { DESIGN_BOUNDS, designFrequencyRatio, MAX_DESIGN_FREQUENCY_RATIO, type DesignBoundsField, type ModulationMethod } from '@pulsewright/modulation';
+import {
+  DESIGN_BOUNDS,
+  designFrequencyRatio,
+  MAX_DESIGN_FREQUENCY_RATIO,
+  type DesignBoundsField,
+  type ModulationMethod,
+} from '@pulsewright/modulation';
 import { fieldErrorOf } from '../../../lib/api';
 import { NumberField, SelectField, SliderField, TextField } from '../../../components/ui/Field';
 import type { Project } from '../api/studies';
@@ -17,7 +23,12 @@ import {
   SPACE_VECTOR_SAMPLING_OPTIONS,
   ZERO_SEQUENCE_OPTIONS,
 } from '../../../lib/modulationOptions';
-import { isCarrierMethod, isPatternMethod, type StoredPattern, type StudyDraft } from '../model/studyDraft';
+import {
+  isCarrierMethod,
+  isPatternMethod,
+  type StoredPattern,
+  type StudyDraft,
+} from '../model/studyDraft';
 
 export interface StudyFormProps {
   draft: StudyDraft;
@@ -33,12 +44,17 @@ export interface StudyFormProps {
 }
 
 /** Sliders cover the useful part of a range; the number box beside takes the whole range. */
-const SLIDERS = { vdc: { min: 10, max: 1000 }, ma: { min: 0.02, max: 1.5 }, mf: { min: 1, max: 201 } } as const;
+const SLIDERS = {
+  vdc: { min: 10, max: 1000 },
+  ma: { min: 0.02, max: 1.5 },
+  mf: { min: 1, max: 201 },
+} as const;
 
 const RADIANS_TO_DEGREES = 180 / Math.PI;
 
 /** A bound as people write it: 100,000 and 0.000001, six significant digits at most. */
-const formatBound = (value: number) => value.toLocaleString('en-US', { maximumSignificantDigits: 6 });
+const formatBound = (value: number) =>
+  value.toLocaleString('en-US', { maximumSignificantDigits: 6 });
 
 /** The allowed range of a design field in the unit the form shows (the library's DESIGN_BOUNDS). */
 function boundsHint(path: DesignBoundsField, scale = 1, unit = ''): string {
@@ -48,21 +64,38 @@ function boundsHint(path: DesignBoundsField, scale = 1, unit = ''): string {
 }
 
 /** The study's design with units and the library's ranges; errors from the server and the library beside each field. */
-export function StudyForm({ draft, onChange, readOnly, projects, saveError, previewErrors, filterResonance }: StudyFormProps) {
+export function StudyForm({
+  draft,
+  onChange,
+  readOnly,
+  projects,
+  saveError,
+  previewErrors,
+  filterResonance,
+}: StudyFormProps) {
   const claimed = new Set<string>();
-  const matches = (field: string, path: string) => field === path || field.startsWith(`${path}.`) || field.startsWith(`${path}[`);
+  const matches = (field: string, path: string) =>
+    field === path || field.startsWith(`${path}.`) || field.startsWith(`${path}[`);
   /** The error of a field by its design path(s): the server's answer to a save first, then the library's. */
   const error = (...paths: string[]) => {
     for (const e of previewErrors) if (paths.some((p) => matches(e.field, p))) claimed.add(e.field);
-    return paths.map((p) => fieldErrorOf(saveError, p)).find(Boolean) ?? previewErrors.find((e) => paths.some((p) => matches(e.field, p)))?.message;
+    return (
+      paths.map((p) => fieldErrorOf(saveError, p)).find(Boolean) ??
+      previewErrors.find((e) => paths.some((p) => matches(e.field, p)))?.message
+    );
   };
-  const set = <K extends keyof StudyDraft>(key: K) => (value: StudyDraft[K]) => onChange({ [key]: value } as Partial<StudyDraft>);
+  const set =
+    <K extends keyof StudyDraft>(key: K) =>
+    (value: StudyDraft[K]) =>
+      onChange({ [key]: value } as Partial<StudyDraft>);
   const { method } = draft;
   const pattern = isPatternMethod(method);
   const threePhase = method === 'three-phase' || method === 'space-vector';
   // A pattern method is listed for a study that holds such a pattern; new ones come from the elimination page.
   const methodOptions = METHOD_OPTIONS.map((o) =>
-    isPatternMethod(o.value) && draft.pattern?.method !== o.value ? { ...o, label: `${o.label} (saved from the elimination page)`, disabled: true } : o,
+    isPatternMethod(o.value) && draft.pattern?.method !== o.value
+      ? { ...o, label: `${o.label} (saved from the elimination page)`, disabled: true }
+      : o,
   );
   let ratio = Number.NaN;
   try {
@@ -70,47 +103,154 @@ export function StudyForm({ draft, onChange, readOnly, projects, saveError, prev
   } catch {
     // The library's message goes on the carrier field through the preview's errors.
   }
-  const setRatio = (mf: number) => onChange({ carrierFrequency: Math.round(mf) * draft.fundamentalFrequency });
+  const setRatio = (mf: number) =>
+    onChange({ carrierFrequency: Math.round(mf) * draft.fundamentalFrequency });
   // Synchronous carrier PWM: a new fundamental keeps the frequency ratio, so the carrier follows.
   const setFundamental = (f: number) =>
-    onChange(isCarrierMethod(method) && Number.isFinite(ratio) && Number.isFinite(f) ? { fundamentalFrequency: f, carrierFrequency: ratio * f } : { fundamentalFrequency: f });
+    onChange(
+      isCarrierMethod(method) && Number.isFinite(ratio) && Number.isFinite(f)
+        ? { fundamentalFrequency: f, carrierFrequency: ratio * f }
+        : { fundamentalFrequency: f },
+    );
 
   const body = (
     <>
       <fieldset disabled={readOnly} className="flex flex-col gap-3">
         <legend className="mb-1 text-sm font-semibold tracking-wide uppercase">Study</legend>
-        <TextField label="Name" value={draft.name} onChange={(e) => set('name')(e.target.value)} error={error('name')} maxLength={120} required />
+        <TextField
+          label="Name"
+          value={draft.name}
+          onChange={(e) => set('name')(e.target.value)}
+          error={error('name')}
+          maxLength={120}
+          required
+        />
         <SelectField
           label="Project"
           value={draft.projectId}
           onChange={(e) => set('projectId')(e.target.value)}
           error={error('projectId')}
-          options={[{ value: '', label: projects.length ? 'Choose a project…' : 'No projects yet' }, ...projects.map((p) => ({ value: p.id, label: p.name }))]}
+          options={[
+            { value: '', label: projects.length ? 'Choose a project…' : 'No projects yet' },
+            ...projects.map((p) => ({ value: p.id, label: p.name })),
+          ]}
         />
-        <TextField label="Note" value={draft.note} onChange={(e) => set('note')(e.target.value)} error={error('note')} maxLength={2000} />
+        <TextField
+          label="Note"
+          value={draft.note}
+          onChange={(e) => set('note')(e.target.value)}
+          error={error('note')}
+          maxLength={2000}
+        />
       </fieldset>
 
       <fieldset disabled={readOnly} className="flex flex-col gap-3">
         <legend className="mb-1 text-sm font-semibold tracking-wide uppercase">Modulation</legend>
-        <SelectField label="Method" value={method} onChange={(e) => set('method')(e.target.value as ModulationMethod)} error={error('modulation.method', 'method')} options={methodOptions} />
-        {pattern ? <PatternSummary pattern={draft.pattern} vdc={draft.vdc} error={error('modulation.angles', 'modulation.eliminate', 'modulation.kind', 'modulation.fundamental', 'modulation')} /> : null}
-        {method === 'sine-triangle' ? <SelectField label="Bridge scheme" value={draft.scheme} onChange={(e) => set('scheme')(e.target.value as StudyDraft['scheme'])} error={error('modulation.scheme')} options={SCHEME_OPTIONS} /> : null}
-        {method === 'three-phase' ? <SelectField label="Zero sequence" value={draft.zeroSequence} onChange={(e) => set('zeroSequence')(e.target.value as StudyDraft['zeroSequence'])} error={error('modulation.zeroSequence')} options={ZERO_SEQUENCE_OPTIONS} /> : null}
-        {method === 'sine-triangle' || method === 'three-phase' ? <SelectField label="Sampling" value={draft.sampling} onChange={(e) => set('sampling')(e.target.value as StudyDraft['sampling'])} error={error('modulation.sampling')} options={SAMPLING_OPTIONS} /> : null}
+        <SelectField
+          label="Method"
+          value={method}
+          onChange={(e) => set('method')(e.target.value as ModulationMethod)}
+          error={error('modulation.method', 'method')}
+          options={methodOptions}
+        />
+        {pattern ? (
+          <PatternSummary
+            pattern={draft.pattern}
+            vdc={draft.vdc}
+            error={error(
+              'modulation.angles',
+              'modulation.eliminate',
+              'modulation.kind',
+              'modulation.fundamental',
+              'modulation',
+            )}
+          />
+        ) : null}
+        {method === 'sine-triangle' ? (
+          <SelectField
+            label="Bridge scheme"
+            value={draft.scheme}
+            onChange={(e) => set('scheme')(e.target.value as StudyDraft['scheme'])}
+            error={error('modulation.scheme')}
+            options={SCHEME_OPTIONS}
+          />
+        ) : null}
+        {method === 'three-phase' ? (
+          <SelectField
+            label="Zero sequence"
+            value={draft.zeroSequence}
+            onChange={(e) => set('zeroSequence')(e.target.value as StudyDraft['zeroSequence'])}
+            error={error('modulation.zeroSequence')}
+            options={ZERO_SEQUENCE_OPTIONS}
+          />
+        ) : null}
+        {method === 'sine-triangle' || method === 'three-phase' ? (
+          <SelectField
+            label="Sampling"
+            value={draft.sampling}
+            onChange={(e) => set('sampling')(e.target.value as StudyDraft['sampling'])}
+            error={error('modulation.sampling')}
+            options={SAMPLING_OPTIONS}
+          />
+        ) : null}
         {method === 'space-vector' ? (
           <>
-            <SelectField label="Switching sequence" value={draft.sequence} onChange={(e) => set('sequence')(e.target.value as StudyDraft['sequence'])} error={error('modulation.sequence')} options={SEQUENCE_OPTIONS} />
+            <SelectField
+              label="Switching sequence"
+              value={draft.sequence}
+              onChange={(e) => set('sequence')(e.target.value as StudyDraft['sequence'])}
+              error={error('modulation.sequence')}
+              options={SEQUENCE_OPTIONS}
+            />
             {draft.sequence === 'five-segment' ? (
-              <SelectField label="Zero-vector clamping" value={draft.clamping} onChange={(e) => set('clamping')(e.target.value as StudyDraft['clamping'])} error={error('modulation.clamping')} options={CLAMPING_OPTIONS} />
+              <SelectField
+                label="Zero-vector clamping"
+                value={draft.clamping}
+                onChange={(e) => set('clamping')(e.target.value as StudyDraft['clamping'])}
+                error={error('modulation.clamping')}
+                options={CLAMPING_OPTIONS}
+              />
             ) : (
-              <NumberField label="Zero split" hint={`share of the zero time on 000, ${boundsHint('modulation.zeroSplit')}; 0.5 is centred`} value={draft.zeroSplit} error={error('modulation.zeroSplit')} onChange={set('zeroSplit')} />
+              <NumberField
+                label="Zero split"
+                hint={`share of the zero time on 000, ${boundsHint('modulation.zeroSplit')}; 0.5 is centred`}
+                value={draft.zeroSplit}
+                error={error('modulation.zeroSplit')}
+                onChange={set('zeroSplit')}
+              />
             )}
-            <SelectField label="Sampling" value={draft.spaceVectorSampling} onChange={(e) => set('spaceVectorSampling')(e.target.value as StudyDraft['spaceVectorSampling'])} error={error('modulation.sampling')} options={SPACE_VECTOR_SAMPLING_OPTIONS} />
-            <SelectField label="Overmodulation" value={draft.overmodulation} onChange={(e) => set('overmodulation')(e.target.value as StudyDraft['overmodulation'])} error={error('modulation.overmodulation')} options={OVERMODULATION_OPTIONS} />
+            <SelectField
+              label="Sampling"
+              value={draft.spaceVectorSampling}
+              onChange={(e) =>
+                set('spaceVectorSampling')(e.target.value as StudyDraft['spaceVectorSampling'])
+              }
+              error={error('modulation.sampling')}
+              options={SPACE_VECTOR_SAMPLING_OPTIONS}
+            />
+            <SelectField
+              label="Overmodulation"
+              value={draft.overmodulation}
+              onChange={(e) =>
+                set('overmodulation')(e.target.value as StudyDraft['overmodulation'])
+              }
+              error={error('modulation.overmodulation')}
+              options={OVERMODULATION_OPTIONS}
+            />
           </>
         ) : null}
         {pattern ? null : (
-          <SliderField label="DC bus" unit="V" value={draft.vdc} min={SLIDERS.vdc.min} max={SLIDERS.vdc.max} step={1} hint={boundsHint('vdc', 1, 'V')} error={error('vdc')} onChange={set('vdc')} />
+          <SliderField
+            label="DC bus"
+            unit="V"
+            value={draft.vdc}
+            min={SLIDERS.vdc.min}
+            max={SLIDERS.vdc.max}
+            step={1}
+            hint={boundsHint('vdc', 1, 'V')}
+            error={error('vdc')}
+            onChange={set('vdc')}
+          />
         )}
         {pattern ? null : (
           <SliderField
@@ -119,17 +259,30 @@ export function StudyForm({ draft, onChange, readOnly, projects, saveError, prev
             min={SLIDERS.ma.min}
             max={SLIDERS.ma.max}
             step={0.01}
-            hint={method === 'space-vector' ? `ma = 2m/√3 with m ${boundsHint('modulation.m')} (six-step); m above 1 is overmodulation` : `${boundsHint('modulation.ma')}; above 1 is overmodulation`}
+            hint={
+              method === 'space-vector'
+                ? `ma = 2m/√3 with m ${boundsHint('modulation.m')} (six-step); m above 1 is overmodulation`
+                : `${boundsHint('modulation.ma')}; above 1 is overmodulation`
+            }
             error={error('modulation.ma', 'modulation.m')}
             onChange={set('ma')}
           />
         )}
-        <NumberField label="Fundamental frequency" unit="Hz" value={draft.fundamentalFrequency} hint={boundsHint('fundamentalFrequency', 1, 'Hz')} error={error('fundamentalFrequency')} onChange={setFundamental} />
+        <NumberField
+          label="Fundamental frequency"
+          unit="Hz"
+          value={draft.fundamentalFrequency}
+          hint={boundsHint('fundamentalFrequency', 1, 'Hz')}
+          error={error('fundamentalFrequency')}
+          onChange={setFundamental}
+        />
         {isCarrierMethod(method) ? (
           <>
             <SliderField
               label="Frequency ratio mf"
-              value={Number.isFinite(ratio) ? ratio : draft.carrierFrequency / draft.fundamentalFrequency}
+              value={
+                Number.isFinite(ratio) ? ratio : draft.carrierFrequency / draft.fundamentalFrequency
+              }
               min={SLIDERS.mf.min}
               max={SLIDERS.mf.max}
               step={1}
@@ -140,53 +293,151 @@ export function StudyForm({ draft, onChange, readOnly, projects, saveError, prev
               label="Carrier frequency"
               unit="Hz"
               value={draft.carrierFrequency}
-              hint={Number.isFinite(ratio) ? `mf = ${ratio} · a whole multiple of the fundamental` : 'a whole multiple of the fundamental'}
+              hint={
+                Number.isFinite(ratio)
+                  ? `mf = ${ratio} · a whole multiple of the fundamental`
+                  : 'a whole multiple of the fundamental'
+              }
               error={error('carrierFrequency')}
               onChange={set('carrierFrequency')}
             />
             {method !== 'space-vector' ? (
-              <NumberField label="Carrier phase" unit="°" value={draft.carrierPhase} scale={RADIANS_TO_DEGREES} hint="0 puts a carrier valley at the reference's positive peak" error={error('modulation.carrierPhase')} onChange={set('carrierPhase')} />
+              <NumberField
+                label="Carrier phase"
+                unit="°"
+                value={draft.carrierPhase}
+                scale={RADIANS_TO_DEGREES}
+                hint="0 puts a carrier valley at the reference's positive peak"
+                error={error('modulation.carrierPhase')}
+                onChange={set('carrierPhase')}
+              />
             ) : null}
           </>
         ) : null}
       </fieldset>
 
       <fieldset disabled={readOnly} className="flex flex-col gap-3">
-        <legend className="mb-1 text-sm font-semibold tracking-wide uppercase">{threePhase ? 'Load per phase (star, series R-L)' : 'Load (series R-L)'}</legend>
+        <legend className="mb-1 text-sm font-semibold tracking-wide uppercase">
+          {threePhase ? 'Load per phase (star, series R-L)' : 'Load (series R-L)'}
+        </legend>
         <label className="flex items-center gap-2 text-sm">
-          <input type="checkbox" checked={draft.loadOn} onChange={(e) => set('loadOn')(e.target.checked)} className="accent-signal" />
+          <input
+            type="checkbox"
+            checked={draft.loadOn}
+            onChange={(e) => set('loadOn')(e.target.checked)}
+            className="accent-signal"
+          />
           Include a load
         </label>
         {draft.loadOn ? (
           <div className="grid grid-cols-2 gap-3">
-            <NumberField label="Resistance R" unit="Ω" value={draft.loadR} hint={boundsHint('load.r', 1, 'Ω')} error={error('load.r')} onChange={set('loadR')} />
-            <NumberField label="Inductance L" unit="mH" value={draft.loadL} scale={1e3} hint={boundsHint('load.l', 1e3, 'mH')} error={error('load.l')} onChange={set('loadL')} />
-            <NumberField label="Back-EMF" unit="V peak" value={draft.emf} hint={boundsHint('load.emf.amplitude', 1, 'V')} error={error('load.emf.amplitude', 'load.emf')} onChange={set('emf')} />
-            <NumberField label="Back-EMF phase" unit="°" value={draft.emfPhase} scale={RADIANS_TO_DEGREES} hint={boundsHint('load.emf.phase', RADIANS_TO_DEGREES, '°')} error={error('load.emf.phase')} onChange={set('emfPhase')} />
+            <NumberField
+              label="Resistance R"
+              unit="Ω"
+              value={draft.loadR}
+              hint={boundsHint('load.r', 1, 'Ω')}
+              error={error('load.r')}
+              onChange={set('loadR')}
+            />
+            <NumberField
+              label="Inductance L"
+              unit="mH"
+              value={draft.loadL}
+              scale={1e3}
+              hint={boundsHint('load.l', 1e3, 'mH')}
+              error={error('load.l')}
+              onChange={set('loadL')}
+            />
+            <NumberField
+              label="Back-EMF"
+              unit="V peak"
+              value={draft.emf}
+              hint={boundsHint('load.emf.amplitude', 1, 'V')}
+              error={error('load.emf.amplitude', 'load.emf')}
+              onChange={set('emf')}
+            />
+            <NumberField
+              label="Back-EMF phase"
+              unit="°"
+              value={draft.emfPhase}
+              scale={RADIANS_TO_DEGREES}
+              hint={boundsHint('load.emf.phase', RADIANS_TO_DEGREES, '°')}
+              error={error('load.emf.phase')}
+              onChange={set('emfPhase')}
+            />
           </div>
         ) : null}
       </fieldset>
 
       <fieldset disabled={readOnly} className="flex flex-col gap-3">
-        <legend className="mb-1 text-sm font-semibold tracking-wide uppercase">{threePhase ? 'Output filter per phase (LC, star)' : 'Output filter (LC)'}</legend>
+        <legend className="mb-1 text-sm font-semibold tracking-wide uppercase">
+          {threePhase ? 'Output filter per phase (LC, star)' : 'Output filter (LC)'}
+        </legend>
         <label className="flex items-center gap-2 text-sm">
-          <input type="checkbox" checked={draft.filterOn} onChange={(e) => set('filterOn')(e.target.checked)} className="accent-signal" />
+          <input
+            type="checkbox"
+            checked={draft.filterOn}
+            onChange={(e) => set('filterOn')(e.target.checked)}
+            className="accent-signal"
+          />
           Include an LC output filter
         </label>
         {draft.filterOn ? (
           <>
             <div className="grid grid-cols-2 gap-3">
-              <NumberField label="Filter L" unit="mH" value={draft.filterL} scale={1e3} hint={boundsHint('filter.l', 1e3, 'mH')} error={error('filter.l')} onChange={set('filterL')} />
-              <NumberField label="Filter C" unit="µF" value={draft.filterC} scale={1e6} hint={boundsHint('filter.c', 1e6, 'µF')} error={error('filter.c')} onChange={set('filterC')} />
-              <NumberField label="Damping R" unit="Ω" value={draft.filterR} hint={boundsHint('filter.rDamping', 1, 'Ω')} error={error('filter.rDamping')} onChange={set('filterR')} />
+              <NumberField
+                label="Filter L"
+                unit="mH"
+                value={draft.filterL}
+                scale={1e3}
+                hint={boundsHint('filter.l', 1e3, 'mH')}
+                error={error('filter.l')}
+                onChange={set('filterL')}
+              />
+              <NumberField
+                label="Filter C"
+                unit="µF"
+                value={draft.filterC}
+                scale={1e6}
+                hint={boundsHint('filter.c', 1e6, 'µF')}
+                error={error('filter.c')}
+                onChange={set('filterC')}
+              />
+              <NumberField
+                label="Damping R"
+                unit="Ω"
+                value={draft.filterR}
+                hint={boundsHint('filter.rDamping', 1, 'Ω')}
+                error={error('filter.rDamping')}
+                onChange={set('filterR')}
+              />
               {draft.dampingPlacement === 'parallel-rc' ? (
-                <NumberField label="Damping C" unit="µF" value={draft.cDamping} scale={1e6} hint={boundsHint('filter.cDamping', 1e6, 'µF')} error={error('filter.cDamping')} onChange={set('cDamping')} />
+                <NumberField
+                  label="Damping C"
+                  unit="µF"
+                  value={draft.cDamping}
+                  scale={1e6}
+                  hint={boundsHint('filter.cDamping', 1e6, 'µF')}
+                  error={error('filter.cDamping')}
+                  onChange={set('cDamping')}
+                />
               ) : null}
             </div>
-            <SelectField label="Damping" value={draft.dampingPlacement} onChange={(e) => set('dampingPlacement')(e.target.value as StudyDraft['dampingPlacement'])} error={error('filter.dampingPlacement')} options={DAMPING_OPTIONS} />
+            <SelectField
+              label="Damping"
+              value={draft.dampingPlacement}
+              onChange={(e) =>
+                set('dampingPlacement')(e.target.value as StudyDraft['dampingPlacement'])
+              }
+              error={error('filter.dampingPlacement')}
+              options={DAMPING_OPTIONS}
+            />
             {filterResonance !== undefined ? (
               <p className="text-xs text-ink-soft" data-testid="filter-resonance">
-                Resonance {formatNumber(filterResonance)} Hz{Number.isFinite(ratio) ? ` (carrier ${formatNumber(draft.carrierFrequency)} Hz)` : ''}
+                Resonance {formatNumber(filterResonance)} Hz
+                {Number.isFinite(ratio)
+                  ? ` (carrier ${formatNumber(draft.carrierFrequency)} Hz)`
+                  : ''}
               </p>
             ) : null}
           </>
@@ -197,7 +448,12 @@ export function StudyForm({ draft, onChange, readOnly, projects, saveError, prev
   // Refusals no field above claims (the design as a whole, an option): listed at the top.
   const unclaimed = previewErrors.filter((e) => !claimed.has(e.field));
   return (
-    <form className="flex flex-col gap-4" onSubmit={(e) => e.preventDefault()} aria-label="Study parameters" noValidate>
+    <form
+      className="flex flex-col gap-4"
+      onSubmit={(e) => e.preventDefault()}
+      aria-label="Study parameters"
+      noValidate
+    >
       {unclaimed.length ? (
         <ul role="alert" className="list-disc rounded-md bg-bad-soft py-2 pl-8 text-sm text-bad">
           {unclaimed.map((e) => (
@@ -211,14 +467,42 @@ export function StudyForm({ draft, onChange, readOnly, projects, saveError, prev
 }
 
 /** The stored pattern of a pattern study, read-only: its angles come from the elimination page. */
-function PatternSummary({ pattern, vdc, error }: { pattern: StoredPattern | null; vdc: number; error?: string | undefined }) {
-  if (!pattern) return <p role="alert" className="text-sm text-bad">{error ?? 'This study has no pattern: pick a point on the harmonic-elimination page and save it as a study.'}</p>;
+function PatternSummary({
+  pattern,
+  vdc,
+  error,
+}: {
+  pattern: StoredPattern | null;
+  vdc: number;
+  error?: string | undefined;
+}) {
+  if (!pattern)
+    return (
+      <p role="alert" className="text-sm text-bad">
+        {error ??
+          'This study has no pattern: pick a point on the harmonic-elimination page and save it as a study.'}
+      </p>
+    );
   return (
-    <div className="rounded border border-rule bg-panel px-3 py-2 text-sm" data-testid="she-pattern">
+    <div
+      className="rounded border border-rule bg-panel px-3 py-2 text-sm"
+      data-testid="she-pattern"
+    >
       <p>
-        {labelOf(PATTERN_KIND_OPTIONS, pattern.kind)} · DC level <span className="num">{formatNumber(vdc)} V</span>
-        {pattern.eliminate?.length ? <> · eliminates orders <span className="num">{pattern.eliminate.join(', ')}</span></> : null}
-        {pattern.fundamental !== undefined ? <> · solved for <span className="num">{formatNumber(pattern.fundamental)} V</span></> : null}
+        {labelOf(PATTERN_KIND_OPTIONS, pattern.kind)} · DC level{' '}
+        <span className="num">{formatNumber(vdc)} V</span>
+        {pattern.eliminate?.length ? (
+          <>
+            {' '}
+            · eliminates orders <span className="num">{pattern.eliminate.join(', ')}</span>
+          </>
+        ) : null}
+        {pattern.fundamental !== undefined ? (
+          <>
+            {' '}
+            · solved for <span className="num">{formatNumber(pattern.fundamental)} V</span>
+          </>
+        ) : null}
       </p>
       <table className="mt-2 w-full text-left text-xs" aria-label="First-quarter switching angles">
         <thead>
@@ -238,8 +522,15 @@ function PatternSummary({ pattern, vdc, error }: { pattern: StoredPattern | null
           ))}
         </tbody>
       </table>
-      <p className="mt-2 text-xs text-ink-soft">The angles were solved on the harmonic-elimination page; pick another point there to change them. Name, note, fundamental frequency, load and filter can be edited here.</p>
-      {error ? <p role="alert" className="mt-1 text-xs text-bad">{error}</p> : null}
+      <p className="mt-2 text-xs text-ink-soft">
+        The angles were solved on the harmonic-elimination page; pick another point there to change
+        them. Name, note, fundamental frequency, load and filter can be edited here.
+      </p>
+      {error ? (
+        <p role="alert" className="mt-1 text-xs text-bad">
+          {error}
+        </p>
+      ) : null}
     </div>
   );
 }

@@ -39,7 +39,10 @@ export function StudyReportPage() {
         <h1 className="text-2xl font-semibold">{study.data.name}</h1>
         <p className="text-sm text-ink-soft">
           Revision {study.data.revision}
-          {current ? ` by ${current.authorEmail ?? 'unknown'} on ${formatDate(current.createdAt)}` : ''} · printed {formatDate(new Date().toISOString())}
+          {current
+            ? ` by ${current.authorEmail ?? 'unknown'} on ${formatDate(current.createdAt)}`
+            : ''}{' '}
+          · printed {formatDate(new Date().toISOString())}
         </p>
         {study.data.note ? <p className="mt-2 text-sm">{study.data.note}</p> : null}
       </header>
@@ -49,7 +52,10 @@ export function StudyReportPage() {
           <tbody>
             {designRows(study.data.design).map(([label, value]) => (
               <tr key={label} className="border-t border-rule/60">
-                <th scope="row" className="py-0.5 pr-6 text-left align-top font-normal text-ink-soft">
+                <th
+                  scope="row"
+                  className="py-0.5 pr-6 text-left align-top font-normal text-ink-soft"
+                >
                   {label}
                 </th>
                 <td className="num py-0.5">{value}</td>
@@ -62,7 +68,10 @@ export function StudyReportPage() {
       {report.isError ? <ErrorState error={report.error} onRetry={() => report.refetch()} /> : null}
       {report.data ? (
         <div className="flex flex-col gap-4">
-          <ReportCautions cautions={report.data.cautions} except={[report.data.limitCheck.caution]} />
+          <ReportCautions
+            cautions={report.data.cautions}
+            except={[report.data.limitCheck.caution]}
+          />
           <StudyCharts report={report.data} fileStem={`report-${study.data.id.slice(0, 8)}`} />
           <HarmonicLimitsPanel report={report.data} expanded />
         </div>

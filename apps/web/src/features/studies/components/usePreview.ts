@@ -27,11 +27,17 @@ interface WorkerHolder {
  * there is no Worker (tests) it runs in place. Pass memoised `design` and `options`.
  * Null until the first answer arrives.
  */
-export function usePreview(design: InverterDesign, options: AnalyseDesignOptions): LivePreview | null {
+export function usePreview(
+  design: InverterDesign,
+  options: AnalyseDesignOptions,
+): LivePreview | null {
   const [workerFailed, setWorkerFailed] = useState(typeof Worker === 'undefined');
   const holder = useRef<WorkerHolder | null>(null);
   const sequence = useRef(0);
-  const [answer, setAnswer] = useState<{ request: PreviewRequest; response: PreviewResponse } | null>(null);
+  const [answer, setAnswer] = useState<{
+    request: PreviewRequest;
+    response: PreviewResponse;
+  } | null>(null);
   const inPlace = useMemo(() => {
     if (!workerFailed) return null;
     const { value, milliseconds } = timed(() => previewDesign(design, options));
@@ -40,7 +46,9 @@ export function usePreview(design: InverterDesign, options: AnalyseDesignOptions
 
   useEffect(() => {
     if (workerFailed) return;
-    const worker = new Worker(new URL('../model/preview.worker.ts', import.meta.url), { type: 'module' });
+    const worker = new Worker(new URL('../model/preview.worker.ts', import.meta.url), {
+      type: 'module',
+    });
     const sent = new Map<number, PreviewRequest>();
     const current: WorkerHolder = {
       busy: false,
@@ -83,5 +91,10 @@ export function usePreview(design: InverterDesign, options: AnalyseDesignOptions
   if (inPlace) return inPlace;
   if (!answer) return null;
   const { request, response } = answer;
-  return { ...response.outcome, milliseconds: response.milliseconds, stale: request.design !== design || request.options !== options, design: request.design };
+  return {
+    ...response.outcome,
+    milliseconds: response.milliseconds,
+    stale: request.design !== design || request.options !== options,
+    design: request.design,
+  };
 }

@@ -1,4 +1,9 @@
-import { designFrequencyRatio, MODULATION_METHOD_LABELS, THREE_PHASE_METHODS, type InverterDesign } from '@pulsewright/modulation';
+import {
+  designFrequencyRatio,
+  MODULATION_METHOD_LABELS,
+  THREE_PHASE_METHODS,
+  type InverterDesign,
+} from '@pulsewright/modulation';
 import { formatNumber } from '../../../lib/format';
 import {
   CLAMPING_OPTIONS,
@@ -34,38 +39,70 @@ export function designRows(stored: InverterDesign): [string, string][] {
   const rows: [string, string][] = [['Method', MODULATION_METHOD_LABELS[m.method]]];
   switch (m.method) {
     case 'sine-triangle':
-      rows.push(['Bridge scheme', labelOf(SCHEME_OPTIONS, m.scheme)], ['Sampling', labelOf(SAMPLING_OPTIONS, m.sampling ?? 'natural')]);
+      rows.push(
+        ['Bridge scheme', labelOf(SCHEME_OPTIONS, m.scheme)],
+        ['Sampling', labelOf(SAMPLING_OPTIONS, m.sampling ?? 'natural')],
+      );
       break;
     case 'three-phase':
-      rows.push(['Zero sequence', labelOf(ZERO_SEQUENCE_OPTIONS, m.zeroSequence ?? 'none')], ['Sampling', labelOf(SAMPLING_OPTIONS, m.sampling ?? 'natural')]);
+      rows.push(
+        ['Zero sequence', labelOf(ZERO_SEQUENCE_OPTIONS, m.zeroSequence ?? 'none')],
+        ['Sampling', labelOf(SAMPLING_OPTIONS, m.sampling ?? 'natural')],
+      );
       break;
     case 'space-vector':
       rows.push(['Switching sequence', labelOf(SEQUENCE_OPTIONS, m.sequence ?? 'seven-segment')]);
-      if (m.sequence === 'five-segment') rows.push(['Zero-vector clamping', labelOf(CLAMPING_OPTIONS, m.clamping ?? 'dpwm1')]);
+      if (m.sequence === 'five-segment')
+        rows.push(['Zero-vector clamping', labelOf(CLAMPING_OPTIONS, m.clamping ?? 'dpwm1')]);
       else rows.push(['Zero split', formatNumber(m.zeroSplit ?? 0.5)]);
-      rows.push(['Sampling', labelOf(SPACE_VECTOR_SAMPLING_OPTIONS, m.sampling ?? 'symmetric')], ['Overmodulation', labelOf(OVERMODULATION_OPTIONS, m.overmodulation ?? 'two-mode')]);
+      rows.push(
+        ['Sampling', labelOf(SPACE_VECTOR_SAMPLING_OPTIONS, m.sampling ?? 'symmetric')],
+        ['Overmodulation', labelOf(OVERMODULATION_OPTIONS, m.overmodulation ?? 'two-mode')],
+      );
       break;
     case 'selective-harmonic-elimination':
     case 'optimal-pattern':
-      rows.push(['Pattern', labelOf(PATTERN_KIND_OPTIONS, m.kind)], ['First-quarter angles', m.angles.map(degrees).join(', ')]);
-      if (m.method === 'selective-harmonic-elimination') rows.push(['Eliminated orders', m.eliminate?.join(', ') || '—']);
-      if (m.fundamental !== undefined) rows.push(['Solved for', `${formatNumber(m.fundamental)} V peak`]);
+      rows.push(
+        ['Pattern', labelOf(PATTERN_KIND_OPTIONS, m.kind)],
+        ['First-quarter angles', m.angles.map(degrees).join(', ')],
+      );
+      if (m.method === 'selective-harmonic-elimination')
+        rows.push(['Eliminated orders', m.eliminate?.join(', ') || '—']);
+      if (m.fundamental !== undefined)
+        rows.push(['Solved for', `${formatNumber(m.fundamental)} V peak`]);
       break;
   }
   rows.push(['DC bus', `${formatNumber(design.vdc)} V`]);
   if ('ma' in m && m.ma !== undefined) rows.push(['Modulation index ma', formatNumber(m.ma, 6)]);
   rows.push(['Fundamental frequency', `${formatNumber(design.fundamentalFrequency, 6)} Hz`]);
-  if (design.carrierFrequency !== undefined) rows.push(['Carrier frequency', `${formatNumber(design.carrierFrequency, 6)} Hz (${ratioText(design)})`]);
+  if (design.carrierFrequency !== undefined)
+    rows.push([
+      'Carrier frequency',
+      `${formatNumber(design.carrierFrequency, 6)} Hz (${ratioText(design)})`,
+    ]);
   if ('carrierPhase' in m && m.carrierPhase) rows.push(['Carrier phase', degrees(m.carrierPhase)]);
   const three = THREE_PHASE_METHODS.includes(m.method);
   const { load, filter } = design;
   if (load) {
-    rows.push([three ? 'Load per phase (star)' : 'Load', `R ${formatNumber(load.r)} Ω, L ${formatNumber(load.l * 1e3)} mH`]);
-    if (load.emf) rows.push(['Back-EMF', `${formatNumber(load.emf.amplitude)} V peak at ${degrees(load.emf.phase)}`]);
+    rows.push([
+      three ? 'Load per phase (star)' : 'Load',
+      `R ${formatNumber(load.r)} Ω, L ${formatNumber(load.l * 1e3)} mH`,
+    ]);
+    if (load.emf)
+      rows.push([
+        'Back-EMF',
+        `${formatNumber(load.emf.amplitude)} V peak at ${degrees(load.emf.phase)}`,
+      ]);
   } else rows.push(['Load', 'none']);
   if (filter) {
     const damping = `${formatNumber(filter.rDamping ?? 0)} Ω, ${labelOf(DAMPING_OPTIONS, filter.dampingPlacement ?? 'series-with-capacitor')}${filter.cDamping !== undefined ? `, ${formatNumber(filter.cDamping * 1e6)} µF` : ''}`;
-    rows.push([three ? 'LC filter per phase (star)' : 'LC filter', `L ${formatNumber(filter.l * 1e3)} mH, C ${formatNumber(filter.c * 1e6)} µF`], ['Filter damping', damping]);
+    rows.push(
+      [
+        three ? 'LC filter per phase (star)' : 'LC filter',
+        `L ${formatNumber(filter.l * 1e3)} mH, C ${formatNumber(filter.c * 1e6)} µF`,
+      ],
+      ['Filter damping', damping],
+    );
   } else rows.push(['LC filter', 'none']);
   return rows;
 }
@@ -76,11 +113,31 @@ export function describeDesign(design: InverterDesign): string {
   const parts: string[] = [];
   if (m.method === 'selective-harmonic-elimination' || m.method === 'optimal-pattern') {
     parts.push(`${m.kind}`, `${m.angles.length} angle(s)`);
-    if (m.method === 'selective-harmonic-elimination' && m.eliminate?.length) parts.push(`eliminates ${m.eliminate.join(', ')}`);
+    if (m.method === 'selective-harmonic-elimination' && m.eliminate?.length)
+      parts.push(`eliminates ${m.eliminate.join(', ')}`);
   } else {
-    const index = m.ma !== undefined ? `ma ${formatNumber(m.ma)}` : 'm' in m && m.m !== undefined ? `m ${formatNumber(m.m)}` : '';
-    const option = m.method === 'sine-triangle' ? m.scheme : m.method === 'three-phase' ? m.zeroSequence : m.sequence;
-    parts.push(...[index, ratioText(design), design.carrierFrequency !== undefined ? `${formatNumber(design.carrierFrequency)} Hz carrier` : '', option ?? ''].filter(Boolean));
+    const index =
+      m.ma !== undefined
+        ? `ma ${formatNumber(m.ma)}`
+        : 'm' in m && m.m !== undefined
+          ? `m ${formatNumber(m.m)}`
+          : '';
+    const option =
+      m.method === 'sine-triangle'
+        ? m.scheme
+        : m.method === 'three-phase'
+          ? m.zeroSequence
+          : m.sequence;
+    parts.push(
+      ...[
+        index,
+        ratioText(design),
+        design.carrierFrequency !== undefined
+          ? `${formatNumber(design.carrierFrequency)} Hz carrier`
+          : '',
+        option ?? '',
+      ].filter(Boolean),
+    );
   }
   parts.push(`${formatNumber(design.vdc)} V`, `${formatNumber(design.fundamentalFrequency)} Hz`);
   if (design.load) parts.push('load');

@@ -25,7 +25,9 @@ describe('previewDesign', () => {
   });
 
   it('keeps the voltages when only the load or the filter is refused', () => {
-    const { report, errors } = previewDesign(designOf({ ...defaultDraft(), loadR: 0, filterOn: true, filterC: -1 }));
+    const { report, errors } = previewDesign(
+      designOf({ ...defaultDraft(), loadR: 0, filterOn: true, filterC: -1 }),
+    );
     expect(errors.map((e) => e.field).sort()).toEqual(['filter.c', 'load.r']);
     expect(report?.bridge.spectrum.length).toBeGreaterThan(0);
     expect(report?.currents).toEqual([]);

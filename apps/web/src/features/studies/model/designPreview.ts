@@ -1,4 +1,9 @@
-import { analyseDesign, type AnalyseDesignOptions, type DesignReport, type InverterDesign } from '@pulsewright/modulation';
+import {
+  analyseDesign,
+  type AnalyseDesignOptions,
+  type DesignReport,
+  type InverterDesign,
+} from '@pulsewright/modulation';
 
 /** A field the library refused, by its path in the design (`modulation.ma`, `load.r`, …), with its message. */
 export interface PreviewFieldError {
@@ -14,7 +19,10 @@ export interface PreviewOutcome {
 
 function asFieldError(error: unknown): PreviewFieldError {
   const field = (error as { field?: unknown }).field;
-  return { field: typeof field === 'string' ? field : 'design', message: error instanceof Error ? error.message : String(error) };
+  return {
+    field: typeof field === 'string' ? field : 'design',
+    message: error instanceof Error ? error.message : String(error),
+  };
 }
 
 /**
@@ -23,7 +31,10 @@ function asFieldError(error: unknown): PreviewFieldError {
  * load or the filter is refused, the report of the design without that part comes back beside
  * the error, so the voltages stay on screen while the field is being corrected.
  */
-export function previewDesign(design: InverterDesign, options: AnalyseDesignOptions = {}): PreviewOutcome {
+export function previewDesign(
+  design: InverterDesign,
+  options: AnalyseDesignOptions = {},
+): PreviewOutcome {
   const errors: PreviewFieldError[] = [];
   let attempt = design;
   let settings = options;
@@ -35,14 +46,19 @@ export function previewDesign(design: InverterDesign, options: AnalyseDesignOpti
       const refused = asFieldError(error);
       errors.push(refused);
       if (refused.field.startsWith('load') && attempt.load) attempt = { ...attempt, load: null };
-      else if (refused.field.startsWith('filter') && attempt.filter) attempt = { ...attempt, filter: null };
-      else if (refused.field === 'busVoltage' && settings.busVoltage !== undefined) settings = withoutBusVoltage(settings);
+      else if (refused.field.startsWith('filter') && attempt.filter)
+        attempt = { ...attempt, filter: null };
+      else if (refused.field === 'busVoltage' && settings.busVoltage !== undefined)
+        settings = withoutBusVoltage(settings);
       else break;
     }
   }
   return { report: null, errors };
 }
 
-function withoutBusVoltage({ busVoltage: _busVoltage, ...rest }: AnalyseDesignOptions): AnalyseDesignOptions {
+function withoutBusVoltage({
+  busVoltage: _busVoltage,
+  ...rest
+}: AnalyseDesignOptions): AnalyseDesignOptions {
   return rest;
 }

@@ -10,7 +10,13 @@ const DESIGNS: InverterDesign[] = [
     vdc: 400,
     fundamentalFrequency: 50,
     carrierFrequency: 1050,
-    modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.9, sampling: 'regular-asymmetric', carrierPhase: 0.25 },
+    modulation: {
+      method: 'sine-triangle',
+      scheme: 'unipolar',
+      ma: 0.9,
+      sampling: 'regular-asymmetric',
+      carrierPhase: 0.25,
+    },
     load: { r: 8, l: 0.01, emf: { amplitude: 50, phase: -0.3 } },
     filter: { l: 0.001, c: 10e-6, rDamping: 2, dampingPlacement: 'parallel-rc', cDamping: 40e-6 },
   },
@@ -18,7 +24,13 @@ const DESIGNS: InverterDesign[] = [
     vdc: 600,
     fundamentalFrequency: 60,
     carrierFrequency: 2460,
-    modulation: { method: 'three-phase', ma: 1.1, zeroSequence: 'dpwm2', sampling: 'regular-symmetric', carrierPhase: 0 },
+    modulation: {
+      method: 'three-phase',
+      ma: 1.1,
+      zeroSequence: 'dpwm2',
+      sampling: 'regular-symmetric',
+      carrierPhase: 0,
+    },
     load: { r: 5, l: 0.004 },
     filter: null,
   },
@@ -26,14 +38,27 @@ const DESIGNS: InverterDesign[] = [
     vdc: 700,
     fundamentalFrequency: 50,
     carrierFrequency: 4000,
-    modulation: { method: 'space-vector', ma: 1.2, sequence: 'five-segment', sampling: 'asymmetric', clamping: 'dpwm3', overmodulation: 'hexagon-limit' },
+    modulation: {
+      method: 'space-vector',
+      ma: 1.2,
+      sequence: 'five-segment',
+      sampling: 'asymmetric',
+      clamping: 'dpwm3',
+      overmodulation: 'hexagon-limit',
+    },
     load: null,
     filter: { l: 0.002, c: 5e-6, rDamping: 0, dampingPlacement: 'series-with-capacitor' },
   },
   {
     vdc: 100,
     fundamentalFrequency: 50,
-    modulation: { method: 'selective-harmonic-elimination', kind: 'staircase', angles: [0.2, 0.6, 1.1], eliminate: [5, 7], fundamental: 330 },
+    modulation: {
+      method: 'selective-harmonic-elimination',
+      kind: 'staircase',
+      angles: [0.2, 0.6, 1.1],
+      eliminate: [5, 7],
+      fundamental: 330,
+    },
     load: { r: 10, l: 0.02 },
     filter: null,
   },
@@ -51,20 +76,32 @@ describe('draft ↔ design', () => {
     expect(DESIGNS.map((d) => d.modulation.method).sort()).toEqual([...MODULATION_METHODS].sort());
   });
 
-  it.each(DESIGNS.map((d) => [d.modulation.method, d] as const))('reads a %s design into the editor and writes back exactly what was stored', (_method, design) => {
-    const draft = draftOf(design, study);
-    expect(designOf(draft)).toEqual(design);
-  });
+  it.each(DESIGNS.map((d) => [d.modulation.method, d] as const))(
+    'reads a %s design into the editor and writes back exactly what was stored',
+    (_method, design) => {
+      const draft = draftOf(design, study);
+      expect(designOf(draft)).toEqual(design);
+    },
+  );
 
   it('writes the design of a new study that the library accepts', () => {
     const design = designOf(defaultDraft('p'));
-    expect(design).toMatchObject({ vdc: 400, fundamentalFrequency: 50, carrierFrequency: 1050, modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8 } });
+    expect(design).toMatchObject({
+      vdc: 400,
+      fundamentalFrequency: 50,
+      carrierFrequency: 1050,
+      modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8 },
+    });
     // Bipolar sine-triangle, ma ≤ 1: V1 = ma·Vdc at the bridge (Holmes and Lipo 2003, ch. 3), within the sideband leakage of mf 21.
     expect(analyseDesign(design).bridge.fundamental / (0.8 * 400)).toBeCloseTo(1, 2);
   });
 
   it('keeps the values of a switched-off load and filter in the draft but leaves them out of the design', () => {
-    const draft = { ...draftOf(DESIGNS[0] as InverterDesign, study), loadOn: false, filterOn: false };
+    const draft = {
+      ...draftOf(DESIGNS[0] as InverterDesign, study),
+      loadOn: false,
+      filterOn: false,
+    };
     expect(designOf(draft)).toMatchObject({ load: null, filter: null });
     expect(designOf({ ...draft, loadOn: true }).load).toEqual(DESIGNS[0]?.load);
   });
@@ -78,7 +115,15 @@ describe('draft ↔ design', () => {
   });
 
   it('reads a space-vector index stored as m as ma = 2m/√3 (Holmes and Lipo 2003, ch. 5), through the library', () => {
-    const draft = draftOf({ vdc: 600, fundamentalFrequency: 50, carrierFrequency: 2250, modulation: { method: 'space-vector', m: 0.75 } }, study);
+    const draft = draftOf(
+      {
+        vdc: 600,
+        fundamentalFrequency: 50,
+        carrierFrequency: 2250,
+        modulation: { method: 'space-vector', m: 0.75 },
+      },
+      study,
+    );
     expect(draft.ma).toBeCloseTo((2 * 0.75) / Math.sqrt(3), 12);
   });
 });

@@ -129,25 +129,47 @@ function designModulationOf(draft: StudyDraft): DesignModulation {
   const { method, ma } = draft;
   switch (method) {
     case 'sine-triangle':
-      return { method, scheme: draft.scheme, ma, sampling: draft.sampling, carrierPhase: draft.carrierPhase };
+      return {
+        method,
+        scheme: draft.scheme,
+        ma,
+        sampling: draft.sampling,
+        carrierPhase: draft.carrierPhase,
+      };
     case 'three-phase':
-      return { method, ma, zeroSequence: draft.zeroSequence, sampling: draft.sampling, carrierPhase: draft.carrierPhase };
+      return {
+        method,
+        ma,
+        zeroSequence: draft.zeroSequence,
+        sampling: draft.sampling,
+        carrierPhase: draft.carrierPhase,
+      };
     case 'space-vector':
       return {
         method,
         ma,
         sequence: draft.sequence,
         sampling: draft.spaceVectorSampling,
-        ...(draft.sequence === 'seven-segment' ? { zeroSplit: draft.zeroSplit } : { clamping: draft.clamping }),
+        ...(draft.sequence === 'seven-segment'
+          ? { zeroSplit: draft.zeroSplit }
+          : { clamping: draft.clamping }),
         overmodulation: draft.overmodulation,
       };
     case 'selective-harmonic-elimination':
     case 'optimal-pattern': {
       // A pattern study keeps its stored pattern; without one the angles are empty and the library says so.
       const pattern = draft.pattern ?? { method, kind: 'bipolar', angles: [] };
-      const fundamental = pattern.fundamental !== undefined ? { fundamental: pattern.fundamental } : {};
-      if (method === 'optimal-pattern') return { method, kind: pattern.kind, angles: pattern.angles, ...fundamental };
-      return { method, kind: pattern.kind, angles: pattern.angles, ...(pattern.eliminate ? { eliminate: pattern.eliminate } : {}), ...fundamental };
+      const fundamental =
+        pattern.fundamental !== undefined ? { fundamental: pattern.fundamental } : {};
+      if (method === 'optimal-pattern')
+        return { method, kind: pattern.kind, angles: pattern.angles, ...fundamental };
+      return {
+        method,
+        kind: pattern.kind,
+        angles: pattern.angles,
+        ...(pattern.eliminate ? { eliminate: pattern.eliminate } : {}),
+        ...fundamental,
+      };
     }
   }
 }
@@ -169,7 +191,13 @@ export function designOf(draft: StudyDraft): InverterDesign {
         }
       : null,
     load: draft.loadOn
-      ? { r: draft.loadR, l: draft.loadL, ...(draft.emf !== 0 || draft.emfPhase !== 0 ? { emf: { amplitude: draft.emf, phase: draft.emfPhase } } : {}) }
+      ? {
+          r: draft.loadR,
+          l: draft.loadL,
+          ...(draft.emf !== 0 || draft.emfPhase !== 0
+            ? { emf: { amplitude: draft.emf, phase: draft.emfPhase } }
+            : {}),
+        }
       : null,
   };
 }
@@ -185,7 +213,10 @@ function spaceVectorMa(m: number): number {
 }
 
 /** The editor's state for a stored design (the fields the design leaves out keep their defaults). */
-export function draftOf(design: InverterDesign, study: { name: string; note?: string | null; projectId: string }): StudyDraft {
+export function draftOf(
+  design: InverterDesign,
+  study: { name: string; note?: string | null; projectId: string },
+): StudyDraft {
   const base = defaultDraft(study.projectId);
   const draft: StudyDraft = {
     ...base,
@@ -199,7 +230,12 @@ export function draftOf(design: InverterDesign, study: { name: string; note?: st
   const modulation = design.modulation;
   switch (modulation.method) {
     case 'sine-triangle':
-      Object.assign(draft, { scheme: modulation.scheme, ma: modulation.ma, sampling: modulation.sampling ?? base.sampling, carrierPhase: modulation.carrierPhase ?? 0 });
+      Object.assign(draft, {
+        scheme: modulation.scheme,
+        ma: modulation.ma,
+        sampling: modulation.sampling ?? base.sampling,
+        carrierPhase: modulation.carrierPhase ?? 0,
+      });
       break;
     case 'three-phase':
       Object.assign(draft, {
@@ -225,14 +261,22 @@ export function draftOf(design: InverterDesign, study: { name: string; note?: st
         method: modulation.method,
         kind: modulation.kind,
         angles: [...modulation.angles],
-        ...(modulation.method === 'selective-harmonic-elimination' && modulation.eliminate ? { eliminate: [...modulation.eliminate] } : {}),
+        ...(modulation.method === 'selective-harmonic-elimination' && modulation.eliminate
+          ? { eliminate: [...modulation.eliminate] }
+          : {}),
         ...(modulation.fundamental !== undefined ? { fundamental: modulation.fundamental } : {}),
       };
       break;
   }
   const { load, filter } = design;
   if (load) {
-    Object.assign(draft, { loadOn: true, loadR: load.r, loadL: load.l, emf: load.emf?.amplitude ?? 0, emfPhase: load.emf?.phase ?? 0 });
+    Object.assign(draft, {
+      loadOn: true,
+      loadR: load.r,
+      loadL: load.l,
+      emf: load.emf?.amplitude ?? 0,
+      emfPhase: load.emf?.phase ?? 0,
+    });
   } else {
     draft.loadOn = false;
   }
@@ -253,6 +297,7 @@ export function draftOf(design: InverterDesign, study: { name: string; note?: st
 export function draftFormErrors(draft: StudyDraft): { field: string; message: string }[] {
   const errors: { field: string; message: string }[] = [];
   if (!draft.name.trim()) errors.push({ field: 'name', message: 'name must not be empty' });
-  if (!draft.projectId) errors.push({ field: 'projectId', message: 'choose a project for the study' });
+  if (!draft.projectId)
+    errors.push({ field: 'projectId', message: 'choose a project for the study' });
   return errors;
 }

@@ -33,7 +33,8 @@ export const jobsQueryOptions = () =>
     queryKey: ['jobs', 'list'],
     queryFn: getJobs,
     // Keep the list fresh while any job is still working.
-    refetchInterval: (query) => (query.state.data?.some((j) => j.status === 'queued' || j.status === 'running') ? 1000 : false),
+    refetchInterval: (query) =>
+      query.state.data?.some((j) => j.status === 'queued' || j.status === 'running') ? 1000 : false,
   });
 export function useJobs() {
   return useQuery(jobsQueryOptions());
@@ -44,5 +45,8 @@ export async function createMaSweep(body: MaSweepRequest): Promise<Job> {
 }
 export function useCreateMaSweep() {
   const client = useQueryClient();
-  return useMutation({ mutationFn: createMaSweep, onSuccess: () => client.invalidateQueries({ queryKey: ['jobs', 'list'] }) });
+  return useMutation({
+    mutationFn: createMaSweep,
+    onSuccess: () => client.invalidateQueries({ queryKey: ['jobs', 'list'] }),
+  });
 }

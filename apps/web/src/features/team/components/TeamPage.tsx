@@ -47,8 +47,15 @@ export function TeamPage() {
   const [tab, setTab] = useState<Tab>('keys');
   return (
     <div>
-      <PageHeader title="Team" subtitle={me.data ? `${me.data.team.name} · you are ${me.data.role}` : undefined} />
-      <div role="tablist" aria-label="Team sections" className="mb-4 flex flex-wrap gap-1 border-b border-rule">
+      <PageHeader
+        title="Team"
+        subtitle={me.data ? `${me.data.team.name} · you are ${me.data.role}` : undefined}
+      />
+      <div
+        role="tablist"
+        aria-label="Team sections"
+        className="mb-4 flex flex-wrap gap-1 border-b border-rule"
+      >
         {tabs.map((t) => (
           <button
             key={t.id}
@@ -92,20 +99,52 @@ function ApiKeys({ myRole }: { myRole: Role }) {
     <div className="grid gap-5 lg:grid-cols-[320px_minmax(0,1fr)]">
       <Panel title="New API key">
         <form onSubmit={submit} className="flex flex-col gap-3" noValidate>
-          <TextField label="Key name" value={name} onChange={(e) => setName(e.target.value)} error={fieldErrorOf(create.error, 'name')} hint="What the key is for, e.g. the build server" />
-          <SelectField label="Role" value={role} onChange={(e) => setRole(e.target.value as Role)} options={allowed} error={fieldErrorOf(create.error, 'role')} hint="Up to your own role" />
-          {create.isError && !fieldErrorOf(create.error, 'name') && !fieldErrorOf(create.error, 'role') ? <p role="alert" className="text-sm text-bad">{errorMessage(create.error)}</p> : null}
-          <Button type="submit" busy={create.isPending}>Create key</Button>
+          <TextField
+            label="Key name"
+            value={name}
+            onChange={(e) => setName(e.target.value)}
+            error={fieldErrorOf(create.error, 'name')}
+            hint="What the key is for, e.g. the build server"
+          />
+          <SelectField
+            label="Role"
+            value={role}
+            onChange={(e) => setRole(e.target.value as Role)}
+            options={allowed}
+            error={fieldErrorOf(create.error, 'role')}
+            hint="Up to your own role"
+          />
+          {create.isError &&
+          !fieldErrorOf(create.error, 'name') &&
+          !fieldErrorOf(create.error, 'role') ? (
+            <p role="alert" className="text-sm text-bad">
+              {errorMessage(create.error)}
+            </p>
+          ) : null}
+          <Button type="submit" busy={create.isPending}>
+            Create key
+          </Button>
         </form>
         {create.data ? (
-          <div className="mt-4 rounded-md border border-signal bg-signal-soft p-3 text-sm" role="status">
+          <div
+            className="mt-4 rounded-md border border-signal bg-signal-soft p-3 text-sm"
+            role="status"
+          >
             <p className="font-medium">Copy the key now: it is not shown again.</p>
-            <code className="num mt-2 block break-all rounded bg-panel p-2 text-xs" data-testid="new-key">{create.data.key}</code>
+            <code
+              className="num mt-2 block break-all rounded bg-panel p-2 text-xs"
+              data-testid="new-key"
+            >
+              {create.data.key}
+            </code>
             <Button
               variant="secondary"
               className="mt-2"
               onClick={() => {
-                navigator.clipboard?.writeText(create.data.key).then(() => setCopied(true), () => setCopied(false));
+                navigator.clipboard?.writeText(create.data.key).then(
+                  () => setCopied(true),
+                  () => setCopied(false),
+                );
               }}
             >
               {copied ? 'Copied' : 'Copy key'}
@@ -118,7 +157,17 @@ function ApiKeys({ myRole }: { myRole: Role }) {
           {(list) => (
             <table className="w-full text-sm [&_td]:px-2 [&_th]:px-2">
               <thead className="text-left text-xs text-ink-soft uppercase">
-                <tr><th scope="col">Name</th><th scope="col">Starts</th><th scope="col">Role</th><th scope="col">Owner</th><th scope="col">Last used</th><th scope="col">State</th><th scope="col"><span className="sr-only">Actions</span></th></tr>
+                <tr>
+                  <th scope="col">Name</th>
+                  <th scope="col">Starts</th>
+                  <th scope="col">Role</th>
+                  <th scope="col">Owner</th>
+                  <th scope="col">Last used</th>
+                  <th scope="col">State</th>
+                  <th scope="col">
+                    <span className="sr-only">Actions</span>
+                  </th>
+                </tr>
               </thead>
               <tbody>
                 {list.map((k) => (
@@ -127,11 +176,20 @@ function ApiKeys({ myRole }: { myRole: Role }) {
                     <td className="num py-1 text-xs">{k.prefix}…</td>
                     <td className="py-1">{k.role}</td>
                     <td className="py-1 text-xs">{k.userEmail}</td>
-                    <td className="py-1 text-xs">{k.lastUsedAt ? formatDate(k.lastUsedAt) : 'never'}</td>
-                    <td className="py-1 text-xs">{k.revokedAt ? `revoked ${formatDate(k.revokedAt)}` : 'active'}</td>
+                    <td className="py-1 text-xs">
+                      {k.lastUsedAt ? formatDate(k.lastUsedAt) : 'never'}
+                    </td>
+                    <td className="py-1 text-xs">
+                      {k.revokedAt ? `revoked ${formatDate(k.revokedAt)}` : 'active'}
+                    </td>
                     <td className="py-1 text-right">
                       {!k.revokedAt ? (
-                        <Button variant="danger" busy={revoke.isPending && revoke.variables === k.id} onClick={() => revoke.mutate(k.id)} aria-label={`Revoke ${k.name}`}>
+                        <Button
+                          variant="danger"
+                          busy={revoke.isPending && revoke.variables === k.id}
+                          onClick={() => revoke.mutate(k.id)}
+                          aria-label={`Revoke ${k.name}`}
+                        >
                           Revoke
                         </Button>
                       ) : null}
@@ -142,7 +200,11 @@ function ApiKeys({ myRole }: { myRole: Role }) {
             </table>
           )}
         </QueryView>
-        {revoke.isError ? <p role="alert" className="mt-2 text-sm text-bad">{errorMessage(revoke.error)}</p> : null}
+        {revoke.isError ? (
+          <p role="alert" className="mt-2 text-sm text-bad">
+            {errorMessage(revoke.error)}
+          </p>
+        ) : null}
       </Panel>
     </div>
   );
@@ -157,21 +219,54 @@ function Members({ myId }: { myId: string | undefined }) {
       <QueryView query={members} empty="No members.">
         {(list) => (
           <table className="w-full text-sm [&_td]:px-2 [&_th]:px-2">
-            <thead className="text-left text-xs text-ink-soft uppercase"><tr><th scope="col">Name</th><th scope="col">E-mail</th><th scope="col">Role</th><th scope="col">Joined</th><th scope="col"><span className="sr-only">Actions</span></th></tr></thead>
+            <thead className="text-left text-xs text-ink-soft uppercase">
+              <tr>
+                <th scope="col">Name</th>
+                <th scope="col">E-mail</th>
+                <th scope="col">Role</th>
+                <th scope="col">Joined</th>
+                <th scope="col">
+                  <span className="sr-only">Actions</span>
+                </th>
+              </tr>
+            </thead>
             <tbody>
               {list.map((m) => (
                 <tr key={m.user.id} className="border-t border-rule/60">
                   <td className="py-1">{m.user.name}</td>
                   <td className="py-1 text-xs">{m.user.email}</td>
                   <td className="py-1">
-                    <label className="sr-only" htmlFor={`role-${m.user.id}`}>Role of {m.user.name}</label>
-                    <select id={`role-${m.user.id}`} value={m.role} className="rounded border border-rule bg-panel px-1 py-0.5" onChange={(e) => update.mutate({ id: m.user.id, role: e.target.value as Role })}>
-                      {ROLE_OPTIONS.map((r) => <option key={r.value} value={r.value}>{r.value}</option>)}
+                    <label className="sr-only" htmlFor={`role-${m.user.id}`}>
+                      Role of {m.user.name}
+                    </label>
+                    <select
+                      id={`role-${m.user.id}`}
+                      value={m.role}
+                      className="rounded border border-rule bg-panel px-1 py-0.5"
+                      onChange={(e) =>
+                        update.mutate({ id: m.user.id, role: e.target.value as Role })
+                      }
+                    >
+                      {ROLE_OPTIONS.map((r) => (
+                        <option key={r.value} value={r.value}>
+                          {r.value}
+                        </option>
+                      ))}
                     </select>
                   </td>
                   <td className="py-1 text-xs">{formatDate(m.joinedAt)}</td>
                   <td className="py-1 text-right">
-                    {m.user.id !== myId ? <Button variant="ghost" onClick={() => { if (window.confirm(`Remove ${m.user.name} from the team?`)) remove.mutate(m.user.id); }}>Remove</Button> : null}
+                    {m.user.id !== myId ? (
+                      <Button
+                        variant="ghost"
+                        onClick={() => {
+                          if (window.confirm(`Remove ${m.user.name} from the team?`))
+                            remove.mutate(m.user.id);
+                        }}
+                      >
+                        Remove
+                      </Button>
+                    ) : null}
                   </td>
                 </tr>
               ))}
@@ -179,8 +274,16 @@ function Members({ myId }: { myId: string | undefined }) {
           </table>
         )}
       </QueryView>
-      {update.isError ? <p role="alert" className="mt-2 text-sm text-bad">{errorMessage(update.error)}</p> : null}
-      {remove.isError ? <p role="alert" className="mt-2 text-sm text-bad">{errorMessage(remove.error)}</p> : null}
+      {update.isError ? (
+        <p role="alert" className="mt-2 text-sm text-bad">
+          {errorMessage(update.error)}
+        </p>
+      ) : null}
+      {remove.isError ? (
+        <p role="alert" className="mt-2 text-sm text-bad">
+          {errorMessage(remove.error)}
+        </p>
+      ) : null}
     </Panel>
   );
 }
@@ -194,12 +297,41 @@ function Invitations() {
   return (
     <div className="grid gap-5 lg:grid-cols-[320px_minmax(0,1fr)]">
       <Panel title="Invite">
-        <form className="flex flex-col gap-3" noValidate onSubmit={(e) => { e.preventDefault(); create.mutate({ email, role }, { onSuccess: () => setEmail('') }); }}>
-          <TextField label="E-mail" type="email" value={email} onChange={(e) => setEmail(e.target.value)} error={fieldErrorOf(create.error, 'email')} />
-          <SelectField label="Role" value={role} onChange={(e) => setRole(e.target.value as Role)} options={ROLE_OPTIONS} error={fieldErrorOf(create.error, 'role')} />
-          {create.isError && !fieldErrorOf(create.error, 'email') ? <p role="alert" className="text-sm text-bad">{errorMessage(create.error)}</p> : null}
-          {create.isSuccess ? <p role="status" className="text-sm text-good">Invitation sent to {create.data.email}.</p> : null}
-          <Button type="submit" busy={create.isPending}>Send invitation</Button>
+        <form
+          className="flex flex-col gap-3"
+          noValidate
+          onSubmit={(e) => {
+            e.preventDefault();
+            create.mutate({ email, role }, { onSuccess: () => setEmail('') });
+          }}
+        >
+          <TextField
+            label="E-mail"
+            type="email"
+            value={email}
+            onChange={(e) => setEmail(e.target.value)}
+            error={fieldErrorOf(create.error, 'email')}
+          />
+          <SelectField
+            label="Role"
+            value={role}
+            onChange={(e) => setRole(e.target.value as Role)}
+            options={ROLE_OPTIONS}
+            error={fieldErrorOf(create.error, 'role')}
+          />
+          {create.isError && !fieldErrorOf(create.error, 'email') ? (
+            <p role="alert" className="text-sm text-bad">
+              {errorMessage(create.error)}
+            </p>
+          ) : null}
+          {create.isSuccess ? (
+            <p role="status" className="text-sm text-good">
+              Invitation sent to {create.data.email}.
+            </p>
+          ) : null}
+          <Button type="submit" busy={create.isPending}>
+            Send invitation
+          </Button>
         </form>
       </Panel>
       <Panel title="Invitations">
@@ -207,9 +339,21 @@ function Invitations() {
           {(list) => (
             <ul className="text-sm">
               {list.map((i) => (
-                <li key={i.id} className="flex items-center justify-between border-t border-rule/60 py-1">
-                  <span>{i.email} · {i.role} · <span className="text-xs">{i.status}, expires {formatDate(i.expiresAt)}</span></span>
-                  {i.status === 'open' ? <Button variant="ghost" onClick={() => revoke.mutate(i.id)}>Withdraw</Button> : null}
+                <li
+                  key={i.id}
+                  className="flex items-center justify-between border-t border-rule/60 py-1"
+                >
+                  <span>
+                    {i.email} · {i.role} ·{' '}
+                    <span className="text-xs">
+                      {i.status}, expires {formatDate(i.expiresAt)}
+                    </span>
+                  </span>
+                  {i.status === 'open' ? (
+                    <Button variant="ghost" onClick={() => revoke.mutate(i.id)}>
+                      Withdraw
+                    </Button>
+                  ) : null}
                 </li>
               ))}
             </ul>
@@ -227,14 +371,24 @@ function AuditLog() {
       <QueryView query={events} empty="Nothing recorded yet.">
         {(list) => (
           <table className="w-full text-sm [&_td]:px-2 [&_th]:px-2">
-            <thead className="text-left text-xs text-ink-soft uppercase"><tr><th scope="col">When</th><th scope="col">Who</th><th scope="col">Action</th><th scope="col">Subject</th></tr></thead>
+            <thead className="text-left text-xs text-ink-soft uppercase">
+              <tr>
+                <th scope="col">When</th>
+                <th scope="col">Who</th>
+                <th scope="col">Action</th>
+                <th scope="col">Subject</th>
+              </tr>
+            </thead>
             <tbody>
               {list.map((e) => (
                 <tr key={e.id} className="border-t border-rule/60">
                   <td className="py-1 text-xs">{formatDate(e.createdAt)}</td>
                   <td className="py-1 text-xs">{e.actorEmail ?? 'system'}</td>
                   <td className="num py-1 text-xs">{e.action}</td>
-                  <td className="py-1 text-xs">{e.subjectType}{e.subjectId ? ` ${e.subjectId.slice(0, 8)}` : ''}</td>
+                  <td className="py-1 text-xs">
+                    {e.subjectType}
+                    {e.subjectId ? ` ${e.subjectId.slice(0, 8)}` : ''}
+                  </td>
                 </tr>
               ))}
             </tbody>
@@ -255,7 +409,9 @@ function Outbox() {
             {list.map((m) => (
               <li key={m.id} className="rounded border border-rule p-2">
                 <p className="font-medium">{m.subject}</p>
-                <p className="text-xs text-ink-soft">to {m.to} · {m.status} · {formatDate(m.createdAt)}</p>
+                <p className="text-xs text-ink-soft">
+                  to {m.to} · {m.status} · {formatDate(m.createdAt)}
+                </p>
                 <pre className="num mt-1 whitespace-pre-wrap text-xs">{m.text}</pre>
               </li>
             ))}
