@@ -51,7 +51,11 @@ import { synthesisePeriod, synthesisSize } from './synthesisePeriod.js';
 export interface AnalyseDesignOptions {
   /** Highest order of the returned spectra, integer in [50, 5000]. @default defaultSpectrumOrder(design) */
   maxOrder?: number;
-  /** Samples per period of the returned time series, integer in [64, 20000]. @default 1200 */
+  /**
+   * Samples per period of the returned time series (charts), integer in [64, 20000]; a filtered
+   * design's series hold at most as many as its figures were read on. No figure depends on it.
+   * @default 1200
+   */
   points?: number;
   /**
    * Nominal bus voltage at the point of coupling for the limit check, volts rms line to line.
@@ -62,6 +66,13 @@ export interface AnalyseDesignOptions {
 
 /** Most samples a period of the unfiltered currents is read on (a power of two). */
 const MAX_GRID_SAMPLES = 1 << 17;
+
+/**
+ * Fewest samples a period the figures read (peaks, ripple peak-to-peak, DC-link current). The
+ * grid depends on the design alone, never on `points`, so a report asked for with fewer chart
+ * samples (Compare) gives the same figures as the editor's.
+ */
+const MIN_GRID_SAMPLES = 4096;
 
 /** Most orders summed for a filtered design (bounds its cost; the tail beyond is bounded, not dropped). */
 export const MAX_ANALYSIS_ORDER = 20_000;
@@ -310,7 +321,7 @@ function exactLoadCurrents(
   // The ripple's extremes sit at or near the switching edges: sample every edge and a fine grid.
   const grid = synthesisSize(
     1,
-    Math.min(MAX_GRID_SAMPLES, Math.max(points, 64 * (frequencyRatio ?? 64))),
+    Math.min(MAX_GRID_SAMPLES, Math.max(MIN_GRID_SAMPLES, 64 * (frequencyRatio ?? 64))),
   );
   const angles = [...waveform.edges, ...Array.from({ length: grid }, (_, k) => (TAU * k) / grid)];
   const sampled = rlCurrentAt(waveform, angles, load);
@@ -398,7 +409,7 @@ function filteredPhase(
   const outputThdUpperBound =
     Math.sqrt(2 * (harmonicSum + tailGain * tailGain * bridgeTail)) / fundamental;
 
-  const size = synthesisSize(analysisOrder, Math.max(points, 16 * analysisOrder));
+  const size = synthesisSize(analysisOrder, Math.max(MIN_GRID_SAMPLES, 16 * analysisOrder));
   const series = (values: Float64Array): PeriodSeries => {
     const stride = Math.max(1, Math.floor(values.length / points));
     const angles: number[] = [];

@@ -303,4 +303,20 @@ describe('analyseDesign: one report of a design', () => {
     expect(Math.abs((clamped?.stepsPerCarrierPeriod ?? 0) - 4)).toBeLessThan(0.2);
     expect(analyseDesign(bipolar(0.8, 21)).commonMode).toBeNull();
   });
+
+  it('no figure depends on the number of chart samples asked for (Compare asks for fewer)', () => {
+    // The figures are read on a grid fixed by the design; `points` only thins the series.
+    const strip = (report: ReturnType<typeof analyseDesign>) =>
+      JSON.stringify(report, (key, value: unknown) =>
+        key === 'series' || key === 'modulator' ? undefined : value,
+      );
+    for (const design of [
+      bipolar(0.8, 5, { load: { r: 5, l: 0.01 } }),
+      bipolar(0.8, 21, { load: { r: 5, l: 0.002 }, filter: { l: 0.003, c: 20e-6, rDamping: 1 } }),
+    ]) {
+      expect(strip(analyseDesign(design, { points: 64 }))).toBe(
+        strip(analyseDesign(design, { points: 5000 })),
+      );
+    }
+  });
 });
