@@ -100,7 +100,11 @@ export function ComparePage() {
   }, [ids, fromUrl, setParams]);
   const all = useStudies();
   const studies = useQueries({ queries: ids.map((id) => studyQueryOptions(id)) });
-  const reports = useQueries({ queries: ids.map((id) => studyReportQueryOptions(id)) });
+  // Compare draws figures and spectra, no time series: the fewest chart samples keep each report
+  // small (a filtered mf-400 report is about 1 MB at the default); no figure depends on them.
+  const reports = useQueries({
+    queries: ids.map((id) => studyReportQueryOptions(id, { points: 64 })),
+  });
   const toggle = (id: string) =>
     setIds((current) =>
       current.includes(id) ? current.filter((x) => x !== id) : [...current, id],
