@@ -3,16 +3,12 @@ import {
   assertInverterDesign,
   designModulation,
   fftSpectrum,
-  harmonics,
   modulationVoltages,
   spaceVectorSequence,
-  thd,
   timerTable,
   timerTableToCHeader,
   timerTableToCsv,
   timerTableToJson,
-  waveformThd,
-  waveformWthd,
   type AnalyseDesignOptions,
   type DesignReport,
   type FftWindowName,
@@ -26,6 +22,7 @@ import {
   type ThreePhaseCarrierModulation,
   type TimerTableOptions,
   type Waveform,
+  voltageFigures,
 } from '@pulsewright/modulation';
 import { badRequest } from '../http/errors.js';
 import type { TimerFormat } from './cost.js';
@@ -87,20 +84,27 @@ export function modulationOutput(
   return { name: chosen.name, waveform: chosen.waveform, traces };
 }
 
-/** Exact spectrum to maxOrder of one voltage, with THD and WTHD exact over the whole waveform. */
+/**
+ * Exact spectrum to maxOrder of one voltage, with THD and WTHD exact over the whole waveform: the
+ * library's `voltageFigures`, the same figures the design report gives, in the route's shape.
+ */
 export function voltageSpectrum(
   voltage: NamedVoltage,
   maxOrder: number,
   field = 'modulation',
 ): SpectrumResult {
   const result = callLibrary(`${field}.`, () => {
-    const spectrum = harmonics(voltage.waveform, maxOrder);
+    const figures = voltageFigures(voltage, { maxOrder });
     return {
-      name: voltage.name,
-      harmonics: spectrum,
-      thd: waveformThd(voltage.waveform),
-      wthd: waveformWthd(voltage.waveform),
-      spectrumThd: thd(spectrum),
+      name: figures.name,
+      harmonics: figures.spectrum.map(({ order, amplitude, phase }) => ({
+        order,
+        amplitude,
+        phase,
+      })),
+      thd: figures.thd,
+      wthd: figures.wthd,
+      spectrumThd: figures.spectrumThd,
     };
   });
   return finiteResult(field, result);

@@ -22,8 +22,6 @@ import { weightedDistortion } from '../spectrum/distortion.js';
 import type { Harmonic } from '../spectrum/Harmonic.js';
 import { harmonics } from '../spectrum/harmonics.js';
 import { labelHarmonics } from '../spectrum/labelHarmonics.js';
-import { waveformThd } from '../spectrum/waveformThd.js';
-import { waveformWthd } from '../spectrum/waveformWthd.js';
 import { assertNumberInRange } from '../validation/assertions.js';
 import { withFieldPrefix } from '../validation/withFieldPrefix.js';
 import type { Waveform } from '../waveform/Waveform.js';
@@ -43,7 +41,9 @@ import type {
 } from './DesignReport.js';
 import type { InverterDesign } from './InverterDesign.js';
 import { MODULATION_METHOD_LABELS } from './Modulation.js';
-import { modulationVoltages } from './modulationVoltages.js';
+import { modulationVoltages, type NamedVoltage } from './modulationVoltages.js';
+import { spectrumLabelRatio } from './spectrumLabelRatio.js';
+import { voltageFigures } from './voltageFigures.js';
 import { modulatorSignals } from './modulatorSignals.js';
 import { synthesisePeriod, synthesisSize } from './synthesisePeriod.js';
 
@@ -128,7 +128,7 @@ export function analyseDesign(
       : 'frequencyRatio' in modulation
         ? modulation.frequencyRatio
         : null;
-  const labelRatio = frequencyRatio ?? 2 * maxOrder + 1;
+  const labelRatio = spectrumLabelRatio(maxOrder, frequencyRatio);
   const analysisOrder =
     filter === null
       ? maxOrder
@@ -137,14 +137,9 @@ export function analyseDesign(
     labelHarmonics(spectrum.slice(0, maxOrder + 1), labelRatio);
 
   const phaseVoltages = voltages.phases.map((v) => v.waveform);
-  const bridge = exactVoltageFigures(
-    voltages.phases[0]?.name ?? 'bridge output',
-    phaseVoltages[0] as Waveform,
-    maxOrder,
-    label,
-  );
+  const bridge = voltageFigures(voltages.phases[0] as NamedVoltage, { maxOrder, frequencyRatio });
   const line = voltages.lines[0];
-  const lineToLine = line ? exactVoltageFigures(line.name, line.waveform, maxOrder, label) : null;
+  const lineToLine = line ? voltageFigures(line, { maxOrder, frequencyRatio }) : null;
   const load = design.load ?? null;
   const frequency = design.fundamentalFrequency;
   const network: OutputNetwork = { filter, load: load === null ? null : { r: load.r, l: load.l } };
@@ -260,31 +255,6 @@ function distortionFigures(
     thdUpperBound: thd,
     wthd: weightedDistortion(spectrum, 1),
     exact: false,
-    spectrum: labelled,
-    spectrumThd: weightedDistortion(labelled, 0),
-  };
-}
-
-/** Figures of a piecewise-constant voltage, THD and WTHD exact over the whole waveform. */
-function exactVoltageFigures(
-  name: string,
-  waveform: Waveform,
-  maxOrder: number,
-  label: Labeller,
-): VoltageFigures {
-  const spectrum = harmonics(waveform, maxOrder);
-  const fundamental = spectrum[1] as Harmonic;
-  const thd = waveformThd(waveform);
-  const labelled = label(spectrum);
-  return {
-    name,
-    fundamental: fundamental.amplitude,
-    fundamentalPhase: fundamental.phase,
-    rms: Math.sqrt(waveformMeanSquare(waveform)),
-    thd,
-    thdUpperBound: thd,
-    wthd: waveformWthd(waveform),
-    exact: true,
     spectrum: labelled,
     spectrumThd: weightedDistortion(labelled, 0),
   };

@@ -7,6 +7,7 @@ export * from './designModulation.js';
 export * from './modulationVoltages.js';
 export * from './defaultSpectrumOrder.js';
 export * from './DesignReport.js';
+export * from './voltageFigures.js';
 export * from './analyseDesign.js';
 export * from './modulatorSignals.js';
 export * from './optionLabels.js';

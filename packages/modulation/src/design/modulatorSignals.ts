@@ -1,6 +1,7 @@
 import { sineReference } from '../carrier/sineReference.js';
 import { triangleCarrier } from '../carrier/triangleCarrier.js';
 import { TAU } from '../math.js';
+import { spaceVectorIndices } from '../space-vector/spaceVectorIndices.js';
 import { threePhaseReference } from '../three-phase/threePhaseReference.js';
 import { assertNumberInRange } from '../validation/assertions.js';
 import type { Modulation } from './Modulation.js';
@@ -35,8 +36,7 @@ export function modulatorSignals(modulation: Modulation, points = 1200): Modulat
   const samples = Math.min(20_000, Math.max(points, 8 * ratio));
   const angles = Array.from({ length: samples + 1 }, (_, k) => (TAU * k) / samples);
   if (modulation.method === 'space-vector') {
-    const ma = modulation.ma ?? (2 * (modulation.m ?? 0)) / Math.sqrt(3);
-    const reference = sineReference(ma);
+    const reference = sineReference(spaceVectorIndices(modulation).ma);
     return { angles, reference: angles.map((t) => reference.value(t)), carrier: null };
   }
   const reference =

@@ -4,5 +4,6 @@ export * from './spaceVector.js';
 export * from './spaceVectorSequence.js';
 export * from './overmodulationSetting.js';
 export * from './overmodulatedReference.js';
+export * from './spaceVectorIndices.js';
 export * from './spaceVectorWaveforms.js';
 export * from './overmodulationGainCurve.js';

@@ -1,5 +1,4 @@
 import { EDGE_EPSILON, HALF_PI, TAU } from '../math.js';
-import { ParameterRangeError } from '../validation/errors.js';
 import { assertNumberInRange, assertOneOf } from '../validation/assertions.js';
 import { combineWaveforms } from '../waveform/combineWaveforms.js';
 import { subtractWaveforms } from '../waveform/subtractWaveforms.js';
@@ -12,7 +11,7 @@ import { OVERMODULATION_METHODS, overmodulationSetting } from './overmodulationS
 import { rationalFrequencyRatio } from './rationalFrequencyRatio.js';
 import { spaceVector } from './spaceVector.js';
 import { SPACE_VECTOR_SEQUENCES, ZERO_VECTOR_CLAMPINGS } from './spaceVectorSequence.js';
-import { SIX_STEP_M } from './spaceVectorLimits.js';
+import { spaceVectorIndices } from './spaceVectorIndices.js';
 import type {
   OvermodulationMethod,
   OvermodulationMode,
@@ -128,7 +127,7 @@ export function spaceVectorWaveforms({
   overmodulation = 'two-mode',
   maxFundamentalPeriods = 64,
 }: SpaceVectorWaveformOptions): SpaceVectorWaveforms {
-  const index = modulationIndex(m, ma);
+  const { m: index, ma: maUsed } = spaceVectorIndices({ m, ma });
   assertNumberInRange('vdc', vdc, { min: 0, minExclusive: true });
   assertOneOf('sequence', sequence, SPACE_VECTOR_SEQUENCES);
   assertOneOf('sampling', sampling, SPACE_VECTOR_SAMPLINGS);
@@ -193,7 +192,7 @@ export function spaceVectorWaveforms({
     bn: combineWaveforms([b, c, a], ([x, y, z]) => phase(x as number, y as number, z as number)),
     cn: combineWaveforms([c, a, b], ([x, y, z]) => phase(x as number, y as number, z as number)),
     m: index,
-    ma: (2 * index) / Math.sqrt(3),
+    ma: maUsed,
     mode: setting.mode,
     fundamentalOrder: q,
     switchingPeriods: n,
@@ -204,18 +203,4 @@ function pushState(legs: Transition[][], angle: number, state: SwitchingState, v
   for (let leg = 0; leg < 3; leg++) {
     (legs[leg] as Transition[]).push({ angle, level: state[leg] === '1' ? vdc / 2 : -vdc / 2 });
   }
-}
-
-/** m from exactly one of m and ma (ma = 2m/√3). */
-function modulationIndex(m: number | undefined, ma: number | undefined): number {
-  if (m !== undefined && ma !== undefined) {
-    throw new ParameterRangeError('ma', 'omitted when m is given (give one of m and ma)', ma);
-  }
-  if (ma !== undefined) {
-    assertNumberInRange('ma', ma, { min: 0, max: (2 * SIX_STEP_M) / Math.sqrt(3) });
-    return Math.min(SIX_STEP_M, (Math.sqrt(3) * ma) / 2);
-  }
-  if (m === undefined) throw new ParameterRangeError('m', 'given (or ma instead)', m);
-  assertNumberInRange('m', m, { min: 0, max: SIX_STEP_M });
-  return m;
 }

@@ -11,8 +11,9 @@ import {
   type TimerTableOptions,
 } from '@pulsewright/modulation';
 
-// The service has no timer-table endpoint; the library (integrators' npm package) builds the
-// table in the browser. This module is the feature's single door to it.
+// The page builds the table with the library in the browser so it follows every keystroke (the
+// service's POST /api/v1/timer-tables gives the same table to scripts). This module is the
+// feature's single door to the library.
 
 export interface TimerTableOutcome {
   table: TimerTable | null;

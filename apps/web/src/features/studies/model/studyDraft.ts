@@ -1,7 +1,7 @@
 import {
   CARRIER_METHODS,
   PATTERN_METHODS,
-  spaceVectorWaveforms,
+  spaceVectorIndices,
   type BridgeScheme,
   type CarrierSampling,
   type DampingPlacement,
@@ -205,7 +205,7 @@ export function designOf(draft: StudyDraft): InverterDesign {
 /** A space-vector modulation stored with m (scripts may send it) read as ma, by the library. */
 function spaceVectorMa(m: number): number {
   try {
-    return spaceVectorWaveforms({ m, vdc: 1, frequencyRatio: 1 }).ma;
+    return spaceVectorIndices({ m }).ma;
   } catch {
     // Out of range: keep the number so the library names the field when the preview runs.
     return m;
