@@ -1,10 +1,13 @@
+import { ParameterRangeError, ParameterTypeError } from '@pulsewright/modulation';
 import { HttpError } from '../http/errors.js';
 
 /**
  * Calls the modulation library and turns its input errors (ParameterRangeError,
- * ParameterTypeError, any RangeError) into a 400 whose path is the API field: the library
- * names `ma`, the request names `modulation.ma`, so `prefix` is prepended to path and message,
- * except for the `unprefixed` fields, which sit at the top of the request (e.g. `maxOrder`).
+ * ParameterTypeError: those that name a `field`) into a 400 whose path is the API field: the
+ * library names `ma`, the request names `modulation.ma`, so `prefix` is prepended to path and
+ * message, except for the `unprefixed` fields, which sit at the top of the request (e.g.
+ * `maxOrder`). Any other error (a bare RangeError such as V8's "Invalid array length") is a bug
+ * and passes through unchanged, to become a 500.
  */
 export function callLibrary<T>(
   prefix: string,
@@ -23,22 +26,13 @@ export function asBadRequest(
   error: unknown,
   unprefixed: readonly string[] = [],
 ): unknown {
-  if (!(error instanceof RangeError || error instanceof TypeError)) return error;
-  const field = (error as { field?: unknown }).field;
-  if (typeof field === 'string') {
-    const path = unprefixed.includes(field) ? field : `${prefix}${field}`;
-    const message = error.message.startsWith(field)
-      ? `${path}${error.message.slice(field.length)}`
-      : error.message;
-    return new HttpError(400, message, [{ path, message }]);
-  }
-  // Only the library's own checks raise these here; a TypeError from a bug has no field but
-  // the library always names one, so a field-less TypeError stays a 500.
-  if (error instanceof RangeError)
-    return new HttpError(400, error.message, [
-      { path: prefix.replace(/\.$/, ''), message: error.message },
-    ]);
-  return error;
+  if (!(error instanceof ParameterRangeError || error instanceof ParameterTypeError)) return error;
+  const field = error.field;
+  const path = unprefixed.includes(field) ? field : `${prefix}${field}`;
+  const message = error.message.startsWith(field)
+    ? `${path}${error.message.slice(field.length)}`
+    : error.message;
+  return new HttpError(400, message, [{ path, message }]);
 }
 
 /** Whether every number in `value` (to the depth firstNonFinite looks) is finite; builds no strings. */
