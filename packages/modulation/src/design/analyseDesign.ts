@@ -22,6 +22,7 @@ import { weightedDistortion } from '../spectrum/distortion.js';
 import type { Harmonic } from '../spectrum/Harmonic.js';
 import { harmonics } from '../spectrum/harmonics.js';
 import { labelHarmonics } from '../spectrum/labelHarmonics.js';
+import { meanHarmonic } from '../spectrum/meanHarmonic.js';
 import { assertNumberInRange } from '../validation/assertions.js';
 import { withFieldPrefix } from '../validation/withFieldPrefix.js';
 import type { Waveform } from '../waveform/Waveform.js';
@@ -492,9 +493,9 @@ function switchingTail(
   };
 }
 
-/** A phasor as a harmonic in the `harmonics` convention (order 0 keeps its sign). */
+/** A phasor as a harmonic in the `harmonics` convention (order 0: the mean's sign in the phase). */
 function harmonicOf(order: number, phasor: Complex): Harmonic {
-  if (order === 0) return { order, amplitude: phasor.re, phase: 0 };
+  if (order === 0) return meanHarmonic(phasor.re);
   return { order, amplitude: complexAbs(phasor), phase: Math.atan2(phasor.im, phasor.re) };
 }
 

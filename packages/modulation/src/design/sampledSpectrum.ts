@@ -1,5 +1,6 @@
 import FFT from 'fft.js';
 import type { Harmonic } from '../spectrum/Harmonic.js';
+import { meanHarmonic } from '../spectrum/meanHarmonic.js';
 
 /**
  * Harmonics 0..maxOrder of one period sampled at S = 2^k evenly spaced angles (S > 2·maxOrder),
@@ -13,7 +14,7 @@ export function sampledSpectrum(samples: Float64Array, maxOrder: number): Harmon
   const fft = new FFT(size);
   const output: number[] = fft.createComplexArray();
   fft.realTransform(output, Array.from(samples));
-  const spectrum: Harmonic[] = [{ order: 0, amplitude: (output[0] as number) / size, phase: 0 }];
+  const spectrum: Harmonic[] = [meanHarmonic((output[0] as number) / size)];
   for (let n = 1; n <= maxOrder && n < size / 2; n++) {
     const re = output[2 * n] as number;
     const im = output[2 * n + 1] as number;

@@ -1,5 +1,6 @@
 import { TAU } from '../math.js';
 import type { Harmonic } from '../spectrum/Harmonic.js';
+import { meanHarmonic } from '../spectrum/meanHarmonic.js';
 import { assertNumberInRange } from '../validation/assertions.js';
 import { ParameterTypeError } from '../validation/errors.js';
 import { assertLcFilter } from './assertLcFilter.js';
@@ -37,7 +38,7 @@ export function filteredSpectrum(
     assertNumberInRange(`spectrum[${i}].amplitude`, h.amplitude);
     assertNumberInRange(`spectrum[${i}].phase`, h.phase);
     const response = lcFilterTransfer(filter, TAU * fundamentalFrequency * h.order);
-    if (h.order === 0) return { order: 0, amplitude: h.amplitude * response.re, phase: 0 };
+    if (h.order === 0) return meanHarmonic(h.amplitude * Math.cos(h.phase) * response.re);
     let phase = h.phase + Math.atan2(response.im, response.re);
     if (phase > Math.PI) phase -= TAU;
     else if (phase <= -Math.PI) phase += TAU;

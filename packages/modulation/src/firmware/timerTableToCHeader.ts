@@ -16,7 +16,8 @@ export interface TimerTableCHeaderOptions {
  * macros for the table length, period register, full-scale compare and dead-time ticks, and
  * per channel `static const` arrays `<prefix>_<channel>_high` / `_low` of `uint16_t`
  * (counterBits ≤ 16) or `uint32_t`. A comment block records every parameter with its unit,
- * the generation conventions and the warnings.
+ * the generation conventions and the warnings; numbers in it carry 12 significant digits (the
+ * binary rounding of 5e-7 s prints as 500 ns, not 5.000000000000001e-7) and times are in ns.
  *
  * @throws ParameterRangeError when `prefix` is not a C identifier
  */
@@ -48,33 +49,33 @@ export function timerTableToCHeader(
     ...(modulation.zeroSequence !== undefined
       ? [['modulation.zeroSequence', modulation.zeroSequence] as [string, string]]
       : []),
-    ['modulation.ma', `${modulation.ma} (peak reference / (vdc/2))`],
+    ['modulation.ma', `${clean(modulation.ma)} (peak reference / (vdc/2))`],
     [
       'fundamentalFrequency',
-      `${p.fundamentalFrequency} Hz (realised ${table.realisedFundamentalFrequency} Hz)`,
+      `${clean(p.fundamentalFrequency)} Hz (realised ${clean(table.realisedFundamentalFrequency)} Hz)`,
     ],
     [
       'carrierFrequency',
-      `${p.carrierFrequency} Hz (realised ${table.realisedCarrierFrequency} Hz)`,
+      `${clean(p.carrierFrequency)} Hz (realised ${clean(table.realisedCarrierFrequency)} Hz)`,
     ],
     ['sampling', p.sampling],
-    ['timerClock', `${p.timerClock} Hz`],
+    ['timerClock', `${clean(p.timerClock)} Hz`],
     ['countingMode', p.countingMode],
     ['counterBits', `${p.counterBits} bits`],
     [
       'deadTime',
-      `${p.deadTime} s requested, ${table.deadTimeCounts} ticks = ${table.realisedDeadTime} s realised`,
+      `${nanoseconds(p.deadTime)} requested, ${table.deadTimeCounts} ticks = ${nanoseconds(table.realisedDeadTime)} realised`,
     ],
     ['deadTimeMethod', p.deadTimeMethod],
     [
       'tableLength',
       `${p.tableLength} entries per fundamental period, ${table.updatesPerEntry} compare update(s) per entry`,
     ],
-    ['vdc', `${p.vdc} V`],
+    ['vdc', `${clean(p.vdc)} V`],
     ['periodRegister', `${table.periodRegister} counts`],
     ['fullScaleCounts', `${table.fullScaleCounts} counts (100 % duty)`],
-    ['quantisationStep', `${table.quantisationStep} V of leg average per count`],
-    ['maxQuantisationError', `${table.maxQuantisationError} V`],
+    ['quantisationStep', `${clean(table.quantisationStep)} V of leg average per count`],
+    ['maxQuantisationError', `${clean(table.maxQuantisationError)} V`],
   ];
   const width = Math.max(...parameterLines.map(([name]) => name.length));
   const comment = [
@@ -135,6 +136,19 @@ export function timerTableToCHeader(
     `#endif /* ${guard} */`,
     '',
   ].join('\n');
+}
+
+/**
+ * A number with 12 significant digits and no trailing zeros: drops binary rounding such as
+ * 5.000000000000001e-7 while keeping every digit a timer or table parameter needs.
+ */
+function clean(value: number): string {
+  return String(Number(value.toPrecision(12)));
+}
+
+/** A time in seconds written in nanoseconds, the unit dead times are specified in. */
+function nanoseconds(seconds: number): string {
+  return `${clean(seconds * 1e9)} ns`;
 }
 
 /** Text safe inside a C block comment: no comment terminator, printable ASCII only. */

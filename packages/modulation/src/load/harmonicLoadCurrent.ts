@@ -1,5 +1,6 @@
 import { TAU } from '../math.js';
 import type { Harmonic } from '../spectrum/Harmonic.js';
+import { meanHarmonic } from '../spectrum/meanHarmonic.js';
 import { assertNumberInRange } from '../validation/assertions.js';
 import { ParameterTypeError } from '../validation/errors.js';
 import { assertRlLoad } from './assertRlLoad.js';
@@ -12,7 +13,7 @@ import type { RlLoadOptions } from './RlLoad.js';
  * e = E·sin(θ + φ) is subtracted from the fundamental as a phasor before dividing.
  *
  * Same convention as `harmonics`: i(θ) = I_0 + Σ amplitude_n·sin(nθ + phase_n); amplitudes in
- * peak amperes (order 0: the signed mean current), phases in radians (−π, π].
+ * peak amperes (order 0: the mean current's magnitude, its sign in the phase), phases in radians (−π, π].
  *
  * The result is truncated at the spectrum's highest order; with an inductance the terms fall
  * as 1/n², so the mean square converges fast (the tests bound the tail).
@@ -34,7 +35,8 @@ export function harmonicLoadCurrent(
       assertNumberInRange(`spectrum[${i}].order`, h?.order, { min: 0, integer: true });
       assertNumberInRange(`spectrum[${i}].amplitude`, h.amplitude);
       assertNumberInRange(`spectrum[${i}].phase`, h.phase);
-      if (h.order === 0) return { order: 0, amplitude: h.amplitude / r, phase: 0 };
+      // The mean is amplitude·cos(phase), phase 0 or π; cos gives its sign exactly.
+      if (h.order === 0) return meanHarmonic((h.amplitude * Math.cos(h.phase)) / r);
       // Phasor of a·sin(nθ + φ) as a·e^{jφ}; subtract the EMF's at the fundamental.
       let re = h.amplitude * Math.cos(h.phase);
       let im = h.amplitude * Math.sin(h.phase);

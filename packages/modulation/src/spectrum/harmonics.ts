@@ -4,6 +4,7 @@ import { assertWaveform } from '../waveform/assertWaveform.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import { waveformMean } from '../waveform/waveformMean.js';
 import type { Harmonic } from './Harmonic.js';
+import { meanHarmonic } from './meanHarmonic.js';
 
 /** The highest harmonic order {@link harmonics} computes; bounds the cost of one call. */
 export const MAX_HARMONIC_ORDER = 100_000;
@@ -23,7 +24,8 @@ const RESEED_INTERVAL = 256;
  * analysis of a step function). No sampling and no FFT: the only error is floating-point
  * rounding (about 1e−13 of the largest level).
  *
- * Convention: v(θ) = mean + Σ amplitude_n · sin(nθ + phase_n), θ in radians.
+ * Convention: v(θ) = mean + Σ amplitude_n · sin(nθ + phase_n), θ in radians; the mean is
+ * order 0's amplitude·cos(phase) (phase 0 or π: amplitudes are never negative).
  *
  * @param waveform - one period of the voltage (volts)
  * @param maxOrder - highest order, an integer in [0, 100000]
@@ -49,7 +51,12 @@ export function harmonics(waveform: Waveform, maxOrder: number): Harmonic[] {
     accumulateFourEdges(sinSum, cosSum, jumps.slice(i, i + 4), maxOrder, symmetric ? 2 : 1);
   }
   const result: Harmonic[] = new Array<Harmonic>(maxOrder + 1);
-  result[0] = { order: 0, amplitude: waveformMean(waveform), phase: 0 };
+  // A half-wave symmetric waveform's mean is its centre level exactly; summing the segments
+  // would leave rounding (−3e−13 V for a ±400 V bridge) where the answer is a clean 0.
+  const mean = symmetric
+    ? ((levels[0] as number) + (levels[edgeCount / 2] as number)) / 2
+    : waveformMean(waveform);
+  result[0] = meanHarmonic(mean);
   for (let n = 1; n <= maxOrder; n++) {
     // v = a_n cos nθ + b_n sin nθ with a_n = −ΣΔ sin/(πn), b_n = ΣΔ cos/(πn)
     const scale = 1 / (Math.PI * n);

@@ -82,7 +82,15 @@ describe('timerTableToCHeader', () => {
       expect(header).toContain(field);
     }
     expect(header).toContain('80000000 Hz');
-    expect(header).toContain('0.0000015 s requested, 120 ticks');
+    expect(header).toContain('1500 ns requested, 120 ticks = 1500 ns realised');
+    // Times print cleanly (issue 10): 500 ns held as 5.000000000000001e-7 s in binary, and a
+    // realised dead time of 40 ticks at 80 MHz, are written in ns without binary rounding.
+    const fine = timerTableToCHeader(timerTable({ ...options, deadTime: 500 * 1e-9 }));
+    expect(500 * 1e-9).toBe(5.000000000000001e-7);
+    expect(fine).toContain('deadTime');
+    expect(fine).toContain('500 ns requested, 40 ticks = 500 ns realised');
+    // No number longer than 12 significant digits and a point (5.000000000000001e-7 has 17).
+    expect(fine).not.toMatch(/\d[\d.]{15,}|e-\d/);
     expect(header).toContain('#include <stdint.h>');
     expect(header).toContain('static const uint16_t pwm_table_a_high[PWM_TABLE_LENGTH]');
     expect(header).toMatch(/^#ifndef PWM_TABLE_H$/m);

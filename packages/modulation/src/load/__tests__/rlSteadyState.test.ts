@@ -134,7 +134,10 @@ describe('rlSteadyState against the harmonic sum (standard circuit analysis)', (
     angles.forEach((theta, k) => {
       const summed = spectrum.reduce(
         (sum, h) =>
-          sum + (h.order === 0 ? h.amplitude : h.amplitude * Math.sin(h.order * theta + h.phase)),
+          sum +
+          (h.order === 0
+            ? h.amplitude * Math.cos(h.phase)
+            : h.amplitude * Math.sin(h.order * theta + h.phase)),
         0,
       );
       assertInDelta(exact[k] as number, summed, bound, `θ = ${theta}`);

@@ -4,6 +4,11 @@ import { sheWaveform } from '../index.js';
 import { assertInDelta } from '../../testing/assertInDelta.js';
 
 /** Signed sine coefficient b_n of a spectrum entry (a_n is zero for these patterns). */
+/** The mean of an order-0 entry: amplitude·cos(phase) (the `Harmonic` convention). */
+function meanOf(h: { amplitude: number; phase: number } | undefined): number {
+  return h ? h.amplitude * Math.cos(h.phase) : Number.NaN;
+}
+
 function sineCoefficient(h: { amplitude: number; phase: number } | undefined): number {
   return h === undefined ? NaN : h.amplitude * Math.cos(h.phase);
 }
@@ -34,7 +39,7 @@ describe('sheWaveform', () => {
         }
         // Exact spectrum versus closed form: rounding only (harmonics is accurate to ~1e-13 vdc).
         assertInDelta(
-          n === 0 ? (spectrum[0]?.amplitude ?? NaN) : sineCoefficient(spectrum[n]),
+          n === 0 ? meanOf(spectrum[0]) : sineCoefficient(spectrum[n]),
           expected,
           1e-10 * vdc,
           `order ${n}`,

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { harmonics, thd, wthd } from '../index.js';
+import { sineTriangle } from '../../carrier/index.js';
 import { assertInDelta } from '../../testing/assertInDelta.js';
 
 describe('harmonics of a square wave', () => {
@@ -47,5 +48,24 @@ describe('harmonics input checks', () => {
     expect(() => harmonics({ edges: [1, 0.5], levels: [1, -1] }, 3)).toThrow(/waveform.edges\[1\]/);
     expect(() => harmonics({ edges: [0, 7], levels: [1, -1] }, 3)).toThrow(/\[0, 2π\)/);
     expect(() => harmonics({ edges: [0, 1], levels: [1, NaN] }, 3)).toThrow(/levels\[1\]/);
+  });
+});
+
+describe('harmonics: the mean (order 0)', () => {
+  // Issue 10: the default bridge (bipolar, ma 0.8, mf 21, ±400 V) returned −3.1e-13 V for its
+  // mean. With an odd frequency ratio the bipolar waveform has half-wave symmetry, so its mean
+  // is exactly 0 (common practice, docs/references.md "Facts of the trade").
+  it('is exactly 0 for a half-wave symmetric bridge and never negative', () => {
+    const bridge = sineTriangle({ scheme: 'bipolar', ma: 0.8, mf: 21, vdc: 400 });
+    expect(harmonics(bridge, 3)[0]).toEqual({ order: 0, amplitude: 0, phase: 0 });
+  });
+
+  it('gives a negative mean as its magnitude with phase π (mean = amplitude·cos(phase))', () => {
+    // −100 V for a quarter period, 0 V otherwise: mean −25 V (the area over 2π).
+    const pulse = { edges: [0, Math.PI / 2], levels: [-100, 0] };
+    const [mean] = harmonics(pulse, 1);
+    assertInDelta(mean?.amplitude ?? NaN, 25, 1e-12, 'amplitude');
+    expect(mean?.phase).toBe(Math.PI);
+    assertInDelta((mean?.amplitude ?? NaN) * Math.cos(mean?.phase ?? NaN), -25, 1e-12, 'mean');
   });
 });
