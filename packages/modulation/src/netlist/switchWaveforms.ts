@@ -1,4 +1,6 @@
-import { timerTableWaveforms, type TimerTable, type Waveform } from '@pulsewright/modulation';
+import { timerTableWaveforms } from '../firmware/timerTableWaveforms.js';
+import type { TimerTable } from '../firmware/timerTableTypes.js';
+import type { Waveform } from '../waveform/Waveform.js';
 
 /** One signal of the bridge over a fundamental period: angles in radians of the realised period. */
 export interface NamedWaveform {

@@ -1,5 +1,5 @@
-import type { Waveform } from '@pulsewright/modulation';
-import { InputError } from '../errors.js';
+import { ParameterRangeError } from '../validation/errors.js';
+import type { Waveform } from '../waveform/Waveform.js';
 
 /** Options of {@link pwlPoints}. */
 export interface PwlOptions {
@@ -19,7 +19,7 @@ export interface PwlOptions {
  * that starts at t = θ/2π·period and reaches the new level `riseTime` (upward) or `fallTime`
  * (downward) later; the source holds its level between ramps and to the end of the last period.
  * Times strictly increase, as a PWL source needs.
- * @throws InputError naming --rise-time or --fall-time when a ramp would reach the next edge
+ * @throws ParameterRangeError naming `riseTime` or `fallTime` when a ramp would reach the next edge
  */
 export function pwlPoints(waveform: Waveform, options: PwlOptions): [number, number][] {
   const { period, periods, riseTime, fallTime } = options;
@@ -44,10 +44,10 @@ export function pwlPoints(waveform: Waveform, options: PwlOptions): [number, num
       const start = ((edges[i] as number) / (2 * Math.PI) + p) * period;
       const ramp = level > previous ? riseTime : fallTime;
       if (start <= lastEnd) {
-        const flag = level > previous ? '--rise-time' : '--fall-time';
-        throw new InputError(
-          flag,
-          `${flag} must be shorter than the shortest time between two edges of a signal (a ramp would reach the next edge at ${start} s); got ${ramp}`,
+        throw new ParameterRangeError(
+          level > previous ? 'riseTime' : 'fallTime',
+          `shorter than the shortest time between two edges of a signal, seconds (a ramp would reach the next edge at ${start} s)`,
+          ramp,
         );
       }
       if (start > 0) points.push([start, previous]);

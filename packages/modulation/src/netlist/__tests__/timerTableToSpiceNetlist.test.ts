@@ -1,0 +1,250 @@
+import { describe, expect, it } from 'vitest';
+import { timerTable } from '../../firmware/timerTable.js';
+import type { TimerTable, TimerTableOptions } from '../../firmware/timerTableTypes.js';
+import { timerTableWaveforms } from '../../firmware/timerTableWaveforms.js';
+import { ParameterRangeError } from '../../validation/errors.js';
+import type { Waveform } from '../../waveform/Waveform.js';
+import { spiceNetlistSources } from '../spiceNetlistSources.js';
+import { timerTableToSpiceNetlist } from '../timerTableToSpiceNetlist.js';
+import { parseSpiceNetlist, spiceValue, type ParsedSource } from './spiceNetlist.js';
+
+/** The resolution the netlist states for its edge times: 1 ps (it writes them as full doubles). */
+const TIME_RESOLUTION = 1e-12;
+
+interface Edge {
+  start: number;
+  duration: number;
+  from: number;
+  to: number;
+}
+
+/** The ramps of a parsed PWL source: where its value changes between two time points. */
+function rampsOf(source: ParsedSource): Edge[] {
+  const edges: Edge[] = [];
+  for (let i = 1; i < source.points.length; i++) {
+    const [t0, v0] = source.points[i - 1] as [number, number];
+    const [t1, v1] = source.points[i] as [number, number];
+    if (v0 !== v1) edges.push({ start: t0, duration: t1 - t0, from: v0, to: v1 });
+  }
+  return edges;
+}
+
+/** The library waveform's level changes over `periods` periods of `period` seconds, from t = 0. */
+function libraryEdges(
+  waveform: Waveform,
+  period: number,
+  periods: number,
+  scale = 1,
+): { time: number; from: number; to: number }[] {
+  const { edges, levels } = waveform;
+  const result: { time: number; from: number; to: number }[] = [];
+  let previous = (levels[levels.length - 1] as number) * scale;
+  for (let p = 0; p < periods; p++) {
+    edges.forEach((angle, i) => {
+      const level = (levels[i] as number) * scale;
+      if (level !== previous)
+        result.push({ time: (angle / (2 * Math.PI) + p) * period, from: previous, to: level });
+      previous = level;
+    });
+  }
+  return result;
+}
+
+function expectSource(
+  source: ParsedSource | undefined,
+  expected: ReturnType<typeof libraryEdges>,
+  rise: number,
+  fall: number,
+  end: number,
+): void {
+  expect(source).toBeDefined();
+  const ramps = rampsOf(source as ParsedSource);
+  expect(ramps).toHaveLength(expected.length);
+  ramps.forEach((ramp, i) => {
+    const edge = expected[i] as (typeof expected)[number];
+    expect(Math.abs(ramp.start - edge.time)).toBeLessThan(TIME_RESOLUTION);
+    expect(ramp.from).toBe(edge.from);
+    expect(ramp.to).toBe(edge.to);
+    expect(Math.abs(ramp.duration - (edge.to > edge.from ? rise : fall))).toBeLessThan(
+      TIME_RESOLUTION,
+    );
+  });
+  const points = (source as ParsedSource).points;
+  expect(points[0]?.[0]).toBe(0);
+  expect((points[points.length - 1] as [number, number])[0]).toBeGreaterThanOrEqual(
+    end - TIME_RESOLUTION,
+  );
+}
+
+/** The value of a PWL source at time t (linear between points, held after the last). */
+function valueAt(source: ParsedSource, t: number): number {
+  const { points } = source;
+  // The first point at or after t, by bisection.
+  let lo = 1;
+  let hi = points.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if ((points[mid] as [number, number])[0] < t) lo = mid + 1;
+    else hi = mid;
+  }
+  const i = lo;
+  if (i >= points.length) return (points[points.length - 1] as [number, number])[1];
+  const [t0, v0] = points[i - 1] as [number, number];
+  const [t1, v1] = points[i] as [number, number];
+  return v0 + ((v1 - v0) * (t - t0)) / (t1 - t0);
+}
+
+describe('timerTableToSpiceNetlist', () => {
+  it("writes each gate and leg of a three-phase table as a PWL source whose edges are the library's, over the periods asked", () => {
+    const request: TimerTableOptions = {
+      modulation: { method: 'three-phase', zeroSequence: 'third-harmonic', ma: 0.95 },
+      fundamentalFrequency: 50,
+      carrierFrequency: 2550,
+      timerClock: 64_000_000,
+      countingMode: 'edge-aligned',
+      deadTime: 8e-7,
+      vdc: 600,
+    };
+    const table: TimerTable = timerTable(request);
+    const text = timerTableToSpiceNetlist(table, {
+      riseTime: 5e-8,
+      fallTime: 2e-8,
+      periods: 2,
+      gateVoltage: 15,
+      currentAngle: 0.4,
+    });
+    const netlist = parseSpiceNetlist(text);
+    const period = 1 / table.realisedFundamentalFrequency;
+    const high = timerTableWaveforms(table, { currentSign: () => 1 }).legs;
+    const low = timerTableWaveforms(table, { currentSign: () => -1 }).legs;
+    const legs = timerTableWaveforms(table, { currentAngle: 0.4 }).legs;
+    expect(netlist.sources.map((s) => s.name)).toEqual([
+      'Vgate_a_high',
+      'Vgate_a_low',
+      'Vgate_b_high',
+      'Vgate_b_low',
+      'Vgate_c_high',
+      'Vgate_c_low',
+      'Vleg_a',
+      'Vleg_b',
+      'Vleg_c',
+    ]);
+    const byName = new Map(netlist.sources.map((s) => [s.name, s]));
+    ['a', 'b', 'c'].forEach((leg, k) => {
+      // Gate on while the leg sits at +vdc/2 with the current forced out of it (the high side),
+      // or at −vdc/2 with it forced in (the low side): the library's dead-time model.
+      const gateOn = (w: Waveform, sign: number): Waveform => ({
+        edges: w.edges,
+        levels: w.levels.map((v) => (v * sign > 0 ? 15 : 0)),
+      });
+      expectSource(
+        byName.get(`Vgate_${leg}_high`),
+        libraryEdges(gateOn(high[k] as Waveform, 1), period, 2),
+        5e-8,
+        2e-8,
+        2 * period,
+      );
+      expectSource(
+        byName.get(`Vgate_${leg}_low`),
+        libraryEdges(gateOn(low[k] as Waveform, -1), period, 2),
+        5e-8,
+        2e-8,
+        2 * period,
+      );
+      expectSource(
+        byName.get(`Vleg_${leg}`),
+        libraryEdges(legs[k] as Waveform, period, 2),
+        5e-8,
+        2e-8,
+        2 * period,
+      );
+      expect(byName.get(`Vleg_${leg}`)?.nodes).toEqual([`leg_${leg}`, '0']);
+    });
+    expect(netlist.controls).toContainEqual(['.tran', '2e-8', (2 * period).toExponential()]);
+  });
+
+  it("keeps the dead time between the two gates of a leg, and the bipolar bridge's crosswise leg b", () => {
+    const table = timerTable({
+      modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.9 },
+      sampling: 'regular-symmetric',
+      vdc: 300,
+      fundamentalFrequency: 60,
+      carrierFrequency: 3600,
+      timerClock: 72e6,
+      deadTime: 5e-7,
+    });
+    const netlist = parseSpiceNetlist(timerTableToSpiceNetlist(table));
+    const byName = new Map(netlist.sources.map((s) => [s.name, s]));
+    const highA = byName.get('Vgate_a_high') as ParsedSource;
+    const lowA = byName.get('Vgate_a_low') as ParsedSource;
+    expect(byName.get('Vgate_b_high')?.points).toEqual(lowA.points);
+    expect(byName.get('Vgate_b_low')?.points).toEqual(highA.points);
+    expect(byName.get('Vleg_b')?.points).toEqual(
+      (byName.get('Vleg_a') as ParsedSource).points.map(([t, v]) => [t, -v]),
+    );
+    // Between a gate's turn-off and the other gate's turn-on there is the table's dead time,
+    // 36 ticks of 72 MHz = 0.5 µs (compare-offset splits it over both edges of each pulse).
+    const onsets = (s: ParsedSource) =>
+      rampsOf(s)
+        .filter((r) => r.to > r.from)
+        .map((r) => r.start);
+    const offsets = (s: ParsedSource) =>
+      rampsOf(s)
+        .filter((r) => r.to < r.from)
+        .map((r) => r.start);
+    for (const [on, off] of [
+      [onsets(highA), offsets(lowA)],
+      [onsets(lowA), offsets(highA)],
+    ] as const) {
+      on.forEach((t) => {
+        const before = off.filter((u) => u <= t).at(-1);
+        if (before !== undefined) expect(t - before).toBeGreaterThanOrEqual(5e-7 - TIME_RESOLUTION);
+      });
+    }
+    // And never both on, sampled finely over the period (every 20 ns, a fifth of a ramp).
+    let overlap = 0;
+    for (let t = 0; t < 1 / 60; t += 2e-8)
+      overlap = Math.max(overlap, Math.min(valueAt(highA, t), valueAt(lowA, t)));
+    expect(overlap).toBe(0);
+  });
+
+  it('refuses a ramp longer than the time between two edges, and each option out of range, naming it', () => {
+    const table = timerTable({
+      modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.95 },
+      vdc: 300,
+      fundamentalFrequency: 50,
+      carrierFrequency: 20000,
+      timerClock: 72e6,
+    });
+    const fieldOf = (options: Parameters<typeof spiceNetlistSources>[1]): string => {
+      try {
+        spiceNetlistSources(table, options);
+      } catch (error) {
+        expect(error).toBeInstanceOf(ParameterRangeError);
+        return `${(error as ParameterRangeError).field}: ${(error as Error).message}`;
+      }
+      return 'no error';
+    };
+    // A carrier period here is 50 µs; a 20 µs ramp reaches the next edge of some narrow pulse.
+    expect(fieldOf({ riseTime: 2e-5 })).toMatch(
+      /^(riseTime|fallTime): (riseTime|fallTime) must be shorter than the shortest time between two edges of a signal/,
+    );
+    expect(fieldOf({ riseTime: 0 })).toMatch(/^riseTime: riseTime must be a finite number > 0/);
+    expect(fieldOf({ fallTime: -1e-9 })).toMatch(/^fallTime: /);
+    expect(fieldOf({ periods: 1.5 })).toMatch(/^periods: periods must be an integer/);
+    expect(fieldOf({ periods: 1001 })).toMatch(/^periods: /);
+    expect(fieldOf({ gateVoltage: 0 })).toMatch(/^gateVoltage: /);
+    expect(fieldOf({ currentAngle: 7 })).toMatch(/^currentAngle: /);
+    // 400 carrier periods × 4 edges a pulse × 6 signals: 1000 periods would exceed 2 million points.
+    expect(fieldOf({ periods: 1000 })).toMatch(
+      /^periods: periods must be an integer from 1 to \d+ for this table/,
+    );
+  });
+
+  it('reads scale factors as the format describes them', () => {
+    expect(spiceValue('1.5u')).toBeCloseTo(1.5e-6, 18);
+    expect(spiceValue('10MEG')).toBe(1e7);
+    expect(spiceValue('3ns')).toBeCloseTo(3e-9, 20);
+    expect(spiceValue('2.5e-5')).toBe(2.5e-5);
+  });
+});

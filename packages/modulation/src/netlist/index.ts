@@ -1,0 +1,3 @@
+export * from './netlistTypes.js';
+export * from './spiceNetlistSources.js';
+export * from './timerTableToSpiceNetlist.js';
