@@ -1,24 +1,41 @@
-import FFT from 'fft.js';
 import { TAU } from '../math.js';
 import { thd } from '../spectrum/thd.js';
 import { assertFiniteArray, assertNumberInRange, assertOneOf } from '../validation/assertions.js';
 import { FFT_WINDOWS, type FftWindowName } from './FftWindowName.js';
 import { fftWindow } from './fftWindow.js';
+import { realDft } from './realDft.js';
+import { wholePeriods } from './wholePeriods.js';
 
-/** How a capture whose length is not a power of two is fitted to the FFT. */
-export type FftLengthPolicy = 'zero-pad' | 'truncate';
+/**
+ * Which samples are transformed, and at what length: `'whole-periods'` the longest stretch of
+ * whole fundamental periods, at exactly its length; `'zero-pad'` and `'truncate'` fit the capture
+ * to a power of two (kept for comparison with instruments that do so).
+ */
+export type FftLengthPolicy = 'whole-periods' | 'zero-pad' | 'truncate';
+
+/** The length policies {@link FftLengthPolicy} allows. */
+export const FFT_LENGTH_POLICIES: readonly FftLengthPolicy[] = [
+  'whole-periods',
+  'zero-pad',
+  'truncate',
+];
 
 /** Options of {@link fftSpectrum}. */
 export interface FftSpectrumOptions {
-  /** Analysis window. @default 'hann' */
+  /**
+   * Analysis window for a capture that is not exactly periodic (an exactly periodic one read
+   * over whole periods needs none and is read with the rectangular window). @default 'hann'
+   */
   window?: FftWindowName;
   /** Fundamental frequency, hertz, in (0, sampleRate/2). @default estimated from the strongest bin */
   fundamentalFrequency?: number;
-  /** Highest harmonic order reported (orders at or above Nyquist are left out), integer in [1, 1000]. @default 50 */
+  /** Highest harmonic order reported (orders at or above Nyquist are left out), integer in [1, 5000]. @default 50 */
   maxOrder?: number;
   /**
-   * `'zero-pad'` windows all samples and pads with zeros to the next power of two (finer bins,
-   * same resolution); `'truncate'` keeps the first 2^⌊log₂N⌋ samples. @default 'zero-pad'
+   * `'whole-periods'` transforms the longest stretch of whole fundamental periods at exactly its
+   * length (see {@link wholePeriods}); `'zero-pad'` windows all samples and pads with zeros to
+   * the next power of two (finer bins, same resolution); `'truncate'` keeps the first
+   * 2^⌊log₂N⌋ samples. @default 'whole-periods'
    */
   lengthPolicy?: FftLengthPolicy;
 }
@@ -39,14 +56,19 @@ export interface CaptureHarmonic {
 export interface FftSpectrum {
   /** Hertz, as given. */
   sampleRate: number;
-  /** Samples analysed (after truncation). */
+  /** Samples analysed, from the first (the whole periods, or after truncation). */
   sampleCount: number;
-  /** FFT length, a power of two (≥ sampleCount when zero-padded). */
+  /** Transform length: sampleCount, or the power of two it was padded to. */
   fftSize: number;
+  /** Whole fundamental periods in the samples analysed (0 when not one fits). */
+  periods: number;
+  /** True when the capture repeats exactly over `periods` (read with no window, exact bins). */
+  periodic: boolean;
   /** Spacing of `bins.frequency`, sampleRate/fftSize, hertz. */
   binWidth: number;
   /** Resolution of the analysed record, sampleRate/sampleCount, hertz (one "bin" below). */
   resolution: number;
+  /** The window applied: the one asked for, or `'rectangular'` for an exactly periodic capture. */
   window: FftWindowName;
   /** Σw/N of the window over the analysed samples (rectangular 1, Hann 0.5, flat-top ≈ 0.2156). */
   coherentGain: number;
@@ -66,6 +88,8 @@ export interface FftSpectrum {
 export const MIN_CAPTURE_SAMPLES = 16;
 /** Most samples accepted (bounds memory and time). */
 export const MAX_CAPTURE_SAMPLES = 2 ** 21;
+/** Highest harmonic order {@link fftSpectrum} reports (that of a design's default spectrum). */
+export const MAX_CAPTURE_ORDER = 5000;
 
 /** Half-width of each window's main lobe, in bins: the DC-leakage zone skipped by the estimate. */
 const MAIN_LOBE_HALF_WIDTH: Readonly<Record<FftWindowName, number>> = {
@@ -78,12 +102,21 @@ const MAIN_LOBE_HALF_WIDTH: Readonly<Record<FftWindowName, number>> = {
 const COHERENCE_TOLERANCE = 1e-6;
 
 /**
- * Spectrum of an uploaded bench capture, by FFT (the `fft.js` package, radix-4), with the
- * window's coherent gain corrected so a sine of peak amplitude A reads back as A on its bin
+ * Spectrum of an uploaded bench capture by discrete Fourier transform ({@link realDft}: the
+ * `fft.js` package, through the chirp-z transform for lengths that are not powers of two), with
+ * the window's coherent gain corrected so a sine of peak amplitude A reads back as A on its bin
  * (amplitude_k = 2|X_k|/Σw; F. J. Harris, Proc. IEEE 66(1), 1978, on coherent gain and
  * scalloping loss).
  *
- * Harmonic n is read at bin position p = n·f₀/resolution: on the exact bin when p is within
+ * With the default `'whole-periods'` policy the transform covers the longest stretch of whole
+ * fundamental periods at exactly that length ({@link wholePeriods}). A capture that repeats
+ * exactly over them is read with no window, its harmonics exactly on bins, and its fundamental
+ * frequency (when estimated) is periods·sampleRate/samples: an exactly periodic capture reads
+ * the exact DFT of its samples (for a ±V square wave with M samples a period,
+ * 4V/(M·sin(πn/M)) on odd n, within (πn/M)²/6 of the series' 4V/(nπ)). Any other capture is
+ * read with the window asked for over the whole periods that fit.
+ *
+ * Harmonic n is read at bin position p = n·f₀/binWidth: on the exact bin when p is within
  * 1e−6 of an integer (coherent sampling; exact for every window), otherwise as the largest
  * bin within ±1 resolution bin of p (then the amplitude is low by up to the window's
  * scalloping loss: rectangular 3.92 dB, Hann 1.42 dB (Harris, Table I), flat-top ≈ 0.01 dB).
@@ -106,13 +139,13 @@ export function fftSpectrum(
     window = 'hann',
     fundamentalFrequency,
     maxOrder = 50,
-    lengthPolicy = 'zero-pad',
+    lengthPolicy = 'whole-periods',
   } = options;
   assertFiniteArray('samples', samples, MIN_CAPTURE_SAMPLES, MAX_CAPTURE_SAMPLES);
   assertNumberInRange('sampleRate', sampleRate, { min: 0, minExclusive: true });
   assertOneOf('window', window, FFT_WINDOWS);
-  assertOneOf('lengthPolicy', lengthPolicy, ['zero-pad', 'truncate'] as const);
-  assertNumberInRange('maxOrder', maxOrder, { min: 1, max: 1000, integer: true });
+  assertOneOf('lengthPolicy', lengthPolicy, FFT_LENGTH_POLICIES);
+  assertNumberInRange('maxOrder', maxOrder, { min: 1, max: MAX_CAPTURE_ORDER, integer: true });
   if (fundamentalFrequency !== undefined) {
     assertNumberInRange('fundamentalFrequency', fundamentalFrequency, {
       min: 0,
@@ -121,30 +154,106 @@ export function fftSpectrum(
       maxExclusive: true,
     });
   }
-  const power = Math.log2(samples.length);
-  const fftSize = 2 ** (lengthPolicy === 'zero-pad' ? Math.ceil(power) : Math.floor(power));
-  const sampleCount = Math.min(samples.length, fftSize);
+  if (lengthPolicy !== 'whole-periods') {
+    const power = Math.log2(samples.length);
+    const fftSize = 2 ** (lengthPolicy === 'zero-pad' ? Math.ceil(power) : Math.floor(power));
+    const sampleCount = Math.min(samples.length, fftSize);
+    const transform = windowedTransform(samples, sampleCount, fftSize, window, sampleRate);
+    const f0 =
+      fundamentalFrequency ??
+      estimateFundamental(
+        transform.bins.amplitude,
+        samples,
+        sampleCount,
+        sampleRate,
+        fftSize,
+        window,
+      );
+    const periods = Math.floor((sampleCount * f0) / sampleRate);
+    return spectrumResult(
+      transform,
+      f0,
+      fundamentalFrequency === undefined,
+      periods,
+      false,
+      maxOrder,
+    );
+  }
+  let f0 = fundamentalFrequency;
+  if (f0 === undefined) {
+    // The estimate needs only the strongest bin's neighbourhood: a padded power of two is quicker.
+    const size = 2 ** Math.ceil(Math.log2(samples.length));
+    const padded = windowedTransform(samples, samples.length, size, 'hann', sampleRate);
+    f0 = estimateFundamental(
+      padded.bins.amplitude,
+      samples,
+      samples.length,
+      sampleRate,
+      size,
+      'hann',
+    );
+  }
+  const span = wholePeriods(samples, sampleRate, f0);
+  if (span.periodic && fundamentalFrequency === undefined) {
+    f0 = (span.periods * sampleRate) / span.length;
+  }
+  const used = span.periodic ? 'rectangular' : window;
+  const transform = windowedTransform(samples, span.length, span.length, used, sampleRate);
+  return spectrumResult(
+    transform,
+    f0,
+    fundamentalFrequency === undefined,
+    span.periods,
+    span.periodic,
+    maxOrder,
+  );
+}
+
+/** The first `sampleCount` samples windowed, padded with zeros to `size`, and transformed. */
+interface WindowedTransform {
+  sampleRate: number;
+  sampleCount: number;
+  size: number;
+  window: FftWindowName;
+  weightSum: number;
+  out: number[];
+  bins: FftSpectrum['bins'];
+}
+
+function windowedTransform(
+  samples: readonly number[],
+  sampleCount: number,
+  size: number,
+  window: FftWindowName,
+  sampleRate: number,
+): WindowedTransform {
   const weights = fftWindow(sampleCount, { window });
-  const weighted = new Array<number>(fftSize).fill(0);
+  const weighted = new Float64Array(size);
   let weightSum = 0;
   for (let i = 0; i < sampleCount; i++) {
     weighted[i] = (samples[i] as number) * (weights[i] as number);
     weightSum += weights[i] as number;
   }
-  const fft = new FFT(fftSize);
-  const out: number[] = fft.createComplexArray();
-  fft.realTransform(out, weighted);
-  const bins = oneSidedBins(out, fftSize, sampleRate, weightSum);
+  const out = realDft(weighted);
+  const bins = oneSidedBins(out, size, sampleRate, weightSum);
+  return { sampleRate, sampleCount, size, window, weightSum, out, bins };
+}
+
+function spectrumResult(
+  transform: WindowedTransform,
+  f0: number,
+  estimated: boolean,
+  periods: number,
+  periodic: boolean,
+  maxOrder: number,
+): FftSpectrum {
+  const { sampleRate, sampleCount, size, window, weightSum, bins, out } = transform;
   const resolution = sampleRate / sampleCount;
-  const binWidth = sampleRate / fftSize;
-  const estimated = fundamentalFrequency === undefined;
-  const f0 =
-    fundamentalFrequency ??
-    estimateFundamental(bins.amplitude, samples, sampleCount, sampleRate, fftSize, window);
+  const binWidth = sampleRate / size;
   const harmonicList = readHarmonics(
     bins,
     out,
-    fftSize,
+    size,
     weightSum,
     f0,
     binWidth,
@@ -160,7 +269,9 @@ export function fftSpectrum(
   return {
     sampleRate,
     sampleCount,
-    fftSize,
+    fftSize: size,
+    periods,
+    periodic,
     binWidth,
     resolution,
     window,
@@ -173,21 +284,22 @@ export function fftSpectrum(
   };
 }
 
-/** Bins 0 … fftSize/2 as frequency, peak amplitude (2|X|/Σw; DC and Nyquist |X|/Σw), sine phase. */
+/** Bins 0 … ⌊size/2⌋ as frequency, peak amplitude (2|X|/Σw; DC and Nyquist |X|/Σw), sine phase. */
 function oneSidedBins(
   out: readonly number[],
   fftSize: number,
   sampleRate: number,
   weightSum: number,
 ): FftSpectrum['bins'] {
-  const half = fftSize / 2;
+  const half = Math.floor(fftSize / 2);
+  const nyquist = fftSize % 2 === 0 ? half : -1;
   const frequency: number[] = [];
   const amplitude: number[] = [];
   const phase: number[] = [];
   for (let k = 0; k <= half; k++) {
     const re = out[2 * k] as number;
     const im = out[2 * k + 1] as number;
-    const scale = k === 0 || k === half ? 1 : 2;
+    const scale = k === 0 || k === nyquist ? 1 : 2;
     frequency.push((k * sampleRate) / fftSize);
     amplitude.push((scale * Math.hypot(re, im)) / weightSum);
     phase.push(k === 0 ? 0 : sinePhase(re, im));
@@ -212,7 +324,7 @@ function readHarmonics(
   maxOrder: number,
   sampleRate: number,
 ): CaptureHarmonic[] {
-  const half = fftSize / 2;
+  const half = Math.floor(fftSize / 2);
   const reach = resolution / binWidth; // one resolution bin in FFT bins (1 unless zero-padded)
   const result: CaptureHarmonic[] = [];
   for (let order = 1; order <= maxOrder; order++) {
@@ -230,7 +342,7 @@ function readHarmonics(
     }
     const re = out[2 * chosen] as number;
     const im = out[2 * chosen + 1] as number;
-    const scale = chosen === half ? 1 : 2;
+    const scale = chosen === half && fftSize % 2 === 0 ? 1 : 2;
     result.push({
       order,
       frequency,
@@ -263,18 +375,32 @@ function estimateFundamental(
   const hann = fftWindow(sampleCount, { window: 'hann' });
   const weighted = hann.map((w, i) => w * (samples[i] as number));
   const magnitude = (bin: number): number => {
-    // Windowed DTFT at a fractional bin of the (padded) FFT grid, over the analysed samples.
+    // Windowed DTFT at a fractional bin of the (padded) FFT grid, over the analysed samples. The
+    // phasor is advanced by one rotation a sample and set afresh every 1024 samples, so its
+    // rounding stays near 1e−13 while a cosine and sine are computed only once a block.
     const step = (TAU * bin) / fftSize;
+    const rotateRe = Math.cos(step);
+    const rotateIm = -Math.sin(step);
     let re = 0;
     let im = 0;
+    let phasorRe = 1;
+    let phasorIm = 0;
     for (let i = 0; i < sampleCount; i++) {
-      re += (weighted[i] as number) * Math.cos(step * i);
-      im -= (weighted[i] as number) * Math.sin(step * i);
+      if (i % 1024 === 0) {
+        phasorRe = Math.cos(step * i);
+        phasorIm = -Math.sin(step * i);
+      }
+      const w = weighted[i] as number;
+      re += w * phasorRe;
+      im += w * phasorIm;
+      const nextRe = phasorRe * rotateRe - phasorIm * rotateIm;
+      phasorIm = phasorRe * rotateIm + phasorIm * rotateRe;
+      phasorRe = nextRe;
     }
     return Math.hypot(re, im);
   };
   let low = Math.max(0.5, best - reach);
-  let high = Math.min(fftSize / 2 - 0.5, best + reach);
+  let high = Math.min(Math.floor(fftSize / 2) - 0.5, best + reach);
   const ratio = (Math.sqrt(5) - 1) / 2;
   let a = high - ratio * (high - low);
   let b = low + ratio * (high - low);

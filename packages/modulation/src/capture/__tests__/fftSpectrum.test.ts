@@ -95,6 +95,7 @@ describe('fftSpectrum of synthesized sines', () => {
   });
 
   it('bounds the non-coherent amplitude error by each window’s scalloping loss', () => {
+    // On the power-of-two grid (lengthPolicy 'zero-pad' of 2048 samples), a tone between bins.
     // Worst-case scalloping loss at half a bin: rectangular 3.92 dB, Hann 1.42 dB (Harris 1978,
     // Table I); flat-top about 0.01 dB (flat-top window tables, from memory). Tones near bin
     // 100 keep the negative-frequency image's leakage small.
@@ -110,6 +111,7 @@ describe('fftSpectrum of synthesized sines', () => {
             window,
             fundamentalFrequency: frequency,
             maxOrder: 1,
+            lengthPolicy: 'zero-pad',
           },
         );
         worst = Math.min(worst, result.harmonics[0]?.amplitude ?? NaN);
@@ -147,6 +149,7 @@ describe('fftSpectrum of synthesized sines', () => {
       window: 'flat-top',
       fundamentalFrequency: 50,
       maxOrder: 1,
+      lengthPolicy: 'zero-pad',
     });
     expect(padded.fftSize).toBe(1024);
     expect(padded.sampleCount).toBe(1000);
