@@ -17,6 +17,7 @@ export * from './space-vector/index.js';
 export * from './filter/index.js';
 export * from './she/index.js';
 export * from './firmware/index.js';
+export * from './programmed-pattern/index.js';
 export * from './netlist/index.js';
 export * from './losses/index.js';
 export * from './capture/index.js';
