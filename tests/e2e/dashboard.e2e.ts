@@ -339,6 +339,8 @@ export const scenarios: Scenario[] = [
       assert(before.status === 200, `the key signs a request in (got ${before.status})`);
       await screenshot(page, 'api-key');
       await page.getByRole('button', { name: `Revoke ${keyName}` }).click();
+      // Revoking asks first, then takes the new key's secret off the screen.
+      await page.getByRole('button', { name: `Confirm revoking ${keyName}` }).click();
       await page
         .locator(`tr[data-key-name="${keyName}"]`)
         .getByText(/revoked/)
@@ -347,6 +349,10 @@ export const scenarios: Scenario[] = [
         headers: { Authorization: `Bearer ${key}` },
       });
       assert(after.status === 401, `a revoked key is refused (got ${after.status})`);
+      assert(
+        (await page.getByTestId('new-key').count()) === 0,
+        'the revoked key is off the screen',
+      );
       await page.close();
     },
   },
@@ -401,6 +407,13 @@ export const scenarios: Scenario[] = [
         .first()
         .waitFor();
       await screenshot(page, 'viewer-study');
+      // The team page by its URL: what it needs, and no key form the service would refuse.
+      await page.goto(`${context.baseUrl}/team`);
+      await page.getByTestId('team-viewer').waitFor();
+      assert(
+        (await page.getByLabel('Key name').count()) === 0,
+        'no key form for a viewer on the team page',
+      );
       await page.close();
     },
   },

@@ -4,8 +4,7 @@ import { paths } from '../config/paths';
 import { Button } from '../components/ui/Button';
 import { CautionBanner } from '../components/ui/Caution';
 import { ErrorState, Loading } from '../components/ui/QueryState';
-import { useLogout } from '../features/auth/api/auth';
-import { roleAtLeast, useMe } from '../lib/me';
+import { roleAtLeast, useLogout, useMe } from '../lib/api';
 import { useSessionToken } from './useSession';
 
 const NAV = [

@@ -1,10 +1,15 @@
 import { useState, type FormEvent } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { paths } from '../../../config/paths';
-import { errorMessage, fieldErrorOf } from '../../../lib/api';
+import {
+  errorMessage,
+  fieldErrorOf,
+  useAcceptInvitation,
+  useConfirmPasswordReset,
+  useRequestPasswordReset,
+} from '../../../lib/api';
 import { Button } from '../../../components/ui/Button';
 import { TextField } from '../../../components/ui/Field';
-import { useAcceptInvitation, useConfirmPasswordReset, useRequestPasswordReset } from '../api/auth';
 import { AuthLayout } from './SignInPage';
 
 function GeneralError({ error, fields }: { error: unknown; fields: string[] }) {

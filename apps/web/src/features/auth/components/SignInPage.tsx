@@ -1,11 +1,10 @@
 import { useState, type FormEvent } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { paths } from '../../../config/paths';
-import { fieldErrorOf, errorMessage } from '../../../lib/api';
+import { errorMessage, fieldErrorOf, useLogin } from '../../../lib/api';
 import { Button } from '../../../components/ui/Button';
 import { TextField } from '../../../components/ui/Field';
 import { CautionBanner } from '../../../components/ui/Caution';
-import { useLogin } from '../api/auth';
 
 export function AuthLayout({ title, children }: { title: string; children: React.ReactNode }) {
   return (

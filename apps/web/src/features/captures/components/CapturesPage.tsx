@@ -5,20 +5,22 @@ import { Button } from '../../../components/ui/Button';
 import { SelectField, TextField } from '../../../components/ui/Field';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState, Loading, QueryView } from '../../../components/ui/QueryState';
-import { errorMessage, fieldErrorOf } from '../../../lib/api';
 import { formatDate, formatNumber, formatPercent } from '../../../lib/format';
-import { roleAtLeast, useMe } from '../../../lib/me';
 import {
+  errorMessage,
+  fieldErrorOf,
+  roleAtLeast,
   useCapture,
   useCaptureComparison,
   useCaptureSpectrum,
   useCaptures,
+  useMe,
+  useStudies,
   useUploadCapture,
   type CaptureComparison,
   type CaptureWithSeries,
   type FftWindow,
-} from '../api/captures';
-import { useCaptureStudies } from '../api/prediction';
+} from '../../../lib/api';
 
 function UploadForm({ onUploaded }: { onUploaded: (id: string) => void }) {
   const [file, setFile] = useState<File | null>(null);
@@ -176,7 +178,7 @@ function CaptureDetail({ id }: { id: string }) {
 function CaptureAnalysis({ capture }: { capture: CaptureWithSeries }) {
   const [windowName, setWindowName] = useState<FftWindow>('hann');
   const [studyId, setStudyId] = useState('');
-  const studies = useCaptureStudies();
+  const studies = useStudies();
   const study = studies.data?.find((s) => s.id === studyId);
   const spectrum = useCaptureSpectrum(capture.id, windowName);
   const comparison = useCaptureComparison(capture.id, studyId || null, windowName);

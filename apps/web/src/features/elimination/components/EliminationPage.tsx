@@ -8,9 +8,8 @@ import { SelectField, TextField } from '../../../components/ui/Field';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState } from '../../../components/ui/QueryState';
 import { paths } from '../../../config/paths';
-import { errorMessage, fieldErrorOf } from '../../../lib/api';
+import { errorMessage, fieldErrorOf, roleAtLeast, useMe } from '../../../lib/api';
 import { formatNumber, formatPercent } from '../../../lib/format';
-import { roleAtLeast, useMe } from '../../../lib/me';
 import { PATTERN_KIND_OPTIONS } from '../../../lib/modulationOptions';
 import {
   branchesOf,

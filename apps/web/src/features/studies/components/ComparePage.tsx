@@ -10,7 +10,7 @@ import {
   studyReportQueryOptions,
   useStudies,
   type StudyReport,
-} from '../api/studies';
+} from '../../../lib/api';
 import { limitPointName } from '../model/reportFigures';
 
 const COLOURS = ['#12263a', '#d9822b', '#2a8c82', '#8e3b6e', '#c2462e', '#5b6fa8'];

@@ -1,4 +1,4 @@
-import type { StudyReport } from '../api/studies';
+import type { StudyReport } from '../../../lib/api';
 import { NumberField } from '../../../components/ui/Field';
 import { Panel } from '../../../components/ui/Panel';
 import { formatNumber, formatPercent } from '../../../lib/format';

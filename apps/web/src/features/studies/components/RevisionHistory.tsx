@@ -1,9 +1,13 @@
 import { formatDate } from '../../../lib/format';
-import { errorMessage } from '../../../lib/api';
+import {
+  errorMessage,
+  useRestoreStudyRevision,
+  useStudyRevisions,
+  type Study,
+} from '../../../lib/api';
 import { Button } from '../../../components/ui/Button';
 import { Panel } from '../../../components/ui/Panel';
 import { QueryView } from '../../../components/ui/QueryState';
-import { useRestoreStudyRevision, useStudyRevisions, type Study } from '../api/studies';
 
 /** Every revision of a study, newest first, with restore for editors. */
 export function RevisionHistory({ study, canEdit }: { study: Study; canEdit: boolean }) {

@@ -1,8 +1,7 @@
 import { useId, useState, type FormEvent } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { TextField } from '../../../components/ui/Field';
-import { errorMessage, fieldErrorOf } from '../../../lib/api';
-import { useShareStudyReport } from '../api/studies';
+import { errorMessage, fieldErrorOf, useShareStudyReport } from '../../../lib/api';
 
 const MESSAGE_MAX = 2000;
 

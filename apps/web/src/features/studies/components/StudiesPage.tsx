@@ -2,14 +2,21 @@ import { MODULATION_METHOD_LABELS } from '@pulsewright/modulation';
 import { useDeferredValue, useState, type FormEvent } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
 import { paths } from '../../../config/paths';
-import { fieldErrorOf, errorMessage } from '../../../lib/api';
+import {
+  errorMessage,
+  fieldErrorOf,
+  roleAtLeast,
+  useCreateProject,
+  useDuplicateStudy,
+  useMe,
+  useProjects,
+  useStudies,
+} from '../../../lib/api';
 import { formatDate } from '../../../lib/format';
 import { Button } from '../../../components/ui/Button';
 import { TextField } from '../../../components/ui/Field';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { QueryView } from '../../../components/ui/QueryState';
-import { roleAtLeast, useMe } from '../../../lib/me';
-import { useCreateProject, useDuplicateStudy, useProjects, useStudies } from '../api/studies';
 import { describeDesign } from '../model/describeDesign';
 
 /** Projects and their studies: search, create, duplicate, pick several to compare. */

@@ -1,4 +1,4 @@
-import type { StudyReport } from '../api/studies';
+import type { StudyReport } from '../../../lib/api';
 import { useState } from 'react';
 import { FigureCards } from '../../../components/charts/FigureCards';
 import { HarmonicTable } from '../../../components/charts/HarmonicTable';

@@ -2,12 +2,11 @@ import type { AnalyseDesignOptions } from '@pulsewright/modulation';
 import { useCallback, useMemo, useState } from 'react';
 import { Link, useLocation, useNavigate, useParams, useSearchParams } from 'react-router-dom';
 import { paths } from '../../../config/paths';
-import { errorMessage, fieldErrorOf } from '../../../lib/api';
+import { errorMessage, fieldErrorOf, roleAtLeast, useMe } from '../../../lib/api';
 import { formatNumber, formatPercent } from '../../../lib/format';
 import { Button } from '../../../components/ui/Button';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState, Loading } from '../../../components/ui/QueryState';
-import { roleAtLeast, useMe } from '../../../lib/me';
 import {
   useCreateStudy,
   useDuplicateStudy,
@@ -17,7 +16,7 @@ import {
   useUpdateStudy,
   type Study,
   type StudyCreate,
-} from '../api/studies';
+} from '../../../lib/api';
 import {
   defaultDraft,
   designOf,

@@ -7,7 +7,7 @@ import {
 } from '@pulsewright/modulation';
 import { fieldErrorOf } from '../../../lib/api';
 import { NumberField, SelectField, SliderField, TextField } from '../../../components/ui/Field';
-import type { Project } from '../api/studies';
+import type { Project } from '../../../lib/api';
 import type { PreviewFieldError } from '../model/designPreview';
 import { formatNumber } from '../../../lib/format';
 import {

@@ -1,4 +1,4 @@
-import type { StudyReport } from '../api/studies';
+import type { StudyReport } from '../../../lib/api';
 import type { Figure } from '../../../components/charts/FigureCards';
 import { formatGain, formatNumber, formatPercent } from '../../../lib/format';
 

@@ -1,31 +1,25 @@
+import type { ZeroSequence } from '@pulsewright/modulation';
 import { useState, type FormEvent } from 'react';
 import { LineChart } from '../../../components/charts/LineChart';
 import { Button } from '../../../components/ui/Button';
 import { SelectField, TextField } from '../../../components/ui/Field';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState, QueryView } from '../../../components/ui/QueryState';
-import { errorMessage, fieldErrorOf } from '../../../lib/api';
 import { formatDate, formatPercent } from '../../../lib/format';
 import {
   METHOD_OPTIONS,
   SCHEME_OPTIONS,
   ZERO_SEQUENCE_OPTIONS,
 } from '../../../lib/modulationOptions';
-import { useCreateMaSweep, useJob, useJobs, type Job, type ZeroSequence } from '../api/jobs';
-
-/** The result of an ma sweep as the API returns it (the library's ModulationIndexSweep). */
-interface SweepResult {
-  ma: number[];
-  fundamental?: number[];
-  thd: number[];
-  wthd: number[];
-  harmonics?: { order: number; amplitude: number[] }[];
-}
-
-function isSweepResult(value: unknown): value is SweepResult {
-  const v = value as SweepResult | null;
-  return Boolean(v && Array.isArray(v.ma) && Array.isArray(v.thd) && Array.isArray(v.wthd));
-}
+import {
+  errorMessage,
+  fieldErrorOf,
+  maSweepResultOf,
+  useCreateMaSweep,
+  useJob,
+  useJobs,
+  type Job,
+} from '../../../lib/api';
 
 export function ProgressBar({ value, label }: { value: number; label: string }) {
   const percent = Math.round(Math.min(1, Math.max(0, value)) * 100);
@@ -231,7 +225,7 @@ export function SweepsPage() {
 function SweepJob({ job, error }: { job: Job | undefined; error: unknown }) {
   if (error) return <ErrorState error={error} />;
   if (!job) return <ProgressBar value={0} label="Queued" />;
-  const result = isSweepResult(job.result) ? job.result : null;
+  const result = maSweepResultOf(job);
   return (
     <div className="flex flex-col gap-4">
       <Panel title="Job">

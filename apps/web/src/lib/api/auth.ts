@@ -1,8 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api, unwrap, unwrapEmpty } from '../../../lib/api';
-import { session } from '../../../lib/session';
+import { session } from '../session';
+import { api, unwrap, unwrapEmpty, type BodyOf } from './client';
 
-export async function login(body: { email: string; password: string }) {
+// Sign-in, sign-out, password reset and invitations: mutations only. A new session starts with
+// an empty cache, so nothing read under the previous one is shown.
+
+export async function login(body: BodyOf<'login'>) {
   return unwrap(await api.POST('/api/v1/auth/login', { body }));
 }
 
@@ -32,7 +35,7 @@ export function useLogout() {
   });
 }
 
-export async function requestPasswordReset(body: { email: string }) {
+export async function requestPasswordReset(body: BodyOf<'requestPasswordReset'>) {
   return unwrap(await api.POST('/api/v1/auth/password-reset', { body }));
 }
 
@@ -40,7 +43,7 @@ export function useRequestPasswordReset() {
   return useMutation({ mutationFn: requestPasswordReset });
 }
 
-export async function confirmPasswordReset(body: { token: string; password: string }) {
+export async function confirmPasswordReset(body: BodyOf<'confirmPasswordReset'>) {
   unwrapEmpty(await api.POST('/api/v1/auth/password-reset/confirm', { body }));
 }
 
@@ -48,7 +51,7 @@ export function useConfirmPasswordReset() {
   return useMutation({ mutationFn: confirmPasswordReset });
 }
 
-export async function acceptInvitation(body: { token: string; name: string; password: string }) {
+export async function acceptInvitation(body: BodyOf<'acceptInvitation'>) {
   return unwrap(await api.POST('/api/v1/invitations/accept', { body }));
 }
 

@@ -1,17 +1,26 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { Problem, Schema } from '@pulsewright/client';
-import { apiPaths } from '../../../config/paths';
-import { api, ApiError, unwrap } from '../../../lib/api';
-import { session } from '../../../lib/session';
+import { apiPaths } from '../../config/paths';
+import { session } from '../session';
+import { ApiError } from './ApiError';
+import { api, unwrap } from './client';
+import { queryKeys } from './queryKeys';
 
 export type Capture = Schema<'Capture'>;
 export type CaptureWithSeries = Schema<'CaptureWithSeries'>;
+export type CaptureSpectrum = Schema<'CaptureSpectrum'>;
+export type CaptureComparison = Schema<'CaptureComparison'>;
+/** The FFT windows the service offers for a capture (from the API document). */
+export type FftWindow = NonNullable<Schema<'CaptureAnalysisRequest'>['window']>;
+
+/** The highest order a capture's spectrum is read to unless a screen asks for more (the API's default). */
+const CAPTURE_MAX_ORDER = 50;
 
 export async function getCaptures(): Promise<Capture[]> {
   return unwrap(await api.GET('/api/v1/captures'));
 }
 export const capturesQueryOptions = () =>
-  queryOptions({ queryKey: ['captures', 'list'], queryFn: getCaptures });
+  queryOptions({ queryKey: queryKeys.captures.list, queryFn: getCaptures });
 export function useCaptures() {
   return useQuery(capturesQueryOptions());
 }
@@ -19,9 +28,10 @@ export function useCaptures() {
 export async function getCapture(id: string): Promise<CaptureWithSeries> {
   return unwrap(await api.GET('/api/v1/captures/{id}', { params: { path: { id } } }));
 }
+/** A capture with its samples; an upload never changes, so it is never stale. */
 export const captureQueryOptions = (id: string) =>
   queryOptions({
-    queryKey: ['captures', 'one', id],
+    queryKey: queryKeys.captures.one(id),
     queryFn: () => getCapture(id),
     staleTime: Infinity,
   });
@@ -84,18 +94,14 @@ export function useUploadCapture() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: uploadCapture,
-    onSuccess: () => client.invalidateQueries({ queryKey: ['captures'] }),
+    onSuccess: () => client.invalidateQueries({ queryKey: queryKeys.captures.all }),
   });
 }
-
-export type CaptureSpectrum = Schema<'CaptureSpectrum'>;
-export type CaptureComparison = Schema<'CaptureComparison'>;
-export type FftWindow = 'rectangular' | 'hann' | 'flat-top';
 
 export async function getCaptureSpectrum(
   id: string,
   window: FftWindow,
-  maxOrder = 50,
+  maxOrder = CAPTURE_MAX_ORDER,
 ): Promise<CaptureSpectrum> {
   return unwrap(
     await api.POST('/api/v1/captures/{id}/spectrum', {
@@ -104,10 +110,14 @@ export async function getCaptureSpectrum(
     }),
   );
 }
-/** The windowed FFT the service computes; a read, so a query (keyed by the window). */
-export const captureSpectrumQueryOptions = (id: string, window: FftWindow, maxOrder = 50) =>
+/** The windowed FFT the service computes; a read (POST only for its options), so a query keyed by the window. */
+export const captureSpectrumQueryOptions = (
+  id: string,
+  window: FftWindow,
+  maxOrder = CAPTURE_MAX_ORDER,
+) =>
   queryOptions({
-    queryKey: ['captures', 'spectrum', id, window, maxOrder],
+    queryKey: queryKeys.captures.spectrum(id, window, maxOrder),
     queryFn: () => getCaptureSpectrum(id, window, maxOrder),
     staleTime: Infinity,
   });
@@ -119,7 +129,7 @@ export async function getCaptureComparison(
   id: string,
   studyId: string,
   window: FftWindow,
-  maxOrder = 50,
+  maxOrder = CAPTURE_MAX_ORDER,
 ): Promise<CaptureComparison> {
   return unwrap(
     await api.POST('/api/v1/captures/{id}/comparison', {
@@ -128,14 +138,15 @@ export async function getCaptureComparison(
     }),
   );
 }
+/** A capture against a study's prediction, order by order (the study may change, so not kept forever). */
 export const captureComparisonQueryOptions = (
   id: string,
   studyId: string,
   window: FftWindow,
-  maxOrder = 50,
+  maxOrder = CAPTURE_MAX_ORDER,
 ) =>
   queryOptions({
-    queryKey: ['captures', 'comparison', id, studyId, window, maxOrder],
+    queryKey: queryKeys.captures.comparison(id, studyId, window, maxOrder),
     queryFn: () => getCaptureComparison(id, studyId, window, maxOrder),
   });
 export function useCaptureComparison(id: string, studyId: string | null, window: FftWindow) {

@@ -6,55 +6,36 @@ import {
   useQueryClient,
 } from '@tanstack/react-query';
 import type { Schema } from '@pulsewright/client';
-import { api, unwrap } from '../../../lib/api';
+import { api, unwrap, type QueryOf } from './client';
+import { queryKeys } from './queryKeys';
 
-export type Project = Schema<'Project'>;
 export type Study = Schema<'Study'>;
 export type StudyRevision = Schema<'StudyRevision'>;
 export type StudyCreate = Schema<'StudyCreate'>;
 export type StudyUpdate = Schema<'StudyUpdate'>;
 /** The design report as the service sends it (the library's `analyseDesign`); the live preview's library report is assignable to it. */
 export type StudyReport = Schema<'DesignReport'>;
-export type StudyReportOptions = Schema<'AnalyseDesignOptions'>;
-
-// Projects ----------------------------------------------------------------------------------
-
-export async function getProjects(q?: string): Promise<Project[]> {
-  return unwrap(await api.GET('/api/v1/projects', { params: { query: q ? { q } : {} } }));
-}
-export const projectsQueryOptions = (q?: string) =>
-  queryOptions({ queryKey: ['projects', q ?? ''], queryFn: () => getProjects(q) });
-export function useProjects(q?: string) {
-  return useQuery(projectsQueryOptions(q));
-}
-
-export async function createProject(body: Schema<'ProjectInput'>): Promise<Project> {
-  return unwrap(await api.POST('/api/v1/projects', { body }));
-}
-export function useCreateProject() {
-  const client = useQueryClient();
-  return useMutation({
-    mutationFn: createProject,
-    onSuccess: () => client.invalidateQueries({ queryKey: ['projects'] }),
-  });
-}
-
-// Studies -----------------------------------------------------------------------------------
+export type StudyReportOptions = QueryOf<'getStudyReport'>;
+export type StudyShareResult = Schema<'StudyShareResult'>;
 
 export interface StudyFilter {
   projectId?: string | undefined;
   q?: string | undefined;
 }
 
+/** The most studies one list shows (the service's page size for the dashboard). */
+const STUDY_LIST_LIMIT = 200;
+
 export async function getStudies({ projectId, q }: StudyFilter = {}): Promise<Study[]> {
-  const query: { projectId?: string; q?: string; limit: number } = { limit: 200 };
+  const query: { projectId?: string; q?: string; limit: number } = { limit: STUDY_LIST_LIMIT };
   if (projectId) query.projectId = projectId;
   if (q) query.q = q;
   return unwrap(await api.GET('/api/v1/studies', { params: { query } }));
 }
+/** The team's studies, of one project and matching `q` when given; the last list stays on screen while the next loads. */
 export const studiesQueryOptions = (filter: StudyFilter = {}) =>
   queryOptions({
-    queryKey: ['studies', 'list', filter.projectId ?? '', filter.q ?? ''],
+    queryKey: queryKeys.studies.list(filter.projectId ?? '', filter.q ?? ''),
     queryFn: () => getStudies(filter),
     placeholderData: keepPreviousData,
   });
@@ -66,7 +47,7 @@ export async function getStudy(id: string): Promise<Study> {
   return unwrap(await api.GET('/api/v1/studies/{id}', { params: { path: { id } } }));
 }
 export const studyQueryOptions = (id: string) =>
-  queryOptions({ queryKey: ['studies', 'one', id], queryFn: () => getStudy(id) });
+  queryOptions({ queryKey: queryKeys.studies.one(id), queryFn: () => getStudy(id) });
 export function useStudy(id: string | undefined) {
   return useQuery({ ...studyQueryOptions(id ?? ''), enabled: Boolean(id) });
 }
@@ -74,13 +55,14 @@ export function useStudy(id: string | undefined) {
 export async function createStudy(body: StudyCreate): Promise<Study> {
   return unwrap(await api.POST('/api/v1/studies', { body }));
 }
+/** Saves a new study; the lists and the projects' study counts refetch. */
 export function useCreateStudy() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: createStudy,
     onSuccess: () => {
-      client.invalidateQueries({ queryKey: ['studies'] });
-      client.invalidateQueries({ queryKey: ['projects'] });
+      client.invalidateQueries({ queryKey: queryKeys.studies.all });
+      client.invalidateQueries({ queryKey: queryKeys.projects.all });
     },
   });
 }
@@ -93,10 +75,10 @@ export function useUpdateStudy() {
   return useMutation({
     mutationFn: updateStudy,
     onSuccess: (study) => {
-      client.setQueryData(studyQueryOptions(study.id).queryKey, study);
-      client.invalidateQueries({ queryKey: ['studies', 'list'] });
-      client.invalidateQueries({ queryKey: ['studies', 'revisions', study.id] });
-      client.invalidateQueries({ queryKey: ['studies', 'report', study.id] });
+      client.setQueryData(queryKeys.studies.one(study.id), study);
+      client.invalidateQueries({ queryKey: queryKeys.studies.lists });
+      client.invalidateQueries({ queryKey: queryKeys.studies.revisions(study.id) });
+      client.invalidateQueries({ queryKey: queryKeys.studies.reports(study.id) });
     },
   });
 }
@@ -113,11 +95,9 @@ export function useDuplicateStudy() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: duplicateStudy,
-    onSuccess: () => client.invalidateQueries({ queryKey: ['studies', 'list'] }),
+    onSuccess: () => client.invalidateQueries({ queryKey: queryKeys.studies.lists }),
   });
 }
-
-export type StudyShareResult = Schema<'StudyShareResult'>;
 
 export async function shareStudyReport({
   id,
@@ -143,7 +123,10 @@ export async function getStudyRevisions(id: string): Promise<StudyRevision[]> {
   return unwrap(await api.GET('/api/v1/studies/{id}/revisions', { params: { path: { id } } }));
 }
 export const studyRevisionsQueryOptions = (id: string) =>
-  queryOptions({ queryKey: ['studies', 'revisions', id], queryFn: () => getStudyRevisions(id) });
+  queryOptions({
+    queryKey: queryKeys.studies.revisions(id),
+    queryFn: () => getStudyRevisions(id),
+  });
 export function useStudyRevisions(id: string | undefined) {
   return useQuery({ ...studyRevisionsQueryOptions(id ?? ''), enabled: Boolean(id) });
 }
@@ -169,8 +152,8 @@ export function useRestoreStudyRevision() {
   return useMutation({
     mutationFn: restoreStudyRevision,
     onSuccess: (study) => {
-      client.setQueryData(studyQueryOptions(study.id).queryKey, study);
-      client.invalidateQueries({ queryKey: ['studies'] });
+      client.setQueryData(queryKeys.studies.one(study.id), study);
+      client.invalidateQueries({ queryKey: queryKeys.studies.all });
     },
   });
 }
@@ -183,10 +166,10 @@ export async function getStudyReport(
     await api.GET('/api/v1/studies/{id}/report', { params: { path: { id }, query: options } }),
   );
 }
-/** The report of a study's current revision; the key holds the id, so a save of that study refetches it. */
+/** The report of a study's current revision; a save of that study refetches it. */
 export const studyReportQueryOptions = (id: string, options: StudyReportOptions = {}) =>
   queryOptions({
-    queryKey: ['studies', 'report', id, options],
+    queryKey: queryKeys.studies.report(id, options),
     queryFn: () => getStudyReport(id, options),
   });
 export function useStudyReport(id: string | undefined, options: StudyReportOptions = {}) {

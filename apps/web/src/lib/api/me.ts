@@ -1,9 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { Schema } from '@pulsewright/client';
-import { api, unwrap } from './api';
-import { session } from './session';
+import { session } from '../session';
+import { api, unwrap } from './client';
+import { queryKeys } from './queryKeys';
 
-// Who is signed in: shared by every feature (features never import each other).
+// Who is signed in, with their team and role (GET /api/v1/me).
 
 export type Me = Schema<'Me'>;
 export type Role = Schema<'Role'>;
@@ -14,7 +15,7 @@ export async function getMe(): Promise<Me> {
 
 export const meQueryOptions = () =>
   queryOptions({
-    queryKey: ['me', session.getToken()],
+    queryKey: queryKeys.me(session.getToken()),
     queryFn: getMe,
     staleTime: 60_000,
     retry: false,
