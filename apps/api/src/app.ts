@@ -10,6 +10,7 @@ import { migrate } from './db/migrate.js';
 import { HttpError } from './http/errors.js';
 import { refuseMalformedPath } from './http/malformedPath.js';
 import { problemHandler } from './http/problemHandler.js';
+import { rateLimitStores } from './http/rateLimitStores.js';
 import { staticWeb } from './http/staticWeb.js';
 import { defineModels } from './models/index.js';
 import { listOperations, loadOpenApiDocument, type OpenApiDocument } from './openapi.js';
@@ -56,8 +57,8 @@ export type PulsewrightApp = Express & {
 };
 
 /**
- * Builds the service: opens and migrates the database, seeds a new one, marks jobs a crash left
- * running as failed, and assembles the middleware. It never listens; src/index.ts does.
+ * Builds the service: opens and migrates the database, seeds a new one, starts the job queue
+ * (on SQLite it marks jobs a crash left running as failed), and assembles the middleware. It never listens; src/index.ts does.
  */
 export async function createApp(overrides: ConfigOverrides = {}): Promise<PulsewrightApp> {
   const config = loadConfig(process.env, overrides);
@@ -67,7 +68,7 @@ export async function createApp(overrides: ConfigOverrides = {}): Promise<Pulsew
   const { fresh } = await migrate(sequelize);
   const models = defineModels(sequelize);
   const services = createServices(models, config);
-  await services.jobs.failInterrupted();
+  await services.jobs.startQueue();
   if (fresh && config.seedDemo) await seedDemo(services, config.demoPassword);
 
   const app = express() as PulsewrightApp;
@@ -120,9 +121,10 @@ export async function createApp(overrides: ConfigOverrides = {}): Promise<Pulsew
     }),
   );
   const version = document.info.version;
-  app.use(accountRoutes(services, { ...config, version }));
+  const rateLimits = rateLimitStores(config.databaseUrl, sequelize);
+  app.use(accountRoutes(services, { ...config, version, rateLimits }));
   app.use(studyRoutes(services));
-  app.use(shareRoutes(services, config));
+  app.use(shareRoutes(services, { ...config, rateLimits }));
   app.use(computeRoutes(services));
   app.use(captureRoutes(services));
   app.use('/api', (req, _res, next) =>
@@ -131,10 +133,13 @@ export async function createApp(overrides: ConfigOverrides = {}): Promise<Pulsew
   app.use(staticWeb(config.webDist));
   app.use(problemHandler(document, config.logErrors));
 
+  await rateLimits.ready();
+
   app.services = services;
   app.freshDatabase = fresh;
   app.close = async () => {
     await services.jobs.close(); // and the compute pool
+    await rateLimits.close();
     services.mailer.close();
     await sequelize.close();
   };

@@ -59,6 +59,27 @@ export interface AppConfig {
   validateResponses: boolean;
   /** Budgets and limits of the compute routes and jobs (services/cost.ts, services/computePool.ts). */
   compute: ComputeLimits;
+  /** The shared job queue of PostgreSQL replicas (services/pgBossJobQueue.ts). */
+  jobQueue: JobQueueSettings;
+}
+
+/**
+ * How the replicas on one PostgreSQL database share jobs through pg-boss; unused on SQLite,
+ * where jobs run in the process that took them.
+ */
+export interface JobQueueSettings {
+  /**
+   * A job whose process has not finished it this long after taking it is given to another
+   * worker (a crashed or stalled replica; JOB_EXPIRE_SECONDS). Longer than the longest job.
+   * @default 900
+   */
+  expireSeconds: number;
+  /** Times a job is given to another worker before it is failed (JOB_RETRY_LIMIT). @default 2 */
+  retryLimit: number;
+  /** Seconds between the queue's checks for expired jobs, run by one replica at a time (JOB_QUEUE_MAINTENANCE_SECONDS). @default 30 */
+  maintenanceSeconds: number;
+  /** Seconds between a free worker's looks at the queue (JOB_QUEUE_POLLING_SECONDS). @default 1 */
+  pollingSeconds: number;
 }
 
 /**
@@ -80,7 +101,7 @@ export interface ComputeLimits {
   taskTimeLimitMs: number;
   /** A request that waits longer than this for a free worker is answered 503 (COMPUTE_QUEUE_LIMIT_MS). @default 20 000 */
   queueTimeLimitMs: number;
-  /** Jobs of one process that run at once; the rest wait as `queued` (JOB_CONCURRENCY). @default max(1, threads − 1) */
+  /** Jobs of one process that run at once; the rest wait as `queued` (JOB_CONCURRENCY; 0 runs none here, for a replica that only takes requests). @default max(1, threads − 1) */
   jobConcurrency: number;
   /** Queued and running jobs one user may have (JOB_QUOTA_USER). @default 2 */
   userJobQuota: number;
@@ -93,8 +114,9 @@ export interface ComputeLimits {
 }
 
 /** Settings a caller (a test) gives instead of the environment's; compute limits one by one. */
-export type ConfigOverrides = Partial<Omit<AppConfig, 'compute'>> & {
+export type ConfigOverrides = Partial<Omit<AppConfig, 'compute' | 'jobQueue'>> & {
   compute?: Partial<ComputeLimits>;
+  jobQueue?: Partial<JobQueueSettings>;
 };
 
 /** The repository root (apps/api/src or apps/api/dist → three levels up). */
@@ -143,6 +165,16 @@ export function loadConfig(
     validateResponses: env.VALIDATE_RESPONSES !== 'false',
     ...overrides,
     compute: { ...computeLimits(env, number), ...overrides.compute },
+    jobQueue: {
+      expireSeconds: number('JOB_EXPIRE_SECONDS', 900),
+      retryLimit:
+        env.JOB_RETRY_LIMIT === '0'
+          ? 0
+          : wholeNumber('JOB_RETRY_LIMIT', number('JOB_RETRY_LIMIT', 2)),
+      maintenanceSeconds: number('JOB_QUEUE_MAINTENANCE_SECONDS', 30),
+      pollingSeconds: number('JOB_QUEUE_POLLING_SECONDS', 1),
+      ...overrides.jobQueue,
+    },
   };
 }
 
@@ -151,12 +183,8 @@ function computeLimits(
   env: NodeJS.ProcessEnv,
   number: (name: string, fallback: number) => number,
 ): ComputeLimits {
-  const whole = (name: string, fallback: number): number => {
-    const value = number(name, fallback);
-    if (!Number.isInteger(value))
-      throw new RangeError(`${name} must be a whole number; got ${value}`);
-    return value;
-  };
+  const whole = (name: string, fallback: number): number =>
+    wholeNumber(name, number(name, fallback));
   const threads = whole('COMPUTE_THREADS', Math.max(1, availableParallelism()));
   return {
     requestWorkBudget: number('COMPUTE_WORK_BUDGET', 2.5e8),
@@ -166,12 +194,21 @@ function computeLimits(
     threads,
     taskTimeLimitMs: number('COMPUTE_TIME_LIMIT_MS', 30_000),
     queueTimeLimitMs: number('COMPUTE_QUEUE_LIMIT_MS', 20_000),
-    jobConcurrency: whole('JOB_CONCURRENCY', Math.max(1, threads - 1)),
+    // 0: this process takes requests and starts jobs, and other replicas run them (PostgreSQL).
+    jobConcurrency:
+      env.JOB_CONCURRENCY === '0' ? 0 : whole('JOB_CONCURRENCY', Math.max(1, threads - 1)),
     userJobQuota: whole('JOB_QUOTA_USER', 2),
     teamJobQuota: whole('JOB_QUOTA_TEAM', 6),
     workerHeapMb: whole('COMPUTE_WORKER_HEAP_MB', 1024),
     workerNice: env.COMPUTE_NICE === '0' ? 0 : whole('COMPUTE_NICE', 10),
   };
+}
+
+/** `value` when it is a whole number; a RangeError naming the setting otherwise. */
+function wholeNumber(name: string, value: number): number {
+  if (!Number.isInteger(value))
+    throw new RangeError(`${name} must be a whole number; got ${value}`);
+  return value;
 }
 
 /** The `mail` folder beside a SQLite database file; `data/mail` otherwise. */

@@ -6,6 +6,7 @@ import { principalOf } from '../auth/authorize.js';
 import { HttpError } from '../http/errors.js';
 import type { Services } from '../services/index.js';
 import { dialectOf } from '../db/database.js';
+import type { RateLimitStores } from '../http/rateLimitStores.js';
 
 const tooMany = (what: string, wait: string) => () => {
   throw new HttpError(429, `Too many ${what}; wait ${wait} and try again.`);
@@ -30,7 +31,7 @@ export function accountRoutes(
     | 'acceptRateLimit'
     | 'keyRateLimit'
     | 'databaseUrl'
-  > & { version: string },
+  > & { version: string; rateLimits: RateLimitStores },
 ): Router {
   const router = Router();
   const { auth, apiKeys, team, audit, mailer } = services;
@@ -53,6 +54,7 @@ export function accountRoutes(
       standardHeaders: 'draft-8',
       legacyHeaders: false,
       handler: tooMany(what, wait),
+      store: options.rateLimits.store(what), // shared by the replicas on PostgreSQL
       ...extra,
     });
   const failuresOnly = { skipSuccessfulRequests: true };

@@ -3,9 +3,13 @@ import { rateLimit } from 'express-rate-limit';
 import { principalOf } from '../auth/authorize.js';
 import { HttpError } from '../http/errors.js';
 import type { Services } from '../services/index.js';
+import type { RateLimitStores } from '../http/rateLimitStores.js';
 
 /** E-mailing a study's report (per-user hourly limit, like API key creation). */
-export function shareRoutes(services: Services, options: { shareRateLimit: number }): Router {
+export function shareRoutes(
+  services: Services,
+  options: { shareRateLimit: number; rateLimits: RateLimitStores },
+): Router {
   const router = Router();
   const limiter = rateLimit({
     windowMs: 60 * 60_000,
@@ -13,6 +17,7 @@ export function shareRoutes(services: Services, options: { shareRateLimit: numbe
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     keyGenerator: (req) => principalOf(req).user.id,
+    store: options.rateLimits.store('reports e-mailed'),
     handler: () => {
       throw new HttpError(
         429,

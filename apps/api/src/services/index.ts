@@ -6,7 +6,11 @@ import { AuthService } from './auth.js';
 import { CaptureService } from './captures.js';
 import { ComputePool } from './computePool.js';
 import { ComputeService } from './computeService.js';
+import { InProcessJobQueue } from './inProcessJobQueue.js';
+import type { JobQueue } from './jobQueue.js';
 import { JobService } from './jobs.js';
+import { PgBossJobQueue } from './pgBossJobQueue.js';
+import { dialectOf } from '../db/database.js';
 import { Mailer } from './mail.js';
 import { ProjectService } from './projects.js';
 import { StudyService } from './studies.js';
@@ -29,6 +33,14 @@ export interface Services {
   pool: ComputePool;
   compute: ComputeService;
   jobs: JobService;
+}
+
+/** The job queue for the database: pg-boss shared by the replicas on PostgreSQL, this process on SQLite. */
+function jobQueueFor(models: Models, pool: ComputePool, config: AppConfig): JobQueue {
+  const slots = config.compute.jobConcurrency;
+  return dialectOf(config.databaseUrl) === 'postgres'
+    ? new PgBossJobQueue(config.databaseUrl, models, pool, slots, config.jobQueue)
+    : new InProcessJobQueue(models, pool, slots);
 }
 
 export function createServices(models: Models, config: AppConfig): Services {
@@ -55,6 +67,6 @@ export function createServices(models: Models, config: AppConfig): Services {
     captures: new CaptureService(models, audit, projects, studies, compute),
     pool,
     compute,
-    jobs: new JobService(models, audit, pool, config.compute),
+    jobs: new JobService(models, audit, pool, config.compute, jobQueueFor(models, pool, config)),
   };
 }

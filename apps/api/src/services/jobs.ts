@@ -4,6 +4,7 @@ import type { JobRow, Models } from '../models/index.js';
 import { HttpError, notFound } from '../http/errors.js';
 import type { AuditLog } from './audit.js';
 import type { ComputePool } from './computePool.js';
+import { messageOf, type JobQueue } from './jobQueue.js';
 import { assertWithinBudget, type CostEstimate } from './cost.js';
 import { iso, isoOrNull } from './dto.js';
 import type { Principal } from './principal.js';
@@ -34,40 +35,27 @@ export interface JobPlan {
   result(): unknown;
 }
 
-export const INTERRUPTED_MESSAGE =
-  'The service stopped while this job was running; start it again.';
-
-interface Entry {
-  job: JobRow;
-  plan: JobPlan;
-}
+export { INTERRUPTED_MESSAGE } from './inProcessJobQueue.js';
 
 /**
  * Jobs with progress stored in the jobs table, their work in the compute pool. A job is checked
  * against the job budget, then against the quotas of queued and running jobs per user and per
  * team (429), and stored as `queued`; its first chunk runs before the answer, so input the
- * library rejects gives a 400 and no job. The rest waits for one of `jobConcurrency` slots, so a
- * slot is left for requests, and runs chunk by chunk with `progress` stored after each.
+ * library rejects gives a 400 and no job. The rest is handed to the job queue (services/
+ * jobQueue.ts): in this process on SQLite, through pg-boss on PostgreSQL so any replica runs it.
  */
 export class JobService {
-  private readonly waiting: Entry[] = [];
-  private readonly running = new Set<Promise<void>>();
-  private closing = false;
-
   constructor(
     private readonly models: Models,
     private readonly audit: AuditLog,
     private readonly pool: ComputePool,
     private readonly limits: ComputeLimits,
+    private readonly queue: JobQueue,
   ) {}
 
-  /** Marks jobs that a crash or stop left queued or running as failed (run at start-up). */
-  async failInterrupted(): Promise<number> {
-    const [count] = await this.models.Job.update(
-      { status: 'failed', error: INTERRUPTED_MESSAGE, finishedAt: new Date() },
-      { where: { status: { [Op.in]: ['queued', 'running'] } } },
-    );
-    return count;
+  /** Starts the queue: on SQLite, marks jobs a crash or stop left queued or running as failed. */
+  async startQueue(): Promise<void> {
+    await this.queue.start();
   }
 
   async start(
@@ -100,8 +88,13 @@ export class JobService {
       return toDto(job);
     }
     await job.update({ progress: 1 / plan.chunks });
-    this.waiting.push({ job, plan });
-    await this.pump();
+    try {
+      await this.queue.submit(job, plan);
+    } catch (error) {
+      await this.fail(job, error);
+      throw error;
+    }
+    await job.reload(); // the queue may have started it
     return toDto(job);
   }
 
@@ -163,51 +156,8 @@ export class JobService {
     });
   }
 
-  /** Starts waiting jobs while a slot is free; resolves once their rows say `running`. */
-  private async pump(): Promise<void> {
-    const begun: Promise<unknown>[] = [];
-    while (!this.closing && this.running.size < this.limits.jobConcurrency && this.waiting.length) {
-      const entry = this.waiting.shift() as Entry;
-      const marked = entry.job.update({ status: 'running', startedAt: new Date() });
-      const task: Promise<void> = marked
-        .then(() => this.runRest(entry))
-        .catch(() => undefined)
-        .finally(() => {
-          this.running.delete(task);
-          void this.pump();
-        });
-      this.running.add(task);
-      begun.push(marked.catch(() => undefined));
-    }
-    await Promise.all(begun);
-  }
-
-  private async runRest({ job, plan }: Entry): Promise<void> {
-    try {
-      for (let index = 1; index < plan.chunks; index++) {
-        if (this.closing) return; // left 'running'; the next start marks it failed
-        await plan.runChunk(index, this.pool);
-        if (index < plan.chunks - 1) await job.update({ progress: (index + 1) / plan.chunks });
-      }
-      await job.update({
-        status: 'succeeded',
-        progress: 1,
-        result: plan.result(),
-        finishedAt: new Date(),
-      });
-    } catch (error) {
-      if (this.closing) return;
-      await this.fail(job, error);
-    }
-  }
-
   private async fail(job: JobRow, error: unknown): Promise<void> {
-    const message =
-      error instanceof HttpError
-        ? error.detail
-        : error instanceof Error
-          ? error.message
-          : String(error);
+    const message = messageOf(error);
     await job
       .update({ status: 'failed', error: message, finishedAt: new Date() })
       .catch(() => undefined);
@@ -232,18 +182,16 @@ export class JobService {
 
   /**
    * Stops: no waiting job starts, running chunks are ended with the pool (their workers
-   * terminated), and jobs left queued or running are marked failed at the next start.
+   * terminated); what happens to their jobs is the queue's (services/jobQueue.ts).
    */
   async close(): Promise<void> {
-    this.closing = true;
-    this.waiting.length = 0;
-    await this.pool.close();
-    await Promise.allSettled([...this.running]);
+    await Promise.all([this.queue.close(), this.pool.close()]);
+    await this.queue.idle();
   }
 
-  /** Resolves when every running job has finished, and those that started after them (tests). */
+  /** Resolves when this process runs no job (tests). */
   async idle(): Promise<void> {
-    while (this.running.size) await Promise.allSettled([...this.running]);
+    await this.queue.idle();
   }
 }
 

@@ -66,3 +66,20 @@ export function sheSweepPlan(input: SheSweepInput): JobPlan {
     }),
   };
 }
+
+/**
+ * The plan of each job kind, from the input stored with the job: how a queue worker in any
+ * process rebuilds a job (services/pgBossJobQueue.ts). A new kind adds its line here; the input
+ * is the one its route stored, already checked by the OpenAPI validator and the first chunk.
+ */
+const PLANS: Record<string, (input: Record<string, unknown>) => JobPlan> = {
+  'ma-sweep': (input) => maSweepPlan(input as unknown as MaSweepInput),
+  'she-sweep': (input) => sheSweepPlan(input as unknown as SheSweepInput),
+};
+
+/** The plan of a stored job; throws for a kind this version does not know. */
+export function planForJob(kind: string, input: Record<string, unknown>): JobPlan {
+  const plan = PLANS[kind];
+  if (!plan) throw new Error(`This service does not know jobs of kind ${JSON.stringify(kind)}.`);
+  return plan(input);
+}
