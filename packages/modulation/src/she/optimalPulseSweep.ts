@@ -1,9 +1,13 @@
 import { assertNumberInRange } from '../validation/assertions.js';
-import { ParameterTypeError } from '../validation/errors.js';
+import { ParameterRangeError, ParameterTypeError } from '../validation/errors.js';
 import { bestOptimum, describeOptimum } from './pulseSearch.js';
 import { resolvePulseBase, type PulseSolverSettings } from './pulseOptions.js';
 import { seededStarts } from './seededStarts.js';
-import { assertFundamentalRange, fundamentalGrid } from './validateShe.js';
+import {
+  assertFirstQuarterAngles,
+  assertFundamentalRange,
+  fundamentalGrid,
+} from './validateShe.js';
 import type { FundamentalRange, SheKind } from './SheKind.js';
 
 /** Options of {@link optimalPulseSweep}. */
@@ -25,6 +29,12 @@ export interface OptimalPulseSweepOptions extends PulseSolverSettings {
   maxAngleStep?: number;
   /** Called after each fundamental with the fraction done, 0..1. */
   onProgress?: (fraction: number) => void;
+  /**
+   * The optimum at the grid point before `fundamentals.from` (radians), from an earlier run over
+   * the range before this one: the first point is followed from it, so a sweep run in parts
+   * follows the same family as one run over the whole range.
+   */
+  previous?: number[];
 }
 
 /** One point of an optimal-pattern sweep. `angles` is empty where `converged` is false. */
@@ -71,9 +81,19 @@ export function optimalPulseSweep(options: OptimalPulseSweepOptions): OptimalPul
   if (onProgress !== undefined && typeof onProgress !== 'function') {
     throw new ParameterTypeError('onProgress', 'a function of the fraction done', onProgress);
   }
+  if (options.previous !== undefined) {
+    assertFirstQuarterAngles('previous', options.previous);
+    if (options.previous.length !== base.count) {
+      throw new ParameterRangeError(
+        'previous.length',
+        `count = ${base.count}`,
+        options.previous.length,
+      );
+    }
+  }
   const grid = fundamentalGrid(fundamentals);
   const points: OptimalPulseSweepPoint[] = [];
-  let previous: number[] | null = null;
+  let previous: number[] | null = options.previous ?? null;
   let iterations = 0;
   grid.forEach((fundamental, i) => {
     let point: OptimalPulseSweepPoint | null = null;

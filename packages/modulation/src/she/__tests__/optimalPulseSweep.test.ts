@@ -39,4 +39,40 @@ describe('optimalPulseSweep', () => {
       }
     }
   });
+
+  it('a sweep run in two parts with `previous` follows the same family as one run', () => {
+    const vdc = 100;
+    const scale = (4 * vdc) / Math.PI;
+    const grid = Array.from({ length: 10 }, (_, i) => (0.3 + (0.5 * i) / 9) * scale);
+    const options = { kind: 'bipolar' as const, vdc, count: 4, maxOrder: 59 };
+    const whole = optimalPulseSweep({
+      ...options,
+      fundamentals: { from: grid[0] as number, to: grid[9] as number, points: 10 },
+    });
+    const first = optimalPulseSweep({
+      ...options,
+      fundamentals: { from: grid[0] as number, to: grid[4] as number, points: 5 },
+    });
+    const second = optimalPulseSweep({
+      ...options,
+      fundamentals: { from: grid[5] as number, to: grid[9] as number, points: 5 },
+      previous: first.points[4]?.angles as number[],
+    });
+    expect(second.points[0]?.continued).toBe(true);
+    [...first.points, ...second.points].forEach((point, i) => {
+      const reference = whole.points[i];
+      expect(point.continued).toBe(reference?.continued);
+      // Same optimum: the optimiser converges to rounding level (tolerance from the stopping rule).
+      point.angles.forEach((a, k) =>
+        assertInDelta(a, reference?.angles[k] ?? NaN, 1e-8, `point ${i} angle ${k}`),
+      );
+    });
+    expect(() =>
+      optimalPulseSweep({
+        ...options,
+        fundamentals: { from: 40, to: 50, points: 2 },
+        previous: [0.1, 0.2],
+      }),
+    ).toThrow(/previous.length/);
+  });
 });
