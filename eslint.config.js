@@ -4,6 +4,50 @@ import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
+import importPlugin from 'eslint-plugin-import';
+import { readdirSync } from 'node:fs';
+
+const WEB = './apps/web/src';
+const FEATURES = readdirSync(new URL('./apps/web/src/features', import.meta.url));
+const APP_ONLY = 'Only app/ (router, shell, providers) brings features together.';
+
+/** The dashboard's import rules, with `extraZones` for the files the block covers. */
+function webImportRules(extraZones) {
+  return {
+    plugins: { import: importPlugin },
+    settings: {
+      'import/parsers': { '@typescript-eslint/parser': ['.ts', '.tsx'] },
+      'import/resolver': { typescript: { project: './apps/web/tsconfig.json' } },
+    },
+    rules: {
+      'import/no-cycle': 'error',
+      'import/no-restricted-paths': [
+        'error',
+        {
+          zones: [
+            ...FEATURES.map((feature) => ({
+              target: `${WEB}/features/${feature}`,
+              from: `${WEB}/features`,
+              except: [`./${feature}`],
+              message: 'Features do not import other features; share it from lib/ or components/.',
+            })),
+            {
+              target: `${WEB}/components`,
+              from: [`${WEB}/features`, `${WEB}/app`],
+              message: 'Shared components know no feature.',
+            },
+            {
+              target: [`${WEB}/lib`, `${WEB}/config`],
+              from: [`${WEB}/features`, `${WEB}/app`, `${WEB}/components`],
+              message: 'lib/ and config/ sit below components and features.',
+            },
+            ...extraZones,
+          ],
+        },
+      ],
+    },
+  };
+}
 
 export default tseslint.config(
   {
@@ -37,23 +81,18 @@ export default tseslint.config(
     rules: reactHooks.configs.recommended.rules,
   },
   {
-    // Dashboard features never import each other (STYLE.md): shared code lives in components/,
-    // lib/ and config/; only app/ (router, shell) brings features together.
-    files: ['apps/web/src/features/*/*/*.{ts,tsx}'],
-    rules: {
-      'no-restricted-imports': [
-        'error',
-        {
-          patterns: [
-            {
-              regex: '^\\.\\./\\.\\./[a-z-]+/',
-              message:
-                'Features do not import other features; move shared code to lib/ or components/.',
-            },
-          ],
-        },
-      ],
-    },
+    // Dashboard boundaries (STYLE.md, bulletproof-react): a feature imports no other feature and
+    // not app/ (which brings features together); features use lib/, components/ and config/;
+    // components/ imports no feature; lib/ and config/ import neither features nor components.
+    // Paths are resolved by the TypeScript resolver, so `../../../features/x` is caught as well
+    // as `../x`. Tests may take the app's providers.
+    files: ['apps/web/src/**/*.{ts,tsx}'],
+    ignores: ['apps/web/src/**/*.test.{ts,tsx}'],
+    ...webImportRules([{ target: `${WEB}/features`, from: `${WEB}/app`, message: APP_ONLY }]),
+  },
+  {
+    files: ['apps/web/src/**/*.test.{ts,tsx}'],
+    ...webImportRules([]),
   },
   {
     // Tool configuration files are loaded by their tools through a default export.
