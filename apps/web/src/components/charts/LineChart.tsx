@@ -1,6 +1,6 @@
-import { line, scaleLinear } from 'd3';
+import { line, scaleLinear, scaleLog } from 'd3';
 import { formatNumber } from '../../lib/format';
-import { AxisBottom, AxisLeft } from './axes';
+import { AxisBottom, AxisLeft, leftAxisMargin } from './axes';
 import { ChartFrame } from './ChartFrame';
 import { ChartLegend } from './ChartLegend';
 
@@ -24,6 +24,10 @@ export interface LineChartProps {
   onPick?: (seriesIndex: number, pointIndex: number) => void;
   picked?: { series: number; point: number } | null;
   yFormat?: (v: number) => string;
+  /** A logarithmic y axis (values ≤ 0 are not drawn) or the linear one. @default 'linear' */
+  yScale?: 'linear' | 'log';
+  /** The y range shown, [low, high] in the series' unit; the lines are clipped to it. @default the data's */
+  yDomain?: readonly [number, number] | undefined;
 }
 
 /** Several y(x) series on shared linear axes (sweeps against ma, solution branches). */
@@ -38,19 +42,45 @@ export function LineChart({
   onPick,
   picked,
   yFormat,
+  yScale = 'linear',
+  yDomain,
 }: LineChartProps) {
-  const margin = { top: 14, right: 14, bottom: 40, left: 60 };
+  const top = 14;
+  const bottom = 40;
+  const right = 14;
   const xs = series.flatMap((s) => s.x as number[]);
   const ys = series.flatMap((s) => (s.y as number[]).filter(Number.isFinite));
+  const positive = ys.filter((v) => v > 0);
+  const yRange = [height - bottom, top];
+  const y =
+    yScale === 'log'
+      ? scaleLog()
+          .domain(
+            yDomain && yDomain[0] > 0
+              ? [yDomain[0], yDomain[1]]
+              : [Math.min(...positive, 1), Math.max(...positive, 1e-12)],
+          )
+          .range(yRange)
+          .nice()
+      : scaleLinear()
+          .domain(
+            yDomain
+              ? [yDomain[0], yDomain[1]]
+              : [Math.min(0, ...ys), Math.max(1e-12, ...ys) * 1.05],
+          )
+          .range(yRange)
+          .nice();
+  const yTickFormat = yFormat ?? y.tickFormat(5);
+  const margin = { top, right, bottom, left: leftAxisMargin(y.ticks(5).map(yTickFormat), 60) };
   const x = scaleLinear()
     .domain([Math.min(...xs, 0), Math.max(...xs, 1)])
     .range([margin.left, width - margin.right])
     .nice();
-  const y = scaleLinear()
-    .domain([Math.min(0, ...ys), Math.max(1e-12, ...ys) * 1.05])
-    .range([height - margin.bottom, margin.top])
-    .nice();
-  const path = line<number>().defined((d) => Number.isFinite(d));
+  const [low, high] = y.domain() as [number, number];
+  // Outside the shown range (or ≤ 0 on a log axis) a point is left out, so a line stops at the edge.
+  const shown = (d: number) =>
+    Number.isFinite(d) && d >= low && d <= high && (yScale === 'linear' || d > 0);
+  const path = line<number>().defined(shown);
   return (
     <ChartFrame
       title={title}
@@ -59,6 +89,7 @@ export function LineChart({
     >
       <svg
         data-chart="line"
+        data-scale={yScale}
         viewBox={`0 0 ${width} ${height}`}
         className="w-full text-ink"
         role="img"
@@ -69,7 +100,7 @@ export function LineChart({
           x={margin.left}
           width={width - margin.left - margin.right}
           label={yLabel}
-          format={yFormat}
+          format={yTickFormat}
         />
         {series.map((s, si) => (
           <g key={s.name}>
@@ -82,7 +113,7 @@ export function LineChart({
             />
             {onPick
               ? s.y.map((value, pi) =>
-                  Number.isFinite(value) ? (
+                  shown(value) ? (
                     <circle
                       key={pi}
                       cx={x(s.x[pi] ?? 0)}

@@ -1,6 +1,6 @@
 import { line, scaleLinear } from 'd3';
 import type { ReactNode } from 'react';
-import { AxisBottom, AxisLeft, formatRadians } from './axes';
+import { angleAxis, AxisBottom, AxisLeft } from './axes';
 import { ChartFrame } from './ChartFrame';
 import { ChartLegend } from './ChartLegend';
 
@@ -89,7 +89,8 @@ export function PeriodChart({
           scale={x}
           y={height - margin.bottom}
           label="angle θ (rad)"
-          format={formatRadians}
+          tickValues={angleAxis(0, 2 * Math.PI).ticks}
+          format={angleAxis(0, 2 * Math.PI).format}
         />
       </svg>
     </ChartFrame>

@@ -2,7 +2,7 @@ import { scaleLinear, scaleLog } from 'd3';
 import { useState, type ReactNode } from 'react';
 import { formatNumber, formatPercent } from '../../lib/format';
 import { Button } from '../ui/Button';
-import { AxisBottom, AxisLeft } from './axes';
+import { AxisBottom, AxisLeft, leftAxisMargin } from './axes';
 import { ChartFrame } from './ChartFrame';
 import { ChartLegend } from './ChartLegend';
 
@@ -29,6 +29,8 @@ export interface SpectrumChartProps {
   unit?: string;
   /** Controls shown before the scale button (a choice of voltage). */
   controls?: ReactNode;
+  /** Frequency of order 1, hertz: when given, the x axis can read in hertz as well as in orders. */
+  fundamentalFrequency?: number | undefined;
 }
 
 /** Orders drawn: the fundamental and every harmonic (order 0, the mean, is left out). */
@@ -58,28 +60,48 @@ export function SpectrumChart({
   width = 760,
   unit = 'V',
   controls,
+  fundamentalFrequency,
 }: SpectrumChartProps) {
   const [scaleKind, setScaleKind] = useState<'linear' | 'log'>('linear');
+  const [axisKind, setAxisKind] = useState<'order' | 'frequency'>('order');
+  const inHertz =
+    axisKind === 'frequency' &&
+    fundamentalFrequency !== undefined &&
+    Number.isFinite(fundamentalFrequency) &&
+    fundamentalFrequency > 0;
   const [hover, setHover] = useState<number | null>(null);
   const height = 280;
-  const margin = { top: 22, right: 14, bottom: 40, left: 60 };
   const all = series.map((s) => drawnHarmonics(s.harmonics));
   const maxOrder = Math.max(1, ...all.flat().map((h) => h.order));
   const peak = Math.max(1e-12, ...all.flat().map((h) => h.amplitude));
-  const x = scaleLinear()
-    .domain([0.5, maxOrder + 0.5])
-    .range([margin.left, width - margin.right]);
   const floor = peak * 1e-5;
+  const yRange = [height - 40, 22];
   const y =
     scaleKind === 'linear'
       ? scaleLinear()
           .domain([0, peak * 1.08])
-          .range([height - margin.bottom, margin.top])
+          .range(yRange)
           .nice()
       : scaleLog()
           .domain([floor, peak * 1.5])
-          .range([height - margin.bottom, margin.top])
+          .range(yRange)
           .clamp(true);
+  const yFormat = scaleKind === 'log' ? (v: number) => formatNumber(v, 2) : y.tickFormat(5);
+  const margin = {
+    top: 22,
+    right: 14,
+    bottom: 40,
+    left: leftAxisMargin(y.ticks(5).map(yFormat), 60),
+  };
+  const x = scaleLinear()
+    .domain([0.5, maxOrder + 0.5])
+    .range([margin.left, width - margin.right]);
+  // The same positions read in hertz: order n sits at n·f₁.
+  const f1 = inHertz ? (fundamentalFrequency as number) : 1;
+  const hertz = scaleLinear()
+    .domain([0.5 * f1, (maxOrder + 0.5) * f1])
+    .range(x.range());
+  const kilohertz = inHertz && (maxOrder + 0.5) * f1 >= 10_000;
   const step = (width - margin.left - margin.right) / maxOrder;
   const barWidth = Math.max(0.6, (step * 0.82) / series.length);
   const base = height - margin.bottom;
@@ -121,6 +143,15 @@ export function SpectrumChart({
       controls={
         <>
           {controls}
+          {fundamentalFrequency !== undefined ? (
+            <Button
+              variant="ghost"
+              aria-pressed={inHertz}
+              onClick={() => setAxisKind(inHertz ? 'order' : 'frequency')}
+            >
+              {inHertz ? 'Axis in orders' : 'Axis in Hz'}
+            </Button>
+          ) : null}
           <Button
             variant="ghost"
             aria-pressed={scaleKind === 'log'}
@@ -135,6 +166,7 @@ export function SpectrumChart({
       <svg
         data-chart="spectrum"
         data-scale={scaleKind}
+        data-axis={inHertz ? 'frequency' : 'order'}
         viewBox={`0 0 ${width} ${height}`}
         className="w-full text-ink"
         role="img"
@@ -154,8 +186,8 @@ export function SpectrumChart({
           x={margin.left}
           width={width - margin.left - margin.right}
           label={`amplitude (${unit} peak)`}
-          ticks={scaleKind === 'log' ? 5 : 5}
-          format={scaleKind === 'log' ? (v) => formatNumber(v, 2) : undefined}
+          ticks={5}
+          format={yFormat}
         />
         {series.map((s, i) => (
           <g key={s.name} fill={s.color} data-series={s.name}>
@@ -189,13 +221,23 @@ export function SpectrumChart({
             </text>
           ))}
         </g>
-        <AxisBottom
-          scale={x}
-          y={base}
-          label="harmonic order"
-          ticks={10}
-          format={(v) => String(v)}
-        />
+        {inHertz ? (
+          <AxisBottom
+            scale={hertz}
+            y={base}
+            label={kilohertz ? 'frequency (kHz)' : 'frequency (Hz)'}
+            ticks={10}
+            format={(v) => formatNumber(kilohertz ? v / 1000 : v, 6)}
+          />
+        ) : (
+          <AxisBottom
+            scale={x}
+            y={base}
+            label="harmonic order"
+            ticks={10}
+            format={(v) => String(v)}
+          />
+        )}
         {hovered && hover !== null ? (
           <g
             transform={`translate(${Math.min(x(hover) + 8, width - hoverWidth - 10)},${margin.top})`}
@@ -210,6 +252,7 @@ export function SpectrumChart({
             />
             <text x={8} y={13} fontSize={10} fontWeight={600} fill="currentColor">
               order {hover}
+              {inHertz ? `, ${formatNumber(hover * f1, 6)} Hz` : ''}
               {first.find((h) => h.order === hover)?.label
                 ? ` (${first.find((h) => h.order === hover)?.label})`
                 : ''}

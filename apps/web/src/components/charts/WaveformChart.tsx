@@ -10,7 +10,7 @@ import {
 } from 'd3';
 import { useEffect, useId, useMemo, useRef, useState, type ReactNode } from 'react';
 import { Button } from '../ui/Button';
-import { AxisBottom, AxisLeft, formatRadians } from './axes';
+import { angleAxis, AxisBottom, AxisLeft, formatRadians } from './axes';
 import { ChartFrame } from './ChartFrame';
 
 export interface StepWaveform {
@@ -247,7 +247,8 @@ export function WaveformChart({
           scale={x}
           y={bottomTop + bottomHeight}
           label="angle θ (rad)"
-          format={formatRadians}
+          tickValues={angleAxis(lo, hi).ticks}
+          format={angleAxis(lo, hi).format}
         />
       </svg>
     </ChartFrame>

@@ -1,4 +1,4 @@
-import type { ScaleLinear, ScaleLogarithmic, ScaleBand } from 'd3';
+import { scaleLinear, type ScaleBand, type ScaleLinear, type ScaleLogarithmic } from 'd3';
 
 export interface Margin {
   top: number;
@@ -17,12 +17,15 @@ export function AxisBottom({
   y,
   label,
   ticks = 8,
+  tickValues,
   format,
 }: {
   scale: Continuous;
   y: number;
   label?: string;
   ticks?: number;
+  /** Where to put the ticks (in the scale's domain) instead of the scale's own round numbers. */
+  tickValues?: readonly number[];
   format?: (v: number) => string;
 }) {
   const [x0, x1] = scale.range() as [number, number];
@@ -30,7 +33,7 @@ export function AxisBottom({
   return (
     <g transform={`translate(0,${y})`} aria-hidden>
       <line x1={x0} x2={x1} stroke="currentColor" opacity={0.4} />
-      {scale.ticks(ticks).map((t) => (
+      {(tickValues ?? scale.ticks(ticks)).map((t) => (
         <g key={t} transform={`translate(${scale(t)},0)`}>
           <line y2={5} stroke="currentColor" opacity={0.5} />
           <text y={17} textAnchor="middle" fontSize={10} fill="currentColor">
@@ -66,6 +69,8 @@ export function AxisLeft({
   const [y0, y1] = scale.range() as [number, number];
   const tickFormat = format ?? scale.tickFormat(ticks);
   const values = scale.ticks(ticks);
+  // The label sits clear of the widest tick text (issue 10: "3000 %" ran into the label).
+  const labelX = -leftAxisLabelOffset(values.map((t) => tickFormat(t)));
   return (
     <g transform={`translate(${x},0)`} aria-hidden>
       <line y1={y0} y2={y1} stroke="currentColor" opacity={0.4} />
@@ -80,7 +85,7 @@ export function AxisLeft({
       ))}
       {label ? (
         <text
-          transform={`translate(-44,${(y0 + y1) / 2}) rotate(-90)`}
+          transform={`translate(${labelX},${(y0 + y1) / 2}) rotate(-90)`}
           textAnchor="middle"
           fontSize={11}
           fill="currentColor"
@@ -94,9 +99,83 @@ export function AxisLeft({
 
 export type { ScaleBand };
 
-/** Formats a radian angle as a fraction of π for axis ticks. */
+/** Width of one character of tick text at font size 10, px (a generous mean for digits and signs). */
+const TICK_CHARACTER_WIDTH = 6.2;
+
+/**
+ * How far left of a left axis its rotated label goes (px) so that it clears the widest tick text:
+ * tick mark 8 px, the text, a 10 px gap, half the label's 11 px line. A chart's left margin must
+ * be at least this plus a few px; {@link leftAxisMargin} gives it.
+ */
+export function leftAxisLabelOffset(tickTexts: readonly string[]): number {
+  const widest = Math.max(0, ...tickTexts.map((text) => text.length));
+  return Math.max(44, 8 + widest * TICK_CHARACTER_WIDTH + 10 + 6);
+}
+
+/** A left margin wide enough for the axis's tick texts and its label. */
+export function leftAxisMargin(tickTexts: readonly string[], least = 56): number {
+  return Math.max(least, Math.ceil(leftAxisLabelOffset(tickTexts) + 8));
+}
+
+/** Denominators of the fractions of π that read cleanly on an angle axis. */
+const PI_DENOMINATORS = [1, 2, 3, 4, 6, 12] as const;
+
+/** Tick steps of an angle axis, largest first: π, π/2, π/4, π/6, π/12. */
+const ANGLE_STEPS = [1, 2, 4, 6, 12].map((k) => Math.PI / k);
+
+/** The ticks of an angle axis and how to write them. */
+export interface AngleAxis {
+  /** Tick angles, radians. */
+  ticks: number[];
+  format: (radians: number) => string;
+}
+
+/** An angle in radians written in degrees with up to two decimals (12.5°, −30°). */
+export function formatDegrees(value: number): string {
+  const degrees = Number(((value * 180) / Math.PI).toFixed(2));
+  return `${degrees < 0 ? '−' : ''}${Math.abs(degrees)}°`;
+}
+
+/**
+ * The ticks of an angle axis showing [lo, hi] radians: multiples of π, π/2, π/4, π/6 or π/12,
+ * the coarsest giving at least four intervals, written as fractions of π (0, π/2, π, 3π/2, 2π).
+ * A window narrower than four steps of π/12 (60°) gets round numbers of degrees, written in
+ * degrees, so one axis never mixes the two.
+ */
+export function angleAxis(lo: number, hi: number): AngleAxis {
+  const span = hi - lo;
+  const step = ANGLE_STEPS.find((candidate) => span / candidate >= 4);
+  if (step === undefined) {
+    const toDegrees = 180 / Math.PI;
+    // Rounded to 1e-9° so a window ending at 30° (29.999999999999996 in binary) keeps its 30° tick.
+    const degrees = (angle: number) => Number((angle * toDegrees).toFixed(9));
+    const ticks = scaleLinear()
+      .domain([degrees(lo), degrees(hi)])
+      .ticks(6)
+      .map((d) => d / toDegrees);
+    return { ticks, format: formatDegrees };
+  }
+  const first = Math.ceil(lo / step - 1e-9);
+  const last = Math.floor(hi / step + 1e-9);
+  const ticks: number[] = [];
+  for (let k = first; k <= last; k++) ticks.push(k * step);
+  return { ticks, format: formatRadians };
+}
+
+/**
+ * An angle in radians as a clean fraction of π (0, π/2, 3π/4, −π/6, 2π) when it is a multiple of
+ * π/12, otherwise in degrees with up to two decimals (12.5°).
+ */
 export function formatRadians(value: number): string {
   const ratio = value / Math.PI;
   if (Math.abs(ratio) < 1e-9) return '0';
-  return `${Number(ratio.toFixed(2))}π`;
+  for (const denominator of PI_DENOMINATORS) {
+    const numerator = Math.round(ratio * denominator);
+    if (Math.abs(ratio * denominator - numerator) > 1e-6) continue;
+    const sign = numerator < 0 ? '−' : '';
+    const size = Math.abs(numerator);
+    const top = size === 1 ? 'π' : `${size}π`;
+    return denominator === 1 ? `${sign}${top}` : `${sign}${top}/${denominator}`;
+  }
+  return formatDegrees(value);
 }
