@@ -19,6 +19,7 @@ import { studyRoutes } from './routes/studyRoutes.js';
 import { computeRoutes } from './routes/computeRoutes.js';
 import { captureRoutes } from './routes/captureRoutes.js';
 import { shareRoutes } from './routes/shareRoutes.js';
+import { exportRoutes } from './routes/exportRoutes.js';
 import { createServices, type Services } from './services/index.js';
 import { seedDemo } from './services/seed.js';
 
@@ -127,6 +128,7 @@ export async function createApp(overrides: ConfigOverrides = {}): Promise<Pulsew
   app.use(shareRoutes(services, { ...config, rateLimits }));
   app.use(computeRoutes(services));
   app.use(captureRoutes(services));
+  app.use(exportRoutes(services, { version }));
   app.use('/api', (req, _res, next) =>
     next(new HttpError(404, `No route ${req.method} ${req.originalUrl}.`)),
   );

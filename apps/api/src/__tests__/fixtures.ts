@@ -180,6 +180,19 @@ export const FIXTURES: Record<string, Fixture> = {
       timerClock: 16000000,
     },
   }),
+  computeNetlist: () => ({
+    path: '/api/v1/netlists',
+    body: {
+      timerTable: {
+        modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.8 },
+        fundamentalFrequency: 50,
+        carrierFrequency: 5000,
+        timerClock: 16000000,
+      },
+      riseTime: 5e-8,
+      periods: 2,
+    },
+  }),
   checkHarmonicLimits: () => ({
     path: '/api/v1/harmonic-limits/check',
     body: { design: SINE_TRIANGLE_DESIGN, busVoltage: 230 },
@@ -244,6 +257,17 @@ export const FIXTURES: Record<string, Fixture> = {
   getStudySpectrum: ({ ids }) => ({
     path: `/api/v1/studies/${ids.studyId}/spectrum`,
     query: { maxOrder: 30 },
+  }),
+  getStudyRecord: ({ ids }) => ({ path: `/api/v1/studies/${ids.studyId}/record` }),
+  importStudyRecord: ({ ids }) => ({
+    path: `/api/v1/projects/${ids.projectId}/study-records`,
+    body: {
+      format: 'pulsewright-study-record',
+      formatVersion: 1,
+      name: 'Imported record',
+      note: '',
+      design: SINE_TRIANGLE_DESIGN,
+    },
   }),
   getStudyReport: ({ ids }) => ({
     path: `/api/v1/studies/${ids.studyId}/report`,

@@ -1,6 +1,8 @@
 import { Router } from 'express';
 import { principalOf } from '../auth/authorize.js';
 import { intQuery } from '../http/query.js';
+import { sendData } from '../http/sendData.js';
+import { spectrumCsv, waveformCsv } from '../services/csvExports.js';
 import type { TimerFormat } from '../services/cost.js';
 import type { Services } from '../services/index.js';
 import { maSweepPlan, sheSweepPlan } from '../services/sweepJobs.js';
@@ -14,12 +16,15 @@ export function computeRoutes(services: Services): Router {
   const { compute, jobs } = services;
 
   router.post('/api/v1/spectra', async (req, res) => {
-    res.json(
-      await compute.spectrum(req.body.modulation, req.body.maxOrder ?? 100, req.body.output),
+    const result = await compute.spectrum(
+      req.body.modulation,
+      req.body.maxOrder ?? 100,
+      req.body.output,
     );
+    sendData(req, res, result, spectrumCsv);
   });
   router.post('/api/v1/waveforms', async (req, res) => {
-    res.json(await compute.waveform(req.body.modulation, req.body.output));
+    sendData(req, res, await compute.waveform(req.body.modulation, req.body.output), waveformCsv);
   });
   router.post('/api/v1/designs/report', async (req, res) => {
     const { design, ...options } = req.body;

@@ -1,6 +1,8 @@
 import { Router } from 'express';
 import { intQuery, numberQuery, optionalIntQuery } from '../http/query.js';
 import { principalOf } from '../auth/authorize.js';
+import { sendData } from '../http/sendData.js';
+import { spectrumCsv } from '../services/csvExports.js';
 import type { Services } from '../services/index.js';
 
 /** Projects and studies (every study edit is a new revision). */
@@ -66,7 +68,8 @@ export function studyRoutes(services: Services): Router {
   });
   router.get('/api/v1/studies/:id/spectrum', async (req, res) => {
     const study = await studies.get(principalOf(req).teamId, req.params.id);
-    res.json(await compute.designSpectrum(study.design, intQuery(req, 'maxOrder', 100)));
+    const result = await compute.designSpectrum(study.design, intQuery(req, 'maxOrder', 100));
+    sendData(req, res, result, spectrumCsv);
   });
   router.get('/api/v1/studies/:id/report', async (req, res) => {
     const maxOrder = optionalIntQuery(req, 'maxOrder', 100);

@@ -15,6 +15,7 @@ import {
   captureSpectrumCost,
   captureUploadCost,
   designSpectrumCost,
+  netlistCost,
   reportCost,
   spaceVectorCost,
   spectrumCost,
@@ -29,6 +30,7 @@ import {
   type TaskArgs,
   type TaskResult,
 } from '../workers/computeTasks.js';
+import type { NetlistRequest } from './netlists.js';
 
 /**
  * Every compute a request asks for, in one place: its cost is estimated from the inputs
@@ -165,6 +167,11 @@ export class ComputeService {
       cost,
       'This timer table',
     );
+  }
+
+  /** A timer table's switching pattern as a SPICE netlist (services/netlists.ts). */
+  netlist(request: NetlistRequest) {
+    return this.run('netlist', { request }, netlistCost(request), 'This netlist');
   }
 
   spaceVector(m: number, theta: number, options: SpaceVectorSequenceOptions) {

@@ -271,6 +271,40 @@ export function timerTableCost(options: TimerTableOptions, format: TimerFormat):
   };
 }
 
+/** Bytes of one (time, value) point of a netlist (measured 24.2–25.0 with its comments; rounded up). */
+const NETLIST_BYTES_PER_POINT = 26;
+/** Units per netlist point (building and writing it, as a time-series value). */
+const NETLIST_PER_POINT = 20;
+
+/**
+ * POST /netlists: the timer table, then two points (a ramp's start and end) per edge of each
+ * source, plus its first and last. Each source (two gates and one leg voltage per leg, three
+ * legs or two) switches twice per carrier period: 4 points per carrier period and source over
+ * `periods` periods (default 1); measured 4.00–4.03 with the first and last points.
+ */
+export function netlistCost(request: {
+  timerTable: TimerTableOptions;
+  periods?: number;
+}): CostEstimate {
+  const options = request.timerTable;
+  const table = timerTableCost(options, 'json');
+  const ratio = Math.round(options.carrierFrequency / options.fundamentalFrequency);
+  const signals = 3 * (options.modulation.method === 'three-phase' ? 3 : 2);
+  const periods = request.periods ?? 1;
+  const points = signals * (4 * Math.max(1, ratio) * periods + 2);
+  const fields = ['periods', 'timerTable.carrierFrequency'];
+  return {
+    work: table.work + points * NETLIST_PER_POINT,
+    basis: `${table.basis}, then about ${points} points (${signals} sources × ${periods} periods)`,
+    fields: [
+      ...fields,
+      ...table.fields.map((f) => `timerTable.${f}`).filter((f) => !fields.includes(f)),
+    ],
+    responseBytes: points * NETLIST_BYTES_PER_POINT,
+    responseFields: fields,
+  };
+}
+
 /** POST /captures/{id}/spectrum: an FFT of the capture's samples, harmonics to maxOrder. */
 export function captureSpectrumCost(samples: number, maxOrder: number): CostEstimate {
   const stages = Math.max(1, Math.ceil(Math.log2(Math.max(2, samples))));

@@ -20,6 +20,7 @@ import {
   type VoltageOutput,
 } from '../services/compute.js';
 import { parseCaptureCsv } from '../services/captureCsv.js';
+import { computeNetlist, type NetlistRequest } from '../services/netlists.js';
 import {
   maSweepChunk,
   sheSweepChunk,
@@ -55,6 +56,7 @@ export const COMPUTE_TASKS = {
     checkDesignLimits(a.design, a.busVoltage),
   timerTable: (a: { options: TimerTableOptions; format: TimerFormat; prefix?: string }) =>
     computeTimerTable(a.options, a.format, a.prefix),
+  netlist: (a: { request: NetlistRequest }) => computeNetlist(a.request),
   captureSpectrum: (a: {
     samples: Float64Array | number[];
     sampleRate: number;

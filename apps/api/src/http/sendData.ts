@@ -1,0 +1,24 @@
+import type { Request, Response } from 'express';
+
+/**
+ * Answers a compute result as JSON, or, with `?format=csv` (the `DataFormat` parameter of the
+ * OpenAPI document, checked by the validator), as the CSV `toCsv` makes of it, with the file
+ * name the route's last path segment gives (`spectra.csv`, `waveforms.csv`, `spectrum.csv`).
+ */
+export function sendData<T>(
+  req: Request,
+  res: Response,
+  result: T,
+  toCsv: (result: T) => string,
+): void {
+  if (req.query.format !== 'csv') {
+    res.json(result);
+    return;
+  }
+  const name = req.path.split('/').filter(Boolean).at(-1) ?? 'data';
+  res
+    .status(200)
+    .type('text/csv; charset=utf-8')
+    .setHeader('Content-Disposition', `attachment; filename="${name}.csv"`)
+    .send(toCsv(result));
+}
