@@ -132,6 +132,19 @@ const designs: fc.Arbitrary<InverterDesign> = fc.oneof(
       { requiredKeys: ['method', 'ma'] },
     ),
   ),
+  // The reduced common-mode methods refuse symmetric regular sampling (their inverted carrier).
+  carrier(
+    fc.record(
+      {
+        method: fc.constant('three-phase' as const),
+        ma: fc.double({ min: 0.05, max: 1.15, noNaN: true }),
+        zeroSequence: fc.constantFrom('azspwm1' as const, 'nspwm' as const),
+        sampling: fc.constantFrom('natural' as const, 'regular-asymmetric' as const),
+        carrierPhase,
+      },
+      { requiredKeys: ['method', 'ma', 'zeroSequence'] },
+    ),
+  ),
   carrier(
     fc.oneof(
       fc.record(

@@ -1,6 +1,7 @@
 import type { LcFilterCharacteristics } from '../filter/lcFilter.js';
 import type { HarmonicLimitCheck } from '../limits/checkVoltageHarmonicLimits.js';
 import type { LabelledHarmonic } from '../spectrum/labelHarmonics.js';
+import type { ReducedCommonModeRange } from '../three-phase/reducedCommonModeRange.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import type { ModulationMethod } from './Modulation.js';
 import type { NamedVoltage } from './modulationVoltages.js';
@@ -110,6 +111,26 @@ export interface CommonModeFigures {
   stepsPerCarrierPeriod: number | null;
   /** Orders 0..maxOrder, peak volts, labelled. */
   spectrum: LabelledHarmonic[];
+  /**
+   * For a reduced common-mode method (`azspwm1`, `nspwm`): the ma range over which it keeps the
+   * common mode at ±vdc/6 and the line voltages linear (`reducedCommonModeRange`); null otherwise.
+   */
+  reducedRange: ReducedCommonModeRange | null;
+}
+
+/**
+ * How often the legs of a three-phase bridge switch: the cost side of the discontinuous clamps
+ * and of the reduced common-mode methods (each edge of a leg voltage is one turn-off and one
+ * turn-on in that leg).
+ */
+export interface SwitchingFigures {
+  /** Edges of leg a's voltage per fundamental period (every leg has as many by symmetry). */
+  legEdgesPerPeriod: number;
+  /**
+   * Turn-ons of each switch per second, averaged over the period: legEdgesPerPeriod/2 times the
+   * fundamental frequency, hertz (equal to the carrier frequency for continuous PWM).
+   */
+  averageDeviceFrequency: number;
 }
 
 /** Everything the product shows about one design, from {@link analyseDesign}; plain data. */
@@ -141,6 +162,8 @@ export interface DesignReport {
   dcLink: DcLinkFigures | null;
   /** The common-mode voltage (three-phase only). */
   commonMode: CommonModeFigures | null;
+  /** How often the legs switch (three-phase only). */
+  switching: SwitchingFigures | null;
   /** Mean power into the load resistance, all phases together, watts; null without a load. */
   loadPower: number | null;
   /** The filter's own figures (unloaded) and its loaded gain; null without a filter. */

@@ -22,6 +22,7 @@ import { weightedDistortion } from '../spectrum/distortion.js';
 import type { Harmonic } from '../spectrum/Harmonic.js';
 import { harmonics } from '../spectrum/harmonics.js';
 import { labelHarmonics } from '../spectrum/labelHarmonics.js';
+import { reducedCommonModeRange } from '../three-phase/reducedCommonModeRange.js';
 import { meanHarmonic } from '../spectrum/meanHarmonic.js';
 import { assertNumberInRange } from '../validation/assertions.js';
 import { withFieldPrefix } from '../validation/withFieldPrefix.js';
@@ -34,6 +35,7 @@ import { designModulation } from './designModulation.js';
 import { commonModeFigures } from './commonModeFigures.js';
 import { dcLinkFigures } from './dcLinkFigures.js';
 import type {
+  CommonModeFigures,
   CurrentFigures,
   DesignReport,
   PeriodSeries,
@@ -198,9 +200,17 @@ export function analyseDesign(
     voltages.phaseCount === 3
       ? commonModeFigures(
           voltages.legs.map((v) => v.waveform),
-          { maxOrder, frequencyRatio, label },
+          { maxOrder, frequencyRatio, label, reducedRange: reducedRangeOf(design) },
         )
       : null;
+  const legA = voltages.legs[0];
+  const legSwitching =
+    legA === undefined
+      ? null
+      : {
+          legEdgesPerPeriod: legA.waveform.edges.length,
+          averageDeviceFrequency: (legA.waveform.edges.length / 2) * frequency,
+        };
 
   const pcc = output ?? bridge;
   const pccSpectrum = output === null ? bridge.spectrum : output.spectrum;
@@ -226,11 +236,20 @@ export function analyseDesign(
     currents,
     dcLink,
     commonMode,
+    switching: legSwitching,
     loadPower,
     filter: filter === null ? null : filterFigures(filter, network, frequency, frequencyRatio),
     limitCheck,
     cautions: [DESIGN_CAUTION, HARMONIC_LIMIT_CAUTION],
   };
+}
+
+/** The reduced common-mode range of a three-phase carrier design's zero sequence, else null. */
+function reducedRangeOf(design: InverterDesign): CommonModeFigures['reducedRange'] {
+  const { modulation } = design;
+  return modulation.method === 'three-phase'
+    ? reducedCommonModeRange(modulation.zeroSequence ?? 'none')
+    : null;
 }
 
 type Labeller = (spectrum: readonly Harmonic[]) => DesignReport['bridge']['spectrum'];

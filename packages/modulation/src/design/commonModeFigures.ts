@@ -8,7 +8,8 @@ import type { CommonModeFigures } from './DesignReport.js';
 /**
  * The common-mode voltage (v_a + v_b + v_c)/3 of three leg voltages, exact: its levels, RMS,
  * steps (edges) per period and per carrier period, and spectrum (standard circuit analysis;
- * A. M. Hava and E. Ün, IEEE Trans. Power Electronics, 2009, for why the steps matter).
+ * A. M. Hava and E. Ün, IEEE Trans. Power Electronics, 2009, for why the steps matter), with the
+ * range of a reduced common-mode method passed through.
  * Internal: part of analyseDesign.
  */
 export function commonModeFigures(
@@ -17,9 +18,10 @@ export function commonModeFigures(
     maxOrder: number;
     frequencyRatio: number | null;
     label: (s: readonly Harmonic[]) => CommonModeFigures['spectrum'];
+    reducedRange: CommonModeFigures['reducedRange'];
   },
 ): CommonModeFigures {
-  const { maxOrder, frequencyRatio, label } = context;
+  const { maxOrder, frequencyRatio, label, reducedRange } = context;
   const waveform = combineWaveforms(legs, ([a = 0, b = 0, c = 0]) => (a + b + c) / 3);
   // Levels are sums of ±vdc/2 thirds: round away the last bits so equal levels compare equal.
   const levels = [...new Set(waveform.levels.map((level) => Number(level.toPrecision(12))))].sort(
@@ -34,5 +36,6 @@ export function commonModeFigures(
     stepsPerPeriod: steps,
     stepsPerCarrierPeriod: frequencyRatio === null ? null : steps / frequencyRatio,
     spectrum: label(harmonics(waveform, maxOrder)),
+    reducedRange,
   };
 }

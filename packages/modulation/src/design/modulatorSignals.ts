@@ -2,6 +2,7 @@ import { sineReference } from '../carrier/sineReference.js';
 import { triangleCarrier } from '../carrier/triangleCarrier.js';
 import { TAU } from '../math.js';
 import { spaceVectorIndices } from '../space-vector/spaceVectorIndices.js';
+import { invertsCarrier } from '../three-phase/invertsCarrier.js';
 import { threePhaseReference } from '../three-phase/threePhaseReference.js';
 import { assertNumberInRange } from '../validation/assertions.js';
 import type { Modulation } from './Modulation.js';
@@ -19,7 +20,8 @@ export interface ModulatorSignals {
 /**
  * The reference and carrier a modulation compares, for the modulator chart: sine-triangle's
  * ma·sin θ against the unit triangle (Holmes and Lipo, 2003, ch. 3), three-phase carrier PWM's
- * phase-a reference with its zero sequence against the shared carrier (ch. 5 and 7), space
+ * phase-a reference with its zero sequence against the shared carrier (ch. 5 and 7; inverted
+ * where a reduced common-mode method inverts phase a's, see `invertsCarrier`), space
  * vector's phase-a sine reference alone. Null for a stored pattern, which has no modulator.
  *
  * @param points - samples over the period, integer in [64, 20000]; at least 8 a carrier period
@@ -47,9 +49,16 @@ export function modulatorSignals(modulation: Modulation, points = 1200): Modulat
         })
       : sineReference(modulation.ma);
   const alignment = { mf: modulation.mf, carrierPhase: modulation.carrierPhase ?? 0 };
+  const zeroSequence = modulation.method === 'three-phase' ? modulation.zeroSequence : undefined;
   return {
     angles,
     reference: angles.map((t) => reference.value(t)),
-    carrier: angles.map((t) => triangleCarrier(t, alignment)),
+    // The reduced common-mode methods compare phase a with the inverted carrier while it is the
+    // middle phase: the chart shows the carrier phase a really meets.
+    carrier: angles.map((t) =>
+      zeroSequence !== undefined && invertsCarrier(zeroSequence, 0, t, alignment)
+        ? -triangleCarrier(t, alignment)
+        : triangleCarrier(t, alignment),
+    ),
   };
 }

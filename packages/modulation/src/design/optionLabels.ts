@@ -38,6 +38,8 @@ export const ZERO_SEQUENCE_LABELS: Readonly<Record<ZeroSequence, string>> = {
   dpwm2: 'DPWM2: clamp 60°, lagging 30°',
   'dpwm-max': 'DPWMMAX: clamp 120° to the top rail',
   'dpwm-min': 'DPWMMIN: clamp 120° to the bottom rail',
+  azspwm1: 'AZSPWM1: active zero states, common mode ±Vdc/6',
+  nspwm: 'NSPWM: near states, common mode ±Vdc/6 for ma ≥ 0.770',
 };
 
 /** Labels of {@link SpaceVectorSequenceKind}. */

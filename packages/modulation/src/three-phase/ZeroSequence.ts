@@ -15,9 +15,31 @@
  * - `dpwm0` / `dpwm2`: the same 60° blocks advanced / delayed by 30°.
  * - `dpwm-max` / `dpwm-min`: each leg clamped to the positive / negative rail for a
  *   single 120° block per period (Holmes and Lipo, 2003, ch. 7).
+ *
+ * Two reduced common-mode methods are listed with them: each is a zero sequence (its modulation
+ * waves) plus a carrier arrangement, the carrier of each phase inverted while that phase is the
+ * middle one of the three (within ±30° of its own zero crossings; see {@link invertsCarrier}),
+ * so that no carrier period uses the zero vectors 000 and 111 and the common-mode voltage stays
+ * at ±vdc/6 (A. M. Hava and E. Ün, IEEE Trans. Power Electronics, 2009; the carrier-based form
+ * from memory, checked here against the vector definition in the tests):
+ * - `azspwm1`: active zero state PWM, the min-max (space-vector) modulation waves; the zero
+ *   vectors are replaced by two opposite active vectors for the same time. Common mode ±vdc/6 at
+ *   every ma; linear to ma = 2/√3.
+ * - `nspwm`: near state PWM, the DPWM1 modulation waves; only the three active vectors nearest
+ *   the reference are used. Common mode ±vdc/6 only for ma ≥ 4/(3√3) ≈ 0.770 (M = π·ma/4 ≥ 0.605,
+ *   derived in {@link reducedCommonModeRange}); linear to ma = 2/√3.
  */
 export type ZeroSequence =
-  'none' | 'third-harmonic' | 'min-max' | 'dpwm1' | 'dpwm0' | 'dpwm2' | 'dpwm-max' | 'dpwm-min';
+  | 'none'
+  | 'third-harmonic'
+  | 'min-max'
+  | 'dpwm1'
+  | 'dpwm0'
+  | 'dpwm2'
+  | 'dpwm-max'
+  | 'dpwm-min'
+  | 'azspwm1'
+  | 'nspwm';
 
 /** The zero-sequence choices, in the order the API and the dashboard list them. */
 export const ZERO_SEQUENCES: readonly ZeroSequence[] = [
@@ -29,4 +51,6 @@ export const ZERO_SEQUENCES: readonly ZeroSequence[] = [
   'dpwm2',
   'dpwm-max',
   'dpwm-min',
+  'azspwm1',
+  'nspwm',
 ];

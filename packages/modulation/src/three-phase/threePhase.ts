@@ -2,8 +2,13 @@ import { assertCarrierOptions } from '../carrier/assertCarrierOptions.js';
 import type { CarrierSampling } from '../carrier/CarrierSampling.js';
 import { compareWithCarrier } from '../carrier/compareWithCarrier.js';
 import { assertOneOf } from '../validation/assertions.js';
+import { ParameterRangeError } from '../validation/errors.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import { subtractWaveforms } from '../waveform/subtractWaveforms.js';
+import { combineWaveforms } from '../waveform/combineWaveforms.js';
+import { waveformFromTransitions } from '../waveform/waveformFromTransitions.js';
+import { invertsCarrier } from './invertsCarrier.js';
+import { fundamentalAngleOfCarrier } from '../carrier/triangleCarrier.js';
 import { threePhaseReference, type PhaseIndex } from './threePhaseReference.js';
 import { ZERO_SEQUENCES, type ZeroSequence } from './ZeroSequence.js';
 
@@ -36,10 +41,13 @@ export interface ThreePhaseWaveforms {
  * phase references are ma·sin(θ − k·2π/3) plus a common offset (see {@link ZeroSequence}); each
  * leg is +vdc/2 while its reference is above the shared carrier. The leg fundamental is
  * ma·vdc/2 in the linear range; the zero sequence cancels in the line-to-line voltages, whose
- * fundamental is √3·ma·vdc/2 (Holmes and Lipo, 2003, ch. 5).
+ * fundamental is √3·ma·vdc/2 (Holmes and Lipo, 2003, ch. 5). For the reduced common-mode
+ * methods (`azspwm1`, `nspwm`) the middle phase is compared with the inverted carrier, the same
+ * triangle delayed by half a carrier period (see {@link invertsCarrier}); with regular sampling
+ * that carrier samples at its own peaks.
  *
- * @throws ParameterRangeError naming `ma`, `mf`, `vdc`, `zeroSequence`, `sampling` or
- *   `carrierPhase`
+ * @throws ParameterRangeError naming `ma`, `mf`, `vdc`, `zeroSequence`, `sampling` (also
+ *   `'regular-symmetric'` with `azspwm1` or `nspwm`) or `carrierPhase`
  */
 export function threePhase(options: ThreePhaseOptions): ThreePhaseWaveforms {
   assertCarrierOptions(options);
@@ -47,14 +55,38 @@ export function threePhase(options: ThreePhaseOptions): ThreePhaseWaveforms {
     assertOneOf('zeroSequence', options.zeroSequence, ZERO_SEQUENCES);
   }
   const { ma, mf, vdc, zeroSequence = 'none', sampling = 'natural', carrierPhase = 0 } = options;
-  const leg = (phase: PhaseIndex): Waveform =>
-    compareWithCarrier(threePhaseReference(phase, { ma, zeroSequence }), {
-      mf,
-      carrierPhase,
+  if (
+    (zeroSequence === 'azspwm1' || zeroSequence === 'nspwm') &&
+    sampling === 'regular-symmetric'
+  ) {
+    // The inverted carrier would sample at its own peaks, half a carrier period away from the
+    // others' samples, and 000 and 111 would return for part of some periods.
+    throw new ParameterRangeError(
+      'sampling',
+      `'natural' or 'regular-asymmetric' for zeroSequence '${zeroSequence}' (its inverted carrier needs every leg sampled at the same instants)`,
       sampling,
-      high: vdc / 2,
-      low: -vdc / 2,
-    });
+    );
+  }
+  const alignment = { mf, carrierPhase };
+  const leg = (phase: PhaseIndex): Waveform => {
+    const reference = threePhaseReference(phase, { ma, zeroSequence });
+    const compare = (phaseShift: number): Waveform =>
+      compareWithCarrier(reference, {
+        mf,
+        carrierPhase: carrierPhase + phaseShift,
+        sampling,
+        high: vdc / 2,
+        low: -vdc / 2,
+      });
+    const normal = compare(0);
+    if (zeroSequence !== 'azspwm1' && zeroSequence !== 'nspwm') return normal;
+    // The inverted carrier is the same triangle half a carrier period later.
+    const inverted = compare(Math.PI);
+    return combineWaveforms(
+      [normal, inverted, invertedHalfPeriods(zeroSequence, phase, alignment)],
+      ([n = 0, i = 0, inverts = 0]) => (inverts === 1 ? i : n),
+    );
+  };
   const a = leg(0);
   const b = leg(1);
   const c = leg(2);
@@ -66,4 +98,25 @@ export function threePhase(options: ThreePhaseOptions): ThreePhaseWaveforms {
       ca: subtractWaveforms(c, a),
     },
   };
+}
+
+/**
+ * 1 over the carrier half periods in which phase `phase` takes the inverted carrier
+ * ({@link invertsCarrier}), 0 elsewhere; its edges are carrier peaks and valleys.
+ */
+function invertedHalfPeriods(
+  zeroSequence: ZeroSequence,
+  phase: PhaseIndex,
+  alignment: { mf: number; carrierPhase: number },
+): Waveform {
+  return waveformFromTransitions(
+    Array.from({ length: 2 * alignment.mf }, (_, j) => {
+      const start = fundamentalAngleOfCarrier(j * Math.PI, alignment);
+      const centre = fundamentalAngleOfCarrier((j + 0.5) * Math.PI, alignment);
+      return {
+        angle: start,
+        level: invertsCarrier(zeroSequence, phase, centre, alignment) ? 1 : 0,
+      };
+    }),
+  );
 }

@@ -5,6 +5,9 @@ import type { ZeroSequence } from './ZeroSequence.js';
  * The zero-sequence offset (normalised to the carrier, ±1 = the rails) added to each phase
  * reference, given the three sinusoidal references at one instant.
  *
+ * The reduced common-mode methods take the offsets of their modulation waves: `azspwm1` that of
+ * `min-max`, `nspwm` that of `dpwm1` (their carriers differ, see {@link invertsCarrier}).
+ *
  * For the discontinuous clamps, the offset takes the chosen phase exactly to its rail; once the
  * references exceed the rails (ma past the linear range) the clamp still holds that phase there
  * and the others follow the same offset.
@@ -39,6 +42,7 @@ export function zeroSequenceOffset(
     case 'third-harmonic':
       return (ma / 6) * Math.sin(3 * theta);
     case 'min-max':
+    case 'azspwm1':
       return -(max + min) / 2;
     case 'dpwm-max':
       return 1 - max;
@@ -48,6 +52,8 @@ export function zeroSequenceOffset(
     case 'dpwm0':
     case 'dpwm2':
       return clampsHigh(zeroSequence, thirtyDegreeSector(theta)) ? 1 - max : -1 - min;
+    case 'nspwm':
+      return clampsHigh('dpwm1', thirtyDegreeSector(theta)) ? 1 - max : -1 - min;
   }
 }
 

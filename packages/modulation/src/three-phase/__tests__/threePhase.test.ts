@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import {
   harmonics,
+  invertsCarrier,
   SQRT3,
   threePhase,
   thd,
@@ -57,7 +58,12 @@ describe('threePhase line-to-line voltages', () => {
       for (let k = 0; k < N; k++) {
         const theta = ((k + 0.5) * 2 * Math.PI) / N;
         const carrier = triangleCarrier(theta, { mf });
-        const v = ((ra.value(theta) > carrier ? 1 : 0) - (rb.value(theta) > carrier ? 1 : 0)) * vdc;
+        // The reduced common-mode methods compare the middle phase with the inverted carrier.
+        const carrierOf = (phase: 0 | 1): number =>
+          invertsCarrier(zeroSequence, phase, theta, { mf }) ? -carrier : carrier;
+        const v =
+          ((ra.value(theta) > carrierOf(0) ? 1 : 0) - (rb.value(theta) > carrierOf(1) ? 1 : 0)) *
+          vdc;
         a += v * Math.cos(theta);
         b += v * Math.sin(theta);
       }
