@@ -135,12 +135,13 @@ describe('capture uploads', () => {
   });
 
   it('analyses a capture with the window gain corrected and compares it with a study', async () => {
-    // A pure 50 Hz sine of 100 V peak sampled at 10 kS/s for 0.2 s (10 whole periods).
+    // A 50 Hz sine of 100 V peak sampled at 10 kS/s for 0.2 s (10 whole periods), with a 10 mV
+    // disturbance at an unrelated frequency so that it is not exactly periodic: read with a window.
     const lines = ['t,v'];
-    for (let k = 0; k < 2000; k++)
-      lines.push(
-        `${(k / 10000).toFixed(6)},${(100 * Math.sin(2 * Math.PI * 50 * (k / 10000))).toFixed(6)}`,
-      );
+    for (let k = 0; k < 2000; k++) {
+      const v = 100 * Math.sin(2 * Math.PI * 50 * (k / 10000)) + 0.01 * Math.sin(1.2345 * k);
+      lines.push(`${(k / 10000).toFixed(6)},${v.toFixed(6)}`);
+    }
     const id = (await upload(lines.join('\n'), 'sine.csv')).body.id;
     const spectrum = await request(t.app)
       .post(`/api/v1/captures/${id}/spectrum`)
@@ -148,6 +149,7 @@ describe('capture uploads', () => {
       .send({ window: 'hann', fundamentalFrequency: 50, maxOrder: 5 });
     expect(spectrum.status, JSON.stringify(spectrum.body)).toBe(200);
     // Hann coherent gain 0.5 (Harris, Proc. IEEE, 1978); corrected, the peak reads 100 V.
+    expect(spectrum.body).toMatchObject({ periodic: false, window: 'hann' });
     expect(spectrum.body.coherentGain).toBeCloseTo(0.5, 3);
     const first = spectrum.body.harmonics.find((h: { order: number }) => h.order === 1);
     expect(first.amplitude).toBeGreaterThan(95);
@@ -178,5 +180,67 @@ describe('capture uploads', () => {
       .send({ column: 'current' });
     expect(noCurrent.status).toBe(400);
     expect(noCurrent.body.errors[0].path).toBe('column');
+  });
+  it('reads the exact square wave over whole periods and compares to the third carrier group', async () => {
+    // Issue 10's capture: ±100 V, 50 Hz, sampled at 100 kHz over 5 periods (10 000 rows).
+    const lines = ['time,voltage'];
+    for (let k = 0; k < 10_000; k++)
+      lines.push(`${(k / 100_000).toFixed(5)},${k % 2000 < 1000 ? 100 : -100}`);
+    const id = (await upload(lines.join('\n'), 'square.csv')).body.id;
+    const spectrum = await request(t.app)
+      .post(`/api/v1/captures/${id}/spectrum`)
+      .set(auth)
+      .send({ maxOrder: 3 });
+    expect(spectrum.status, JSON.stringify(spectrum.body)).toBe(200);
+    expect(spectrum.body).toMatchObject({ periodic: true, periods: 5, fftSize: 10_000 });
+    // Fourier series of a ±V square wave, 4V/(nπ) on odd n (a fact of the trade), within the
+    // sampling's (πn/M)²/6 for M = 2000 samples a period: 127.324 V and 42.441 V.
+    expect(Math.abs(spectrum.body.fundamentalFrequency - 50)).toBeLessThan(50e-9);
+    expect(spectrum.body.harmonics[0].amplitude).toBeCloseTo(400 / Math.PI, 3);
+    expect(spectrum.body.harmonics[2].amplitude).toBeCloseTo(400 / (3 * Math.PI), 3);
+
+    const projectId = (
+      await request(t.app).post('/api/v1/projects').set(auth).send({ name: 'Square' })
+    ).body.id;
+    const study = (fundamentalFrequency: number) =>
+      request(t.app)
+        .post('/api/v1/studies')
+        .set(auth)
+        .send({
+          projectId,
+          name: `Square at ${fundamentalFrequency} Hz`,
+          design: {
+            ...DESIGN,
+            fundamentalFrequency,
+            carrierFrequency: 41 * fundamentalFrequency,
+          },
+        });
+    const matching = (await study(50)).body.id;
+    const comparison = await request(t.app)
+      .post(`/api/v1/captures/${id}/comparison`)
+      .set(auth)
+      .send({ studyId: matching });
+    expect(comparison.status, JSON.stringify(comparison.body)).toBe(200);
+    // mf 41: the third carrier group and its sidebands reach 3·41 + 20 = 143.
+    expect(comparison.body.maxOrder).toBe(143);
+    expect(comparison.body.orders).toHaveLength(143);
+    expect(comparison.body.warnings).toEqual([]);
+    const byOrder = (n: number) =>
+      comparison.body.orders.find((o: { order: number }) => o.order === n);
+    // Bipolar sine-triangle has no even harmonics at odd mf (half-wave symmetry, common
+    // practice): those predictions are below the 0.1 % floor and get no ratio.
+    expect(byOrder(2).ratio).toBeNull();
+    expect(byOrder(2).predicted).toBeLessThan(comparison.body.noiseFloor);
+    // The carrier (order 41) is predicted well above the floor: a ratio is shown.
+    expect(byOrder(41).predicted).toBeGreaterThan(comparison.body.noiseFloor);
+    expect(byOrder(41).ratio).not.toBeNull();
+
+    const other = (await study(60)).body.id;
+    const mismatched = await request(t.app)
+      .post(`/api/v1/captures/${id}/comparison`)
+      .set(auth)
+      .send({ studyId: other, maxOrder: 5 });
+    expect(mismatched.status, JSON.stringify(mismatched.body)).toBe(200);
+    expect(mismatched.body.warnings[0]).toMatch(/differs from the study's \(60 Hz\) by 16.67 %/);
   });
 });

@@ -75,13 +75,12 @@ export function captureRoutes(services: Services): Router {
     );
   });
   router.post('/api/v1/captures/:id/comparison', async (req, res) => {
-    const { studyId, window = 'hann', fundamentalFrequency, maxOrder = 50 } = req.body;
+    const { studyId, window = 'hann', fundamentalFrequency, maxOrder } = req.body;
     res.json(
       await captures.compare(principalOf(req).teamId, req.params.id, studyId, {
         window,
         fundamentalFrequency,
         maxOrder,
-        column: 'voltage',
       }),
     );
   });

@@ -1,4 +1,9 @@
-import type { FftWindowName } from '@pulsewright/modulation';
+import {
+  compareCapture,
+  defaultSpectrumOrder,
+  MAX_CAPTURE_ORDER,
+  type FftWindowName,
+} from '@pulsewright/modulation';
 import type { CaptureRow, Models } from '../models/index.js';
 import { badRequest, notFound } from '../http/errors.js';
 import type { AuditLog } from './audit.js';
@@ -28,6 +33,11 @@ export interface AnalysisOptions {
   maxOrder: number;
   column: 'voltage' | 'current';
 }
+
+/** A comparison's options: without `maxOrder`, up to the study's third carrier group. */
+export type ComparisonOptions = Omit<AnalysisOptions, 'maxOrder' | 'column'> & {
+  maxOrder?: number;
+};
 
 /** Bench captures: checked and parsed on upload (the original kept), analysed by fftSpectrum. */
 export class CaptureService {
@@ -109,33 +119,35 @@ export class CaptureService {
 
   /**
    * Measured harmonics of a capture against the exact prediction of a study, order by order: the
-   * study's bridge voltage as GET /studies/{id}/spectrum gives it (line a−b for three-phase).
+   * study's bridge voltage as GET /studies/{id}/spectrum gives it (line a−b for three-phase), by
+   * default up to the study's third carrier group and its sidebands (the library's
+   * defaultSpectrumOrder, 3·mf + 20), with the library's warnings (fundamentals more than 1 %
+   * apart, orders past the capture's Nyquist frequency) and no ratio below its noise floor.
    */
-  async compare(teamId: string, id: string, studyId: string, options: AnalysisOptions) {
-    const measured = await this.analyse(teamId, id, { ...options, column: 'voltage' });
+  async compare(teamId: string, id: string, studyId: string, options: ComparisonOptions) {
     const study = await this.studies.get(teamId, studyId);
-    const predicted = (
-      await this.compute.designSpectrum(study.design, options.maxOrder, 'study.design')
-    ).harmonics;
-    const orders = measured.harmonics.map((h) => {
-      const p = predicted[h.order]?.amplitude ?? 0;
-      return {
-        order: h.order,
-        frequency: h.frequency,
-        measured: h.amplitude,
-        predicted: p,
-        difference: h.amplitude - p,
-        ratio: p > 0 ? h.amplitude / p : null,
-      };
+    const maxOrder =
+      options.maxOrder ?? Math.min(MAX_CAPTURE_ORDER, defaultSpectrumOrder(study.design));
+    const measured = await this.analyse(teamId, id, { ...options, maxOrder, column: 'voltage' });
+    const predicted = (await this.compute.designSpectrum(study.design, maxOrder, 'study.design'))
+      .harmonics;
+    const figures = compareCapture(measured.harmonics, predicted, {
+      measuredFrequency: measured.fundamentalFrequency,
+      predictedFrequency: study.design.fundamentalFrequency,
+      maxOrder,
     });
     return {
       captureId: id,
       studyId,
       studyRevision: study.revision,
       window: measured.window,
+      periodic: measured.periodic,
+      periods: measured.periods,
       fundamentalFrequency: measured.fundamentalFrequency,
+      studyFundamentalFrequency: study.design.fundamentalFrequency,
+      maxOrder,
       measuredThd: measured.thd,
-      orders,
+      ...figures,
     };
   }
 }
