@@ -14,18 +14,37 @@ export function intQuery(req: Request, name: string, fallback: number): number {
   return optionalIntQuery(req, name, fallback) ?? fallback;
 }
 
-/** As {@link intQuery}, but undefined when the parameter is absent (`example` shows in the error). */
-export function optionalIntQuery(req: Request, name: string, example: number): number | undefined {
+/**
+ * The query parameter `name` as sent in the URL (not as the validator coerced it), as a number
+ * when it is given once and `accepts` its text; undefined when absent; else a 400 naming it and
+ * saying it `must be` `allowed`.
+ */
+function queryNumber(
+  req: Request,
+  name: string,
+  accepts: (text: string) => boolean,
+  allowed: string,
+): number | undefined {
   const search = req.originalUrl.includes('?')
     ? req.originalUrl.slice(req.originalUrl.indexOf('?') + 1)
     : '';
   const values = new URLSearchParams(search).getAll(name);
   if (values.length === 0) return undefined;
   const text = values[0] as string;
-  if (values.length === 1 && DECIMAL_INTEGER.test(text)) return Number(text);
+  if (values.length === 1 && accepts(text)) return Number(text);
   const given = values.length === 1 ? JSON.stringify(text.slice(0, 40)) : `${values.length} values`;
-  const message = `${name} must be one whole number written in decimal digits, e.g. ${example}; got ${given}`;
+  const message = `${name} must be ${allowed}; got ${given}`;
   throw badRequest(message, [{ path: name, message }]);
+}
+
+/** As {@link intQuery}, but undefined when the parameter is absent (`example` shows in the error). */
+export function optionalIntQuery(req: Request, name: string, example: number): number | undefined {
+  return queryNumber(
+    req,
+    name,
+    (text) => DECIMAL_INTEGER.test(text),
+    `one whole number written in decimal digits, e.g. ${example}`,
+  );
 }
 
 const DECIMAL_NUMBER = /^(?:[0-9]{1,30}(?:\.[0-9]{0,30})?|\.[0-9]{1,30})(?:[eE][+-]?[0-9]{1,3})?$/;
@@ -36,15 +55,10 @@ const DECIMAL_NUMBER = /^(?:[0-9]{1,30}(?:\.[0-9]{0,30})?|\.[0-9]{1,30})(?:[eE][
  * notation with an optional exponent only, finite, else a 400 naming the parameter.
  */
 export function numberQuery(req: Request, name: string): number | undefined {
-  const search = req.originalUrl.includes('?')
-    ? req.originalUrl.slice(req.originalUrl.indexOf('?') + 1)
-    : '';
-  const values = new URLSearchParams(search).getAll(name);
-  if (values.length === 0) return undefined;
-  const text = values[0] as string;
-  if (values.length === 1 && DECIMAL_NUMBER.test(text) && Number.isFinite(Number(text)))
-    return Number(text);
-  const given = values.length === 1 ? JSON.stringify(text.slice(0, 40)) : `${values.length} values`;
-  const message = `${name} must be one finite number in decimal notation, e.g. 400; got ${given}`;
-  throw badRequest(message, [{ path: name, message }]);
+  return queryNumber(
+    req,
+    name,
+    (text) => DECIMAL_NUMBER.test(text) && Number.isFinite(Number(text)),
+    'one finite number in decimal notation, e.g. 400',
+  );
 }

@@ -1,16 +1,11 @@
 import { Router, type Request } from 'express';
-import { rateLimit, type Options as RateLimitOptions } from 'express-rate-limit';
 import type { AppConfig } from '../config.js';
 import { intQuery } from '../http/query.js';
 import { principalOf } from '../auth/authorize.js';
-import { HttpError } from '../http/errors.js';
 import type { Services } from '../services/index.js';
 import { dialectOf } from '../db/database.js';
 import type { RateLimitStores } from '../http/rateLimitStores.js';
-
-const tooMany = (what: string, wait: string) => () => {
-  throw new HttpError(429, `Too many ${what}; wait ${wait} and try again.`);
-};
+import { rateLimiter, type RateLimiterOptions } from '../http/rateLimiter.js';
 
 const FIFTEEN_MINUTES = 15 * 60_000;
 const ONE_HOUR = 60 * 60_000;
@@ -46,17 +41,8 @@ export function accountRoutes(
     windowMs: number,
     what: string,
     wait: string,
-    extra: Partial<RateLimitOptions> = {},
-  ) =>
-    rateLimit({
-      windowMs,
-      limit,
-      standardHeaders: 'draft-8',
-      legacyHeaders: false,
-      handler: tooMany(what, wait),
-      store: options.rateLimits.store(what), // shared by the replicas on PostgreSQL
-      ...extra,
-    });
+    extra: Partial<RateLimiterOptions> = {},
+  ) => rateLimiter(options.rateLimits, { limit, windowMs, what, wait, ...extra });
   const failuresOnly = { skipSuccessfulRequests: true };
   const signInPerAddress = limiter(
     options.loginRateLimit,

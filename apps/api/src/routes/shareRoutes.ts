@@ -1,7 +1,6 @@
 import { Router } from 'express';
-import { rateLimit } from 'express-rate-limit';
 import { principalOf } from '../auth/authorize.js';
-import { HttpError } from '../http/errors.js';
+import { rateLimiter } from '../http/rateLimiter.js';
 import type { Services } from '../services/index.js';
 import type { RateLimitStores } from '../http/rateLimitStores.js';
 
@@ -11,19 +10,12 @@ export function shareRoutes(
   options: { shareRateLimit: number; rateLimits: RateLimitStores },
 ): Router {
   const router = Router();
-  const limiter = rateLimit({
-    windowMs: 60 * 60_000,
+  const limiter = rateLimiter(options.rateLimits, {
     limit: options.shareRateLimit,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
+    windowMs: 60 * 60_000,
+    what: 'reports e-mailed in the last hour',
+    wait: 'a while',
     keyGenerator: (req) => principalOf(req).user.id,
-    store: options.rateLimits.store('reports e-mailed'),
-    handler: () => {
-      throw new HttpError(
-        429,
-        'Too many reports e-mailed in the last hour; wait a while and try again.',
-      );
-    },
   });
   router.post('/api/v1/studies/:id/share', limiter, async (req, res) => {
     res

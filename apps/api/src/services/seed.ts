@@ -1,6 +1,7 @@
 import {
   designModulation,
   modulationVoltages,
+  mulberry32,
   rlCurrentAt,
   TAU,
   waveformValueAt,
@@ -169,18 +170,6 @@ export async function seedDemo(services: Services, password: string): Promise<vo
   );
 }
 
-/** Small deterministic PRNG (mulberry32), so every new database gets the same capture. */
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 /**
  * An invented bench capture: two 50 Hz periods of the bench prototype's bridge voltage and
  * load current sampled at 250 kS/s, with a little measurement noise. Voltage and current come
@@ -197,6 +186,7 @@ export function benchCaptureCsv(): string {
     ...(BENCH_DESIGN.load as { r: number; l: number }),
     frequency,
   });
+  // The library's seeded generator, so every new database gets the same capture.
   const random = mulberry32(0x6b657374); // "kest"
   const noise = (scale: number) => (random() + random() + random() - 1.5) * scale;
   const lines = ['time_s,voltage_v,current_a'];

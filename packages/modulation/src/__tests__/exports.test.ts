@@ -112,6 +112,7 @@ const PUBLIC_NAMES = [
   'modulationVoltages',
   'modulatorSignals',
   'mulberry32',
+  'mulberry32',
   'optimalPulsePattern',
   'optimalPulseSweep',
   'outputNetworkResponse',

@@ -1,1 +1,2 @@
 export * from './findBracketedRoot.js';
+export * from './mulberry32.js';

@@ -1,22 +1,12 @@
 /**
  * Deterministic starting guesses for the SHE and optimal-pattern solvers (internal): first the
  * evenly spread angles α_k = k·π/(2(N+1)), then sorted uniform random angles from a seeded
- * mulberry32 generator (a small public-domain PRNG by T. Ettinger, 2017; from memory), all
- * strictly ascending in (0, π/2) with gaps of at least 1 % of the even spacing. No module state:
- * each call owns its generator, so the same seed gives the same starts.
+ * {@link mulberry32} generator, all strictly ascending in (0, π/2) with gaps of at least 1 % of
+ * the even spacing. No module state: each call owns its generator, so the same seed gives the
+ * same starts.
  */
 import { HALF_PI } from '../math.js';
-
-function mulberry32(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+import { mulberry32 } from '../numeric/mulberry32.js';
 
 /** `howMany` starting angle sets of `count` angles each. */
 export function seededStarts(count: number, howMany: number, seed: number): number[][] {
