@@ -7,6 +7,7 @@ import { SpectrumChart, type SpectrumSeries } from '../../../components/charts/S
 import { WaveformChart } from '../../../components/charts/WaveformChart';
 import { formatNumber } from '../../../lib/format';
 import { reportFigures } from '../model/reportFigures';
+import { CommonModePanel } from './CommonModePanel';
 
 const CURRENT_COLOURS = {
   inverter: 'var(--color-trace-current)',
@@ -24,6 +25,7 @@ export function StudyCharts({ report, fileStem }: { report: StudyReport; fileSte
       <VoltageChart report={report} fileStem={fileStem} />
       <ReportSpectrum report={report} fileStem={fileStem} />
       {report.currents.length ? <CurrentsChart report={report} fileStem={fileStem} /> : null}
+      <CommonModePanel report={report} fileStem={fileStem} />
       <HarmonicTable
         harmonics={report.bridge.spectrum}
         title={`Harmonics, ${report.bridge.name}`}
