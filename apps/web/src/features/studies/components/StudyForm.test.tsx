@@ -94,6 +94,70 @@ describe('StudyForm', () => {
     expect(onChange).toHaveBeenCalledWith({ carrierFrequency: 41 * 50 });
   });
 
+  it('never rounds a typed frequency ratio: 0.5 stays 0.5 and is refused on the mf field (issue 10)', () => {
+    const onChange = vi.fn();
+    const { rerender } = renderForm(defaultDraft(), { onChange });
+    const mf = screen.getByLabelText('Frequency ratio mf', { selector: 'input[type="text"]' });
+    fireEvent.change(mf, { target: { value: '0.5' } });
+    // 0.5 × 50 Hz: the carrier the box stands for, not Math.round(0.5) = 1 × 50 Hz.
+    expect(onChange).toHaveBeenLastCalledWith({ carrierFrequency: 25 });
+    rerender(
+      <StudyForm
+        draft={{ ...defaultDraft(), carrierFrequency: 25 }}
+        onChange={onChange}
+        readOnly={false}
+        projects={projects}
+        saveError={null}
+        previewErrors={[{ field: 'carrierFrequency', message: 'carrierFrequency must be …' }]}
+      />,
+    );
+    expect(mf).toHaveValue('0.5');
+    expect(mf).toHaveAccessibleDescription(
+      'Frequency ratio mf must be a whole number from 1 to 1,000 (entered 0.5)',
+    );
+    // The carrier field does not repeat it with a value the user never typed.
+    expect(screen.getByLabelText(/Carrier frequency/)).not.toHaveAttribute('aria-invalid');
+  });
+
+  it('puts a typed carrier that is not a whole multiple on the carrier field, in hertz as entered', () => {
+    renderForm({ ...defaultDraft(), carrierFrequency: 1075 });
+    expect(screen.getByLabelText(/Carrier frequency/)).toHaveAccessibleDescription(
+      'Carrier frequency must be a whole multiple (1 to 1000 times) of the fundamental, 50 Hz, so mf is a whole number (entered 1075 Hz)',
+    );
+  });
+
+  it('marks the field that is out of range in its own unit with one range (issue 10)', () => {
+    // 1e308 V on the DC bus: the message is on the DC bus, not on another field.
+    renderForm({ ...defaultDraft(), vdc: 1e308, ma: -1, loadL: 200, filterOn: true, filterC: 2 });
+    const bus = screen.getByLabelText(/^DC bus/, { selector: 'input[type="text"]' });
+    expect(bus).toHaveAccessibleDescription(
+      'DC bus must be above 0 to 100,000 V (entered 1e+308 V)',
+    );
+    // ma −1: one limit, the library's (0, 4], not two that disagree.
+    expect(
+      screen.getByLabelText(/^Modulation index ma/, { selector: 'input[type="text"]' }),
+    ).toHaveAccessibleDescription('Modulation index ma must be above 0 to 4 (entered -1)');
+    // 200 H = 200,000 mH: the bound and the entry in mH, the field's unit (DESIGN_BOUNDS load.l ≤ 100 H).
+    expect(screen.getByLabelText(/Inductance L/)).toHaveAccessibleDescription(
+      'Inductance L must be from 0 to 100,000 mH (entered 200,000 mH)',
+    );
+    // 2 F = 2,000,000 µF against filter.c ≤ 1 F.
+    expect(screen.getByLabelText(/Filter C/)).toHaveAccessibleDescription(
+      'Filter C must be from 0.000001 to 1,000,000 µF (entered 2,000,000 µF)',
+    );
+    expect(screen.getByLabelText(/Resistance R/)).not.toHaveAttribute('aria-invalid');
+  });
+
+  it('asks for a number in an emptied or lettered field instead of keeping the previous value', () => {
+    renderForm({ ...defaultDraft(), vdc: Number.NaN, ma: Number.NaN });
+    expect(
+      screen.getByLabelText(/^DC bus/, { selector: 'input[type="text"]' }),
+    ).toHaveAccessibleDescription('Enter a number: DC bus is above 0 to 100,000 V');
+    expect(
+      screen.getByLabelText(/^Modulation index ma/, { selector: 'input[type="text"]' }),
+    ).toHaveValue('');
+  });
+
   it('keeps mf when the fundamental changes (the carrier follows)', () => {
     const onChange = vi.fn();
     renderForm(defaultDraft(), { onChange });

@@ -2,9 +2,13 @@ import {
   DESIGN_BOUNDS,
   designFrequencyRatio,
   MAX_DESIGN_FREQUENCY_RATIO,
+  spaceVectorIndices,
   type DesignBoundsField,
   type ModulationMethod,
+  type NumberBounds,
 } from '@pulsewright/modulation';
+import { useState } from 'react';
+import { rangeError, rangeText, type FieldUnit } from '../../../lib/fieldRange';
 import { fieldErrorOf } from '../../../lib/api';
 import { NumberField, SelectField, SliderField, TextField } from '../../../components/ui/Field';
 import type { Project } from '../../../lib/api';
@@ -52,16 +56,21 @@ const SLIDERS = {
 
 const RADIANS_TO_DEGREES = 180 / Math.PI;
 
-/** A bound as people write it: 100,000 and 0.000001, six significant digits at most. */
-const formatBound = (value: number) =>
-  value.toLocaleString('en-US', { maximumSignificantDigits: 6 });
+/** Angles are held in radians and shown in degrees. */
+const DEGREES: FieldUnit = { scale: RADIANS_TO_DEGREES, unit: '°' };
 
-/** The allowed range of a design field in the unit the form shows (the library's DESIGN_BOUNDS). */
-function boundsHint(path: DesignBoundsField, scale = 1, unit = ''): string {
-  const bounds: { min: number; max: number; minExclusive?: boolean } = DESIGN_BOUNDS[path];
-  const low = `${bounds.minExclusive ? 'above' : 'from'} ${formatBound(bounds.min * scale)}`;
-  return `${low} to ${formatBound(bounds.max * scale)}${unit ? ` ${unit}` : ''}`;
-}
+/** The frequency ratio's range: a whole number from 1 to the library's largest. */
+const RATIO_BOUNDS: NumberBounds = { min: 1, max: MAX_DESIGN_FREQUENCY_RATIO, integer: true };
+
+/**
+ * The space-vector ma range: the library's bounds on m (up to six-step) read as ma through the
+ * library's own conversion, so the field states one range in the quantity it shows.
+ */
+const SPACE_VECTOR_MA_BOUNDS: NumberBounds = {
+  min: 0,
+  minExclusive: true,
+  max: spaceVectorIndices({ m: DESIGN_BOUNDS['modulation.m'].max }).ma,
+};
 
 /** The study's design with units and the library's ranges; errors from the server and the library beside each field. */
 export function StudyForm({
@@ -84,6 +93,24 @@ export function StudyForm({
       previewErrors.find((e) => paths.some((p) => matches(e.field, p)))?.message
     );
   };
+  /**
+   * A number field's hint and message: its range in the unit it shows (the library's bounds),
+   * the message for what was entered when the bounds refuse it, else the server's or the
+   * library's message for that field.
+   */
+  const limits = (
+    path: DesignBoundsField,
+    label: string,
+    value: number,
+    unit: FieldUnit = {},
+    bounds: NumberBounds = DESIGN_BOUNDS[path],
+  ) => {
+    const fromLibrary = error(path);
+    return {
+      hint: rangeText(bounds, unit),
+      error: rangeError(label, value, bounds, unit) ?? fromLibrary,
+    };
+  };
   const set =
     <K extends keyof StudyDraft>(key: K) =>
     (value: StudyDraft[K]) =>
@@ -103,8 +130,31 @@ export function StudyForm({
   } catch {
     // The library's message goes on the carrier field through the preview's errors.
   }
-  const setRatio = (mf: number) =>
-    onChange({ carrierFrequency: Math.round(mf) * draft.fundamentalFrequency });
+  // The frequency ratio as typed (null once the carrier frequency is typed instead): a fraction is
+  // kept and refused on this field, never rounded into another carrier (issue 10: 0.5 saved as 1).
+  const [typedRatio, setTypedRatio] = useState<number | null>(null);
+  const setRatio = (mf: number) => {
+    setTypedRatio(mf);
+    onChange({ carrierFrequency: mf * draft.fundamentalFrequency });
+  };
+  const setCarrier = (carrierFrequency: number) => {
+    setTypedRatio(null);
+    onChange({ carrierFrequency });
+  };
+  const carrierError = error('carrierFrequency');
+  const ratioError =
+    typedRatio === null ? undefined : rangeError('Frequency ratio mf', typedRatio, RATIO_BOUNDS);
+  // The carrier's own message, in hertz with what was entered; a ratio typed in the mf box is
+  // judged there instead (its message would otherwise quote a carrier the user never typed).
+  const carrierMessage =
+    typedRatio !== null
+      ? undefined
+      : (rangeError('Carrier frequency', draft.carrierFrequency, DESIGN_BOUNDS.carrierFrequency, {
+          unit: 'Hz',
+        }) ??
+        (Number.isNaN(ratio) && Number.isFinite(draft.fundamentalFrequency)
+          ? `Carrier frequency must be a whole multiple (1 to ${MAX_DESIGN_FREQUENCY_RATIO} times) of the fundamental, ${formatNumber(draft.fundamentalFrequency, 6)} Hz, so mf is a whole number (entered ${formatNumber(draft.carrierFrequency, 9)} Hz)`
+          : carrierError));
   // Synchronous carrier PWM: a new fundamental keeps the frequency ratio, so the carrier follows.
   const setFundamental = (f: number) =>
     onChange(
@@ -213,9 +263,9 @@ export function StudyForm({
             ) : (
               <NumberField
                 label="Zero split"
-                hint={`share of the zero time on 000, ${boundsHint('modulation.zeroSplit')}; 0.5 is centred`}
                 value={draft.zeroSplit}
-                error={error('modulation.zeroSplit')}
+                {...limits('modulation.zeroSplit', 'Zero split', draft.zeroSplit)}
+                hint={`share of the zero time on 000, ${rangeText(DESIGN_BOUNDS['modulation.zeroSplit'])}; 0.5 is centred`}
                 onChange={set('zeroSplit')}
               />
             )}
@@ -247,8 +297,7 @@ export function StudyForm({
             min={SLIDERS.vdc.min}
             max={SLIDERS.vdc.max}
             step={1}
-            hint={boundsHint('vdc', 1, 'V')}
-            error={error('vdc')}
+            {...limits('vdc', 'DC bus', draft.vdc, { unit: 'V' })}
             onChange={set('vdc')}
           />
         )}
@@ -261,10 +310,16 @@ export function StudyForm({
             step={0.01}
             hint={
               method === 'space-vector'
-                ? `ma = 2m/√3 with m ${boundsHint('modulation.m')} (six-step); m above 1 is overmodulation`
-                : `${boundsHint('modulation.ma')}; above 1 is overmodulation`
+                ? `${rangeText(SPACE_VECTOR_MA_BOUNDS)} (six-step at the top); above 2/√3 is overmodulation`
+                : `${rangeText(DESIGN_BOUNDS['modulation.ma'])}; above 1 is overmodulation`
             }
-            error={error('modulation.ma', 'modulation.m')}
+            error={
+              rangeError(
+                'Modulation index ma',
+                draft.ma,
+                method === 'space-vector' ? SPACE_VECTOR_MA_BOUNDS : DESIGN_BOUNDS['modulation.ma'],
+              ) ?? error('modulation.ma', 'modulation.m')
+            }
             onChange={set('ma')}
           />
         )}
@@ -272,8 +327,9 @@ export function StudyForm({
           label="Fundamental frequency"
           unit="Hz"
           value={draft.fundamentalFrequency}
-          hint={boundsHint('fundamentalFrequency', 1, 'Hz')}
-          error={error('fundamentalFrequency')}
+          {...limits('fundamentalFrequency', 'Fundamental frequency', draft.fundamentalFrequency, {
+            unit: 'Hz',
+          })}
           onChange={setFundamental}
         />
         {isCarrierMethod(method) ? (
@@ -286,7 +342,8 @@ export function StudyForm({
               min={SLIDERS.mf.min}
               max={SLIDERS.mf.max}
               step={1}
-              hint={`carrier ÷ fundamental, a whole number 1 to ${MAX_DESIGN_FREQUENCY_RATIO}${method === 'space-vector' ? ' (switching periods per fundamental period)' : '; odd values give quarter-wave symmetry'}`}
+              hint={`carrier ÷ fundamental, ${rangeText(RATIO_BOUNDS)}${method === 'space-vector' ? ' (switching periods per fundamental period)' : '; odd values give quarter-wave symmetry'}`}
+              error={ratioError}
               onChange={setRatio}
             />
             <NumberField
@@ -298,8 +355,8 @@ export function StudyForm({
                   ? `mf = ${ratio} · a whole multiple of the fundamental`
                   : 'a whole multiple of the fundamental'
               }
-              error={error('carrierFrequency')}
-              onChange={set('carrierFrequency')}
+              error={carrierMessage}
+              onChange={setCarrier}
             />
             {method !== 'space-vector' ? (
               <NumberField
@@ -307,8 +364,8 @@ export function StudyForm({
                 unit="°"
                 value={draft.carrierPhase}
                 scale={RADIANS_TO_DEGREES}
-                hint="0 puts a carrier valley at the reference's positive peak"
-                error={error('modulation.carrierPhase')}
+                {...limits('modulation.carrierPhase', 'Carrier phase', draft.carrierPhase, DEGREES)}
+                hint={`${rangeText(DESIGN_BOUNDS['modulation.carrierPhase'], DEGREES)}; 0 puts a carrier valley at the reference's positive peak`}
                 onChange={set('carrierPhase')}
               />
             ) : null}
@@ -335,8 +392,7 @@ export function StudyForm({
               label="Resistance R"
               unit="Ω"
               value={draft.loadR}
-              hint={boundsHint('load.r', 1, 'Ω')}
-              error={error('load.r')}
+              {...limits('load.r', 'Resistance R', draft.loadR, { unit: 'Ω' })}
               onChange={set('loadR')}
             />
             <NumberField
@@ -344,16 +400,14 @@ export function StudyForm({
               unit="mH"
               value={draft.loadL}
               scale={1e3}
-              hint={boundsHint('load.l', 1e3, 'mH')}
-              error={error('load.l')}
+              {...limits('load.l', 'Inductance L', draft.loadL, { scale: 1e3, unit: 'mH' })}
               onChange={set('loadL')}
             />
             <NumberField
               label="Back-EMF"
               unit="V peak"
               value={draft.emf}
-              hint={boundsHint('load.emf.amplitude', 1, 'V')}
-              error={error('load.emf.amplitude', 'load.emf')}
+              {...limits('load.emf.amplitude', 'Back-EMF', draft.emf, { unit: 'V' })}
               onChange={set('emf')}
             />
             <NumberField
@@ -361,8 +415,7 @@ export function StudyForm({
               unit="°"
               value={draft.emfPhase}
               scale={RADIANS_TO_DEGREES}
-              hint={boundsHint('load.emf.phase', RADIANS_TO_DEGREES, '°')}
-              error={error('load.emf.phase')}
+              {...limits('load.emf.phase', 'Back-EMF phase', draft.emfPhase, DEGREES)}
               onChange={set('emfPhase')}
             />
           </div>
@@ -390,8 +443,7 @@ export function StudyForm({
                 unit="mH"
                 value={draft.filterL}
                 scale={1e3}
-                hint={boundsHint('filter.l', 1e3, 'mH')}
-                error={error('filter.l')}
+                {...limits('filter.l', 'Filter L', draft.filterL, { scale: 1e3, unit: 'mH' })}
                 onChange={set('filterL')}
               />
               <NumberField
@@ -399,16 +451,14 @@ export function StudyForm({
                 unit="µF"
                 value={draft.filterC}
                 scale={1e6}
-                hint={boundsHint('filter.c', 1e6, 'µF')}
-                error={error('filter.c')}
+                {...limits('filter.c', 'Filter C', draft.filterC, { scale: 1e6, unit: 'µF' })}
                 onChange={set('filterC')}
               />
               <NumberField
                 label="Damping R"
                 unit="Ω"
                 value={draft.filterR}
-                hint={boundsHint('filter.rDamping', 1, 'Ω')}
-                error={error('filter.rDamping')}
+                {...limits('filter.rDamping', 'Damping R', draft.filterR, { unit: 'Ω' })}
                 onChange={set('filterR')}
               />
               {draft.dampingPlacement === 'parallel-rc' ? (
@@ -417,8 +467,10 @@ export function StudyForm({
                   unit="µF"
                   value={draft.cDamping}
                   scale={1e6}
-                  hint={boundsHint('filter.cDamping', 1e6, 'µF')}
-                  error={error('filter.cDamping')}
+                  {...limits('filter.cDamping', 'Damping C', draft.cDamping, {
+                    scale: 1e6,
+                    unit: 'µF',
+                  })}
                   onChange={set('cDamping')}
                 />
               ) : null}
