@@ -16,6 +16,7 @@ import { defineModels } from './models/index.js';
 import { listOperations, loadOpenApiDocument, type OpenApiDocument } from './openapi.js';
 import { accountRoutes } from './routes/accountRoutes.js';
 import { studyRoutes } from './routes/studyRoutes.js';
+import { patternRoutes } from './routes/patternRoutes.js';
 import { computeRoutes } from './routes/computeRoutes.js';
 import { captureRoutes } from './routes/captureRoutes.js';
 import { shareRoutes } from './routes/shareRoutes.js';
@@ -125,6 +126,7 @@ export async function createApp(overrides: ConfigOverrides = {}): Promise<Pulsew
   const rateLimits = rateLimitStores(config.databaseUrl, sequelize);
   app.use(accountRoutes(services, { ...config, version, rateLimits }));
   app.use(studyRoutes(services));
+  app.use(patternRoutes(services));
   app.use(shareRoutes(services, { ...config, rateLimits }));
   app.use(computeRoutes(services));
   app.use(captureRoutes(services));

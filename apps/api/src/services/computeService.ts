@@ -7,6 +7,12 @@ import type {
   TimerTableOptions,
 } from '@pulsewright/modulation';
 import type { ComputeLimits } from '../config.js';
+import {
+  angleTableCost,
+  patternEventsCost,
+  type AngleTableRequest,
+  type PatternEventsRequest,
+} from './patternTables.js';
 import { computeSpaceVector, type VoltageOutput } from './compute.js';
 import type { ComputePool } from './computePool.js';
 import {
@@ -207,5 +213,20 @@ export class ComputeService {
       options,
     };
     return this.run('captureSpectrum', args, cost, 'This capture analysis');
+  }
+
+  /** A switching-angle table with its midpoint errors (services/patternTables.ts), as a file. */
+  angleTable(request: AngleTableRequest, format: 'json' | 'csv' | 'c-header') {
+    return this.run('angleTable', { request, format }, angleTableCost(request), 'This angle table');
+  }
+
+  /** The compare events of a stored pattern (services/patternTables.ts). */
+  patternEvents(request: PatternEventsRequest) {
+    return this.run(
+      'patternEvents',
+      { request },
+      patternEventsCost(request),
+      'These compare events',
+    );
   }
 }

@@ -1,6 +1,8 @@
 import type { ComputePool } from './computePool.js';
 import { maSweepCost, sheSweepCost } from './cost.js';
 import type { JobPlan } from './jobs.js';
+import { optimalSweepPlan } from './optimalSweepJobs.js';
+import type { OptimalSweepInput } from './patternTables.js';
 import {
   appendMaSweepPart,
   emptyMaSweep,
@@ -75,6 +77,7 @@ export function sheSweepPlan(input: SheSweepInput): JobPlan {
 const PLANS: Record<string, (input: Record<string, unknown>) => JobPlan> = {
   'ma-sweep': (input) => maSweepPlan(input as unknown as MaSweepInput),
   'she-sweep': (input) => sheSweepPlan(input as unknown as SheSweepInput),
+  'optimal-sweep': (input) => optimalSweepPlan(input as unknown as OptimalSweepInput),
 };
 
 /** The plan of a stored job; throws for a kind this version does not know. */

@@ -22,6 +22,14 @@ import {
 import { parseCaptureCsv } from '../services/captureCsv.js';
 import { computeNetlist, type NetlistRequest } from '../services/netlists.js';
 import {
+  computeAngleTable,
+  computePatternEvents,
+  optimalSweepChunk,
+  type AngleTableRequest,
+  type OptimalSweepInput,
+  type PatternEventsRequest,
+} from '../services/patternTables.js';
+import {
   maSweepChunk,
   sheSweepChunk,
   type MaSweepInput,
@@ -68,6 +76,11 @@ export const COMPUTE_TASKS = {
   maSweepChunk: (a: { input: MaSweepInput; index: number }) => maSweepChunk(a.input, a.index),
   sheSweepChunk: (a: { input: SheSweepInput; index: number; seed?: number[] }) =>
     sheSweepChunk(a.input, a.index, a.seed),
+  optimalSweepChunk: (a: { input: OptimalSweepInput; index: number; previous?: number[] }) =>
+    optimalSweepChunk(a.input, a.index, a.previous),
+  angleTable: (a: { request: AngleTableRequest; format: 'json' | 'csv' | 'c-header' }) =>
+    computeAngleTable(a.request, a.format),
+  patternEvents: (a: { request: PatternEventsRequest }) => computePatternEvents(a.request),
 } as const;
 
 export type ComputeTasks = typeof COMPUTE_TASKS;

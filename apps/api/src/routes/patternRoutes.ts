@@ -1,0 +1,31 @@
+import { Router } from 'express';
+import { principalOf } from '../auth/authorize.js';
+import type { Services } from '../services/index.js';
+import { optimalSweepPlan } from '../services/optimalSweepJobs.js';
+
+/**
+ * Programmed patterns to firmware (issue 17): the optimal-pattern sweep job beside the SHE
+ * sweep, angle tables for controllers (JSON, CSV or a C header) and a stored pattern's compare
+ * events. Validation is the OpenAPI validator's; the work is the compute or job service's.
+ */
+export function patternRoutes(services: Services): Router {
+  const router = Router();
+  const { compute, jobs } = services;
+  router.post('/api/v1/jobs/optimal-sweeps', async (req, res) => {
+    res.status(202).json(await jobs.start(principalOf(req), req.body, optimalSweepPlan(req.body)));
+  });
+  router.post('/api/v1/angle-tables', async (req, res) => {
+    const format = (typeof req.query.format === 'string' ? req.query.format : 'json') as
+      'json' | 'csv' | 'c-header';
+    const file = await compute.angleTable(req.body, format);
+    res
+      .status(200)
+      .type(file.contentType)
+      .setHeader('Content-Disposition', `attachment; filename="${file.fileName}"`)
+      .send(file.body);
+  });
+  router.post('/api/v1/pattern-compare-events', async (req, res) => {
+    res.json(await compute.patternEvents(req.body));
+  });
+  return router;
+}
