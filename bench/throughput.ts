@@ -17,14 +17,7 @@ import type { AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import autocannon from 'autocannon';
-import {
-  harmonics,
-  modulationVoltages,
-  thd,
-  waveformThd,
-  waveformWthd,
-  type Modulation,
-} from '@pulsewright/modulation';
+import { modulationVoltages, voltageFigures, type Modulation } from '@pulsewright/modulation';
 import { createApp } from '@pulsewright/api';
 import { printTable } from './measure.js';
 
@@ -65,7 +58,10 @@ async function load(url: string, headers: Record<string, string>): Promise<Run> 
   };
 }
 
-/** The same work as the route: the bridge voltage, its spectrum, exact THD and WTHD, JSON. */
+/**
+ * The same work as the route: the bridge voltage and its figures from the same library call
+ * (voltageFigures: spectrum, exact THD and WTHD), in the route's shape, as JSON.
+ */
 async function bare(): Promise<Run> {
   const server = createServer((req, res) => {
     const chunks: Buffer[] = [];
@@ -75,14 +71,17 @@ async function bare(): Promise<Run> {
         modulation: Modulation;
         maxOrder: number;
       };
-      const voltage = modulationVoltages(modulation).phases[0]!;
-      const spectrum = harmonics(voltage.waveform, maxOrder);
+      const figures = voltageFigures(modulationVoltages(modulation).phases[0]!, { maxOrder });
       const body = JSON.stringify({
-        name: voltage.name,
-        harmonics: spectrum,
-        thd: waveformThd(voltage.waveform),
-        wthd: waveformWthd(voltage.waveform),
-        spectrumThd: thd(spectrum),
+        name: figures.name,
+        harmonics: figures.spectrum.map(({ order, amplitude, phase }) => ({
+          order,
+          amplitude,
+          phase,
+        })),
+        thd: figures.thd,
+        wthd: figures.wthd,
+        spectrumThd: figures.spectrumThd,
       });
       res.writeHead(200, { 'content-type': 'application/json; charset=utf-8' }).end(body);
     });

@@ -475,6 +475,7 @@ describe('migration 0002 on a database of the previous release', () => {
       '0002-study-design',
       '0003-account-credentials',
       '0004-dpwm-names',
+      '0005-credential-epoch',
     ]);
     expect(await app.services.models.User.count()).toBe(1);
   });

@@ -4,6 +4,7 @@ import * as initialSchema from '../migrations/0001-initial-schema.js';
 import * as studyDesign from '../migrations/0002-study-design.js';
 import * as accountCredentials from '../migrations/0003-account-credentials.js';
 import * as dpwmNames from '../migrations/0004-dpwm-names.js';
+import * as credentialEpoch from '../migrations/0005-credential-epoch.js';
 
 /** The migrations in order; listed by hand so src/ and dist/ run the same set. */
 export const MIGRATIONS = [
@@ -11,6 +12,7 @@ export const MIGRATIONS = [
   { name: '0002-study-design', up: studyDesign.up, down: studyDesign.down },
   { name: '0003-account-credentials', up: accountCredentials.up, down: accountCredentials.down },
   { name: '0004-dpwm-names', up: dpwmNames.up, down: dpwmNames.down },
+  { name: '0005-credential-epoch', up: credentialEpoch.up, down: credentialEpoch.down },
 ];
 
 /**

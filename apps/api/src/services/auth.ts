@@ -2,6 +2,8 @@ import { randomBytes } from 'node:crypto';
 import bcrypt from 'bcryptjs';
 import { Op, type Transaction } from 'sequelize';
 import type { ApiKeyRow, MembershipRow, Models, Role, TeamRow, UserRow } from '../models/index.js';
+import { CredentialCache } from './credentialCache.js';
+import type { CredentialEpoch } from './credentialEpoch.js';
 import type { AuditLog } from './audit.js';
 import { iso } from './dto.js';
 import { lowerRole, type Principal } from './principal.js';
@@ -13,6 +15,13 @@ const LAST_USED_RESOLUTION_MS = 60_000;
 
 /** Keys made with keys made with keys…: a chain deeper than this is refused (and never made). */
 export const MAX_KEY_LINEAGE = 8;
+
+/** A credential verified against the database, as the cache keeps it. */
+interface Verified {
+  principal: Principal;
+  expiresAt: number;
+  touchedAt: number;
+}
 
 export interface SessionTokenDto {
   token: string;
@@ -28,10 +37,13 @@ export class AuthService {
    */
   private readonly dummyHash: Promise<string>;
 
+  private readonly cache = new CredentialCache();
+
   constructor(
     private readonly models: Models,
     private readonly audit: AuditLog,
     private readonly options: { sessionHours: number; bcryptRounds: number },
+    private readonly epoch: CredentialEpoch,
   ) {
     this.dummyHash = bcrypt.hash(randomBytes(16).toString('base64url'), options.bcryptRounds);
   }
@@ -110,69 +122,103 @@ export class AuthService {
     return ended;
   }
 
-  /** The principal a bearer token stands for, or null when it is unknown, expired or revoked. */
+  /**
+   * The principal a bearer token stands for, or null when it is unknown, expired or revoked.
+   * Verified credentials are served from the cache while the credential epoch read before their
+   * lookup holds (services/credentialEpoch.ts), so a revocation on any replica bites on the next
+   * request; `lastUsedAt` is still written at most once a minute per credential.
+   */
   async authenticate(token: string): Promise<Principal | null> {
+    const kind = token.startsWith(SESSION_PREFIX)
+      ? 'session'
+      : token.startsWith(API_KEY_PREFIX)
+        ? 'api-key'
+        : null;
+    if (!kind) return null;
+    const epoch = await this.epoch.read();
     const now = new Date();
-    if (token.startsWith(SESSION_PREFIX)) {
-      const session = await this.models.Session.findOne({
-        where: { tokenHash: hashToken(token), revokedAt: null, expiresAt: { [Op.gt]: now } },
-      });
-      if (!session) return null;
-      const principal = await this.principalFor(
-        session.userId,
-        session.teamId,
-        null,
-        'session',
-        session.id,
-      );
-      if (
-        principal &&
-        (!session.lastUsedAt ||
-          now.getTime() - session.lastUsedAt.getTime() > LAST_USED_RESOLUTION_MS)
-      ) {
-        await session.update({ lastUsedAt: now });
+    const tokenHash = hashToken(token);
+    const cached = this.cache.get(tokenHash, epoch, now.getTime());
+    if (cached) {
+      if (now.getTime() - cached.touchedAt > LAST_USED_RESOLUTION_MS) {
+        cached.touchedAt = now.getTime();
+        const where = { id: cached.principal.credentialId };
+        if (kind === 'session') await this.models.Session.update({ lastUsedAt: now }, { where });
+        else await this.models.ApiKey.update({ lastUsedAt: now }, { where });
       }
-      return principal;
+      return cached.principal;
     }
-    if (token.startsWith(API_KEY_PREFIX)) {
-      const key = await this.models.ApiKey.findOne({
-        where: { keyHash: hashToken(token), revokedAt: null },
-      });
-      if (!key || (key.expiresAt && key.expiresAt <= now) || !(await this.lineageStands(key, now)))
-        return null;
-      const principal = await this.principalFor(
-        key.userId,
-        key.teamId,
-        key.role,
-        'api-key',
-        key.id,
-      );
-      if (
-        principal &&
-        (!key.lastUsedAt || now.getTime() - key.lastUsedAt.getTime() > LAST_USED_RESOLUTION_MS)
-      ) {
-        await key.update({ lastUsedAt: now });
-      }
-      return principal;
-    }
-    return null;
+    const verified =
+      kind === 'session'
+        ? await this.verifySession(tokenHash, now)
+        : await this.verifyKey(tokenHash, now);
+    if (!verified) return null;
+    this.cache.set(tokenHash, { ...verified, epoch });
+    return verified.principal;
+  }
+
+  private async verifySession(tokenHash: string, now: Date): Promise<Verified | null> {
+    const session = await this.models.Session.findOne({
+      where: { tokenHash, revokedAt: null, expiresAt: { [Op.gt]: now } },
+    });
+    if (!session) return null;
+    const principal = await this.principalFor(
+      session.userId,
+      session.teamId,
+      null,
+      'session',
+      session.id,
+    );
+    if (!principal) return null;
+    const touchedAt = await this.touch(session.lastUsedAt, now, () =>
+      session.update({ lastUsedAt: now }),
+    );
+    return { principal, expiresAt: session.expiresAt.getTime(), touchedAt };
+  }
+
+  private async verifyKey(tokenHash: string, now: Date): Promise<Verified | null> {
+    const key = await this.models.ApiKey.findOne({
+      where: { keyHash: tokenHash, revokedAt: null },
+    });
+    if (!key || (key.expiresAt && key.expiresAt <= now)) return null;
+    const lineageExpiry = await this.lineageExpiry(key, now);
+    if (lineageExpiry === null) return null;
+    const principal = await this.principalFor(key.userId, key.teamId, key.role, 'api-key', key.id);
+    if (!principal) return null;
+    const touchedAt = await this.touch(key.lastUsedAt, now, () => key.update({ lastUsedAt: now }));
+    const expiresAt = Math.min(key.expiresAt?.getTime() ?? Infinity, lineageExpiry);
+    return { principal, expiresAt, touchedAt };
+  }
+
+  /** Writes `lastUsedAt` when it is older than the resolution; returns when it was written. */
+  private async touch(
+    lastUsedAt: Date | null,
+    now: Date,
+    write: () => Promise<unknown>,
+  ): Promise<number> {
+    if (lastUsedAt && now.getTime() - lastUsedAt.getTime() <= LAST_USED_RESOLUTION_MS)
+      return lastUsedAt.getTime();
+    await write();
+    return now.getTime();
   }
 
   /**
-   * Whether every key a key was made with (its parent, the parent's parent, …) is still
-   * unrevoked and unexpired. Revoking a key revokes its descendants too (ApiKeyService.revoke);
-   * this check also covers a key made while its parent was being revoked.
+   * When the first key a key was made with (its parent, the parent's parent, …) expires, ms
+   * (Infinity when none does), or null when one of them is revoked or expired. Revoking a key
+   * revokes its descendants too (ApiKeyService.revoke); this check also covers a key made while
+   * its parent was being revoked.
    */
-  private async lineageStands(key: ApiKeyRow, now: Date): Promise<boolean> {
+  private async lineageExpiry(key: ApiKeyRow, now: Date): Promise<number | null> {
+    let earliest = Infinity;
     let parentId = key.createdWithKeyId;
     for (let depth = 0; parentId; depth++) {
-      if (depth >= MAX_KEY_LINEAGE) return false;
+      if (depth >= MAX_KEY_LINEAGE) return null;
       const parent = await this.models.ApiKey.findByPk(parentId);
-      if (!parent || parent.revokedAt || (parent.expiresAt && parent.expiresAt <= now))
-        return false;
+      if (!parent || parent.revokedAt || (parent.expiresAt && parent.expiresAt <= now)) return null;
+      earliest = Math.min(earliest, parent.expiresAt?.getTime() ?? Infinity);
       parentId = parent.createdWithKeyId;
     }
-    return true;
+    return earliest;
   }
 
   private async principalFor(

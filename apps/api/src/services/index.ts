@@ -6,6 +6,7 @@ import { AuthService } from './auth.js';
 import { CaptureService } from './captures.js';
 import { ComputePool } from './computePool.js';
 import { ComputeService } from './computeService.js';
+import { credentialEpoch } from './credentialEpoch.js';
 import { InProcessJobQueue } from './inProcessJobQueue.js';
 import type { JobQueue } from './jobQueue.js';
 import { JobService } from './jobs.js';
@@ -45,10 +46,12 @@ function jobQueueFor(models: Models, pool: ComputePool, config: AppConfig): JobQ
 
 export function createServices(models: Models, config: AppConfig): Services {
   const audit = new AuditLog(models);
-  const auth = new AuthService(models, audit, {
-    sessionHours: config.sessionHours,
-    bcryptRounds: config.bcryptRounds,
-  });
+  const auth = new AuthService(
+    models,
+    audit,
+    { sessionHours: config.sessionHours, bcryptRounds: config.bcryptRounds },
+    credentialEpoch(models),
+  );
   const mailer = new Mailer(models, config.smtpUrl, config.mailFrom, config.mailDir);
   const projects = new ProjectService(models, audit);
   const studies = new StudyService(models, audit, projects);
