@@ -1,20 +1,27 @@
 import { useRef, useState, type ReactNode } from 'react';
+import { downloadText } from '../../lib/download';
 import { exportPng, exportSvg } from '../../lib/exportChart';
 import { Button } from '../ui/Button';
 
-/** A chart's card: title, controls, the SVG, and SVG/PNG export of that SVG. */
+/**
+ * A chart's card: title, controls, the SVG, SVG/PNG export of that SVG, and, when `csv` is
+ * given, the chart's data as CSV with units in the header (lib/chartCsv.ts), `<fileName>.csv`.
+ */
 export function ChartFrame({
   title,
   fileName,
   controls,
   children,
   footer,
+  csv,
 }: {
   title: string;
   fileName: string;
   controls?: ReactNode;
   children: ReactNode;
   footer?: ReactNode;
+  /** Builds the CSV of the data drawn (called on click only). */
+  csv?: () => string;
 }) {
   const holder = useRef<HTMLDivElement>(null);
   const [exportError, setExportError] = useState<string | null>(null);
@@ -25,6 +32,15 @@ export function ChartFrame({
         <span className="text-sm font-semibold tracking-wide uppercase">{title}</span>
         <span className="no-print flex flex-wrap items-center gap-1">
           {controls}
+          {csv ? (
+            <Button
+              variant="ghost"
+              aria-label={`Download ${title} data as CSV`}
+              onClick={() => downloadText(csv(), `${fileName}.csv`, 'text/csv')}
+            >
+              CSV
+            </Button>
+          ) : null}
           <Button
             variant="ghost"
             onClick={() => {

@@ -1,4 +1,5 @@
 import { line, scaleLinear, scaleLog } from 'd3';
+import { lineSeriesCsv } from '../../lib/chartCsv';
 import { formatNumber } from '../../lib/format';
 import { AxisBottom, AxisLeft, leftAxisMargin } from './axes';
 import { ChartFrame } from './ChartFrame';
@@ -86,6 +87,7 @@ export function LineChart({
       title={title}
       fileName={fileName}
       footer={<ChartLegend series={series} swatch="line" />}
+      csv={() => lineSeriesCsv(series, xLabel, yLabel)}
     >
       <svg
         data-chart="line"

@@ -1,5 +1,6 @@
 import { line, scaleLinear } from 'd3';
 import type { ReactNode } from 'react';
+import { periodTracesCsv } from '../../lib/chartCsv';
 import { angleAxis, AxisBottom, AxisLeft } from './axes';
 import { ChartFrame } from './ChartFrame';
 import { ChartLegend } from './ChartLegend';
@@ -49,6 +50,7 @@ export function PeriodChart({
       title={title}
       fileName={fileName}
       controls={controls}
+      csv={() => periodTracesCsv(traces, unit)}
       footer={
         <>
           {traces.length > 1 ? <ChartLegend series={traces} swatch="line" /> : null}

@@ -1,5 +1,6 @@
 import { scaleLinear, scaleLog } from 'd3';
 import { useState, type ReactNode } from 'react';
+import { spectrumCsv } from '../../lib/chartCsv';
 import { formatNumber, formatPercent } from '../../lib/format';
 import { Button } from '../ui/Button';
 import { AxisBottom, AxisLeft, leftAxisMargin } from './axes';
@@ -140,6 +141,7 @@ export function SpectrumChart({
     <ChartFrame
       title={title}
       fileName={fileName}
+      csv={() => spectrumCsv(series, unit)}
       controls={
         <>
           {controls}

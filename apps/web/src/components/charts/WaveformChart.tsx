@@ -9,6 +9,7 @@ import {
   type ZoomTransform,
 } from 'd3';
 import { useEffect, useId, useMemo, useRef, useState, type ReactNode } from 'react';
+import { waveformChartCsv } from '../../lib/chartCsv';
 import { Button } from '../ui/Button';
 import { angleAxis, AxisBottom, AxisLeft, formatRadians } from './axes';
 import { ChartFrame } from './ChartFrame';
@@ -142,6 +143,7 @@ export function WaveformChart({
     <ChartFrame
       title={title}
       fileName={fileName}
+      csv={() => waveformChartCsv({ output, outputName, overlay, modulator })}
       controls={
         <>
           {controls}

@@ -1,5 +1,6 @@
 import { scaleLinear } from 'd3';
 import { ChartFrame } from '../../../components/charts/ChartFrame';
+import { toCsv } from '../../../lib/download';
 
 const STATES = ['100', '110', '010', '011', '001', '101'];
 
@@ -22,7 +23,11 @@ export function HexagonChart({ m, theta, sector }: { m: number; theta: number; s
   const a = vertex(sector - 1);
   const b = vertex(sector);
   return (
-    <ChartFrame title="Hexagon and reference" fileName="space-vector-hexagon">
+    <ChartFrame
+      title="Hexagon and reference"
+      fileName="space-vector-hexagon"
+      csv={() => toCsv(['m', 'theta (rad)', 'sector'], [[m, theta, sector]])}
+    >
       <svg
         data-chart="hexagon"
         viewBox={`0 0 ${size} ${size}`}

@@ -1,6 +1,7 @@
 import { scaleBand, scaleLinear } from 'd3';
 import type { SpaceVectorSequence } from '@pulsewright/modulation';
 import { ChartFrame } from '../../../components/charts/ChartFrame';
+import { sequenceCsv } from '../../../lib/chartCsv';
 
 /** The states of one switching period as segments, and each leg's gate signal beneath. */
 export function SequenceChart({ sequence }: { sequence: SpaceVectorSequence }) {
@@ -23,7 +24,11 @@ export function SequenceChart({ sequence }: { sequence: SpaceVectorSequence }) {
     [],
   );
   return (
-    <ChartFrame title="Switching sequence over one period" fileName="space-vector-sequence">
+    <ChartFrame
+      title="Switching sequence over one period"
+      fileName="space-vector-sequence"
+      csv={() => sequenceCsv(segments)}
+    >
       <svg
         data-chart="sequence"
         viewBox={`0 0 ${width} ${height}`}
