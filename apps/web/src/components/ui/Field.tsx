@@ -74,6 +74,14 @@ export interface FieldOption<T extends string> {
   disabled?: boolean;
 }
 
+/** The typed value of the option whose value is `text` (a select's `event.target.value`), if any. */
+export function optionValue<T extends string>(
+  options: readonly FieldOption<T>[],
+  text: string,
+): T | undefined {
+  return options.find((option) => option.value === text)?.value;
+}
+
 export interface SelectFieldProps<T extends string> extends Omit<
   SelectHTMLAttributes<HTMLSelectElement>,
   'id' | 'value'
@@ -108,8 +116,8 @@ export function SelectField<T extends string>({
         className={`${inputClass} w-full min-w-0 ${className}`}
         onChange={(event) => {
           onChange?.(event);
-          const chosen = options.find((option) => option.value === event.target.value);
-          if (chosen) onValueChange?.(chosen.value);
+          const chosen = optionValue(options, event.target.value);
+          if (chosen !== undefined) onValueChange?.(chosen);
         }}
         {...rest}
       >

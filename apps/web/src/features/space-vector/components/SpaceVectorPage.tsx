@@ -47,18 +47,14 @@ export function SpaceVectorPage() {
             <SelectField
               label="Sequence"
               value={input.sequence}
-              onChange={(e) =>
-                setInput({ ...input, sequence: e.target.value as SpaceVectorInput['sequence'] })
-              }
+              onValueChange={(sequence) => setInput({ ...input, sequence })}
               options={SEQUENCE_OPTIONS}
             />
             {input.sequence === 'five-segment' ? (
               <SelectField
                 label="Clamping"
                 value={input.clamping}
-                onChange={(e) =>
-                  setInput({ ...input, clamping: e.target.value as SpaceVectorInput['clamping'] })
-                }
+                onValueChange={(clamping) => setInput({ ...input, clamping })}
                 options={CLAMPING_OPTIONS}
               />
             ) : null}

@@ -2,6 +2,7 @@ import { useQueries } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { SpectrumChart, type SpectrumSeries } from '../../../components/charts/SpectrumChart';
+import { optionValue, type FieldOption } from '../../../components/ui/Field';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { Empty, ErrorState, Loading, QueryView } from '../../../components/ui/QueryState';
 import { formatGain, formatNumber, formatPercent } from '../../../lib/format';
@@ -17,6 +18,11 @@ const COLOURS = ['#12263a', '#d9822b', '#2a8c82', '#8e3b6e', '#c2462e', '#5b6fa8
 
 /** Which voltage's spectra are overlaid: the bridge's (phase a), or the point of coupling's (the filter's output where there is one). */
 type SpectrumChoice = 'bridge' | 'coupling';
+
+const SPECTRUM_CHOICES: readonly FieldOption<SpectrumChoice>[] = [
+  { value: 'bridge', label: 'Bridge voltage' },
+  { value: 'coupling', label: 'Point of coupling (filter output)' },
+];
 
 /** A column of the figures table: its heading and the cell of one report. */
 interface Column {
@@ -224,10 +230,15 @@ export function ComparePage() {
                     aria-label="Spectra of"
                     className="rounded border border-rule bg-panel px-1.5 py-0.5 text-xs"
                     value={choice}
-                    onChange={(e) => setChoice(e.target.value as SpectrumChoice)}
+                    onChange={(e) =>
+                      setChoice(optionValue(SPECTRUM_CHOICES, e.target.value) ?? choice)
+                    }
                   >
-                    <option value="bridge">Bridge voltage</option>
-                    <option value="coupling">Point of coupling (filter output)</option>
+                    {SPECTRUM_CHOICES.map((option) => (
+                      <option key={option.value} value={option.value}>
+                        {option.label}
+                      </option>
+                    ))}
                   </select>
                 }
               />

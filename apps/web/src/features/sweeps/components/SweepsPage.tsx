@@ -1,15 +1,17 @@
-import type { ZeroSequence } from '@pulsewright/modulation';
+import { DESIGN_BOUNDS, type BridgeScheme, type ZeroSequence } from '@pulsewright/modulation';
 import { useState, type FormEvent } from 'react';
 import { LineChart } from '../../../components/charts/LineChart';
 import { Button } from '../../../components/ui/Button';
-import { SelectField, TextField } from '../../../components/ui/Field';
+import { NumberField, SelectField } from '../../../components/ui/Field';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState, QueryView } from '../../../components/ui/QueryState';
+import { rangeError, rangeText } from '../../../lib/fieldRange';
 import { formatDate, formatPercent } from '../../../lib/format';
 import {
   METHOD_OPTIONS,
   SCHEME_OPTIONS,
   ZERO_SEQUENCE_OPTIONS,
+  type Option,
 } from '../../../lib/modulationOptions';
 import {
   errorMessage,
@@ -43,12 +45,22 @@ export function ProgressBar({ value, label }: { value: number; label: string }) 
   );
 }
 
+type SweepMethod = 'sine-triangle' | 'three-phase';
+
+/** The methods a sweep of the service takes (carrier PWM), from the library's list. */
+const SWEEP_METHOD_OPTIONS = METHOD_OPTIONS.filter(
+  (o): o is Option<SweepMethod> => o.value === 'sine-triangle' || o.value === 'three-phase',
+);
+
+const MA_BOUNDS = DESIGN_BOUNDS['modulation.ma'];
+const WHOLE_NUMBER = { integer: true };
+
 /** Start a sweep of the modulation index on the service and watch it to the end. */
 export function SweepsPage() {
-  const [form, setForm] = useState({
-    method: 'sine-triangle',
-    scheme: 'bipolar',
-    zeroSequence: 'none',
+  const [method, setMethod] = useState<SweepMethod>('sine-triangle');
+  const [scheme, setScheme] = useState<BridgeScheme>('bipolar');
+  const [zeroSequence, setZeroSequence] = useState<ZeroSequence>('none');
+  const [numbers, setNumbers] = useState({
     mf: 21,
     vdc: 400,
     from: 0.1,
@@ -60,34 +72,34 @@ export function SweepsPage() {
   const start = useCreateMaSweep();
   const job = useJob(jobId);
   const jobs = useJobs();
+  // The library's bounds where it owns them (ma, DC bus); the service names the others' ranges.
+  const checks = {
+    mf: rangeError('Frequency ratio mf', numbers.mf, WHOLE_NUMBER),
+    vdc: rangeError('DC bus', numbers.vdc, DESIGN_BOUNDS.vdc, { unit: 'V' }),
+    from: rangeError('ma from', numbers.from, MA_BOUNDS),
+    to: rangeError('ma to', numbers.to, MA_BOUNDS),
+    points: rangeError('Points', numbers.points, WHOLE_NUMBER),
+    maxOrder: rangeError('Highest order', numbers.maxOrder, WHOLE_NUMBER),
+  };
+  const valid = Object.values(checks).every((message) => message === undefined);
   const submit = (event: FormEvent) => {
     event.preventDefault();
+    if (!valid) return;
+    const { mf, vdc, from, to, points, maxOrder } = numbers;
     start.mutate(
       {
         modulation:
-          form.method === 'three-phase'
-            ? {
-                method: 'three-phase',
-                ma: form.from,
-                mf: form.mf,
-                vdc: form.vdc,
-                zeroSequence: form.zeroSequence as ZeroSequence,
-              }
-            : {
-                method: 'sine-triangle',
-                scheme: form.scheme as 'bipolar' | 'unipolar',
-                ma: form.from,
-                mf: form.mf,
-                vdc: form.vdc,
-              },
-        ma: { from: form.from, to: form.to, points: form.points },
-        maxOrder: form.maxOrder,
+          method === 'three-phase'
+            ? { method, ma: from, mf, vdc, zeroSequence }
+            : { method, scheme, ma: from, mf, vdc },
+        ma: { from, to, points },
+        maxOrder,
       },
       { onSuccess: (created) => setJobId(created.id) },
     );
   };
-  const num = (key: keyof typeof form) => (e: React.ChangeEvent<HTMLInputElement>) =>
-    setForm({ ...form, [key]: Number(e.target.value) });
+  const set = (key: keyof typeof numbers) => (value: number) =>
+    setNumbers((current) => ({ ...current, [key]: value }));
   const err = (path: string) => fieldErrorOf(start.error, path);
 
   return (
@@ -101,78 +113,74 @@ export function SweepsPage() {
           <form onSubmit={submit} className="flex flex-col gap-3" noValidate>
             <SelectField
               label="Method"
-              value={form.method}
-              onChange={(e) => setForm({ ...form, method: e.target.value })}
-              options={METHOD_OPTIONS.filter(
-                (o) => o.value === 'sine-triangle' || o.value === 'three-phase',
-              )}
+              value={method}
+              onValueChange={setMethod}
+              options={SWEEP_METHOD_OPTIONS}
             />
-            {form.method === 'three-phase' ? (
+            {method === 'three-phase' ? (
               <SelectField
                 label="Zero sequence"
-                value={form.zeroSequence}
-                onChange={(e) => setForm({ ...form, zeroSequence: e.target.value })}
+                value={zeroSequence}
+                onValueChange={setZeroSequence}
                 options={ZERO_SEQUENCE_OPTIONS}
               />
             ) : (
               <SelectField
                 label="Bridge scheme"
-                value={form.scheme}
-                onChange={(e) => setForm({ ...form, scheme: e.target.value })}
+                value={scheme}
+                onValueChange={setScheme}
                 options={SCHEME_OPTIONS}
               />
             )}
-            <TextField
+            <NumberField
               label="Frequency ratio mf"
-              type="number"
-              value={form.mf}
-              onChange={num('mf')}
+              value={numbers.mf}
+              onChange={set('mf')}
               hint="whole number, 1 to 1000"
+              validate={() => checks.mf}
               error={err('mf')}
             />
-            <TextField
+            <NumberField
               label="DC bus"
               unit="V"
-              type="number"
-              value={form.vdc}
-              onChange={num('vdc')}
-              hint="above 0, up to 100000"
+              value={numbers.vdc}
+              onChange={set('vdc')}
+              hint={rangeText(DESIGN_BOUNDS.vdc, { unit: 'V' })}
+              validate={() => checks.vdc}
               error={err('vdc')}
             />
             <div className="grid grid-cols-2 gap-3">
-              <TextField
+              <NumberField
                 label="ma from"
-                type="number"
-                step={0.01}
-                value={form.from}
-                onChange={num('from')}
-                hint="above 0"
+                value={numbers.from}
+                onChange={set('from')}
+                hint={rangeText(MA_BOUNDS)}
+                validate={() => checks.from}
                 error={err('ma.from') ?? err('from')}
               />
-              <TextField
+              <NumberField
                 label="ma to"
-                type="number"
-                step={0.01}
-                value={form.to}
-                onChange={num('to')}
-                hint="up to 4"
+                value={numbers.to}
+                onChange={set('to')}
+                hint={rangeText(MA_BOUNDS)}
+                validate={() => checks.to}
                 error={err('ma.to') ?? err('to')}
               />
             </div>
-            <TextField
+            <NumberField
               label="Points"
-              type="number"
-              value={form.points}
-              onChange={num('points')}
+              value={numbers.points}
+              onChange={set('points')}
               hint="2 to 400"
+              validate={() => checks.points}
               error={err('points')}
             />
-            <TextField
+            <NumberField
               label="Highest order"
-              type="number"
-              value={form.maxOrder}
-              onChange={num('maxOrder')}
+              value={numbers.maxOrder}
+              onChange={set('maxOrder')}
               hint="1 to 2000"
+              validate={() => checks.maxOrder}
               error={err('maxOrder')}
             />
             {start.isError &&
@@ -181,7 +189,7 @@ export function SweepsPage() {
                 {errorMessage(start.error)}
               </p>
             ) : null}
-            <Button type="submit" busy={start.isPending}>
+            <Button type="submit" busy={start.isPending} disabled={!valid}>
               Run the sweep
             </Button>
           </form>

@@ -1,4 +1,5 @@
 import { Button } from '../../../components/ui/Button';
+import { optionValue } from '../../../components/ui/Field';
 import { Panel } from '../../../components/ui/Panel';
 import { QueryView } from '../../../components/ui/QueryState';
 import {
@@ -17,8 +18,8 @@ export function MembersPanel({ myId }: { myId: string | undefined }) {
   const update = useUpdateMember();
   const remove = useRemoveMember();
   const changeRole = (member: Member, value: string) => {
-    const chosen = ROLE_OPTIONS.find((option) => option.value === value);
-    if (chosen) update.mutate({ id: member.user.id, role: chosen.value });
+    const role = optionValue(ROLE_OPTIONS, value);
+    if (role) update.mutate({ id: member.user.id, role });
   };
   return (
     <Panel title="Members">
