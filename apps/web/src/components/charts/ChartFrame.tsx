@@ -27,7 +27,10 @@ export function ChartFrame({
   const [exportError, setExportError] = useState<string | null>(null);
   const svg = () => holder.current?.querySelector('svg[data-chart]') as SVGSVGElement | null;
   return (
-    <figure className="rounded-lg border border-rule bg-panel p-3 shadow-sm" aria-label={title}>
+    <figure
+      className="rounded-lg border border-rule bg-panel p-3 shadow-sm print:break-inside-avoid"
+      aria-label={title}
+    >
       <figcaption className="mb-2 flex flex-wrap items-center justify-between gap-2">
         <span className="text-sm font-semibold tracking-wide uppercase">{title}</span>
         <span className="no-print flex flex-wrap items-center gap-1">
