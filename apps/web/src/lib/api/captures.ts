@@ -125,16 +125,17 @@ export function useCaptureSpectrum(id: string, window: FftWindow) {
   return useQuery(captureSpectrumQueryOptions(id, window));
 }
 
+/** Without `maxOrder` the service compares up to the study's third carrier group and its sidebands. */
 export async function getCaptureComparison(
   id: string,
   studyId: string,
   window: FftWindow,
-  maxOrder = CAPTURE_MAX_ORDER,
+  maxOrder?: number,
 ): Promise<CaptureComparison> {
   return unwrap(
     await api.POST('/api/v1/captures/{id}/comparison', {
       params: { path: { id } },
-      body: { studyId, window, maxOrder },
+      body: { studyId, window, ...(maxOrder === undefined ? {} : { maxOrder }) },
     }),
   );
 }
@@ -143,7 +144,7 @@ export const captureComparisonQueryOptions = (
   id: string,
   studyId: string,
   window: FftWindow,
-  maxOrder = CAPTURE_MAX_ORDER,
+  maxOrder?: number,
 ) =>
   queryOptions({
     queryKey: queryKeys.captures.comparison(id, studyId, window, maxOrder),

@@ -35,7 +35,7 @@ export const queryKeys = {
     one: (id: string) => ['captures', 'one', id] as const,
     spectrum: (id: string, window: string, maxOrder: number) =>
       ['captures', 'spectrum', id, window, maxOrder] as const,
-    comparison: (id: string, studyId: string, window: string, maxOrder: number) =>
+    comparison: (id: string, studyId: string, window: string, maxOrder: number | undefined) =>
       ['captures', 'comparison', id, studyId, window, maxOrder] as const,
   },
   team: {

@@ -18,6 +18,7 @@ import {
   useStudies,
   useUploadCapture,
   type CaptureComparison,
+  type CaptureSpectrum,
   type CaptureWithSeries,
   type FftWindow,
 } from '../../../lib/api';
@@ -117,7 +118,7 @@ export function CapturesPage() {
     <div>
       <PageHeader
         title="Bench captures"
-        subtitle="Measured output voltage from the bench, analysed with a windowed FFT and set against a study's prediction."
+        subtitle="Measured output voltage from the bench, analysed over whole periods by FFT (with a window when it is not exactly periodic) and set against a study's prediction."
       />
       <div className="grid gap-5 lg:grid-cols-[320px_minmax(0,1fr)]">
         <div className="flex flex-col gap-4">
@@ -193,7 +194,7 @@ function CaptureAnalysis({ capture }: { capture: CaptureWithSeries }) {
   const series: SpectrumSeries[] = [];
   if (comparison.data) {
     series.push({
-      name: `Capture (${windowName} window)`,
+      name: `Capture (${windowLabel(comparison.data)})`,
       color: 'var(--color-trace-current)',
       harmonics: label(
         comparison.data.orders.map((o) => ({ order: o.order, amplitude: o.measured })),
@@ -208,7 +209,7 @@ function CaptureAnalysis({ capture }: { capture: CaptureWithSeries }) {
     });
   } else if (spectrum.data) {
     series.push({
-      name: `Capture (${windowName} window)`,
+      name: `Capture (${windowLabel(spectrum.data)})`,
       color: 'var(--color-trace-current)',
       harmonics: spectrum.data.harmonics,
     });
@@ -249,10 +250,13 @@ function CaptureAnalysis({ capture }: { capture: CaptureWithSeries }) {
         {spectrum.data ? (
           <p className="mt-2 text-sm">
             Fundamental {formatNumber(spectrum.data.fundamentalFrequency)} Hz
-            {spectrum.data.fundamentalEstimated ? ' (estimated from the strongest bin)' : ''} · FFT
-            of {spectrum.data.fftSize} points, coherent gain{' '}
-            {formatNumber(spectrum.data.coherentGain)} · capture THD{' '}
-            {formatPercent(spectrum.data.thd)} to order 50
+            {spectrum.data.fundamentalEstimated
+              ? spectrum.data.periodic
+                ? ' (from the whole periods the capture repeats over)'
+                : ' (estimated from the strongest bin)'
+              : ''}{' '}
+            · {spectrumBasis(spectrum.data)} · capture THD {formatPercent(spectrum.data.thd)} to
+            order {spectrum.data.harmonics.at(-1)?.order ?? 0}
           </p>
         ) : null}
         {comparison.isPending && studyId ? (
@@ -269,8 +273,49 @@ function CaptureAnalysis({ capture }: { capture: CaptureWithSeries }) {
           fileName="capture-spectrum"
         />
       ) : null}
+      {comparison.data ? <ComparisonNotes comparison={comparison.data} /> : null}
       {comparison.data ? <ComparisonTable comparison={comparison.data} /> : null}
     </div>
+  );
+}
+
+/** The window the service applied, in words: none for an exactly periodic capture. */
+function windowLabel(analysis: { periodic: boolean; window: string }): string {
+  return analysis.periodic ? 'exactly periodic, no window' : `${analysis.window} window`;
+}
+
+/** How the capture was read: whole periods at their own length, with or without a window. */
+function spectrumBasis(spectrum: CaptureSpectrum): string {
+  const span = `${spectrum.periods} whole periods (${spectrum.sampleCount} samples) transformed at that length`;
+  return spectrum.periodic
+    ? `${span}; the capture repeats exactly over them, so every harmonic falls on a bin and no window is needed`
+    : `${span} with the ${spectrum.window} window (coherent gain ${formatNumber(spectrum.coherentGain)})`;
+}
+
+function ComparisonNotes({ comparison }: { comparison: CaptureComparison }) {
+  return (
+    <Panel title="What was compared">
+      {comparison.warnings.length ? (
+        <ul role="alert" className="mb-2 flex flex-col gap-1 text-sm text-bad">
+          {comparison.warnings.map((warning) => (
+            <li key={warning}>{warning}</li>
+          ))}
+        </ul>
+      ) : null}
+      <p className="text-sm">
+        Orders 1 to {comparison.maxOrder} (the study&apos;s third carrier group and its sidebands
+        unless asked otherwise) · capture fundamental{' '}
+        {formatNumber(comparison.fundamentalFrequency)} Hz, study{' '}
+        {formatNumber(comparison.studyFundamentalFrequency)} Hz · capture THD{' '}
+        {formatPercent(comparison.measuredThd)} over the orders compared.
+      </p>
+      <p className="mt-1 text-sm text-ink-soft">
+        Measured / predicted is given only where the prediction is above the noise floor,{' '}
+        {formatPercent(comparison.ratioFloor)} of the predicted fundamental (
+        {formatNumber(comparison.noiseFloor)} V): below it the ratio of two small numbers says
+        nothing about the prediction.
+      </p>
+    </Panel>
   );
 }
 
@@ -301,11 +346,7 @@ function ComparisonTable({ comparison }: { comparison: CaptureComparison }) {
                 <td>{formatNumber(o.frequency)}</td>
                 <td>{formatNumber(o.measured)}</td>
                 <td>{formatNumber(o.predicted)}</td>
-                <td>
-                  {o.ratio === null || o.predicted < 1e-6 * (comparison.orders[0]?.predicted ?? 1)
-                    ? '—'
-                    : formatNumber(o.ratio)}
-                </td>
+                <td>{o.ratio === null ? '—' : formatNumber(o.ratio)}</td>
               </tr>
             ))}
           </tbody>

@@ -4,6 +4,8 @@ import { Link, useLocation, useNavigate, useParams, useSearchParams } from 'reac
 import { paths } from '../../../config/paths';
 import { errorMessage, fieldErrorOf, roleAtLeast, useMe } from '../../../lib/api';
 import { formatNumber, formatPercent } from '../../../lib/format';
+import { ReadOnlyNotice } from '../../../components/role/ReadOnlyNotice';
+import { RoleGate } from '../../../components/role/RoleGate';
 import { Button } from '../../../components/ui/Button';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState, Loading } from '../../../components/ui/QueryState';
@@ -168,33 +170,23 @@ function StudyEditor({ study }: { study: Study | undefined }) {
                 ) : null}
               </>
             ) : null}
-            <Button
-              onClick={save}
-              busy={saving}
-              disabled={!canEdit || blocked}
-              title={
-                !canEdit
-                  ? 'Viewers can read and compute but not save'
-                  : blocked
-                    ? 'Correct the marked fields to save'
-                    : undefined
-              }
-            >
-              {study ? 'Save revision' : 'Create study'}
-            </Button>
+            <RoleGate role="engineer">
+              <Button
+                onClick={save}
+                busy={saving}
+                disabled={blocked}
+                title={blocked ? 'Correct the marked fields to save' : undefined}
+              >
+                {study ? 'Save revision' : 'Create study'}
+              </Button>
+            </RoleGate>
           </>
         }
       />
-      {!canEdit && me.data ? (
-        <p
-          className="mb-4 rounded-md border border-rule bg-panel px-3 py-2 text-sm"
-          role="note"
-          data-testid="read-only"
-        >
-          You have the <strong>{me.data.role}</strong> role: you can change the values to explore
-          the preview, but saving needs an engineer.
-        </p>
-      ) : null}
+      <ReadOnlyNotice
+        can="you can read this design as saved, its live report, limit check and revisions, compare it and print its report"
+        needs="Creating, saving, duplicating and restoring studies need"
+      />
       {generalSaveError ? (
         <div className="mb-3">
           <ErrorState error={saveError} />

@@ -6,6 +6,7 @@ import { roleAtLeast, useMe, useStudy, useStudyReport, useStudyRevisions } from 
 import { designRows } from '../model/describeDesign';
 import { HarmonicLimitsPanel } from './HarmonicLimitsPanel';
 import { ReportCautions } from './ReportCautions';
+import { RoleGate } from '../../../components/role/RoleGate';
 import { ShareReportForm } from './ShareReportForm';
 import { StudyCharts } from './StudyCharts';
 
@@ -32,7 +33,12 @@ export function StudyReportPage() {
           Copy link
         </Button>
       </div>
-      <ShareReportForm studyId={study.data.id} canShare={roleAtLeast(me.data?.role, 'engineer')} />
+      <RoleGate role="engineer">
+        <ShareReportForm
+          studyId={study.data.id}
+          canShare={roleAtLeast(me.data?.role, 'engineer')}
+        />
+      </RoleGate>
       <header className="mb-4 border-b border-rule pb-3">
         <p className="text-xs tracking-wide text-ink-soft uppercase">Pulsewright study report</p>
         <h1 className="text-2xl font-semibold">{study.data.name}</h1>
