@@ -1,5 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { Command } from 'commander';
+import { angleTableCommand } from './commands/angleTableCommand.js';
 import { maSweepCommand } from './commands/maSweepCommand.js';
 import { optimalPatternCommand } from './commands/optimalPatternCommand.js';
 import { reportCommand } from './commands/reportCommand.js';
@@ -24,7 +25,7 @@ export function cliVersion(): string {
 export function createProgram(io: CliIo): Command {
   const program = new Command('pulsewright')
     .description(
-      'Pulsewright on the command line: design reports, exact spectra, timer tables, SHE and optimal-pattern tables, ma sweeps.\n' +
+      'Pulsewright on the command line: design reports, exact spectra, timer tables, SHE and optimal-pattern tables, angle tables for controllers, ma sweeps.\n' +
         'Runs @pulsewright/modulation directly: no service, no network; the same input gives the same bytes.\n' +
         'Exit status: 0 done, 1 failure (e.g. no solution found), 2 bad input (the message names the field and its range).',
     )
@@ -41,6 +42,7 @@ export function createProgram(io: CliIo): Command {
     timerTableCommand,
     sheCommand,
     optimalPatternCommand,
+    angleTableCommand,
     maSweepCommand,
     waveformCommand,
     netlistCommand,

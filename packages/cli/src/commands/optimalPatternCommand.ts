@@ -7,18 +7,15 @@ import {
   type OptimalPulseSweepOptions,
   type OptimalPulseSweepResult,
 } from '@pulsewright/modulation';
-import { FailureError } from '../errors.js';
 import { callLibrary } from '../input/callLibrary.js';
 import type { CliIo } from '../output/CliIo.js';
 import { formatDegrees, formatNumber, formatPercent } from '../output/formatNumber.js';
 import { formatPattern, patternTitle } from '../output/formatPattern.js';
 import { formatTable } from '../output/formatTable.js';
-import { createProgress } from '../output/progress.js';
 import { toCsv } from '../output/toCsv.js';
-import { toJson } from '../output/toJson.js';
-import { writeOutput } from '../output/writeOutput.js';
 import { addOutputOptions, numberOption, type OutputFlags } from './commonOptions.js';
-import { addPatternOptions, fundamentalRange, patternBase, patternNotes } from './patternInput.js';
+import { addPatternOptions, patternBase, patternNotes } from './patternInput.js';
+import { runPatternCommand } from './runPatternCommand.js';
 
 type OptimalFlags = Record<string, unknown> & OutputFlags;
 
@@ -48,49 +45,34 @@ export function optimalPatternCommand(io: CliIo): Command {
     'after',
     "\nExit status 1 when no optimum is found at the one fundamental, or at none of the table's.",
   );
-  command.action(async (flags: OptimalFlags) => {
+  command.action((flags: OptimalFlags) => {
     const base = patternBase(flags);
     if (flags.objective !== undefined) base.objective = flags.objective;
     if (flags.maxOrder !== undefined) base.maxOrder = flags.maxOrder;
     const notes = patternNotes();
-    const range = fundamentalRange(flags);
-    if (range === null) {
-      const options = { ...base, fundamental: flags.fundamental } as OptimalPulseOptions;
-      const result = callLibrary(() => optimalPulsePattern(options), { notes });
-      writeOutput(
-        flags.json === true
-          ? toJson(result)
-          : flags.csv === true
-            ? patternCsv(result)
-            : patternText(result),
-        flags.output,
-        io,
-      );
-      if (!result.converged) throw new FailureError(result.message);
-      return;
-    }
-    const progress = await createProgress('optimal patterns', io, flags.progress !== false);
-    const options = {
-      ...base,
-      fundamentals: range,
-      onProgress: progress.update,
-    } as OptimalPulseSweepOptions;
-    let result: OptimalPulseSweepResult;
-    try {
-      result = callLibrary(() => optimalPulseSweep(options), { notes });
-    } finally {
-      progress.stop();
-    }
-    writeOutput(
-      flags.json === true
-        ? toJson(result)
-        : flags.csv === true
-          ? sweepCsv(result)
-          : sweepText(result, options),
-      flags.output,
-      io,
-    );
-    if (result.solvedFraction === 0) throw new FailureError(result.message);
+    return runPatternCommand(flags, io, {
+      label: 'optimal patterns',
+      single: () => {
+        const options = { ...base, fundamental: flags.fundamental } as OptimalPulseOptions;
+        const result = callLibrary(() => optimalPulsePattern(options), { notes });
+        return {
+          result,
+          text: () => patternText(result),
+          csv: () => patternCsv(result),
+          failure: result.converged ? null : result.message,
+        };
+      },
+      table: (range, onProgress) => {
+        const options = { ...base, fundamentals: range, onProgress } as OptimalPulseSweepOptions;
+        const result = callLibrary(() => optimalPulseSweep(options), { notes });
+        return {
+          result,
+          text: () => sweepText(result, options),
+          csv: () => sweepCsv(result),
+          failure: result.solvedFraction === 0 ? result.message : null,
+        };
+      },
+    });
   });
   return command;
 }

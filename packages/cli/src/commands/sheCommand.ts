@@ -7,19 +7,16 @@ import {
   type SheSweepResult,
   type SolveSheOptions,
 } from '@pulsewright/modulation';
-import { FailureError } from '../errors.js';
 import { callLibrary } from '../input/callLibrary.js';
 import { parseNumberList } from '../input/parseValue.js';
 import type { CliIo } from '../output/CliIo.js';
 import { formatDegrees, formatNumber } from '../output/formatNumber.js';
 import { formatPattern, patternTitle } from '../output/formatPattern.js';
 import { formatTable } from '../output/formatTable.js';
-import { createProgress } from '../output/progress.js';
 import { toCsv } from '../output/toCsv.js';
-import { toJson } from '../output/toJson.js';
-import { writeOutput } from '../output/writeOutput.js';
 import { addOutputOptions, numberOption, type OutputFlags } from './commonOptions.js';
-import { addPatternOptions, fundamentalRange, patternBase, patternNotes } from './patternInput.js';
+import { addPatternOptions, patternBase, patternNotes } from './patternInput.js';
+import { runPatternCommand } from './runPatternCommand.js';
 
 type SheFlags = Record<string, unknown> & OutputFlags;
 
@@ -52,51 +49,40 @@ export function sheCommand(io: CliIo): Command {
     'after',
     "\nExit status 1 when no solution is found at the one fundamental, or at none of the table's.",
   );
-  command.action(async (flags: SheFlags) => {
+  command.action((flags: SheFlags) => {
     const base = { ...patternBase(flags), eliminate: flags.eliminate };
     const notes = patternNotes();
-    const range = fundamentalRange(flags);
-    if (range === null) {
-      const options = {
-        ...base,
-        ...(flags.fundamental === undefined ? {} : { fundamental: flags.fundamental }),
-      } as SolveSheOptions;
-      const result = callLibrary(() => solveShe(options), { notes });
-      writeOutput(
-        flags.json === true
-          ? toJson(result)
-          : flags.csv === true
-            ? sheCsv(result)
-            : sheText(result, options),
-        flags.output,
-        io,
-      );
-      if (!result.converged) throw new FailureError(result.message);
-      return;
-    }
-    const progress = await createProgress('SHE table', io, flags.progress !== false);
-    const options = {
-      ...base,
-      fundamentals: range,
-      maxBranches: flags.branches ?? 1,
-      onProgress: progress.update,
-    } as SheSweepOptions;
-    let result: SheSweepResult;
-    try {
-      result = callLibrary(() => sheSweep(options), { notes });
-    } finally {
-      progress.stop();
-    }
-    writeOutput(
-      flags.json === true
-        ? toJson(result)
-        : flags.csv === true
-          ? sheSweepCsv(result)
-          : sheSweepText(result, options),
-      flags.output,
-      io,
-    );
-    if (result.solvedFraction === 0) throw new FailureError(result.message);
+    return runPatternCommand(flags, io, {
+      label: 'SHE table',
+      single: () => {
+        const options = {
+          ...base,
+          ...(flags.fundamental === undefined ? {} : { fundamental: flags.fundamental }),
+        } as SolveSheOptions;
+        const result = callLibrary(() => solveShe(options), { notes });
+        return {
+          result,
+          text: () => sheText(result, options),
+          csv: () => sheCsv(result),
+          failure: result.converged ? null : result.message,
+        };
+      },
+      table: (range, onProgress) => {
+        const options = {
+          ...base,
+          fundamentals: range,
+          maxBranches: flags.branches ?? 1,
+          onProgress,
+        } as SheSweepOptions;
+        const result = callLibrary(() => sheSweep(options), { notes });
+        return {
+          result,
+          text: () => sheSweepText(result, options),
+          csv: () => sheSweepCsv(result),
+          failure: result.solvedFraction === 0 ? result.message : null,
+        };
+      },
+    });
   });
   return command;
 }
