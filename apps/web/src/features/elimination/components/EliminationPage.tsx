@@ -1,4 +1,3 @@
-import { useQuery } from '@tanstack/react-query';
 import { useState, type FormEvent } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { LineChart, type LineSeries } from '../../../components/charts/LineChart';
@@ -8,17 +7,20 @@ import { SelectField, TextField } from '../../../components/ui/Field';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState } from '../../../components/ui/QueryState';
 import { paths } from '../../../config/paths';
-import { errorMessage, fieldErrorOf, roleAtLeast, useMe } from '../../../lib/api';
+import {
+  errorMessage,
+  fieldErrorOf,
+  roleAtLeast,
+  sheSweepResultOf,
+  useCreateSheSweep,
+  useCreateStudy,
+  useJob,
+  useMe,
+  useProjects,
+} from '../../../lib/api';
 import { formatNumber, formatPercent } from '../../../lib/format';
 import { PATTERN_KIND_OPTIONS } from '../../../lib/modulationOptions';
-import {
-  branchesOf,
-  getEliminationProjects,
-  pointSpectrum,
-  useCreateSheSweep,
-  useSaveSheStudy,
-  useSheJob,
-} from '../api/elimination';
+import { pointSpectrum } from '../model/pointSpectrum';
 
 /** The fundamental frequency a saved pattern study starts with, hertz (edited in the study). */
 const SAVED_FUNDAMENTAL_FREQUENCY = 50;
@@ -48,18 +50,14 @@ export function EliminationPage() {
   });
   const start = useCreateSheSweep();
   const [jobId, setJobId] = useState<string | null>(null);
-  const job = useSheJob(jobId);
+  const job = useJob(jobId);
   const running =
     start.isPending || job.data?.status === 'queued' || job.data?.status === 'running';
-  const outcome = job.data?.status === 'succeeded' ? branchesOf(job.data.result) : null;
-  const [picked, setPicked] = useState<{ branch: number; point: number; series: number } | null>(
-    null,
-  );
-  const save = useSaveSheStudy();
-  const projects = useQuery({
-    queryKey: ['projects', ''],
-    queryFn: () => getEliminationProjects(),
-  });
+  // The service follows one solution branch per job.
+  const outcome = sheSweepResultOf(job.data);
+  const [picked, setPicked] = useState<{ point: number; series: number } | null>(null);
+  const save = useCreateStudy();
+  const projects = useProjects();
   const navigate = useNavigate();
   const orders = form.eliminate
     .split(/[\s,]+/)
@@ -94,25 +92,18 @@ export function EliminationPage() {
     );
   };
 
-  // One series per (branch, angle); x the fundamental, y the angle in degrees.
-  const series: LineSeries[] = [];
-  const seriesIndex: { branch: number }[] = [];
-  outcome?.branches.forEach((branch, b) => {
-    const converged = branch.points.filter((p) => p.converged);
-    for (let k = 0; k < count; k++) {
-      series.push({
-        name: `branch ${b + 1}, α${k + 1}`,
-        color: COLOURS[b % COLOURS.length] ?? '#12263a',
+  // One series per angle of the followed branch, each its own colour; x the fundamental, y the
+  // angle in degrees.
+  const converged = outcome?.points.filter((p) => p.converged) ?? [];
+  const series: LineSeries[] = outcome
+    ? Array.from({ length: count }, (_, k) => ({
+        name: `α${k + 1}`,
+        color: COLOURS[k % COLOURS.length] ?? '#12263a',
         x: converged.map((p) => p.fundamental),
         y: converged.map((p) => ((p.angles[k] ?? Number.NaN) * 180) / Math.PI),
-        dashed: k % 2 === 1,
-      });
-      seriesIndex.push({ branch: b });
-    }
-  });
-  const pickedPoint = picked
-    ? outcome?.branches[picked.branch]?.points.filter((p) => p.converged)[picked.point]
-    : undefined;
+      }))
+    : [];
+  const pickedPoint = picked ? converged[picked.point] : undefined;
   // The sweep that found the point: its pattern settings, kept apart from later form edits.
   const [solvedFor, setSolvedFor] = useState<{
     kind: 'bipolar' | 'staircase';
@@ -257,8 +248,7 @@ export function EliminationPage() {
             <>
               <Panel>
                 <p className="text-sm" data-testid="she-summary">
-                  {outcome.message ??
-                    `${outcome.branches.length} branch(es) followed; solved at ${formatPercent(outcome.solvedFraction ?? 0, 0)} of the fundamentals asked.`}
+                  {`One branch followed; solved at ${formatPercent(outcome.solvedFraction, 0)} of the fundamentals asked.`}
                 </p>
               </Panel>
               <LineChart
@@ -267,10 +257,8 @@ export function EliminationPage() {
                 xLabel="fundamental (V peak)"
                 yLabel="angle (degrees)"
                 series={series}
-                onPick={(si, pi) =>
-                  setPicked({ branch: seriesIndex[si]?.branch ?? 0, point: pi, series: si })
-                }
-                picked={picked ? { series: picked.series, point: picked.point } : null}
+                onPick={(si, pi) => setPicked({ point: pi, series: si })}
+                picked={picked}
               />
             </>
           ) : null}
