@@ -6,7 +6,9 @@ import {
   timerTableToCHeader,
   timerTableToCsv,
   timerTableToJson,
+  timerTableToSpiceNetlist,
   type FirmwareEffects,
+  type SpiceNetlistOptions,
   type TimerTable,
   type TimerTableOptions,
 } from '@pulsewright/modulation';
@@ -45,6 +47,26 @@ export function timerTableExports(table: TimerTable) {
     csv: () => timerTableToCsv(table),
     cHeader: () => timerTableToCHeader(table),
   };
+}
+
+/**
+ * The table's switching pattern as a SPICE netlist (the library's `timerTableToSpiceNetlist`,
+ * the text the service's POST /api/v1/netlists and `pulsewright netlist` give), or the library's
+ * error naming the option (`riseTime`, `fallTime`, `periods`, `gateVoltage`).
+ */
+export function netlistOf(
+  table: TimerTable,
+  options: SpiceNetlistOptions,
+): { text: string; error: null } | { text: null; error: { field: string; message: string } } {
+  try {
+    return { text: timerTableToSpiceNetlist(table, options), error: null };
+  } catch (error) {
+    const field = (error as { field?: string }).field ?? 'netlist';
+    return {
+      text: null,
+      error: { field, message: error instanceof Error ? error.message : String(error) },
+    };
+  }
 }
 
 /** The labelled spectra of an effect's reference and realised waveforms, for the chart. */

@@ -7,6 +7,7 @@ import { ErrorState } from '../../../components/ui/QueryState';
 import { downloadText } from '../../../lib/download';
 import { formatNumber, formatPercent } from '../../../lib/format';
 import { buildTimerTable, effectSpectra, timerTableExports } from '../api/timerTables';
+import { NetlistPanel } from './NetlistPanel';
 
 interface FormState {
   method: 'sine-triangle' | 'three-phase';
@@ -272,6 +273,7 @@ export function FirmwarePage() {
                   </table>
                 </div>
               </Panel>
+              <NetlistPanel table={table} fileStem={stem} />
               <Panel title="Effect on the output">
                 <p className="text-sm">
                   Fundamental {formatNumber(outcome.effects.combined.referenceFundamental)} →{' '}

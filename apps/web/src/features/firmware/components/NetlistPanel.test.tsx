@@ -1,0 +1,65 @@
+import { timerTable, timerTableToSpiceNetlist } from '@pulsewright/modulation';
+import { fireEvent, render, screen } from '@testing-library/react';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { NetlistPanel } from './NetlistPanel';
+
+const table = timerTable({
+  modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.85 },
+  fundamentalFrequency: 50,
+  carrierFrequency: 10_000,
+  timerClock: 72e6,
+  deadTime: 5e-7,
+  vdc: 360,
+});
+
+afterEach(() => vi.restoreAllMocks());
+
+describe('NetlistPanel', () => {
+  it("downloads the library's netlist with the rise and fall times, periods and gate level typed", async () => {
+    let saved: Blob | undefined;
+    let file = '';
+    vi.spyOn(URL, 'createObjectURL').mockImplementation((blob) => {
+      saved = blob as Blob;
+      return 'blob:test';
+    });
+    vi.spyOn(URL, 'revokeObjectURL').mockImplementation(() => undefined);
+    vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(function (
+      this: HTMLAnchorElement,
+    ) {
+      file = this.download;
+    });
+    render(<NetlistPanel table={table} fileStem="pump" />);
+    fireEvent.change(screen.getByLabelText(/Rise time/), { target: { value: '50' } });
+    fireEvent.change(screen.getByLabelText(/Fall time/), { target: { value: '20' } });
+    fireEvent.change(screen.getByLabelText(/Fundamental periods/), { target: { value: '2' } });
+    fireEvent.click(screen.getByRole('button', { name: 'SPICE netlist' }));
+    const text = await new Promise<string>((resolve) => {
+      const reader = new FileReader();
+      reader.onload = () => resolve(String(reader.result));
+      reader.readAsText(saved as Blob);
+    });
+    expect(file).toBe('pump.cir');
+    expect(text).toBe(
+      timerTableToSpiceNetlist(table, {
+        riseTime: 50e-9,
+        fallTime: 20e-9,
+        periods: 2,
+        gateVoltage: 15,
+      }),
+    );
+  });
+
+  it('shows a rise time longer than a pulse on its field, in the library words, and saves nothing', () => {
+    const click = vi
+      .spyOn(HTMLAnchorElement.prototype, 'click')
+      .mockImplementation(() => undefined);
+    render(<NetlistPanel table={table} fileStem="pump" />);
+    // 40 µs: longer than the narrowest pulse of a 10 kHz carrier (100 µs period) near the peak.
+    fireEvent.change(screen.getByLabelText(/Rise time/), { target: { value: '40000' } });
+    fireEvent.click(screen.getByRole('button', { name: 'SPICE netlist' }));
+    expect(screen.getByRole('alert').textContent).toMatch(
+      /^(riseTime|fallTime) must be shorter than the shortest time between two edges/,
+    );
+    expect(click).not.toHaveBeenCalled();
+  });
+});

@@ -1,0 +1,98 @@
+import { useState } from 'react';
+import type { TimerTable } from '@pulsewright/modulation';
+import { Button } from '../../../components/ui/Button';
+import { TextField } from '../../../components/ui/Field';
+import { Panel } from '../../../components/ui/Panel';
+import { downloadText } from '../../../lib/download';
+import { netlistOf } from '../api/timerTables';
+
+/** The netlist's options as typed, in the units shown (nanoseconds, volts, whole periods). */
+interface NetlistForm {
+  riseTimeNs: number;
+  fallTimeNs: number;
+  periods: number;
+  gateVoltage: number;
+}
+
+/**
+ * A download of the table's switching pattern as a SPICE netlist: one piecewise-linear source per
+ * switch's gate and per leg's voltage, each edge a ramp of the chosen rise or fall time, with the
+ * table's dead time, over the chosen number of fundamental periods. The library writes it; an
+ * option it refuses is shown on its field in the library's words.
+ */
+export function NetlistPanel({ table, fileStem }: { table: TimerTable; fileStem: string }) {
+  const [form, setForm] = useState<NetlistForm>({
+    riseTimeNs: 100,
+    fallTimeNs: 100,
+    periods: 1,
+    gateVoltage: 15,
+  });
+  const [error, setError] = useState<{ field: string; message: string } | null>(null);
+  const num = (key: keyof NetlistForm) => (e: React.ChangeEvent<HTMLInputElement>) => {
+    const value = Number(e.target.value);
+    if (e.target.value !== '' && Number.isFinite(value)) setForm({ ...form, [key]: value });
+    setError(null);
+  };
+  const errorOf = (field: string) => (error?.field === field ? error.message : undefined);
+  const download = () => {
+    const outcome = netlistOf(table, {
+      // Divided rather than multiplied by 1e-9, so 50 ns is the double nearest 5e-8 s.
+      riseTime: form.riseTimeNs / 1e9,
+      fallTime: form.fallTimeNs / 1e9,
+      periods: form.periods,
+      gateVoltage: form.gateVoltage,
+    });
+    setError(outcome.error);
+    if (outcome.text !== null) downloadText(outcome.text, `${fileStem}.cir`, 'text/plain');
+  };
+  return (
+    <Panel
+      title="Circuit-simulation netlist"
+      actions={
+        <Button variant="secondary" onClick={download}>
+          SPICE netlist
+        </Button>
+      }
+    >
+      <p className="mb-2 text-sm">
+        Piecewise-linear sources for each switch's gate (0 V off) and each leg's voltage to the DC
+        midpoint, with this table's dead time. Idealised switches: check the real gate drive and
+        protection before applying the DC bus.
+      </p>
+      <form className="grid grid-cols-2 gap-3 sm:grid-cols-4" onSubmit={(e) => e.preventDefault()}>
+        <TextField
+          label="Rise time"
+          unit="ns"
+          type="number"
+          defaultValue={form.riseTimeNs}
+          onChange={num('riseTimeNs')}
+          error={errorOf('riseTime')}
+        />
+        <TextField
+          label="Fall time"
+          unit="ns"
+          type="number"
+          defaultValue={form.fallTimeNs}
+          onChange={num('fallTimeNs')}
+          error={errorOf('fallTime')}
+        />
+        <TextField
+          label="Fundamental periods"
+          type="number"
+          step={1}
+          defaultValue={form.periods}
+          onChange={num('periods')}
+          error={errorOf('periods')}
+        />
+        <TextField
+          label="Gate level"
+          unit="V"
+          type="number"
+          defaultValue={form.gateVoltage}
+          onChange={num('gateVoltage')}
+          error={errorOf('gateVoltage')}
+        />
+      </form>
+    </Panel>
+  );
+}
