@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { line, scaleLinear, scaleLog } from 'd3';
 import { lineSeriesCsv } from '../../lib/chartCsv';
 import { formatNumber } from '../../lib/format';
@@ -29,6 +30,8 @@ export interface LineChartProps {
   yScale?: 'linear' | 'log';
   /** The y range shown, [low, high] in the series' unit; the lines are clipped to it. @default the data's */
   yDomain?: readonly [number, number] | undefined;
+  /** Controls shown in the card's heading (a scale choice), screen only. */
+  controls?: ReactNode;
 }
 
 /** Several y(x) series on shared linear axes (sweeps against ma, solution branches). */
@@ -45,6 +48,7 @@ export function LineChart({
   yFormat,
   yScale = 'linear',
   yDomain,
+  controls,
 }: LineChartProps) {
   const top = 14;
   const bottom = 40;
@@ -86,6 +90,7 @@ export function LineChart({
     <ChartFrame
       title={title}
       fileName={fileName}
+      controls={controls}
       footer={<ChartLegend series={series} swatch="line" />}
       csv={() => lineSeriesCsv(series, xLabel, yLabel)}
     >

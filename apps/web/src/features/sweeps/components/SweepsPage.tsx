@@ -1,12 +1,23 @@
-import { DESIGN_BOUNDS, type BridgeScheme, type ZeroSequence } from '@pulsewright/modulation';
+import {
+  DESIGN_BOUNDS,
+  MAX_DESIGN_FREQUENCY_RATIO,
+  type BridgeScheme,
+  type ZeroSequence,
+} from '@pulsewright/modulation';
 import { useState, type FormEvent } from 'react';
-import { LineChart } from '../../../components/charts/LineChart';
 import { Button } from '../../../components/ui/Button';
-import { NumberField, SelectField } from '../../../components/ui/Field';
+import {
+  NumberField,
+  numberListText,
+  ParsedField,
+  parseNumberList,
+  SelectField,
+} from '../../../components/ui/Field';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState, QueryView } from '../../../components/ui/QueryState';
 import { rangeError, rangeText } from '../../../lib/fieldRange';
-import { formatDate, formatPercent } from '../../../lib/format';
+import { formatDate } from '../../../lib/format';
+import { SweepCharts } from './SweepCharts';
 import {
   METHOD_OPTIONS,
   SCHEME_OPTIONS,
@@ -53,7 +64,13 @@ const SWEEP_METHOD_OPTIONS = METHOD_OPTIONS.filter(
 );
 
 const MA_BOUNDS = DESIGN_BOUNDS['modulation.ma'];
-const WHOLE_NUMBER = { integer: true };
+/** The frequency ratio: a whole number up to the library's largest. */
+const RATIO_BOUNDS = { min: 1, max: MAX_DESIGN_FREQUENCY_RATIO, integer: true };
+/** Points and highest order: the API document's MaSweepRequest (Range.points, maxOrder). */
+const POINTS_BOUNDS = { min: 2, max: 400, integer: true };
+const MAX_ORDER_BOUNDS = { min: 1, max: 2000, integer: true };
+/** At most this many tracked orders (the API document's MaSweepRequest.orders). */
+const MAX_TRACKED_ORDERS = 20;
 
 /** Start a sweep of the modulation index on the service and watch it to the end. */
 export function SweepsPage() {
@@ -68,18 +85,25 @@ export function SweepsPage() {
     points: 60,
     maxOrder: 120,
   });
+  // Orders whose amplitude is recorded at every ma: the carrier group around the default mf 21.
+  const [orders, setOrders] = useState<number[]>([3, 19, 21, 23, 41, 43]);
   const [jobId, setJobId] = useState<string | null>(null);
   const start = useCreateMaSweep();
   const job = useJob(jobId);
   const jobs = useJobs();
   // The library's bounds where it owns them (ma, DC bus); the service names the others' ranges.
   const checks = {
-    mf: rangeError('Frequency ratio mf', numbers.mf, WHOLE_NUMBER),
+    mf: rangeError('Frequency ratio mf', numbers.mf, RATIO_BOUNDS),
     vdc: rangeError('DC bus', numbers.vdc, DESIGN_BOUNDS.vdc, { unit: 'V' }),
     from: rangeError('ma from', numbers.from, MA_BOUNDS),
-    to: rangeError('ma to', numbers.to, MA_BOUNDS),
-    points: rangeError('Points', numbers.points, WHOLE_NUMBER),
-    maxOrder: rangeError('Highest order', numbers.maxOrder, WHOLE_NUMBER),
+    to:
+      rangeError('ma to', numbers.to, MA_BOUNDS) ??
+      (numbers.to < numbers.from
+        ? `ma to must be at least ma from, ${numbers.from} (entered ${numbers.to})`
+        : undefined),
+    points: rangeError('Points', numbers.points, POINTS_BOUNDS),
+    maxOrder: rangeError('Highest order', numbers.maxOrder, MAX_ORDER_BOUNDS),
+    orders: ordersError(orders, numbers.maxOrder),
   };
   const valid = Object.values(checks).every((message) => message === undefined);
   const submit = (event: FormEvent) => {
@@ -94,6 +118,7 @@ export function SweepsPage() {
             : { method, scheme, ma: from, mf, vdc },
         ma: { from, to, points },
         maxOrder,
+        orders,
       },
       { onSuccess: (created) => setJobId(created.id) },
     );
@@ -136,7 +161,7 @@ export function SweepsPage() {
               label="Frequency ratio mf"
               value={numbers.mf}
               onChange={set('mf')}
-              hint="whole number, 1 to 1000"
+              hint={rangeText(RATIO_BOUNDS)}
               validate={() => checks.mf}
               error={err('mf')}
             />
@@ -171,7 +196,7 @@ export function SweepsPage() {
               label="Points"
               value={numbers.points}
               onChange={set('points')}
-              hint="2 to 400"
+              hint={rangeText(POINTS_BOUNDS)}
               validate={() => checks.points}
               error={err('points')}
             />
@@ -179,12 +204,22 @@ export function SweepsPage() {
               label="Highest order"
               value={numbers.maxOrder}
               onChange={set('maxOrder')}
-              hint="1 to 2000"
+              hint={rangeText(MAX_ORDER_BOUNDS)}
               validate={() => checks.maxOrder}
               error={err('maxOrder')}
             />
+            <ParsedField<number[]>
+              label="Harmonic orders to track"
+              value={orders}
+              format={numberListText}
+              parse={parseNumberList}
+              onChange={setOrders}
+              hint={`their amplitude against ma; whole numbers up to the highest order, at most ${MAX_TRACKED_ORDERS}`}
+              validate={() => checks.orders}
+              error={err('orders')}
+            />
             {start.isError &&
-            !['mf', 'vdc', 'from', 'to', 'points', 'maxOrder'].some((f) => err(f)) ? (
+            !['mf', 'vdc', 'from', 'to', 'points', 'maxOrder', 'orders'].some((f) => err(f)) ? (
               <p role="alert" className="text-sm text-bad">
                 {errorMessage(start.error)}
               </p>
@@ -258,58 +293,23 @@ function SweepJob({ job, error }: { job: Job | undefined; error: unknown }) {
           </p>
         ) : null}
       </Panel>
-      {result ? (
-        <>
-          <LineChart
-            title="THD and WTHD against ma"
-            fileName="ma-sweep-distortion"
-            xLabel="modulation index ma"
-            yLabel="ratio"
-            yFormat={(v) => formatPercent(v, 0)}
-            series={[
-              {
-                name: 'THD, exact over the whole waveform',
-                color: 'var(--color-ink)',
-                x: result.ma,
-                y: result.thd,
-              },
-              {
-                name: 'WTHD, exact over the whole waveform',
-                color: 'var(--color-signal)',
-                x: result.ma,
-                y: result.wthd,
-              },
-            ]}
-          />
-          {result.harmonics?.length || result.fundamental ? (
-            <LineChart
-              title="Amplitudes against ma"
-              fileName="ma-sweep-harmonics"
-              xLabel="modulation index ma"
-              yLabel="volts peak"
-              series={[
-                ...(result.fundamental
-                  ? [
-                      {
-                        name: 'fundamental',
-                        color: 'var(--color-trace-ref)',
-                        x: result.ma,
-                        y: result.fundamental,
-                      },
-                    ]
-                  : []),
-                ...(result.harmonics ?? []).slice(0, 5).map((h, i) => ({
-                  name: `order ${h.order}`,
-                  color: ['#2a8c82', '#c2462e', '#5b6fa8', '#d9822b', '#12263a'][i] ?? '#12263a',
-                  x: result.ma,
-                  y: h.amplitude,
-                  dashed: true,
-                })),
-              ]}
-            />
-          ) : null}
-        </>
-      ) : null}
+      {result ? <SweepCharts result={result} /> : null}
     </div>
   );
+}
+
+/** The message for the tracked orders, or undefined: whole numbers 0 to the highest order, at most 20. */
+function ordersError(orders: readonly number[], maxOrder: number): string | undefined {
+  if (orders.length > MAX_TRACKED_ORDERS)
+    return `Harmonic orders to track: at most ${MAX_TRACKED_ORDERS} (entered ${orders.length})`;
+  const highest = Number.isInteger(maxOrder) ? maxOrder : MAX_ORDER_BOUNDS.max;
+  for (const order of orders) {
+    const message = rangeError('Each tracked order', order, {
+      min: 0,
+      max: highest,
+      integer: true,
+    });
+    if (message) return message;
+  }
+  return undefined;
 }
