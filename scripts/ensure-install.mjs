@@ -11,9 +11,17 @@ if (stale) {
   const command = existsSync(lock)
     ? 'npm ci --no-audit --no-fund'
     : 'npm install --no-audit --no-fund';
-  console.log(`pulsewright: installing dependencies (${command}) ...`);
+  // npm 11 warns of every package whose install scripts the project has not reviewed; the root
+  // package.json's allowScripts reviews them (esbuild checks its binary, sqlite3 compiles its
+  // native module, @scarf/scarf's analytics are refused), so a clean install prints none.
+  console.log(
+    `pulsewright: installing dependencies (${command}); sqlite3 compiles from source, about 1.5 minutes ...`,
+  );
   execSync(command, {
     stdio: 'inherit',
     env: { ...process.env, SCARF_ANALYTICS: 'false', TURBO_TELEMETRY_DISABLED: '1' },
   });
+  console.log(
+    "pulsewright: dependencies installed (any 'npm warn' lines above are notices: the install succeeded).",
+  );
 }
