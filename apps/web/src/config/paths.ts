@@ -8,7 +8,6 @@ export const paths = {
   // The service e-mails links to these two paths (apps/api/src/services/team.ts).
   acceptInvitation: { path: '/accept-invitation', getHref: () => '/accept-invitation' },
   resetPassword: { path: '/reset-password', getHref: () => '/reset-password' },
-  home: { path: '/', getHref: () => '/' },
   studies: { path: '/studies', getHref: () => '/studies' },
   newStudy: {
     path: '/studies/new',

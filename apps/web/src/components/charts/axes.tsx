@@ -1,14 +1,5 @@
 import { scaleLinear, type ScaleBand, type ScaleLinear, type ScaleLogarithmic } from 'd3';
 
-export interface Margin {
-  top: number;
-  right: number;
-  bottom: number;
-  left: number;
-}
-
-export const DEFAULT_MARGIN: Margin = { top: 12, right: 16, bottom: 36, left: 56 };
-
 type Continuous = ScaleLinear<number, number> | ScaleLogarithmic<number, number>;
 
 /** Bottom axis drawn from a d3 scale's ticks. */

@@ -4,7 +4,7 @@ import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState } from '../../../components/ui/QueryState';
 import { formatNumber } from '../../../lib/format';
 import { CLAMPING_OPTIONS, SEQUENCE_OPTIONS } from '../../../lib/modulationOptions';
-import { MAX_M, sequenceFor, type SpaceVectorInput } from '../api/spaceVectorModel';
+import { MAX_M, sequenceFor, type SpaceVectorInput } from '../model/spaceVectorModel';
 import { HexagonChart } from './HexagonChart';
 import { SequenceChart } from './SequenceChart';
 

@@ -6,7 +6,8 @@ import {
   type ZeroVectorClamping,
 } from '@pulsewright/modulation';
 
-// The service has no space-vector endpoint for a single reference; the library answers here.
+// The page runs the library in the browser so the hexagon follows the slider without a round
+// trip; the service's POST /api/v1/space-vector gives scripts the same sequence.
 
 export interface SpaceVectorInput {
   m: number;
