@@ -23,10 +23,14 @@ describe('WaveformChart', () => {
     // Bipolar at odd mf switches twice per carrier cycle: 2·mf edges per period (a fact of the trade).
     expect(svg?.getAttribute('aria-label')).toContain(`${2 * mf} switching edges`);
     expect(output.edges).toHaveLength(2 * mf);
-    const paths = Array.from(container.querySelectorAll('svg[data-chart="waveform"] path')).filter(
-      (p) => (p.getAttribute('d') ?? '').length > 20,
-    );
-    expect(paths.length).toBeGreaterThanOrEqual(3);
+    // Each of the three traces is drawn once, as a line through its points.
+    for (const trace of ['ref', 'carrier', 'out']) {
+      const drawn = container.querySelectorAll(
+        `svg[data-chart="waveform"] path[stroke="var(--color-trace-${trace})"]`,
+      );
+      expect(drawn).toHaveLength(1);
+      expect(drawn[0]?.getAttribute('d')).toMatch(/^M[^L]+L/);
+    }
   });
 
   it('zooms in and out with its buttons (keyboard-reachable), narrowing the angle window', () => {

@@ -35,8 +35,10 @@ describe('previewDesign', () => {
   });
 
   it('keeps the report when only the bus voltage of the limit check is refused', () => {
-    const { report, errors } = previewDesign(designOf(defaultDraft()), { busVoltage: -5 });
+    const design = designOf(defaultDraft());
+    const { report, errors } = previewDesign(design, { busVoltage: -5 });
     expect(errors.map((e) => e.field)).toEqual(['busVoltage']);
-    expect(report?.limitCheck.busVoltage).toBeGreaterThan(0);
+    // The report is the library's with the refused option left out, figure for figure.
+    expect(report).toEqual(analyseDesign(design));
   });
 });
