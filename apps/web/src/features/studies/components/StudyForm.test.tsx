@@ -158,6 +158,13 @@ describe('StudyForm', () => {
     ).toHaveValue('');
   });
 
+  it('leaves the carrier alone while the fundamental is refused (0 would take it to 0 Hz and lose mf)', () => {
+    const onChange = vi.fn();
+    renderForm(defaultDraft(), { onChange });
+    fireEvent.change(screen.getByLabelText(/Fundamental frequency/), { target: { value: '0' } });
+    expect(onChange).toHaveBeenLastCalledWith({ fundamentalFrequency: 0 });
+  });
+
   it('keeps mf when the fundamental changes (the carrier follows)', () => {
     const onChange = vi.fn();
     renderForm(defaultDraft(), { onChange });

@@ -130,6 +130,10 @@ export function StudyForm({
   } catch {
     // The library's message goes on the carrier field through the preview's errors.
   }
+  // Only an allowed fundamental moves the carrier: a 0 or an emptied box would otherwise take the
+  // carrier to 0 Hz and lose mf when the fundamental is typed again.
+  const fundamentalAllowed = (f: number) =>
+    rangeError('', f, DESIGN_BOUNDS.fundamentalFrequency) === undefined;
   // The frequency ratio as typed (null once the carrier frequency is typed instead): a fraction is
   // kept and refused on this field, never rounded into another carrier (issue 10: 0.5 saved as 1).
   const [typedRatio, setTypedRatio] = useState<number | null>(null);
@@ -152,13 +156,13 @@ export function StudyForm({
       : (rangeError('Carrier frequency', draft.carrierFrequency, DESIGN_BOUNDS.carrierFrequency, {
           unit: 'Hz',
         }) ??
-        (Number.isNaN(ratio) && Number.isFinite(draft.fundamentalFrequency)
+        (Number.isNaN(ratio) && fundamentalAllowed(draft.fundamentalFrequency)
           ? `Carrier frequency must be a whole multiple (1 to ${MAX_DESIGN_FREQUENCY_RATIO} times) of the fundamental, ${formatNumber(draft.fundamentalFrequency, 6)} Hz, so mf is a whole number (entered ${formatNumber(draft.carrierFrequency, 9)} Hz)`
           : carrierError));
   // Synchronous carrier PWM: a new fundamental keeps the frequency ratio, so the carrier follows.
   const setFundamental = (f: number) =>
     onChange(
-      isCarrierMethod(method) && Number.isFinite(ratio) && Number.isFinite(f)
+      isCarrierMethod(method) && Number.isFinite(ratio) && fundamentalAllowed(f)
         ? { fundamentalFrequency: f, carrierFrequency: ratio * f }
         : { fundamentalFrequency: f },
     );
