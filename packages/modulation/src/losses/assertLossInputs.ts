@@ -1,6 +1,10 @@
 import { ParameterTypeError } from '../validation/errors.js';
 import { assertNumberInRange, assertOneOf } from '../validation/assertions.js';
-import type { LossOperatingPoint, SemiconductorDevice } from './lossTypes.js';
+import {
+  LOSS_ZERO_SEQUENCES,
+  type LossOperatingPoint,
+  type SemiconductorDevice,
+} from './lossTypes.js';
 
 /** Internal: validates a device and an operating point; returns the options with defaults. */
 export function assertLossInputs(
@@ -44,7 +48,7 @@ export function assertLossInputs(
     max: 1e8,
   });
   assertOneOf('topology', topology, ['h-bridge', 'three-phase'] as const);
-  assertOneOf('zeroSequence', zeroSequence, ['none', 'third-harmonic', 'min-max'] as const);
+  assertOneOf('zeroSequence', zeroSequence, LOSS_ZERO_SEQUENCES);
   return {
     vdc,
     ma,

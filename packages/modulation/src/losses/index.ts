@@ -4,3 +4,4 @@ export * from './legLossesFromSamples.js';
 export * from './semiconductorLossesByIntegration.js';
 export * from './rippleInductance.js';
 export * from './switchingFrequencyTradeoff.js';
+export * from './lossesByPowerFactor.js';

@@ -1,3 +1,5 @@
+import { ZERO_SEQUENCES, type ZeroSequence } from '../three-phase/ZeroSequence.js';
+
 /**
  * Types of the semiconductor loss model. Units: volts, ohms, joules, amperes, hertz, watts,
  * radians.
@@ -49,6 +51,18 @@ export interface MosfetDevice {
 /** A switch position: a transistor with its anti-parallel diode. */
 export type SemiconductorDevice = IgbtDevice | MosfetDevice;
 
+/**
+ * The zero sequences the loss functions take: every {@link ZeroSequence} of the carrier
+ * modulator, and `'gdpwm'`, the generalised discontinuous method whose 60° clamp follows the
+ * load: centred on the current's peak, its shift ψ = φ limited to ±30° (ψ = −30° is DPWM0, 0 is
+ * DPWM1, +30° is DPWM2; A. M. Hava, R. J. Kerkman, T. A. Lipo, IEEE Trans. Power Electronics,
+ * 1998, from memory).
+ */
+export type LossZeroSequence = ZeroSequence | 'gdpwm';
+
+/** Every zero sequence the loss functions take, in the order the sweeps list them. */
+export const LOSS_ZERO_SEQUENCES: readonly LossZeroSequence[] = [...ZERO_SEQUENCES, 'gdpwm'];
+
 /** The operating point shared by the loss functions. */
 export interface LossOperatingPoint {
   /** DC bus voltage, V. */
@@ -67,7 +81,7 @@ export interface LossOperatingPoint {
   /** `'h-bridge'`: 2 legs; `'three-phase'`: 3 legs. @default 'three-phase' */
   topology?: 'h-bridge' | 'three-phase';
   /** Zero sequence added to each leg's reference (three-phase). @default 'none' */
-  zeroSequence?: 'none' | 'third-harmonic' | 'min-max';
+  zeroSequence?: LossZeroSequence;
 }
 
 /** Conduction and switching loss of one device, W. */

@@ -23,11 +23,12 @@ import { summariseLosses } from './summariseLosses.js';
  *   rdsOn·Î²/2 = rdsOn·I_rms²); the body diode only recovers (err) at switching.
  *
  * Valid in the linear range (every carrier period switches, no clamping): ma ≤ 1 ('none') or
- * ≤ 2/√3 ('third-harmonic'); 'min-max' and overmodulation: use
- * {@link semiconductorLossesByIntegration}.
+ * ≤ 2/√3 ('third-harmonic'); 'min-max', the discontinuous clamps, the reduced common-mode
+ * methods and overmodulation: use {@link semiconductorLossesByIntegration}.
  *
  * @param device - datasheet values of one switch position
- * @throws ParameterRangeError for zeroSequence 'min-max' or ma outside the linear range
+ * @throws ParameterRangeError for a zeroSequence other than 'none' or 'third-harmonic', or ma
+ *   outside the linear range
  */
 export function semiconductorLosses(
   device: SemiconductorDevice,
@@ -42,10 +43,10 @@ export function semiconductorLosses(
     switchingFrequency: fsw,
     zeroSequence,
   } = point;
-  if (zeroSequence === 'min-max') {
+  if (zeroSequence !== 'none' && zeroSequence !== 'third-harmonic') {
     throw new ParameterRangeError(
       'zeroSequence',
-      "'none' or 'third-harmonic' for the closed form (use semiconductorLossesByIntegration for 'min-max')",
+      "'none' or 'third-harmonic' for the closed form (use semiconductorLossesByIntegration for min-max, the discontinuous clamps and the reduced common-mode methods)",
       zeroSequence,
     );
   }

@@ -1,11 +1,10 @@
 import { TAU } from '../math.js';
 import { dutyFromReference } from '../firmware/dutyFromReference.js';
-import { legReferences } from '../firmware/legReferences.js';
 import { assertNumberInRange } from '../validation/assertions.js';
 import { assertLossInputs } from './assertLossInputs.js';
-import { legLossesFromSamples } from './legLossesFromSamples.js';
+import { legDutySamples } from './legDutySamples.js';
+import { lossesFromDuties } from './lossesFromDuties.js';
 import type { LossOperatingPoint, SemiconductorDevice, SemiconductorLosses } from './lossTypes.js';
-import { summariseLosses } from './summariseLosses.js';
 
 /** Options of {@link semiconductorLossesByIntegration}. */
 export interface LossIntegrationOptions extends LossOperatingPoint {
@@ -16,12 +15,14 @@ export interface LossIntegrationOptions extends LossOperatingPoint {
 /**
  * Semiconductor losses found by summing the losses of every carrier period over one
  * fundamental period ({@link legLossesFromSamples}), with the duty cycles of the actual
- * modulation ({@link legReferences}, clamped in overmodulation) and the current
+ * modulation (regular samples of the reference at each carrier period's centre, clamped in
+ * overmodulation; every zero sequence, the discontinuous clamps and `'gdpwm'` included) and the current
  * Î·sin(θ − φ) at the centre of each carrier period; N = round(fsw/f1) periods.
  *
  * An independent method for the closed form of {@link semiconductorLosses}: the two agree to
- * O(1/N²) in the linear range; this one also covers 'min-max' and overmodulation (clamped
- * periods do not switch). Leg a is evaluated; every leg has the same average by symmetry.
+ * O(1/N²) in the linear range; this one also covers 'min-max', the discontinuous clamps, the
+ * reduced common-mode methods (their duties; the carrier swaps add 4 switchings a period, not
+ * counted) and overmodulation: clamped periods (duty 0 or 1) do not switch. Leg a is evaluated; every leg has the same average by symmetry.
  */
 export function semiconductorLossesByIntegration(
   device: SemiconductorDevice,
@@ -35,33 +36,11 @@ export function semiconductorLossesByIntegration(
     max: point.switchingFrequency / 3,
   });
   const n = Math.round(point.switchingFrequency / fundamentalFrequency);
-  const modulation =
+  const duties =
     point.topology === 'h-bridge'
-      ? ({ method: 'sine-triangle', scheme: 'unipolar', ma: point.ma } as const)
-      : ({ method: 'three-phase', zeroSequence: point.zeroSequence, ma: point.ma } as const);
-  const duties: number[] = [];
-  const currents: number[] = [];
-  for (let j = 0; j < n; j++) {
-    const theta = ((j + 0.5) * TAU) / n;
-    duties.push(dutyFromReference(legReferences(theta, modulation)[0] as number));
-    currents.push(point.peakCurrent * Math.sin(theta - point.currentAngle));
-  }
-  const leg = legLossesFromSamples(duties, currents, {
-    device,
-    vdc: point.vdc,
-    switchingFrequency: point.switchingFrequency,
-  });
-  // One transistor / one diode: the mean of the upper and lower positions.
-  const mean = (
-    a: { conduction: number; switching: number },
-    b: { conduction: number; switching: number },
-  ) => ({
-    conduction: (a.conduction + b.conduction) / 2,
-    switching: (a.switching + b.switching) / 2,
-  });
-  return summariseLosses(
-    mean(leg.upperTransistor, leg.lowerTransistor),
-    mean(leg.upperDiode, leg.lowerDiode),
-    point,
-  );
+      ? Array.from({ length: n }, (_, j) =>
+          dutyFromReference(point.ma * Math.sin(((j + 0.5) * TAU) / n)),
+        )
+      : Array.from(legDutySamples(point.zeroSequence, point.ma, n, point.currentAngle));
+  return lossesFromDuties(device, point, duties);
 }

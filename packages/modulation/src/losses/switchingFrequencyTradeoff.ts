@@ -64,8 +64,8 @@ export interface SwitchingFrequencyTradeoff {
 
 /**
  * The switching-frequency trade-off: semiconductor losses rising with the carrier frequency
- * ({@link semiconductorLosses}, closed form; by integration for 'min-max' or beyond the
- * linear range) against the output-filter inductance the target needs, which falls with it.
+ * ({@link semiconductorLosses}, closed form; by integration for 'min-max', the clamps or
+ * beyond the linear range) against the output-filter inductance the target needs, which falls with it.
  *
  * @param frequencies - carrier frequencies, Hz, 1 to 1000 values
  */
@@ -93,7 +93,7 @@ export function switchingFrequencyTradeoff(
   }
   const zeroSequence = point.zeroSequence ?? 'none';
   const linear =
-    zeroSequence !== 'min-max' &&
+    (zeroSequence === 'none' || zeroSequence === 'third-harmonic' || topology === 'h-bridge') &&
     point.ma <= (zeroSequence === 'none' || topology === 'h-bridge' ? 1 : 2 / Math.sqrt(3));
   const series: SwitchingFrequencyTradeoff = {
     frequencies: [...frequencies],
