@@ -37,11 +37,19 @@ export function rateLimitStores(databaseUrl: string, sequelize: Sequelize): Rate
     },
     async ready() {
       for (let attempt = 0; attempt < 100; attempt++) {
-        const [row] = (await sequelize.query(
-          "SELECT CASE WHEN to_regclass('public.migrations') IS NULL THEN 0 ELSE (SELECT count(*) FROM public.migrations) END AS applied",
+        const [table] = (await sequelize.query(
+          "SELECT to_regclass('public.migrations') IS NOT NULL AS present",
           { type: 'SELECT' },
-        )) as Array<{ applied: string | number }>;
-        if (Number(row?.applied) >= STORE_MIGRATIONS) return;
+        )) as Array<{ present: boolean }>;
+        if (table?.present) {
+          const [row] = (await sequelize.query(
+            'SELECT count(*) AS applied FROM public.migrations',
+            {
+              type: 'SELECT',
+            },
+          )) as Array<{ applied: string | number }>;
+          if (Number(row?.applied) >= STORE_MIGRATIONS) return;
+        }
         await sleep(100);
       }
       throw new Error('The rate-limit tables on PostgreSQL were not set up within 10 s.');
