@@ -9,4 +9,5 @@ export * from './me';
 export * from './projects';
 export * from './queryKeys';
 export * from './studies';
+export * from './studyRecords';
 export * from './team';

@@ -18,6 +18,7 @@ import { TextField } from '../../../components/ui/Field';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { QueryView } from '../../../components/ui/QueryState';
 import { describeDesign } from '../model/describeDesign';
+import { ImportRecordButton } from './ImportRecordButton';
 
 /** Projects and their studies: search, create, duplicate, pick several to compare. */
 export function StudiesPage() {
@@ -46,6 +47,7 @@ export function StudiesPage() {
             >
               Compare selected ({selected.length})
             </Button>
+            {canEdit ? <ImportRecordButton projectId={projectId} /> : null}
             {canEdit ? (
               <Link
                 to={paths.newStudy.getHref(projectId || undefined)}

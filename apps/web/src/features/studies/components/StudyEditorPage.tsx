@@ -32,6 +32,7 @@ import { RevisionHistory } from './RevisionHistory';
 import { StudyCharts } from './StudyCharts';
 import { StudyForm } from './StudyForm';
 import { usePreview } from './usePreview';
+import { ExportRecordButton } from './ExportRecordButton';
 
 /** The study editor: the design on the left, the library's live report on the right. */
 export function StudyEditorPage() {
@@ -154,6 +155,7 @@ function StudyEditor({ study }: { study: Study | undefined }) {
                 >
                   Compare
                 </Link>
+                <ExportRecordButton studyId={study.id} fileStem={fileStem} />
                 {canEdit ? (
                   <Button
                     variant="secondary"
