@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { angleAxis, formatRadians, leftAxisLabelOffset } from './axes';
+import { angleAxis, formatRadians, leftAxisLabelOffset, logLabelled } from './axes';
 
 // Issue 10: angle axes read in clean fractions of π (0, π/2, π…) or in degrees, never 0.33π.
 describe('angle axis', () => {
@@ -37,5 +37,15 @@ describe('left axis label', () => {
     // 8 px tick, ~6.2 px a character at font size 10, a gap: the label moves out with the text.
     expect(leftAxisLabelOffset(['0 %', '3000 %'])).toBeGreaterThan(8 + 6 * 6 + 6);
     expect(leftAxisLabelOffset(['0', '1'])).toBe(44);
+  });
+});
+
+describe('log axis labels', () => {
+  it('labels only the decades over a long span, and 1, 2, 5 over a short one', () => {
+    // d3's log ticks: 1..9 of each decade. 0.01 to 100 (1 % to 10,000 %): four decades.
+    const long = [0.01, 0.02, 0.05, 0.1, 0.3, 1, 2, 10, 20, 50, 100];
+    expect(long.filter(logLabelled(long))).toEqual([0.01, 0.1, 1, 10, 100]);
+    const short = [1, 2, 3, 4, 5, 10, 20, 30];
+    expect(short.filter(logLabelled(short))).toEqual([1, 2, 5, 10, 20]);
   });
 });

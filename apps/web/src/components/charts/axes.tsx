@@ -60,8 +60,11 @@ export function AxisLeft({
   const [y0, y1] = scale.range() as [number, number];
   const tickFormat = format ?? scale.tickFormat(ticks);
   const values = scale.ticks(ticks);
+  // A log axis ticks every 1–9 of each decade; only the decades (and 2 and 5 over a short span)
+  // get a label, or the texts pile on top of each other.
+  const labelled = isLogScale(scale) ? logLabelled(values) : () => true;
   // The label sits clear of the widest tick text (issue 10: "3000 %" ran into the label).
-  const labelX = -leftAxisLabelOffset(values.map((t) => tickFormat(t)));
+  const labelX = -leftAxisLabelOffset(values.filter(labelled).map((t) => tickFormat(t)));
   return (
     <g transform={`translate(${x},0)`} aria-hidden>
       <line y1={y0} y2={y1} stroke="currentColor" opacity={0.4} />
@@ -69,9 +72,11 @@ export function AxisLeft({
         <g key={`${t}-${i}`} transform={`translate(0,${scale(t)})`}>
           <line x2={width} stroke="currentColor" opacity={0.08} />
           <line x2={-5} stroke="currentColor" opacity={0.5} />
-          <text x={-8} dy="0.32em" textAnchor="end" fontSize={10} fill="currentColor">
-            {tickFormat(t)}
-          </text>
+          {labelled(t) ? (
+            <text x={-8} dy="0.32em" textAnchor="end" fontSize={10} fill="currentColor">
+              {tickFormat(t)}
+            </text>
+          ) : null}
         </g>
       ))}
       {label ? (
@@ -89,6 +94,24 @@ export function AxisLeft({
 }
 
 export type { ScaleBand };
+
+function isLogScale(scale: Continuous): scale is ScaleLogarithmic<number, number> {
+  return typeof (scale as Partial<ScaleLogarithmic<number, number>>).base === 'function';
+}
+
+/**
+ * Which ticks of a log axis carry a label: the powers of ten, and 2 and 5 of each decade when the
+ * axis spans two decades or less (so a short axis still has three or more labels).
+ */
+export function logLabelled(ticks: readonly number[]): (tick: number) => boolean {
+  const decades = new Set(ticks.filter((t) => t > 0).map((t) => Math.floor(Math.log10(t) + 1e-9)));
+  const mantissas = decades.size <= 3 ? [1, 2, 5] : [1];
+  return (tick) => {
+    if (!(tick > 0)) return false;
+    const mantissa = tick / 10 ** Math.floor(Math.log10(tick) + 1e-9);
+    return mantissas.some((m) => Math.abs(mantissa - m) < 1e-6);
+  };
+}
 
 /** Width of one character of tick text at font size 10, px (a generous mean for digits and signs). */
 const TICK_CHARACTER_WIDTH = 6.2;
