@@ -1,4 +1,10 @@
-import type { InverterDesign, TimerModulation, TimerTableOptions } from '@pulsewright/modulation';
+import {
+  TIMER_ZERO_SEQUENCES,
+  type InverterDesign,
+  type TimerModulation,
+  type TimerTableOptions,
+  type TimerZeroSequence,
+} from '@pulsewright/modulation';
 import { InputError } from '../errors.js';
 
 /** The timer-table fields a design supplies (the rest are the timer's: clock, counting mode, dead time, …). */
@@ -39,15 +45,10 @@ export function timerOptionsFromDesign(design: InverterDesign): {
     timerModulation = { method: 'sine-triangle', scheme: modulation.scheme, ma: modulation.ma };
   } else {
     const zeroSequence = modulation.zeroSequence;
-    if (
-      zeroSequence !== undefined &&
-      zeroSequence !== 'none' &&
-      zeroSequence !== 'third-harmonic' &&
-      zeroSequence !== 'min-max'
-    ) {
+    if (zeroSequence !== undefined && !isTimerZeroSequence(zeroSequence)) {
       throw new InputError(
         'design.modulation.zeroSequence',
-        `design.modulation.zeroSequence must be one of 'none', 'third-harmonic', 'min-max' for a timer table; got ${JSON.stringify(zeroSequence)}`,
+        `design.modulation.zeroSequence must be one of ${TIMER_ZERO_SEQUENCES.map((z) => `'${z}'`).join(', ')} for a timer table; got ${JSON.stringify(zeroSequence)}`,
       );
     }
     timerModulation = {
@@ -73,4 +74,8 @@ export function timerOptionsFromDesign(design: InverterDesign): {
     },
     notes,
   };
+}
+
+function isTimerZeroSequence(zeroSequence: string): zeroSequence is TimerZeroSequence {
+  return (TIMER_ZERO_SEQUENCES as readonly string[]).includes(zeroSequence);
 }

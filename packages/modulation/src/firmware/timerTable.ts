@@ -3,18 +3,22 @@ import { ParameterRangeError, ParameterTypeError } from '../validation/errors.js
 import { assertNumberInRange, assertOneOf } from '../validation/assertions.js';
 import { dutyFromReference } from './dutyFromReference.js';
 import { legReferences } from './legReferences.js';
-import type {
-  CountingMode,
-  DeadTimeMethod,
-  TimerChannel,
-  TimerModulation,
-  TimerTable,
-  TimerTableOptions,
-  TimerWarning,
+import {
+  TIMER_ZERO_SEQUENCES,
+  type CountingMode,
+  type DeadTimeMethod,
+  type TimerChannel,
+  type TimerModulation,
+  type TimerTable,
+  type TimerTableOptions,
+  type TimerWarning,
 } from './timerTableTypes.js';
 
 /** Relative tolerance for "is an integer" tests on frequency ratios (floating-point input). */
 const RATIO_TOLERANCE = 1e-9;
+
+/** How far past ±1 a reference may round and still be a clamp at the rail, not overmodulation. */
+const RAIL_TOLERANCE = 1e-12;
 
 /** Fewest timer counts a carrier period may hold (below this the duty has no resolution). */
 const MIN_PERIOD_COUNTS = 2;
@@ -171,7 +175,8 @@ export function timerTable(options: TimerTableOptions): TimerTable {
   for (let k = 0; k < channelCount; k++) {
     const duty = references.map((r) => {
       const value = r[k] as number;
-      if (value > 1 || value < -1) overmodulated++;
+      // A clamped reference is s + (1 − s), an ulp either side of the rail: not overmodulation.
+      if (value > 1 + RAIL_TOLERANCE || value < -1 - RAIL_TOLERANCE) overmodulated++;
       return dutyFromReference(value);
     });
     const compare = duty.map((d) => Math.round(d * full));
@@ -311,11 +316,7 @@ function checkModulation(modulation: unknown): TimerModulation {
     return { method: 'sine-triangle', scheme: m.scheme, ma: m.ma };
   }
   const zeroSequence = m.zeroSequence ?? 'none';
-  assertOneOf('modulation.zeroSequence', zeroSequence, [
-    'none',
-    'third-harmonic',
-    'min-max',
-  ] as const);
+  assertOneOf('modulation.zeroSequence', zeroSequence, TIMER_ZERO_SEQUENCES);
   return { method: 'three-phase', zeroSequence, ma: m.ma };
 }
 

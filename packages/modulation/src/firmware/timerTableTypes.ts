@@ -1,9 +1,24 @@
+import { ZERO_SEQUENCES, type ZeroSequence } from '../three-phase/ZeroSequence.js';
+
 /**
  * Types of a timer compare table ({@link timerTable}). Plain, serialisable data.
  *
  * Units: frequencies in hertz, times in seconds, voltages in volts, angles in radians of the
  * fundamental, compare and period values in timer counts (ticks of the timer clock).
  */
+
+/**
+ * The zero sequences a timer table takes: every carrier zero sequence whose legs share one
+ * carrier, the discontinuous clamps included (each equals five-segment space vector with the same
+ * clamping, regular sampled: Holmes and Lipo, 2003, ch. 7). Not the reduced common-mode methods,
+ * whose middle leg needs the inverted carrier (a second compare sense per entry).
+ */
+export type TimerZeroSequence = Exclude<ZeroSequence, 'azspwm1' | 'nspwm'>;
+
+/** The zero sequences a timer table takes, in the order of {@link ZERO_SEQUENCES}. */
+export const TIMER_ZERO_SEQUENCES: readonly TimerZeroSequence[] = ZERO_SEQUENCES.filter(
+  (z): z is TimerZeroSequence => z !== 'azspwm1' && z !== 'nspwm',
+);
 
 /** The modulation a table is built from (regular-sampled sine reference, peak `ma`). */
 export type TimerModulation =
@@ -22,7 +37,7 @@ export type TimerModulation =
       /** Three-phase two-level inverter, legs a, b, c at 0, −2π/3, −4π/3. */
       method: 'three-phase';
       /** @default 'none' */
-      zeroSequence?: 'none' | 'third-harmonic' | 'min-max';
+      zeroSequence?: TimerZeroSequence;
       ma: number;
     };
 
@@ -102,7 +117,7 @@ export interface TimerTable {
     modulation: {
       method: 'sine-triangle' | 'three-phase';
       scheme?: 'bipolar' | 'unipolar';
-      zeroSequence?: 'none' | 'third-harmonic' | 'min-max';
+      zeroSequence?: TimerZeroSequence;
       ma: number;
     };
     fundamentalFrequency: number;
