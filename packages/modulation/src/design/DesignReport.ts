@@ -1,5 +1,6 @@
 import type { LcFilterCharacteristics } from '../filter/lcFilter.js';
 import type { HarmonicLimitCheck } from '../limits/checkVoltageHarmonicLimits.js';
+import type { MotorFigures } from '../load/MotorFigures.js';
 import type { LabelledHarmonic } from '../spectrum/labelHarmonics.js';
 import type { ReducedCommonModeRange } from '../three-phase/reducedCommonModeRange.js';
 import type { Waveform } from '../waveform/Waveform.js';
@@ -51,8 +52,14 @@ export interface CurrentFigures {
   peak: number;
   /** Fundamental amplitude, peak amperes. */
   fundamental: number;
+  /** Its phase, radians, of i₁ = fundamental·sin(θ + fundamentalPhase). */
+  fundamentalPhase: number;
   /** RMS of what remains after the fundamental, i − i₁, amperes. */
   rippleRms: number;
+  /** rippleRms over the fundamental's RMS, a ratio; null without a fundamental (load/currentDistortion). */
+  thd: number | null;
+  /** The fundamental's RMS over the RMS, a ratio in [0, 1]. */
+  distortionFactor: number;
   /** Peak-to-peak of i − i₁ over the period, amperes. */
   ripplePeakToPeak: number;
   /** The current over one period, for charts. */
@@ -166,6 +173,8 @@ export interface DesignReport {
   switching: SwitchingFigures | null;
   /** Mean power into the load resistance, all phases together, watts; null without a load. */
   loadPower: number | null;
+  /** What a load with back-EMF converts (torque-producing current per phase, air-gap power); null without an EMF. */
+  motor: MotorFigures | null;
   /** The filter's own figures (unloaded) and its loaded gain; null without a filter. */
   filter: {
     characteristics: LcFilterCharacteristics;

@@ -7,6 +7,8 @@ import {
 } from '../filter/outputNetworkResponse.js';
 import { checkVoltageHarmonicLimits } from '../limits/checkVoltageHarmonicLimits.js';
 import { HARMONIC_LIMIT_CAUTION } from '../limits/voltageHarmonicLimits.js';
+import { currentDistortion } from '../load/currentDistortion.js';
+import { motorLoadFigures } from '../load/motorLoadFigures.js';
 import { rlCurrentAt } from '../load/rlCurrentAt.js';
 import type { RlLoadOptions } from '../load/RlLoad.js';
 import { rlSteadyState } from '../load/rlSteadyState.js';
@@ -238,6 +240,14 @@ export function analyseDesign(
     commonMode,
     switching: legSwitching,
     loadPower,
+    motor:
+      load?.emf && load.emf.amplitude > 0
+        ? motorLoadFigures(
+            currents.map((c) => ({ ...(c.load as CurrentFigures), phase: c.phase })),
+            load.emf,
+            frequency,
+          )
+        : null,
     filter: filter === null ? null : filterFigures(filter, network, frequency, frequencyRatio),
     limitCheck,
     cautions: [DESIGN_CAUTION, HARMONIC_LIMIT_CAUTION],
@@ -328,7 +338,9 @@ function exactLoadCurrents(
     rms: steady.rmsCurrent,
     peak: Math.max(Math.abs(steady.peakCurrent), Math.abs(steady.minCurrent)),
     fundamental,
+    fundamentalPhase: Math.atan2(first.im, first.re),
     rippleRms: Math.sqrt(Math.max(0, steady.rmsCurrent ** 2 - (fundamental * fundamental) / 2)),
+    ...currentDistortion(steady.rmsCurrent, fundamental),
     ripplePeakToPeak: high - low,
     series: { angles: seriesAngles, values: rlCurrentAt(waveform, seriesAngles, load) },
   };
@@ -445,7 +457,9 @@ function filteredPhase(
       rms: Math.sqrt(meanSquare),
       peak,
       fundamental: fundamentalCurrent,
+      fundamentalPhase: Math.atan2(first.im, first.re),
       rippleRms: Math.sqrt(Math.max(0, meanSquare - (fundamentalCurrent * fundamentalCurrent) / 2)),
+      ...currentDistortion(Math.sqrt(meanSquare), fundamentalCurrent),
       ripplePeakToPeak: high - low,
       series: series(samples),
     };

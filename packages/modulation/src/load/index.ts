@@ -4,3 +4,4 @@ export * from './rlSteadyState.js';
 export * from './rlCurrentAt.js';
 export * from './rlCurrentSeries.js';
 export * from './harmonicLoadCurrent.js';
+export * from './MotorFigures.js';
