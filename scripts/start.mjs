@@ -5,8 +5,9 @@
 //
 // This process supervises the service: when the service exits without being asked to (a crash,
 // an out-of-memory kill), it is started again after a back-off of 1 s, doubling to at most
-// RESTART_MAX_DELAY_MS (default 30 s) and back to 1 s once a run has lasted a minute. Each start
-// marks the jobs the last run left queued or running as failed. Five runs in a row that each end
+// RESTART_MAX_DELAY_MS (default 30 s) and back to 1 s once a run has lasted a minute. On SQLite
+// each start marks the jobs the last run left queued or running as failed; on PostgreSQL the
+// shared job queue gives them to a replica again (docs/api.md, "Replicas"). Five runs in a row that each end
 // within 10 s of their start are a crash loop (a bad setting, a database that cannot open): the
 // supervisor then stops with exit code 1 rather than retry forever (RESTART_DELAY_MS sets the first
 // pause, 1 s by default). SIGINT and SIGTERM are passed
@@ -82,7 +83,12 @@ let shortRuns = 0;
 
 function startService() {
   const startedAt = Date.now();
-  server = spawn(process.execPath, [entry], { cwd: root, env, stdio: 'inherit' });
+  // Production unless NODE_ENV says otherwise: answers are not re-validated (apps/api config.ts).
+  server = spawn(process.execPath, [entry], {
+    cwd: root,
+    env: { NODE_ENV: 'production', ...env },
+    stdio: 'inherit',
+  });
   console.log(`pulsewright: service started (pid ${server.pid})`);
   server.on('exit', (code, signal) => {
     const ran = Date.now() - startedAt;

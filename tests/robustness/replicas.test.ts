@@ -53,8 +53,8 @@ if (!POSTGRES) {
 /** Settings shared by the replicas: a short job expiry and queue checks each second (test speed). */
 const SHARED_ENV = {
   JOB_EXPIRE_SECONDS: '30',
-  JOB_QUEUE_MAINTENANCE_SECONDS: '1',
-  JOB_QUEUE_POLLING_SECONDS: '0.5',
+  JOB_QUEUE_CHECK_SECONDS: '1',
+  JOB_POLLING_SECONDS: '0.5',
   JOB_RETRY_LIMIT: '2',
   JOB_QUOTA_USER: '20',
   JOB_QUOTA_TEAM: '40',

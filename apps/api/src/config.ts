@@ -53,8 +53,10 @@ export interface AppConfig {
   logErrors: boolean;
   /**
    * Check every JSON answer against the OpenAPI document before sending it (a mismatch is a 500,
-   * logged). VALIDATE_RESPONSES=false turns it off (bench/throughput.ts measures both); the tests
-   * keep it on. @default true
+   * logged). On in development and tests, where every route's answers are checked by the API
+   * suites; off in production (NODE_ENV=production, as `npm start` runs the service), where it
+   * costs each answer a walk over its whole body. VALIDATE_RESPONSES=true or false decides
+   * instead. @default NODE_ENV !== 'production'
    */
   validateResponses: boolean;
   /** Budgets and limits of the compute routes and jobs (services/cost.ts, services/computePool.ts). */
@@ -76,9 +78,9 @@ export interface JobQueueSettings {
   expireSeconds: number;
   /** Times a job is given to another worker before it is failed (JOB_RETRY_LIMIT). @default 2 */
   retryLimit: number;
-  /** Seconds between the queue's checks for expired jobs, run by one replica at a time (JOB_QUEUE_MAINTENANCE_SECONDS). @default 30 */
+  /** Seconds between the queue's checks for expired jobs, run by one replica at a time (JOB_QUEUE_CHECK_SECONDS). @default 30 */
   maintenanceSeconds: number;
-  /** Seconds between a free worker's looks at the queue (JOB_QUEUE_POLLING_SECONDS). @default 1 */
+  /** Seconds between a free worker's looks at the queue (JOB_POLLING_SECONDS). @default 1 */
   pollingSeconds: number;
 }
 
@@ -162,7 +164,10 @@ export function loadConfig(
     bcryptRounds: number('BCRYPT_ROUNDS', 12),
     webDist: env.WEB_DIST || path.join(repoRoot, 'apps', 'web', 'dist'),
     logErrors: env.LOG_ERRORS !== 'false',
-    validateResponses: env.VALIDATE_RESPONSES !== 'false',
+    validateResponses:
+      env.VALIDATE_RESPONSES === undefined || env.VALIDATE_RESPONSES === ''
+        ? env.NODE_ENV !== 'production'
+        : env.VALIDATE_RESPONSES !== 'false',
     ...overrides,
     compute: { ...computeLimits(env, number), ...overrides.compute },
     jobQueue: {
@@ -171,8 +176,8 @@ export function loadConfig(
         env.JOB_RETRY_LIMIT === '0'
           ? 0
           : wholeNumber('JOB_RETRY_LIMIT', number('JOB_RETRY_LIMIT', 2)),
-      maintenanceSeconds: number('JOB_QUEUE_MAINTENANCE_SECONDS', 30),
-      pollingSeconds: number('JOB_QUEUE_POLLING_SECONDS', 1),
+      maintenanceSeconds: number('JOB_QUEUE_CHECK_SECONDS', 30),
+      pollingSeconds: number('JOB_POLLING_SECONDS', 1),
       ...overrides.jobQueue,
     },
   };
