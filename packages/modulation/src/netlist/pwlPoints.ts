@@ -19,7 +19,7 @@ export interface PwlOptions {
  * that starts at t = θ/2π·period and reaches the new level `riseTime` (upward) or `fallTime`
  * (downward) later; the source holds its level between ramps and to the end of the last period.
  * Times strictly increase, as a PWL source needs.
- * @throws ParameterRangeError naming `riseTime` or `fallTime` when a ramp would reach the next edge
+ * @throws ParameterRangeError naming `riseTime` or `fallTime`, whichever ramp would reach the next edge
  */
 export function pwlPoints(waveform: Waveform, options: PwlOptions): [number, number][] {
   const { period, periods, riseTime, fallTime } = options;
@@ -37,23 +37,26 @@ export function pwlPoints(waveform: Waveform, options: PwlOptions): [number, num
   }
   let previous = initial;
   let lastEnd = -Infinity;
+  // The ramp that ends at lastEnd: it is the one that is too long when the next edge comes first.
+  let lastRamp: { field: 'riseTime' | 'fallTime'; value: number } | null = null;
   for (let p = 0; p < periods; p++) {
     for (let i = 0; i < count; i++) {
       const level = levels[i] as number;
       if (level === previous) continue;
       const start = ((edges[i] as number) / (2 * Math.PI) + p) * period;
       const ramp = level > previous ? riseTime : fallTime;
-      if (start <= lastEnd) {
+      if (lastRamp !== null && start <= lastEnd) {
         throw new ParameterRangeError(
-          level > previous ? 'riseTime' : 'fallTime',
-          `shorter than the shortest time between two edges of a signal, seconds (a ramp would reach the next edge at ${start} s)`,
-          ramp,
+          lastRamp.field,
+          `shorter than the shortest time between two edges of a signal, seconds (a ramp ending at ${lastEnd} s would pass the next edge, at ${start} s)`,
+          lastRamp.value,
         );
       }
       if (start > 0) points.push([start, previous]);
       else points[0] = [0, previous];
       points.push([start + ramp, level]);
       lastEnd = start + ramp;
+      lastRamp = { field: level > previous ? 'riseTime' : 'fallTime', value: ramp };
       previous = level;
     }
   }

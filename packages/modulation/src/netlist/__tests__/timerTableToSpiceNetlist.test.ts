@@ -229,6 +229,13 @@ describe('timerTableToSpiceNetlist', () => {
     expect(fieldOf({ riseTime: 2e-5 })).toMatch(
       /^(riseTime|fallTime): (riseTime|fallTime) must be shorter than the shortest time between two edges of a signal/,
     );
+    // The ramp named is the one that is too long, whichever edge comes next.
+    expect(fieldOf({ riseTime: 4e-5, fallTime: 1e-8 })).toMatch(
+      /^riseTime: riseTime must be shorter than .*; got 0\.00004$/,
+    );
+    expect(fieldOf({ riseTime: 1e-8, fallTime: 4e-5 })).toMatch(
+      /^fallTime: fallTime must be shorter than .*; got 0\.00004$/,
+    );
     expect(fieldOf({ riseTime: 0 })).toMatch(/^riseTime: riseTime must be a finite number > 0/);
     expect(fieldOf({ fallTime: -1e-9 })).toMatch(/^fallTime: /);
     expect(fieldOf({ periods: 1.5 })).toMatch(/^periods: periods must be an integer/);
