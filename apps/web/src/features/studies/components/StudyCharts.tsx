@@ -8,6 +8,7 @@ import { WaveformChart } from '../../../components/charts/WaveformChart';
 import { formatNumber } from '../../../lib/format';
 import { reportFigures } from '../model/reportFigures';
 import { CommonModePanel } from './CommonModePanel';
+import { MotorLoadPanel } from './MotorLoadPanel';
 
 const CURRENT_COLOURS = {
   inverter: 'var(--color-trace-current)',
@@ -25,6 +26,7 @@ export function StudyCharts({ report, fileStem }: { report: StudyReport; fileSte
       <VoltageChart report={report} fileStem={fileStem} />
       <ReportSpectrum report={report} fileStem={fileStem} />
       {report.currents.length ? <CurrentsChart report={report} fileStem={fileStem} /> : null}
+      <MotorLoadPanel report={report} />
       <CommonModePanel report={report} fileStem={fileStem} />
       <HarmonicTable
         harmonics={report.bridge.spectrum}

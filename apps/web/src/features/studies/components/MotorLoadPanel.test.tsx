@@ -1,0 +1,43 @@
+import { analyseDesign, type InverterDesign } from '@pulsewright/modulation';
+import { render, screen, within } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { formatNumber } from '../../../lib/format';
+import { MotorLoadPanel } from './MotorLoadPanel';
+
+const design: InverterDesign = {
+  vdc: 600,
+  fundamentalFrequency: 50,
+  carrierFrequency: 50 * 27,
+  modulation: { method: 'three-phase', ma: 0.9, zeroSequence: 'third-harmonic' },
+  load: { r: 1.5, l: 6e-3, emf: { amplitude: 220, phase: -0.35 } },
+};
+
+describe('MotorLoadPanel', () => {
+  it('labels every phase and shows the report’s torque-producing current and power', () => {
+    const report = analyseDesign(design);
+    render(<MotorLoadPanel report={report} />);
+    const currents = screen.getByRole('table', { name: 'Load currents per phase' });
+    for (const phase of ['a', 'b', 'c'])
+      expect(currents).toHaveTextContent(`load current, phase ${phase}`);
+    const torque = screen.getByRole('table', { name: 'Torque-producing current per phase' });
+    const rows = within(torque).getAllByRole('row');
+    expect(rows).toHaveLength(4);
+    expect(rows[2]).toHaveTextContent(`phase b${formatNumber(220)}`);
+    expect(rows[1]).toHaveTextContent(formatNumber(report.motor?.phases[0]?.torqueCurrent ?? NaN));
+    expect(screen.getByTestId('motor-totals')).toHaveTextContent(
+      `Air-gap power ${formatNumber(report.motor?.electromagneticPower ?? NaN)} W`,
+    );
+  });
+
+  it('shows the load without motor figures when there is no EMF, and nothing without a load', () => {
+    const { unmount } = render(
+      <MotorLoadPanel report={analyseDesign({ ...design, load: { r: 1.5, l: 6e-3 } })} />,
+    );
+    expect(screen.getByRole('table', { name: 'Load currents per phase' })).toBeInTheDocument();
+    expect(screen.queryByRole('table', { name: 'Torque-producing current per phase' })).toBeNull();
+    unmount();
+    const { load: _load, ...unloaded } = design;
+    const { container } = render(<MotorLoadPanel report={analyseDesign(unloaded)} />);
+    expect(container).toBeEmptyDOMElement();
+  });
+});
