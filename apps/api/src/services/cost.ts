@@ -28,7 +28,9 @@ import type { MaSweepInput, SheSweepInput } from './sweeps.js';
  *   Newton to its iteration limit from several starts: 0.19–0.22 ms × count² measured for
  *   staircase patterns of 8–31 angles; a converging bipolar point costs a tenth of that);
  * - timer tables: 250 units a row and channel (65 536 rows × 3 channels as JSON took 0.25 s);
- * - FFT of a capture: 10 units a sample and stage (N·log₂N);
+ * - FFT of a capture: 16 units a sample and stage (N·log₂N): 10 for a power-of-two transform,
+ *   and the whole periods at their own length (a chirp-z transform on three power-of-two
+ *   transforms) took 1.6–1.7× that at 1 000 000 samples;
  * - sampled time series: 20 units a value.
  *
  * Answers are bounded the same way: each estimate carries the size of the JSON (or file) it
@@ -309,7 +311,7 @@ export function netlistCost(request: {
 export function captureSpectrumCost(samples: number, maxOrder: number): CostEstimate {
   const stages = Math.max(1, Math.ceil(Math.log2(Math.max(2, samples))));
   return {
-    work: 10 * samples * stages,
+    work: 16 * samples * stages,
     basis: `the capture's ${samples} samples × ${stages} FFT stages`,
     fields: ['id'],
     responseBytes: (maxOrder + 1) * 5 * BYTES_PER_NUMBER,
