@@ -18,10 +18,9 @@ let current: string | null = readStored();
 const listeners = new Set<Listener>();
 
 export const session = {
-  getToken(): string | null {
-    return current;
-  },
-  setToken(token: string | null): void {
+  // Arrow functions: React's useSyncExternalStore and callers take them off the object.
+  getToken: (): string | null => current,
+  setToken: (token: string | null): void => {
     current = token;
     try {
       if (token) globalThis.sessionStorage?.setItem(STORAGE_KEY, token);
@@ -31,7 +30,7 @@ export const session = {
     }
     listeners.forEach((listener) => listener(token));
   },
-  subscribe(listener: Listener): () => void {
+  subscribe: (listener: Listener): (() => void) => {
     listeners.add(listener);
     return () => listeners.delete(listener);
   },

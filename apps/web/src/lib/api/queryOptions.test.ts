@@ -31,7 +31,7 @@ async function requestOf(
   body: unknown,
   status = 200,
 ): Promise<{ request: Request; data: unknown }> {
-  const fetch = vi.fn(async () => json(status, body));
+  const fetch = vi.fn(() => Promise.resolve(json(status, body)));
   vi.stubGlobal('fetch', fetch);
   const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
   const data = await run(client).catch((error: unknown) => error);

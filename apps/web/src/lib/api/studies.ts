@@ -60,9 +60,10 @@ export function useCreateStudy() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: createStudy,
+    // Not awaited: the saved study is shown at once and the lists refresh behind it.
     onSuccess: () => {
-      client.invalidateQueries({ queryKey: queryKeys.studies.all });
-      client.invalidateQueries({ queryKey: queryKeys.projects.all });
+      void client.invalidateQueries({ queryKey: queryKeys.studies.all });
+      void client.invalidateQueries({ queryKey: queryKeys.projects.all });
     },
   });
 }
@@ -76,9 +77,9 @@ export function useUpdateStudy() {
     mutationFn: updateStudy,
     onSuccess: (study) => {
       client.setQueryData(queryKeys.studies.one(study.id), study);
-      client.invalidateQueries({ queryKey: queryKeys.studies.lists });
-      client.invalidateQueries({ queryKey: queryKeys.studies.revisions(study.id) });
-      client.invalidateQueries({ queryKey: queryKeys.studies.reports(study.id) });
+      void client.invalidateQueries({ queryKey: queryKeys.studies.lists });
+      void client.invalidateQueries({ queryKey: queryKeys.studies.revisions(study.id) });
+      void client.invalidateQueries({ queryKey: queryKeys.studies.reports(study.id) });
     },
   });
 }
@@ -153,7 +154,7 @@ export function useRestoreStudyRevision() {
     mutationFn: restoreStudyRevision,
     onSuccess: (study) => {
       client.setQueryData(queryKeys.studies.one(study.id), study);
-      client.invalidateQueries({ queryKey: queryKeys.studies.all });
+      void client.invalidateQueries({ queryKey: queryKeys.studies.all });
     },
   });
 }
