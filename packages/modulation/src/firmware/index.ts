@@ -11,3 +11,4 @@ export * from './quantisationEffect.js';
 export * from './deadTimeEffect.js';
 export * from './minimumPulseEffect.js';
 export * from './firmwareEffects.js';
+export * from './deadTimeCompensation.js';

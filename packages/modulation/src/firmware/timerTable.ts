@@ -2,6 +2,7 @@ import { TAU } from '../math.js';
 import { ParameterRangeError, ParameterTypeError } from '../validation/errors.js';
 import { assertNumberInRange, assertOneOf } from '../validation/assertions.js';
 import { dutyFromReference } from './dutyFromReference.js';
+import { complementaryCompares } from './complementaryCompares.js';
 import { legReferences } from './legReferences.js';
 import {
   TIMER_ZERO_SEQUENCES,
@@ -383,28 +384,6 @@ function periodTiming(
 
 function realised(clock: number, ticks: number): number {
   return clock / ticks;
-}
-
-function complementaryCompares(
-  compare: number[],
-  full: number,
-  deadTimeCounts: number,
-): { highSide: number[]; lowSide: number[] } {
-  const before = Math.floor(deadTimeCounts / 2);
-  const after = deadTimeCounts - before;
-  const highSide: number[] = [];
-  const lowSide: number[] = [];
-  for (const c of compare) {
-    if (deadTimeCounts === 0 || c <= 0 || c >= full) {
-      // No edge in this update (0 or 100 % duty): one switch stays on, no dead time needed.
-      highSide.push(c);
-      lowSide.push(c);
-    } else {
-      highSide.push(Math.max(0, c - before));
-      lowSide.push(Math.min(full, c + after));
-    }
-  }
-  return { highSide, lowSide };
 }
 
 /**

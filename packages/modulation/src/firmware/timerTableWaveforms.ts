@@ -4,6 +4,7 @@ import { ParameterTypeError } from '../validation/errors.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import { subtractWaveforms } from '../waveform/subtractWaveforms.js';
 import { waveformFromTransitions, type Transition } from '../waveform/waveformFromTransitions.js';
+import { channelCurrentPhases } from './channelCurrentPhases.js';
 import { applyMinimumPulse } from './narrowPulses.js';
 import {
   TICK_TOLERANCE,
@@ -136,13 +137,6 @@ export function timerTableWaveforms(
     return legWaveform(high, low, crossings, period, vdc, sign);
   });
   return { legs, ...outputsOf(table, legs), adjustedPulses };
-}
-
-function channelCurrentPhases(table: TimerTable, currentAngle: number): number[] {
-  const { modulation } = table.parameters;
-  if (modulation.method === 'three-phase')
-    return [0, 1, 2].map((k) => currentAngle + (TAU * k) / 3);
-  return modulation.scheme === 'bipolar' ? [currentAngle] : [currentAngle, currentAngle + Math.PI];
 }
 
 /** On-pulses (ticks) of a channel's ideal gate signal from its compare values. */
