@@ -1,31 +1,16 @@
 import { harmonics, labelHarmonics, sineTriangle } from '@pulsewright/modulation';
 import { fireEvent, render, screen } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
+import { catchDownloads } from '../../testing/downloads';
 import { LineChart } from './LineChart';
 import { SpectrumChart } from './SpectrumChart';
 import { WaveformChart } from './WaveformChart';
 
-/** Clicks a chart's CSV button and reads back the file it saves (type and text). */
-async function downloadedCsv(name: RegExp): Promise<{ type: string; text: string; file: string }> {
-  let saved: Blob | undefined;
-  let file = '';
-  vi.spyOn(URL, 'createObjectURL').mockImplementation((blob) => {
-    saved = blob as Blob;
-    return 'blob:test';
-  });
-  vi.spyOn(URL, 'revokeObjectURL').mockImplementation(() => undefined);
-  vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(function (
-    this: HTMLAnchorElement,
-  ) {
-    file = this.download;
-  });
+/** Clicks a chart's CSV button and reads back the file it saves (name, type and text). */
+async function downloadedCsv(name: RegExp) {
+  const downloads = catchDownloads();
   fireEvent.click(screen.getByRole('button', { name }));
-  const text = await new Promise<string>((resolve) => {
-    const reader = new FileReader();
-    reader.onload = () => resolve(String(reader.result));
-    reader.readAsText(saved as Blob);
-  });
-  return { type: saved?.type ?? '', text, file };
+  return downloads.saved();
 }
 
 const rows = (text: string) =>

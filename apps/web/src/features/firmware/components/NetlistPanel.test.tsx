@@ -1,6 +1,7 @@
 import { timerTable, timerTableToSpiceNetlist } from '@pulsewright/modulation';
 import { fireEvent, render, screen } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
+import { catchDownloads } from '../../../testing/downloads';
 import { NetlistPanel } from './NetlistPanel';
 
 const table = timerTable({
@@ -16,28 +17,13 @@ afterEach(() => vi.restoreAllMocks());
 
 describe('NetlistPanel', () => {
   it("downloads the library's netlist with the rise and fall times, periods and gate level typed", async () => {
-    let saved: Blob | undefined;
-    let file = '';
-    vi.spyOn(URL, 'createObjectURL').mockImplementation((blob) => {
-      saved = blob as Blob;
-      return 'blob:test';
-    });
-    vi.spyOn(URL, 'revokeObjectURL').mockImplementation(() => undefined);
-    vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(function (
-      this: HTMLAnchorElement,
-    ) {
-      file = this.download;
-    });
+    const downloads = catchDownloads();
     render(<NetlistPanel table={table} fileStem="pump" />);
     fireEvent.change(screen.getByLabelText(/Rise time/), { target: { value: '50' } });
     fireEvent.change(screen.getByLabelText(/Fall time/), { target: { value: '20' } });
     fireEvent.change(screen.getByLabelText(/Fundamental periods/), { target: { value: '2' } });
     fireEvent.click(screen.getByRole('button', { name: 'SPICE netlist' }));
-    const text = await new Promise<string>((resolve) => {
-      const reader = new FileReader();
-      reader.onload = () => resolve(String(reader.result));
-      reader.readAsText(saved as Blob);
-    });
+    const { file, text } = await downloads.saved();
     expect(file).toBe('pump.cir');
     expect(text).toBe(
       timerTableToSpiceNetlist(table, {

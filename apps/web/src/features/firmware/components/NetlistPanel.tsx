@@ -14,6 +14,14 @@ interface NetlistForm {
   gateVoltage: number;
 }
 
+/** The fields: the form's key, the library's option it sets, the label and the unit shown. */
+const FIELDS: readonly { key: keyof NetlistForm; field: string; label: string; unit?: string }[] = [
+  { key: 'riseTimeNs', field: 'riseTime', label: 'Rise time', unit: 'ns' },
+  { key: 'fallTimeNs', field: 'fallTime', label: 'Fall time', unit: 'ns' },
+  { key: 'periods', field: 'periods', label: 'Fundamental periods' },
+  { key: 'gateVoltage', field: 'gateVoltage', label: 'Gate level', unit: 'V' },
+];
+
 /**
  * A download of the table's switching pattern as a SPICE netlist: one piecewise-linear source per
  * switch's gate and per leg's voltage, each edge a ramp of the chosen rise or fall time, with the
@@ -60,38 +68,17 @@ export function NetlistPanel({ table, fileStem }: { table: TimerTable; fileStem:
         protection before applying the DC bus.
       </p>
       <form className="grid grid-cols-2 gap-3 sm:grid-cols-4" onSubmit={(e) => e.preventDefault()}>
-        <TextField
-          label="Rise time"
-          unit="ns"
-          type="number"
-          defaultValue={form.riseTimeNs}
-          onChange={num('riseTimeNs')}
-          error={errorOf('riseTime')}
-        />
-        <TextField
-          label="Fall time"
-          unit="ns"
-          type="number"
-          defaultValue={form.fallTimeNs}
-          onChange={num('fallTimeNs')}
-          error={errorOf('fallTime')}
-        />
-        <TextField
-          label="Fundamental periods"
-          type="number"
-          step={1}
-          defaultValue={form.periods}
-          onChange={num('periods')}
-          error={errorOf('periods')}
-        />
-        <TextField
-          label="Gate level"
-          unit="V"
-          type="number"
-          defaultValue={form.gateVoltage}
-          onChange={num('gateVoltage')}
-          error={errorOf('gateVoltage')}
-        />
+        {FIELDS.map(({ key, field, label, unit }) => (
+          <TextField
+            key={key}
+            label={label}
+            unit={unit}
+            type="number"
+            defaultValue={form[key]}
+            onChange={num(key)}
+            error={errorOf(field)}
+          />
+        ))}
       </form>
     </Panel>
   );
