@@ -246,9 +246,15 @@ function StudyEditor({ study }: { study: Study | undefined }) {
               <StudyCharts report={report} fileStem={fileStem} />
             </>
           ) : preview ? (
-            <ErrorState
-              error={new Error(preview.errors.map((e) => e.message).join('; ') || 'No preview')}
-            />
+            // Each refusal is on its field (or listed above the form) in the field's unit; the
+            // library's own words (SI, "got NaN" for an emptied box) are not repeated here.
+            <p
+              role="status"
+              className="rounded-md border border-rule bg-panel px-3 py-2 text-sm"
+              data-testid="preview-waits"
+            >
+              The live report waits until the fields marked on the left are corrected.
+            </p>
           ) : (
             <Loading label="Computing the live report…" />
           )}
