@@ -340,6 +340,7 @@ export const scenarios: Scenario[] = [
       await screenshot(page, 'api-key');
       await page.getByRole('button', { name: `Revoke ${keyName}` }).click();
       // Revoking asks first, then takes the new key's secret off the screen.
+      await screenshot(page, 'api-key-revoke');
       await page.getByRole('button', { name: `Confirm revoking ${keyName}` }).click();
       await page
         .locator(`tr[data-key-name="${keyName}"]`)
@@ -419,6 +420,7 @@ export const scenarios: Scenario[] = [
         (await page.getByLabel('Key name').count()) === 0,
         'no key form for a viewer on the team page',
       );
+      await screenshot(page, 'team-viewer');
       await page.close();
     },
   },
