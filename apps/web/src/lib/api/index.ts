@@ -6,6 +6,7 @@ export * from './captures';
 export * from './client';
 export * from './jobs';
 export * from './me';
+export * from './patterns';
 export * from './projects';
 export * from './queryKeys';
 export * from './studies';

@@ -8,6 +8,7 @@ import { downloadText } from '../../../lib/download';
 import { formatNumber, formatPercent } from '../../../lib/format';
 import { buildTimerTable, effectSpectra, timerTableExports } from '../api/timerTables';
 import { NetlistPanel } from './NetlistPanel';
+import { PatternTablePanel } from './PatternTablePanel';
 
 interface FormState {
   method: 'sine-triangle' | 'three-phase';
@@ -304,6 +305,9 @@ export function FirmwarePage() {
             </>
           ) : null}
         </div>
+      </div>
+      <div className="mt-6">
+        <PatternTablePanel />
       </div>
     </div>
   );
