@@ -1,5 +1,5 @@
 import { harmonics, labelHarmonics, sineTriangle } from '@pulsewright/modulation';
-import { fireEvent, render } from '@testing-library/react';
+import { fireEvent, render, screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { SpectrumChart } from './SpectrumChart';
 
@@ -82,5 +82,24 @@ describe('SpectrumChart', () => {
     );
     expect(bars(container)).toHaveLength(120);
     expect(container.querySelectorAll('g[data-series]')).toHaveLength(2);
+  });
+
+  it('reads its x axis in Hz when given the fundamental: order n at n·f₁ (issue 10)', () => {
+    const { container } = render(
+      <SpectrumChart
+        series={[{ name: 'out', color: '#000', harmonics: spectrum }]}
+        fundamentalFrequency={50}
+      />,
+    );
+    const svg = () => container.querySelector('svg[data-chart="spectrum"]');
+    expect(svg()?.getAttribute('data-axis')).toBe('order');
+    fireEvent.click(screen.getByRole('button', { name: 'Axis in Hz' }));
+    expect(svg()?.getAttribute('data-axis')).toBe('frequency');
+    expect(svg()?.textContent).toContain('frequency (Hz)');
+    // Orders 1..60 at 50 Hz span 25 to 3025 Hz: d3's round ticks include 1000 and 3000 Hz.
+    expect(svg()?.textContent).toContain('3000');
+    // Order 15 (mf) sits where 750 Hz does.
+    fireEvent.mouseEnter(container.querySelector('rect[data-order="15"]') as Element);
+    expect(svg()?.textContent).toContain('order 15, 750 Hz');
   });
 });

@@ -225,6 +225,7 @@ export function ComparePage() {
                 series={series}
                 title="Spectra overlaid"
                 fileName="compare-spectra"
+                fundamentalFrequency={sharedFundamental(rows.map((r) => r.report))}
                 controls={
                   <select
                     aria-label="Spectra of"
@@ -259,4 +260,12 @@ export function ComparePage() {
 
 function parseIds(value: string): string[] {
   return value.split(',').filter(Boolean);
+}
+
+/** The fundamental frequency all the compared designs share, hertz (undefined when they differ: no Hz axis). */
+function sharedFundamental(
+  reports: readonly { fundamentalFrequency: number }[],
+): number | undefined {
+  const first = reports[0]?.fundamentalFrequency;
+  return reports.every((r) => r.fundamentalFrequency === first) ? first : undefined;
 }

@@ -103,6 +103,7 @@ function ReportSpectrum({ report, fileStem }: { report: StudyReport; fileStem: s
       series={series}
       fileName={`${fileStem}-spectrum`}
       title={`Spectrum to order ${report.maxOrder}`}
+      fundamentalFrequency={report.fundamentalFrequency}
       controls={
         report.lineToLine ? (
           <select
