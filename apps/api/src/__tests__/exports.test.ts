@@ -67,9 +67,8 @@ describe('exports: netlists, CSV and study records', () => {
       expect(res.headers['content-type']).toMatch(/^text\/plain/);
       expect(res.headers['content-disposition']).toBe('attachment; filename="drive_pattern.cir"');
       const { prefix: _prefix, ...tableOptions } = TABLE;
-      // Every edge of this text is checked against the library's waveforms by a reader of the
-      // SPICE format in packages/modulation/src/netlist/__tests__; the service must hand it over
-      // unchanged.
+      // The service hands over the library's text unchanged; tests/reference/netlistRoute.test.ts
+      // reads this route's answers back with the SPICE reader and checks every edge.
       expect(res.body).toBe(
         timerTableToSpiceNetlist(timerTable(tableOptions), { ...options, currentAngle: 0.3 }),
       );

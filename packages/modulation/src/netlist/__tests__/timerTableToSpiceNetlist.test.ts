@@ -1,98 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { timerTable } from '../../firmware/timerTable.js';
 import type { TimerTable, TimerTableOptions } from '../../firmware/timerTableTypes.js';
-import { timerTableWaveforms } from '../../firmware/timerTableWaveforms.js';
 import { ParameterRangeError } from '../../validation/errors.js';
-import type { Waveform } from '../../waveform/Waveform.js';
 import { spiceNetlistSources } from '../spiceNetlistSources.js';
 import { timerTableToSpiceNetlist } from '../timerTableToSpiceNetlist.js';
+import { expectNetlistOfTable, rampsOf, TIME_RESOLUTION, valueAt } from './netlistChecks.js';
 import { parseSpiceNetlist, spiceValue, type ParsedSource } from './spiceNetlist.js';
-
-/** The resolution the netlist states for its edge times: 1 ps (it writes them as full doubles). */
-const TIME_RESOLUTION = 1e-12;
-
-interface Edge {
-  start: number;
-  duration: number;
-  from: number;
-  to: number;
-}
-
-/** The ramps of a parsed PWL source: where its value changes between two time points. */
-function rampsOf(source: ParsedSource): Edge[] {
-  const edges: Edge[] = [];
-  for (let i = 1; i < source.points.length; i++) {
-    const [t0, v0] = source.points[i - 1] as [number, number];
-    const [t1, v1] = source.points[i] as [number, number];
-    if (v0 !== v1) edges.push({ start: t0, duration: t1 - t0, from: v0, to: v1 });
-  }
-  return edges;
-}
-
-/** The library waveform's level changes over `periods` periods of `period` seconds, from t = 0. */
-function libraryEdges(
-  waveform: Waveform,
-  period: number,
-  periods: number,
-  scale = 1,
-): { time: number; from: number; to: number }[] {
-  const { edges, levels } = waveform;
-  const result: { time: number; from: number; to: number }[] = [];
-  let previous = (levels[levels.length - 1] as number) * scale;
-  for (let p = 0; p < periods; p++) {
-    edges.forEach((angle, i) => {
-      const level = (levels[i] as number) * scale;
-      if (level !== previous)
-        result.push({ time: (angle / (2 * Math.PI) + p) * period, from: previous, to: level });
-      previous = level;
-    });
-  }
-  return result;
-}
-
-function expectSource(
-  source: ParsedSource | undefined,
-  expected: ReturnType<typeof libraryEdges>,
-  rise: number,
-  fall: number,
-  end: number,
-): void {
-  expect(source).toBeDefined();
-  const ramps = rampsOf(source as ParsedSource);
-  expect(ramps).toHaveLength(expected.length);
-  ramps.forEach((ramp, i) => {
-    const edge = expected[i] as (typeof expected)[number];
-    expect(Math.abs(ramp.start - edge.time)).toBeLessThan(TIME_RESOLUTION);
-    expect(ramp.from).toBe(edge.from);
-    expect(ramp.to).toBe(edge.to);
-    expect(Math.abs(ramp.duration - (edge.to > edge.from ? rise : fall))).toBeLessThan(
-      TIME_RESOLUTION,
-    );
-  });
-  const points = (source as ParsedSource).points;
-  expect(points[0]?.[0]).toBe(0);
-  expect((points[points.length - 1] as [number, number])[0]).toBeGreaterThanOrEqual(
-    end - TIME_RESOLUTION,
-  );
-}
-
-/** The value of a PWL source at time t (linear between points, held after the last). */
-function valueAt(source: ParsedSource, t: number): number {
-  const { points } = source;
-  // The first point at or after t, by bisection.
-  let lo = 1;
-  let hi = points.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >> 1;
-    if ((points[mid] as [number, number])[0] < t) lo = mid + 1;
-    else hi = mid;
-  }
-  const i = lo;
-  if (i >= points.length) return (points[points.length - 1] as [number, number])[1];
-  const [t0, v0] = points[i - 1] as [number, number];
-  const [t1, v1] = points[i] as [number, number];
-  return v0 + ((v1 - v0) * (t - t0)) / (t1 - t0);
-}
 
 describe('timerTableToSpiceNetlist', () => {
   it("writes each gate and leg of a three-phase table as a PWL source whose edges are the library's, over the periods asked", () => {
@@ -113,11 +26,13 @@ describe('timerTableToSpiceNetlist', () => {
       gateVoltage: 15,
       currentAngle: 0.4,
     });
-    const netlist = parseSpiceNetlist(text);
-    const period = 1 / table.realisedFundamentalFrequency;
-    const high = timerTableWaveforms(table, { currentSign: () => 1 }).legs;
-    const low = timerTableWaveforms(table, { currentSign: () => -1 }).legs;
-    const legs = timerTableWaveforms(table, { currentAngle: 0.4 }).legs;
+    const netlist = expectNetlistOfTable(text, table, {
+      riseTime: 5e-8,
+      fallTime: 2e-8,
+      periods: 2,
+      gateVoltage: 15,
+      currentAngle: 0.4,
+    });
     expect(netlist.sources.map((s) => s.name)).toEqual([
       'Vgate_a_high',
       'Vgate_a_low',
@@ -129,38 +44,6 @@ describe('timerTableToSpiceNetlist', () => {
       'Vleg_b',
       'Vleg_c',
     ]);
-    const byName = new Map(netlist.sources.map((s) => [s.name, s]));
-    ['a', 'b', 'c'].forEach((leg, k) => {
-      // Gate on while the leg sits at +vdc/2 with the current forced out of it (the high side),
-      // or at −vdc/2 with it forced in (the low side): the library's dead-time model.
-      const gateOn = (w: Waveform, sign: number): Waveform => ({
-        edges: w.edges,
-        levels: w.levels.map((v) => (v * sign > 0 ? 15 : 0)),
-      });
-      expectSource(
-        byName.get(`Vgate_${leg}_high`),
-        libraryEdges(gateOn(high[k] as Waveform, 1), period, 2),
-        5e-8,
-        2e-8,
-        2 * period,
-      );
-      expectSource(
-        byName.get(`Vgate_${leg}_low`),
-        libraryEdges(gateOn(low[k] as Waveform, -1), period, 2),
-        5e-8,
-        2e-8,
-        2 * period,
-      );
-      expectSource(
-        byName.get(`Vleg_${leg}`),
-        libraryEdges(legs[k] as Waveform, period, 2),
-        5e-8,
-        2e-8,
-        2 * period,
-      );
-      expect(byName.get(`Vleg_${leg}`)?.nodes).toEqual([`leg_${leg}`, '0']);
-    });
-    expect(netlist.controls).toContainEqual(['.tran', '2e-8', (2 * period).toExponential()]);
   });
 
   it("keeps the dead time between the two gates of a leg, and the bipolar bridge's crosswise leg b", () => {
