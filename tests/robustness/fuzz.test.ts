@@ -11,6 +11,7 @@ import {
   type KnownIds,
 } from './support/requests.js';
 import { SchemaTools, type Document } from './support/schemaArbitrary.js';
+import { boundaryOf, COST_PROBES } from './support/costProbes.js';
 import { DEMO, DEMO_PASSWORD } from '../support/server.js';
 
 /**
@@ -330,4 +331,70 @@ describe('fuzzing every operation of the OpenAPI document', () => {
     }
     expect([...grouped.keys()]).toEqual([]);
   }, 300_000);
+});
+
+/**
+ * The cost model's limits (apps/api/src/services/cost.ts) are not in the document's schemas: they
+ * bound products of fields (edges × orders, rows × channels, points × angles²). Each probe
+ * (support/costProbes.ts) finds, from the service's own estimate, the largest value of one field
+ * the budgets allow, then sends that request and the one a step above. Just below must be
+ * accepted; just above must be a 400 whose errors name every field the estimate names and whose
+ * detail names the setting that raises the limit; neither may be a 5xx or take longer than
+ * STALL_MS. Small budgets (a few milliseconds of work) keep the accepted requests cheap.
+ */
+describe('probing the cost model at each limit', () => {
+  const LIMITS = {
+    requestWorkBudget: 1e6,
+    jobWorkBudget: 1e7,
+    responseBytesBudget: 1e5,
+    userJobQuota: 100,
+    teamJobQuota: 100,
+  };
+  const STALL_MS = 20_000;
+  let probeApp: InProcessApp;
+  let auth: Record<string, string>;
+  beforeAll(async () => {
+    probeApp = await inProcessApp('cost-probes', { compute: LIMITS });
+    const login = await request(probeApp.app)
+      .post('/api/v1/auth/login')
+      .send({ email: DEMO.engineer, password: DEMO_PASSWORD });
+    auth = { Authorization: `Bearer ${login.body.token}` };
+  }, 60_000);
+  afterAll(async () => {
+    await probeApp?.app.services.jobs.idle();
+    await probeApp?.dispose();
+  });
+
+  for (const probe of COST_PROBES) {
+    it(`${probe.name}: accepted at the limit, a 400 naming the fields one step above`, async () => {
+      const x = boundaryOf(probe, LIMITS);
+      const send = async (value: number) => {
+        const started = Date.now();
+        const res = await request(probeApp.app).post(probe.path).set(auth).send(probe.body(value));
+        expect(Date.now() - started, `${probe.name} at ${value} answered in time`).toBeLessThan(
+          STALL_MS,
+        );
+        return res;
+      };
+      const below = await send(x);
+      expect(below.status, `${probe.name} at ${x}: ${JSON.stringify(below.body)}`).toBeLessThan(
+        300,
+      );
+      const above = await send(x + 1);
+      expect(above.status, `${probe.name} at ${x + 1}: ${JSON.stringify(above.body)}`).toBe(400);
+      expect(above.type).toBe('application/problem+json');
+      const estimate = probe.cost(x + 1);
+      const overWork =
+        estimate.work > (probe.kind === 'job' ? LIMITS.jobWorkBudget : LIMITS.requestWorkBudget);
+      const fields = overWork ? estimate.fields : estimate.responseFields;
+      const paths = (above.body.errors as { path: string }[]).map((e) => e.path);
+      for (const field of fields) expect(paths, `${probe.name}: names ${field}`).toContain(field);
+      const setting = overWork
+        ? probe.kind === 'job'
+          ? 'JOB_WORK_BUDGET'
+          : 'COMPUTE_WORK_BUDGET'
+        : 'RESPONSE_BYTES_BUDGET';
+      expect(above.body.detail).toContain(setting);
+    });
+  }
 });

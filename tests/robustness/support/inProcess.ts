@@ -2,7 +2,7 @@ import { rmSync } from 'node:fs';
 import path from 'node:path';
 // In-process suites drive the service's own source through vitest's TypeScript transform, so
 // they test the code as it is now, without a build of apps/api.
-import { createApp, type AppConfig, type PulsewrightApp } from '../../../apps/api/src/app.js';
+import { createApp, type ConfigOverrides, type PulsewrightApp } from '../../../apps/api/src/app.js';
 import { DEMO_PASSWORD, tempDir } from '../../support/server.js';
 
 export type { PulsewrightApp };
@@ -18,7 +18,7 @@ export interface InProcessApp {
 /** createApp on a fresh temporary SQLite file, seeded with the demo, bcrypt cost 4. */
 export async function inProcessApp(
   label: string,
-  overrides: Partial<AppConfig> = {},
+  overrides: ConfigOverrides = {},
 ): Promise<InProcessApp> {
   const dir = tempDir(label);
   const file = path.join(dir, 'robustness.sqlite');
