@@ -170,6 +170,26 @@ export const FIXTURES: Record<string, Fixture> = {
     },
   }),
   computeSpaceVector: () => ({ path: '/api/v1/space-vector', body: { m: 0.7, theta: 1.2 } }),
+  computeLossSweep: () => ({
+    path: '/api/v1/losses/power-factor-sweeps',
+    body: {
+      device: {
+        kind: 'mosfet',
+        rdsOn: 0.02,
+        eon: 4e-4,
+        eoff: 3e-4,
+        err: 5e-5,
+        referenceVoltage: 800,
+        referenceCurrent: 50,
+      },
+      vdc: 650,
+      ma: 0.9,
+      peakCurrent: 20,
+      switchingFrequency: 5000,
+      points: 5,
+      zeroSequences: ['none', 'dpwm1'],
+    },
+  }),
   computeTimerTable: () => ({
     path: '/api/v1/timer-tables',
     query: { format: 'csv' },

@@ -53,6 +53,9 @@ export function computeRoutes(services: Services): Router {
       .setHeader('Content-Disposition', `attachment; filename="${file.fileName}"`)
       .send(file.body);
   });
+  router.post('/api/v1/losses/power-factor-sweeps', async (req, res) => {
+    res.json(await compute.lossSweep(req.body));
+  });
   router.post('/api/v1/harmonic-limits/check', async (req, res) => {
     res.json(await compute.harmonicLimits(req.body.design, req.body.busVoltage));
   });

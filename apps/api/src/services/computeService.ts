@@ -2,6 +2,7 @@ import type {
   AnalyseDesignOptions,
   FftWindowName,
   InverterDesign,
+  LossesByPowerFactorOptions,
   Modulation,
   SpaceVectorSequenceOptions,
   TimerTableOptions,
@@ -36,6 +37,7 @@ import {
   type TaskArgs,
   type TaskResult,
 } from '../workers/computeTasks.js';
+import { lossSweepCost } from './lossSweeps.js';
 import type { NetlistRequest } from './netlists.js';
 
 /**
@@ -129,6 +131,11 @@ export class ComputeService {
       this.reportCost(design, options, 'design'),
       'This filter analysis',
     );
+  }
+
+  /** Losses of every zero sequence against the load's power-factor angle (lossesByPowerFactor). */
+  lossSweep(input: LossesByPowerFactorOptions) {
+    return this.run('lossSweep', { input }, lossSweepCost(input), 'This loss sweep');
   }
 
   harmonicLimits(design: InverterDesign, busVoltage?: number) {

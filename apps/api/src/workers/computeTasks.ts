@@ -2,6 +2,7 @@ import type {
   AnalyseDesignOptions,
   FftWindowName,
   InverterDesign,
+  LossesByPowerFactorOptions,
   Modulation,
   TimerTableOptions,
 } from '@pulsewright/modulation';
@@ -20,6 +21,7 @@ import {
   type VoltageOutput,
 } from '../services/compute.js';
 import { parseCaptureCsv } from '../services/captureCsv.js';
+import { computeLossSweep } from '../services/lossSweeps.js';
 import { computeNetlist, type NetlistRequest } from '../services/netlists.js';
 import {
   computeAngleTable,
@@ -65,6 +67,7 @@ export const COMPUTE_TASKS = {
   timerTable: (a: { options: TimerTableOptions; format: TimerFormat; prefix?: string }) =>
     computeTimerTable(a.options, a.format, a.prefix),
   netlist: (a: { request: NetlistRequest }) => computeNetlist(a.request),
+  lossSweep: (a: { input: LossesByPowerFactorOptions }) => computeLossSweep(a.input),
   captureSpectrum: (a: {
     samples: Float64Array | number[];
     sampleRate: number;

@@ -1,0 +1,75 @@
+import { lossesByPowerFactor, type IgbtDevice } from '@pulsewright/modulation';
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO, signIn, testApp, type TestApp } from './helpers.js';
+
+// Invented datasheet-like values (not from any real part).
+const igbt: IgbtDevice = {
+  kind: 'igbt',
+  vce0: 0.9,
+  rce: 0.012,
+  vf0: 1.05,
+  rf: 0.009,
+  eon: 2.1e-3,
+  eoff: 2.6e-3,
+  err: 1.3e-3,
+  referenceVoltage: 600,
+  referenceCurrent: 100,
+};
+const body = { device: igbt, vdc: 650, ma: 0.9, peakCurrent: 28, switchingFrequency: 10_000 };
+
+describe('POST /api/v1/losses/power-factor-sweeps', () => {
+  let t: TestApp;
+  let auth: { Authorization: string };
+  beforeAll(async () => {
+    t = await testApp();
+    auth = { Authorization: `Bearer ${await signIn(t.app, DEMO.viewer)}` };
+  });
+  afterAll(async () => t.dispose());
+
+  it('answers the library’s sweep, every zero sequence at 100 angles by default', async () => {
+    const res = await request(t.app)
+      .post('/api/v1/losses/power-factor-sweeps')
+      .set(auth)
+      .send(body);
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual(lossesByPowerFactor(body));
+    expect(res.body.series).toHaveLength(11);
+    // DPWM1 at unity power factor switches half as much as continuous PWM (Hava, Kerkman and
+    // Lipo 1998; from memory): the 100 default angles straddle 0, so read the nearest pair.
+    const none = res.body.series[0];
+    const dpwm1 = res.body.series.find((s: { zeroSequence: string }) => s.zeroSequence === 'dpwm1');
+    expect(dpwm1.switching[49] / none.switching[49]).toBeCloseTo(0.5, 1);
+  });
+
+  it('at equal average switching frequency runs the clamps 1.5× faster', async () => {
+    const res = await request(t.app)
+      .post('/api/v1/losses/power-factor-sweeps')
+      .set(auth)
+      .send({ ...body, angles: [0], zeroSequences: ['none', 'dpwm1'], basis: 'equal-switching' });
+    expect(res.status).toBe(200);
+    expect(res.body.series[1].carrierFrequency).toBeCloseTo(15_000, 6);
+  });
+
+  it('answers bad input with a 400 naming the field, and refuses expensive work before it starts', async () => {
+    const bad = await request(t.app)
+      .post('/api/v1/losses/power-factor-sweeps')
+      .set(auth)
+      .send({ ...body, angles: [0, 4] });
+    expect(bad.status).toBe(400);
+    expect(JSON.stringify(bad.body)).toContain('angles');
+    const unknown = await request(t.app)
+      .post('/api/v1/losses/power-factor-sweeps')
+      .set(auth)
+      .send({ ...body, zeroSequences: ['dpwm7'] });
+    expect(unknown.status).toBe(400);
+    const heavy = await request(t.app)
+      .post('/api/v1/losses/power-factor-sweeps')
+      .set(auth)
+      .send({ ...body, switchingFrequency: 200_000, points: 1000 });
+    expect(heavy.status).toBe(400);
+    expect(heavy.body.detail ?? JSON.stringify(heavy.body)).toMatch(
+      /points and zeroSequences and switchingFrequency/,
+    );
+  });
+});
