@@ -4,6 +4,7 @@ import { assertFiniteArray, assertNumberInRange, assertOneOf } from '../validati
 import { FFT_WINDOWS, type FftWindowName } from './FftWindowName.js';
 import { fftWindow } from './fftWindow.js';
 import { realDft } from './realDft.js';
+import { refineFundamental } from './refineFundamental.js';
 import { wholePeriods } from './wholePeriods.js';
 
 /**
@@ -123,7 +124,9 @@ const COHERENCE_TOLERANCE = 1e-6;
  *
  * Without `fundamentalFrequency` it is estimated as the strongest bin above the DC leakage
  * zone, refined by golden-section search of the Hann-windowed DTFT's magnitude within ±1 bin
- * (relative error typically below 1e−5 for a clean tone spanning several periods).
+ * (relative error typically below 1e−5 for a clean tone spanning several periods), and with
+ * `'whole-periods'` then by the fundamental's phase advance from the first period to the last
+ * ({@link refineFundamental}), which a capture of only two or three periods needs.
  *
  * @param samples - the capture, one value per sample (volts), finite, at least 16, at most 2^21
  * @param sampleRate - hertz, > 0
@@ -184,13 +187,10 @@ export function fftSpectrum(
     // The estimate needs only the strongest bin's neighbourhood: a padded power of two is quicker.
     const size = 2 ** Math.ceil(Math.log2(samples.length));
     const padded = windowedTransform(samples, samples.length, size, 'hann', sampleRate);
-    f0 = estimateFundamental(
-      padded.bins.amplitude,
+    f0 = refineFundamental(
       samples,
-      samples.length,
       sampleRate,
-      size,
-      'hann',
+      estimateFundamental(padded.bins.amplitude, samples, samples.length, sampleRate, size, 'hann'),
     );
   }
   const span = wholePeriods(samples, sampleRate, f0);

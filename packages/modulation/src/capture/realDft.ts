@@ -24,7 +24,7 @@ export function realDft(samples: ArrayLike<number>): number[] {
   const kept = 2 * (Math.floor(length / 2) + 1);
   if ((length & (length - 1)) === 0) {
     const fft = new FFT(length);
-    const out: number[] = fft.createComplexArray();
+    const out = fft.createComplexArray() as number[];
     fft.realTransform(out, Array.from(samples));
     return out.slice(0, kept);
   }
@@ -39,8 +39,8 @@ export function realDft(samples: ArrayLike<number>): number[] {
     chirpRe[k] = Math.cos(angle);
     chirpIm[k] = -Math.sin(angle);
   }
-  const a: number[] = fft.createComplexArray();
-  const b: number[] = fft.createComplexArray();
+  const a = fft.createComplexArray() as number[];
+  const b = fft.createComplexArray() as number[];
   a.fill(0);
   b.fill(0);
   for (let k = 0; k < length; k++) {
@@ -55,8 +55,8 @@ export function realDft(samples: ArrayLike<number>): number[] {
       b[2 * (size - k) + 1] = -(chirpIm[k] as number);
     }
   }
-  const aHat: number[] = fft.createComplexArray();
-  const bHat: number[] = fft.createComplexArray();
+  const aHat = fft.createComplexArray() as number[];
+  const bHat = fft.createComplexArray() as number[];
   fft.transform(aHat, a);
   fft.transform(bHat, b);
   for (let k = 0; k < size; k++) {
@@ -68,7 +68,7 @@ export function realDft(samples: ArrayLike<number>): number[] {
     aHat[2 * k] = re - im;
     aHat[2 * k + 1] = cross;
   }
-  const convolution: number[] = fft.createComplexArray();
+  const convolution = fft.createComplexArray() as number[];
   fft.inverseTransform(convolution, aHat);
   const out = new Array<number>(kept);
   for (let k = 0; k < kept / 2; k++) {
