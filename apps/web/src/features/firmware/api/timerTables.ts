@@ -45,7 +45,8 @@ export function timerTableExports(table: TimerTable) {
   return {
     json: () => timerTableToJson(table),
     csv: () => timerTableToCsv(table),
-    cHeader: () => timerTableToCHeader(table),
+    /** The C header with its names prefixed by `prefix` (a C identifier; the library checks it). */
+    cHeader: (prefix?: string) => timerTableToCHeader(table, prefix ? { prefix } : {}),
   };
 }
 

@@ -1,12 +1,13 @@
 import { useMemo, useState } from 'react';
 import { SpectrumChart } from '../../../components/charts/SpectrumChart';
 import { Button } from '../../../components/ui/Button';
-import { SelectField, TextField } from '../../../components/ui/Field';
+import { NumberField, SelectField, TextField } from '../../../components/ui/Field';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState } from '../../../components/ui/QueryState';
 import { downloadText } from '../../../lib/download';
 import { formatNumber, formatPercent } from '../../../lib/format';
 import { buildTimerTable, effectSpectra, timerTableExports } from '../api/timerTables';
+import { timerFieldErrors, type TimerField } from '../model/timerFieldErrors';
 import { NetlistPanel } from './NetlistPanel';
 import { PatternTablePanel } from './PatternTablePanel';
 
@@ -23,6 +24,8 @@ interface FormState {
   deadTimeNs: number;
   minPulseNs: number;
   vdc: number;
+  /** Prefix of the C header's names. */
+  prefix: string;
 }
 
 /** Controller tables: timer compare values for a timer clock and counting mode, with downloads. */
@@ -40,7 +43,10 @@ export function FirmwarePage() {
     deadTimeNs: 500,
     minPulseNs: 0,
     vdc: 360,
+    prefix: 'pwm_table',
   });
+  // The field typed last: an error that two fields share (carrier against timer clock) goes there.
+  const [lastEdited, setLastEdited] = useState<TimerField>('carrierFrequency');
   const outcome = useMemo(
     () =>
       buildTimerTable(
@@ -61,12 +67,17 @@ export function FirmwarePage() {
       ),
     [form],
   );
-  const num = (key: keyof FormState) => (e: React.ChangeEvent<HTMLInputElement>) => {
-    const value = Number(e.target.value);
-    if (e.target.value !== '' && Number.isFinite(value)) setForm({ ...form, [key]: value });
+  // Every keystroke is kept as typed (NaN for an empty box or letters), so the table never quietly
+  // uses a previous value; the library then refuses it and the message lands on that field.
+  const num = (key: TimerField) => (value: number) => {
+    setLastEdited(key);
+    setForm((current) => ({ ...current, [key]: value }));
   };
-  const err = (field: string) =>
-    outcome.error && outcome.error.field.startsWith(field) ? outcome.error.message : undefined;
+  const errors = timerFieldErrors(outcome.error, form, lastEdited);
+  const err = (field: TimerField) => errors[field];
+  const prefixError = /^[A-Za-z_][A-Za-z0-9_]{0,39}$/.test(form.prefix)
+    ? undefined
+    : 'Name prefix must be a C identifier of 1 to 40 characters: letters, digits and _, not starting with a digit';
   const table = outcome.table;
   const mf = table ? table.carrierPeriodsPerFundamental : 1;
   const spectra = outcome.effects ? effectSpectra(outcome.effects.combined, mf) : null;
@@ -116,36 +127,31 @@ export function FirmwarePage() {
                 ]}
               />
             )}
-            <TextField
+            <NumberField
               label="Modulation index ma"
-              type="number"
-              step={0.01}
-              defaultValue={form.ma}
+              value={form.ma}
               onChange={num('ma')}
-              error={err('ma') ?? err('modulation')}
+              error={err('ma')}
             />
-            <TextField
+            <NumberField
               label="Fundamental"
               unit="Hz"
-              type="number"
-              defaultValue={form.fundamentalFrequency}
+              value={form.fundamentalFrequency}
               onChange={num('fundamentalFrequency')}
               error={err('fundamentalFrequency')}
             />
-            <TextField
+            <NumberField
               label="Carrier"
               unit="Hz"
-              type="number"
-              defaultValue={form.carrierFrequency}
+              value={form.carrierFrequency}
               onChange={num('carrierFrequency')}
               error={err('carrierFrequency')}
-              hint="a whole multiple of the fundamental"
+              hint="a whole multiple of the fundamental, at least 3 times"
             />
-            <TextField
+            <NumberField
               label="Timer clock"
               unit="Hz"
-              type="number"
-              defaultValue={form.timerClock}
+              value={form.timerClock}
               onChange={num('timerClock')}
               error={err('timerClock')}
             />
@@ -160,42 +166,53 @@ export function FirmwarePage() {
                 { value: 'edge-aligned', label: 'Edge-aligned (up)' },
               ]}
             />
-            <TextField
+            <NumberField
               label="Counter width"
               unit="bits"
-              type="number"
-              defaultValue={form.counterBits}
+              value={form.counterBits}
               onChange={num('counterBits')}
               error={err('counterBits')}
             />
-            <TextField
+            <NumberField
               label="Dead time"
               unit="ns"
-              type="number"
-              defaultValue={form.deadTimeNs}
+              value={form.deadTimeNs}
               onChange={num('deadTimeNs')}
-              error={err('deadTime')}
+              error={err('deadTimeNs')}
             />
-            <TextField
+            <NumberField
               label="Minimum pulse"
               unit="ns"
-              type="number"
-              defaultValue={form.minPulseNs}
+              value={form.minPulseNs}
               onChange={num('minPulseNs')}
-              error={err('minPulseWidth')}
+              error={err('minPulseNs')}
             />
-            <TextField
+            <NumberField
               label="DC bus"
               unit="V"
-              type="number"
-              defaultValue={form.vdc}
+              value={form.vdc}
               onChange={num('vdc')}
               error={err('vdc')}
+            />
+            <TextField
+              label="Name prefix"
+              value={form.prefix}
+              onChange={(e) => setForm({ ...form, prefix: e.target.value })}
+              error={prefixError}
+              hint="of the C header's arrays and macros (kestrel_drive gives kestrel_drive_a_high, KESTREL_DRIVE_LENGTH)"
+              maxLength={60}
             />
           </form>
         </Panel>
         <div className="flex min-w-0 flex-col gap-4">
-          {outcome.error ? <ErrorState error={new Error(outcome.error.message)} /> : null}
+          {outcome.error && !errors.claimed ? (
+            <ErrorState error={new Error(outcome.error.message)} />
+          ) : null}
+          {outcome.error && errors.claimed ? (
+            <p role="status" className="rounded-md border border-rule bg-panel px-3 py-2 text-sm">
+              The table waits until the field marked on the left is corrected.
+            </p>
+          ) : null}
           {table && outcome.effects ? (
             <>
               <Panel
@@ -224,8 +241,14 @@ export function FirmwarePage() {
                     </Button>
                     <Button
                       variant="secondary"
+                      disabled={prefixError !== undefined}
+                      title={prefixError ? 'Correct the name prefix first' : undefined}
                       onClick={() =>
-                        downloadText(timerTableExports(table).cHeader(), `${stem}.h`, 'text/x-c')
+                        downloadText(
+                          timerTableExports(table).cHeader(form.prefix),
+                          `${form.prefix.toLowerCase()}.h`,
+                          'text/x-c',
+                        )
                       }
                     >
                       C header
