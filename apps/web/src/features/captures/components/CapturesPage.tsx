@@ -253,7 +253,7 @@ function CaptureAnalysis({ capture }: { capture: CaptureWithSeries }) {
             {spectrum.data.fundamentalEstimated
               ? spectrum.data.periodic
                 ? ' (from the whole periods the capture repeats over)'
-                : ' (estimated from the strongest bin)'
+                : ' (estimated from the capture: its strongest bin, refined by its phase over the periods)'
               : ''}{' '}
             · {spectrumBasis(spectrum.data)} · capture THD {formatPercent(spectrum.data.thd)} to
             order {spectrum.data.harmonics.at(-1)?.order ?? 0}
