@@ -100,6 +100,7 @@ const PUBLIC_NAMES = [
   'dutyFromReference',
   'fftSpectrum',
   'fftWindow',
+  'filterInductanceForTarget',
   'filteredSpectrum',
   'findBracketedRoot',
   'firmwareEffects',
