@@ -92,8 +92,12 @@ export function AngleTablePanel({
         prefix: form.prefix,
       }
     : null;
-  const error = (field: string) => fieldErrorOf(build.error, field);
-  const document: AngleTableDocument | undefined = build.data;
+  // A table answers the pattern it was built for; once the pattern changes it is no longer shown.
+  const patternKey = JSON.stringify(pattern);
+  const [builtFor, setBuiltFor] = useState<string | null>(null);
+  const current = builtFor === patternKey;
+  const error = (field: string) => (current ? fieldErrorOf(build.error, field) : undefined);
+  const document: AngleTableDocument | undefined = current ? build.data : undefined;
   const download = async (format: 'csv' | 'c-header' | 'json') => {
     if (!request) return;
     setDownloadError(null);
@@ -200,7 +204,11 @@ export function AngleTablePanel({
       </div>
       <div className="mt-3 flex flex-wrap items-center gap-2">
         <Button
-          onClick={() => request && build.mutate(request)}
+          onClick={() => {
+            if (!request) return;
+            setBuiltFor(patternKey);
+            build.mutate(request);
+          }}
           busy={build.isPending}
           disabled={!request}
         >
@@ -221,7 +229,7 @@ export function AngleTablePanel({
           </>
         ) : null}
       </div>
-      {build.isError ? (
+      {current && build.isError ? (
         <p role="alert" className="mt-2 text-sm text-bad">
           {errorMessage(build.error)}
         </p>

@@ -95,7 +95,7 @@ export function EliminationResult({
         ]}
         onPick={(_, point) => onPick(point)}
         picked={picked === null ? null : { series: 0, point: picked }}
-        yFormat={(v) => `${formatPercent(v, 1)} %`}
+        yFormat={(v) => formatPercent(v, 1)}
       />
       {picked !== null && points[picked] ? (
         <PickedPoint pattern={pattern} point={points[picked]} />
@@ -164,7 +164,7 @@ function PickedPoint({ pattern, point }: { pattern: SolvedPattern; point: SweepP
       <Panel title="Picked point">
         <p className="num text-sm">
           ma {formatNumber(point.ma)} · fundamental {formatNumber(point.fundamental)} V · THD{' '}
-          {formatPercent(figures.thd)} % · WTHD {formatPercent(figures.wthd)} % (whole waveform)
+          {formatPercent(figures.thd)} · WTHD {formatPercent(figures.wthd)} (whole waveform)
         </p>
         <table className="num mt-2 text-sm" aria-label="Angles at the picked point">
           <thead>
