@@ -227,6 +227,8 @@ export function defineModels(sequelize: Sequelize): Models {
   // Lets the bearer lookup read membership, user and team in one query.
   models.Membership.belongsTo(models.User, { foreignKey: 'userId', as: 'user' });
   models.Membership.belongsTo(models.Team, { foreignKey: 'teamId', as: 'team' });
+  // Lets the studies list read each study with its current revision in one query.
+  models.Study.hasMany(models.StudyRevision, { foreignKey: 'studyId', as: 'revisions' });
   return models;
 }
 

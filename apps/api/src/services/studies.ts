@@ -1,5 +1,5 @@
 import { designModulation, type InverterDesign } from '@pulsewright/modulation';
-import { Op, Transaction, UniqueConstraintError } from 'sequelize';
+import { col, Op, Transaction, UniqueConstraintError } from 'sequelize';
 import type { Models, StudyRevisionRow, StudyRow } from '../models/index.js';
 import { conflict, notFound } from '../http/errors.js';
 import type { AuditLog } from './audit.js';
@@ -68,19 +68,28 @@ export class StudyService {
         ],
       });
     }
-    const studies = await this.models.Study.findAll({
+    // One query: each study joined to its current revision (exactly one row each, by the
+    // unique (studyId, revision) index), so no subquery is needed around the limit.
+    const studies = (await this.models.Study.findAll({
       where: {
         teamId,
         ...(filter.projectId ? { projectId: filter.projectId } : {}),
         ...(and.length ? { [Op.and]: and } : {}),
       },
+      include: [
+        {
+          model: this.models.StudyRevision,
+          as: 'revisions',
+          required: true,
+          where: { revision: { [Op.eq]: col('Study.currentRevision') } },
+        },
+      ],
+      subQuery: false,
       order: [['updatedAt', 'DESC']],
       limit: filter.limit,
       offset: filter.offset,
-    });
-    return Promise.all(
-      studies.map(async (study) => toDto(study, await this.currentRevision(study))),
-    );
+    })) as (StudyRow & { revisions: StudyRevisionRow[] })[];
+    return studies.map((study) => toDto(study, study.revisions[0] as StudyRevisionRow));
   }
 
   async get(teamId: string, id: string): Promise<StudyDto> {
