@@ -5,7 +5,6 @@ import {
   fftSpectrum,
   modulationVoltages,
   spaceVectorSequence,
-  timerTable,
   timerTableToCHeader,
   timerTableToCsv,
   timerTableToJson,
@@ -27,6 +26,7 @@ import {
 import { badRequest } from '../http/errors.js';
 import type { TimerFormat } from './cost.js';
 import { callLibrary, finiteResult } from './library.js';
+import { requestedTimerTable, type TimerTableRequest } from './requestedTimerTable.js';
 
 /**
  * Which voltage of a three-phase bridge the spectrum and waveform routes analyse: line a−b (the
@@ -235,12 +235,12 @@ export interface TimerDownload {
 
 /** A timer table rendered by the library in the format asked for, ready to download. */
 export function computeTimerTable(
-  options: TimerTableOptions,
+  options: TimerTableRequest,
   format: TimerFormat,
   prefix = 'pwm_table',
 ): TimerDownload {
+  const table = requestedTimerTable(options);
   return callLibrary('', () => {
-    const table = timerTable(options);
     if (format === 'csv')
       return {
         body: timerTableToCsv(table),

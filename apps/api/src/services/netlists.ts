@@ -1,15 +1,11 @@
-import {
-  timerTable,
-  timerTableToSpiceNetlist,
-  type SpiceNetlistOptions,
-  type TimerTableOptions,
-} from '@pulsewright/modulation';
+import { timerTableToSpiceNetlist, type SpiceNetlistOptions } from '@pulsewright/modulation';
 import { callLibrary } from './library.js';
+import { requestedTimerTable, type TimerTableRequest } from './requestedTimerTable.js';
 import type { TimerDownload } from './compute.js';
 
 /** POST /netlists: a timer-table request (as POST /timer-tables takes it) and the netlist's options. */
 export type NetlistRequest = SpiceNetlistOptions & {
-  timerTable: TimerTableOptions & { prefix?: string };
+  timerTable: TimerTableRequest & { prefix?: string };
 };
 
 /** The netlist's own options, in the library's names (the table sits apart). */
@@ -24,7 +20,7 @@ const NETLIST_FIELDS = ['riseTime', 'fallTime', 'periods', 'gateVoltage', 'curre
 export function computeNetlist(request: NetlistRequest): TimerDownload {
   const { timerTable: tableRequest, ...netlist } = request;
   const { prefix = 'pwm_pattern', ...options } = tableRequest;
-  const table = callLibrary('timerTable.', () => timerTable(options));
+  const table = requestedTimerTable(options, 'timerTable.');
   return {
     body: callLibrary('', () => timerTableToSpiceNetlist(table, netlist), NETLIST_FIELDS),
     contentType: 'text/plain; charset=utf-8',

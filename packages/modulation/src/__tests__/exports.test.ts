@@ -92,6 +92,7 @@ const PUBLIC_NAMES = [
   'combineWaveforms',
   'compareCapture',
   'compareWithCarrier',
+  'compensateDeadTime',
   'deadTimeCompensation',
   'deadTimeEffect',
   'defaultSpectrumOrder',

@@ -3,8 +3,7 @@ import { harmonics } from '../spectrum/harmonics.js';
 import { thd } from '../spectrum/thd.js';
 import { assertFiniteArray, assertNumberInRange } from '../validation/assertions.js';
 import type { Waveform } from '../waveform/Waveform.js';
-import { channelCurrentPhases } from './channelCurrentPhases.js';
-import { complementaryCompares } from './complementaryCompares.js';
+import { compensateDeadTime, type CompensatedTimerTable } from './compensateDeadTime.js';
 import { defaultMaxOrder } from './compareOutputs.js';
 import { timerTableWaveforms } from './timerTableWaveforms.js';
 import type { TimerTable } from './timerTableTypes.js';
@@ -38,15 +37,7 @@ export interface CompensationFigures {
 }
 
 /** Result of {@link deadTimeCompensation}; plain data. */
-export interface DeadTimeCompensation {
-  /** The table with compare, high- and low-side values corrected (duty stays the ideal one). */
-  table: TimerTable;
-  /** Counts added to each channel's compare value per entry (0 where the leg is clamped). */
-  correction: number[][];
-  /** Ticks of high time the correction adds per carrier period for a positive (out of the leg) and a negative current. */
-  correctionTicks: { positive: number; negative: number };
-  /** Ticks of high time dead time removes (positive current) or adds (negative) per carrier period. */
-  deadTimeTicks: { positive: number; negative: number };
+export interface DeadTimeCompensation extends CompensatedTimerTable {
   /** The table without dead time: what the reference asks for. */
   ideal: CompensationFigures;
   /** The table as it is, with its dead time. */
@@ -91,51 +82,18 @@ export function deadTimeCompensation(
     maxOrder = defaultMaxOrder(table),
   } = options;
   assertNumberInRange('currentAngle', currentAngle, { min: -TAU, max: TAU });
-  assertNumberInRange('predictedCurrentAngle', predictedCurrentAngle, { min: -TAU, max: TAU });
   assertFiniteArray('orders', orders, 1, 50);
   orders.forEach((n, i) =>
     assertNumberInRange(`orders[${i}]`, n, { min: 2, max: maxOrder, integer: true }),
   );
   assertNumberInRange('maxOrder', maxOrder, { min: 2, max: 100_000, integer: true });
 
-  const dead = table.deadTimeCounts;
-  const half = Math.floor(dead / 2);
-  const deadTimeTicks =
-    table.parameters.deadTimeMethod === 'compare-offset'
-      ? { positive: 2 * half, negative: 2 * (dead - half) }
-      : { positive: dead, negative: dead };
-  const ticksPerCount = table.ticksPerCarrierPeriod / table.fullScaleCounts;
-  const counts = {
-    positive: Math.round(deadTimeTicks.positive / ticksPerCount),
-    negative: Math.round(deadTimeTicks.negative / ticksPerCount),
-  };
-  const full = table.fullScaleCounts;
-  const lags = channelCurrentPhases(table, predictedCurrentAngle);
-  const correction: number[][] = [];
-  const channels = table.channels.map((channel, k) => {
-    const lag = lags[k] as number;
-    const added = channel.compare.map((c, i) => {
-      if (c <= 0 || c >= full) return 0;
-      const current = Math.sin((table.entryAngles[i] as number) - lag);
-      const wanted = current > 0 ? counts.positive : current < 0 ? -counts.negative : 0;
-      return Math.min(full, Math.max(0, c + wanted)) - c;
-    });
-    correction.push(added);
-    const compare = channel.compare.map((c, i) => c + (added[i] as number));
-    const offset = table.parameters.deadTimeMethod === 'compare-offset' ? dead : 0;
-    return { ...channel, compare, ...complementaryCompares(compare, full, offset) };
-  });
-  const corrected: TimerTable = {
-    ...table,
-    channels,
-    warnings: [
-      ...table.warnings,
-      {
-        field: 'deadTime',
-        message: `compare values corrected for dead time by +${counts.positive} / −${counts.negative} counts by the sign of the current predicted at a lag of ${predictedCurrentAngle} rad (T. Murai et al., 1987); a wrong prediction of the load angle makes the error worse, not better`,
-      },
-    ],
-  };
+  const {
+    table: corrected,
+    correction,
+    correctionTicks,
+    deadTimeTicks,
+  } = compensateDeadTime(table, { predictedCurrentAngle });
   const figures = (waveform: Waveform): CompensationFigures => {
     const spectrum = harmonics(waveform, maxOrder);
     return {
@@ -150,10 +108,7 @@ export function deadTimeCompensation(
   return {
     table: corrected,
     correction,
-    correctionTicks: {
-      positive: counts.positive * ticksPerCount,
-      negative: counts.negative * ticksPerCount,
-    },
+    correctionTicks,
     deadTimeTicks,
     ideal: figures(first(table, false)),
     uncompensated: figures(first(table, true)),

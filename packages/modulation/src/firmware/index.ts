@@ -11,4 +11,5 @@ export * from './quantisationEffect.js';
 export * from './deadTimeEffect.js';
 export * from './minimumPulseEffect.js';
 export * from './firmwareEffects.js';
+export * from './compensateDeadTime.js';
 export * from './deadTimeCompensation.js';

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
+  compensateDeadTime,
   deadTimeCompensation,
   SQRT3,
   timerTable,
@@ -123,5 +124,16 @@ describe('deadTimeCompensation (Murai et al. 1987)', () => {
     expect(() => deadTimeCompensation(options(threePhase), { currentAngle: Number.NaN })).toThrow(
       /currentAngle/,
     );
+  });
+});
+
+describe('compensateDeadTime', () => {
+  it('is the table deadTimeCompensation reports, without building waveforms', () => {
+    const table = options(threePhase);
+    const cheap = compensateDeadTime(table, { predictedCurrentAngle: 0.3 });
+    const full = deadTimeCompensation(table, { currentAngle: 0.3 });
+    expect(cheap.table).toEqual(full.table);
+    expect(cheap.correction).toEqual(full.correction);
+    expect(cheap.table.warnings.at(-1)?.message).toMatch(/Murai/);
   });
 });
