@@ -48,7 +48,7 @@ export function pwlPoints(waveform: Waveform, options: PwlOptions): [number, num
       if (lastRamp !== null && start <= lastEnd) {
         throw new ParameterRangeError(
           lastRamp.field,
-          `shorter than the shortest time between two edges of a signal, seconds (a ramp ending at ${lastEnd} s would pass the next edge, at ${start} s)`,
+          `shorter than the shortest time between two edges of a signal, seconds (a ramp ending at ${lastEnd.toPrecision(6)} s would pass the next edge, at ${start.toPrecision(6)} s)`,
           lastRamp.value,
         );
       }
