@@ -19,7 +19,6 @@ import {
   type SpaceVectorSequence,
   type SpaceVectorSequenceOptions,
   type ThreePhaseCarrierModulation,
-  type TimerTableOptions,
   type Waveform,
   voltageFigures,
 } from '@pulsewright/modulation';
