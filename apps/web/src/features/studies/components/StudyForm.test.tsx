@@ -165,6 +165,26 @@ describe('StudyForm', () => {
     expect(onChange).toHaveBeenLastCalledWith({ fundamentalFrequency: 0 });
   });
 
+  it('sizes Filter L from a resonance or a ripple target through the library (issue 10)', () => {
+    const onChange = vi.fn();
+    renderForm({ ...defaultDraft(), filterOn: true }, { onChange });
+    const from = screen.getByRole('combobox', { name: 'Filter L from' });
+    fireEvent.change(from, { target: { value: 'resonance' } });
+    fireEvent.change(screen.getByLabelText(/Resonance target/), { target: { value: '1000' } });
+    // 1/((2π·1000 Hz)²·20 µF) = 1.2665 mH (LC resonance, standard circuit analysis).
+    const resonant = onChange.mock.lastCall?.[0] as { filterL: number };
+    expect(resonant.filterL).toBeCloseTo(1 / ((2 * Math.PI * 1000) ** 2 * 20e-6), 12);
+    fireEvent.change(from, { target: { value: 'ripple' } });
+    fireEvent.change(screen.getByLabelText(/Ripple target/), { target: { value: '2' } });
+    // 400 V, 1050 Hz carrier, 2 A peak-to-peak: L = 400/(2·1050·2) (two-level worst case).
+    const rippled = onChange.mock.lastCall?.[0] as { filterL: number };
+    expect(rippled.filterL).toBeCloseTo(400 / (2 * 1050 * 2), 12);
+    fireEvent.change(screen.getByLabelText(/Ripple target/), { target: { value: '0' } });
+    expect(screen.getByLabelText(/Ripple target/)).toHaveAccessibleDescription(
+      'Ripple target must be above 0 A peak-to-peak (entered 0 A peak-to-peak)',
+    );
+  });
+
   it('keeps mf when the fundamental changes (the carrier follows)', () => {
     const onChange = vi.fn();
     renderForm(defaultDraft(), { onChange });

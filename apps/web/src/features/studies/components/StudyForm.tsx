@@ -12,6 +12,7 @@ import { rangeError, rangeText, type FieldUnit } from '../../../lib/fieldRange';
 import { fieldErrorOf } from '../../../lib/api';
 import { NumberField, SelectField, SliderField, TextField } from '../../../components/ui/Field';
 import type { Project } from '../../../lib/api';
+import { FilterSizing } from './FilterSizing';
 import type { PreviewFieldError } from '../model/designPreview';
 import { formatNumber } from '../../../lib/format';
 import {
@@ -479,6 +480,7 @@ export function StudyForm({
                 />
               ) : null}
             </div>
+            <FilterSizing draft={draft} onChange={onChange} carrier={isCarrierMethod(method)} />
             <SelectField
               label="Damping"
               value={draft.dampingPlacement}
