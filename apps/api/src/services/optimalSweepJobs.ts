@@ -1,4 +1,4 @@
-import type { ComputePool } from './computePool.js';
+import { chainedSweepPlan } from './chainedSweepPlan.js';
 import type { JobPlan } from './jobs.js';
 import {
   nextOptimalPrevious,
@@ -6,7 +6,6 @@ import {
   optimalSweepCost,
   type OptimalSweepInput,
   type OptimalSweepPointResult,
-  type OptimalSweepResult,
 } from './patternTables.js';
 
 /**
@@ -15,31 +14,13 @@ import {
  * ended on (services/patternTables.ts optimalSweepChunk).
  */
 export function optimalSweepPlan(input: OptimalSweepInput): JobPlan {
-  const solved: OptimalSweepPointResult[] = [];
-  const chunks = optimalSweepChunkCount(input);
-  let previous: number[] | undefined;
-  let iterations = 0;
-  return {
+  return chainedSweepPlan<OptimalSweepPointResult, number[]>({
     kind: 'optimal-sweep',
     cost: optimalSweepCost(input),
-    chunks,
-    async runChunk(index: number, pool: ComputePool) {
-      const part = await pool.run(
-        'optimalSweepChunk',
-        { input, index, ...(previous ? { previous } : {}) },
-        {
-          ...(index === 0 ? {} : { queueTimeLimitMs: null }),
-          what: `Chunk ${index + 1} of ${chunks} of this optimal-pattern sweep`,
-        },
-      );
-      solved.push(...part.points);
-      iterations += part.iterations;
-      previous = nextOptimalPrevious(solved);
-    },
-    result: (): OptimalSweepResult => ({
-      points: solved,
-      solvedFraction: solved.filter((p) => p.converged).length / Math.max(1, solved.length),
-      iterations,
-    }),
-  };
+    chunks: optimalSweepChunkCount(input),
+    label: 'this optimal-pattern sweep',
+    carryOf: nextOptimalPrevious,
+    runChunk: (pool, index, previous, options) =>
+      pool.run('optimalSweepChunk', { input, index, ...(previous ? { previous } : {}) }, options),
+  });
 }

@@ -1,3 +1,4 @@
+import { chainedSweepPlan } from './chainedSweepPlan.js';
 import type { ComputePool } from './computePool.js';
 import { maSweepCost, sheSweepCost } from './cost.js';
 import type { JobPlan } from './jobs.js';
@@ -12,7 +13,6 @@ import {
   type MaSweepInput,
   type SheSweepInput,
   type SheSweepPointResult,
-  type SheSweepResult,
 } from './sweeps.js';
 
 /** A sweep of the modulation index as a job: each chunk (services/sweeps.ts maSweepChunk) in a worker. */
@@ -40,33 +40,16 @@ export function maSweepPlan(input: MaSweepInput): JobPlan {
 
 /** A SHE sweep as a job: each chunk seeded with the last solution of the ones before. */
 export function sheSweepPlan(input: SheSweepInput): JobPlan {
-  const solved: SheSweepPointResult[] = [];
-  const chunks = sheSweepChunkCount(input);
-  let seed = input.initialAngles;
-  let iterations = 0;
-  return {
+  return chainedSweepPlan<SheSweepPointResult, number[]>({
     kind: 'she-sweep',
     cost: sheSweepCost(input),
-    chunks,
-    async runChunk(index: number, pool: ComputePool) {
-      const part = await pool.run(
-        'sheSweepChunk',
-        { input, index, ...(seed ? { seed } : {}) },
-        {
-          ...(index === 0 ? {} : { queueTimeLimitMs: null }),
-          what: `Chunk ${index + 1} of ${chunks} of this SHE sweep`,
-        },
-      );
-      solved.push(...part.points);
-      iterations += part.iterations;
-      seed = nextSheSeed(solved);
-    },
-    result: (): SheSweepResult => ({
-      points: solved,
-      solvedFraction: solved.filter((p) => p.converged).length / Math.max(1, solved.length),
-      iterations,
-    }),
-  };
+    chunks: sheSweepChunkCount(input),
+    label: 'this SHE sweep',
+    first: input.initialAngles,
+    carryOf: nextSheSeed,
+    runChunk: (pool, index, seed, options) =>
+      pool.run('sheSweepChunk', { input, index, ...(seed ? { seed } : {}) }, options),
+  });
 }
 
 /**
