@@ -1,34 +1,15 @@
-import { TAU } from '../math.js';
-import { ParameterRangeError, ParameterTypeError } from '../validation/errors.js';
-import { assertNumberInRange, assertOneOf } from '../validation/assertions.js';
-import { dutyFromReference } from './dutyFromReference.js';
-import { complementaryCompares } from './complementaryCompares.js';
-import { legReferences } from './legReferences.js';
-import {
-  TIMER_ZERO_SEQUENCES,
-  type CountingMode,
-  type DeadTimeMethod,
-  type TimerChannel,
-  type TimerModulation,
-  type TimerTable,
-  type TimerTableOptions,
-  type TimerWarning,
+import { timerTableChannels } from './timerTableChannels.js';
+import { timerTableInputs } from './timerTableInputs.js';
+import { timerTableTiming } from './timerTableTiming.js';
+import { timerTableWarnings } from './timerTableWarnings.js';
+import type {
+  CountingMode,
+  DeadTimeMethod,
+  TimerTable,
+  TimerTableOptions,
 } from './timerTableTypes.js';
 
-/** Relative tolerance for "is an integer" tests on frequency ratios (floating-point input). */
-const RATIO_TOLERANCE = 1e-9;
-
-/** How far past ±1 a reference may round and still be a clamp at the rail, not overmodulation. */
-const RAIL_TOLERANCE = 1e-12;
-
-/** Fewest timer counts a carrier period may hold (below this the duty has no resolution). */
-const MIN_PERIOD_COUNTS = 2;
-
-/**
- * Most entries a timer table may hold per fundamental period (each entry holds a compare value per
- * channel): bounds the work and the size of the answer; a controller's table is far shorter.
- */
-export const MAX_TIMER_TABLE_LENGTH = 65_536;
+export { MAX_TIMER_TABLE_LENGTH } from './timerTableInputs.js';
 
 /**
  * Timer compare values for a regular-sampled sine modulation: what a controller loads into
@@ -63,199 +44,37 @@ export const MAX_TIMER_TABLE_LENGTH = 65_536;
  *   sampling or compare-offset dead time with edge-aligned counting.
  */
 export function timerTable(options: TimerTableOptions): TimerTable {
-  const {
-    modulation,
-    fundamentalFrequency,
-    carrierFrequency,
-    sampling = 'regular-symmetric',
-    timerClock,
-    countingMode = 'centre-aligned',
-    counterBits = 16,
-    deadTime = 0,
-    vdc = 1,
-  } = options;
-  const checkedModulation = checkModulation(modulation);
-  assertNumberInRange('fundamentalFrequency', fundamentalFrequency, {
-    min: 0,
-    minExclusive: true,
-    max: 1e6,
-  });
-  assertNumberInRange('timerClock', timerClock, { min: 0, minExclusive: true, max: 1e11 });
-  assertNumberInRange('carrierFrequency', carrierFrequency, {
-    min: 0,
-    minExclusive: true,
-    max: timerClock / 2,
-  });
-  assertOneOf('sampling', sampling, ['regular-symmetric', 'regular-asymmetric'] as const);
-  assertOneOf('countingMode', countingMode, ['edge-aligned', 'centre-aligned'] as const);
-  assertNumberInRange('counterBits', counterBits, { min: 8, max: 32, integer: true });
-  assertNumberInRange('deadTime', deadTime, { min: 0 });
-  assertNumberInRange('vdc', vdc, { min: 0, minExclusive: true });
-  const deadTimeMethod: DeadTimeMethod =
-    options.deadTimeMethod ??
-    (countingMode === 'centre-aligned' ? 'compare-offset' : 'dead-time-register');
-  assertOneOf('deadTimeMethod', deadTimeMethod, ['compare-offset', 'dead-time-register'] as const);
-  if (countingMode === 'edge-aligned' && sampling === 'regular-asymmetric') {
-    throw new ParameterRangeError(
-      'sampling',
-      "'regular-symmetric' when countingMode is 'edge-aligned' (asymmetric sampling needs an up-down counter)",
-      sampling,
-    );
-  }
-  if (countingMode === 'edge-aligned' && deadTimeMethod === 'compare-offset') {
-    throw new ParameterRangeError(
-      'deadTimeMethod',
-      "'dead-time-register' when countingMode is 'edge-aligned' (an up-counter has no second edge to offset at its reset)",
-      deadTimeMethod,
-    );
-  }
-  const warnings: TimerWarning[] = [];
-
-  const carrierPeriods = integerRatio(carrierFrequency, fundamentalFrequency);
-  const updatesPerFundamental = carrierPeriods * (sampling === 'regular-asymmetric' ? 2 : 1);
-  if (options.tableLength === undefined && updatesPerFundamental > MAX_TIMER_TABLE_LENGTH) {
-    // The default (one entry per compare update) would size the table from the two frequencies
-    // alone; refuse before any work rather than build millions of rows.
-    throw new ParameterRangeError(
-      'tableLength',
-      `given when carrierFrequency/fundamentalFrequency${sampling === 'regular-asymmetric' ? ' × 2' : ''} (${updatesPerFundamental} compare updates per period) exceeds ${MAX_TIMER_TABLE_LENGTH}: a divisor of ${updatesPerFundamental} up to ${MAX_TIMER_TABLE_LENGTH}`,
-      undefined,
-    );
-  }
-  const tableLength = options.tableLength ?? updatesPerFundamental;
-  assertNumberInRange('tableLength', tableLength, {
-    min: 1,
-    max: Math.min(updatesPerFundamental, MAX_TIMER_TABLE_LENGTH),
-    integer: true,
-  });
-  if (updatesPerFundamental % tableLength !== 0) {
-    throw new ParameterRangeError(
-      'tableLength',
-      `a divisor of ${updatesPerFundamental} (compare updates per fundamental period)`,
-      tableLength,
-    );
-  }
-
-  const timing = periodTiming(countingMode, timerClock, carrierFrequency, counterBits);
-  if (
-    Math.abs(timing.exactTicks - timing.ticksPerCarrierPeriod) >
-    RATIO_TOLERANCE * timing.exactTicks
-  ) {
-    warnings.push({
-      field: 'timerClock',
-      message: `timerClock/carrierFrequency is not a whole number of ${countingMode === 'centre-aligned' ? 'double ' : ''}counts; the period register is rounded and the carrier runs at ${realised(timerClock, timing.ticksPerCarrierPeriod)} Hz`,
-    });
-  }
-  const carrierPeriodSeconds = 1 / carrierFrequency;
-  if (deadTime >= carrierPeriodSeconds / 2) {
-    throw new ParameterRangeError(
-      'deadTime',
-      `a time in seconds ≥ 0 and < half the carrier period (${carrierPeriodSeconds / 2} s)`,
-      deadTime,
-    );
-  }
-  const deadTimeCounts = Math.ceil(deadTime * timerClock - RATIO_TOLERANCE);
-  if (2 * deadTimeCounts >= timing.ticksPerCarrierPeriod) {
-    throw new ParameterRangeError(
-      'deadTime',
-      `shorter than half the carrier period in counts (${timing.ticksPerCarrierPeriod / 2} ticks); got ${deadTimeCounts} ticks`,
-      deadTime,
-    );
-  }
-
-  const entryAngles = Array.from(
-    { length: tableLength },
-    (_, i) => ((i + 0.5) * TAU) / tableLength,
-  );
-  const references = entryAngles.map((theta) => legReferences(theta, checkedModulation));
-  const channelCount = (references[0] as number[]).length;
+  const inputs = timerTableInputs(options);
+  const timing = timerTableTiming(inputs);
+  const rows = timerTableChannels(inputs, timing);
+  const warnings = timerTableWarnings(inputs, timing, rows);
+  const { modulation, timerClock, vdc, carrierPeriods, updatesPerFundamental, tableLength } =
+    inputs;
   const full = timing.fullScaleCounts;
-  let overmodulated = 0;
-  let maxError = 0;
-  const channels: TimerChannel[] = [];
-  for (let k = 0; k < channelCount; k++) {
-    const duty = references.map((r) => {
-      const value = r[k] as number;
-      // A clamped reference is s + (1 − s), an ulp either side of the rail: not overmodulation.
-      if (value > 1 + RAIL_TOLERANCE || value < -1 - RAIL_TOLERANCE) overmodulated++;
-      return dutyFromReference(value);
-    });
-    const compare = duty.map((d) => Math.round(d * full));
-    duty.forEach((d, i) => {
-      maxError = Math.max(maxError, Math.abs((compare[i] as number) - d * full));
-    });
-    const { highSide, lowSide } = complementaryCompares(
-      compare,
-      full,
-      deadTimeMethod === 'compare-offset' ? deadTimeCounts : 0,
-    );
-    channels.push({
-      name: CHANNEL_NAMES[k] as string,
-      description: describeChannel(checkedModulation, k),
-      duty,
-      compare,
-      highSide,
-      lowSide,
-    });
-  }
-  if (overmodulated > 0) {
-    warnings.push({
-      field: 'modulation.ma',
-      message: `${overmodulated} references beyond ±1 (overmodulation) were clamped to 0 or 100 % duty`,
-    });
-  }
-  if (
-    countingMode === 'edge-aligned' &&
-    full > 2 ** counterBits - 1 &&
-    channels.some((c) => c.compare.includes(full))
-  ) {
-    for (const c of channels)
-      for (const list of [c.compare, c.highSide, c.lowSide])
-        list.forEach((v, i) => {
-          if (v > 2 ** counterBits - 1) list[i] = 2 ** counterBits - 1;
-        });
-    warnings.push({
-      field: 'counterBits',
-      message: `100 % duty needs compare ${full}, which a ${counterBits}-bit register cannot hold; clamped to ${2 ** counterBits - 1}`,
-    });
-  }
-  const narrow = narrowPulseCount(
-    channels,
-    full,
-    timing.ticksPerCarrierPeriod / full,
-    deadTimeCounts,
-  );
-  if (deadTimeCounts > 0 && narrow.count > 0) {
-    warnings.push({
-      field: 'deadTime',
-      message: `${narrow.count} pulses are shorter than the dead time (${deadTimeCounts} ticks = ${deadTimeCounts / timerClock} s; shortest ${narrow.shortest} ticks) and are swallowed by it: the fundamental and THD change (see deadTimeEffect)`,
-    });
-  }
-
   const ticksPerFundamental = timing.ticksPerCarrierPeriod * carrierPeriods;
   return {
     parameters: {
       modulation:
-        checkedModulation.method === 'sine-triangle'
-          ? { method: 'sine-triangle', scheme: checkedModulation.scheme, ma: checkedModulation.ma }
+        modulation.method === 'sine-triangle'
+          ? { method: 'sine-triangle', scheme: modulation.scheme, ma: modulation.ma }
           : {
               method: 'three-phase',
-              zeroSequence: checkedModulation.zeroSequence ?? 'none',
-              ma: checkedModulation.ma,
+              zeroSequence: modulation.zeroSequence ?? 'none',
+              ma: modulation.ma,
             },
-      fundamentalFrequency,
-      carrierFrequency,
-      sampling,
+      fundamentalFrequency: inputs.fundamentalFrequency,
+      carrierFrequency: inputs.carrierFrequency,
+      sampling: inputs.sampling,
       timerClock,
-      countingMode,
-      counterBits,
-      deadTime,
-      deadTimeMethod,
+      countingMode: inputs.countingMode,
+      counterBits: inputs.counterBits,
+      deadTime: inputs.deadTime,
+      deadTimeMethod: inputs.deadTimeMethod,
       tableLength,
       vdc,
     },
     units: UNITS,
-    conventions: conventionLines(countingMode, sampling, deadTimeMethod),
+    conventions: conventionLines(inputs.countingMode, inputs.sampling, inputs.deadTimeMethod),
     periodRegister: timing.periodRegister,
     fullScaleCounts: full,
     ticksPerCarrierPeriod: timing.ticksPerCarrierPeriod,
@@ -264,17 +83,15 @@ export function timerTable(options: TimerTableOptions): TimerTable {
     carrierPeriodsPerFundamental: carrierPeriods,
     updatesPerFundamental,
     updatesPerEntry: updatesPerFundamental / tableLength,
-    deadTimeCounts,
-    realisedDeadTime: deadTimeCounts / timerClock,
-    entryAngles,
-    channels,
+    deadTimeCounts: timing.deadTimeCounts,
+    realisedDeadTime: timing.deadTimeCounts / timerClock,
+    entryAngles: rows.entryAngles,
+    channels: rows.channels,
     quantisationStep: vdc / full,
-    maxQuantisationError: (maxError * vdc) / full,
+    maxQuantisationError: (rows.maxRoundingCounts * vdc) / full,
     warnings,
   };
 }
-
-const CHANNEL_NAMES = ['a', 'b', 'c'];
 
 const UNITS: Record<string, string> = {
   'modulation.ma': 'ratio (peak reference / (vdc/2))',
@@ -301,117 +118,6 @@ const UNITS: Record<string, string> = {
   maxQuantisationError: 'V',
 };
 
-function checkModulation(modulation: unknown): TimerModulation {
-  if (typeof modulation !== 'object' || modulation === null) {
-    throw new ParameterTypeError(
-      'modulation',
-      "an object { method: 'sine-triangle' | 'three-phase', ma, ... }",
-      modulation,
-    );
-  }
-  const m = modulation as Record<string, unknown>;
-  assertOneOf('modulation.method', m.method, ['sine-triangle', 'three-phase'] as const);
-  assertNumberInRange('modulation.ma', m.ma, { min: 0, minExclusive: true, max: 4 });
-  if (m.method === 'sine-triangle') {
-    assertOneOf('modulation.scheme', m.scheme, ['bipolar', 'unipolar'] as const);
-    return { method: 'sine-triangle', scheme: m.scheme, ma: m.ma };
-  }
-  const zeroSequence = m.zeroSequence ?? 'none';
-  assertOneOf('modulation.zeroSequence', zeroSequence, TIMER_ZERO_SEQUENCES);
-  return { method: 'three-phase', zeroSequence, ma: m.ma };
-}
-
-function integerRatio(carrierFrequency: number, fundamentalFrequency: number): number {
-  const ratio = carrierFrequency / fundamentalFrequency;
-  const rounded = Math.round(ratio);
-  if (rounded < 3 || Math.abs(ratio - rounded) > RATIO_TOLERANCE * ratio) {
-    throw new ParameterRangeError(
-      'carrierFrequency/fundamentalFrequency',
-      'an integer ≥ 3 (the table holds whole carrier periods per fundamental period)',
-      ratio,
-    );
-  }
-  return rounded;
-}
-
-interface PeriodTiming {
-  exactTicks: number;
-  ticksPerCarrierPeriod: number;
-  periodRegister: number;
-  fullScaleCounts: number;
-}
-
-function periodTiming(
-  mode: CountingMode,
-  clock: number,
-  carrier: number,
-  bits: number,
-): PeriodTiming {
-  const maxCount = 2 ** bits;
-  if (mode === 'edge-aligned') {
-    const exact = clock / carrier;
-    const ticks = Math.round(exact);
-    if (ticks > maxCount || ticks < MIN_PERIOD_COUNTS) {
-      throw new ParameterRangeError(
-        'timerClock/carrierFrequency',
-        `${MIN_PERIOD_COUNTS} to 2^${bits} = ${maxCount} counts for a ${bits}-bit edge-aligned counter (TOP = ticks − 1 ≤ ${maxCount - 1}); use a prescaler, a wider counter or another carrier frequency`,
-        exact,
-      );
-    }
-    return {
-      exactTicks: exact,
-      ticksPerCarrierPeriod: ticks,
-      periodRegister: ticks - 1,
-      fullScaleCounts: ticks,
-    };
-  }
-  const exactPeriod = clock / (2 * carrier);
-  const period = Math.round(exactPeriod);
-  if (period > maxCount - 1 || period < MIN_PERIOD_COUNTS) {
-    throw new ParameterRangeError(
-      'timerClock/(2·carrierFrequency)',
-      `${MIN_PERIOD_COUNTS} to ${maxCount - 1} counts for a ${bits}-bit centre-aligned counter (period register P ≤ 2^${bits} − 1); use a prescaler, a wider counter or another carrier frequency`,
-      exactPeriod,
-    );
-  }
-  return {
-    exactTicks: 2 * exactPeriod,
-    ticksPerCarrierPeriod: 2 * period,
-    periodRegister: period,
-    fullScaleCounts: period,
-  };
-}
-
-function realised(clock: number, ticks: number): number {
-  return clock / ticks;
-}
-
-/**
- * Pulses (high or low side) shorter than the dead time, counted per compare value: a high
- * pulse lasts compare·ticksPerCount ticks, a low one (full − compare)·ticksPerCount (exact for
- * symmetric sampling, the half-pulse pair for asymmetric).
- */
-function narrowPulseCount(
-  channels: TimerChannel[],
-  full: number,
-  ticksPerCount: number,
-  deadTimeCounts: number,
-): { count: number; shortest: number } {
-  let count = 0;
-  let shortest = Infinity;
-  for (const channel of channels) {
-    for (const c of channel.compare) {
-      for (const width of [c * ticksPerCount, (full - c) * ticksPerCount]) {
-        if (width > 0 && width < deadTimeCounts) {
-          count++;
-          shortest = Math.min(shortest, width);
-        }
-      }
-    }
-  }
-  return { count, shortest };
-}
-
 function conventionLines(
   mode: CountingMode,
   sampling: string,
@@ -437,13 +143,4 @@ function conventionLines(
     'Dead-time ticks are rounded up, so the realised dead time is never shorter than requested.',
   );
   return lines;
-}
-
-function describeChannel(modulation: TimerModulation, k: number): string {
-  if (modulation.method === 'three-phase')
-    return `leg ${'abc'[k]} (phase ${'abc'[k]}, reference at −${2 * k}π/3)`;
-  if (modulation.scheme === 'bipolar') {
-    return "leg A; drive leg B high side from this channel's low-side output and leg B low side from its high-side output (diagonal pairs switch together)";
-  }
-  return k === 0 ? 'leg A, reference +ma·sin θ' : 'leg B, reference −ma·sin θ';
 }
