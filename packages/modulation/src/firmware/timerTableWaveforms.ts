@@ -40,6 +40,12 @@ export interface TimerTableWaveformOptions {
   currentSign?: (channel: number, theta: number) => number;
   /** Minimum pulse width applied to each channel's ideal gate pulses before dead time. */
   minimumPulse?: { width: number; action: NarrowPulseAction };
+  /**
+   * Device on-state voltage drops, volts ≥ 0 (threshold model, as `vce0` and `vf0` of an IGBT):
+   * the conducting transistor takes `transistor` and the conducting diode `diode` from the leg
+   * voltage, in the direction that opposes the current. @default none (ideal switches)
+   */
+  onStateDrop?: { transistor: number; diode: number };
 }
 
 /** Result of {@link timerTableWaveforms}. */
@@ -78,7 +84,13 @@ export function timerTableWaveforms(
     currentAngle = 0,
     currentSign,
     minimumPulse,
+    onStateDrop,
   } = options;
+  if (onStateDrop !== undefined) {
+    assertNumberInRange('onStateDrop.transistor', onStateDrop.transistor, { min: 0, max: 1e4 });
+    assertNumberInRange('onStateDrop.diode', onStateDrop.diode, { min: 0, max: 1e4 });
+  }
+  const drops = onStateDrop ?? { transistor: 0, diode: 0 };
   assertOneOf('counts', counts, ['quantised', 'ideal'] as const);
   assertNumberInRange('currentAngle', currentAngle, { min: -1e6, max: 1e6 });
   if (currentSign !== undefined && typeof currentSign !== 'function') {
@@ -134,7 +146,7 @@ export function timerTableWaveforms(
       currentSign === undefined
         ? [0, 1].map((n) => (period * ((((phase + n * Math.PI) / TAU) % 1) + 1)) % period)
         : [];
-    return legWaveform(high, low, crossings, period, vdc, sign);
+    return legWaveform(high, low, crossings, period, { vdc, sign, drops });
   });
   return { legs, ...outputsOf(table, legs), adjustedPulses };
 }
@@ -163,14 +175,26 @@ function idealGate(table: TimerTable, values: readonly number[], period: number)
   return mergeCyclic(raw, period);
 }
 
+/**
+ * A leg's voltage from its switches' on-intervals and the current's sign. While neither switch is
+ * on, the diode the current forces on sets the leg (out of the leg, > 0: the lower diode, the
+ * negative rail; into it: the upper). The conducting device's on-state drop opposes the current:
+ * out of the leg the leg sits a transistor drop below the positive rail or a diode drop below the
+ * negative one; into the leg a diode drop above the positive rail or a transistor drop above the
+ * negative one.
+ */
 function legWaveform(
   high: readonly Interval[],
   low: readonly Interval[],
   crossings: readonly number[],
   period: number,
-  vdc: number,
-  sign: (theta: number) => number,
+  leg: {
+    vdc: number;
+    sign: (theta: number) => number;
+    drops: { transistor: number; diode: number };
+  },
 ): Waveform {
+  const { vdc, sign, drops } = leg;
   const points = [0, ...high.flat(), ...low.flat(), ...crossings]
     .filter((t) => t >= 0 && t < period)
     .sort((a, b) => a - b);
@@ -185,13 +209,18 @@ function legWaveform(
     const lowOn = insidePieces(low, middle);
     if (highOn && lowOn)
       throw new Error(`internal error: both switches of a leg on at tick ${middle}`);
-    let level: number;
-    if (highOn) level = vdc / 2;
-    else if (lowOn) level = -vdc / 2;
-    else {
-      const s = sign((TAU * middle) / period);
-      level = s > 0 ? -vdc / 2 : s < 0 ? vdc / 2 : 0;
-    }
+    const s = sign((TAU * middle) / period);
+    // Which rail the leg is on: the switch that is on, else the diode the current forces on.
+    const upper = highOn || (!lowOn && s < 0);
+    const lower = lowOn || (!highOn && s > 0);
+    // The conducting device: a transistor when its switch is on and the current goes its way.
+    const transistor = (highOn && s > 0) || (lowOn && s < 0);
+    const drop = s === 0 ? 0 : transistor ? drops.transistor : drops.diode;
+    const level = upper
+      ? vdc / 2 - Math.sign(s) * drop
+      : lower
+        ? -vdc / 2 - Math.sign(s) * drop
+        : 0;
     return { angle: (TAU * t) / period, level };
   });
   return waveformFromTransitions(transitions);
