@@ -1,15 +1,18 @@
 /**
  * Benchmark (not a test), issue 11's throughput item: in one run, a bare `node:http` server doing
  * the same library call and serialisation as `POST /api/v1/spectra` (bipolar sine-triangle,
- * mf 21, maxOrder 1050), then the service's own route through its whole stack (helmet, JSON
- * parsing, OpenAPI request validation, API-key authentication against SQLite, the cost model,
- * serialisation; response validation as in production, off; and once more with it on), under autocannon with 50
- * connections for the same time on 127.0.0.1. Prints requests per second, p99 latency, errors and
+ * mf 21, maxOrder 1050), and the service's own route through its whole stack (helmet, JSON
+ * parsing, OpenAPI request validation, API-key authentication (verified against SQLite once,
+ * then from the credential cache while the credential epoch holds), the cost model,
+ * serialisation; response validation as in production, off; and once more with it on), under
+ * autocannon with 50 connections for the same time on 127.0.0.1. Prints requests per second, p99 latency, errors and
  * the ratios service ÷ bare. Issue 11's goal: at least 70 % of the bare server's requests per
  * second with p99 at most twice the bare server's, no errors. No timing is asserted.
  *
  * Run: `npx tsx bench/throughput.ts` (after `npx turbo run build --filter=@pulsewright/api`);
- * THROUGHPUT_SECONDS (default 5) and THROUGHPUT_CONNECTIONS (default 50).
+ * THROUGHPUT_SECONDS (default 5) a load, THROUGHPUT_ROUNDS (default 3) rounds of them taken in
+ * turn (bare, service, service with response validation, …), THROUGHPUT_CONNECTIONS (default 50);
+ * THROUGHPUT_COMPARE_API=<another build's apps/api/dist/app.js> adds that build's figures.
  */
 import { mkdtempSync, rmSync } from 'node:fs';
 import { createServer, type Server } from 'node:http';
@@ -22,6 +25,7 @@ import { createApp } from '@pulsewright/api';
 import { printTable } from './measure.js';
 
 const SECONDS = Number(process.env.THROUGHPUT_SECONDS ?? 5);
+const ROUNDS = Number(process.env.THROUGHPUT_ROUNDS ?? 3);
 const CONNECTIONS = Number(process.env.THROUGHPUT_CONNECTIONS ?? 50);
 const BODY = JSON.stringify({
   modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.9, mf: 21, vdc: 400 },
@@ -33,6 +37,8 @@ interface Run {
   p99: number;
   errors: number;
   non2xx: number;
+  /** Answers by status code, e.g. `200: 980, 503: 20`. */
+  statuses: string;
 }
 
 async function listen(server: Server): Promise<number> {
@@ -55,14 +61,24 @@ async function load(url: string, headers: Record<string, string>): Promise<Run> 
     p99: result.latency.p99,
     errors: result.errors + result.timeouts,
     non2xx: result.non2xx,
+    statuses: Object.entries(result.statusCodeStats ?? {})
+      .map(([code, { count }]) => `${code}: ${count}`)
+      .join(', '),
   };
+}
+
+/** A server under test: where to send the load, with which headers, and how to stop it. */
+interface Target {
+  url: string;
+  headers: Record<string, string>;
+  close(): Promise<void>;
 }
 
 /**
  * The same work as the route: the bridge voltage and its figures from the same library call
  * (voltageFigures: spectrum, exact THD and WTHD), in the route's shape, as JSON.
  */
-async function bare(): Promise<Run> {
+async function bare(): Promise<Target> {
   const server = createServer((req, res) => {
     const chunks: Buffer[] = [];
     req.on('data', (chunk: Buffer) => chunks.push(chunk));
@@ -87,16 +103,20 @@ async function bare(): Promise<Run> {
     });
   });
   const port = await listen(server);
-  try {
-    return await load(`http://127.0.0.1:${port}/`, {});
-  } finally {
-    await new Promise<void>((resolve) => server.close(() => resolve()));
-  }
+  return {
+    url: `http://127.0.0.1:${port}/`,
+    headers: {},
+    close: () => new Promise<void>((resolve) => server.close(() => resolve())),
+  };
 }
 
-async function service(validateResponses: boolean): Promise<Run> {
+/** The service's createApp, or that of another build given by THROUGHPUT_COMPARE_API. */
+type CreateApp = typeof createApp;
+
+/** The service on a fresh SQLite file, called with a viewer's API key as a script would. */
+async function service(validateResponses: boolean, build: CreateApp = createApp): Promise<Target> {
   const dir = mkdtempSync(path.join(tmpdir(), 'pulsewright-throughput-'));
-  const app = await createApp({
+  const app = await build({
     databaseUrl: `sqlite:${path.join(dir, 'bench.sqlite')}`,
     bcryptRounds: 4,
     webDist: path.join(dir, 'no-web'),
@@ -104,34 +124,74 @@ async function service(validateResponses: boolean): Promise<Run> {
   });
   const server = createServer(app);
   const port = await listen(server);
-  try {
-    const login = await fetch(`http://127.0.0.1:${port}/api/v1/auth/login`, {
-      method: 'POST',
-      headers: { 'content-type': 'application/json' },
-      body: JSON.stringify({ email: 'engineer@kestrel.example', password: 'pulsewright-demo' }),
-    });
-    const { token } = (await login.json()) as { token: string };
-    const made = await fetch(`http://127.0.0.1:${port}/api/v1/api-keys`, {
-      method: 'POST',
-      headers: { 'content-type': 'application/json', authorization: `Bearer ${token}` },
-      body: JSON.stringify({ name: 'throughput', role: 'viewer' }),
-    });
-    const { key } = (await made.json()) as { key: string };
-    return await load(`http://127.0.0.1:${port}/api/v1/spectra`, {
-      authorization: `Bearer ${key}`,
-    });
-  } finally {
-    await new Promise<void>((resolve) => server.close(() => resolve()));
-    await app.close();
-    rmSync(dir, { recursive: true, force: true });
-  }
+  const login = await fetch(`http://127.0.0.1:${port}/api/v1/auth/login`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email: 'engineer@kestrel.example', password: 'pulsewright-demo' }),
+  });
+  const { token } = (await login.json()) as { token: string };
+  const made = await fetch(`http://127.0.0.1:${port}/api/v1/api-keys`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', authorization: `Bearer ${token}` },
+    body: JSON.stringify({ name: 'throughput', role: 'viewer' }),
+  });
+  const { key } = (await made.json()) as { key: string };
+  return {
+    url: `http://127.0.0.1:${port}/api/v1/spectra`,
+    headers: { authorization: `Bearer ${key}` },
+    async close() {
+      await new Promise<void>((resolve) => server.close(() => resolve()));
+      await app.close();
+      rmSync(dir, { recursive: true, force: true });
+    },
+  };
 }
 
-const base = await bare();
-const full = await service(false);
-const checked = await service(true);
+/**
+ * The targets' loads in ROUNDS rounds, one target after another within each round, so that a
+ * change in the machine's other work falls on all of them alike; requests per second over all
+ * rounds, p99 the median of the rounds' p99, errors and statuses summed.
+ */
+async function interleaved(targets: Target[]): Promise<Run[]> {
+  const runs: Run[][] = targets.map(() => []);
+  for (let round = 0; round < ROUNDS; round++) {
+    for (const [index, target] of targets.entries())
+      runs[index]!.push(await load(target.url, target.headers));
+  }
+  return runs.map((rounds) => {
+    const p99s = rounds.map((r) => r.p99).sort((x, y) => x - y);
+    return {
+      rps: rounds.reduce((sum, r) => sum + r.rps, 0) / rounds.length,
+      p99: p99s[Math.floor(p99s.length / 2)]!,
+      errors: rounds.reduce((sum, r) => sum + r.errors, 0),
+      non2xx: rounds.reduce((sum, r) => sum + r.non2xx, 0),
+      statuses: rounds.map((r) => r.statuses).join('; '),
+    };
+  });
+}
+
+// Another build's apps/api/dist/app.js (e.g. the commit before a change), measured in the same
+// run for a before/after figure; without it that row is left out.
+const COMPARE = process.env.THROUGHPUT_COMPARE_API;
+const compareBuild = COMPARE
+  ? ((await import(path.resolve(COMPARE))) as { createApp: CreateApp }).createApp
+  : undefined;
+
+const targets = [
+  await bare(),
+  await service(false),
+  await service(true),
+  ...(compareBuild ? [await service(false, compareBuild)] : []),
+];
+const [base, full, checked, compared] = (await interleaved(targets)) as [
+  Run,
+  Run,
+  Run,
+  Run | undefined,
+];
+for (const target of targets) await target.close();
 printTable(
-  `POST /api/v1/spectra (mf 21, maxOrder 1050) against a bare node:http server doing the same work, ${CONNECTIONS} connections, ${SECONDS} s each`,
+  `POST /api/v1/spectra (mf 21, maxOrder 1050) against a bare node:http server doing the same work, ${CONNECTIONS} connections, ${ROUNDS} rounds of ${SECONDS} s each`,
   [
     ['bare server: requests per second, p99', `${base.rps.toFixed(0)}, ${base.p99} ms`],
     ['service: requests per second, p99', `${full.rps.toFixed(0)}, ${full.p99} ms`],
@@ -141,12 +201,20 @@ printTable(
     ],
     ['service ÷ bare, p99 (goal ≤ 2)', (full.p99 / base.p99).toFixed(1)],
     [
-      'errors and non-2xx (bare; service)',
-      `${base.errors + base.non2xx}; ${full.errors + full.non2xx}`,
+      'errors and non-2xx (bare; service), answers by status',
+      `${base.errors + base.non2xx}; ${full.errors + full.non2xx} (${full.statuses})`,
     ],
     [
       'service with response validation (development, tests): requests per second, p99',
       `${checked.rps.toFixed(0)}, ${checked.p99} ms`,
     ],
+    ...(compared
+      ? [
+          [
+            `THROUGHPUT_COMPARE_API build: requests per second, p99; ÷ bare`,
+            `${compared.rps.toFixed(0)}, ${compared.p99} ms; ${((100 * compared.rps) / base.rps).toFixed(0)} %, ${(compared.p99 / base.p99).toFixed(1)}`,
+          ] as [string, string],
+        ]
+      : []),
   ],
 );
