@@ -39,11 +39,14 @@ export function wholePeriods(
   const peak = samples.reduce((max, x) => Math.max(max, Math.abs(x)), 0);
   const tolerance = PERIODIC_TOLERANCE * peak;
   // A repetition is only seen when the capture holds it twice: q periods up to half the record.
-  for (let q = 1; 2 * q * perPeriod <= count + 1; q++) {
+  // The search stops after comparing 16 samples for each one captured, so a capture that repeats
+  // for long stretches without being periodic costs no more than a few passes over it.
+  const budget = { left: 16 * count };
+  for (let q = 1; 2 * q * perPeriod <= count + 1 && budget.left > 0; q++) {
     const centre = Math.round(q * perPeriod);
     for (const shift of [centre, centre - 1, centre + 1]) {
       if (shift < 1 || 2 * shift > count) continue;
-      if (repeatsAfter(samples, shift, tolerance)) {
+      if (repeatsAfter(samples, shift, tolerance, budget)) {
         const blocks = Math.floor(count / shift);
         return { length: blocks * shift, periods: blocks * q, periodic: true };
       }
@@ -57,9 +60,18 @@ export function wholePeriods(
   };
 }
 
-/** Whether x[i + shift] equals x[i] to `tolerance` for every i; stops at the first that does not. */
-function repeatsAfter(samples: readonly number[], shift: number, tolerance: number): boolean {
+/**
+ * Whether x[i + shift] equals x[i] to `tolerance` for every i; stops at the first that does not,
+ * or (false) when the comparisons left in `budget` run out.
+ */
+function repeatsAfter(
+  samples: readonly number[],
+  shift: number,
+  tolerance: number,
+  budget: { left: number },
+): boolean {
   for (let i = 0; i + shift < samples.length; i++) {
+    if (--budget.left < 0) return false;
     if (Math.abs((samples[i + shift] as number) - (samples[i] as number)) > tolerance) return false;
   }
   return true;

@@ -182,6 +182,18 @@ describe('fftSpectrum over whole periods (issue 10: the 10 000-sample square wav
     }
   });
 
+  it('bounds the search for a repetition: a capture flat for most of its length is not periodic', () => {
+    // 2^20 samples at zero with a burst at the end: every shift matches until the burst, so an
+    // unbounded search would compare ~N²/perPeriod samples; the budget ends it after 16·N.
+    const count = 2 ** 20;
+    const capture = Array.from({ length: count }, (_, i) =>
+      i < count - 500 ? 0 : Math.sin(0.3 * i),
+    );
+    const span = wholePeriods(capture, 1e6, 1e6 / 7);
+    expect(span.periodic).toBe(false);
+    expect(span.periods).toBe(Math.floor(count / 7));
+  });
+
   it('refuses an unknown length policy, naming the field', () => {
     expect(() => fftSpectrum(samples, sampleRate, { lengthPolicy: 'pad' as 'zero-pad' })).toThrow(
       /lengthPolicy must be one of/,
