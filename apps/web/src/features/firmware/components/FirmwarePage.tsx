@@ -1,4 +1,5 @@
 import { useMemo, useState } from 'react';
+import type { TimerZeroSequence } from '@pulsewright/modulation';
 import { SpectrumChart } from '../../../components/charts/SpectrumChart';
 import { Button } from '../../../components/ui/Button';
 import { NumberField, SelectField, TextField } from '../../../components/ui/Field';
@@ -6,15 +7,17 @@ import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState } from '../../../components/ui/QueryState';
 import { downloadText } from '../../../lib/download';
 import { formatNumber, formatPercent } from '../../../lib/format';
-import { buildTimerTable, effectSpectra, timerTableExports } from '../api/timerTables';
+import { TIMER_ZERO_SEQUENCE_OPTIONS } from '../../../lib/modulationOptions';
+import { buildTimerTable, effectSpectra, timerTableExports } from '../model/timerTables';
 import { timerFieldErrors, type TimerField } from '../model/timerFieldErrors';
+import { DeadTimeCompensationPanel } from './DeadTimeCompensationPanel';
 import { NetlistPanel } from './NetlistPanel';
 import { PatternTablePanel } from './PatternTablePanel';
 
 interface FormState {
   method: 'sine-triangle' | 'three-phase';
   scheme: 'bipolar' | 'unipolar';
-  zeroSequence: 'none' | 'third-harmonic' | 'min-max';
+  zeroSequence: TimerZeroSequence;
   ma: number;
   fundamentalFrequency: number;
   carrierFrequency: number;
@@ -120,11 +123,7 @@ export function FirmwarePage() {
                 onChange={(e) =>
                   setForm({ ...form, zeroSequence: e.target.value as FormState['zeroSequence'] })
                 }
-                options={[
-                  { value: 'none', label: 'None' },
-                  { value: 'third-harmonic', label: 'Third harmonic' },
-                  { value: 'min-max', label: 'Min-max' },
-                ]}
+                options={TIMER_ZERO_SEQUENCE_OPTIONS}
               />
             )}
             <NumberField
@@ -298,6 +297,7 @@ export function FirmwarePage() {
                 </div>
               </Panel>
               <NetlistPanel table={table} fileStem={stem} />
+              <DeadTimeCompensationPanel table={table} fileStem={stem} prefix={form.prefix} />
               <Panel title="Effect on the output">
                 <p className="text-sm">
                   Fundamental {formatNumber(outcome.effects.combined.referenceFundamental)} →{' '}

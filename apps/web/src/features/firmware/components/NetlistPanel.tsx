@@ -4,7 +4,7 @@ import { Button } from '../../../components/ui/Button';
 import { TextField } from '../../../components/ui/Field';
 import { Panel } from '../../../components/ui/Panel';
 import { downloadText } from '../../../lib/download';
-import { netlistOf } from '../api/timerTables';
+import { netlistOf } from '../model/timerTables';
 
 /** The netlist's options as typed, in the units shown (nanoseconds, volts, whole periods). */
 interface NetlistForm {

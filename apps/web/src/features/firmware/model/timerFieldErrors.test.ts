@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { buildTimerTable } from '../api/timerTables';
+import { buildTimerTable } from './timerTables';
 import { timerFieldErrors, type TimerField, type TimerNumbers } from './timerFieldErrors';
 
 const base: TimerNumbers = {

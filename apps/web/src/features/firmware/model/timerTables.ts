@@ -1,4 +1,5 @@
 import {
+  deadTimeCompensation,
   firmwareEffects,
   harmonics,
   labelHarmonics,
@@ -7,6 +8,7 @@ import {
   timerTableToCsv,
   timerTableToJson,
   timerTableToSpiceNetlist,
+  type DeadTimeCompensation,
   type FirmwareEffects,
   type SpiceNetlistOptions,
   type TimerTable,
@@ -76,4 +78,27 @@ export function effectSpectra(effect: FirmwareEffects['combined'], mf: number) {
     reference: labelHarmonics(harmonics(effect.reference, effect.maxOrder), mf),
     realised: labelHarmonics(harmonics(effect.realised, effect.maxOrder), mf),
   };
+}
+
+/**
+ * The table corrected for its dead time by the sign of the current predicted at a lag of
+ * `currentAngle` (the library's `deadTimeCompensation`, Murai et al. 1987), with the first
+ * output's figures without dead time, with it and corrected; or the library's error naming the
+ * option.
+ */
+export function compensationOf(
+  table: TimerTable,
+  currentAngle: number,
+):
+  | { result: DeadTimeCompensation; error: null }
+  | { result: null; error: { field: string; message: string } } {
+  try {
+    return { result: deadTimeCompensation(table, { currentAngle }), error: null };
+  } catch (error) {
+    const field = (error as { field?: string }).field ?? 'currentAngle';
+    return {
+      result: null,
+      error: { field, message: error instanceof Error ? error.message : String(error) },
+    };
+  }
 }
