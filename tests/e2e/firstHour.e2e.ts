@@ -6,7 +6,7 @@
  * bench capture compared with a study. Screenshots of each page land in tests/e2e/screenshots/.
  */
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import type { Page } from 'playwright-core';
@@ -169,6 +169,20 @@ export const scenarios: Scenario[] = [
       await page.getByLabel('Damping', { exact: true }).selectOption('parallel-rc');
       await box(page, /^Damping R/).fill('2');
       await box(page, /^Damping C/).fill('10');
+      // Size L from a resonance target: 1/((2π·1 kHz)²·15 µF) = 1.68869 mH written into Filter L.
+      await page.getByLabel('Filter L from').selectOption('resonance');
+      await box(page, /^Resonance target/).fill('1000');
+      const sized = Number(await box(page, /^Filter L/).inputValue());
+      assert(
+        Math.abs(sized - 1e3 / ((2 * Math.PI * 1000) ** 2 * 15e-6)) < 1e-6,
+        `Filter L follows the resonance target (got ${sized} mH)`,
+      );
+      await page
+        .getByTestId('filter-resonance')
+        .getByText(/Resonance 1000 Hz/)
+        .waitFor();
+      await page.getByLabel('Filter L from').selectOption('typed');
+      await box(page, /^Filter L/).fill('1.5');
       const save = page.getByRole('button', { name: 'Create study' });
       await page.getByTestId('filter-resonance').waitFor();
       await page
@@ -278,6 +292,57 @@ export const scenarios: Scenario[] = [
         'the picked range tops the THD axis at 150 %',
       );
       await screenshot(page, 'first-hour-sweep-range');
+      await page.close();
+    },
+  },
+  {
+    name: 'first hour: controller tables — a name prefix, a slow timer clock refused on its own field, a clean C header',
+    async run(context) {
+      const { page } = await newPage(context);
+      await signIn(page, context.baseUrl, 'engineer@kestrel.example');
+      await page.getByRole('link', { name: 'Controller tables' }).click();
+      await page
+        .getByLabel(/^Name prefix/)
+        .first()
+        .fill('kestrel_drive');
+      const [download] = await Promise.all([
+        page.waitForEvent('download'),
+        page.getByRole('button', { name: 'C header' }).click(),
+      ]);
+      const dir = mkdtempSync(path.join(tmpdir(), 'pulsewright-header-'));
+      try {
+        const file = path.join(dir, 'table.h');
+        await download.saveAs(file);
+        const header = readFileSync(file, 'utf8');
+        assert(
+          download.suggestedFilename() === 'kestrel_drive.h',
+          'the file is named by the prefix',
+        );
+        assert(
+          header.includes('static const uint16_t kestrel_drive_a_high[KESTREL_DRIVE_LENGTH]'),
+          'the arrays and macros carry the prefix',
+        );
+        // 500 ns typed in ns: printed as 500 ns, never 5.000000000000001e-7 s.
+        assert(/deadTime\s+500 ns requested/.test(header), 'the dead time prints cleanly in ns');
+        assert(!/\d[\d.]{15,}/.test(header), 'no number printed with binary rounding');
+      } finally {
+        rmSync(dir, { recursive: true, force: true });
+      }
+      // A 1 kHz timer clock cannot run a 10 kHz carrier: the timer clock, typed last, says so.
+      const clock = box(page, /^Timer clock/).first();
+      await clock.fill('1000');
+      await page.locator(`[id="${await clock.getAttribute('id')}"][aria-invalid="true"]`).waitFor();
+      const described = (await clock.getAttribute('aria-describedby')) ?? '';
+      const message = (await page.locator(`[id="${described}"]`).textContent())?.trim();
+      assert(
+        message === 'Timer clock must be at least twice the carrier, 20,000 Hz (entered 1,000 Hz)',
+        `the timer clock carries its message (got ${message})`,
+      );
+      assert(
+        !(await box(page, /^Carrier/).getAttribute('aria-invalid')),
+        'the carrier field is not marked',
+      );
+      await screenshot(page, 'first-hour-controller-tables');
       await page.close();
     },
   },
