@@ -14,10 +14,6 @@ export interface Principal {
 
 const RANK: Record<Role, number> = { viewer: 0, engineer: 1, admin: 2 };
 
-export function roleRank(role: Role): number {
-  return RANK[role];
-}
-
 export function roleAtLeast(role: Role, required: Role): boolean {
   return RANK[role] >= RANK[required];
 }

@@ -64,13 +64,17 @@ describe('overmodulation (Holtz, Lotzkat, Khambadkone, IEEE Trans. Power Electro
   });
 
   it('keeps every shaped vector inside the hexagon so spaceVector realises it', () => {
-    // A single switching period realises only vectors inside the hexagon: t0 ≥ 0 (van der
-    // Broeck et al. 1988).
+    // A single switching period realises only vectors inside the hexagon (van der Broeck et al.
+    // 1988). spaceVector clamps t0 at 0, so t0 ≥ 0 alone could not fail: the vector itself is
+    // checked against the hexagon, whose edge at angle α from a sector's start lies at
+    // 1/cos(α − π/6) for an inscribed circle of radius 1 (plane geometry), to 1e-9.
     for (const m of [1.02, 1.07, SIX_STEP_M]) {
       const setting = overmodulationSetting(m);
       for (let theta = 0; theta < TAU; theta += 0.013) {
-        const { t0 } = spaceVector(applyOvermodulation(setting, theta));
-        expect(t0).toBeGreaterThanOrEqual(0);
+        const shaped = applyOvermodulation(setting, theta);
+        const alpha = ((shaped.theta % (Math.PI / 3)) + Math.PI / 3) % (Math.PI / 3);
+        expect(shaped.m).toBeLessThanOrEqual(1 / Math.cos(alpha - Math.PI / 6) + 1e-9);
+        expect(() => spaceVector(shaped)).not.toThrow();
       }
     }
     // Mode II and six-step put the vector on the hexagon: no zero-vector time at all.
