@@ -16,6 +16,7 @@ import {
 } from '../../../lib/api';
 import { formatNumber, formatPercent } from '../../../lib/format';
 import { patternFigures, type SolvedPattern } from '../model/eliminationForm';
+import { CompareEventsPanel } from './CompareEventsPanel';
 import type { SweepPoint } from './useEliminationSweep';
 
 /** The fundamental frequency a saved pattern study starts with, hertz (edited in the study). */
@@ -235,6 +236,7 @@ function PickedPoint({ pattern, point }: { pattern: SolvedPattern; point: SweepP
         fileName="pattern-point-spectrum"
         labelThreshold={2}
       />
+      <CompareEventsPanel pattern={pattern} angles={point.angles} />
     </>
   );
 }
