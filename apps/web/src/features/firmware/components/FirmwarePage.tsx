@@ -311,6 +311,7 @@ export function FirmwarePage() {
                 <SpectrumChart
                   title="Spectrum: ideal against the table"
                   fileName={`${stem}-spectrum`}
+                  fundamentalFrequency={table.realisedFundamentalFrequency}
                   series={[
                     {
                       name: 'Ideal duties',
