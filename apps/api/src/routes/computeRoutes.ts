@@ -16,11 +16,8 @@ export function computeRoutes(services: Services): Router {
   const { compute, jobs } = services;
 
   router.post('/api/v1/spectra', async (req, res) => {
-    const result = await compute.spectrum(
-      req.body.modulation,
-      req.body.maxOrder ?? 100,
-      req.body.output,
-    );
+    // maxOrder's default (100) is the document's; the validator has filled it in.
+    const result = await compute.spectrum(req.body.modulation, req.body.maxOrder, req.body.output);
     sendData(req, res, result, spectrumCsv);
   });
   router.post('/api/v1/waveforms', async (req, res) => {
@@ -70,8 +67,7 @@ export function computeRoutes(services: Services): Router {
     );
   });
   router.post('/api/v1/jobs/ma-sweeps', async (req, res) => {
-    const input = { ...req.body, maxOrder: req.body.maxOrder ?? 100 };
-    res.status(202).json(await jobs.start(principalOf(req), input, maSweepPlan(input)));
+    res.status(202).json(await jobs.start(principalOf(req), req.body, maSweepPlan(req.body)));
   });
   router.post('/api/v1/jobs/she-sweeps', async (req, res) => {
     res.status(202).json(await jobs.start(principalOf(req), req.body, sheSweepPlan(req.body)));
