@@ -17,6 +17,7 @@ import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState, QueryView } from '../../../components/ui/QueryState';
 import { rangeError, rangeText } from '../../../lib/fieldRange';
 import { formatDate } from '../../../lib/format';
+import { LossSweepPanel } from './LossSweepPanel';
 import { SweepCharts } from './SweepCharts';
 import {
   METHOD_OPTIONS,
@@ -260,6 +261,9 @@ export function SweepsPage() {
             </QueryView>
           </Panel>
         </div>
+      </div>
+      <div className="mt-6">
+        <LossSweepPanel />
       </div>
     </div>
   );
