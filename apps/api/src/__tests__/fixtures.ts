@@ -232,6 +232,41 @@ export const FIXTURES: Record<string, Fixture> = {
       fundamental: { from: 30, to: 60, points: 3 },
     },
   }),
+  createOptimalSweep: () => ({
+    path: '/api/v1/jobs/optimal-sweeps',
+    body: {
+      kind: 'bipolar',
+      vdc: 100,
+      count: 2,
+      maxOrder: 19,
+      fundamental: { from: 40, to: 60, points: 3 },
+    },
+  }),
+  computeAngleTable: () => ({
+    path: '/api/v1/angle-tables',
+    query: { format: 'csv' },
+    body: {
+      pattern: {
+        method: 'selective-harmonic-elimination',
+        kind: 'bipolar',
+        vdc: 100,
+        eliminate: [5],
+      },
+      ma: { from: 0.3, to: 0.6 },
+      rows: 3,
+      timerClock: 16000000,
+      fundamentalFrequency: 50,
+    },
+  }),
+  computePatternCompareEvents: () => ({
+    path: '/api/v1/pattern-compare-events',
+    body: {
+      pattern: { kind: 'bipolar', vdc: 100, angles: [0.3, 0.6] },
+      fundamentalFrequency: 50,
+      timerClock: 16000000,
+      deadTime: 1e-6,
+    },
+  }),
   getJob: ({ ids }) => ({ path: `/api/v1/jobs/${ids.jobId}` }),
   listProjects: () => ({ path: '/api/v1/projects', query: { q: 'pump' } }),
   createProject: () => ({ path: '/api/v1/projects', body: { name: 'Table project' } }),
