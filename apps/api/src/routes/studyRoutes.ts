@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { intQuery, numberQuery, optionalIntQuery } from '../http/query.js';
 import { principalOf } from '../auth/authorize.js';
 import { sendData } from '../http/sendData.js';
-import { spectrumCsv } from '../services/csvExports.js';
+import { reportSpectraCsv, spectrumCsv } from '../services/csvExports.js';
 import type { Services } from '../services/index.js';
 
 /** Projects and studies (every study edit is a new revision). */
@@ -76,13 +76,12 @@ export function studyRoutes(services: Services): Router {
     const points = optionalIntQuery(req, 'points', 1200);
     const busVoltage = numberQuery(req, 'busVoltage');
     const study = await studies.get(principalOf(req).teamId, req.params.id);
-    res.json(
-      await compute.report(study.design, {
-        ...(maxOrder !== undefined ? { maxOrder } : {}),
-        ...(points !== undefined ? { points } : {}),
-        ...(busVoltage !== undefined ? { busVoltage } : {}),
-      }),
-    );
+    const report = await compute.report(study.design, {
+      ...(maxOrder !== undefined ? { maxOrder } : {}),
+      ...(points !== undefined ? { points } : {}),
+      ...(busVoltage !== undefined ? { busVoltage } : {}),
+    });
+    sendData(req, res, report, reportSpectraCsv);
   });
   return router;
 }

@@ -1,4 +1,5 @@
 import { stringify } from 'csv-stringify/sync';
+import type { DesignReport } from '@pulsewright/modulation';
 import type { SpectrumResult, WaveformResult } from './compute.js';
 
 /**
@@ -40,6 +41,32 @@ export function waveformCsv(result: WaveformResult): string {
         i,
         angle,
         trace.waveform.levels[i] as number,
+      ]),
+    ),
+  ]);
+}
+
+/**
+ * The spectra of a design report as CSV, one row per order of each voltage the report analyses
+ * (the bridge, the line-to-line voltage of a three-phase bridge, the filter's output): the
+ * voltage's name, the order, its carrier-group label, its frequency (order × the fundamental,
+ * hertz), amplitude (peak volts) and phase (radians), as the report's `spectrum` arrays. The
+ * report's single figures (THD, currents, limit check) stay in the JSON answer.
+ */
+export function reportSpectraCsv(report: DesignReport): string {
+  const voltages = [report.bridge, report.lineToLine, report.output].filter(
+    (v): v is NonNullable<typeof v> => v !== null,
+  );
+  return csv([
+    ['voltage', 'order', 'label', 'frequency_Hz', 'amplitude_V_peak', 'phase_rad'],
+    ...voltages.flatMap((v) =>
+      v.spectrum.map((h) => [
+        v.name,
+        h.order,
+        h.label,
+        h.order * report.fundamentalFrequency,
+        h.amplitude,
+        h.phase,
       ]),
     ),
   ]);

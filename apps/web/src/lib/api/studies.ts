@@ -163,9 +163,11 @@ export async function getStudyReport(
   id: string,
   options: StudyReportOptions = {},
 ): Promise<StudyReport> {
+  // The route answers the report's spectra as CSV with ?format=csv; without it (json, the
+  // default) the body is the report.
   return unwrap(
     await api.GET('/api/v1/studies/{id}/report', { params: { path: { id }, query: options } }),
-  );
+  ) as StudyReport;
 }
 /** The report of a study's current revision; a save of that study refetches it. */
 export const studyReportQueryOptions = (id: string, options: StudyReportOptions = {}) =>
