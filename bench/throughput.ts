@@ -39,6 +39,12 @@ interface Run {
   non2xx: number;
   /** Answers by status code, e.g. `200: 980, 503: 20`. */
   statuses: string;
+  /**
+   * CPU time of this process (every thread, the load generator's share included) per answer,
+   * ms: what bounds requests per second on an idle machine, and steadier than them on a busy
+   * one, where the process gets a changing share of the cores.
+   */
+  cpuMs: number;
 }
 
 async function listen(server: Server): Promise<number> {
@@ -48,6 +54,7 @@ async function listen(server: Server): Promise<number> {
 }
 
 async function load(url: string, headers: Record<string, string>): Promise<Run> {
+  const cpu = process.cpuUsage();
   const result = await autocannon({
     url,
     method: 'POST',
@@ -56,7 +63,9 @@ async function load(url: string, headers: Record<string, string>): Promise<Run> 
     connections: CONNECTIONS,
     duration: SECONDS,
   });
+  const used = process.cpuUsage(cpu);
   return {
+    cpuMs: (used.user + used.system) / 1000 / Math.max(1, result.requests.total),
     rps: result.requests.average,
     p99: result.latency.p99,
     errors: result.errors + result.timeouts,
@@ -166,6 +175,7 @@ async function interleaved(targets: Target[]): Promise<Run[]> {
       errors: rounds.reduce((sum, r) => sum + r.errors, 0),
       non2xx: rounds.reduce((sum, r) => sum + r.non2xx, 0),
       statuses: rounds.map((r) => r.statuses).join('; '),
+      cpuMs: rounds.reduce((sum, r) => sum + r.cpuMs, 0) / rounds.length,
     };
   });
 }
@@ -201,6 +211,10 @@ printTable(
     ],
     ['service ÷ bare, p99 (goal ≤ 2)', (full.p99 / base.p99).toFixed(1)],
     [
+      'CPU ms per answer, bare; service; bare ÷ service (the requests/s ratio of an idle machine)',
+      `${base.cpuMs.toFixed(2)}; ${full.cpuMs.toFixed(2)}; ${((100 * base.cpuMs) / full.cpuMs).toFixed(0)} %`,
+    ],
+    [
       'errors and non-2xx (bare; service), answers by status',
       `${base.errors + base.non2xx}; ${full.errors + full.non2xx} (${full.statuses})`,
     ],
@@ -211,8 +225,8 @@ printTable(
     ...(compared
       ? [
           [
-            `THROUGHPUT_COMPARE_API build: requests per second, p99; ÷ bare`,
-            `${compared.rps.toFixed(0)}, ${compared.p99} ms; ${((100 * compared.rps) / base.rps).toFixed(0)} %, ${(compared.p99 / base.p99).toFixed(1)}`,
+            `THROUGHPUT_COMPARE_API build: requests per second, p99; ÷ bare; CPU ms per answer, bare ÷ it`,
+            `${compared.rps.toFixed(0)}, ${compared.p99} ms; ${((100 * compared.rps) / base.rps).toFixed(0)} %, ${(compared.p99 / base.p99).toFixed(1)}; ${compared.cpuMs.toFixed(2)}, ${((100 * base.cpuMs) / compared.cpuMs).toFixed(0)} %`,
           ] as [string, string],
         ]
       : []),
