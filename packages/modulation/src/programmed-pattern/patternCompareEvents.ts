@@ -56,7 +56,8 @@ export interface DeviceEvents {
 export interface PatternOutputFigures {
   /** Fundamental in phase with sin θ, peak volts (b₁). */
   fundamental: number;
-  orders: { order: number; amplitude: number; relative: number }[];
+  /** Each order's amplitude, peak volts, and its ratio to |fundamental| (null when the fundamental is zero, e.g. every edge rounded onto one tick). */
+  orders: { order: number; amplitude: number; relative: number | null }[];
 }
 
 /** The outcome of {@link patternCompareEvents}. */
@@ -108,7 +109,8 @@ interface Leg {
  * devices of a leg are off, the leg follows the load current's diode: low when the current
  * flows out of the leg, high when it flows in (the average-value picture of Murai et al., IEEE
  * Trans. Ind. Appl. 1987, made exact edge by edge), with the current's sign taken at the edge.
- * A pulse shorter than the dead time vanishes and is named in `warnings`.
+ * A pulse shorter than the dead time, or rounded to zero width, vanishes and is named in
+ * `warnings`.
  *
  * @throws ParameterRangeError / ParameterTypeError naming the field: `kind`, `vdc`, `angles`,
  *   `fundamentalFrequency`, `timerClock` (fewer than 4 or more than 2^32 − 1 ticks a period),
@@ -164,8 +166,11 @@ export function patternCompareEvents(
       ])
       .filter(([rise, fall], i) => {
         if (fall > rise) return true;
+        const [start, end] = ticks[i] as [number, number];
+        const why =
+          end === start ? 'rounds to zero width on the timer' : 'is shorter than the dead time';
         warnings.push(
-          `${leg.name}: the pulse at tick ${(ticks[i] as [number, number])[0] % ticksPerPeriod} is shorter than the dead time and vanishes`,
+          `${leg.name}: the pulse at tick ${start % ticksPerPeriod} ${why} and vanishes`,
         );
         return false;
       });
@@ -187,7 +192,11 @@ export function patternCompareEvents(
       fundamental,
       orders: orders.map((order) => {
         const amplitude = spectrum[order]?.amplitude ?? 0;
-        return { order, amplitude, relative: amplitude / Math.abs(fundamental) };
+        return {
+          order,
+          amplitude,
+          relative: fundamental === 0 ? null : amplitude / Math.abs(fundamental),
+        };
       }),
     };
   };

@@ -104,6 +104,30 @@ describe('patternCompareEvents', () => {
     );
   });
 
+  it('names the pulses that rounding or the dead time swallows', () => {
+    // Angles 0.1 and 0.2 rad on a timer of 4 ticks a period (0.1 and 0.2 rad are 0.06 and
+    // 0.13 of a tick): both edges of the pulse between them round to tick 0 (by hand).
+    const coarse = patternCompareEvents(
+      { kind: 'bipolar', vdc: 100, angles: [0.1, 0.2] },
+      { fundamentalFrequency: 50, timerClock: 200 },
+    );
+    expect(coarse.warnings.some((w) => /rounds to zero width/.test(w))).toBe(true);
+    // A 2-tick high pulse of leg B (between angles 100 and 102 ticks of 3600) with a 4-tick dead
+    // time, the current reversed (currentAngle π) so that it flows out of leg B there: its rise is
+    // late by 4 ticks, past its fall (the conventions of the function, by hand).
+    const tick = (2 * Math.PI) / 3600;
+    const narrow = patternCompareEvents(
+      { kind: 'bipolar', vdc: 100, angles: [100 * tick, 102 * tick] },
+      {
+        fundamentalFrequency: 50,
+        timerClock: 180_000,
+        deadTime: 4 / 180_000,
+        currentAngle: Math.PI,
+      },
+    );
+    expect(narrow.warnings.some((w) => /shorter than the dead time/.test(w))).toBe(true);
+  });
+
   it('bad input names the field', () => {
     const pattern = { kind: 'bipolar' as const, vdc: 300, angles: [0.2, 0.5] };
     expect(
