@@ -75,11 +75,11 @@ export function DeadTimeCompensationPanel({
       {result ? (
         <>
           <p className="mb-2 text-sm">
-            Each compare value moves by
-            {formatNumber(result.correctionTicks.positive)} ticks of high time per carrier period
-            against the dead time's {formatNumber(result.deadTimeTicks.positive)}, by the sign of
-            the predicted current; clamped entries are left alone. A wrong load angle makes the
-            error worse, not better: check the corrected table on the bench.
+            Each compare value moves by {formatNumber(result.correctionTicks.positive)} ticks of
+            high time per carrier period against the dead time's{' '}
+            {formatNumber(result.deadTimeTicks.positive)}, by the sign of the predicted current;
+            clamped entries are left alone. A wrong load angle makes the error worse, not better:
+            check the corrected table on the bench.
           </p>
           <table className="num w-full text-xs" aria-label="Compensation figures">
             <thead className="text-left text-ink-soft">
