@@ -19,44 +19,46 @@ export function CommonModePanel({ report, fileStem }: { report: StudyReport; fil
         outputName={commonMode.name}
         fileName={`${fileStem}-common-mode`}
       />
-      <table className="w-full text-xs" aria-label="Common-mode figures">
-        <tbody className="num">
-          <tr className="border-t border-rule/60">
-            <th className="text-left font-sans font-medium">Levels (V)</th>
-            <td>{commonMode.levels.map((level) => formatNumber(level)).join(', ')}</td>
-          </tr>
-          <tr className="border-t border-rule/60">
-            <th className="text-left font-sans font-medium">RMS (V)</th>
-            <td>{formatNumber(commonMode.rms)}</td>
-          </tr>
-          <tr className="border-t border-rule/60">
-            <th className="text-left font-sans font-medium">Steps (dv/dt events)</th>
-            <td>
-              {commonMode.stepsPerPeriod} a period
-              {commonMode.stepsPerCarrierPeriod !== null
-                ? `, ${formatNumber(commonMode.stepsPerCarrierPeriod)} a carrier period`
-                : ''}
-            </td>
-          </tr>
-          {switching ? (
+      <div className="rounded-md border border-rule bg-panel px-3 py-2">
+        <table className="w-full text-xs" aria-label="Common-mode figures">
+          <tbody className="num">
             <tr className="border-t border-rule/60">
-              <th className="text-left font-sans font-medium">Leg switching</th>
+              <th className="text-left font-sans font-medium">Levels (V)</th>
+              <td>{commonMode.levels.map((level) => formatNumber(level)).join(', ')}</td>
+            </tr>
+            <tr className="border-t border-rule/60">
+              <th className="text-left font-sans font-medium">RMS (V)</th>
+              <td>{formatNumber(commonMode.rms)}</td>
+            </tr>
+            <tr className="border-t border-rule/60">
+              <th className="text-left font-sans font-medium">Steps (dv/dt events)</th>
               <td>
-                {switching.legEdgesPerPeriod} edges a period; each switch on{' '}
-                {formatNumber(switching.averageDeviceFrequency)} times a second on average
+                {commonMode.stepsPerPeriod} a period
+                {commonMode.stepsPerCarrierPeriod !== null
+                  ? `, ${formatNumber(commonMode.stepsPerCarrierPeriod)} a carrier period`
+                  : ''}
               </td>
             </tr>
-          ) : null}
-        </tbody>
-      </table>
-      {range ? (
-        <p className="text-xs text-ink-soft" data-testid="reduced-common-mode-range">
-          This method keeps the common mode at ±Vdc/6 for ma from {formatNumber(range.min)} to{' '}
-          {formatNumber(range.max)} (A. M. Hava and E. Ün, 2009); outside that range the levels
-          above show what it does. It costs more line-voltage ripple than the standard method at the
-          same carrier.
-        </p>
-      ) : null}
+            {switching ? (
+              <tr className="border-t border-rule/60">
+                <th className="text-left font-sans font-medium">Leg switching</th>
+                <td>
+                  {switching.legEdgesPerPeriod} edges a period; each switch on{' '}
+                  {formatNumber(switching.averageDeviceFrequency)} times a second on average
+                </td>
+              </tr>
+            ) : null}
+          </tbody>
+        </table>
+        {range ? (
+          <p className="text-xs text-ink-soft" data-testid="reduced-common-mode-range">
+            This method keeps the common mode at ±Vdc/6 for ma from {formatNumber(range.min)} to{' '}
+            {formatNumber(range.max)} (A. M. Hava and E. Ün, 2009); outside that range the levels
+            above show what it does. It costs more line-voltage ripple than the standard method at
+            the same carrier.
+          </p>
+        ) : null}
+      </div>
     </section>
   );
 }
