@@ -153,12 +153,15 @@ function pointWork(pattern: AngleTablePattern): [number, number] {
 export function angleTableCost(request: AngleTableRequest): CostEstimate {
   const count = patternCount(request.pattern);
   const [first, next] = pointWork(request.pattern);
-  const countField =
-    request.pattern.method === 'optimal-pattern' ? 'pattern.count' : 'pattern.eliminate';
+  const optimal = request.pattern.method === 'optimal-pattern';
+  const countField = optimal ? 'pattern.count' : 'pattern.eliminate';
+  // The library follows an optimal family on a grid of at most 0.02 in ma between points
+  // (angleTable), so each optimal table solves up to span/0.02 points besides its rows.
+  const between = optimal ? Math.ceil((request.ma.to - request.ma.from) / 0.02) : 0;
   if (request.target !== undefined) {
     const maxRows = request.maxRows ?? 256;
     const tables = Math.ceil(Math.log2(maxRows)) * 2;
-    const points = maxRows * (4 + 2 * Math.log2(maxRows));
+    const points = maxRows * (4 + 2 * Math.log2(maxRows)) + tables * between;
     return {
       work: tables * first + points * next,
       basis: `about ${Math.round(points)} points of ${count} angles over the tables tried (up to maxRows = ${maxRows})`,
@@ -169,8 +172,8 @@ export function angleTableCost(request: AngleTableRequest): CostEstimate {
   }
   const rows = request.rows ?? 32;
   return {
-    work: first + (2 * rows - 1) * next,
-    basis: `${rows} rows and ${rows - 1} midpoints of ${count} angles`,
+    work: first + (2 * rows - 1 + between) * next,
+    basis: `${rows} rows and ${rows - 1} midpoints of ${count} angles${between > 0 ? `, the family followed through up to ${between} points between them` : ''}`,
     fields: ['rows', countField],
     responseBytes: rows * count * ANGLE_TABLE_BYTES_PER_ANGLE_ROW,
     responseFields: ['rows'],

@@ -31,8 +31,9 @@ interface BranchPoint {
  * follows the branch found first at `ma.from` (from `angles` when given). Rows where that branch
  * has no solution (it turns back, or leaves (0, π/2)) are `solved: false` and listed in
  * `gaps`: no other branch is spliced in, and nothing is interpolated across them. For an
- * optimal pattern a row reached by a fresh search (the followed optimum vanished) is marked
- * `continued: false`: the angles may jump there.
+ * optimal pattern the family is followed on a grid of at most 0.02 in ma (the optimiser has no
+ * step control of its own) and a row reached by a fresh search anywhere since the row before
+ * (the followed optimum vanished) is marked `continued: false`: the angles may jump there.
  *
  * @throws ParameterRangeError / ParameterTypeError naming the field: a bad pattern
  *   (`pattern.kind`, `pattern.eliminate`, ...), `ma.from`/`ma.to` outside (0, 4/π) or not
@@ -52,7 +53,7 @@ export function angleTable(options: AngleTableOptions): AngleTable {
     (_, i) => ma.from + ((ma.to - ma.from) * i) / (rows - 1),
   );
   const fundamentals = { from: ma.from * scale, to: ma.to * scale, points: rows };
-  const points = followBranch(pattern, count, fundamentals, angles);
+  const points = followBranch(pattern, count, fundamentals, angles, scale);
   if (points[0]?.angles === null) {
     throw new ParameterRangeError(
       'ma.from',
@@ -107,6 +108,7 @@ function followBranch(
   count: number,
   fundamentals: { from: number; to: number; points: number },
   angles: number[] | undefined,
+  scale: number,
 ): BranchPoint[] {
   const start = angles === undefined ? {} : { angles };
   if (pattern.method === 'selective-harmonic-elimination') {
@@ -125,20 +127,35 @@ function followBranch(
     }
     return out;
   }
+  // The optimiser has no step control of its own: follow the family on a grid of at most
+  // OPTIMAL_MA_STEP between points and keep every substeps-th point as a row.
   const { kind, vdc, objective, maxOrder } = pattern;
+  const rows = fundamentals.points;
+  const substeps = optimalSubsteps(fundamentals.to / scale - fundamentals.from / scale, rows);
   const sweep = optimalPulseSweep({
     kind,
     vdc,
     count,
     objective,
     maxOrder,
-    fundamentals,
+    fundamentals: { ...fundamentals, points: (rows - 1) * substeps + 1 },
     ...start,
   });
-  return sweep.points.map((p) => ({
-    angles: p.converged ? p.angles : null,
-    continued: p.continued,
-  }));
+  return Array.from({ length: rows }, (_, i): BranchPoint => {
+    const p = sweep.points[i * substeps];
+    // A row continues the one before only when every point between them was followed.
+    const between = sweep.points.slice(Math.max(1, (i - 1) * substeps + 1), i * substeps + 1);
+    const continued = i > 0 && between.every((q) => q.converged && q.continued);
+    return { angles: p?.converged === true ? p.angles : null, continued };
+  });
+}
+
+/** The largest ma step between the points an optimal family is followed on. */
+const OPTIMAL_MA_STEP = 0.02;
+
+/** Points of the followed sweep per row interval, so that each step is at most OPTIMAL_MA_STEP. */
+function optimalSubsteps(span: number, rows: number): number {
+  return Math.max(1, Math.ceil(span / (rows - 1) / OPTIMAL_MA_STEP - 1e-9));
 }
 
 function findGaps(rows: readonly AngleTableRow[]): AngleTable['gaps'] {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { harmonics } from '../../spectrum/index.js';
-import { sheWaveform } from '../../she/index.js';
+import { optimalPulseSweep, sheWaveform } from '../../she/index.js';
 import { assertInDelta } from '../../testing/assertInDelta.js';
 import { rangeErrorField } from '../../testing/rangeErrorField.js';
 import {
@@ -105,6 +105,27 @@ describe('angleTable', () => {
         }
       }
     }
+  });
+
+  it('an optimal table of few rows follows the family through the steps between its rows', () => {
+    const pattern: OptimalTablePattern = { ...optimal, vdc: 300, count: 3, maxOrder: 99 };
+    // The library's own sweep in steps of 0.02 in ma follows one family over this range...
+    const fine = optimalPulseSweep({
+      kind: 'bipolar',
+      vdc: 300,
+      count: 3,
+      maxOrder: 99,
+      fundamentals: { from: 0.4 * 300, to: 0.9 * 300, points: 26 },
+    });
+    expect(fine.points.slice(1).every((p) => p.continued)).toBe(true);
+    // ...so a table of 6 rows (steps of 0.1) over it has no jump, and its rows are those points.
+    const table = angleTable({ pattern, ma: { from: 0.4, to: 0.9 }, rows: 6 });
+    expect(table.rows.slice(1).every((r) => r.continued)).toBe(true);
+    table.rows.forEach((row, i) =>
+      row.angles.forEach((a, k) =>
+        assertInDelta(a, fine.points[5 * i]?.angles[k] ?? NaN, 1e-9, `row ${i} angle ${k}`),
+      ),
+    );
   });
 
   it('midpoint error falls as 1/N² on a smooth branch (fact of linear interpolation)', () => {
