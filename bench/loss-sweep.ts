@@ -6,6 +6,7 @@
  */
 import {
   designModulation,
+  EXAMPLE_IGBT,
   harmonics,
   lossesByPowerFactor,
   modulationVoltages,
@@ -14,19 +15,8 @@ import {
 } from '@pulsewright/modulation';
 import { medianTime, printTable } from './measure.js';
 
-// Invented datasheet-like values (not from any real part).
-const device: IgbtDevice = {
-  kind: 'igbt',
-  vce0: 0.9,
-  rce: 0.012,
-  vf0: 1.05,
-  rf: 0.009,
-  eon: 2.1e-3,
-  eoff: 2.6e-3,
-  err: 1.3e-3,
-  referenceVoltage: 600,
-  referenceCurrent: 100,
-};
+// An invented device (not from any real part).
+const device: IgbtDevice = { ...EXAMPLE_IGBT };
 const mf = 101;
 const design: InverterDesign = {
   vdc: 650,

@@ -1,21 +1,10 @@
-import { lossesByPowerFactor, type IgbtDevice } from '@pulsewright/modulation';
+import { EXAMPLE_IGBT, lossesByPowerFactor, type IgbtDevice } from '@pulsewright/modulation';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO, signIn, testApp, type TestApp } from './helpers.js';
 
-// Invented datasheet-like values (not from any real part).
-const igbt: IgbtDevice = {
-  kind: 'igbt',
-  vce0: 0.9,
-  rce: 0.012,
-  vf0: 1.05,
-  rf: 0.009,
-  eon: 2.1e-3,
-  eoff: 2.6e-3,
-  err: 1.3e-3,
-  referenceVoltage: 600,
-  referenceCurrent: 100,
-};
+// An invented device (not from any real part).
+const igbt: IgbtDevice = { ...EXAMPLE_IGBT };
 const body = { device: igbt, vdc: 650, ma: 0.9, peakCurrent: 28, switchingFrequency: 10_000 };
 
 describe('POST /api/v1/losses/power-factor-sweeps', () => {

@@ -5,3 +5,4 @@ export * from './semiconductorLossesByIntegration.js';
 export * from './rippleInductance.js';
 export * from './switchingFrequencyTradeoff.js';
 export * from './lossesByPowerFactor.js';
+export * from './exampleIgbt.js';

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
+  EXAMPLE_IGBT,
   LOSS_ZERO_SEQUENCES,
   lossesByPowerFactor,
   semiconductorLosses,
@@ -9,19 +10,8 @@ import {
 } from '../../index.js';
 import { assertInDelta } from '../../testing/assertInDelta.js';
 
-// Invented datasheet-like values (not from any real part).
-const igbt: IgbtDevice = {
-  kind: 'igbt',
-  vce0: 0.9,
-  rce: 0.012,
-  vf0: 1.05,
-  rf: 0.009,
-  eon: 2.1e-3,
-  eoff: 2.6e-3,
-  err: 1.3e-3,
-  referenceVoltage: 600,
-  referenceCurrent: 100,
-};
+// An invented device (not from any real part).
+const igbt: IgbtDevice = { ...EXAMPLE_IGBT };
 const base = { device: igbt, vdc: 650, ma: 0.9, peakCurrent: 28, fundamentalFrequency: 50 };
 const DEG = Math.PI / 180;
 

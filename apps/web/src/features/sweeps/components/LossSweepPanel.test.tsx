@@ -1,4 +1,4 @@
-import { lossesByPowerFactor } from '@pulsewright/modulation';
+import { EXAMPLE_IGBT, lossesByPowerFactor } from '@pulsewright/modulation';
 import { fireEvent, render, screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { LossSweepPanel } from './LossSweepPanel';
@@ -6,20 +6,8 @@ import { LossSweepPanel } from './LossSweepPanel';
 describe('LossSweepPanel', () => {
   it('names the library’s lowest-loss sequence at unity power factor and follows the basis', () => {
     render(<LossSweepPanel />);
-    const device = {
-      kind: 'igbt' as const,
-      vce0: 0.9,
-      rce: 0.012,
-      vf0: 1.05,
-      rf: 0.009,
-      eon: 2.1e-3,
-      eoff: 2.6e-3,
-      err: 1.3e-3,
-      referenceVoltage: 600,
-      referenceCurrent: 100,
-    };
     const sweep = lossesByPowerFactor({
-      device,
+      device: EXAMPLE_IGBT,
       vdc: 650,
       ma: 0.9,
       peakCurrent: 28,

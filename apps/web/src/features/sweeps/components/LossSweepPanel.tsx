@@ -1,5 +1,6 @@
 import { useMemo, useState } from 'react';
 import {
+  EXAMPLE_IGBT,
   ZERO_SEQUENCE_LABELS,
   type IgbtDevice,
   type LossComparisonBasis,
@@ -67,19 +68,8 @@ export function LossSweepPanel() {
     switchingFrequency: 10_000,
     fundamentalFrequency: 50,
     basis: 'equal-carrier',
-    // Invented example values, not from any real part.
-    device: {
-      kind: 'igbt',
-      vce0: 0.9,
-      rce: 0.012,
-      vf0: 1.05,
-      rf: 0.009,
-      eon: 2.1e-3,
-      eoff: 2.6e-3,
-      err: 1.3e-3,
-      referenceVoltage: 600,
-      referenceCurrent: 100,
-    },
+    // The library's invented example device, not a real part.
+    device: { ...EXAMPLE_IGBT },
   });
   const outcome = useMemo(() => lossSweepOf({ ...form, points: 91 }), [form]);
   const errorOf = (field: string) =>
