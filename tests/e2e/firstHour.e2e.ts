@@ -307,7 +307,7 @@ export const scenarios: Scenario[] = [
         .fill('kestrel_drive');
       const [download] = await Promise.all([
         page.waitForEvent('download'),
-        page.getByRole('button', { name: 'C header' }).click(),
+        page.getByRole('button', { name: 'C header', exact: true }).click(),
       ]);
       const dir = mkdtempSync(path.join(tmpdir(), 'pulsewright-header-'));
       try {
