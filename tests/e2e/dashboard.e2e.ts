@@ -27,8 +27,7 @@ async function newPage(context: Context): Promise<Page> {
 }
 
 async function token(page: Page): Promise<string> {
-  const value = (await page.evaluate('sessionStorage.getItem("pulsewright.session")')) as
-    string | null;
+  const value = await page.evaluate<string | null>('sessionStorage.getItem("pulsewright.session")');
   assert(value, 'the session token is kept in sessionStorage');
   return value;
 }

@@ -93,7 +93,8 @@ function run(options: autocannon.Options): Promise<autocannon.Result> {
     // timeout 10 s (autocannon's default): an answer slower than that counts as a timeout.
     autocannon(
       { connections: CONNECTIONS, duration: SECONDS, timeout: 10, ...options },
-      (error, result) => (error ? reject(error) : resolve(result)),
+      (error, result) =>
+        error ? reject(new Error('autocannon failed', { cause: error })) : resolve(result),
     );
   });
 }

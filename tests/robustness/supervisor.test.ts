@@ -149,7 +149,7 @@ describe('supervision of npm start', () => {
 
       supervisor.kill('SIGTERM');
       expect(await exited).toBe(0);
-      expect(alive(second!)).toBe(false);
+      expect(alive(second)).toBe(false);
       expect(await healthy(baseUrl)).toBeUndefined();
     } finally {
       if (supervisor.exitCode === null && supervisor.signalCode === null)

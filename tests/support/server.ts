@@ -77,7 +77,7 @@ export interface ChildServer {
   mailDir: string;
   child: ChildProcess;
   /** Everything the process wrote to stdout and stderr so far. */
-  output(): string;
+  output: () => string;
   /** Resolves with the exit code (or signal name) once the process has ended. */
   exited: Promise<number | string | null>;
   /** SIGTERM, then SIGKILL after 5 s; resolves when the process is gone. */

@@ -73,7 +73,7 @@ export function resolveRef(
 ): JsonSchema | undefined {
   let current = schema;
   for (let depth = 0; current && typeof current.$ref === 'string' && depth < 20; depth++) {
-    const pointer = (current.$ref as string).replace(/^#\//, '').split('/');
+    const pointer = current.$ref.replace(/^#\//, '').split('/');
     let target: unknown = document;
     for (const part of pointer) target = (target as Record<string, unknown> | undefined)?.[part];
     current = target as JsonSchema | undefined;

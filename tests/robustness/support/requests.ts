@@ -268,7 +268,7 @@ function uploadRequest(ids: KnownIds, tools: SchemaTools): fc.Arbitrary<UploadPa
     .record({ csv: captureCsv, fields, fileName: fc.constantFrom(...FILE_NAMES) })
     .map(({ csv, fields: f, fileName }): UploadParts => ({
       multipart: {
-        fields: f as Record<string, string>,
+        fields: f,
         files: [
           {
             field: 'file',
@@ -278,7 +278,7 @@ function uploadRequest(ids: KnownIds, tools: SchemaTools): fc.Arbitrary<UploadPa
           },
         ],
       },
-      variant: { kind: 'valid' } as Variant,
+      variant: { kind: 'valid' },
     }));
   const badFile = (
     what: string,
@@ -288,7 +288,7 @@ function uploadRequest(ids: KnownIds, tools: SchemaTools): fc.Arbitrary<UploadPa
   ) =>
     fc.constant<UploadParts>({
       multipart: { fields: {}, files: [{ field: 'file', fileName, contentType, make }] },
-      variant: { kind: 'invalid-upload', what, field: 'file' } as Variant,
+      variant: { kind: 'invalid-upload', what, field: 'file' },
     });
   const invalid = fc.oneof(
     badFile('png renamed .csv', () => PNG, 'plot.csv'),
@@ -320,7 +320,7 @@ function uploadRequest(ids: KnownIds, tools: SchemaTools): fc.Arbitrary<UploadPa
     ),
     fc.constant<UploadParts>({
       multipart: { fields: { name: 'x' }, files: [] },
-      variant: { kind: 'invalid-upload', what: 'no file', field: 'file' } as Variant,
+      variant: { kind: 'invalid-upload', what: 'no file', field: 'file' },
     }),
     fc.constant<UploadParts>({
       multipart: {
@@ -334,7 +334,7 @@ function uploadRequest(ids: KnownIds, tools: SchemaTools): fc.Arbitrary<UploadPa
           },
         ],
       },
-      variant: { kind: 'invalid-upload', what: 'wrong field name', field: 'file' } as Variant,
+      variant: { kind: 'invalid-upload', what: 'wrong field name', field: 'file' },
     }),
     captureCsv.map((csv): UploadParts => ({
       multipart: {
@@ -348,7 +348,7 @@ function uploadRequest(ids: KnownIds, tools: SchemaTools): fc.Arbitrary<UploadPa
           },
         ],
       },
-      variant: { kind: 'invalid-upload', what: 'bad projectId', field: 'projectId' } as Variant,
+      variant: { kind: 'invalid-upload', what: 'bad projectId', field: 'projectId' },
     })),
     captureCsv.map((csv): UploadParts => ({
       multipart: {
@@ -362,12 +362,12 @@ function uploadRequest(ids: KnownIds, tools: SchemaTools): fc.Arbitrary<UploadPa
           },
         ],
       },
-      variant: { kind: 'invalid-upload', what: 'name too long', field: 'name' } as Variant,
+      variant: { kind: 'invalid-upload', what: 'name too long', field: 'name' },
     })),
     fc.constant<UploadParts>({
       contentType: 'application/json',
       body: '{"file":"time,voltage"}',
-      variant: { kind: 'invalid-body', what: 'json instead of multipart' } as Variant,
+      variant: { kind: 'invalid-body', what: 'json instead of multipart' },
     }),
   );
   return fc.oneof({ weight: 2, arbitrary: valid }, { weight: 3, arbitrary: invalid });
@@ -404,12 +404,12 @@ export function requestArbitrary(
             : valid,
         ];
       }),
-    ) as Record<string, fc.Arbitrary<string>>,
+    ),
   );
   const queryValues = fc.record(
     Object.fromEntries(
       queryParams.map((p) => [p.name, validArbitrary(tools, p.schema).map(String)]),
-    ) as Record<string, fc.Arbitrary<string>>,
+    ),
     { requiredKeys: queryParams.filter((p) => p.required).map((p) => p.name) },
   );
   // Ids in bodies (projectId, studyId) mostly name things that exist, so creates get past their 404.
@@ -442,7 +442,7 @@ export function requestArbitrary(
     variants.push({
       weight: 4,
       arbitrary: validBody.map((body) => ({
-        variant: { kind: 'valid' } as Variant,
+        variant: { kind: 'valid' },
         ...(body !== undefined
           ? { contentType: 'application/json', body: JSON.stringify(body) }
           : {}),
@@ -489,11 +489,11 @@ export function requestArbitrary(
       weight: 2,
       arbitrary: fc.constantFrom(...WHOLE_BODY_CASES).map((c) => ({
         // An empty body is a valid request when the body is optional (requestBody.required false).
-        variant: (!bodySchema
+        variant: !bodySchema
           ? { kind: 'stray-body', what: c.what }
           : c.body === '' && !bodyRequired(op)
             ? { kind: 'valid' }
-            : { kind: 'invalid-body', what: c.what }) as Variant,
+            : { kind: 'invalid-body', what: c.what },
         ...(c.contentType ? { contentType: c.contentType } : {}),
         ...(c.body !== undefined ? { body: c.body } : {}),
         ...(c.headers ? { headers: c.headers } : {}),
@@ -507,7 +507,7 @@ export function requestArbitrary(
         kind: 'invalid-query',
         field: 'unexpectedParam',
         what: 'unknown parameter',
-      } as Variant,
+      },
       query: { unexpectedParam: '1' },
     }),
   ];
@@ -531,7 +531,7 @@ export function requestArbitrary(
             kind: 'invalid-query',
             field: p.name,
             what: `${p.name}=${value.slice(0, 20)}`,
-          } as Variant,
+          },
           query: { [p.name]: value },
         }),
       );
@@ -545,7 +545,7 @@ export function requestArbitrary(
     variants.push({
       weight: 1,
       arbitrary: fc.constantFrom(...bad).map((value) => ({
-        variant: { kind: 'invalid-path', field: p.name } as Variant,
+        variant: { kind: 'invalid-path', field: p.name },
         path: { [p.name]: value },
       })),
     });

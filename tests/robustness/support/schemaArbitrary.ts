@@ -44,7 +44,7 @@ export class SchemaTools {
   deref(schema: Schema | undefined): Schema {
     let current: Schema = schema ?? {};
     for (let depth = 0; typeof current.$ref === 'string' && depth < 20; depth++) {
-      const pointer = (current.$ref as string).replace(/^#\//, '').split('/');
+      const pointer = current.$ref.replace(/^#\//, '').split('/');
       let target: unknown = this.document;
       for (const part of pointer) target = (target as Record<string, unknown> | undefined)?.[part];
       current = (target as Schema | undefined) ?? {};
@@ -296,7 +296,7 @@ export function sitesOf(
   if (value && typeof value === 'object' && !Array.isArray(value)) {
     const properties = (schema.properties ?? {}) as Record<string, Schema>;
     for (const [key, sub] of Object.entries(properties)) {
-      if (key in (value as object))
+      if (key in value)
         sites.push(...sitesOf(tools, sub, (value as Record<string, unknown>)[key], [...path, key]));
       else
         sites.push({

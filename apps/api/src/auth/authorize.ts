@@ -1,7 +1,7 @@
+import { inspect } from 'node:util';
 import type { Request } from 'express';
 import { Passport } from 'passport';
 import { Strategy as BearerStrategy } from 'passport-http-bearer';
-import type { Role } from '../models/index.js';
 import type { AuthService } from '../services/auth.js';
 import { roleAtLeast, type Principal } from '../services/principal.js';
 import type { RoleRequirement } from '../openapi.js';
@@ -47,11 +47,13 @@ export function createAuthorizer(auth: AuthService): (req: Request) => Promise<b
         'bearer',
         { session: false },
         (error: unknown, user: Principal | false) => {
-          if (error) reject(error instanceof Error ? error : new Error(String(error)));
+          if (error) reject(error instanceof Error ? error : new Error(inspect(error)));
           else resolve(user);
         },
       ) as (req: Request, res: unknown, next: (error?: unknown) => void) => void;
-      middleware(req, {}, (error) => (error ? reject(error) : resolve(false)));
+      middleware(req, {}, (error) =>
+        error ? reject(error instanceof Error ? error : new Error(inspect(error))) : resolve(false),
+      );
     });
 
   return async (req) => {
@@ -68,7 +70,7 @@ export function createAuthorizer(auth: AuthService): (req: Request) => Promise<b
         'The bearer token is unknown, expired or revoked; sign in again or use a current API key.',
       );
     principals.set(req, principal);
-    if (required !== 'public' && !roleAtLeast(principal.role, required as Role)) {
+    if (required !== 'public' && !roleAtLeast(principal.role, required)) {
       const who = principal.authMethod === 'api-key' ? 'this API key acts' : 'you are signed in';
       throw new AuthError(
         403,

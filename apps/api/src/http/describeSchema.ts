@@ -39,7 +39,7 @@ function flatten(
   let schema = resolveRef(document, input);
   if (!schema) return undefined;
   if (Array.isArray(schema.allOf)) {
-    const merged: JsonSchema = { ...schema, properties: {} as Record<string, JsonSchema> };
+    const merged: JsonSchema = { ...schema, properties: {} };
     delete merged.allOf;
     for (const part of schema.allOf as JsonSchema[]) {
       const flat = flatten(document, part, value);

@@ -56,7 +56,9 @@ export function rateLimitStores(databaseUrl: string, sequelize: Sequelize): Rate
     },
     async close() {
       await Promise.all(
-        stores.map((store) => (store.pool as { end(): Promise<void> } | undefined)?.end()),
+        stores.map(async (store) => {
+          await (store.pool as { end(): Promise<void> } | undefined)?.end();
+        }),
       );
     },
   };

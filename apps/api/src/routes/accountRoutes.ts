@@ -11,8 +11,10 @@ const FIFTEEN_MINUTES = 15 * 60_000;
 const ONE_HOUR = 60 * 60_000;
 
 /** The e-mail address a public account request names, as the key of its per-account bucket. */
-const accountOf = (req: Request): string =>
-  `account:${String((req.body as { email?: unknown } | undefined)?.email ?? '').toLowerCase()}`;
+const accountOf = (req: Request): string => {
+  const email = (req.body as { email?: unknown } | undefined)?.email;
+  return `account:${typeof email === 'string' ? email.toLowerCase() : ''}`;
+};
 
 /** Health, sign-in, the caller, API keys, members, invitations, audit log and outbox. */
 export function accountRoutes(

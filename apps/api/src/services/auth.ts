@@ -228,13 +228,15 @@ export class AuthService {
     authMethod: Principal['authMethod'],
     credentialId: string,
   ): Promise<Principal | null> {
-    const membership = (await this.models.Membership.findOne({
+    const membership = await this.models.Membership.findOne<
+      MembershipRow & { user?: UserRow; team?: TeamRow }
+    >({
       where: { userId, teamId },
       include: [
         { model: this.models.User, as: 'user', required: true },
         { model: this.models.Team, as: 'team', required: true },
       ],
-    })) as (MembershipRow & { user?: UserRow; team?: TeamRow }) | null;
+    });
     const user = membership?.user;
     const team = membership?.team;
     // A removed member's sessions and keys stop working at once.

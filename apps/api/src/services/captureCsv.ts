@@ -54,7 +54,7 @@ export function parseCaptureCsv(buffer: Buffer): ParsedCapture {
       relax_column_count: false,
       comment: '#',
       delimiter: [',', ';', '\t'],
-    }) as string[][];
+    });
   } catch (error) {
     const line = (error as { lines?: number }).lines;
     throw reject(

@@ -24,7 +24,10 @@ describe('the pulsewright bin in the workspace', () => {
         'npx',
         ['--no-install', 'pulsewright', '--version'],
         { cwd: root, encoding: 'utf8' },
-        (error, out) => (error ? reject(error) : resolve(out)),
+        (error, out) =>
+          error
+            ? reject(new Error('npx pulsewright --version failed', { cause: error }))
+            : resolve(out),
       ),
     );
     expect(stdout).toBe('0.1.0\n');

@@ -26,7 +26,9 @@ export function runCli(
       { cwd: options.cwd, maxBuffer: 64 << 20, encoding: 'utf8' },
       (error, stdout, stderr) => {
         const code = error === null ? 0 : typeof error.code === 'number' ? error.code : NaN;
-        if (Number.isNaN(code)) reject(error as Error);
+        // No exit code: the child did not run (or was killed); say so with the cause attached.
+        if (error !== null && Number.isNaN(code))
+          reject(new Error(`pulsewright ${args.join(' ')} did not run`, { cause: error }));
         else resolve({ code, stdout, stderr });
       },
     );

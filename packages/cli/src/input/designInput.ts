@@ -174,7 +174,7 @@ export function readDesignInput(
       design = structuredClone(inner) as Record<string, unknown>;
       options = Object.fromEntries(
         Object.entries({ maxOrder, points, busVoltage }).filter(([, value]) => value !== undefined),
-      ) as AnalyseDesignOptions;
+      );
     } else {
       design = structuredClone(record);
     }

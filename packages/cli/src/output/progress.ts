@@ -2,8 +2,9 @@ import type { CliIo } from './CliIo.js';
 
 /** A progress indicator for long work: `update` with the fraction done, `stop` at the end. */
 export interface Progress {
-  update(fraction: number): void;
-  stop(): void;
+  // Properties, not methods: callers pass `update` on as a callback.
+  update: (fraction: number) => void;
+  stop: () => void;
 }
 
 /** Work that ends sooner than this never shows a bar (milliseconds). */

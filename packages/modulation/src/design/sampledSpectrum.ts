@@ -12,7 +12,7 @@ import { meanHarmonic } from '../spectrum/meanHarmonic.js';
 export function sampledSpectrum(samples: Float64Array, maxOrder: number): Harmonic[] {
   const size = samples.length;
   const fft = new FFT(size);
-  const output: number[] = fft.createComplexArray();
+  const output = fft.createComplexArray() as number[];
   fft.realTransform(output, Array.from(samples));
   const spectrum: Harmonic[] = [meanHarmonic((output[0] as number) / size)];
   for (let n = 1; n <= maxOrder && n < size / 2; n++) {

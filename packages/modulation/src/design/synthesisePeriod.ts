@@ -12,8 +12,8 @@ import type { Complex } from '../numeric/complex.js';
 export function synthesisePeriod(phasors: readonly Complex[], size: number): Float64Array {
   const highest = phasors.length - 1;
   const fft = new FFT(size);
-  const input: number[] = fft.createComplexArray();
-  const output: number[] = fft.createComplexArray();
+  const input = fft.createComplexArray() as number[];
+  const output = fft.createComplexArray() as number[];
   input[0] = phasors[0]?.re ?? 0;
   for (let n = 1; n <= highest; n++) {
     const { re, im } = phasors[n] as Complex;

@@ -28,7 +28,9 @@ export function filteredSpectrum(
   spectrum: readonly Harmonic[],
   options: FilteredSpectrumOptions,
 ): Harmonic[] {
-  if (!Array.isArray(spectrum))
+  // Tested as unknown: Array.isArray would narrow a readonly array to any[] (TypeScript 17002).
+  const given: unknown = spectrum;
+  if (!Array.isArray(given))
     throw new ParameterTypeError('spectrum', 'an array of harmonics', spectrum);
   const { filter, fundamentalFrequency } = options ?? ({} as FilteredSpectrumOptions);
   assertLcFilter(filter, 'filter.');

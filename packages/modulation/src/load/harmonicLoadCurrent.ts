@@ -26,7 +26,9 @@ export function harmonicLoadCurrent(
   spectrum: readonly Harmonic[],
   options: RlLoadOptions,
 ): Harmonic[] {
-  if (!Array.isArray(spectrum))
+  // Tested as unknown: Array.isArray would narrow a readonly array to any[] (TypeScript 17002).
+  const given: unknown = spectrum;
+  if (!Array.isArray(given))
     throw new ParameterTypeError('spectrum', 'an array of harmonics', spectrum);
   assertRlLoad(options);
   const { r, l, frequency, emf } = options;

@@ -1,10 +1,6 @@
 import { ParameterTypeError } from '../validation/errors.js';
 import { assertNumberInRange, assertOneOf } from '../validation/assertions.js';
-import {
-  LOSS_ZERO_SEQUENCES,
-  type LossOperatingPoint,
-  type SemiconductorDevice,
-} from './lossTypes.js';
+import { LOSS_ZERO_SEQUENCES, type LossOperatingPoint } from './lossTypes.js';
 
 /** Internal: validates a device and an operating point; returns the options with defaults. */
 export function assertLossInputs(
@@ -57,5 +53,5 @@ export function assertLossInputs(
     switchingFrequency,
     topology,
     zeroSequence,
-  } as Required<LossOperatingPoint> & { device: SemiconductorDevice };
+  };
 }

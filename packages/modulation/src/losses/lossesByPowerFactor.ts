@@ -114,7 +114,9 @@ export function lossesByPowerFactor(options: LossesByPowerFactorOptions): LossSw
     max: switchingFrequency / 3,
   });
   assertOneOf('basis', basis, ['equal-carrier', 'equal-switching'] as const);
-  if (!Array.isArray(zeroSequences) || zeroSequences.length === 0)
+  // Tested as unknown: Array.isArray would narrow a readonly array to any[] (TypeScript 17002).
+  const givenSequences: unknown = zeroSequences;
+  if (!Array.isArray(givenSequences) || zeroSequences.length === 0)
     throw new ParameterTypeError(
       'zeroSequences',
       `a list of 1 to ${LOSS_ZERO_SEQUENCES.length} zero sequences`,

@@ -19,7 +19,7 @@ export function validationItem(
     const tag =
       (union?.discriminator as { propertyName?: string } | undefined)?.propertyName ?? 'method';
     const mapping = Object.keys(
-      ((union?.discriminator as { mapping?: object } | undefined)?.mapping ?? {}) as object,
+      (union?.discriminator as { mapping?: object } | undefined)?.mapping ?? {},
     );
     const field = [...segments, tag].join('.');
     const given = locate(document, req, location, [...segments, tag]).value;

@@ -40,7 +40,7 @@ describe('HarmonicTable', () => {
     fireEvent.click(screen.getByRole('button', { name: 'Download CSV' }));
     const text = await new Promise<string>((resolve) => {
       const reader = new FileReader();
-      reader.onload = () => resolve(String(reader.result));
+      reader.onload = () => resolve(typeof reader.result === 'string' ? reader.result : '');
       reader.readAsText(saved as Blob);
     });
     const lines = text.trim().split('\n');

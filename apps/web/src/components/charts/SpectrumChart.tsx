@@ -98,7 +98,7 @@ export function SpectrumChart({
     .domain([0.5, maxOrder + 0.5])
     .range([margin.left, width - margin.right]);
   // The same positions read in hertz: order n sits at n·f₁.
-  const f1 = inHertz ? (fundamentalFrequency as number) : 1;
+  const f1 = inHertz ? fundamentalFrequency : 1;
   const hertz = scaleLinear()
     .domain([0.5 * f1, (maxOrder + 0.5) * f1])
     .range(x.range());

@@ -54,7 +54,7 @@ describe('WaveformChart', () => {
     fireEvent.click(screen.getByRole('button', { name: /as SVG/ }));
     const text = await new Promise<string>((resolve) => {
       const reader = new FileReader();
-      reader.onload = () => resolve(String(reader.result));
+      reader.onload = () => resolve(typeof reader.result === 'string' ? reader.result : '');
       reader.readAsText(saved as Blob);
     });
     expect(saved?.type).toBe('image/svg+xml');

@@ -32,8 +32,8 @@ export function useImportStudyRecord() {
   return useMutation({
     mutationFn: importStudyRecord,
     onSuccess: () => {
-      client.invalidateQueries({ queryKey: queryKeys.studies.all });
-      client.invalidateQueries({ queryKey: queryKeys.projects.all });
+      void client.invalidateQueries({ queryKey: queryKeys.studies.all });
+      void client.invalidateQueries({ queryKey: queryKeys.projects.all });
     },
   });
 }

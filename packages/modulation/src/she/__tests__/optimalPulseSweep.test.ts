@@ -56,7 +56,7 @@ describe('optimalPulseSweep', () => {
     const second = optimalPulseSweep({
       ...options,
       fundamentals: { from: grid[5] as number, to: grid[9] as number, points: 5 },
-      previous: first.points[4]?.angles as number[],
+      previous: first.points[4]?.angles,
     });
     expect(second.points[0]?.continued).toBe(true);
     [...first.points, ...second.points].forEach((point, i) => {

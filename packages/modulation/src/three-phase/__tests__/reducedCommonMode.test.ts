@@ -7,7 +7,6 @@ import {
   threePhase,
   waveformValueAt,
   waveformWthd,
-  type CarrierSampling,
   type Waveform,
 } from '../../index.js';
 import { assertInDelta } from '../../testing/assertInDelta.js';
@@ -304,7 +303,7 @@ describe('input checks', () => {
           mf: 21,
           vdc,
           zeroSequence,
-          sampling: 'regular-symmetric' as CarrierSampling,
+          sampling: 'regular-symmetric',
         }),
       ).toThrow(/sampling must be 'natural' or 'regular-asymmetric'/);
   });

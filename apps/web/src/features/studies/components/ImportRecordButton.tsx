@@ -10,7 +10,7 @@ const MAX_RECORD_BYTES = 1024 * 1024;
 function readText(file: File): Promise<string> {
   return new Promise((resolve, reject) => {
     const reader = new FileReader();
-    reader.onload = () => resolve(String(reader.result));
+    reader.onload = () => resolve(typeof reader.result === 'string' ? reader.result : '');
     reader.onerror = () => reject(reader.error ?? new Error('the file could not be read'));
     reader.readAsText(file);
   });

@@ -115,7 +115,7 @@ export function StudyForm({
   const set =
     <K extends keyof StudyDraft>(key: K) =>
     (value: StudyDraft[K]) =>
-      onChange({ [key]: value } as Partial<StudyDraft>);
+      onChange({ [key]: value });
   const { method } = draft;
   const pattern = isPatternMethod(method);
   const threePhase = method === 'three-phase' || method === 'space-vector';
