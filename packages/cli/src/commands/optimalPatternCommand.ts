@@ -15,7 +15,7 @@ import { formatTable } from '../output/formatTable.js';
 import { toCsv } from '../output/toCsv.js';
 import { addOutputOptions, numberOption, type OutputFlags } from './commonOptions.js';
 import { addPatternOptions, patternBase, patternNotes } from './patternInput.js';
-import { runPatternCommand } from './runPatternCommand.js';
+import { runPatternCommand, singlePatternRun } from './runPatternCommand.js';
 
 type OptimalFlags = Record<string, unknown> & OutputFlags;
 
@@ -55,12 +55,7 @@ export function optimalPatternCommand(io: CliIo): Command {
       single: () => {
         const options = { ...base, fundamental: flags.fundamental } as OptimalPulseOptions;
         const result = callLibrary(() => optimalPulsePattern(options), { notes });
-        return {
-          result,
-          text: () => patternText(result),
-          csv: () => patternCsv(result),
-          failure: result.converged ? null : result.message,
-        };
+        return singlePatternRun(result, () => patternText(result));
       },
       table: (range, onProgress) => {
         const options = { ...base, fundamentals: range, onProgress } as OptimalPulseSweepOptions;
@@ -86,13 +81,6 @@ function patternText(result: OptimalPulseResult): string {
   );
   return formatPattern(title, result, [
     `objective (weighted distortion) ${formatPercent(result.objective)} %`,
-  ]);
-}
-
-function patternCsv(result: OptimalPulseResult): string {
-  return toCsv([
-    ['angle', 'radians', 'degrees'],
-    ...result.angles.map((a, k) => [`alpha${k + 1}`, a, (a * 180) / Math.PI]),
   ]);
 }
 

@@ -1,5 +1,6 @@
 import type { FundamentalRange } from '@pulsewright/modulation';
 import { FailureError } from '../errors.js';
+import { anglesCsv } from '../output/anglesCsv.js';
 import type { CliIo } from '../output/CliIo.js';
 import { createProgress } from '../output/progress.js';
 import { toJson } from '../output/toJson.js';
@@ -13,6 +14,19 @@ export interface PatternRun {
   text: () => string;
   csv: () => string;
   failure: string | null;
+}
+
+/** The run of one pattern: its angles as CSV, a failure when it did not converge. */
+export function singlePatternRun(
+  result: { angles: number[]; converged: boolean; message: string },
+  text: () => string,
+): PatternRun {
+  return {
+    result,
+    text,
+    csv: () => anglesCsv(result.angles),
+    failure: result.converged ? null : result.message,
+  };
 }
 
 /** What a pattern command computes: one pattern, or a table over a range of fundamentals. */

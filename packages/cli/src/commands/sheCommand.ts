@@ -16,7 +16,7 @@ import { formatTable } from '../output/formatTable.js';
 import { toCsv } from '../output/toCsv.js';
 import { addOutputOptions, numberOption, type OutputFlags } from './commonOptions.js';
 import { addPatternOptions, patternBase, patternNotes } from './patternInput.js';
-import { runPatternCommand } from './runPatternCommand.js';
+import { runPatternCommand, singlePatternRun } from './runPatternCommand.js';
 
 type SheFlags = Record<string, unknown> & OutputFlags;
 
@@ -60,12 +60,7 @@ export function sheCommand(io: CliIo): Command {
           ...(flags.fundamental === undefined ? {} : { fundamental: flags.fundamental }),
         } as SolveSheOptions;
         const result = callLibrary(() => solveShe(options), { notes });
-        return {
-          result,
-          text: () => sheText(result, options),
-          csv: () => sheCsv(result),
-          failure: result.converged ? null : result.message,
-        };
+        return singlePatternRun(result, () => sheText(result, options));
       },
       table: (range, onProgress) => {
         const options = {
@@ -107,13 +102,6 @@ function sheText(result: SheResult, options: SolveSheOptions): string {
       ]),
     )
   );
-}
-
-function sheCsv(result: SheResult): string {
-  return toCsv([
-    ['angle', 'radians', 'degrees'],
-    ...result.angles.map((a, k) => [`alpha${k + 1}`, a, (a * 180) / Math.PI]),
-  ]);
 }
 
 /** Every point of every branch, in branch order. */
