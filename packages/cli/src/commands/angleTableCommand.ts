@@ -65,7 +65,10 @@ export function angleTableCommand(io: CliIo): Command {
     'Pattern:',
   );
   group(
-    new Option('--kind <kind>', 'bipolar (two-level ±vdc) or staircase (equal DC cells)'),
+    new Option(
+      '--kind <kind>',
+      'bipolar (two-level ±vdc, the default) or staircase (equal DC cells)',
+    ),
     'Pattern:',
   );
   group(
@@ -196,7 +199,7 @@ function patternOf(flags: AngleTableFlags): {
       `--method must be she or optimal (or give a --design with a stored pattern); got ${JSON.stringify(method)}`,
     );
   }
-  const kind = flags.kind ?? design.kind;
+  const kind = flags.kind ?? design.kind ?? 'bipolar';
   const vdc = flags.vdc ?? design.vdc;
   const angles = (flags.angles ?? design.angles) as number[] | undefined;
   const pattern =
