@@ -5,3 +5,4 @@ export * from './compareWithCarrier.js';
 export * from './assertCarrierOptions.js';
 export * from './sineReference.js';
 export * from './sineTriangle.js';
+export * from './CarrierSpan.js';

@@ -3,6 +3,12 @@ import type { NumberBounds } from '../validation/assertions.js';
 /** The largest frequency ratio a design may have: bounds the cost of one analysis (about 4·mf edges a leg). */
 export const MAX_DESIGN_FREQUENCY_RATIO = 1000;
 
+/**
+ * The largest denominator q of a design's frequency ratio p/q: a carrier frequency that is no
+ * ratio p/q with q up to this is approximated by the nearest one that is (designRationalRatio).
+ */
+export const MAX_DESIGN_FUNDAMENTAL_PERIODS = 64;
+
 /** The most first-quarter angles a stored pattern may hold. */
 export const MAX_PATTERN_ANGLES = 31;
 
@@ -30,6 +36,12 @@ export const DESIGN_BOUNDS = {
   'filter.c': { min: 1e-12, max: 1 },
   'filter.rDamping': { min: 0, max: 1_000_000 },
   'filter.cDamping': { min: 1e-12, max: 1 },
+  'grid.lineVoltage': { min: 0, minExclusive: true, max: 1_000_000 },
+  'grid.phase': { min: -2 * Math.PI, max: 2 * Math.PI },
+  'grid.r': { min: 1e-6, max: 1_000_000 },
+  'grid.l': { min: 0, max: 100 },
+  'grid.l2': { min: 0, max: 100 },
+  'grid.controlBandwidth': { min: 0.001, max: 100_000_000 },
 } as const satisfies Record<string, NumberBounds>;
 
 /** A path of {@link DESIGN_BOUNDS}. */

@@ -3,6 +3,7 @@ export * from './InverterDesign.js';
 export * from './designBounds.js';
 export * from './assertInverterDesign.js';
 export * from './designFrequencyRatio.js';
+export * from './designRationalRatio.js';
 export * from './designModulation.js';
 export * from './modulationVoltages.js';
 export * from './defaultSpectrumOrder.js';

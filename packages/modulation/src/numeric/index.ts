@@ -1,2 +1,3 @@
 export * from './findBracketedRoot.js';
 export * from './mulberry32.js';
+export * from './bestRationalApproximation.js';

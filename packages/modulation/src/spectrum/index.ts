@@ -7,3 +7,4 @@ export * from './carrierGroupOf.js';
 export * from './fundamentalAmplitude.js';
 export * from './waveformThd.js';
 export * from './waveformWthd.js';
+export * from './subharmonicSpectrum.js';

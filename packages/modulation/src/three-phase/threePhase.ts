@@ -1,4 +1,6 @@
-import { assertCarrierOptions } from '../carrier/assertCarrierOptions.js';
+import { assertCarrierSpan } from '../carrier/assertCarrierSpan.js';
+import type { CarrierSpan } from '../carrier/CarrierSpan.js';
+import { spanCarrier } from '../carrier/spanCarrier.js';
 import type { CarrierSampling } from '../carrier/CarrierSampling.js';
 import { compareWithCarrier } from '../carrier/compareWithCarrier.js';
 import { assertOneOf } from '../validation/assertions.js';
@@ -16,7 +18,10 @@ import { ZERO_SEQUENCES, type ZeroSequence } from './ZeroSequence.js';
 export interface ThreePhaseOptions {
   /** Modulation index of each sine reference, (0, 1000]; linear to 1, or 2/√3 with injection. */
   ma: number;
-  /** Frequency ratio, an integer in [1, 10000]; one carrier is shared by the three legs. */
+  /**
+   * Frequency ratio, an integer in [1, 10000]; one carrier is shared by the three legs. Over a
+   * span of q fundamental periods (the second argument) any p/q with p ≤ 10000 whole.
+   */
   mf: number;
   /** DC bus voltage (volts), > 0; each leg switches between +vdc/2 and −vdc/2. */
   vdc: number;
@@ -46,11 +51,17 @@ export interface ThreePhaseWaveforms {
  * triangle delayed by half a carrier period (see {@link invertsCarrier}); with regular sampling
  * that carrier samples at its own peaks.
  *
+ * Asynchronous ratio mf = p/q: with `span.fundamentalPeriods` = q the waveforms cover q
+ * fundamental periods on [0, 2π) with p carrier cycles, exact, as for {@link sineTriangle}.
+ *
  * @throws ParameterRangeError naming `ma`, `mf`, `vdc`, `zeroSequence`, `sampling` (also
- *   `'regular-symmetric'` with `azspwm1` or `nspwm`) or `carrierPhase`
+ *   `'regular-symmetric'` with `azspwm1` or `nspwm`), `carrierPhase` or `fundamentalPeriods`
  */
-export function threePhase(options: ThreePhaseOptions): ThreePhaseWaveforms {
-  assertCarrierOptions(options);
+export function threePhase(
+  options: ThreePhaseOptions,
+  span: CarrierSpan = {},
+): ThreePhaseWaveforms {
+  assertCarrierSpan(options, span);
   if (options.zeroSequence !== undefined) {
     assertOneOf('zeroSequence', options.zeroSequence, ZERO_SEQUENCES);
   }
@@ -67,13 +78,18 @@ export function threePhase(options: ThreePhaseOptions): ThreePhaseWaveforms {
       sampling,
     );
   }
+  const { fundamentalPeriods = 1 } = span;
   const alignment = { mf, carrierPhase };
   const leg = (phase: PhaseIndex): Waveform => {
-    const reference = threePhaseReference(phase, { ma, zeroSequence });
+    const restated = spanCarrier(
+      threePhaseReference(phase, { ma, zeroSequence }),
+      alignment,
+      fundamentalPeriods,
+    );
     const compare = (phaseShift: number): Waveform =>
-      compareWithCarrier(reference, {
-        mf,
-        carrierPhase: carrierPhase + phaseShift,
+      compareWithCarrier(restated.reference, {
+        mf: restated.alignment.mf,
+        carrierPhase: restated.alignment.carrierPhase + phaseShift,
         sampling,
         high: vdc / 2,
         low: -vdc / 2,
@@ -83,7 +99,14 @@ export function threePhase(options: ThreePhaseOptions): ThreePhaseWaveforms {
     // The inverted carrier is the same triangle half a carrier period later.
     const inverted = compare(Math.PI);
     return combineWaveforms(
-      [normal, inverted, invertedHalfPeriods(zeroSequence, phase, alignment)],
+      [
+        normal,
+        inverted,
+        invertedHalfPeriods(zeroSequence, phase, alignment, {
+          span: restated.alignment,
+          fundamentalPeriods,
+        }),
+      ],
       ([n = 0, i = 0, inverts = 0]) => (inverts === 1 ? i : n),
     );
   };
@@ -102,20 +125,24 @@ export function threePhase(options: ThreePhaseOptions): ThreePhaseWaveforms {
 
 /**
  * 1 over the carrier half periods in which phase `phase` takes the inverted carrier
- * ({@link invertsCarrier}), 0 elsewhere; its edges are carrier peaks and valleys.
+ * ({@link invertsCarrier}), 0 elsewhere; its edges are carrier peaks and valleys. The half
+ * periods are counted on the span's carrier (p cycles over q fundamental periods) and each is
+ * decided at its centre's fundamental angle θ = q·φ against the original carrier.
  */
 function invertedHalfPeriods(
   zeroSequence: ZeroSequence,
   phase: PhaseIndex,
   alignment: { mf: number; carrierPhase: number },
+  restated: { span: { mf: number; carrierPhase: number }; fundamentalPeriods: number },
 ): Waveform {
+  const { span, fundamentalPeriods } = restated;
   return waveformFromTransitions(
-    Array.from({ length: 2 * alignment.mf }, (_, j) => {
-      const start = fundamentalAngleOfCarrier(j * Math.PI, alignment);
-      const centre = fundamentalAngleOfCarrier((j + 0.5) * Math.PI, alignment);
+    Array.from({ length: 2 * span.mf }, (_, j) => {
+      const start = fundamentalAngleOfCarrier(j * Math.PI, span);
+      const centre = fundamentalAngleOfCarrier((j + 0.5) * Math.PI, span);
       return {
         angle: start,
-        level: invertsCarrier(zeroSequence, phase, centre, alignment) ? 1 : 0,
+        level: invertsCarrier(zeroSequence, phase, fundamentalPeriods * centre, alignment) ? 1 : 0,
       };
     }),
   );
