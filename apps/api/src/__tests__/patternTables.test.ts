@@ -175,6 +175,21 @@ describe('programmed patterns to firmware (issue 17)', () => {
         'target.value',
       ],
       [{ ...base, ma: { from: 0.2, to: 1.3 } }, 'ma.to'],
+      // Refused by the cost model before any work: 1024 rows of a 31-angle optimal pattern.
+      [
+        {
+          ...base,
+          pattern: {
+            method: 'optimal-pattern',
+            kind: 'bipolar',
+            vdc: 100,
+            count: 31,
+            maxOrder: 199,
+          },
+          rows: 1024,
+        },
+        'rows',
+      ],
     ];
     for (const [body, field] of cases) {
       const res = await request(t.app).post('/api/v1/angle-tables').set(auth).send(body);
