@@ -80,6 +80,22 @@ const COLUMNS: Column[] = [
         : 'no filter',
   },
   {
+    heading: 'Common mode (V rms)',
+    cell: (r) => (r.commonMode ? formatNumber(r.commonMode.rms) : '—'),
+    title: (r) =>
+      r.commonMode
+        ? `levels ${r.commonMode.levels.map((l) => formatNumber(l)).join(', ')} V; ${r.commonMode.stepsPerPeriod} steps a period`
+        : 'single-phase bridge',
+  },
+  {
+    heading: 'Device switching (Hz)',
+    cell: (r) => (r.switching ? formatNumber(r.switching.averageDeviceFrequency) : '—'),
+    title: (r) =>
+      r.switching
+        ? `turn-ons of each switch per second, averaged over the period (${r.switching.legEdgesPerPeriod} leg edges a period)`
+        : 'single-phase bridge',
+  },
+  {
     heading: 'Limit check',
     cell: (r) => (r.limitCheck.pass ? 'pass' : 'fail'),
     title: (r) => `${r.limitCheck.standard.name}, ${limitPointName(r)}`,
