@@ -1,4 +1,5 @@
 import type { LcFilterCharacteristics } from '../filter/lcFilter.js';
+import type { GridCurrentLimitCheck } from '../limits/checkGridCurrentLimits.js';
 import type { HarmonicLimitCheck } from '../limits/checkVoltageHarmonicLimits.js';
 import type { MotorFigures } from '../load/MotorFigures.js';
 import type { LabelledHarmonic } from '../spectrum/labelHarmonics.js';
@@ -140,6 +141,51 @@ export interface SwitchingFigures {
   averageDeviceFrequency: number;
 }
 
+/**
+ * A grid-connected bridge (the design's `grid`): phase a through the filter (L1, C and its
+ * damping) and L2 into a sinusoidal grid behind its impedance, solved per harmonic by
+ * superposition (the grid source at the fundamental only, the bridge at every order).
+ */
+export interface GridFigures {
+  /** The grid source, peak volts a phase. */
+  phaseVoltage: number;
+  /** Grid short-circuit current V_ph/|r + jω₁l|, amperes rms (l2 left out: a conservative ratio). */
+  shortCircuitCurrent: number;
+  /** I_SC/I_L with I_L the fundamental grid current (the operating point taken as full load). */
+  shortCircuitRatio: number;
+  /** Current into the grid, phase a: orders 0..maxOrder, peak amperes, labelled. */
+  gridCurrentSpectrum: LabelledHarmonic[];
+  /** Current out of the bridge leg (through L1), phase a: orders 0..maxOrder, peak amperes, labelled. */
+  inverterCurrentSpectrum: LabelledHarmonic[];
+  /** Fundamental grid current, peak amperes, and its phase (radians, of sin(θ + phase)). */
+  gridCurrentFundamental: number;
+  gridCurrentPhase: number;
+  /** Harmonic rms of the grid current over its fundamental rms, orders 2..analysisOrder (TDD with I_L the fundamental). */
+  gridCurrentThd: number;
+  /** Active and reactive power into the grid source, all phases, watts and var (reactive > 0: current lagging the grid voltage). */
+  power: number;
+  reactivePower: number;
+  /** power over apparent power at the fundamental. */
+  powerFactor: number;
+  /**
+   * The LCL resonance (1/2π)·√((L1 + L2')/(L1·L2'·C)) with L2' = l2 + l, hertz, and its distance
+   * from the carrier (f_carrier/f_res) and the control bandwidth (f_res/f_bw); whether it sits in
+   * Liserre et al.'s 10·f₁…f_carrier/2. Null without a filter or with l2 + l = 0.
+   */
+  resonance: {
+    frequency: number;
+    carrierRatio: number | null;
+    controlBandwidthRatio: number | null;
+    withinLiserreRange: boolean | null;
+  } | null;
+  /** Power in the damping resistor, all phases, watts (sum to analysisOrder); 0 without one. */
+  dampingLoss: number;
+  /** The capacitor's fundamental current, amperes rms a phase, and the reactive power it supplies, all phases, var; null without a filter. */
+  capacitor: { fundamentalCurrent: number; reactivePower: number } | null;
+  /** The grid current against IEEE Std 519-2022 Table 2 and IEEE Std 1547-2018 Tables 26–27 (recalled from memory). */
+  limits: { ieee519: GridCurrentLimitCheck; ieee1547: GridCurrentLimitCheck };
+}
+
 /** Everything the product shows about one design, from {@link analyseDesign}; plain data. */
 export interface DesignReport {
   method: ModulationMethod;
@@ -184,6 +230,8 @@ export interface DesignReport {
   } | null;
   /** The limit check of the voltage at the point of coupling (the filter's output where there is one). */
   limitCheck: HarmonicLimitCheck;
+  /** The grid-connected figures; null without a `grid`. */
+  grid: GridFigures | null;
   /** Cautions the product shows with these figures. */
   cautions: string[];
 }

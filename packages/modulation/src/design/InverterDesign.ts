@@ -29,6 +29,29 @@ export interface DesignLoad {
 }
 
 /**
+ * The grid a grid-connected bridge feeds, per phase: the design's `filter` (L1 and the capacitor
+ * with its damping) then the grid-side inductor `l2`, the grid's resistance `r` and inductance
+ * `l`, and a sinusoidal source at the fundamental, e_a = √2·V_ph·sin(θ + phase) with
+ * V_ph = lineVoltage/√3 for a three-phase bridge (star, b and c lag by 2π/3 and 4π/3) or
+ * lineVoltage for a single-phase one. Without a filter the bridge feeds the grid through
+ * l2 + l alone (an L filter). A design with a grid has no `load`.
+ */
+export interface DesignGrid {
+  /** Grid voltage, volts rms line to line (three-phase) or rms (single-phase), > 0. */
+  lineVoltage: number;
+  /** Angle of phase a's grid voltage against the bridge's sin θ, radians. @default 0 */
+  phase?: number;
+  /** Resistance in series with the grid (the grid's with l2's), ohms, > 0. */
+  r: number;
+  /** Grid inductance (the short-circuit impedance's), henries, ≥ 0. */
+  l: number;
+  /** Grid-side filter inductor L2, henries, ≥ 0. */
+  l2: number;
+  /** The current controller's bandwidth, hertz, to compare the resonance with. @default none */
+  controlBandwidth?: number;
+}
+
+/**
  * One inverter design: everything the design report is computed from.
  * - `vdc`: DC bus, volts (the bipolar level or each staircase cell for a stored pattern).
  * - `fundamentalFrequency`: output frequency, hertz.
@@ -37,6 +60,7 @@ export interface DesignLoad {
  *   number. Stored patterns have no carrier and leave it out.
  * - `modulation`: the method and its options.
  * - `filter`: optional LC output filter per phase; `load`: optional R–L(–EMF) load per phase.
+ * - `grid`: optional grid the bridge feeds through the filter (then no `load`).
  */
 export interface InverterDesign {
   vdc: number;
@@ -45,4 +69,5 @@ export interface InverterDesign {
   modulation: DesignModulation;
   filter?: DesignFilter | null;
   load?: DesignLoad | null;
+  grid?: DesignGrid | null;
 }

@@ -6,6 +6,7 @@ import {
   type OutputNetworkPhasors,
 } from '../filter/outputNetworkResponse.js';
 import { checkVoltageHarmonicLimits } from '../limits/checkVoltageHarmonicLimits.js';
+import { GRID_CURRENT_LIMIT_CAUTION } from '../limits/gridCurrentLimits.js';
 import { HARMONIC_LIMIT_CAUTION } from '../limits/voltageHarmonicLimits.js';
 import { currentDistortion } from '../load/currentDistortion.js';
 import { motorLoadFigures } from '../load/motorLoadFigures.js';
@@ -36,6 +37,8 @@ import { defaultSpectrumOrder } from './defaultSpectrumOrder.js';
 import { designModulation } from './designModulation.js';
 import { commonModeFigures } from './commonModeFigures.js';
 import { dcLinkFigures } from './dcLinkFigures.js';
+import { gridFigures } from './gridFigures.js';
+import { gridLoad } from './gridLoad.js';
 import type {
   CommonModeFigures,
   CurrentFigures,
@@ -109,24 +112,31 @@ const PHASES = ['a', 'b', 'c'] as const;
  *   phase-to-star-point voltage (2·v_a − v_b − v_c)/3; line-to-line figures are reported beside.
  * - Limit check (IEEE Std 519-2022 Table 1, recalled from memory) on the voltage at the point
  *   of coupling: the filter's output with a filter, else the bridge's.
+ * - With a `grid`: the grid is each phase's load (r, l2 + l, the grid source as its EMF; see
+ *   `gridLoad`), and `grid` holds the grid-connected figures (`gridFigures`: grid and inverter
+ *   current spectra, resonance, damping loss, the current limits of IEEE Std 519 and 1547).
  *
  * @throws ParameterRangeError / ParameterTypeError naming the field by its path in the design
  *   (`vdc`, `carrierFrequency`, `modulation.ma`, `load.r`, `filter.c`, …) or the option
  */
 export function analyseDesign(
-  design: InverterDesign,
+  given: InverterDesign,
   options: AnalyseDesignOptions = {},
 ): DesignReport {
-  assertInverterDesign(design);
-  const { maxOrder = defaultSpectrumOrder(design), points = 1200, busVoltage } = options;
+  assertInverterDesign(given);
+  const { maxOrder = defaultSpectrumOrder(given), points = 1200, busVoltage } = options;
   assertNumberInRange('maxOrder', maxOrder, { min: 50, max: 5000, integer: true });
   assertNumberInRange('points', points, { min: 64, max: 20_000, integer: true });
   if (busVoltage !== undefined)
     assertNumberInRange('busVoltage', busVoltage, { min: 0, minExclusive: true, max: 1e7 });
-  const filter = design.filter ?? null;
+  const filter = given.filter ?? null;
   if (filter !== null) withFieldPrefix('filter.', () => assertLcFilter(filter));
-  const modulation = withFieldPrefix('modulation.', () => designModulation(design));
+  const modulation = withFieldPrefix('modulation.', () => designModulation(given));
   const voltages = withFieldPrefix('modulation.', () => modulationVoltages(modulation));
+  // A grid is the load of each phase: r and l2 + l with the grid source as its EMF.
+  const grid = given.grid ?? null;
+  const design: InverterDesign =
+    grid === null ? given : { ...given, load: gridLoad(grid, voltages.phaseCount) };
   const frequencyRatio =
     'mf' in modulation
       ? modulation.mf
@@ -241,7 +251,7 @@ export function analyseDesign(
     switching: legSwitching,
     loadPower,
     motor:
-      load?.emf && load.emf.amplitude > 0
+      grid === null && load?.emf && load.emf.amplitude > 0
         ? motorLoadFigures(
             currents.map((c) => ({ ...(c.load as CurrentFigures), phase: c.phase })),
             load.emf,
@@ -250,7 +260,24 @@ export function analyseDesign(
         : null,
     filter: filter === null ? null : filterFigures(filter, network, frequency, frequencyRatio),
     limitCheck,
-    cautions: [DESIGN_CAUTION, HARMONIC_LIMIT_CAUTION],
+    grid:
+      grid === null
+        ? null
+        : gridFigures({
+            grid,
+            network,
+            bridge: harmonics(phaseVoltages[0] as Waveform, analysisOrder),
+            source: phasorOf(load?.emf?.amplitude ?? 0, load?.emf?.phase ?? 0),
+            phaseCount: voltages.phaseCount,
+            fundamentalFrequency: frequency,
+            carrierFrequency: frequencyRatio === null ? null : frequencyRatio * frequency,
+            gridCurrentThdWholeWaveform: currents[0]?.load?.thd ?? 0,
+            label,
+          }),
+    cautions:
+      grid === null
+        ? [DESIGN_CAUTION, HARMONIC_LIMIT_CAUTION]
+        : [DESIGN_CAUTION, HARMONIC_LIMIT_CAUTION, GRID_CURRENT_LIMIT_CAUTION],
   };
 }
 

@@ -74,6 +74,29 @@ export function assertInverterDesign(design: unknown): asserts design is Inverte
   }
   assertDesignLoad(value.load, check);
   assertDesignFilter(value.filter, check);
+  assertDesignGrid(value, check);
+}
+
+function assertDesignGrid(
+  design: Record<string, unknown>,
+  check: (field: DesignBoundsField, entry: unknown) => void,
+): void {
+  const grid = design.grid;
+  if (grid === undefined || grid === null) return;
+  if (typeof grid !== 'object') throw new ParameterTypeError('grid', 'an object or null', grid);
+  if (design.load !== undefined && design.load !== null)
+    throw new ParameterRangeError(
+      'load',
+      'left out or null with a grid (the grid is what the bridge feeds)',
+      design.load,
+    );
+  const { lineVoltage, phase, r, l, l2, controlBandwidth } = grid as Record<string, unknown>;
+  check('grid.lineVoltage', lineVoltage);
+  if (phase !== undefined) check('grid.phase', phase);
+  check('grid.r', r);
+  check('grid.l', l);
+  check('grid.l2', l2);
+  if (controlBandwidth !== undefined) check('grid.controlBandwidth', controlBandwidth);
 }
 
 function assertDesignLoad(

@@ -36,6 +36,12 @@ export const DESIGN_BOUNDS = {
   'filter.c': { min: 1e-12, max: 1 },
   'filter.rDamping': { min: 0, max: 1_000_000 },
   'filter.cDamping': { min: 1e-12, max: 1 },
+  'grid.lineVoltage': { min: 0, minExclusive: true, max: 1_000_000 },
+  'grid.phase': { min: -2 * Math.PI, max: 2 * Math.PI },
+  'grid.r': { min: 1e-6, max: 1_000_000 },
+  'grid.l': { min: 0, max: 100 },
+  'grid.l2': { min: 0, max: 100 },
+  'grid.controlBandwidth': { min: 0.001, max: 100_000_000 },
 } as const satisfies Record<string, NumberBounds>;
 
 /** A path of {@link DESIGN_BOUNDS}. */

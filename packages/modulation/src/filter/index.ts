@@ -6,3 +6,5 @@ export * from './filteredSpectrum.js';
 export * from './sizeFilterInductance.js';
 export * from './filterInductanceForTarget.js';
 export * from './outputNetworkResponse.js';
+export * from './lclResonanceFrequency.js';
+export * from './designLclFilter.js';
