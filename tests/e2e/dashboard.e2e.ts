@@ -473,7 +473,7 @@ export const scenarios: Scenario[] = [
       assert(sector === '1', `25° is in sector 1 (got ${sector})`);
       await screenshot(page, 'space-vector');
       await page.getByRole('link', { name: 'Controller tables' }).click();
-      await page.getByRole('button', { name: 'C header' }).waitFor();
+      await page.getByRole('button', { name: 'C header', exact: true }).waitFor();
       await screenshot(page, 'controller-tables');
       await page.close();
     },
