@@ -1,4 +1,4 @@
-import { ParameterRangeError } from '../validation/errors.js';
+import { assertCPrefix } from './assertCPrefix.js';
 import type { TimerTable } from './timerTableTypes.js';
 
 /** Options of {@link timerTableToCHeader}. */
@@ -26,13 +26,7 @@ export function timerTableToCHeader(
   options: TimerTableCHeaderOptions = {},
 ): string {
   const { prefix = 'pwm_table' } = options;
-  if (typeof prefix !== 'string' || !/^[A-Za-z_][A-Za-z0-9_]{0,39}$/.test(prefix)) {
-    throw new ParameterRangeError(
-      'prefix',
-      'a C identifier of 1 to 40 characters (letters, digits, _; not starting with a digit)',
-      prefix,
-    );
-  }
+  assertCPrefix('prefix', prefix);
   const lower = prefix.toLowerCase();
   const upper = prefix.toUpperCase();
   const guard = `${upper}_H`;

@@ -1,4 +1,4 @@
-import { ParameterRangeError } from '../validation/errors.js';
+import { assertCPrefix } from '../firmware/assertCPrefix.js';
 import type { AngleTable, AngleTableMidpointErrors } from './angleTableTypes.js';
 import { angleTableFixedPoint, type AngleTableFixedPointOptions } from './angleTableFixedPoint.js';
 
@@ -31,13 +31,7 @@ export interface AngleTableCHeaderOptions extends AngleTableFixedPointOptions {
  */
 export function angleTableToCHeader(table: AngleTable, options: AngleTableCHeaderOptions): string {
   const { prefix = 'angle_table', midpointErrors } = options;
-  if (typeof prefix !== 'string' || !/^[A-Za-z_][A-Za-z0-9_]{0,39}$/.test(prefix)) {
-    throw new ParameterRangeError(
-      'prefix',
-      'a C identifier of 1 to 40 characters (letters, digits, _; not starting with a digit)',
-      prefix,
-    );
-  }
+  assertCPrefix('prefix', prefix);
   const fixed = angleTableFixedPoint(table, options);
   const lower = prefix.toLowerCase();
   const upper = prefix.toUpperCase();
