@@ -26,9 +26,7 @@ export function useCreateOptimalSweep() {
 
 /** The result of a succeeded optimal-pattern sweep (null for another kind of job, or before it has succeeded). */
 export function optimalSweepResultOf(job: Job | undefined): OptimalSweepResult | null {
-  return job?.kind === 'optimal-sweep' && job.result && 'points' in job.result
-    ? (job.result as OptimalSweepResult)
-    : null;
+  return job?.kind === 'optimal-sweep' && job.result && 'points' in job.result ? job.result : null;
 }
 
 /** The table as JSON: rows, midpoint errors and fixed-point values. */

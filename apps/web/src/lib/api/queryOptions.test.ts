@@ -43,17 +43,20 @@ const job = (
   status: Job['status'],
   kind: Job['kind'] = 'ma-sweep',
   result: Job['result'] = null,
-): Job => ({
-  id: ID,
-  kind,
-  status,
-  progress: status === 'succeeded' ? 1 : 0.5,
-  result,
-  error: null,
-  createdAt: '2026-01-01T00:00:00Z',
-  startedAt: null,
-  finishedAt: null,
-});
+): Job =>
+  // Kind and result are chosen independently (Job ties each kind to its result), so the
+  // helpers' checks of the pair can be tried with mismatched ones.
+  ({
+    id: ID,
+    kind,
+    status,
+    progress: status === 'succeeded' ? 1 : 0.5,
+    result,
+    error: null,
+    createdAt: '2026-01-01T00:00:00Z',
+    startedAt: null,
+    finishedAt: null,
+  }) as Job;
 
 afterEach(() => vi.unstubAllGlobals());
 
