@@ -1,6 +1,7 @@
 import { connect } from 'node:net';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { call, DEMO, signInOver, startChildServer, type ChildServer } from '../support/server.js';
+import { waitFor } from './support/waitFor.js';
 
 /**
  * Scale-out (issue 11): API processes of the built service (node apps/api/dist/index.js) on one
@@ -83,20 +84,6 @@ interface Job {
   result: { points?: unknown[] } | null;
 }
 
-async function waitFor<T>(
-  what: string,
-  probe: () => Promise<T | undefined>,
-  timeoutMs = 60_000,
-): Promise<T> {
-  const deadline = Date.now() + timeoutMs;
-  for (;;) {
-    const value = await probe();
-    if (value !== undefined) return value;
-    if (Date.now() > deadline) throw new Error(`timed out waiting for ${what}`);
-    await new Promise((r) => setTimeout(r, 100));
-  }
-}
-
 describe.skipIf(!POSTGRES)('replicas on one PostgreSQL database', () => {
   const replicas: ChildServer[] = [];
   let a: ChildServer;
@@ -131,11 +118,15 @@ describe.skipIf(!POSTGRES)('replicas on one PostgreSQL database', () => {
     expect(started.status, JSON.stringify(started.body)).toBe(202);
     const id = (started.body as Job).id;
     const seen: number[] = [];
-    const done = await waitFor('the job to finish', async () => {
-      const now = await job(b, id);
-      if (now.status === 'running') seen.push(now.progress);
-      return now.status === 'succeeded' || now.status === 'failed' ? now : undefined;
-    });
+    const done = await waitFor(
+      'the job to finish',
+      async () => {
+        const now = await job(b, id);
+        if (now.status === 'running') seen.push(now.progress);
+        return now.status === 'succeeded' || now.status === 'failed' ? now : undefined;
+      },
+      60_000,
+    );
     expect(done.status, done.error ?? '').toBe('succeeded');
     expect(done.result?.points).toHaveLength(SWEEP.fundamental.points);
     // Progress stored by B's worker and read through B while it ran, rising.
@@ -151,10 +142,14 @@ describe.skipIf(!POSTGRES)('replicas on one PostgreSQL database', () => {
     expect(started.status, JSON.stringify(started.body)).toBe(202);
     const id = (started.body as Job).id;
     // Only B has a job slot, so the attempt that is running is B's.
-    const onB = await waitFor('B to run the job', async () => {
-      const now = await job(a, id);
-      return now.status === 'running' && now.progress > 0 ? now : undefined;
-    });
+    const onB = await waitFor(
+      'B to run the job',
+      async () => {
+        const now = await job(a, id);
+        return now.status === 'running' && now.progress > 0 ? now : undefined;
+      },
+      60_000,
+    );
     // B freezes (SIGSTOP) so that C is up and idle before B dies: then only the queue can give
     // C the job, not a replica's start.
     b.child.kill('SIGSTOP');

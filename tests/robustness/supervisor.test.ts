@@ -12,6 +12,7 @@ import {
   signInOver,
   tempDir,
 } from '../support/server.js';
+import { waitFor } from './support/waitFor.js';
 
 /**
  * Supervision: `node scripts/start.mjs` (what `npm start` runs after installing), without its
@@ -30,20 +31,6 @@ const SHE_LONG = {
 
 const dirs: string[] = [];
 afterAll(() => dirs.forEach((dir) => rmSync(dir, { recursive: true, force: true })));
-
-async function waitFor<T>(
-  what: string,
-  probe: () => Promise<T | undefined> | T | undefined,
-  timeoutMs = 30_000,
-): Promise<T> {
-  const deadline = Date.now() + timeoutMs;
-  for (;;) {
-    const value = await probe();
-    if (value !== undefined) return value;
-    if (Date.now() > deadline) throw new Error(`timed out waiting for ${what}`);
-    await new Promise((r) => setTimeout(r, 100));
-  }
-}
 
 async function healthy(baseUrl: string): Promise<true | undefined> {
   try {
