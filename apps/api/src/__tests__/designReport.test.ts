@@ -78,6 +78,14 @@ const DESIGNS: Record<string, InverterDesign> = {
     },
     load: LOAD,
   },
+  'three-phase, LCL filter into a 400 V grid': {
+    vdc: 700,
+    fundamentalFrequency: 50,
+    carrierFrequency: 10_000,
+    modulation: { method: 'three-phase', ma: 1, zeroSequence: 'third-harmonic' },
+    filter: { l: 0.002, c: 10e-6, rDamping: 2 },
+    grid: { lineVoltage: 400, phase: -0.1, r: 0.05, l: 0.0002, l2: 0.0005, controlBandwidth: 1000 },
+  },
   'optimal pattern, staircase, no load': {
     vdc: 48,
     fundamentalFrequency: 50,
@@ -282,6 +290,18 @@ describe('design report routes', () => {
         body: { design: { ...design, load: { r: 0, l: 0.01 } } },
         path: 'design.load.r',
         words: ['≥ 0.000001'],
+      },
+      {
+        body: {
+          design: { ...design, load: null, grid: { lineVoltage: 230, r: 0, l: 0, l2: 0.001 } },
+        },
+        path: 'design.grid.r',
+        words: ['≥ 0.000001'],
+      },
+      {
+        body: { design: { ...design, grid: { lineVoltage: 230, r: 0.1, l: 0, l2: 0.001 } } },
+        path: 'design.load',
+        words: ['left out or null with a grid'],
       },
       {
         body: { design: { ...design, carrierFrequency: 2075 } },

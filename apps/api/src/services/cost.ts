@@ -169,7 +169,9 @@ function designEdges(design: InverterDesign, ratio: number): { phase: number; li
  * GET /studies/{id}/report, a study's check on save and its shared report). The estimate follows
  * analyseDesign's documented analysis: the exact spectra of every voltage to maxOrder and, with a
  * filter, every phase to its analysis order (10·mf + 10, at most MAX_ANALYSIS_ORDER); time series
- * of `points` samples (1 + 3 per phase with a filter, one per phase with a load alone).
+ * of `points` samples (1 + 3 per phase with a filter, one per phase with a load alone). A grid is
+ * each phase's load, and its figures solve phase a once more to the analysis order (two more
+ * labelled spectra in the answer).
  * @param field - where the design sits in the request (`design`, `study.design`)
  */
 export function reportCost(
@@ -191,8 +193,12 @@ export function reportCost(
     ? Math.min(MAX_ANALYSIS_ORDER, Math.max(maxOrder, pattern ? 2000 : 10 * ratio + 10))
     : maxOrder;
   const spectra = (edges.phase + edges.line) * maxOrder;
-  const throughFilter = filtered ? phases * edges.phase * analysisOrder : 0;
-  const series = (filtered ? 1 + 3 * phases : 0) + (!filtered && design.load ? phases : 0);
+  const grid = design.grid !== undefined && design.grid !== null;
+  const throughFilter =
+    (filtered ? phases * edges.phase * analysisOrder : 0) +
+    (grid ? edges.phase * analysisOrder : 0);
+  const series =
+    (filtered ? 1 + 3 * phases : 0) + (!filtered && (design.load || grid) ? phases : 0);
   const sampled = series * points * 20;
   const build = (phases === 3 ? 3 : 1) * (edges.phase + edges.line) * BUILD_PER_EDGE;
   const voltages = phases === 3 ? 9 : 1;
@@ -213,12 +219,12 @@ export function reportCost(
     .map(([name]) => name);
   return {
     work: spectra + throughFilter + build + sampled,
-    basis: `${edges.phase + edges.line} edges × ${maxOrder} orders${filtered ? ` + ${phases} × ${edges.phase} edges × ${analysisOrder} orders through the filter` : ''}${series ? ` + ${series} series × ${points} points` : ''}`,
+    basis: `${edges.phase + edges.line} edges × ${maxOrder} orders${filtered ? ` + ${phases} × ${edges.phase} edges × ${analysisOrder} orders through the filter` : ''}${grid ? ` + ${edges.phase} edges × ${analysisOrder} orders for the grid` : ''}${series ? ` + ${series} series × ${points} points` : ''}`,
     fields: fields.length ? fields : [field],
     // Labelled spectra (about five numbers an order and voltage), time series, and the edges of each voltage.
     responseBytes:
       BYTES_PER_NUMBER *
-      (5 * (maxOrder + 1) * (filtered ? 3 : 2) +
+      (5 * (maxOrder + 1) * ((filtered ? 3 : 2) + (grid ? 2 : 0)) +
         series * points +
         2 * voltages * (edges.phase + edges.line)),
     responseFields: ['maxOrder', 'points'].filter((name) => optionFields.includes(name)),
