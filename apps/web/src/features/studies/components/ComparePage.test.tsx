@@ -1,5 +1,5 @@
 import { analyseDesign, type InverterDesign } from '@pulsewright/modulation';
-import { render, screen, within } from '@testing-library/react';
+import { fireEvent, render, screen, within } from '@testing-library/react';
 import { MemoryRouter } from 'react-router-dom';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { AppProviders, createQueryClient } from '../../../app/providers';
@@ -112,5 +112,17 @@ describe('ComparePage', () => {
       reports[B].bridge.spectrum.every((h: { label: string }) => !h.label.includes('mf')),
     ).toBe(true);
     expect(within(chart).getByRole('combobox', { name: 'Spectra of' })).toHaveValue('bridge');
+    // Sorted by a figure on a click of its heading, ascending then descending.
+    const order = () =>
+      [...table.querySelectorAll('tbody tr')].map((r) => r.getAttribute('data-study'));
+    const byThd = [A, B]
+      .map((id) => ({ id, thd: reports[id].bridge.thd as number }))
+      .sort((x, y) => x.thd - y.thd)
+      .map(({ id }) => (id === A ? 'Unipolar 20 kHz filtered' : 'SHE 5 7'));
+    fireEvent.click(within(table).getByRole('button', { name: /^THD, exact/ }));
+    expect(order()).toEqual(byThd);
+    fireEvent.click(within(table).getByRole('button', { name: /^THD, exact/ }));
+    expect(order()).toEqual([...byThd].reverse());
+    expect(screen.getByRole('button', { name: 'CSV' })).toBeInTheDocument();
   });
 });

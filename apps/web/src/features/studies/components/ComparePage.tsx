@@ -5,6 +5,8 @@ import { SpectrumChart, type SpectrumSeries } from '../../../components/charts/S
 import { optionValue, type FieldOption } from '../../../components/ui/Field';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { Empty, ErrorState, Loading, QueryView } from '../../../components/ui/QueryState';
+import { Button } from '../../../components/ui/Button';
+import { downloadText, toCsv } from '../../../lib/download';
 import { formatGain, formatNumber, formatPercent } from '../../../lib/format';
 import {
   studyQueryOptions,
@@ -29,6 +31,8 @@ interface Column {
   heading: string;
   cell: (report: StudyReport) => string;
   title?: (report: StudyReport) => string;
+  /** The figure in the report's units, for sorting and the CSV; null where the study has none. */
+  value?: (report: StudyReport) => number | null;
 }
 
 const phaseA = (report: StudyReport) => report.currents[0];
@@ -39,41 +43,49 @@ const COLUMNS: Column[] = [
   {
     heading: 'Fundamental (V peak)',
     cell: (r) => formatNumber(r.bridge.fundamental),
+    value: (r) => r.bridge.fundamental,
     title: (r) => r.bridge.name,
   },
   {
     heading: 'THD, exact',
     cell: (r) => formatPercent(r.bridge.thd),
+    value: (r) => r.bridge.thd,
     title: (r) => `whole waveform, ${r.bridge.name}`,
   },
   {
     heading: 'WTHD, exact',
     cell: (r) => formatPercent(r.bridge.wthd, 3),
+    value: (r) => r.bridge.wthd,
     title: (r) => `whole waveform, ${r.bridge.name}`,
   },
   {
     heading: 'Output THD',
     cell: (r) => (r.output ? formatPercent(r.output.thd) : '—'),
+    value: (r) => r.output?.thd ?? null,
     title: (r) => (r.output ? `${r.output.name}, to order ${r.analysisOrder}` : 'no filter'),
   },
   {
     heading: 'Current ripple (A rms)',
     cell: (r) => (phaseA(r) ? formatNumber(phaseA(r)?.inverter.rippleRms ?? Number.NaN) : '—'),
+    value: (r) => phaseA(r)?.inverter.rippleRms ?? null,
     title: (r) => phaseA(r)?.inverter.name ?? 'no load or filter',
   },
   {
     heading: 'Switch current (A rms)',
     cell: (r) => (phaseA(r) ? formatNumber(phaseA(r)?.inverter.rms ?? Number.NaN) : '—'),
+    value: (r) => phaseA(r)?.inverter.rms ?? null,
     title: (r) => phaseA(r)?.inverter.name ?? 'no load or filter',
   },
   {
     heading: 'Load power (W)',
     cell: (r) => (r.loadPower === null ? '—' : formatNumber(r.loadPower)),
+    value: (r) => r.loadPower,
     title: (r) => (r.phaseCount === 3 ? 'into R, all three phases' : 'into R'),
   },
   {
     heading: 'Filter resonance (Hz)',
     cell: (r) => (r.filter ? formatNumber(r.filter.characteristics.resonanceFrequency) : '—'),
+    value: (r) => r.filter?.characteristics.resonanceFrequency ?? null,
     title: (r) =>
       r.filter?.gainAtCarrier != null
         ? `gain at the carrier ${formatGain(r.filter.gainAtCarrier)}`
@@ -82,6 +94,7 @@ const COLUMNS: Column[] = [
   {
     heading: 'Common mode (V rms)',
     cell: (r) => (r.commonMode ? formatNumber(r.commonMode.rms) : '—'),
+    value: (r) => r.commonMode?.rms ?? null,
     title: (r) =>
       r.commonMode
         ? `levels ${r.commonMode.levels.map((l) => formatNumber(l)).join(', ')} V; ${r.commonMode.stepsPerPeriod} steps a period`
@@ -90,6 +103,7 @@ const COLUMNS: Column[] = [
   {
     heading: 'Device switching (Hz)',
     cell: (r) => (r.switching ? formatNumber(r.switching.averageDeviceFrequency) : '—'),
+    value: (r) => r.switching?.averageDeviceFrequency ?? null,
     title: (r) =>
       r.switching
         ? `turn-ons of each switch per second, averaged over the period (${r.switching.legEdgesPerPeriod} leg edges a period)`
@@ -111,6 +125,8 @@ export function ComparePage() {
   const [ids, setIds] = useState(() => parseIds(fromUrl));
   const [seenUrl, setSeenUrl] = useState(fromUrl);
   const [choice, setChoice] = useState<SpectrumChoice>('bridge');
+  // The column the figures are sorted by (in the order picked when null), ascending or not.
+  const [sort, setSort] = useState<{ heading: string; ascending: boolean } | null>(null);
   if (fromUrl !== seenUrl) {
     // The URL changed from outside (a link, back/forward): adopt it while rendering.
     setSeenUrl(fromUrl);
@@ -141,6 +157,30 @@ export function ComparePage() {
       ? [{ id, study, report, color: COLOURS[i % COLOURS.length] ?? '#12263a' }]
       : [];
   });
+  const sortColumn = COLUMNS.find((c) => c.heading === sort?.heading);
+  const ranked = sortColumn?.value
+    ? [...rows].sort((x, y) => {
+        const a = sortColumn.value?.(x.report) ?? null;
+        const b = sortColumn.value?.(y.report) ?? null;
+        // Studies without the figure go last either way.
+        if (a === null || b === null) return a === null ? (b === null ? 0 : 1) : -1;
+        return sort?.ascending ? a - b : b - a;
+      })
+    : rows;
+  const sortBy = (heading: string) =>
+    setSort((current) =>
+      current?.heading === heading
+        ? { heading, ascending: !current.ascending }
+        : { heading, ascending: true },
+    );
+  const figuresCsv = () =>
+    toCsv(
+      ['study', ...COLUMNS.map((c) => c.heading)],
+      ranked.map(({ study, report }) => [
+        study.name,
+        ...COLUMNS.map((c) => (c.value ? (c.value(report) ?? '') : c.cell(report))),
+      ]),
+    );
   // Each spectrum keeps its own report's labels: carrier groups for a carrier method, orders for a pattern.
   const series: SpectrumSeries[] = rows.map(({ study, report, color }) => {
     const voltage = choice === 'coupling' && report.output ? report.output : report.bridge;
@@ -183,7 +223,17 @@ export function ComparePage() {
           {failed ? <ErrorState error={failed.error} onRetry={() => failed.refetch()} /> : null}
           {rows.length ? (
             <>
-              <Panel title="Figures">
+              <Panel
+                title="Figures"
+                actions={
+                  <Button
+                    variant="secondary"
+                    onClick={() => downloadText(figuresCsv(), 'compare-figures.csv', 'text/csv')}
+                  >
+                    CSV
+                  </Button>
+                }
+              >
                 <div className="overflow-x-auto">
                   <table
                     className="w-full text-sm [&_td]:px-2 [&_td]:py-1 [&_th]:px-2"
@@ -193,14 +243,35 @@ export function ComparePage() {
                       <tr>
                         <th scope="col">Study</th>
                         {COLUMNS.map((c) => (
-                          <th scope="col" key={c.heading}>
-                            {c.heading}
+                          <th
+                            scope="col"
+                            key={c.heading}
+                            aria-sort={
+                              sort?.heading === c.heading
+                                ? sort.ascending
+                                  ? 'ascending'
+                                  : 'descending'
+                                : undefined
+                            }
+                          >
+                            {c.value ? (
+                              <button
+                                type="button"
+                                className="text-left uppercase underline-offset-2 hover:underline"
+                                onClick={() => sortBy(c.heading)}
+                              >
+                                {c.heading}
+                                {sort?.heading === c.heading ? (sort.ascending ? ' ▲' : ' ▼') : ''}
+                              </button>
+                            ) : (
+                              c.heading
+                            )}
                           </th>
                         ))}
                       </tr>
                     </thead>
                     <tbody className="num">
-                      {rows.map(({ id, study, report, color }) => (
+                      {ranked.map(({ id, study, report, color }) => (
                         <tr key={id} className="border-t border-rule/60" data-study={study.name}>
                           <th scope="row" className="text-left font-sans font-medium">
                             <span
