@@ -191,6 +191,8 @@ describe('compute routes', () => {
     for (let i = 1; i < seen.length; i++)
       expect(seen[i]).toBeGreaterThanOrEqual(seen[i - 1] as number);
     expect(job.result.ma).toHaveLength(40);
+    // The voltage analysed is named as the library names it (docs/methods.md glossary).
+    expect(job.result.voltage).toBe('bridge output');
     expect(job.result.ma[0]).toBeCloseTo(0.1, 12);
     expect(job.result.ma[39]).toBeCloseTo(1, 12);
     // Linear range: fundamental = ma·vdc at every point (Holmes and Lipo, 2003, ch. 3).
@@ -213,6 +215,27 @@ describe('compute routes', () => {
     });
     const listed = (await request(t.app).get('/api/v1/jobs').set(auth)).body;
     expect(listed.some((j: { id: string }) => j.id === job.id)).toBe(true);
+  });
+
+  it("names the line voltage a three-phase ma sweep reads, and its fundamental is the line's", async () => {
+    const created = await request(t.app)
+      .post('/api/v1/jobs/ma-sweeps')
+      .set(auth)
+      .send({
+        modulation: { method: 'three-phase', ma: 0.5, mf: 21, vdc: 600 },
+        ma: { from: 0.2, to: 1, points: 9 },
+        maxOrder: 60,
+      });
+    expect(created.status, JSON.stringify(created.body)).toBe(202);
+    await t.app.services.jobs.idle();
+    const job = (await request(t.app).get(`/api/v1/jobs/${created.body.id}`).set(auth)).body;
+    expect(job.status).toBe('succeeded');
+    expect(job.result.voltage).toBe('line a−b');
+    // Linear range of sinusoidal PWM: the line-to-line fundamental is √3·ma·vdc/2 (Holmes and
+    // Lipo, 2003, ch. 5), √3 times the phase's.
+    job.result.ma.forEach((ma: number, k: number) =>
+      expect(job.result.fundamental[k]).toBeCloseTo((Math.sqrt(3) * ma * 600) / 2, 6),
+    );
   });
 
   it('runs a SHE sweep whose solutions are ordered first-quarter angles', async () => {

@@ -156,9 +156,13 @@ export function assertDesign(design: InverterDesign, field = 'design'): void {
   designReport(design, { maxOrder: 50, points: 64 }, field);
 }
 
-/** A function from ma to the analysed waveform, for sweeps of the carrier methods. */
-export function waveformAtMa(modulation: CarrierModulation): (ma: number) => Waveform {
-  return (ma) => modulationOutput({ ...modulation, ma }).waveform;
+/**
+ * A function from ma to the analysed voltage, for sweeps of the carrier methods: the voltage
+ * {@link modulationOutput} picks (a single-phase bridge's output, a three-phase bridge's line a−b)
+ * with the library's name for it.
+ */
+export function voltageAtMa(modulation: CarrierModulation): (ma: number) => WaveformResult {
+  return (ma) => modulationOutput({ ...modulation, ma });
 }
 
 /** The part of a design's report that the load-current route returns (currents of each phase). */

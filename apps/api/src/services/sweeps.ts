@@ -7,7 +7,7 @@ import {
   type SheKind,
   type Waveform,
 } from '@pulsewright/modulation';
-import { waveformAtMa, type CarrierModulation } from './compute.js';
+import { voltageAtMa, type CarrierModulation } from './compute.js';
 import { asBadRequest } from './library.js';
 
 /** Points per chunk: each chunk is a few milliseconds of work at the largest allowed inputs. */
@@ -32,11 +32,14 @@ export interface MaSweepInput {
 }
 
 /**
- * The result of an ma sweep: at each point the fundamental, THD and WTHD exact over the whole
- * waveform (waveformThd, waveformWthd, as the design report gives them), the THD and WTHD of
- * orders up to maxOrder only (`spectrumThd`, `spectrumWthd`), and the requested orders.
+ * The result of an ma sweep: the voltage analysed, by the library's name (`bridge output` of a
+ * single-phase bridge, `line a−b` of a three-phase one), and at each point the fundamental, THD
+ * and WTHD exact over the whole waveform (waveformThd, waveformWthd, as the design report gives
+ * them), the THD and WTHD of orders up to maxOrder only (`spectrumThd`, `spectrumWthd`), and the
+ * requested orders.
  */
 export interface MaSweepResult extends ModulationIndexSweep {
+  voltage: string;
   spectrumThd: number[];
   spectrumWthd: number[];
 }
@@ -54,13 +57,15 @@ export function maSweepChunkCount(input: MaSweepInput): number {
 export function maSweepChunk(input: MaSweepInput, index: number): MaSweepResult {
   const { from, to, points } = input.ma;
   const [k0, k1] = chunkBounds(points, MA_POINTS_PER_CHUNK)[index] as [number, number];
-  const build = waveformAtMa(input.modulation);
+  const build = voltageAtMa(input.modulation);
   // sweepModulationIndex builds each point's waveform once; keep them for the exact figures.
   const built: Waveform[] = [];
+  let voltage = '';
   const waveformAt = (ma: number): Waveform => {
-    const waveform = build(ma);
-    built.push(waveform);
-    return waveform;
+    const output = build(ma);
+    voltage = output.name;
+    built.push(output.waveform);
+    return output.waveform;
   };
   let part: ModulationIndexSweep;
   let exact: { thd: number[]; wthd: number[] };
@@ -78,6 +83,7 @@ export function maSweepChunk(input: MaSweepInput, index: number): MaSweepResult 
   }
   const skip = index === 0 ? 0 : 1;
   return {
+    voltage,
     ma: part.ma.slice(skip),
     fundamental: part.fundamental.slice(skip),
     thd: exact.thd.slice(skip),
@@ -94,6 +100,7 @@ export function maSweepChunk(input: MaSweepInput, index: number): MaSweepResult 
 /** An empty ma sweep result, for {@link appendMaSweepPart}. */
 export function emptyMaSweep(input: MaSweepInput): MaSweepResult {
   return {
+    voltage: '',
     ma: [],
     fundamental: [],
     thd: [],
@@ -106,6 +113,7 @@ export function emptyMaSweep(input: MaSweepInput): MaSweepResult {
 
 /** Appends a chunk's part to the sweep so far. */
 export function appendMaSweepPart(total: MaSweepResult, part: MaSweepResult): void {
+  total.voltage = part.voltage;
   total.ma.push(...part.ma);
   total.fundamental.push(...part.fundamental);
   total.thd.push(...part.thd);

@@ -5,6 +5,7 @@ import { SweepCharts } from './SweepCharts';
 // A small sweep as the service returns it (shape only; the figures are not checked here): THD
 // from 300 % at low ma down to 50 %, two tracked orders.
 const result = {
+  voltage: 'line a−b',
   ma: [0.1, 0.5, 1, 1.5],
   fundamental: [40, 200, 400, 480],
   thd: [3, 1.2, 0.6, 0.5],
@@ -39,10 +40,22 @@ describe('SweepCharts', () => {
 
   it("shows any tracked harmonic's amplitude against ma beside the fundamental", () => {
     render(<SweepCharts result={result} />);
-    expect(screen.getByText('Fundamental and order 19 against ma')).toBeInTheDocument();
+    expect(screen.getByText('Fundamental and order 19 against ma, line a−b')).toBeInTheDocument();
     fireEvent.change(screen.getByRole('combobox', { name: 'Harmonic shown' }), {
       target: { value: '21' },
     });
-    expect(screen.getByText('Fundamental and order 21 against ma')).toBeInTheDocument();
+    expect(screen.getByText('Fundamental and order 21 against ma, line a−b')).toBeInTheDocument();
+  });
+
+  it('names the voltage the service analysed on both charts, and says when a stored sweep has none', () => {
+    const { container, unmount } = render(<SweepCharts result={result} />);
+    expect(screen.getByText('THD and WTHD against ma, line a−b')).toBeInTheDocument();
+    expect(container.querySelectorAll('svg[data-chart="line"]')[1]?.textContent).toContain(
+      'volts peak, line a−b',
+    );
+    unmount();
+    const { voltage: _voltage, ...older } = result;
+    render(<SweepCharts result={older} />);
+    expect(screen.getByText('THD and WTHD against ma, voltage not recorded')).toBeInTheDocument();
   });
 });

@@ -20,7 +20,8 @@ const percentTick = (ratio: number) =>
 /**
  * The charts of an ma sweep: THD and WTHD on a linear or logarithmic axis or a picked range (so
  * overmodulation's large values do not flatten the useful range), and the amplitude of any
- * tracked harmonic against ma beside the fundamental.
+ * tracked harmonic against ma beside the fundamental. Titles and the volts axis name the voltage
+ * the service analysed (`bridge output`, `line a−b`); a sweep stored before it was named says so.
  */
 export function SweepCharts({ result }: { result: MaSweepResult }) {
   const [axis, setAxis] = useState<DistortionAxis>('log');
@@ -29,10 +30,11 @@ export function SweepCharts({ result }: { result: MaSweepResult }) {
   const [order, setOrder] = useState<number | null>(tracked[0]?.order ?? null);
   const rangeMessage = rangeError('THD axis top', rangeTop, RANGE_TOP_BOUNDS, { unit: '%' });
   const picked = tracked.find((h) => h.order === order) ?? tracked[0];
+  const voltage = result.voltage || 'voltage not recorded';
   return (
     <>
       <LineChart
-        title="THD and WTHD against ma"
+        title={`THD and WTHD against ma, ${voltage}`}
         fileName="ma-sweep-distortion"
         xLabel="modulation index ma"
         yLabel={axis === 'log' ? 'ratio (log scale)' : 'ratio'}
@@ -80,11 +82,13 @@ export function SweepCharts({ result }: { result: MaSweepResult }) {
       ) : null}
       <LineChart
         title={
-          picked ? `Fundamental and order ${picked.order} against ma` : 'Fundamental against ma'
+          picked
+            ? `Fundamental and order ${picked.order} against ma, ${voltage}`
+            : `Fundamental against ma, ${voltage}`
         }
         fileName="ma-sweep-harmonics"
         xLabel="modulation index ma"
-        yLabel="volts peak"
+        yLabel={`volts peak, ${voltage}`}
         controls={
           tracked.length ? (
             <select
