@@ -4,6 +4,7 @@ export * from './designBounds.js';
 export * from './assertInverterDesign.js';
 export * from './designFrequencyRatio.js';
 export * from './designRationalRatio.js';
+export * from './asynchronousDesignSpectra.js';
 export * from './designModulation.js';
 export * from './modulationVoltages.js';
 export * from './defaultSpectrumOrder.js';

@@ -1,3 +1,4 @@
+import type { CarrierSpan } from '../carrier/CarrierSpan.js';
 import { sineTriangle } from '../carrier/sineTriangle.js';
 import { sheWaveform } from '../she/sheWaveform.js';
 import { spaceVectorWaveforms } from '../space-vector/spaceVectorWaveforms.js';
@@ -10,7 +11,7 @@ import type { Modulation } from './Modulation.js';
 export interface NamedVoltage {
   /** For example `bridge output`, `leg a to DC midpoint`, `phase a to star point`, `line a−b`. */
   name: string;
-  /** One fundamental period, volts. */
+  /** One fundamental period, volts (or the span of q periods when one is asked for). */
   waveform: Waveform;
 }
 
@@ -34,14 +35,19 @@ const PHASE_NAMES = ['a', 'b', 'c'] as const;
 
 /**
  * Builds the output voltages of a {@link Modulation} with the library function of its method,
- * exact (no time step), and names each by what it is measured between.
+ * exact (no time step), and names each by what it is measured between. With `span` (q
+ * fundamental periods, the carrier methods at mf = p/q) the waveforms cover the whole span;
+ * space vector finds its span from its own frequencyRatio.
  * @throws ParameterRangeError / ParameterTypeError from the method's function, naming its field
  */
-export function modulationVoltages(modulation: Modulation): ModulationVoltages {
+export function modulationVoltages(
+  modulation: Modulation,
+  span: CarrierSpan = {},
+): ModulationVoltages {
   switch (modulation.method) {
     case 'sine-triangle': {
       const { method: _method, ...options } = modulation;
-      return singlePhase('bridge output', sineTriangle(options));
+      return singlePhase('bridge output', sineTriangle(options, span));
     }
     case 'selective-harmonic-elimination':
     case 'optimal-pattern': {
@@ -56,7 +62,7 @@ export function modulationVoltages(modulation: Modulation): ModulationVoltages {
     }
     case 'three-phase': {
       const { method: _method, ...options } = modulation;
-      const { legs } = threePhase(options);
+      const { legs } = threePhase(options, span);
       return threePhaseVoltages([legs.a, legs.b, legs.c]);
     }
     case 'space-vector': {
