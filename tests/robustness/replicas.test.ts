@@ -104,9 +104,9 @@ describe.skipIf(!POSTGRES)('replicas on one PostgreSQL database', () => {
   };
 
   beforeAll(async () => {
-    // One at a time: the first migrates (and seeds a new database); the others find it done.
-    a = await start({ JOB_CONCURRENCY: '0' });
-    b = await start({ JOB_CONCURRENCY: '1' });
+    // Together, as a deployment starts them: one migrates (and seeds a new database) while the
+    // other waits on the migration lock, then finds it done.
+    [a, b] = await Promise.all([start({ JOB_CONCURRENCY: '0' }), start({ JOB_CONCURRENCY: '1' })]);
     engineer = await signInOver(a.baseUrl, DEMO.engineer);
   }, 120_000);
   afterAll(async () => {

@@ -34,7 +34,20 @@ export async function migrate(
     storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
     logger: undefined,
   });
-  const executed = await umzug.executed();
-  const applied = await umzug.up(upTo === undefined ? {} : { to: upTo });
-  return { fresh: executed.length === 0, applied: applied.map((m) => m.name) };
+  const run = async () => {
+    const executed = await umzug.executed();
+    const applied = await umzug.up(upTo === undefined ? {} : { to: upTo });
+    return { fresh: executed.length === 0, applied: applied.map((m) => m.name) };
+  };
+  if (sequelize.getDialect() !== 'postgres') return run();
+  // Replicas starting together on one PostgreSQL database: one migrates (and, on a new database,
+  // is the one that seeds); the others wait on this lock, then find nothing to do. The lock is
+  // the transaction's; the migrations run on other connections of the pool.
+  return sequelize.transaction(async (transaction) => {
+    await sequelize.query('SELECT pg_advisory_xact_lock(hashtext(:key))', {
+      replacements: { key: 'pulsewright:migrate' },
+      transaction,
+    });
+    return run();
+  });
 }
