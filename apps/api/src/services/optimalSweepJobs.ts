@@ -1,4 +1,6 @@
+import { assertOptimalPulseSweepOptions } from '@pulsewright/modulation';
 import { chainedSweepPlan } from './chainedSweepPlan.js';
+import { checkSweepRequest } from './checkSweepRequest.js';
 import type { JobPlan } from './jobs.js';
 import {
   nextOptimalPrevious,
@@ -10,10 +12,22 @@ import {
 
 /**
  * An optimal-pattern sweep as a job (issue 17), beside the SHE sweep: the same progress, quotas,
- * cost check and pool; each chunk's first point is followed from the optimum the chunk before
+ * cost check and pool; the whole request checked by the library first (a bad range end is a 400,
+ * not a failed chunk); each chunk's first point is followed from the optimum the chunk before
  * ended on (services/patternTables.ts optimalSweepChunk).
  */
 export function optimalSweepPlan(input: OptimalSweepInput): JobPlan {
+  checkSweepRequest(() =>
+    assertOptimalPulseSweepOptions({
+      kind: input.kind,
+      vdc: input.vdc,
+      count: input.count,
+      objective: input.objective ?? 'wthd',
+      maxOrder: input.maxOrder ?? 99,
+      fundamentals: input.fundamental,
+      ...(input.initialAngles ? { angles: input.initialAngles } : {}),
+    }),
+  );
   return chainedSweepPlan<OptimalSweepPointResult, number[]>({
     kind: 'optimal-sweep',
     cost: optimalSweepCost(input),

@@ -1,4 +1,6 @@
+import { assertSheSweepOptions } from '@pulsewright/modulation';
 import { chainedSweepPlan } from './chainedSweepPlan.js';
+import { checkSweepRequest } from './checkSweepRequest.js';
 import type { ComputePool } from './computePool.js';
 import { maSweepCost, sheSweepCost } from './cost.js';
 import type { JobPlan } from './jobs.js';
@@ -38,8 +40,21 @@ export function maSweepPlan(input: MaSweepInput): JobPlan {
   };
 }
 
-/** A SHE sweep as a job: each chunk seeded with the last solution of the ones before. */
+/**
+ * A SHE sweep as a job: the whole request checked by the library first (a bad range end is a 400,
+ * not a failed chunk), then each chunk seeded with the last solution of the ones before.
+ */
 export function sheSweepPlan(input: SheSweepInput): JobPlan {
+  checkSweepRequest(() =>
+    assertSheSweepOptions({
+      kind: input.kind,
+      vdc: input.vdc,
+      count: input.count,
+      eliminate: input.eliminate,
+      fundamentals: input.fundamental,
+      ...(input.initialAngles ? { angles: input.initialAngles } : {}),
+    }),
+  );
   return chainedSweepPlan<SheSweepPointResult, number[]>({
     kind: 'she-sweep',
     cost: sheSweepCost(input),

@@ -1,13 +1,8 @@
-import { assertNumberInRange } from '../validation/assertions.js';
-import { ParameterRangeError, ParameterTypeError } from '../validation/errors.js';
+import { assertOptimalPulseSweepOptions } from './assertOptimalPulseSweepOptions.js';
 import { bestOptimum, describeOptimum } from './pulseSearch.js';
 import { resolvePulseBase, type PulseSolverSettings } from './pulseOptions.js';
 import { seededStarts } from './seededStarts.js';
-import {
-  assertFirstQuarterAngles,
-  assertFundamentalRange,
-  fundamentalGrid,
-} from './validateShe.js';
+import { fundamentalGrid } from './validateShe.js';
 import type { FundamentalRange, SheKind } from './SheKind.js';
 
 /** Options of {@link optimalPulseSweep}. */
@@ -74,23 +69,9 @@ export interface OptimalPulseSweepResult {
  *   {@link optimalPulsePattern}, and for `fundamentals` outside the achievable range
  */
 export function optimalPulseSweep(options: OptimalPulseSweepOptions): OptimalPulseSweepResult {
+  assertOptimalPulseSweepOptions(options);
   const base = resolvePulseBase(options);
   const { fundamentals, maxAngleStep = 0.1, onProgress } = options;
-  assertFundamentalRange('fundamentals', fundamentals, base.kind, base.count, base.vdc);
-  assertNumberInRange('maxAngleStep', maxAngleStep, { min: 0, minExclusive: true, max: 1 });
-  if (onProgress !== undefined && typeof onProgress !== 'function') {
-    throw new ParameterTypeError('onProgress', 'a function of the fraction done', onProgress);
-  }
-  if (options.previous !== undefined) {
-    assertFirstQuarterAngles('previous', options.previous);
-    if (options.previous.length !== base.count) {
-      throw new ParameterRangeError(
-        'previous.length',
-        `count = ${base.count}`,
-        options.previous.length,
-      );
-    }
-  }
   const grid = fundamentalGrid(fundamentals);
   const points: OptimalPulseSweepPoint[] = [];
   let previous: number[] | null = options.previous ?? null;

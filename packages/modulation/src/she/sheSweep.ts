@@ -1,11 +1,10 @@
-import { assertNumberInRange } from '../validation/assertions.js';
-import { ParameterTypeError } from '../validation/errors.js';
+import { assertSheSweepOptions } from './assertSheSweepOptions.js';
 import { continueSolution, type ContinuationSettings } from './continuation.js';
 import { isSameSolution, searchSolutions } from './sheSearch.js';
 import { createSheSystem, withTarget } from './sheSystem.js';
 import { seededStarts } from './seededStarts.js';
-import { assertSquare, resolveSheBase, type SheSolverSettings } from './sheOptions.js';
-import { assertFundamentalRange, fundamentalGrid } from './validateShe.js';
+import { resolveSheBase, type SheSolverSettings } from './sheOptions.js';
+import { fundamentalGrid } from './validateShe.js';
 import type { FundamentalRange, SheKind } from './SheKind.js';
 
 /** Options of {@link sheSweep}. */
@@ -94,6 +93,7 @@ interface ActiveBranch {
  *   `fundamentals.from`/`to` must lie in the achievable range, `eliminate` must hold N − 1 orders)
  */
 export function sheSweep(options: SheSweepOptions): SheSweepResult {
+  assertSheSweepOptions(options);
   const base = resolveSheBase(options);
   const { kind, vdc, count, eliminate } = base;
   const {
@@ -103,14 +103,6 @@ export function sheSweep(options: SheSweepOptions): SheSweepResult {
     maxBranches = 8,
     onProgress,
   } = options;
-  assertSquare(eliminate, count, true);
-  assertFundamentalRange('fundamentals', fundamentals, kind, count, vdc);
-  assertNumberInRange('maxHalvings', maxHalvings, { min: 0, max: 30, integer: true });
-  assertNumberInRange('maxAngleStep', maxAngleStep, { min: 0, minExclusive: true, max: 1 });
-  assertNumberInRange('maxBranches', maxBranches, { min: 1, max: 100, integer: true });
-  if (onProgress !== undefined && typeof onProgress !== 'function') {
-    throw new ParameterTypeError('onProgress', 'a function of the fraction done', onProgress);
-  }
   const scale = (4 * vdc) / Math.PI;
   const grid = fundamentalGrid(fundamentals);
   const system = createSheSystem(kind, count, eliminate, (grid[0] as number) / scale);
