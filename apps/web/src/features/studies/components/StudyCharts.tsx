@@ -8,6 +8,7 @@ import { WaveformChart } from '../../../components/charts/WaveformChart';
 import { formatNumber } from '../../../lib/format';
 import { reportFigures } from '../model/reportFigures';
 import { CommonModePanel } from './CommonModePanel';
+import { GridPanel } from './GridPanel';
 import { MotorLoadPanel } from './MotorLoadPanel';
 
 const CURRENT_COLOURS = {
@@ -28,6 +29,7 @@ export function StudyCharts({ report, fileStem }: { report: StudyReport; fileSte
       {report.currents.length ? <CurrentsChart report={report} fileStem={fileStem} /> : null}
       <MotorLoadPanel report={report} />
       <CommonModePanel report={report} fileStem={fileStem} />
+      <GridPanel report={report} fileStem={fileStem} />
       <HarmonicTable
         harmonics={report.bridge.spectrum}
         title={`Harmonics, ${report.bridge.name}`}

@@ -1,0 +1,48 @@
+import { analyseDesign, type InverterDesign } from '@pulsewright/modulation';
+import { fireEvent, render, screen, within } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { formatNumber, formatPercent } from '../../../lib/format';
+import { GridPanel } from './GridPanel';
+
+// Invented values: a 400 V, 50 Hz grid fed through an LCL filter from 700 V at 10 kHz.
+const design: InverterDesign = {
+  vdc: 700,
+  fundamentalFrequency: 50,
+  carrierFrequency: 10_000,
+  modulation: { method: 'three-phase', ma: 1, zeroSequence: 'third-harmonic' },
+  filter: { l: 2e-3, c: 10e-6, rDamping: 2 },
+  grid: { lineVoltage: 400, phase: -0.1, r: 0.05, l: 0.2e-3, l2: 0.5e-3, controlBandwidth: 1000 },
+};
+
+describe('GridPanel', () => {
+  it('shows the report’s grid figures, its verdict against IEEE 519 and then IEEE 1547, and the caution', () => {
+    const report = analyseDesign(design, { points: 256 });
+    const grid = report.grid!;
+    render(<GridPanel report={report} fileStem="lcl" />);
+    const figures = screen.getByRole('table', { name: 'Grid figures' });
+    expect(figures).toHaveTextContent(formatNumber(grid.resonance!.frequency));
+    expect(figures).toHaveTextContent(formatNumber(grid.dampingLoss));
+    expect(figures).toHaveTextContent(formatNumber(grid.shortCircuitRatio));
+    expect(within(figures).getByText(/carrier .*× above it/)).toBeInTheDocument();
+    const verdict = screen.getByTestId('grid-verdict');
+    expect(verdict).toHaveTextContent('IEEE Std 519-2022');
+    expect(verdict).toHaveTextContent(`TDD ${formatPercent(grid.limits.ieee519.total)}`);
+    expect(verdict).toHaveTextContent('the row for generating equipment');
+    expect(screen.getByTestId('grid-caution')).toHaveTextContent(/recalled from memory/);
+    fireEvent.change(screen.getByRole('combobox', { name: 'Limits of' }), {
+      target: { value: 'ieee1547' },
+    });
+    expect(screen.getByTestId('grid-verdict')).toHaveTextContent('IEEE Std 1547-2018');
+    expect(screen.getByTestId('grid-verdict')).toHaveTextContent(
+      `TRD ${formatPercent(grid.limits.ieee1547.total)}`,
+    );
+  });
+
+  it('draws nothing without a grid', () => {
+    const { grid: _grid, ...alone } = design;
+    const { container } = render(
+      <GridPanel report={analyseDesign(alone, { points: 256 })} fileStem="lc" />,
+    );
+    expect(container).toBeEmptyDOMElement();
+  });
+});
