@@ -45,7 +45,7 @@ export interface VoltageFigures {
 
 /** The figures of one current; a plain serialisable object. */
 export interface CurrentFigures {
-  /** Which current, e.g. `inverter (switch) current, phase a`. */
+  /** Which current, e.g. `inverter (switch) current, phase a` (a single-phase bridge's name no phase: `load current`). */
   name: string;
   /** RMS, amperes. */
   rms: number;

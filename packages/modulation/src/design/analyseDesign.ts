@@ -93,6 +93,10 @@ export const DESIGN_CAUTION =
 
 const PHASES = ['a', 'b', 'c'] as const;
 
+/** What a current's name adds for its phase: `, phase a` of a three-phase bridge, nothing for a single-phase one. */
+const phaseSuffix = (phaseCount: number, phase: PhaseCurrents['phase']): string =>
+  phaseCount === 3 ? `, phase ${phase}` : '';
+
 /**
  * The design report: every figure the product shows for one {@link InverterDesign}, from one
  * model, so the editor, Compare, the limit check, the printed report, the API and the command
@@ -166,7 +170,12 @@ export function analyseDesign(
   if (filter === null) {
     if (load !== null) {
       const solved = phaseVoltages.map((waveform, k) =>
-        exactLoadCurrents(waveform, rlLoadOf(design, k), PHASES[k] ?? 'a', points, frequencyRatio),
+        exactLoadCurrents(waveform, rlLoadOf(design, k), {
+          phase: PHASES[k] ?? 'a',
+          suffix: phaseSuffix(voltages.phaseCount, PHASES[k] ?? 'a'),
+          points,
+          frequencyRatio,
+        }),
       );
       currents = solved.map((s) => s.currents);
       loadPower = solved.reduce((sum, s) => sum + s.power, 0);
@@ -174,7 +183,14 @@ export function analyseDesign(
     }
   } else {
     const solved = phaseVoltages.map((waveform, k) =>
-      filteredPhase(waveform, { network, design, phaseIndex: k, analysisOrder, points }),
+      filteredPhase(waveform, {
+        network,
+        design,
+        phaseIndex: k,
+        phaseCount: voltages.phaseCount,
+        analysisOrder,
+        points,
+      }),
     );
     const first = solved[0] as FilteredPhase;
     const outputSpectrum = first.outputSpectrum;
@@ -330,10 +346,15 @@ function rlLoadOf(design: InverterDesign, phaseIndex: number): RlLoadOptions {
 function exactLoadCurrents(
   waveform: Waveform,
   load: RlLoadOptions,
-  phase: PhaseCurrents['phase'],
-  points: number,
-  frequencyRatio: number | null,
+  context: {
+    phase: PhaseCurrents['phase'];
+    /** Added to each current's name ({@link phaseSuffix}). */
+    suffix: string;
+    points: number;
+    frequencyRatio: number | null;
+  },
 ): { currents: PhaseCurrents; power: number; inverterSamples: Float64Array } {
+  const { phase, suffix, points, frequencyRatio } = context;
   const steady = withFieldPrefix('load.', () => rlSteadyState(waveform, load));
   const voltage = harmonics(waveform, 1)[1] as Harmonic;
   const emf = load.emf ? phasorOf(load.emf.amplitude, load.emf.phase) : { re: 0, im: 0 };
@@ -361,7 +382,7 @@ function exactLoadCurrents(
   });
   const seriesAngles = Array.from({ length: points }, (_, k) => (TAU * k) / points);
   const figures: CurrentFigures = {
-    name: `load current, phase ${phase}`,
+    name: `load current${suffix}`,
     rms: steady.rmsCurrent,
     peak: Math.max(Math.abs(steady.peakCurrent), Math.abs(steady.minCurrent)),
     fundamental,
@@ -374,7 +395,7 @@ function exactLoadCurrents(
   return {
     currents: {
       phase,
-      inverter: { ...figures, name: `inverter (switch) current, phase ${phase}` },
+      inverter: { ...figures, name: `inverter (switch) current${suffix}` },
       capacitor: null,
       load: figures,
     },
@@ -399,11 +420,12 @@ function filteredPhase(
     network: OutputNetwork;
     design: InverterDesign;
     phaseIndex: number;
+    phaseCount: number;
     analysisOrder: number;
     points: number;
   },
 ): FilteredPhase {
-  const { network, design, phaseIndex, analysisOrder, points } = context;
+  const { network, design, phaseIndex, phaseCount, analysisOrder, points } = context;
   const phase = PHASES[phaseIndex] ?? 'a';
   const omega = TAU * design.fundamentalFrequency;
   const bridge = harmonics(waveform, analysisOrder);
@@ -480,7 +502,7 @@ function filteredPhase(
     });
     const fundamentalCurrent = complexAbs(first);
     return {
-      name: `${name}, phase ${phase}`,
+      name: `${name}${phaseSuffix(phaseCount, phase)}`,
       rms: Math.sqrt(meanSquare),
       peak,
       fundamental: fundamentalCurrent,

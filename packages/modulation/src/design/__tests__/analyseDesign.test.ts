@@ -217,6 +217,32 @@ describe('analyseDesign: one report of a design', () => {
     expect(report.bridge.spectrum[5]?.label).toBe('5');
   });
 
+  it('names a current by its phase only where the bridge has phases (issue 10)', () => {
+    const load = { r: 5, l: 0.002 };
+    const filter = { l: 0.002, c: 20e-6, rDamping: 1 };
+    const names = (design: InverterDesign): string[] =>
+      analyseDesign(design).currents.flatMap((c) =>
+        [c.inverter, c.capacitor, c.load].flatMap((figures) => (figures ? [figures.name] : [])),
+      );
+    expect(names(bipolar(0.8, 21, { load }))).toEqual([
+      'inverter (switch) current',
+      'load current',
+    ]);
+    expect(names(bipolar(0.8, 21, { load, filter })).every((name) => !name.includes('phase'))).toBe(
+      true,
+    );
+    const three = bipolar(0.8, 21, {
+      load,
+      filter,
+      modulation: { method: 'three-phase', ma: 0.8 },
+    });
+    expect(names(three).filter((name) => name.startsWith('load current'))).toEqual([
+      'load current, phase a',
+      'load current, phase b',
+      'load current, phase c',
+    ]);
+  });
+
   it('names the design field of bad input', () => {
     expect(
       rangeErrorField(() => analyseDesign({ ...bipolar(0.8, 21), carrierFrequency: 1060 })),

@@ -40,4 +40,26 @@ describe('MotorLoadPanel', () => {
     const { container } = render(<MotorLoadPanel report={analyseDesign(unloaded)} />);
     expect(container).toBeEmptyDOMElement();
   });
+
+  it('says "per phase" only where there are phases: a single-phase bridge has one load', () => {
+    const single: InverterDesign = {
+      ...design,
+      modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.9 },
+    };
+    const report = analyseDesign(single);
+    expect(report.phaseCount).toBe(1);
+    render(<MotorLoadPanel report={report} />);
+    expect(screen.getByRole('region', { name: 'Motor load' })).toBeInTheDocument();
+    expect(screen.queryByText(/per phase/)).toBeNull();
+    expect(screen.queryByText(/phase a|all phases/)).toBeNull();
+    const currents = screen.getByRole('table', { name: 'Load current' });
+    expect(within(currents).getAllByRole('row')).toHaveLength(2);
+    const torque = screen.getByRole('table', { name: 'Torque-producing current' });
+    expect(within(torque).getAllByRole('columnheader')).toHaveLength(5);
+  });
+
+  it('keeps "per phase" on a three-phase bridge', () => {
+    render(<MotorLoadPanel report={analyseDesign(design)} />);
+    expect(screen.getByRole('region', { name: 'Motor load, per phase' })).toBeInTheDocument();
+  });
 });
