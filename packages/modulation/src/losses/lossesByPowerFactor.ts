@@ -62,6 +62,10 @@ export interface LossSweepSeries {
   total: number[];
   conduction: number[];
   switching: number[];
+  /** One transistor's conduction and switching loss, W, one per angle (all six alike by symmetry). */
+  transistor: { conduction: number[]; switching: number[] };
+  /** One diode's conduction and recovery (switching) loss, W, one per angle. */
+  diode: { conduction: number[]; switching: number[] };
   /** Efficiency ratio; null where no power flows to the load (cos φ ≤ 0). */
   efficiency: (number | null)[];
 }
@@ -167,6 +171,14 @@ export function lossesByPowerFactor(options: LossesByPowerFactorOptions): LossSw
       total: losses.map((l) => l.total),
       conduction: losses.map((l) => l.conduction),
       switching: losses.map((l) => l.switching),
+      transistor: {
+        conduction: losses.map((l) => l.transistor.conduction),
+        switching: losses.map((l) => l.transistor.switching),
+      },
+      diode: {
+        conduction: losses.map((l) => l.diode.conduction),
+        switching: losses.map((l) => l.diode.switching),
+      },
       efficiency: losses.map((l) => l.efficiency),
     };
   });

@@ -192,6 +192,34 @@ describe('conduction losses and the closed form', () => {
   });
 });
 
+describe('loss by device', () => {
+  it('six transistors and six diodes make up the converter total at every angle', () => {
+    const sweep = lossesByPowerFactor({ ...base, switchingFrequency: 10_000, points: 7 });
+    for (const s of sweep.series)
+      s.total.forEach((total, k) => {
+        const device =
+          6 *
+          ((s.transistor.conduction[k] ?? NaN) +
+            (s.transistor.switching[k] ?? NaN) +
+            (s.diode.conduction[k] ?? NaN) +
+            (s.diode.switching[k] ?? NaN));
+        assertInDelta(device, total, 1e-9 * total, `${s.zeroSequence} ${k}`);
+      });
+  });
+
+  it('at unity power factor the diodes conduct less than the transistors (Bierhoff and Fuchs, PESC 2004, from memory)', () => {
+    // m·cos φ/8 moves conduction from the diode to the transistor when power flows to the load.
+    const sweep = lossesByPowerFactor({
+      ...base,
+      switchingFrequency: 10_000,
+      angles: [0],
+      zeroSequences: ['none'],
+    });
+    const [none] = sweep.series;
+    expect(none?.diode.conduction[0]).toBeLessThan(none?.transistor.conduction[0] ?? 0);
+  });
+});
+
 describe('the sweep', () => {
   it('lists every zero sequence by default, 100 angles over ±90°, and names the lowest at each', () => {
     const sweep = lossesByPowerFactor({ ...base, switchingFrequency: 10_000 });

@@ -1,6 +1,7 @@
 import { EXAMPLE_IGBT, lossesByPowerFactor } from '@pulsewright/modulation';
 import { fireEvent, render, screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
+import { formatNumber } from '../../../lib/format';
 import { LossSweepPanel } from './LossSweepPanel';
 
 describe('LossSweepPanel', () => {
@@ -19,6 +20,10 @@ describe('LossSweepPanel', () => {
     expect(screen.getByTestId('lowest-loss')).toHaveTextContent(
       '0°: DPWM1: clamp 60° at the peaks',
     );
+    const byDevice = screen.getByRole('table', { name: 'Loss by device at unity power factor' });
+    const dpwm1 = sweep.series.find((s) => s.zeroSequence === 'dpwm1');
+    expect(byDevice).toHaveTextContent(formatNumber(dpwm1?.transistor.switching[45] ?? Number.NaN));
+    expect(byDevice).toHaveTextContent(formatNumber(dpwm1?.diode.conduction[45] ?? Number.NaN));
     fireEvent.change(screen.getByLabelText(/Compare at/), { target: { value: 'equal-switching' } });
     expect(screen.getByLabelText(/Average switching frequency/)).toBeInTheDocument();
   });

@@ -92,6 +92,11 @@ export function LossSweepPanel() {
           : [];
       })
     : [];
+  // The angle nearest unity power factor (the 91 default angles hold 0 exactly).
+  const unity = degrees.reduce(
+    (best, d, k) => (Math.abs(d) < Math.abs(degrees[best] ?? Infinity) ? k : best),
+    0,
+  );
   const lowestAt = (k: number) =>
     sweep ? `${formatNumber(degrees[k] ?? 0)}°: ${labelOf(sweep.lowest[k] ?? 'none')}` : '';
   const num =
@@ -193,6 +198,38 @@ export function LossSweepPanel() {
                 Least loss at {lowestAt(0)}; {lowestAt(Math.floor(degrees.length / 2))};{' '}
                 {lowestAt(degrees.length - 1)}.
               </p>
+              <table
+                className="num mt-2 w-full text-xs"
+                aria-label="Loss by device at unity power factor"
+              >
+                <caption className="text-left font-sans text-ink-soft">
+                  One device of each kind at φ = {formatNumber(degrees[unity] ?? 0)}° (W; six of
+                  each in the bridge)
+                </caption>
+                <thead className="text-left text-ink-soft">
+                  <tr>
+                    <th className="font-medium">Zero sequence</th>
+                    <th className="font-medium">Transistor conduction</th>
+                    <th className="font-medium">Transistor switching</th>
+                    <th className="font-medium">Diode conduction</th>
+                    <th className="font-medium">Diode recovery</th>
+                  </tr>
+                </thead>
+                <tbody>
+                  {DRAWN.map(({ zeroSequence }) => {
+                    const s = sweep.series.find((x) => x.zeroSequence === zeroSequence);
+                    return s ? (
+                      <tr key={zeroSequence} className="border-t border-rule/60">
+                        <td className="font-sans">{labelOf(zeroSequence)}</td>
+                        <td>{formatNumber(s.transistor.conduction[unity] ?? Number.NaN)}</td>
+                        <td>{formatNumber(s.transistor.switching[unity] ?? Number.NaN)}</td>
+                        <td>{formatNumber(s.diode.conduction[unity] ?? Number.NaN)}</td>
+                        <td>{formatNumber(s.diode.switching[unity] ?? Number.NaN)}</td>
+                      </tr>
+                    ) : null;
+                  })}
+                </tbody>
+              </table>
               <p className="mt-1 text-xs text-ink-soft">
                 Average model per carrier period, linear switching energies, no thermal coupling:
                 compare methods with it, then confirm the losses on the bench.
