@@ -7,6 +7,8 @@ import { waveformWthd } from '../../spectrum/waveformWthd.js';
 import { rangeErrorField } from '../../testing/rangeErrorField.js';
 import { threePhase } from '../../three-phase/threePhase.js';
 import type { Waveform } from '../../waveform/Waveform.js';
+import { waveformValueAt } from '../../waveform/waveformValueAt.js';
+import { mulberry32 } from '../../numeric/mulberry32.js';
 import { sineTriangle, type SineTriangleOptions } from '../sineTriangle.js';
 
 const vdc = 400;
@@ -137,6 +139,33 @@ describe('asynchronous frequency ratio p/q: exact waveforms over q fundamental p
       });
     });
   }
+
+  it('regular-asymmetric sampling at mf = 7/3 (q = 3) equals a held-sample comparator at 20000 random instants', () => {
+    // From the definitions (Holmes and Lipo ch. 3; S. R. Bowes, Proc. IEE, 1975): the reference
+    // is sampled at each carrier peak and valley, θ_j = π/2 + j·π/mf, and held for that half
+    // period; the output is +vdc while the held sample is above the carrier.
+    const [ma, mf, q] = [0.9, 7 / 3, 3];
+    const waveform = sineTriangle(
+      { scheme: 'bipolar', ma, mf, vdc, sampling: 'regular-asymmetric' },
+      { fundamentalPeriods: q },
+    );
+    const random = mulberry32(5);
+    let checked = 0;
+    for (let k = 0; k < 20_000; k++) {
+      const phi = TAU * random();
+      // An instant within 1e-9 rad of an edge is left out: rounding decides it either way.
+      if (waveform.edges.some((edge) => Math.abs(edge - phi) < 1e-9)) continue;
+      const theta = q * phi;
+      const x = mf * (theta - Math.PI / 2);
+      const half = Math.floor(x / Math.PI);
+      const held = ma * Math.sin(Math.PI / 2 + (half * Math.PI) / mf);
+      const u = x - TAU * Math.floor(x / TAU);
+      const carrier = u <= Math.PI ? -1 + (2 * u) / Math.PI : 3 - (2 * u) / Math.PI;
+      expect(waveformValueAt(waveform, phi)).toBe(held > carrier ? vdc : -vdc);
+      checked++;
+    }
+    expect(checked).toBeGreaterThan(19_000);
+  });
 
   it('names the field of a ratio that is no p/q for the span, or a bad span', () => {
     const bipolar = { scheme: 'bipolar' as const, ma: 0.8, vdc };
