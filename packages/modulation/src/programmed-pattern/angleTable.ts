@@ -113,7 +113,8 @@ function followBranch(
   const start = angles === undefined ? {} : { angles };
   if (pattern.method === 'selective-harmonic-elimination') {
     const { kind, vdc, eliminate } = pattern;
-    const sweep = sheSweep({ kind, vdc, count, eliminate, fundamentals, ...start });
+    // One branch is tabulated: the sweep neither searches for nor follows others.
+    const sweep = sheSweep({ kind, vdc, count, eliminate, fundamentals, maxBranches: 1, ...start });
     const branch = sweep.branches[0];
     const out: BranchPoint[] = [];
     for (let i = 0; i < fundamentals.points; i++) {

@@ -1,5 +1,7 @@
 import { optimalPulsePattern } from '../she/optimalPulsePattern.js';
+import type { QuarterWavePattern } from '../she/SheKind.js';
 import { solveShe } from '../she/solveShe.js';
+import { waveformWthd } from '../spectrum/waveformWthd.js';
 import type {
   AngleTable,
   AngleTableInterval,
@@ -83,26 +85,29 @@ function intervalError(
     };
   }
   const measured = measurePattern(pattern, interpolated);
-  const reference = measurePattern(pattern, exact);
   return {
     from: a.ma,
     to: b.ma,
     interpolable: true,
     reason: '',
-    exactAngles: exact,
+    exactAngles: exact.angles,
     interpolatedAngles: interpolated,
     worstResidual: measured.worstResidual,
     fundamentalError: (measured.fundamental - wanted) / wanted,
-    wthdChange: measured.wthd - reference.wthd,
+    // The solver's own waveform of the exact angles: only its WTHD is wanted, not a spectrum.
+    wthdChange: measured.wthd - waveformWthd(exact.waveform),
   };
 }
 
-/** The exact pattern at `fundamental` volts, Newton from `start` alone (no other starts). */
+/**
+ * The exact pattern at `fundamental` volts (its angles and the waveform the solver built from
+ * them), Newton from `start` alone (no other starts).
+ */
 function exactPattern(
   pattern: ResolvedPattern,
   start: number[],
   fundamental: number,
-): number[] | null {
+): QuarterWavePattern | null {
   const { kind, vdc } = pattern;
   if (pattern.method === 'selective-harmonic-elimination') {
     const solved = solveShe({
@@ -113,7 +118,7 @@ function exactPattern(
       fundamental,
       starts: 0,
     });
-    return solved.converged ? solved.angles : null;
+    return solved.converged ? solved : null;
   }
   const { objective, maxOrder } = pattern;
   const optimum = optimalPulsePattern({
@@ -125,5 +130,5 @@ function exactPattern(
     fundamental,
     starts: 0,
   });
-  return optimum.converged ? optimum.angles : null;
+  return optimum.converged ? optimum : null;
 }

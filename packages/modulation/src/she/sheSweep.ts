@@ -132,9 +132,11 @@ export function sheSweep(options: SheSweepOptions): SheSweepResult {
     if (here.length === 0 && followed.length < maxBranches) {
       const given = i === 0 && options.angles !== undefined ? [options.angles] : [];
       const starts = [...given, ...seededStarts(count, base.starts, base.seed + i)];
-      const search = searchSolutions(withTarget(system, m), starts, base.search, true);
+      // Every distinct solution only when more than one branch can still be taken up.
+      const room = maxBranches - followed.length;
+      const search = searchSolutions(withTarget(system, m), starts, base.search, room > 1);
       counter.iterations += search.iterations;
-      for (const angles of search.solutions.slice(0, maxBranches - followed.length)) {
+      for (const angles of search.solutions.slice(0, room)) {
         here.push(angles);
         followed.push({
           branch: {
