@@ -208,6 +208,35 @@ describe('StudyForm', () => {
     expect(screen.queryByLabelText(/Zero split/)).toBeNull();
   });
 
+  it("shows the other sequence's stored choice it keeps, and keeps a clamping the user picks (issue 10)", () => {
+    const onChange = vi.fn();
+    const { unmount } = renderForm(
+      {
+        ...defaultDraft(),
+        method: 'space-vector',
+        sequence: 'seven-segment',
+        clamping: 'dpwm3',
+        keepClamping: true,
+      },
+      { onChange },
+    );
+    expect(screen.getByTestId('kept-sequence-option')).toHaveTextContent(
+      /Zero-vector clamping .* is kept with the design; only the five-segment sequence uses it/,
+    );
+    fireEvent.change(screen.getByLabelText(/Zero split/), { target: { value: '0.25' } });
+    expect(onChange).toHaveBeenLastCalledWith({ zeroSplit: 0.25, keepZeroSplit: true });
+    unmount();
+    renderForm(
+      { ...defaultDraft(), method: 'space-vector', sequence: 'five-segment' },
+      { onChange },
+    );
+    expect(screen.queryByTestId('kept-sequence-option')).toBeNull();
+    fireEvent.change(screen.getByRole('combobox', { name: 'Zero-vector clamping' }), {
+      target: { value: 'dpwm0' },
+    });
+    expect(onChange).toHaveBeenLastCalledWith({ clamping: 'dpwm0', keepClamping: true });
+  });
+
   it('lists every method of the library; the pattern methods only for a study that holds such a pattern', () => {
     renderForm(defaultDraft());
     const options = within(screen.getByRole('combobox', { name: 'Method' })).getAllByRole('option');

@@ -84,6 +84,37 @@ describe('draft ↔ design', () => {
     },
   );
 
+  it('keeps a clamping stored with the seven-segment sequence, and a zero split with the five (issue 10)', () => {
+    // The library's space-vector options hold both; each sequence reads one (spaceVectorWaveforms).
+    const seven: InverterDesign = {
+      vdc: 700,
+      fundamentalFrequency: 50,
+      carrierFrequency: 4000,
+      modulation: {
+        method: 'space-vector',
+        ma: 0.9,
+        sequence: 'seven-segment',
+        zeroSplit: 0.3,
+        clamping: 'dpwm3',
+      },
+      load: null,
+      filter: null,
+    };
+    const draft = draftOf(seven, study);
+    expect(designOf(draft).modulation).toMatchObject({ zeroSplit: 0.3, clamping: 'dpwm3' });
+    // Switching to five segments reads the stored clamping, and the zero split stays stored.
+    expect(designOf({ ...draft, sequence: 'five-segment' }).modulation).toMatchObject({
+      sequence: 'five-segment',
+      clamping: 'dpwm3',
+      zeroSplit: 0.3,
+    });
+    // A design stored without the other sequence's field does not gain one.
+    const plain = { ...seven, modulation: { method: 'space-vector', ma: 0.9, zeroSplit: 0.3 } };
+    expect(designOf(draftOf(plain as InverterDesign, study)).modulation).not.toHaveProperty(
+      'clamping',
+    );
+  });
+
   it('writes the design of a new study that the library accepts', () => {
     const design = designOf(defaultDraft('p'));
     expect(design).toMatchObject({

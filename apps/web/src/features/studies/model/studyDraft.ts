@@ -60,7 +60,15 @@ export interface StudyDraft {
   spaceVectorSampling: SpaceVectorSampling;
   /** Seven-segment share of the zero time on '000'. */
   zeroSplit: number;
+  /** Five-segment zero-vector choice. */
   clamping: ZeroVectorClamping;
+  /**
+   * Whether the design keeps the clamping or the zero split while its sequence does not read
+   * them (the library's space-vector options hold both, each read by one sequence): set where the
+   * stored design has the field or the user picked it, so a save never drops it.
+   */
+  keepClamping: boolean;
+  keepZeroSplit: boolean;
   overmodulation: OvermodulationMethod;
   /** The stored pattern of a pattern study (null for a study that never had one). */
   pattern: StoredPattern | null;
@@ -79,17 +87,6 @@ export interface StudyDraft {
   dampingPlacement: DampingPlacement;
   /** Blocking capacitance of the parallel R-C damping branch, farads. */
   cDamping: number;
-  /** The bridge feeds a grid (through the filter as L1 and C) instead of the load. */
-  gridOn: boolean;
-  /** Grid voltage, volts rms line to line (three-phase) or rms; its phase a angle, radians. */
-  gridLineVoltage: number;
-  gridPhase: number;
-  /** Grid resistance, ohms; grid inductance and grid-side inductor L2, henries. */
-  gridR: number;
-  gridL: number;
-  gridL2: number;
-  /** The current controller's bandwidth, hertz; 0 leaves it out. */
-  gridControlBandwidth: number;
 }
 
 export function isPatternMethod(method: ModulationMethod): method is PatternMethod {
@@ -119,6 +116,8 @@ export function defaultDraft(projectId = ''): StudyDraft {
     spaceVectorSampling: 'symmetric',
     zeroSplit: 0.5,
     clamping: 'dpwm1',
+    keepClamping: false,
+    keepZeroSplit: false,
     overmodulation: 'two-mode',
     pattern: null,
     loadOn: true,
@@ -132,13 +131,6 @@ export function defaultDraft(projectId = ''): StudyDraft {
     filterR: 0,
     dampingPlacement: 'series-with-capacitor',
     cDamping: 20e-6,
-    gridOn: false,
-    gridLineVoltage: 230,
-    gridPhase: 0,
-    gridR: 0.05,
-    gridL: 0.0002,
-    gridL2: 0.0005,
-    gridControlBandwidth: 0,
   };
 }
 
@@ -168,9 +160,12 @@ function designModulationOf(draft: StudyDraft): DesignModulation {
         ma,
         sequence: draft.sequence,
         sampling: draft.spaceVectorSampling,
-        ...(draft.sequence === 'seven-segment'
+        ...(draft.sequence === 'seven-segment' || draft.keepZeroSplit
           ? { zeroSplit: draft.zeroSplit }
-          : { clamping: draft.clamping }),
+          : {}),
+        ...(draft.sequence === 'five-segment' || draft.keepClamping
+          ? { clamping: draft.clamping }
+          : {}),
         overmodulation: draft.overmodulation,
       };
     case 'selective-harmonic-elimination':
@@ -208,31 +203,15 @@ export function designOf(draft: StudyDraft): InverterDesign {
           ...(draft.dampingPlacement === 'parallel-rc' ? { cDamping: draft.cDamping } : {}),
         }
       : null,
-    // A grid is what the bridge feeds: it replaces the load.
-    load:
-      draft.loadOn && !draft.gridOn
-        ? {
-            r: draft.loadR,
-            l: draft.loadL,
-            ...(draft.emf !== 0 || draft.emfPhase !== 0
-              ? { emf: { amplitude: draft.emf, phase: draft.emfPhase } }
-              : {}),
-          }
-        : null,
-    ...(draft.gridOn
+    load: draft.loadOn
       ? {
-          grid: {
-            lineVoltage: draft.gridLineVoltage,
-            phase: draft.gridPhase,
-            r: draft.gridR,
-            l: draft.gridL,
-            l2: draft.gridL2,
-            ...(draft.gridControlBandwidth > 0
-              ? { controlBandwidth: draft.gridControlBandwidth }
-              : {}),
-          },
+          r: draft.loadR,
+          l: draft.loadL,
+          ...(draft.emf !== 0 || draft.emfPhase !== 0
+            ? { emf: { amplitude: draft.emf, phase: draft.emfPhase } }
+            : {}),
         }
-      : {}),
+      : null,
   };
 }
 
@@ -286,6 +265,8 @@ export function draftOf(
         spaceVectorSampling: modulation.sampling ?? base.spaceVectorSampling,
         zeroSplit: modulation.zeroSplit ?? base.zeroSplit,
         clamping: modulation.clamping ?? base.clamping,
+        keepZeroSplit: modulation.zeroSplit !== undefined,
+        keepClamping: modulation.clamping !== undefined,
         overmodulation: modulation.overmodulation ?? base.overmodulation,
       });
       break;
@@ -302,18 +283,7 @@ export function draftOf(
       };
       break;
   }
-  const { load, filter, grid } = design;
-  if (grid) {
-    Object.assign(draft, {
-      gridOn: true,
-      gridLineVoltage: grid.lineVoltage,
-      gridPhase: grid.phase ?? 0,
-      gridR: grid.r,
-      gridL: grid.l,
-      gridL2: grid.l2,
-      gridControlBandwidth: grid.controlBandwidth ?? 0,
-    });
-  }
+  const { load, filter } = design;
   if (load) {
     Object.assign(draft, {
       loadOn: true,
