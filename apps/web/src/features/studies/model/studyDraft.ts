@@ -87,6 +87,17 @@ export interface StudyDraft {
   dampingPlacement: DampingPlacement;
   /** Blocking capacitance of the parallel R-C damping branch, farads. */
   cDamping: number;
+  /** The bridge feeds a grid (through the filter as L1 and C) instead of the load. */
+  gridOn: boolean;
+  /** Grid voltage, volts rms line to line (three-phase) or rms; its phase a angle, radians. */
+  gridLineVoltage: number;
+  gridPhase: number;
+  /** Grid resistance, ohms; grid inductance and grid-side inductor L2, henries. */
+  gridR: number;
+  gridL: number;
+  gridL2: number;
+  /** The current controller's bandwidth, hertz; 0 leaves it out. */
+  gridControlBandwidth: number;
 }
 
 export function isPatternMethod(method: ModulationMethod): method is PatternMethod {
@@ -131,6 +142,13 @@ export function defaultDraft(projectId = ''): StudyDraft {
     filterR: 0,
     dampingPlacement: 'series-with-capacitor',
     cDamping: 20e-6,
+    gridOn: false,
+    gridLineVoltage: 230,
+    gridPhase: 0,
+    gridR: 0.05,
+    gridL: 0.0002,
+    gridL2: 0.0005,
+    gridControlBandwidth: 0,
   };
 }
 
@@ -203,15 +221,31 @@ export function designOf(draft: StudyDraft): InverterDesign {
           ...(draft.dampingPlacement === 'parallel-rc' ? { cDamping: draft.cDamping } : {}),
         }
       : null,
-    load: draft.loadOn
+    // A grid is what the bridge feeds: it replaces the load.
+    load:
+      draft.loadOn && !draft.gridOn
+        ? {
+            r: draft.loadR,
+            l: draft.loadL,
+            ...(draft.emf !== 0 || draft.emfPhase !== 0
+              ? { emf: { amplitude: draft.emf, phase: draft.emfPhase } }
+              : {}),
+          }
+        : null,
+    ...(draft.gridOn
       ? {
-          r: draft.loadR,
-          l: draft.loadL,
-          ...(draft.emf !== 0 || draft.emfPhase !== 0
-            ? { emf: { amplitude: draft.emf, phase: draft.emfPhase } }
-            : {}),
+          grid: {
+            lineVoltage: draft.gridLineVoltage,
+            phase: draft.gridPhase,
+            r: draft.gridR,
+            l: draft.gridL,
+            l2: draft.gridL2,
+            ...(draft.gridControlBandwidth > 0
+              ? { controlBandwidth: draft.gridControlBandwidth }
+              : {}),
+          },
         }
-      : null,
+      : {}),
   };
 }
 
@@ -283,7 +317,18 @@ export function draftOf(
       };
       break;
   }
-  const { load, filter } = design;
+  const { load, filter, grid } = design;
+  if (grid) {
+    Object.assign(draft, {
+      gridOn: true,
+      gridLineVoltage: grid.lineVoltage,
+      gridPhase: grid.phase ?? 0,
+      gridR: grid.r,
+      gridL: grid.l,
+      gridL2: grid.l2,
+      gridControlBandwidth: grid.controlBandwidth ?? 0,
+    });
+  }
   if (load) {
     Object.assign(draft, {
       loadOn: true,
