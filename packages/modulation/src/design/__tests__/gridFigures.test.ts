@@ -77,6 +77,11 @@ describe('analyseDesign with a grid (LCL filter, issue 12 capability 6)', () => 
     // The report's phase-a grid (load) current agrees with the grid figures' fundamental.
     assertInDelta(report.currents[0]!.load!.fundamental, grid.gridCurrentFundamental, 1e-9);
     expect(report.motor).toBeNull();
+    expect(report.currents.map((c) => c.load?.name)).toEqual([
+      'grid current, phase a',
+      'grid current, phase b',
+      'grid current, phase c',
+    ]);
   });
 
   it('reports the resonance (1/2π)·√((L1 + L2′)/(L1·L2′·C)) with L2′ = l2 + l, and its distances', () => {
