@@ -2,15 +2,17 @@ import { Router } from 'express';
 import { principalOf } from '../auth/authorize.js';
 import type { Services } from '../services/index.js';
 import { optimalSweepPlan } from '../services/optimalSweepJobs.js';
+import { patternEventsRequest } from '../services/studyPatternEvents.js';
 
 /**
  * Programmed patterns to firmware (issue 17): the optimal-pattern sweep job beside the SHE
  * sweep, angle tables for controllers (JSON, CSV or a C header) and a stored pattern's compare
- * events. Validation is the OpenAPI validator's; the work is the compute or job service's.
+ * events (inline angles, or a saved pattern study read with the caller's team scope).
+ * Validation is the OpenAPI validator's; the work is the compute or job service's.
  */
 export function patternRoutes(services: Services): Router {
   const router = Router();
-  const { compute, jobs } = services;
+  const { compute, jobs, studies } = services;
   router.post('/api/v1/jobs/optimal-sweeps', async (req, res) => {
     res.status(202).json(await jobs.start(principalOf(req), req.body, optimalSweepPlan(req.body)));
   });
@@ -25,7 +27,9 @@ export function patternRoutes(services: Services): Router {
       .send(file.body);
   });
   router.post('/api/v1/pattern-compare-events', async (req, res) => {
-    res.json(await compute.patternEvents(req.body));
+    const { teamId } = principalOf(req);
+    const request = await patternEventsRequest(req.body, (id) => studies.get(teamId, id));
+    res.json(await compute.patternEvents(request));
   });
   return router;
 }
