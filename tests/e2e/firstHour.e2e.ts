@@ -275,6 +275,8 @@ export const scenarios: Scenario[] = [
       );
       await points.fill('40');
       await box(page, /^ma to/).fill('2');
+      // A three-phase sweep reads the line a−b voltage, and its charts say so (issue 10).
+      await page.getByRole('combobox', { name: 'Method', exact: true }).selectOption('three-phase');
       await page.getByRole('button', { name: 'Run the sweep' }).click();
       await page.getByTestId('sweep-done').waitFor({ timeout: 60_000 });
       const distortion = page.locator('svg[data-chart="line"]').first();
@@ -283,7 +285,8 @@ export const scenarios: Scenario[] = [
         'THD reads on a log axis by default',
       );
       await page.getByRole('combobox', { name: 'Harmonic shown' }).selectOption('21');
-      await page.getByText('Fundamental and order 21 against ma').waitFor();
+      await page.getByText('Fundamental and order 21 against ma, line a−b').waitFor();
+      await page.getByText('THD and WTHD against ma, line a−b').waitFor();
       await screenshot(page, 'first-hour-sweep');
       await page.getByRole('combobox', { name: 'THD axis' }).selectOption('range');
       await box(page, /^THD axis up to/).fill('150');
@@ -482,6 +485,20 @@ export const scenarios: Scenario[] = [
             `the capture reads order ${order} as ${volts} (Fourier series of the square wave)`,
           );
         }
+        // Read over whole periods with no window: the window field says it is not applied.
+        const windowField = page.getByRole('combobox', { name: 'FFT window' });
+        assert(
+          ((await windowField.getAttribute('aria-describedby')) ?? '') !== '' &&
+            (await analysis.textContent())?.includes('not applied: this capture repeats exactly'),
+          'the window field says the exactly periodic capture is read with no window',
+        );
+        // The Hz axis: order 3 of a 50 Hz capture sits at 150 Hz.
+        await page.getByRole('button', { name: 'Axis in Hz' }).click();
+        await spectrum.locator('rect[data-order="3"]').first().hover();
+        assert(
+          ((await spectrum.textContent()) ?? '').includes('150 Hz'),
+          'the Hz axis reads order 3 at 150 Hz',
+        );
         await page.getByLabel('Compare with study').selectOption({ index: 1 });
         await page.getByRole('region', { name: 'Order by order' }).waitFor();
         await screenshot(page, 'first-hour-capture');

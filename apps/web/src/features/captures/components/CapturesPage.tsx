@@ -225,6 +225,11 @@ function CaptureAnalysis({ capture }: { capture: CaptureWithSeries }) {
         <div className="mt-3 grid gap-3 sm:grid-cols-2">
           <SelectField
             label="FFT window"
+            hint={
+              spectrum.data?.periodic
+                ? 'not applied: this capture repeats exactly over its whole periods, so it is read with no window'
+                : 'applied to a capture that is not exactly periodic'
+            }
             value={windowName}
             onChange={(e) => setWindowName(e.target.value as FftWindow)}
             options={[
@@ -271,6 +276,9 @@ function CaptureAnalysis({ capture }: { capture: CaptureWithSeries }) {
           series={series}
           title={comparison.data ? 'Capture against prediction' : 'Capture spectrum'}
           fileName="capture-spectrum"
+          fundamentalFrequency={
+            comparison.data?.fundamentalFrequency ?? spectrum.data?.fundamentalFrequency
+          }
         />
       ) : null}
       {comparison.data ? <ComparisonNotes comparison={comparison.data} /> : null}
