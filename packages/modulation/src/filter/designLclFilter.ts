@@ -4,21 +4,21 @@ import { lclResonanceFrequency } from './lclResonanceFrequency.js';
 
 /** The rated operating point and targets of {@link designLclFilter}. */
 export interface LclDesignOptions {
-  /** Rated active power, all three phases, watts, > 0. */
+  /** Rated active power, all three phases, watts, in [1, 1e9]. */
   power: number;
-  /** Grid voltage, volts rms line to line, > 0. */
+  /** Grid voltage, volts rms line to line, in [1, 1e6]. */
   lineVoltage: number;
-  /** Grid frequency, hertz, > 0. */
+  /** Grid frequency, hertz, in [1, 1e4]. */
   gridFrequency: number;
-  /** Switching (carrier) frequency, hertz, > 10× the grid frequency. */
+  /** Switching (carrier) frequency, hertz, above 10× the grid frequency, ≤ 1e8. */
   switchingFrequency: number;
-  /** DC bus, volts, > 0. */
+  /** DC bus, volts, in [1, 1e6]. */
   vdc: number;
-  /** Largest peak-to-peak inverter current ripple over the rated peak current, in (0, 1]. @default 0.1 */
+  /** Largest peak-to-peak inverter current ripple over the rated peak current, in [0.001, 1]. @default 0.1 */
   rippleRatio?: number;
-  /** Capacitance over the base capacitance, in (0, 1]. @default 0.05 */
+  /** Capacitance over the base capacitance, in [0.0001, 1]. @default 0.05 */
   capacitorRatio?: number;
-  /** Grid-side over inverter-side ripple current at the switching frequency, in (0, 1). @default 0.2 */
+  /** Grid-side over inverter-side ripple current at the switching frequency, in [0.001, 1). @default 0.2 */
   attenuation?: number;
 }
 
@@ -72,23 +72,19 @@ export interface LclDesign {
 export function designLclFilter(options: LclDesignOptions): LclDesign {
   const { power, lineVoltage, gridFrequency, switchingFrequency, vdc } = options;
   const { rippleRatio = 0.1, capacitorRatio = 0.05, attenuation = 0.2 } = options;
-  assertNumberInRange('power', power, { min: 0, minExclusive: true, max: 1e9 });
-  assertNumberInRange('lineVoltage', lineVoltage, { min: 0, minExclusive: true, max: 1e6 });
-  assertNumberInRange('gridFrequency', gridFrequency, { min: 0, minExclusive: true, max: 1e4 });
+  // Bounds that keep every figure a finite, non-zero double (their extremes worked through).
+  assertNumberInRange('power', power, { min: 1, max: 1e9 });
+  assertNumberInRange('lineVoltage', lineVoltage, { min: 1, max: 1e6 });
+  assertNumberInRange('gridFrequency', gridFrequency, { min: 1, max: 1e4 });
   assertNumberInRange('switchingFrequency', switchingFrequency, {
     min: 10 * gridFrequency,
     minExclusive: true,
     max: 1e8,
   });
-  assertNumberInRange('vdc', vdc, { min: 0, minExclusive: true, max: 1e6 });
-  assertNumberInRange('rippleRatio', rippleRatio, { min: 0, minExclusive: true, max: 1 });
-  assertNumberInRange('capacitorRatio', capacitorRatio, { min: 0, minExclusive: true, max: 1 });
-  assertNumberInRange('attenuation', attenuation, {
-    min: 0,
-    minExclusive: true,
-    max: 1,
-    maxExclusive: true,
-  });
+  assertNumberInRange('vdc', vdc, { min: 1, max: 1e6 });
+  assertNumberInRange('rippleRatio', rippleRatio, { min: 1e-3, max: 1 });
+  assertNumberInRange('capacitorRatio', capacitorRatio, { min: 1e-4, max: 1 });
+  assertNumberInRange('attenuation', attenuation, { min: 1e-3, max: 1, maxExclusive: true });
   const gridOmega = TAU * gridFrequency;
   const switchingOmega = TAU * switchingFrequency;
   const baseImpedance = (lineVoltage * lineVoltage) / power;

@@ -80,5 +80,33 @@ describe('designLclFilter (Liserre, Blaabjerg, Hansen 2005; targets from memory)
       /switchingFrequency/,
     );
     expect(() => designLclFilter({ ...options, attenuation: 1 })).toThrow(/attenuation/);
+    expect(() => designLclFilter({ ...options, power: 5e-324 })).toThrow(/power/);
+  });
+});
+
+describe('designLclFilter at the corners of its bounds', () => {
+  it('gives finite, positive figures at every corner (the bounds were chosen for it)', () => {
+    for (const power of [1, 1e9])
+      for (const lineVoltage of [1, 1e6])
+        for (const gridFrequency of [1, 1e4])
+          for (const switchingFrequency of [10.000001 * gridFrequency, 1e8])
+            for (const vdc of [1, 1e6])
+              for (const [rippleRatio, capacitorRatio, attenuation] of [
+                [1e-3, 1e-4, 1e-3],
+                [1, 1, 0.999],
+              ] as const) {
+                const d = designLclFilter({
+                  power,
+                  lineVoltage,
+                  gridFrequency,
+                  switchingFrequency,
+                  vdc,
+                  rippleRatio,
+                  capacitorRatio,
+                  attenuation,
+                });
+                for (const value of [d.l1, d.c, d.l2, d.rDamping, d.resonanceFrequency])
+                  expect(Number.isFinite(value) && value > 0).toBe(true);
+              }
   });
 });
