@@ -1,6 +1,7 @@
 import {
   analyseDesign,
   assertInverterDesign,
+  asynchronousDesignSpectra,
   designModulation,
   fftSpectrum,
   modulationVoltages,
@@ -9,6 +10,7 @@ import {
   timerTableToCsv,
   timerTableToJson,
   type AnalyseDesignOptions,
+  type AsynchronousDesignSpectra,
   type DesignReport,
   type FftWindowName,
   type Harmonic,
@@ -144,6 +146,23 @@ export function designReport(
   callLibrary(`${field}.`, () => assertInverterDesign(design));
   const report = callLibrary(`${field}.`, () => analyseDesign(design, options), OPTION_FIELDS);
   return finiteResult(field, report);
+}
+
+/**
+ * The spectra of a carrier design whose carrier need not be a whole multiple of the fundamental
+ * (the library's asynchronousDesignSpectra: the nearest p/q with q ≤ 64, its carrier error in
+ * hertz, phase a, leg a and line a−b over q fundamental periods, orders labelled as fractions).
+ * Its cost is checked first (services/cost.ts `asynchronousSpectraCost`). Errors name
+ * `design.<field>` or `maxOrder`.
+ */
+export function asynchronousSpectra(
+  design: InverterDesign,
+  maxOrder: number,
+): AsynchronousDesignSpectra {
+  const result = callLibrary('design.', () => asynchronousDesignSpectra(design, { maxOrder }), [
+    'maxOrder',
+  ]);
+  return finiteResult('design', result);
 }
 
 /**

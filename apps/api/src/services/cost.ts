@@ -1,6 +1,7 @@
 import {
   CARRIER_METHODS,
   defaultSpectrumOrder,
+  designRationalRatio,
   MAX_ANALYSIS_ORDER,
   THREE_PHASE_METHODS,
   type AnalyseDesignOptions,
@@ -10,6 +11,7 @@ import {
 } from '@pulsewright/modulation';
 import type { ComputeLimits } from '../config.js';
 import { badRequest } from '../http/errors.js';
+import { callLibrary } from './library.js';
 import type { MaSweepInput, SheSweepInput } from './sweeps.js';
 
 /**
@@ -250,6 +252,33 @@ export function designSpectrumCost(
     basis: `${analysed} edges × ${maxOrder + 1} orders`,
     fields: pattern ? ['maxOrder'] : ['maxOrder', `${field}.carrierFrequency`],
     responseBytes: (maxOrder + 1) * 3 * BYTES_PER_NUMBER,
+    responseFields: ['maxOrder'],
+  };
+}
+
+/**
+ * POST /designs/asynchronous-spectra: the carrier's ratio as the nearest p/q (the library's
+ * designRationalRatio, so a bad carrier is refused here, before any work), every voltage built
+ * over the q-period span (p carrier cycles), and phase a, leg a and line a−b (one voltage for a
+ * single-phase bridge) summed to q·maxOrder span orders; five numbers an order in the answer.
+ */
+export function asynchronousSpectraCost(design: InverterDesign, maxOrder: number): CostEstimate {
+  if (!CARRIER_METHODS.includes(design.modulation.method)) {
+    const message = `design.modulation.method must be one of ${CARRIER_METHODS.map((m) => `'${m}'`).join(', ')} (a method with a carrier); got '${design.modulation.method}'`;
+    throw badRequest(message, [{ path: 'design.modulation.method', message }]);
+  }
+  const { p, q } = callLibrary('design.', () => designRationalRatio(design));
+  const edges = designEdges(design, p);
+  const phases = THREE_PHASE_METHODS.includes(design.modulation.method) ? 3 : 1;
+  // Leg a switches a third as often as phase a to the star point (2 against 6 edges a carrier cycle).
+  const analysed = phases === 3 ? edges.phase + edges.phase / 3 + edges.line : edges.phase;
+  const orders = q * maxOrder + 1;
+  const voltages = phases === 3 ? 3 : 1;
+  return {
+    work: phases * analysed * BUILD_PER_EDGE + analysed * orders,
+    basis: `${analysed} edges × ${orders} orders over ${q} fundamental periods`,
+    fields: ['maxOrder', 'design.carrierFrequency'],
+    responseBytes: voltages * orders * 5 * BYTES_PER_NUMBER,
     responseFields: ['maxOrder'],
   };
 }

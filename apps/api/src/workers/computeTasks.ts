@@ -9,6 +9,7 @@ import type {
 import {
   analyseSamples,
   assertDesign,
+  asynchronousSpectra,
   checkDesignLimits,
   computeFilter,
   computeLoadCurrent,
@@ -52,6 +53,8 @@ export const COMPUTE_TASKS = {
     designReport(a.design, a.options, a.field),
   designSpectrum: (a: { design: InverterDesign; maxOrder: number; field: string }) =>
     designSpectrum(a.design, a.maxOrder, a.field),
+  asynchronousSpectra: (a: { design: InverterDesign; maxOrder: number }) =>
+    asynchronousSpectra(a.design, a.maxOrder),
   assertDesign: (a: { design: InverterDesign; field: string }) => {
     assertDesign(a.design, a.field);
     return true;
