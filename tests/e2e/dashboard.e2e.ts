@@ -555,6 +555,22 @@ export const scenarios: Scenario[] = [
       await page.getByText(/Saved revision on the server: THD/).waitFor();
       await page.locator('[data-figure="THD, line-to-line"]').waitFor();
       await screenshot(page, 'study-space-vector');
+      // The clamping stays with the design when the sequence that does not read it is chosen,
+      // and the form says so (issue 10: it was dropped on the next save).
+      await page.getByLabel('Switching sequence').selectOption('seven-segment');
+      await page.getByTestId('kept-sequence-option').waitFor();
+      await page.getByRole('button', { name: 'Save revision' }).click();
+      await page.getByText('Saved as revision 2.').waitFor();
+      const resaved = (await (
+        await fetch(`${context.baseUrl}/api/v1/studies/${page.url().split('/').pop()}`, {
+          headers: { Authorization: `Bearer ${await token(page)}` },
+        })
+      ).json()) as { design: { modulation: { clamping?: string; sequence?: string } } };
+      assert(
+        resaved.design.modulation.sequence === 'seven-segment' &&
+          resaved.design.modulation.clamping === 'dpwm2',
+        `the clamping is kept with the seven-segment sequence (${JSON.stringify(resaved.design.modulation)})`,
+      );
       await page.close();
     },
   },
