@@ -158,10 +158,6 @@ export const FIXTURES: Record<string, Fixture> = {
     path: '/api/v1/designs/report',
     body: { design: { ...SINE_TRIANGLE_DESIGN, load: { r: 10, l: 0.02 } }, points: 64 },
   }),
-  analyseAsynchronousSpectra: () => ({
-    path: '/api/v1/designs/asynchronous-spectra',
-    body: { design: { ...SINE_TRIANGLE_DESIGN, carrierFrequency: 1075 }, maxOrder: 30 },
-  }),
   computeLoadCurrent: () => ({
     path: '/api/v1/load-current',
     body: { design: { ...SINE_TRIANGLE_DESIGN, load: { r: 10, l: 0.02 } }, points: 64 },
@@ -171,6 +167,16 @@ export const FIXTURES: Record<string, Fixture> = {
     body: {
       design: { ...SINE_TRIANGLE_DESIGN, filter: { l: 0.001, c: 0.00001, rDamping: 2 } },
       points: 64,
+    },
+  }),
+  designLclFilter: () => ({
+    path: '/api/v1/filters/lcl-design',
+    body: {
+      power: 10_000,
+      lineVoltage: 400,
+      gridFrequency: 50,
+      switchingFrequency: 10_000,
+      vdc: 700,
     },
   }),
   computeSpaceVector: () => ({ path: '/api/v1/space-vector', body: { m: 0.7, theta: 1.2 } }),

@@ -2,6 +2,7 @@ import type {
   AnalyseDesignOptions,
   FftWindowName,
   InverterDesign,
+  LclDesignOptions,
   LossesByPowerFactorOptions,
   Modulation,
   SpaceVectorSequenceOptions,
@@ -19,7 +20,6 @@ import type { ComputePool } from './computePool.js';
 import {
   assertReportSeries,
   assertWithinBudget,
-  asynchronousSpectraCost,
   captureSpectrumCost,
   captureUploadCost,
   designSpectrumCost,
@@ -38,6 +38,7 @@ import {
   type TaskArgs,
   type TaskResult,
 } from '../workers/computeTasks.js';
+import { computeLclDesign, lclDesignCost } from './lclDesign.js';
 import { lossSweepCost } from './lossSweeps.js';
 import type { NetlistRequest } from './netlists.js';
 
@@ -154,16 +155,6 @@ export class ComputeService {
     );
   }
 
-  /** A carrier design at a ratio p/q, exact over q fundamental periods (compute.ts asynchronousSpectra). */
-  asynchronousSpectra(design: InverterDesign, maxOrder: number) {
-    return this.run(
-      'asynchronousSpectra',
-      { design, maxOrder },
-      asynchronousSpectraCost(design, maxOrder),
-      'These asynchronous spectra',
-    );
-  }
-
   /** A study's design checked by a trial analysis before it is stored (compute.ts assertDesign). */
   async assertDesign(design: InverterDesign, field = 'design'): Promise<void> {
     await this.run(
@@ -196,6 +187,12 @@ export class ComputeService {
   /** A timer table's switching pattern as a SPICE netlist (services/netlists.ts). */
   netlist(request: NetlistRequest) {
     return this.run('netlist', { request }, netlistCost(request), 'This netlist');
+  }
+
+  /** An LCL filter from its rated point and targets (services/lclDesign.ts). */
+  lclDesign(options: LclDesignOptions) {
+    assertWithinBudget(lclDesignCost(), 'request', this.limits);
+    return computeLclDesign(options);
   }
 
   spaceVector(m: number, theta: number, options: SpaceVectorSequenceOptions) {
