@@ -158,6 +158,10 @@ export const FIXTURES: Record<string, Fixture> = {
     path: '/api/v1/designs/report',
     body: { design: { ...SINE_TRIANGLE_DESIGN, load: { r: 10, l: 0.02 } }, points: 64 },
   }),
+  analyseAsynchronousSpectra: () => ({
+    path: '/api/v1/designs/asynchronous-spectra',
+    body: { design: { ...SINE_TRIANGLE_DESIGN, carrierFrequency: 1075 }, maxOrder: 30 },
+  }),
   computeLoadCurrent: () => ({
     path: '/api/v1/load-current',
     body: { design: { ...SINE_TRIANGLE_DESIGN, load: { r: 10, l: 0.02 } }, points: 64 },

@@ -27,6 +27,10 @@ export function computeRoutes(services: Services): Router {
     const { design, ...options } = req.body;
     res.json(await compute.report(design, options));
   });
+  router.post('/api/v1/designs/asynchronous-spectra', async (req, res) => {
+    // maxOrder's default (50) is the document's; the validator has filled it in.
+    res.json(await compute.asynchronousSpectra(req.body.design, req.body.maxOrder));
+  });
   router.post('/api/v1/load-current', async (req, res) => {
     res.json(await compute.loadCurrent(req.body.design, req.body.points));
   });

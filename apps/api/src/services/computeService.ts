@@ -20,6 +20,7 @@ import type { ComputePool } from './computePool.js';
 import {
   assertReportSeries,
   assertWithinBudget,
+  asynchronousSpectraCost,
   captureSpectrumCost,
   captureUploadCost,
   designSpectrumCost,
@@ -152,6 +153,16 @@ export class ComputeService {
       { design, ...(busVoltage === undefined ? {} : { busVoltage }) },
       cost,
       'This limit check',
+    );
+  }
+
+  /** A carrier design at a ratio p/q, exact over q fundamental periods (compute.ts asynchronousSpectra). */
+  asynchronousSpectra(design: InverterDesign, maxOrder: number) {
+    return this.run(
+      'asynchronousSpectra',
+      { design, maxOrder },
+      asynchronousSpectraCost(design, maxOrder),
+      'These asynchronous spectra',
     );
   }
 
