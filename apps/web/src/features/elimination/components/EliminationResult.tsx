@@ -16,7 +16,7 @@ import {
 } from '../../../lib/api';
 import { formatNumber, formatPercent } from '../../../lib/format';
 import { patternFigures, type SolvedPattern } from '../model/eliminationForm';
-import { CompareEventsPanel } from './CompareEventsPanel';
+import { CompareEventsPanel } from '../../../components/patterns/CompareEventsPanel';
 import type { SweepPoint } from './useEliminationSweep';
 
 /** The fundamental frequency a saved pattern study starts with, hertz (edited in the study). */
@@ -236,7 +236,10 @@ function PickedPoint({ pattern, point }: { pattern: SolvedPattern; point: SweepP
         fileName="pattern-point-spectrum"
         labelThreshold={2}
       />
-      <CompareEventsPanel pattern={pattern} angles={point.angles} />
+      <CompareEventsPanel
+        source={{ pattern: { kind: pattern.kind, vdc: pattern.vdc, angles: point.angles } }}
+        orders={pattern.orders}
+      />
     </>
   );
 }

@@ -6,13 +6,14 @@ import {
 import { NumberField, SelectField, TextField, parseNumberList } from '../../../components/ui/Field';
 import { Panel } from '../../../components/ui/Panel';
 import { PATTERN_KIND_OPTIONS } from '../../../lib/modulationOptions';
+import { StudyCompareEventsPanel } from './StudyCompareEventsPanel';
 
 type Goal = 'she' | 'optimal';
 
 /**
  * Controller tables for a programmed pattern: the pattern's fields (eliminate chosen orders, or
  * minimise the WTHD with N angles), then the shared angle-table panel, which asks the service for
- * the table and its interpolation errors.
+ * the table and its interpolation errors, and the compare events of a saved pattern study.
  */
 export function PatternTablePanel() {
   const [goal, setGoal] = useState<Goal>('she');
@@ -62,6 +63,7 @@ export function PatternTablePanel() {
         </div>
       </Panel>
       <AngleTablePanel pattern={pattern} />
+      <StudyCompareEventsPanel />
     </div>
   );
 }

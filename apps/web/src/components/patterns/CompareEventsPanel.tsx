@@ -1,24 +1,32 @@
-import { useState } from 'react';
-import { Button } from '../../../components/ui/Button';
-import { NumberField } from '../../../components/ui/Field';
-import { Panel } from '../../../components/ui/Panel';
-import { errorMessage, fieldErrorOf, usePatternCompareEvents } from '../../../lib/api';
-import { formatNumber, formatPercent } from '../../../lib/format';
-import type { SolvedPattern } from '../model/eliminationForm';
+import { useState, type ReactNode } from 'react';
+import { Button } from '../ui/Button';
+import { NumberField } from '../ui/Field';
+import { Panel } from '../ui/Panel';
+import { errorMessage, fieldErrorOf, usePatternCompareEvents } from '../../lib/api';
+import { formatNumber, formatPercent } from '../../lib/format';
+
+/** Which pattern: its angles inline, or a saved SHE or optimal-pattern study's, by id. */
+export type CompareEventsSource =
+  | { pattern: { kind: 'bipolar' | 'staircase'; vdc: number; angles: number[] } }
+  | { studyId: string };
+
+export interface CompareEventsPanelProps {
+  /** The pattern to time; null while none is chosen (the button is disabled). */
+  source: CompareEventsSource | null;
+  /** Odd orders to report (the eliminated ones). */
+  orders: number[];
+  /** Shown above the timer fields (the controller-tables page's study picker). */
+  picker?: ReactNode;
+}
 
 /**
- * The picked pattern at one operating point (POST /api/v1/pattern-compare-events): every
+ * A programmed pattern at one operating point (POST /api/v1/pattern-compare-events): every
  * device's on and off ticks over one period for a timer clock, fundamental frequency and dead
  * time, and what rounding to ticks and the dead time do to the fundamental and the eliminated
- * orders, as the service computes them.
+ * orders, as the service computes them. Shared by the harmonic-elimination page (the picked
+ * point's angles) and the controller-tables page (a saved pattern study).
  */
-export function CompareEventsPanel({
-  pattern,
-  angles,
-}: {
-  pattern: SolvedPattern;
-  angles: number[];
-}) {
+export function CompareEventsPanel({ source, orders, picker }: CompareEventsPanelProps) {
   const [form, setForm] = useState({ fundamentalFrequency: 50, timerClock: 72e6, deadTime: 1e-6 });
   const events = usePatternCompareEvents();
   const set = (key: keyof typeof form) => (value: number) =>
@@ -27,6 +35,7 @@ export function CompareEventsPanel({
   const result = events.data;
   return (
     <Panel title="Compare events at one operating point">
+      {picker}
       <div className="grid gap-3 sm:grid-cols-3">
         <NumberField
           label="Fundamental frequency"
@@ -56,13 +65,10 @@ export function CompareEventsPanel({
         <Button
           variant="secondary"
           busy={events.isPending}
-          onClick={() =>
-            events.mutate({
-              pattern: { kind: pattern.kind, vdc: pattern.vdc, angles },
-              ...form,
-              orders: pattern.orders,
-            })
-          }
+          disabled={source === null}
+          onClick={() => {
+            if (source !== null) events.mutate({ ...source, ...form, orders });
+          }}
         >
           Compute the events
         </Button>
@@ -81,7 +87,7 @@ export function CompareEventsPanel({
             {formatNumber(result.realised.fundamental)} V with the dead time (current in phase):{' '}
             {formatNumber(result.deadTimeFundamentalChange)} V.
             {result.realised.orders.length > 0
-              ? ` Eliminated orders with the dead time: ${result.realised.orders.map((o) => `${o.order}: ${formatPercent(o.relative, 3)}`).join(', ')} of the fundamental.`
+              ? ` Eliminated orders with the dead time: ${result.realised.orders.map((o) => `${o.order}: ${o.relative === null ? '— (no fundamental)' : formatPercent(o.relative, 3)}`).join(', ')} of the fundamental.`
               : ''}
           </p>
           {result.warnings.map((w) => (
