@@ -20,7 +20,11 @@ import type { AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import autocannon from 'autocannon';
-import { modulationVoltages, voltageFigures, type Modulation } from '@pulsewright/modulation';
+import {
+  modulationVoltages,
+  voltageSpectrumFigures,
+  type Modulation,
+} from '@pulsewright/modulation';
 import { createApp } from '@pulsewright/api';
 import { printTable } from './measure.js';
 
@@ -85,7 +89,7 @@ interface Target {
 
 /**
  * The same work as the route: the bridge voltage and its figures from the same library call
- * (voltageFigures: spectrum, exact THD and WTHD), in the route's shape, as JSON.
+ * (voltageSpectrumFigures: spectrum, exact THD and WTHD), in the route's shape, as JSON.
  */
 async function bare(): Promise<Target> {
   const server = createServer((req, res) => {
@@ -96,18 +100,11 @@ async function bare(): Promise<Target> {
         modulation: Modulation;
         maxOrder: number;
       };
-      const figures = voltageFigures(modulationVoltages(modulation).phases[0]!, { maxOrder });
-      const body = JSON.stringify({
-        name: figures.name,
-        harmonics: figures.spectrum.map(({ order, amplitude, phase }) => ({
-          order,
-          amplitude,
-          phase,
-        })),
-        thd: figures.thd,
-        wthd: figures.wthd,
-        spectrumThd: figures.spectrumThd,
-      });
+      const { name, spectrum, thd, wthd, spectrumThd } = voltageSpectrumFigures(
+        modulationVoltages(modulation).phases[0]!,
+        { maxOrder },
+      );
+      const body = JSON.stringify({ name, harmonics: spectrum, thd, wthd, spectrumThd });
       res.writeHead(200, { 'content-type': 'application/json; charset=utf-8' }).end(body);
     });
   });

@@ -180,6 +180,7 @@ const PUBLIC_NAMES = [
   'timerTableWaveforms',
   'triangleCarrier',
   'voltageFigures',
+  'voltageSpectrumFigures',
   'waveformFromTransitions',
   'waveformIntegral',
   'waveformMean',

@@ -10,6 +10,7 @@ export * from './modulationVoltages.js';
 export * from './defaultSpectrumOrder.js';
 export * from './DesignReport.js';
 export * from './voltageFigures.js';
+export * from './voltageSpectrumFigures.js';
 export * from './analyseDesign.js';
 export * from './modulatorSignals.js';
 export * from './optionLabels.js';

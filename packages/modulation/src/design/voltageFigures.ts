@@ -1,13 +1,10 @@
-import { harmonics } from '../spectrum/harmonics.js';
 import { labelHarmonics } from '../spectrum/labelHarmonics.js';
-import { weightedDistortion } from '../spectrum/distortion.js';
-import { waveformThd } from '../spectrum/waveformThd.js';
-import { waveformWthd } from '../spectrum/waveformWthd.js';
 import { waveformMeanSquare } from '../waveform/waveformMeanSquare.js';
 import type { Harmonic } from '../spectrum/Harmonic.js';
 import type { VoltageFigures } from './DesignReport.js';
 import type { NamedVoltage } from './modulationVoltages.js';
 import { spectrumLabelRatio } from './spectrumLabelRatio.js';
+import { voltageSpectrumFigures } from './voltageSpectrumFigures.js';
 
 /** Options of {@link voltageFigures}. */
 export interface VoltageFiguresOptions {
@@ -29,21 +26,18 @@ export function voltageFigures(
   options: VoltageFiguresOptions,
 ): VoltageFigures {
   const { maxOrder, frequencyRatio = null } = options;
-  const { name, waveform } = voltage;
-  const spectrum = harmonics(waveform, maxOrder);
+  const { name, spectrum, thd, wthd, spectrumThd } = voltageSpectrumFigures(voltage, { maxOrder });
   const fundamental = spectrum[1] as Harmonic;
-  const thd = waveformThd(waveform);
-  const labelled = labelHarmonics(spectrum, spectrumLabelRatio(maxOrder, frequencyRatio));
   return {
     name,
     fundamental: fundamental.amplitude,
     fundamentalPhase: fundamental.phase,
-    rms: Math.sqrt(waveformMeanSquare(waveform)),
+    rms: Math.sqrt(waveformMeanSquare(voltage.waveform)),
     thd,
     thdUpperBound: thd,
-    wthd: waveformWthd(waveform),
+    wthd,
     exact: true,
-    spectrum: labelled,
-    spectrumThd: weightedDistortion(labelled, 0),
+    spectrum: labelHarmonics(spectrum, spectrumLabelRatio(maxOrder, frequencyRatio)),
+    spectrumThd,
   };
 }
