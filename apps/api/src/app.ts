@@ -75,6 +75,10 @@ export async function createApp(overrides: ConfigOverrides = {}): Promise<Pulsew
 
   const app = express() as PulsewrightApp;
   app.disable('x-powered-by');
+  // No ETag on answers: Express would hash every body (SHA-1 over a spectrum's 60 kB, each time)
+  // to let a GET be answered 304, but the answers are computed per request or private to a bearer
+  // token, and no client here sends If-None-Match. The dashboard's files keep theirs (staticWeb).
+  app.set('etag', false);
   // Which proxies may name the client address (X-Forwarded-For); off unless TRUST_PROXY says so.
   app.set('trust proxy', config.trustProxy);
   app.use(

@@ -22,7 +22,7 @@ import {
   type SpaceVectorSequenceOptions,
   type ThreePhaseCarrierModulation,
   type Waveform,
-  voltageFigures,
+  voltageSpectrumFigures,
 } from '@pulsewright/modulation';
 import { badRequest } from '../http/errors.js';
 import type { TimerFormat } from './cost.js';
@@ -87,26 +87,19 @@ export function modulationOutput(
 
 /**
  * Exact spectrum to maxOrder of one voltage, with THD and WTHD exact over the whole waveform: the
- * library's `voltageFigures`, the same figures the design report gives, in the route's shape.
+ * library's `voltageSpectrumFigures`, the numbers the design report gives, in the route's shape.
  */
 export function voltageSpectrum(
   voltage: NamedVoltage,
   maxOrder: number,
   field = 'modulation',
 ): SpectrumResult {
+  // Unlabelled: the answer carries order, amplitude and phase only, so no label is built per order.
   const result = callLibrary(`${field}.`, () => {
-    const figures = voltageFigures(voltage, { maxOrder });
-    return {
-      name: figures.name,
-      harmonics: figures.spectrum.map(({ order, amplitude, phase }) => ({
-        order,
-        amplitude,
-        phase,
-      })),
-      thd: figures.thd,
-      wthd: figures.wthd,
-      spectrumThd: figures.spectrumThd,
-    };
+    const { name, spectrum, thd, wthd, spectrumThd } = voltageSpectrumFigures(voltage, {
+      maxOrder,
+    });
+    return { name, harmonics: spectrum, thd, wthd, spectrumThd };
   });
   return finiteResult(field, result);
 }
