@@ -92,6 +92,15 @@ const COLUMNS: Column[] = [
         : 'no filter',
   },
   {
+    heading: 'Grid current THD',
+    cell: (r) => (r.grid ? formatPercent(r.grid.gridCurrentThd) : '—'),
+    value: (r) => r.grid?.gridCurrentThd ?? null,
+    title: (r) =>
+      r.grid
+        ? `phase a; IEEE 519 ${r.grid.limits.ieee519.pass ? 'within' : 'over'}, IEEE 1547 ${r.grid.limits.ieee1547.pass ? 'within' : 'over'} (limits recalled from memory)`
+        : 'no grid',
+  },
+  {
     heading: 'Common mode (V rms)',
     cell: (r) => (r.commonMode ? formatNumber(r.commonMode.rms) : '—'),
     value: (r) => r.commonMode?.rms ?? null,

@@ -87,7 +87,7 @@ export function reportFigures(report: StudyReport): Figure[] {
       });
     if (phaseA.load)
       figures.push({
-        label: 'Load current',
+        label: report.grid ? 'Grid current' : 'Load current',
         value: `${formatNumber(phaseA.load.rms)} A`,
         note: `${rms}; fundamental ${formatNumber(phaseA.load.fundamental)} A peak`,
       });
@@ -126,6 +126,19 @@ export function reportFigures(report: StudyReport): Figure[] {
       label: 'Filter resonance',
       value: `${formatNumber(filter.characteristics.resonanceFrequency)} Hz`,
       note: `${filter.gainAtCarrier !== null ? `gain at the carrier ${formatGain(filter.gainAtCarrier)}; ` : ''}at the fundamental ${formatGain(filter.gainAtFundamental)}, loaded`,
+    });
+  }
+  const { grid } = report;
+  if (grid) {
+    const { ieee519, ieee1547 } = grid.limits;
+    const verdict = (pass: boolean) => (pass ? 'within' : 'over');
+    figures.push({
+      label: 'Grid current THD',
+      value: formatPercent(grid.gridCurrentThd),
+      tone: ieee519.pass && ieee1547.pass ? 'good' : 'bad',
+      note: `phase a; ${verdict(ieee519.pass)} ${ieee519.standard.name}-${ieee519.standard.edition}, ${verdict(ieee1547.pass)} ${ieee1547.standard.name}-${ieee1547.standard.edition} (limits recalled from memory)${
+        grid.resonance ? `; LCL resonance ${formatNumber(grid.resonance.frequency)} Hz` : ''
+      }`,
     });
   }
   figures.push({

@@ -1,0 +1,35 @@
+import { analyseDesign, type InverterDesign } from '@pulsewright/modulation';
+import { describe, expect, it } from 'vitest';
+import { formatPercent } from '../../../lib/format';
+import { reportFigures } from './reportFigures';
+
+// Invented values: a 400 V, 50 Hz grid fed through an LCL filter from 700 V at 10 kHz.
+const design: InverterDesign = {
+  vdc: 700,
+  fundamentalFrequency: 50,
+  carrierFrequency: 10_000,
+  modulation: { method: 'three-phase', ma: 1, zeroSequence: 'third-harmonic' },
+  filter: { l: 2e-3, c: 10e-6, rDamping: 2 },
+  grid: { lineVoltage: 400, phase: -0.1, r: 0.05, l: 0.2e-3, l2: 0.5e-3 },
+};
+
+describe('reportFigures with a grid', () => {
+  it('shows the grid current THD with both verdicts, and names the load current the grid current', () => {
+    const report = analyseDesign(design, { points: 256 });
+    const figures = reportFigures(report);
+    const grid = figures.find((f) => f.label === 'Grid current THD');
+    expect(grid?.value).toBe(formatPercent(report.grid!.gridCurrentThd));
+    expect(grid?.note).toContain('IEEE Std 519-2022');
+    expect(grid?.note).toContain('IEEE Std 1547-2018');
+    expect(grid?.note).toContain('recalled from memory');
+    expect(figures.some((f) => f.label === 'Grid current')).toBe(true);
+    expect(figures.some((f) => f.label === 'Load current')).toBe(false);
+  });
+
+  it('has no grid card without a grid', () => {
+    const { grid: _grid, ...alone } = design;
+    expect(reportFigures(analyseDesign(alone, { points: 256 })).map((f) => f.label)).not.toContain(
+      'Grid current THD',
+    );
+  });
+});
