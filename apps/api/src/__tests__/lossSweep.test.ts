@@ -61,4 +61,32 @@ describe('POST /api/v1/losses/power-factor-sweeps', () => {
       /points and zeroSequences and switchingFrequency/,
     );
   });
+
+  it('names a bad device energy, not the sweep’s size, and never prices work at Infinity (fuzz finding)', async () => {
+    // The fuzzer's request (tests/robustness/fuzz.test.ts): eon 1e308 J, far past any part (some
+    // 10 J a pulse for the largest modules, from memory), with a fundamental of 4.4e-323 Hz that
+    // asks for ~1e331 carrier periods; the cost model answered 'points … ask for Infinity units'.
+    const res = await request(t.app)
+      .post('/api/v1/losses/power-factor-sweeps')
+      .set(auth)
+      .send({
+        ...body,
+        device: { ...igbt, eon: 1e308 },
+        switchingFrequency: 100_000_000,
+        fundamentalFrequency: 4.4e-323,
+      });
+    expect(res.status).toBe(400);
+    expect(res.body.errors.map((e: { path: string }) => e.path)).toEqual(['device.eon']);
+    expect(res.body.detail).toMatch(/^device\.eon must be/);
+    // With a good device the tiny fundamental itself is named, with the sweep's limit (the ratio
+    // does overflow to Infinity; the cost model never sees it).
+    const tiny = await request(t.app)
+      .post('/api/v1/losses/power-factor-sweeps')
+      .set(auth)
+      .send({ ...body, fundamentalFrequency: 4.4e-323 });
+    expect(tiny.status).toBe(400);
+    expect(tiny.body.errors[0].path).toBe('switchingFrequency/fundamentalFrequency');
+    expect(tiny.body.detail).toMatch(/at most 5000 carrier periods/);
+    expect(tiny.body.detail).not.toMatch(/units of work/);
+  });
 });

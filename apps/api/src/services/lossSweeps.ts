@@ -1,5 +1,5 @@
 import {
-  LOSS_ZERO_SEQUENCES,
+  assertLossSweepOptions,
   lossesByPowerFactor,
   type LossesByPowerFactorOptions,
   type LossSweep,
@@ -16,18 +16,25 @@ const UNITS_PER_PERIOD = 50;
 /** Bytes of one number in the JSON answer (as services/cost.ts measures them). */
 const BYTES_PER_NUMBER = 20;
 
-/** POST /losses/power-factor-sweeps: angles × zero sequences × carrier periods, each summed once. */
+/**
+ * POST /losses/power-factor-sweeps: angles × zero sequences × carrier periods, each summed once.
+ * The request is checked first by the library's own checks (assertLossSweepOptions, a 400 naming
+ * the field, e.g. `device.eon`), so the estimate is made only of values the sweep accepts: a bad
+ * device or a fundamental that asks for 1e331 carrier periods is named as such, never priced.
+ */
 export function lossSweepCost(input: LossesByPowerFactorOptions): CostEstimate {
-  const angles = input.angles?.length ?? input.points ?? 100;
-  const sequences = input.zeroSequences?.length ?? LOSS_ZERO_SEQUENCES.length;
+  const checked = callLibrary('', () => assertLossSweepOptions(input));
+  const angles = checked.angles.length;
+  const sequences = checked.zeroSequences.length;
   const periods = Math.ceil(
-    (input.switchingFrequency / (input.fundamentalFrequency ?? 50)) *
-      (input.basis === 'equal-switching' ? 1.5 : 1),
+    (checked.point.switchingFrequency / checked.fundamentalFrequency) *
+      (checked.basis === 'equal-switching' ? 1.5 : 1),
   );
   const fields = [
     input.angles === undefined ? 'points' : 'angles',
     'zeroSequences',
     'switchingFrequency',
+    ...(input.fundamentalFrequency === undefined ? [] : ['fundamentalFrequency']),
   ];
   return {
     work: angles * sequences * periods * UNITS_PER_PERIOD,

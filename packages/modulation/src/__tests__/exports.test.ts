@@ -92,6 +92,7 @@ const PUBLIC_NAMES = [
   'assertFiniteArray',
   'assertInverterDesign',
   'assertLcFilter',
+  'assertLossSweepOptions',
   'assertNumberInRange',
   'assertOneOf',
   'assertOptimalPulseSweepOptions',

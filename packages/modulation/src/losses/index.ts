@@ -5,4 +5,5 @@ export * from './semiconductorLossesByIntegration.js';
 export * from './rippleInductance.js';
 export * from './switchingFrequencyTradeoff.js';
 export * from './lossesByPowerFactor.js';
+export * from './assertLossSweepOptions.js';
 export * from './exampleIgbt.js';

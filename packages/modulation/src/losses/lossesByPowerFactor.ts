@@ -1,22 +1,10 @@
-import { assertFiniteArray, assertNumberInRange, assertOneOf } from '../validation/assertions.js';
-import { ParameterRangeError, ParameterTypeError } from '../validation/errors.js';
-import { assertLossInputs } from './assertLossInputs.js';
+import { assertLossSweepOptions } from './assertLossSweepOptions.js';
 import { legDutySamples } from './legDutySamples.js';
-import {
-  LOSS_ZERO_SEQUENCES,
-  type LossZeroSequence,
-  type SemiconductorDevice,
-} from './lossTypes.js';
+import type { LossZeroSequence, SemiconductorDevice } from './lossTypes.js';
 import { lossesFromDuties } from './lossesFromDuties.js';
-
-/** Most carrier periods per fundamental period a sweep integrates (bounds its cost). */
-export const MAX_SWEEP_CARRIER_PERIODS = 5000;
 
 /** Samples (0.1° apart) on which a sequence's share of switched time is read for 'equal-switching'. */
 const FRACTION_GRID = 3600;
-
-/** Most power-factor angles one sweep evaluates. */
-export const MAX_SWEEP_ANGLES = 1000;
 
 /**
  * How the zero sequences are compared: at one carrier frequency, or each at the carrier that gives
@@ -100,46 +88,9 @@ export interface LossSweep {
  *   `switchingFrequency/fundamentalFrequency` above {@link MAX_SWEEP_CARRIER_PERIODS}, …)
  */
 export function lossesByPowerFactor(options: LossesByPowerFactorOptions): LossSweep {
-  const {
-    device,
-    vdc,
-    ma,
-    peakCurrent,
-    switchingFrequency,
-    fundamentalFrequency = 50,
-    zeroSequences = LOSS_ZERO_SEQUENCES,
-    points = 100,
-    basis = 'equal-carrier',
-  } = options;
-  const point = assertLossInputs(device, { vdc, ma, peakCurrent, switchingFrequency });
-  assertNumberInRange('fundamentalFrequency', fundamentalFrequency, {
-    min: 0,
-    minExclusive: true,
-    max: switchingFrequency / 3,
-  });
-  assertOneOf('basis', basis, ['equal-carrier', 'equal-switching'] as const);
-  // Tested as unknown: Array.isArray would narrow a readonly array to any[] (TypeScript 17002).
-  const givenSequences: unknown = zeroSequences;
-  if (!Array.isArray(givenSequences) || zeroSequences.length === 0)
-    throw new ParameterTypeError(
-      'zeroSequences',
-      `a list of 1 to ${LOSS_ZERO_SEQUENCES.length} zero sequences`,
-      zeroSequences,
-    );
-  zeroSequences.forEach((z, i) => assertOneOf(`zeroSequences[${i}]`, z, LOSS_ZERO_SEQUENCES));
-  const angles = options.angles ?? evenAngles(points);
-  assertFiniteArray('angles', angles, 1, MAX_SWEEP_ANGLES);
-  angles.forEach((a, i) => assertNumberInRange(`angles[${i}]`, a, { min: -Math.PI, max: Math.PI }));
-  // 1.5× for the clamps with 'equal-switching': the largest carrier a sweep may run.
-  const periods =
-    (switchingFrequency / fundamentalFrequency) * (basis === 'equal-switching' ? 1.5 : 1);
-  if (periods > MAX_SWEEP_CARRIER_PERIODS) {
-    throw new ParameterRangeError(
-      'switchingFrequency/fundamentalFrequency',
-      `at most ${MAX_SWEEP_CARRIER_PERIODS}${basis === 'equal-switching' ? ' / 1.5' : ''} carrier periods per fundamental period`,
-      switchingFrequency / fundamentalFrequency,
-    );
-  }
+  const { point, fundamentalFrequency, zeroSequences, angles, basis } =
+    assertLossSweepOptions(options);
+  const { device, ma, switchingFrequency } = options;
 
   const series = zeroSequences.map((zeroSequence): LossSweepSeries => {
     const carrierFrequency =
@@ -194,12 +145,6 @@ export function lossesByPowerFactor(options: LossesByPowerFactorOptions): LossSw
     series,
     lowest,
   };
-}
-
-/** `points` angles evenly over [−π/2, π/2], ends included. */
-function evenAngles(points: number): number[] {
-  assertNumberInRange('points', points, { min: 2, max: MAX_SWEEP_ANGLES, integer: true });
-  return Array.from({ length: points }, (_, k) => -Math.PI / 2 + (Math.PI * k) / (points - 1));
 }
 
 /**
