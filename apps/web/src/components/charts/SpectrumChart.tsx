@@ -34,9 +34,12 @@ export interface SpectrumChartProps {
   fundamentalFrequency?: number | undefined;
 }
 
-/** Orders drawn: the fundamental and every harmonic (order 0, the mean, is left out). */
+/**
+ * Orders drawn: every component but order 0, the mean (the fundamental, the harmonics, and the
+ * fractional orders n/q of a spectrum over q periods, sub-harmonics below 1 included).
+ */
 export function drawnHarmonics(harmonics: readonly SpectrumBar[]): SpectrumBar[] {
-  return harmonics.filter((h) => h.order >= 1);
+  return harmonics.filter((h) => h.order > 0);
 }
 
 /** Keeps the tallest bars' labels that do not collide with one already placed (greedy, by amplitude). */

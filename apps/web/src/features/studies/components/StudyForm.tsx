@@ -12,6 +12,7 @@ import { rangeError, rangeText, type FieldUnit } from '../../../lib/fieldRange';
 import { fieldErrorOf } from '../../../lib/api';
 import { NumberField, SelectField, SliderField, TextField } from '../../../components/ui/Field';
 import type { Project } from '../../../lib/api';
+import { AsynchronousSpectraPanel } from './AsynchronousSpectraPanel';
 import { FilterSizing } from './FilterSizing';
 import type { PreviewFieldError } from '../model/designPreview';
 import { formatNumber } from '../../../lib/format';
@@ -29,6 +30,7 @@ import {
   ZERO_SEQUENCE_OPTIONS,
 } from '../../../lib/modulationOptions';
 import {
+  designOf,
   isCarrierMethod,
   isPatternMethod,
   type StoredPattern,
@@ -151,14 +153,28 @@ export function StudyForm({
     typedRatio === null ? undefined : rangeError('Frequency ratio mf', typedRatio, RATIO_BOUNDS);
   // The carrier's own message, in hertz with what was entered; a ratio typed in the mf box is
   // judged there instead (its message would otherwise quote a carrier the user never typed).
+  const carrierRangeMessage =
+    typedRatio !== null
+      ? undefined
+      : rangeError('Carrier frequency', draft.carrierFrequency, DESIGN_BOUNDS.carrierFrequency, {
+          unit: 'Hz',
+        });
+  // A carrier in range that is not a whole multiple: the report needs a whole mf, and the panel
+  // beside the field analyses the carrier as typed (a ratio p/q over q periods).
+  const asynchronous =
+    typedRatio === null &&
+    isCarrierMethod(method) &&
+    carrierRangeMessage === undefined &&
+    Number.isNaN(ratio) &&
+    fundamentalAllowed(draft.fundamentalFrequency);
+  const typedMultiple = draft.carrierFrequency / draft.fundamentalFrequency;
+  const nearestWhole = Math.min(MAX_DESIGN_FREQUENCY_RATIO, Math.max(1, Math.round(typedMultiple)));
   const carrierMessage =
     typedRatio !== null
       ? undefined
-      : (rangeError('Carrier frequency', draft.carrierFrequency, DESIGN_BOUNDS.carrierFrequency, {
-          unit: 'Hz',
-        }) ??
-        (Number.isNaN(ratio) && fundamentalAllowed(draft.fundamentalFrequency)
-          ? `Carrier frequency must be a whole multiple (1 to ${MAX_DESIGN_FREQUENCY_RATIO} times) of the fundamental, ${formatNumber(draft.fundamentalFrequency, 6)} Hz, so mf is a whole number (entered ${formatNumber(draft.carrierFrequency, 9)} Hz)`
+      : (carrierRangeMessage ??
+        (asynchronous
+          ? `Carrier frequency ${formatNumber(draft.carrierFrequency, 9)} Hz is ${formatNumber(typedMultiple, 6)} times the fundamental, ${formatNumber(draft.fundamentalFrequency, 6)} Hz: the design report takes a whole multiple (1 to ${MAX_DESIGN_FREQUENCY_RATIO} times), the nearest being mf = ${nearestWhole} (${formatNumber(nearestWhole * draft.fundamentalFrequency, 9)} Hz), so set that to save the study; the panel "Carrier as typed" analyses ${formatNumber(draft.carrierFrequency, 9)} Hz as it is`
           : carrierError));
   // Synchronous carrier PWM: a new fundamental keeps the frequency ratio, so the carrier follows.
   const setFundamental = (f: number) =>
@@ -381,6 +397,7 @@ export function StudyForm({
               error={carrierMessage}
               onChange={setCarrier}
             />
+            {asynchronous ? <AsynchronousSpectraPanel design={designOf(draft)} /> : null}
             {method !== 'space-vector' ? (
               <NumberField
                 label="Carrier phase"
