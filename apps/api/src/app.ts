@@ -7,6 +7,7 @@ import { createAuthorizer } from './auth/authorize.js';
 import { loadConfig, type ConfigOverrides } from './config.js';
 import { openDatabase } from './db/database.js';
 import { migrate } from './db/migrate.js';
+import { cacheRouteRegexps } from './http/cacheRouteRegexps.js';
 import { HttpError } from './http/errors.js';
 import { refuseMalformedPath } from './http/malformedPath.js';
 import { problemHandler } from './http/problemHandler.js';
@@ -108,6 +109,7 @@ export async function createApp(overrides: ConfigOverrides = {}): Promise<Pulsew
     swaggerUi.setup(document, { customSiteTitle: 'Pulsewright API' }),
   );
 
+  cacheRouteRegexps();
   app.use(
     OpenApiValidator.middleware({
       apiSpec: documentForValidator(document) as never,
