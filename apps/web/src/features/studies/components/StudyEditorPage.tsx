@@ -29,6 +29,8 @@ import {
 import { HarmonicLimitsPanel } from './HarmonicLimitsPanel';
 import { ReportCautions } from './ReportCautions';
 import { RevisionHistory } from './RevisionHistory';
+import { hasAsynchronousCarrier } from '../model/asynchronousCarrier';
+import { AsynchronousSpectraPanel } from './AsynchronousSpectraPanel';
 import { StudyCharts } from './StudyCharts';
 import { StudyForm } from './StudyForm';
 import { usePreview } from './usePreview';
@@ -258,6 +260,7 @@ function StudyEditor({ study }: { study: Study | undefined }) {
           ) : (
             <Loading label="Computing the live report…" />
           )}
+          {hasAsynchronousCarrier(draft) ? <AsynchronousSpectraPanel design={design} /> : null}
         </div>
       </div>
     </div>

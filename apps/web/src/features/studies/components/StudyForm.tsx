@@ -12,7 +12,6 @@ import { rangeError, rangeText, type FieldUnit } from '../../../lib/fieldRange';
 import { fieldErrorOf } from '../../../lib/api';
 import { NumberField, SelectField, SliderField, TextField } from '../../../components/ui/Field';
 import type { Project } from '../../../lib/api';
-import { AsynchronousSpectraPanel } from './AsynchronousSpectraPanel';
 import { FilterSizing } from './FilterSizing';
 import type { PreviewFieldError } from '../model/designPreview';
 import { formatNumber } from '../../../lib/format';
@@ -29,8 +28,8 @@ import {
   SPACE_VECTOR_SAMPLING_OPTIONS,
   ZERO_SEQUENCE_OPTIONS,
 } from '../../../lib/modulationOptions';
+import { hasAsynchronousCarrier } from '../model/asynchronousCarrier';
 import {
-  designOf,
   isCarrierMethod,
   isPatternMethod,
   type StoredPattern,
@@ -159,14 +158,9 @@ export function StudyForm({
       : rangeError('Carrier frequency', draft.carrierFrequency, DESIGN_BOUNDS.carrierFrequency, {
           unit: 'Hz',
         });
-  // A carrier in range that is not a whole multiple: the report needs a whole mf, and the panel
-  // beside the field analyses the carrier as typed (a ratio p/q over q periods).
-  const asynchronous =
-    typedRatio === null &&
-    isCarrierMethod(method) &&
-    carrierRangeMessage === undefined &&
-    Number.isNaN(ratio) &&
-    fundamentalAllowed(draft.fundamentalFrequency);
+  // A carrier in range that is not a whole multiple: the report needs a whole mf, and the page's
+  // "Carrier as typed" panel analyses the carrier as typed (a ratio p/q over q periods).
+  const asynchronous = typedRatio === null && hasAsynchronousCarrier(draft);
   const typedMultiple = draft.carrierFrequency / draft.fundamentalFrequency;
   const nearestWhole = Math.min(MAX_DESIGN_FREQUENCY_RATIO, Math.max(1, Math.round(typedMultiple)));
   const carrierMessage =
@@ -397,7 +391,6 @@ export function StudyForm({
               error={carrierMessage}
               onChange={setCarrier}
             />
-            {asynchronous ? <AsynchronousSpectraPanel design={designOf(draft)} /> : null}
             {method !== 'space-vector' ? (
               <NumberField
                 label="Carrier phase"

@@ -1,0 +1,24 @@
+import { DESIGN_BOUNDS, designFrequencyRatio } from '@pulsewright/modulation';
+import { rangeError } from '../../../lib/fieldRange';
+import { isCarrierMethod, type StudyDraft } from './studyDraft';
+
+/**
+ * Whether a draft's carrier, with both frequencies in range, is not a whole multiple (1 to the
+ * library's largest) of its fundamental: the design report refuses it (the library's
+ * designFrequencyRatio), while POST /designs/asynchronous-spectra analyses it as a ratio p/q.
+ */
+export function hasAsynchronousCarrier(
+  draft: Pick<StudyDraft, 'method' | 'carrierFrequency' | 'fundamentalFrequency'>,
+): boolean {
+  if (!isCarrierMethod(draft.method)) return false;
+  if (rangeError('', draft.carrierFrequency, DESIGN_BOUNDS.carrierFrequency) !== undefined)
+    return false;
+  if (rangeError('', draft.fundamentalFrequency, DESIGN_BOUNDS.fundamentalFrequency) !== undefined)
+    return false;
+  try {
+    designFrequencyRatio(draft);
+    return false;
+  } catch {
+    return true;
+  }
+}
