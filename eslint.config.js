@@ -116,19 +116,6 @@ export default tseslint.config(
     },
   },
   {
-    // Express types req.body as `any`; the OpenAPI validator has checked it against the document
-    // before a handler runs. Until each handler takes its body type from the generated `paths`
-    // (issue 14), the routes are exempt from the no-unsafe rules; services and the library are not.
-    files: ['apps/api/src/routes/**/*.ts'],
-    rules: {
-      '@typescript-eslint/no-unsafe-argument': 'off',
-      '@typescript-eslint/no-unsafe-assignment': 'off',
-      '@typescript-eslint/no-unsafe-call': 'off',
-      '@typescript-eslint/no-unsafe-member-access': 'off',
-      '@typescript-eslint/no-unsafe-return': 'off',
-    },
-  },
-  {
     files: ['apps/web/**/*.{ts,tsx}'],
     languageOptions: { globals: { ...globals.browser } },
     plugins: { 'react-hooks': reactHooks },

@@ -16,10 +16,10 @@ class AuthError extends Error {
   }
 }
 
-const principals = new WeakMap<Request, Principal>();
+const principals = new WeakMap<object, Principal>();
 
 /** The caller of an authorised request (set by {@link createAuthorizer}). */
-export function principalOf(req: Request): Principal {
+export function principalOf(req: object): Principal {
   const principal = principals.get(req);
   if (!principal) throw new AuthError(401, 'Sign in first: send Authorization: Bearer <token>.');
   return principal;

@@ -10,7 +10,11 @@ const DECIMAL_INTEGER = /^[0-9]{1,15}$/;
  * here: only plain decimal digits are accepted, anything else is a 400 naming the parameter,
  * never a silent default.
  */
-export function intQuery(req: Request, name: string, fallback: number): number {
+export function intQuery(
+  req: Pick<Request, 'originalUrl'>,
+  name: string,
+  fallback: number,
+): number {
   return optionalIntQuery(req, name, fallback) ?? fallback;
 }
 
@@ -20,7 +24,7 @@ export function intQuery(req: Request, name: string, fallback: number): number {
  * saying it `must be` `allowed`.
  */
 function queryNumber(
-  req: Request,
+  req: Pick<Request, 'originalUrl'>,
   name: string,
   accepts: (text: string) => boolean,
   allowed: string,
@@ -38,7 +42,11 @@ function queryNumber(
 }
 
 /** As {@link intQuery}, but undefined when the parameter is absent (`example` shows in the error). */
-export function optionalIntQuery(req: Request, name: string, example: number): number | undefined {
+export function optionalIntQuery(
+  req: Pick<Request, 'originalUrl'>,
+  name: string,
+  example: number,
+): number | undefined {
   return queryNumber(
     req,
     name,
@@ -54,7 +62,7 @@ const DECIMAL_NUMBER = /^(?:[0-9]{1,30}(?:\.[0-9]{0,30})?|\.[0-9]{1,30})(?:[eE][
  * {@link intQuery}, the text as sent is read (the validator coerces `0x10` to 16): decimal
  * notation with an optional exponent only, finite, else a 400 naming the parameter.
  */
-export function numberQuery(req: Request, name: string): number | undefined {
+export function numberQuery(req: Pick<Request, 'originalUrl'>, name: string): number | undefined {
   return queryNumber(
     req,
     name,

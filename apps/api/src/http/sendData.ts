@@ -6,7 +6,7 @@ import type { Request, Response } from 'express';
  * name the route's last path segment gives (`spectra.csv`, `waveforms.csv`, `spectrum.csv`).
  */
 export function sendData<T>(
-  req: Request,
+  req: Pick<Request, 'path'> & { query: { format?: unknown } },
   res: Response,
   result: T,
   toCsv: (result: T) => string,

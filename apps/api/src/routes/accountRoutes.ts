@@ -1,4 +1,5 @@
 import { Router, type Request } from 'express';
+import type { ApiRequest } from '../http/apiRequest.js';
 import type { AppConfig } from '../config.js';
 import { intQuery } from '../http/query.js';
 import { principalOf } from '../auth/authorize.js';
@@ -107,23 +108,37 @@ export function accountRoutes(
     res.json({ status: 'ok', version: options.version, database: dialectOf(options.databaseUrl) });
   });
 
-  router.post('/api/v1/auth/login', signInPerAddress, signInPerAccount, async (req, res) => {
-    res.json(await auth.login(req.body.email, req.body.password));
-  });
-  router.post('/api/v1/auth/logout', async (req, res) => {
+  router.post(
+    '/api/v1/auth/login',
+    signInPerAddress,
+    signInPerAccount,
+    async (req: ApiRequest<'login'>, res) => {
+      res.json(await auth.login(req.body.email, req.body.password));
+    },
+  );
+  router.post('/api/v1/auth/logout', async (req: ApiRequest<'logout'>, res) => {
     await auth.logout(principalOf(req));
     res.status(204).end();
   });
-  router.post('/api/v1/auth/password-reset', resetPerAddress, resetPerAccount, async (req, res) => {
-    await team.requestPasswordReset(req.body.email);
-    res.status(202).json({ status: 'accepted' });
-  });
-  router.post('/api/v1/auth/password-reset/confirm', resetConfirmPerAddress, async (req, res) => {
-    await team.confirmPasswordReset(req.body.token, req.body.password);
-    res.status(204).end();
-  });
+  router.post(
+    '/api/v1/auth/password-reset',
+    resetPerAddress,
+    resetPerAccount,
+    async (req: ApiRequest<'requestPasswordReset'>, res) => {
+      await team.requestPasswordReset(req.body.email);
+      res.status(202).json({ status: 'accepted' });
+    },
+  );
+  router.post(
+    '/api/v1/auth/password-reset/confirm',
+    resetConfirmPerAddress,
+    async (req: ApiRequest<'confirmPasswordReset'>, res) => {
+      await team.confirmPasswordReset(req.body.token, req.body.password);
+      res.status(204).end();
+    },
+  );
 
-  router.get('/api/v1/me', (req, res) => {
+  router.get('/api/v1/me', (req: ApiRequest<'getMe'>, res) => {
     const p = principalOf(req);
     res.json({
       user: p.user,
@@ -133,43 +148,47 @@ export function accountRoutes(
     });
   });
 
-  router.get('/api/v1/api-keys', async (req, res) => {
+  router.get('/api/v1/api-keys', async (req: ApiRequest<'listApiKeys'>, res) => {
     res.json(await apiKeys.list(principalOf(req)));
   });
-  router.post('/api/v1/api-keys', keyLimiter, async (req, res) => {
+  router.post('/api/v1/api-keys', keyLimiter, async (req: ApiRequest<'createApiKey'>, res) => {
     res.status(201).json(await apiKeys.create(principalOf(req), req.body));
   });
-  router.delete('/api/v1/api-keys/:id', async (req, res) => {
+  router.delete('/api/v1/api-keys/:id', async (req: ApiRequest<'revokeApiKey'>, res) => {
     await apiKeys.revoke(principalOf(req), req.params.id);
     res.status(204).end();
   });
 
-  router.get('/api/v1/members', async (req, res) => {
+  router.get('/api/v1/members', async (req: ApiRequest<'listMembers'>, res) => {
     res.json(await team.listMembers(principalOf(req).teamId));
   });
-  router.patch('/api/v1/members/:id', async (req, res) => {
+  router.patch('/api/v1/members/:id', async (req: ApiRequest<'updateMember'>, res) => {
     res.json(await team.changeRole(principalOf(req), req.params.id, req.body.role));
   });
-  router.delete('/api/v1/members/:id', async (req, res) => {
+  router.delete('/api/v1/members/:id', async (req: ApiRequest<'removeMember'>, res) => {
     await team.removeMember(principalOf(req), req.params.id);
     res.status(204).end();
   });
 
-  router.get('/api/v1/invitations', async (req, res) => {
+  router.get('/api/v1/invitations', async (req: ApiRequest<'listInvitations'>, res) => {
     res.json(await team.listInvitations(principalOf(req).teamId));
   });
-  router.post('/api/v1/invitations', async (req, res) => {
+  router.post('/api/v1/invitations', async (req: ApiRequest<'createInvitation'>, res) => {
     res.status(201).json(await team.invite(principalOf(req), req.body.email, req.body.role));
   });
-  router.post('/api/v1/invitations/accept', acceptPerAddress, async (req, res) => {
-    res.json(await team.accept(req.body.token, req.body.name, req.body.password));
-  });
-  router.delete('/api/v1/invitations/:id', async (req, res) => {
+  router.post(
+    '/api/v1/invitations/accept',
+    acceptPerAddress,
+    async (req: ApiRequest<'acceptInvitation'>, res) => {
+      res.json(await team.accept(req.body.token, req.body.name, req.body.password));
+    },
+  );
+  router.delete('/api/v1/invitations/:id', async (req: ApiRequest<'revokeInvitation'>, res) => {
     await team.withdraw(principalOf(req), req.params.id);
     res.status(204).end();
   });
 
-  router.get('/api/v1/audit-events', async (req, res) => {
+  router.get('/api/v1/audit-events', async (req: ApiRequest<'listAuditEvents'>, res) => {
     res.json(
       await audit.list(
         principalOf(req).teamId,
@@ -178,7 +197,7 @@ export function accountRoutes(
       ),
     );
   });
-  router.get('/api/v1/outbox', async (req, res) => {
+  router.get('/api/v1/outbox', async (req: ApiRequest<'listOutbox'>, res) => {
     res.json(
       await mailer.list(
         principalOf(req).teamId,

@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import type { ApiRequest } from '../http/apiRequest.js';
 import { principalOf } from '../auth/authorize.js';
 import { badRequest } from '../http/errors.js';
 import { escapeFormulaCells } from '../services/captureCsv.js';
@@ -16,7 +17,7 @@ export function captureRoutes(services: Services): Router {
   const router = Router();
   const { captures } = services;
 
-  router.post('/api/v1/captures', async (req, res) => {
+  router.post('/api/v1/captures', async (req: ApiRequest<'uploadCapture'>, res) => {
     const files = ((req as unknown as { files?: UploadedFile[] }).files ?? []).filter(
       (f) => f.fieldname === 'file',
     );
@@ -26,13 +27,10 @@ export function captureRoutes(services: Services): Router {
         { path: 'file', message: 'file is required (one CSV file)' },
       ]);
     }
-    const fields = {
-      name: req.body?.name as string | undefined,
-      projectId: req.body?.projectId as string | undefined,
-    };
+    const fields = { name: req.body.name, projectId: req.body.projectId };
     res.status(201).json(await captures.upload(principalOf(req), file, fields));
   });
-  router.get('/api/v1/captures', async (req, res) => {
+  router.get('/api/v1/captures', async (req: ApiRequest<'listCaptures'>, res) => {
     res.json(
       await captures.list(
         principalOf(req).teamId,
@@ -40,10 +38,10 @@ export function captureRoutes(services: Services): Router {
       ),
     );
   });
-  router.get('/api/v1/captures/:id', async (req, res) => {
+  router.get('/api/v1/captures/:id', async (req: ApiRequest<'getCapture'>, res) => {
     res.json(await captures.get(principalOf(req).teamId, req.params.id));
   });
-  router.get('/api/v1/captures/:id/file', async (req, res) => {
+  router.get('/api/v1/captures/:id/file', async (req: ApiRequest<'downloadCaptureFile'>, res) => {
     const row = await captures.find(principalOf(req).teamId, req.params.id);
     // Uploads with formula cells are refused, but a file stored before that check is escaped
     // (cells beginning with = + - @ get a leading ') rather than sent as it was.
@@ -58,7 +56,7 @@ export function captureRoutes(services: Services): Router {
       .setHeader('X-Content-Type-Options', 'nosniff')
       .send(safe === text ? original : Buffer.from(safe, 'utf8'));
   });
-  router.post('/api/v1/captures/:id/spectrum', async (req, res) => {
+  router.post('/api/v1/captures/:id/spectrum', async (req: ApiRequest<'analyseCapture'>, res) => {
     const {
       window = 'hann',
       fundamentalFrequency,
@@ -74,7 +72,7 @@ export function captureRoutes(services: Services): Router {
       }),
     );
   });
-  router.post('/api/v1/captures/:id/comparison', async (req, res) => {
+  router.post('/api/v1/captures/:id/comparison', async (req: ApiRequest<'compareCapture'>, res) => {
     const { studyId, window = 'hann', fundamentalFrequency, maxOrder } = req.body;
     res.json(
       await captures.compare(principalOf(req).teamId, req.params.id, studyId, {

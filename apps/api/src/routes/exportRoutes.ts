@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import type { ApiRequest } from '../http/apiRequest.js';
 import { principalOf } from '../auth/authorize.js';
 import type { Services } from '../services/index.js';
 import {
@@ -21,7 +22,7 @@ export function exportRoutes(services: Services, options: { version: string }): 
   const router = Router();
   const { compute, studies } = services;
 
-  router.post('/api/v1/netlists', async (req, res) => {
+  router.post('/api/v1/netlists', async (req: ApiRequest<'computeNetlist'>, res) => {
     const file = await compute.netlist(req.body);
     res
       .status(200)
@@ -29,7 +30,7 @@ export function exportRoutes(services: Services, options: { version: string }): 
       .setHeader('Content-Disposition', `attachment; filename="${file.fileName}"`)
       .send(file.body);
   });
-  router.get('/api/v1/studies/:id/record', async (req, res) => {
+  router.get('/api/v1/studies/:id/record', async (req: ApiRequest<'getStudyRecord'>, res) => {
     const study = await studies.get(principalOf(req).teamId, req.params.id);
     res
       .setHeader(
@@ -38,11 +39,14 @@ export function exportRoutes(services: Services, options: { version: string }): 
       )
       .json(studyRecordOf(study, options.version));
   });
-  router.post('/api/v1/projects/:id/study-records', async (req, res) => {
-    const record = req.body as StudyRecord;
-    assertRecordVersion(record);
-    await compute.assertDesign(record.design);
-    res.status(201).json(await importRecord(studies, principalOf(req), req.params.id, record));
-  });
+  router.post(
+    '/api/v1/projects/:id/study-records',
+    async (req: ApiRequest<'importStudyRecord'>, res) => {
+      const record = req.body as StudyRecord;
+      assertRecordVersion(record);
+      await compute.assertDesign(record.design);
+      res.status(201).json(await importRecord(studies, principalOf(req), req.params.id, record));
+    },
+  );
   return router;
 }

@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import type { ApiRequest } from '../http/apiRequest.js';
 import { principalOf } from '../auth/authorize.js';
 import type { Services } from '../services/index.js';
 import { optimalSweepPlan } from '../services/optimalSweepJobs.js';
@@ -13,12 +14,11 @@ import { patternEventsRequest } from '../services/studyPatternEvents.js';
 export function patternRoutes(services: Services): Router {
   const router = Router();
   const { compute, jobs, studies } = services;
-  router.post('/api/v1/jobs/optimal-sweeps', async (req, res) => {
+  router.post('/api/v1/jobs/optimal-sweeps', async (req: ApiRequest<'createOptimalSweep'>, res) => {
     res.status(202).json(await jobs.start(principalOf(req), req.body, optimalSweepPlan(req.body)));
   });
-  router.post('/api/v1/angle-tables', async (req, res) => {
-    const format = (typeof req.query.format === 'string' ? req.query.format : 'json') as
-      'json' | 'csv' | 'c-header';
+  router.post('/api/v1/angle-tables', async (req: ApiRequest<'computeAngleTable'>, res) => {
+    const format = req.query.format ?? 'json';
     const file = await compute.angleTable(req.body, format);
     res
       .status(200)
@@ -26,10 +26,13 @@ export function patternRoutes(services: Services): Router {
       .setHeader('Content-Disposition', `attachment; filename="${file.fileName}"`)
       .send(file.body);
   });
-  router.post('/api/v1/pattern-compare-events', async (req, res) => {
-    const { teamId } = principalOf(req);
-    const request = await patternEventsRequest(req.body, (id) => studies.get(teamId, id));
-    res.json(await compute.patternEvents(request));
-  });
+  router.post(
+    '/api/v1/pattern-compare-events',
+    async (req: ApiRequest<'computePatternCompareEvents'>, res) => {
+      const { teamId } = principalOf(req);
+      const request = await patternEventsRequest(req.body, (id) => studies.get(teamId, id));
+      res.json(await compute.patternEvents(request));
+    },
+  );
   return router;
 }

@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import type { ApiRequest } from '../http/apiRequest.js';
 import { principalOf } from '../auth/authorize.js';
 import { rateLimiter } from '../http/rateLimiter.js';
 import type { Services } from '../services/index.js';
@@ -17,10 +18,14 @@ export function shareRoutes(
     wait: 'a while',
     keyGenerator: (req) => principalOf(req).user.id,
   });
-  router.post('/api/v1/studies/:id/share', limiter, async (req, res) => {
-    res
-      .status(202)
-      .json(await services.shares.share(principalOf(req), String(req.params.id), req.body));
-  });
+  router.post(
+    '/api/v1/studies/:id/share',
+    limiter,
+    async (req: ApiRequest<'shareStudyReport'>, res) => {
+      res
+        .status(202)
+        .json(await services.shares.share(principalOf(req), String(req.params.id), req.body));
+    },
+  );
   return router;
 }

@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import type { ApiRequest } from '../http/apiRequest.js';
 import { intQuery, numberQuery, optionalIntQuery } from '../http/query.js';
 import { principalOf } from '../auth/authorize.js';
 import { sendData } from '../http/sendData.js';
@@ -12,20 +13,20 @@ export function studyRoutes(services: Services): Router {
   const text = (value: unknown): string | undefined =>
     typeof value === 'string' ? value : undefined;
 
-  router.get('/api/v1/projects', async (req, res) => {
+  router.get('/api/v1/projects', async (req: ApiRequest<'listProjects'>, res) => {
     res.json(await projects.list(principalOf(req).teamId, text(req.query.q)));
   });
-  router.post('/api/v1/projects', async (req, res) => {
+  router.post('/api/v1/projects', async (req: ApiRequest<'createProject'>, res) => {
     res.status(201).json(await projects.create(principalOf(req), req.body));
   });
   router.get('/api/v1/projects/:id', async (req, res) => {
     res.json(await projects.get(principalOf(req).teamId, req.params.id));
   });
-  router.patch('/api/v1/projects/:id', async (req, res) => {
+  router.patch('/api/v1/projects/:id', async (req: ApiRequest<'updateProject'>, res) => {
     res.json(await projects.update(principalOf(req), req.params.id, req.body));
   });
 
-  router.get('/api/v1/studies', async (req, res) => {
+  router.get('/api/v1/studies', async (req: ApiRequest<'listStudies'>, res) => {
     res.json(
       await studies.list(principalOf(req).teamId, {
         projectId: text(req.query.projectId),
@@ -35,7 +36,7 @@ export function studyRoutes(services: Services): Router {
       }),
     );
   });
-  router.post('/api/v1/studies', async (req, res) => {
+  router.post('/api/v1/studies', async (req: ApiRequest<'createStudy'>, res) => {
     const { projectId, ...content } = req.body;
     await compute.assertDesign(content.design);
     res.status(201).json(await studies.create(principalOf(req), projectId, content));
@@ -43,12 +44,12 @@ export function studyRoutes(services: Services): Router {
   router.get('/api/v1/studies/:id', async (req, res) => {
     res.json(await studies.get(principalOf(req).teamId, req.params.id));
   });
-  router.put('/api/v1/studies/:id', async (req, res) => {
+  router.put('/api/v1/studies/:id', async (req: ApiRequest<'updateStudy'>, res) => {
     const { baseRevision, ...content } = req.body;
     await compute.assertDesign(content.design);
     res.json(await studies.update(principalOf(req), req.params.id, baseRevision, content));
   });
-  router.post('/api/v1/studies/:id/duplicate', async (req, res) => {
+  router.post('/api/v1/studies/:id/duplicate', async (req: ApiRequest<'duplicateStudy'>, res) => {
     res
       .status(201)
       .json(await studies.duplicate(principalOf(req), req.params.id, text(req.body?.name)));
@@ -56,16 +57,19 @@ export function studyRoutes(services: Services): Router {
   router.get('/api/v1/studies/:id/revisions', async (req, res) => {
     res.json(await studies.revisions(principalOf(req).teamId, req.params.id));
   });
-  router.post('/api/v1/studies/:id/revisions/:revision/restore', async (req, res) => {
-    res.json(
-      await studies.restore(
-        principalOf(req),
-        req.params.id,
-        Number(req.params.revision),
-        req.body.baseRevision,
-      ),
-    );
-  });
+  router.post(
+    '/api/v1/studies/:id/revisions/:revision/restore',
+    async (req: ApiRequest<'restoreStudyRevision'>, res) => {
+      res.json(
+        await studies.restore(
+          principalOf(req),
+          req.params.id,
+          Number(req.params.revision),
+          req.body.baseRevision,
+        ),
+      );
+    },
+  );
   router.get('/api/v1/studies/:id/spectrum', async (req, res) => {
     const study = await studies.get(principalOf(req).teamId, req.params.id);
     const result = await compute.designSpectrum(study.design, intQuery(req, 'maxOrder', 100));
