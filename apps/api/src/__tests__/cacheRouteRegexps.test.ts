@@ -32,6 +32,11 @@ describe('cacheRouteRegexps: the validator’s route expressions made once', () 
     expect(first.regexp.exec('/api/v1/studies/abc')?.[1]).toBe('abc');
     expect(first.regexp.exec('/api/v1/studies/def')?.[1]).toBe('def');
     expect(first.keys.map((k) => k.name)).toEqual(['id']);
+    // An option the validator does not pass is not cached (its expression differs).
+    const open = module.pathToRegexp('/api/v1/studies/:id', { ...options, end: false });
+    expect(open).not.toBe(module.pathToRegexp('/api/v1/studies/:id', { ...options, end: false }));
+    expect(open.regexp.test('/api/v1/studies/x/revisions')).toBe(true);
+    expect(first.regexp.test('/api/v1/studies/x/revisions')).toBe(false);
   });
 
   it('installs once however often the app is built', () => {

@@ -13,10 +13,11 @@ const CACHED = Symbol.for('pulsewright.cachedRouteRegexps');
  * (`middlewares/openapi.metadata.js`, `lookupRoute`) turns the document's paths into regular
  * expressions with path-to-regexp on every request, one after another until one matches: about
  * 6 % of the service's CPU under a load of `POST /api/v1/spectra` (a `node --cpu-prof` profile,
- * docs/robustness.md). An expression depends only on the path and the options (case
- * sensitivity, strict routing), which are fixed, so this wraps the `pathToRegexp` of the copy of
- * path-to-regexp the validator loads with one that remembers its answers, keyed by both. Its
- * expressions carry no `g` or `y` flag, so sharing one keeps `exec` free of state. The paths come
+ * docs/robustness.md). An expression depends only on the path and the two options the validator
+ * passes (case sensitivity, strict routing), which are fixed, so this wraps the `pathToRegexp`
+ * of the copy of path-to-regexp the validator loads with one that remembers its answers, keyed
+ * by both; a call with any other option is passed through uncached. Its expressions carry no `g`
+ * or `y` flag, so sharing one keeps `exec` free of state. The paths come
  * from the document (a fixed set), so the cache cannot grow with requests. Express's own router
  * calls path-to-regexp's `match`, which does not go through this export. Installing twice does
  * nothing more.
@@ -30,13 +31,18 @@ export function cacheRouteRegexps(): void {
   };
   const original = module.pathToRegexp;
   if (original[CACHED]) return;
-  const made = new Map<string, ReturnType<PathToRegexp>>();
-  const cached: PathToRegexp & { [CACHED]?: true } = (path, options) => {
-    const key = `${path}\u0000${JSON.stringify(options ?? {})}`;
-    let found = made.get(key);
+  // One map per combination of the two options the validator passes; any other options go
+  // straight to path-to-regexp, uncached. No key string is built per call.
+  const made = [0, 1, 2, 3].map(() => new Map<string, ReturnType<PathToRegexp>>());
+  const cached: PathToRegexp & { [CACHED]?: true } = (path, options = {}) => {
+    for (const name in options) {
+      if (name !== 'sensitive' && name !== 'strict') return original(path, options);
+    }
+    const byPath = made[(options.sensitive ? 1 : 0) + (options.strict ? 2 : 0)]!;
+    let found = byPath.get(path);
     if (found === undefined) {
       found = original(path, options);
-      made.set(key, found);
+      byPath.set(path, found);
     }
     return found;
   };
