@@ -276,6 +276,9 @@ export interface Site {
   schema: Schema;
   value: unknown;
   present: boolean;
+  /** The JSON types the declared schema admits when `schema` is the one branch of a union the
+   * value is meant for (a nullable object's null is not a wrong type). */
+  unionTypes?: Set<string>;
 }
 
 /** Every place inside `value` (and every absent optional property), walked beside its schema. */
@@ -287,12 +290,13 @@ export function sitesOf(
 ): Site[] {
   let schema = tools.resolve(input);
   const branch = tools.branchFor(schema, value);
+  const unionTypes = branch ? tools.types(schema) : undefined;
   if (branch)
     schema = {
       ...branch,
       ...(schema.discriminator ? { discriminator: schema.discriminator } : {}),
     };
-  const sites: Site[] = [{ path, schema, value, present: true }];
+  const sites: Site[] = [{ path, schema, value, present: true, unionTypes }];
   if (value && typeof value === 'object' && !Array.isArray(value)) {
     const properties = (schema.properties ?? {}) as Record<string, Schema>;
     for (const [key, sub] of Object.entries(properties)) {
@@ -357,7 +361,7 @@ export function mutationsFor(
   }
   if (typeof last === 'string' && parentRequired.includes(last))
     out.push({ kind: 'missing-required', path, replacement: DELETE });
-  const types = tools.types(schema);
+  const types = site.unionTypes ?? tools.types(schema);
   if (!types.has('any')) {
     const candidates: [string, unknown][] = [
       ['string', 'not a number ünïcødé'],
