@@ -2,7 +2,7 @@ import { designFrequencyRatio, labelHarmonics, type InverterDesign } from '@puls
 import { useRef, useState, type FormEvent } from 'react';
 import { SpectrumChart, type SpectrumSeries } from '../../../components/charts/SpectrumChart';
 import { Button } from '../../../components/ui/Button';
-import { SelectField, TextField } from '../../../components/ui/Field';
+import { SelectField, TextField, type FieldOption } from '../../../components/ui/Field';
 import { PageHeader, Panel } from '../../../components/ui/Panel';
 import { ErrorState, Loading, QueryView } from '../../../components/ui/QueryState';
 import { formatDate, formatNumber, formatPercent } from '../../../lib/format';
@@ -22,6 +22,12 @@ import {
   type CaptureWithSeries,
   type FftWindow,
 } from '../../../lib/api';
+
+const WINDOW_OPTIONS: readonly FieldOption<FftWindow>[] = [
+  { value: 'hann', label: 'Hann' },
+  { value: 'flat-top', label: 'Flat-top' },
+  { value: 'rectangular', label: 'Rectangular' },
+];
 
 function UploadForm({ onUploaded }: { onUploaded: (id: string) => void }) {
   const [file, setFile] = useState<File | null>(null);
@@ -231,12 +237,8 @@ function CaptureAnalysis({ capture }: { capture: CaptureWithSeries }) {
                 : 'applied to a capture that is not exactly periodic'
             }
             value={windowName}
-            onChange={(e) => setWindowName(e.target.value as FftWindow)}
-            options={[
-              { value: 'hann', label: 'Hann' },
-              { value: 'flat-top', label: 'Flat-top' },
-              { value: 'rectangular', label: 'Rectangular' },
-            ]}
+            onValueChange={setWindowName}
+            options={WINDOW_OPTIONS}
           />
           <SelectField
             label="Compare with study"
