@@ -1,0 +1,106 @@
+import { NumberField, SelectField } from '../../../components/ui/Field';
+import { formatNumber } from '../../../lib/format';
+import { DAMPING_OPTIONS } from '../../../lib/modulationOptions';
+import { isCarrierMethod, type StudyDraft } from '../model/studyDraft';
+import { draftSetter } from './draftSetter';
+import { FilterSizing } from './FilterSizing';
+import type { StudyFieldErrors } from './studyFieldErrors';
+
+/**
+ * The study form's LC output filter fieldset: filter L (H, shown in mH), C (F, shown in µF), damping R (Ω) and C, the damping placement, the sizing helper and the loaded resonance (Hz) from the live report. A render function, not a component: the form calls it
+ * while rendering so the messages it asks for are claimed before the form lists the unclaimed ones.
+ */
+export function filterFields({
+  draft,
+  onChange,
+  readOnly,
+  fields: { error, limits },
+  ratio,
+  filterResonance,
+}: {
+  draft: StudyDraft;
+  onChange: (patch: Partial<StudyDraft>) => void;
+  readOnly: boolean;
+  fields: StudyFieldErrors;
+  ratio: number;
+  filterResonance?: number | undefined;
+}) {
+  const set = draftSetter(onChange);
+  const threePhase = draft.method === 'three-phase' || draft.method === 'space-vector';
+  return (
+    <fieldset disabled={readOnly} className="flex flex-col gap-3">
+      <legend className="mb-1 text-sm font-semibold tracking-wide uppercase">
+        {threePhase ? 'Output filter per phase (LC, star)' : 'Output filter (LC)'}
+      </legend>
+      <label className="flex items-center gap-2 text-sm">
+        <input
+          type="checkbox"
+          checked={draft.filterOn}
+          onChange={(e) => set('filterOn')(e.target.checked)}
+          className="accent-signal"
+        />
+        Include an LC output filter
+      </label>
+      {draft.filterOn ? (
+        <>
+          <div className="grid grid-cols-2 gap-3">
+            <NumberField
+              label="Filter L"
+              unit="mH"
+              value={draft.filterL}
+              scale={1e3}
+              {...limits('filter.l', 'Filter L', draft.filterL, { scale: 1e3, unit: 'mH' })}
+              onChange={set('filterL')}
+            />
+            <NumberField
+              label="Filter C"
+              unit="µF"
+              value={draft.filterC}
+              scale={1e6}
+              {...limits('filter.c', 'Filter C', draft.filterC, { scale: 1e6, unit: 'µF' })}
+              onChange={set('filterC')}
+            />
+            <NumberField
+              label="Damping R"
+              unit="Ω"
+              value={draft.filterR}
+              {...limits('filter.rDamping', 'Damping R', draft.filterR, { unit: 'Ω' })}
+              onChange={set('filterR')}
+            />
+            {draft.dampingPlacement === 'parallel-rc' ? (
+              <NumberField
+                label="Damping C"
+                unit="µF"
+                value={draft.cDamping}
+                scale={1e6}
+                {...limits('filter.cDamping', 'Damping C', draft.cDamping, {
+                  scale: 1e6,
+                  unit: 'µF',
+                })}
+                onChange={set('cDamping')}
+              />
+            ) : null}
+          </div>
+          <FilterSizing draft={draft} onChange={onChange} carrier={isCarrierMethod(draft.method)} />
+          <SelectField
+            label="Damping"
+            value={draft.dampingPlacement}
+            onChange={(e) =>
+              set('dampingPlacement')(e.target.value as StudyDraft['dampingPlacement'])
+            }
+            error={error('filter.dampingPlacement')}
+            options={DAMPING_OPTIONS}
+          />
+          {filterResonance !== undefined ? (
+            <p className="text-xs text-ink-soft" data-testid="filter-resonance">
+              Resonance {formatNumber(filterResonance)} Hz
+              {Number.isFinite(ratio)
+                ? ` (carrier ${formatNumber(draft.carrierFrequency)} Hz)`
+                : ''}
+            </p>
+          ) : null}
+        </>
+      ) : null}
+    </fieldset>
+  );
+}
