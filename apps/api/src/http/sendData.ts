@@ -1,4 +1,5 @@
 import type { Request, Response } from 'express';
+import { sendFile } from './sendFile.js';
 
 /**
  * Answers a compute result as JSON, or, with `?format=csv` (the `DataFormat` parameter of the
@@ -16,9 +17,9 @@ export function sendData<T>(
     return;
   }
   const name = req.path.split('/').filter(Boolean).at(-1) ?? 'data';
-  res
-    .status(200)
-    .type('text/csv; charset=utf-8')
-    .setHeader('Content-Disposition', `attachment; filename="${name}.csv"`)
-    .send(toCsv(result));
+  sendFile(res, {
+    contentType: 'text/csv; charset=utf-8',
+    fileName: `${name}.csv`,
+    body: toCsv(result),
+  });
 }

@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import type { ApiRequest } from '../http/apiRequest.js';
+import { sendFile } from '../http/sendFile.js';
 import { principalOf } from '../auth/authorize.js';
 import { intQuery } from '../http/query.js';
 import { sendData } from '../http/sendData.js';
@@ -53,11 +54,7 @@ export function computeRoutes(services: Services): Router {
     const { prefix, ...options } = req.body;
     const format: TimerFormat = req.query.format ?? 'json';
     const file = await compute.timerTable(options, format, prefix);
-    res
-      .status(200)
-      .type(file.contentType)
-      .setHeader('Content-Disposition', `attachment; filename="${file.fileName}"`)
-      .send(file.body);
+    sendFile(res, file);
   });
   router.post(
     '/api/v1/losses/power-factor-sweeps',

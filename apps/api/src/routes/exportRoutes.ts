@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import type { ApiRequest } from '../http/apiRequest.js';
+import { sendFile } from '../http/sendFile.js';
 import { principalOf } from '../auth/authorize.js';
 import type { Services } from '../services/index.js';
 import {
@@ -24,11 +25,7 @@ export function exportRoutes(services: Services, options: { version: string }): 
 
   router.post('/api/v1/netlists', async (req: ApiRequest<'computeNetlist'>, res) => {
     const file = await compute.netlist(req.body);
-    res
-      .status(200)
-      .type(file.contentType)
-      .setHeader('Content-Disposition', `attachment; filename="${file.fileName}"`)
-      .send(file.body);
+    sendFile(res, file);
   });
   router.get('/api/v1/studies/:id/record', async (req: ApiRequest<'getStudyRecord'>, res) => {
     const study = await studies.get(principalOf(req).teamId, req.params.id);

@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import type { ApiRequest } from '../http/apiRequest.js';
+import { sendFile } from '../http/sendFile.js';
 import { principalOf } from '../auth/authorize.js';
 import type { Services } from '../services/index.js';
 import { optimalSweepPlan } from '../services/optimalSweepJobs.js';
@@ -20,11 +21,7 @@ export function patternRoutes(services: Services): Router {
   router.post('/api/v1/angle-tables', async (req: ApiRequest<'computeAngleTable'>, res) => {
     const format = req.query.format ?? 'json';
     const file = await compute.angleTable(req.body, format);
-    res
-      .status(200)
-      .type(file.contentType)
-      .setHeader('Content-Disposition', `attachment; filename="${file.fileName}"`)
-      .send(file.body);
+    sendFile(res, file);
   });
   router.post(
     '/api/v1/pattern-compare-events',
