@@ -1,0 +1,102 @@
+import { formatGain, formatNumber, formatPercent } from '../../../lib/format';
+import type { StudyReport } from '../../../lib/api';
+import { limitPointName } from '../model/reportFigures';
+
+/** A column of the figures table: its heading and the cell of one report. */
+export interface Column {
+  heading: string;
+  cell: (report: StudyReport) => string;
+  title?: (report: StudyReport) => string;
+  /** The figure in the report's units, for sorting and the CSV; null where the study has none. */
+  value?: (report: StudyReport) => number | null;
+}
+
+const phaseA = (report: StudyReport) => report.currents[0];
+
+/** Every column comes from the same design report of each study. */
+export const COLUMNS: Column[] = [
+  { heading: 'Method', cell: (r) => r.methodLabel },
+  {
+    heading: 'Fundamental (V peak)',
+    cell: (r) => formatNumber(r.bridge.fundamental),
+    value: (r) => r.bridge.fundamental,
+    title: (r) => r.bridge.name,
+  },
+  {
+    heading: 'THD, exact',
+    cell: (r) => formatPercent(r.bridge.thd),
+    value: (r) => r.bridge.thd,
+    title: (r) => `whole waveform, ${r.bridge.name}`,
+  },
+  {
+    heading: 'WTHD, exact',
+    cell: (r) => formatPercent(r.bridge.wthd, 3),
+    value: (r) => r.bridge.wthd,
+    title: (r) => `whole waveform, ${r.bridge.name}`,
+  },
+  {
+    heading: 'Output THD',
+    cell: (r) => (r.output ? formatPercent(r.output.thd) : '—'),
+    value: (r) => r.output?.thd ?? null,
+    title: (r) => (r.output ? `${r.output.name}, to order ${r.analysisOrder}` : 'no filter'),
+  },
+  {
+    heading: 'Current ripple (A rms)',
+    cell: (r) => (phaseA(r) ? formatNumber(phaseA(r)?.inverter.rippleRms ?? Number.NaN) : '—'),
+    value: (r) => phaseA(r)?.inverter.rippleRms ?? null,
+    title: (r) => phaseA(r)?.inverter.name ?? 'no load or filter',
+  },
+  {
+    heading: 'Switch current (A rms)',
+    cell: (r) => (phaseA(r) ? formatNumber(phaseA(r)?.inverter.rms ?? Number.NaN) : '—'),
+    value: (r) => phaseA(r)?.inverter.rms ?? null,
+    title: (r) => phaseA(r)?.inverter.name ?? 'no load or filter',
+  },
+  {
+    heading: 'Load power (W)',
+    cell: (r) => (r.loadPower === null ? '—' : formatNumber(r.loadPower)),
+    value: (r) => r.loadPower,
+    title: (r) => (r.phaseCount === 3 ? 'into R, all three phases' : 'into R'),
+  },
+  {
+    heading: 'Filter resonance (Hz)',
+    cell: (r) => (r.filter ? formatNumber(r.filter.characteristics.resonanceFrequency) : '—'),
+    value: (r) => r.filter?.characteristics.resonanceFrequency ?? null,
+    title: (r) =>
+      r.filter?.gainAtCarrier != null
+        ? `gain at the carrier ${formatGain(r.filter.gainAtCarrier)}`
+        : 'no filter',
+  },
+  {
+    heading: 'Grid current THD',
+    cell: (r) => (r.grid ? formatPercent(r.grid.gridCurrentThd) : '—'),
+    value: (r) => r.grid?.gridCurrentThd ?? null,
+    title: (r) =>
+      r.grid
+        ? `phase a; IEEE 519 ${r.grid.limits.ieee519.pass ? 'within' : 'over'}, IEEE 1547 ${r.grid.limits.ieee1547.pass ? 'within' : 'over'} (limits recalled from memory)`
+        : 'no grid',
+  },
+  {
+    heading: 'Common mode (V rms)',
+    cell: (r) => (r.commonMode ? formatNumber(r.commonMode.rms) : '—'),
+    value: (r) => r.commonMode?.rms ?? null,
+    title: (r) =>
+      r.commonMode
+        ? `levels ${r.commonMode.levels.map((l) => formatNumber(l)).join(', ')} V; ${r.commonMode.stepsPerPeriod} steps a period`
+        : 'single-phase bridge',
+  },
+  {
+    heading: 'Device switching (Hz)',
+    cell: (r) => (r.switching ? formatNumber(r.switching.averageDeviceFrequency) : '—'),
+    value: (r) => r.switching?.averageDeviceFrequency ?? null,
+    title: (r) =>
+      r.switching
+        ? `turn-ons of each switch per second, averaged over the period (${r.switching.legEdgesPerPeriod} leg edges a period)`
+        : 'single-phase bridge',
+  },
+  {
+    heading: 'Limit check',
+    cell: (r) => (r.limitCheck.pass ? 'pass' : 'fail'),
+    title: (r) => `${r.limitCheck.standard.name}, ${limitPointName(r)}`,
+  },
+];
