@@ -1,33 +1,7 @@
 import { ParameterTypeError } from '../validation/errors.js';
 import { assertNumberInRange, assertOneOf } from '../validation/assertions.js';
+import { LOSS_DEVICE_BOUNDS } from './lossDeviceBounds.js';
 import { LOSS_ZERO_SEQUENCES, type LossOperatingPoint } from './lossTypes.js';
-
-/**
- * Upper bounds of a device's datasheet values (volts, ohms, joules, amperes), far past any real
- * part so that no device is refused, yet low enough that every loss stays a finite number:
- * on-state thresholds of about 1 V, resistances of milliohms, switching energies of millijoules
- * up to some 10 J a pulse for the largest press-pack modules (common practice, from memory);
- * the reference point within the operating point's own bounds (vdc ≤ 100 kV, current ≤ 1 MA).
- */
-const DEVICE_BOUNDS: Readonly<Record<string, number>> = {
-  vce0: 1e3,
-  vf0: 1e3,
-  rce: 1e3,
-  rf: 1e3,
-  rdsOn: 1e3,
-  eon: 1e3,
-  eoff: 1e3,
-  err: 1e3,
-  referenceVoltage: 1e5,
-  referenceCurrent: 1e6,
-};
-
-/**
- * Least reference voltage and current (volts, amperes): datasheets state their switching energies
- * at hundreds of volts and amperes; a reference near zero would scale the energies past any finite
- * number.
- */
-const REFERENCE_MINIMUM = 1e-3;
 
 /** Internal: validates a device and an operating point; returns the options with defaults. */
 export function assertLossInputs(
@@ -39,15 +13,16 @@ export function assertLossInputs(
   }
   const d = device as Record<string, unknown>;
   assertOneOf('device.kind', d.kind, ['igbt', 'mosfet'] as const);
-  const values = d.kind === 'igbt' ? ['vce0', 'rce', 'vf0', 'rf'] : ['rdsOn'];
-  for (const field of [...values, 'eon', 'eoff', 'err']) {
-    assertNumberInRange(`device.${field}`, d[field], { min: 0, max: DEVICE_BOUNDS[field] });
-  }
-  for (const field of ['referenceVoltage', 'referenceCurrent']) {
-    assertNumberInRange(`device.${field}`, d[field], {
-      min: REFERENCE_MINIMUM,
-      max: DEVICE_BOUNDS[field],
-    });
+  const values = d.kind === 'igbt' ? (['vce0', 'rce', 'vf0', 'rf'] as const) : (['rdsOn'] as const);
+  for (const field of [
+    ...values,
+    'eon',
+    'eoff',
+    'err',
+    'referenceVoltage',
+    'referenceCurrent',
+  ] as const) {
+    assertNumberInRange(`device.${field}`, d[field], LOSS_DEVICE_BOUNDS[field]);
   }
   const {
     vdc,

@@ -6,4 +6,5 @@ export * from './rippleInductance.js';
 export * from './switchingFrequencyTradeoff.js';
 export * from './lossesByPowerFactor.js';
 export * from './assertLossSweepOptions.js';
+export * from './lossDeviceBounds.js';
 export * from './exampleIgbt.js';
