@@ -26,20 +26,21 @@ describe('the job queue on PostgreSQL', () => {
         logErrors: false,
         demoPassword: DEMO_PASSWORD,
         compute: { jobConcurrency: 1, userJobQuota: 100, teamJobQuota: 100 },
-        // Expiry after 1 s and no retry: a sweep of a few seconds is given up at once.
+        // Expiry after 1 s and no retry: a sweep of several seconds is given up at once.
         jobQueue: { expireSeconds: 1, retryLimit: 0, maintenanceSeconds: 1, pollingSeconds: 0.5 },
       });
       try {
         const auth = { Authorization: `Bearer ${await signIn(app, DEMO.viewer)}` };
         const started = await request(app)
-          .post('/api/v1/jobs/she-sweeps')
+          .post('/api/v1/jobs/ma-sweeps')
           .set(auth)
+          // About 5e9 units of the cost model (400 points × ~6000 edges × 2001 orders), several
+          // seconds of one core: a SHE sweep no longer lasts long enough since it follows one
+          // branch (well under a second even at 31 angles and 400 points).
           .send({
-            kind: 'bipolar',
-            vdc: 400,
-            count: 11,
-            eliminate: Array.from({ length: 10 }, (_, i) => 3 + 2 * i),
-            fundamental: { from: 50, to: 350, points: 200 },
+            modulation: { method: 'three-phase', ma: 0.5, mf: 999, vdc: 600 },
+            ma: { from: 0.1, to: 1.1, points: 400 },
+            maxOrder: 2000,
           });
         expect(started.status, JSON.stringify(started.body)).toBe(202);
         let job = started.body;
