@@ -64,16 +64,17 @@ const SHARED_ENV = {
 };
 
 /**
- * A SHE sweep of a few seconds on one core here, in twenty chunks of ten points: long enough to
- * be seen running and stopped, well inside JOB_EXPIRE_SECONDS on a busy machine.
+ * An ma sweep of a few seconds on one core here (three-phase at mf 999 to order 2000, 400 points,
+ * about 5e9 units of the cost model), in chunks: long enough to be seen running and stopped, well
+ * inside JOB_EXPIRE_SECONDS on a busy machine. (A SHE sweep no longer serves: it follows one
+ * branch and ends in well under a second.)
  */
 const SWEEP = {
-  kind: 'bipolar',
-  vdc: 400,
-  count: 11,
-  eliminate: Array.from({ length: 10 }, (_, i) => 3 + 2 * i),
-  fundamental: { from: 50, to: 350, points: 200 },
+  modulation: { method: 'three-phase', ma: 0.5, mf: 999, vdc: 600 },
+  ma: { from: 0.1, to: 1.1, points: 400 },
+  maxOrder: 2000,
 };
+const SWEEP_PATH = '/api/v1/jobs/ma-sweeps';
 
 interface Job {
   id: string;
@@ -81,7 +82,7 @@ interface Job {
   progress: number;
   startedAt: string | null;
   error: string | null;
-  result: { points?: unknown[] } | null;
+  result: { ma?: unknown[] } | null;
 }
 
 describe.skipIf(!POSTGRES)('replicas on one PostgreSQL database', () => {
@@ -114,7 +115,7 @@ describe.skipIf(!POSTGRES)('replicas on one PostgreSQL database', () => {
   });
 
   it('runs a job submitted to A on B, with its progress read on B', async () => {
-    const started = await call(a.baseUrl, 'POST', '/api/v1/jobs/she-sweeps', engineer, SWEEP);
+    const started = await call(a.baseUrl, 'POST', SWEEP_PATH, engineer, SWEEP);
     expect(started.status, JSON.stringify(started.body)).toBe(202);
     const id = (started.body as Job).id;
     const seen: number[] = [];
@@ -128,7 +129,7 @@ describe.skipIf(!POSTGRES)('replicas on one PostgreSQL database', () => {
       60_000,
     );
     expect(done.status, done.error ?? '').toBe('succeeded');
-    expect(done.result?.points).toHaveLength(SWEEP.fundamental.points);
+    expect(done.result?.ma).toHaveLength(SWEEP.ma.points);
     // Progress stored by B's worker and read through B while it ran, rising.
     expect(seen.length).toBeGreaterThan(1);
     expect(seen.some((p) => p > 0 && p < 1)).toBe(true);
@@ -138,7 +139,7 @@ describe.skipIf(!POSTGRES)('replicas on one PostgreSQL database', () => {
   });
 
   it('gives the job of a killed replica to another one (the queue retries it)', async () => {
-    const started = await call(a.baseUrl, 'POST', '/api/v1/jobs/she-sweeps', engineer, SWEEP);
+    const started = await call(a.baseUrl, 'POST', SWEEP_PATH, engineer, SWEEP);
     expect(started.status, JSON.stringify(started.body)).toBe(202);
     const id = (started.body as Job).id;
     // Only B has a job slot, so the attempt that is running is B's.
@@ -167,7 +168,7 @@ describe.skipIf(!POSTGRES)('replicas on one PostgreSQL database', () => {
     expect(done.status, done.error ?? '').toBe('succeeded');
     // A second attempt (a later start) ran it to the end.
     expect(Date.parse(done.startedAt ?? '')).toBeGreaterThan(Date.parse(onB.startedAt ?? ''));
-    expect(done.result?.points).toHaveLength(SWEEP.fundamental.points);
+    expect(done.result?.ma).toHaveLength(SWEEP.ma.points);
   }, 150_000);
 
   it('shares rate limits: failed sign-ins to one account counted across replicas', async () => {

@@ -51,9 +51,18 @@ export class PgBossJobQueue implements JobQueue {
   }
 
   async start(): Promise<void> {
-    await this.boss.start();
-    await this.boss.createQueue(GAVE_UP_QUEUE);
-    await this.boss.createQueue(JOB_QUEUE, { name: JOB_QUEUE, deadLetter: GAVE_UP_QUEUE });
+    // Replicas starting together would install pg-boss's schema and create its queues at the
+    // same moment, and PostgreSQL answers one of them "deadlock detected" (seen in CI): one
+    // replica at a time, behind a transaction's advisory lock as the migrations are.
+    await this.models.sequelize.transaction(async (transaction) => {
+      await this.models.sequelize.query('SELECT pg_advisory_xact_lock(hashtext(:key))', {
+        replacements: { key: 'pulsewright:job-queue' },
+        transaction,
+      });
+      await this.boss.start();
+      await this.boss.createQueue(GAVE_UP_QUEUE);
+      await this.boss.createQueue(JOB_QUEUE, { name: JOB_QUEUE, deadLetter: GAVE_UP_QUEUE });
+    });
     const polling = { pollingIntervalSeconds: this.settings.pollingSeconds, batchSize: 1 };
     for (let slot = 0; slot < this.concurrency; slot++) {
       await this.boss.work<Message>(JOB_QUEUE, polling, ([message]) =>
