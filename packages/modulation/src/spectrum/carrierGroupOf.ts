@@ -1,4 +1,5 @@
 import { assertNumberInRange } from '../validation/assertions.js';
+import { carrierGroupLabel } from './carrierGroupLabel.js';
 
 /** Where a harmonic order sits in a carrier-based spectrum: order = carrierGroup·mf + sideband. */
 export interface CarrierGroupLabel {
@@ -23,13 +24,5 @@ export function carrierGroupOf(order: number, mf: number): CarrierGroupLabel {
   assertNumberInRange('mf', mf, { min: 0, minExclusive: true });
   const carrierGroup = Math.round(order / mf);
   const sideband = order - carrierGroup * mf;
-  return { order, carrierGroup, sideband, label: formatLabel(order, carrierGroup, sideband) };
-}
-
-function formatLabel(order: number, carrierGroup: number, sideband: number): string {
-  if (carrierGroup === 0) return String(order);
-  const multiple = carrierGroup === 1 ? 'mf' : `${carrierGroup}mf`;
-  if (sideband === 0) return multiple;
-  const magnitude = Number.isInteger(sideband) ? Math.abs(sideband) : Math.abs(sideband).toFixed(2);
-  return `${multiple}${sideband > 0 ? '+' : '−'}${magnitude}`;
+  return { order, carrierGroup, sideband, label: carrierGroupLabel(order, carrierGroup, sideband) };
 }
