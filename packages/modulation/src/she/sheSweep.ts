@@ -13,6 +13,12 @@ export interface SheSweepOptions extends SheSolverSettings {
   kind: SheKind;
   /** DC source voltage, volts (> 0). */
   vdc: number;
+  /**
+   * Staircase only: each cell's DC source voltage, volts (> 0), one per angle (as
+   * `cellVoltages` of {@link solveShe}).
+   * @default every cell at vdc
+   */
+  cellVoltages?: number[];
   /** Initial guess at the first fundamental (radians, ascending in (0, π/2)); fixes N. */
   angles?: number[];
   /** Number of first-quarter angles N when no `angles` are given. */
@@ -90,13 +96,15 @@ interface ActiveBranch {
  * marked `converged: false`; fundamentals where nothing is solved are listed in `gaps`.
  *
  * @throws ParameterRangeError / ParameterTypeError for invalid input (as {@link solveShe};
- *   `fundamentals.from`/`to` must lie in the achievable range, `eliminate` must hold N − 1 orders)
+ *   `fundamentals.from`/`to` must lie in the achievable range, `eliminate` must hold N − 1 orders,
+ *   `cellVoltages` one voltage > 0 per angle for a staircase)
  */
 export function sheSweep(options: SheSweepOptions): SheSweepResult {
   assertSheSweepOptions(options);
   const base = resolveSheBase(options);
   const { kind, vdc, count, eliminate } = base;
   const {
+    cellVoltages,
     fundamentals,
     maxHalvings = 8,
     maxAngleStep = 0.1,
@@ -105,7 +113,13 @@ export function sheSweep(options: SheSweepOptions): SheSweepResult {
   } = options;
   const scale = (4 * vdc) / Math.PI;
   const grid = fundamentalGrid(fundamentals);
-  const system = createSheSystem(kind, count, eliminate, (grid[0] as number) / scale);
+  const system = createSheSystem(
+    kind,
+    count,
+    eliminate,
+    (grid[0] as number) / scale,
+    cellVoltages?.map((v) => v / vdc),
+  );
   const settings: ContinuationSettings = { ...base.search, maxHalvings, maxAngleStep };
   const counter = { iterations: 0 };
   const followed: ActiveBranch[] = [];

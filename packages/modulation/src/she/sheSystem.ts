@@ -23,13 +23,15 @@ export interface SheSystem {
   targets: number[];
 }
 
+/** The system for `kind`; `cellScales` (staircase of unequal cells only) are V_k/vdc. */
 export function createSheSystem(
   kind: SheKind,
   count: number,
   eliminate: readonly number[],
   target: number | undefined,
+  cellScales?: readonly number[],
 ): SheSystem {
-  const weights = patternWeights(kind, count);
+  const weights = patternWeights(kind, count, cellScales);
   if (target === undefined) {
     return { kind, count, weights, orders: [...eliminate], targets: eliminate.map(() => 0) };
   }

@@ -4,7 +4,7 @@ import { searchSolutions } from './sheSearch.js';
 import { seededStarts } from './seededStarts.js';
 import { buildSheWaveform } from './buildSheWaveform.js';
 import { assertSquare, resolveSheBase, type SheSolverSettings } from './sheOptions.js';
-import { assertFundamental } from './validateShe.js';
+import { assertCellVoltages, assertFundamental } from './validateShe.js';
 import type { OrderAmplitude, QuarterWavePattern, SheKind } from './SheKind.js';
 
 /** Options of {@link solveShe}. */
@@ -13,6 +13,13 @@ export interface SolveSheOptions extends SheSolverSettings {
   kind: SheKind;
   /** DC source voltage, volts (> 0): the bipolar level or each staircase cell's step. */
   vdc: number;
+  /**
+   * Staircase only: each cell's DC source voltage, volts (> 0), one per first-quarter angle, cell
+   * k switching at angle k (cascaded cells on unequal sources, for example a PV string per cell);
+   * `vdc` then only sets the solver's per-unit base.
+   * @default every cell at vdc
+   */
+  cellVoltages?: number[];
   /**
    * Initial guess: first-quarter angles (radians), strictly ascending in (0, π/2). Fixes the
    * number of angles N. Optional when `count` is given (then only seeded starts are used).
@@ -23,8 +30,9 @@ export interface SolveSheOptions extends SheSolverSettings {
   /** Odd orders ≥ 3 to null: N − 1 of them with a `fundamental`, N without. */
   eliminate: number[];
   /**
-   * Wanted fundamental, peak volts in phase with sin θ, in (0, 4vdc/π) for bipolar and
-   * (0, N·4vdc/π) for staircase. Omit it to spend every angle on elimination.
+   * Wanted fundamental, peak volts in phase with sin θ, in (0, 4vdc/π) for bipolar,
+   * (0, N·4vdc/π) for staircase and (0, 4ΣV_k/π) for a staircase of `cellVoltages`. Omit it to
+   * spend every angle on elimination.
    */
   fundamental?: number;
 }
@@ -38,6 +46,8 @@ export interface SheResult extends QuarterWavePattern {
   converged: boolean;
   /** Remaining amplitude (peak volts) of each eliminated order, from the exact spectrum. */
   residual: OrderAmplitude[];
+  /** The cells' DC source voltages, volts, when they were given (staircase of unequal cells). */
+  cellVoltages?: number[];
 }
 
 /**
@@ -46,7 +56,11 @@ export interface SheResult extends QuarterWavePattern {
  * inverters", IEEE Trans. Ind. Appl., 1973): finds first-quarter angles α₁ < … < α_N in
  * (0, π/2) with b_n = 0 for each order in `eliminate` and b₁ = `fundamental`, where
  * b_n = s·(4vdc/(nπ))·[1 + 2Σ(−1)^k cos nα_k] (bipolar, s = (−1)^N) or
- * b_n = (4vdc/(nπ))·Σ cos nα_k (staircase); conventions in {@link SheKind}.
+ * b_n = (4vdc/(nπ))·Σ cos nα_k (staircase), or b_n = (4/(nπ))·Σ V_k·cos nα_k for a staircase of
+ * unequal DC sources V_k = `cellVoltages[k]` (L. M. Tolbert, J. N. Chiasson, Z. Du,
+ * K. J. McKenzie, "Elimination of harmonics in a multilevel converter with nonequal DC
+ * sources", IEEE Trans. Ind. Appl., 2005, title and year from memory); conventions in
+ * {@link SheKind}.
  *
  * Method: damped Newton–Raphson with the analytic Jacobian (solved with ml-matrix), steps kept
  * inside the ordered region, from the given angles and then from `starts` seeded guesses until
@@ -56,13 +70,16 @@ export interface SheResult extends QuarterWavePattern {
  *
  * @throws ParameterRangeError / ParameterTypeError for invalid input: unknown kind, vdc ≤ 0,
  *   angles not ascending in (0, π/2), eliminate holding even orders, order 1 or repeats, the
- *   wrong number of orders for N, or a fundamental outside the achievable range
+ *   wrong number of orders for N, a fundamental outside the achievable range, or `cellVoltages`
+ *   with a bipolar kind, of a length other than N or holding a value ≤ 0
  */
 export function solveShe(options: SolveSheOptions): SheResult {
   const base = resolveSheBase(options);
   const { kind, vdc, count, eliminate } = base;
-  const { fundamental } = options;
-  if (fundamental !== undefined) assertFundamental('fundamental', fundamental, kind, count, vdc);
+  const { fundamental, cellVoltages } = options;
+  if (cellVoltages !== undefined) assertCellVoltages('cellVoltages', cellVoltages, kind, count);
+  if (fundamental !== undefined)
+    assertFundamental('fundamental', fundamental, kind, count, vdc, cellVoltages);
   assertSquare(eliminate, count, fundamental !== undefined);
   const scale = (4 * vdc) / Math.PI;
   const system = createSheSystem(
@@ -70,12 +87,13 @@ export function solveShe(options: SolveSheOptions): SheResult {
     count,
     eliminate,
     fundamental === undefined ? undefined : fundamental / scale,
+    cellVoltages?.map((v) => v / vdc),
   );
   const given = options.angles === undefined ? [] : [options.angles];
   const starts = [...given, ...seededStarts(count, base.starts, base.seed)];
   const search = searchSolutions(system, starts, base.search, false);
   const angles = search.solutions[0] ?? search.best.angles;
-  const waveform = buildSheWaveform(kind, vdc, angles);
+  const waveform = buildSheWaveform(kind, vdc, angles, cellVoltages);
   const spectrum = harmonics(waveform, Math.max(1, ...eliminate));
   const first = spectrum[1];
   const achieved = first === undefined ? 0 : first.amplitude * Math.cos(first.phase);
@@ -93,6 +111,7 @@ export function solveShe(options: SolveSheOptions): SheResult {
     residual: eliminate.map((order) => ({ order, amplitude: spectrum[order]?.amplitude ?? NaN })),
     iterations: search.iterations,
     starts: search.tried,
+    ...(cellVoltages === undefined ? {} : { cellVoltages: [...cellVoltages] }),
   };
 }
 

@@ -51,16 +51,52 @@ export function assertOddOrders(field: string, orders: unknown): asserts orders 
   });
 }
 
-/** Asserts a wanted fundamental in (0, limit) volts, the limit being the pattern's maximum. */
+/**
+ * Asserts a wanted fundamental in (0, limit) volts, the limit being the pattern's maximum
+ * (of the staircase of `cellVoltages` when given).
+ */
 export function assertFundamental(
   field: string,
   value: unknown,
   kind: SheKind,
   count: number,
   vdc: number,
+  cellVoltages?: readonly number[],
 ): asserts value is number {
-  const limit = fundamentalLimit(kind, count, vdc);
+  const limit = fundamentalLimit(kind, count, vdc, cellVoltages);
   assertNumberInRange(field, value, { min: 0, minExclusive: true, max: limit, maxExclusive: true });
+}
+
+/**
+ * Asserts the DC source voltages of a staircase of unequal cells: only for kind 'staircase', one
+ * finite voltage > 0 (volts) per first-quarter angle, cell k switching at angle k.
+ */
+export function assertCellVoltages(
+  field: string,
+  value: unknown,
+  kind: SheKind,
+  count: number,
+): asserts value is number[] {
+  if (kind !== 'staircase') {
+    throw new ParameterRangeError(
+      field,
+      "absent unless kind is 'staircase' (a bipolar pattern has one DC source, vdc)",
+      value,
+    );
+  }
+  if (!Array.isArray(value)) {
+    throw new ParameterTypeError(field, 'an array of cell voltages in volts', value);
+  }
+  if (value.length !== count) {
+    throw new ParameterRangeError(
+      `${field}.length`,
+      `count = ${count} (one DC source per first-quarter angle)`,
+      value.length,
+    );
+  }
+  value.forEach((voltage: unknown, k) => {
+    assertNumberInRange(`${field}[${k}]`, voltage, { min: 0, minExclusive: true });
+  });
 }
 
 /**
@@ -93,13 +129,14 @@ export function assertFundamentalRange(
   kind: SheKind,
   count: number,
   vdc: number,
+  cellVoltages?: readonly number[],
 ): asserts range is FundamentalRange {
   if (typeof range !== 'object' || range === null) {
     throw new ParameterTypeError(field, 'an object { from, to, points }', range);
   }
   const { from, to, points } = range as Partial<FundamentalRange>;
-  assertFundamental(`${field}.from`, from, kind, count, vdc);
-  assertFundamental(`${field}.to`, to, kind, count, vdc);
+  assertFundamental(`${field}.from`, from, kind, count, vdc, cellVoltages);
+  assertFundamental(`${field}.to`, to, kind, count, vdc, cellVoltages);
   assertNumberInRange(`${field}.points`, points, { min: 1, max: 10_000, integer: true });
 }
 
