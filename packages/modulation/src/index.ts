@@ -23,3 +23,4 @@ export * from './losses/index.js';
 export * from './capture/index.js';
 export * from './limits/index.js';
 export * from './design/index.js';
+export * from './multilevel/index.js';

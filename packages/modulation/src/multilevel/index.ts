@@ -1,0 +1,3 @@
+export * from './MultilevelTypes.js';
+export * from './carrier/assertMultilevelCarrierOptions.js';
+export * from './carrier/multilevelCarrier.js';
