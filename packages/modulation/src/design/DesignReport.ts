@@ -1,6 +1,8 @@
 import type { LcFilterCharacteristics } from '../filter/lcFilter.js';
 import type { GridCurrentLimitCheck } from '../limits/checkGridCurrentLimits.js';
 import type { HarmonicLimitCheck } from '../limits/checkVoltageHarmonicLimits.js';
+import type { LegLosses } from '../losses/legLossesFromSamples.js';
+import type { SemiconductorDevice } from '../losses/lossTypes.js';
 import type { MotorFigures } from '../load/MotorFigures.js';
 import type { LabelledHarmonic } from '../spectrum/labelHarmonics.js';
 import type { ReducedCommonModeRange } from '../three-phase/reducedCommonModeRange.js';
@@ -186,6 +188,33 @@ export interface GridFigures {
   limits: { ieee519: GridCurrentLimitCheck; ieee1547: GridCurrentLimitCheck };
 }
 
+/** The losses of the four devices of one leg (upper and lower transistor and diode), W. */
+export interface LegLossFigures extends LegLosses {
+  /** `leg a`, `leg b`, `leg c` (three-phase: the leg of that phase; single-phase: a feeds the load, b returns it). */
+  name: string;
+}
+
+/**
+ * The semiconductor losses of a two-level bridge with the design's `device`, from the report's own
+ * phase currents and the exact leg waveforms (conduction per device over the period, switching
+ * at each edge with the current there; the model of losses/, switching energies scaled linearly
+ * with voltage and current, common practice). Switching loss is proportional to the number of
+ * edges, so to the carrier frequency for a given waveform shape.
+ */
+export interface DesignLossFigures {
+  deviceKind: SemiconductorDevice['kind'];
+  /** Each leg's devices, W (a MOSFET's diode has recovery loss only). */
+  legs: LegLossFigures[];
+  /** All devices, W. */
+  conduction: number;
+  switching: number;
+  total: number;
+  /** Power the bridge delivers to its output, W: vdc × the DC-link current's mean (load, back-EMF or grid, filter damping). */
+  outputPower: number;
+  /** outputPower / (outputPower + total), a ratio; null when no power flows out (outputPower ≤ 0). */
+  efficiency: number | null;
+}
+
 /** Everything the product shows about one design, from {@link analyseDesign}; plain data. */
 export interface DesignReport {
   method: ModulationMethod;
@@ -219,6 +248,11 @@ export interface DesignReport {
   switching: SwitchingFigures | null;
   /** Mean power into the load resistance, all phases together, watts; null without a load. */
   loadPower: number | null;
+  /**
+   * Semiconductor losses by device with the design's `device`; null without a device, with
+   * neither load nor filter (no current), or for a bridge that is not two-level (a staircase).
+   */
+  losses: DesignLossFigures | null;
   /** What a load with back-EMF converts (torque-producing current per phase, air-gap power); null without an EMF. */
   motor: MotorFigures | null;
   /** The filter's own figures (unloaded) and its loaded gain; null without a filter. */

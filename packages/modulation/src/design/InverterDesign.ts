@@ -1,5 +1,6 @@
 import type { LcFilterOptions } from '../filter/LcFilterOptions.js';
 import type { BackEmf } from '../load/RlLoad.js';
+import type { SemiconductorDevice } from '../losses/lossTypes.js';
 import type { Modulation } from './Modulation.js';
 
 /** Omit distributed over each member of a union, so the discriminant survives. */
@@ -61,6 +62,9 @@ export interface DesignGrid {
  * - `modulation`: the method and its options.
  * - `filter`: optional LC output filter per phase; `load`: optional R–L(–EMF) load per phase.
  * - `grid`: optional grid the bridge feeds through the filter (then no `load`).
+ * - `device`: optional switching device of every switch position (an IGBT with its diode or a
+ *   MOSFET, datasheet values at the operating temperature, bounds `LOSS_DEVICE_BOUNDS`); with it
+ *   the report gives the semiconductor losses by device (`losses`).
  */
 export interface InverterDesign {
   vdc: number;
@@ -70,4 +74,5 @@ export interface InverterDesign {
   filter?: DesignFilter | null;
   load?: DesignLoad | null;
   grid?: DesignGrid | null;
+  device?: SemiconductorDevice | null;
 }

@@ -37,6 +37,7 @@ import { defaultSpectrumOrder } from './defaultSpectrumOrder.js';
 import { designModulation } from './designModulation.js';
 import { commonModeFigures } from './commonModeFigures.js';
 import { dcLinkFigures } from './dcLinkFigures.js';
+import { designLosses } from './designLosses.js';
 import { gridFigures } from './gridFigures.js';
 import { gridLoad } from './gridLoad.js';
 import type {
@@ -53,6 +54,8 @@ import { modulationVoltages, type NamedVoltage } from './modulationVoltages.js';
 import { spectrumLabelRatio } from './spectrumLabelRatio.js';
 import { voltageFigures } from './voltageFigures.js';
 import { modulatorSignals } from './modulatorSignals.js';
+import { switchingLegs } from './switchingLegs.js';
+import { assertSemiconductorDevice } from '../losses/assertSemiconductorDevice.js';
 import { synthesisePeriod, synthesisSize } from './synthesisePeriod.js';
 
 /** Options of {@link analyseDesign}. */
@@ -116,6 +119,8 @@ const phaseSuffix = (phaseCount: number, phase: PhaseCurrents['phase']): string 
  *   phase-to-star-point voltage (2·v_a − v_b − v_c)/3; line-to-line figures are reported beside.
  * - Limit check (IEEE Std 519-2022 Table 1, recalled from memory) on the voltage at the point
  *   of coupling: the filter's output with a filter, else the bridge's.
+ * - With a `device`: the semiconductor losses of each leg's devices (`designLosses`) from the
+ *   phase currents above and the exact leg waveforms, with the output power and efficiency.
  * - With a `grid`: the grid is each phase's load (r, l2 + l, the grid source as its EMF; see
  *   `gridLoad`), and `grid` holds the grid-connected figures (`gridFigures`: grid and inverter
  *   current spectra, resonance, damping loss, the current limits of IEEE Std 519 and 1547).
@@ -135,6 +140,8 @@ export function analyseDesign(
     assertNumberInRange('busVoltage', busVoltage, { min: 0, minExclusive: true, max: 1e7 });
   const filter = given.filter ?? null;
   if (filter !== null) withFieldPrefix('filter.', () => assertLcFilter(filter));
+  const device = given.device ?? null;
+  if (device !== null) assertSemiconductorDevice(device);
   const modulation = withFieldPrefix('modulation.', () => designModulation(given));
   const voltages = withFieldPrefix('modulation.', () => modulationVoltages(modulation));
   // A grid is the load of each phase: r and l2 + l with the grid source as its EMF.
@@ -246,6 +253,18 @@ export function analyseDesign(
           averageDeviceFrequency: (legA.waveform.edges.length / 2) * frequency,
         };
 
+  const legs =
+    device === null || dcLink === null ? null : switchingLegs(modulation, voltages, design.vdc);
+  const losses =
+    legs === null || device === null || dcLink === null
+      ? null
+      : designLosses(legs, inverterSamples, {
+          device,
+          vdc: design.vdc,
+          fundamentalFrequency: frequency,
+          outputPower: design.vdc * dcLink.mean,
+        });
+
   const pcc = output ?? bridge;
   const pccSpectrum = output === null ? bridge.spectrum : output.spectrum;
   const nominal = ((voltages.phaseCount === 3 ? Math.sqrt(3) : 1) * pcc.fundamental) / Math.SQRT2;
@@ -272,6 +291,7 @@ export function analyseDesign(
     commonMode,
     switching: legSwitching,
     loadPower,
+    losses,
     motor:
       grid === null && load?.emf && load.emf.amplitude > 0
         ? motorLoadFigures(

@@ -1,6 +1,5 @@
-import { ParameterTypeError } from '../validation/errors.js';
 import { assertNumberInRange, assertOneOf } from '../validation/assertions.js';
-import { LOSS_DEVICE_BOUNDS } from './lossDeviceBounds.js';
+import { assertSemiconductorDevice } from './assertSemiconductorDevice.js';
 import { LOSS_ZERO_SEQUENCES, type LossOperatingPoint } from './lossTypes.js';
 
 /** Internal: validates a device and an operating point; returns the options with defaults. */
@@ -8,22 +7,7 @@ export function assertLossInputs(
   device: unknown,
   options: LossOperatingPoint,
 ): Required<LossOperatingPoint> {
-  if (typeof device !== 'object' || device === null) {
-    throw new ParameterTypeError('device', "an object { kind: 'igbt' | 'mosfet', ... }", device);
-  }
-  const d = device as Record<string, unknown>;
-  assertOneOf('device.kind', d.kind, ['igbt', 'mosfet'] as const);
-  const values = d.kind === 'igbt' ? (['vce0', 'rce', 'vf0', 'rf'] as const) : (['rdsOn'] as const);
-  for (const field of [
-    ...values,
-    'eon',
-    'eoff',
-    'err',
-    'referenceVoltage',
-    'referenceCurrent',
-  ] as const) {
-    assertNumberInRange(`device.${field}`, d[field], LOSS_DEVICE_BOUNDS[field]);
-  }
+  assertSemiconductorDevice(device);
   const {
     vdc,
     ma,

@@ -1,0 +1,174 @@
+import { legLossesFromSamples } from '../losses/legLossesFromSamples.js';
+import type { DeviceLoss, SemiconductorDevice } from '../losses/lossTypes.js';
+import { switchingEnergyScale } from '../losses/switchingEnergyScale.js';
+import { TAU } from '../math.js';
+import type { Waveform } from '../waveform/Waveform.js';
+import type { DesignLossFigures, LegLossFigures } from './DesignReport.js';
+import type { SwitchingLeg } from './switchingLegs.js';
+
+/**
+ * Internal (part of analyseDesign): the semiconductor losses of a design's bridge from its exact
+ * leg switching functions and the report's own phase currents, with the loss model of losses/
+ * (IGBT v = vce0 + rce·i and diode v = vf0 + rf·i, or a MOSFET channel rdsOn in both
+ * directions; switching energies scaled linearly, E·(vdc/Vref)·(|i|/Iref), common practice).
+ *
+ * - Conduction: the period is cut into the S cells of the currents' grid (each centred on a
+ *   sample 2πj/S, at least 64 a carrier period); each cell's duty is the exact share of it in
+ *   which the leg's upper switch is on, read from the leg's edges, and `legLossesFromSamples`
+ *   averages the cells (only its conduction is used: a cell is not a carrier period).
+ * - Switching: counted at each exact edge of the leg with the current there (linear
+ *   interpolation of the grid): with the current out of the leg (i > 0) a rising edge is the
+ *   upper transistor's turn-on (eon) and the lower diode's recovery (err), a falling edge its
+ *   turn-off (eoff); with i < 0 the lower transistor and the upper diode take the same roles on
+ *   the opposite edges. Summed over the period and times the fundamental frequency, W. This is
+ *   the per-carrier-period model of `legLossesFromSamples` (eon + eoff + err each switched
+ *   period) resolved to the edges, so clamped stretches (the discontinuous zero sequences,
+ *   space vector's clamps, overmodulation) do not switch; switching loss is proportional to the
+ *   number of edges, and so, for a given waveform shape, to the carrier frequency.
+ *
+ * @param legs - the bridge's legs (`switchingLegs`)
+ * @param inverterSamples - each phase's inverter current, amperes, on S evenly spaced angles
+ * @param context.outputPower - power the bridge delivers to its output, W (vdc × the DC-link current's mean)
+ */
+export function designLosses(
+  legs: readonly SwitchingLeg[],
+  inverterSamples: readonly Float64Array[],
+  context: {
+    device: SemiconductorDevice;
+    vdc: number;
+    fundamentalFrequency: number;
+    outputPower: number;
+  },
+): DesignLossFigures {
+  const { device, vdc, fundamentalFrequency, outputPower } = context;
+  const figures = legs.map((leg): LegLossFigures => {
+    const phase = inverterSamples[leg.phaseIndex] as Float64Array;
+    const current = leg.currentSign === 1 ? phase : phase.map((i) => -i);
+    const size = current.length;
+    const conduction = legLossesFromSamples(
+      Array.from(highFractions(leg.state, size)),
+      Array.from(current),
+      // Only the conduction part is read; the cells' own switching count is not a carrier's.
+      { device, vdc, switchingFrequency: fundamentalFrequency * size },
+    );
+    const switching = edgeSwitchingLosses(leg.state, current, device, vdc, fundamentalFrequency);
+    const loss = (c: DeviceLoss, s: number): DeviceLoss => ({
+      conduction: c.conduction,
+      switching: s,
+      total: c.conduction + s,
+    });
+    const upperTransistor = loss(conduction.upperTransistor, switching.upperTransistor);
+    const lowerTransistor = loss(conduction.lowerTransistor, switching.lowerTransistor);
+    const upperDiode = loss(conduction.upperDiode, switching.upperDiode);
+    const lowerDiode = loss(conduction.lowerDiode, switching.lowerDiode);
+    return {
+      name: leg.name,
+      upperTransistor,
+      lowerTransistor,
+      upperDiode,
+      lowerDiode,
+      total: upperTransistor.total + lowerTransistor.total + upperDiode.total + lowerDiode.total,
+    };
+  });
+  const sum = (part: 'conduction' | 'switching') =>
+    figures.reduce(
+      (total, leg) =>
+        total +
+        leg.upperTransistor[part] +
+        leg.lowerTransistor[part] +
+        leg.upperDiode[part] +
+        leg.lowerDiode[part],
+      0,
+    );
+  const conduction = sum('conduction');
+  const switching = sum('switching');
+  const total = conduction + switching;
+  return {
+    deviceKind: device.kind,
+    legs: figures,
+    conduction,
+    switching,
+    total,
+    outputPower,
+    efficiency: outputPower > 0 ? outputPower / (outputPower + total) : null,
+  };
+}
+
+/** The share of each of `size` cells (centred on 2πj/size) in which the state is 1. */
+function highFractions(state: Waveform, size: number): Float64Array {
+  const width = TAU / size;
+  const high = new Float64Array(size);
+  const { edges, levels } = state;
+  // Shifted by half a cell, cell j is [j·width, (j + 1)·width).
+  const add = (from: number, to: number): void => {
+    const first = Math.min(size - 1, Math.floor(from / width));
+    const last = Math.floor(to / width);
+    if (first >= last) {
+      high[first] = (high[first] as number) + (to - from);
+      return;
+    }
+    high[first] = (high[first] as number) + ((first + 1) * width - from);
+    for (let j = first + 1; j < last; j++) high[j] = (high[j] as number) + width;
+    if (last < size) high[last] = (high[last] as number) + (to - last * width);
+  };
+  edges.forEach((edge, i) => {
+    if (levels[i] !== 1) return;
+    const next = i + 1 < edges.length ? (edges[i + 1] as number) : (edges[0] as number) + TAU;
+    let from = edge + width / 2;
+    let to = next + width / 2;
+    // Bring the segment into [0, 2π), split where it wraps.
+    const turns = Math.floor(from / TAU);
+    from -= turns * TAU;
+    to -= turns * TAU;
+    if (to <= TAU) add(from, to);
+    else {
+      add(from, TAU);
+      add(0, Math.min(to - TAU, TAU));
+    }
+  });
+  return high.map((h) => Math.min(1, Math.max(0, h / width)));
+}
+
+/** Switching loss of each device of one leg from its edges, W. */
+function edgeSwitchingLosses(
+  state: Waveform,
+  current: Float64Array,
+  device: SemiconductorDevice,
+  vdc: number,
+  fundamentalFrequency: number,
+): Record<'upperTransistor' | 'lowerTransistor' | 'upperDiode' | 'lowerDiode', number> {
+  const energy = { upperTransistor: 0, lowerTransistor: 0, upperDiode: 0, lowerDiode: 0 };
+  const { edges, levels } = state;
+  const size = current.length;
+  edges.forEach((edge, i) => {
+    const level = levels[i];
+    const previous = levels[(i - 1 + levels.length) % levels.length];
+    if (level === previous) return;
+    const x = (edge / TAU) * size;
+    const j = Math.floor(x) % size;
+    const fraction = x - Math.floor(x);
+    const i0 = current[j] as number;
+    const i1 = current[(j + 1) % size] as number;
+    const at = i0 + fraction * (i1 - i0);
+    const scale = switchingEnergyScale(device, vdc, at);
+    const rising = level === 1;
+    if (at > 0) {
+      if (rising) {
+        energy.upperTransistor += device.eon * scale;
+        energy.lowerDiode += device.err * scale;
+      } else energy.upperTransistor += device.eoff * scale;
+    } else if (at < 0) {
+      if (rising) energy.lowerTransistor += device.eoff * scale;
+      else {
+        energy.lowerTransistor += device.eon * scale;
+        energy.upperDiode += device.err * scale;
+      }
+    }
+  });
+  return {
+    upperTransistor: energy.upperTransistor * fundamentalFrequency,
+    lowerTransistor: energy.lowerTransistor * fundamentalFrequency,
+    upperDiode: energy.upperDiode * fundamentalFrequency,
+    lowerDiode: energy.lowerDiode * fundamentalFrequency,
+  };
+}
