@@ -1,6 +1,6 @@
 /** Builds the full-period waveform of first-quarter angles (internal; see sheWaveform). */
 import type { Waveform } from '../waveform/Waveform.js';
-import { waveformFromTransitions, type Transition } from '../waveform/waveformFromTransitions.js';
+import { quarterWaveWaveform } from './quarterWaveWaveform.js';
 import type { SheKind } from './SheKind.js';
 
 /**
@@ -18,22 +18,7 @@ export function buildSheWaveform(
   const steps = staircaseLevels(count, vdc, cellVoltages);
   const level = (j: number): number =>
     kind === 'staircase' ? (steps[j] as number) : sign * (j % 2 === 0 ? 1 : -1) * vdc;
-  // 0 − x would give −0 for a zero level; keep +0 so results compare and serialise plainly.
-  const negate = (x: number): number => (x === 0 ? 0 : -x);
-  const transitions: Transition[] = [
-    { angle: 0, level: level(0) },
-    { angle: Math.PI, level: negate(level(0)) },
-  ];
-  for (let j = 1; j <= count; j++) {
-    const alpha = angles[j - 1] as number;
-    transitions.push(
-      { angle: alpha, level: level(j) },
-      { angle: Math.PI - alpha, level: level(j - 1) },
-      { angle: Math.PI + alpha, level: negate(level(j)) },
-      { angle: 2 * Math.PI - alpha, level: negate(level(j - 1)) },
-    );
-  }
-  return waveformFromTransitions(transitions);
+  return quarterWaveWaveform(angles, level);
 }
 
 /** The staircase levels 0, V₁, V₁ + V₂, …: the partial sums of the cells' voltages. */

@@ -39,7 +39,8 @@ function predict(
   const tangent = newtonStep(systemJacobian(system, angles), e1);
   if (tangent === null) return [...angles];
   const predicted = angles.map((a, k) => a + deltaM * (tangent[k] as number));
-  return isOrderedInQuarter(predicted) && largestChange(predicted, angles) <= maxAngleStep
+  return isOrderedInQuarter(predicted, system.blockSize) &&
+    largestChange(predicted, angles) <= maxAngleStep
     ? predicted
     : [...angles];
 }

@@ -74,7 +74,10 @@ export function newtonSolve(
     // A step below rounding of the angles cannot lower F further.
     if (longest < 1e-16)
       return { angles, residualNorm: norm, iterations: iteration, stop: 'stalled' };
-    let t = Math.min(maxOrderedStep(angles, step), longest > MAX_STEP ? MAX_STEP / longest : 1);
+    let t = Math.min(
+      maxOrderedStep(angles, step, system.blockSize),
+      longest > MAX_STEP ? MAX_STEP / longest : 1,
+    );
     const merit = squaredNorm(residual);
     let accepted: number[] | null = null;
     for (let b = 0; b < MAX_BACKTRACKS && t > 0; b++, t /= 2) {

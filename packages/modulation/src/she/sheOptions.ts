@@ -30,14 +30,30 @@ export interface SheSolverSettings {
   minimumSpacing?: number;
 }
 
-export interface ResolvedSheBase {
+/** The solver settings, validated and with their defaults. */
+export interface ResolvedSolverSettings {
+  starts: number;
+  seed: number;
+  search: SearchSettings;
+}
+
+export interface ResolvedSheBase extends ResolvedSolverSettings {
   kind: SheKind;
   vdc: number;
   count: number;
   eliminate: number[];
-  starts: number;
-  seed: number;
-  search: SearchSettings;
+}
+
+/** Validates {@link SheSolverSettings} and fills in their defaults. */
+export function resolveSolverSettings(options: SheSolverSettings): ResolvedSolverSettings {
+  const { starts = 24, seed = 1, maxIterations = 60 } = options;
+  const { tolerance = 1e-10, minimumSpacing = 1e-6 } = options;
+  assertNumberInRange('starts', starts, { min: 0, max: 10_000, integer: true });
+  assertNumberInRange('seed', seed, { integer: true });
+  assertNumberInRange('maxIterations', maxIterations, { min: 1, max: 10_000, integer: true });
+  assertNumberInRange('tolerance', tolerance, { min: 0, minExclusive: true, max: 1e-3 });
+  assertNumberInRange('minimumSpacing', minimumSpacing, { min: 0, max: 0.1 });
+  return { starts, seed, search: { maxIterations, tolerance, minimumSpacing } };
 }
 
 export function resolveSheBase(
@@ -49,34 +65,17 @@ export function resolveSheBase(
     eliminate: unknown;
   } & SheSolverSettings,
 ): ResolvedSheBase {
-  const {
-    kind,
-    vdc,
-    angles,
-    count,
-    eliminate,
-    starts = 24,
-    seed = 1,
-    maxIterations = 60,
-  } = options;
-  const { tolerance = 1e-10, minimumSpacing = 1e-6 } = options;
+  const { kind, vdc, angles, count, eliminate } = options;
   assertOneOf('kind', kind, SHE_KINDS);
   assertNumberInRange('vdc', vdc, { min: 0, minExclusive: true });
   const resolvedCount = resolveCount(angles, count);
   assertOddOrders('eliminate', eliminate);
-  assertNumberInRange('starts', starts, { min: 0, max: 10_000, integer: true });
-  assertNumberInRange('seed', seed, { integer: true });
-  assertNumberInRange('maxIterations', maxIterations, { min: 1, max: 10_000, integer: true });
-  assertNumberInRange('tolerance', tolerance, { min: 0, minExclusive: true, max: 1e-3 });
-  assertNumberInRange('minimumSpacing', minimumSpacing, { min: 0, max: 0.1 });
   return {
     kind,
     vdc,
     count: resolvedCount,
     eliminate: [...eliminate],
-    starts,
-    seed,
-    search: { maxIterations, tolerance, minimumSpacing },
+    ...resolveSolverSettings(options),
   };
 }
 

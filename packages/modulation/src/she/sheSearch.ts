@@ -51,7 +51,7 @@ export function rejection(
   if (outcome.residualNorm > Math.max(settings.tolerance * g1, ROUNDING_FLOOR)) {
     return `the closest attempt leaves a residual of ${(outcome.residualNorm / g1).toExponential(2)} of the fundamental`;
   }
-  if (smallestGap(outcome.angles) < settings.minimumSpacing) {
+  if (smallestGap(outcome.angles, system.blockSize) < settings.minimumSpacing) {
     return 'the only solutions found have two angles merging (a pulse of zero width), so fewer angles would do';
   }
   return '';

@@ -14,8 +14,10 @@ import {
 import type { SheKind } from './SheKind.js';
 
 export interface SheSystem {
-  kind: SheKind;
+  /** Unknown angles in all. */
   count: number;
+  /** Angles per pattern: each block of this many is ordered in (0, π/2) on its own. */
+  blockSize: number;
   weights: PatternWeights;
   /** Equation orders: [1, ...eliminate] with a fundamental target, else [...eliminate]. */
   orders: number[];
@@ -31,13 +33,26 @@ export function createSheSystem(
   target: number | undefined,
   cellScales?: readonly number[],
 ): SheSystem {
-  const weights = patternWeights(kind, count, cellScales);
+  return systemOfWeights(patternWeights(kind, count, cellScales), count, eliminate, target);
+}
+
+/**
+ * The system over given weights (one σ_k per unknown angle), the angles ordered in blocks of
+ * `blockSize`: several patterns solved jointly, for example the cells of a cascaded bridge.
+ */
+export function systemOfWeights(
+  weights: PatternWeights,
+  blockSize: number,
+  eliminate: readonly number[],
+  target: number | undefined,
+): SheSystem {
+  const count = weights.signs.length;
   if (target === undefined) {
-    return { kind, count, weights, orders: [...eliminate], targets: eliminate.map(() => 0) };
+    return { count, blockSize, weights, orders: [...eliminate], targets: eliminate.map(() => 0) };
   }
   return {
-    kind,
     count,
+    blockSize,
     weights,
     orders: [1, ...eliminate],
     targets: [target, ...eliminate.map(() => 0)],
