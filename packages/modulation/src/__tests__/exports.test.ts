@@ -148,6 +148,7 @@ const PUBLIC_NAMES = [
   'legReferences',
   'lossesByPowerFactor',
   'minimumPulseEffect',
+  'modulationPhaseCount',
   'modulationVoltages',
   'modulatorSignals',
   'mulberry32',

@@ -4,6 +4,10 @@ import type { HarmonicLimitCheck } from '../limits/checkVoltageHarmonicLimits.js
 import type { LegLosses } from '../losses/legLossesFromSamples.js';
 import type { SemiconductorDevice } from '../losses/lossTypes.js';
 import type { MotorFigures } from '../load/MotorFigures.js';
+import type {
+  MultilevelCarrierArrangement,
+  MultilevelTopology,
+} from '../multilevel/MultilevelTypes.js';
 import type { LabelledHarmonic } from '../spectrum/labelHarmonics.js';
 import type { ReducedCommonModeRange } from '../three-phase/reducedCommonModeRange.js';
 import type { Waveform } from '../waveform/Waveform.js';
@@ -129,18 +133,76 @@ export interface CommonModeFigures {
 }
 
 /**
- * How often the legs of a three-phase bridge switch: the cost side of the discontinuous clamps
- * and of the reduced common-mode methods (each edge of a leg voltage is one turn-off and one
- * turn-on in that leg).
+ * How often the legs of a three-phase bridge (or of any multilevel bridge) switch: the cost side
+ * of the discontinuous clamps and of the reduced common-mode methods (each edge of a two-level
+ * leg voltage is one turn-off and one turn-on in that leg), and what puts a multilevel design
+ * and a two-level one side by side at equal device switching frequency.
  */
 export interface SwitchingFigures {
   /** Edges of leg a's voltage per fundamental period (every leg has as many by symmetry). */
   legEdgesPerPeriod: number;
   /**
-   * Turn-ons of each switch per second, averaged over the period: legEdgesPerPeriod/2 times the
-   * fundamental frequency, hertz (equal to the carrier frequency for continuous PWM).
+   * Turn-ons of a switch per second, averaged over the period, hertz: for a two-level leg
+   * legEdgesPerPeriod/2 times the fundamental frequency (the carrier frequency for continuous
+   * PWM); for a multilevel bridge the mean over every device of every leg of its own turn-ons
+   * (`MultilevelFigures.averageDeviceFrequency`).
    */
   averageDeviceFrequency: number;
+}
+
+/** One leg (string) of a multilevel bridge in the report. */
+export interface MultilevelLegFigures {
+  /** `leg a`, `leg b`, `leg c`, or `string a`, … for a cascaded bridge. */
+  name: string;
+  /** The distinct voltages its output takes over the period, volts, ascending. */
+  levels: number[];
+  /** Edges of its output per fundamental period. */
+  edgesPerPeriod: number;
+  /** Its output over one period, volts: to the DC midpoint, or to its neutral end (cascaded). */
+  waveform: Waveform;
+}
+
+/** How often one device turns on. */
+export interface DeviceSwitchingFigures {
+  /** The switch's name (`S1`…`S4`, `cell 2 upper`, `cell 1 left upper`, …). */
+  name: string;
+  /** 0 → 1 steps of its gate signal per fundamental period. */
+  turnOnsPerPeriod: number;
+  /** turnOnsPerPeriod times the fundamental frequency, hertz. */
+  switchingFrequency: number;
+}
+
+/**
+ * The multilevel figures of a design (null in a two-level design's report): topology, levels,
+ * carriers, each leg's output, leg a's cells, the device switching frequencies, and the balance
+ * of the inner capacitors or sources at the design's load.
+ */
+export interface MultilevelFigures {
+  topology: MultilevelTopology;
+  topologyLabel: string;
+  /** Output levels of one leg (one string for a cascaded bridge). */
+  levels: number;
+  /** The carrier arrangement; null for space vector. */
+  carriers: MultilevelCarrierArrangement | null;
+  carriersLabel: string | null;
+  /** Every leg (string) of the bridge: two for a single-phase full bridge, one single-phase string, three for three-phase. */
+  legs: MultilevelLegFigures[];
+  /**
+   * Leg a's cells, outermost (cell 1) first, for the level-by-level chart: a cascaded cell's
+   * output voltage (volts, −vdc, 0 or +vdc); a flying-capacitor commutation cell's state (its
+   * upper switch, 0 or 1). Empty for NPC and T-type legs.
+   */
+  cells: { name: string; waveform: Waveform }[];
+  /** Every device of leg a, top to bottom (cell by cell), with how often it turns on. */
+  devices: DeviceSwitchingFigures[];
+  /** Mean over every device of every leg of its switching frequency, hertz. */
+  averageDeviceFrequency: number;
+  /**
+   * The rate at which leg a's output steps, hertz: its edges per period over 2 times the
+   * fundamental frequency (fc for level-shifted carriers, N·fc for N phase-shifted
+   * flying-capacitor cells, 2N·fc for a cascaded string of N phase-shifted cells).
+   */
+  effectiveOutputFrequency: number;
 }
 
 /**
@@ -240,12 +302,20 @@ export interface DesignReport {
   output: (VoltageFigures & { series: PeriodSeries }) | null;
   /** Currents of each phase; empty with neither load nor filter. */
   currents: PhaseCurrents[];
-  /** The current drawn from the DC bus; null with neither load nor filter, or for a staircase (one source a cell). */
+  /**
+   * The current drawn from the DC bus; null with neither load nor filter, for a staircase (one
+   * source a cell), and for a multilevel bridge, whose DC side carries more than one current (the
+   * rails and the midpoint of an NPC or T-type link, a source per cascaded cell, flying
+   * capacitors in series with the rails), so no one i_dc describes it: `multilevel.balance` holds
+   * the figures of the inner capacitors and sources.
+   */
   dcLink: DcLinkFigures | null;
   /** The common-mode voltage (three-phase only). */
   commonMode: CommonModeFigures | null;
-  /** How often the legs switch (three-phase only). */
+  /** How often the legs switch (three-phase two-level and every multilevel bridge). */
   switching: SwitchingFigures | null;
+  /** The multilevel figures; null for a two-level bridge or a staircase pattern. */
+  multilevel: MultilevelFigures | null;
   /** Mean power into the load resistance, all phases together, watts; null without a load. */
   loadPower: number | null;
   /**

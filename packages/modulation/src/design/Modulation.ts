@@ -1,4 +1,5 @@
 import type { SineTriangleOptions } from '../carrier/sineTriangle.js';
+import type { MultilevelCarrierOptions } from '../multilevel/MultilevelTypes.js';
 import type { SheKind } from '../she/SheKind.js';
 import type { SpaceVectorWaveformOptions } from '../space-vector/spaceVectorWaveforms.js';
 import type { ThreePhaseOptions } from '../three-phase/threePhase.js';
@@ -39,6 +40,15 @@ export type HarmonicEliminationModulation = {
 export type OptimalPatternModulation = { method: 'optimal-pattern' } & StoredPatternFields;
 
 /**
+ * A multilevel bridge (NPC, T-type, flying-capacitor or cascaded H-bridge legs) under
+ * level-shifted or phase-shifted carrier PWM: the fields of `multilevelCarrier` (conventions in
+ * `MultilevelCarrierOptions`; its `phaseCount` says whether the bridge is single- or three-phase).
+ */
+export type MultilevelCarrierModulation = {
+  method: 'multilevel-carrier';
+} & MultilevelCarrierOptions;
+
+/**
  * Every modulation method the library offers, discriminated on `method`. Each variant carries
  * the fields of the library function that builds it, DC bus and frequency ratio included; an
  * `InverterDesign` holds the same without those two, which the design supplies.
@@ -48,7 +58,8 @@ export type Modulation =
   | ThreePhaseCarrierModulation
   | SpaceVectorModulation
   | HarmonicEliminationModulation
-  | OptimalPatternModulation;
+  | OptimalPatternModulation
+  | MultilevelCarrierModulation;
 
 /** The `method` names. */
 export type ModulationMethod = Modulation['method'];
@@ -60,6 +71,7 @@ export const MODULATION_METHODS: readonly ModulationMethod[] = [
   'space-vector',
   'selective-harmonic-elimination',
   'optimal-pattern',
+  'multilevel-carrier',
 ];
 
 /** A label a person reads for each method. */
@@ -69,9 +81,13 @@ export const MODULATION_METHOD_LABELS: Readonly<Record<ModulationMethod, string>
   'space-vector': 'Three-phase space vector',
   'selective-harmonic-elimination': 'Selective harmonic elimination pattern',
   'optimal-pattern': 'Optimal pulse pattern',
+  'multilevel-carrier': 'Multilevel carrier (level- or phase-shifted)',
 };
 
-/** The methods that drive a three-phase bridge (the others drive a single-phase bridge). */
+/**
+ * The methods that always drive a three-phase bridge. A multilevel carrier modulation drives
+ * the bridge its own `phaseCount` says, so it is in neither list: ask `modulationPhaseCount`.
+ */
 export const THREE_PHASE_METHODS: readonly ModulationMethod[] = ['three-phase', 'space-vector'];
 
 /** The methods with a carrier (or switching period) whose frequency the design sets. */
@@ -79,6 +95,7 @@ export const CARRIER_METHODS: readonly ModulationMethod[] = [
   'sine-triangle',
   'three-phase',
   'space-vector',
+  'multilevel-carrier',
 ];
 
 /** The methods given by stored first-quarter angles. */

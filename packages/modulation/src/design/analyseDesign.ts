@@ -54,6 +54,7 @@ import { modulationVoltages, type NamedVoltage } from './modulationVoltages.js';
 import { spectrumLabelRatio } from './spectrumLabelRatio.js';
 import { voltageFigures } from './voltageFigures.js';
 import { modulatorSignals } from './modulatorSignals.js';
+import { multilevelFigures } from './multilevelFigures.js';
 import { switchingLegs } from './switchingLegs.js';
 import { assertSemiconductorDevice } from '../losses/assertSemiconductorDevice.js';
 import { synthesisePeriod, synthesisSize } from './synthesisePeriod.js';
@@ -228,7 +229,7 @@ export function analyseDesign(
       ? voltages.legs.map((v) => v.waveform)
       : voltages.phases.map((v) => v.waveform);
   const dcLink =
-    inverterSamples.length === 0 || staircase
+    inverterSamples.length === 0 || staircase || voltages.multilevel !== undefined
       ? null
       : dcLinkFigures(switching, inverterSamples, {
           vdc: design.vdc,
@@ -241,17 +242,35 @@ export function analyseDesign(
     voltages.phaseCount === 3
       ? commonModeFigures(
           voltages.legs.map((v) => v.waveform),
-          { maxOrder, frequencyRatio, label, reducedRange: reducedRangeOf(design) },
+          {
+            maxOrder,
+            frequencyRatio,
+            label,
+            reducedRange: reducedRangeOf(design),
+            name:
+              voltages.multilevel?.topology === 'cascaded-h-bridge'
+                ? "common mode, star point to the strings' neutral"
+                : 'common mode, star point to DC midpoint',
+          },
         )
       : null;
+  const multilevel =
+    voltages.multilevel === undefined
+      ? null
+      : multilevelFigures(modulation, voltages.multilevel, frequency);
   const legA = voltages.legs[0];
   const legSwitching =
-    legA === undefined
-      ? null
-      : {
-          legEdgesPerPeriod: legA.waveform.edges.length,
-          averageDeviceFrequency: (legA.waveform.edges.length / 2) * frequency,
-        };
+    multilevel !== null
+      ? {
+          legEdgesPerPeriod: multilevel.legs[0]?.edgesPerPeriod ?? 0,
+          averageDeviceFrequency: multilevel.averageDeviceFrequency,
+        }
+      : legA === undefined
+        ? null
+        : {
+            legEdgesPerPeriod: legA.waveform.edges.length,
+            averageDeviceFrequency: (legA.waveform.edges.length / 2) * frequency,
+          };
 
   const legs =
     device === null || dcLink === null ? null : switchingLegs(modulation, voltages, design.vdc);
@@ -290,6 +309,7 @@ export function analyseDesign(
     dcLink,
     commonMode,
     switching: legSwitching,
+    multilevel,
     loadPower,
     losses,
     motor:

@@ -1,6 +1,8 @@
 import { assertNumberInRange, assertOneOf } from '../validation/assertions.js';
 import { ParameterRangeError, ParameterTypeError } from '../validation/errors.js';
 import { DAMPING_PLACEMENTS } from '../filter/LcFilterOptions.js';
+import { assertMultilevelCarrierOptions } from '../multilevel/carrier/assertMultilevelCarrierOptions.js';
+import { withFieldPrefix } from '../validation/withFieldPrefix.js';
 import { DESIGN_BOUNDS, MAX_PATTERN_ANGLES, type DesignBoundsField } from './designBounds.js';
 import type { InverterDesign } from './InverterDesign.js';
 import { designFrequencyRatio } from './designFrequencyRatio.js';
@@ -71,6 +73,16 @@ export function assertInverterDesign(design: unknown): asserts design is Inverte
           order,
         );
     });
+  }
+  if (modulation.method === 'multilevel-carrier') {
+    // The design's bounds first, then the topology's own levels and carriers (multilevelCarrier's
+    // assertion, with the DC bus and frequency ratio the design supplies).
+    check('modulation.levels', modulation.levels);
+    if (modulation.phaseCount !== undefined) check('modulation.phaseCount', modulation.phaseCount);
+    const mf = designFrequencyRatio(value as unknown as InverterDesign);
+    withFieldPrefix('modulation.', () =>
+      assertMultilevelCarrierOptions({ ...modulation, vdc: value.vdc, mf }),
+    );
   }
   assertDesignLoad(value.load, check);
   assertDesignFilter(value.filter, check);

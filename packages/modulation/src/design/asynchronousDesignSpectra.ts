@@ -41,6 +41,14 @@ export interface AsynchronousDesignSpectra {
   voltages: AsynchronousVoltage[];
 }
 
+/**
+ * The carrier methods whose voltages can be built over several fundamental periods (a carrier
+ * span); a multilevel carrier modulation is built over one period, so it needs a whole mf.
+ */
+const ASYNCHRONOUS_METHODS: readonly ModulationMethod[] = CARRIER_METHODS.filter(
+  (m) => m !== 'multilevel-carrier',
+);
+
 /** Options of {@link asynchronousDesignSpectra}. */
 export interface AsynchronousDesignOptions {
   /** Highest order in fundamentals, an integer ≥ 1 with p·q·maxOrder ≤ 2e7. @default min(50, that bound) */
@@ -64,10 +72,10 @@ export function asynchronousDesignSpectra(
   options: AsynchronousDesignOptions = {},
 ): AsynchronousDesignSpectra {
   const method = (design.modulation as { method?: unknown } | undefined)?.method;
-  if (!CARRIER_METHODS.includes(method as ModulationMethod)) {
+  if (!ASYNCHRONOUS_METHODS.includes(method as ModulationMethod)) {
     throw new ParameterRangeError(
       'modulation.method',
-      `one of ${CARRIER_METHODS.map((m) => `'${m}'`).join(', ')} (a method with a carrier)`,
+      `one of ${ASYNCHRONOUS_METHODS.map((m) => `'${m}'`).join(', ')} (a two-level method with a carrier)`,
       method,
     );
   }

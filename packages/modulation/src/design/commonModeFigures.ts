@@ -6,7 +6,7 @@ import { waveformMeanSquare } from '../waveform/waveformMeanSquare.js';
 import type { CommonModeFigures } from './DesignReport.js';
 
 /**
- * The common-mode voltage (v_a + v_b + v_c)/3 of three leg voltages, exact: its levels, RMS,
+ * The common-mode voltage (v_a + v_b + v_c)/3 of three leg (or cascaded string) voltages, exact: its levels, RMS,
  * steps (edges) per period and per carrier period, and spectrum (standard circuit analysis;
  * A. M. Hava and E. Ün, IEEE Trans. Power Electronics, 2009, for why the steps matter), with the
  * range of a reduced common-mode method passed through.
@@ -19,9 +19,11 @@ export function commonModeFigures(
     frequencyRatio: number | null;
     label: (s: readonly Harmonic[]) => CommonModeFigures['spectrum'];
     reducedRange: CommonModeFigures['reducedRange'];
+    /** What it is measured between (the DC midpoint of a bridge on one DC link). */
+    name: string;
   },
 ): CommonModeFigures {
-  const { maxOrder, frequencyRatio, label, reducedRange } = context;
+  const { maxOrder, frequencyRatio, label, reducedRange, name } = context;
   const waveform = combineWaveforms(legs, ([a = 0, b = 0, c = 0]) => (a + b + c) / 3);
   // Levels are sums of ±vdc/2 thirds: round away the last bits so equal levels compare equal.
   const levels = [...new Set(waveform.levels.map((level) => Number(level.toPrecision(12))))].sort(
@@ -29,7 +31,7 @@ export function commonModeFigures(
   );
   const steps = waveform.edges.length;
   return {
-    name: 'common mode, star point to DC midpoint',
+    name,
     waveform,
     levels,
     rms: Math.sqrt(waveformMeanSquare(waveform)),

@@ -6,6 +6,7 @@ export * from './designFrequencyRatio.js';
 export * from './designRationalRatio.js';
 export * from './asynchronousDesignSpectra.js';
 export * from './designModulation.js';
+export * from './modulationPhaseCount.js';
 export * from './modulationVoltages.js';
 export * from './defaultSpectrumOrder.js';
 export * from './DesignReport.js';

@@ -1,5 +1,7 @@
 import type { CarrierSpan } from '../carrier/CarrierSpan.js';
 import { sineTriangle } from '../carrier/sineTriangle.js';
+import { multilevelCarrier } from '../multilevel/carrier/multilevelCarrier.js';
+import type { MultilevelTopology, MultilevelWaveforms } from '../multilevel/MultilevelTypes.js';
 import { sheWaveform } from '../she/sheWaveform.js';
 import { spaceVectorWaveforms } from '../space-vector/spaceVectorWaveforms.js';
 import { threePhase } from '../three-phase/threePhase.js';
@@ -25,10 +27,15 @@ export interface ModulationVoltages {
    * voltages (standard circuit analysis). One entry per phase, a, b, c.
    */
   phases: NamedVoltage[];
-  /** Leg to DC-midpoint voltages (three-phase only; empty for a single-phase bridge). */
+  /**
+   * Leg to DC-midpoint voltages, or a cascaded string's to its neutral end (three-phase only;
+   * empty for a single-phase bridge).
+   */
   legs: NamedVoltage[];
   /** Line-to-line voltages a−b, b−c, c−a (three-phase only). */
   lines: NamedVoltage[];
+  /** A multilevel bridge's legs (strings), their switches and cells, as its method built them. */
+  multilevel?: MultilevelWaveforms & { topology: MultilevelTopology };
 }
 
 const PHASE_NAMES = ['a', 'b', 'c'] as const;
@@ -70,18 +77,52 @@ export function modulationVoltages(
       const result = spaceVectorWaveforms(options);
       return threePhaseVoltages([result.a, result.b, result.c]);
     }
+    case 'multilevel-carrier': {
+      const { method: _method, ...options } = modulation;
+      return multilevelVoltages(multilevelCarrier(options), modulation.topology);
+    }
   }
+}
+
+/**
+ * A multilevel bridge's voltages: three legs (strings) in star as a two-level three-phase
+ * bridge's, each leg named `leg a to DC midpoint` (a cascaded string `string a to its neutral`);
+ * a single-phase `bridge output`, leg a − leg b of a full bridge or the one cascaded string.
+ */
+function multilevelVoltages(
+  waveforms: MultilevelWaveforms,
+  topology: MultilevelTopology,
+): ModulationVoltages {
+  const outputs = waveforms.legs.map((leg) => leg.output);
+  const multilevel = { ...waveforms, topology };
+  if (waveforms.phaseCount === 3) {
+    const legName =
+      topology === 'cascaded-h-bridge'
+        ? (p: string) => `string ${p} to its neutral`
+        : (p: string) => `leg ${p} to DC midpoint`;
+    return {
+      ...threePhaseVoltages(outputs as [Waveform, Waveform, Waveform], legName),
+      multilevel,
+    };
+  }
+  const [a, b] = outputs as [Waveform, Waveform | undefined];
+  const output =
+    b === undefined ? a : combineWaveforms([a, b], ([own = 0, other = 0]) => own - other);
+  return { ...singlePhase('bridge output', output), multilevel };
 }
 
 function singlePhase(name: string, waveform: Waveform): ModulationVoltages {
   return { phaseCount: 1, phases: [{ name, waveform }], legs: [], lines: [] };
 }
 
-function threePhaseVoltages(legs: [Waveform, Waveform, Waveform]): ModulationVoltages {
+function threePhaseVoltages(
+  legs: [Waveform, Waveform, Waveform],
+  legName = (phase: string): string => `leg ${phase} to DC midpoint`,
+): ModulationVoltages {
   const at = (k: number): Waveform => legs[((k % 3) + 3) % 3] as Waveform;
   return {
     phaseCount: 3,
-    legs: PHASE_NAMES.map((p, k) => ({ name: `leg ${p} to DC midpoint`, waveform: at(k) })),
+    legs: PHASE_NAMES.map((p, k) => ({ name: legName(p), waveform: at(k) })),
     phases: PHASE_NAMES.map((p, k) => ({
       name: `phase ${p} to star point`,
       waveform: combineWaveforms(

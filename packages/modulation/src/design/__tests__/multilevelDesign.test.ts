@@ -1,0 +1,259 @@
+import { describe, expect, it } from 'vitest';
+import { multilevelCarrier } from '../../multilevel/carrier/multilevelCarrier.js';
+import { harmonics } from '../../spectrum/harmonics.js';
+import { waveformThd } from '../../spectrum/waveformThd.js';
+import { waveformWthd } from '../../spectrum/waveformWthd.js';
+import { assertInDelta } from '../../testing/assertInDelta.js';
+import { rangeErrorField } from '../../testing/rangeErrorField.js';
+import { combineWaveforms } from '../../waveform/combineWaveforms.js';
+import type { Waveform } from '../../waveform/Waveform.js';
+import { waveformValueAt } from '../../waveform/waveformValueAt.js';
+import { analyseDesign } from '../analyseDesign.js';
+import { assertInverterDesign } from '../assertInverterDesign.js';
+import type { DesignModulation, InverterDesign } from '../InverterDesign.js';
+import { modulationPhaseCount } from '../modulationPhaseCount.js';
+
+type MultilevelDesignModulation = Extract<DesignModulation, { method: 'multilevel-carrier' }>;
+
+const design = (
+  modulation: Omit<MultilevelDesignModulation, 'method'>,
+  mf: number,
+  extra: Partial<InverterDesign> = {},
+): InverterDesign => ({
+  vdc: 800,
+  fundamentalFrequency: 50,
+  carrierFrequency: 50 * mf,
+  modulation: { method: 'multilevel-carrier', ...modulation },
+  ...extra,
+});
+
+/** The library's own waveforms for the same design (the design supplies vdc and mf). */
+const library = (modulation: Omit<MultilevelDesignModulation, 'method'>, mf: number) =>
+  multilevelCarrier({ ...modulation, vdc: 800, mf });
+
+const npc = { topology: 'npc', levels: 3, carriers: 'pd', phaseCount: 3, ma: 0.9 } as const;
+
+describe('analyseDesign: multilevel carrier designs', () => {
+  it('reports phase a to star point of the library’s legs: the same harmonics, THD and WTHD', () => {
+    const options = { ...npc, zeroSequence: 'min-max' } as const;
+    const report = analyseDesign(design(options, 39), { maxOrder: 400 });
+    const { legs } = library(options, 39);
+    const [a, b, c] = legs.map((leg) => leg.output) as [Waveform, Waveform, Waveform];
+    // A balanced star load sees (2·v_a − v_b − v_c)/3 (standard circuit analysis).
+    const phaseA = combineWaveforms([a, b, c], ([x = 0, y = 0, z = 0]) => (2 * x - y - z) / 3);
+    const expected = harmonics(phaseA, 400);
+    expect(report.bridge.name).toBe('phase a to star point');
+    report.bridge.spectrum.forEach((h, order) =>
+      assertInDelta(h.amplitude, expected[order]?.amplitude ?? NaN, 1e-9, `order ${order}`),
+    );
+    assertInDelta(report.bridge.thd, waveformThd(phaseA), 1e-12, 'THD');
+    assertInDelta(report.bridge.wthd, waveformWthd(phaseA), 1e-12, 'WTHD');
+    // Linear range: the phase fundamental is ma·vdc/2, the sidebands carrying the rest (Holmes
+    // and Lipo, 2003, ch. 11; min-max keeps it linear to 2/√3). Within 1 % at mf 39.
+    assertInDelta(report.bridge.fundamental, 0.9 * 400, 3.6, 'fundamental');
+    expect(report.voltages.map((v) => v.name)).toContain('leg a to DC midpoint');
+    expect(report.multilevel?.legs.map((leg) => leg.levels)).toEqual([
+      [-400, 0, 400],
+      [-400, 0, 400],
+      [-400, 0, 400],
+    ]);
+  });
+
+  it('a three-phase NPC bridge under PD has no carrier harmonic in its line voltage (Holmes and Lipo 2003, ch. 11)', () => {
+    const mf = 21;
+    const report = analyseDesign(design(npc, mf), { maxOrder: 100 });
+    const legA = harmonics(
+      report.voltages.find((v) => v.name === 'leg a to DC midpoint')!.waveform,
+      100,
+    );
+    const line = report.lineToLine!;
+    // PD puts a large carrier harmonic at mf in each leg, in phase in all three, so it cancels
+    // between lines (McGrath and Holmes, IEEE Trans. Ind. Electron., 2002); the issue's bound
+    // for the double Fourier checks is 1e-3 of vdc.
+    expect(legA[mf]?.amplitude ?? 0).toBeGreaterThan(0.05 * 800);
+    expect(line.spectrum[mf]?.amplitude ?? NaN).toBeLessThan(1e-3 * 800);
+  });
+
+  it('PD gives a lower line THD than POD and APOD (McGrath and Holmes, 2002; Holmes and Lipo 2003, ch. 11)', () => {
+    const thdOf = (carriers: 'pd' | 'pod' | 'apod') =>
+      analyseDesign(design({ ...npc, topology: 'cascaded-h-bridge', levels: 5, carriers }, 39))
+        .lineToLine!.thd;
+    expect(thdOf('pd')).toBeLessThan(thdOf('pod'));
+    expect(thdOf('pd')).toBeLessThan(thdOf('apod'));
+  });
+
+  it('a single-phase NPC design is a full bridge: bridge output = leg a − leg b, five levels', () => {
+    const options = { ...npc, phaseCount: 1 } as const;
+    const report = analyseDesign(design(options, 40));
+    const { legs } = library(options, 40);
+    const [a, b] = legs.map((leg) => leg.output) as [Waveform, Waveform];
+    const output = combineWaveforms([a, b], ([x = 0, y = 0]) => x - y);
+    expect(report.phaseCount).toBe(1);
+    expect(report.bridge.name).toBe('bridge output');
+    assertInDelta(report.bridge.thd, waveformThd(output), 1e-12, 'THD');
+    // The full bridge's output spans ±vdc in vdc/2 steps (common practice).
+    expect(new Set(report.voltages[0]!.waveform.levels)).toEqual(
+      new Set([-800, -400, 0, 400, 800]),
+    );
+    // A single-phase bridge has no legs or lines in `voltages`, as the two-level bridges.
+    expect(report.voltages).toHaveLength(1);
+    expect(report.lineToLine).toBeNull();
+  });
+
+  it('a cascaded string: legs named as strings, cells of string a, and 2N·fc effective frequency with N phase-shifted cells', () => {
+    const mf = 21;
+    const cells = 3;
+    const report = analyseDesign(
+      design(
+        {
+          topology: 'cascaded-h-bridge',
+          levels: 2 * cells + 1,
+          carriers: 'phase-shifted',
+          phaseCount: 3,
+          ma: 0.9,
+        },
+        mf,
+      ),
+    );
+    const multilevel = report.multilevel!;
+    expect(report.voltages.map((v) => v.name)).toContain('string a to its neutral');
+    expect(multilevel.cells.map((cell) => cell.name)).toEqual(['cell 1', 'cell 2', 'cell 3']);
+    // The cells sum to the string's output (each on its own source vdc; Holmes and Lipo ch. 11).
+    const string = multilevel.legs[0]!.waveform;
+    const summed = combineWaveforms(
+      multilevel.cells.map((cell) => cell.waveform),
+      (values) => values.reduce((s, v) => s + v, 0),
+    );
+    for (const theta of [0.1, 0.7, 1.3, 2.9, 4.4, 5.8])
+      assertInDelta(
+        waveformValueAt(summed, theta),
+        waveformValueAt(string, theta),
+        1e-9,
+        `θ ${theta}`,
+      );
+    // Phase-shifted carriers over N unipolar cells step the string 2N times a carrier period
+    // (issue 13; McGrath and Holmes, 2002): 2N·fc within the pulses the peaks drop (5 %).
+    const fc = 50 * mf;
+    expect(Math.abs(multilevel.effectiveOutputFrequency - 2 * cells * fc)).toBeLessThan(
+      0.05 * 2 * cells * fc,
+    );
+    // And the first carrier group of the string's voltage sits at 2N·mf: nothing near mf.
+    const spectrum = harmonics(string, 2 * cells * mf + 10);
+    const nearMf = spectrum.slice(mf - 6, mf + 7).reduce((s, h) => Math.max(s, h.amplitude), 0);
+    expect(nearMf).toBeLessThan(1e-3 * 800);
+    expect(report.commonMode?.name).toBe("common mode, star point to the strings' neutral");
+  });
+
+  it('device switching frequencies: the report’s mean is the mean over every device of the library’s switches', () => {
+    const options = {
+      topology: 'flying-capacitor',
+      levels: 5,
+      carriers: 'phase-shifted',
+      phaseCount: 3,
+      ma: 0.8,
+    } as const;
+    const mf = 30;
+    const report = analyseDesign(design(options, mf));
+    const { legs } = library(options, mf);
+    const turnOns = legs.flatMap((leg) =>
+      leg.switches.map(
+        ({ on }) =>
+          on.levels.filter(
+            (level, i) =>
+              level === 1 && on.levels[(i - 1 + on.levels.length) % on.levels.length] === 0,
+          ).length,
+      ),
+    );
+    const mean = (turnOns.reduce((s, n) => s + n, 0) / turnOns.length) * 50;
+    assertInDelta(report.switching!.averageDeviceFrequency, mean, 1e-9, 'mean device frequency');
+    assertInDelta(report.multilevel!.averageDeviceFrequency, mean, 1e-9, 'multilevel section');
+    // Each flying-capacitor cell compares the whole reference with its own carrier, so every
+    // device switches once a carrier period below overmodulation (Holmes and Lipo ch. 11), and
+    // the leg output steps at (levels − 1)·fc (issue 13).
+    for (const device of report.multilevel!.devices)
+      expect(device.switchingFrequency).toBe(50 * mf);
+    assertInDelta(
+      report.multilevel!.effectiveOutputFrequency,
+      4 * 50 * mf,
+      0.02 * 4 * 50 * mf,
+      'effective',
+    );
+    expect(report.dcLink).toBeNull();
+  });
+
+  it('the modulator chart holds every carrier: the leg’s level index is the count of carriers below the reference', () => {
+    for (const options of [
+      {
+        topology: 'flying-capacitor',
+        levels: 4,
+        carriers: 'phase-shifted',
+        phaseCount: 1,
+        ma: 0.85,
+      },
+      {
+        topology: 'npc',
+        levels: 3,
+        carriers: 'apod',
+        phaseCount: 3,
+        ma: 0.85,
+        zeroSequence: 'third-harmonic',
+      },
+      { topology: 'cascaded-h-bridge', levels: 5, carriers: 'pod', phaseCount: 1, ma: 0.85 },
+    ] as const) {
+      const report = analyseDesign(design(options, 15));
+      const modulator = report.modulator!;
+      expect(modulator.carriers).toHaveLength(options.levels - 1);
+      const leg = report.multilevel!.legs[0]!;
+      const low = leg.levels[0]!;
+      const step = (leg.levels.at(-1)! - low) / (options.levels - 1);
+      let compared = 0;
+      modulator.angles.forEach((theta, k) => {
+        const margins = modulator.carriers!.map((carrier) => modulator.reference[k]! - carrier[k]!);
+        // Skip samples next to a crossing; natural sampling switches exactly at each one.
+        if (margins.some((m) => Math.abs(m) < 1e-6)) return;
+        const above = margins.filter((m) => m > 0).length;
+        assertInDelta(
+          waveformValueAt(leg.waveform, theta),
+          low + above * step,
+          1e-9,
+          `${options.topology} θ ${theta}`,
+        );
+        compared++;
+      });
+      expect(compared).toBeGreaterThan(1000);
+    }
+  });
+
+  it('errors name the field by its path in the design and the allowed range', () => {
+    const cases: [Record<string, unknown>, string, RegExp][] = [
+      [{ ...npc, levels: 5 }, 'modulation.levels', /3 for topology 'npc'/],
+      [{ ...npc, topology: 'cascaded-h-bridge', levels: 6 }, 'modulation.levels', /odd/],
+      [{ ...npc, levels: 19 }, 'modulation.levels', /≤ 17/],
+      [
+        { ...npc, carriers: 'phase-shifted' },
+        'modulation.carriers',
+        /'pd', 'pod', 'apod' for topology 'npc'/,
+      ],
+      [{ ...npc, topology: 'hexagonal' }, 'modulation.topology', /one of/],
+      [{ ...npc, phaseCount: 2 }, 'modulation.phaseCount', /1 or 3/],
+      [
+        { ...npc, phaseCount: 1, zeroSequence: 'min-max' },
+        'modulation.zeroSequence',
+        /single-phase/,
+      ],
+      [{ ...npc, ma: 5 }, 'modulation.ma', /≤ 4/],
+    ];
+    for (const [modulation, field, words] of cases) {
+      const bad = design(modulation as never, 21);
+      expect(rangeErrorField(() => assertInverterDesign(bad))).toBe(field);
+      expect(() => analyseDesign(bad)).toThrow(words);
+    }
+  });
+
+  it('the phase count is the modulation’s own', () => {
+    expect(modulationPhaseCount({ method: 'multilevel-carrier', ...npc })).toBe(3);
+    expect(modulationPhaseCount({ method: 'multilevel-carrier', ...npc, phaseCount: 1 })).toBe(1);
+    expect(modulationPhaseCount({ method: 'space-vector', ma: 0.5 })).toBe(3);
+    expect(modulationPhaseCount({ method: 'sine-triangle', scheme: 'bipolar', ma: 0.5 })).toBe(1);
+  });
+});
