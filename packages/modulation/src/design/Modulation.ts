@@ -24,6 +24,11 @@ export interface StoredPatternFields {
   vdc: number;
   /** First-quarter switching angles, radians, strictly ascending in (0, π/2). */
   angles: number[];
+  /**
+   * Staircase only: each cell's DC source, volts (> 0), one per angle, cell k switching at angle
+   * k (cascaded cells on unequal sources; see `sheWaveform`). Every cell at vdc when left out.
+   */
+  cellVoltages?: number[];
   /** The fundamental the angles were solved for, peak volts (a record; figures come from the angles). */
   fundamental?: number;
 }

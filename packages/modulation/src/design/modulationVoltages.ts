@@ -61,6 +61,7 @@ export function modulationVoltages(
       const waveform = sheWaveform(modulation.angles, {
         kind: modulation.kind,
         vdc: modulation.vdc,
+        cellVoltages: modulation.cellVoltages,
       });
       return singlePhase(
         modulation.kind === 'staircase' ? 'staircase output' : 'bridge output',

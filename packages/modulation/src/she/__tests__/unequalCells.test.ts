@@ -4,6 +4,7 @@ import { waveformValueAt } from '../../waveform/waveformValueAt.js';
 import { sheSweep, sheWaveform, solveShe, type SheResult } from '../index.js';
 import { assertInDelta } from '../../testing/assertInDelta.js';
 import { rangeErrorField } from '../../testing/rangeErrorField.js';
+import { analyseDesign } from '../../design/analyseDesign.js';
 
 // Staircase selective harmonic elimination with unequal DC sources, one per cascaded cell (cell k
 // switching at the k-th first-quarter angle): b_n = (4/(nπ))·Σ V_k·cos(nα_k) on odd n (L. M.
@@ -263,5 +264,46 @@ describe('sheSweep, staircase of unequal DC sources', () => {
         sheSweep({ ...base, fundamentals: { from: 1000, to: 1500, points: 3 } }),
       ),
     ).toBe('fundamentals.to');
+  });
+});
+
+describe('a stored staircase pattern of unequal sources in a design', () => {
+  const cellVoltages = [420, 380, 350];
+  const fundamental = 0.8 * ((4 * (420 + 380 + 350)) / Math.PI);
+  const solved = solveShe({
+    kind: 'staircase',
+    vdc: 400,
+    count: 3,
+    eliminate: [5, 7],
+    fundamental,
+    cellVoltages,
+  });
+  const design = (cells: number[]) => ({
+    vdc: 400,
+    fundamentalFrequency: 50,
+    modulation: {
+      method: 'selective-harmonic-elimination' as const,
+      kind: 'staircase' as const,
+      angles: solved.angles,
+      cellVoltages: cells,
+      eliminate: [5, 7],
+    },
+  });
+
+  it('the report draws the staircase of those sources: its fundamental and eliminated orders', () => {
+    const report = analyseDesign(design(cellVoltages));
+    // The same exact spectrum as the solved waveform (Tolbert et al. 2005 closed form, above).
+    assertInDelta(report.bridge.fundamental, fundamental, 1e-9 * fundamental, 'fundamental');
+    for (const order of [5, 7])
+      expect(report.bridge.spectrum[order]?.amplitude ?? NaN).toBeLessThan(1e-10 * fundamental);
+  });
+
+  it('names modulation.cellVoltages for bad sources', () => {
+    expect(rangeErrorField(() => analyseDesign(design([420, 0, 350])))).toBe(
+      'modulation.cellVoltages[1]',
+    );
+    expect(rangeErrorField(() => analyseDesign(design([420, 380])))).toBe(
+      'modulation.cellVoltages.length',
+    );
   });
 });
