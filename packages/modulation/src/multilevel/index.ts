@@ -4,3 +4,4 @@ export * from './carrier/multilevelCarrier.js';
 export * from './cascaded-pattern/CascadedCellPattern.js';
 export * from './cascaded-pattern/cascadedPatternWaveform.js';
 export * from './cascaded-pattern/solveCascadedPattern.js';
+export * from './space-vector/index.js';

@@ -1,0 +1,4 @@
+export * from './threeLevelSpaceVectorTypes.js';
+export * from './threeLevelSpaceVector.js';
+export * from './threeLevelSpaceVectorSequence.js';
+export * from './threeLevelSpaceVectorWaveforms.js';
