@@ -7,20 +7,14 @@
  */
 import { HALF_PI } from '../math.js';
 
-/** Calls `visit(low, high, k)` for each gap of each block, k indexing the gap's upper angle. */
-function forEachGap(
-  angles: readonly number[],
-  blockSize: number,
-  visit: (low: number, high: number, lowIndex: number, highIndex: number) => void,
-): void {
-  for (let start = 0; start < angles.length; start += blockSize) {
-    const end = Math.min(start + blockSize, angles.length);
-    for (let k = start; k <= end; k++) {
-      const low = k === start ? 0 : (angles[k - 1] as number);
-      const high = k === end ? HALF_PI : (angles[k] as number);
-      visit(low, high, k === start ? -1 : k - 1, k === end ? -1 : k);
-    }
-  }
+/** The lower end of gap k in the block of angles [start, end): 0 for the block's first gap. */
+function gapLow(angles: readonly number[], start: number, k: number): number {
+  return k === start ? 0 : (angles[k - 1] as number);
+}
+
+/** The upper end of gap k in the block of angles [start, end): π/2 for the block's last gap. */
+function gapHigh(angles: readonly number[], end: number, k: number): number {
+  return k === end ? HALF_PI : (angles[k] as number);
 }
 
 /** The largest t ≤ 1 such that α + t·δ keeps every gap above (1 − fraction) of its size. */
@@ -31,21 +25,28 @@ export function maxOrderedStep(
   fraction = 0.9,
 ): number {
   let t = 1;
-  forEachGap(angles, blockSize, (low, high, lowIndex, highIndex) => {
-    const dLow = lowIndex < 0 ? 0 : (step[lowIndex] as number);
-    const dHigh = highIndex < 0 ? 0 : (step[highIndex] as number);
-    const shrink = dLow - dHigh;
-    if (shrink > 0) t = Math.min(t, (fraction * (high - low)) / shrink);
-  });
+  for (let start = 0; start < angles.length; start += blockSize) {
+    const end = Math.min(start + blockSize, angles.length);
+    for (let k = start; k <= end; k++) {
+      const shrink =
+        (k === start ? 0 : (step[k - 1] as number)) - (k === end ? 0 : (step[k] as number));
+      if (shrink > 0) {
+        const gap = gapHigh(angles, end, k) - gapLow(angles, start, k);
+        t = Math.min(t, (fraction * gap) / shrink);
+      }
+    }
+  }
   return t;
 }
 
 /** The smallest gap between neighbouring angles, or to 0 and π/2, in radians. */
 export function smallestGap(angles: readonly number[], blockSize = angles.length): number {
   let gap = Infinity;
-  forEachGap(angles, blockSize, (low, high) => {
-    gap = Math.min(gap, high - low);
-  });
+  for (let start = 0; start < angles.length; start += blockSize) {
+    const end = Math.min(start + blockSize, angles.length);
+    for (let k = start; k <= end; k++)
+      gap = Math.min(gap, gapHigh(angles, end, k) - gapLow(angles, start, k));
+  }
   return gap;
 }
 
