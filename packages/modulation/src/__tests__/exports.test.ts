@@ -114,6 +114,7 @@ const PUBLIC_NAMES = [
   'bestRationalApproximation',
   'carrierAngle',
   'carrierGroupOf',
+  'cascadedCellPower',
   'cascadedPatternWaveform',
   'checkGridCurrentLimits',
   'checkVoltageHarmonicLimits',
