@@ -15,3 +15,4 @@ export * from './voltageSpectrumFigures.js';
 export * from './analyseDesign.js';
 export * from './modulatorSignals.js';
 export * from './optionLabels.js';
+export * from './equalConditions.js';

@@ -1,0 +1,136 @@
+import { describe, expect, it } from 'vitest';
+import { analyseDesign, EXAMPLE_IGBT, type InverterDesign } from '../../index.js';
+import { assertInDelta } from '../../testing/assertInDelta.js';
+import { rangeErrorField } from '../../testing/rangeErrorField.js';
+import { equalConditions } from '../equalConditions.js';
+
+const f1 = 50;
+/** A three-phase drive at unity power factor (EMF chosen so the current is in phase; see designLosses.test). */
+function drive(zeroSequence: 'none' | 'dpwm1' | 'third-harmonic', mf = 99): InverterDesign {
+  const ma = 0.9;
+  const v = (ma * 650) / 2;
+  const peak = 30;
+  const x = 2 * Math.PI * f1 * 0.01;
+  return {
+    vdc: 650,
+    fundamentalFrequency: f1,
+    carrierFrequency: mf * f1,
+    modulation: { method: 'three-phase', ma, zeroSequence },
+    load: {
+      r: 8,
+      l: 0.01,
+      emf: {
+        amplitude: Math.hypot(v - peak * 8, peak * x),
+        phase: Math.atan2(-peak * x, v - peak * 8),
+      },
+    },
+    device: { ...EXAMPLE_IGBT },
+  };
+}
+const candidate = (design: InverterDesign) => ({ design, report: analyseDesign(design) });
+
+describe('equalConditions', () => {
+  it('equal average device switching frequency: DPWM1 runs its carrier 1.5× faster than SPWM', () => {
+    // A fact of the trade: a 120° clamp (60° about each peak) leaves each leg switching 2/3 of
+    // the period, so at equal average device switching frequency the carrier is 1.5× faster
+    // (A. M. Hava, R. J. Kerkman, T. A. Lipo, IEEE Trans. Power Electronics, 1999; J. W. Kolar,
+    // H. Ertl, F. C. Zach, IEEE Trans. Ind. Appl., 1991; from memory). With natural sampling at
+    // mf 99 a clamp's first and last carrier periods may still switch once: up to 4 edges of
+    // 132 at the four clamp boundaries a period, so within 0.03.
+    const spwm = candidate(drive('none'));
+    const dpwm = candidate(drive('dpwm1'));
+    const third = candidate(drive('third-harmonic'));
+    const result = equalConditions([spwm, dpwm, third], { condition: 'equal-device-frequency' });
+    expect(result.target).toBe(spwm.report.switching?.averageDeviceFrequency);
+    const [a, b, c] = result.candidates;
+    expect(a?.factor).toBe(1);
+    expect(a?.carrierFrequency).toBe(99 * f1);
+    assertInDelta(b?.wantedFactor ?? 0, 1.5, 0.03, 'DPWM1 factor');
+    // Rounded to a whole mf.
+    expect(b?.carrierFrequency).toBe(Math.round(99 * (b?.wantedFactor ?? 0)) * f1);
+    expect(b?.design.carrierFrequency).toBe(b?.carrierFrequency);
+    // A continuous sequence switches every carrier period: unchanged.
+    assertInDelta(c?.wantedFactor ?? 0, 1, 1e-12, 'third harmonic');
+    // The adjusted DPWM1 design's own report meets the condition within two mf steps (2/99):
+    // the rounding, and the clamp boundaries' partial periods at the new carrier.
+    const adjusted = analyseDesign(b?.design as InverterDesign);
+    assertInDelta(
+      adjusted.switching?.averageDeviceFrequency ?? 0,
+      result.target ?? 0,
+      (2 * (result.target ?? 0)) / 99,
+      'device frequency at the condition',
+    );
+  });
+
+  it('equal switching loss: DPWM1 at unity power factor may run its carrier about twice as fast', () => {
+    // DPWM1's switching-loss function at unity power factor is 0.5 (Kolar, Ertl, Zach 1991; Hava,
+    // Kerkman, Lipo 1998/1999; from memory), and switching loss is proportional to the carrier in
+    // the model: the factor is 1/0.5 = 2 within the ripple's effect (0.05), and the adjusted
+    // design's switching loss equals SPWM's within 2 %.
+    const spwm = candidate(drive('none'));
+    const dpwm = candidate(drive('dpwm1'));
+    const result = equalConditions([spwm, dpwm], { condition: 'equal-switching-loss' });
+    const adjusted = result.candidates[1];
+    assertInDelta(adjusted?.wantedFactor ?? 0, 2, 0.05, 'factor');
+    const loss = analyseDesign(adjusted?.design as InverterDesign).losses?.switching ?? 0;
+    assertInDelta(loss, result.target ?? 0, 0.02 * (result.target ?? 0), 'switching loss');
+  });
+
+  it('equal carrier leaves every design as it is; patterns and missing figures are noted, not scaled', () => {
+    const spwm = candidate(drive('none'));
+    const pattern = candidate({
+      vdc: 100,
+      fundamentalFrequency: f1,
+      modulation: {
+        method: 'selective-harmonic-elimination',
+        kind: 'bipolar',
+        angles: [0.3, 0.5, 0.9],
+      },
+      load: { r: 10, l: 0.01 },
+    });
+    const bridge = candidate({
+      vdc: 400,
+      fundamentalFrequency: f1,
+      carrierFrequency: 101 * f1,
+      modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8 },
+      load: { r: 5, l: 0.02 },
+    });
+    const same = equalConditions([spwm, pattern, bridge], { condition: 'equal-carrier' });
+    expect(same.candidates.map((c) => c.factor)).toEqual([1, 1, 1]);
+    expect(same.candidates[1]?.design).toBe(pattern.design);
+    const result = equalConditions([spwm, pattern, bridge], {
+      condition: 'equal-device-frequency',
+    });
+    expect(result.candidates[1]?.note).toContain('no carrier');
+    expect(result.candidates[2]?.note).toContain('single-phase');
+    // A factor past mf 1000 is refused for that candidate alone.
+    const slow = candidate(drive('none', 3));
+    const far = equalConditions([spwm, slow], {
+      condition: 'equal-device-frequency',
+      reference: 0,
+    });
+    expect(far.candidates[1]?.carrierFrequency).toBe(99 * f1);
+    const back = equalConditions([slow, spwm], { condition: 'equal-device-frequency' });
+    expect(back.candidates[1]?.carrierFrequency).toBe(3 * f1);
+  });
+
+  it('errors name the field and the allowed range', () => {
+    const spwm = candidate(drive('none'));
+    const { device: _device, ...bare } = drive('dpwm1');
+    const noDevice = candidate(bare);
+    expect(
+      rangeErrorField(() =>
+        equalConditions([noDevice, spwm], { condition: 'equal-switching-loss' }),
+      ),
+    ).toBe('candidates[0].report.losses');
+    expect(
+      rangeErrorField(() => equalConditions([spwm], { condition: 'equal-carrier', reference: 1 })),
+    ).toBe('reference');
+    expect(
+      rangeErrorField(() =>
+        equalConditions([spwm], { condition: 'equal-speed' as 'equal-carrier' }),
+      ),
+    ).toBe('condition');
+    expect(() => equalConditions([], { condition: 'equal-carrier' })).toThrow(/candidates/);
+  });
+});
