@@ -43,9 +43,10 @@ export interface ThreeLevelNeutralPointCurrent {
  *
  * The small vector's two forms draw opposite currents (`POO` draws ib + ic = −ia, `ONN` draws
  * ia), so `smallVectorSplit` is the balancing lever: 0.5 draws no mean current over a fundamental
- * for a balanced load in the averaged model of Celanovic and Boroyevich (here, with the currents
- * varying within each period, a residue that falls as 1/N²), and moving it off 0.5 draws a mean
- * current whose sign follows the split and the load's power factor.
+ * for a balanced load in the averaged model of Celanovic and Boroyevich (exactly so for even N,
+ * the periods half a fundamental apart cancelling; here, with the currents varying within each
+ * period, a residue that falls as 1/N², and as 1/N for odd N), and moving it off 0.5 draws a
+ * mean current whose sign follows the split and the load's power factor.
  *
  * @throws ParameterRangeError naming `m`, `ma`, `frequencyRatio`, `sampling`,
  *   `smallVectorSplit`, `currentAmplitude` or `currentAngle` and the allowed range
