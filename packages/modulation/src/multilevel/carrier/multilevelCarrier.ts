@@ -38,6 +38,10 @@ const PHASE_NAMES = ['a', 'b', 'c'] as const;
  *   on −ma·sin θ with the same carriers (the output is leg a − leg b); single-phase cascaded:
  *   one string on ma·sin θ.
  *
+ * Regular sampling: each carrier samples its own comparator's reference at its own peaks
+ * (`regular-symmetric`) or peaks and valleys (`regular-asymmetric`), so carriers in opposition
+ * or phase-shifted sample at their own instants, as each cell's modulator would.
+ *
  * Switch names: `npc` and `t-type` `S1`…`S4` top to bottom; flying capacitor `cell k upper`,
  * `cell k lower` (k = 1 outermost); cascaded `cell k left upper`, `cell k left lower`,
  * `cell k right upper`, `cell k right lower`. In the linear range (ma ≤ 1, or ≤ 2/√3 with
