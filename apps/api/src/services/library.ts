@@ -35,16 +35,36 @@ export function asBadRequest(
   return new HttpError(400, message, [{ path, message }]);
 }
 
-/** Whether every number in `value` (to the depth firstNonFinite looks) is finite; builds no strings. */
-function allFinite(value: unknown, depth = 0): boolean {
-  if (typeof value === 'number') return Number.isFinite(value);
-  if (depth > 8 || value === null || typeof value !== 'object') return true;
+/**
+ * Whether every number in `value` (own enumerable properties and array elements, to the depth
+ * firstNonFinite looks) is finite; builds no strings and allocates nothing. A number is tested
+ * where it is read (`x - x` is 0 for a finite x and NaN for NaN and ±∞), so a leaf costs no call;
+ * `Object.hasOwn` is asked only of what would change the answer (a non-finite number, an object
+ * to descend into), not of every key. A spectrum's 1051 harmonics take about 16 µs here, against
+ * 45 µs for a walk that called itself per number (docs/robustness.md, throughput).
+ */
+function allFinite(value: object, depth = 0): boolean {
+  if (depth > 8) return true;
   if (Array.isArray(value)) {
-    for (let i = 0; i < value.length; i++) if (!allFinite(value[i], depth + 1)) return false;
+    for (let i = 0; i < value.length; i++) {
+      const entry: unknown = value[i];
+      if (typeof entry === 'number') {
+        if (entry - entry !== 0) return false;
+      } else if (typeof entry === 'object' && entry !== null && !allFinite(entry, depth + 1))
+        return false;
+    }
     return true;
   }
   for (const key in value) {
-    if (Object.hasOwn(value, key) && !allFinite((value as Record<string, unknown>)[key], depth + 1))
+    const entry: unknown = (value as Record<string, unknown>)[key];
+    if (typeof entry === 'number') {
+      if (entry - entry !== 0 && Object.hasOwn(value, key)) return false;
+    } else if (
+      typeof entry === 'object' &&
+      entry !== null &&
+      Object.hasOwn(value, key) &&
+      !allFinite(entry, depth + 1)
+    )
       return false;
   }
   return true;
@@ -75,7 +95,12 @@ function firstNonFinite(value: unknown, at: string, depth = 0): string | undefin
  */
 export function finiteResult<T>(field: string, result: T): T {
   // The common case (all finite) is checked without building a path for every element.
-  if (allFinite(result)) return result;
+  if (
+    typeof result === 'number'
+      ? result - result === 0
+      : typeof result !== 'object' || result === null || allFinite(result)
+  )
+    return result;
   const where = firstNonFinite(result, '') as string;
   const message = `${field} holds values so extreme that ${where} is not a finite number in double precision; use values nearer the documented working range`;
   throw new HttpError(400, message, [{ path: field, message }]);
