@@ -1,15 +1,16 @@
 import express, { type Express } from 'express';
 import * as OpenApiValidator from 'express-openapi-validator';
-import helmet from 'helmet';
 import multer from 'multer';
 import swaggerUi from 'swagger-ui-express';
 import { createAuthorizer } from './auth/authorize.js';
 import { loadConfig, type ConfigOverrides } from './config.js';
 import { openDatabase } from './db/database.js';
 import { migrate } from './db/migrate.js';
+import { cacheOpenApiMetadata } from './http/cacheOpenApiMetadata.js';
 import { cacheRouteRegexps } from './http/cacheRouteRegexps.js';
 import { HttpError } from './http/errors.js';
 import { refuseMalformedPath } from './http/malformedPath.js';
+import { securityHeaders } from './http/securityHeaders.js';
 import { problemHandler } from './http/problemHandler.js';
 import { rateLimitStores } from './http/rateLimitStores.js';
 import { staticWeb } from './http/staticWeb.js';
@@ -82,20 +83,8 @@ export async function createApp(overrides: ConfigOverrides = {}): Promise<Pulsew
   app.set('etag', false);
   // Which proxies may name the client address (X-Forwarded-For); off unless TRUST_PROXY says so.
   app.set('trust proxy', config.trustProxy);
-  app.use(
-    helmet({
-      contentSecurityPolicy: {
-        directives: {
-          // Swagger UI and the dashboard need inline styles and data: images; scripts stay 'self'.
-          'style-src': ["'self'", "'unsafe-inline'"],
-          'img-src': ["'self'", 'data:', 'blob:'],
-          // The service speaks plain HTTP on its port; TLS (and HSTS) belong to the proxy in front.
-          'upgrade-insecure-requests': null,
-        },
-      },
-      strictTransportSecurity: false,
-    }),
-  );
+  // helmet's headers on every answer, taken from helmet once at start (http/securityHeaders.ts).
+  app.use(securityHeaders());
   app.use(refuseMalformedPath);
   // No CORS headers: the dashboard is served from this origin, and scripts are not browsers.
   app.use('/api', express.json({ limit: '1mb' }));
@@ -111,22 +100,24 @@ export async function createApp(overrides: ConfigOverrides = {}): Promise<Pulsew
 
   cacheRouteRegexps();
   app.use(
-    OpenApiValidator.middleware({
-      apiSpec: documentForValidator(document) as never,
-      validateRequests: {
-        allErrors: true,
-        discriminator: true,
-        allowUnknownQueryParameters: false,
-      },
-      validateResponses: config.validateResponses,
-      validateSecurity: { handlers: { bearerAuth: createAuthorizer(services.auth) } },
-      ignorePaths: (path: string) =>
-        !path.startsWith('/api/') || path.startsWith('/api/docs') || path === '/api/openapi.json',
-      fileUploader: {
-        storage: multer.memoryStorage(),
-        limits: { fileSize: MAX_UPLOAD_BYTES, files: 1, fields: 10 },
-      },
-    }),
+    cacheOpenApiMetadata(
+      OpenApiValidator.middleware({
+        apiSpec: documentForValidator(document) as never,
+        validateRequests: {
+          allErrors: true,
+          discriminator: true,
+          allowUnknownQueryParameters: false,
+        },
+        validateResponses: config.validateResponses,
+        validateSecurity: { handlers: { bearerAuth: createAuthorizer(services.auth) } },
+        ignorePaths: (path: string) =>
+          !path.startsWith('/api/') || path.startsWith('/api/docs') || path === '/api/openapi.json',
+        fileUploader: {
+          storage: multer.memoryStorage(),
+          limits: { fileSize: MAX_UPLOAD_BYTES, files: 1, fields: 10 },
+        },
+      }),
+    ),
   );
   const version = document.info.version;
   const rateLimits = rateLimitStores(config.databaseUrl, sequelize);

@@ -1,6 +1,10 @@
+import express, { type Request, type RequestHandler } from 'express';
+import helmet from 'helmet';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { cacheOpenApiMetadata } from '../http/cacheOpenApiMetadata.js';
 import { HttpError } from '../http/errors.js';
+import { HELMET_OPTIONS, securityHeaders } from '../http/securityHeaders.js';
 import { finiteResult } from '../services/library.js';
 import { DEMO, signIn, testApp, type TestApp } from './helpers.js';
 
@@ -126,5 +130,221 @@ describe('the hot path of a compute answer, against the same service with respon
       .send({ ...SPECTRUM, maxOrder: -1 });
     expect(refused.status).toBe(400);
     expect(refused.headers['content-type']).toMatch(/^application\/problem\+json/);
+  });
+});
+
+/** An answer's headers without the clock's. */
+function headersOf(res: request.Response): Record<string, string> {
+  const { date: _date, ...rest } = res.headers as Record<string, string>;
+  return rest;
+}
+
+describe('securityHeaders: helmet’s headers, taken once', () => {
+  /** A small app answering JSON, text, an error and a HEAD behind `headers`. */
+  const appWith = (headers: RequestHandler) => {
+    const app = express();
+    app.set('etag', false);
+    app.use(headers);
+    app.get('/json', (_req, res) => {
+      res.json({ a: 1 });
+    });
+    app.get('/text', (_req, res) => {
+      res.type('text/plain').send('text');
+    });
+    app.get('/fail', (_req, res) => {
+      res.status(500).json({ error: 'boom' });
+    });
+    return app;
+  };
+
+  it.each([
+    ['GET', '/json'],
+    ['GET', '/text'],
+    ['GET', '/fail'],
+    ['GET', '/nowhere'],
+    ['HEAD', '/json'],
+  ])('%s %s: the same headers as helmet itself sets', async (method, path) => {
+    const call = (app: express.Express) =>
+      method === 'HEAD' ? request(app).head(path) : request(app).get(path);
+    const fromHelmet = await call(appWith(helmet(HELMET_OPTIONS)));
+    const once = await call(appWith(securityHeaders()));
+    expect(once.status).toBe(fromHelmet.status);
+    expect(headersOf(once)).toEqual(headersOf(fromHelmet));
+    expect(once.headers['x-content-type-options']).toBe('nosniff');
+    expect(once.headers['x-powered-by']).toBeUndefined();
+    // Express's own 404 page sets a stricter policy of its own, after helmet's.
+    if (path !== '/nowhere')
+      expect(once.headers['content-security-policy']).toContain("script-src 'self'");
+  });
+
+  it('refuses at start settings whose headers depend on the request (a nonce function)', () => {
+    expect(() =>
+      securityHeaders({
+        contentSecurityPolicy: {
+          directives: {
+            'script-src': [
+              "'self'",
+              (_req, res) =>
+                `'nonce-${(res as unknown as { locals: { nonce: string } }).locals.nonce}'`,
+            ],
+          },
+        },
+      }),
+    ).toThrow(/cannot be set once/);
+  });
+});
+
+describe('cacheOpenApiMetadata: the validator’s route lookup kept per method and documented path', () => {
+  /** A stand-in for the validator's metadata step: counts its calls, matches two documented paths. */
+  const fakeStep = () => {
+    const calls: string[] = [];
+    const step = function metadataMiddleware(
+      req: Request,
+      _res: unknown,
+      next: (e?: unknown) => void,
+    ) {
+      calls.push(req.originalUrl);
+      const path = req.originalUrl.split('?')[0]!;
+      const studies = /^\/api\/v1\/studies\/([^/]+)$/.exec(path);
+      if (path === '/api/v1/spectra' || path === '/api/v1/Spectra') {
+        const pathParams = {};
+        Object.assign(req, {
+          openapi: {
+            expressRoute: '/api/v1/spectra',
+            openApiRoute: '/api/v1/spectra',
+            pathParams,
+            schema: { id: 'spectra' },
+            serial: -1,
+          },
+          params: pathParams,
+        });
+      } else if (studies) {
+        const pathParams = { id: studies[1]! };
+        Object.assign(req, {
+          openapi: {
+            expressRoute: '/api/v1/studies/:id',
+            openApiRoute: '/api/v1/studies/{id}',
+            pathParams,
+            schema: { id: 'study' },
+            serial: -1,
+          },
+          params: pathParams,
+        });
+      }
+      next();
+    } as unknown as RequestHandler;
+    return { calls, step };
+  };
+  const run = async (steps: RequestHandler[], method: string, url: string) => {
+    const req = { method, originalUrl: url, params: {} } as unknown as Request & {
+      openapi?: { pathParams: object };
+    };
+    let error: unknown = 'not called';
+    await steps[0]!(req, {} as never, (e?: unknown) => {
+      error = e;
+    });
+    return { req, error };
+  };
+
+  it('asks the step once for a documented path without parameters, then answers a fresh copy', async () => {
+    const { calls, step } = fakeStep();
+    const steps = cacheOpenApiMetadata([step]);
+    const first = await run(steps, 'POST', '/api/v1/spectra');
+    const second = await run(steps, 'POST', '/api/v1/spectra?format=csv');
+    expect(calls).toEqual(['/api/v1/spectra']);
+    expect(first.error).toBeUndefined();
+    expect(second.error).toBeUndefined();
+    expect(second.req.openapi).toEqual(first.req.openapi);
+    expect(second.req.openapi).not.toBe(first.req.openapi);
+    expect(second.req.openapi?.pathParams).not.toBe(first.req.openapi?.pathParams);
+    expect(second.req.params).toBe(second.req.openapi?.pathParams);
+    // Another method is another key: the step decides it.
+    await run(steps, 'GET', '/api/v1/spectra');
+    expect(calls).toHaveLength(2);
+  });
+
+  it('always asks the step for paths with parameters, other spellings and unknown paths', async () => {
+    const { calls, step } = fakeStep();
+    const steps = cacheOpenApiMetadata([step]);
+    for (const url of [
+      '/api/v1/studies/a',
+      '/api/v1/studies/a',
+      '/api/v1/Spectra',
+      '/api/v1/Spectra',
+      '/nowhere',
+      '/nowhere',
+    ])
+      await run(steps, 'GET', url);
+    expect(calls).toHaveLength(6);
+    const b = await run(steps, 'GET', '/api/v1/studies/b');
+    expect(b.req.openapi?.pathParams).toEqual({ id: 'b' });
+  });
+
+  it('stops the start when the validator has no step of that name', () => {
+    const other: RequestHandler = (_req, _res, next) => next();
+    expect(() => cacheOpenApiMetadata([other])).toThrow(/metadataMiddleware was not found/);
+  });
+});
+
+describe('the whole stack after the shortcuts: validation, revocation and headers on every answer', () => {
+  let t: TestApp;
+  let admin: Record<string, string>;
+  beforeAll(async () => {
+    t = await testApp({ validateResponses: false });
+    admin = { Authorization: `Bearer ${await signIn(t.app, DEMO.admin)}` };
+  });
+  afterAll(() => t.dispose());
+
+  const spectra = (key: string, body: object = SPECTRUM) =>
+    request(t.app).post('/api/v1/spectra').set('authorization', `Bearer ${key}`).send(body);
+
+  it('refuses a bad body and a wrong method after the route is cached, and revocation bites on the next request', async () => {
+    const made = await request(t.app)
+      .post('/api/v1/api-keys')
+      .set(admin)
+      .send({ name: 'hot path', role: 'viewer' });
+    expect(made.status).toBe(201);
+    const key = made.body.key as string;
+    expect((await spectra(key)).status).toBe(200);
+    expect((await spectra(key)).status).toBe(200); // route metadata and credential both cached
+    const bad = await spectra(key, {
+      ...SPECTRUM,
+      modulation: { ...SPECTRUM.modulation, ma: 'high' },
+    });
+    expect(bad.status).toBe(400);
+    expect(JSON.stringify(bad.body)).toContain('modulation');
+    const unknownField = await spectra(key, { ...SPECTRUM, extra: 1 });
+    expect(unknownField.status).toBe(400);
+    const wrongMethod = await request(t.app)
+      .get('/api/v1/spectra')
+      .set('authorization', `Bearer ${key}`);
+    expect(wrongMethod.status).toBe(405);
+    expect((await spectra('pwk_not-a-key')).status).toBe(401);
+    const revoked = await request(t.app).delete(`/api/v1/api-keys/${made.body.id}`).set(admin);
+    expect(revoked.status).toBe(204);
+    expect((await spectra(key)).status).toBe(401);
+  });
+
+  it('sends helmet’s headers on an answer, a refusal and the health check', async () => {
+    const key = (
+      await request(t.app)
+        .post('/api/v1/api-keys')
+        .set(admin)
+        .send({ name: 'headers', role: 'viewer' })
+    ).body.key as string;
+    const bare = express();
+    bare.use(helmet(HELMET_OPTIONS));
+    bare.get('/', (_req, res) => res.end());
+    const expected = headersOf(await request(bare).get('/'));
+    for (const res of [
+      await spectra(key),
+      await spectra('pwk_not-a-key'),
+      await request(t.app).get('/api/health'),
+    ]) {
+      for (const [name, value] of Object.entries(expected)) {
+        if (['connection', 'content-length', 'transfer-encoding'].includes(name)) continue;
+        expect(res.headers[name], name).toBe(value);
+      }
+    }
   });
 });
