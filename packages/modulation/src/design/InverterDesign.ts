@@ -64,7 +64,8 @@ export interface DesignGrid {
  * - `grid`: optional grid the bridge feeds through the filter (then no `load`).
  * - `device`: optional switching device of every switch position (an IGBT with its diode or a
  *   MOSFET, datasheet values at the operating temperature, bounds `LOSS_DEVICE_BOUNDS`); with it
- *   the report gives the semiconductor losses by device (`losses`).
+ *   the report gives the semiconductor losses by device (`losses`). Left out for none (the API
+ *   takes no null here, so a bad device value is named alone).
  */
 export interface InverterDesign {
   vdc: number;
@@ -74,5 +75,5 @@ export interface InverterDesign {
   filter?: DesignFilter | null;
   load?: DesignLoad | null;
   grid?: DesignGrid | null;
-  device?: SemiconductorDevice | null;
+  device?: SemiconductorDevice;
 }
