@@ -7,6 +7,10 @@ import {
   MAX_DESIGN_FREQUENCY_RATIO,
   MAX_PATTERN_ANGLES,
   MODULATION_METHODS,
+  MULTILEVEL_CARRIER_ARRANGEMENTS,
+  MULTILEVEL_LEVEL_BOUNDS,
+  MULTILEVEL_TOPOLOGIES,
+  MULTILEVEL_ZERO_SEQUENCES,
   OVERMODULATION_METHODS,
   SHE_KINDS,
   SPACE_VECTOR_SEQUENCES,
@@ -120,6 +124,14 @@ describe('the OpenAPI design schemas agree with the library', () => {
     expect(enumOf('ZeroVectorClamping')).toEqual(ZERO_VECTOR_CLAMPINGS);
     expect(enumOf('OvermodulationMethod')).toEqual(OVERMODULATION_METHODS);
     expect(enumOf('SheKind')).toEqual(SHE_KINDS);
+    expect(enumOf('MultilevelTopology')).toEqual(MULTILEVEL_TOPOLOGIES);
+    expect(enumOf('MultilevelCarrierArrangement')).toEqual(MULTILEVEL_CARRIER_ARRANGEMENTS);
+    expect(enumOf('MultilevelZeroSequence')).toEqual(MULTILEVEL_ZERO_SEQUENCES);
+    expect(enumOf('PhaseCount')).toEqual([1, 3]);
+    // The schema's levels span every topology's own range (the library names the topology's).
+    const levels = fromSchema(resolve(schemas.MultilevelLevels));
+    expect(levels.min).toBe(Math.min(...Object.values(MULTILEVEL_LEVEL_BOUNDS).map((b) => b.min)));
+    expect(levels.max).toBe(Math.max(...Object.values(MULTILEVEL_LEVEL_BOUNDS).map((b) => b.max)));
     expect(
       (resolve(schemas.DesignFilter).properties as Record<string, JsonSchema>).dampingPlacement
         ?.enum,

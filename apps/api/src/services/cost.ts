@@ -3,7 +3,7 @@ import {
   defaultSpectrumOrder,
   designRationalRatio,
   MAX_ANALYSIS_ORDER,
-  THREE_PHASE_METHODS,
+  modulationPhaseCount,
   type AnalyseDesignOptions,
   type InverterDesign,
   type Modulation,
@@ -64,6 +64,28 @@ const BYTES_PER_NUMBER = 20;
 
 const sci = (value: number): string => value.toPrecision(3);
 
+/**
+ * Upper bound of the edges per period of a multilevel bridge's voltages at frequency ratio mf:
+ * each of the levels − 1 carriers (bands, or cells' carriers) of a leg crosses the reference
+ * at most twice a carrier cycle, 2·(levels − 1)·(mf + 1) edges a leg (exact for phase-shifted
+ * carriers, an overestimate for level-shifted ones, whose comparators are built all the same).
+ * A three-phase bridge's phase to star point holds its three legs' edges and a line two; a
+ * single-phase full bridge's output two legs', a cascaded string's its own. `build` counts
+ * every waveform the library makes: the legs' outputs, each device's gate signal and each cell
+ * (about three times a leg's edges), and the phase and line voltages.
+ */
+function multilevelEdges(
+  modulation: { topology: string; levels: number; phaseCount: number },
+  mf: number,
+): { phase: number; leg: number; line: number; build: number } {
+  const leg = 2 * (modulation.levels - 1) * (mf + 1);
+  if (modulation.phaseCount === 3) {
+    return { phase: 3 * leg, leg, line: 2 * leg, build: 3 * (3 * leg + 3 * leg + 2 * leg) };
+  }
+  const legs = modulation.topology === 'cascaded-h-bridge' ? 1 : 2;
+  return { phase: legs * leg, leg, line: 0, build: legs * 3 * leg + legs * leg };
+}
+
 /** Switching edges per period of a modulation's voltages: one phase (or leg) and one line. */
 export function modulationEdges(modulation: Modulation): {
   phase: number;
@@ -93,21 +115,31 @@ export function modulationEdges(modulation: Modulation): {
       const edges = 4 * (Array.isArray(modulation.angles) ? modulation.angles.length : 0);
       return { phase: edges, leg: edges, line: 0 };
     }
+    case 'multilevel-carrier': {
+      const { phase, leg, line } = multilevelEdges(modulation, modulation.mf);
+      return { phase, leg, line };
+    }
   }
 }
 
 /** The request field that sets a modulation's switching frequency (its edges). */
 function edgeField(modulation: Modulation, prefix: string): string {
   if (modulation.method === 'space-vector') return `${prefix}frequencyRatio`;
-  if (modulation.method === 'sine-triangle' || modulation.method === 'three-phase')
+  if (
+    modulation.method === 'sine-triangle' ||
+    modulation.method === 'three-phase' ||
+    modulation.method === 'multilevel-carrier'
+  )
     return `${prefix}mf`;
   return `${prefix}angles`;
 }
 
 /** Every edge of every voltage of the bridge (what modulationVoltages builds). */
 function allEdges(modulation: Modulation): number {
+  if (modulation.method === 'multilevel-carrier')
+    return multilevelEdges(modulation, modulation.mf).build;
   const edges = modulationEdges(modulation);
-  return THREE_PHASE_METHODS.includes(modulation.method)
+  return modulationPhaseCount(modulation) === 3
     ? 3 * (edges.phase + edges.leg + edges.line)
     : edges.phase;
 }
@@ -147,8 +179,27 @@ export function waveformCost(modulation: Modulation, prefix = 'modulation.'): Co
   };
 }
 
-/** Upper bound of the switching edges per period of one phase's voltage, from the design alone. */
-function designEdges(design: InverterDesign, ratio: number): { phase: number; line: number } {
+/**
+ * Upper bound of the switching edges per period of one phase's voltage (and a line's), from the
+ * design alone, and of every waveform the library builds for it (`build`).
+ */
+function designEdges(
+  design: InverterDesign,
+  ratio: number,
+): { phase: number; line: number; build: number } {
+  const { modulation } = design;
+  if (modulation.method === 'multilevel-carrier') return multilevelEdges(modulation, ratio);
+  const edges = designVoltageEdges(design, ratio);
+  return {
+    ...edges,
+    build: (modulationPhaseCount(modulation) === 3 ? 3 : 1) * (edges.phase + edges.line),
+  };
+}
+
+function designVoltageEdges(
+  design: InverterDesign,
+  ratio: number,
+): { phase: number; line: number } {
   const { modulation } = design;
   switch (modulation.method) {
     case 'sine-triangle':
@@ -163,6 +214,8 @@ function designEdges(design: InverterDesign, ratio: number): { phase: number; li
         phase: 4 * (Array.isArray(modulation.angles) ? modulation.angles.length : 0),
         line: 0,
       };
+    case 'multilevel-carrier':
+      return multilevelEdges(modulation, ratio);
   }
 }
 
@@ -188,7 +241,7 @@ export function reportCost(
     : Math.round((design.carrierFrequency ?? 0) / design.fundamentalFrequency);
   const maxOrder = options.maxOrder ?? defaultSpectrumOrder(design);
   const points = options.points ?? 1200;
-  const phases = THREE_PHASE_METHODS.includes(design.modulation.method) ? 3 : 1;
+  const phases = modulationPhaseCount(design.modulation);
   const edges = designEdges(design, ratio);
   const filtered = design.filter !== undefined && design.filter !== null;
   const analysisOrder = filtered
@@ -202,14 +255,29 @@ export function reportCost(
   const series =
     (filtered ? 1 + 3 * phases : 0) + (!filtered && (design.load || grid) ? phases : 0);
   const sampled = series * points * 20;
-  const build = (phases === 3 ? 3 : 1) * (edges.phase + edges.line) * BUILD_PER_EDGE;
+  const build = edges.build * BUILD_PER_EDGE;
   const voltages = phases === 3 ? 9 : 1;
+  // The edges of every named voltage as JSON numbers (edges and levels). A multilevel report's
+  // are counted exactly (phases, legs and lines of a three-phase bridge, each once) and it also
+  // holds each leg's output, leg a's cells (as many edges as one leg) and the modulator's
+  // levels − 1 carriers, each sampled as the reference is.
+  const { modulation } = design;
+  let voltageNumbers = 2 * voltages * (edges.phase + edges.line);
+  if (modulation.method === 'multilevel-carrier') {
+    const { phase, leg, line } = multilevelEdges(modulation, ratio);
+    const legCount = phases === 3 ? 3 : modulation.topology === 'cascaded-h-bridge' ? 1 : 2;
+    voltageNumbers =
+      2 * (phases === 3 ? 3 * (phase + leg + line) : phase) +
+      2 * (legCount + 1) * leg +
+      (modulation.levels - 1) * Math.min(20_000, Math.max(points, 8 * ratio));
+  }
   // The fields to lower, the largest share of the work first (the carrier sets the edges of every
   // sum, but is named first only where it also sets the filter's analysis order); options the
   // route does not take are left out.
   const fromCarrier = analysisOrder > maxOrder ? throughFilter : 0;
   const shares: [string, number][] = [
     [`${field}.carrierFrequency`, pattern ? 0 : build + fromCarrier],
+    [`${field}.modulation.levels`, modulation.method === 'multilevel-carrier' ? build : 0],
     ['maxOrder', spectra + throughFilter - fromCarrier],
     ['points', sampled],
   ];
@@ -228,7 +296,7 @@ export function reportCost(
       BYTES_PER_NUMBER *
       (5 * (maxOrder + 1) * ((filtered ? 3 : 2) + (grid ? 2 : 0)) +
         series * points +
-        2 * voltages * (edges.phase + edges.line)),
+        voltageNumbers),
     responseFields: ['maxOrder', 'points'].filter((name) => optionFields.includes(name)),
     series,
     points,
@@ -248,7 +316,9 @@ export function designSpectrumCost(
   const edges = designEdges(design, ratio);
   const analysed = edges.line || edges.phase;
   return {
-    work: 3 * (edges.phase + edges.line) * BUILD_PER_EDGE + analysed * (maxOrder + 1),
+    work:
+      Math.max(edges.build, 3 * (edges.phase + edges.line)) * BUILD_PER_EDGE +
+      analysed * (maxOrder + 1),
     basis: `${analysed} edges × ${maxOrder + 1} orders`,
     fields: pattern ? ['maxOrder'] : ['maxOrder', `${field}.carrierFrequency`],
     responseBytes: (maxOrder + 1) * 3 * BYTES_PER_NUMBER,
@@ -269,7 +339,7 @@ export function asynchronousSpectraCost(design: InverterDesign, maxOrder: number
   }
   const { p, q } = callLibrary('design.', () => designRationalRatio(design));
   const edges = designEdges(design, p);
-  const phases = THREE_PHASE_METHODS.includes(design.modulation.method) ? 3 : 1;
+  const phases = modulationPhaseCount(design.modulation);
   // Leg a switches a third as often as phase a to the star point (2 against 6 edges a carrier cycle).
   const analysed = phases === 3 ? edges.phase + edges.phase / 3 + edges.line : edges.phase;
   const orders = q * maxOrder + 1;

@@ -5,9 +5,9 @@ import {
   DESIGN_BOUNDS,
   designModulation,
   MAX_HARMONIC_ORDER,
+  modulationPhaseCount,
   modulationVoltages,
   sweepModulationIndex,
-  THREE_PHASE_METHODS,
   type DesignModulation,
   type InverterDesign,
   type ModulationIndexSweep,
@@ -100,7 +100,7 @@ export function maSweepCommand(io: CliIo): Command {
         `design.modulation.method must be one of ${CARRIER_METHODS.map((m) => `'${m}'`).join(', ')} for an ma sweep (a stored pattern has no modulation index); got ${JSON.stringify(method)}`,
       );
     }
-    if (flags.voltage === 'line' && !THREE_PHASE_METHODS.includes(method)) {
+    if (flags.voltage === 'line' && modulationPhaseCount(design.modulation) !== 3) {
       throw new InputError(
         '--voltage',
         `--voltage must be 'bridge' for method '${method}' (a single-phase bridge has no line-to-line voltage); got "line"`,

@@ -1,7 +1,7 @@
 import {
   designFrequencyRatio,
   MODULATION_METHOD_LABELS,
-  THREE_PHASE_METHODS,
+  modulationPhaseCount,
   type InverterDesign,
 } from '@pulsewright/modulation';
 import { formatNumber } from '../../../lib/format';
@@ -81,7 +81,7 @@ export function designRows(stored: InverterDesign): [string, string][] {
       `${formatNumber(design.carrierFrequency, 6)} Hz (${ratioText(design)})`,
     ]);
   if ('carrierPhase' in m && m.carrierPhase) rows.push(['Carrier phase', degrees(m.carrierPhase)]);
-  const three = THREE_PHASE_METHODS.includes(m.method);
+  const three = modulationPhaseCount(m) === 3;
   const { load, filter } = design;
   if (load) {
     rows.push([
@@ -127,7 +127,9 @@ export function describeDesign(design: InverterDesign): string {
         ? m.scheme
         : m.method === 'three-phase'
           ? m.zeroSequence
-          : m.sequence;
+          : m.method === 'multilevel-carrier'
+            ? `${m.topology} ${m.levels}-level ${m.carriers}`
+            : m.sequence;
     parts.push(
       ...[
         index,
