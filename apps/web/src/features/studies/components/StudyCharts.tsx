@@ -9,6 +9,7 @@ import { formatNumber } from '../../../lib/format';
 import { reportFigures } from '../model/reportFigures';
 import { CommonModePanel } from './CommonModePanel';
 import { GridPanel } from './GridPanel';
+import { LossPanel } from './LossPanel';
 import { MotorLoadPanel } from './MotorLoadPanel';
 
 const CURRENT_COLOURS = {
@@ -30,6 +31,7 @@ export function StudyCharts({ report, fileStem }: { report: StudyReport; fileSte
       <MotorLoadPanel report={report} />
       <CommonModePanel report={report} fileStem={fileStem} />
       <GridPanel report={report} fileStem={fileStem} />
+      <LossPanel report={report} fileStem={fileStem} />
       <HarmonicTable
         harmonics={report.bridge.spectrum}
         title={`Harmonics, ${report.bridge.name}`}

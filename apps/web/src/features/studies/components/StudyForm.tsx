@@ -1,6 +1,7 @@
 import type { Project } from '../../../lib/api';
 import type { PreviewFieldError } from '../model/designPreview';
 import type { StudyDraft } from '../model/studyDraft';
+import { deviceFields } from './DeviceFields';
 import { filterFields } from './FilterFields';
 import { gridFields } from './GridFields';
 import { loadFields } from './LoadFields';
@@ -44,6 +45,7 @@ export function StudyForm({
       {loadFields(section)}
       {filterFields({ ...section, ratio: carrier.ratio, filterResonance })}
       {gridFields(section)}
+      {deviceFields(section)}
     </>
   );
   // Refusals no field above claims (the design as a whole, an option): listed at the top.

@@ -1,12 +1,15 @@
 import {
   CARRIER_METHODS,
+  EXAMPLE_IGBT,
   PATTERN_METHODS,
   spaceVectorIndices,
   type BridgeScheme,
   type CarrierSampling,
   type DampingPlacement,
   type DesignModulation,
+  type IgbtDevice,
   type InverterDesign,
+  type MosfetDevice,
   type ModulationMethod,
   type OvermodulationMethod,
   type SheKind,
@@ -98,7 +101,26 @@ export interface StudyDraft {
   gridL2: number;
   /** The current controller's bandwidth, hertz; 0 leaves it out. */
   gridControlBandwidth: number;
+  /** The switching device the report's losses use: none, or which of the two below. */
+  deviceKind: 'none' | SemiconductorDeviceKind;
+  /** Datasheet values of each kind (volts, ohms, joules, amperes), kept while the other is chosen. */
+  igbt: IgbtDevice;
+  mosfet: MosfetDevice;
 }
+
+/** The kinds of switching device of the loss model. */
+export type SemiconductorDeviceKind = 'igbt' | 'mosfet';
+
+/** An invented MOSFET's datasheet-like values (not from any real part): the form's starting values. */
+const STARTING_MOSFET: MosfetDevice = {
+  kind: 'mosfet',
+  rdsOn: 0.018,
+  eon: 0.4e-3,
+  eoff: 0.3e-3,
+  err: 0.05e-3,
+  referenceVoltage: 800,
+  referenceCurrent: 50,
+};
 
 export function isPatternMethod(method: ModulationMethod): method is PatternMethod {
   return PATTERN_METHODS.includes(method);
@@ -149,6 +171,9 @@ export function defaultDraft(projectId = ''): StudyDraft {
     gridL: 0.0002,
     gridL2: 0.0005,
     gridControlBandwidth: 0,
+    deviceKind: 'none',
+    igbt: { ...EXAMPLE_IGBT },
+    mosfet: { ...STARTING_MOSFET },
   };
 }
 
@@ -246,6 +271,7 @@ export function designOf(draft: StudyDraft): InverterDesign {
           },
         }
       : {}),
+    ...(draft.deviceKind === 'none' ? {} : { device: draft[draft.deviceKind] }),
   };
 }
 
@@ -317,7 +343,8 @@ export function draftOf(
       };
       break;
   }
-  const { load, filter, grid } = design;
+  const { load, filter, grid, device } = design;
+  if (device) Object.assign(draft, { deviceKind: device.kind, [device.kind]: { ...device } });
   if (grid) {
     Object.assign(draft, {
       gridOn: true,
