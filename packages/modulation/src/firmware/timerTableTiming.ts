@@ -25,7 +25,12 @@ export interface TimerTiming {
  * @throws ParameterRangeError when the period does not fit the counter or has fewer than 2
  *   counts, or the dead time is half a carrier period or more
  */
-export function timerTableTiming(inputs: TimerTableInputs): TimerTiming {
+export function timerTableTiming(
+  inputs: Pick<
+    TimerTableInputs,
+    'countingMode' | 'timerClock' | 'carrierFrequency' | 'counterBits' | 'deadTime'
+  >,
+): TimerTiming {
   const { countingMode, timerClock, carrierFrequency, counterBits, deadTime } = inputs;
   const period = periodTiming(countingMode, timerClock, carrierFrequency, counterBits);
   const carrierPeriodSeconds = 1 / carrierFrequency;

@@ -1,4 +1,5 @@
 import { assertCPrefix } from './assertCPrefix.js';
+import { cArrayLines, clean, commentSafe, nanoseconds } from './cHeaderText.js';
 import type { TimerTable } from './timerTableTypes.js';
 
 /** Options of {@link timerTableToCHeader}. */
@@ -101,16 +102,9 @@ export function timerTableToCHeader(
       ['high', channel.highSide],
       ['low', channel.lowSide],
     ] as const) {
-      arrays.push(`static const ${type} ${name}_${side}[${upper}_LENGTH] = {`);
-      for (let i = 0; i < values.length; i += 10) {
-        arrays.push(
-          `  ${values
-            .slice(i, i + 10)
-            .map((v) => `${Math.round(v)}${suffix}`)
-            .join(', ')},`,
-        );
-      }
-      arrays.push('};', '');
+      arrays.push(
+        ...cArrayLines(`static const ${type} ${name}_${side}[${upper}_LENGTH]`, values, suffix),
+      );
     }
   }
   return [
@@ -131,32 +125,3 @@ export function timerTableToCHeader(
     '',
   ].join('\n');
 }
-
-/**
- * A number with 12 significant digits and no trailing zeros: drops binary rounding such as
- * 5.000000000000001e-7 while keeping every digit a timer or table parameter needs.
- */
-function clean(value: number): string {
-  return String(Number(value.toPrecision(12)));
-}
-
-/** A time in seconds written in nanoseconds, the unit dead times are specified in. */
-function nanoseconds(seconds: number): string {
-  return `${clean(seconds * 1e9)} ns`;
-}
-
-/** Text safe inside a C block comment: no comment terminator, printable ASCII only. */
-function commentSafe(text: string): string {
-  return text.replace(/\*\//g, '* /').replace(/[^\x20-\x7e]/g, (ch) => ASCII_FOR[ch] ?? '?');
-}
-
-const ASCII_FOR: Record<string, string> = {
-  θ: 'theta',
-  π: 'pi',
-  '−': '-',
-  '±': '+/-',
-  '·': '*',
-  '≥': '>=',
-  '≤': '<=',
-  Δ: 'delta',
-};
