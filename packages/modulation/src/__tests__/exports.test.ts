@@ -199,6 +199,7 @@ const PUBLIC_NAMES = [
   'sweepModulationIndex',
   'switchingFrequencyTradeoff',
   'thd',
+  'threeLevelLosses',
   'threeLevelNeutralPointCurrent',
   'threeLevelSpaceVector',
   'threeLevelSpaceVectorSequence',
