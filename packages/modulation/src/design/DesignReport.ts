@@ -4,6 +4,10 @@ import type { HarmonicLimitCheck } from '../limits/checkVoltageHarmonicLimits.js
 import type { LegLosses } from '../losses/legLossesFromSamples.js';
 import type { SemiconductorDevice } from '../losses/lossTypes.js';
 import type { MotorFigures } from '../load/MotorFigures.js';
+import type { CascadedCellPower } from '../multilevel/balance/cascadedCellPower.js';
+import type { DeviceSwitching } from '../multilevel/balance/deviceSwitchingFrequencies.js';
+import type { FlyingCapacitorCharge } from '../multilevel/balance/flyingCapacitorCharge.js';
+import type { NeutralPointCurrentFigures } from '../multilevel/balance/neutralPointCurrentFigures.js';
 import type {
   MultilevelCarrierArrangement,
   MultilevelTopology,
@@ -162,14 +166,17 @@ export interface MultilevelLegFigures {
   waveform: Waveform;
 }
 
-/** How often one device turns on. */
-export interface DeviceSwitchingFigures {
-  /** The switch's name (`S1`…`S4`, `cell 2 upper`, `cell 1 left upper`, …). */
-  name: string;
-  /** 0 → 1 steps of its gate signal per fundamental period. */
-  turnOnsPerPeriod: number;
-  /** turnOnsPerPeriod times the fundamental frequency, hertz. */
-  switchingFrequency: number;
+/**
+ * The balance of what sits inside a multilevel bridge at the design's load, from the report's own
+ * inverter currents; the figure of the design's topology is set, the others null.
+ */
+export interface MultilevelBalanceFigures {
+  /** NPC and T-type: the DC midpoint current (mean, RMS, carrier-period averages, ripple), amperes. */
+  neutralPoint: NeutralPointCurrentFigures | null;
+  /** Flying capacitor: each capacitor's charge per carrier period (coulombs) and RMS current (amperes). */
+  flyingCapacitors: FlyingCapacitorCharge | null;
+  /** Cascaded H-bridge: each cell source's mean and RMS current (amperes) and power (watts). */
+  cellPower: CascadedCellPower | null;
 }
 
 /**
@@ -193,16 +200,20 @@ export interface MultilevelFigures {
    * upper switch, 0 or 1). Empty for NPC and T-type legs.
    */
   cells: { name: string; waveform: Waveform }[];
-  /** Every device of leg a, top to bottom (cell by cell), with how often it turns on. */
-  devices: DeviceSwitchingFigures[];
+  /** Every device of leg a, top to bottom (cell by cell): turn-ons per period and per second (hertz). */
+  devices: DeviceSwitching[];
   /** Mean over every device of every leg of its switching frequency, hertz. */
   averageDeviceFrequency: number;
+  /** Highest device switching frequency of the bridge, hertz. */
+  maxDeviceFrequency: number;
   /**
    * The rate at which leg a's output steps, hertz: its edges per period over 2 times the
    * fundamental frequency (fc for level-shifted carriers, N·fc for N phase-shifted
    * flying-capacitor cells, 2N·fc for a cascaded string of N phase-shifted cells).
    */
   effectiveOutputFrequency: number;
+  /** The balance figures at the design's load; null with neither load nor filter (no current). */
+  balance: MultilevelBalanceFigures | null;
 }
 
 /**

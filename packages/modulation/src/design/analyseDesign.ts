@@ -257,7 +257,10 @@ export function analyseDesign(
   const multilevel =
     voltages.multilevel === undefined
       ? null
-      : multilevelFigures(modulation, voltages.multilevel, frequency);
+      : multilevelFigures(modulation, voltages.multilevel, {
+          fundamentalFrequency: frequency,
+          currents: inverterSamples,
+        });
   const legA = voltages.legs[0];
   const legSwitching =
     multilevel !== null

@@ -1,23 +1,17 @@
+import { cascadedCellPower } from '../multilevel/balance/cascadedCellPower.js';
+import { deviceSwitchingFrequencies } from '../multilevel/balance/deviceSwitchingFrequencies.js';
+import { flyingCapacitorCharge } from '../multilevel/balance/flyingCapacitorCharge.js';
+import { neutralPointCurrentFigures } from '../multilevel/balance/neutralPointCurrentFigures.js';
 import {
   MULTILEVEL_CARRIER_ARRANGEMENT_LABELS,
   MULTILEVEL_TOPOLOGY_LABELS,
   type MultilevelTopology,
   type MultilevelWaveforms,
 } from '../multilevel/MultilevelTypes.js';
+import { TAU } from '../math.js';
 import type { Waveform } from '../waveform/Waveform.js';
-import type { MultilevelFigures } from './DesignReport.js';
+import type { MultilevelBalanceFigures, MultilevelFigures } from './DesignReport.js';
 import type { Modulation } from './Modulation.js';
-
-/** Turn-ons of a 0/1 gate signal over one period: its 0 → 1 steps (the period wraps round). */
-function turnOns(on: Waveform): number {
-  const { levels } = on;
-  let count = 0;
-  for (let i = 0; i < levels.length; i++) {
-    const previous = levels[(i - 1 + levels.length) % levels.length] as number;
-    if (previous < 0.5 && (levels[i] as number) >= 0.5) count++;
-  }
-  return count;
-}
 
 /** The distinct values of a waveform, ascending, rounded so equal sums of cells compare equal. */
 function distinctLevels(waveform: Waveform): number[] {
@@ -28,33 +22,29 @@ function distinctLevels(waveform: Waveform): number[] {
 
 /**
  * The multilevel section of the design report from the bridge's own waveforms: each leg's
- * (string's) output and the levels it takes, leg a's cells for the level-by-level chart, how
- * often each device of leg a turns on, the mean over every device of every leg, and the
- * effective output frequency, the rate at which leg a's output steps: edges per period over 2,
- * times the fundamental frequency (fc for level-shifted carriers, N·fc for N phase-shifted
- * flying-capacitor cells, 2N·fc for a cascaded string of N phase-shifted cells; McGrath and
- * Holmes, IEEE Trans. Ind. Electron., 2002; Holmes and Lipo, 2003, ch. 11).
+ * (string's) output and the levels it takes, leg a's cells for the level-by-level chart, the
+ * switching frequency of each device (`deviceSwitchingFrequencies`), and with phase currents the
+ * balance of what sits inside the bridge, computed from the report's own inverter currents:
+ * the DC midpoint current of an NPC or T-type bridge (`neutralPointCurrentFigures`), the charge
+ * of each flying capacitor (`flyingCapacitorCharge`), or the power of each cascaded cell's
+ * source (`cascadedCellPower`). Carrier-period windows follow the modulator: the carriers of a
+ * carrier modulation, the switching periods [k, k + 1)·2π/N of space vector.
  * Internal: part of analyseDesign.
  */
 export function multilevelFigures(
   modulation: Modulation,
   waveforms: MultilevelWaveforms & { topology: MultilevelTopology },
-  fundamentalFrequency: number,
-): Omit<MultilevelFigures, 'balance'> {
+  context: {
+    fundamentalFrequency: number;
+    /** The inverter current of each phase on the report's grid (2πj/S); empty without any. */
+    currents: readonly Float64Array[];
+  },
+): MultilevelFigures {
   const { topology, levels, legs } = waveforms;
+  const { fundamentalFrequency, currents } = context;
   const carriers = modulation.method === 'multilevel-carrier' ? modulation.carriers : null;
-  const [legA] = legs;
-  const devices = (legA?.switches ?? []).map((device) => {
-    const count = turnOns(device.on);
-    return {
-      name: device.name,
-      turnOnsPerPeriod: count,
-      switchingFrequency: count * fundamentalFrequency,
-    };
-  });
-  const everyDevice = legs.flatMap((leg) => leg.switches.map((device) => turnOns(device.on)));
-  const meanTurnOns =
-    everyDevice.reduce((sum, count) => sum + count, 0) / Math.max(1, everyDevice.length);
+  const switching = deviceSwitchingFrequencies(waveforms, fundamentalFrequency);
+  const [legA] = switching.legs;
   return {
     topology,
     topologyLabel: MULTILEVEL_TOPOLOGY_LABELS[topology],
@@ -67,9 +57,69 @@ export function multilevelFigures(
       edgesPerPeriod: leg.output.edges.length,
       waveform: leg.output,
     })),
-    cells: (legA?.cells ?? []).map((cell) => ({ name: cell.name, waveform: cell.waveform })),
-    devices,
-    averageDeviceFrequency: meanTurnOns * fundamentalFrequency,
-    effectiveOutputFrequency: ((legA?.output.edges.length ?? 0) / 2) * fundamentalFrequency,
+    cells: (legs[0]?.cells ?? []).map((cell) => ({ name: cell.name, waveform: cell.waveform })),
+    devices: legA?.switches ?? [],
+    averageDeviceFrequency: switching.meanDeviceFrequency,
+    maxDeviceFrequency: switching.maxDeviceFrequency,
+    effectiveOutputFrequency: legA?.effectiveFrequency ?? 0,
+    balance:
+      currents.length === 0
+        ? null
+        : balanceFigures(modulation, waveforms, currents, fundamentalFrequency),
   };
+}
+
+function balanceFigures(
+  modulation: Modulation,
+  waveforms: MultilevelWaveforms & { topology: MultilevelTopology },
+  currents: readonly Float64Array[],
+  fundamentalFrequency: number,
+): MultilevelBalanceFigures {
+  const windows =
+    modulation.method === 'multilevel-carrier'
+      ? { mf: modulation.mf, carrierPhase: modulation.carrierPhase ?? 0 }
+      : spaceVectorWindows(modulation);
+  const none: MultilevelBalanceFigures = {
+    neutralPoint: null,
+    flyingCapacitors: null,
+    cellPower: null,
+  };
+  switch (waveforms.topology) {
+    case 'npc':
+    case 't-type':
+      return {
+        ...none,
+        neutralPoint: neutralPointCurrentFigures(waveforms, currents, {
+          ...windows,
+          fundamentalFrequency,
+        }),
+      };
+    case 'flying-capacitor':
+      return {
+        ...none,
+        flyingCapacitors: flyingCapacitorCharge(waveforms, currents, {
+          ...windows,
+          fundamentalFrequency,
+        }),
+      };
+    case 'cascaded-h-bridge':
+      return {
+        ...none,
+        cellPower: cascadedCellPower(waveforms, currents, {
+          vdc: 'vdc' in modulation ? modulation.vdc : 0,
+        }),
+      };
+  }
+}
+
+/**
+ * The switching periods [k, k + 1)·2π/N of a space-vector modulation as carrier windows: the
+ * windows run valley to valley of a carrier of N cycles, whose valleys sit at
+ * θ = π/2 + (2πk + carrierPhase)/N (`carrierAngle`), so carrierPhase = −N·π/2 (mod 2π) puts one at
+ * θ = 0.
+ */
+function spaceVectorWindows(modulation: Modulation): { mf: number; carrierPhase: number } {
+  const mf = 'frequencyRatio' in modulation ? modulation.frequencyRatio : 1;
+  const carrierPhase = -((mf * Math.PI) / 2) % TAU;
+  return { mf, carrierPhase };
 }

@@ -170,8 +170,7 @@ describe('analyseDesign: multilevel carrier designs', () => {
     // Each flying-capacitor cell compares the whole reference with its own carrier, so every
     // device switches once a carrier period below overmodulation (Holmes and Lipo ch. 11), and
     // the leg output steps at (levels − 1)·fc (issue 13).
-    for (const device of report.multilevel!.devices)
-      expect(device.switchingFrequency).toBe(50 * mf);
+    for (const device of report.multilevel!.devices) expect(device.frequency).toBe(50 * mf);
     assertInDelta(
       report.multilevel!.effectiveOutputFrequency,
       4 * 50 * mf,
@@ -179,6 +178,62 @@ describe('analyseDesign: multilevel carrier designs', () => {
       'effective',
     );
     expect(report.dcLink).toBeNull();
+  });
+
+  it('balance at the load: cell sources deliver the load power, the NPC midpoint draws no mean, flying capacitors hold their charge', () => {
+    const load = { r: 8, l: 0.01 };
+    // Cascaded: the cell sources are the only sources, so their powers sum to the load's
+    // (conservation of energy); phase-shifted carriers share it evenly between the cells
+    // (McGrath and Holmes, 2002). The currents are the report's samples, linear between them.
+    const cascaded = analyseDesign(
+      design(
+        {
+          topology: 'cascaded-h-bridge',
+          levels: 7,
+          carriers: 'phase-shifted',
+          phaseCount: 3,
+          ma: 0.9,
+        },
+        21,
+        { load },
+      ),
+    );
+    const cellPower = cascaded.multilevel!.balance!.cellPower!;
+    const sources = cellPower.strings.reduce((sum, string) => sum + string.power, 0);
+    expect(Math.abs(sources - cascaded.loadPower!) / cascaded.loadPower!).toBeLessThan(1e-3);
+    expect(cellPower.powerSpread!).toBeLessThan(0.02);
+    expect(cascaded.multilevel!.balance!.neutralPoint).toBeNull();
+    // NPC, PD, balanced three-phase load: the midpoint current has zero mean over a fundamental
+    // and a ripple at three times it (N. Celanovic and D. Boroyevich, IEEE Trans. Power
+    // Electronics, 2000). Tolerance: 1 % of the peak phase current (the carrier's residue).
+    const npcReport = analyseDesign(design(npc, 45, { load }));
+    const neutral = npcReport.multilevel!.balance!.neutralPoint!;
+    const peak = npcReport.currents[0]!.inverter.fundamental;
+    expect(Math.abs(neutral.mean)).toBeLessThan(0.01 * peak);
+    expect(neutral.lowFrequencyRipple).toBeGreaterThan(0.1 * peak);
+    // Flying capacitor, phase-shifted carriers: every cell has the same duty over a carrier period,
+    // so each capacitor's net charge over the fundamental is near zero (natural balancing,
+    // Meynard and Foch 1992, from memory): within 1 % of one carrier period's largest charge.
+    const fc = analyseDesign(
+      design(
+        {
+          topology: 'flying-capacitor',
+          levels: 4,
+          carriers: 'phase-shifted',
+          phaseCount: 1,
+          ma: 0.8,
+        },
+        30,
+        { load },
+      ),
+    );
+    for (const leg of fc.multilevel!.balance!.flyingCapacitors!.legs)
+      for (const capacitor of leg.capacitors)
+        expect(Math.abs(capacitor.netCharge)).toBeLessThan(
+          0.01 * capacitor.maxChargePerCarrierPeriod,
+        );
+    // Without a load there is no current, so no balance figure.
+    expect(analyseDesign(design(npc, 45)).multilevel!.balance).toBeNull();
   });
 
   it('the modulator chart holds every carrier: the leg’s level index is the count of carriers below the reference', () => {
