@@ -12,9 +12,18 @@ export function forEachPiece(
   breaks: readonly number[],
   visit: (a: number, b: number, levels: readonly number[]) => void,
 ): void {
-  const cuts: number[] = [0, TAU, ...breaks];
-  for (const w of waveforms) for (const edge of w.edges) cuts.push(edge);
-  cuts.sort((x, y) => x - y);
+  let size = 2 + breaks.length;
+  for (const w of waveforms) size += w.edges.length;
+  const cuts = new Float64Array(size);
+  cuts.set(breaks, 2);
+  cuts[1] = TAU;
+  let offset = 2 + breaks.length;
+  for (const w of waveforms) {
+    cuts.set(w.edges, offset);
+    offset += w.edges.length;
+  }
+  // A typed array sorts numerically without a comparator: several times faster on long lists.
+  cuts.sort();
   // The level each waveform holds before its first edge is its last level (it wraps round).
   const levels = waveforms.map((w) => w.levels[w.levels.length - 1] as number);
   const next = waveforms.map(() => 0);
@@ -23,13 +32,14 @@ export function forEachPiece(
     if (cut > previous) visit(previous, cut, levels);
     previous = Math.max(previous, cut);
     // Every waveform whose next edge is at this cut changes level here.
-    waveforms.forEach((w, k) => {
+    for (let k = 0; k < waveforms.length; k++) {
+      const { edges, levels: held } = waveforms[k] as Waveform;
       let index = next[k] as number;
-      while (index < w.edges.length && (w.edges[index] as number) <= cut) {
-        levels[k] = w.levels[index] as number;
+      while (index < edges.length && (edges[index] as number) <= cut) {
+        levels[k] = held[index] as number;
         index++;
       }
       next[k] = index;
-    });
+    }
   }
 }

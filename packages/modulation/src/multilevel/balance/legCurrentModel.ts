@@ -140,17 +140,28 @@ function sampledModel(
   const step = TAU / count;
   const legs = signs.map((sign, k) => {
     const samples = currents[phaseOf(k)] as ArrayLike<number>;
-    return Float64Array.from({ length: count }, (_, j) => sign * (samples[j] as number));
+    const values = new Float64Array(count);
+    for (let j = 0; j < count; j++) values[j] = sign * (samples[j] as number);
+    return values;
   });
-  const knots: number[] = Array.from({ length: count }, (_, j) => j * step);
+  // The sample angles are ascending; the zero crossings are few: sort those and merge.
+  const zeros: number[] = [];
   for (const values of legs) {
     for (let j = 0; j < count; j++) {
       const v0 = values[j] as number;
       const v1 = values[(j + 1) % count] as number;
-      if ((v0 < 0 && v1 > 0) || (v0 > 0 && v1 < 0)) knots.push((j + v0 / (v0 - v1)) * step);
+      if ((v0 < 0 && v1 > 0) || (v0 > 0 && v1 < 0)) zeros.push((j + v0 / (v0 - v1)) * step);
     }
   }
-  knots.sort((x, y) => x - y);
+  zeros.sort((x, y) => x - y);
+  const knots: number[] = [];
+  let z = 0;
+  for (let j = 0; j < count; j++) {
+    const angle = j * step;
+    while (z < zeros.length && (zeros[z] as number) < angle) knots.push(zeros[z++] as number);
+    knots.push(angle);
+  }
+  while (z < zeros.length) knots.push(zeros[z++] as number);
   const valueAt = (leg: number, theta: number): number => {
     const values = legs[leg] as Float64Array;
     const position = wrapAngle(theta) / step;
