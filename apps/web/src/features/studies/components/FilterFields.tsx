@@ -1,7 +1,7 @@
 import { NumberField, SelectField } from '../../../components/ui/Field';
 import { formatNumber } from '../../../lib/format';
 import { DAMPING_OPTIONS } from '../../../lib/modulationOptions';
-import { isCarrierMethod, type StudyDraft } from '../model/studyDraft';
+import { draftPhaseCount, isCarrierMethod, type StudyDraft } from '../model/studyDraft';
 import { draftSetter } from './draftSetter';
 import { FilterSizing } from './FilterSizing';
 import type { StudyFieldErrors } from './studyFieldErrors';
@@ -26,7 +26,7 @@ export function filterFields({
   filterResonance?: number | undefined;
 }) {
   const set = draftSetter(onChange);
-  const threePhase = draft.method === 'three-phase' || draft.method === 'space-vector';
+  const threePhase = draftPhaseCount(draft) === 3;
   return (
     <fieldset disabled={readOnly} className="flex flex-col gap-3">
       <legend className="mb-1 text-sm font-semibold tracking-wide uppercase">

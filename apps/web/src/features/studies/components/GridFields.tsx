@@ -1,7 +1,7 @@
 import { DESIGN_BOUNDS } from '@pulsewright/modulation';
 import { NumberField } from '../../../components/ui/Field';
 import { rangeText } from '../../../lib/fieldRange';
-import type { StudyDraft } from '../model/studyDraft';
+import { draftPhaseCount, type StudyDraft } from '../model/studyDraft';
 import { draftSetter } from './draftSetter';
 import type { StudyFieldErrors } from './studyFieldErrors';
 import { DEGREES, RADIANS_TO_DEGREES } from './studyFormUnits';
@@ -22,7 +22,7 @@ export function gridFields({
   fields: StudyFieldErrors;
 }) {
   const set = draftSetter(onChange);
-  const threePhase = draft.method === 'three-phase' || draft.method === 'space-vector';
+  const threePhase = draftPhaseCount(draft) === 3;
   return (
     <fieldset disabled={readOnly} className="flex flex-col gap-3">
       <legend className="mb-1 text-sm font-semibold tracking-wide uppercase">

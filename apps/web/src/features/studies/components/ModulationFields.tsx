@@ -21,6 +21,7 @@ import {
 import { isPatternMethod, type StudyDraft } from '../model/studyDraft';
 import { draftSetter } from './draftSetter';
 import { frequencyFields } from './FrequencyFields';
+import { multilevelFields } from './multilevel/multilevelFields';
 import { PatternSummary } from './PatternSummary';
 import type { StudyFieldErrors } from './studyFieldErrors';
 import type { CarrierFields } from './useCarrierFields';
@@ -110,6 +111,7 @@ export function modulationFields({
           options={ZERO_SEQUENCE_OPTIONS}
         />
       ) : null}
+      {method === 'multilevel-carrier' ? multilevelFields({ draft, onChange, fields }) : null}
       {method === 'sine-triangle' || method === 'three-phase' ? (
         <SelectField
           label="Sampling"

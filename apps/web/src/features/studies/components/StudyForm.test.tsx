@@ -246,6 +246,7 @@ describe('StudyForm', () => {
       'space-vector',
       'selective-harmonic-elimination',
       'optimal-pattern',
+      'multilevel-carrier',
     ]);
     expect(
       options.filter((o) => (o as HTMLOptionElement).disabled).map((o) => o.getAttribute('value')),

@@ -69,6 +69,24 @@ const DESIGNS: InverterDesign[] = [
     load: null,
     filter: null,
   },
+  {
+    vdc: 700,
+    fundamentalFrequency: 50,
+    carrierFrequency: 2050,
+    modulation: {
+      method: 'multilevel-carrier',
+      topology: 'flying-capacitor',
+      levels: 5,
+      carriers: 'phase-shifted',
+      phaseCount: 3,
+      zeroSequence: 'min-max',
+      ma: 1.05,
+      sampling: 'regular-asymmetric',
+      carrierPhase: 0.1,
+    },
+    load: { r: 6, l: 0.008 },
+    filter: null,
+  },
 ];
 
 describe('draft ↔ design', () => {

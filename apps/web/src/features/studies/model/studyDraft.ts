@@ -1,6 +1,7 @@
 import {
   CARRIER_METHODS,
   EXAMPLE_IGBT,
+  modulationPhaseCount,
   PATTERN_METHODS,
   spaceVectorIndices,
   type BridgeScheme,
@@ -18,6 +19,12 @@ import {
   type ZeroSequence,
   type ZeroVectorClamping,
 } from '@pulsewright/modulation';
+import {
+  DEFAULT_MULTILEVEL_DRAFT,
+  multilevelDraftOf,
+  multilevelModulationOf,
+  type MultilevelDraft,
+} from './multilevelDraft';
 
 /** A method given by stored first-quarter angles (picked on the elimination page, read-only here). */
 export type PatternMethod = 'selective-harmonic-elimination' | 'optimal-pattern';
@@ -73,6 +80,8 @@ export interface StudyDraft {
   keepClamping: boolean;
   keepZeroSplit: boolean;
   overmodulation: OvermodulationMethod;
+  /** The multilevel bridge's fields (method `multilevel-carrier`). */
+  multilevel: MultilevelDraft;
   /** The stored pattern of a pattern study (null for a study that never had one). */
   pattern: StoredPattern | null;
   loadOn: boolean;
@@ -152,6 +161,7 @@ export function defaultDraft(projectId = ''): StudyDraft {
     keepClamping: false,
     keepZeroSplit: false,
     overmodulation: 'two-mode',
+    multilevel: { ...DEFAULT_MULTILEVEL_DRAFT },
     pattern: null,
     loadOn: true,
     loadR: 10,
@@ -211,6 +221,12 @@ function designModulationOf(draft: StudyDraft): DesignModulation {
           : {}),
         overmodulation: draft.overmodulation,
       };
+    case 'multilevel-carrier':
+      return multilevelModulationOf(draft.multilevel, {
+        ma,
+        sampling: draft.sampling,
+        carrierPhase: draft.carrierPhase,
+      });
     case 'selective-harmonic-elimination':
     case 'optimal-pattern': {
       // A pattern study keeps its stored pattern; without one the angles are empty and the library says so.
@@ -228,6 +244,11 @@ function designModulationOf(draft: StudyDraft): DesignModulation {
       };
     }
   }
+}
+
+/** How many phases the draft's bridge has (the library's answer for its modulation). */
+export function draftPhaseCount(draft: StudyDraft): 1 | 3 {
+  return modulationPhaseCount(designModulationOf(draft));
 }
 
 /** The {@link InverterDesign} a draft stands for: what the preview analyses and the save sends. */
@@ -328,6 +349,14 @@ export function draftOf(
         keepZeroSplit: modulation.zeroSplit !== undefined,
         keepClamping: modulation.clamping !== undefined,
         overmodulation: modulation.overmodulation ?? base.overmodulation,
+      });
+      break;
+    case 'multilevel-carrier':
+      Object.assign(draft, {
+        multilevel: multilevelDraftOf(modulation),
+        ma: modulation.ma,
+        sampling: modulation.sampling ?? base.sampling,
+        carrierPhase: modulation.carrierPhase ?? 0,
       });
       break;
     case 'selective-harmonic-elimination':

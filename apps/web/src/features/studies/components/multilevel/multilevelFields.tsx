@@ -1,0 +1,122 @@
+import { MULTILEVEL_LEVEL_BOUNDS } from '@pulsewright/modulation';
+import { NumberField, SelectField } from '../../../../components/ui/Field';
+import {
+  labelOf,
+  MULTILEVEL_CARRIER_OPTIONS,
+  MULTILEVEL_TOPOLOGY_OPTIONS,
+  MULTILEVEL_ZERO_SEQUENCE_OPTIONS,
+  SAMPLING_OPTIONS,
+} from '../../../../lib/modulationOptions';
+import {
+  carriersOf,
+  cellCountOf,
+  withPhaseCount,
+  withTopology,
+  type MultilevelDraft,
+} from '../../model/multilevelDraft';
+import type { StudyDraft } from '../../model/studyDraft';
+import type { StudyFieldErrors } from '../studyFieldErrors';
+
+const PHASE_COUNT_OPTIONS = [
+  { value: '3', label: 'Three-phase (legs in star)' },
+  { value: '1', label: 'Single-phase (full bridge of two legs, or one cascaded string)' },
+] as const;
+
+/** The hint under the levels: the topology's range and the cells it makes. */
+function levelsHint(multilevel: MultilevelDraft): string {
+  const { min, max, odd } = MULTILEVEL_LEVEL_BOUNDS[multilevel.topology];
+  const cells = cellCountOf(multilevel);
+  const range = `${odd ? 'odd, ' : ''}a whole number from ${min} to ${max}`;
+  if (cells === null) return range;
+  return multilevel.topology === 'cascaded-h-bridge'
+    ? `${range}; ${cells} H-bridge cell${cells === 1 ? '' : 's'} a phase, (levels − 1)/2`
+    : `${range}; ${cells} commutation cells, levels − 1`;
+}
+
+/**
+ * The multilevel carrier method's fields of the study form's "Modulation" fieldset: topology,
+ * levels (NPC and T-type legs are three-level by construction, so the field shows for flying
+ * capacitor and cascaded bridges), the carrier arrangements the topology accepts, the phase
+ * count, the zero sequence (three-phase only) and the sampling. A render function, as the
+ * fieldset's other parts, so the messages it asks for are claimed before the unclaimed ones are
+ * listed.
+ */
+export function multilevelFields({
+  draft,
+  onChange,
+  fields,
+}: {
+  draft: StudyDraft;
+  onChange: (patch: Partial<StudyDraft>) => void;
+  fields: StudyFieldErrors;
+}) {
+  const { error, limits } = fields;
+  const { multilevel } = draft;
+  const set = (next: MultilevelDraft) => onChange({ multilevel: next });
+  const allowed = carriersOf(multilevel.topology);
+  const { min, max } = MULTILEVEL_LEVEL_BOUNDS[multilevel.topology];
+  const levels = limits(
+    'modulation.levels',
+    'Levels',
+    multilevel.levels,
+    {},
+    {
+      min,
+      max,
+      integer: true,
+    },
+  );
+  return (
+    <>
+      <SelectField
+        label="Topology"
+        value={multilevel.topology}
+        onValueChange={(topology) => set(withTopology(multilevel, topology))}
+        error={error('modulation.topology')}
+        options={MULTILEVEL_TOPOLOGY_OPTIONS}
+      />
+      {min === max ? null : (
+        <NumberField
+          label="Levels"
+          value={multilevel.levels}
+          hint={levelsHint(multilevel)}
+          error={levels.error}
+          onChange={(value) => set({ ...multilevel, levels: value })}
+        />
+      )}
+      <SelectField
+        label="Carriers"
+        value={multilevel.carriers}
+        onValueChange={(carriers) => set({ ...multilevel, carriers })}
+        error={error('modulation.carriers')}
+        options={allowed.map((value) => ({
+          value,
+          label: labelOf(MULTILEVEL_CARRIER_OPTIONS, value),
+        }))}
+      />
+      <SelectField
+        label="Phases"
+        value={String(multilevel.phaseCount) as '1' | '3'}
+        onValueChange={(count) => set(withPhaseCount(multilevel, count === '1' ? 1 : 3))}
+        error={error('modulation.phaseCount')}
+        options={PHASE_COUNT_OPTIONS}
+      />
+      {multilevel.phaseCount === 3 ? (
+        <SelectField
+          label="Zero sequence"
+          value={multilevel.zeroSequence}
+          onValueChange={(zeroSequence) => set({ ...multilevel, zeroSequence })}
+          error={error('modulation.zeroSequence')}
+          options={MULTILEVEL_ZERO_SEQUENCE_OPTIONS}
+        />
+      ) : null}
+      <SelectField
+        label="Sampling"
+        value={draft.sampling}
+        onValueChange={(sampling) => onChange({ sampling })}
+        error={error('modulation.sampling')}
+        options={SAMPLING_OPTIONS}
+      />
+    </>
+  );
+}
