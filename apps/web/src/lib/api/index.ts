@@ -4,6 +4,7 @@ export * from './ApiError';
 export * from './auth';
 export * from './captures';
 export * from './client';
+export * from './designs';
 export * from './jobs';
 export * from './me';
 export * from './patterns';

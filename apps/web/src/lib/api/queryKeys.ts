@@ -1,4 +1,4 @@
-import type { QueryOf } from './client';
+import type { BodyOf, QueryOf } from './client';
 
 /**
  * Every query key of the dashboard, built in one place. Keys are arrays from the general to the
@@ -23,6 +23,10 @@ export const queryKeys = {
     reports: (id: string) => ['studies', 'report', id] as const,
     report: (id: string, options: QueryOf<'getStudyReport'>) =>
       ['studies', 'report', id, options] as const,
+  },
+  designs: {
+    /** The report of a design that is not saved, by the whole request body. */
+    report: (body: BodyOf<'analyseDesign'>) => ['designs', 'report', body] as const,
   },
   jobs: {
     all: ['jobs'] as const,

@@ -2,7 +2,7 @@ import { Panel } from '../../../components/ui/Panel';
 import { Button } from '../../../components/ui/Button';
 import { downloadText, toCsv } from '../../../lib/download';
 import { COLUMNS } from './compareColumns';
-import type { ComparedRow } from './useComparedStudies';
+import type { ConditionedRow } from './useEqualConditions';
 
 /** The column the figures are sorted by, ascending or not. */
 export interface FigureSort {
@@ -18,17 +18,20 @@ export function CompareFiguresTable({
   rows,
   sort,
   onSort,
+  condition,
 }: {
-  rows: readonly ComparedRow[];
+  rows: readonly ConditionedRow[];
   /** Null keeps the order the studies were picked in. */
   sort: FigureSort | null;
   onSort: (sort: FigureSort) => void;
+  /** What the figures were compared at, in words (the CSV's header says it). */
+  condition: string;
 }) {
   const sortColumn = COLUMNS.find((c) => c.heading === sort?.heading);
   const ranked = sortColumn?.value
     ? [...rows].sort((x, y) => {
-        const a = sortColumn.value?.(x.report) ?? null;
-        const b = sortColumn.value?.(y.report) ?? null;
+        const a = sortColumn.value?.(x.report, x) ?? null;
+        const b = sortColumn.value?.(y.report, y) ?? null;
         // Studies without the figure go last either way.
         if (a === null || b === null) return a === null ? (b === null ? 0 : 1) : -1;
         return sort?.ascending ? a - b : b - a;
@@ -42,10 +45,12 @@ export function CompareFiguresTable({
     );
   const figuresCsv = () =>
     toCsv(
-      ['study', ...COLUMNS.map((c) => c.heading)],
-      ranked.map(({ study, report }) => [
-        study.name,
-        ...COLUMNS.map((c) => (c.value ? (c.value(report) ?? '') : c.cell(report))),
+      [`study (at ${condition})`, ...COLUMNS.map((c) => c.heading)],
+      ranked.map((row) => [
+        row.study.name,
+        ...COLUMNS.map((c) =>
+          c.value ? (c.value(row.report, row) ?? '') : c.cell(row.report, row),
+        ),
       ]),
     );
   return (
@@ -97,33 +102,36 @@ export function CompareFiguresTable({
             </tr>
           </thead>
           <tbody className="num">
-            {ranked.map(({ id, study, report, color }) => (
-              <tr key={id} className="border-t border-rule/60" data-study={study.name}>
-                <th scope="row" className="text-left font-sans font-medium">
-                  <span
-                    className="mr-1 inline-block h-2.5 w-2.5 rounded-sm"
-                    style={{ background: color }}
-                  />
-                  {study.name}
-                </th>
-                {COLUMNS.map((c) => (
-                  <td
-                    key={c.heading}
-                    data-column={c.heading}
-                    title={c.title?.(report)}
-                    className={
-                      c.heading === 'Method'
-                        ? 'font-sans text-xs'
-                        : c.heading === 'Limit check'
-                          ? `font-sans font-semibold ${report.limitCheck.pass ? 'text-good' : 'text-bad'}`
-                          : 'whitespace-nowrap'
-                    }
-                  >
-                    {c.cell(report)}
-                  </td>
-                ))}
-              </tr>
-            ))}
+            {ranked.map((row) => {
+              const { id, study, report, color } = row;
+              return (
+                <tr key={id} className="border-t border-rule/60" data-study={study.name}>
+                  <th scope="row" className="text-left font-sans font-medium">
+                    <span
+                      className="mr-1 inline-block h-2.5 w-2.5 rounded-sm"
+                      style={{ background: color }}
+                    />
+                    {study.name}
+                  </th>
+                  {COLUMNS.map((c) => (
+                    <td
+                      key={c.heading}
+                      data-column={c.heading}
+                      title={c.title?.(report, row)}
+                      className={
+                        c.heading === 'Method'
+                          ? 'font-sans text-xs'
+                          : c.heading === 'Limit check'
+                            ? `font-sans font-semibold ${report.limitCheck.pass ? 'text-good' : 'text-bad'}`
+                            : 'whitespace-nowrap'
+                      }
+                    >
+                      {c.cell(report, row)}
+                    </td>
+                  ))}
+                </tr>
+              );
+            })}
           </tbody>
         </table>
       </div>

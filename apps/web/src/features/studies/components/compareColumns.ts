@@ -1,14 +1,18 @@
 import { formatGain, formatNumber, formatPercent } from '../../../lib/format';
 import type { StudyReport } from '../../../lib/api';
 import { limitPointName } from '../model/reportFigures';
+import type { ConditionedRow } from './useEqualConditions';
 
-/** A column of the figures table: its heading and the cell of one report. */
+/**
+ * A column of the figures table: its heading and the cell of one report (the report of the design
+ * at the chosen condition; `row` holds what the condition did to its carrier).
+ */
 export interface Column {
   heading: string;
-  cell: (report: StudyReport) => string;
-  title?: (report: StudyReport) => string;
+  cell: (report: StudyReport, row: ConditionedRow) => string;
+  title?: (report: StudyReport, row: ConditionedRow) => string;
   /** The figure in the report's units, for sorting and the CSV; null where the study has none. */
-  value?: (report: StudyReport) => number | null;
+  value?: (report: StudyReport, row: ConditionedRow) => number | null;
 }
 
 const phaseA = (report: StudyReport) => report.currents[0];
@@ -16,6 +20,28 @@ const phaseA = (report: StudyReport) => report.currents[0];
 /** Every column comes from the same design report of each study. */
 export const COLUMNS: Column[] = [
   { heading: 'Method', cell: (r) => r.methodLabel },
+  {
+    heading: 'Carrier (Hz)',
+    cell: (_, row) => (row.carrierFrequency === null ? '—' : formatNumber(row.carrierFrequency)),
+    value: (_, row) => row.carrierFrequency,
+    title: (_, row) =>
+      row.note ??
+      (row.factor === 1
+        ? 'as designed'
+        : `${formatNumber(row.factor)} × the carrier as designed, rounded to a whole mf`),
+  },
+  {
+    heading: 'Switching loss (W)',
+    cell: (r) => (r.losses ? formatNumber(r.losses.switching) : '—'),
+    value: (r) => r.losses?.switching ?? null,
+    title: (r) => (r.losses ? `all devices; total ${formatNumber(r.losses.total)} W` : 'no device'),
+  },
+  {
+    heading: 'Efficiency',
+    cell: (r) => (r.losses?.efficiency != null ? formatPercent(r.losses.efficiency, 3) : '—'),
+    value: (r) => r.losses?.efficiency ?? null,
+    title: (r) => (r.losses ? 'semiconductor losses only' : 'no device'),
+  },
   {
     heading: 'Fundamental (V peak)',
     cell: (r) => formatNumber(r.bridge.fundamental),
