@@ -281,6 +281,14 @@ export const FIXTURES: Record<string, Fixture> = {
       deadTime: 1e-6,
     },
   }),
+  solveCascadedPattern: () => ({
+    path: '/api/v1/cascaded-patterns/solve',
+    body: { cells: 2, vdc: 100, count: 1, eliminate: [3], fundamental: 200 },
+  }),
+  computeCascadedPattern: () => ({
+    path: '/api/v1/cascaded-patterns/waveform',
+    body: { cells: [{ kind: 'unipolar', vdc: 100, angles: [0.4] }], maxOrder: 20 },
+  }),
   getJob: ({ ids }) => ({ path: `/api/v1/jobs/${ids.jobId}` }),
   listProjects: () => ({ path: '/api/v1/projects', query: { q: 'pump' } }),
   createProject: () => ({ path: '/api/v1/projects', body: { name: 'Table project' } }),

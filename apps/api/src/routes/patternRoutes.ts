@@ -9,7 +9,8 @@ import { patternEventsRequest } from '../services/studyPatternEvents.js';
 /**
  * Programmed patterns to firmware (issue 17): the optimal-pattern sweep job beside the SHE
  * sweep, angle tables for controllers (JSON, CSV or a C header) and a stored pattern's compare
- * events (inline angles, or a saved pattern study read with the caller's team scope).
+ * events (inline angles, or a saved pattern study read with the caller's team scope); per-cell
+ * patterns of a cascaded H-bridge string, solved jointly or drawn from given angles (issue 13).
  * Validation is the OpenAPI validator's; the work is the compute or job service's.
  */
 export function patternRoutes(services: Services): Router {
@@ -29,6 +30,18 @@ export function patternRoutes(services: Services): Router {
       const { teamId } = principalOf(req);
       const request = await patternEventsRequest(req.body, (id) => studies.get(teamId, id));
       res.json(await compute.patternEvents(request));
+    },
+  );
+  router.post(
+    '/api/v1/cascaded-patterns/solve',
+    async (req: ApiRequest<'solveCascadedPattern', 'starts' | 'maxOrder'>, res) => {
+      res.json(await compute.cascadedSolve(req.body));
+    },
+  );
+  router.post(
+    '/api/v1/cascaded-patterns/waveform',
+    async (req: ApiRequest<'computeCascadedPattern', 'maxOrder'>, res) => {
+      res.json(await compute.cascadedPattern(req.body));
     },
   );
   return router;

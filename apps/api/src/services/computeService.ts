@@ -41,6 +41,12 @@ import {
 } from '../workers/computeTasks.js';
 import { computeLclDesign, lclDesignCost } from './lclDesign.js';
 import { lossSweepCost } from './lossSweeps.js';
+import {
+  cascadedPatternCost,
+  cascadedSolveCost,
+  type CascadedPatternRequest,
+  type CascadedSolveRequest,
+} from './cascadedPatterns.js';
 import type { NetlistRequest } from './netlists.js';
 
 /**
@@ -253,6 +259,26 @@ export class ComputeService {
       { request },
       patternEventsCost(request),
       'These compare events',
+    );
+  }
+
+  /** A cascaded string's waveforms from each cell's pattern, with its spectrum (services/cascadedPatterns.ts). */
+  cascadedPattern(request: CascadedPatternRequest) {
+    return this.run(
+      'cascadedPattern',
+      { request },
+      cascadedPatternCost(request),
+      "This cascaded string's waveforms",
+    );
+  }
+
+  /** One unipolar pattern per cascaded cell solved jointly (services/cascadedPatterns.ts). */
+  cascadedSolve(request: CascadedSolveRequest) {
+    return this.run(
+      'cascadedSolve',
+      { request },
+      cascadedSolveCost(request),
+      'This cascaded solve',
     );
   }
 }

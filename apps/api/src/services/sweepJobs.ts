@@ -53,6 +53,7 @@ export function sheSweepPlan(input: SheSweepInput): JobPlan {
       eliminate: input.eliminate,
       fundamentals: input.fundamental,
       ...(input.initialAngles ? { angles: input.initialAngles } : {}),
+      ...(input.cellVoltages ? { cellVoltages: input.cellVoltages } : {}),
     }),
   );
   return chainedSweepPlan<SheSweepPointResult, number[]>({

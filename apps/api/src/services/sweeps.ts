@@ -130,6 +130,8 @@ export interface SheSweepInput {
   eliminate: number[];
   fundamental: { from: number; to: number; points: number };
   initialAngles?: number[];
+  /** Staircase only: each cell's DC source, volts, one per angle (the library's `cellVoltages`). */
+  cellVoltages?: number[];
 }
 
 export interface SheSweepPointResult {
@@ -176,6 +178,7 @@ export function sheSweepChunk(
         points: grid.length,
       },
       ...(seed ? { angles: seed } : {}),
+      ...(input.cellVoltages ? { cellVoltages: input.cellVoltages } : {}),
       maxBranches: 1,
     });
   } catch (error) {

@@ -22,6 +22,12 @@ import {
   type VoltageOutput,
 } from '../services/compute.js';
 import { parseCaptureCsv } from '../services/captureCsv.js';
+import {
+  computeCascadedPattern,
+  solveCascadedPatternRequest,
+  type CascadedPatternRequest,
+  type CascadedSolveRequest,
+} from '../services/cascadedPatterns.js';
 import { computeLossSweep } from '../services/lossSweeps.js';
 import { computeNetlist, type NetlistRequest } from '../services/netlists.js';
 import {
@@ -87,6 +93,8 @@ export const COMPUTE_TASKS = {
   angleTable: (a: { request: AngleTableRequest; format: 'json' | 'csv' | 'c-header' }) =>
     computeAngleTable(a.request, a.format),
   patternEvents: (a: { request: PatternEventsRequest }) => computePatternEvents(a.request),
+  cascadedPattern: (a: { request: CascadedPatternRequest }) => computeCascadedPattern(a.request),
+  cascadedSolve: (a: { request: CascadedSolveRequest }) => solveCascadedPatternRequest(a.request),
 } as const;
 
 export type ComputeTasks = typeof COMPUTE_TASKS;
