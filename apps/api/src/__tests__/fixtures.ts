@@ -214,6 +214,16 @@ export const FIXTURES: Record<string, Fixture> = {
       timerClock: 16000000,
     },
   }),
+  computeMultilevelTimerTable: () => ({
+    path: '/api/v1/multilevel-timer-tables',
+    query: { format: 'c-header' },
+    body: {
+      modulation: { topology: 'npc', levels: 3, carriers: 'pd', phaseCount: 3, ma: 0.9, vdc: 800 },
+      fundamentalFrequency: 50,
+      carrierFrequency: 5000,
+      timerClock: 16000000,
+    },
+  }),
   computeNetlist: () => ({
     path: '/api/v1/netlists',
     body: {

@@ -57,6 +57,14 @@ export function computeRoutes(services: Services): Router {
     sendFile(res, file);
   });
   router.post(
+    '/api/v1/multilevel-timer-tables',
+    async (req: ApiRequest<'computeMultilevelTimerTable'>, res) => {
+      const { prefix, ...options } = req.body;
+      const format: TimerFormat = req.query.format ?? 'json';
+      sendFile(res, await compute.multilevelTimerTable(options, format, prefix));
+    },
+  );
+  router.post(
     '/api/v1/losses/power-factor-sweeps',
     async (req: ApiRequest<'computeLossSweep'>, res) => {
       res.json(await compute.lossSweep(req.body));

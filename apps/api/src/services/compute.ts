@@ -5,6 +5,10 @@ import {
   designModulation,
   fftSpectrum,
   modulationVoltages,
+  multilevelTimerTable,
+  multilevelTimerTableToCHeader,
+  multilevelTimerTableToCsv,
+  multilevelTimerTableToJson,
   spaceVectorSequence,
   timerTableToCHeader,
   timerTableToCsv,
@@ -16,6 +20,7 @@ import {
   type Harmonic,
   type InverterDesign,
   type Modulation,
+  type MultilevelTimerTableOptions,
   type NamedVoltage,
   type SineTriangleModulation,
   type SpaceVectorSequence,
@@ -271,6 +276,38 @@ export function computeTimerTable(
     }
     return {
       body: timerTableToJson(table),
+      contentType: 'application/json; charset=utf-8',
+      fileName: `${prefix}.json`,
+    };
+  });
+}
+
+/**
+ * A multilevel timer table (the library's `multilevelTimerTable`) rendered in the format asked
+ * for, ready to download; errors name the request's fields.
+ */
+export function computeMultilevelTimerTable(
+  options: MultilevelTimerTableOptions,
+  format: TimerFormat,
+  prefix = 'pwm_multilevel',
+): TimerDownload {
+  return callLibrary('', () => {
+    const table = multilevelTimerTable(options);
+    if (format === 'csv')
+      return {
+        body: multilevelTimerTableToCsv(table),
+        contentType: 'text/csv; charset=utf-8',
+        fileName: `${prefix}.csv`,
+      };
+    if (format === 'c-header') {
+      return {
+        body: multilevelTimerTableToCHeader(table, { prefix }),
+        contentType: 'text/x-c; charset=utf-8',
+        fileName: `${prefix}.h`,
+      };
+    }
+    return {
+      body: multilevelTimerTableToJson(table),
       contentType: 'application/json; charset=utf-8',
       fileName: `${prefix}.json`,
     };

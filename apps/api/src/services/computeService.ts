@@ -5,6 +5,7 @@ import type {
   LclDesignOptions,
   LossesByPowerFactorOptions,
   Modulation,
+  MultilevelTimerTableOptions,
   SpaceVectorSequenceOptions,
   TimerTableOptions,
 } from '@pulsewright/modulation';
@@ -24,6 +25,7 @@ import {
   captureSpectrumCost,
   captureUploadCost,
   designSpectrumCost,
+  multilevelTimerTableCost,
   netlistCost,
   reportCost,
   spaceVectorCost,
@@ -198,6 +200,16 @@ export class ComputeService {
       { options, format, ...(prefix ? { prefix } : {}) },
       cost,
       'This timer table',
+    );
+  }
+
+  /** A multilevel timer table, priced by its rows × complementary pairs before any work. */
+  multilevelTimerTable(options: MultilevelTimerTableOptions, format: TimerFormat, prefix?: string) {
+    return this.run(
+      'multilevelTimerTable',
+      { options, format, ...(prefix ? { prefix } : {}) },
+      multilevelTimerTableCost(options, format),
+      'This multilevel timer table',
     );
   }
 

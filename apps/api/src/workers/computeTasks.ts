@@ -4,6 +4,7 @@ import type {
   InverterDesign,
   LossesByPowerFactorOptions,
   Modulation,
+  MultilevelTimerTableOptions,
   TimerTableOptions,
 } from '@pulsewright/modulation';
 import {
@@ -14,6 +15,7 @@ import {
   computeFilter,
   computeLoadCurrent,
   computeSpectrum,
+  computeMultilevelTimerTable,
   computeTimerTable,
   designReport,
   designSpectrum,
@@ -75,6 +77,11 @@ export const COMPUTE_TASKS = {
     checkDesignLimits(a.design, a.busVoltage),
   timerTable: (a: { options: TimerTableOptions; format: TimerFormat; prefix?: string }) =>
     computeTimerTable(a.options, a.format, a.prefix),
+  multilevelTimerTable: (a: {
+    options: MultilevelTimerTableOptions;
+    format: TimerFormat;
+    prefix?: string;
+  }) => computeMultilevelTimerTable(a.options, a.format, a.prefix),
   netlist: (a: { request: NetlistRequest }) => computeNetlist(a.request),
   lossSweep: (a: { input: LossesByPowerFactorOptions }) => computeLossSweep(a.input),
   captureSpectrum: (a: {
