@@ -1,5 +1,4 @@
 import { TAU } from '../../math.js';
-import { assertNumberInRange } from '../../validation/assertions.js';
 import { ParameterRangeError } from '../../validation/errors.js';
 import type { MultilevelWaveforms } from '../MultilevelTypes.js';
 import { assertMultilevelWaveforms } from './assertMultilevelWaveforms.js';
@@ -78,19 +77,10 @@ export function flyingCapacitorCharge(
       );
     }
   });
-  const { mf, carrierPhase = 0, fundamentalFrequency, capacitance } = options;
-  const windows = carrierWindows(mf, carrierPhase);
-  assertNumberInRange('fundamentalFrequency', fundamentalFrequency, {
-    min: 0,
-    minExclusive: true,
-    max: 1e6,
-  });
-  if (capacitance !== undefined) {
-    assertNumberInRange('capacitance', capacitance, { min: 0, minExclusive: true, max: 1e3 });
-  }
+  const { windows, omega: frequency, capacitance } = carrierWindows(options, true);
+  const omega = frequency as number;
+  const mf = windows.starts.length;
   const model = legCurrentModel(waveforms, currents);
-  const omega = TAU * fundamentalFrequency;
-  const order = windows.centres.map((angle, j) => ({ angle, j })).sort((x, y) => x.angle - y.angle);
   return {
     legs: waveforms.legs.map((leg, legIndex) => {
       const count = leg.cells.length - 1;
@@ -112,23 +102,25 @@ export function flyingCapacitorCharge(
             (sums[k] as Float64Array)[w] = ((sums[k] as Float64Array)[w] as number) + integral;
             totals[k] = (totals[k] as number) + integral;
             squares[k] = (squares[k] as number) + model.squareIntegral(c, a, b);
-            if (capacitance !== undefined) (charges[k] as RunningCharge).add(c, a, b, integral);
+            if (capacitance !== null) (charges[k] as RunningCharge).add(c, a, b, integral);
           }
         },
       );
       return {
         name: leg.name,
         capacitors: Array.from({ length: count }, (_, k): FlyingCapacitorBalance => {
-          const values = order.map(({ j }) => ((sums[k] as Float64Array)[j] as number) / omega);
+          const values = windows.byCentre.map(
+            (j) => ((sums[k] as Float64Array)[j] as number) / omega,
+          );
           const net = totals[k] as number;
           return {
             name: `capacitor ${k + 1}`,
-            chargePerCarrierPeriod: { angles: order.map((o) => o.angle), values },
+            chargePerCarrierPeriod: { angles: windows.centres, values },
             maxChargePerCarrierPeriod: Math.max(...values.map(Math.abs)),
             netCharge: net / omega,
             rmsCurrent: Math.sqrt(Math.max(0, (squares[k] as number) / TAU)),
             voltageRipple:
-              capacitance === undefined
+              capacitance === null
                 ? null
                 : (charges[k] as RunningCharge).peakToPeak(net) / omega / capacitance,
           };

@@ -1,5 +1,4 @@
 import { TAU } from '../../math.js';
-import { assertNumberInRange } from '../../validation/assertions.js';
 import { ParameterRangeError } from '../../validation/errors.js';
 import type { MultilevelWaveforms } from '../MultilevelTypes.js';
 import { assertMultilevelWaveforms } from './assertMultilevelWaveforms.js';
@@ -75,16 +74,8 @@ export function neutralPointCurrentFigures(
       waveforms.levels,
     );
   }
-  const { mf, carrierPhase = 0, fundamentalFrequency, capacitance } = options;
-  const windows = carrierWindows(mf, carrierPhase);
-  if (capacitance !== undefined) {
-    assertNumberInRange('capacitance', capacitance, { min: 0, minExclusive: true, max: 1e3 });
-    assertNumberInRange('fundamentalFrequency', fundamentalFrequency, {
-      min: 0,
-      minExclusive: true,
-      max: 1e6,
-    });
-  }
+  const { windows, omega, capacitance } = carrierWindows(options, false);
+  const mf = windows.starts.length;
   const model = legCurrentModel(waveforms, currents);
   const legCount = waveforms.legs.length;
   // The middle level is 0 V; a hand-built waveform may hold it to rounding.
@@ -113,22 +104,20 @@ export function neutralPointCurrentFigures(
       sums[w] = (sums[w] as number) + integral;
       total += integral;
       squares += model.squareIntegral(c, a, b);
-      if (capacitance !== undefined) charge.add(c, a, b, integral);
+      if (capacitance !== null) charge.add(c, a, b, integral);
     },
   );
   const mean = total / TAU;
   const width = TAU / mf;
-  const order = windows.centres.map((angle, j) => ({ angle, value: (sums[j] as number) / width }));
-  order.sort((x, y) => x.angle - y.angle);
-  const values = order.map((p) => p.value);
+  const values = windows.byCentre.map((j) => (sums[j] as number) / width);
   const ripple =
-    capacitance === undefined
+    capacitance === null || omega === null
       ? null
-      : charge.peakToPeak(total) / (TAU * (fundamentalFrequency as number)) / (2 * capacitance);
+      : charge.peakToPeak(total) / omega / (2 * capacitance);
   return {
     mean,
     rms: Math.sqrt(Math.max(0, squares / TAU)),
-    carrierAverages: { angles: order.map((p) => p.angle), values },
+    carrierAverages: { angles: windows.centres, values },
     lowFrequencyRipple: Math.max(...values) - Math.min(...values),
     midpointVoltageRipple: ripple,
   };
