@@ -57,7 +57,7 @@ import { modulatorSignals } from './modulatorSignals.js';
 import { multilevelFigures } from './multilevelFigures.js';
 import { switchingLegs } from './switchingLegs.js';
 import { assertSemiconductorDevice } from '../losses/assertSemiconductorDevice.js';
-import { synthesisePeriod, synthesisSize } from './synthesisePeriod.js';
+import { periodSynthesiser, synthesisSize, type PeriodSynthesiser } from './periodSynthesiser.js';
 
 /** Options of {@link analyseDesign}. */
 export interface AnalyseDesignOptions {
@@ -175,7 +175,16 @@ export function analyseDesign(
   let currents: PhaseCurrents[] = [];
   let loadPower: number | null = null;
   let inverterSamples: Float64Array[] = [];
-  if (filter === null) {
+  // Phase a's bridge spectrum to the analysis order, when a filtered phase has taken it.
+  let bridgeSpectrum: Harmonic[] | null = null;
+  // One transform for every sampled series of a filtered design (and its DC-link spectrum).
+  const synthesiser =
+    filter === null
+      ? null
+      : periodSynthesiser(
+          synthesisSize(analysisOrder, Math.max(MIN_GRID_SAMPLES, 16 * analysisOrder)),
+        );
+  if (synthesiser === null) {
     if (load !== null) {
       const solved = phaseVoltages.map((waveform, k) =>
         exactLoadCurrents(waveform, rlLoadOf(design, k), {
@@ -198,9 +207,11 @@ export function analyseDesign(
         phaseCount: voltages.phaseCount,
         analysisOrder,
         points,
+        synthesiser,
       }),
     );
     const first = solved[0] as FilteredPhase;
+    bridgeSpectrum = first.bridgeSpectrum;
     const outputSpectrum = first.outputSpectrum;
     output = {
       ...distortionFigures(
@@ -209,7 +220,7 @@ export function analyseDesign(
         label,
       ),
       thdUpperBound: first.outputThdUpperBound,
-      series: first.outputSeries,
+      series: first.outputSeries as PeriodSeries,
     };
     currents = solved.map((s) => s.currents);
     loadPower = load === null ? null : solved.reduce((sum, s) => sum + s.loadPower, 0);
@@ -237,6 +248,7 @@ export function analyseDesign(
           maxOrder,
           points,
           label,
+          ...(synthesiser === null ? {} : { fft: synthesiser.fft }),
         });
   const commonMode =
     voltages.phaseCount === 3
@@ -331,7 +343,7 @@ export function analyseDesign(
         : gridFigures({
             grid,
             network,
-            bridge: harmonics(phaseVoltages[0] as Waveform, analysisOrder),
+            bridge: bridgeSpectrum ?? harmonics(phaseVoltages[0] as Waveform, analysisOrder),
             source: phasorOf(load?.emf?.amplitude ?? 0, load?.emf?.phase ?? 0),
             phaseCount: voltages.phaseCount,
             fundamentalFrequency: frequency,
@@ -454,15 +466,27 @@ function exactLoadCurrents(
 }
 
 interface FilteredPhase {
+  /** The bridge voltage's exact spectrum to the analysis order. */
+  bridgeSpectrum: Harmonic[];
   outputSpectrum: Harmonic[];
   inverterSamples: Float64Array;
   outputThdUpperBound: number;
-  outputSeries: PeriodSeries;
+  /** The output voltage's time series: phase a's only (the report shows phase a's), else null. */
+  outputSeries: PeriodSeries | null;
   currents: PhaseCurrents;
   loadPower: number;
 }
 
-/** One phase through the loaded filter, per harmonic to the analysis order. */
+/**
+ * One phase through the loaded filter, per harmonic to the analysis order. Its currents are
+ * sampled on the synthesiser's grid of S angles 2πj/S: the load and inverter currents in one
+ * transform, the capacitor current as their difference (Kirchhoff's current law holds phasor by
+ * phasor, so it holds sample by sample to rounding), and the output voltage for phase a alone.
+ * Peaks and ripple peak-to-peak are the extremes of those samples: at S ≥ 16·N, with N the
+ * analysis order, each harmonic is sampled at least 16 times a cycle, so a sinusoid's peak is
+ * read within 1 − cos(π/16) ≈ 1.9 % of its own amplitude at worst (the switching tail is exact at
+ * the samples and piecewise linear between them).
+ */
 function filteredPhase(
   waveform: Waveform,
   context: {
@@ -472,9 +496,10 @@ function filteredPhase(
     phaseCount: number;
     analysisOrder: number;
     points: number;
+    synthesiser: PeriodSynthesiser;
   },
 ): FilteredPhase {
-  const { network, design, phaseIndex, phaseCount, analysisOrder, points } = context;
+  const { network, design, phaseIndex, phaseCount, analysisOrder, points, synthesiser } = context;
   const phase = PHASES[phaseIndex] ?? 'a';
   const omega = TAU * design.fundamentalFrequency;
   const bridge = harmonics(waveform, analysisOrder);
@@ -509,7 +534,7 @@ function filteredPhase(
   const outputThdUpperBound =
     Math.sqrt(2 * (harmonicSum + tailGain * tailGain * bridgeTail)) / fundamental;
 
-  const size = synthesisSize(analysisOrder, Math.max(MIN_GRID_SAMPLES, 16 * analysisOrder));
+  const { size, sine } = synthesiser;
   const series = (values: Float64Array): PeriodSeries => {
     const stride = Math.max(1, Math.floor(values.length / points));
     const angles: number[] = [];
@@ -520,35 +545,29 @@ function filteredPhase(
     }
     return { angles, values: picked };
   };
-  const tail = switchingTail(waveform, bridge, network.filter, omega, size);
-  let inverterSamples: Float64Array = new Float64Array(0);
-  const current = (
+  const figures = (
     name: string,
-    pick: (s: OutputNetworkPhasors) => Complex,
-    withTail: boolean,
+    samples: Float64Array,
+    phasors: readonly Complex[],
+    tailMeanSquare: number,
   ): CurrentFigures => {
-    const phasors = solved.map(pick);
-    const samples = synthesisePeriod(phasors, size);
-    if (name.startsWith('inverter')) inverterSamples = samples;
-    let meanSquare = 0;
+    let meanSquare = tailMeanSquare;
     phasors.forEach((p, order) => {
       meanSquare += order === 0 ? p.re * p.re : (p.re * p.re + p.im * p.im) / 2;
     });
-    if (withTail && tail !== null) {
-      samples.forEach((value, j) => (samples[j] = value + (tail.samples[j] as number)));
-      meanSquare += tail.meanSquare;
-    }
     const first = phasors[1] ?? { re: 0, im: 0 };
+    const quarter = size / 4;
     let peak = 0;
     let low = Infinity;
     let high = -Infinity;
-    samples.forEach((value, j) => {
-      const theta = (TAU * j) / samples.length;
-      const ripple = value - (first.re * Math.sin(theta) + first.im * Math.cos(theta));
+    for (let j = 0; j < size; j++) {
+      const value = samples[j] as number;
+      const cosine = sine[j < size - quarter ? j + quarter : j + quarter - size] as number;
+      const ripple = value - (first.re * (sine[j] as number) + first.im * cosine);
       peak = Math.max(peak, Math.abs(value));
       low = Math.min(low, ripple);
       high = Math.max(high, ripple);
-    });
+    }
     const fundamentalCurrent = complexAbs(first);
     return {
       name: `${name}${phaseSuffix(phaseCount, phase)}`,
@@ -562,22 +581,57 @@ function filteredPhase(
       series: series(samples),
     };
   };
-  const loadCurrent = load === null ? null : current('load current', (s) => s.loadCurrent, false);
-  const inverter = current('inverter (switch) current', (s) => s.inverterCurrent, true);
+
+  // The switch current above N (the tail) is linear in the bridge's running integral: its
+  // harmonic part joins the inverter phasors, its exact part is added to the samples.
+  const tail = switchingTail(waveform, bridge, network.filter, omega, size);
+  const loadPhasors = solved.map((s) => s.loadCurrent);
+  const capacitorPhasors = solved.map((s) => s.capacitorCurrent);
+  const inverterPhasors = solved.map((s) => s.inverterCurrent);
+  const inverterSynthesised =
+    tail === null
+      ? inverterPhasors
+      : inverterPhasors.map((p, order) => {
+          const correction = tail.phasors[order] as Complex;
+          return { re: p.re + correction.re, im: p.im + correction.im };
+        });
+  const [inverterSamples, loadSamples] = synthesiser.pair(
+    inverterSynthesised,
+    load === null ? null : loadPhasors,
+  );
+  if (tail !== null)
+    for (let j = 0; j < size; j++)
+      inverterSamples[j] = (inverterSamples[j] as number) + (tail.samples[j] as number);
+  const capacitorSamples =
+    loadSamples === null
+      ? inverterSamples
+      : inverterSamples.map((value, j) => value - (loadSamples[j] as number));
+  const tailMeanSquare = tail?.meanSquare ?? 0;
+  const loadCurrent =
+    loadSamples === null ? null : figures('load current', loadSamples, loadPhasors, 0);
   return {
+    bridgeSpectrum: bridge,
     inverterSamples,
     outputSpectrum,
     outputThdUpperBound,
-    outputSeries: series(
-      synthesisePeriod(
-        solved.map((s) => s.output),
-        size,
-      ),
-    ),
+    outputSeries:
+      phaseIndex === 0
+        ? series(
+            synthesiser.pair(
+              solved.map((s) => s.output),
+              null,
+            )[0],
+          )
+        : null,
     currents: {
       phase,
-      inverter,
-      capacitor: current('capacitor current', (s) => s.capacitorCurrent, true),
+      inverter: figures(
+        'inverter (switch) current',
+        inverterSamples,
+        inverterPhasors,
+        tailMeanSquare,
+      ),
+      capacitor: figures('capacitor current', capacitorSamples, capacitorPhasors, tailMeanSquare),
       load: loadCurrent,
     },
     loadPower:
@@ -590,9 +644,11 @@ function filteredPhase(
  * (|Z_s| ≫ the shunt branch there, so nearly all of it flows into the capacitor):
  * i_tail = (Φ − Φ_N)/(ω·L), with Φ the bridge voltage's running integral (exact, piecewise
  * linear) and Φ_N its harmonics to N (v = L·di/dt, standard circuit analysis). Its mean square
- * is (Var Φ − Σ_{n≤N} (V_n/n)²/2)/(ωL)² by Parseval. Null for damping across the inductor, whose
- * series branch is not inductive at high frequency, and when N is not ten times past the LC
- * resonance (the sum to N is used as it is there).
+ * is (Var Φ − Σ_{n≤N} (V_n/n)²/2)/(ωL)² by Parseval. Returned as the two parts the caller adds:
+ * the phasors of −Φ_N/(ωL) (synthesised with the inverter current's own) and the samples of
+ * (Φ − mean Φ)/(ωL) on the S angles 2πj/S. Null for damping across the inductor, whose series
+ * branch is not inductive at high frequency, and when N is not ten times past the LC resonance
+ * (the sum to N is used as it is there).
  */
 function switchingTail(
   waveform: Waveform,
@@ -600,25 +656,26 @@ function switchingTail(
   filter: OutputNetwork['filter'],
   omega: number,
   size: number,
-): { samples: Float64Array; meanSquare: number } | null {
+): { phasors: Complex[]; samples: Float64Array; meanSquare: number } | null {
   if (filter === null || filter.dampingPlacement === 'parallel-with-inductor') return null;
   // Only valid well past the resonance, where the shunt branch shorts the load out.
   const resonanceOrder = 1 / (Math.sqrt(filter.l * filter.c) * omega);
   if (bridge.length - 1 < 10 * resonanceOrder) return null;
   const integral = runningIntegral(waveform);
-  const integralPhasors: Complex[] = bridge.map((h) =>
-    // ∫ A·sin(nθ + φ) dθ = (A/n)·sin(nθ + φ − π/2): phasor (A/n)·e^{j(φ − π/2)}.
-    h.order === 0 ? { re: 0, im: 0 } : phasorOf(h.amplitude / h.order, h.phase - Math.PI / 2),
-  );
-  const truncated = synthesisePeriod(integralPhasors, size);
-  const whole = integral.at(size);
   const reactance = omega * filter.l;
+  const phasors: Complex[] = bridge.map((h) => {
+    // ∫ A·sin(nθ + φ) dθ = (A/n)·sin(nθ + φ − π/2): phasor (A/n)·e^{j(φ − π/2)}, negated and over ωL.
+    if (h.order === 0) return { re: 0, im: 0 };
+    const p = phasorOf(h.amplitude / h.order, h.phase - Math.PI / 2);
+    return { re: -p.re / reactance, im: -p.im / reactance };
+  });
+  const whole = integral.at(size);
   const samples = new Float64Array(size);
-  for (let j = 0; j < size; j++)
-    samples[j] = ((whole[j] as number) - integral.mean - (truncated[j] as number)) / reactance;
+  for (let j = 0; j < size; j++) samples[j] = ((whole[j] as number) - integral.mean) / reactance;
   let heldVariance = 0;
   for (const h of bridge) if (h.order > 0) heldVariance += (h.amplitude / h.order) ** 2 / 2;
   return {
+    phasors,
     samples,
     meanSquare: Math.max(0, integral.variance - heldVariance) / (reactance * reactance),
   };

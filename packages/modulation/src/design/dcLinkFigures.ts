@@ -1,5 +1,5 @@
+import type FFT from 'fft.js';
 import type { Harmonic } from '../spectrum/Harmonic.js';
-import { waveformValueAt } from '../waveform/waveformValueAt.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import { TAU } from '../math.js';
 import type { DcLinkFigures } from './DesignReport.js';
@@ -23,17 +23,23 @@ export function dcLinkFigures(
     maxOrder: number;
     points: number;
     label: (s: readonly Harmonic[]) => DcLinkFigures['spectrum'];
+    /** A transform of the grid's size to reuse for the spectrum. */
+    fft?: FFT;
   },
 ): DcLinkFigures {
-  const { vdc, phaseCount, maxOrder, points, label } = context;
+  const { vdc, phaseCount, maxOrder, points, label, fft } = context;
   const size = inverterSamples[0]?.length ?? 0;
   const current = new Float64Array(size);
-  switching.forEach((waveform, k) => {
+  switching.forEach(({ edges, levels }, k) => {
     const phaseCurrent = inverterSamples[k] as Float64Array;
-    for (let j = 0; j < size; j++)
-      current[j] =
-        (current[j] as number) +
-        (waveformValueAt(waveform, (TAU * j) / size) / vdc) * (phaseCurrent[j] as number);
+    // One walk along the edges (the grid is in order): before the first edge the period's last level.
+    let segment = -1;
+    for (let j = 0; j < size; j++) {
+      const theta = (TAU * j) / size;
+      while (segment + 1 < edges.length && (edges[segment + 1] as number) <= theta) segment++;
+      const level = levels[segment < 0 ? levels.length - 1 : segment] as number;
+      current[j] = (current[j] as number) + (level / vdc) * (phaseCurrent[j] as number);
+    }
   });
   let sum = 0;
   let sumOfSquares = 0;
@@ -43,7 +49,7 @@ export function dcLinkFigures(
   }
   const mean = sum / size;
   const rms = Math.sqrt(sumOfSquares / size);
-  const spectrum = sampledSpectrum(current, Math.min(maxOrder, size / 2 - 1));
+  const spectrum = sampledSpectrum(current, Math.min(maxOrder, size / 2 - 1), fft);
   const stride = Math.max(1, Math.floor(size / points));
   const angles: number[] = [];
   const values: number[] = [];

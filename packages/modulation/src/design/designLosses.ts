@@ -46,8 +46,8 @@ export function designLosses(
     const current = leg.currentSign === 1 ? phase : phase.map((i) => -i);
     const size = current.length;
     const conduction = legLossesFromSamples(
-      Array.from(highFractions(leg.state, size)),
-      Array.from(current),
+      highFractions(leg.state, size),
+      current,
       // Only the conduction part is read; the cells' own switching count is not a carrier's.
       { device, vdc, switchingFrequency: fundamentalFrequency * size },
     );

@@ -8,12 +8,17 @@ import { meanHarmonic } from '../spectrum/meanHarmonic.js';
  * With F_n = Σ x_j·e^{−j2πnj/S} = (S/2)·A_n·e^{j(φ_n − π/2)}, A_n·e^{jφ_n} = (2/S)·j·F_n.
  * Exact for a band-limited x; otherwise the orders above S/2 alias (the caller samples densely).
  * Internal: the spectrum of the sampled DC-link current.
+ * @param fft - a transform of size S to reuse (its tables cost as much as a transform)
  */
-export function sampledSpectrum(samples: Float64Array, maxOrder: number): Harmonic[] {
+export function sampledSpectrum(
+  samples: Float64Array,
+  maxOrder: number,
+  fft: FFT = new FFT(samples.length),
+): Harmonic[] {
   const size = samples.length;
-  const fft = new FFT(size);
-  const output = fft.createComplexArray() as number[];
-  fft.realTransform(output, Array.from(samples));
+  if (fft.size !== size) throw new RangeError(`fft.size ${fft.size} is not ${size}`);
+  const output = new Float64Array(2 * size);
+  fft.realTransform(output, samples);
   const spectrum: Harmonic[] = [meanHarmonic((output[0] as number) / size)];
   for (let n = 1; n <= maxOrder && n < size / 2; n++) {
     const re = output[2 * n] as number;

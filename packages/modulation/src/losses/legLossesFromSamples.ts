@@ -38,8 +38,8 @@ export interface LegLosses {
  * @param currents - leg current per carrier period, A (same length)
  */
 export function legLossesFromSamples(
-  duties: readonly number[],
-  currents: readonly number[],
+  duties: readonly number[] | Float64Array,
+  currents: readonly number[] | Float64Array,
   options: LegLossSampleOptions,
 ): LegLosses {
   assertFiniteArray('duties', duties, 1);

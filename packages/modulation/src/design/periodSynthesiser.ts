@@ -1,0 +1,82 @@
+import FFT from 'fft.js';
+import type { Complex } from '../numeric/complex.js';
+
+/** What {@link periodSynthesiser} returns: one FFT of size S and its buffers, reused call after call. */
+export interface PeriodSynthesiser {
+  /** S, samples a period (a power of two). */
+  readonly size: number;
+  /** The `fft.js` transform of size S (for `sampledSpectrum` on the same grid). */
+  readonly fft: FFT;
+  /** sin(2πj/S), j = 0..S−1 (cos(2πj/S) is sine[(j + S/4) mod S]). */
+  readonly sine: Float64Array;
+  /**
+   * One period of x(θ) = X₀ + Σ_{n≥1} |X_n|·sin(nθ + arg X_n) for each of two phasor lists
+   * (index n holds X_n; X₀ real; at most S/2 − 1 orders), sampled at the S angles 2πj/S.
+   * @returns the samples of `first`, and of `second` (null when it is null)
+   */
+  pair(
+    first: readonly Complex[],
+    second: readonly Complex[] | null,
+  ): [Float64Array, Float64Array | null];
+}
+
+/**
+ * A synthesiser of sampled periods from harmonic phasors, by the inverse DFT through one `fft.js`
+ * transform of size S, built once for a report and reused for each of its series (building the
+ * transform's tables is as costly as a transform). Two real series x and y go through one complex
+ * transform as z = x + j·y (the standard two-for-one packing; E. O. Brigham, "The Fast Fourier
+ * Transform and its Applications", 1988, ch. 9): with the two-sided coefficients of x,
+ * c_n/2 and conj(c_n)/2 at ±n where c_n = X_n·e^{−jπ/2} (sin φ = Re e^{j(φ − π/2)}), and likewise
+ * d_n of y, z has Z_{±n} = (c_{±n} + j·d_{±n})/2, and the forward transform of conj(Z) gives
+ * conj(z): x = Re, y = −Im. S from {@link synthesisSize}, so no harmonic aliases.
+ * Internal: used for the time series of the filtered design figures.
+ */
+export function periodSynthesiser(size: number): PeriodSynthesiser {
+  const fft = new FFT(size);
+  const input = new Float64Array(2 * size);
+  const output = new Float64Array(2 * size);
+  const sine = new Float64Array(size);
+  // fft.js's table holds cos(2πk/S) and −sin(2πk/S) at 2k, 2k + 1: no trigonometry of our own.
+  const table = fft.table as number[];
+  for (let k = 0; k < size; k++) sine[k] = -(table[2 * k + 1] as number);
+  const pair = (
+    first: readonly Complex[],
+    second: readonly Complex[] | null,
+  ): [Float64Array, Float64Array | null] => {
+    input.fill(0);
+    const highest = Math.max(first.length, second?.length ?? 0) - 1;
+    if (2 * highest + 2 > size) throw new RangeError(`order ${highest} aliases at ${size} samples`);
+    const none: Complex = { re: 0, im: 0 };
+    // Order 0: Z₀ = X₀ + j·Y₀, both real; conj(Z₀) goes in.
+    input[0] = first[0]?.re ?? 0;
+    input[1] = -(second?.[0]?.re ?? 0);
+    for (let n = 1; n <= highest; n++) {
+      const x = first[n] ?? none;
+      const y = second?.[n] ?? none;
+      // c = X·e^{−jπ/2} = x.im − j·x.re; d likewise from y.
+      const cr = x.im;
+      const ci = -x.re;
+      const dr = y.im;
+      const di = -y.re;
+      // Z_n = (c + j·d)/2, Z_{−n} = (conj c + j·conj d)/2; their conjugates go in.
+      input[2 * n] = (cr - di) / 2;
+      input[2 * n + 1] = -(ci + dr) / 2;
+      input[2 * (size - n)] = (cr + di) / 2;
+      input[2 * (size - n) + 1] = -(dr - ci) / 2;
+    }
+    fft.transform(output, input);
+    const x = new Float64Array(size);
+    const y = second === null ? null : new Float64Array(size);
+    for (let j = 0; j < size; j++) x[j] = output[2 * j] as number;
+    if (y !== null) for (let j = 0; j < size; j++) y[j] = -(output[2 * j + 1] as number);
+    return [x, y];
+  };
+  return { size, fft, sine, pair };
+}
+
+/** The FFT size for {@link periodSynthesiser}: the smallest power of two ≥ 2·highestOrder + 2 and ≥ minimumSamples. */
+export function synthesisSize(highestOrder: number, minimumSamples: number): number {
+  let size = 4;
+  while (size < 2 * highestOrder + 2 || size < minimumSamples) size *= 2;
+  return size;
+}
