@@ -5,7 +5,7 @@
  * the phase's sine reference, as in the loss model's `LossOperatingPoint`.
  */
 export interface SinusoidalPhaseCurrents {
-  /** Peak of each phase current, A, ≥ 0. */
+  /** Peak of each phase current, A, in [0, 1e6]. */
   peakCurrent: number;
   /** Power-factor angle φ, rad, in [−π, π]. @default 0 */
   currentAngle?: number;
@@ -15,8 +15,8 @@ export interface SinusoidalPhaseCurrents {
  * The phase currents the multilevel balance and loss figures take, amperes, positive out of the
  * leg (string) into the load:
  * - samples: one array per phase (3 for a three-phase bridge, 1 for a single-phase one), each of
- *   the same length S ≥ 4, sample j at θ = 2πj/S over one fundamental period (the design report's
- *   inverter-current samples); between samples the current is taken as linear (exact integrals
+ *   the same length S in [4, 2^20], sample j at θ = 2πj/S over one fundamental period (the design
+ *   report's inverter-current samples), each within ±1e6 A; between samples the current is taken as linear (exact integrals
  *   of that interpolation against the switching functions);
  * - or {@link SinusoidalPhaseCurrents} (exact closed-form integrals).
  *

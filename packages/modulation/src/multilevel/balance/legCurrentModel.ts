@@ -4,6 +4,15 @@ import { ParameterRangeError, ParameterTypeError } from '../../validation/errors
 import type { MultilevelWaveforms } from '../MultilevelTypes.js';
 import type { MultilevelPhaseCurrents } from './MultilevelPhaseCurrents.js';
 
+/** The largest current magnitude accepted, A (as the loss model's reference current bound). */
+const MAX_CURRENT = 1e6;
+
+/**
+ * The most samples a phase current may hold: 2^20, eight times the design report's finest grid,
+ * so that the pieces of a period stay in the low millions.
+ */
+const MAX_CURRENT_SAMPLES = 1 << 20;
+
 /** Two numbers that describe a current on one piece [a, b]; sums of them describe sums. */
 export type PieceCoefficients = readonly [number, number];
 
@@ -51,7 +60,7 @@ export function legCurrentModel(
     );
   }
   const { peakCurrent, currentAngle = 0 } = currents;
-  assertNumberInRange('currents.peakCurrent', peakCurrent, { min: 0 });
+  assertNumberInRange('currents.peakCurrent', peakCurrent, { min: 0, max: MAX_CURRENT });
   assertNumberInRange('currents.currentAngle', currentAngle, { min: -Math.PI, max: Math.PI });
   return sinusoidalModel(
     legs.map((_, k) => {
@@ -127,7 +136,7 @@ function sampledModel(
   }
   const size = (currents[0] as { length?: unknown } | undefined)?.length;
   currents.forEach((samples, k) => {
-    assertFiniteArray(`currents[${k}]`, samples, 4, 10_000_000);
+    assertFiniteArray(`currents[${k}]`, samples, 4, MAX_CURRENT_SAMPLES);
     if (samples.length !== size) {
       throw new ParameterRangeError(
         `currents[${k}].length`,
@@ -141,7 +150,17 @@ function sampledModel(
   const legs = signs.map((sign, k) => {
     const samples = currents[phaseOf(k)] as ArrayLike<number>;
     const values = new Float64Array(count);
-    for (let j = 0; j < count; j++) values[j] = sign * (samples[j] as number);
+    for (let j = 0; j < count; j++) {
+      const value = samples[j] as number;
+      if (Math.abs(value) > MAX_CURRENT) {
+        throw new ParameterRangeError(
+          `currents[${phaseOf(k)}][${j}]`,
+          `a current within ±${MAX_CURRENT} A`,
+          value,
+        );
+      }
+      values[j] = sign * value;
+    }
     return values;
   });
   // The sample angles are ascending; the zero crossings are few: sort those and merge.

@@ -211,6 +211,21 @@ describe('neutralPointCurrentFigures', () => {
     expect(
       rangeErrorField(() => neutralPointCurrentFigures(bridge, { peakCurrent: -1 }, { mf: MF })),
     ).toBe('currents.peakCurrent');
+    expect(
+      rangeErrorField(() => neutralPointCurrentFigures(bridge, { peakCurrent: 2e6 }, { mf: MF })),
+    ).toBe('currents.peakCurrent');
+    const huge = [new Float64Array(64), new Float64Array(64), new Float64Array(64).fill(1e300)];
+    expect(rangeErrorField(() => neutralPointCurrentFigures(bridge, huge, { mf: MF }))).toBe(
+      'currents[2][0]',
+    );
+    const nan = [
+      new Float64Array(64),
+      Float64Array.from({ length: 64 }, (_, j) => (j === 9 ? NaN : 0)),
+      new Float64Array(64),
+    ];
+    expect(rangeErrorField(() => neutralPointCurrentFigures(bridge, nan, { mf: MF }))).toBe(
+      'currents[1][9]',
+    );
     expect(() => neutralPointCurrentFigures(bridge, sine, { mf: MF, capacitance: 1e-3 })).toThrow(
       /^fundamentalFrequency must be a number/,
     );
