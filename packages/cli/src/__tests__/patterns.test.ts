@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
+  harmonics,
   optimalPulsePattern,
   optimalPulseSweep,
   sheSweep,
@@ -8,6 +9,66 @@ import {
 import { runCli, viaJson } from './runCli.js';
 
 describe('pulsewright she', () => {
+  // Cascaded cells on unequal DC sources (invented PV strings): b_n = (4/(nπ))·Σ V_k cos nα_k
+  // (Tolbert, Chiasson, Du and McKenzie, IEEE Trans. Ind. Appl., 2005, from memory).
+  const unequal = ['--kind', 'staircase', '--vdc', '400', '--count', '3', '--eliminate', '5,7'];
+  const cellVoltages = [430, 385, 360];
+  const fundamental = 0.8 * ((4 * (430 + 385 + 360)) / Math.PI);
+
+  it('solves a staircase of unequal cell sources (--cell-voltages) as solveShe does', async () => {
+    const args = [...unequal, '--cell-voltages', '430,385,360', '--fundamental', `${fundamental}`];
+    const run = await runCli(['she', ...args, '--json']);
+    expect(run.code, run.stderr).toBe(0);
+    const expected = solveShe({
+      kind: 'staircase',
+      vdc: 400,
+      count: 3,
+      eliminate: [5, 7],
+      fundamental,
+      cellVoltages,
+    });
+    expect(expected.converged, expected.message).toBe(true);
+    expect(JSON.parse(run.stdout)).toEqual(viaJson(expected));
+    // The eliminated orders on the exact spectrum of the staircase of these sources, below 1e-9
+    // of the fundamental; the fundamental itself to 1e-9.
+    const spectrum = harmonics(expected.waveform, 7);
+    expect(Math.abs(spectrum[1]!.amplitude - fundamental)).toBeLessThan(1e-9 * fundamental);
+    for (const n of [5, 7]) expect(spectrum[n]!.amplitude).toBeLessThan(1e-9 * fundamental);
+    const text = await runCli(['she', ...args]);
+    expect(text.stdout).toContain('cell sources 430, 385, 360 V');
+    // m against the sources' own limit 4·ΣV_k/π: 0.8 as asked.
+    expect(text.stdout).toMatch(/m = 0\.8 of the staircase's 4·ΣV_k\/π = 1496\.\d+ V/);
+  });
+
+  it('tabulates unequal cell sources as sheSweep does, and names a short list', async () => {
+    const range = ['--from', `${0.7 * fundamental}`, '--to', `${fundamental}`, '--points', '4'];
+    const run = await runCli([
+      'she',
+      ...unequal,
+      '--cell-voltages',
+      '430,385,360',
+      ...range,
+      '--json',
+    ]);
+    expect(run.code, run.stderr).toBe(0);
+    const expected = sheSweep({
+      kind: 'staircase',
+      vdc: 400,
+      count: 3,
+      eliminate: [5, 7],
+      cellVoltages,
+      fundamentals: { from: 0.7 * fundamental, to: fundamental, points: 4 },
+      maxBranches: 1,
+    });
+    expect(JSON.parse(run.stdout)).toEqual(viaJson(expected));
+
+    const short = await runCli(['she', ...unequal, '--cell-voltages', '430,385', ...range]);
+    expect(short.code).toBe(2);
+    expect(short.stderr).toMatch(
+      /^pulsewright: cellVoltages\.length must be count = 3 .*\(option --cell-voltages\)\n$/,
+    );
+  });
+
   it("solves one pattern as the library's solveShe does", async () => {
     const run = await runCli([
       'she',

@@ -40,6 +40,14 @@ export function sheCommand(io: CliIo): Command {
       .helpGroup('Pattern:'),
   );
   command.addOption(
+    new Option(
+      '--cell-voltages <volts>',
+      "staircase only: each cell's DC source, volts, comma-separated, one per angle (cascaded cells on unequal sources; every cell at --vdc when left out)",
+    )
+      .argParser(parseNumberList)
+      .helpGroup('Pattern:'),
+  );
+  command.addOption(
     numberOption('--branches <count>', 'solution branches a table follows (default 1)').helpGroup(
       'Table over the fundamental:',
     ),
@@ -50,8 +58,12 @@ export function sheCommand(io: CliIo): Command {
     "\nExit status 1 when no solution is found at the one fundamental, or at none of the table's.",
   );
   command.action((flags: SheFlags) => {
-    const base = { ...patternBase(flags), eliminate: flags.eliminate };
-    const notes = patternNotes();
+    const base = {
+      ...patternBase(flags),
+      eliminate: flags.eliminate,
+      ...(flags.cellVoltages === undefined ? {} : { cellVoltages: flags.cellVoltages }),
+    };
+    const notes = patternNotes({ cellVoltages: '--cell-voltages' });
     return runPatternCommand(flags, io, {
       label: 'SHE table',
       single: () => {
@@ -91,7 +103,7 @@ function sheText(result: SheResult, options: SolveSheOptions): string {
   );
   const orders = `eliminating ${options.eliminate.join(', ')}`;
   return (
-    formatPattern(title, result, [orders]) +
+    formatPattern(title, result, [orders, ...cellVoltagesLine(result.cellVoltages)]) +
     '\n' +
     formatTable(
       ['order', 'remaining (V peak)', '% of fundamental'],
@@ -123,7 +135,8 @@ function angleCount(result: SheSweepResult, options: SheSweepOptions): number {
 
 function sheSweepText(result: SheSweepResult, options: SheSweepOptions): string {
   const count = angleCount(result, options);
-  const head = `${patternTitle('Selective harmonic elimination table', options.kind, count, options.vdc)}, eliminating ${options.eliminate.join(', ')}\n${result.message}\n`;
+  const sources = cellVoltagesLine(options.cellVoltages).map((line) => `${line}\n`);
+  const head = `${patternTitle('Selective harmonic elimination table', options.kind, count, options.vdc)}, eliminating ${options.eliminate.join(', ')}\n${sources.join('')}${result.message}\n`;
   const ends = result.branches.map((b, i) => `branch ${i + 1} ${b.end}`).join('; ');
   const headers = [
     'branch',
@@ -154,4 +167,12 @@ function sheSweepCsv(result: SheSweepResult): string {
       ...Array.from({ length: count }, (_, k) => r.angles[k] ?? null),
     ]),
   ]);
+}
+
+/** The line naming each cell's source of a staircase of unequal sources (none when equal). */
+function cellVoltagesLine(cellVoltages: readonly number[] | undefined): string[] {
+  if (cellVoltages === undefined) return [];
+  return [
+    `cell sources ${cellVoltages.map((v) => formatNumber(v)).join(', ')} V (cell k switches at αk)`,
+  ];
 }
