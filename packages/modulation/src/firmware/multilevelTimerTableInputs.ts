@@ -140,7 +140,21 @@ function checkedModulation(
   withFieldPrefix('modulation.', () => {
     assertMultilevelCarrierOptions(checked);
   });
-  return checked as MultilevelTimerTableInputs['modulation'];
+  // Only the fields the modulation has (a caller's object may carry others, such as `method`).
+  const { topology, levels, carriers, phaseCount, ma, vdc, zeroSequence } =
+    checked as unknown as MultilevelCarrierOptions;
+  return {
+    topology,
+    levels,
+    carriers,
+    phaseCount,
+    ma,
+    mf,
+    vdc,
+    ...(zeroSequence !== undefined ? { zeroSequence } : {}),
+    sampling,
+    carrierPhase: checked.carrierPhase as number,
+  };
 }
 
 /** The table length given, or one entry per compare update; a divisor of the updates, bounded. */

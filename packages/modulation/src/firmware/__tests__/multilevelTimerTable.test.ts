@@ -427,6 +427,20 @@ describe('multilevelTimerTable input checks', () => {
     ).toBe(21);
   });
 
+  it("records the modulation's own fields only, defaults filled in", () => {
+    // A design's modulation carries `method`; the table's parameters hold what the table used.
+    const table = multilevelTimerTable({
+      modulation: { ...base, method: 'multilevel-carrier' } as typeof base,
+      ...frequencies,
+    });
+    expect(table.parameters.modulation).toEqual({
+      ...base,
+      mf: MF,
+      sampling: 'regular-symmetric',
+      carrierPhase: 0,
+    });
+  });
+
   it('names the timer fields and their ranges', () => {
     expect(() =>
       multilevelTimerTable({
