@@ -2,6 +2,7 @@ import { readFileSync } from 'node:fs';
 import { Command } from 'commander';
 import { angleTableCommand } from './commands/angleTableCommand.js';
 import { maSweepCommand } from './commands/maSweepCommand.js';
+import { multilevelTimerTableCommand } from './commands/multilevelTimerTableCommand.js';
 import { optimalPatternCommand } from './commands/optimalPatternCommand.js';
 import { reportCommand } from './commands/reportCommand.js';
 import { sheCommand } from './commands/sheCommand.js';
@@ -40,6 +41,7 @@ export function createProgram(io: CliIo): Command {
     reportCommand,
     spectrumCommand,
     timerTableCommand,
+    multilevelTimerTableCommand,
     sheCommand,
     optimalPatternCommand,
     angleTableCommand,

@@ -1,21 +1,24 @@
-import { Command, Option } from 'commander';
+import { Command } from 'commander';
 import {
   timerTableToCHeader,
   timerTableToCsv,
   timerTableToJson,
   type TimerTable,
 } from '@pulsewright/modulation';
-import { InputError } from '../errors.js';
 import { callLibrary } from '../input/callLibrary.js';
 import type { CliIo } from '../output/CliIo.js';
-import { writeOutput } from '../output/writeOutput.js';
 import { addTimerOptions, readTimerTable, type TimerInputFlags } from '../timer/readTimerTable.js';
-import { addOutputOptions, type OutputFlags } from './commonOptions.js';
+import {
+  addTimerOutputOptions,
+  timerFormatOf,
+  writeTimerOutput,
+  type TimerFormat,
+  type TimerOutputFlags,
+} from './timerOutput.js';
 
-export const TIMER_FORMATS = ['c-header', 'csv', 'json'] as const;
-export type TimerFormat = (typeof TIMER_FORMATS)[number];
+export { TIMER_FORMATS, type TimerFormat } from './timerOutput.js';
 
-type TimerFlags = TimerInputFlags & OutputFlags & { format?: TimerFormat; quiet?: boolean };
+type TimerFlags = TimerInputFlags & TimerOutputFlags;
 
 /**
  * The table rendered as the API's `POST /api/v1/timer-tables?format=…` renders it (the same
@@ -37,23 +40,7 @@ export function timerTableCommand(io: CliIo): Command {
     'timer compare values for a controller (C header, CSV or JSON), byte for byte as the API downloads them',
   );
   addTimerOptions(command);
-  command.addOption(
-    new Option('--prefix <name>', 'prefix of the C names and macros (default pwm_table)').helpGroup(
-      'Timer:',
-    ),
-  );
-  command.addOption(
-    new Option('--format <format>', 'c-header, csv or json')
-      .choices(TIMER_FORMATS)
-      .helpGroup('Output:'),
-  );
-  command.addOption(
-    new Option(
-      '-q, --quiet',
-      "do not print the table's warnings on standard error (they are in the output too)",
-    ).helpGroup('Output:'),
-  );
-  addOutputOptions(command);
+  addTimerOutputOptions(command, 'pwm_table');
   command.addHelpText(
     'after',
     '\nThe input is a design (file or flags) with the timer options, or a JSON/YAML file holding the body of\n' +
@@ -61,28 +48,11 @@ export function timerTableCommand(io: CliIo): Command {
       'The default format is c-header; --json is --format json.',
   );
   command.action((file: string | undefined, flags: TimerFlags) => {
-    if (flags.json === true && flags.format !== undefined && flags.format !== 'json') {
-      throw new InputError(
-        '--format',
-        `--format must be json or left out with --json; got ${JSON.stringify(flags.format)}`,
-      );
-    }
-    const format: TimerFormat = flags.json === true ? 'json' : (flags.format ?? 'c-header');
+    const format = timerFormatOf(flags);
     const { table, prefix, messages } = readTimerTable(file, flags);
     const notes = new Map(flags.prefix === undefined ? [] : [['prefix', 'from --prefix']]);
-    let text = callLibrary(() => renderTimerTable(table, format, prefix), { notes });
-    if (
-      format === 'json' &&
-      io.stdout.isTTY === true &&
-      (flags.output === undefined || flags.output === '-')
-    )
-      text += '\n';
-    writeOutput(text, flags.output, io);
-    if (flags.quiet !== true) {
-      for (const message of messages) io.stderr.write(`pulsewright: note: ${message}\n`);
-      for (const warning of table.warnings)
-        io.stderr.write(`pulsewright: warning: ${warning.field}: ${warning.message}\n`);
-    }
+    const text = callLibrary(() => renderTimerTable(table, format, prefix), { notes });
+    writeTimerOutput(text, format, flags, io, { messages, warnings: table.warnings });
   });
   return command;
 }
