@@ -39,7 +39,7 @@ export interface WaveformChartProps {
 const TAU = 2 * Math.PI;
 
 /** The points of a piecewise-constant period for a step line, from 0 to 2π. */
-function stepPoints({ edges, levels }: StepWaveform): [number, number][] {
+export function stepPoints({ edges, levels }: StepWaveform): [number, number][] {
   if (edges.length === 0) return [];
   const last = levels[levels.length - 1] ?? 0;
   const points: [number, number][] = [[0, last]];

@@ -11,6 +11,9 @@ import { CommonModePanel } from './CommonModePanel';
 import { GridPanel } from './GridPanel';
 import { LossPanel } from './LossPanel';
 import { MotorLoadPanel } from './MotorLoadPanel';
+import { MultilevelBalancePanel } from './multilevel/MultilevelBalancePanel';
+import { MultilevelFiguresPanel } from './multilevel/MultilevelFiguresPanel';
+import { MultilevelLevelChart } from './multilevel/MultilevelLevelChart';
 
 const CURRENT_COLOURS = {
   inverter: 'var(--color-trace-current)',
@@ -26,6 +29,15 @@ export function StudyCharts({ report, fileStem }: { report: StudyReport; fileSte
     <div className="flex flex-col gap-4">
       <FigureCards figures={reportFigures(report)} label="Summary" />
       <VoltageChart report={report} fileStem={fileStem} />
+      {report.multilevel ? (
+        <>
+          <MultilevelLevelChart multilevel={report.multilevel} fileStem={fileStem} />
+          <MultilevelFiguresPanel multilevel={report.multilevel} />
+          {report.multilevel.balance ? (
+            <MultilevelBalancePanel balance={report.multilevel.balance} fileStem={fileStem} />
+          ) : null}
+        </>
+      ) : null}
       <ReportSpectrum report={report} fileStem={fileStem} />
       {report.currents.length ? <CurrentsChart report={report} fileStem={fileStem} /> : null}
       <MotorLoadPanel report={report} />
