@@ -121,11 +121,14 @@ export async function createApp(overrides: ConfigOverrides = {}): Promise<Pulsew
   );
   const version = document.info.version;
   const rateLimits = rateLimitStores(config.databaseUrl, sequelize);
+  // The compute routes first: they take most of the load, and Express tries each route in turn
+  // (about 35 fewer path matches for a compute request). No path of one router is also matched,
+  // for the same method, by a route of another, so the order changes nothing else.
+  app.use(computeRoutes(services));
   app.use(accountRoutes(services, { ...config, version, rateLimits }));
   app.use(studyRoutes(services));
   app.use(patternRoutes(services));
   app.use(shareRoutes(services, { ...config, rateLimits }));
-  app.use(computeRoutes(services));
   app.use(captureRoutes(services));
   app.use(exportRoutes(services, { version }));
   app.use('/api', (req, _res, next) =>

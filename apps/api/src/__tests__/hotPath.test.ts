@@ -91,7 +91,7 @@ describe('the hot path of a compute answer, against the same service with respon
     checked = await testApp({ validateResponses: true });
     plainToken = await signIn(plain.app, DEMO.viewer);
     checkedToken = await signIn(checked.app, DEMO.viewer);
-  });
+  }, 120_000); // two services start (migrations, seeding) on a loaded machine
   afterAll(async () => {
     await plain.dispose();
     await checked.dispose();
