@@ -109,6 +109,27 @@ describe('multilevel designs in the service', () => {
     expect(waveforms.body.name).toBe('leg a to DC midpoint');
   });
 
+  it('POST /designs/report takes a three-level space-vector design: the library’s report, midpoint balance included', async () => {
+    const design = {
+      ...NPC_DESIGN,
+      carrierFrequency: 50 * 36,
+      modulation: {
+        method: 'multilevel-space-vector',
+        m: 0.85,
+        smallVectorSplit: 0.3,
+        topology: 't-type',
+      },
+    } as const satisfies InverterDesign;
+    const options = { maxOrder: 150, points: 128 };
+    const res = await request(t.app)
+      .post('/api/v1/designs/report')
+      .set(engineer)
+      .send({ design, ...options });
+    expect(res.status, JSON.stringify(res.body).slice(0, 400)).toBe(200);
+    expect(res.body).toEqual(JSON.parse(JSON.stringify(analyseDesign(design, options))));
+    expect(res.body.multilevel.balance.neutralPoint.carrierAverages.values).toHaveLength(36);
+  });
+
   it('answers 400 naming design.modulation.levels and the topology’s range for a bad level count', async () => {
     for (const [modulation, words] of [
       [{ ...NPC_DESIGN.modulation, levels: 5 }, "3 for topology 'npc'"],

@@ -66,6 +66,13 @@ const BYTES_PER_NUMBER = 20;
 const sci = (value: number): string => value.toPrecision(3);
 
 /**
+ * A three-phase three-level bridge as the cost model sees three-level space vector: each leg
+ * steps at most four times a switching period (a seven-state sequence moves one leg one level a
+ * step), the bound multilevelEdges gives three levels.
+ */
+const THREE_LEVEL = { topology: 'npc', levels: 3, phaseCount: 3 } as const;
+
+/**
  * Upper bound of the edges per period of a multilevel bridge's voltages at frequency ratio mf:
  * each of the levels − 1 carriers (bands, or cells' carriers) of a leg crosses the reference
  * at most twice a carrier cycle, 2·(levels − 1)·(mf + 1) edges a leg (exact for phase-shifted
@@ -120,12 +127,17 @@ export function modulationEdges(modulation: Modulation): {
       const { phase, leg, line } = multilevelEdges(modulation, modulation.mf);
       return { phase, leg, line };
     }
+    case 'multilevel-space-vector': {
+      const { phase, leg, line } = multilevelEdges(THREE_LEVEL, modulation.frequencyRatio);
+      return { phase, leg, line };
+    }
   }
 }
 
 /** The request field that sets a modulation's switching frequency (its edges). */
 function edgeField(modulation: Modulation, prefix: string): string {
-  if (modulation.method === 'space-vector') return `${prefix}frequencyRatio`;
+  if (modulation.method === 'space-vector' || modulation.method === 'multilevel-space-vector')
+    return `${prefix}frequencyRatio`;
   if (
     modulation.method === 'sine-triangle' ||
     modulation.method === 'three-phase' ||
@@ -139,6 +151,8 @@ function edgeField(modulation: Modulation, prefix: string): string {
 function allEdges(modulation: Modulation): number {
   if (modulation.method === 'multilevel-carrier')
     return multilevelEdges(modulation, modulation.mf).build;
+  if (modulation.method === 'multilevel-space-vector')
+    return multilevelEdges(THREE_LEVEL, modulation.frequencyRatio).build;
   const edges = modulationEdges(modulation);
   return modulationPhaseCount(modulation) === 3
     ? 3 * (edges.phase + edges.leg + edges.line)
@@ -190,6 +204,7 @@ function designEdges(
 ): { phase: number; line: number; build: number } {
   const { modulation } = design;
   if (modulation.method === 'multilevel-carrier') return multilevelEdges(modulation, ratio);
+  if (modulation.method === 'multilevel-space-vector') return multilevelEdges(THREE_LEVEL, ratio);
   const edges = designVoltageEdges(design, ratio);
   return {
     ...edges,
@@ -217,6 +232,8 @@ function designVoltageEdges(
       };
     case 'multilevel-carrier':
       return multilevelEdges(modulation, ratio);
+    case 'multilevel-space-vector':
+      return multilevelEdges(THREE_LEVEL, ratio);
   }
 }
 

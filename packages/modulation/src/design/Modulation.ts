@@ -1,5 +1,6 @@
 import type { SineTriangleOptions } from '../carrier/sineTriangle.js';
 import type { MultilevelCarrierOptions } from '../multilevel/MultilevelTypes.js';
+import type { ThreeLevelSpaceVectorWaveformOptions } from '../multilevel/space-vector/threeLevelSpaceVectorWaveforms.js';
 import type { SheKind } from '../she/SheKind.js';
 import type { SpaceVectorWaveformOptions } from '../space-vector/spaceVectorWaveforms.js';
 import type { ThreePhaseOptions } from '../three-phase/threePhase.js';
@@ -54,6 +55,15 @@ export type MultilevelCarrierModulation = {
 } & MultilevelCarrierOptions;
 
 /**
+ * A three-phase three-level bridge (NPC or T-type legs) under nearest-three-vector space vector
+ * PWM: the fields of `threeLevelSpaceVectorWaveforms` (exactly one of m and ma; vdc the whole DC
+ * link; the redundant small vector's split a parameter).
+ */
+export type MultilevelSpaceVectorModulation = {
+  method: 'multilevel-space-vector';
+} & ThreeLevelSpaceVectorWaveformOptions;
+
+/**
  * Every modulation method the library offers, discriminated on `method`. Each variant carries
  * the fields of the library function that builds it, DC bus and frequency ratio included; an
  * `InverterDesign` holds the same without those two, which the design supplies.
@@ -64,7 +74,8 @@ export type Modulation =
   | SpaceVectorModulation
   | HarmonicEliminationModulation
   | OptimalPatternModulation
-  | MultilevelCarrierModulation;
+  | MultilevelCarrierModulation
+  | MultilevelSpaceVectorModulation;
 
 /** The `method` names. */
 export type ModulationMethod = Modulation['method'];
@@ -77,6 +88,7 @@ export const MODULATION_METHODS: readonly ModulationMethod[] = [
   'selective-harmonic-elimination',
   'optimal-pattern',
   'multilevel-carrier',
+  'multilevel-space-vector',
 ];
 
 /** A label a person reads for each method. */
@@ -87,13 +99,18 @@ export const MODULATION_METHOD_LABELS: Readonly<Record<ModulationMethod, string>
   'selective-harmonic-elimination': 'Selective harmonic elimination pattern',
   'optimal-pattern': 'Optimal pulse pattern',
   'multilevel-carrier': 'Multilevel carrier (level- or phase-shifted)',
+  'multilevel-space-vector': 'Three-level space vector (NPC or T-type)',
 };
 
 /**
  * The methods that always drive a three-phase bridge. A multilevel carrier modulation drives
  * the bridge its own `phaseCount` says, so it is in neither list: ask `modulationPhaseCount`.
  */
-export const THREE_PHASE_METHODS: readonly ModulationMethod[] = ['three-phase', 'space-vector'];
+export const THREE_PHASE_METHODS: readonly ModulationMethod[] = [
+  'three-phase',
+  'space-vector',
+  'multilevel-space-vector',
+];
 
 /** The methods with a carrier (or switching period) whose frequency the design sets. */
 export const CARRIER_METHODS: readonly ModulationMethod[] = [
@@ -101,6 +118,7 @@ export const CARRIER_METHODS: readonly ModulationMethod[] = [
   'three-phase',
   'space-vector',
   'multilevel-carrier',
+  'multilevel-space-vector',
 ];
 
 /** The methods given by stored first-quarter angles. */

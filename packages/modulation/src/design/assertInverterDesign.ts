@@ -2,6 +2,7 @@ import { assertNumberInRange, assertOneOf } from '../validation/assertions.js';
 import { ParameterRangeError, ParameterTypeError } from '../validation/errors.js';
 import { DAMPING_PLACEMENTS } from '../filter/LcFilterOptions.js';
 import { assertMultilevelCarrierOptions } from '../multilevel/carrier/assertMultilevelCarrierOptions.js';
+import { THREE_LEVEL_SPACE_VECTOR_TOPOLOGIES } from '../multilevel/space-vector/threeLevelSpaceVectorWaveforms.js';
 import { withFieldPrefix } from '../validation/withFieldPrefix.js';
 import { DESIGN_BOUNDS, MAX_PATTERN_ANGLES, type DesignBoundsField } from './designBounds.js';
 import type { InverterDesign } from './InverterDesign.js';
@@ -48,6 +49,7 @@ export function assertInverterDesign(design: unknown): asserts design is Inverte
     ['modulation.m', modulation.m],
     ['modulation.carrierPhase', modulation.carrierPhase],
     ['modulation.zeroSplit', modulation.zeroSplit],
+    ['modulation.smallVectorSplit', modulation.smallVectorSplit],
     ['modulation.fundamental', modulation.fundamental],
   ] as const) {
     if (entry !== undefined) check(field, entry);
@@ -84,6 +86,8 @@ export function assertInverterDesign(design: unknown): asserts design is Inverte
       assertMultilevelCarrierOptions({ ...modulation, vdc: value.vdc, mf }),
     );
   }
+  if (modulation.method === 'multilevel-space-vector' && modulation.topology !== undefined)
+    assertOneOf('modulation.topology', modulation.topology, THREE_LEVEL_SPACE_VECTOR_TOPOLOGIES);
   assertDesignLoad(value.load, check);
   assertDesignFilter(value.filter, check);
   assertDesignGrid(value, check);

@@ -43,10 +43,10 @@ export interface AsynchronousDesignSpectra {
 
 /**
  * The carrier methods whose voltages can be built over several fundamental periods (a carrier
- * span); a multilevel carrier modulation is built over one period, so it needs a whole mf.
+ * span); the multilevel methods are built over one period, so they need a whole mf.
  */
 const ASYNCHRONOUS_METHODS: readonly ModulationMethod[] = CARRIER_METHODS.filter(
-  (m) => m !== 'multilevel-carrier',
+  (m) => m !== 'multilevel-carrier' && m !== 'multilevel-space-vector',
 );
 
 /** Options of {@link asynchronousDesignSpectra}. */

@@ -32,6 +32,7 @@ export const DESIGN_BOUNDS = {
   // and the phase count (1 or 3; the schema states the two values).
   'modulation.levels': { min: 3, max: 17, integer: true },
   'modulation.phaseCount': { min: 1, max: 3, integer: true },
+  'modulation.smallVectorSplit': { min: 0, max: 1 },
   'load.r': { min: 1e-6, max: 1_000_000 },
   'load.l': { min: 0, max: 100 },
   'load.emf.amplitude': { min: 0, max: 100_000 },

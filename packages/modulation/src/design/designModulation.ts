@@ -18,6 +18,7 @@ export function designModulation(design: InverterDesign): Modulation {
     case 'multilevel-carrier':
       return { ...modulation, vdc, mf: designFrequencyRatio(design) };
     case 'space-vector':
+    case 'multilevel-space-vector':
       return { ...modulation, vdc, frequencyRatio: designFrequencyRatio(design) };
     case 'selective-harmonic-elimination':
     case 'optimal-pattern':

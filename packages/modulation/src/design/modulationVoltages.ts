@@ -1,6 +1,7 @@
 import type { CarrierSpan } from '../carrier/CarrierSpan.js';
 import { sineTriangle } from '../carrier/sineTriangle.js';
 import { multilevelCarrier } from '../multilevel/carrier/multilevelCarrier.js';
+import { threeLevelSpaceVectorWaveforms } from '../multilevel/space-vector/threeLevelSpaceVectorWaveforms.js';
 import type { MultilevelTopology, MultilevelWaveforms } from '../multilevel/MultilevelTypes.js';
 import { sheWaveform } from '../she/sheWaveform.js';
 import { spaceVectorWaveforms } from '../space-vector/spaceVectorWaveforms.js';
@@ -81,6 +82,13 @@ export function modulationVoltages(
     case 'multilevel-carrier': {
       const { method: _method, ...options } = modulation;
       return multilevelVoltages(multilevelCarrier(options), modulation.topology);
+    }
+    case 'multilevel-space-vector': {
+      const { method: _method, ...options } = modulation;
+      return multilevelVoltages(
+        threeLevelSpaceVectorWaveforms(options),
+        modulation.topology ?? 'npc',
+      );
     }
   }
 }

@@ -32,7 +32,7 @@ export interface ModulatorSignals {
  * ma·sin θ against the unit triangle (Holmes and Lipo, 2003, ch. 3), three-phase carrier PWM's
  * phase-a reference with its zero sequence against the shared carrier (ch. 5 and 7; inverted
  * where a reduced common-mode method inverts phase a's, see `invertsCarrier`), space
- * vector's phase-a sine reference alone, a multilevel carrier modulator's phase-a reference
+ * vector's (two- or three-level) phase-a sine reference alone, a multilevel carrier modulator's phase-a reference
  * against every one of its carriers (McGrath and Holmes, 2002; Holmes and Lipo, 2003, ch. 11). Null for a stored pattern, which has no modulator.
  *
  * @param points - samples over the period, integer in [64, 20000]; at least 8 a carrier period
@@ -45,10 +45,10 @@ export function modulatorSignals(modulation: Modulation, points = 1200): Modulat
     modulation.method === 'optimal-pattern'
   )
     return null;
-  const ratio = modulation.method === 'space-vector' ? modulation.frequencyRatio : modulation.mf;
+  const ratio = 'frequencyRatio' in modulation ? modulation.frequencyRatio : modulation.mf;
   const samples = Math.min(20_000, Math.max(points, 8 * ratio));
   const angles = Array.from({ length: samples + 1 }, (_, k) => (TAU * k) / samples);
-  if (modulation.method === 'space-vector') {
+  if (modulation.method === 'space-vector' || modulation.method === 'multilevel-space-vector') {
     const reference = sineReference(spaceVectorIndices(modulation).ma);
     return { angles, reference: angles.map((t) => reference.value(t)), carrier: null };
   }

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { multilevelCarrier } from '../../multilevel/carrier/multilevelCarrier.js';
+import { threeLevelSpaceVectorWaveforms } from '../../multilevel/space-vector/threeLevelSpaceVectorWaveforms.js';
 import { harmonics } from '../../spectrum/harmonics.js';
 import { waveformThd } from '../../spectrum/waveformThd.js';
 import { waveformWthd } from '../../spectrum/waveformWthd.js';
@@ -305,10 +306,64 @@ describe('analyseDesign: multilevel carrier designs', () => {
     }
   });
 
+  it('three-level space vector: the report is the library’s legs, and the symmetric split draws no mean midpoint current', () => {
+    const sv: InverterDesign = {
+      vdc: 800,
+      fundamentalFrequency: 50,
+      carrierFrequency: 50 * 36,
+      modulation: { method: 'multilevel-space-vector', m: 0.8, topology: 't-type' },
+      load: { r: 8, l: 0.01 },
+    };
+    const report = analyseDesign(sv, { maxOrder: 300 });
+    const { legs } = threeLevelSpaceVectorWaveforms({
+      m: 0.8,
+      vdc: 800,
+      frequencyRatio: 36,
+      topology: 't-type',
+    });
+    const [a, b, c] = legs.map((leg) => leg.output) as [Waveform, Waveform, Waveform];
+    const phaseA = combineWaveforms([a, b, c], ([x = 0, y = 0, z = 0]) => (2 * x - y - z) / 3);
+    assertInDelta(report.bridge.thd, waveformThd(phaseA), 1e-12, 'THD');
+    harmonics(phaseA, 300).forEach((h, order) =>
+      assertInDelta(
+        report.bridge.spectrum[order]?.amplitude ?? NaN,
+        h.amplitude,
+        1e-9,
+        `order ${order}`,
+      ),
+    );
+    // m = √3·|V1|/vdc (Celanovic and Boroyevich, 2000): the phase fundamental is m·vdc/√3,
+    // within 1 % at N = 36 (regular sampling delays it, hardly shrinks it).
+    assertInDelta(report.bridge.fundamental, (0.8 * 800) / Math.sqrt(3), 3.7, 'fundamental');
+    expect(report.multilevel).toMatchObject({ topology: 't-type', levels: 3, carriers: null });
+    expect(report.modulator?.carrier).toBeNull();
+    // The symmetric small-vector split: zero mean midpoint current over a fundamental for a
+    // balanced load (Celanovic and Boroyevich, 2000; issue 13), within 1 % of the peak current.
+    const neutral = report.multilevel!.balance!.neutralPoint!;
+    expect(Math.abs(neutral.mean)).toBeLessThan(0.01 * report.currents[0]!.inverter.fundamental);
+    expect(neutral.carrierAverages.values).toHaveLength(36);
+    for (const [modulation, field] of [
+      [
+        { method: 'multilevel-space-vector', m: 0.8, topology: 'flying-capacitor' },
+        'modulation.topology',
+      ],
+      [
+        { method: 'multilevel-space-vector', m: 0.8, smallVectorSplit: 1.5 },
+        'modulation.smallVectorSplit',
+      ],
+      [{ method: 'multilevel-space-vector', m: 0.8, ma: 0.9 }, 'modulation.ma'],
+    ] as const) {
+      expect(rangeErrorField(() => analyseDesign({ ...sv, modulation } as InverterDesign))).toBe(
+        field,
+      );
+    }
+  });
+
   it('the phase count is the modulation’s own', () => {
     expect(modulationPhaseCount({ method: 'multilevel-carrier', ...npc })).toBe(3);
     expect(modulationPhaseCount({ method: 'multilevel-carrier', ...npc, phaseCount: 1 })).toBe(1);
     expect(modulationPhaseCount({ method: 'space-vector', ma: 0.5 })).toBe(3);
+    expect(modulationPhaseCount({ method: 'multilevel-space-vector', m: 0.5 })).toBe(3);
     expect(modulationPhaseCount({ method: 'sine-triangle', scheme: 'bipolar', ma: 0.5 })).toBe(1);
   });
 });

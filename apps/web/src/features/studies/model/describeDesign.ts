@@ -129,7 +129,9 @@ export function describeDesign(design: InverterDesign): string {
           ? m.zeroSequence
           : m.method === 'multilevel-carrier'
             ? `${m.topology} ${m.levels}-level ${m.carriers}`
-            : m.sequence;
+            : m.method === 'multilevel-space-vector'
+              ? `three-level ${m.topology ?? 'npc'}`
+              : m.sequence;
     parts.push(
       ...[
         index,
