@@ -226,11 +226,14 @@ export function analyseDesign(
     loadPower = load === null ? null : solved.reduce((sum, s) => sum + s.loadPower, 0);
     inverterSamples = solved.map((s) => s.inverterSamples);
   }
-  // With a grid the load's current is the grid's: named so.
+  // With a grid the load's current is the grid's: named so (by phase on a three-phase bridge only).
   if (grid !== null)
     currents = currents.map((c) => ({
       ...c,
-      load: c.load && { ...c.load, name: `grid current, phase ${c.phase}` },
+      load: c.load && {
+        ...c.load,
+        name: `grid current${phaseSuffix(voltages.phaseCount, c.phase)}`,
+      },
     }));
   // The switching function of each leg: a two-level leg's upper switch is on at +vdc/2; a
   // single-phase bridge draws (v_bridge/vdc)·i. A staircase has a source per cell: no one DC link.

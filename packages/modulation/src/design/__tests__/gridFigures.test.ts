@@ -84,6 +84,20 @@ describe('analyseDesign with a grid (LCL filter, issue 12 capability 6)', () => 
     ]);
   });
 
+  it("names a single-phase bridge's grid current without a phase (it has one)", () => {
+    const single = analyseDesign({
+      ...design,
+      modulation: { method: 'sine-triangle', ma: 0.9, scheme: 'unipolar' },
+      grid: { ...design.grid!, lineVoltage: 230 },
+    });
+    expect(single.phaseCount).toBe(1);
+    expect(single.currents.map((c) => [c.inverter.name, c.capacitor?.name, c.load?.name])).toEqual([
+      ['inverter (switch) current', 'capacitor current', 'grid current'],
+    ]);
+    // Its fundamental is still the grid figures' (the same phase, named once).
+    assertInDelta(single.currents[0]!.load!.fundamental, single.grid!.gridCurrentFundamental, 1e-9);
+  });
+
   it('reports the resonance (1/2π)·√((L1 + L2′)/(L1·L2′·C)) with L2′ = l2 + l, and its distances', () => {
     const l2Total = l2 + gridL;
     const f = Math.sqrt((l1 + l2Total) / (l1 * l2Total * c)) / TAU;
