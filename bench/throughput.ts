@@ -12,8 +12,10 @@
  * Run: `npx tsx bench/throughput.ts` (after `npx turbo run build --filter=@pulsewright/api`);
  * THROUGHPUT_SECONDS (default 5) a load, THROUGHPUT_ROUNDS (default 3) rounds of them taken in
  * turn (bare, service, service with response validation, …), THROUGHPUT_CONNECTIONS (default 50);
- * THROUGHPUT_COMPARE_API=<another build's apps/api/dist/app.js> adds that build's figures.
+ * THROUGHPUT_COMPARE_API=<another build's apps/api/dist/app.js> adds that build's figures;
+ * THROUGHPUT_NODE_DEFAULTS=1 runs with Node's memory defaults instead of the service's settings.
  */
+import { spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
@@ -27,6 +29,28 @@ import {
 } from '@pulsewright/modulation';
 import { createApp } from '@pulsewright/api';
 import { printTable } from './measure.js';
+
+/**
+ * The service's Node.js settings as `npm start` gives them (scripts/start.mjs, SERVICE_NODE_FLAGS:
+ * a 64 MB semi-space). The bare server and the service share this process, so both run with them;
+ * without them in NODE_OPTIONS or on the command line this script runs itself again with them.
+ * THROUGHPUT_NODE_DEFAULTS=1 measures with Node's defaults instead.
+ */
+const SERVICE_NODE_FLAGS = ['--max-semi-space-size=64'];
+const given = [...process.execArgv, ...(process.env.NODE_OPTIONS ?? '').split(/\s+/)];
+if (
+  process.env.THROUGHPUT_NODE_DEFAULTS !== '1' &&
+  !SERVICE_NODE_FLAGS.every((flag) => given.includes(flag))
+) {
+  const again = spawnSync(
+    process.execPath,
+    [...process.execArgv, ...SERVICE_NODE_FLAGS, ...process.argv.slice(1)],
+    { stdio: 'inherit' },
+  );
+  process.exit(again.status ?? 1);
+}
+const NODE_FLAGS =
+  process.env.THROUGHPUT_NODE_DEFAULTS === '1' ? "Node's defaults" : SERVICE_NODE_FLAGS.join(' ');
 
 const SECONDS = Number(process.env.THROUGHPUT_SECONDS ?? 5);
 const ROUNDS = Number(process.env.THROUGHPUT_ROUNDS ?? 3);
@@ -198,7 +222,7 @@ const [base, full, checked, compared] = (await interleaved(targets)) as [
 ];
 for (const target of targets) await target.close();
 printTable(
-  `POST /api/v1/spectra (mf 21, maxOrder 1050) against a bare node:http server doing the same work, ${CONNECTIONS} connections, ${ROUNDS} rounds of ${SECONDS} s each`,
+  `POST /api/v1/spectra (mf 21, maxOrder 1050) against a bare node:http server doing the same work, ${CONNECTIONS} connections, ${ROUNDS} rounds of ${SECONDS} s each, Node.js ${NODE_FLAGS}`,
   [
     ['bare server: requests per second, p99', `${base.rps.toFixed(0)}, ${base.p99} ms`],
     ['service: requests per second, p99', `${full.rps.toFixed(0)}, ${full.p99} ms`],
