@@ -5,6 +5,8 @@ import { fieldErrorOf, type Job } from '../../../lib/api';
 import { PATTERN_KIND_OPTIONS } from '../../../lib/modulationOptions';
 import {
   angleCountOf,
+  cellVoltagesError,
+  cellVoltagesOf,
   type EliminationForm as Form,
   type PatternKind,
   type PatternType,
@@ -35,6 +37,19 @@ export function EliminationForm({
       onChange({ ...form, [key]: value });
   const fieldError = (...fields: string[]) =>
     fields.map((f) => fieldErrorOf(error, f)).find((m) => m !== undefined);
+  const count = angleCountOf(form);
+  // The library's words for sources it would refuse, else the service's (which names
+  // cellVoltages, cellVoltages.length or one entry).
+  const cellVoltagesMessage =
+    cellVoltagesError(cellVoltagesOf(form), count) ??
+    fieldError(
+      'cellVoltages',
+      'cellVoltages.length',
+      ...Array.from({ length: count }, (_, k) => [
+        `cellVoltages[${k}]`,
+        `cellVoltages.${k}`,
+      ]).flat(),
+    );
   return (
     <Panel title="Pattern">
       <form
@@ -68,13 +83,25 @@ export function EliminationForm({
           error={fieldError('vdc')}
         />
         {form.type === 'she' ? (
-          <TextField
-            label="Orders to eliminate"
-            value={form.eliminate}
-            onChange={(e) => set('eliminate')(e.target.value)}
-            hint={`odd orders ≥ 3; ${angleCountOf(form)} angles per quarter`}
-            error={fieldError('eliminate', 'count')}
-          />
+          <>
+            <TextField
+              label="Orders to eliminate"
+              value={form.eliminate}
+              onChange={(e) => set('eliminate')(e.target.value)}
+              hint={`odd orders ≥ 3; ${count} angles per quarter`}
+              error={fieldError('eliminate', 'count')}
+            />
+            {form.kind === 'staircase' ? (
+              <TextField
+                label="Cell sources"
+                unit="V"
+                value={form.cellVoltages}
+                onChange={(e) => set('cellVoltages')(e.target.value)}
+                hint={`cascaded cells on unequal DC sources: ${count} values, cell k switching at angle k; blank for every cell at the DC level`}
+                error={cellVoltagesMessage}
+              />
+            ) : null}
+          </>
         ) : (
           <>
             <NumberField

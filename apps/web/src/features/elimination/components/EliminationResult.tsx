@@ -144,6 +144,9 @@ function PickedPoint({ pattern, point }: { pattern: SolvedPattern; point: SweepP
                   method: 'selective-harmonic-elimination',
                   kind: pattern.kind,
                   angles: point.angles,
+                  ...(pattern.cellVoltages === undefined
+                    ? {}
+                    : { cellVoltages: pattern.cellVoltages }),
                   eliminate: pattern.orders,
                   fundamental: point.fundamental,
                 }
@@ -236,10 +239,16 @@ function PickedPoint({ pattern, point }: { pattern: SolvedPattern; point: SweepP
         fileName="pattern-point-spectrum"
         labelThreshold={2}
       />
-      <CompareEventsPanel
-        source={{ pattern: { kind: pattern.kind, vdc: pattern.vdc, angles: point.angles } }}
-        orders={pattern.orders}
-      />
+      {pattern.cellVoltages === undefined ? (
+        <CompareEventsPanel
+          source={{ pattern: { kind: pattern.kind, vdc: pattern.vdc, angles: point.angles } }}
+          orders={pattern.orders}
+        />
+      ) : (
+        <p className="text-xs text-ink-soft">
+          Compare events and angle tables take cells of equal sources only.
+        </p>
+      )}
     </>
   );
 }

@@ -45,17 +45,25 @@ export function useEliminationSweep() {
 
   const run = (form: EliminationForm) => {
     const count = angleCountOf(form);
-    const scale = maScaleOf(form, count);
+    const pattern = solvedPatternOf(form);
+    const scale = maScaleOf(pattern, count);
     const fundamental = { from: form.from * scale, to: form.to * scale, points: form.points };
     const onSuccess = (created: { id: string }) => {
       setJobId(created.id);
-      setSolved(solvedPatternOf(form));
+      setSolved(pattern);
     };
-    setSolved(solvedPatternOf(form));
+    setSolved(pattern);
     setJobId(null);
     if (form.type === 'she') {
       startShe.mutate(
-        { kind: form.kind, vdc: form.vdc, count, eliminate: ordersOf(form), fundamental },
+        {
+          kind: form.kind,
+          vdc: form.vdc,
+          count,
+          eliminate: ordersOf(form),
+          fundamental,
+          ...(pattern.cellVoltages === undefined ? {} : { cellVoltages: pattern.cellVoltages }),
+        },
         { onSuccess },
       );
     } else {
