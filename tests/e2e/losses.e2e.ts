@@ -101,10 +101,7 @@ export const scenarios: Scenario[] = [
         'at equal carrier the DPWM1 design keeps 4950 Hz',
       );
       await page.getByLabel('Compare at').selectOption('equal-device-frequency');
-      await page.waitForFunction(
-        (selector) => !document.querySelector(selector)?.textContent?.includes('4950'),
-        carrierCell(dpwmName),
-      );
+      await page.locator(carrierCell(dpwmName)).filter({ hasNotText: '4950' }).waitFor();
       const carrier = await numberIn(page, carrierCell(dpwmName));
       assert(
         carrier / 4950 > 1.47 && carrier / 4950 < 1.53,
