@@ -38,6 +38,26 @@ describe('GridPanel', () => {
     );
   });
 
+  it('names the currents as the report does: by phase on a three-phase bridge, without one on a single-phase bridge', () => {
+    const three = render(
+      <GridPanel report={analyseDesign(design, { points: 256 })} fileStem="lcl" />,
+    );
+    expect(three.container).toHaveTextContent('grid current, phase a');
+    three.unmount();
+    const single = analyseDesign(
+      {
+        ...design,
+        modulation: { method: 'sine-triangle', ma: 0.9, scheme: 'unipolar' },
+        grid: { ...design.grid!, lineVoltage: 230 },
+      },
+      { points: 256 },
+    );
+    const { container } = render(<GridPanel report={single} fileStem="lcl" />);
+    expect(container).toHaveTextContent('grid current');
+    expect(container).toHaveTextContent('inverter (switch) current');
+    expect(container).not.toHaveTextContent('phase a');
+  });
+
   it('draws nothing without a grid', () => {
     const { grid: _grid, ...alone } = design;
     const { container } = render(

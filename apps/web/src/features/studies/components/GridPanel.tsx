@@ -35,6 +35,9 @@ export function GridPanel({ report, fileStem }: { report: StudyReport; fileStem:
   if (!grid) return null;
   const check = grid.limits[standard];
   const resonance = grid.resonance;
+  // The report names phase a's currents (no phase on a single-phase bridge).
+  const gridCurrentName = report.currents[0]?.load?.name ?? 'grid current';
+  const inverterCurrentName = report.currents[0]?.inverter.name ?? 'inverter (switch) current';
   return (
     <section aria-label="Grid connection" className="flex flex-col gap-2">
       <SpectrumChart
@@ -43,7 +46,7 @@ export function GridPanel({ report, fileStem }: { report: StudyReport; fileStem:
         fileName={`${fileStem}-grid-limits`}
         series={[
           {
-            name: 'grid current, phase a',
+            name: gridCurrentName,
             color: 'var(--color-ink)',
             harmonics: check.table.map((row) => ({ order: row.order, amplitude: 100 * row.ratio })),
           },
@@ -75,12 +78,12 @@ export function GridPanel({ report, fileStem }: { report: StudyReport; fileStem:
         fundamentalFrequency={report.fundamentalFrequency}
         series={[
           {
-            name: 'grid current, phase a',
+            name: gridCurrentName,
             color: 'var(--color-ink)',
             harmonics: grid.gridCurrentSpectrum,
           },
           {
-            name: 'inverter current, phase a',
+            name: inverterCurrentName,
             color: 'var(--color-trace-current)',
             harmonics: grid.inverterCurrentSpectrum,
           },
