@@ -1,6 +1,7 @@
 import { assertMultilevelCarrierOptions } from '../multilevel/carrier/assertMultilevelCarrierOptions.js';
 import type { MultilevelCarrierOptions } from '../multilevel/MultilevelTypes.js';
 import { assertNumberInRange, assertOneOf } from '../validation/assertions.js';
+import { assertTimerFrequencies } from './assertTimerFrequencies.js';
 import { ParameterRangeError, ParameterTypeError } from '../validation/errors.js';
 import { withFieldPrefix } from '../validation/withFieldPrefix.js';
 import { MAX_TIMER_TABLE_LENGTH, RATIO_TOLERANCE } from './timerTableInputs.js';
@@ -54,17 +55,7 @@ export function multilevelTimerTableInputs(
     deadTime = 0,
     deadTimeMethod = 'dead-time-register',
   } = options;
-  assertNumberInRange('fundamentalFrequency', fundamentalFrequency, {
-    min: 0,
-    minExclusive: true,
-    max: 1e6,
-  });
-  assertNumberInRange('timerClock', timerClock, { min: 0, minExclusive: true, max: 1e11 });
-  assertNumberInRange('carrierFrequency', carrierFrequency, {
-    min: 0,
-    minExclusive: true,
-    max: timerClock / 2,
-  });
+  assertTimerFrequencies({ fundamentalFrequency, carrierFrequency, timerClock });
   if (countingMode !== 'centre-aligned') {
     throw new ParameterRangeError(
       'countingMode',

@@ -1,5 +1,5 @@
 import type { MultilevelCarrierOptions } from '../multilevel/MultilevelTypes.js';
-import type { DeadTimeMethod, TimerWarning } from './timerTableTypes.js';
+import type { DeadTimeMethod, TimerPeriodFigures, TimerWarning } from './timerTableTypes.js';
 
 /**
  * Types of a multilevel timer table ({@link multilevelTimerTable}). Plain, serialisable data.
@@ -106,8 +106,11 @@ export interface MultilevelTimerLeg {
   pairs: MultilevelTimerPair[];
 }
 
-/** Result of {@link multilevelTimerTable}. */
-export interface MultilevelTimerTable {
+/**
+ * Result of {@link multilevelTimerTable}. Its period figures are those of a centre-aligned counter:
+ * periodRegister = fullScaleCounts = P, ticksPerCarrierPeriod = 2·P.
+ */
+export interface MultilevelTimerTable extends TimerPeriodFigures {
   /** Every input, defaults filled in. */
   parameters: {
     modulation: Required<Omit<MultilevelTimerModulation, 'zeroSequence'>> & {
@@ -126,26 +129,6 @@ export interface MultilevelTimerTable {
   units: Record<string, string>;
   /** The generation conventions and the complementary pairing, one sentence each. */
   conventions: string[];
-  /** Period register P (the counter runs P → 0 → P each carrier period). */
-  periodRegister: number;
-  /** Compare value of 100 % duty: P. */
-  fullScaleCounts: number;
-  /** Timer ticks in one carrier period: 2·P. */
-  ticksPerCarrierPeriod: number;
-  /** Carrier frequency the rounded period register gives, Hz. */
-  realisedCarrierFrequency: number;
-  /** Fundamental frequency the table gives at the realised carrier frequency, Hz. */
-  realisedFundamentalFrequency: number;
-  /** Carrier periods per fundamental period (mf). */
-  carrierPeriodsPerFundamental: number;
-  /** Compare updates per fundamental period and counter (mf, × 2 for asymmetric sampling). */
-  updatesPerFundamental: number;
-  /** Consecutive updates that reuse one entry (updatesPerFundamental / tableLength). */
-  updatesPerEntry: number;
-  /** Dead time in timer ticks (rounded up, so never shorter than asked). */
-  deadTimeCounts: number;
-  /** deadTimeCounts / timerClock, s. */
-  realisedDeadTime: number;
   counters: MultilevelTimerCounter[];
   legs: MultilevelTimerLeg[];
   /** Largest |counter offset rounded − exact| over the counters, ticks (≤ ½). */

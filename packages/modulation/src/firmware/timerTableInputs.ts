@@ -1,3 +1,4 @@
+import { assertTimerFrequencies } from './assertTimerFrequencies.js';
 import { ParameterRangeError, ParameterTypeError } from '../validation/errors.js';
 import { assertNumberInRange, assertOneOf } from '../validation/assertions.js';
 import {
@@ -58,17 +59,7 @@ export function timerTableInputs(options: TimerTableOptions): TimerTableInputs {
     vdc = 1,
   } = options;
   const modulation = checkModulation(options.modulation);
-  assertNumberInRange('fundamentalFrequency', fundamentalFrequency, {
-    min: 0,
-    minExclusive: true,
-    max: 1e6,
-  });
-  assertNumberInRange('timerClock', timerClock, { min: 0, minExclusive: true, max: 1e11 });
-  assertNumberInRange('carrierFrequency', carrierFrequency, {
-    min: 0,
-    minExclusive: true,
-    max: timerClock / 2,
-  });
+  assertTimerFrequencies({ fundamentalFrequency, carrierFrequency, timerClock });
   assertOneOf('sampling', sampling, ['regular-symmetric', 'regular-asymmetric'] as const);
   assertOneOf('countingMode', countingMode, ['edge-aligned', 'centre-aligned'] as const);
   assertNumberInRange('counterBits', counterBits, { min: 8, max: 32, integer: true });

@@ -110,8 +110,32 @@ export interface TimerWarning {
   message: string;
 }
 
+/** The period, update and dead-time figures every timer table reports (two-level and multilevel). */
+export interface TimerPeriodFigures {
+  /** Value for the period register: TOP = ticks − 1 (edge-aligned) or P (centre-aligned). */
+  periodRegister: number;
+  /** Compare value of 100 % duty: TOP + 1 (edge-aligned) or P (centre-aligned). */
+  fullScaleCounts: number;
+  /** Timer clock ticks in one carrier period: TOP + 1 or 2·P. */
+  ticksPerCarrierPeriod: number;
+  /** Carrier frequency the rounded period register gives, Hz. */
+  realisedCarrierFrequency: number;
+  /** Fundamental frequency the table gives at the realised carrier frequency, Hz. */
+  realisedFundamentalFrequency: number;
+  /** Carrier periods per fundamental period (integer). */
+  carrierPeriodsPerFundamental: number;
+  /** Compare updates per fundamental period (carrier periods, × 2 for asymmetric sampling). */
+  updatesPerFundamental: number;
+  /** Consecutive updates that reuse one entry (updatesPerFundamental / tableLength). */
+  updatesPerEntry: number;
+  /** Dead time in timer ticks (rounded up, so never shorter than asked). */
+  deadTimeCounts: number;
+  /** deadTimeCounts / timerClock, s. */
+  realisedDeadTime: number;
+}
+
 /** Result of {@link timerTable}. */
-export interface TimerTable {
+export interface TimerTable extends TimerPeriodFigures {
   /** Every input, defaults filled in. */
   parameters: {
     modulation: {
@@ -135,26 +159,6 @@ export interface TimerTable {
   units: Record<string, string>;
   /** The generation conventions, one sentence each (copied into the C header). */
   conventions: string[];
-  /** Value for the period register: TOP = ticks − 1 (edge-aligned) or P (centre-aligned). */
-  periodRegister: number;
-  /** Compare value of 100 % duty: TOP + 1 (edge-aligned) or P (centre-aligned). */
-  fullScaleCounts: number;
-  /** Timer clock ticks in one carrier period: TOP + 1 or 2·P. */
-  ticksPerCarrierPeriod: number;
-  /** Carrier frequency the rounded period register gives, Hz. */
-  realisedCarrierFrequency: number;
-  /** Fundamental frequency the table gives at the realised carrier frequency, Hz. */
-  realisedFundamentalFrequency: number;
-  /** Carrier periods per fundamental period (integer). */
-  carrierPeriodsPerFundamental: number;
-  /** Compare updates per fundamental period (carrier periods, × 2 for asymmetric sampling). */
-  updatesPerFundamental: number;
-  /** Consecutive updates that reuse one entry (updatesPerFundamental / tableLength). */
-  updatesPerEntry: number;
-  /** Dead time in timer ticks (rounded up, so never shorter than asked). */
-  deadTimeCounts: number;
-  /** deadTimeCounts / timerClock, s. */
-  realisedDeadTime: number;
   /** Angle at which each entry's reference was sampled, radians of the fundamental. */
   entryAngles: number[];
   channels: TimerChannel[];
