@@ -1,6 +1,7 @@
 // The cost model's own estimates, from the service's source, to find where each limit falls.
 import {
   maSweepCost,
+  multilevelTimerTableCost,
   sheSweepCost,
   spectrumCost,
   timerTableCost,
@@ -44,6 +45,15 @@ const timerTable = (carrierRatio: number, tableLength?: number) => ({
   ...(tableLength === undefined ? {} : { tableLength }),
 });
 
+/** A three-phase NPC bridge (6 complementary pairs) at carrierRatio × 50 Hz, default length. */
+const multilevelTimerTable = (carrierRatio: number) => ({
+  modulation: { topology: 'npc', levels: 3, carriers: 'pd', phaseCount: 3, ma: 0.9, vdc: 800 },
+  fundamentalFrequency: 50,
+  carrierFrequency: 50 * carrierRatio,
+  timerClock: 100e6,
+  counterBits: 32,
+});
+
 const maSweep = (points: number) => ({
   modulation: bipolar(21),
   ma: { from: 0.1, to: 1, points },
@@ -61,7 +71,8 @@ const sheSweep = (points: number) => ({
 /**
  * The probes, one per limit a request's fields can reach: spectra by maxOrder (answer size) and
  * by mf (work), waveforms by mf, timer tables by an explicit table length and by the default
- * one (carrier ÷ fundamental), and the two sweep jobs by their points (job budget).
+ * one (carrier ÷ fundamental), multilevel timer tables by the default length, and the two sweep
+ * jobs by their points (job budget).
  */
 export const COST_PROBES: CostProbe[] = [
   {
@@ -105,6 +116,14 @@ export const COST_PROBES: CostProbe[] = [
     range: [1, 20_000],
     body: (x) => timerTable(x),
     cost: (x) => timerTableCost(timerTable(x) as never, 'json'),
+  },
+  {
+    name: 'multilevel timer table, default length (carrierFrequency ÷ fundamentalFrequency)',
+    path: '/api/v1/multilevel-timer-tables',
+    kind: 'request',
+    range: [1, 10_000],
+    body: (x) => multilevelTimerTable(x),
+    cost: (x) => multilevelTimerTableCost(multilevelTimerTable(x) as never, 'json'),
   },
   {
     name: 'ma sweep, ma.points',
