@@ -17,6 +17,12 @@ export interface FirmwareEffectsOptions {
   action?: NarrowPulseAction;
   /** Highest harmonic order for THD. @default 4·(carrier periods per fundamental) + 1 */
   maxOrder?: number;
+  /**
+   * Device on-state voltage drops, volts ≥ 0 (the threshold model of `timerTableWaveforms`:
+   * the conducting transistor takes `transistor`, the conducting diode `diode`, against the
+   * current). @default none (ideal switches)
+   */
+  onStateDrop?: { transistor: number; diode: number };
 }
 
 /** Result of {@link firmwareEffects}. */
@@ -24,15 +30,21 @@ export interface FirmwareEffects {
   quantisation: QuantisationEffect;
   deadTime: DeadTimeEffect;
   minimumPulse: MinimumPulseEffect;
-  /** All three at once (rounded counts, minimum pulse, then dead time) against the ideal duties. */
+  /**
+   * The on-state drops alone: the rounded counts with dead time and ideal switches against the
+   * same with the drops, for the same current; null without `onStateDrop`.
+   */
+  onStateDrop: FirmwareEffect | null;
+  /** All of them at once (rounded counts, minimum pulse, then dead time) against the ideal duties. */
   combined: FirmwareEffect;
 }
 
 /**
- * The three effects a firmware engineer should see before flashing a table, each isolated
+ * The effects a firmware engineer should see before flashing a table, each isolated
  * (quantisation: ideal → rounded counts; dead time: rounded counts without → with dead time;
- * minimum pulse: rounded counts without → with the minimum width), and all of them together
- * against the ideal duties. See {@link quantisationEffect}, {@link deadTimeEffect},
+ * minimum pulse: rounded counts without → with the minimum width; with `onStateDrop`, the
+ * devices' on-state drops: ideal switches → the drops, dead time included), and all of them
+ * together against the ideal duties. See {@link quantisationEffect}, {@link deadTimeEffect},
  * {@link minimumPulseEffect} for the models and sources.
  */
 export function firmwareEffects(
@@ -44,6 +56,7 @@ export function firmwareEffects(
     minPulseWidth = 0,
     action = 'drop',
     maxOrder = defaultMaxOrder(table),
+    onStateDrop,
   } = options;
   const quantisation = quantisationEffect(table, { maxOrder });
   const deadTime = deadTimeEffect(table, { currentAngle, maxOrder });
@@ -53,11 +66,20 @@ export function firmwareEffects(
     currentAngle,
     includeDeadTime: true,
     ...(minPulseWidth > 0 ? { minimumPulse: { width: minPulseWidth, action } } : {}),
+    ...(onStateDrop === undefined ? {} : { onStateDrop }),
   });
+  const dropEffect = (drops: { transistor: number; diode: number }): FirmwareEffect =>
+    compareOutputs(
+      timerTableWaveforms(table, { currentAngle, includeDeadTime: true }).outputs[0] as Waveform,
+      timerTableWaveforms(table, { currentAngle, includeDeadTime: true, onStateDrop: drops })
+        .outputs[0] as Waveform,
+      maxOrder,
+    );
   return {
     quantisation,
     deadTime,
     minimumPulse,
+    onStateDrop: onStateDrop === undefined ? null : dropEffect(onStateDrop),
     combined: compareOutputs(
       ideal.outputs[0] as Waveform,
       realised.outputs[0] as Waveform,

@@ -260,5 +260,39 @@ describe('firmwareEffects', () => {
       all.deadTime.fundamentalChange +
       all.minimumPulse.fundamentalChange;
     assertInDelta(all.combined.fundamentalChange, sum, 0.1 * Math.abs(sum));
+    expect(all.onStateDrop).toBeNull();
+  });
+
+  it('adds the on-state drops: with equal drops v the H-bridge output loses the square wave 2v·sgn(i)', () => {
+    // With the transistor's and the diode's drop equal, whichever device conducts (dead time
+    // included) takes v against the current, so each leg loses v·sgn(i) and vAB = vA − vB, leg B
+    // carrying −i, loses 2v·sgn(i): a fundamental phasor −(8/π)·v·e^{−jφ} in the sine basis
+    // (standard circuit analysis; Fourier series of a square wave).
+    const table = timerTable({
+      ...bipolar,
+      modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.9 },
+    });
+    const v = 1.4;
+    const phi = 0.3;
+    const all = firmwareEffects(table, {
+      currentAngle: phi,
+      onStateDrop: { transistor: v, diode: v },
+    });
+    const effect = all.onStateDrop!;
+    const reference = harmonics(effect.reference, 1)[1]!;
+    const re = reference.amplitude * Math.cos(reference.phase) - (8 / Math.PI) * v * Math.cos(-phi);
+    const im = reference.amplitude * Math.sin(reference.phase) - (8 / Math.PI) * v * Math.sin(-phi);
+    // Edges on the 64 MHz timer's ticks: the square wave's own edges within a tick of the zero crossings.
+    assertInDelta(effect.realisedFundamental, Math.hypot(re, im), 1e-4 * (8 / Math.PI) * v);
+    expect(effect.fundamentalChange).toBeLessThan(0);
+    // The reference is the dead-time table with ideal switches: the dead-time effect's realised output.
+    assertInDelta(effect.referenceFundamental, all.deadTime.realisedFundamental, 1e-12);
+    // The combination carries the drops too: the ideal duties against every effect at once.
+    const withoutDrops = firmwareEffects(table, { currentAngle: phi });
+    assertInDelta(
+      withoutDrops.combined.realisedFundamental - all.combined.realisedFundamental,
+      -effect.fundamentalChange,
+      1e-9,
+    );
   });
 });
