@@ -193,6 +193,29 @@ describe('multilevelTimerTable against multilevelCarrier (the same regular-sampl
     }
   }
 
+  it('rounds shifts that are not whole ticks: every edge within one tick, and a warning', () => {
+    // P = 1000 ticks: the cascaded cells' π/3 shifts are 333⅓ ticks, rounded to 333 and 667.
+    const modulation = CASES[4]!.modulation;
+    const table = multilevelTimerTable({
+      modulation,
+      ...frequencies,
+      timerClock: 2 * 1000 * 50 * MF,
+    });
+    expect(table.counters.map((c) => c.offsetTicks)).toEqual([0, 333, 667]);
+    assertInDelta(table.maxOffsetRoundingTicks, 1 / 3, 1e-9);
+    expect(table.warnings.map((w) => w.field)).toContain('modulation.carrierPhase');
+    const expected = multilevelCarrier({ ...modulation, mf: MF, sampling: 'regular-symmetric' });
+    const rounded = multilevelTimerSwitches(table, { includeDeadTime: false });
+    const tick = (2 * Math.PI) / (2 * 1000 * MF);
+    expected.legs.forEach((leg, l) => {
+      for (const device of leg.switches) {
+        const mine = rounded.legs[l]?.switches.find((s) => s.name === device.name)?.on as Waveform;
+        // Half a tick from the compare value and at most half from the counter's start.
+        expect(edgeDistance(mine, device.on), device.name).toBeLessThanOrEqual(tick + 1e-9);
+      }
+    });
+  });
+
   it('T-type: the outer switches equal multilevelCarrier and the pairs give its output level', () => {
     const modulation: Modulation = {
       topology: 't-type',
