@@ -86,7 +86,12 @@ export function waveformChartCsv({
   outputName: string;
   overlay?: { name: string; angles: readonly number[]; values: readonly number[] } | undefined;
   modulator?:
-    | { angles: readonly number[]; reference: readonly number[]; carrier: readonly number[] | null }
+    | {
+        angles: readonly number[];
+        reference: readonly number[];
+        carrier: readonly number[] | null;
+        carriers?: readonly (readonly number[])[] | undefined;
+      }
     | undefined;
 }): string {
   const rows: (string | number)[][] = output.edges.map((angle, i) => [
@@ -106,6 +111,12 @@ export function waveformChartCsv({
     const carrier = modulator.carrier;
     if (carrier)
       modulator.angles.forEach((angle, i) => rows.push(['carrier', angle, '', carrier[i] ?? '']));
+    // A multilevel modulator's carriers, numbered as the report lists them (lowest band or cell 1 first).
+    (modulator.carriers ?? []).forEach((values, k) =>
+      modulator.angles.forEach((angle, i) =>
+        rows.push([`carrier ${k + 1}`, angle, '', values[i] ?? '']),
+      ),
+    );
   }
   return toCsv(['signal', 'angle (rad)', 'voltage (V)', 'per unit of carrier peak'], rows);
 }

@@ -23,7 +23,9 @@ const TAU = 2 * Math.PI;
 /** Pixels a level gets on a row's axis, and the least and most height of a row. */
 const LEVEL_SPACING = 16;
 const ROW_HEIGHT = { min: 56, max: 220 } as const;
-const ROW_GAP = 14;
+const ROW_GAP = 10;
+/** The band above each row that holds its name, pixels. */
+const LABEL_BAND = 14;
 
 /** The CSV of the rows: each edge's angle and the value held from it, one row per edge. */
 export function stepRowsCsv(rows: readonly StepRow[]): string {
@@ -62,8 +64,10 @@ export function StackedStepChart({
   const heights = rows.map((row) =>
     Math.min(ROW_HEIGHT.max, Math.max(ROW_HEIGHT.min, row.levels.length * LEVEL_SPACING)),
   );
-  const tops = heights.map((_, i) =>
-    heights.slice(0, i).reduce((sum, h) => sum + h + ROW_GAP, margin.top),
+  const tops = heights.map(
+    (_, i) =>
+      heights.slice(0, i).reduce((sum, h) => sum + LABEL_BAND + h + ROW_GAP, margin.top) +
+      LABEL_BAND,
   );
   const plotBottom = (tops[tops.length - 1] ?? margin.top) + (heights[heights.length - 1] ?? 0);
   const height = plotBottom + margin.bottom;
@@ -172,15 +176,7 @@ export function StackedStepChart({
                 }
                 strokeWidth={1.2}
               />
-              <text
-                x={margin.left + 6}
-                y={top + 10}
-                fontSize={10}
-                fill="currentColor"
-                paintOrder="stroke"
-                stroke="var(--color-panel)"
-                strokeWidth={3}
-              >
+              <text x={margin.left + 4} y={top - 4} fontSize={10} fill="currentColor">
                 {row.name}
                 {row.unit ? ` (${row.unit})` : ''}
               </text>

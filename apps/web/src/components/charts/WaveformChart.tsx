@@ -22,9 +22,17 @@ export interface StepWaveform {
 export interface WaveformChartProps {
   title?: string;
   fileName?: string;
-  /** Reference and carrier sampled over [0, 2π], per unit of the carrier peak. */
+  /**
+   * Reference and carrier sampled over [0, 2π], per unit of the carrier peak; a multilevel
+   * modulator's several carriers in `carriers` (per unit of the reference's full range).
+   */
   modulator?:
-    | { angles: readonly number[]; reference: readonly number[]; carrier: readonly number[] | null }
+    | {
+        angles: readonly number[];
+        reference: readonly number[];
+        carrier: readonly number[] | null;
+        carriers?: readonly (readonly number[])[] | undefined;
+      }
     | undefined;
   /** The switched output (volts). */
   output: StepWaveform;
@@ -201,6 +209,16 @@ export function WaveformChart({
                   strokeWidth={1}
                 />
               ) : null}
+              {(modulator.carriers ?? []).map((carrier, i) => (
+                <path
+                  key={i}
+                  data-carrier={i}
+                  d={topLine(visible(modulator.angles, carrier)) ?? ''}
+                  stroke="var(--color-trace-carrier)"
+                  strokeWidth={1}
+                  opacity={0.8}
+                />
+              ))}
               <path
                 d={topLine(visible(modulator.angles, modulator.reference)) ?? ''}
                 stroke="var(--color-trace-ref)"
@@ -212,11 +230,11 @@ export function WaveformChart({
               <text x={14} fill="currentColor">
                 reference
               </text>
-              {modulator.carrier ? (
+              {modulator.carrier || modulator.carriers?.length ? (
                 <>
                   <rect x={80} width={10} height={3} y={-4} fill="var(--color-trace-carrier)" />
                   <text x={94} fill="currentColor">
-                    carrier
+                    {modulator.carriers?.length ? 'carriers' : 'carrier'}
                   </text>
                 </>
               ) : null}

@@ -18,8 +18,8 @@ export function MultilevelFiguresPanel({ multilevel }: { multilevel: Multilevel 
     >
       <h2 className="text-sm font-semibold tracking-wide uppercase">Multilevel bridge</h2>
       <p className="text-xs text-ink-soft">
-        {multilevel.topologyLabel}, {multilevel.levels} levels a leg
-        {multilevel.carriersLabel ? `; ${multilevel.carriersLabel}` : ''}.
+        {multilevel.topologyLabel}, {multilevel.levels} levels a leg.
+        {multilevel.carriersLabel ? ` Carriers: ${multilevel.carriersLabel}.` : ''}
       </p>
       <FigureCards
         label="Multilevel switching"

@@ -2,6 +2,7 @@ import { analyseDesign, type InverterDesign } from '@pulsewright/modulation';
 import { render, screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { stepRowsCsv } from '../../../../components/charts/StackedStepChart';
+import { waveformChartCsv } from '../../../../lib/chartCsv';
 import { formatNumber } from '../../../../lib/format';
 import { StudyCharts } from '../StudyCharts';
 import { multilevelRows } from './MultilevelLevelChart';
@@ -101,6 +102,19 @@ describe('the multilevel level chart and figures', () => {
     const edges = rows.reduce((sum, r) => sum + r.waveform.edges.length, 0);
     expect(csv).toHaveLength(1 + edges);
     expect(csv[0]).toBe('signal,angle (rad),value from this edge,unit');
+  });
+
+  it('draws and exports every carrier of the modulator: levels − 1 PD bands', () => {
+    const report = analyseDesign(design({}));
+    render(<StudyCharts report={report} fileStem="npc" />);
+    // A three-level PD modulator compares the reference with two bands (McGrath and Holmes 2002).
+    expect(document.querySelectorAll('svg[data-chart="waveform"] [data-carrier]')).toHaveLength(2);
+    const modulator = report.modulator;
+    if (!modulator) throw new Error('a carrier method has a modulator');
+    const output = report.voltages[0]?.waveform ?? { edges: [], levels: [] };
+    const csv = waveformChartCsv({ output, outputName: 'v', modulator });
+    const lines = csv.trim().split(/\r?\n/);
+    expect(lines.filter((l) => l.startsWith('carrier 2,'))).toHaveLength(modulator.angles.length);
   });
 
   it("lists a cascaded string's cell sources with their power and the string's total", () => {

@@ -1,0 +1,77 @@
+/**
+ * Multilevel bridges in the study editor (issue 13): an engineer picks the multilevel carrier
+ * method, a three-phase three-level NPC bridge with PD carriers, sees the level-by-level chart
+ * (three legs on their three levels), the bridge's device switching frequencies and the
+ * neutral-point current panel, offers only the arrangements each topology accepts, saves the study
+ * and reads the server's report. Screenshots in tests/e2e/screenshots/: multilevel-npc.png (the
+ * page), multilevel-levels.png (the level chart) and multilevel-figures.png (the bridge's figures).
+ */
+import path from 'node:path';
+import type { Page } from 'playwright-core';
+import type { Scenario } from './dashboard.e2e.js';
+import { assert, screenshot, screenshotDir, signIn } from './harness.js';
+
+/** The values of a select's options, in order. */
+const optionValues = (page: Page, label: string) =>
+  page
+    .getByLabel(label, { exact: true })
+    .locator('option')
+    .evaluateAll((options) => options.map((o) => (o as HTMLOptionElement).value));
+
+export const scenarios: Scenario[] = [
+  {
+    name: 'multilevel: a three-phase NPC PD study shows its levels, device frequencies and neutral-point current',
+    async run(context) {
+      const page = await context.browser.newPage({ viewport: { width: 1400, height: 900 } });
+      page.setDefaultTimeout(15_000);
+      context.lastPage = page;
+      await signIn(page, context.baseUrl, 'engineer@kestrel.example');
+      await page.goto(`${context.baseUrl}/studies/new`);
+      await page.getByLabel('Name', { exact: true }).fill('Three-level NPC drive');
+      await page.getByLabel('Method').selectOption('multilevel-carrier');
+
+      // The arrangements follow the topology (the library's MULTILEVEL_CARRIERS_BY_TOPOLOGY).
+      await page.getByLabel('Topology').selectOption('flying-capacitor');
+      const flying = await optionValues(page, 'Carriers');
+      assert(
+        flying.join() === 'phase-shifted',
+        `flying capacitor offers phase-shifted only (got ${flying.join()})`,
+      );
+      await page.getByLabel('Topology').selectOption('npc');
+      const npc = await optionValues(page, 'Carriers');
+      assert(npc.join() === 'pd,pod,apod', `NPC offers PD, POD, APOD (got ${npc.join()})`);
+      await page.getByLabel('Carriers').selectOption('pd');
+
+      const levels = page.getByRole('figure', { name: /^Levels, .*NPC.*, 3 levels$/ });
+      await levels.waitFor();
+      const rows = await levels
+        .locator('[data-row]')
+        .evaluateAll((gs) => gs.map((g) => g.getAttribute('data-row')));
+      assert(rows.join() === 'leg a,leg b,leg c', `three legs drawn (got ${rows.join()})`);
+      // PD: levels − 1 = 2 carriers in bands over the reference (McGrath and Holmes 2002).
+      const modulator = page.getByRole('figure', { name: 'Modulator and bridge voltage' });
+      const carriers = await modulator.locator('[data-carrier]').count();
+      assert(carriers === 2, `the modulator draws the two PD carriers (got ${carriers})`);
+      await modulator.screenshot({ path: path.join(screenshotDir, 'multilevel-modulator.png') });
+      const devices = page.getByRole('table', { name: 'Device switching frequencies' });
+      await devices.getByRole('cell', { name: 'S1', exact: true }).waitFor();
+      const neutral = page.getByRole('figure', { name: /Neutral-point current/ });
+      await neutral.waitFor();
+      await page
+        .getByRole('table', { name: 'Neutral-point figures' })
+        .getByText('Low-frequency ripple', { exact: false })
+        .waitFor();
+
+      await page.getByRole('button', { name: 'Create study' }).click();
+      await page.waitForURL(/\/studies\/[0-9a-f-]{36}$/);
+      await page.getByText(/Saved revision on the server: THD/).waitFor();
+      await levels.scrollIntoViewIfNeeded();
+      await screenshot(page, 'multilevel-npc');
+      await levels.screenshot({ path: path.join(screenshotDir, 'multilevel-levels.png') });
+      await page
+        .getByRole('region', { name: 'Multilevel bridge' })
+        .screenshot({ path: path.join(screenshotDir, 'multilevel-figures.png') });
+      await page.close();
+    },
+  },
+];
