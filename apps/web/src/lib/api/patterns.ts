@@ -62,3 +62,18 @@ export async function getPatternCompareEvents(
 export function usePatternCompareEvents() {
   return useMutation({ mutationFn: getPatternCompareEvents });
 }
+
+// Per-cell patterns of a cascaded H-bridge string (issue 13): one unipolar pattern per cell
+// solved jointly, with the string's waveforms and exact spectrum.
+
+export type CascadedSolveRequest = BodyOf<'solveCascadedPattern'>;
+export type CascadedPatternSolution = Schema<'CascadedPatternSolution'>;
+
+export async function solveCascadedPattern(
+  body: CascadedSolveRequest,
+): Promise<CascadedPatternSolution> {
+  return unwrap(await api.POST('/api/v1/cascaded-patterns/solve', { body }));
+}
+export function useSolveCascadedPattern() {
+  return useMutation({ mutationFn: solveCascadedPattern });
+}

@@ -3,6 +3,7 @@ import { AngleTablePanel } from '../../../components/patterns/AngleTablePanel';
 import { PageHeader } from '../../../components/ui/Panel';
 import { ErrorState } from '../../../components/ui/QueryState';
 import { DEFAULT_ELIMINATION_FORM, tablePatternOf } from '../model/eliminationForm';
+import { CascadedPatternPanel } from './CascadedPatternPanel';
 import { EliminationForm } from './EliminationForm';
 import { EliminationResult } from './EliminationResult';
 import { useEliminationSweep } from './useEliminationSweep';
@@ -53,6 +54,7 @@ export function EliminationPage() {
             angles={pickedPoint?.angles}
             initialRange={{ from: form.from, to: form.to }}
           />
+          <CascadedPatternPanel />
         </div>
       </div>
     </div>
