@@ -26,6 +26,8 @@ export function FirmwarePage() {
     deadTimeNs: 500,
     minPulseNs: 0,
     vdc: 360,
+    transistorDropV: 0,
+    diodeDropV: 0,
     prefix: 'pwm_table',
   });
   // The field typed last: an error that two fields share (carrier against timer clock) goes there.
@@ -46,7 +48,13 @@ export function FirmwarePage() {
           deadTime: form.deadTimeNs * 1e-9,
           vdc: form.vdc,
         },
-        { minPulseWidth: form.minPulseNs * 1e-9 },
+        {
+          minPulseWidth: form.minPulseNs * 1e-9,
+          // Both 0: ideal switches, no drop effect to show.
+          ...(form.transistorDropV === 0 && form.diodeDropV === 0
+            ? {}
+            : { onStateDrop: { transistor: form.transistorDropV, diode: form.diodeDropV } }),
+        },
       ),
     [form],
   );

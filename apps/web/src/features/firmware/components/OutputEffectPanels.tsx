@@ -6,7 +6,8 @@ import { effectSpectra, type TimerTableOutcome } from '../model/timerTables';
 
 /**
  * What the table does to the output: the fundamental (V) and THD of the ideal duties against the
- * realised table (rounding, minimum pulse and dead time together), and both spectra.
+ * realised table (rounding, minimum pulse, dead time and, when given, the devices' on-state drops
+ * together), the drops' own effect, and both spectra.
  */
 export function OutputEffectPanels({
   table,
@@ -26,9 +27,18 @@ export function OutputEffectPanels({
           Fundamental {formatNumber(effects.combined.referenceFundamental)} →{' '}
           {formatNumber(effects.combined.realisedFundamental)} V; THD{' '}
           {formatPercent(effects.combined.referenceThd)} →{' '}
-          {formatPercent(effects.combined.realisedThd)} (rounding, minimum pulse and dead time
-          together).
+          {formatPercent(effects.combined.realisedThd)} (rounding, minimum pulse, dead time
+          {effects.onStateDrop ? ' and on-state drops' : ''} together).
         </p>
+        {effects.onStateDrop ? (
+          <p className="text-sm" data-testid="on-state-drop-effect">
+            On-state drops alone (against ideal switches, dead time included): fundamental{' '}
+            {formatNumber(effects.onStateDrop.referenceFundamental)} →{' '}
+            {formatNumber(effects.onStateDrop.realisedFundamental)} V; THD{' '}
+            {formatPercent(effects.onStateDrop.referenceThd)} →{' '}
+            {formatPercent(effects.onStateDrop.realisedThd)}.
+          </p>
+        ) : null}
       </Panel>
       {spectra ? (
         <SpectrumChart

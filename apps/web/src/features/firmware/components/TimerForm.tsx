@@ -7,7 +7,8 @@ import type { TimerField, TimerFieldErrors } from '../model/timerFieldErrors';
 /**
  * The controller-tables form: inverter, scheme or zero sequence, ma, fundamental and carrier (Hz),
  * timer clock (Hz), counting mode, counter width (bits), dead time and minimum pulse (ns), DC bus
- * (V) and the C header's name prefix, each with the library's message for it.
+ * (V), the devices' on-state drops (V) and the C header's name prefix, each with the library's
+ * message for it.
  */
 export function TimerForm({
   form,
@@ -121,6 +122,21 @@ export function TimerForm({
         value={form.vdc}
         onChange={num('vdc')}
         error={err('vdc')}
+      />
+      <NumberField
+        label="Transistor on-state drop"
+        unit="V"
+        value={form.transistorDropV}
+        onChange={num('transistorDropV')}
+        error={err('transistorDropV')}
+        hint="with the diode's: the drops' effect on the output (0 and 0: ideal switches)"
+      />
+      <NumberField
+        label="Diode on-state drop"
+        unit="V"
+        value={form.diodeDropV}
+        onChange={num('diodeDropV')}
+        error={err('diodeDropV')}
       />
       <TextField
         label="Name prefix"

@@ -11,6 +11,8 @@ const base: TimerNumbers = {
   deadTimeNs: 500,
   minPulseNs: 0,
   vdc: 360,
+  transistorDropV: 0,
+  diodeDropV: 0,
 };
 
 /** The library's refusal of the form's numbers (as the page builds the table), placed on fields. */
@@ -26,7 +28,10 @@ function errorsOf(form: TimerNumbers, lastEdited: TimerField) {
       deadTime: form.deadTimeNs * 1e-9,
       vdc: form.vdc,
     },
-    { minPulseWidth: form.minPulseNs * 1e-9 },
+    {
+      minPulseWidth: form.minPulseNs * 1e-9,
+      onStateDrop: { transistor: form.transistorDropV, diode: form.diodeDropV },
+    },
   );
   return timerFieldErrors(outcome.error, form, lastEdited);
 }
@@ -60,6 +65,13 @@ describe('timerFieldErrors', () => {
   it('asks for a number in an emptied box and keeps the table from using an old value', () => {
     const errors = errorsOf({ ...base, vdc: Number.NaN }, 'vdc');
     expect(errors.vdc).toBe('Enter a number: DC bus in V');
+    expect(errors.claimed).toBe(true);
+  });
+
+  it('puts a refused on-state drop on its field, in volts', () => {
+    const errors = errorsOf({ ...base, diodeDropV: -1 }, 'diodeDropV');
+    expect(errors.diodeDropV).toMatch(/^Diode on-state drop must be .*0.* \(entered -1 V\)$/);
+    expect(errors.transistorDropV).toBeUndefined();
     expect(errors.claimed).toBe(true);
   });
 

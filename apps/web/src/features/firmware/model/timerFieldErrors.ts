@@ -7,7 +7,9 @@ export type TimerField =
   | 'counterBits'
   | 'deadTimeNs'
   | 'minPulseNs'
-  | 'vdc';
+  | 'vdc'
+  | 'transistorDropV'
+  | 'diodeDropV';
 
 /** The form's numbers as typed (NaN for an empty box or letters). */
 export type TimerNumbers = Record<TimerField, number>;
@@ -24,6 +26,8 @@ const LABELS: Record<TimerField, { label: string; unit: string }> = {
   deadTimeNs: { label: 'Dead time', unit: 'ns' },
   minPulseNs: { label: 'Minimum pulse', unit: 'ns' },
   vdc: { label: 'DC bus', unit: 'V' },
+  transistorDropV: { label: 'Transistor on-state drop', unit: 'V' },
+  diodeDropV: { label: 'Diode on-state drop', unit: 'V' },
 };
 
 /** The library's refusal fields of a single form field. */
@@ -33,6 +37,8 @@ const SINGLE: Record<string, TimerField> = {
   timerClock: 'timerClock',
   counterBits: 'counterBits',
   vdc: 'vdc',
+  'onStateDrop.transistor': 'transistorDropV',
+  'onStateDrop.diode': 'diodeDropV',
 };
 
 /** A number as people write it, 9 significant digits: 72,000,000 and 0.5. */

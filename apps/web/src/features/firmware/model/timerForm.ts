@@ -14,6 +14,9 @@ export interface TimerFormState {
   deadTimeNs: number;
   minPulseNs: number;
   vdc: number;
+  /** Device on-state drops, V (0 and 0: ideal switches). */
+  transistorDropV: number;
+  diodeDropV: number;
   /** Prefix of the C header's names. */
   prefix: string;
 }

@@ -27,11 +27,15 @@ export interface TimerTableOutcome {
 
 export function buildTimerTable(
   options: TimerTableOptions,
-  effectOptions: { minPulseWidth: number },
+  effectOptions: {
+    minPulseWidth: number;
+    /** Device on-state drops, V; left out for ideal switches. */
+    onStateDrop?: { transistor: number; diode: number };
+  },
 ): TimerTableOutcome {
   try {
     const table = timerTable(options);
-    const effects = firmwareEffects(table, { minPulseWidth: effectOptions.minPulseWidth });
+    const effects = firmwareEffects(table, effectOptions);
     return { table, effects, error: null };
   } catch (error) {
     const field = (error as { field?: string }).field ?? 'table';
