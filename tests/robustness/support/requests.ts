@@ -1,4 +1,5 @@
 import fc from 'fast-check';
+import { MULTILEVEL_CARRIERS_BY_TOPOLOGY, MULTILEVEL_LEVEL_BOUNDS } from '@pulsewright/modulation';
 import {
   applyMutation,
   mutationsFor,
@@ -143,12 +144,41 @@ function coherentDesign(design: Record<string, unknown>, pick: number): Record<s
   } else if (typeof copy.fundamentalFrequency === 'number') {
     const carrier = copy.fundamentalFrequency * (1 + (pick % 60));
     if (carrier <= 1e8) copy.carrierFrequency = carrier;
-    if (method === 'space-vector' && 'm' in modulation && 'ma' in modulation) {
+    if (
+      (method === 'space-vector' || method === 'multilevel-space-vector') &&
+      'm' in modulation &&
+      'ma' in modulation
+    ) {
       const { [pick % 2 === 0 ? 'm' : 'ma']: _dropped, ...rest } = modulation;
       copy.modulation = rest;
     }
+    if (method === 'multilevel-carrier') copy.modulation = coherentMultilevel(modulation, pick);
   }
   return copy;
+}
+
+/**
+ * A multilevel carrier modulation whose levels and carriers suit its topology (the library's
+ * MULTILEVEL_LEVEL_BOUNDS and MULTILEVEL_CARRIERS_BY_TOPOLOGY), and no zero sequence on a
+ * single-phase bridge: what the schema cannot say.
+ */
+function coherentMultilevel(
+  modulation: Record<string, unknown>,
+  pick: number,
+): Record<string, unknown> {
+  const topology = modulation.topology as keyof typeof MULTILEVEL_LEVEL_BOUNDS;
+  const bounds = MULTILEVEL_LEVEL_BOUNDS[topology];
+  const carriers = MULTILEVEL_CARRIERS_BY_TOPOLOGY[topology];
+  if (bounds === undefined || carriers === undefined) return modulation;
+  const step = bounds.odd ? 2 : 1;
+  const levels = bounds.min + step * (pick % (1 + (bounds.max - bounds.min) / step));
+  const coherent: Record<string, unknown> = {
+    ...modulation,
+    levels,
+    carriers: carriers[pick % carriers.length],
+  };
+  if (coherent.phaseCount === 1) delete coherent.zeroSequence;
+  return coherent;
 }
 
 const INVALID_IDS = [
