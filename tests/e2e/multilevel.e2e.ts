@@ -16,7 +16,7 @@ const optionValues = (page: Page, label: string) =>
   page
     .getByLabel(label, { exact: true })
     .locator('option')
-    .evaluateAll((options) => options.map((o) => (o as HTMLOptionElement).value));
+    .evaluateAll((options) => options.map((o) => o.getAttribute('value')));
 
 export const scenarios: Scenario[] = [
   {

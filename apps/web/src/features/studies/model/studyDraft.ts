@@ -24,7 +24,7 @@ import {
   multilevelDraftOf,
   multilevelModulationOf,
   type MultilevelDraft,
-} from './multilevelDraft';
+} from './multilevelDraft.js';
 
 /** A method given by stored first-quarter angles (picked on the elimination page, read-only here). */
 export type PatternMethod = 'selective-harmonic-elimination' | 'optimal-pattern';
