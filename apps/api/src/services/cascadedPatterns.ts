@@ -101,7 +101,7 @@ export function solveCascadedPatternRequest(request: CascadedSolveRequest): Casc
 }
 
 /**
- * Work of a joint solve at its worst: every start (the given angles and `starts` seeded ones)
+ * Work of a joint solve at its worst: every start (a given guess and `starts` seeded ones)
  * runs its Newton iterations to the limit without converging, each costing the Jacobian of
  * cells·count unknowns; then the string is built (4 edges per angle a cell, at most that many
  * in the string) and analysed to maxOrder. The answer holds the cells' and the string's edges
@@ -116,7 +116,8 @@ export function cascadedSolveCost(request: CascadedSolveRequest): CostEstimate {
   const { maxOrder: _maxOrder, ...options } = request;
   callLibrary('', () => solveCascadedPattern({ ...options, starts: 1, maxIterations: 1 }));
   const unknowns = request.cells * request.count;
-  const starts = request.starts + (request.angles === undefined ? 0 : 1);
+  // The given guess, or none: one start more than asked, counted either way (it errs high).
+  const starts = request.starts + 1;
   const iterations = starts * ITERATIONS_PER_START;
   const edges = 4 * unknowns;
   return {
