@@ -61,6 +61,15 @@ export function assertInverterDesign(design: unknown): asserts design is Inverte
       modulation.angles.length,
     );
   }
+  if (Array.isArray(modulation.cellVoltages)) {
+    modulation.cellVoltages.forEach((voltage: unknown, i: number) =>
+      assertNumberInRange(
+        `modulation.cellVoltages[${i}]`,
+        voltage,
+        DESIGN_BOUNDS['modulation.cellVoltages'],
+      ),
+    );
+  }
   if (Array.isArray(modulation.eliminate)) {
     modulation.eliminate.forEach((order: unknown, i: number) => {
       assertNumberInRange(

@@ -28,6 +28,8 @@ export const DESIGN_BOUNDS = {
   'modulation.angles': { min: 0, minExclusive: true, max: Math.PI / 2, maxExclusive: true },
   'modulation.eliminate': { min: 3, max: 199, integer: true },
   'modulation.fundamental': { min: 0, minExclusive: true, max: 1_000_000 },
+  // A staircase's cell sources, volts: each as the DC bus.
+  'modulation.cellVoltages': { min: 0, minExclusive: true, max: 100_000 },
   // Multilevel: the levels of any topology (each topology's own range in MULTILEVEL_LEVEL_BOUNDS),
   // and the phase count (1 or 3; the schema states the two values).
   'modulation.levels': { min: 3, max: 17, integer: true },
