@@ -37,6 +37,8 @@ export interface StoredPattern {
   angles: number[];
   /** Odd orders the angles were solved to eliminate (harmonic elimination only). */
   eliminate?: number[];
+  /** Staircase of unequal cell sources: each cell's DC source, volts, one per angle. */
+  cellVoltages?: number[];
   /** The fundamental the angles were solved for, peak volts (a record). */
   fundamental?: number;
 }
@@ -239,6 +241,7 @@ function designModulationOf(draft: StudyDraft): DesignModulation {
         method,
         kind: pattern.kind,
         angles: pattern.angles,
+        ...(pattern.cellVoltages ? { cellVoltages: pattern.cellVoltages } : {}),
         ...(pattern.eliminate ? { eliminate: pattern.eliminate } : {}),
         ...fundamental,
       };
@@ -367,6 +370,9 @@ export function draftOf(
         angles: [...modulation.angles],
         ...(modulation.method === 'selective-harmonic-elimination' && modulation.eliminate
           ? { eliminate: [...modulation.eliminate] }
+          : {}),
+        ...(modulation.method === 'selective-harmonic-elimination' && modulation.cellVoltages
+          ? { cellVoltages: [...modulation.cellVoltages] }
           : {}),
         ...(modulation.fundamental !== undefined ? { fundamental: modulation.fundamental } : {}),
       };
