@@ -11,6 +11,14 @@ export async function getDesignReport(body: DesignReportRequest): Promise<StudyR
   return unwrap(await api.POST('/api/v1/designs/report', { body }));
 }
 
+/** What POST /filters/lcl-design takes: the rated power, grid, switching frequency and DC bus. */
+export type LclDesignRequest = BodyOf<'designLclFilter'>;
+
+/** An LCL filter sized by the library's designLclFilter (Liserre, Blaabjerg and Hansen, 2005), from the service. */
+export async function sizeLclFilter(body: LclDesignRequest) {
+  return unwrap(await api.POST('/api/v1/filters/lcl-design', { body }));
+}
+
 /**
  * The report of one design: a pure function of the body, so an answer never goes stale (Compare
  * asks for the designs it adjusts to equal conditions).

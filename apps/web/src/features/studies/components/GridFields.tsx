@@ -5,9 +5,10 @@ import { draftPhaseCount, type StudyDraft } from '../model/studyDraft';
 import { draftSetter } from './draftSetter';
 import type { StudyFieldErrors } from './studyFieldErrors';
 import { DEGREES, RADIANS_TO_DEGREES } from './studyFormUnits';
+import { LclSizing } from './LclSizing';
 
 /**
- * The study form's grid connection fieldset: grid voltage (V rms), phase (radians, shown in degrees), grid-side L2, grid R and L, and the control bandwidth (Hz, 0 leaves it out). A render function, not a component: the form calls it
+ * The study form's grid connection fieldset: grid voltage (V rms), phase (radians, shown in degrees), grid-side L2, grid R and L, the control bandwidth (Hz, 0 leaves it out) and, for a three-phase bridge, the LCL sizing that fills the filter fields and L2 ({@link LclSizing}). A render function, not a component: the form calls it
  * while rendering so the messages it asks for are claimed before the form lists the unclaimed ones.
  */
 export function gridFields({
@@ -91,6 +92,13 @@ export function gridFields({
             hint={`0 (left out) or ${rangeText(DESIGN_BOUNDS['grid.controlBandwidth'], { unit: 'Hz' })}; the LCL resonance is compared with it`}
             onChange={set('gridControlBandwidth')}
           />
+          {threePhase ? (
+            <LclSizing draft={draft} onChange={onChange} readOnly={readOnly} />
+          ) : (
+            <p className="col-span-2 text-xs text-ink-soft">
+              The LCL sizing (Liserre et al. 2005) is for three-phase bridges.
+            </p>
+          )}
         </div>
       ) : null}
     </fieldset>
