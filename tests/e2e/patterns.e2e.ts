@@ -94,4 +94,46 @@ export const scenarios: Scenario[] = [
       await page.close();
     },
   },
+  {
+    name: 'harmonic elimination (issue 13): a staircase of unequal cell sources, and per-cell patterns of a cascaded string',
+    async run(context) {
+      const page = await newPage(context);
+      await signIn(page, context.baseUrl, 'viewer@kestrel.example');
+      await page.getByRole('link', { name: 'Harmonic elimination' }).click();
+      // Eliminating 5 and 7 takes three angles: three cells, each on its own source.
+      await page.getByRole('combobox', { name: 'Pattern', exact: true }).selectOption('staircase');
+      const sources = page.getByLabel(/Cell sources/);
+      await sources.fill('455, 390');
+      assert(
+        (await sources.getAttribute('aria-invalid')) === 'true',
+        'two sources for three angles marked on the field',
+      );
+      await sources.fill('455, 390, 420');
+      await page.getByLabel('ma from').first().fill('0.6');
+      await page.getByLabel('ma to').first().fill('0.9');
+      await page.getByLabel('Points').fill('8');
+      await page.getByRole('button', { name: 'Find the branches' }).click();
+      await page.getByText(/One branch followed/).waitFor({ timeout: 90_000 });
+      await page.locator('svg[data-chart="line"] circle').nth(2).click();
+      const picked = page
+        .getByRole('table', { name: 'Angles at the picked point' })
+        .locator('tbody tr');
+      assert((await picked.count()) === 3, `three angles (got ${await picked.count()})`);
+      await page
+        .getByText(/Compare events and angle tables take cells of equal sources only/)
+        .waitFor();
+      await screenshot(page, 'elimination-unequal-sources');
+
+      // Three unipolar cells of two angles each, solved together (the panel's defaults).
+      await page.getByRole('button', { name: 'Solve the cells' }).click();
+      const cells = page.getByRole('table', { name: 'Angles of each cell' }).locator('tbody tr');
+      await cells.first().waitFor({ timeout: 60_000 });
+      assert((await cells.count()) === 3, `three cells (got ${await cells.count()})`);
+      const status = await page.getByRole('status').first().textContent();
+      assert(/^Solved\./.test(status ?? ''), `the string solved (got ${status})`);
+      await page.getByText('Spectrum of the string output').waitFor();
+      await screenshot(page, 'elimination-cascaded-cells');
+      await page.close();
+    },
+  },
 ];
