@@ -21,7 +21,7 @@ import {
 import { isPatternMethod, type StudyDraft } from '../model/studyDraft';
 import { draftSetter } from './draftSetter';
 import { frequencyFields } from './FrequencyFields';
-import { multilevelFields } from './multilevel/multilevelFields';
+import { multilevelFields, multilevelSpaceVectorFields } from './multilevel/multilevelFields';
 import { PatternSummary } from './PatternSummary';
 import type { StudyFieldErrors } from './studyFieldErrors';
 import type { CarrierFields } from './useCarrierFields';
@@ -112,6 +112,9 @@ export function modulationFields({
         />
       ) : null}
       {method === 'multilevel-carrier' ? multilevelFields({ draft, onChange, fields }) : null}
+      {method === 'multilevel-space-vector'
+        ? multilevelSpaceVectorFields({ draft, onChange, fields })
+        : null}
       {method === 'sine-triangle' || method === 'three-phase' ? (
         <SelectField
           label="Sampling"

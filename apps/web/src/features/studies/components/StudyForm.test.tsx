@@ -247,6 +247,7 @@ describe('StudyForm', () => {
       'selective-harmonic-elimination',
       'optimal-pattern',
       'multilevel-carrier',
+      'multilevel-space-vector',
     ]);
     expect(
       options.filter((o) => (o as HTMLOptionElement).disabled).map((o) => o.getAttribute('value')),

@@ -3,15 +3,18 @@ import {
   MULTILEVEL_LEVEL_BOUNDS,
   type MultilevelCarrierArrangement,
   type MultilevelCarrierModulation,
+  type MultilevelSpaceVectorModulation,
   type MultilevelTopology,
   type MultilevelZeroSequence,
+  type ThreeLevelSpaceVectorTopology,
 } from '@pulsewright/modulation';
 
 /**
- * The editor's multilevel fields (method `multilevel-carrier`): the topology, the levels of a
- * leg (of a string for a cascaded bridge), the carrier arrangement, the phase count and the zero
- * sequence. The modulation index, sampling and carrier phase are the draft's shared carrier
- * fields.
+ * The editor's multilevel fields. Method `multilevel-carrier`: the topology, the levels of a leg
+ * (of a string for a cascaded bridge), the carrier arrangement, the phase count and the zero
+ * sequence; the modulation index, sampling and carrier phase are the draft's shared carrier
+ * fields. Method `multilevel-space-vector`: its own topology (NPC or T-type) and the redundant
+ * small vector's split; ma and the space-vector sampling are the draft's shared fields.
  */
 export interface MultilevelDraft {
   topology: MultilevelTopology;
@@ -20,7 +23,14 @@ export interface MultilevelDraft {
   carriers: MultilevelCarrierArrangement;
   phaseCount: 1 | 3;
   zeroSequence: MultilevelZeroSequence;
+  /** The three-level space-vector bridge's legs, kept apart from the carrier method's topology. */
+  spaceVectorTopology: ThreeLevelSpaceVectorTopology;
+  /** Share of the redundant small vector's dwell on its P-type form, [0, 1]. */
+  smallVectorSplit: number;
 }
+
+/** A multilevel space-vector modulation as a design holds it. */
+type DesignMultilevelSpaceVector = Omit<MultilevelSpaceVectorModulation, 'vdc' | 'frequencyRatio'>;
 
 /** A new multilevel design: a three-phase three-level NPC bridge, PD carriers, sine references. */
 export const DEFAULT_MULTILEVEL_DRAFT: MultilevelDraft = {
@@ -29,6 +39,8 @@ export const DEFAULT_MULTILEVEL_DRAFT: MultilevelDraft = {
   carriers: 'pd',
   phaseCount: 3,
   zeroSequence: 'none',
+  spaceVectorTopology: 'npc',
+  smallVectorSplit: 0.5,
 };
 
 /** The carrier arrangements the topology accepts, in the library's order. */
@@ -76,11 +88,36 @@ export function multilevelModulationOf(
   };
 }
 
+/** The design's three-level space-vector modulation (the design holds vdc and the frequency ratio). */
+export function multilevelSpaceVectorModulationOf(
+  draft: MultilevelDraft,
+  shared: Pick<DesignMultilevelSpaceVector, 'ma' | 'sampling'>,
+): DesignMultilevelSpaceVector {
+  return {
+    method: 'multilevel-space-vector',
+    topology: draft.spaceVectorTopology,
+    smallVectorSplit: draft.smallVectorSplit,
+    ...shared,
+  };
+}
+
+/** The editor's fields of a stored three-level space-vector modulation (ma is the caller's). */
+export function multilevelSpaceVectorDraftOf(
+  modulation: DesignMultilevelSpaceVector,
+): MultilevelDraft {
+  return {
+    ...DEFAULT_MULTILEVEL_DRAFT,
+    spaceVectorTopology: modulation.topology ?? DEFAULT_MULTILEVEL_DRAFT.spaceVectorTopology,
+    smallVectorSplit: modulation.smallVectorSplit ?? DEFAULT_MULTILEVEL_DRAFT.smallVectorSplit,
+  };
+}
+
 /** The editor's fields of a stored multilevel modulation (what it leaves out keeps the defaults). */
 export function multilevelDraftOf(
   modulation: Omit<MultilevelCarrierModulation, 'vdc' | 'mf'>,
 ): MultilevelDraft {
   return {
+    ...DEFAULT_MULTILEVEL_DRAFT,
     topology: modulation.topology,
     levels: modulation.levels,
     carriers: modulation.carriers,

@@ -87,6 +87,20 @@ const DESIGNS: InverterDesign[] = [
     load: { r: 6, l: 0.008 },
     filter: null,
   },
+  {
+    vdc: 800,
+    fundamentalFrequency: 50,
+    carrierFrequency: 2500,
+    modulation: {
+      method: 'multilevel-space-vector',
+      topology: 't-type',
+      smallVectorSplit: 0.3,
+      ma: 0.9,
+      sampling: 'asymmetric',
+    },
+    load: { r: 6, l: 0.008 },
+    filter: null,
+  },
 ];
 
 describe('draft ↔ design', () => {

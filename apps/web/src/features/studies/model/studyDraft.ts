@@ -23,6 +23,8 @@ import {
   DEFAULT_MULTILEVEL_DRAFT,
   multilevelDraftOf,
   multilevelModulationOf,
+  multilevelSpaceVectorDraftOf,
+  multilevelSpaceVectorModulationOf,
   type MultilevelDraft,
 } from './multilevelDraft.js';
 
@@ -82,7 +84,7 @@ export interface StudyDraft {
   keepClamping: boolean;
   keepZeroSplit: boolean;
   overmodulation: OvermodulationMethod;
-  /** The multilevel bridge's fields (method `multilevel-carrier`). */
+  /** The multilevel bridge's fields (methods `multilevel-carrier` and `multilevel-space-vector`). */
   multilevel: MultilevelDraft;
   /** The stored pattern of a pattern study (null for a study that never had one). */
   pattern: StoredPattern | null;
@@ -229,6 +231,11 @@ function designModulationOf(draft: StudyDraft): DesignModulation {
         sampling: draft.sampling,
         carrierPhase: draft.carrierPhase,
       });
+    case 'multilevel-space-vector':
+      return multilevelSpaceVectorModulationOf(draft.multilevel, {
+        ma,
+        sampling: draft.spaceVectorSampling,
+      });
     case 'selective-harmonic-elimination':
     case 'optimal-pattern': {
       // A pattern study keeps its stored pattern; without one the angles are empty and the library says so.
@@ -360,6 +367,13 @@ export function draftOf(
         ma: modulation.ma,
         sampling: modulation.sampling ?? base.sampling,
         carrierPhase: modulation.carrierPhase ?? 0,
+      });
+      break;
+    case 'multilevel-space-vector':
+      Object.assign(draft, {
+        multilevel: multilevelSpaceVectorDraftOf(modulation),
+        ma: modulation.ma ?? (modulation.m !== undefined ? spaceVectorMa(modulation.m) : base.ma),
+        spaceVectorSampling: modulation.sampling ?? base.spaceVectorSampling,
       });
       break;
     case 'selective-harmonic-elimination':

@@ -115,6 +115,39 @@ describe('the multilevel fields of the study form', () => {
     });
   });
 
+  it('gives the three-level space vector its own topologies (NPC, T-type) and the small-vector split', () => {
+    const onChange = vi.fn();
+    const draft = { ...defaultDraft('p'), method: 'multilevel-space-vector' as const };
+    renderForm(draft, { onChange });
+    expect(optionValues('Topology')).toEqual(['npc', 't-type']);
+    const split = screen.getByLabelText('Small-vector split');
+    expect(split).toHaveAccessibleDescription(
+      "share of the redundant small vector's time on its P-type form, from 0 to 1; 0.5 splits it equally",
+    );
+    fireEvent.change(split, { target: { value: '0.25' } });
+    expect(onChange).toHaveBeenLastCalledWith({
+      multilevel: expect.objectContaining({ smallVectorSplit: 0.25 }) as unknown,
+    });
+    expect(
+      designOf({ ...draft, multilevel: { ...draft.multilevel, smallVectorSplit: 0.25 } })
+        .modulation,
+    ).toEqual({
+      method: 'multilevel-space-vector',
+      topology: 'npc',
+      smallVectorSplit: 0.25,
+      ma: draft.ma,
+      sampling: draft.spaceVectorSampling,
+    });
+  });
+
+  it('refuses a split outside [0, 1] at the field', () => {
+    const draft = { ...defaultDraft('p'), method: 'multilevel-space-vector' as const };
+    renderForm({ ...draft, multilevel: { ...draft.multilevel, smallVectorSplit: 1.5 } });
+    expect(screen.getByLabelText('Small-vector split')).toHaveAccessibleDescription(
+      'Small-vector split must be from 0 to 1 (entered 1.5)',
+    );
+  });
+
   it('round-trips a stored multilevel design through the editor', () => {
     const draft = multilevelDraft({
       topology: 'cascaded-h-bridge',

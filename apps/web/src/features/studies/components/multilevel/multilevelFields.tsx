@@ -1,4 +1,8 @@
-import { MULTILEVEL_LEVEL_BOUNDS } from '@pulsewright/modulation';
+import {
+  DESIGN_BOUNDS,
+  MULTILEVEL_LEVEL_BOUNDS,
+  THREE_LEVEL_SPACE_VECTOR_TOPOLOGIES,
+} from '@pulsewright/modulation';
 import { NumberField, SelectField } from '../../../../components/ui/Field';
 import {
   labelOf,
@@ -6,7 +10,9 @@ import {
   MULTILEVEL_TOPOLOGY_OPTIONS,
   MULTILEVEL_ZERO_SEQUENCE_OPTIONS,
   SAMPLING_OPTIONS,
+  SPACE_VECTOR_SAMPLING_OPTIONS,
 } from '../../../../lib/modulationOptions';
+import { rangeText } from '../../../../lib/fieldRange';
 import {
   carriersOf,
   cellCountOf,
@@ -116,6 +122,64 @@ export function multilevelFields({
         onValueChange={(sampling) => onChange({ sampling })}
         error={error('modulation.sampling')}
         options={SAMPLING_OPTIONS}
+      />
+    </>
+  );
+}
+
+/** The topologies a three-level space-vector bridge takes (NPC and T-type), with the library's labels. */
+const SPACE_VECTOR_TOPOLOGY_OPTIONS = THREE_LEVEL_SPACE_VECTOR_TOPOLOGIES.map((value) => ({
+  value,
+  label: labelOf(MULTILEVEL_TOPOLOGY_OPTIONS, value),
+}));
+
+/**
+ * The three-level space-vector method's fields: the legs (NPC or T-type), the redundant small
+ * vector's split (the lever on the neutral-point current, Celanovic and Boroyevich 2000) and the
+ * space-vector sampling. A render function, as {@link multilevelFields}.
+ */
+export function multilevelSpaceVectorFields({
+  draft,
+  onChange,
+  fields,
+}: {
+  draft: StudyDraft;
+  onChange: (patch: Partial<StudyDraft>) => void;
+  fields: StudyFieldErrors;
+}) {
+  const { error, limits } = fields;
+  const { multilevel } = draft;
+  const split = limits(
+    'modulation.smallVectorSplit',
+    'Small-vector split',
+    multilevel.smallVectorSplit,
+  );
+  return (
+    <>
+      <SelectField
+        label="Topology"
+        value={multilevel.spaceVectorTopology}
+        onValueChange={(spaceVectorTopology) =>
+          onChange({ multilevel: { ...multilevel, spaceVectorTopology } })
+        }
+        error={error('modulation.topology')}
+        options={SPACE_VECTOR_TOPOLOGY_OPTIONS}
+      />
+      <NumberField
+        label="Small-vector split"
+        value={multilevel.smallVectorSplit}
+        hint={`share of the redundant small vector's time on its P-type form, ${rangeText(DESIGN_BOUNDS['modulation.smallVectorSplit'])}; 0.5 splits it equally`}
+        error={split.error}
+        onChange={(smallVectorSplit) =>
+          onChange({ multilevel: { ...multilevel, smallVectorSplit } })
+        }
+      />
+      <SelectField
+        label="Sampling"
+        value={draft.spaceVectorSampling}
+        onValueChange={(spaceVectorSampling) => onChange({ spaceVectorSampling })}
+        error={error('modulation.sampling')}
+        options={SPACE_VECTOR_SAMPLING_OPTIONS}
       />
     </>
   );
