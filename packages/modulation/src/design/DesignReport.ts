@@ -323,7 +323,10 @@ export interface DesignReport {
   dcLink: DcLinkFigures | null;
   /** The common-mode voltage (three-phase only). */
   commonMode: CommonModeFigures | null;
-  /** How often the legs switch (three-phase two-level and every multilevel bridge). */
+  /**
+   * How often the legs switch: every two-level bridge (a single-phase bridge's leg a, read from its
+   * output) and every multilevel bridge; null for a staircase pattern.
+   */
   switching: SwitchingFigures | null;
   /** The multilevel figures; null for a two-level bridge or a staircase pattern. */
   multilevel: MultilevelFigures | null;

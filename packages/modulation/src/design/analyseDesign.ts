@@ -277,21 +277,24 @@ export function analyseDesign(
           currents: inverterSamples,
         });
   const legA = voltages.legs[0];
+  // The two-level legs (a single-phase bridge's too, read from its output); null for a staircase.
+  const legs = switchingLegs(modulation, voltages, design.vdc);
+  const singlePhaseLeg = voltages.phaseCount === 1 ? legs?.[0] : undefined;
   const legSwitching =
     multilevel !== null
       ? {
           legEdgesPerPeriod: multilevel.legs[0]?.edgesPerPeriod ?? 0,
           averageDeviceFrequency: multilevel.averageDeviceFrequency,
         }
-      : legA === undefined
-        ? null
-        : {
+      : legA !== undefined
+        ? {
             legEdgesPerPeriod: legA.waveform.edges.length,
             averageDeviceFrequency: (legA.waveform.edges.length / 2) * frequency,
-          };
+          }
+        : singlePhaseLeg !== undefined
+          ? legEdgeFigures(singlePhaseLeg.state, frequency)
+          : null;
 
-  const legs =
-    device === null || dcLink === null ? null : switchingLegs(modulation, voltages, design.vdc);
   const losses =
     legs === null || device === null || dcLink === null
       ? null
@@ -359,6 +362,15 @@ export function analyseDesign(
         ? [DESIGN_CAUTION, HARMONIC_LIMIT_CAUTION]
         : [DESIGN_CAUTION, HARMONIC_LIMIT_CAUTION, GRID_CURRENT_LIMIT_CAUTION],
   };
+}
+
+/** How often a two-level leg's switches turn on, from its upper-switch state (a constant one: never). */
+function legEdgeFigures(
+  state: Waveform,
+  frequency: number,
+): NonNullable<DesignReport['switching']> {
+  const edges = state.levels.length > 1 ? state.edges.length : 0;
+  return { legEdgesPerPeriod: edges, averageDeviceFrequency: (edges / 2) * frequency };
 }
 
 /** The reduced common-mode range of a three-phase carrier design's zero sequence, else null. */

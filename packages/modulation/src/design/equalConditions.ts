@@ -157,7 +157,7 @@ export function equalConditions(
         return unchanged(
           design,
           condition === 'equal-device-frequency'
-            ? 'its report gives no average device switching frequency (a single-phase two-level bridge)'
+            ? 'its report gives no average device switching frequency (a staircase pattern)'
             : 'its report gives no switching loss (no device, or no load or filter)',
         );
       const wantedFactor = target / figure;

@@ -102,7 +102,9 @@ describe('equalConditions', () => {
       condition: 'equal-device-frequency',
     });
     expect(result.candidates[1]?.note).toContain('no carrier');
-    expect(result.candidates[2]?.note).toContain('single-phase');
+    // A bipolar bridge's switches turn on once a carrier period, as continuous three-phase PWM's:
+    // at equal device switching frequency it takes the reference's carrier (mf 101 → 99).
+    expect(result.candidates[2]?.carrierFrequency).toBe(99 * f1);
     // A factor past mf 1000 is refused for that candidate alone.
     const slow = candidate(drive('none', 3));
     const far = equalConditions([spwm, slow], {

@@ -102,9 +102,12 @@ describe('ComparePage', () => {
     // A unipolar bridge at mf 400 is far from distortion-free: its exact THD is tens of percent, not 0.00 % (issue 9).
     expect(filtered.bridge.thd).toBeGreaterThan(0.3);
     expect(cell('SHE 5 7', 'Filter resonance (Hz)')).toHaveTextContent('—');
-    // Common mode and device switching are three-phase figures: single-phase bridges show none.
+    // Common mode is a three-phase figure: single-phase bridges show none. Device switching is
+    // every two-level bridge's: a unipolar bridge's switches turn on once a carrier period.
     expect(cell('SHE 5 7', 'Common mode (V rms)')).toHaveTextContent('—');
-    expect(cell('Unipolar 20 kHz filtered', 'Device switching (Hz)')).toHaveTextContent('—');
+    expect(cell('Unipolar 20 kHz filtered', 'Device switching (Hz)')).toHaveTextContent(
+      formatNumber(20_000),
+    );
     // Both spectra drawn; the pattern's series keeps its own order labels (its bars carry no "mf").
     const chart = screen.getByRole('figure', { name: 'Spectra overlaid' });
     expect(chart.querySelectorAll('g[data-series]')).toHaveLength(2);

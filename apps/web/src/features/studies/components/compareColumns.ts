@@ -118,7 +118,7 @@ export const COLUMNS: Column[] = [
     title: (r) =>
       r.switching
         ? `turn-ons of each switch per second, averaged over the period (${r.switching.legEdgesPerPeriod} leg edges a period)`
-        : 'single-phase bridge',
+        : 'no switching figure (a staircase pattern)',
   },
   {
     heading: 'Limit check',
