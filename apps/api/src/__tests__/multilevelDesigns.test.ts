@@ -1,4 +1,4 @@
-import { analyseDesign, type InverterDesign } from '@pulsewright/modulation';
+import { analyseDesign, EXAMPLE_IGBT, type InverterDesign } from '@pulsewright/modulation';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { reportCost } from '../services/cost.js';
@@ -109,7 +109,7 @@ describe('multilevel designs in the service', () => {
     expect(waveforms.body.name).toBe('leg a to DC midpoint');
   });
 
-  it('POST /designs/report takes a three-level space-vector design: the library’s report, midpoint balance included', async () => {
+  it('POST /designs/report takes a three-level space-vector design: the library’s report, midpoint balance and losses included', async () => {
     const design = {
       ...NPC_DESIGN,
       carrierFrequency: 50 * 36,
@@ -119,6 +119,7 @@ describe('multilevel designs in the service', () => {
         smallVectorSplit: 0.3,
         topology: 't-type',
       },
+      device: EXAMPLE_IGBT,
     } as const satisfies InverterDesign;
     const options = { maxOrder: 150, points: 128 };
     const res = await request(t.app)
@@ -128,6 +129,10 @@ describe('multilevel designs in the service', () => {
     expect(res.status, JSON.stringify(res.body).slice(0, 400)).toBe(200);
     expect(res.body).toEqual(JSON.parse(JSON.stringify(analyseDesign(design, options))));
     expect(res.body.multilevel.balance.neutralPoint.carrierAverages.values).toHaveLength(36);
+    // With a device, the losses by device class (the T-type's outer and middle switches).
+    expect(
+      res.body.multilevel.losses.classes.map((c: { deviceClass: string }) => c.deviceClass),
+    ).toEqual(['outer switch', 'middle switch']);
   });
 
   it('answers 400 naming design.modulation.levels and the topology’s range for a bad level count', async () => {

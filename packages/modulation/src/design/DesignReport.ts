@@ -8,6 +8,7 @@ import type { CascadedCellPower } from '../multilevel/balance/cascadedCellPower.
 import type { DeviceSwitching } from '../multilevel/balance/deviceSwitchingFrequencies.js';
 import type { FlyingCapacitorCharge } from '../multilevel/balance/flyingCapacitorCharge.js';
 import type { NeutralPointCurrentFigures } from '../multilevel/balance/neutralPointCurrentFigures.js';
+import type { ThreeLevelLosses } from '../multilevel/losses/threeLevelLosses.js';
 import type {
   MultilevelCarrierArrangement,
   MultilevelTopology,
@@ -214,6 +215,13 @@ export interface MultilevelFigures {
   effectiveOutputFrequency: number;
   /** The balance figures at the design's load; null with neither load nor filter (no current). */
   balance: MultilevelBalanceFigures | null;
+  /**
+   * With the design's `device` at every position, an NPC or T-type bridge's conduction and
+   * switching losses per device, position and class, watts (`threeLevelLosses`, from the report's
+   * own currents); null without a device or a current, and for flying-capacitor and cascaded
+   * bridges.
+   */
+  losses: ThreeLevelLosses | null;
 }
 
 /**

@@ -275,6 +275,8 @@ export function analyseDesign(
       : multilevelFigures(modulation, voltages.multilevel, {
           fundamentalFrequency: frequency,
           currents: inverterSamples,
+          vdc: design.vdc,
+          device,
         });
   const legA = voltages.legs[0];
   // The two-level legs (a single-phase bridge's too, read from its output); null for a staircase.

@@ -2,6 +2,8 @@ import { cascadedCellPower } from '../multilevel/balance/cascadedCellPower.js';
 import { deviceSwitchingFrequencies } from '../multilevel/balance/deviceSwitchingFrequencies.js';
 import { flyingCapacitorCharge } from '../multilevel/balance/flyingCapacitorCharge.js';
 import { neutralPointCurrentFigures } from '../multilevel/balance/neutralPointCurrentFigures.js';
+import { threeLevelLosses } from '../multilevel/losses/threeLevelLosses.js';
+import type { SemiconductorDevice } from '../losses/lossTypes.js';
 import {
   MULTILEVEL_CARRIER_ARRANGEMENT_LABELS,
   MULTILEVEL_TOPOLOGY_LABELS,
@@ -28,7 +30,9 @@ function distinctLevels(waveform: Waveform): number[] {
  * the DC midpoint current of an NPC or T-type bridge (`neutralPointCurrentFigures`), the charge
  * of each flying capacitor (`flyingCapacitorCharge`), or the power of each cascaded cell's
  * source (`cascadedCellPower`). Carrier-period windows follow the modulator: the carriers of a
- * carrier modulation, the switching periods [k, k + 1)·2π/N of space vector.
+ * carrier modulation, the switching periods [k, k + 1)·2π/N of space vector. With the design's
+ * `device` at every position, an NPC or T-type bridge's losses per device class
+ * (`threeLevelLosses`, from the same currents).
  * Internal: part of analyseDesign.
  */
 export function multilevelFigures(
@@ -38,10 +42,14 @@ export function multilevelFigures(
     fundamentalFrequency: number;
     /** The inverter current of each phase on the report's grid (2πj/S); empty without any. */
     currents: readonly Float64Array[];
+    /** The whole DC link (or each cascaded cell's source), volts. */
+    vdc: number;
+    /** The design's switching device at every position; null for none. */
+    device: SemiconductorDevice | null;
   },
 ): MultilevelFigures {
   const { topology, levels, legs } = waveforms;
-  const { fundamentalFrequency, currents } = context;
+  const { fundamentalFrequency, currents, vdc, device } = context;
   const carriers = modulation.method === 'multilevel-carrier' ? modulation.carriers : null;
   const switching = deviceSwitchingFrequencies(waveforms, fundamentalFrequency);
   const [legA] = switching.legs;
@@ -66,6 +74,10 @@ export function multilevelFigures(
       currents.length === 0
         ? null
         : balanceFigures(modulation, waveforms, currents, fundamentalFrequency),
+    losses:
+      device === null || currents.length === 0 || (topology !== 'npc' && topology !== 't-type')
+        ? null
+        : threeLevelLosses(waveforms, currents, { topology, vdc, fundamentalFrequency, device }),
   };
 }
 

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { multilevelCarrier } from '../../multilevel/carrier/multilevelCarrier.js';
 import { threeLevelSpaceVectorWaveforms } from '../../multilevel/space-vector/threeLevelSpaceVectorWaveforms.js';
+import { EXAMPLE_IGBT } from '../../losses/exampleIgbt.js';
 import { harmonics } from '../../spectrum/harmonics.js';
 import { waveformThd } from '../../spectrum/waveformThd.js';
 import { waveformWthd } from '../../spectrum/waveformWthd.js';
@@ -235,6 +236,40 @@ describe('analyseDesign: multilevel carrier designs', () => {
         );
     // Without a load there is no current, so no balance figure.
     expect(analyseDesign(design(npc, 45)).multilevel!.balance).toBeNull();
+  });
+
+  it('losses by device class with the design’s device: T-type conducts through fewer devices than NPC at a high index', () => {
+    const withDevice = (topology: 'npc' | 't-type' | 'flying-capacitor', levels = 3) =>
+      analyseDesign(
+        design(
+          {
+            topology,
+            levels,
+            carriers: topology === 'flying-capacitor' ? 'phase-shifted' : 'pd',
+            phaseCount: 3,
+            ma: 0.95,
+          },
+          39,
+          { load: { r: 8, l: 0.01 }, device: EXAMPLE_IGBT },
+        ),
+      ).multilevel!.losses;
+    const npcLosses = withDevice('npc')!;
+    const tType = withDevice('t-type')!;
+    // At the outer levels an NPC leg's current passes two series devices (S1 and S2), a T-type
+    // leg's one (S1); near ma = 1 the outer levels dominate, so T-type conducts with less loss
+    // (M. Schweizer and J. W. Kolar, IEEE Trans. Power Electronics, 2013, from memory).
+    expect(tType.conduction).toBeLessThan(npcLosses.conduction);
+    // The parts add up: classes to the total, conduction plus switching to the total.
+    for (const losses of [npcLosses, tType]) {
+      const byClass = losses.classes.reduce((sum, c) => sum + c.total, 0);
+      expect(Math.abs(byClass - losses.total)).toBeLessThan(1e-9 * losses.total);
+      expect(Math.abs(losses.conduction + losses.switching - losses.total)).toBeLessThan(
+        1e-9 * losses.total,
+      );
+    }
+    expect(npcLosses.classes.map((c) => c.deviceClass)).toContain('clamp diode');
+    // No three-level loss model for a flying-capacitor leg: null, not a wrong number.
+    expect(withDevice('flying-capacitor', 4)).toBeNull();
   });
 
   it('the modulator chart holds every carrier: the leg’s level index is the count of carriers below the reference', () => {
