@@ -60,6 +60,15 @@ describe('CascadedPatternPanel (issue 13)', () => {
       });
     });
     expect(screen.getByRole('status')).toHaveTextContent(/^Solved\./);
+    // The string's output or any one cell's can be drawn.
+    const shown = screen.getByRole('combobox', { name: 'Voltage shown' });
+    expect(
+      within(shown)
+        .getAllByRole('option')
+        .map((o) => o.textContent),
+    ).toEqual(['string output', 'cell 1', 'cell 2', 'cell 3']);
+    await userEvent.selectOptions(shown, 'cell 2');
+    expect(shown).toHaveValue('2');
   });
 
   it('puts the service message on the field it names', async () => {

@@ -103,9 +103,13 @@ export function CascadedPatternPanel() {
   );
 }
 
-/** The solve's outcome: each cell's angles, the string's waveform and its spectrum. */
+/** The solve's outcome: each cell's angles, the string's (or one cell's) waveform, the string's spectrum. */
 function CascadedSolution({ solution }: { solution: CascadedPatternSolution }) {
   const count = solution.patterns[0]?.angles.length ?? 0;
+  // The string's output, or one cell's, level by level (index into [output, ...cells]).
+  const voltages = [solution.output, ...solution.cells];
+  const [shown, setShown] = useState(0);
+  const voltage = voltages[shown] ?? solution.output;
   return (
     <div className="mt-4 flex flex-col gap-4">
       <p className="text-sm" role="status">
@@ -137,10 +141,24 @@ function CascadedSolution({ solution }: { solution: CascadedPatternSolution }) {
         </tbody>
       </table>
       <WaveformChart
-        title="String output over one period"
+        title="Cascaded string over one period"
         fileName="cascaded-string-waveform"
-        output={solution.output.waveform}
-        outputName={solution.output.name}
+        output={voltage.waveform}
+        outputName={voltage.name}
+        controls={
+          <select
+            aria-label="Voltage shown"
+            className="rounded border border-rule bg-panel px-1.5 py-0.5 text-xs"
+            value={shown}
+            onChange={(e) => setShown(Number(e.target.value))}
+          >
+            {voltages.map((v, i) => (
+              <option key={v.name} value={i}>
+                {v.name}
+              </option>
+            ))}
+          </select>
+        }
       />
       <SpectrumChart
         series={[
