@@ -66,6 +66,32 @@ describe('exports: netlists, CSV and study records', () => {
       expect(res.text).toMatch(/^\.tran 3e-8 4e-2$/m); // 2 periods of 50 Hz
     });
 
+    it("takes the devices' on-state drops into the leg voltages, as the library writes them", async () => {
+      const onStateDrop = { transistor: 1.1, diode: 1.5 };
+      const res = await request(t.app)
+        .post('/api/v1/netlists')
+        .set(viewer)
+        .send({ timerTable: TABLE, currentAngle: 0.3, onStateDrop })
+        .buffer(true);
+      expect(res.status, res.text).toBe(200);
+      const { prefix: _prefix, ...tableOptions } = TABLE;
+      expect(res.text).toBe(
+        timerTableToSpiceNetlist(timerTable(tableOptions), { currentAngle: 0.3, onStateDrop }),
+      );
+      // Leg levels with the current out of the leg: 325 − 1.1 V on the transistor, −325 − 1.5 V
+      // on the diode (SPICE numbers written as the library writes them).
+      expect(res.text).toContain(' 3.239e+2');
+      expect(res.text).toContain(' -3.265e+2');
+      const bad = await request(t.app)
+        .post('/api/v1/netlists')
+        .set(viewer)
+        .send({ timerTable: TABLE, onStateDrop: { transistor: -1, diode: 1 } });
+      expect(bad.status).toBe(400);
+      expect(bad.body.errors[0].path).toMatch(
+        /onStateDrop\/?\.?transistor|onStateDrop\.transistor/,
+      );
+    });
+
     it('names the field: a ramp longer than a pulse, a table field, too many periods', async () => {
       const ask = (body: object) =>
         request(t.app)

@@ -9,7 +9,15 @@ export type NetlistRequest = SpiceNetlistOptions & {
 };
 
 /** The netlist's own options, in the library's names (the table sits apart). */
-const NETLIST_FIELDS = ['riseTime', 'fallTime', 'periods', 'gateVoltage', 'currentAngle'] as const;
+const NETLIST_FIELDS = [
+  'riseTime',
+  'fallTime',
+  'periods',
+  'gateVoltage',
+  'currentAngle',
+  'onStateDrop.transistor',
+  'onStateDrop.diode',
+] as const;
 
 /**
  * The switching pattern of a timer table as a SPICE netlist of piecewise-linear sources, written

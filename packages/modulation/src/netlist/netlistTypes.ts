@@ -20,6 +20,12 @@ export interface SpiceNetlistOptions {
    * @default 0
    */
   currentAngle?: number;
+  /**
+   * Device on-state drops, volts in [0, 10000], in the leg voltages (the threshold model of
+   * `timerTableWaveforms`: the conducting transistor or diode takes its drop against the
+   * current). The gates do not change. @default none (ideal switches)
+   */
+  onStateDrop?: { transistor: number; diode: number };
 }
 
 /** One piecewise-linear voltage source of the netlist. */
@@ -45,6 +51,8 @@ export interface SpiceNetlistSources {
   fallTime: number;
   gateVoltage: number;
   currentAngle: number;
+  /** The drops in the leg voltages, volts; null for ideal switches. */
+  onStateDrop: { transistor: number; diode: number } | null;
   /** Each switch's gate (`gate_<leg>_high`, `gate_<leg>_low`), then each leg's voltage (`leg_<leg>`). */
   sources: PwlSource[];
 }

@@ -34,16 +34,25 @@ const mapLevels = (waveform: Waveform, level: (value: number) => number): Wavefo
  * it flows in; so with the current forced out of every leg (`currentSign` > 0) a leg is at +vdc/2
  * exactly while its high-side switch is on, and with it forced in, at −vdc/2 exactly while its
  * low-side switch is on. Those two readings are the gate signals. The leg voltages themselves are
- * read with the load current's phase `currentAngle` (radians, as timerTableWaveforms takes it).
+ * read with the load current's phase `currentAngle` (radians, as timerTableWaveforms takes it)
+ * and, when given, the devices' on-state drops (`onStateDrop`, volts, its threshold model).
  *
  * A bipolar H-bridge has one timer channel: leg B's switches are driven crosswise from leg A's
  * (B high with A low, B low with A high), so its gates are A's swapped and vB = −vA (the
- * library's own statement for its vAB).
+ * library's own statement for its vAB; with drops too, since B carries −i and conducts the
+ * device of the same kind as A at every instant).
  */
-export function switchWaveforms(table: TimerTable, currentAngle = 0): SwitchWaveforms {
+export function switchWaveforms(
+  table: TimerTable,
+  currentAngle = 0,
+  onStateDrop?: { transistor: number; diode: number },
+): SwitchWaveforms {
   const out = timerTableWaveforms(table, { currentSign: () => 1 }).legs;
   const into = timerTableWaveforms(table, { currentSign: () => -1 }).legs;
-  const legs = timerTableWaveforms(table, { currentAngle }).legs;
+  const legs = timerTableWaveforms(table, {
+    currentAngle,
+    ...(onStateDrop === undefined ? {} : { onStateDrop }),
+  }).legs;
   const gates: NamedWaveform[] = [];
   const legList: NamedWaveform[] = [];
   table.channels.forEach((channel, k) => {

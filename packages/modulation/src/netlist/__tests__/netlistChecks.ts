@@ -107,14 +107,18 @@ export function valueAt(source: ParsedSource, t: number): number {
 export function expectNetlistOfTable(
   text: string,
   table: TimerTable,
-  options: Required<SpiceNetlistOptions>,
+  options: Required<Omit<SpiceNetlistOptions, 'onStateDrop'>> &
+    Pick<SpiceNetlistOptions, 'onStateDrop'>,
 ): ParsedNetlist {
-  const { riseTime, fallTime, periods, gateVoltage, currentAngle } = options;
+  const { riseTime, fallTime, periods, gateVoltage, currentAngle, onStateDrop } = options;
   const netlist = parseSpiceNetlist(text);
   const period = 1 / table.realisedFundamentalFrequency;
   const high = timerTableWaveforms(table, { currentSign: () => 1 }).legs;
   const low = timerTableWaveforms(table, { currentSign: () => -1 }).legs;
-  const legs = timerTableWaveforms(table, { currentAngle }).legs;
+  const legs = timerTableWaveforms(table, {
+    currentAngle,
+    ...(onStateDrop === undefined ? {} : { onStateDrop }),
+  }).legs;
   const byName = new Map(netlist.sources.map((s) => [s.name, s]));
   const gateOn = (w: Waveform, sign: number): Waveform => ({
     edges: w.edges,

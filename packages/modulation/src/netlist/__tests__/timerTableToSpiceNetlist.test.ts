@@ -46,6 +46,61 @@ describe('timerTableToSpiceNetlist', () => {
     ]);
   });
 
+  it('puts the on-state drops in the leg voltages only: with equal drops v each leg is its ideal self less v·sgn(i)', () => {
+    // Whichever device conducts takes v against the current (standard circuit analysis), so
+    // with equal transistor and diode drops the leg voltage is the ideal one less v·sgn(i).
+    const table = timerTable({
+      modulation: { method: 'sine-triangle', scheme: 'unipolar', ma: 0.9 },
+      vdc: 400,
+      fundamentalFrequency: 50,
+      carrierFrequency: 5000,
+      timerClock: 64e6,
+      deadTime: 1e-6,
+    });
+    const v = 1.8;
+    const phi = 0.5;
+    const options = { riseTime: 2e-8, fallTime: 2e-8, periods: 1, gateVoltage: 15 };
+    const text = timerTableToSpiceNetlist(table, {
+      ...options,
+      currentAngle: phi,
+      onStateDrop: { transistor: v, diode: v },
+    });
+    expect(text).toMatch(/on-state drops of 1\.8 V a transistor, 1\.8 V a diode/);
+    const dropped = expectNetlistOfTable(text, table, {
+      ...options,
+      currentAngle: phi,
+      onStateDrop: { transistor: v, diode: v },
+    });
+    const ideal = parseSpiceNetlist(
+      timerTableToSpiceNetlist(table, { ...options, currentAngle: phi }),
+    );
+    const named = (n: typeof ideal, name: string) =>
+      n.sources.find((s) => s.name === name) as ParsedSource;
+    // Gates unchanged.
+    for (const gate of ['Vgate_a_high', 'Vgate_a_low', 'Vgate_b_high', 'Vgate_b_low'])
+      expect(named(dropped, gate).points).toEqual(named(ideal, gate).points);
+    // Leg a carries sin(θ − φ), leg b its opposite; sampled off the ramps.
+    const period = 1 / table.realisedFundamentalFrequency;
+    let checked = 0;
+    for (const [leg, sign] of [
+      ['Vleg_a', 1],
+      ['Vleg_b', -1],
+    ] as const) {
+      for (let k = 0; k < 997; k++) {
+        const t = ((k + 0.5) / 997) * period;
+        const current = sign * Math.sin((2 * Math.PI * t) / period - phi);
+        const before = valueAt(named(ideal, leg), t);
+        if (Math.abs(before) !== 200 || Math.abs(current) < 1e-3) continue; // on a ramp or at a zero
+        expect(valueAt(named(dropped, leg), t), `${leg} at ${t}`).toBeCloseTo(
+          before - v * Math.sign(current),
+          9,
+        );
+        checked++;
+      }
+    }
+    expect(checked).toBeGreaterThan(1800);
+  });
+
   it("keeps the dead time between the two gates of a leg, and the bipolar bridge's crosswise leg b", () => {
     const table = timerTable({
       modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.9 },
