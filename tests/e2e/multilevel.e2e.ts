@@ -74,4 +74,36 @@ export const scenarios: Scenario[] = [
       await page.close();
     },
   },
+  {
+    name: 'multilevel: the three-level space-vector diagram shows the 19 points, the reference and the applied states',
+    async run(context) {
+      const page = await context.browser.newPage({ viewport: { width: 1400, height: 900 } });
+      page.setDefaultTimeout(15_000);
+      context.lastPage = page;
+      await signIn(page, context.baseUrl, 'engineer@kestrel.example');
+      await page.goto(`${context.baseUrl}/studies/new`);
+      await page.getByLabel('Method').selectOption('multilevel-space-vector');
+      await page.getByLabel('Topology').selectOption('t-type');
+      const diagram = page.getByRole('figure', { name: 'Three-level vector diagram' });
+      await diagram.waitFor();
+      // 27 states on 19 points: zero, six small, six medium, six large (Celanovic and Boroyevich 2000).
+      const points = await diagram.locator('[data-kind]').count();
+      assert(points === 19, `19 points drawn (got ${points})`);
+      await diagram.getByLabel('Switching period shown').fill('5');
+      const text = (await diagram.getByTestId('vector-period').textContent()) ?? '';
+      assert(
+        /sector \d, region \d/.test(text),
+        `the chosen period names its sector and region (${text})`,
+      );
+      const lit = await diagram.locator('[data-applied]').count();
+      assert(
+        lit >= 3 && lit <= 4,
+        `the period's nearest three vectors are marked (got ${lit} points)`,
+      );
+      const neutral = page.getByRole('figure', { name: /Neutral-point current/ });
+      await neutral.waitFor();
+      await diagram.screenshot({ path: path.join(screenshotDir, 'multilevel-vector-diagram.png') });
+      await page.close();
+    },
+  },
 ];

@@ -35,6 +35,7 @@ import { StudyCharts } from './StudyCharts';
 import { StudyForm } from './StudyForm';
 import { usePreview } from './usePreview';
 import { ExportRecordButton } from './ExportRecordButton';
+import { ThreeLevelVectorDiagram } from './multilevel/ThreeLevelVectorDiagram';
 
 /** The study editor: the design on the left, the library's live report on the right. */
 export function StudyEditorPage() {
@@ -246,6 +247,7 @@ function StudyEditor({ study }: { study: Study | undefined }) {
             <>
               <ReportCautions cautions={report.cautions} except={[report.limitCheck.caution]} />
               <StudyCharts report={report} fileStem={fileStem} />
+              <ThreeLevelVectorDiagram design={design} fileStem={fileStem} />
             </>
           ) : preview ? (
             // Each refusal is on its field (or listed above the form) in the field's unit; the
