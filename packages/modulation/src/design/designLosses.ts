@@ -6,16 +6,20 @@ import type { Waveform } from '../waveform/Waveform.js';
 import type { DesignLossFigures, LegLossFigures } from './DesignReport.js';
 import type { SwitchingLeg } from './switchingLegs.js';
 
+/** Fewest cells a period the conduction integral is summed over. */
+const MIN_CONDUCTION_CELLS = 4096;
+
 /**
  * Internal (part of analyseDesign): the semiconductor losses of a design's bridge from its exact
  * leg switching functions and the report's own phase currents, with the loss model of losses/
  * (IGBT v = vce0 + rce·i and diode v = vf0 + rf·i, or a MOSFET channel rdsOn in both
  * directions; switching energies scaled linearly, E·(vdc/Vref)·(|i|/Iref), common practice).
  *
- * - Conduction: the period is cut into the S cells of the currents' grid (each centred on a
- *   sample 2πj/S, at least 64 a carrier period); each cell's duty is the exact share of it in
- *   which the leg's upper switch is on, read from the leg's edges, and `legLossesFromSamples`
- *   averages the cells (only its conduction is used: a cell is not a carrier period).
+ * - Conduction: the period is cut into cells centred on the currents' samples 2πj/S (every
+ *   k-th sample of a finer grid, keeping at least 4096 cells and 64 a carrier period, 32 per leg
+ *   edge); each cell's duty is the exact share of it in which the leg's upper switch is on, read
+ *   from the leg's edges, and `legLossesFromSamples` averages the cells (only its conduction is
+ *   used: a cell is not a carrier period).
  * - Switching: counted at each exact edge of the leg with the current there (linear
  *   interpolation of the grid): with the current out of the leg (i > 0) a rising edge is the
  *   upper transistor's turn-on (eon) and the lower diode's recovery (err), a falling edge its
@@ -44,12 +48,19 @@ export function designLosses(
   const figures = legs.map((leg): LegLossFigures => {
     const phase = inverterSamples[leg.phaseIndex] as Float64Array;
     const current = leg.currentSign === 1 ? phase : phase.map((i) => -i);
-    const size = current.length;
+    // A filtered report's grid follows its analysis order (up to 131072 samples a period); the
+    // conduction integral needs no more than 64 cells a carrier period (32 per leg edge).
+    let stride = Math.max(
+      1,
+      Math.floor(current.length / Math.max(MIN_CONDUCTION_CELLS, 32 * leg.state.edges.length)),
+    );
+    while (current.length % stride !== 0) stride--;
+    const cells = stride === 1 ? current : current.filter((_, j) => j % stride === 0);
     const conduction = legLossesFromSamples(
-      highFractions(leg.state, size),
-      current,
+      highFractions(leg.state, cells.length),
+      cells,
       // Only the conduction part is read; the cells' own switching count is not a carrier's.
-      { device, vdc, switchingFrequency: fundamentalFrequency * size },
+      { device, vdc, switchingFrequency: fundamentalFrequency * cells.length },
     );
     const switching = edgeSwitchingLosses(leg.state, current, device, vdc, fundamentalFrequency);
     const loss = (c: DeviceLoss, s: number): DeviceLoss => ({

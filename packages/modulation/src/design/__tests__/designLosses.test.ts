@@ -265,6 +265,36 @@ describe('analyseDesign: losses by device', () => {
     expect(report.losses?.legs.every((l) => l.upperDiode.conduction === 0)).toBe(true);
   });
 
+  it('with a filter (the currents on a finer grid, summed on every k-th cell): the closed form still', () => {
+    // The filtered report reads its currents on 16 samples per analysis order (16384 here); the
+    // conduction sum keeps 64 cells a carrier period. Against the closed form (Bierhoff and Fuchs
+    // 2004, from memory) with the inverter current's own fundamental and angle: the filter
+    // inductor's ripple (1.7 A rms on 36 A) only adds, through r·i² and, near the current's
+    // zeros, the threshold terms: between 0 and 0.5 % above it; switching within 2 %.
+    const report = analyseDesign({
+      vdc,
+      fundamentalFrequency: f1,
+      carrierFrequency: mf * f1,
+      modulation: { method: 'three-phase', ma },
+      load: { r: 8, l: 0.003 },
+      filter: { l: 0.002, c: 10e-6 },
+      device,
+    });
+    const current = report.currents[0]?.inverter;
+    if (!current || !report.losses) throw new Error('expected currents and losses');
+    const closed = semiconductorLosses(device, {
+      vdc,
+      ma,
+      peakCurrent: current.fundamental,
+      currentAngle: -current.fundamentalPhase,
+      switchingFrequency: mf * f1,
+    });
+    expect(current.rippleRms).toBeGreaterThan(1);
+    expect(report.losses.conduction).toBeGreaterThan(closed.conduction);
+    expect(report.losses.conduction).toBeLessThan(1.005 * closed.conduction);
+    assertInDelta(report.losses.switching, closed.switching, 2e-2 * closed.switching, 'switching');
+  });
+
   it('with a filter every zero sequence gives losses, and the clamps switch less', () => {
     const base: InverterDesign = {
       vdc,
