@@ -492,6 +492,26 @@ describe('multilevelTimerTable input checks', () => {
     ).toBe(Math.round(1e10 / (2 * 1050)));
   });
 
+  it('holds each entry for updatesPerEntry updates, sampled where its first update begins', () => {
+    const full = tableFor(CASES[2]!.modulation, 'regular-asymmetric');
+    const short = tableFor(CASES[2]!.modulation, 'regular-asymmetric', { tableLength: 14 });
+    expect(short.updatesPerEntry).toBe(3);
+    short.legs.forEach((leg, l) =>
+      leg.pairs.forEach((pair, k) => {
+        const every = full.legs[l]!.pairs[k]!.compare.filter((_, i) => i % 3 === 0);
+        expect(pair.compare).toEqual(every);
+      }),
+    );
+    // Held entries: each half period u is on for compare[⌊u/3⌋] ticks (a centre-aligned counter
+    // is below c for c ticks of each half), so a switch is on for 3·Σ compare ticks a period.
+    const tick = (2 * Math.PI) / (2 * P * MF);
+    const switches = multilevelTimerSwitches(short, { includeDeadTime: false });
+    short.legs[0]!.pairs.forEach((pair, k) => {
+      const on = widthsOfOnes(switches.legs[0]!.switches[2 * k]!.on).reduce((a, b) => a + b, 0);
+      assertInDelta(on / tick, 3 * pair.compare.reduce((a, b) => a + b, 0), 1e-6, pair.main);
+    });
+  });
+
   it('bounds the table before any work, the default length too', () => {
     // Cascaded, 17 levels, three-phase: 3 strings × 16 pairs; mf 10 000 with asymmetric
     // sampling is 20 000 updates × 48 pairs = 960 000 compare values per period.
