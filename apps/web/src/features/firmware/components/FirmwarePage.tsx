@@ -32,6 +32,15 @@ export function FirmwarePage() {
   });
   // The field typed last: an error that two fields share (carrier against timer clock) goes there.
   const [lastEdited, setLastEdited] = useState<TimerField>('carrierFrequency');
+  // Both 0: ideal switches, no drops to model.
+  const { transistorDropV, diodeDropV } = form;
+  const onStateDrop = useMemo(
+    () =>
+      transistorDropV === 0 && diodeDropV === 0
+        ? undefined
+        : { transistor: transistorDropV, diode: diodeDropV },
+    [transistorDropV, diodeDropV],
+  );
   const outcome = useMemo(
     () =>
       buildTimerTable(
@@ -50,13 +59,10 @@ export function FirmwarePage() {
         },
         {
           minPulseWidth: form.minPulseNs * 1e-9,
-          // Both 0: ideal switches, no drop effect to show.
-          ...(form.transistorDropV === 0 && form.diodeDropV === 0
-            ? {}
-            : { onStateDrop: { transistor: form.transistorDropV, diode: form.diodeDropV } }),
+          ...(onStateDrop === undefined ? {} : { onStateDrop }),
         },
       ),
-    [form],
+    [form, onStateDrop],
   );
   // Every keystroke is kept as typed (NaN for an empty box or letters), so the table never quietly
   // uses a previous value; the library then refuses it and the message lands on that field.
@@ -104,7 +110,7 @@ export function FirmwarePage() {
                 prefix={form.prefix}
                 prefixError={prefixError}
               />
-              <NetlistPanel table={table} fileStem={stem} />
+              <NetlistPanel table={table} fileStem={stem} onStateDrop={onStateDrop} />
               <DeadTimeCompensationPanel table={table} fileStem={stem} prefix={form.prefix} />
               <OutputEffectPanels table={table} effects={outcome.effects} stem={stem} />
             </>

@@ -35,6 +35,24 @@ describe('NetlistPanel', () => {
     );
   });
 
+  it("writes the page's on-state drops into the leg voltages, as the library does", async () => {
+    const downloads = catchDownloads();
+    const onStateDrop = { transistor: 1.2, diode: 1.7 };
+    render(<NetlistPanel table={table} fileStem="pump" onStateDrop={onStateDrop} />);
+    fireEvent.click(screen.getByRole('button', { name: 'SPICE netlist' }));
+    const { text } = await downloads.saved();
+    expect(text).toBe(
+      timerTableToSpiceNetlist(table, {
+        riseTime: 100e-9,
+        fallTime: 100e-9,
+        periods: 1,
+        gateVoltage: 15,
+        onStateDrop,
+      }),
+    );
+    expect(text).toMatch(/on-state drops of 1\.2 V a transistor, 1\.7 V a diode/);
+  });
+
   it('shows a rise time longer than a pulse on its field, in the library words, and saves nothing', () => {
     const click = vi
       .spyOn(HTMLAnchorElement.prototype, 'click')

@@ -25,10 +25,20 @@ const FIELDS: readonly { key: keyof NetlistForm; field: string; label: string; u
 /**
  * A download of the table's switching pattern as a SPICE netlist: one piecewise-linear source per
  * switch's gate and per leg's voltage, each edge a ramp of the chosen rise or fall time, with the
- * table's dead time, over the chosen number of fundamental periods. The library writes it; an
- * option it refuses is shown on its field in the library's words.
+ * table's dead time, over the chosen number of fundamental periods, and the page's device
+ * on-state drops in the leg voltages when given. The library writes it; an option it refuses is
+ * shown on its field in the library's words.
  */
-export function NetlistPanel({ table, fileStem }: { table: TimerTable; fileStem: string }) {
+export function NetlistPanel({
+  table,
+  fileStem,
+  onStateDrop,
+}: {
+  table: TimerTable;
+  fileStem: string;
+  /** Device on-state drops, volts; left out for ideal switches. */
+  onStateDrop?: { transistor: number; diode: number } | undefined;
+}) {
   const [form, setForm] = useState<NetlistForm>({
     riseTimeNs: 100,
     fallTimeNs: 100,
@@ -49,6 +59,7 @@ export function NetlistPanel({ table, fileStem }: { table: TimerTable; fileStem:
       fallTime: form.fallTimeNs / 1e9,
       periods: form.periods,
       gateVoltage: form.gateVoltage,
+      ...(onStateDrop === undefined ? {} : { onStateDrop }),
     });
     setError(outcome.error);
     if (outcome.text !== null) downloadText(outcome.text, `${fileStem}.cir`, 'text/plain');
