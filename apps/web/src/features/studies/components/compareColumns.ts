@@ -19,7 +19,15 @@ const phaseA = (report: StudyReport) => report.currents[0];
 
 /** Every column comes from the same design report of each study. */
 export const COLUMNS: Column[] = [
-  { heading: 'Method', cell: (r) => r.methodLabel },
+  {
+    heading: 'Method',
+    // A multilevel design names its bridge, so it reads apart from a two-level one beside it.
+    cell: (r) =>
+      r.multilevel
+        ? `${r.methodLabel}: ${r.multilevel.topologyLabel}, ${r.multilevel.levels} levels`
+        : r.methodLabel,
+    title: (r) => r.multilevel?.carriersLabel ?? r.methodLabel,
+  },
   {
     heading: 'Carrier (Hz)',
     cell: (_, row) => (row.carrierFrequency === null ? '—' : formatNumber(row.carrierFrequency)),

@@ -9,6 +9,9 @@ import {
   CLAMPING_OPTIONS,
   DAMPING_OPTIONS,
   labelOf,
+  MULTILEVEL_CARRIER_OPTIONS,
+  MULTILEVEL_TOPOLOGY_OPTIONS,
+  MULTILEVEL_ZERO_SEQUENCE_OPTIONS,
   OVERMODULATION_OPTIONS,
   PATTERN_KIND_OPTIONS,
   SAMPLING_OPTIONS,
@@ -70,6 +73,23 @@ export function designRows(stored: InverterDesign): [string, string][] {
         rows.push(['Eliminated orders', m.eliminate?.join(', ') || '—']);
       if (m.fundamental !== undefined)
         rows.push(['Solved for', `${formatNumber(m.fundamental)} V peak`]);
+      break;
+    case 'multilevel-carrier':
+      rows.push(
+        ['Topology', labelOf(MULTILEVEL_TOPOLOGY_OPTIONS, m.topology)],
+        ['Levels', String(m.levels)],
+        ['Carriers', labelOf(MULTILEVEL_CARRIER_OPTIONS, m.carriers)],
+        ['Phases', String(m.phaseCount)],
+        ['Zero sequence', labelOf(MULTILEVEL_ZERO_SEQUENCE_OPTIONS, m.zeroSequence ?? 'none')],
+        ['Sampling', labelOf(SAMPLING_OPTIONS, m.sampling ?? 'natural')],
+      );
+      break;
+    case 'multilevel-space-vector':
+      rows.push(
+        ['Topology', labelOf(MULTILEVEL_TOPOLOGY_OPTIONS, m.topology ?? 'npc')],
+        ['Small-vector split', formatNumber(m.smallVectorSplit ?? 0.5)],
+        ['Sampling', labelOf(SPACE_VECTOR_SAMPLING_OPTIONS, m.sampling ?? 'symmetric')],
+      );
       break;
   }
   rows.push(['DC bus', `${formatNumber(design.vdc)} V`]);
