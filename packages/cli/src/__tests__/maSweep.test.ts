@@ -112,7 +112,7 @@ describe('pulsewright ma-sweep', () => {
     ]);
     expect(run.code).toBe(2);
     expect(run.stderr).toMatch(
-      /^pulsewright: design\.modulation\.method must be one of 'sine-triangle', 'three-phase', 'space-vector' for an ma sweep/,
+      /^pulsewright: design\.modulation\.method must be one of 'sine-triangle', 'three-phase', 'space-vector', 'multilevel-carrier', 'multilevel-space-vector' for an ma sweep/,
     );
   });
 });
