@@ -38,8 +38,9 @@ export { MAX_MULTILEVEL_TIMER_VALUES } from './multilevelTimerTableInputs.js';
  *   instant its first update begins (Bowes, 1975: regular sampling), so with the default table
  *   length the switches equal `multilevelCarrier`'s regular-sampled ones, edges to the tick.
  * - Pairs (Holmes and Lipo, 2003, ch. 11; common practice): NPC and T-type S1/S3 (upper band)
- *   and S2/S4 (lower band); flying capacitor each cell's upper/lower; cascaded each half-bridge's
- *   upper/lower. Dead time `D = ceil(deadTime·timerClock)` ticks, by the timer's dead-time
+ *   and S2/S4 (lower band; in a T-type leg S2 then stays on with S1 and S3 with S4, where
+ *   `multilevelCarrier` gates its middle pair at the middle level only); flying capacitor each
+ *   cell's upper/lower; cascaded each half-bridge's upper/lower. Dead time `D = ceil(deadTime·timerClock)` ticks, by the timer's dead-time
  *   generator (every turn-on delayed by D) or by compare offsets (main `compare − floor(D/2)`,
  *   complement `compare + D − floor(D/2)`, the complement on while the counter is at or above it).
  *
@@ -274,7 +275,7 @@ function conventionLines(inputs: MultilevelTimerTableInputs): string[] {
     "Level-shifted carriers: carrier b spans band b of the reference (bottom band first); the duty is the held reference's place in the band, clamped to [0, 1]. Phase-shifted carriers: duty = (1 + r)/2, or (1 - r)/2 for a cascaded cell's right leg.",
     'A carrier delayed by d carrier radians is a counter started P*d/pi ticks later: counter k (index from 0) starts at its peak offsetTicks after counter 0; startTick is the tick, counted from angle 0 of the fundamental, at which entry 0 of the counter begins.',
     'Entry i of a counter holds the reference sampled at the instant its first update begins (regular sampling, Bowes 1975); each entry serves updatesPerEntry consecutive updates.',
-    "Complementary pairs (Holmes and Lipo 2003 ch. 11; common practice): NPC and T-type S1/S3 and S2/S4; flying capacitor each cell's upper/lower; cascaded each half-bridge's upper/lower.",
+    "Complementary pairs (Holmes and Lipo 2003 ch. 11; common practice): NPC and T-type S1/S3 and S2/S4 (in a T-type leg S2 stays on with S1 and S3 with S4); flying capacitor each cell's upper/lower; cascaded each half-bridge's upper/lower.",
   ];
   if (inputs.modulation.sampling === 'regular-asymmetric') {
     lines.push(
