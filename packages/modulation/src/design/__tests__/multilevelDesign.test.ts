@@ -144,6 +144,9 @@ describe('analyseDesign: multilevel carrier designs', () => {
     const nearMf = spectrum.slice(mf - 6, mf + 7).reduce((s, h) => Math.max(s, h.amplitude), 0);
     expect(nearMf).toBeLessThan(1e-3 * 800);
     expect(report.commonMode?.name).toBe("common mode, star point to the strings' neutral");
+    // The default spectrum reaches past the output's third carrier group, at 3·2N·mf.
+    expect(report.maxOrder).toBe(3 * 2 * cells * mf + 20);
+    expect(report.bridge.spectrum[2 * cells * mf]?.label).toMatch(/mf/);
   });
 
   it('device switching frequencies: the report’s mean is the mean over every device of the library’s switches', () => {
