@@ -26,8 +26,14 @@ export function PatternSummary({
       data-testid="she-pattern"
     >
       <p>
-        {labelOf(PATTERN_KIND_OPTIONS, pattern.kind)} · DC level{' '}
-        <span className="num">{formatNumber(vdc)} V</span>
+        {labelOf(PATTERN_KIND_OPTIONS, pattern.kind)} ·{' '}
+        {pattern.cellVoltages ? (
+          'cells on their own DC sources (below)'
+        ) : (
+          <>
+            DC level <span className="num">{formatNumber(vdc)} V</span>
+          </>
+        )}
         {pattern.eliminate?.length ? (
           <>
             {' '}
@@ -47,6 +53,7 @@ export function PatternSummary({
             <th className="font-semibold">Angle</th>
             <th className="font-semibold">degrees</th>
             <th className="font-semibold">radians</th>
+            {pattern.cellVoltages ? <th className="font-semibold">cell source (V)</th> : null}
           </tr>
         </thead>
         <tbody className="num">
@@ -55,6 +62,9 @@ export function PatternSummary({
               <td>α{k + 1}</td>
               <td>{formatNumber(angle * RADIANS_TO_DEGREES, 6)}°</td>
               <td>{angle.toFixed(9)}</td>
+              {pattern.cellVoltages ? (
+                <td>{formatNumber(pattern.cellVoltages[k] ?? Number.NaN)}</td>
+              ) : null}
             </tr>
           ))}
         </tbody>
