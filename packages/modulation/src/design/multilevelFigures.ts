@@ -73,7 +73,7 @@ export function multilevelFigures(
     balance:
       currents.length === 0
         ? null
-        : balanceFigures(modulation, waveforms, currents, fundamentalFrequency),
+        : balanceFigures(modulation, waveforms, currents, { fundamentalFrequency, vdc }),
     losses:
       device === null || currents.length === 0 || (topology !== 'npc' && topology !== 't-type')
         ? null
@@ -85,7 +85,7 @@ function balanceFigures(
   modulation: Modulation,
   waveforms: MultilevelWaveforms & { topology: MultilevelTopology },
   currents: readonly Float64Array[],
-  fundamentalFrequency: number,
+  { fundamentalFrequency, vdc }: { fundamentalFrequency: number; vdc: number },
 ): MultilevelBalanceFigures {
   const windows =
     modulation.method === 'multilevel-carrier'
@@ -117,9 +117,7 @@ function balanceFigures(
     case 'cascaded-h-bridge':
       return {
         ...none,
-        cellPower: cascadedCellPower(waveforms, currents, {
-          vdc: 'vdc' in modulation ? modulation.vdc : 0,
-        }),
+        cellPower: cascadedCellPower(waveforms, currents, { vdc }),
       };
   }
 }
