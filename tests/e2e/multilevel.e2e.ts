@@ -71,6 +71,27 @@ export const scenarios: Scenario[] = [
       await page
         .getByRole('region', { name: 'Multilevel bridge' })
         .screenshot({ path: path.join(screenshotDir, 'multilevel-figures.png') });
+
+      // Compare: the NPC study beside a two-level three-phase study of the demo, named by its bridge.
+      const npcId = page.url().split('/').pop() ?? '';
+      const token = await page.evaluate<string | null>(
+        'sessionStorage.getItem("pulsewright.session")',
+      );
+      const answer = await page.request.get(`${context.baseUrl}/api/v1/studies`, {
+        headers: { authorization: `Bearer ${token ?? ''}` },
+      });
+      const studies = (await answer.json()) as { id: string; method: string }[];
+      const twoLevel = studies.find(
+        (s) => s.method === 'three-phase' || s.method === 'space-vector',
+      );
+      assert(twoLevel, 'the demo holds a two-level three-phase study');
+      await page.goto(`${context.baseUrl}/compare?ids=${npcId},${twoLevel.id}`);
+      await page
+        .getByRole('cell', { name: /Three-level neutral-point-clamped \(NPC\), 3 levels/ })
+        .first()
+        .waitFor();
+      await page.getByText('Analysing the designs…').waitFor({ state: 'hidden' });
+      await screenshot(page, 'multilevel-compare');
       await page.close();
     },
   },

@@ -23,10 +23,11 @@ export const COLUMNS: Column[] = [
     heading: 'Method',
     // A multilevel design names its bridge, so it reads apart from a two-level one beside it.
     cell: (r) =>
-      r.multilevel
-        ? `${r.methodLabel}: ${r.multilevel.topologyLabel}, ${r.multilevel.levels} levels`
+      r.multilevel ? `${r.multilevel.topologyLabel}, ${r.multilevel.levels} levels` : r.methodLabel,
+    title: (r) =>
+      r.multilevel?.carriersLabel
+        ? `${r.methodLabel}; ${r.multilevel.carriersLabel}`
         : r.methodLabel,
-    title: (r) => r.multilevel?.carriersLabel ?? r.methodLabel,
   },
   {
     heading: 'Carrier (Hz)',

@@ -27,7 +27,10 @@ describe('multilevel designs in Compare and the printed design', () => {
     const multilevel = analyseDesign(npc);
     const twoLevel = analyseDesign({ ...npc, modulation: { method: 'three-phase', ma: 0.9 } });
     expect(method.cell(multilevel, undefined as never)).toBe(
-      'Multilevel carrier (level- or phase-shifted): Three-level neutral-point-clamped (NPC), 3 levels',
+      'Three-level neutral-point-clamped (NPC), 3 levels',
+    );
+    expect(method.title?.(multilevel, undefined as never)).toBe(
+      'Multilevel carrier (level- or phase-shifted); Level-shifted, phase disposition (PD)',
     );
     expect(method.cell(twoLevel, undefined as never)).toBe(twoLevel.methodLabel);
     // Both have a device switching frequency, the figure Compare sets equal.
