@@ -96,6 +96,37 @@ export const scenarios: Scenario[] = [
     },
   },
   {
+    name: 'multilevel: a five-level flying-capacitor leg stacks its cells and shows each capacitor charge',
+    async run(context) {
+      const page = await context.browser.newPage({ viewport: { width: 1400, height: 900 } });
+      page.setDefaultTimeout(15_000);
+      context.lastPage = page;
+      await signIn(page, context.baseUrl, 'engineer@kestrel.example');
+      await page.goto(`${context.baseUrl}/studies/new`);
+      await page.getByLabel('Method').selectOption('multilevel-carrier');
+      await page.getByLabel('Topology').selectOption('flying-capacitor');
+      await page.getByLabel('Levels', { exact: true }).fill('5');
+      const levels = page.getByRole('figure', { name: /^Levels, Flying capacitor, 5 levels$/ });
+      await levels.waitFor();
+      const rows = await levels
+        .locator('[data-row]')
+        .evaluateAll((gs) => gs.map((g) => g.getAttribute('data-row')));
+      // Four commutation cells (levels − 1) under the three legs, cell 1 (outermost) first.
+      assert(
+        rows.join() ===
+          'leg a,leg b,leg c,leg a, cell 1 upper switch,leg a, cell 2 upper switch,leg a, cell 3 upper switch,leg a, cell 4 upper switch',
+        `legs and cells drawn (got ${rows.join()})`,
+      );
+      const charge = page.getByRole('figure', {
+        name: /Flying-capacitor charge per carrier period/,
+      });
+      await charge.waitFor();
+      await levels.screenshot({ path: path.join(screenshotDir, 'multilevel-flying-levels.png') });
+      await charge.screenshot({ path: path.join(screenshotDir, 'multilevel-flying-charge.png') });
+      await page.close();
+    },
+  },
+  {
     name: 'multilevel: the three-level space-vector diagram shows the 19 points, the reference and the applied states',
     async run(context) {
       const page = await context.browser.newPage({ viewport: { width: 1400, height: 900 } });
