@@ -39,6 +39,9 @@ describe('NetlistPanel', () => {
     const downloads = catchDownloads();
     const onStateDrop = { transistor: 1.2, diode: 1.7 };
     render(<NetlistPanel table={table} fileStem="pump" onStateDrop={onStateDrop} />);
+    expect(
+      screen.getByText(/on-state drops \(1\.2 V transistor, 1\.7 V diode\) in the leg voltages/),
+    ).toBeInTheDocument();
     fireEvent.click(screen.getByRole('button', { name: 'SPICE netlist' }));
     const { text } = await downloads.saved();
     expect(text).toBe(

@@ -75,8 +75,11 @@ export function NetlistPanel({
     >
       <p className="mb-2 text-sm">
         Piecewise-linear sources for each switch's gate (0 V off) and each leg's voltage to the DC
-        midpoint, with this table's dead time. Idealised switches: check the real gate drive and
-        protection before applying the DC bus.
+        midpoint, with this table's dead time
+        {onStateDrop
+          ? ` and the devices' on-state drops (${onStateDrop.transistor} V transistor, ${onStateDrop.diode} V diode) in the leg voltages. Idealised otherwise`
+          : '. Idealised switches'}
+        : check the real gate drive and protection before applying the DC bus.
       </p>
       <form className="grid grid-cols-2 gap-3 sm:grid-cols-4" onSubmit={(e) => e.preventDefault()}>
         {FIELDS.map(({ key, field, label, unit }) => (
