@@ -74,6 +74,8 @@ const PUBLIC_NAMES = [
   'OVERMODULATION_METHODS',
   'OVERMODULATION_METHOD_LABELS',
   'PATTERN_METHODS',
+  'PHASE_COUNTS',
+  'PHASE_COUNT_LABELS',
   'ParameterRangeError',
   'ParameterTypeError',
   'SHE_KINDS',

@@ -82,3 +82,12 @@ export const DAMPING_PLACEMENT_LABELS: Readonly<Record<DampingPlacement, string>
   'parallel-rc': 'R-C branch across C',
   'parallel-with-inductor': 'R across L',
 };
+
+/** The bridges a multilevel carrier modulation's `phaseCount` chooses, in the order forms list them. */
+export const PHASE_COUNTS: readonly (1 | 3)[] = [3, 1];
+
+/** Labels of {@link PHASE_COUNTS}. */
+export const PHASE_COUNT_LABELS: Readonly<Record<1 | 3, string>> = {
+  3: 'Three-phase (legs in star)',
+  1: 'Single-phase (full bridge of two legs, or one cascaded string)',
+};
