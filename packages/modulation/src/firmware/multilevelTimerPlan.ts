@@ -40,10 +40,9 @@ export interface PlannedLeg {
  *   −r).
  *
  * Complementary pairs (Holmes and Lipo, 2003, ch. 11; common practice): NPC S1/S3 (upper band)
- * and S2/S4 (lower band); T-type the same S1/S3 and S2/S4 (the usual gating of a T-type leg: each
- * middle switch stays on while the outer switch of its own side is on, which blocks nothing, so
- * one compare value drives each pair; `multilevelCarrier` gates the middle pair S2 = S3 only at
- * the middle level, so there S2 and S3 differ while the outer switches and the output agree);
+ * and S2/S4 (lower band); T-type the same S1/S3 and S2/S4 (the usual gating of a T-type leg, as
+ * `multilevelCarrier` gates it: each middle switch stays on while the outer switch of its own
+ * side is on, which blocks nothing, so one compare value drives each pair);
  * flying capacitor each cell's upper and lower switch; cascaded each half-bridge's upper and lower
  * switch (a level-shifted cell's right leg: main switch the lower one, on while the reference is
  * above the k-th band below zero, as `multilevelCarrier` assigns the bands, cell 1 innermost).

@@ -38,8 +38,8 @@ export { MAX_MULTILEVEL_TIMER_VALUES } from './multilevelTimerTableInputs.js';
  *   instant its first update begins (Bowes, 1975: regular sampling), so with the default table
  *   length the switches equal `multilevelCarrier`'s regular-sampled ones, edges to the tick.
  * - Pairs (Holmes and Lipo, 2003, ch. 11; common practice): NPC and T-type S1/S3 (upper band)
- *   and S2/S4 (lower band; in a T-type leg S2 then stays on with S1 and S3 with S4, where
- *   `multilevelCarrier` gates its middle pair at the middle level only); flying capacitor each
+ *   and S2/S4 (lower band; in a T-type leg S2 then stays on with S1 and S3 with S4, as in
+ *   `multilevelCarrier`); flying capacitor each
  *   cell's upper/lower; cascaded each half-bridge's upper/lower. Dead time `D = ceil(deadTime·timerClock)` ticks, by the timer's dead-time
  *   generator (every turn-on delayed by D) or by compare offsets (main `compare − floor(D/2)`,
  *   complement `compare + D − floor(D/2)`, the complement on while the counter is at or above it).

@@ -100,9 +100,11 @@ function impliedLevel(o: MultilevelCarrierOptions, leg: MultilevelLeg, angle: nu
     return NaN;
   }
   if (o.topology === 't-type') {
-    // T-type leg: exactly one path conducts: S1 to +, the S2/S3 pair to the midpoint, S4 to −.
+    // T-type leg: S1 to +, S4 to −, the anti-series pair S2/S3 to the midpoint only with both
+    // on; gated as NPC's pairs S1/S3 and S2/S4 (Schweizer and Kolar, IEEE Trans. Power
+    // Electron., 2013, from memory), so S2 stays on at + and S3 at −, blocking nothing.
     const [s1, s2, s3, s4] = [on('S1'), on('S2'), on('S3'), on('S4')];
-    if (s2 !== s3 || s1 + s2 + s4 !== 1) return NaN;
+    if (s1 + s3 !== 1 || s2 + s4 !== 1) return NaN;
     return s1 === 1 ? vdc / 2 : s4 === 1 ? -vdc / 2 : 0;
   }
   if (o.topology === 'flying-capacitor') {

@@ -81,7 +81,7 @@ export function multilevelCarrier(options: MultilevelCarrierOptions): Multilevel
     }
     // The validator allows only level-shifted carriers for the three-level legs.
     if (carriers === 'phase-shifted') throw new Error('unreachable: checked by the validator');
-    return threeLevelLeg(`leg ${name}`, topology, reference, carriers, vdc, compare);
+    return threeLevelLeg(`leg ${name}`, reference, carriers, vdc, compare);
   };
   let legs: MultilevelLeg[];
   if (phaseCount === 3) {

@@ -48,8 +48,9 @@ const LEG_NAMES = ['leg a', 'leg b', 'leg c'] as const;
  *
  * Switches, top to bottom, as {@link multilevelCarrier} names them: `npc` S1 on at +vdc/2, S2 at
  * +vdc/2 and 0, S3 at 0 and −vdc/2, S4 at −vdc/2 (A. Nabae, I. Takahashi, H. Akagi, 1981);
- * `t-type` S1 on at +vdc/2, S2 and S3 (the bidirectional pair to the midpoint) at 0, S4 at
- * −vdc/2. No dead time.
+ * `t-type` the same gates (S2/S3 the bidirectional pair to the midpoint, both on at 0; S2 stays on
+ * at +vdc/2 and S3 at −vdc/2, blocking nothing, so S1/S3 and S2/S4 commutate as pairs: M.
+ * Schweizer and J. W. Kolar, IEEE Trans. Power Electron., 2013, from memory). No dead time.
  *
  * @returns three legs (`leg a`, `leg b`, `leg c`), `phaseCount` 3, `levels` 3
  * @throws ParameterRangeError naming `m`, `ma`, `vdc`, `frequencyRatio`, `sampling`,
@@ -88,7 +89,7 @@ export function threeLevelSpaceVectorWaveforms(
     return {
       name: LEG_NAMES[leg] as string,
       output,
-      switches: legSwitches(output, topology),
+      switches: legSwitches(output),
       cells: [],
     };
   });
@@ -96,27 +97,13 @@ export function threeLevelSpaceVectorWaveforms(
 }
 
 /** Gate signals (1 on, 0 off) of a three-level leg's four switches from its output voltage. */
-function legSwitches(
-  output: Waveform,
-  topology: ThreeLevelSpaceVectorTopology,
-): MultilevelSwitch[] {
+function legSwitches(output: Waveform): MultilevelSwitch[] {
   const gate = (on: (level: number) => boolean): Waveform =>
     combineWaveforms([output], ([level = 0]) => (on(level) ? 1 : 0));
-  const top = gate((level) => level > 0);
-  const bottom = gate((level) => level < 0);
-  if (topology === 'npc') {
-    return [
-      { name: 'S1', on: top },
-      { name: 'S2', on: gate((level) => level >= 0) },
-      { name: 'S3', on: gate((level) => level <= 0) },
-      { name: 'S4', on: bottom },
-    ];
-  }
-  const middle = gate((level) => level === 0);
   return [
-    { name: 'S1', on: top },
-    { name: 'S2', on: middle },
-    { name: 'S3', on: middle },
-    { name: 'S4', on: bottom },
+    { name: 'S1', on: gate((level) => level > 0) },
+    { name: 'S2', on: gate((level) => level >= 0) },
+    { name: 'S3', on: gate((level) => level <= 0) },
+    { name: 'S4', on: gate((level) => level < 0) },
   ];
 }

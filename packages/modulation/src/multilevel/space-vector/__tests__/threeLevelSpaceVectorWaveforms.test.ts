@@ -190,12 +190,11 @@ describe('threeLevelSpaceVectorWaveforms: legs and switches', () => {
 
   it('gates the four switches of each leg as NPC and T-type legs need', () => {
     // NPC (Nabae, Takahashi, Akagi, IEEE Trans. Ind. Appl., 1981): S1 on at +vdc/2, S2 at +vdc/2
-    // and 0, S3 at 0 and −vdc/2, S4 at −vdc/2 (S1/S3 and S2/S4 complementary). T-type: S1 at
-    // +vdc/2, the midpoint pair S2 and S3 at 0, S4 at −vdc/2 (common practice, no dead time).
-    const expected = {
-      npc: (v: number) => [v > 0, v >= 0, v <= 0, v < 0],
-      't-type': (v: number) => [v > 0, v === 0, v === 0, v < 0],
-    };
+    // and 0, S3 at 0 and −vdc/2, S4 at −vdc/2 (S1/S3 and S2/S4 complementary). T-type: the same
+    // gates, the midpoint pair S2 and S3 both on at 0 (M. Schweizer and J. W. Kolar, IEEE Trans.
+    // Power Electron., 2013, from memory).
+    const gatesAt = (v: number) => [v > 0, v >= 0, v <= 0, v < 0];
+    const expected = { npc: gatesAt, 't-type': gatesAt };
     for (const topology of ['npc', 't-type'] as const) {
       const { legs } = threeLevelSpaceVectorWaveforms({ m: 0.6, vdc, frequencyRatio: 9, topology });
       for (const { output, switches } of legs) {
