@@ -323,10 +323,10 @@ export interface DesignReport {
   currents: PhaseCurrents[];
   /**
    * The current drawn from the DC bus; null with neither load nor filter, for a staircase (one
-   * source a cell), and for a multilevel bridge, whose DC side carries more than one current (the
-   * rails and the midpoint of an NPC or T-type link, a source per cascaded cell, flying
-   * capacitors in series with the rails), so no one i_dc describes it: `multilevel.balance` holds
-   * the figures of the inner capacitors and sources.
+   * source a cell), and for an NPC, T-type or cascaded bridge, whose DC side carries more than one
+   * current (the rails and the midpoint of a three-level link, a source per cascaded cell), so no
+   * one i_dc describes it: `multilevel.balance` holds their figures. A flying-capacitor bridge
+   * has one DC link, and i_dc = Σ s₁·i of its outermost cells (`multilevelDcLinkSwitching`).
    */
   dcLink: DcLinkFigures | null;
   /** The common-mode voltage (three-phase only). */

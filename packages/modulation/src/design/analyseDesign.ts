@@ -54,6 +54,7 @@ import { modulationVoltages, type NamedVoltage } from './modulationVoltages.js';
 import { spectrumLabelRatio } from './spectrumLabelRatio.js';
 import { voltageFigures } from './voltageFigures.js';
 import { modulatorSignals } from './modulatorSignals.js';
+import { multilevelDcLinkSwitching } from './multilevelDcLinkSwitching.js';
 import { multilevelFigures } from './multilevelFigures.js';
 import { switchingLegs } from './switchingLegs.js';
 import { assertSemiconductorDevice } from '../losses/assertSemiconductorDevice.js';
@@ -242,10 +243,16 @@ export function analyseDesign(
     voltages.phaseCount === 3
       ? voltages.legs.map((v) => v.waveform)
       : voltages.phases.map((v) => v.waveform);
+  // A multilevel bridge has one DC current only with flying-capacitor legs (see
+  // multilevelDcLinkSwitching); the others' DC sides are in the multilevel balance figures.
+  const dcSwitching =
+    voltages.multilevel === undefined
+      ? switching
+      : multilevelDcLinkSwitching(voltages.multilevel, design.vdc);
   const dcLink =
-    inverterSamples.length === 0 || staircase || voltages.multilevel !== undefined
+    inverterSamples.length === 0 || staircase || dcSwitching === null
       ? null
-      : dcLinkFigures(switching, inverterSamples, {
+      : dcLinkFigures(dcSwitching, inverterSamples, {
           vdc: design.vdc,
           phaseCount: voltages.phaseCount,
           maxOrder,

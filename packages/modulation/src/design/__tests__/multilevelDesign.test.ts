@@ -237,6 +237,28 @@ describe('analyseDesign: multilevel carrier designs', () => {
         expect(Math.abs(capacitor.netCharge)).toBeLessThan(
           0.01 * capacitor.maxChargePerCarrierPeriod,
         );
+    // A flying-capacitor bridge has one DC current, Σ s₁·i (cell 1's state): its mean times vdc
+    // is the power the load takes (conservation of energy; no losses in the model), within the
+    // DC current's sampling on the currents' grid (0.5 %: the cells step (levels − 1) times a
+    // carrier period). An NPC link has a midpoint as well, so no one DC current: null.
+    const fcThree = analyseDesign(
+      design(
+        {
+          topology: 'flying-capacitor',
+          levels: 5,
+          carriers: 'phase-shifted',
+          phaseCount: 3,
+          ma: 0.9,
+        },
+        24,
+        { load },
+      ),
+    );
+    for (const report of [fc, fcThree]) {
+      const drawn = report.dcLink!.mean * 800;
+      expect(Math.abs(drawn - report.loadPower!) / report.loadPower!).toBeLessThan(5e-3);
+    }
+    expect(npcReport.dcLink).toBeNull();
     // Without a load there is no current, so no balance figure.
     expect(analyseDesign(design(npc, 45)).multilevel!.balance).toBeNull();
   });
