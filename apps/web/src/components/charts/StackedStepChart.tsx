@@ -2,9 +2,9 @@ import { curveStepAfter, line, scaleLinear } from 'd3';
 import { useId, useState } from 'react';
 import { formatNumber } from '../../lib/format';
 import { toCsv } from '../../lib/download';
-import { Button } from '../ui/Button';
 import { angleAxis, AxisBottom, formatRadians } from './axes';
 import { ChartFrame } from './ChartFrame';
+import { ZoomButtons } from './ZoomButtons';
 import { stepPoints, type StepWaveform } from './WaveformChart';
 
 /** One row of a {@link StackedStepChart}: a piecewise-constant period and the levels it takes. */
@@ -93,25 +93,7 @@ export function StackedStepChart({
       title={title}
       fileName={fileName}
       csv={() => stepRowsCsv(rows)}
-      controls={
-        <>
-          <Button variant="ghost" onClick={() => zoomBy(2)} aria-label="Zoom in">
-            +
-          </Button>
-          <Button variant="ghost" onClick={() => zoomBy(0.5)} aria-label="Zoom out">
-            −
-          </Button>
-          <Button variant="ghost" onClick={() => panBy(-0.25)} aria-label="Pan left">
-            ←
-          </Button>
-          <Button variant="ghost" onClick={() => panBy(0.25)} aria-label="Pan right">
-            →
-          </Button>
-          <Button variant="ghost" onClick={() => setWindow([0, TAU])}>
-            Reset
-          </Button>
-        </>
-      }
+      controls={<ZoomButtons onZoom={zoomBy} onPan={panBy} onReset={() => setWindow([0, TAU])} />}
       footer={
         <p className="no-print mt-1 text-xs text-ink-soft">
           Window {formatRadians(lo)} to {formatRadians(hi)} of the fundamental period.

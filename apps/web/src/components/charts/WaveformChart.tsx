@@ -10,9 +10,9 @@ import {
 } from 'd3';
 import { useEffect, useId, useMemo, useRef, useState, type ReactNode } from 'react';
 import { waveformChartCsv } from '../../lib/chartCsv';
-import { Button } from '../ui/Button';
 import { angleAxis, AxisBottom, AxisLeft, formatRadians } from './axes';
 import { ChartFrame } from './ChartFrame';
+import { ZoomButtons } from './ZoomButtons';
 
 export interface StepWaveform {
   edges: readonly number[];
@@ -155,27 +155,14 @@ export function WaveformChart({
       controls={
         <>
           {controls}
-          <Button variant="ghost" onClick={() => stepBy(2)} aria-label="Zoom in">
-            +
-          </Button>
-          <Button variant="ghost" onClick={() => stepBy(0.5)} aria-label="Zoom out">
-            −
-          </Button>
-          <Button variant="ghost" onClick={() => panBy(-0.25)} aria-label="Pan left">
-            ←
-          </Button>
-          <Button variant="ghost" onClick={() => panBy(0.25)} aria-label="Pan right">
-            →
-          </Button>
-          <Button
-            variant="ghost"
-            onClick={() => {
+          <ZoomButtons
+            onZoom={stepBy}
+            onPan={panBy}
+            onReset={() => {
               const svg = svgRef.current;
               if (svg && zoomRef.current) select(svg).call(zoomRef.current.transform, zoomIdentity);
             }}
-          >
-            Reset
-          </Button>
+          />
         </>
       }
       footer={

@@ -23,6 +23,13 @@ import {
 import type { StudyDraft } from '../../model/studyDraft';
 import type { StudyFieldErrors } from '../studyFieldErrors';
 
+/** What each multilevel part of the fieldset is given: the draft, its change and the messages. */
+interface MultilevelSection {
+  draft: StudyDraft;
+  onChange: (patch: Partial<StudyDraft>) => void;
+  fields: StudyFieldErrors;
+}
+
 const PHASE_COUNT_OPTIONS = [
   { value: '3', label: 'Three-phase (legs in star)' },
   { value: '1', label: 'Single-phase (full bridge of two legs, or one cascaded string)' },
@@ -47,15 +54,7 @@ function levelsHint(multilevel: MultilevelDraft): string {
  * fieldset's other parts, so the messages it asks for are claimed before the unclaimed ones are
  * listed.
  */
-export function multilevelFields({
-  draft,
-  onChange,
-  fields,
-}: {
-  draft: StudyDraft;
-  onChange: (patch: Partial<StudyDraft>) => void;
-  fields: StudyFieldErrors;
-}) {
+export function multilevelFields({ draft, onChange, fields }: MultilevelSection) {
   const { error, limits } = fields;
   const { multilevel } = draft;
   const set = (next: MultilevelDraft) => onChange({ multilevel: next });
@@ -138,15 +137,7 @@ const SPACE_VECTOR_TOPOLOGY_OPTIONS = THREE_LEVEL_SPACE_VECTOR_TOPOLOGIES.map((v
  * vector's split (the lever on the neutral-point current, Celanovic and Boroyevich 2000) and the
  * space-vector sampling. A render function, as {@link multilevelFields}.
  */
-export function multilevelSpaceVectorFields({
-  draft,
-  onChange,
-  fields,
-}: {
-  draft: StudyDraft;
-  onChange: (patch: Partial<StudyDraft>) => void;
-  fields: StudyFieldErrors;
-}) {
+export function multilevelSpaceVectorFields({ draft, onChange, fields }: MultilevelSection) {
   const { error, limits } = fields;
   const { multilevel } = draft;
   const split = limits(
