@@ -15,6 +15,8 @@ import {
   MULTILEVEL_ZERO_SEQUENCES,
   OVERMODULATION_METHOD_LABELS,
   OVERMODULATION_METHODS,
+  PHASE_COUNT_LABELS,
+  PHASE_COUNTS,
   SHE_KIND_LABELS,
   SHE_KINDS,
   SPACE_VECTOR_SAMPLING_LABELS,
@@ -64,6 +66,11 @@ export const MULTILEVEL_CARRIER_OPTIONS = options(
   MULTILEVEL_CARRIER_ARRANGEMENTS,
   MULTILEVEL_CARRIER_ARRANGEMENT_LABELS,
 );
+/** A multilevel bridge's phase counts as a select's text values ('3', '1'), with the library's labels. */
+export const PHASE_COUNT_OPTIONS = PHASE_COUNTS.map((count) => ({
+  value: String(count) as `${typeof count}`,
+  label: PHASE_COUNT_LABELS[count],
+}));
 /** The zero sequences of a three-phase multilevel bridge, with the two-level labels. */
 export const MULTILEVEL_ZERO_SEQUENCE_OPTIONS = options(
   MULTILEVEL_ZERO_SEQUENCES,

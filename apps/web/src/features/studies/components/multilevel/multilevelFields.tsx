@@ -9,6 +9,7 @@ import {
   MULTILEVEL_CARRIER_OPTIONS,
   MULTILEVEL_TOPOLOGY_OPTIONS,
   MULTILEVEL_ZERO_SEQUENCE_OPTIONS,
+  PHASE_COUNT_OPTIONS,
   SAMPLING_OPTIONS,
   SPACE_VECTOR_SAMPLING_OPTIONS,
 } from '../../../../lib/modulationOptions';
@@ -29,11 +30,6 @@ interface MultilevelSection {
   onChange: (patch: Partial<StudyDraft>) => void;
   fields: StudyFieldErrors;
 }
-
-const PHASE_COUNT_OPTIONS = [
-  { value: '3', label: 'Three-phase (legs in star)' },
-  { value: '1', label: 'Single-phase (full bridge of two legs, or one cascaded string)' },
-] as const;
 
 /** The hint under the levels: the topology's range and the cells it makes. */
 function levelsHint(multilevel: MultilevelDraft): string {
