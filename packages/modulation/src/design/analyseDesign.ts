@@ -116,7 +116,10 @@ const phaseSuffix = (phaseCount: number, phase: PhaseCurrents['phase']): string 
  *   remaining mean square (exact) times the largest filter gain found above the order (|H| is
  *   sampled at (N+1)·2^k, k = 0..10, and assumed not to rise between: true past the resonance).
  * - Currents per phase: without a filter the exact piecewise-exponential steady state
- *   (`rlSteadyState`); with one the harmonic sum, its time series by FFT. Ripple is i − i₁.
+ *   (`rlSteadyState`); with one the harmonic sum to the current order
+ *   min(20000, max(defaultSpectrumOrder(design), 10·mf + 10)), which depends on the design only
+ *   (so every figure is the same at any `maxOrder`), plus the switching tail above it where the
+ *   filter's inductor alone sets the current; its time series by FFT. Ripple is i − i₁.
  * - Three-phase: the load and filter are star-connected and balanced; each phase sees its
  *   phase-to-star-point voltage (2·v_a − v_b − v_c)/3; line-to-line figures are reported beside.
  * - Limit check (IEEE Std 519-2022 Table 1, recalled from memory) on the voltage at the point
@@ -161,6 +164,12 @@ export function analyseDesign(
     filter === null
       ? maxOrder
       : Math.min(MAX_ANALYSIS_ORDER, Math.max(maxOrder, 10 * (frequencyRatio ?? 200) + 10));
+  // The filtered currents are summed to an order set by the design alone, not by the spectrum
+  // asked for, so their figures are the same at any maxOrder (the switching tail covers the rest).
+  const currentOrder = Math.min(
+    MAX_ANALYSIS_ORDER,
+    Math.max(defaultSpectrumOrder(given), 10 * (frequencyRatio ?? 200) + 10),
+  );
   const label = (spectrum: readonly Harmonic[]) =>
     labelHarmonics(spectrum.slice(0, maxOrder + 1), labelRatio);
 
@@ -183,7 +192,7 @@ export function analyseDesign(
     filter === null
       ? null
       : periodSynthesiser(
-          synthesisSize(analysisOrder, Math.max(MIN_GRID_SAMPLES, 16 * analysisOrder)),
+          synthesisSize(currentOrder, Math.max(MIN_GRID_SAMPLES, 16 * currentOrder)),
         );
   if (synthesiser === null) {
     if (load !== null) {
@@ -206,7 +215,9 @@ export function analyseDesign(
         design,
         phaseIndex: k,
         phaseCount: voltages.phaseCount,
-        analysisOrder,
+        // Phase a's output spectrum is reported to the analysis order; b and c give currents only.
+        spectrumOrder: k === 0 ? analysisOrder : currentOrder,
+        currentOrder,
         points,
         synthesiser,
       }),
@@ -518,15 +529,19 @@ function filteredPhase(
     design: InverterDesign;
     phaseIndex: number;
     phaseCount: number;
-    analysisOrder: number;
+    /** Order the output spectrum and its THD bound are solved to. */
+    spectrumOrder: number;
+    /** Order the current and output series are summed to (≤ spectrumOrder), before the tail. */
+    currentOrder: number;
     points: number;
     synthesiser: PeriodSynthesiser;
   },
 ): FilteredPhase {
-  const { network, design, phaseIndex, phaseCount, analysisOrder, points, synthesiser } = context;
+  const { network, design, phaseIndex, phaseCount, spectrumOrder, currentOrder, points } = context;
+  const { synthesiser } = context;
   const phase = PHASES[phaseIndex] ?? 'a';
   const omega = TAU * design.fundamentalFrequency;
-  const bridge = harmonics(waveform, analysisOrder);
+  const bridge = harmonics(waveform, spectrumOrder);
   const load = design.load ?? null;
   const emf = load?.emf
     ? phasorOf(load.emf.amplitude, load.emf.phase - (phaseIndex * TAU) / 3)
@@ -548,7 +563,7 @@ function filteredPhase(
     bridgeSum += h.order === 0 ? h.amplitude * h.amplitude : (h.amplitude * h.amplitude) / 2;
   const bridgeTail = Math.max(0, waveformMeanSquare(waveform) - bridgeSum);
   let tailGain = 0;
-  for (let k = 0, order = analysisOrder + 1; k <= 10; k++, order *= 2) {
+  for (let k = 0, order = spectrumOrder + 1; k <= 10; k++, order *= 2) {
     const response = outputNetworkResponse(network, omega * order, { re: 1, im: 0 });
     tailGain = Math.max(tailGain, complexAbs(response.output));
   }
@@ -608,10 +623,17 @@ function filteredPhase(
 
   // The switch current above N (the tail) is linear in the bridge's running integral: its
   // harmonic part joins the inverter phasors, its exact part is added to the samples.
-  const tail = switchingTail(waveform, bridge, network.filter, omega, size);
-  const loadPhasors = solved.map((s) => s.loadCurrent);
-  const capacitorPhasors = solved.map((s) => s.capacitorCurrent);
-  const inverterPhasors = solved.map((s) => s.inverterCurrent);
+  const held = solved.slice(0, currentOrder + 1);
+  const tail = switchingTail(
+    waveform,
+    bridge.slice(0, currentOrder + 1),
+    network.filter,
+    omega,
+    size,
+  );
+  const loadPhasors = held.map((s) => s.loadCurrent);
+  const capacitorPhasors = held.map((s) => s.capacitorCurrent);
+  const inverterPhasors = held.map((s) => s.inverterCurrent);
   const inverterSynthesised =
     tail === null
       ? inverterPhasors
@@ -642,7 +664,7 @@ function filteredPhase(
       phaseIndex === 0
         ? series(
             synthesiser.pair(
-              solved.map((s) => s.output),
+              held.map((s) => s.output),
               null,
             )[0],
           )
