@@ -14,6 +14,7 @@ import { MotorLoadPanel } from './MotorLoadPanel';
 import { MultilevelBalancePanel } from './multilevel/MultilevelBalancePanel';
 import { MultilevelFiguresPanel } from './multilevel/MultilevelFiguresPanel';
 import { MultilevelLevelChart } from './multilevel/MultilevelLevelChart';
+import { MultilevelLossPanel } from './multilevel/MultilevelLossPanel';
 
 const CURRENT_COLOURS = {
   inverter: 'var(--color-trace-current)',
@@ -35,6 +36,9 @@ export function StudyCharts({ report, fileStem }: { report: StudyReport; fileSte
           <MultilevelFiguresPanel multilevel={report.multilevel} />
           {report.multilevel.balance ? (
             <MultilevelBalancePanel balance={report.multilevel.balance} fileStem={fileStem} />
+          ) : null}
+          {report.multilevel.losses ? (
+            <MultilevelLossPanel losses={report.multilevel.losses} fileStem={fileStem} />
           ) : null}
         </>
       ) : null}
