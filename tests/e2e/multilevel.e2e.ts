@@ -4,7 +4,8 @@
  * (three legs on their three levels), the bridge's device switching frequencies and the
  * neutral-point current panel, offers only the arrangements each topology accepts, saves the study
  * and reads the server's report. Screenshots in tests/e2e/screenshots/: multilevel-npc.png (the
- * page), multilevel-levels.png (the level chart) and multilevel-figures.png (the bridge's figures).
+ * page), multilevel-levels.png (the level chart), multilevel-figures.png (the bridge's figures) and
+ * multilevel-losses.png (with an IGBT, the losses by device position and class).
  */
 import path from 'node:path';
 import type { Page } from 'playwright-core';
@@ -61,6 +62,24 @@ export const scenarios: Scenario[] = [
         .getByRole('table', { name: 'Neutral-point figures' })
         .getByText('Low-frequency ripple', { exact: false })
         .waitFor();
+
+      // With an IGBT the bridge's losses by position: S1…S4, D5, D6 of each of the three legs.
+      await page.getByLabel('Device for the losses').selectOption('igbt');
+      const losses = page.getByRole('figure', { name: 'Losses by device position (NPC)' });
+      await losses.waitFor();
+      const positions = await losses.locator('g[data-bar]').count();
+      assert(positions === 18, `a bar for each of the 18 positions (got ${positions})`);
+      const classes = await page
+        .getByRole('table', { name: 'Losses by device class' })
+        .locator('tr[data-class]')
+        .evaluateAll((rows) => rows.map((r) => r.getAttribute('data-class')));
+      assert(
+        classes.join() === 'outer switch,inner switch,clamp diode',
+        `the NPC device classes (got ${classes.join()})`,
+      );
+      await page
+        .getByRole('region', { name: 'Multilevel losses' })
+        .screenshot({ path: path.join(screenshotDir, 'multilevel-losses.png') });
 
       await page.getByRole('button', { name: 'Create study' }).click();
       await page.waitForURL(/\/studies\/[0-9a-f-]{36}$/);
