@@ -291,6 +291,11 @@ export function reportCost(
       (modulation.levels - 1) * Math.min(20_000, Math.max(points, 8 * ratio)) +
       2 * ratio * (modulation.levels - 1) * legCount;
   }
+  // A three-level space-vector report holds its vector diagram: the 19 points (about 64 numbers'
+  // worth) and a trajectory sample a switching period, two with asymmetric sampling (about 150
+  // bytes each, 8 numbers' worth, measured).
+  if (modulation.method === 'multilevel-space-vector')
+    voltageNumbers += 64 + 8 * ratio * (modulation.sampling === 'asymmetric' ? 2 : 1);
   // The fields to lower, the largest share of the work first (the carrier sets the edges of every
   // sum, but is named first only where it also sets the filter's analysis order); options the
   // route does not take are left out.

@@ -9,6 +9,8 @@ import type { DeviceSwitching } from '../multilevel/balance/deviceSwitchingFrequ
 import type { FlyingCapacitorCharge } from '../multilevel/balance/flyingCapacitorCharge.js';
 import type { NeutralPointCurrentFigures } from '../multilevel/balance/neutralPointCurrentFigures.js';
 import type { ThreeLevelLosses } from '../multilevel/losses/threeLevelLosses.js';
+import type { ThreeLevelTrajectorySample } from '../multilevel/space-vector/threeLevelSpaceVectorTrajectory.js';
+import type { ThreeLevelVectorDiagram } from '../multilevel/space-vector/threeLevelVectorDiagram.js';
 import type {
   MultilevelCarrierArrangement,
   MultilevelTopology,
@@ -222,6 +224,22 @@ export interface MultilevelFigures {
    * bridges.
    */
   losses: ThreeLevelLosses | null;
+  /**
+   * A three-level space-vector design's vector diagram; null for every other method.
+   */
+  vectorDiagram: ThreeLevelVectorDiagramFigures | null;
+}
+
+/**
+ * The three-level space-vector diagram of a 'multilevel-space-vector' design, for drawing: the
+ * 27 states on their 19 points (`threeLevelVectorDiagram`, per unit of vdc) and the sampled
+ * reference with the states applied in each switching period
+ * (`threeLevelSpaceVectorTrajectory` of the design's modulation: one sample a switching period,
+ * two with asymmetric sampling, so its length is bounded by the frequency ratio).
+ */
+export interface ThreeLevelVectorDiagramFigures {
+  diagram: ThreeLevelVectorDiagram;
+  trajectory: ThreeLevelTrajectorySample[];
 }
 
 /**

@@ -3,6 +3,8 @@ import { deviceSwitchingFrequencies } from '../multilevel/balance/deviceSwitchin
 import { flyingCapacitorCharge } from '../multilevel/balance/flyingCapacitorCharge.js';
 import { neutralPointCurrentFigures } from '../multilevel/balance/neutralPointCurrentFigures.js';
 import { threeLevelLosses } from '../multilevel/losses/threeLevelLosses.js';
+import { threeLevelSpaceVectorTrajectory } from '../multilevel/space-vector/threeLevelSpaceVectorTrajectory.js';
+import { threeLevelVectorDiagram } from '../multilevel/space-vector/threeLevelVectorDiagram.js';
 import type { SemiconductorDevice } from '../losses/lossTypes.js';
 import {
   MULTILEVEL_CARRIER_ARRANGEMENT_LABELS,
@@ -32,7 +34,8 @@ function distinctLevels(waveform: Waveform): number[] {
  * source (`cascadedCellPower`). Carrier-period windows follow the modulator: the carriers of a
  * carrier modulation, the switching periods [k, k + 1)·2π/N of space vector. With the design's
  * `device` at every position, an NPC or T-type bridge's losses per device class
- * (`threeLevelLosses`, from the same currents).
+ * (`threeLevelLosses`, from the same currents). A three-level space-vector design's vector
+ * diagram and reference trajectory (`threeLevelVectorDiagram`, `threeLevelSpaceVectorTrajectory`).
  * Internal: part of analyseDesign.
  */
 export function multilevelFigures(
@@ -78,6 +81,13 @@ export function multilevelFigures(
       device === null || currents.length === 0 || (topology !== 'npc' && topology !== 't-type')
         ? null
         : threeLevelLosses(waveforms, currents, { topology, vdc, fundamentalFrequency, device }),
+    vectorDiagram:
+      modulation.method === 'multilevel-space-vector'
+        ? {
+            diagram: threeLevelVectorDiagram(),
+            trajectory: threeLevelSpaceVectorTrajectory(modulation),
+          }
+        : null,
   };
 }
 
