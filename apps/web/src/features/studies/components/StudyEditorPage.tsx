@@ -247,7 +247,12 @@ function StudyEditor({ study }: { study: Study | undefined }) {
             <>
               <ReportCautions cautions={report.cautions} except={[report.limitCheck.caution]} />
               <StudyCharts report={report} fileStem={fileStem} />
-              <ThreeLevelVectorDiagram design={design} fileStem={fileStem} />
+              {report.multilevel?.vectorDiagram ? (
+                <ThreeLevelVectorDiagram
+                  data={report.multilevel.vectorDiagram}
+                  fileStem={fileStem}
+                />
+              ) : null}
             </>
           ) : preview ? (
             // Each refusal is on its field (or listed above the form) in the field's unit; the

@@ -1,48 +1,32 @@
-import {
-  designModulation,
-  threeLevelSpaceVectorTrajectory,
-  threeLevelVectorDiagram,
-  type InverterDesign,
-  type ThreeLevelTrajectorySample,
-  type ThreeLevelVectorDiagram,
-} from '@pulsewright/modulation';
+import type { StudyReport } from '../../../lib/api';
+
+/** The report's three-level vector diagram (`multilevel.vectorDiagram`). */
+export type ThreeLevelDiagramData = NonNullable<
+  NonNullable<StudyReport['multilevel']>['vectorDiagram']
+>;
+
+/** A point of the diagram, per unit of vdc. */
+interface DiagramPoint {
+  alpha: number;
+  beta: number;
+}
 
 /** A segment between two neighbouring points of the diagram (per unit of vdc). */
 export interface DiagramSegment {
-  from: { alpha: number; beta: number };
-  to: { alpha: number; beta: number };
-}
-
-/** What the three-level vector diagram draws, all from the library. */
-export interface ThreeLevelDiagramData {
-  /** The 19 points (27 states) by length class, per unit of vdc. */
-  diagram: ThreeLevelVectorDiagram;
-  /** The sides of the diagram's triangles: points one small-vector length (vdc/3) apart. */
-  segments: DiagramSegment[];
-  /** The sampled reference and the states selected in each switching period. */
-  trajectory: ThreeLevelTrajectorySample[];
+  from: DiagramPoint;
+  to: DiagramPoint;
 }
 
 /** The small vectors' length, per unit of vdc: the side of every triangle of the hexagon. */
 const SIDE = 1 / 3;
 
 /**
- * The vector diagram of a design under three-level space vector (the library's
- * `threeLevelVectorDiagram` and `threeLevelSpaceVectorTrajectory` of the design's modulation, as
- * `designModulation` completes it); null for any other method and for a design the library
- * refuses (the preview names the field).
+ * The sides of the three-level hexagon's triangles, for drawing the report's diagram: every pair
+ * of its points one small-vector length (vdc/3) apart.
  */
-export function threeLevelDiagramOf(design: InverterDesign): ThreeLevelDiagramData | null {
-  if (design.modulation.method !== 'multilevel-space-vector') return null;
-  let trajectory: ThreeLevelTrajectorySample[];
-  try {
-    const modulation = designModulation(design);
-    if (modulation.method !== 'multilevel-space-vector') return null;
-    trajectory = threeLevelSpaceVectorTrajectory(modulation);
-  } catch {
-    return null;
-  }
-  const diagram = threeLevelVectorDiagram();
+export function threeLevelDiagramSegments(
+  diagram: ThreeLevelDiagramData['diagram'],
+): DiagramSegment[] {
   const points = Object.values(diagram).flat();
   const segments: DiagramSegment[] = [];
   points.forEach((from, i) =>
@@ -51,5 +35,5 @@ export function threeLevelDiagramOf(design: InverterDesign): ThreeLevelDiagramDa
         segments.push({ from, to });
     }),
   );
-  return { diagram, segments, trajectory };
+  return segments;
 }

@@ -1,9 +1,12 @@
-import type { InverterDesign, ThreeLevelVectorKind } from '@pulsewright/modulation';
+import type { ThreeLevelVectorKind } from '@pulsewright/modulation';
 import { line, scaleLinear } from 'd3';
 import { useMemo, useState } from 'react';
 import { ChartFrame } from '../../../../components/charts/ChartFrame';
 import { toCsv } from '../../../../lib/download';
-import { threeLevelDiagramOf } from '../../model/threeLevelDiagram';
+import {
+  threeLevelDiagramSegments,
+  type ThreeLevelDiagramData,
+} from '../../model/threeLevelDiagram';
 
 const KIND_COLOURS: Record<ThreeLevelVectorKind, string> = {
   zero: 'var(--color-ink)',
@@ -17,19 +20,19 @@ const KINDS: ThreeLevelVectorKind[] = ['zero', 'small', 'medium', 'large'];
  * The three-level space-vector diagram of a design: the 27 switching states on their 19 points
  * (by group), the triangles of the hexagon, the sampled reference's trajectory and, for the
  * switching period chosen, its sample(s) and the states the modulator applies. Data from the
- * library (model/threeLevelDiagram.ts); nothing computed here. Null for any other method.
+ * report's `multilevel.vectorDiagram`; only the triangles' sides are found here, between its
+ * points (model/threeLevelDiagram.ts).
  */
 export function ThreeLevelVectorDiagram({
-  design,
+  data,
   fileStem,
 }: {
-  design: InverterDesign;
+  data: ThreeLevelDiagramData;
   fileStem: string;
 }) {
-  const data = useMemo(() => threeLevelDiagramOf(design), [design]);
+  const { diagram, trajectory } = data;
+  const segments = useMemo(() => threeLevelDiagramSegments(diagram), [diagram]);
   const [period, setPeriod] = useState(0);
-  if (!data) return null;
-  const { diagram, segments, trajectory } = data;
   const periods = (trajectory[trajectory.length - 1]?.period ?? 0) + 1;
   const shown = Math.min(period, periods - 1);
   const chosen = trajectory.filter((s) => s.period === shown);
