@@ -132,8 +132,19 @@ const PATTERN_METHODS = ['selective-harmonic-elimination', 'optimal-pattern'];
  */
 function coherentDesign(design: Record<string, unknown>, pick: number): Record<string, unknown> {
   const copy = { ...design };
-  const modulation = copy.modulation as Record<string, unknown> | undefined;
+  // A grid is the load of a grid-connected bridge: the two exclude each other.
+  if (copy.grid && copy.load) delete copy[pick % 2 === 0 ? 'grid' : 'load'];
+  // Sizes the generator favours at the ends of their ranges (a DC bus or modulation index of
+  // 1e−300 gives a zero fundamental, which the library refuses): half get ordinary ones.
+  if (pick % 2 === 0 && typeof copy.vdc === 'number' && copy.vdc < 1) copy.vdc = 1 + (pick % 997);
+  let modulation = copy.modulation as Record<string, unknown> | undefined;
   if (!modulation || typeof modulation !== 'object') return copy;
+  if (pick % 2 === 0) {
+    for (const index of ['ma', 'm'])
+      if (typeof modulation[index] === 'number' && modulation[index] < 1e-3)
+        modulation = { ...modulation, [index]: 0.1 + (pick % 9) / 10 };
+    copy.modulation = modulation;
+  }
   const method = String(modulation.method);
   if (PATTERN_METHODS.includes(method)) {
     delete copy.carrierFrequency;

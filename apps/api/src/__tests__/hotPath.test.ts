@@ -117,6 +117,34 @@ describe('the hot path of a compute answer, against the same service with respon
     expect((a.body as { harmonics: unknown[] }).harmonics).toHaveLength(1051);
   });
 
+  it('answers POST /designs/report serialised in the worker with the same bytes as the validated res.json', async () => {
+    // A report big enough to run in the worker pool (three-phase, mf 301, LC filter, 4000 points).
+    const body = {
+      design: {
+        vdc: 600,
+        fundamentalFrequency: 50,
+        carrierFrequency: 50 * 301,
+        modulation: { method: 'three-phase', ma: 0.9, zeroSequence: 'min-max' },
+        filter: { l: 1e-3, c: 10e-6 },
+        load: { r: 10, l: 1e-3 },
+      },
+      points: 4000,
+    };
+    const a = await request(plain.app)
+      .post('/api/v1/designs/report')
+      .set('authorization', `Bearer ${plainToken}`)
+      .send(body);
+    const b = await request(checked.app)
+      .post('/api/v1/designs/report')
+      .set('authorization', `Bearer ${checkedToken}`)
+      .send(body);
+    expect(a.status).toBe(200);
+    expect(b.status).toBe(200);
+    expect(a.text).toBe(b.text);
+    expect(a.headers['content-type']).toBe('application/json; charset=utf-8');
+    expect(Number(a.headers['content-length'])).toBe(Buffer.byteLength(a.text));
+  });
+
   it('answers the CSV form and a refused request as before', async () => {
     const csv = await request(plain.app)
       .post('/api/v1/spectra?format=csv')

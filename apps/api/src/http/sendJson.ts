@@ -24,3 +24,23 @@ export function sendJson(req: Pick<Request, 'method'>, res: Response, body: unkn
   res.setHeader('Content-Type', 'application/json; charset=utf-8');
   res.end(text);
 }
+
+/**
+ * Answers JSON text made elsewhere (a worker's serialised result) as {@link sendJson} would
+ * answer the value: when the response is validated (development, tests) or the request is a
+ * HEAD, `value()` gives the object to `res.json`; otherwise the text is written as it is.
+ */
+export async function sendJsonText(
+  req: Pick<Request, 'method'>,
+  res: Response,
+  text: () => Promise<string>,
+  value: () => Promise<unknown>,
+): Promise<void> {
+  if (res.json !== plainJson || req.method === 'HEAD') {
+    res.json(await value());
+    return;
+  }
+  const body = await text();
+  res.setHeader('Content-Type', 'application/json; charset=utf-8');
+  res.end(body);
+}

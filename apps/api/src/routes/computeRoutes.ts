@@ -4,6 +4,7 @@ import { sendFile } from '../http/sendFile.js';
 import { principalOf } from '../auth/authorize.js';
 import { intQuery } from '../http/query.js';
 import { sendData } from '../http/sendData.js';
+import { sendJsonText } from '../http/sendJson.js';
 import { spectrumCsv, waveformCsv } from '../services/csvExports.js';
 import type { TimerFormat } from '../services/cost.js';
 import type { Services } from '../services/index.js';
@@ -27,7 +28,13 @@ export function computeRoutes(services: Services): Router {
   });
   router.post('/api/v1/designs/report', async (req: ApiRequest<'analyseDesign'>, res) => {
     const { design, ...options } = req.body;
-    res.json(await compute.report(design, options));
+    // Megabytes of report: serialised in the worker, so the request thread only writes it.
+    await sendJsonText(
+      req,
+      res,
+      () => compute.reportJson(design, options),
+      () => compute.report(design, options),
+    );
   });
   router.post(
     '/api/v1/designs/asynchronous-spectra',

@@ -123,6 +123,19 @@ export class ComputeService {
     );
   }
 
+  /**
+   * The design report as JSON text (`designReport`'s answer serialised in the worker that made
+   * it), for routes that send it as it is; same cost check and budget as {@link report}.
+   */
+  reportJson(design: InverterDesign, options: AnalyseDesignOptions = {}) {
+    return this.run(
+      'designReportJson',
+      { design, options, field: 'design' },
+      this.reportCost(design, options, 'design'),
+      'This design report',
+    );
+  }
+
   loadCurrent(design: InverterDesign, points?: number) {
     const cost = this.reportCost(design, points === undefined ? {} : { points }, 'design', [
       'points',

@@ -59,6 +59,12 @@ export const COMPUTE_TASKS = {
     modulationOutput(a.modulation, a.output),
   designReport: (a: { design: InverterDesign; options: AnalyseDesignOptions; field: string }) =>
     designReport(a.design, a.options, a.field),
+  /**
+   * The design report as JSON text, serialised where it was computed: a report of megabytes
+   * costs the request thread a copy of a string instead of a structured clone and a stringify.
+   */
+  designReportJson: (a: { design: InverterDesign; options: AnalyseDesignOptions; field: string }) =>
+    JSON.stringify(designReport(a.design, a.options, a.field)),
   designSpectrum: (a: { design: InverterDesign; maxOrder: number; field: string }) =>
     designSpectrum(a.design, a.maxOrder, a.field),
   asynchronousSpectra: (a: { design: InverterDesign; maxOrder: number }) =>
