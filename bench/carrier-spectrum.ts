@@ -16,6 +16,7 @@ import {
   triangleCarrier,
   type Harmonic,
 } from '@pulsewright/modulation';
+import { edgeAmplitudes, maxError, type EdgeJump } from './edgeSpectrum.js';
 import { medianTime, printTable } from './measure.js';
 
 const mf = 21;
@@ -52,7 +53,7 @@ function sampledSpectrum(fft: FFT, input: Float64Array, output: Float64Array): H
 function independentReference(): number[] {
   const difference = (theta: number): number =>
     ma * Math.sin(theta) - triangleCarrier(theta, { mf });
-  const edges: { angle: number; jump: number }[] = [];
+  const edges: EdgeJump[] = [];
   // Carrier half periods start at π/2 + kπ/mf; each holds one crossing for ma < 1.
   for (let k = 0; k < 2 * mf; k++) {
     let low = Math.PI / 2 + (k * Math.PI) / mf;
@@ -65,32 +66,7 @@ function independentReference(): number[] {
     }
     edges.push({ angle: (low + high) / 2, jump: -2 * vdc * risingSign });
   }
-  const amplitudes = [0];
-  for (let n = 1; n <= maxOrder; n++) {
-    let s = 0;
-    let sc = 0;
-    let c = 0;
-    let cc = 0;
-    for (const { angle, jump } of edges) {
-      [s, sc] = kahanAdd(s, sc, jump * Math.sin(n * angle));
-      [c, cc] = kahanAdd(c, cc, jump * Math.cos(n * angle));
-    }
-    amplitudes.push(Math.hypot(s, c) / (Math.PI * n));
-  }
-  return amplitudes;
-}
-
-function kahanAdd(sum: number, compensation: number, value: number): [number, number] {
-  const y = value - compensation;
-  const t = sum + y;
-  return [t, t - sum - y];
-}
-
-function maxError(values: readonly Harmonic[], reference: readonly number[]): number {
-  return values.reduce(
-    (worst, v, i) => Math.max(worst, Math.abs(v.amplitude - (reference[i] as number))),
-    0,
-  );
+  return edgeAmplitudes(edges, maxOrder);
 }
 
 const fft = new FFT(samples);

@@ -17,6 +17,7 @@ import {
   type Harmonic,
   type Waveform,
 } from '@pulsewright/modulation';
+import { edgeAmplitudes, maxError, type EdgeJump } from './edgeSpectrum.js';
 import { medianTime, printTable } from './measure.js';
 
 const cells = 3;
@@ -72,7 +73,7 @@ function sampledSpectrum(fft: FFT, input: Float64Array, output: Float64Array): H
 }
 
 function independentReference(): number[] {
-  const edges: { angle: number; jump: number }[] = [];
+  const edges: EdgeJump[] = [];
   for (const delay of delays) {
     for (const sign of [1, -1]) {
       const difference = (theta: number): number =>
@@ -92,32 +93,7 @@ function independentReference(): number[] {
       }
     }
   }
-  const amplitudes = [0];
-  for (let n = 1; n <= maxOrder; n++) {
-    let s = 0;
-    let sc = 0;
-    let c = 0;
-    let cc = 0;
-    for (const { angle, jump } of edges) {
-      [s, sc] = kahanAdd(s, sc, jump * Math.sin(n * angle));
-      [c, cc] = kahanAdd(c, cc, jump * Math.cos(n * angle));
-    }
-    amplitudes.push(Math.hypot(s, c) / (Math.PI * n));
-  }
-  return amplitudes;
-}
-
-function kahanAdd(sum: number, compensation: number, value: number): [number, number] {
-  const y = value - compensation;
-  const t = sum + y;
-  return [t, t - sum - y];
-}
-
-function maxError(values: readonly Harmonic[], reference: readonly number[]): number {
-  return values.reduce(
-    (worst, v, i) => Math.max(worst, Math.abs(v.amplitude - (reference[i] as number))),
-    0,
-  );
+  return edgeAmplitudes(edges, maxOrder);
 }
 
 const fft = new FFT(samples);
