@@ -28,7 +28,6 @@ describe('analyseDesign: the three-level space-vector diagram in the report', ()
       const trajectory = threeLevelSpaceVectorTrajectory({
         m: 0.8,
         frequencyRatio: 24,
-        topology: 'npc',
         sampling,
         smallVectorSplit: 0.3,
       });
@@ -51,7 +50,7 @@ describe('analyseDesign: the three-level space-vector diagram in the report', ()
     for (const sample of figures.trajectory) {
       const points = [...new Set(sample.states.map((state) => where.get(state)))];
       expect(points).toHaveLength(3);
-      const [p, q, r] = points as [
+      const [p, q, r] = points as unknown as [
         { alpha: number; beta: number },
         { alpha: number; beta: number },
         { alpha: number; beta: number },
