@@ -143,6 +143,7 @@ const PUBLIC_NAMES = [
   'filterInductanceForTarget',
   'filteredSpectrum',
   'findBracketedRoot',
+  'firmwareEffectSpectra',
   'firmwareEffects',
   'flyingCapacitorCharge',
   'fundamentalAmplitude',

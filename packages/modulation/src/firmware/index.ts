@@ -11,6 +11,7 @@ export * from './quantisationEffect.js';
 export * from './deadTimeEffect.js';
 export * from './minimumPulseEffect.js';
 export * from './firmwareEffects.js';
+export * from './firmwareEffectSpectra.js';
 export * from './compensateDeadTime.js';
 export * from './deadTimeCompensation.js';
 export * from './multilevelTimerTableTypes.js';

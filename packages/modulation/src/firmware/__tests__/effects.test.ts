@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import {
   deadTimeEffect,
+  firmwareEffectSpectra,
   firmwareEffects,
   minimumPulseEffect,
   quantisationEffect,
@@ -294,5 +295,22 @@ describe('firmwareEffects', () => {
       -effect.fundamentalChange,
       1e-9,
     );
+  });
+});
+
+describe('firmwareEffectSpectra', () => {
+  it('labels the exact spectra of the reference and realised outputs by carrier group', () => {
+    const table = timerTable(bipolar);
+    const { combined } = firmwareEffects(table);
+    const mf = table.carrierPeriodsPerFundamental;
+    const spectra = firmwareEffectSpectra(combined, mf);
+    expect(spectra.reference).toHaveLength(combined.maxOrder + 1);
+    // The chart's fundamentals are the effect's own (both from the exact spectrum).
+    expect(spectra.reference[1]?.amplitude).toBe(combined.referenceFundamental);
+    expect(spectra.realised[1]?.amplitude).toBe(combined.realisedFundamental);
+    // The carrier harmonic of bipolar PWM sits at order mf, labelled as the carrier itself
+    // (order = m·mf + n with m = 1, n = 0; Holmes and Lipo, 2003, ch. 3).
+    expect(spectra.realised[mf]?.label).toBe('mf');
+    expect(spectra.realised[mf - 2]?.label).toBe('mf−2');
   });
 });

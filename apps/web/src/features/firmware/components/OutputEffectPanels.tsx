@@ -2,7 +2,7 @@ import { SpectrumChart } from '../../../components/charts/SpectrumChart';
 import { Panel } from '../../../components/ui/Panel';
 import { formatNumber, formatPercent } from '../../../lib/format';
 import type { TimerTable } from '@pulsewright/modulation';
-import { effectSpectra, type TimerTableOutcome } from '../model/timerTables';
+import { firmwareEffectSpectra, type TimerTableOutcome } from '../model/timerTables';
 
 /**
  * What the table does to the output: the fundamental (V) and THD of the ideal duties against the
@@ -19,7 +19,7 @@ export function OutputEffectPanels({
   /** File name stem of the spectrum's download. */
   stem: string;
 }) {
-  const spectra = effectSpectra(effects.combined, table.carrierPeriodsPerFundamental);
+  const spectra = firmwareEffectSpectra(effects.combined, table.carrierPeriodsPerFundamental);
   return (
     <>
       <Panel title="Effect on the output">
