@@ -1,8 +1,7 @@
 import {
   deadTimeCompensation,
+  firmwareEffectSpectra,
   firmwareEffects,
-  harmonics,
-  labelHarmonics,
   timerTable,
   timerTableToCHeader,
   timerTableToCsv,
@@ -14,6 +13,7 @@ import {
   type TimerTable,
   type TimerTableOptions,
 } from '@pulsewright/modulation';
+import { libraryFieldError } from '../../../lib/libraryFieldError';
 
 // The page builds the table with the library in the browser so it follows every keystroke (the
 // service's POST /api/v1/timer-tables gives the same table to scripts). This module is the
@@ -38,12 +38,7 @@ export function buildTimerTable(
     const effects = firmwareEffects(table, effectOptions);
     return { table, effects, error: null };
   } catch (error) {
-    const field = (error as { field?: string }).field ?? 'table';
-    return {
-      table: null,
-      effects: null,
-      error: { field, message: error instanceof Error ? error.message : String(error) },
-    };
+    return { table: null, effects: null, error: libraryFieldError(error, 'table') };
   }
 }
 
@@ -68,21 +63,12 @@ export function netlistOf(
   try {
     return { text: timerTableToSpiceNetlist(table, options), error: null };
   } catch (error) {
-    const field = (error as { field?: string }).field ?? 'netlist';
-    return {
-      text: null,
-      error: { field, message: error instanceof Error ? error.message : String(error) },
-    };
+    return { text: null, error: libraryFieldError(error, 'netlist') };
   }
 }
 
-/** The labelled spectra of an effect's reference and realised waveforms, for the chart. */
-export function effectSpectra(effect: FirmwareEffects['combined'], mf: number) {
-  return {
-    reference: labelHarmonics(harmonics(effect.reference, effect.maxOrder), mf),
-    realised: labelHarmonics(harmonics(effect.realised, effect.maxOrder), mf),
-  };
-}
+/** The labelled spectra of an effect's reference and realised outputs, for the chart. */
+export { firmwareEffectSpectra };
 
 /**
  * The table corrected for its dead time by the sign of the current predicted at a lag of
@@ -99,10 +85,6 @@ export function compensationOf(
   try {
     return { result: deadTimeCompensation(table, { currentAngle }), error: null };
   } catch (error) {
-    const field = (error as { field?: string }).field ?? 'currentAngle';
-    return {
-      result: null,
-      error: { field, message: error instanceof Error ? error.message : String(error) },
-    };
+    return { result: null, error: libraryFieldError(error, 'currentAngle') };
   }
 }

@@ -3,6 +3,7 @@ import {
   type LossesByPowerFactorOptions,
   type LossSweep,
 } from '@pulsewright/modulation';
+import { libraryFieldError } from '../../../lib/libraryFieldError';
 
 // The loss sweep runs with the library in the browser (100 angles of every zero sequence take
 // tens of milliseconds), so it follows each keystroke; the service's
@@ -15,10 +16,6 @@ export function lossSweepOf(
   try {
     return { sweep: lossesByPowerFactor(options), error: null };
   } catch (error) {
-    const field = (error as { field?: string }).field ?? 'sweep';
-    return {
-      sweep: null,
-      error: { field, message: error instanceof Error ? error.message : String(error) },
-    };
+    return { sweep: null, error: libraryFieldError(error, 'sweep') };
   }
 }
