@@ -16,7 +16,7 @@ import {
   triangleCarrier,
   type Harmonic,
 } from '@pulsewright/modulation';
-import { edgeAmplitudes, maxError, type EdgeJump } from './edgeSpectrum.js';
+import { edgeAmplitudes, maxError, sampledHarmonics, type EdgeJump } from './spectrumBaselines.js';
 import { medianTime, printTable } from './measure.js';
 
 const mf = 21;
@@ -35,19 +35,7 @@ function sampledSpectrum(fft: FFT, input: Float64Array, output: Float64Array): H
     const theta = (2 * Math.PI * k) / samples;
     input[k] = ma * Math.sin(theta) > triangleCarrier(theta, { mf }) ? vdc : -vdc;
   }
-  fft.realTransform(output, input);
-  const spectrum: Harmonic[] = [];
-  for (let n = 0; n <= maxOrder; n++) {
-    const re = output[2 * n] as number;
-    const im = output[2 * n + 1] as number;
-    // X_n = (N/2)·(a_n − j·b_n) for v = a_n cos nθ + b_n sin nθ; phase as in `harmonics`.
-    spectrum.push({
-      order: n,
-      amplitude: ((n === 0 ? 1 : 2) * Math.sqrt(re * re + im * im)) / samples,
-      phase: Math.atan2(re, -im),
-    });
-  }
-  return spectrum;
+  return sampledHarmonics(fft, input, output, maxOrder);
 }
 
 function independentReference(): number[] {

@@ -9,7 +9,7 @@ import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 const folder = dirname(fileURLToPath(import.meta.url));
-const skip = new Set(['run-all.ts', 'measure.ts', 'edgeSpectrum.ts']);
+const skip = new Set(['run-all.ts', 'measure.ts', 'spectrumBaselines.ts']);
 const benchmarks = readdirSync(folder)
   .filter((name) => name.endsWith('.ts') && !name.endsWith('.d.ts') && !skip.has(name))
   .sort();

@@ -1,3 +1,4 @@
+import type FFT from 'fft.js';
 import type { Harmonic } from '@pulsewright/modulation';
 
 /** A step of a piecewise-constant period: at `angle` (radians) the level changes by `jump` (volts). */
@@ -40,4 +41,30 @@ export function maxError(values: readonly Harmonic[], reference: readonly number
     (worst, v, i) => Math.max(worst, Math.abs(v.amplitude - (reference[i] as number))),
     0,
   );
+}
+
+/**
+ * Harmonics 0..maxOrder of one period sampled at N = input.length evenly spaced angles, by the
+ * FFT the benches take as their sampled baseline (`fft.js`), in the library's convention
+ * (v = A_0 + Σ A_n·sin(nθ + φ_n)): X_n = (N/2)·(a_n − j·b_n) for v = a_n cos nθ + b_n sin nθ.
+ */
+export function sampledHarmonics(
+  fft: FFT,
+  input: Float64Array,
+  output: Float64Array,
+  maxOrder: number,
+): Harmonic[] {
+  const samples = input.length;
+  fft.realTransform(output, input);
+  const spectrum: Harmonic[] = [];
+  for (let n = 0; n <= maxOrder; n++) {
+    const re = output[2 * n] as number;
+    const im = output[2 * n + 1] as number;
+    spectrum.push({
+      order: n,
+      amplitude: ((n === 0 ? 1 : 2) * Math.sqrt(re * re + im * im)) / samples,
+      phase: Math.atan2(re, -im),
+    });
+  }
+  return spectrum;
 }
