@@ -1,7 +1,8 @@
-import { NumberField, SelectField } from '../../../components/ui/Field';
+import { SelectField } from '../../../components/ui/Field';
 import { formatNumber } from '../../../lib/format';
 import { DAMPING_OPTIONS } from '../../../lib/modulationOptions';
 import { draftPhaseCount, isCarrierMethod, type StudyDraft } from '../model/studyDraft';
+import { designNumberFields } from './designNumberFields';
 import { draftSetter } from './draftSetter';
 import { FilterSizing } from './FilterSizing';
 import type { StudyFieldErrors } from './studyFieldErrors';
@@ -44,42 +45,39 @@ export function filterFields({
       {draft.filterOn ? (
         <>
           <div className="grid grid-cols-2 gap-3">
-            <NumberField
-              label="Filter L"
-              unit="mH"
-              value={draft.filterL}
-              scale={1e3}
-              {...limits('filter.l', 'Filter L', draft.filterL, { scale: 1e3, unit: 'mH' })}
-              onChange={set('filterL')}
-            />
-            <NumberField
-              label="Filter C"
-              unit="µF"
-              value={draft.filterC}
-              scale={1e6}
-              {...limits('filter.c', 'Filter C', draft.filterC, { scale: 1e6, unit: 'µF' })}
-              onChange={set('filterC')}
-            />
-            <NumberField
-              label="Damping R"
-              unit="Ω"
-              value={draft.filterR}
-              {...limits('filter.rDamping', 'Damping R', draft.filterR, { unit: 'Ω' })}
-              onChange={set('filterR')}
-            />
-            {draft.dampingPlacement === 'parallel-rc' ? (
-              <NumberField
-                label="Damping C"
-                unit="µF"
-                value={draft.cDamping}
-                scale={1e6}
-                {...limits('filter.cDamping', 'Damping C', draft.cDamping, {
-                  scale: 1e6,
-                  unit: 'µF',
-                })}
-                onChange={set('cDamping')}
-              />
-            ) : null}
+            {designNumberFields(
+              [
+                {
+                  key: 'filterL',
+                  path: 'filter.l',
+                  label: 'Filter L',
+                  unit: { scale: 1e3, unit: 'mH' },
+                },
+                {
+                  key: 'filterC',
+                  path: 'filter.c',
+                  label: 'Filter C',
+                  unit: { scale: 1e6, unit: 'µF' },
+                },
+                {
+                  key: 'filterR',
+                  path: 'filter.rDamping',
+                  label: 'Damping R',
+                  unit: { unit: 'Ω' },
+                },
+                ...(draft.dampingPlacement === 'parallel-rc'
+                  ? [
+                      {
+                        key: 'cDamping',
+                        path: 'filter.cDamping',
+                        label: 'Damping C',
+                        unit: { scale: 1e6, unit: 'µF' },
+                      } as const,
+                    ]
+                  : []),
+              ],
+              { draft, onChange, limits },
+            )}
           </div>
           <FilterSizing draft={draft} onChange={onChange} carrier={isCarrierMethod(draft.method)} />
           <SelectField

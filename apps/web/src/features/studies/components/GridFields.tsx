@@ -2,9 +2,10 @@ import { DESIGN_BOUNDS } from '@pulsewright/modulation';
 import { NumberField } from '../../../components/ui/Field';
 import { rangeText } from '../../../lib/fieldRange';
 import { draftPhaseCount, type StudyDraft } from '../model/studyDraft';
+import { designNumberFields } from './designNumberFields';
 import { draftSetter } from './draftSetter';
 import type { StudyFieldErrors } from './studyFieldErrors';
-import { DEGREES, RADIANS_TO_DEGREES } from './studyFormUnits';
+import { DEGREES } from './studyFormUnits';
 import { LclSizing } from './LclSizing';
 
 /**
@@ -40,44 +41,27 @@ export function gridFields({
       </label>
       {draft.gridOn ? (
         <div className="grid grid-cols-2 gap-3">
-          <NumberField
-            label="Grid voltage"
-            unit={threePhase ? 'V rms, line' : 'V rms'}
-            value={draft.gridLineVoltage}
-            {...limits('grid.lineVoltage', 'Grid voltage', draft.gridLineVoltage, { unit: 'V' })}
-            onChange={set('gridLineVoltage')}
-          />
-          <NumberField
-            label="Grid phase"
-            unit="°"
-            value={draft.gridPhase}
-            scale={RADIANS_TO_DEGREES}
-            {...limits('grid.phase', 'Grid phase', draft.gridPhase, DEGREES)}
-            onChange={set('gridPhase')}
-          />
-          <NumberField
-            label="Grid-side L2"
-            unit="mH"
-            value={draft.gridL2}
-            scale={1e3}
-            {...limits('grid.l2', 'Grid-side L2', draft.gridL2, { scale: 1e3, unit: 'mH' })}
-            onChange={set('gridL2')}
-          />
-          <NumberField
-            label="Grid R"
-            unit="Ω"
-            value={draft.gridR}
-            {...limits('grid.r', 'Grid R', draft.gridR, { unit: 'Ω' })}
-            onChange={set('gridR')}
-          />
-          <NumberField
-            label="Grid L"
-            unit="mH"
-            value={draft.gridL}
-            scale={1e3}
-            {...limits('grid.l', 'Grid L', draft.gridL, { scale: 1e3, unit: 'mH' })}
-            onChange={set('gridL')}
-          />
+          {designNumberFields(
+            [
+              {
+                key: 'gridLineVoltage',
+                path: 'grid.lineVoltage',
+                label: 'Grid voltage',
+                unit: { unit: 'V' },
+                shownUnit: threePhase ? 'V rms, line' : 'V rms',
+              },
+              { key: 'gridPhase', path: 'grid.phase', label: 'Grid phase', unit: DEGREES },
+              {
+                key: 'gridL2',
+                path: 'grid.l2',
+                label: 'Grid-side L2',
+                unit: { scale: 1e3, unit: 'mH' },
+              },
+              { key: 'gridR', path: 'grid.r', label: 'Grid R', unit: { unit: 'Ω' } },
+              { key: 'gridL', path: 'grid.l', label: 'Grid L', unit: { scale: 1e3, unit: 'mH' } },
+            ],
+            { draft, onChange, limits },
+          )}
           <NumberField
             label="Control bandwidth"
             unit="Hz"

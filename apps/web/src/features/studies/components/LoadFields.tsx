@@ -1,8 +1,8 @@
-import { NumberField } from '../../../components/ui/Field';
 import { draftPhaseCount, type StudyDraft } from '../model/studyDraft';
+import { designNumberFields } from './designNumberFields';
 import { draftSetter } from './draftSetter';
 import type { StudyFieldErrors } from './studyFieldErrors';
-import { DEGREES, RADIANS_TO_DEGREES } from './studyFormUnits';
+import { DEGREES } from './studyFormUnits';
 
 /**
  * The study form's load fieldset: series R (Ω), L (H, shown in mH) and a back-EMF (V peak, phase in radians shown in degrees), per phase for three-phase methods. A render function, not a component: the form calls it
@@ -37,36 +37,26 @@ export function loadFields({
       </label>
       {draft.loadOn ? (
         <div className="grid grid-cols-2 gap-3">
-          <NumberField
-            label="Resistance R"
-            unit="Ω"
-            value={draft.loadR}
-            {...limits('load.r', 'Resistance R', draft.loadR, { unit: 'Ω' })}
-            onChange={set('loadR')}
-          />
-          <NumberField
-            label="Inductance L"
-            unit="mH"
-            value={draft.loadL}
-            scale={1e3}
-            {...limits('load.l', 'Inductance L', draft.loadL, { scale: 1e3, unit: 'mH' })}
-            onChange={set('loadL')}
-          />
-          <NumberField
-            label="Back-EMF"
-            unit="V peak"
-            value={draft.emf}
-            {...limits('load.emf.amplitude', 'Back-EMF', draft.emf, { unit: 'V' })}
-            onChange={set('emf')}
-          />
-          <NumberField
-            label="Back-EMF phase"
-            unit="°"
-            value={draft.emfPhase}
-            scale={RADIANS_TO_DEGREES}
-            {...limits('load.emf.phase', 'Back-EMF phase', draft.emfPhase, DEGREES)}
-            onChange={set('emfPhase')}
-          />
+          {designNumberFields(
+            [
+              { key: 'loadR', path: 'load.r', label: 'Resistance R', unit: { unit: 'Ω' } },
+              {
+                key: 'loadL',
+                path: 'load.l',
+                label: 'Inductance L',
+                unit: { scale: 1e3, unit: 'mH' },
+              },
+              {
+                key: 'emf',
+                path: 'load.emf.amplitude',
+                label: 'Back-EMF',
+                unit: { unit: 'V' },
+                shownUnit: 'V peak',
+              },
+              { key: 'emfPhase', path: 'load.emf.phase', label: 'Back-EMF phase', unit: DEGREES },
+            ],
+            { draft, onChange, limits },
+          )}
         </div>
       ) : null}
     </fieldset>
