@@ -124,7 +124,16 @@ export function designRows(stored: InverterDesign): [string, string][] {
       ['Filter damping', damping],
     );
   } else rows.push(['LC filter', 'none']);
+  if (design.device) rows.push(['Switching device', deviceText(design.device)]);
   return rows;
+}
+
+/** A switching device's datasheet values as the loss model takes them (V, mΩ, mJ at the test point). */
+function deviceText(device: NonNullable<InverterDesign['device']>): string {
+  const energies = `Eon ${formatNumber(device.eon * 1e3)} mJ, Eoff ${formatNumber(device.eoff * 1e3)} mJ, Err ${formatNumber(device.err * 1e3)} mJ at ${formatNumber(device.referenceVoltage)} V, ${formatNumber(device.referenceCurrent)} A`;
+  return device.kind === 'igbt'
+    ? `IGBT with diode: Vce0 ${formatNumber(device.vce0)} V, rce ${formatNumber(device.rce * 1e3)} mΩ, Vf0 ${formatNumber(device.vf0)} V, rf ${formatNumber(device.rf * 1e3)} mΩ; ${energies}`
+    : `MOSFET: RDS(on) ${formatNumber(device.rdsOn * 1e3)} mΩ; ${energies}`;
 }
 
 /** One line about a design for lists: method's options, index, DC bus, carrier, load and filter. */
