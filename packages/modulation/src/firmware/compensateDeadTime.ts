@@ -55,7 +55,11 @@ export function compensateDeadTime(
     correction.push(added);
     const compare = channel.compare.map((c, i) => c + (added[i] as number));
     const offset = table.parameters.deadTimeMethod === 'compare-offset' ? dead : 0;
-    return { ...channel, compare, ...complementaryCompares(compare, full, offset) };
+    return {
+      ...channel,
+      compare,
+      ...complementaryCompares(compare, full, offset, channel.sense),
+    };
   });
   const corrected: TimerTable = {
     ...table,

@@ -1,13 +1,12 @@
 import { timerTableChannels } from './timerTableChannels.js';
-import { timerTableInputs } from './timerTableInputs.js';
+import {
+  isReducedCommonMode,
+  timerTableInputs,
+  type TimerTableInputs,
+} from './timerTableInputs.js';
 import { timerTableTiming } from './timerTableTiming.js';
 import { timerTableWarnings } from './timerTableWarnings.js';
-import type {
-  CountingMode,
-  DeadTimeMethod,
-  TimerTable,
-  TimerTableOptions,
-} from './timerTableTypes.js';
+import type { TimerTable, TimerTableOptions } from './timerTableTypes.js';
 
 export { MAX_TIMER_TABLE_LENGTH } from './timerTableInputs.js';
 
@@ -17,7 +16,13 @@ export { MAX_TIMER_TABLE_LENGTH } from './timerTableInputs.js';
  *
  * Conventions (common practice: timer reference manuals describe edge- and centre-aligned
  * PWM; from memory). All channels are active-high: the high-side switch is on while the
- * counter is below the compare value, and the compare match turns it off.
+ * counter is below the compare value, and the compare match turns it off; except the entries
+ * whose compare sense is `'above'` (the middle phase of the reduced common-mode methods `azspwm1`
+ * and `nspwm`, A. M. Hava and E. Ün, IEEE Trans. Power Electronics, 2009), where it is on while
+ * the counter is above `full − compare`: the reference against the inverted carrier. Firmware
+ * switches the channel's compare polarity at the update event that loads such an entry (see
+ * {@link CompareSense}); these tables need centre-aligned counting, asymmetric sampling, the
+ * default length and, with a dead time, the dead-time generator (`'dead-time-register'`).
  * - `'edge-aligned'`: up-counting 0…TOP, `TOP = timerClock/carrierFrequency − 1` (rounded),
  *   `compare = round(duty·(TOP + 1))`; the high-side pulse starts at each counter reset.
  * - `'centre-aligned'`: up-down counting P→0→P per carrier period (compare values loaded at
@@ -41,7 +46,9 @@ export { MAX_TIMER_TABLE_LENGTH } from './timerTableInputs.js';
  *   period that does not fit the counter or has fewer than 2 counts, a table longer than
  *   {@link MAX_TIMER_TABLE_LENGTH} (given or by default), a dead time of half a
  *   carrier period or more, a table length that does not divide the period, asymmetric
- *   sampling or compare-offset dead time with edge-aligned counting.
+ *   sampling or compare-offset dead time with edge-aligned counting; for `azspwm1`/`nspwm`
+ *   edge-aligned counting, symmetric sampling, another table length, or compare-offset dead
+ *   time with a dead time.
  */
 export function timerTable(options: TimerTableOptions): TimerTable {
   const inputs = timerTableInputs(options);
@@ -74,7 +81,7 @@ export function timerTable(options: TimerTableOptions): TimerTable {
       vdc,
     },
     units: UNITS,
-    conventions: conventionLines(inputs.countingMode, inputs.sampling, inputs.deadTimeMethod),
+    conventions: conventionLines(inputs),
     periodRegister: timing.periodRegister,
     fullScaleCounts: full,
     ticksPerCarrierPeriod: timing.ticksPerCarrierPeriod,
@@ -112,17 +119,15 @@ const UNITS: Record<string, string> = {
   entryAngles: 'rad',
   duty: 'fraction',
   compare: 'counts',
+  sense: "'below' or 'above' (high side on while the counter is below or above highSide)",
   highSide: 'counts',
   lowSide: 'counts',
   quantisationStep: 'V',
   maxQuantisationError: 'V',
 };
 
-function conventionLines(
-  mode: CountingMode,
-  sampling: string,
-  deadTimeMethod: DeadTimeMethod,
-): string[] {
+function conventionLines(inputs: TimerTableInputs): string[] {
+  const { countingMode: mode, sampling, deadTimeMethod } = inputs;
   const lines = [
     'Outputs active-high: a high-side switch is on while the counter is below its compare value; the compare match turns it off.',
     mode === 'edge-aligned'
@@ -134,6 +139,12 @@ function conventionLines(
   if (sampling === 'regular-asymmetric') {
     lines.push(
       'Asymmetric sampling: entry 2j is loaded for the down-counting half and entry 2j + 1 for the up-counting half of carrier period j.',
+    );
+  }
+  if (isReducedCommonMode(inputs.modulation)) {
+    lines.push(
+      "Compare sense per entry and channel: 'below' = high side on while counter < highSide, low side while counter >= lowSide; 'above' = high side on while counter > highSide, low side while counter < lowSide (the middle phase against the inverted carrier, highSide = P - compare). Switch the channel's output polarity at the update event that loads the entry.",
+      'The middle phase of entry i is the one at angle (i + 1) * pi / (carrier / fundamental), the end of its half period; the pulses equal those of carrier PWM with regular-asymmetric sampling a quarter carrier period later.',
     );
   }
   lines.push(

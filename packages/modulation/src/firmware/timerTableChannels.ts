@@ -1,4 +1,5 @@
 import { TAU } from '../math.js';
+import { compareSenses } from './compareSenses.js';
 import { complementaryCompares } from './complementaryCompares.js';
 import { dutyFromReference } from './dutyFromReference.js';
 import { legReferences } from './legReferences.js';
@@ -26,8 +27,9 @@ export interface TimerChannels {
 
 /**
  * Internal to timerTable: per channel (inverter leg) the duty (1 + r)/2 of each entry's leg
- * reference, its compare value round(duty·full), and the high- and low-side compare values with
- * the dead time offset when the method is 'compare-offset'.
+ * reference, its compare value round(duty·full), its compare sense ({@link compareSenses}), and
+ * the high- and low-side compare values as the registers take them, with the dead time offset
+ * when the method is 'compare-offset'.
  */
 export function timerTableChannels(inputs: TimerTableInputs, timing: TimerTiming): TimerChannels {
   const { tableLength, modulation, deadTimeMethod } = inputs;
@@ -38,6 +40,7 @@ export function timerTableChannels(inputs: TimerTableInputs, timing: TimerTiming
   );
   const references = entryAngles.map((theta) => legReferences(theta, modulation));
   const channelCount = (references[0] as number[]).length;
+  const senses = compareSenses(inputs, channelCount);
   let overmodulated = 0;
   let maxRoundingCounts = 0;
   const channels: TimerChannel[] = [];
@@ -52,16 +55,19 @@ export function timerTableChannels(inputs: TimerTableInputs, timing: TimerTiming
     duty.forEach((d, i) => {
       maxRoundingCounts = Math.max(maxRoundingCounts, Math.abs((compare[i] as number) - d * full));
     });
+    const sense = senses[k] as TimerChannel['sense'];
     const { highSide, lowSide } = complementaryCompares(
       compare,
       full,
       deadTimeMethod === 'compare-offset' ? timing.deadTimeCounts : 0,
+      sense,
     );
     channels.push({
       name: CHANNEL_NAMES[k] as string,
       description: describeChannel(modulation, k),
       duty,
       compare,
+      sense,
       highSide,
       lowSide,
     });

@@ -48,17 +48,18 @@ export interface TimerTableInputs {
  * @throws ParameterRangeError / ParameterTypeError naming the field
  */
 export function timerTableInputs(options: TimerTableOptions): TimerTableInputs {
+  const modulation = checkModulation(options.modulation);
+  const reducedCommonMode = isReducedCommonMode(modulation);
   const {
     fundamentalFrequency,
     carrierFrequency,
-    sampling = 'regular-symmetric',
+    sampling = reducedCommonMode ? 'regular-asymmetric' : 'regular-symmetric',
     timerClock,
     countingMode = 'centre-aligned',
     counterBits = 16,
     deadTime = 0,
     vdc = 1,
   } = options;
-  const modulation = checkModulation(options.modulation);
   assertTimerFrequencies({ fundamentalFrequency, carrierFrequency, timerClock });
   assertOneOf('sampling', sampling, ['regular-symmetric', 'regular-asymmetric'] as const);
   assertOneOf('countingMode', countingMode, ['edge-aligned', 'centre-aligned'] as const);
@@ -67,8 +68,18 @@ export function timerTableInputs(options: TimerTableOptions): TimerTableInputs {
   assertNumberInRange('vdc', vdc, { min: 0, minExclusive: true });
   const deadTimeMethod: DeadTimeMethod =
     options.deadTimeMethod ??
-    (countingMode === 'centre-aligned' ? 'compare-offset' : 'dead-time-register');
+    (countingMode === 'centre-aligned' && !reducedCommonMode
+      ? 'compare-offset'
+      : 'dead-time-register');
   assertOneOf('deadTimeMethod', deadTimeMethod, ['compare-offset', 'dead-time-register'] as const);
+  if (reducedCommonMode) {
+    assertReducedCommonModeTimer(modulation, {
+      countingMode,
+      sampling,
+      deadTimeMethod,
+      deadTime,
+    });
+  }
   if (countingMode === 'edge-aligned' && sampling === 'regular-asymmetric') {
     throw new ParameterRangeError(
       'sampling',
@@ -86,6 +97,13 @@ export function timerTableInputs(options: TimerTableOptions): TimerTableInputs {
   const carrierPeriods = integerRatio(carrierFrequency, fundamentalFrequency);
   const updatesPerFundamental = carrierPeriods * (sampling === 'regular-asymmetric' ? 2 : 1);
   const tableLength = checkedTableLength(options.tableLength, updatesPerFundamental, sampling);
+  if (reducedCommonMode && tableLength !== updatesPerFundamental) {
+    throw new ParameterRangeError(
+      'tableLength',
+      `${updatesPerFundamental}, the default (one entry per half carrier period), for zeroSequence '${modulation.method === 'three-phase' ? modulation.zeroSequence : ''}': each half period takes its own compare sense`,
+      tableLength,
+    );
+  }
   return {
     modulation,
     fundamentalFrequency,
@@ -121,6 +139,53 @@ function checkModulation(modulation: unknown): TimerModulation {
   const zeroSequence = m.zeroSequence ?? 'none';
   assertOneOf('modulation.zeroSequence', zeroSequence, TIMER_ZERO_SEQUENCES);
   return { method: 'three-phase', zeroSequence, ma: m.ma };
+}
+
+/** Whether the table is for a reduced common-mode method (the middle leg's sense is inverted). */
+export function isReducedCommonMode(modulation: TimerModulation): boolean {
+  return (
+    modulation.method === 'three-phase' &&
+    (modulation.zeroSequence === 'azspwm1' || modulation.zeroSequence === 'nspwm')
+  );
+}
+
+/**
+ * The timer a reduced common-mode table needs: an up-down counter sampling each half period
+ * (asymmetric sampling), as `threePhase` samples these methods, and
+ * the dead-time generator when there is a dead time, since the leg switches at the update event
+ * itself wherever the compare sense changes.
+ */
+function assertReducedCommonModeTimer(
+  modulation: TimerModulation,
+  timer: {
+    countingMode: CountingMode;
+    sampling: TimerSampling;
+    deadTimeMethod: DeadTimeMethod;
+    deadTime: number;
+  },
+): void {
+  const name = `zeroSequence '${modulation.method === 'three-phase' ? modulation.zeroSequence : ''}'`;
+  if (timer.countingMode !== 'centre-aligned') {
+    throw new ParameterRangeError(
+      'countingMode',
+      `'centre-aligned' for ${name} (its middle leg's compare sense changes each half period, at the counter's peaks and valleys)`,
+      timer.countingMode,
+    );
+  }
+  if (timer.sampling !== 'regular-asymmetric') {
+    throw new ParameterRangeError(
+      'sampling',
+      `'regular-asymmetric' for ${name} (each half period takes its own compare sense, as threePhase samples it)`,
+      timer.sampling,
+    );
+  }
+  if (timer.deadTime > 0 && timer.deadTimeMethod === 'compare-offset') {
+    throw new ParameterRangeError(
+      'deadTimeMethod',
+      `'dead-time-register' for ${name} with a dead time (where the compare sense changes the leg switches at a counter peak or valley, and no compare offset can separate the two switches there)`,
+      timer.deadTimeMethod,
+    );
+  }
 }
 
 function integerRatio(carrierFrequency: number, fundamentalFrequency: number): number {

@@ -41,7 +41,8 @@ export function timerTableTiming(
       deadTime,
     );
   }
-  const deadTimeCounts = Math.ceil(deadTime * timerClock - RATIO_TOLERANCE);
+  // Math.max: a zero dead time gives 0 ticks, not −0 (which JSON writes as 0).
+  const deadTimeCounts = Math.max(0, Math.ceil(deadTime * timerClock - RATIO_TOLERANCE));
   if (2 * deadTimeCounts >= period.ticksPerCarrierPeriod) {
     throw new ParameterRangeError(
       'deadTime',

@@ -1,4 +1,5 @@
 import { assertCPrefix } from './assertCPrefix.js';
+import { hasAboveSense } from './hasAboveSense.js';
 import {
   cArrayLines,
   clean,
@@ -24,7 +25,12 @@ export interface TimerTableCHeaderOptions {
  * The table as a C header for a controller (C99): an include guard, `#include <stdint.h>`,
  * macros for the table length, period register, full-scale compare and dead-time ticks, and
  * per channel `static const` arrays `<prefix>_<channel>_high` / `_low` of `uint16_t`
- * (counterBits ≤ 16) or `uint32_t`. A comment block records every parameter with its unit,
+ * (counterBits ≤ 16) or `uint32_t`. A table with entries of compare sense `'above'` (the
+ * reduced common-mode methods `azspwm1`, `nspwm`) also has per channel
+ * `static const uint8_t <prefix>_<channel>_above[]`: 1 where the high side is on while the
+ * counter is above its value (the low side below), 0 where below (the low side at or above);
+ * firmware sets the channel's output polarity from it at the update event that loads the entry.
+ * Other tables have no such array, so their headers are unchanged. A comment block records every parameter with its unit,
  * the generation conventions and the warnings; numbers in it carry 12 significant digits (the
  * binary rounding of 5e-7 s prints as 500 ns, not 5.000000000000001e-7) and times are in ns.
  *
@@ -69,6 +75,7 @@ export function timerTableToCHeader(
     ],
     table.warnings,
   );
+  const withSense = hasAboveSense(table);
   const arrays: string[] = [];
   for (const channel of table.channels) {
     const name = `${lower}_${channel.name.toLowerCase().replace(/[^a-z0-9_]/g, '_')}`;
@@ -78,6 +85,15 @@ export function timerTableToCHeader(
     ] as const) {
       arrays.push(
         ...cArrayLines(`static const ${type} ${name}_${side}[${upper}_LENGTH]`, values, suffix),
+      );
+    }
+    if (withSense) {
+      arrays.push(
+        ...cArrayLines(
+          `static const uint8_t ${name}_above[${upper}_LENGTH]`,
+          channel.sense.map((sense) => (sense === 'above' ? 1 : 0)),
+          'u',
+        ),
       );
     }
   }

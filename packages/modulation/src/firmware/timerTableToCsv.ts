@@ -1,9 +1,13 @@
+import { hasAboveSense } from './hasAboveSense.js';
 import type { TimerTable } from './timerTableTypes.js';
 
 /**
  * The table as CSV (RFC 4180: comma separated, CRLF line ends, cells with a comma, quote or
  * line break quoted): a header row, then one row per entry with its index, its sampling
- * angle (rad) and, per channel, duty (fraction), compare, highSide and lowSide (counts).
+ * angle (rad) and, per channel, duty (fraction), compare, highSide and lowSide (counts). A table
+ * with entries of compare sense `'above'` (the reduced common-mode methods `azspwm1`, `nspwm`)
+ * has a column `<channel>_sense` after `<channel>_compare`, `below` or `above` per entry; the
+ * other tables have none (every entry is `below`), so their files are unchanged.
  *
  * Any cell that begins with `=`, `+`, `-`, `@`, a tab or a carriage return is prefixed with a
  * single quote so that a spreadsheet shows it as text instead of evaluating it as a formula
@@ -11,11 +15,13 @@ import type { TimerTable } from './timerTableTypes.js';
  * numbers are never negative, so only text taken from the caller (channel names) can trip it.
  */
 export function timerTableToCsv(table: TimerTable): string {
+  const withSense = hasAboveSense(table);
   const header = ['entry', 'angle_rad'];
   for (const channel of table.channels) {
     header.push(
       `${channel.name}_duty`,
       `${channel.name}_compare`,
+      ...(withSense ? [`${channel.name}_sense`] : []),
       `${channel.name}_high`,
       `${channel.name}_low`,
     );
@@ -27,6 +33,7 @@ export function timerTableToCsv(table: TimerTable): string {
       row.push(
         String(channel.duty[i]),
         String(channel.compare[i]),
+        ...(withSense ? [channel.sense[i] ?? 'below'] : []),
         String(channel.highSide[i]),
         String(channel.lowSide[i]),
       );

@@ -8,17 +8,30 @@ import { ZERO_SEQUENCES, type ZeroSequence } from '../three-phase/ZeroSequence.j
  */
 
 /**
- * The zero sequences a timer table takes: every carrier zero sequence whose legs share one
- * carrier, the discontinuous clamps included (each equals five-segment space vector with the same
- * clamping, regular sampled: Holmes and Lipo, 2003, ch. 7). Not the reduced common-mode methods,
- * whose middle leg needs the inverted carrier (a second compare sense per entry).
+ * The zero sequences a timer table takes: every carrier zero sequence, the discontinuous clamps
+ * (each equals five-segment space vector with the same clamping, regular sampled: Holmes and
+ * Lipo, 2003, ch. 7) and the reduced common-mode methods `azspwm1` and `nspwm` (A. M. Hava and
+ * E. Ün, IEEE Trans. Power Electronics, 2009), whose middle leg runs with the compare sense
+ * `'above'` ({@link CompareSense}).
  */
-export type TimerZeroSequence = Exclude<ZeroSequence, 'azspwm1' | 'nspwm'>;
+export type TimerZeroSequence = ZeroSequence;
 
 /** The zero sequences a timer table takes, in the order of {@link ZERO_SEQUENCES}. */
-export const TIMER_ZERO_SEQUENCES: readonly TimerZeroSequence[] = ZERO_SEQUENCES.filter(
-  (z): z is TimerZeroSequence => z !== 'azspwm1' && z !== 'nspwm',
-);
+export const TIMER_ZERO_SEQUENCES: readonly TimerZeroSequence[] = ZERO_SEQUENCES;
+
+/**
+ * How a channel's high-side output follows the counter in one entry (the channel's compare
+ * polarity):
+ * - `'below'`: high while the counter is below the high-side compare value (every entry of every
+ *   method but the reduced common-mode ones): the reference against the carrier.
+ * - `'above'`: high while the counter is above it: the reference against the inverted carrier,
+ *   which the reduced common-mode methods (`azspwm1`, `nspwm`) give the middle phase. The
+ *   compare values are then `full − compare` (dead time apart), so the high-side pulse is
+ *   centred on the counter peak instead of the valley and keeps its width.
+ * Firmware applies it by switching the channel's output polarity (active-high below the compare
+ * value, or above it) at the update event that loads the entry's compare values.
+ */
+export type CompareSense = 'below' | 'above';
 
 /** The modulation a table is built from (regular-sampled sine reference, peak `ma`). */
 export type TimerModulation =
@@ -59,8 +72,10 @@ export interface TimerTableOptions {
   carrierFrequency: number;
   /**
    * `'regular-symmetric'`: one compare value per carrier period; `'regular-asymmetric'`: one
-   * per half carrier period (centre-aligned only).
-   * @default 'regular-symmetric'
+   * per half carrier period (centre-aligned only). The reduced common-mode methods (`azspwm1`,
+   * `nspwm`) take `'regular-asymmetric'` only, as `threePhase` does (each half period's compare
+   * sense follows its own middle phase).
+   * @default 'regular-asymmetric' for `azspwm1` and `nspwm`, else 'regular-symmetric'
    */
   sampling?: 'regular-symmetric' | 'regular-asymmetric';
   /** Timer input clock after the prescaler, Hz. */
@@ -74,13 +89,17 @@ export interface TimerTableOptions {
   /**
    * `'compare-offset'` (centre-aligned only): separate high- and low-side compare values,
    * each moved half the dead time away from the ideal edge. `'dead-time-register'`: one
-   * compare value per channel; the timer's dead-time generator delays every turn-on.
-   * @default 'compare-offset' for centre-aligned, 'dead-time-register' for edge-aligned
+   * compare value per channel; the timer's dead-time generator delays every turn-on. With a
+   * dead time the reduced common-mode methods take `'dead-time-register'` only: where the
+   * compare sense changes the leg switches at the update event itself (a counter peak or
+   * valley), and no compare offset can separate the two switches there.
+   * @default 'dead-time-register' for edge-aligned and for `azspwm1`/`nspwm`, else 'compare-offset'
    */
   deadTimeMethod?: DeadTimeMethod;
   /**
    * Entries per fundamental period; must divide the updates per fundamental period
-   * (carrierFrequency/fundamentalFrequency, × 2 for asymmetric sampling).
+   * (carrierFrequency/fundamentalFrequency, × 2 for asymmetric sampling). The reduced
+   * common-mode methods take only the default (each half period has its own compare sense).
    * @default the updates per fundamental period (one entry per update)
    */
   tableLength?: number;
@@ -96,11 +115,27 @@ export interface TimerChannel {
   description: string;
   /** Ideal duty cycle of the high-side switch per entry, fraction in [0, 1] (no dead time). */
   duty: number[];
-  /** Ideal compare value per entry, rounded to counts (no dead time). */
+  /**
+   * Ideal compare value per entry, round(duty·full) counts (no dead time): the high-side on-time
+   * in counts per update, whatever the entry's sense (the register value itself for `'below'`).
+   */
   compare: number[];
-  /** High-side compare value per entry, counts (dead time applied for 'compare-offset'). */
+  /**
+   * Compare sense per entry: `'below'` (high side on while the counter is below `highSide`)
+   * or `'above'` (on while it is above; the reduced common-mode methods' middle phase).
+   */
+  sense: CompareSense[];
+  /**
+   * High-side compare value per entry, counts, as the register is loaded: `compare`
+   * (`'below'`) or `full − compare` (`'above'`), then moved by the dead time for
+   * 'compare-offset' (below: −⌊D/2⌋; above: +⌊D/2⌋).
+   */
   highSide: number[];
-  /** Low-side compare value per entry, counts (dead time applied for 'compare-offset'). */
+  /**
+   * Low-side compare value per entry, counts: the low side is on while the counter is at or
+   * above it (`'below'`) or below it (`'above'`); the high side's value moved the other way by
+   * D − ⌊D/2⌋ for 'compare-offset'.
+   */
   lowSide: number[];
 }
 

@@ -15,7 +15,7 @@ import {
   splitAtPeriod,
   type Interval,
 } from './pulseTrain.js';
-import type { NarrowPulseAction, TimerTable } from './timerTableTypes.js';
+import type { CompareSense, NarrowPulseAction, TimerTable } from './timerTableTypes.js';
 
 /** Options of {@link timerTableWaveforms}. */
 export interface TimerTableWaveformOptions {
@@ -64,8 +64,8 @@ export interface TimerTableWaveforms {
  * The voltages a timer table actually produces, exact (edges at the timer ticks), so the exact
  * `harmonics` and `thd` can quantify quantisation, dead time and minimum pulse width.
  *
- * Model: ideal switches. Each channel's ideal gate signal follows the counting convention of
- * {@link timerTable}; the high side is on over that signal's on-pulses and the low side over
+ * Model: ideal switches. Each channel's ideal gate signal follows the counting convention and
+ * each entry's compare sense of {@link timerTable}; the high side is on over that signal's on-pulses and the low side over
  * its off-pulses, each shortened by the dead time ('dead-time-register': every turn-on delayed
  * by D ticks; 'compare-offset': both edges moved by floor(D/2) and D − floor(D/2)). While
  * neither switch is on, the freewheeling diode sets the leg: current out of the leg (> 0) →
@@ -126,7 +126,7 @@ export function timerTableWaveforms(
   const legs = table.channels.map((channel, k) => {
     const values =
       counts === 'ideal' ? channel.duty.map((d) => d * table.fullScaleCounts) : channel.compare;
-    let on = idealGate(table, values, period);
+    let on = idealGate(table, values, channel.sense, period);
     if (minimumTicks > 0) {
       const adjusted = applyMinimumPulse(on, period, minimumTicks, minimumPulse?.action ?? 'drop');
       on = adjusted.on;
@@ -151,13 +151,24 @@ export function timerTableWaveforms(
   return { legs, ...outputsOf(table, legs), adjustedPulses };
 }
 
-/** On-pulses (ticks) of a channel's ideal gate signal from its compare values. */
-function idealGate(table: TimerTable, values: readonly number[], period: number): Interval[] {
+/**
+ * On-pulses (ticks) of a channel's ideal gate signal from its compare values (high-side on-time
+ * in counts per update) and senses: `'below'` on while the counter is below the value, `'above'`
+ * on while it is above full − value (the inverted carrier: the same time, mirrored in the half
+ * period about its centre).
+ */
+function idealGate(
+  table: TimerTable,
+  values: readonly number[],
+  sense: readonly CompareSense[],
+  period: number,
+): Interval[] {
   const full = table.fullScaleCounts;
   const perEntry = table.updatesPerEntry;
   const raw: Interval[] = [];
+  const entryOf = (update: number): number => Math.floor(update / perEntry);
   const valueAt = (update: number): number =>
-    Math.min(full, Math.max(0, values[Math.floor(update / perEntry)] as number));
+    Math.min(full, Math.max(0, values[entryOf(update)] as number));
   if (table.parameters.countingMode === 'edge-aligned') {
     for (let j = 0; j < table.carrierPeriodsPerFundamental; j++) {
       const start = j * full;
@@ -167,9 +178,12 @@ function idealGate(table: TimerTable, values: readonly number[], period: number)
     const asymmetric = table.parameters.sampling === 'regular-asymmetric';
     for (let h = 0; h < 2 * table.carrierPeriodsPerFundamental; h++) {
       const start = h * full;
-      const c = valueAt(asymmetric ? h : Math.floor(h / 2));
-      // Down-counting half (counter P → 0): on once the counter falls below c.
-      raw.push(h % 2 === 0 ? [start + full - c, start + full] : [start, start + c]);
+      const update = asymmetric ? h : Math.floor(h / 2);
+      const c = valueAt(update);
+      // Down-counting half (counter P → 0): below the value once it falls under c, above
+      // full − c until it does; the up-counting half mirrors each.
+      const late = (h % 2 === 0) === (sense[entryOf(update)] !== 'above');
+      raw.push(late ? [start + full - c, start + full] : [start, start + c]);
     }
   }
   return mergeCyclic(raw, period);

@@ -3,12 +3,9 @@ import {
   fundamentalAngleOfCarrier,
   type CarrierAlignment,
 } from '../carrier/triangleCarrier.js';
-import { thirtyDegreeSector } from './thirtyDegreeSector.js';
+import { middlePhase } from './middlePhase.js';
 import type { PhaseIndex } from './threePhaseReference.js';
 import type { ZeroSequence } from './ZeroSequence.js';
-
-/** The middle phase of the three sine references in each 60° interval [30° + k·60°, 90° + k·60°), from k = −1. */
-const MIDDLE_PHASE: readonly PhaseIndex[] = [0, 2, 1, 0, 2, 1];
 
 /**
  * True when phase `phase` (0, 1, 2 = a, b, c, references at θ − k·2π/3) compares its reference
@@ -41,6 +38,5 @@ export function invertsCarrier(
   if (zeroSequence !== 'azspwm1' && zeroSequence !== 'nspwm') return false;
   const half = Math.floor(carrierAngle(theta, alignment) / Math.PI);
   const centre = fundamentalAngleOfCarrier((half + 0.5) * Math.PI, alignment);
-  const sector = thirtyDegreeSector(centre);
-  return MIDDLE_PHASE[Math.floor(((sector + 1) % 12) / 2)] === phase;
+  return middlePhase(centre) === phase;
 }

@@ -153,6 +153,63 @@ describe('timerTableToCHeader', () => {
     }
   });
 
+  it.runIf(compilerAvailable)(
+    'a reduced common-mode table compiles and holds its compare senses (uint8_t _above arrays)',
+    () => {
+      // azspwm1 (A. M. Hava and E. Ün, IEEE Trans. Power Electronics, 2009): one channel in
+      // each entry, the middle phase, compares with the inverted carrier. The compiler reads
+      // the arrays back; the other tables' headers have no _above array (test above).
+      const table = timerTable({
+        ...options,
+        modulation: { method: 'three-phase', zeroSequence: 'azspwm1', ma: 0.9 },
+      });
+      const header = timerTableToCHeader(table, { prefix: 'kestrel_rcm' });
+      expect(header).toContain('static const uint8_t kestrel_rcm_a_above[KESTREL_RCM_LENGTH]');
+      expect(timerTableToCHeader(timerTable(options))).not.toContain('_above');
+      const directory = mkdtempSync(join(tmpdir(), 'pulsewright-header-'));
+      try {
+        writeFileSync(join(directory, 'rcm.h'), header);
+        const program = join(directory, 'rcm.c');
+        writeFileSync(
+          program,
+          [
+            '#include <stdio.h>',
+            '#include "rcm.h"',
+            'int main(void) {',
+            '  unsigned long above = 0, weighted = 0; unsigned i;',
+            '  for (i = 0; i < KESTREL_RCM_LENGTH; i++) {',
+            '    above += kestrel_rcm_a_above[i] + kestrel_rcm_b_above[i] + kestrel_rcm_c_above[i];',
+            '    weighted += (unsigned long)kestrel_rcm_b_above[i] * kestrel_rcm_b_high[i];',
+            '  }',
+            '  printf("%lu %lu\\n", above, weighted);',
+            '  return 0;',
+            '}',
+          ].join('\n'),
+        );
+        const binary = join(directory, 'rcm');
+        execFileSync('cc', [
+          '-std=c99',
+          '-pedantic',
+          '-Wall',
+          '-Wextra',
+          '-Werror',
+          '-o',
+          binary,
+          program,
+        ]);
+        const [above, weighted] = execFileSync(binary).toString().trim().split(' ').map(Number);
+        // Exactly one channel per entry is the middle phase.
+        expect(above).toBe(table.parameters.tableLength);
+        const b = table.channels[1]!;
+        expect(weighted).toBe(
+          b.highSide.reduce((s, v, i) => s + (b.sense[i] === 'above' ? v : 0), 0),
+        );
+      } finally {
+        rmSync(directory, { recursive: true, force: true });
+      }
+    },
+  );
+
   if (!compilerAvailable) {
     it.skip('compiling the header is skipped: no C compiler (cc) on this machine', () => undefined);
   }
