@@ -378,4 +378,30 @@ export interface DesignReport {
   grid: GridFigures | null;
   /** Cautions the product shows with these figures. */
   cautions: string[];
+  /**
+   * Present only when the carrier is not a whole multiple of the fundamental (sine-triangle,
+   * three-phase carrier, space vector): the ratio analysed and its span. Then every waveform and
+   * series covers the span of q fundamental periods mapped onto [0, 2π) (the modulator chart
+   * the first fundamental period), the spectra hold orders n/q (sub- and inter-harmonics, each
+   * with its `kind`), and every figure is over the span; see {@link CarrierSpanFigures}.
+   */
+  carrierSpan?: CarrierSpanFigures;
+}
+
+/**
+ * The frequency ratio of a design whose carrier is not a whole multiple of the fundamental: the
+ * nearest p/q with q ≤ 64 (`designRationalRatio`), whose pattern repeats after q fundamental
+ * periods (p carrier cycles), the span every figure of the report is computed over.
+ */
+export interface CarrierSpanFigures {
+  /** Carrier cycles in the span. */
+  p: number;
+  /** Fundamental periods in the span, 1 to 64. */
+  q: number;
+  /** Hertz, p/q·fundamentalFrequency: the carrier analysed. */
+  carrierFrequency: number;
+  /** The carrier analysed minus the one asked for, hertz (0 to rounding for an exact p/q). */
+  carrierError: number;
+  /** Hertz, fundamentalFrequency/q: the spacing of the spectra's components. */
+  baseFrequency: number;
 }

@@ -57,8 +57,11 @@ export interface DesignGrid {
  * - `vdc`: DC bus, volts (the bipolar level or each staircase cell for a stored pattern).
  * - `fundamentalFrequency`: output frequency, hertz.
  * - `carrierFrequency`: carrier (switching period) frequency, hertz, for the carrier methods and
- *   space vector; the frequency ratio mf = carrierFrequency/fundamentalFrequency must be a whole
- *   number. Stored patterns have no carrier and leave it out.
+ *   space vector. The frequency ratio mf = carrierFrequency/fundamentalFrequency must be a whole
+ *   number for the multilevel methods; sine-triangle, three-phase carrier and space vector take
+ *   any ratio in [1, 1000] (a fixed carrier at any speed), analysed exactly at its nearest p/q
+ *   with q ≤ 64 over q fundamental periods (`analyseDesign`, `DesignReport.carrierSpan`). Stored
+ *   patterns have no carrier and leave it out.
  * - `modulation`: the method and its options.
  * - `filter`: optional LC output filter per phase; `load`: optional R–L(–EMF) load per phase.
  * - `grid`: optional grid the bridge feeds through the filter (then no `load`).

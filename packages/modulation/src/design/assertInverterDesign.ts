@@ -6,13 +6,18 @@ import { THREE_LEVEL_SPACE_VECTOR_TOPOLOGIES } from '../multilevel/space-vector/
 import { withFieldPrefix } from '../validation/withFieldPrefix.js';
 import { DESIGN_BOUNDS, MAX_PATTERN_ANGLES, type DesignBoundsField } from './designBounds.js';
 import type { InverterDesign } from './InverterDesign.js';
+import { ASYNCHRONOUS_METHODS } from './designCarrierSpan.js';
 import { designFrequencyRatio } from './designFrequencyRatio.js';
+import { designRationalRatio } from './designRationalRatio.js';
 import { CARRIER_METHODS, MODULATION_METHODS } from './Modulation.js';
 
 /**
  * Asserts the design-level fields of an {@link InverterDesign} against {@link DESIGN_BOUNDS}
- * and returns the frequency ratio mf (null for a stored pattern). The method's own function
- * checks the rest of `modulation` when the voltages are built.
+ * and returns the frequency ratio mf (null for a stored pattern). The carrier of a
+ * sine-triangle, three-phase or space-vector design may be any ratio in [1, 1000] of the
+ * fundamental (analysed at its nearest p/q over q periods); a multilevel carrier's must be a
+ * whole ratio. The method's own function checks the rest of `modulation` when the voltages are
+ * built.
  * @throws ParameterRangeError / ParameterTypeError naming the field by its path in the design
  */
 export function assertInverterDesign(design: unknown): asserts design is InverterDesign {
@@ -36,7 +41,11 @@ export function assertInverterDesign(design: unknown): asserts design is Inverte
   }
   if (CARRIER_METHODS.includes(modulation.method)) {
     check('carrierFrequency', value.carrierFrequency);
-    designFrequencyRatio(value as unknown as InverterDesign);
+    // A two-level carrier method may run at a ratio p/q (analysed over q fundamental periods);
+    // the multilevel methods are built over one period and need a whole mf.
+    if (ASYNCHRONOUS_METHODS.includes(modulation.method))
+      designRationalRatio(value as unknown as InverterDesign);
+    else designFrequencyRatio(value as unknown as InverterDesign);
   } else if (value.carrierFrequency !== undefined) {
     throw new ParameterRangeError(
       'carrierFrequency',

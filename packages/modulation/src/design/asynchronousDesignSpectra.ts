@@ -3,11 +3,11 @@ import { assertNumberInRange } from '../validation/assertions.js';
 import { ParameterRangeError } from '../validation/errors.js';
 import { withFieldPrefix } from '../validation/withFieldPrefix.js';
 import { assertInverterDesign } from './assertInverterDesign.js';
-import { designModulation } from './designModulation.js';
+import { ASYNCHRONOUS_METHODS } from './designCarrierSpan.js';
 import { designRationalRatio } from './designRationalRatio.js';
 import type { InverterDesign } from './InverterDesign.js';
-import type { Modulation, ModulationMethod } from './Modulation.js';
-import { CARRIER_METHODS } from './Modulation.js';
+import type { ModulationMethod } from './Modulation.js';
+import { designSpanModulation } from './designSpanModulation.js';
 import { modulationVoltages } from './modulationVoltages.js';
 
 /**
@@ -40,14 +40,6 @@ export interface AsynchronousDesignSpectra {
   /** Phase a's voltage (bridge output, or phase a to star point), then leg a and line a−b (three-phase). */
   voltages: AsynchronousVoltage[];
 }
-
-/**
- * The carrier methods whose voltages can be built over several fundamental periods (a carrier
- * span); the multilevel methods are built over one period, so they need a whole mf.
- */
-const ASYNCHRONOUS_METHODS: readonly ModulationMethod[] = CARRIER_METHODS.filter(
-  (m) => m !== 'multilevel-carrier' && m !== 'multilevel-space-vector',
-);
 
 /** Options of {@link asynchronousDesignSpectra}. */
 export interface AsynchronousDesignOptions {
@@ -92,13 +84,7 @@ export function asynchronousDesignSpectra(
   const { maxOrder = Math.min(50, bound) } = options;
   assertNumberInRange('maxOrder', maxOrder, { min: 1, max: bound, integer: true });
   const ratio = p / q;
-  const whole = designModulation(standIn);
-  const modulation: Modulation =
-    whole.method === 'space-vector'
-      ? { ...whole, frequencyRatio: ratio }
-      : whole.method === 'sine-triangle' || whole.method === 'three-phase'
-        ? { ...whole, mf: ratio }
-        : whole;
+  const modulation = designSpanModulation(standIn, ratio);
   const voltages = withFieldPrefix('modulation.', () =>
     modulationVoltages(modulation, { fundamentalPeriods: q }),
   );

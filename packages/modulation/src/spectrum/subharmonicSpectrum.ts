@@ -6,6 +6,7 @@ import { runningIntegral } from '../waveform/runningIntegral.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import { waveformMean } from '../waveform/waveformMean.js';
 import { waveformMeanSquare } from '../waveform/waveformMeanSquare.js';
+import { fractionLabel } from './fractionLabel.js';
 import { harmonics, MAX_HARMONIC_ORDER } from './harmonics.js';
 
 /** One component of a waveform spanning q fundamental periods. */
@@ -100,12 +101,4 @@ export function subharmonicSpectrum(
       phase,
     })),
   };
-}
-
-/** n/q in lowest terms: `2`, `1/3`, `47/3`. */
-function fractionLabel(n: number, q: number): string {
-  let [a, b] = [n, q];
-  while (b !== 0) [a, b] = [b, a % b];
-  const divisor = Math.max(1, a);
-  return q / divisor === 1 ? String(n / divisor) : `${n / divisor}/${q / divisor}`;
 }
