@@ -5,6 +5,7 @@ import * as modulation from '../index.js';
 // so adding, renaming or removing one must be a conscious change to this list.
 const PUBLIC_NAMES = [
   'ANGLE_TABLE_ERROR_METRICS',
+  'ASYNCHRONOUS_METHODS',
   'BRIDGE_SCHEMES',
   'BRIDGE_SCHEME_LABELS',
   'CAPTURE_FREQUENCY_TOLERANCE',
@@ -131,10 +132,12 @@ const PUBLIC_NAMES = [
   'deadTimeCompensation',
   'deadTimeEffect',
   'defaultSpectrumOrder',
+  'designCarrierSpan',
   'designFrequencyRatio',
   'designLclFilter',
   'designModulation',
   'designRationalRatio',
+  'designSpanMaxOrder',
   'deviceSwitchingFrequencies',
   'dutyFromReference',
   'equalConditions',

@@ -3,7 +3,6 @@ import { HARMONIC_LIMIT_CAUTION } from '../limits/voltageHarmonicLimits.js';
 import { motorLoadFigures } from '../load/motorLoadFigures.js';
 import { TAU } from '../math.js';
 import type { Harmonic } from '../spectrum/Harmonic.js';
-import { MAX_HARMONIC_ORDER } from '../spectrum/harmonics.js';
 import { subharmonicSpectrum } from '../spectrum/subharmonicSpectrum.js';
 import { reducedCommonModeRange } from '../three-phase/reducedCommonModeRange.js';
 import { ParameterRangeError } from '../validation/errors.js';
@@ -21,6 +20,7 @@ import type {
 } from './DesignReport.js';
 import { designLosses } from './designLosses.js';
 import type { RationalRatio } from './designRationalRatio.js';
+import { designSpanMaxOrder } from './designSpanMaxOrder.js';
 import { designSpanModulation } from './designSpanModulation.js';
 import type { InverterDesign } from './InverterDesign.js';
 import { labelSpanHarmonics, type SpanLabelledHarmonic } from './labelSpanHarmonics.js';
@@ -36,20 +36,6 @@ const MIN_SAMPLES_PER_PERIOD = 4096;
 /** Most grid samples over a span (a power of two; rlCurrentAt takes up to 1e6 angles). */
 const MAX_SPAN_SAMPLES = 1 << 19;
 const PHASES = ['a', 'b', 'c'] as const;
-
-/**
- * The highest spectrum order (in fundamentals) a design at the ratio p/q may ask for: its span's
- * spectra hold q·maxOrder components summed over about 4p edges each, so p·q·maxOrder is kept to
- * MAX_ASYNCHRONOUS_COST (as asynchronousDesignSpectra), and q·maxOrder to what `harmonics` sums.
- * Internal: shared with the API's cost model through the report's refusal.
- */
-function spanOrderBound(p: number, q: number): number {
-  return Math.min(
-    5000,
-    Math.floor(MAX_HARMONIC_ORDER / q),
-    Math.floor(MAX_ASYNCHRONOUS_COST / (p * q)),
-  );
-}
 
 /**
  * The design report of a design whose carrier is not a whole multiple of the fundamental (the
@@ -71,10 +57,9 @@ function spanOrderBound(p: number, q: number): number {
  *   sub- and inter-harmonics count in the whole-waveform THD.
  * - Refused: a filter or a grid (solved per harmonic of one period; not generalised here).
  *
- * @param options.maxOrder - in [50, 5000] already; here also at most
- *   min(5000, 100000/q, 2e7/(p·q)) @default min(defaultSpectrumOrder(design), that bound)
- * @throws ParameterRangeError naming `carrierFrequency` (a filter or grid, or a span too costly
- *   for even 50 orders) or `maxOrder`
+ * @param options.maxOrder - in [50, 5000] already; here also at most `designSpanMaxOrder`
+ *   @default min(defaultSpectrumOrder(design), that bound)
+ * @throws ParameterRangeError naming `carrierFrequency` (`designSpanMaxOrder`) or `maxOrder`
  * Internal: part of analyseDesign.
  */
 export function analyseDesignSpan(
@@ -84,20 +69,7 @@ export function analyseDesignSpan(
 ): DesignReport {
   const { p, q, error } = span;
   const frequency = design.fundamentalFrequency;
-  const bound = spanOrderBound(p, q);
-  const attached = design.grid ? 'grid' : design.filter ? 'filter' : null;
-  if (attached !== null)
-    throw new ParameterRangeError(
-      'carrierFrequency',
-      `a whole multiple of fundamentalFrequency ${frequency} Hz for a design with a ${attached} (a non-integer ratio is analysed without a filter or grid)`,
-      design.carrierFrequency,
-    );
-  if (bound < 50)
-    throw new ParameterRangeError(
-      'carrierFrequency',
-      `a carrier whose ratio to fundamentalFrequency ${frequency} Hz is a fraction p/q with p·q ≤ ${MAX_ASYNCHRONOUS_COST / 50} (its nearest with q ≤ 64 is ${p}/${q}: the ${q}-period span's spectra to order 50 cost too much)`,
-      design.carrierFrequency,
-    );
+  const bound = designSpanMaxOrder(design, span);
   const { maxOrder = Math.min(defaultSpectrumOrder(design), bound), points, busVoltage } = options;
   if (maxOrder > bound)
     throw new ParameterRangeError(

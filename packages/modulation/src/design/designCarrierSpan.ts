@@ -19,8 +19,8 @@ const WHOLE_RATIO_TOLERANCE = 1e-9;
  * for an {@link ASYNCHRONOUS_METHODS} design whose ratio carrierFrequency/fundamentalFrequency
  * is not a whole number (to 1e−9 relative, the rounding of decimal inputs), its nearest p/q with
  * q ≤ 64 and the carrier error in hertz (`designRationalRatio`); null for a whole ratio, a
- * multilevel method or a stored pattern, which `analyseDesign` analyses over one period.
- * Internal: the branch analyseDesign takes for a non-integer ratio.
+ * multilevel method or a stored pattern, which `analyseDesign` analyses over one period. With a
+ * ratio, `analyseDesign` computes every figure over the span of q periods (`DesignReport.carrierSpan`).
  * @throws ParameterRangeError naming `carrierFrequency` when the ratio is outside [1, 1000]
  */
 export function designCarrierSpan(design: InverterDesign): RationalRatio | null {

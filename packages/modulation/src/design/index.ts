@@ -4,6 +4,8 @@ export * from './designBounds.js';
 export * from './assertInverterDesign.js';
 export * from './designFrequencyRatio.js';
 export * from './designRationalRatio.js';
+export * from './designCarrierSpan.js';
+export * from './designSpanMaxOrder.js';
 export * from './asynchronousDesignSpectra.js';
 export * from './designModulation.js';
 export * from './modulationPhaseCount.js';
