@@ -249,7 +249,7 @@ describe('cost model at the default budgets', () => {
       tableLength: 4096,
     };
     const json = await request(t.app).post('/api/v1/timer-tables').set(auth).send(table);
-    expectRefusal(json, ['tableLength'], ['RESPONSE_BYTES_BUDGET', '1.1 MB']);
+    expectRefusal(json, ['tableLength'], ['RESPONSE_BYTES_BUDGET', '1.2 MB']);
     const header = await request(t.app)
       .post('/api/v1/timer-tables?format=c-header')
       .set(auth)
