@@ -1,10 +1,7 @@
 import { assertLcFilter } from '../filter/assertLcFilter.js';
 import { lcFilter } from '../filter/lcFilter.js';
-import {
-  outputNetworkResponse,
-  type OutputNetwork,
-  type OutputNetworkPhasors,
-} from '../filter/outputNetworkResponse.js';
+import { outputNetworkResponse, type OutputNetwork } from '../filter/outputNetworkResponse.js';
+import { outputNetworkTransfer } from '../filter/outputNetworkTransfer.js';
 import { checkVoltageHarmonicLimits } from '../limits/checkVoltageHarmonicLimits.js';
 import { GRID_CURRENT_LIMIT_CAUTION } from '../limits/gridCurrentLimits.js';
 import { HARMONIC_LIMIT_CAUTION } from '../limits/voltageHarmonicLimits.js';
@@ -21,17 +18,13 @@ import {
   phasorOf,
   type Complex,
 } from '../numeric/complex.js';
-import { weightedDistortion } from '../spectrum/distortion.js';
 import type { Harmonic } from '../spectrum/Harmonic.js';
 import { harmonics } from '../spectrum/harmonics.js';
-import { labelHarmonics } from '../spectrum/labelHarmonics.js';
+import { harmonicsOfPhasors } from '../spectrum/harmonicsOfPhasors.js';
 import { reducedCommonModeRange } from '../three-phase/reducedCommonModeRange.js';
-import { meanHarmonic } from '../spectrum/meanHarmonic.js';
 import { assertNumberInRange } from '../validation/assertions.js';
 import { withFieldPrefix } from '../validation/withFieldPrefix.js';
 import type { Waveform } from '../waveform/Waveform.js';
-import { runningIntegral } from '../waveform/runningIntegral.js';
-import { waveformMeanSquare } from '../waveform/waveformMeanSquare.js';
 import { assertInverterDesign } from './assertInverterDesign.js';
 import { defaultSpectrumOrder } from './defaultSpectrumOrder.js';
 import { designModulation } from './designModulation.js';
@@ -44,21 +37,22 @@ import type {
   CommonModeFigures,
   CurrentFigures,
   DesignReport,
-  PeriodSeries,
   PhaseCurrents,
-  VoltageFigures,
 } from './DesignReport.js';
 import type { InverterDesign } from './InverterDesign.js';
 import { MODULATION_METHOD_LABELS } from './Modulation.js';
 import { modulationVoltages, type NamedVoltage } from './modulationVoltages.js';
 import { spectrumLabelRatio } from './spectrumLabelRatio.js';
-import { voltageFigures } from './voltageFigures.js';
+import { designVoltagePhasors } from './designVoltagePhasors.js';
+import { filteredPhase, type FilteredPhase } from './filteredPhase.js';
+import { labelledVoltageFigures } from './labelledVoltageFigures.js';
+import { spectrumLabeller } from './spectrumLabeller.js';
 import { modulatorSignals } from './modulatorSignals.js';
 import { multilevelDcLinkSwitching } from './multilevelDcLinkSwitching.js';
 import { multilevelFigures } from './multilevelFigures.js';
 import { switchingLegs } from './switchingLegs.js';
 import { assertSemiconductorDevice } from '../losses/assertSemiconductorDevice.js';
-import { periodSynthesiser, synthesisSize, type PeriodSynthesiser } from './periodSynthesiser.js';
+import { periodSynthesiser, synthesisSize } from './periodSynthesiser.js';
 
 /** Options of {@link analyseDesign}. */
 export interface AnalyseDesignOptions {
@@ -129,6 +123,9 @@ const phaseSuffix = (phaseCount: number, phase: PhaseCurrents['phase']): string 
  * - With a `grid`: the grid is each phase's load (r, l2 + l, the grid source as its EMF; see
  *   `gridLoad`), and `grid` holds the grid-connected figures (`gridFigures`: grid and inverter
  *   current spectra, resonance, damping loss, the current limits of IEEE Std 519 and 1547).
+ * - A carrier that is no whole multiple of the fundamental (sine-triangle, three-phase carrier,
+ *   space vector): every figure over the span of q periods of its nearest ratio p/q, stated in
+ *   `carrierSpan` (`analyseDesignSpan`; no filter or grid there).
  *
  * @throws ParameterRangeError / ParameterTypeError naming the field by its path in the design
  *   (`vdc`, `carrierFrequency`, `modulation.ma`, `load.r`, `filter.c`, …) or the option
@@ -170,13 +167,21 @@ export function analyseDesign(
     MAX_ANALYSIS_ORDER,
     Math.max(defaultSpectrumOrder(given), 10 * (frequencyRatio ?? 200) + 10),
   );
-  const label = (spectrum: readonly Harmonic[]) =>
-    labelHarmonics(spectrum.slice(0, maxOrder + 1), labelRatio);
+  // Every spectrum is labelled from one table, and every voltage read once (see designVoltagePhasors).
+  const labeller = spectrumLabeller(maxOrder, labelRatio);
+  const label = labeller.harmonics;
+  const spectra = designVoltagePhasors(
+    voltages,
+    filter === null ? maxOrder : Math.max(analysisOrder, currentOrder),
+  );
 
   const phaseVoltages = voltages.phases.map((v) => v.waveform);
-  const bridge = voltageFigures(voltages.phases[0] as NamedVoltage, { maxOrder, frequencyRatio });
+  const bridge = labelledVoltageFigures(
+    voltages.phases[0] as NamedVoltage,
+    labeller.phasors(spectra.phase(0)),
+  );
   const line = voltages.lines[0];
-  const lineToLine = line ? voltageFigures(line, { maxOrder, frequencyRatio }) : null;
+  const lineToLine = line ? labelledVoltageFigures(line, labeller.phasors(spectra.line(0))) : null;
   const load = design.load ?? null;
   const frequency = design.fundamentalFrequency;
   const network: OutputNetwork = { filter, load: load === null ? null : { r: load.r, l: load.l } };
@@ -185,8 +190,6 @@ export function analyseDesign(
   let currents: PhaseCurrents[] = [];
   let loadPower: number | null = null;
   let inverterSamples: Float64Array[] = [];
-  // Phase a's bridge spectrum to the analysis order, when a filtered phase has taken it.
-  let bridgeSpectrum: Harmonic[] | null = null;
   // One transform for every sampled series of a filtered design (and its DC-link spectrum).
   const synthesiser =
     filter === null
@@ -209,31 +212,31 @@ export function analyseDesign(
       inverterSamples = solved.map((s) => s.inverterSamples);
     }
   } else {
+    const omega = TAU * frequency;
+    // The phases share one network: its response to each order is solved once for all three.
+    const transfer = outputNetworkTransfer(network, omega, Math.max(analysisOrder, currentOrder));
     const solved = phaseVoltages.map((waveform, k) =>
-      filteredPhase(waveform, {
+      filteredPhase(waveform, spectra.phase(k), {
         network,
-        design,
-        phaseIndex: k,
-        phaseCount: voltages.phaseCount,
+        transfer,
+        omega,
+        emf: emfPhasorOf(design, k),
+        loadR: load === null ? null : load.r,
+        phase: PHASES[k] ?? 'a',
+        suffix: phaseSuffix(voltages.phaseCount, PHASES[k] ?? 'a'),
         // Phase a's output spectrum is reported to the analysis order; b and c give currents only.
+        outputName:
+          k === 0
+            ? `filter output, ${voltages.phaseCount === 3 ? 'phase a to star point' : 'across the capacitor'}`
+            : null,
         spectrumOrder: k === 0 ? analysisOrder : currentOrder,
         currentOrder,
         points,
         synthesiser,
+        labeller,
       }),
     );
-    const first = solved[0] as FilteredPhase;
-    bridgeSpectrum = first.bridgeSpectrum;
-    const outputSpectrum = first.outputSpectrum;
-    output = {
-      ...distortionFigures(
-        `filter output, ${voltages.phaseCount === 3 ? 'phase a to star point' : 'across the capacitor'}`,
-        outputSpectrum,
-        label,
-      ),
-      thdUpperBound: first.outputThdUpperBound,
-      series: first.outputSeries as PeriodSeries,
-    };
+    output = (solved[0] as FilteredPhase).output;
     currents = solved.map((s) => s.currents);
     loadPower = load === null ? null : solved.reduce((sum, s) => sum + s.loadPower, 0);
     inverterSamples = solved.map((s) => s.inverterSamples);
@@ -279,6 +282,7 @@ export function analyseDesign(
             maxOrder,
             frequencyRatio,
             label,
+            spectrum: labeller.phasors(spectra.commonMode()),
             reducedRange: reducedRangeOf(design),
             name:
               voltages.multilevel?.topology === 'cascaded-h-bridge'
@@ -369,7 +373,7 @@ export function analyseDesign(
         : gridFigures({
             grid,
             network,
-            bridge: bridgeSpectrum ?? harmonics(phaseVoltages[0] as Waveform, analysisOrder),
+            bridge: harmonicsOfPhasors(spectra.phase(0), analysisOrder + 1),
             source: phasorOf(load?.emf?.amplitude ?? 0, load?.emf?.phase ?? 0),
             phaseCount: voltages.phaseCount,
             fundamentalFrequency: frequency,
@@ -401,32 +405,10 @@ function reducedRangeOf(design: InverterDesign): CommonModeFigures['reducedRange
     : null;
 }
 
-type Labeller = (spectrum: readonly Harmonic[]) => DesignReport['bridge']['spectrum'];
-
-/** Figures of a voltage whose THD is a sum over its spectrum (thdUpperBound set by the caller). */
-function distortionFigures(
-  name: string,
-  spectrum: readonly Harmonic[],
-  label: Labeller,
-): VoltageFigures {
-  const fundamental = spectrum[1] as Harmonic;
-  let meanSquare = 0;
-  for (const h of spectrum)
-    meanSquare += h.order === 0 ? h.amplitude * h.amplitude : (h.amplitude * h.amplitude) / 2;
-  const labelled = label(spectrum);
-  const thd = weightedDistortion(spectrum, 0);
-  return {
-    name,
-    fundamental: fundamental.amplitude,
-    fundamentalPhase: fundamental.phase,
-    rms: Math.sqrt(meanSquare),
-    thd,
-    thdUpperBound: thd,
-    wthd: weightedDistortion(spectrum, 1),
-    exact: false,
-    spectrum: labelled,
-    spectrumThd: weightedDistortion(labelled, 0),
-  };
+/** This phase's back-EMF phasor at the fundamental (zero without one): the EMF lags by k·2π/3. */
+function emfPhasorOf(design: InverterDesign, phaseIndex: number): Complex {
+  const emf = design.load?.emf ? rlLoadOf(design, phaseIndex).emf : undefined;
+  return emf ? phasorOf(emf.amplitude, emf.phase) : { re: 0, im: 0 };
 }
 
 /** The load of phase k (0, 1, 2) as rlSteadyState takes it: the EMF lags by k·2π/3. */
@@ -498,239 +480,6 @@ function exactLoadCurrents(
     power: steady.power,
     inverterSamples: Float64Array.from(sampled.slice(waveform.edges.length)),
   };
-}
-
-interface FilteredPhase {
-  /** The bridge voltage's exact spectrum to the analysis order. */
-  bridgeSpectrum: Harmonic[];
-  outputSpectrum: Harmonic[];
-  inverterSamples: Float64Array;
-  outputThdUpperBound: number;
-  /** The output voltage's time series: phase a's only (the report shows phase a's), else null. */
-  outputSeries: PeriodSeries | null;
-  currents: PhaseCurrents;
-  loadPower: number;
-}
-
-/**
- * One phase through the loaded filter, per harmonic to the analysis order. Its currents are
- * sampled on the synthesiser's grid of S angles 2πj/S: the load and inverter currents in one
- * transform, the capacitor current as their difference (Kirchhoff's current law holds phasor by
- * phasor, so it holds sample by sample to rounding), and the output voltage for phase a alone.
- * Peaks and ripple peak-to-peak are the extremes of those samples: at S ≥ 16·N, with N the
- * analysis order, each harmonic is sampled at least 16 times a cycle, so a sinusoid's peak is
- * read within 1 − cos(π/16) ≈ 1.9 % of its own amplitude at worst (the switching tail is exact at
- * the samples and piecewise linear between them).
- */
-function filteredPhase(
-  waveform: Waveform,
-  context: {
-    network: OutputNetwork;
-    design: InverterDesign;
-    phaseIndex: number;
-    phaseCount: number;
-    /** Order the output spectrum and its THD bound are solved to. */
-    spectrumOrder: number;
-    /** Order the current and output series are summed to (≤ spectrumOrder), before the tail. */
-    currentOrder: number;
-    points: number;
-    synthesiser: PeriodSynthesiser;
-  },
-): FilteredPhase {
-  const { network, design, phaseIndex, phaseCount, spectrumOrder, currentOrder, points } = context;
-  const { synthesiser } = context;
-  const phase = PHASES[phaseIndex] ?? 'a';
-  const omega = TAU * design.fundamentalFrequency;
-  const bridge = harmonics(waveform, spectrumOrder);
-  const load = design.load ?? null;
-  const emf = load?.emf
-    ? phasorOf(load.emf.amplitude, load.emf.phase - (phaseIndex * TAU) / 3)
-    : { re: 0, im: 0 };
-  const solved: OutputNetworkPhasors[] = bridge.map((h) =>
-    outputNetworkResponse(
-      network,
-      omega * h.order,
-      phasorOf(h.amplitude, h.phase),
-      h.order === 1 ? emf : { re: 0, im: 0 },
-    ),
-  );
-  const outputSpectrum = solved.map((s, order) => harmonicOf(order, s.output));
-
-  // Parseval tail bound: the bridge's mean square above the analysis order is exact; the
-  // filter passes at most the largest gain found above that order.
-  let bridgeSum = 0;
-  for (const h of bridge)
-    bridgeSum += h.order === 0 ? h.amplitude * h.amplitude : (h.amplitude * h.amplitude) / 2;
-  const bridgeTail = Math.max(0, waveformMeanSquare(waveform) - bridgeSum);
-  let tailGain = 0;
-  for (let k = 0, order = spectrumOrder + 1; k <= 10; k++, order *= 2) {
-    const response = outputNetworkResponse(network, omega * order, { re: 1, im: 0 });
-    tailGain = Math.max(tailGain, complexAbs(response.output));
-  }
-  const fundamental = outputSpectrum[1]?.amplitude ?? 0;
-  let harmonicSum = 0;
-  for (const h of outputSpectrum) if (h.order >= 2) harmonicSum += (h.amplitude * h.amplitude) / 2;
-  const outputThdUpperBound =
-    Math.sqrt(2 * (harmonicSum + tailGain * tailGain * bridgeTail)) / fundamental;
-
-  const { size, sine } = synthesiser;
-  const series = (values: Float64Array): PeriodSeries => {
-    const stride = Math.max(1, Math.floor(values.length / points));
-    const angles: number[] = [];
-    const picked: number[] = [];
-    for (let j = 0; j < values.length; j += stride) {
-      angles.push((TAU * j) / values.length);
-      picked.push(values[j] as number);
-    }
-    return { angles, values: picked };
-  };
-  const figures = (
-    name: string,
-    samples: Float64Array,
-    phasors: readonly Complex[],
-    tailMeanSquare: number,
-  ): CurrentFigures => {
-    let meanSquare = tailMeanSquare;
-    phasors.forEach((p, order) => {
-      meanSquare += order === 0 ? p.re * p.re : (p.re * p.re + p.im * p.im) / 2;
-    });
-    const first = phasors[1] ?? { re: 0, im: 0 };
-    const quarter = size / 4;
-    let peak = 0;
-    let low = Infinity;
-    let high = -Infinity;
-    for (let j = 0; j < size; j++) {
-      const value = samples[j] as number;
-      const cosine = sine[j < size - quarter ? j + quarter : j + quarter - size] as number;
-      const ripple = value - (first.re * (sine[j] as number) + first.im * cosine);
-      peak = Math.max(peak, Math.abs(value));
-      low = Math.min(low, ripple);
-      high = Math.max(high, ripple);
-    }
-    const fundamentalCurrent = complexAbs(first);
-    return {
-      name: `${name}${phaseSuffix(phaseCount, phase)}`,
-      rms: Math.sqrt(meanSquare),
-      peak,
-      fundamental: fundamentalCurrent,
-      fundamentalPhase: Math.atan2(first.im, first.re),
-      rippleRms: Math.sqrt(Math.max(0, meanSquare - (fundamentalCurrent * fundamentalCurrent) / 2)),
-      ...currentDistortion(Math.sqrt(meanSquare), fundamentalCurrent),
-      ripplePeakToPeak: high - low,
-      series: series(samples),
-    };
-  };
-
-  // The switch current above N (the tail) is linear in the bridge's running integral: its
-  // harmonic part joins the inverter phasors, its exact part is added to the samples.
-  const held = solved.slice(0, currentOrder + 1);
-  const tail = switchingTail(
-    waveform,
-    bridge.slice(0, currentOrder + 1),
-    network.filter,
-    omega,
-    size,
-  );
-  const loadPhasors = held.map((s) => s.loadCurrent);
-  const capacitorPhasors = held.map((s) => s.capacitorCurrent);
-  const inverterPhasors = held.map((s) => s.inverterCurrent);
-  const inverterSynthesised =
-    tail === null
-      ? inverterPhasors
-      : inverterPhasors.map((p, order) => {
-          const correction = tail.phasors[order] as Complex;
-          return { re: p.re + correction.re, im: p.im + correction.im };
-        });
-  const [inverterSamples, loadSamples] = synthesiser.pair(
-    inverterSynthesised,
-    load === null ? null : loadPhasors,
-  );
-  if (tail !== null)
-    for (let j = 0; j < size; j++)
-      inverterSamples[j] = (inverterSamples[j] as number) + (tail.samples[j] as number);
-  const capacitorSamples =
-    loadSamples === null
-      ? inverterSamples
-      : inverterSamples.map((value, j) => value - (loadSamples[j] as number));
-  const tailMeanSquare = tail?.meanSquare ?? 0;
-  const loadCurrent =
-    loadSamples === null ? null : figures('load current', loadSamples, loadPhasors, 0);
-  return {
-    bridgeSpectrum: bridge,
-    inverterSamples,
-    outputSpectrum,
-    outputThdUpperBound,
-    outputSeries:
-      phaseIndex === 0
-        ? series(
-            synthesiser.pair(
-              held.map((s) => s.output),
-              null,
-            )[0],
-          )
-        : null,
-    currents: {
-      phase,
-      inverter: figures(
-        'inverter (switch) current',
-        inverterSamples,
-        inverterPhasors,
-        tailMeanSquare,
-      ),
-      capacitor: figures('capacitor current', capacitorSamples, capacitorPhasors, tailMeanSquare),
-      load: loadCurrent,
-    },
-    loadPower:
-      load === null || loadCurrent === null ? 0 : load.r * loadCurrent.rms * loadCurrent.rms,
-  };
-}
-
-/**
- * The inverter current above the analysis order N, where the series inductor alone sets it
- * (|Z_s| ≫ the shunt branch there, so nearly all of it flows into the capacitor):
- * i_tail = (Φ − Φ_N)/(ω·L), with Φ the bridge voltage's running integral (exact, piecewise
- * linear) and Φ_N its harmonics to N (v = L·di/dt, standard circuit analysis). Its mean square
- * is (Var Φ − Σ_{n≤N} (V_n/n)²/2)/(ωL)² by Parseval. Returned as the two parts the caller adds:
- * the phasors of −Φ_N/(ωL) (synthesised with the inverter current's own) and the samples of
- * (Φ − mean Φ)/(ωL) on the S angles 2πj/S. Null for damping across the inductor, whose series
- * branch is not inductive at high frequency, and when N is not ten times past the LC resonance
- * (the sum to N is used as it is there).
- */
-function switchingTail(
-  waveform: Waveform,
-  bridge: readonly Harmonic[],
-  filter: OutputNetwork['filter'],
-  omega: number,
-  size: number,
-): { phasors: Complex[]; samples: Float64Array; meanSquare: number } | null {
-  if (filter === null || filter.dampingPlacement === 'parallel-with-inductor') return null;
-  // Only valid well past the resonance, where the shunt branch shorts the load out.
-  const resonanceOrder = 1 / (Math.sqrt(filter.l * filter.c) * omega);
-  if (bridge.length - 1 < 10 * resonanceOrder) return null;
-  const integral = runningIntegral(waveform);
-  const reactance = omega * filter.l;
-  const phasors: Complex[] = bridge.map((h) => {
-    // ∫ A·sin(nθ + φ) dθ = (A/n)·sin(nθ + φ − π/2): phasor (A/n)·e^{j(φ − π/2)}, negated and over ωL.
-    if (h.order === 0) return { re: 0, im: 0 };
-    const p = phasorOf(h.amplitude / h.order, h.phase - Math.PI / 2);
-    return { re: -p.re / reactance, im: -p.im / reactance };
-  });
-  const whole = integral.at(size);
-  const samples = new Float64Array(size);
-  for (let j = 0; j < size; j++) samples[j] = ((whole[j] as number) - integral.mean) / reactance;
-  let heldVariance = 0;
-  for (const h of bridge) if (h.order > 0) heldVariance += (h.amplitude / h.order) ** 2 / 2;
-  return {
-    phasors,
-    samples,
-    meanSquare: Math.max(0, integral.variance - heldVariance) / (reactance * reactance),
-  };
-}
-
-/** A phasor as a harmonic in the `harmonics` convention (order 0: the mean's sign in the phase). */
-function harmonicOf(order: number, phasor: Complex): Harmonic {
-  if (order === 0) return meanHarmonic(phasor.re);
-  return { order, amplitude: complexAbs(phasor), phase: Math.atan2(phasor.im, phasor.re) };
 }
 
 function filterFigures(

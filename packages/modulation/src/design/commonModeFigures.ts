@@ -18,6 +18,8 @@ export function commonModeFigures(
     maxOrder: number;
     frequencyRatio: number | null;
     label: (s: readonly Harmonic[]) => CommonModeFigures['spectrum'];
+    /** The labelled spectrum to maxOrder when the caller has it (the report reads it from its legs'); else read here. */
+    spectrum?: CommonModeFigures['spectrum'];
     reducedRange: CommonModeFigures['reducedRange'];
     /** What it is measured between (the DC midpoint of a bridge on one DC link). */
     name: string;
@@ -37,7 +39,7 @@ export function commonModeFigures(
     rms: Math.sqrt(waveformMeanSquare(waveform)),
     stepsPerPeriod: steps,
     stepsPerCarrierPeriod: frequencyRatio === null ? null : steps / frequencyRatio,
-    spectrum: label(harmonics(waveform, maxOrder)),
+    spectrum: context.spectrum ?? label(harmonics(waveform, maxOrder)),
     reducedRange,
   };
 }

@@ -1,5 +1,5 @@
 import FFT from 'fft.js';
-import type { Complex } from '../numeric/complex.js';
+import type { HarmonicPhasors } from '../spectrum/harmonicPhasors.js';
 
 /** What {@link periodSynthesiser} returns: one FFT of size S and its buffers, reused call after call. */
 export interface PeriodSynthesiser {
@@ -10,13 +10,14 @@ export interface PeriodSynthesiser {
   /** sin(2πj/S), j = 0..S−1 (cos(2πj/S) is sine[(j + S/4) mod S]). */
   readonly sine: Float64Array;
   /**
-   * One period of x(θ) = X₀ + Σ_{n≥1} |X_n|·sin(nθ + arg X_n) for each of two phasor lists
-   * (index n holds X_n; X₀ real; at most S/2 − 1 orders), sampled at the S angles 2πj/S.
+   * One period of x(θ) = X₀ + Σ_{n≥1} |X_n|·sin(nθ + arg X_n) for each of two phasor spectra
+   * (orders 0..count − 1 of each; X₀ real; count at most S/2), sampled at the S angles 2πj/S.
    * @returns the samples of `first`, and of `second` (null when it is null)
    */
   pair(
-    first: readonly Complex[],
-    second: readonly Complex[] | null,
+    first: HarmonicPhasors,
+    second: HarmonicPhasors | null,
+    count: number,
   ): [Float64Array, Float64Array | null];
 }
 
@@ -40,24 +41,25 @@ export function periodSynthesiser(size: number): PeriodSynthesiser {
   const table = fft.table as number[];
   for (let k = 0; k < size; k++) sine[k] = -(table[2 * k + 1] as number);
   const pair = (
-    first: readonly Complex[],
-    second: readonly Complex[] | null,
+    first: HarmonicPhasors,
+    second: HarmonicPhasors | null,
+    count: number,
   ): [Float64Array, Float64Array | null] => {
     input.fill(0);
-    const highest = Math.max(first.length, second?.length ?? 0) - 1;
+    const highest = count - 1;
     if (2 * highest + 2 > size) throw new RangeError(`order ${highest} aliases at ${size} samples`);
-    const none: Complex = { re: 0, im: 0 };
+    const zeros = new Float64Array(count);
+    const { re: xRe, im: xIm } = first;
+    const { re: yRe, im: yIm } = second ?? { re: zeros, im: zeros };
     // Order 0: Z₀ = X₀ + j·Y₀, both real; conj(Z₀) goes in.
-    input[0] = first[0]?.re ?? 0;
-    input[1] = -(second?.[0]?.re ?? 0);
+    input[0] = xRe[0] as number;
+    input[1] = -(yRe[0] as number);
     for (let n = 1; n <= highest; n++) {
-      const x = first[n] ?? none;
-      const y = second?.[n] ?? none;
       // c = X·e^{−jπ/2} = x.im − j·x.re; d likewise from y.
-      const cr = x.im;
-      const ci = -x.re;
-      const dr = y.im;
-      const di = -y.re;
+      const cr = xIm[n] as number;
+      const ci = -(xRe[n] as number);
+      const dr = yIm[n] as number;
+      const di = -(yRe[n] as number);
       // Z_n = (c + j·d)/2, Z_{−n} = (conj c + j·conj d)/2; their conjugates go in.
       input[2 * n] = (cr - di) / 2;
       input[2 * n + 1] = -(ci + dr) / 2;

@@ -1,20 +1,9 @@
-import { TAU } from '../math.js';
-import { assertNumberInRange } from '../validation/assertions.js';
-import { assertWaveform } from '../waveform/assertWaveform.js';
 import type { Waveform } from '../waveform/Waveform.js';
-import { waveformMean } from '../waveform/waveformMean.js';
 import type { Harmonic } from './Harmonic.js';
-import { meanHarmonic } from './meanHarmonic.js';
+import { harmonicPhasors } from './harmonicPhasors.js';
+import { harmonicsOfPhasors } from './harmonicsOfPhasors.js';
 
-/** The highest harmonic order {@link harmonics} computes; bounds the cost of one call. */
-export const MAX_HARMONIC_ORDER = 100_000;
-
-/**
- * Orders between exact re-evaluations of e^{-jnθ} in the rotation recurrence: rounding grows
- * by about one ulp per step, so it stays below ~256 ulp (6e-14 relative) while sin/cos run
- * once per block instead of once per order.
- */
-const RESEED_INTERVAL = 256;
+export { MAX_HARMONIC_ORDER } from './harmonicPhasors.js';
 
 /**
  * Exact Fourier series of a piecewise-constant waveform, orders 0..maxOrder.
@@ -22,7 +11,7 @@ const RESEED_INTERVAL = 256;
  * A piecewise-constant v(θ) has derivative Σ Δᵢ·δ(θ − θᵢ), where Δᵢ is the jump at edge θᵢ, so
  * its complex coefficients are c_n = Σ Δᵢ e^{−jnθᵢ} / (2πjn) for n ≥ 1 (standard Fourier
  * analysis of a step function). No sampling and no FFT: the only error is floating-point
- * rounding (about 1e−13 of the largest level).
+ * rounding (about 1e−13 of the largest level). The sums are `harmonicPhasors`'.
  *
  * Convention: v(θ) = mean + Σ amplitude_n · sin(nθ + phase_n), θ in radians; the mean is
  * order 0's amplitude·cos(phase) (phase 0 or π: amplitudes are never negative).
@@ -32,115 +21,5 @@ const RESEED_INTERVAL = 256;
  * @returns maxOrder + 1 entries, index = order
  */
 export function harmonics(waveform: Waveform, maxOrder: number): Harmonic[] {
-  assertWaveform(waveform);
-  assertNumberInRange('maxOrder', maxOrder, { min: 0, max: MAX_HARMONIC_ORDER, integer: true });
-  const { edges, levels } = waveform;
-  const edgeCount = edges.length;
-  // sinSum[n] = Σ Δᵢ sin(nθᵢ), cosSum[n] = Σ Δᵢ cos(nθᵢ)
-  const sinSum = new Float64Array(maxOrder + 1);
-  const cosSum = new Float64Array(maxOrder + 1);
-  // Half-wave symmetry about a level, v(θ + π) = 2c − v(θ): the second half's jumps repeat the
-  // first half's negated, which doubles the odd orders and cancels the even ones.
-  const symmetric = hasHalfWaveSymmetry(waveform);
-  const jumps: { theta: number; jump: number }[] = [];
-  for (let i = 0; i < (symmetric ? edgeCount / 2 : edgeCount); i++) {
-    const jump = (levels[i] as number) - (levels[(i + edgeCount - 1) % edgeCount] as number);
-    if (jump !== 0) jumps.push({ theta: edges[i] as number, jump: symmetric ? 2 * jump : jump });
-  }
-  for (let i = 0; i < jumps.length; i += 4) {
-    accumulateFourEdges(sinSum, cosSum, jumps.slice(i, i + 4), maxOrder, symmetric ? 2 : 1);
-  }
-  const result: Harmonic[] = new Array<Harmonic>(maxOrder + 1);
-  // A half-wave symmetric waveform's mean is its centre level exactly; summing the segments
-  // would leave rounding (−3e−13 V for a ±400 V bridge) where the answer is a clean 0.
-  const mean = symmetric
-    ? ((levels[0] as number) + (levels[edgeCount / 2] as number)) / 2
-    : waveformMean(waveform);
-  result[0] = meanHarmonic(mean);
-  for (let n = 1; n <= maxOrder; n++) {
-    // v = a_n cos nθ + b_n sin nθ with a_n = −ΣΔ sin/(πn), b_n = ΣΔ cos/(πn)
-    const scale = 1 / (Math.PI * n);
-    const a = -(sinSum[n] as number) * scale;
-    const b = (cosSum[n] as number) * scale;
-    result[n] = { order: n, amplitude: Math.sqrt(a * a + b * b), phase: Math.atan2(a, b) };
-  }
-  return result;
-}
-
-/**
- * Tolerance (radians) for pairing an edge with the one half a period later: 4 ulp at 2π. An
- * edge off by that much moves any amplitude by at most |jump|·tolerance/π (the 1/n of the
- * coefficient cancels the n of the phase), below 1e-14 of the jump.
- */
-const SYMMETRY_TOLERANCE = 4 * Number.EPSILON * TAU;
-
-/** True when v(θ + π) = 2c − v(θ) for one constant c, to {@link SYMMETRY_TOLERANCE}. */
-function hasHalfWaveSymmetry({ edges, levels }: Waveform): boolean {
-  const count = edges.length;
-  if (count < 2 || count % 2 === 1) return false;
-  const half = count / 2;
-  const levelSum = (levels[0] as number) + (levels[half] as number);
-  for (let i = 0; i < half; i++) {
-    if ((levels[i] as number) + (levels[i + half] as number) !== levelSum) return false;
-    const gap = (edges[i + half] as number) - (edges[i] as number) - Math.PI;
-    if (Math.abs(gap) > SYMMETRY_TOLERANCE) return false;
-  }
-  return true;
-}
-
-/**
- * Adds Σ jump·sin(nθ) and Σ jump·cos(nθ) over up to four edges for the orders n = 1,
- * 1 + orderStep, … ≤ maxOrder into the sums. Each edge's e^{jnθ} is rotated one step at a time
- * and re-evaluated exactly at the start of every block; four edges run side by side so their
- * recurrences overlap in the pipeline.
- */
-function accumulateFourEdges(
-  sinSum: Float64Array,
-  cosSum: Float64Array,
-  group: readonly { theta: number; jump: number }[],
-  maxOrder: number,
-  orderStep: number,
-): void {
-  const edge = (k: number): { theta: number; jump: number } => group[k] ?? { theta: 0, jump: 0 };
-  const [e0, e1, e2, e3] = [edge(0), edge(1), edge(2), edge(3)];
-  const [k0, k1, k2, k3] = [e0, e1, e2, e3].map((e) => Math.cos(orderStep * e.theta)) as [
-    number,
-    number,
-    number,
-    number,
-  ];
-  const [q0, q1, q2, q3] = [e0, e1, e2, e3].map((e) => Math.sin(orderStep * e.theta)) as [
-    number,
-    number,
-    number,
-    number,
-  ];
-  const blockSpan = RESEED_INTERVAL * orderStep;
-  for (let blockStart = 1; blockStart <= maxOrder; blockStart += blockSpan) {
-    let c0 = e0.jump * Math.cos(blockStart * e0.theta);
-    let s0 = e0.jump * Math.sin(blockStart * e0.theta);
-    let c1 = e1.jump * Math.cos(blockStart * e1.theta);
-    let s1 = e1.jump * Math.sin(blockStart * e1.theta);
-    let c2 = e2.jump * Math.cos(blockStart * e2.theta);
-    let s2 = e2.jump * Math.sin(blockStart * e2.theta);
-    let c3 = e3.jump * Math.cos(blockStart * e3.theta);
-    let s3 = e3.jump * Math.sin(blockStart * e3.theta);
-    const blockEnd = Math.min(maxOrder, blockStart + blockSpan - 1);
-    for (let n = blockStart; n <= blockEnd; n += orderStep) {
-      sinSum[n] = (sinSum[n] as number) + (s0 + s1 + (s2 + s3));
-      cosSum[n] = (cosSum[n] as number) + (c0 + c1 + (c2 + c3));
-      let next = c0 * k0 - s0 * q0;
-      s0 = s0 * k0 + c0 * q0;
-      c0 = next;
-      next = c1 * k1 - s1 * q1;
-      s1 = s1 * k1 + c1 * q1;
-      c1 = next;
-      next = c2 * k2 - s2 * q2;
-      s2 = s2 * k2 + c2 * q2;
-      c2 = next;
-      next = c3 * k3 - s3 * q3;
-      s3 = s3 * k3 + c3 * q3;
-      c3 = next;
-    }
-  }
+  return harmonicsOfPhasors(harmonicPhasors(waveform, maxOrder));
 }

@@ -1,0 +1,72 @@
+import { harmonicPhasors, type HarmonicPhasors } from '../spectrum/harmonicPhasors.js';
+import type { ModulationVoltages, NamedVoltage } from './modulationVoltages.js';
+
+/** The spectra of a design's voltages, each read once (see {@link designVoltagePhasors}). */
+export interface DesignVoltagePhasors {
+  /** Phase k's voltage (a, b, c = 0, 1, 2; a single-phase bridge's output is phase 0). */
+  phase(index: number): HarmonicPhasors;
+  /** Line k's voltage, leg k − leg k+1 (three-phase only). */
+  line(index: number): HarmonicPhasors;
+  /** The common-mode voltage (v_a + v_b + v_c)/3 of the legs (three-phase only). */
+  commonMode(): HarmonicPhasors;
+}
+
+/**
+ * The exact spectra (orders 0..maxOrder) of the voltages a design report shows, each computed
+ * once. A three-phase bridge's phase, line and common-mode voltages are fixed linear
+ * combinations of its three leg voltages (phase to star point (2·v_k − v_k+1 − v_k+2)/3, line
+ * v_k − v_k+1, common mode (v_a + v_b + v_c)/3: standard circuit analysis, as
+ * `modulationVoltages` builds their waveforms), and the Fourier series is linear, so their
+ * phasors are the same combinations of the legs' three spectra: equal to reading each waveform
+ * on its own to rounding, for the cost of three legs (each leg has a third of a phase
+ * voltage's edges). A single-phase bridge's output is read as it is. Internal: part of
+ * analyseDesign.
+ * @param voltages - the design's voltages
+ * @param maxOrder - highest order, an integer in [0, 100000]
+ */
+export function designVoltagePhasors(
+  voltages: ModulationVoltages,
+  maxOrder: number,
+): DesignVoltagePhasors {
+  const size = maxOrder + 1;
+  const legs =
+    voltages.phaseCount === 3 && voltages.legs.length === 3
+      ? voltages.legs.map((leg) => harmonicPhasors(leg.waveform, maxOrder))
+      : null;
+  const leg = (k: number): HarmonicPhasors => {
+    if (legs === null) throw new RangeError('a three-phase bridge has legs; this one has none');
+    return legs[((k % 3) + 3) % 3] as HarmonicPhasors;
+  };
+  const cache = new Map<string, HarmonicPhasors>();
+  const once = (key: string, read: () => HarmonicPhasors): HarmonicPhasors => {
+    const known = cache.get(key);
+    if (known !== undefined) return known;
+    const phasors = read();
+    cache.set(key, phasors);
+    return phasors;
+  };
+  /** Σ weight·leg over three legs from `first`, order by order (weights as the waveforms'). */
+  const combine = (
+    first: number,
+    value: (own: number, next: number, last: number) => number,
+  ): HarmonicPhasors => {
+    const [a, b, c] = [leg(first), leg(first + 1), leg(first + 2)];
+    const re = new Float64Array(size);
+    const im = new Float64Array(size);
+    for (let n = 0; n < size; n++) {
+      re[n] = value(a.re[n] as number, b.re[n] as number, c.re[n] as number);
+      im[n] = value(a.im[n] as number, b.im[n] as number, c.im[n] as number);
+    }
+    return { re, im };
+  };
+  return {
+    phase: (index) =>
+      once(`phase ${index}`, () =>
+        legs === null
+          ? harmonicPhasors((voltages.phases[index] as NamedVoltage).waveform, maxOrder)
+          : combine(index, (own, next, last) => (2 * own - next - last) / 3),
+      ),
+    line: (index) => once(`line ${index}`, () => combine(index, (own, next) => own - next)),
+    commonMode: () => once('common mode', () => combine(0, (a, b, c) => (a + b + c) / 3)),
+  };
+}

@@ -1,0 +1,361 @@
+import {
+  outputNetworkResponse,
+  type OutputNetwork,
+  type OutputNetworkPhasors,
+} from '../filter/outputNetworkResponse.js';
+import type { OutputNetworkTransfer } from '../filter/outputNetworkTransfer.js';
+import { currentDistortion } from '../load/currentDistortion.js';
+import { TAU } from '../math.js';
+import type { Complex } from '../numeric/complex.js';
+import { weightedDistortion } from '../spectrum/distortion.js';
+import type { HarmonicPhasors } from '../spectrum/harmonicPhasors.js';
+import type { Waveform } from '../waveform/Waveform.js';
+import { runningIntegral } from '../waveform/runningIntegral.js';
+import { waveformMeanSquare } from '../waveform/waveformMeanSquare.js';
+import type {
+  CurrentFigures,
+  DesignReport,
+  PeriodSeries,
+  PhaseCurrents,
+  VoltageFigures,
+} from './DesignReport.js';
+import type { PeriodSynthesiser } from './periodSynthesiser.js';
+import type { SpectrumLabeller } from './spectrumLabeller.js';
+
+/** What {@link filteredPhase} gives for one phase. */
+export interface FilteredPhase {
+  /** The inverter current on the synthesiser's S angles 2πj/S, amperes. */
+  inverterSamples: Float64Array;
+  /** The output voltage's figures, for the phase asked for them (the report shows phase a's), else null. */
+  output: NonNullable<DesignReport['output']> | null;
+  currents: PhaseCurrents;
+  /** Mean power into the load's resistance, watts (0 without a load). */
+  loadPower: number;
+}
+
+/** How {@link filteredPhase} reads one phase. */
+export interface FilteredPhaseContext {
+  network: OutputNetwork;
+  /** The network's response to a unit bridge voltage to spectrumOrder at least (`outputNetworkTransfer`). */
+  transfer: OutputNetworkTransfer;
+  /** Fundamental angular frequency, rad/s. */
+  omega: number;
+  /** This phase's back-EMF phasor at the fundamental, volts (zero for none). */
+  emf: Complex;
+  /** Load resistance, ohms, or null without a load. */
+  loadR: number | null;
+  phase: PhaseCurrents['phase'];
+  /** Added to each current's name (`, phase a` on a three-phase bridge). */
+  suffix: string;
+  /** Name of the output voltage's figures, or null when this phase gives none. */
+  outputName: string | null;
+  /** Order the output spectrum and its THD bound are solved to. */
+  spectrumOrder: number;
+  /** Order the current and output series are summed to (≤ spectrumOrder), before the tail. */
+  currentOrder: number;
+  points: number;
+  synthesiser: PeriodSynthesiser;
+  labeller: SpectrumLabeller;
+}
+
+/**
+ * Internal (part of analyseDesign): one phase through the loaded filter, per harmonic to the
+ * analysis order: the bridge voltage's phasors (exact, to spectrumOrder at least) times the
+ * network's response to each order (`outputNetworkTransfer`), the fundamental solved with the
+ * back-EMF (`outputNetworkResponse`). Its currents are sampled on the synthesiser's grid of S
+ * angles 2πj/S: the load and inverter currents in one transform, the capacitor current as
+ * their difference (Kirchhoff's current law holds phasor by phasor, so it holds sample by
+ * sample to rounding), and the output voltage for the phase that reports it. Peaks and ripple
+ * peak-to-peak are the extremes of those samples: at S ≥ 16·N, with N the analysis order, each
+ * harmonic is sampled at least 16 times a cycle, so a sinusoid's peak is read within
+ * 1 − cos(π/16) ≈ 1.9 % of its own amplitude at worst (the switching tail is exact at the
+ * samples and piecewise linear between them).
+ *
+ * The output's THD beyond spectrumOrder is bounded by Parseval: the bridge's remaining mean
+ * square (exact) times the largest filter gain found above the order (|H| sampled at
+ * (N+1)·2^k, k = 0..10, and assumed not to rise between: true past the resonance).
+ * @param waveform - this phase's bridge voltage, one period, volts
+ * @param bridge - its phasors, orders 0..spectrumOrder at least
+ */
+export function filteredPhase(
+  waveform: Waveform,
+  bridge: HarmonicPhasors,
+  context: FilteredPhaseContext,
+): FilteredPhase {
+  const { network, transfer, omega, emf, loadR, phase, suffix, outputName } = context;
+  const { spectrumOrder, currentOrder, points, synthesiser, labeller } = context;
+  const solved = solvePhase(bridge, transfer, spectrumOrder + 1, (order, voltage) =>
+    outputNetworkResponse(network, omega * order, voltage, emf),
+  );
+  // The currents are summed to the current order (the output spectrum to spectrumOrder).
+  const held = Math.min(spectrumOrder, currentOrder) + 1;
+
+  const { size, sine } = synthesiser;
+  const series = (values: Float64Array): PeriodSeries => {
+    const stride = Math.max(1, Math.floor(values.length / points));
+    const angles: number[] = [];
+    const picked: number[] = [];
+    for (let j = 0; j < values.length; j += stride) {
+      angles.push((TAU * j) / values.length);
+      picked.push(values[j] as number);
+    }
+    return { angles, values: picked };
+  };
+  const figures = (
+    name: string,
+    samples: Float64Array,
+    phasors: HarmonicPhasors,
+    tailMeanSquare: number,
+  ): CurrentFigures => {
+    const { re, im } = phasors;
+    let meanSquare = tailMeanSquare + (re[0] as number) * (re[0] as number);
+    for (let n = 1; n < held; n++) {
+      const a = re[n] as number;
+      const b = im[n] as number;
+      meanSquare += (a * a + b * b) / 2;
+    }
+    const firstRe = held > 1 ? (re[1] as number) : 0;
+    const firstIm = held > 1 ? (im[1] as number) : 0;
+    const quarter = size / 4;
+    let peak = 0;
+    let low = Infinity;
+    let high = -Infinity;
+    for (let j = 0; j < size; j++) {
+      const value = samples[j] as number;
+      const cosine = sine[j < size - quarter ? j + quarter : j + quarter - size] as number;
+      const ripple = value - (firstRe * (sine[j] as number) + firstIm * cosine);
+      const magnitude = Math.abs(value);
+      if (magnitude > peak) peak = magnitude;
+      if (ripple < low) low = ripple;
+      if (ripple > high) high = ripple;
+    }
+    const fundamentalCurrent = Math.hypot(firstRe, firstIm);
+    return {
+      name: `${name}${suffix}`,
+      rms: Math.sqrt(meanSquare),
+      peak,
+      fundamental: fundamentalCurrent,
+      fundamentalPhase: Math.atan2(firstIm, firstRe),
+      rippleRms: Math.sqrt(Math.max(0, meanSquare - (fundamentalCurrent * fundamentalCurrent) / 2)),
+      ...currentDistortion(Math.sqrt(meanSquare), fundamentalCurrent),
+      ripplePeakToPeak: high - low,
+      series: series(samples),
+    };
+  };
+
+  // The switch current above N (the tail) is linear in the bridge's running integral: its
+  // harmonic part joins the inverter phasors, its exact part is added to the samples.
+  const tail = switchingTail(waveform, bridge, solved.inverterCurrent, {
+    count: held,
+    filter: network.filter,
+    omega,
+    size,
+  });
+  const inverterSynthesised = tail === null ? solved.inverterCurrent : tail.added;
+  const [inverterSamples, loadSamples] = synthesiser.pair(
+    inverterSynthesised,
+    loadR === null ? null : solved.loadCurrent,
+    held,
+  );
+  if (tail !== null)
+    for (let j = 0; j < size; j++)
+      inverterSamples[j] = (inverterSamples[j] as number) + (tail.samples[j] as number);
+  const capacitorSamples =
+    loadSamples === null
+      ? inverterSamples
+      : inverterSamples.map((value, j) => value - (loadSamples[j] as number));
+  const tailMeanSquare = tail?.meanSquare ?? 0;
+  const loadCurrent =
+    loadSamples === null ? null : figures('load current', loadSamples, solved.loadCurrent, 0);
+  return {
+    inverterSamples,
+    output:
+      outputName === null
+        ? null
+        : {
+            ...outputFigures(outputName, solved.output, {
+              labeller,
+              thdUpperBound: outputThdUpperBound(waveform, bridge, solved.output, context),
+            }),
+            series: series(synthesiser.pair(solved.output, null, held)[0]),
+          },
+    currents: {
+      phase,
+      inverter: figures(
+        'inverter (switch) current',
+        inverterSamples,
+        solved.inverterCurrent,
+        tailMeanSquare,
+      ),
+      capacitor: figures(
+        'capacitor current',
+        capacitorSamples,
+        solved.capacitorCurrent,
+        tailMeanSquare,
+      ),
+      load: loadCurrent,
+    },
+    loadPower:
+      loadR === null || loadCurrent === null ? 0 : loadR * loadCurrent.rms * loadCurrent.rms,
+  };
+}
+
+/**
+ * The phase's network phasors at orders 0..count − 1: the unit response times the bridge
+ * voltage (superposition), the fundamental solved by `solveFundamental` with the EMF.
+ */
+function solvePhase(
+  bridge: HarmonicPhasors,
+  transfer: OutputNetworkTransfer,
+  count: number,
+  solveFundamental: (order: number, voltage: Complex) => OutputNetworkPhasors,
+): OutputNetworkTransfer {
+  const scaled = (unit: HarmonicPhasors): HarmonicPhasors => {
+    const re = new Float64Array(count);
+    const im = new Float64Array(count);
+    for (let n = 0; n < count; n++) {
+      const vr = bridge.re[n] as number;
+      const vi = bridge.im[n] as number;
+      const ur = unit.re[n] as number;
+      const ui = unit.im[n] as number;
+      re[n] = ur * vr - ui * vi;
+      im[n] = ur * vi + ui * vr;
+    }
+    return { re, im };
+  };
+  const solved: OutputNetworkTransfer = {
+    output: scaled(transfer.output),
+    inverterCurrent: scaled(transfer.inverterCurrent),
+    capacitorCurrent: scaled(transfer.capacitorCurrent),
+    loadCurrent: scaled(transfer.loadCurrent),
+  };
+  if (count > 1) {
+    const fundamental = solveFundamental(1, {
+      re: bridge.re[1] as number,
+      im: bridge.im[1] as number,
+    });
+    for (const part of ['output', 'inverterCurrent', 'capacitorCurrent', 'loadCurrent'] as const) {
+      solved[part].re[1] = fundamental[part].re;
+      solved[part].im[1] = fundamental[part].im;
+    }
+  }
+  return solved;
+}
+
+/** Figures of the output voltage, a sum over its spectrum (its THD bound found by the caller). */
+function outputFigures(
+  name: string,
+  phasors: HarmonicPhasors,
+  context: { labeller: SpectrumLabeller; thdUpperBound: number },
+): VoltageFigures {
+  const { re, im } = phasors;
+  const mean = re[0] as number;
+  let meanSquare = mean * mean;
+  let harmonicSquares = 0;
+  let weightedSquares = 0;
+  for (let n = 1; n < re.length; n++) {
+    const a = re[n] as number;
+    const b = im[n] as number;
+    const square = b * b + a * a;
+    meanSquare += square / 2;
+    if (n < 2) continue;
+    harmonicSquares += square;
+    weightedSquares += square / (n * n);
+  }
+  const first = Math.sqrt((im[1] as number) ** 2 + (re[1] as number) ** 2);
+  const spectrum = context.labeller.phasors(phasors);
+  return {
+    name,
+    fundamental: first,
+    fundamentalPhase: Math.atan2(im[1] as number, re[1] as number),
+    rms: Math.sqrt(meanSquare),
+    thd: Math.sqrt(harmonicSquares) / first,
+    thdUpperBound: context.thdUpperBound,
+    wthd: Math.sqrt(weightedSquares) / first,
+    exact: false,
+    spectrum,
+    spectrumThd: weightedDistortion(spectrum, 0),
+  };
+}
+
+/**
+ * An upper bound of the output's THD over every order: the solved orders' sum, plus the
+ * bridge's mean square above them (exact, Parseval) times the largest gain found above.
+ */
+function outputThdUpperBound(
+  waveform: Waveform,
+  bridge: HarmonicPhasors,
+  output: HarmonicPhasors,
+  context: Pick<FilteredPhaseContext, 'network' | 'omega' | 'spectrumOrder'>,
+): number {
+  const { network, omega, spectrumOrder } = context;
+  let bridgeSum = (bridge.re[0] as number) * (bridge.re[0] as number);
+  for (let n = 1; n <= spectrumOrder; n++) {
+    const a = bridge.re[n] as number;
+    const b = bridge.im[n] as number;
+    bridgeSum += (a * a + b * b) / 2;
+  }
+  const bridgeTail = Math.max(0, waveformMeanSquare(waveform) - bridgeSum);
+  let tailGain = 0;
+  for (let k = 0, order = spectrumOrder + 1; k <= 10; k++, order *= 2) {
+    const response = outputNetworkResponse(network, omega * order, { re: 1, im: 0 });
+    tailGain = Math.max(tailGain, Math.hypot(response.output.re, response.output.im));
+  }
+  let harmonicSum = 0;
+  for (let n = 2; n <= spectrumOrder; n++) {
+    const a = output.re[n] as number;
+    const b = output.im[n] as number;
+    harmonicSum += (a * a + b * b) / 2;
+  }
+  const fundamental = Math.hypot(output.re[1] as number, output.im[1] as number);
+  return Math.sqrt(2 * (harmonicSum + tailGain * tailGain * bridgeTail)) / fundamental;
+}
+
+/**
+ * The inverter current above the summed order N, where the series inductor alone sets it
+ * (|Z_s| ≫ the shunt branch there, so nearly all of it flows into the capacitor):
+ * i_tail = (Φ − Φ_N)/(ω·L), with Φ the bridge voltage's running integral (exact, piecewise
+ * linear) and Φ_N its harmonics to N (v = L·di/dt, standard circuit analysis). Its mean square
+ * is (Var Φ − Σ_{n≤N} (V_n/n)²/2)/(ωL)² by Parseval. Returned as the inverter phasors to N with
+ * those of −Φ_N/(ωL) added (`added`), the samples of (Φ − mean Φ)/(ωL) on the S angles 2πj/S,
+ * and that mean square. Null for damping across the inductor, whose series branch is not
+ * inductive at high frequency, and when N is not ten times past the LC resonance (the sum to N
+ * is used as it is there).
+ * @param inverter - the inverter current's phasors to N at least
+ * @param context.count - N + 1, the orders summed
+ */
+function switchingTail(
+  waveform: Waveform,
+  bridge: HarmonicPhasors,
+  inverter: HarmonicPhasors,
+  context: { count: number; filter: OutputNetwork['filter']; omega: number; size: number },
+): { added: HarmonicPhasors; samples: Float64Array; meanSquare: number } | null {
+  const { count, filter, omega, size } = context;
+  if (filter === null || filter.dampingPlacement === 'parallel-with-inductor') return null;
+  // Only valid well past the resonance, where the shunt branch shorts the load out.
+  const resonanceOrder = 1 / (Math.sqrt(filter.l * filter.c) * omega);
+  if (count - 1 < 10 * resonanceOrder) return null;
+  const integral = runningIntegral(waveform);
+  const reactance = omega * filter.l;
+  const re = new Float64Array(count);
+  const im = new Float64Array(count);
+  let heldVariance = 0;
+  for (let n = 1; n < count; n++) {
+    // ∫ A·sin(nθ + φ) dθ = (A/n)·sin(nθ + φ − π/2): phasor (V_n/n)·e^{−jπ/2}, negated and over ωL.
+    const vr = (bridge.re[n] as number) / n;
+    const vi = (bridge.im[n] as number) / n;
+    re[n] = (inverter.re[n] as number) - vi / reactance;
+    im[n] = (inverter.im[n] as number) + vr / reactance;
+    heldVariance += (vr * vr + vi * vi) / 2;
+  }
+  re[0] = inverter.re[0] as number;
+  im[0] = inverter.im[0] as number;
+  const whole = integral.at(size);
+  const samples = new Float64Array(size);
+  for (let j = 0; j < size; j++) samples[j] = ((whole[j] as number) - integral.mean) / reactance;
+  return {
+    added: { re, im },
+    samples,
+    meanSquare: Math.max(0, integral.variance - heldVariance) / (reactance * reactance),
+  };
+}

@@ -1,0 +1,36 @@
+import { weightedDistortion } from '../spectrum/distortion.js';
+import type { LabelledHarmonic } from '../spectrum/labelHarmonics.js';
+import { waveformThd } from '../spectrum/waveformThd.js';
+import { waveformWthd } from '../spectrum/waveformWthd.js';
+import { waveformMeanSquare } from '../waveform/waveformMeanSquare.js';
+import type { VoltageFigures } from './DesignReport.js';
+import type { NamedVoltage } from './modulationVoltages.js';
+
+/**
+ * The figures of one piecewise-constant voltage given its labelled spectrum (orders
+ * 0..maxOrder, index = order, exact): fundamental and its phase from the spectrum, RMS, THD and
+ * WTHD exact over the whole waveform (`waveformThd`, `waveformWthd`), and the THD of only the
+ * shown orders. Internal: `voltageFigures` and the design report (which reads its spectra once
+ * for all its voltages, `designVoltagePhasors`).
+ * @throws ParameterRangeError when the fundamental is zero
+ */
+export function labelledVoltageFigures(
+  voltage: NamedVoltage,
+  spectrum: LabelledHarmonic[],
+): VoltageFigures {
+  const { name, waveform } = voltage;
+  const thd = waveformThd(waveform);
+  const fundamental = spectrum[1] as LabelledHarmonic;
+  return {
+    name,
+    fundamental: fundamental.amplitude,
+    fundamentalPhase: fundamental.phase,
+    rms: Math.sqrt(waveformMeanSquare(waveform)),
+    thd,
+    thdUpperBound: thd,
+    wthd: waveformWthd(waveform),
+    exact: true,
+    spectrum,
+    spectrumThd: weightedDistortion(spectrum, 0),
+  };
+}

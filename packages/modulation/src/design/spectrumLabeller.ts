@@ -1,0 +1,81 @@
+import type { Harmonic } from '../spectrum/Harmonic.js';
+import type { HarmonicPhasors } from '../spectrum/harmonicPhasors.js';
+import { carrierGroupLabel } from '../spectrum/carrierGroupLabel.js';
+import type { CarrierGroupLabel } from '../spectrum/carrierGroupOf.js';
+import type { LabelledHarmonic } from '../spectrum/labelHarmonics.js';
+import { meanHarmonic } from '../spectrum/meanHarmonic.js';
+import { assertNumberInRange } from '../validation/assertions.js';
+
+/** Labels a design report's spectra (see {@link spectrumLabeller}). */
+export interface SpectrumLabeller {
+  /** The first maxOrder + 1 entries of a spectrum, labelled as `labelHarmonics` labels them. */
+  harmonics: (spectrum: readonly Harmonic[]) => LabelledHarmonic[];
+  /**
+   * Orders 0..maxOrder of a spectrum's phasors, labelled: amplitude |X_n| and phase arg X_n as
+   * `harmonicsOfPhasors` gives them, without building those first.
+   */
+  phasors: (phasors: HarmonicPhasors) => LabelledHarmonic[];
+}
+
+/**
+ * The labeller of a design report's spectra, orders 0..maxOrder, by carrier group m and sideband
+ * n (order = m·ratio + n; Holmes and Lipo, 2003, ch. 3), the same labels as `labelHarmonics`.
+ * A report labels up to a dozen spectra of the same orders, so each order's group, sideband and
+ * label text are worked out once here and shared by them all. Internal: part of analyseDesign.
+ * @param maxOrder - highest order labelled, an integer ≥ 0
+ * @param ratio - the ratio the orders are grouped by (`spectrumLabelRatio`), > 0
+ */
+export function spectrumLabeller(maxOrder: number, ratio: number): SpectrumLabeller {
+  assertNumberInRange('mf', ratio, { min: 0, minExclusive: true });
+  const count = maxOrder + 1;
+  const groups = new Float64Array(count);
+  const sidebands = new Float64Array(count);
+  const labels = new Array<string>(count);
+  const split = (order: number): Omit<CarrierGroupLabel, 'order'> => {
+    const carrierGroup = Math.round(order / ratio);
+    const sideband = order - carrierGroup * ratio;
+    return { carrierGroup, sideband, label: carrierGroupLabel(order, carrierGroup, sideband) };
+  };
+  for (let order = 0; order < count; order++) {
+    const { carrierGroup, sideband, label } = split(order);
+    groups[order] = carrierGroup;
+    sidebands[order] = sideband;
+    labels[order] = label;
+  }
+  const labelled = (order: number, amplitude: number, phase: number): LabelledHarmonic => {
+    // An order off the shared table (none of the report's spectra has one) is labelled alone.
+    if (!(Number.isInteger(order) && order >= 0 && order < count))
+      return { order, amplitude, phase, ...split(order) };
+    return {
+      order,
+      amplitude,
+      phase,
+      carrierGroup: groups[order] as number,
+      sideband: sidebands[order] as number,
+      label: labels[order] as string,
+    };
+  };
+  return {
+    harmonics: (spectrum) => {
+      const length = Math.min(spectrum.length, count);
+      const result = new Array<LabelledHarmonic>(length);
+      for (let k = 0; k < length; k++) {
+        const { order, amplitude, phase } = spectrum[k] as Harmonic;
+        result[k] = labelled(order, amplitude, phase);
+      }
+      return result;
+    },
+    phasors: ({ re, im }) => {
+      const length = Math.min(re.length, count);
+      const result = new Array<LabelledHarmonic>(length);
+      const mean = meanHarmonic(re[0] as number);
+      if (length > 0) result[0] = labelled(0, mean.amplitude, mean.phase);
+      for (let n = 1; n < length; n++) {
+        const a = im[n] as number;
+        const b = re[n] as number;
+        result[n] = labelled(n, Math.sqrt(a * a + b * b), Math.atan2(a, b));
+      }
+      return result;
+    },
+  };
+}
