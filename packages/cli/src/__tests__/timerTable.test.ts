@@ -252,4 +252,48 @@ describe('pulsewright timer-table', () => {
     expect(table.parameters.sampling).toBe('regular-symmetric');
     expect(table.channels.map((c) => c.name)).toEqual(['a']);
   });
+
+  it('writes the reduced common-mode methods with their compare senses (azspwm1, nspwm: Hava and Ün 2009)', async () => {
+    const flags = [
+      '--method',
+      'three-phase',
+      '--ma',
+      '0.9',
+      '--vdc',
+      '650',
+      '--fundamental-frequency',
+      '50',
+      '--carrier-frequency',
+      '5000',
+      '--timer-clock',
+      '16e6',
+      '--dead-time',
+      '1e-6',
+    ];
+    for (const zeroSequence of ['azspwm1', 'nspwm']) {
+      const args = ['timer-table', ...flags, '--zero-sequence', zeroSequence];
+      const json = await runCli([...args, '--json']);
+      expect(json.code, json.stderr).toBe(0);
+      // A natural design samples each half period in the table, as threePhase samples it.
+      expect(json.stderr).toMatch(/natural sampling becomes regular-asymmetric/);
+      const table = JSON.parse(json.stdout) as TimerTable;
+      const request = {
+        modulation: { method: 'three-phase', zeroSequence, ma: 0.9 },
+        fundamentalFrequency: 50,
+        carrierFrequency: 5000,
+        sampling: 'regular-asymmetric',
+        vdc: 650,
+        timerClock: 16e6,
+        deadTime: 1e-6,
+      };
+      expect(json.stdout).toBe(await apiTable(request, 'json'));
+      expect(table.channels.map((c) => c.sense.filter((s) => s === 'above').length)).not.toContain(
+        0,
+      );
+      const csv = await runCli([...args, '--format', 'csv']);
+      expect(csv.stdout.split('\r\n')[0]).toContain('a_compare,a_sense,a_high');
+      const header = await runCli(args);
+      expect(header.stdout).toContain('static const uint8_t pwm_table_b_above[PWM_TABLE_LENGTH]');
+    }
+  });
 });

@@ -1,9 +1,7 @@
 import {
-  TIMER_ZERO_SEQUENCES,
   type InverterDesign,
   type TimerModulation,
   type TimerTableOptions,
-  type TimerZeroSequence,
 } from '@pulsewright/modulation';
 import { InputError } from '../errors.js';
 
@@ -18,9 +16,11 @@ export type DesignTimerFields = Pick<
  * a regular-sampled sine reference (`sine-triangle` with its scheme, or `three-phase` with its
  * zero sequence), its fundamental and carrier frequencies and its DC bus. A timer table is
  * regular-sampled by nature (one compare value per update): a design's `regular-asymmetric`
- * sampling is kept, and `natural` or `regular-symmetric` give `regular-symmetric`.
+ * sampling is kept, and `natural` or `regular-symmetric` give `regular-symmetric`, except for the
+ * reduced common-mode methods (`azspwm1`, `nspwm`), whose tables sample every half period: their
+ * `natural` designs give `regular-asymmetric` (the library refuses them symmetric sampling).
  * @throws InputError naming the design field a timer table cannot follow (the method, a carrier
- *   phase, a zero sequence the table does not offer)
+ *   phase)
  */
 export function timerOptionsFromDesign(design: InverterDesign): {
   fields: DesignTimerFields;
@@ -45,23 +45,24 @@ export function timerOptionsFromDesign(design: InverterDesign): {
     timerModulation = { method: 'sine-triangle', scheme: modulation.scheme, ma: modulation.ma };
   } else {
     const zeroSequence = modulation.zeroSequence;
-    if (zeroSequence !== undefined && !isTimerZeroSequence(zeroSequence)) {
-      throw new InputError(
-        'design.modulation.zeroSequence',
-        `design.modulation.zeroSequence must be one of ${TIMER_ZERO_SEQUENCES.map((z) => `'${z}'`).join(', ')} for a timer table; got ${JSON.stringify(zeroSequence)}`,
-      );
-    }
     timerModulation = {
       method: 'three-phase',
       ma: modulation.ma,
       ...(zeroSequence === undefined ? {} : { zeroSequence }),
     };
   }
+  const halfPeriods =
+    modulation.method === 'three-phase' &&
+    (modulation.zeroSequence === 'azspwm1' || modulation.zeroSequence === 'nspwm');
   const sampling =
-    modulation.sampling === 'regular-asymmetric' ? 'regular-asymmetric' : 'regular-symmetric';
+    modulation.sampling === 'regular-asymmetric' || halfPeriods
+      ? 'regular-asymmetric'
+      : 'regular-symmetric';
   if (modulation.sampling === undefined || modulation.sampling === 'natural') {
     notes.push(
-      "the design's natural sampling becomes regular-symmetric in the timer table (one compare value per carrier period)",
+      halfPeriods
+        ? "the design's natural sampling becomes regular-asymmetric in the timer table (one compare value and compare sense per half carrier period)"
+        : "the design's natural sampling becomes regular-symmetric in the timer table (one compare value per carrier period)",
     );
   }
   return {
@@ -74,8 +75,4 @@ export function timerOptionsFromDesign(design: InverterDesign): {
     },
     notes,
   };
-}
-
-function isTimerZeroSequence(zeroSequence: string): zeroSequence is TimerZeroSequence {
-  return (TIMER_ZERO_SEQUENCES as readonly string[]).includes(zeroSequence);
 }
