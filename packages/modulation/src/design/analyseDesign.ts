@@ -26,6 +26,8 @@ import { assertNumberInRange } from '../validation/assertions.js';
 import { withFieldPrefix } from '../validation/withFieldPrefix.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import { assertInverterDesign } from './assertInverterDesign.js';
+import { analyseDesignSpan } from './analyseDesignSpan.js';
+import { designCarrierSpan } from './designCarrierSpan.js';
 import { defaultSpectrumOrder } from './defaultSpectrumOrder.js';
 import { designModulation } from './designModulation.js';
 import { commonModeFigures } from './commonModeFigures.js';
@@ -144,6 +146,15 @@ export function analyseDesign(
   if (filter !== null) withFieldPrefix('filter.', () => assertLcFilter(filter));
   const device = given.device ?? null;
   if (device !== null) assertSemiconductorDevice(device);
+  // A carrier that is no whole multiple of the fundamental: every figure over its span of q periods.
+  const span = designCarrierSpan(given);
+  if (span !== null)
+    return analyseDesignSpan(given, span, {
+      ...(options.maxOrder === undefined ? {} : { maxOrder }),
+      points,
+      ...(busVoltage === undefined ? {} : { busVoltage }),
+      caution: DESIGN_CAUTION,
+    });
   const modulation = withFieldPrefix('modulation.', () => designModulation(given));
   const voltages = withFieldPrefix('modulation.', () => modulationVoltages(modulation));
   // A grid is the load of each phase: r and l2 + l with the grid source as its EMF.
