@@ -8,7 +8,9 @@ import { timerTableExports } from '../model/timerTables';
 /**
  * The timer table: period register, length, realised carrier (Hz) and dead time (ticks and ns),
  * the library's warnings, the first 400 entries per channel (duty, high- and low-side compare
- * values), and JSON, CSV and C header downloads (the header only with a valid name prefix).
+ * values, and each entry's compare sense when the table has entries of sense above: the middle
+ * phase of azspwm1 and nspwm against the inverted carrier), and JSON, CSV and C header downloads
+ * (the header only with a valid name prefix).
  */
 export function TimerTablePanel({
   table,
@@ -23,6 +25,7 @@ export function TimerTablePanel({
   prefix: string;
   prefixError: string | undefined;
 }) {
+  const withSense = table.channels.some((c) => c.sense.includes('above'));
   return (
     <Panel
       title="Table"
@@ -64,6 +67,14 @@ export function TimerTablePanel({
         realised {formatNumber(table.realisedCarrierFrequency)} Hz · dead time{' '}
         {table.deadTimeCounts} ticks ({formatNumber(table.realisedDeadTime * 1e9)} ns)
       </p>
+      {withSense ? (
+        <p className="mb-2 text-sm" data-testid="compare-sense-note">
+          Compare sense per entry: <strong>below</strong>, the high side is on while the counter is
+          below its high-side value; <strong>above</strong> (the middle phase, against the inverted
+          carrier), while it is above it, the low side below its low-side value. Switch the
+          channel&apos;s output polarity at the update event that loads each entry.
+        </p>
+      ) : null}
       {table.warnings.length ? (
         <ul className="mb-2 list-disc pl-5 text-sm text-signal">
           {table.warnings.map((w) => (
@@ -79,7 +90,7 @@ export function TimerTablePanel({
               <th scope="col">angle (rad)</th>
               {table.channels.map((c) => (
                 <th key={c.name} scope="col">
-                  {c.name}: duty / high / low
+                  {c.name}: duty / {withSense ? 'sense / ' : ''}high / low
                 </th>
               ))}
             </tr>
@@ -91,7 +102,11 @@ export function TimerTablePanel({
                 <td>{formatNumber(angle)}</td>
                 {table.channels.map((c) => (
                   <td key={c.name}>
-                    {formatNumber(c.duty[i] ?? 0, 4)} / {c.highSide[i]} / {c.lowSide[i]}
+                    {formatNumber(c.duty[i] ?? 0, 4)} /{' '}
+                    {withSense ? (
+                      <>{c.sense[i] === 'above' ? <strong>above</strong> : 'below'} / </>
+                    ) : null}
+                    {c.highSide[i]} / {c.lowSide[i]}
                   </td>
                 ))}
               </tr>
