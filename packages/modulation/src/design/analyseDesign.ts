@@ -283,6 +283,7 @@ export function analyseDesign(
           maxOrder,
           points,
           label,
+          labelPhasors: labeller.phasors,
           ...(synthesiser === null ? {} : { fft: synthesiser.fft }),
         });
   const commonMode =

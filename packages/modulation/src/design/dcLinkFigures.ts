@@ -1,9 +1,11 @@
 import type FFT from 'fft.js';
 import type { Harmonic } from '../spectrum/Harmonic.js';
+import type { HarmonicPhasors } from '../spectrum/harmonicPhasors.js';
+import { harmonicsOfPhasors } from '../spectrum/harmonicsOfPhasors.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import { TAU } from '../math.js';
 import type { DcLinkFigures } from './DesignReport.js';
-import { sampledSpectrum } from './sampledSpectrum.js';
+import { sampledPhasors } from './sampledPhasors.js';
 
 /**
  * The DC-link current from each leg's switching function and its inverter current, sampled on
@@ -23,6 +25,8 @@ export function dcLinkFigures(
     maxOrder: number;
     points: number;
     label: (s: readonly Harmonic[]) => DcLinkFigures['spectrum'];
+    /** Labels the spectrum's phasors directly (the report's labeller); else they go through `label`. */
+    labelPhasors?: (p: HarmonicPhasors) => DcLinkFigures['spectrum'];
     /** A transform of the grid's size to reuse for the spectrum. */
     fft?: FFT;
   },
@@ -34,11 +38,14 @@ export function dcLinkFigures(
     const phaseCurrent = inverterSamples[k] as Float64Array;
     // One walk along the edges (the grid is in order): before the first edge the period's last level.
     let segment = -1;
+    let share = (levels[levels.length - 1] as number) / vdc;
     for (let j = 0; j < size; j++) {
       const theta = (TAU * j) / size;
-      while (segment + 1 < edges.length && (edges[segment + 1] as number) <= theta) segment++;
-      const level = levels[segment < 0 ? levels.length - 1 : segment] as number;
-      current[j] = (current[j] as number) + (level / vdc) * (phaseCurrent[j] as number);
+      while (segment + 1 < edges.length && (edges[segment + 1] as number) <= theta) {
+        segment++;
+        share = (levels[segment] as number) / vdc;
+      }
+      current[j] = (current[j] as number) + share * (phaseCurrent[j] as number);
     }
   });
   let sum = 0;
@@ -49,7 +56,10 @@ export function dcLinkFigures(
   }
   const mean = sum / size;
   const rms = Math.sqrt(sumOfSquares / size);
-  const spectrum = sampledSpectrum(current, Math.min(maxOrder, size / 2 - 1), fft);
+  const phasors = sampledPhasors(current, maxOrder, fft);
+  const labelled = context.labelPhasors
+    ? context.labelPhasors(phasors)
+    : label(harmonicsOfPhasors(phasors));
   const stride = Math.max(1, Math.floor(size / points));
   const angles: number[] = [];
   const values: number[] = [];
@@ -61,8 +71,8 @@ export function dcLinkFigures(
     mean,
     rms,
     rippleRms: Math.sqrt(Math.max(0, rms * rms - mean * mean)),
-    secondHarmonic: phaseCount === 1 ? (spectrum[2]?.amplitude ?? 0) : null,
-    spectrum: label(spectrum),
+    secondHarmonic: phaseCount === 1 ? (labelled[2]?.amplitude ?? 0) : null,
+    spectrum: labelled,
     series: { angles, values },
     samplesPerPeriod: size,
   };

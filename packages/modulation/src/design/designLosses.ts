@@ -47,7 +47,7 @@ export function designLosses(
   const { device, vdc, fundamentalFrequency, outputPower } = context;
   const figures = legs.map((leg): LegLossFigures => {
     const phase = inverterSamples[leg.phaseIndex] as Float64Array;
-    const current = leg.currentSign === 1 ? phase : phase.map((i) => -i);
+    const current = leg.currentSign === 1 ? phase : negated(phase);
     // A filtered report's grid follows its analysis order (up to 131072 samples a period); the
     // conduction integral needs no more than 64 cells a carrier period (32 per leg edge).
     let stride = Math.max(
@@ -55,7 +55,7 @@ export function designLosses(
       Math.floor(current.length / Math.max(MIN_CONDUCTION_CELLS, 32 * leg.state.edges.length)),
     );
     while (current.length % stride !== 0) stride--;
-    const cells = stride === 1 ? current : current.filter((_, j) => j % stride === 0);
+    const cells = stride === 1 ? current : everyNth(current, stride);
     const conduction = legLossesFromSamples(
       highFractions(leg.state, cells.length),
       cells,
@@ -105,6 +105,20 @@ export function designLosses(
   };
 }
 
+/** −x, sample by sample. */
+function negated(samples: Float64Array): Float64Array {
+  const result = new Float64Array(samples.length);
+  for (let j = 0; j < samples.length; j++) result[j] = -(samples[j] as number);
+  return result;
+}
+
+/** Samples 0, stride, 2·stride, … (stride divides the length). */
+function everyNth(samples: Float64Array, stride: number): Float64Array {
+  const result = new Float64Array(samples.length / stride);
+  for (let j = 0; j < result.length; j++) result[j] = samples[j * stride] as number;
+  return result;
+}
+
 /** The share of each of `size` cells (centred on 2πj/size) in which the state is 1. */
 function highFractions(state: Waveform, size: number): Float64Array {
   const width = TAU / size;
@@ -137,7 +151,8 @@ function highFractions(state: Waveform, size: number): Float64Array {
       add(0, Math.min(to - TAU, TAU));
     }
   });
-  return high.map((h) => Math.min(1, Math.max(0, h / width)));
+  for (let j = 0; j < size; j++) high[j] = Math.min(1, Math.max(0, (high[j] as number) / width));
+  return high;
 }
 
 /** Switching loss of each device of one leg from its edges, W. */

@@ -5,7 +5,7 @@ import type { HarmonicPhasors } from '../spectrum/harmonicPhasors.js';
 export interface PeriodSynthesiser {
   /** S, samples a period (a power of two). */
   readonly size: number;
-  /** The `fft.js` transform of size S (for `sampledSpectrum` on the same grid). */
+  /** The `fft.js` transform of size S (for `sampledPhasors` on the same grid). */
   readonly fft: FFT;
   /** sin(2πj/S), j = 0..S−1 (cos(2πj/S) is sine[(j + S/4) mod S]). */
   readonly sine: Float64Array;

@@ -68,15 +68,20 @@ export function checkVoltageHarmonicLimits(
   const row = IEEE_519_2022_VOLTAGE_LIMITS.find(
     (r) => busVoltage <= r.maxBusVoltage,
   ) as VoltageLimitRow;
-  const byOrder = new Map(spectrum.map((h) => [h.order, h.amplitude]));
-  const fundamental = byOrder.get(1) ?? 0;
+  // Only the table's orders are read: the amplitude of each order 0..maxOrder (the last entry
+  // of an order wins), not a map of the whole spectrum (a report's runs to 5000 orders).
+  const byOrder = new Array<number | undefined>(standard.maxOrder + 1);
+  for (const { order, amplitude } of spectrum)
+    if (Number.isInteger(order) && order >= 0 && order <= standard.maxOrder)
+      byOrder[order] = amplitude;
+  const fundamental = byOrder[1] ?? 0;
   if (!(fundamental > 0))
     throw new ParameterRangeError(
       'spectrum',
       'a spectrum whose fundamental has an amplitude > 0',
       fundamental,
     );
-  if (!byOrder.has(standard.maxOrder)) {
+  if (byOrder[standard.maxOrder] === undefined) {
     throw new ParameterRangeError(
       'spectrum',
       `a spectrum holding orders up to ${standard.maxOrder}`,
@@ -86,7 +91,7 @@ export function checkVoltageHarmonicLimits(
   const table = [];
   let sumOfSquares = 0;
   for (let order = 2; order <= standard.maxOrder; order++) {
-    const ratio = (byOrder.get(order) ?? 0) / fundamental;
+    const ratio = (byOrder[order] ?? 0) / fundamental;
     sumOfSquares += ratio * ratio;
     table.push({ order, ratio, limit: row.individual, pass: ratio <= row.individual });
   }

@@ -47,12 +47,10 @@ export function legLossesFromSamples(
   const { device, vdc, switchingFrequency: fsw } = options;
   assertNumberInRange('vdc', vdc, { min: 0, minExclusive: true });
   assertNumberInRange('switchingFrequency', fsw, { min: 0, minExclusive: true });
-  const sums: Record<'ut' | 'lt' | 'ud' | 'ld', [number, number]> = {
-    ut: [0, 0],
-    lt: [0, 0],
-    ud: [0, 0],
-    ld: [0, 0],
-  };
+  // Conduction and switching sums of the upper and lower transistor and diode, in local
+  // variables (this loop runs once per cell of every report with a device).
+  let [utConduction, ltConduction, udConduction, ldConduction] = [0, 0, 0, 0];
+  let [utSwitching, ltSwitching, udSwitching, ldSwitching] = [0, 0, 0, 0];
   for (let j = 0; j < duties.length; j++) {
     const d = duties[j] as number;
     if (d < 0 || d > 1) throw new ParameterRangeError(`duties[${j}]`, 'a fraction in [0, 1]', d);
@@ -60,25 +58,38 @@ export function legLossesFromSamples(
     const a = Math.abs(i);
     const positive = i > 0;
     if (device.kind === 'mosfet') {
-      sums.ut[0] += d * device.rdsOn * i * i;
-      sums.lt[0] += (1 - d) * device.rdsOn * i * i;
+      utConduction += d * device.rdsOn * i * i;
+      ltConduction += (1 - d) * device.rdsOn * i * i;
     } else {
       const transistor = device.vce0 * a + device.rce * a * a;
       const diode = device.vf0 * a + device.rf * a * a;
       if (positive) {
-        sums.ut[0] += d * transistor;
-        sums.ld[0] += (1 - d) * diode;
+        utConduction += d * transistor;
+        ldConduction += (1 - d) * diode;
       } else {
-        sums.lt[0] += (1 - d) * transistor;
-        sums.ud[0] += d * diode;
+        ltConduction += (1 - d) * transistor;
+        udConduction += d * diode;
       }
     }
     if (d > 0 && d < 1 && a > 0) {
       const scale = switchingEnergyScale(device, vdc, a);
-      (positive ? sums.ut : sums.lt)[1] += fsw * (device.eon + device.eoff) * scale;
-      (positive ? sums.ld : sums.ud)[1] += fsw * device.err * scale;
+      const transistor = fsw * (device.eon + device.eoff) * scale;
+      const diode = fsw * device.err * scale;
+      if (positive) {
+        utSwitching += transistor;
+        ldSwitching += diode;
+      } else {
+        ltSwitching += transistor;
+        udSwitching += diode;
+      }
     }
   }
+  const sums: Record<'ut' | 'lt' | 'ud' | 'ld', [number, number]> = {
+    ut: [utConduction, utSwitching],
+    lt: [ltConduction, ltSwitching],
+    ud: [udConduction, udSwitching],
+    ld: [ldConduction, ldSwitching],
+  };
   const n = duties.length;
   const loss = ([conduction, switching]: [number, number]): DeviceLoss => ({
     conduction: conduction / n,

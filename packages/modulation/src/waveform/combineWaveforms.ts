@@ -17,20 +17,27 @@ export function combineWaveforms(
 ): Waveform {
   const count = waveforms.length;
   if (count === 0) throw new RangeError('waveforms must hold at least one waveform');
-  const events: { angle: number; source: number; level: number }[] = [];
+  // Before the first edge each input holds its last level (the period wraps round).
   const current = waveforms.map((w) => w.levels[w.levels.length - 1] as number);
-  waveforms.forEach((w, source) => {
-    w.edges.forEach((angle, i) => events.push({ angle, source, level: w.levels[i] as number }));
-  });
-  events.sort((a, b) => a.angle - b.angle);
+  // Each input's edges ascend: merge them, taking the next smallest angle each step (k-way
+  // merge; a handful of inputs, so a scan beats a heap).
+  const next = new Array<number>(count).fill(0);
   const transitions: Transition[] = [];
-  for (let i = 0; i < events.length;) {
-    const angle = (events[i] as (typeof events)[number]).angle;
+  for (;;) {
+    let angle = Infinity;
+    for (let k = 0; k < count; k++) {
+      const edge = (waveforms[k] as Waveform).edges[next[k] as number];
+      if (edge !== undefined && edge < angle) angle = edge;
+    }
+    if (angle === Infinity) break;
     // Apply every input's change at this exact angle before evaluating.
-    while (i < events.length && (events[i] as (typeof events)[number]).angle === angle) {
-      const e = events[i] as (typeof events)[number];
-      current[e.source] = e.level;
-      i++;
+    for (let k = 0; k < count; k++) {
+      const { edges, levels } = waveforms[k] as Waveform;
+      const i = next[k] as number;
+      if (edges[i] === angle) {
+        current[k] = levels[i] as number;
+        next[k] = i + 1;
+      }
     }
     transitions.push({ angle, level: combine(current) });
   }
