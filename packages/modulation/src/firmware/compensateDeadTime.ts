@@ -2,6 +2,7 @@ import { TAU } from '../math.js';
 import { assertNumberInRange } from '../validation/assertions.js';
 import { channelCurrentPhases } from './channelCurrentPhases.js';
 import { complementaryCompares } from './complementaryCompares.js';
+import { senseChangeCorrection } from './senseChangeCorrection.js';
 import type { TimerTable } from './timerTableTypes.js';
 
 /** Result of {@link compensateDeadTime}; plain data. */
@@ -21,6 +22,10 @@ export interface CompensatedTimerTable {
  * current predicted at each entry (T. Murai, T. Watanabe, S. Miyairi, IEEE Trans. Ind. Appl.,
  * 1987, from memory): what a controller loads. The rules, the limits and the measured effect are
  * those of {@link deadTimeCompensation}, which also builds the waveforms before and after.
+ * Where a channel's compare sense changes (the reduced common-mode methods `azspwm1`, `nspwm`) the
+ * leg switches at the update event itself, one pulse more than the per-period rule counts; that
+ * edge's dead time is corrected too, by the sign of the current predicted at the update (a whole
+ * D counts on the entry whose pulse starts or ends there).
  *
  * @param options.predictedCurrentAngle - lag of leg a's current behind sin θ, rad (legs b, c a
  *   further 2π/3, 4π/3; H-bridge leg B the opposite current), in [−2π, 2π]. @default 0
@@ -46,10 +51,13 @@ export function compensateDeadTime(
   const correction: number[][] = [];
   const channels = table.channels.map((channel, k) => {
     const lag = lags[k] as number;
+    const atSenseChanges = senseChangeCorrection(table, channel, lag);
     const added = channel.compare.map((c, i) => {
       if (c <= 0 || c >= full) return 0;
       const current = Math.sin((table.entryAngles[i] as number) - lag);
-      const wanted = current > 0 ? counts.positive : current < 0 ? -counts.negative : 0;
+      const wanted =
+        (current > 0 ? counts.positive : current < 0 ? -counts.negative : 0) +
+        (atSenseChanges[i] as number);
       return Math.min(full, Math.max(0, c + wanted)) - c;
     });
     correction.push(added);
