@@ -52,7 +52,9 @@ export function timerTableWarnings(
 /**
  * Pulses (high or low side) shorter than the dead time, counted per compare value: a high
  * pulse lasts compare·ticksPerCount ticks, a low one (full − compare)·ticksPerCount (exact for
- * symmetric sampling, the half-pulse pair for asymmetric).
+ * symmetric sampling, the half-pulse pair for asymmetric). Next to a change of compare sense (the
+ * reduced common-mode methods) the leg switches at the update event, and the pulses there lie in
+ * one half period only: compare·ticksPerCount/2 and (full − compare)·ticksPerCount/2.
  */
 function narrowPulseCount(
   channels: TimerChannel[],
@@ -63,14 +65,18 @@ function narrowPulseCount(
   let count = 0;
   let shortest = Infinity;
   for (const channel of channels) {
-    for (const c of channel.compare) {
-      for (const width of [c * ticksPerCount, (full - c) * ticksPerCount]) {
+    const { compare, sense } = channel;
+    compare.forEach((c, i) => {
+      const previous = sense[(i + sense.length - 1) % sense.length];
+      const next = sense[(i + 1) % sense.length];
+      const halves = sense[i] !== previous || sense[i] !== next ? 2 : 1;
+      for (const width of [(c * ticksPerCount) / halves, ((full - c) * ticksPerCount) / halves]) {
         if (width > 0 && width < deadTimeCounts) {
           count++;
           shortest = Math.min(shortest, width);
         }
       }
-    }
+    });
   }
   return { count, shortest };
 }
