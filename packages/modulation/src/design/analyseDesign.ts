@@ -5,21 +5,10 @@ import { outputNetworkTransfer } from '../filter/outputNetworkTransfer.js';
 import { checkVoltageHarmonicLimits } from '../limits/checkVoltageHarmonicLimits.js';
 import { GRID_CURRENT_LIMIT_CAUTION } from '../limits/gridCurrentLimits.js';
 import { HARMONIC_LIMIT_CAUTION } from '../limits/voltageHarmonicLimits.js';
-import { currentDistortion } from '../load/currentDistortion.js';
 import { motorLoadFigures } from '../load/motorLoadFigures.js';
-import { rlCurrentAt } from '../load/rlCurrentAt.js';
 import type { RlLoadOptions } from '../load/RlLoad.js';
-import { rlSteadyState } from '../load/rlSteadyState.js';
 import { TAU } from '../math.js';
-import {
-  complexAbs,
-  complexDivide,
-  complexSubtract,
-  phasorOf,
-  type Complex,
-} from '../numeric/complex.js';
-import type { Harmonic } from '../spectrum/Harmonic.js';
-import { harmonics } from '../spectrum/harmonics.js';
+import { complexAbs, phasorOf, type Complex } from '../numeric/complex.js';
 import { harmonicsOfPhasors } from '../spectrum/harmonicsOfPhasors.js';
 import { reducedCommonModeRange } from '../three-phase/reducedCommonModeRange.js';
 import { assertNumberInRange } from '../validation/assertions.js';
@@ -46,6 +35,7 @@ import { MODULATION_METHOD_LABELS } from './Modulation.js';
 import { modulationVoltages, type NamedVoltage } from './modulationVoltages.js';
 import { spectrumLabelRatio } from './spectrumLabelRatio.js';
 import { designVoltagePhasors } from './designVoltagePhasors.js';
+import { exactLoadCurrents } from './exactLoadCurrents.js';
 import { filteredPhase, type FilteredPhase } from './filteredPhase.js';
 import { labelledVoltageFigures } from './labelledVoltageFigures.js';
 import { spectrumLabeller } from './spectrumLabeller.js';
@@ -210,13 +200,21 @@ export function analyseDesign(
         );
   if (synthesiser === null) {
     if (load !== null) {
-      const solved = phaseVoltages.map((waveform, k) =>
-        exactLoadCurrents(waveform, rlLoadOf(design, k), {
+      const solved = exactLoadCurrents(
+        phaseVoltages.map((waveform, k) => ({
+          waveform,
+          load: rlLoadOf(design, k),
           phase: PHASES[k] ?? 'a',
           suffix: phaseSuffix(voltages.phaseCount, PHASES[k] ?? 'a'),
+        })),
+        {
+          // The ripple's extremes sit at or near the switching edges: every edge and a fine grid.
+          gridSize: synthesisSize(
+            1,
+            Math.min(MAX_GRID_SAMPLES, Math.max(MIN_GRID_SAMPLES, 64 * (frequencyRatio ?? 64))),
+          ),
           points,
-          frequencyRatio,
-        }),
+        },
       );
       currents = solved.map((s) => s.currents);
       loadPower = solved.reduce((sum, s) => sum + s.power, 0);
@@ -430,68 +428,6 @@ function rlLoadOf(design: InverterDesign, phaseIndex: number): RlLoadOptions {
     ? { amplitude: load.emf.amplitude, phase: load.emf.phase - (phaseIndex * TAU) / 3 }
     : undefined;
   return { r: load.r, l: load.l, frequency: design.fundamentalFrequency, ...(emf ? { emf } : {}) };
-}
-
-/** Exact load current of an unfiltered phase (the load current is the switch current). */
-function exactLoadCurrents(
-  waveform: Waveform,
-  load: RlLoadOptions,
-  context: {
-    phase: PhaseCurrents['phase'];
-    /** Added to each current's name ({@link phaseSuffix}). */
-    suffix: string;
-    points: number;
-    frequencyRatio: number | null;
-  },
-): { currents: PhaseCurrents; power: number; inverterSamples: Float64Array } {
-  const { phase, suffix, points, frequencyRatio } = context;
-  const steady = withFieldPrefix('load.', () => rlSteadyState(waveform, load));
-  const voltage = harmonics(waveform, 1)[1] as Harmonic;
-  const emf = load.emf ? phasorOf(load.emf.amplitude, load.emf.phase) : { re: 0, im: 0 };
-  const impedance = { re: load.r, im: TAU * load.frequency * load.l };
-  const first = complexDivide(
-    complexSubtract(phasorOf(voltage.amplitude, voltage.phase), emf),
-    impedance,
-  );
-  const fundamental = complexAbs(first);
-  const fundamentalAt = (theta: number): number =>
-    first.re * Math.sin(theta) + first.im * Math.cos(theta);
-  // The ripple's extremes sit at or near the switching edges: sample every edge and a fine grid.
-  const grid = synthesisSize(
-    1,
-    Math.min(MAX_GRID_SAMPLES, Math.max(MIN_GRID_SAMPLES, 64 * (frequencyRatio ?? 64))),
-  );
-  const angles = [...waveform.edges, ...Array.from({ length: grid }, (_, k) => (TAU * k) / grid)];
-  const sampled = rlCurrentAt(waveform, angles, load);
-  let low = Infinity;
-  let high = -Infinity;
-  sampled.forEach((current, k) => {
-    const ripple = current - fundamentalAt(angles[k] as number);
-    if (ripple < low) low = ripple;
-    if (ripple > high) high = ripple;
-  });
-  const seriesAngles = Array.from({ length: points }, (_, k) => (TAU * k) / points);
-  const figures: CurrentFigures = {
-    name: `load current${suffix}`,
-    rms: steady.rmsCurrent,
-    peak: Math.max(Math.abs(steady.peakCurrent), Math.abs(steady.minCurrent)),
-    fundamental,
-    fundamentalPhase: Math.atan2(first.im, first.re),
-    rippleRms: Math.sqrt(Math.max(0, steady.rmsCurrent ** 2 - (fundamental * fundamental) / 2)),
-    ...currentDistortion(steady.rmsCurrent, fundamental),
-    ripplePeakToPeak: high - low,
-    series: { angles: seriesAngles, values: rlCurrentAt(waveform, seriesAngles, load) },
-  };
-  return {
-    currents: {
-      phase,
-      inverter: { ...figures, name: `inverter (switch) current${suffix}` },
-      capacitor: null,
-      load: figures,
-    },
-    power: steady.power,
-    inverterSamples: Float64Array.from(sampled.slice(waveform.edges.length)),
-  };
 }
 
 function filterFigures(

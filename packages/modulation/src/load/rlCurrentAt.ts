@@ -5,7 +5,12 @@ import type { Waveform } from '../waveform/Waveform.js';
 import { assertRlLoad } from './assertRlLoad.js';
 import type { RlLoadOptions } from './RlLoad.js';
 import { nonFiniteLoadError } from './nonFiniteLoadError.js';
-import { currentInSegment, rlPiecewiseSolution, segmentIndexAt } from './rlPiecewiseSolution.js';
+import {
+  currentInSegment,
+  rlPiecewiseSolution,
+  segmentIndexAt,
+  type RlSegment,
+} from './rlPiecewiseSolution.js';
 
 /** The most angles one call of {@link rlCurrentAt} evaluates. */
 export const MAX_CURRENT_ANGLES = 1_000_000;
@@ -34,12 +39,23 @@ export function rlCurrentAt(
   assertFiniteArray('angles', angles, 0, MAX_CURRENT_ANGLES);
   assertRlLoad(options);
   const solution = rlPiecewiseSolution(waveform, options);
-  return angles.map((angle, i) => {
-    const theta = wrapAngle(angle);
-    const segment = solution.segments[segmentIndexAt(solution, theta)];
-    const current = currentInSegment(solution, segment as NonNullable<typeof segment>, theta);
+  const { segments } = solution;
+  const currents = new Array<number>(angles.length);
+  // Angles often come in ascending order (a grid): then the segment is found by walking on
+  // from the last one; any angle below the last is found by binary search.
+  let index = 0;
+  let previous = Infinity;
+  for (let i = 0; i < angles.length; i++) {
+    const theta = wrapAngle(angles[i] as number);
+    if (theta >= previous)
+      while (index + 1 < segments.length && (segments[index + 1] as RlSegment).start <= theta)
+        index++;
+    else index = segmentIndexAt(solution, theta);
+    previous = theta;
+    const current = currentInSegment(solution, segments[index] as RlSegment, theta);
     if (!Number.isFinite(current))
       throw nonFiniteLoadError(waveform, options, `the current at angles[${i}]`);
-    return current;
-  });
+    currents[i] = current;
+  }
+  return currents;
 }
