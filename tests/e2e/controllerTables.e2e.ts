@@ -56,10 +56,10 @@ export const scenarios: Scenario[] = [
         page.getByRole('button', { name: 'C header', exact: true }).click(),
       );
       assert(/static const uint8_t \w+_a_above\[/.test(cHeader.text), 'the _above arrays');
-      // Edge-aligned counting cannot run it: the library's words on the page.
+      // Edge-aligned counting cannot run it: the library's words on the counting-mode field.
       await page.getByLabel('Counting mode').selectOption('edge-aligned');
       await page
-        .getByText(/countingMode must be 'centre-aligned' for zeroSequence 'azspwm1'/)
+        .getByText(/Counting mode must be 'centre-aligned' for zeroSequence 'azspwm1'/)
         .waitFor();
       await page.close();
     },

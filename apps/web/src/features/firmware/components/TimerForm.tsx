@@ -94,6 +94,7 @@ export function TimerForm({
           { value: 'centre-aligned', label: 'Centre-aligned (up-down)' },
           { value: 'edge-aligned', label: 'Edge-aligned (up)' },
         ]}
+        error={errors.countingMode}
       />
       <NumberField
         label="Counter width"

@@ -79,3 +79,23 @@ describe('timerFieldErrors', () => {
     expect(errorsOf(base, 'ma')).toEqual({ claimed: false });
   });
 });
+
+describe('the counting mode of a reduced common-mode table', () => {
+  it('puts the refusal of edge-aligned counting for azspwm1 on the counting mode (Hava and Ün 2009: the sense changes each half period)', () => {
+    const outcome = buildTimerTable(
+      {
+        modulation: { method: 'three-phase', zeroSequence: 'azspwm1', ma: 0.85 },
+        fundamentalFrequency: 50,
+        carrierFrequency: 10_000,
+        timerClock: 72e6,
+        countingMode: 'edge-aligned',
+      },
+      { minPulseWidth: 0 },
+    );
+    const errors = timerFieldErrors(outcome.error, base, 'ma');
+    expect(errors.claimed).toBe(true);
+    expect(errors.countingMode).toMatch(
+      /^Counting mode must be 'centre-aligned' for zeroSequence 'azspwm1'/,
+    );
+  });
+});

@@ -14,8 +14,13 @@ export type TimerField =
 /** The form's numbers as typed (NaN for an empty box or letters). */
 export type TimerNumbers = Record<TimerField, number>;
 
-/** Each field's message, and whether the library's refusal landed on a field. */
-export type TimerFieldErrors = Partial<Record<TimerField, string>> & { claimed: boolean };
+/**
+ * Each field's message (the number fields, and the counting mode a reduced common-mode table
+ * needs), and whether the library's refusal landed on a field.
+ */
+export type TimerFieldErrors = Partial<Record<TimerField | 'countingMode', string>> & {
+  claimed: boolean;
+};
 
 const LABELS: Record<TimerField, { label: string; unit: string }> = {
   ma: { label: 'Modulation index ma', unit: '' },
@@ -129,6 +134,10 @@ export function timerFieldErrors(
         ? `Dead time must be at least 0 ns ${entered('deadTimeNs', form.deadTimeNs)}`
         : `Dead time must be below half the carrier period, ${formatNumber(1e9 / (2 * carrier), 9)} ns ${entered('deadTimeNs', form.deadTimeNs)}`,
     );
+  } else if (error.field === 'countingMode') {
+    // azspwm1 and nspwm need an up-down counter (their compare sense changes each half period).
+    result.countingMode = `Counting mode must be ${allowedOf(error.message)}`;
+    result.claimed = true;
   } else if (error.field === 'minPulseWidth') {
     put(
       'minPulseNs',
