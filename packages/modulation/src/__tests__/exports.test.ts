@@ -138,6 +138,7 @@ const PUBLIC_NAMES = [
   'designModulation',
   'designRationalRatio',
   'designSpanMaxOrder',
+  'designSpanModulation',
   'deviceSwitchingFrequencies',
   'dutyFromReference',
   'equalConditions',

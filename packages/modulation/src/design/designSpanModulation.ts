@@ -7,7 +7,8 @@ import type { Modulation } from './Modulation.js';
  * at the frequency ratio p/q it is analysed at: `designModulation` of the design with its carrier
  * moved to the nearest whole multiple of the fundamental (so every other field is checked by the
  * design's own rules), then `mf` (or space vector's `frequencyRatio`) set to p/q.
- * Internal: shared by asynchronousDesignSpectra and analyseDesign's span analysis.
+ * The report of such a design (`analyseDesign`, `DesignReport.carrierSpan`) and
+ * `asynchronousDesignSpectra` build its voltages from this modulation over q periods.
  * @param ratio - p/q, the ratio analysed (`designRationalRatio`), in [1, 1000]
  * @throws ParameterRangeError / ParameterTypeError naming the field, as designModulation
  */

@@ -19,9 +19,12 @@ export type SpanLabelledHarmonic = LabelledHarmonic & { kind: SpanComponentKind 
  * The components of a carrier waveform sit at m·mf + k for whole m (carrier group) and k
  * (sideband, in fundamentals; Holmes and Lipo, 2003, ch. 3), so n = m·p + k·q: m ≡ n·p⁻¹
  * (mod q) fixes the group up to multiples of q, and the one nearest n/p is taken (m = 0 is the
- * baseband). With q = 1 this is `labelHarmonics`' labelling. Labels: the baseband by its order as
- * a fraction (`1/3`, `2`, `47/3`), the others `mf−7`, `2mf+1`, … so a sub-harmonic shows which
- * carrier group's sideband reaches below the fundamental.
+ * baseband). A sideband that falls below zero frequency folds back to |m·mf + k| (the double
+ * Fourier series' negative-frequency terms), so the class m ≡ −n·p⁻¹ is tried too, its least
+ * m ≥ 0, and the candidate with the smaller |k| names the component (m·mf + k = −order then).
+ * With q = 1 this is `labelHarmonics`' labelling. Labels: the baseband by its order as a
+ * fraction (`1/3`, `2`, `47/3`), the others `mf−7`, `2mf+1`, `9mf−973`, … so a sub-harmonic
+ * shows which carrier group's sideband reaches below the fundamental.
  * Internal: the design report's spectra of a non-integer ratio.
  * @param spectrum - span orders 0..N of the waveform (the `harmonics` convention)
  * @param ratio - p ≥ 1 carrier cycles and q ≥ 1 fundamental periods in the span, coprime
@@ -37,7 +40,15 @@ export function labelSpanHarmonics(
     const residue = (n * inverse) % q;
     let carrierGroup = residue + q * Math.round((n / p - residue) / q);
     if (carrierGroup < 0) carrierGroup += q;
-    const sideband = Math.round((n - carrierGroup * p) / q);
+    let sideband = Math.round((n - carrierGroup * p) / q);
+    // A sideband below zero frequency folds back: m·p + k·q = −n, m ≡ −n·p⁻¹ (mod q), the least
+    // m ≥ 0 of that class. It names the component when its |k| is smaller (the nearer sideband).
+    const folded = (q - residue) % q;
+    const foldedSideband = Math.round((-n - folded * p) / q);
+    if (Math.abs(foldedSideband) < Math.abs(sideband)) {
+      carrierGroup = folded;
+      sideband = foldedSideband;
+    }
     const order = n / q;
     return {
       order,
