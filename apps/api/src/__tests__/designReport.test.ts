@@ -1,6 +1,12 @@
-import { analyseDesign, solveShe, type InverterDesign } from '@pulsewright/modulation';
+import {
+  analyseDesign,
+  solveShe,
+  type DesignReport,
+  type InverterDesign,
+} from '@pulsewright/modulation';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { reportFigures } from '../services/studyShare.js';
 import { DEMO, signIn, testApp, type TestApp } from './helpers.js';
 
 /**
@@ -58,6 +64,13 @@ const DESIGNS: Record<string, InverterDesign> = {
     carrierFrequency: 1350,
     modulation: { method: 'three-phase', ma: 1.05, zeroSequence: 'third-harmonic' },
     load: { r: 2.4, l: 0.0085, emf: { amplitude: 200, phase: -0.3 } },
+  },
+  'three-phase at a carrier no whole multiple of the fundamental (1000/37), back-EMF': {
+    vdc: 600,
+    fundamentalFrequency: 37,
+    carrierFrequency: 1000,
+    modulation: { method: 'three-phase', ma: 0.8, zeroSequence: 'min-max' },
+    load: { r: 4, l: 0.012, emf: { amplitude: 150, phase: -0.3 } },
   },
   'space vector, five segments, filter only': {
     vdc: 600,
@@ -134,6 +147,63 @@ describe('design report routes', () => {
       expectSameFigures(stored.body, expected);
     });
   }
+
+  it('a study of a drive with a fixed 4 kHz carrier at 37 Hz (4000/37) saves, reports over its span and prints its ratio', async () => {
+    // The report is the library's (p, q, the carrier analysed, every figure over 37 periods);
+    // the spectra CSV gives each component's frequency order·f₁, the sub-harmonics at k Hz.
+    const design: InverterDesign = {
+      vdc: 560,
+      fundamentalFrequency: 37,
+      carrierFrequency: 4000,
+      modulation: { method: 'three-phase', ma: 0.7, zeroSequence: 'none' },
+      load: { r: 3, l: 0.01 },
+    };
+    const studyId = await createStudy('Fixed carrier at 37 Hz', design);
+    const options = { maxOrder: 60, points: 512 };
+    const report = await request(t.app)
+      .get(`/api/v1/studies/${studyId}/report`)
+      .query(options)
+      .set(auth);
+    expect(report.status, JSON.stringify(report.body).slice(0, 400)).toBe(200);
+    expectSameFigures(report.body, analyseDesign(design, options));
+    expect(report.body.carrierSpan).toMatchObject({ p: 4000, q: 37, baseFrequency: 1 });
+    // The shared report's text states the ratio as p/q with the carrier analysed and the span.
+    expect(reportFigures(report.body as DesignReport)).toContain(
+      'mf 4000/37 (carrier analysed 4000 Hz, 0 Hz from the one asked for; every figure over 37 fundamental periods',
+    );
+    const csv = await request(t.app)
+      .get(`/api/v1/studies/${studyId}/report`)
+      .query({ ...options, format: 'csv' })
+      .set({ ...auth, Accept: 'text/csv' });
+    expect(csv.status).toBe(200);
+    const rows = csv.text.trim().split('\n');
+    // Bridge and line a−b, 37·60 + 1 components each, and the header.
+    expect(rows).toHaveLength(1 + 2 * (37 * 60 + 1));
+    // The first sub-harmonic: order 1/37 of the fundamental, 1 Hz (the span's base frequency),
+    // the ninth carrier group's sideband 9·4000/37 − 973 = −1/37 folded back.
+    const [name, order, label, frequency] = (rows[2] ?? '').split(',');
+    expect([name, label], rows[2]).toEqual(['phase a to star point', '9mf−973']);
+    expect(Number(order)).toBeCloseTo(1 / 37, 15);
+    expect(Number(frequency)).toBeCloseTo(1, 12);
+  });
+
+  it('a span too costly for its report is refused before any work, naming design.carrierFrequency', async () => {
+    // 999.7 Hz over 7.3 Hz: nearest p/q with q ≤ 64 is 7532/55, p·q above 2e7/50.
+    const res = await request(t.app)
+      .post('/api/v1/designs/report')
+      .set(auth)
+      .send({
+        design: {
+          vdc: 600,
+          fundamentalFrequency: 7.3,
+          carrierFrequency: 999.7,
+          modulation: { method: 'three-phase', ma: 0.8 },
+        },
+      });
+    expect(res.status).toBe(400);
+    expect(res.body.errors[0].path).toBe('design.carrierFrequency');
+    expect(res.body.errors[0].message).toMatch(/p·q ≤ 400000 .*7532\/55/);
+  });
 
   it('a study report without options is analyseDesign with its defaults (maxOrder 3·mf + 20, 1200 points)', async () => {
     const design = DESIGNS['sine-triangle, unipolar, filter and load'] as InverterDesign;
@@ -304,9 +374,13 @@ describe('design report routes', () => {
         words: ['left out or null with a grid'],
       },
       {
+        // 41.5 = 83/2 is analysed over two periods, but not through this design's filter.
         body: { design: { ...design, carrierFrequency: 2075 } },
         path: 'design.carrierFrequency',
-        words: ['whole multiple (1 to 1000)', 'got 2075'],
+        words: [
+          'whole multiple of fundamentalFrequency 50 Hz for a design with a filter',
+          'got 2075',
+        ],
       },
       {
         body: { design: { ...design, carrierFrequency: undefined } },

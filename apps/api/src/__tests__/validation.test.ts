@@ -205,12 +205,19 @@ describe('bad input: 400 problem+json naming the field and the range, nothing ch
       words: ['not a known field', 'design'],
     },
     {
-      name: 'study with a carrier that is no whole multiple',
+      name: 'study with a filter and a carrier that is no whole multiple',
       method: 'post',
       path: () => '/api/v1/studies',
-      body: () => ({ projectId, name: 'S', design: { ...DESIGN, carrierFrequency: 1075 } }),
+      body: () => ({
+        projectId,
+        name: 'S',
+        design: { ...DESIGN, carrierFrequency: 1075, filter: { l: 0.002, c: 50e-6 } },
+      }),
       field: 'design.carrierFrequency',
-      words: ['whole multiple (1 to 1000) of fundamentalFrequency 50 Hz', 'got 1075'],
+      words: [
+        'whole multiple of fundamentalFrequency 50 Hz for a design with a filter',
+        'got 1075',
+      ],
     },
     {
       name: 'study with a frequency ratio above 1000',

@@ -1,7 +1,9 @@
 import {
   CARRIER_METHODS,
   defaultSpectrumOrder,
+  designCarrierSpan,
   designRationalRatio,
+  designSpanMaxOrder,
   MAX_ANALYSIS_ORDER,
   modulationPhaseCount,
   type AnalyseDesignOptions,
@@ -258,10 +260,18 @@ export function reportCost(
   optionFields: readonly string[] = ['maxOrder', 'points'],
 ): CostEstimate & { series: number; points: number } {
   const pattern = !CARRIER_METHODS.includes(design.modulation.method);
+  // A carrier that is no whole multiple of the fundamental: the report covers the span of q
+  // periods of its ratio p/q (p carrier cycles, q·maxOrder components a spectrum, the currents on
+  // up to 2^19 samples); the library's refusals of such a span (designSpanMaxOrder) come first.
+  const span = pattern ? null : callLibrary(`${field}.`, () => designCarrierSpan(design));
+  const spanBound =
+    span === null ? null : callLibrary(`${field}.`, () => designSpanMaxOrder(design, span));
   const ratio = pattern
     ? 0
-    : Math.round((design.carrierFrequency ?? 0) / design.fundamentalFrequency);
-  const maxOrder = options.maxOrder ?? defaultSpectrumOrder(design);
+    : (span?.p ?? Math.round((design.carrierFrequency ?? 0) / design.fundamentalFrequency));
+  const q = span?.q ?? 1;
+  const maxOrder =
+    options.maxOrder ?? Math.min(defaultSpectrumOrder(design), spanBound ?? Infinity);
   const points = options.points ?? 1200;
   const phases = modulationPhaseCount(design.modulation);
   const edges = designEdges(design, ratio);
@@ -269,7 +279,11 @@ export function reportCost(
   const analysisOrder = filtered
     ? Math.min(MAX_ANALYSIS_ORDER, Math.max(maxOrder, pattern ? 2000 : 10 * ratio + 10))
     : maxOrder;
-  const spectra = (edges.phase + edges.line) * maxOrder;
+  const spectra = (edges.phase + edges.line) * q * maxOrder;
+  const spanSamples =
+    span === null || !design.load
+      ? 0
+      : phases * Math.min(2 ** 19, Math.max(4096 * span.q, 64 * span.p)) * 20;
   const grid = design.grid !== undefined && design.grid !== null;
   const throughFilter =
     (filtered ? phases * edges.phase * analysisOrder : 0) +
@@ -286,6 +300,11 @@ export function reportCost(
   // its angle per carrier period for at most levels − 1 capacitors a leg).
   const { modulation } = design;
   let voltageNumbers = 2 * voltages * (edges.phase + edges.line);
+  // A span's voltages counted each by its own edges (p carrier cycles: 3 phases, 3 legs of a
+  // third of a phase's edges, 3 lines, and the common mode's, as many as a phase's), since
+  // they are q times longer than a period's.
+  if (span !== null && phases === 3)
+    voltageNumbers = 2 * (3 * edges.phase + edges.phase + 3 * edges.line + edges.phase);
   if (modulation.method === 'multilevel-carrier') {
     const { phase, leg, line } = multilevelEdges(modulation, ratio);
     const legCount = phases === 3 ? 3 : modulation.topology === 'cascaded-h-bridge' ? 1 : 2;
@@ -305,7 +324,7 @@ export function reportCost(
   // route does not take are left out.
   const fromCarrier = analysisOrder > maxOrder ? throughFilter : 0;
   const shares: [string, number][] = [
-    [`${field}.carrierFrequency`, pattern ? 0 : build + fromCarrier],
+    [`${field}.carrierFrequency`, pattern ? 0 : build + fromCarrier + spanSamples],
     [`${field}.modulation.levels`, modulation.method === 'multilevel-carrier' ? build : 0],
     ['maxOrder', spectra + throughFilter - fromCarrier],
     ['points', sampled],
@@ -317,13 +336,16 @@ export function reportCost(
     .sort((a, b) => b[1] - a[1])
     .map(([name]) => name);
   return {
-    work: spectra + throughFilter + build + sampled,
-    basis: `${edges.phase + edges.line} edges × ${maxOrder} orders${filtered ? ` + ${phases} × ${edges.phase} edges × ${analysisOrder} orders through the filter` : ''}${grid ? ` + ${edges.phase} edges × ${analysisOrder} orders for the grid` : ''}${series ? ` + ${series} series × ${points} points` : ''}`,
+    work: spectra + throughFilter + build + sampled + spanSamples,
+    basis: `${edges.phase + edges.line} edges × ${q * maxOrder} orders${span === null ? '' : ` over ${span.q} fundamental periods (${span.p}/${span.q})`}${filtered ? ` + ${phases} × ${edges.phase} edges × ${analysisOrder} orders through the filter` : ''}${grid ? ` + ${edges.phase} edges × ${analysisOrder} orders for the grid` : ''}${series ? ` + ${series} series × ${points} points` : ''}`,
     fields: fields.length ? fields : [field],
     // Labelled spectra (about five numbers an order and voltage), time series, and the edges of each voltage.
     responseBytes:
       BYTES_PER_NUMBER *
-      (5 * (maxOrder + 1) * ((filtered ? 3 : 2) + (grid ? 2 : 0)) +
+      ((span === null
+        ? 5 * (maxOrder + 1) * ((filtered ? 3 : 2) + (grid ? 2 : 0))
+        : // A span's four spectra (bridge, line, common mode, DC link), six values a component.
+          6 * (q * maxOrder + 1) * 4) +
         series * points +
         voltageNumbers),
     responseFields: ['maxOrder', 'points'].filter((name) => optionFields.includes(name)),

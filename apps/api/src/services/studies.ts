@@ -1,4 +1,9 @@
-import { designModulation, type InverterDesign } from '@pulsewright/modulation';
+import {
+  designCarrierSpan,
+  designModulation,
+  designSpanModulation,
+  type InverterDesign,
+} from '@pulsewright/modulation';
 import { col, Op, Transaction, UniqueConstraintError } from 'sequelize';
 import type { Models, StudyRevisionRow, StudyRow } from '../models/index.js';
 import { conflict, notFound } from '../http/errors.js';
@@ -295,12 +300,16 @@ export class StudyService {
  * The columns the previous release read (`parameters`, `load`, `filter`), still written for
  * each new revision so a database stays readable by it after a rollback: the full modulation
  * without its method (with vdc and mf or frequencyRatio), the load with the fundamental
- * frequency, and the filter. The service itself reads only `design`.
+ * frequency, and the filter. The service itself reads only `design`. A carrier that is no whole
+ * multiple of the fundamental is written with its ratio p/q as mf (the previous release, which
+ * took whole ratios only, refuses such a study's analysis with a 400 naming it).
  */
 function legacyColumns(
   design: InverterDesign,
 ): Pick<StudyRevisionRow, 'parameters' | 'load' | 'filter'> {
-  const { method: _method, ...parameters } = designModulation(design);
+  const span = designCarrierSpan(design);
+  const { method: _method, ...parameters } =
+    span === null ? designModulation(design) : designSpanModulation(design, span.p / span.q);
   const { load, filter } = design;
   return {
     parameters,

@@ -81,10 +81,14 @@ export class StudyShareService {
 const percent = (ratio: number): string => `${(100 * ratio).toFixed(2)} %`;
 const fixed = (value: number, unit: string): string => `${Number(value.toPrecision(4))} ${unit}`;
 
+/** A non-integer ratio as the report states it: p/q, the carrier analysed and its error, the span. */
+const spanRatio = (span: NonNullable<DesignReport['carrierSpan']>): string =>
+  `${span.p}/${span.q} (carrier analysed ${fixed(span.carrierFrequency, 'Hz')}, ${fixed(span.carrierError, 'Hz')} from the one asked for; every figure over ${span.q} fundamental periods, THD with the sub-harmonics)`;
+
 /** The headline figures of the design report, as plain text lines (every figure from the report). */
 export function reportFigures(report: DesignReport): string {
   const lines = [
-    `Key figures (revision's design report): ${report.methodLabel}${report.frequencyRatio === null ? '' : `, mf ${report.frequencyRatio}`}`,
+    `Key figures (revision's design report): ${report.methodLabel}${report.frequencyRatio === null ? '' : `, mf ${report.carrierSpan ? spanRatio(report.carrierSpan) : report.frequencyRatio}`}`,
   ];
   const { bridge, lineToLine, output, limitCheck } = report;
   lines.push(
