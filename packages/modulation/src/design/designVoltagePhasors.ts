@@ -45,17 +45,27 @@ export function designVoltagePhasors(
     cache.set(key, phasors);
     return phasors;
   };
-  /** Σ weight·leg over three legs from `first`, order by order (weights as the waveforms'). */
+  /** Three legs from `first` combined order by order as `combination` names (weights as the waveforms'). */
   const combine = (
     first: number,
-    value: (own: number, next: number, last: number) => number,
+    combination: 'phase' | 'line' | 'common mode',
   ): HarmonicPhasors => {
     const [a, b, c] = [leg(first), leg(first + 1), leg(first + 2)];
     const re = new Float64Array(size);
     const im = new Float64Array(size);
-    for (let n = 0; n < size; n++) {
-      re[n] = value(a.re[n] as number, b.re[n] as number, c.re[n] as number);
-      im[n] = value(a.im[n] as number, b.im[n] as number, c.im[n] as number);
+    const parts = [
+      [a.re, b.re, c.re, re],
+      [a.im, b.im, c.im, im],
+    ] as const;
+    for (const [own, next, last, into] of parts) {
+      if (combination === 'phase')
+        for (let n = 0; n < size; n++)
+          into[n] = (2 * (own[n] as number) - (next[n] as number) - (last[n] as number)) / 3;
+      else if (combination === 'line')
+        for (let n = 0; n < size; n++) into[n] = (own[n] as number) - (next[n] as number);
+      else
+        for (let n = 0; n < size; n++)
+          into[n] = ((own[n] as number) + (next[n] as number) + (last[n] as number)) / 3;
     }
     return { re, im };
   };
@@ -64,9 +74,9 @@ export function designVoltagePhasors(
       once(`phase ${index}`, () =>
         legs === null
           ? harmonicPhasors((voltages.phases[index] as NamedVoltage).waveform, maxOrder)
-          : combine(index, (own, next, last) => (2 * own - next - last) / 3),
+          : combine(index, 'phase'),
       ),
-    line: (index) => once(`line ${index}`, () => combine(index, (own, next) => own - next)),
-    commonMode: () => once('common mode', () => combine(0, (a, b, c) => (a + b + c) / 3)),
+    line: (index) => once(`line ${index}`, () => combine(index, 'line')),
+    commonMode: () => once('common mode', () => combine(0, 'common mode')),
   };
 }

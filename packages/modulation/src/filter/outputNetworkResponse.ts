@@ -1,12 +1,6 @@
-import {
-  complexAdd as add,
-  complexDivide as divide,
-  complexMultiply as multiply,
-  complexSubtract as subtract,
-  type Complex,
-} from '../numeric/complex.js';
-import { lcFilterBranches } from './lcFilterBranches.js';
+import type { Complex } from '../numeric/complex.js';
 import type { LcFilterOptions } from './LcFilterOptions.js';
+import { solveOutputNetwork } from './solveOutputNetwork.js';
 
 /** The network between one bridge phase and its load: an optional LC filter and a series R–L load. */
 export interface OutputNetwork {
@@ -49,33 +43,19 @@ export function outputNetworkResponse(
   bridgeVoltage: Complex,
   emf: Complex = ZERO,
 ): OutputNetworkPhasors {
-  const { filter, load } = network;
-  const loadAdmittance =
-    load === null ? ZERO : divide({ re: 1, im: 0 }, { re: load.r, im: omega * load.l });
-  if (filter === null) {
-    const loadCurrent = multiply(subtract(bridgeVoltage, emf), loadAdmittance);
-    return {
-      output: bridgeVoltage,
-      inverterCurrent: loadCurrent,
-      capacitorCurrent: ZERO,
-      loadCurrent,
-    };
-  }
-  const { seriesImpedance, shuntAdmittance } = lcFilterBranches(filter, omega);
-  let output: Complex;
-  if (omega === 0) {
-    output = bridgeVoltage;
-  } else {
-    const seriesAdmittance = divide({ re: 1, im: 0 }, seriesImpedance);
-    const injected = add(multiply(bridgeVoltage, seriesAdmittance), multiply(emf, loadAdmittance));
-    output = divide(injected, add(add(seriesAdmittance, shuntAdmittance), loadAdmittance));
-  }
-  const loadCurrent = multiply(subtract(output, emf), loadAdmittance);
-  const capacitorCurrent = multiply(output, shuntAdmittance);
+  const solved = new Float64Array(8);
+  solveOutputNetwork(
+    network,
+    omega,
+    [bridgeVoltage.re, bridgeVoltage.im, emf.re, emf.im],
+    solved,
+    0,
+  );
+  const phasor = (k: number): Complex => ({ re: solved[k] as number, im: solved[k + 1] as number });
   return {
-    output,
-    inverterCurrent: add(loadCurrent, capacitorCurrent),
-    capacitorCurrent,
-    loadCurrent,
+    output: phasor(0),
+    inverterCurrent: phasor(2),
+    capacitorCurrent: phasor(4),
+    loadCurrent: phasor(6),
   };
 }

@@ -1,5 +1,6 @@
 import type { HarmonicPhasors } from '../spectrum/harmonicPhasors.js';
-import { outputNetworkResponse, type OutputNetwork } from './outputNetworkResponse.js';
+import type { OutputNetwork } from './outputNetworkResponse.js';
+import { solveOutputNetwork } from './solveOutputNetwork.js';
 
 /**
  * What one volt of bridge voltage (phasor 1 + j0, no back-EMF) gives at each order of the
@@ -14,7 +15,8 @@ export interface OutputNetworkTransfer {
 
 /**
  * The network's response to a unit bridge voltage at the orders 0..maxOrder of the fundamental
- * angular frequency `omega` (rad/s), by `outputNetworkResponse` order by order. The network is
+ * angular frequency `omega` (rad/s), solved order by order as `outputNetworkResponse` solves it
+ * (`solveOutputNetwork`). The network is
  * linear, so a bridge voltage V_n gives V_n times these (superposition; a back-EMF, present at
  * the fundamental only, is added by solving that order with it). A balanced three-phase
  * bridge's phases share one network, so a report solves it once for all of them. Internal:
@@ -36,14 +38,18 @@ export function outputNetworkTransfer(
     capacitorCurrent: phasors(),
     loadCurrent: phasors(),
   };
-  const unit = { re: 1, im: 0 };
-  const parts = ['output', 'inverterCurrent', 'capacitorCurrent', 'loadCurrent'] as const;
+  const solved = new Float64Array(8);
+  const unit = [1, 0, 0, 0] as const;
   for (let n = 0; n < size; n++) {
-    const response = outputNetworkResponse(network, omega * n, unit);
-    for (const part of parts) {
-      transfer[part].re[n] = response[part].re;
-      transfer[part].im[n] = response[part].im;
-    }
+    solveOutputNetwork(network, omega * n, unit, solved, 0);
+    transfer.output.re[n] = solved[0] as number;
+    transfer.output.im[n] = solved[1] as number;
+    transfer.inverterCurrent.re[n] = solved[2] as number;
+    transfer.inverterCurrent.im[n] = solved[3] as number;
+    transfer.capacitorCurrent.re[n] = solved[4] as number;
+    transfer.capacitorCurrent.im[n] = solved[5] as number;
+    transfer.loadCurrent.re[n] = solved[6] as number;
+    transfer.loadCurrent.im[n] = solved[7] as number;
   }
   return transfer;
 }

@@ -17,8 +17,10 @@ export function combineWaveforms(
 ): Waveform {
   const count = waveforms.length;
   if (count === 0) throw new RangeError('waveforms must hold at least one waveform');
+  const edgeLists = waveforms.map((w) => w.edges);
+  const levelLists = waveforms.map((w) => w.levels);
   // Before the first edge each input holds its last level (the period wraps round).
-  const current = waveforms.map((w) => w.levels[w.levels.length - 1] as number);
+  const current = levelLists.map((levels) => levels[levels.length - 1] as number);
   // Each input's edges ascend: merge them, taking the next smallest angle each step (k-way
   // merge; a handful of inputs, so a scan beats a heap).
   const next = new Array<number>(count).fill(0);
@@ -26,16 +28,15 @@ export function combineWaveforms(
   for (;;) {
     let angle = Infinity;
     for (let k = 0; k < count; k++) {
-      const edge = (waveforms[k] as Waveform).edges[next[k] as number];
+      const edge = (edgeLists[k] as number[])[next[k] as number];
       if (edge !== undefined && edge < angle) angle = edge;
     }
     if (angle === Infinity) break;
     // Apply every input's change at this exact angle before evaluating.
     for (let k = 0; k < count; k++) {
-      const { edges, levels } = waveforms[k] as Waveform;
       const i = next[k] as number;
-      if (edges[i] === angle) {
-        current[k] = levels[i] as number;
+      if ((edgeLists[k] as number[])[i] === angle) {
+        current[k] = (levelLists[k] as number[])[i] as number;
         next[k] = i + 1;
       }
     }
