@@ -141,16 +141,17 @@ function conventionLines(inputs: TimerTableInputs): string[] {
       'Asymmetric sampling: entry 2j is loaded for the down-counting half and entry 2j + 1 for the up-counting half of carrier period j.',
     );
   }
-  if (isReducedCommonMode(inputs.modulation)) {
+  const reduced = isReducedCommonMode(inputs.modulation);
+  if (reduced) {
     lines.push(
       "Compare sense per entry and channel: 'below' = high side on while counter < highSide, low side while counter >= lowSide; 'above' = high side on while counter > highSide, low side while counter < lowSide (the middle phase against the inverted carrier, highSide = P - compare). Switch the channel's output polarity at the update event that loads the entry.",
-      'The middle phase of entry i is the one at angle (i + 1) * pi / (carrier / fundamental), the end of its half period; the pulses equal those of carrier PWM with regular-asymmetric sampling a quarter carrier period later.',
+      'The middle phase of entry i is the one at angle (i + 1) * pi / (carrier / fundamental), the end of its half period; the pulses are those of carrier PWM with regular-asymmetric sampling, a quarter carrier period earlier.',
     );
   }
   lines.push(
     deadTimeMethod === 'compare-offset'
       ? 'Dead time by compare offset: high side on while counter < highSide; low side on while counter >= lowSide; lowSide - highSide = deadTimeCounts at every edge; at 0 or 100 % duty one switch stays on.'
-      : 'Dead time by the timer dead-time generator: highSide = lowSide = compare (the low side is the complementary output); program deadTimeCounts ticks into the dead-time register (its encoding is timer-specific).',
+      : `Dead time by the timer dead-time generator: highSide = lowSide = compare${reduced ? " (P - compare for 'above' entries)" : ''} (the low side is the complementary output); program deadTimeCounts ticks into the dead-time register (its encoding is timer-specific).`,
     'Dead-time ticks are rounded up, so the realised dead time is never shorter than requested.',
   );
   return lines;
