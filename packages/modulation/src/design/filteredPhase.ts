@@ -120,10 +120,10 @@ export function filteredPhase(
     let peak = 0;
     let low = Infinity;
     let high = -Infinity;
-    for (let j = 0; j < size; j++) {
+    for (let j = 0, k = quarter; j < size; j++, k = k + 1 === size ? 0 : k + 1) {
       const value = samples[j] as number;
-      const cosine = sine[j < size - quarter ? j + quarter : j + quarter - size] as number;
-      const ripple = value - (firstRe * (sine[j] as number) + firstIm * cosine);
+      // cos(2πj/S) = sin(2π(j + S/4)/S): the sine table read a quarter period on.
+      const ripple = value - (firstRe * (sine[j] as number) + firstIm * (sine[k] as number));
       const magnitude = Math.abs(value);
       if (magnitude > peak) peak = magnitude;
       if (ripple < low) low = ripple;
@@ -160,10 +160,12 @@ export function filteredPhase(
   if (tail !== null)
     for (let j = 0; j < size; j++)
       inverterSamples[j] = (inverterSamples[j] as number) + (tail.samples[j] as number);
-  const capacitorSamples =
-    loadSamples === null
-      ? inverterSamples
-      : inverterSamples.map((value, j) => value - (loadSamples[j] as number));
+  let capacitorSamples = inverterSamples;
+  if (loadSamples !== null) {
+    capacitorSamples = new Float64Array(size);
+    for (let j = 0; j < size; j++)
+      capacitorSamples[j] = (inverterSamples[j] as number) - (loadSamples[j] as number);
+  }
   const tailMeanSquare = tail?.meanSquare ?? 0;
   const loadCurrent =
     loadSamples === null ? null : figures('load current', loadSamples, solved.loadCurrent, 0);
@@ -350,9 +352,9 @@ function switchingTail(
   }
   re[0] = inverter.re[0] as number;
   im[0] = inverter.im[0] as number;
-  const whole = integral.at(size);
-  const samples = new Float64Array(size);
-  for (let j = 0; j < size; j++) samples[j] = ((whole[j] as number) - integral.mean) / reactance;
+  // Φ at the S angles, turned into (Φ − mean Φ)/(ωL) where it lies.
+  const samples = integral.at(size);
+  for (let j = 0; j < size; j++) samples[j] = ((samples[j] as number) - integral.mean) / reactance;
   return {
     added: { re, im },
     samples,
