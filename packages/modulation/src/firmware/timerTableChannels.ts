@@ -3,6 +3,7 @@ import { compareSenses } from './compareSenses.js';
 import { complementaryCompares } from './complementaryCompares.js';
 import { dutyFromReference } from './dutyFromReference.js';
 import { legReferences } from './legReferences.js';
+import { senseCompares } from './senseCompares.js';
 import type { TimerTableInputs } from './timerTableInputs.js';
 import type { TimerTiming } from './timerTableTiming.js';
 import type { TimerChannel, TimerModulation } from './timerTableTypes.js';
@@ -27,7 +28,8 @@ export interface TimerChannels {
 
 /**
  * Internal to timerTable: per channel (inverter leg) the duty (1 + r)/2 of each entry's leg
- * reference, its compare value round(duty·full), its compare sense ({@link compareSenses}), and
+ * reference, its compare sense ({@link compareSenses}), its compare value ({@link senseCompares}:
+ * round(duty·full), or from the rounded counter threshold for an 'above' entry), and
  * the high- and low-side compare values as the registers take them, with the dead time offset
  * when the method is 'compare-offset'.
  */
@@ -43,19 +45,23 @@ export function timerTableChannels(inputs: TimerTableInputs, timing: TimerTiming
   const senses = compareSenses(inputs, channelCount);
   let overmodulated = 0;
   let maxRoundingCounts = 0;
-  const channels: TimerChannel[] = [];
-  for (let k = 0; k < channelCount; k++) {
-    const duty = references.map((r) => {
+  const duties = Array.from({ length: channelCount }, (_, k) =>
+    references.map((r) => {
       const value = r[k] as number;
       // A clamped reference is s + (1 − s), an ulp either side of the rail: not overmodulation.
       if (value > 1 + RAIL_TOLERANCE || value < -1 - RAIL_TOLERANCE) overmodulated++;
       return dutyFromReference(value);
-    });
-    const compare = duty.map((d) => Math.round(d * full));
+    }),
+  );
+  const compares = senseCompares(duties, senses, full);
+  const channels: TimerChannel[] = [];
+  for (let k = 0; k < channelCount; k++) {
+    const duty = duties[k] as number[];
+    const sense = senses[k] as TimerChannel['sense'];
+    const compare = compares[k] as number[];
     duty.forEach((d, i) => {
       maxRoundingCounts = Math.max(maxRoundingCounts, Math.abs((compare[i] as number) - d * full));
     });
-    const sense = senses[k] as TimerChannel['sense'];
     const { highSide, lowSide } = complementaryCompares(
       compare,
       full,

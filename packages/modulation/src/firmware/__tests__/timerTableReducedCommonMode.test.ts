@@ -126,9 +126,12 @@ describe('timer tables of the reduced common-mode methods (azspwm1, nspwm)', () 
     // The table samples each half period at its centre and threePhase at its start, so the
     // table's pulses are threePhase's with its carrier delayed a quarter carrier period. Ideal
     // counts: equal to rounding of the angles; the table's rounded counts: within half a count,
-    // the timer's resolution (one count is one tick of the up-down counter).
+    // the timer's resolution (one count is one tick of the up-down counter). Odd mf: with an
+    // even mf a carrier zero crossing, where threePhase reads the middle phase, falls exactly on
+    // 90° and 270°, where two sines are equal and either may be inverted (rounding of the angle
+    // picks one, in threePhase and in the table alike; both keep the common mode at ±vdc/6).
     for (const zeroSequence of REDUCED)
-      for (const mf of [25, 48, 51])
+      for (const mf of [7, 25, 51])
         for (const ma of zeroSequence === 'azspwm1' ? [0.2, 0.7, 1.1] : [0.8, 1, 1.15]) {
           const table = timerTable(options(zeroSequence, ma, mf));
           const reference = onlineLegs(zeroSequence, ma, mf);
@@ -167,21 +170,27 @@ describe('timer tables of the reduced common-mode methods (azspwm1, nspwm)', () 
 
   it('keep the common mode at ±vdc/6 (no 000 or 111): azspwm1 at every ma, nspwm from ma = 4/(3√3) (Hava and Ün 2009)', () => {
     // The rebuilt gates with the table's rounded counts, no dead time (the switches as commanded).
+    // Ties: at odd mf some samples fall on 30° boundaries (two sines equal), and with min-max
+    // waves r_max + r_min = 0 always, so an inverted leg's threshold can equal a normal leg's
+    // exactly; ma 0.5 and 0.02 put those on half counts, where rounding the on-time (0.5) or the
+    // last bit of the references (0.02, mf 3) gave a tick of 000 or 111 before senseCompares
+    // rounded the threshold and made such ties one register value. Also a clock giving an odd
+    // number of counts (6001 a half period).
     const cases: [Reduced, number[]][] = [
-      ['azspwm1', [0.02, 0.3, 0.6, 0.9, 1.1, 2 / SQRT3 - 1e-9]],
+      ['azspwm1', [0.001, 0.02, 0.3, 0.5, 0.6, 0.9, 1.1, 2 / SQRT3 - 1e-9]],
       ['nspwm', [1.002 * NSPWM_MIN, 0.85, 1, 1.1, 2 / SQRT3 - 1e-9]],
     ];
     for (const [zeroSequence, mas] of cases)
-      for (const mf of [9, 12, 15, 25, 48, 51, 201])
-        for (const ma of mas) {
-          const { legs } = timerTableWaveforms(timerTable(options(zeroSequence, ma, mf)), {
-            includeDeadTime: false,
-          });
-          expect(commonModeLevels(legs), `${zeroSequence} mf=${mf} ma=${ma}`).toEqual([
-            -vdc / 6,
-            vdc / 6,
-          ]);
-        }
+      for (const mf of [3, 7, 9, 12, 15, 18, 25, 48, 51, 201])
+        for (const ma of mas)
+          for (const timerClock of [50 * mf * 6000, 50 * mf * 12_002]) {
+            const table = timerTable(options(zeroSequence, ma, mf, { timerClock }));
+            const { legs } = timerTableWaveforms(table, { includeDeadTime: false });
+            expect(commonModeLevels(legs), `${zeroSequence} mf=${mf} ma=${ma}`).toEqual([
+              -vdc / 6,
+              vdc / 6,
+            ]);
+          }
     // The check can fail: the same waves with one carrier reach ±vdc/2, and so does nspwm 3 %
     // below its threshold (as threePhase does at mf 201).
     for (const zeroSequence of ['min-max', 'dpwm1'] as const) {
@@ -272,11 +281,16 @@ describe('timer tables of the reduced common-mode methods (azspwm1, nspwm)', () 
     const table = timerTable(options('nspwm', 0.9, 25));
     const full = table.fullScaleCounts;
     for (const channel of table.channels)
-      channel.sense.forEach((sense, i) =>
+      channel.sense.forEach((sense, i) => {
+        const duty = channel.duty[i] ?? NaN;
+        // The register holds the rounded threshold: full·(1 − duty) above, full·duty below.
+        expect(channel.highSide[i]).toBe(
+          sense === 'above' ? Math.round((1 - duty) * full) : Math.round(duty * full),
+        );
         expect(channel.highSide[i]).toBe(
           sense === 'above' ? full - (channel.compare[i] ?? 0) : channel.compare[i],
-        ),
-      );
+        );
+      });
     expect(JSON.parse(timerTableToJson(table))).toEqual(table);
     // RFC 4180 without quoting (no cell holds a comma or quote): split and read back.
     const [header, ...rows] = timerTableToCsv(table).trimEnd().split('\r\n');
