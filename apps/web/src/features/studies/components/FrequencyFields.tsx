@@ -4,7 +4,7 @@ import { rangeText } from '../../../lib/fieldRange';
 import { isCarrierMethod, type StudyDraft } from '../model/studyDraft';
 import type { StudyFieldErrors } from './studyFieldErrors';
 import { DEGREES, RADIANS_TO_DEGREES } from './studyFormUnits';
-import { RATIO_BOUNDS, type CarrierFields } from './useCarrierFields';
+import { ratioBounds, type CarrierFields } from './useCarrierFields';
 
 /** The mf slider covers the useful part of its range; the number box beside takes the whole range. */
 const MF_SLIDER = { min: 1, max: 201 } as const;
@@ -18,7 +18,7 @@ export function frequencyFields({
   draft,
   onChange,
   fields: { limits },
-  carrier: { ratio, ratioError, carrierMessage, setRatio, setCarrier, setFundamental },
+  carrier: { ratio, ratioError, carrierMessage, spanHint, setRatio, setCarrier, setFundamental },
 }: {
   draft: StudyDraft;
   onChange: (patch: Partial<StudyDraft>) => void;
@@ -47,7 +47,7 @@ export function frequencyFields({
             min={MF_SLIDER.min}
             max={MF_SLIDER.max}
             step={1}
-            hint={`carrier ÷ fundamental, ${rangeText(RATIO_BOUNDS)}${method === 'space-vector' ? ' (switching periods per fundamental period)' : '; odd values give quarter-wave symmetry'}`}
+            hint={`carrier ÷ fundamental, ${rangeText(ratioBounds(method))}${method === 'space-vector' ? ' (switching periods per fundamental period)' : '; odd values give quarter-wave symmetry'}`}
             error={ratioError}
             onChange={setRatio}
           />
@@ -56,9 +56,10 @@ export function frequencyFields({
             unit="Hz"
             value={draft.carrierFrequency}
             hint={
-              Number.isFinite(ratio)
-                ? `mf = ${ratio} · a whole multiple of the fundamental`
-                : 'a whole multiple of the fundamental'
+              spanHint ??
+              (Number.isFinite(ratio)
+                ? `mf = ${ratio} · a whole multiple of the fundamental${ratioBounds(method).integer ? '' : ', or any ratio (analysed over q periods of its nearest p/q)'}`
+                : 'a whole multiple of the fundamental')
             }
             error={carrierMessage}
             onChange={setCarrier}

@@ -17,6 +17,25 @@ const threePhase: InverterDesign = {
 const figure = (label: string) => document.querySelector(`[data-figure="${label}"]`);
 
 describe('StudyCharts', () => {
+  it('a carrier that is no whole multiple: states p/q, the carrier analysed and the span, and draws over it', () => {
+    // 1000 Hz at 37 Hz is 1000/37: the library's report over 37 periods (its carrierSpan).
+    const report = analyseDesign(
+      { ...threePhase, fundamentalFrequency: 37, carrierFrequency: 1000, filter: null },
+      { maxOrder: 50, points: 256 },
+    );
+    render(<StudyCharts report={report} fileStem="t" />);
+    const note = screen.getByTestId('carrier-span');
+    expect(note).toHaveTextContent('mf = 1000/37 ≈ 27.027');
+    expect(note).toHaveTextContent(`${formatNumber(1000, 9)} Hz (0 Hz from the one entered)`);
+    expect(note).toHaveTextContent('repeats after 37 fundamental periods (1000 carrier cycles)');
+    expect(note).toHaveTextContent(`step by ${formatNumber(1, 6)} Hz`);
+    expect(screen.getByText('Bridge voltage over 37 fundamental periods')).toBeInTheDocument();
+    expect(screen.getByText('Currents of phase a over 37 fundamental periods')).toBeInTheDocument();
+    // A whole ratio says nothing of a span.
+    const whole = analyseDesign({ ...threePhase, filter: null }, { maxOrder: 50, points: 256 });
+    expect(whole.carrierSpan).toBeUndefined();
+  });
+
   it('shows the report figures as they are: exact THD, per phase and line-to-line, currents and the limit result', () => {
     const report = analyseDesign(threePhase);
     render(<StudyCharts report={report} fileStem="t" />);

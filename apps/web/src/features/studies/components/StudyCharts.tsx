@@ -7,6 +7,7 @@ import { SpectrumChart, type SpectrumSeries } from '../../../components/charts/S
 import { WaveformChart } from '../../../components/charts/WaveformChart';
 import { formatNumber } from '../../../lib/format';
 import { reportFigures } from '../model/reportFigures';
+import { CarrierSpanNote } from './CarrierSpanNote';
 import { CommonModePanel } from './CommonModePanel';
 import { GridPanel } from './GridPanel';
 import { LossPanel } from './LossPanel';
@@ -28,6 +29,7 @@ const selectClass = 'rounded border border-rule bg-panel px-1.5 py-0.5 text-xs';
 export function StudyCharts({ report, fileStem }: { report: StudyReport; fileStem: string }) {
   return (
     <div className="flex flex-col gap-4">
+      <CarrierSpanNote report={report} />
       <FigureCards figures={reportFigures(report)} label="Summary" />
       <VoltageChart report={report} fileStem={fileStem} />
       {report.multilevel ? (
@@ -77,10 +79,18 @@ function VoltageChart({ report, fileStem }: { report: StudyReport; fileStem: str
           values: report.output.series.values,
         }
       : undefined;
+  // Over a span the voltages cover q periods and the modulator one: the voltage is drawn alone.
+  const span = report.carrierSpan;
   return (
     <WaveformChart
-      title={report.modulator ? 'Modulator and bridge voltage' : 'Bridge voltage'}
-      modulator={report.modulator ?? undefined}
+      title={
+        span
+          ? `Bridge voltage over ${span.q} fundamental periods`
+          : report.modulator
+            ? 'Modulator and bridge voltage'
+            : 'Bridge voltage'
+      }
+      modulator={span ? undefined : (report.modulator ?? undefined)}
       output={voltage.waveform}
       outputName={voltage.name}
       overlay={overlay}
@@ -172,7 +182,7 @@ function CurrentsChart({ report, fileStem }: { report: StudyReport; fileStem: st
   );
   return (
     <PeriodChart
-      title={report.phaseCount === 3 ? `Currents of phase ${phase.phase}` : 'Currents'}
+      title={`${report.phaseCount === 3 ? `Currents of phase ${phase.phase}` : 'Currents'}${report.carrierSpan ? ` over ${report.carrierSpan.q} fundamental periods` : ''}`}
       fileName={`${fileStem}-currents`}
       unit="amperes"
       traces={currentTraces(phase)}

@@ -267,7 +267,9 @@ function StudyEditor({ study }: { study: Study | undefined }) {
           ) : (
             <Loading label="Computing the live report…" />
           )}
-          {hasAsynchronousCarrier(draft) ? <AsynchronousSpectraPanel design={design} /> : null}
+          {hasAsynchronousCarrier(draft) && !report?.carrierSpan ? (
+            <AsynchronousSpectraPanel design={design} />
+          ) : null}
         </div>
       </div>
     </div>

@@ -1,4 +1,4 @@
-import { fireEvent, render, screen, within } from '@testing-library/react';
+import { cleanup, fireEvent, render, screen, within } from '@testing-library/react';
 import { describe, expect, it, vi } from 'vitest';
 import { ApiError } from '../../../lib/api';
 import { defaultDraft, type StudyDraft } from '../model/studyDraft';
@@ -113,14 +113,22 @@ describe('StudyForm', () => {
     );
     expect(mf).toHaveValue('0.5');
     expect(mf).toHaveAccessibleDescription(
-      'Frequency ratio mf must be a whole number from 1 to 1,000 (entered 0.5)',
+      // Sine-triangle takes any ratio from 1 (analysed over q periods of its p/q): 0.5 is below.
+      'Frequency ratio mf must be from 1 to 1,000 (entered 0.5)',
     );
     // The carrier field does not repeat it with a value the user never typed.
     expect(screen.getByLabelText(/Carrier frequency/)).not.toHaveAttribute('aria-invalid');
   });
 
-  it('puts a typed carrier that is not a whole multiple on the carrier field, in hertz as entered, with the nearest whole mf', () => {
+  it('states a typed carrier that is not a whole multiple as its ratio p/q and span; a multilevel one is refused with the nearest whole mf', () => {
     renderForm({ ...defaultDraft(), carrierFrequency: 1075 });
+    const carrier = screen.getByLabelText(/Carrier frequency/);
+    expect(carrier).not.toHaveAttribute('aria-invalid');
+    expect(carrier).toHaveAccessibleDescription(
+      'mf = 43/2 ≈ 21.5: the report is exact over 2 fundamental periods (43 carrier cycles) with its sub-harmonics; carrier analysed 1075 Hz, 0 Hz from the one entered',
+    );
+    cleanup();
+    renderForm({ ...defaultDraft(), method: 'multilevel-carrier', carrierFrequency: 1075 });
     expect(screen.getByLabelText(/Carrier frequency/)).toHaveAccessibleDescription(
       'Carrier frequency 1075 Hz is 21.5 times the fundamental, 50 Hz: the design report takes a whole multiple (1 to 1000 times), the nearest being mf = 22 (1100 Hz), so set that to save the study; the panel "Carrier as typed" analyses 1075 Hz as it is',
     );

@@ -40,6 +40,23 @@ export const COLUMNS: Column[] = [
         : `${formatNumber(row.factor)} × the carrier as designed, rounded to a whole mf`),
   },
   {
+    heading: 'mf',
+    // A carrier that is no whole multiple: the ratio p/q its report is exact over (q periods).
+    cell: (r) =>
+      r.carrierSpan
+        ? `${r.carrierSpan.p}/${r.carrierSpan.q}`
+        : r.frequencyRatio === null
+          ? '—'
+          : formatNumber(r.frequencyRatio),
+    value: (r) => r.frequencyRatio,
+    title: (r) =>
+      r.carrierSpan
+        ? `≈ ${formatNumber(r.frequencyRatio ?? 0, 6)}, figures over ${r.carrierSpan.q} fundamental periods; carrier analysed ${formatNumber(r.carrierSpan.carrierFrequency, 9)} Hz`
+        : r.frequencyRatio === null
+          ? 'a stored pattern has no carrier'
+          : 'carrier ÷ fundamental',
+  },
+  {
     heading: 'Switching loss (W)',
     cell: (r) => (r.losses ? formatNumber(r.losses.switching) : '—'),
     value: (r) => r.losses?.switching ?? null,

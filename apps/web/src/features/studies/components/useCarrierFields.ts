@@ -1,8 +1,11 @@
 import {
+  ASYNCHRONOUS_METHODS,
   DESIGN_BOUNDS,
   designFrequencyRatio,
+  designRationalRatio,
   MAX_DESIGN_FREQUENCY_RATIO,
   type NumberBounds,
+  type RationalRatio,
 } from '@pulsewright/modulation';
 import { useState } from 'react';
 import { rangeError } from '../../../lib/fieldRange';
@@ -17,6 +20,15 @@ export const RATIO_BOUNDS: NumberBounds = {
   max: MAX_DESIGN_FREQUENCY_RATIO,
   integer: true,
 };
+
+/**
+ * The frequency ratio's range for a method: any ratio for sine-triangle, three-phase carrier
+ * and space vector (the report analyses it over q periods of its nearest p/q), a whole number
+ * for the multilevel methods.
+ */
+export function ratioBounds(method: StudyDraft['method']): NumberBounds {
+  return ASYNCHRONOUS_METHODS.includes(method) ? { ...RATIO_BOUNDS, integer: false } : RATIO_BOUNDS;
+}
 
 /**
  * The fundamental, frequency ratio mf and carrier fields' state: mf as typed (kept and refused,
@@ -52,7 +64,9 @@ export function useCarrierFields(
   };
   const carrierError = error('carrierFrequency');
   const ratioError =
-    typedRatio === null ? undefined : rangeError('Frequency ratio mf', typedRatio, RATIO_BOUNDS);
+    typedRatio === null
+      ? undefined
+      : rangeError('Frequency ratio mf', typedRatio, ratioBounds(method));
   // The carrier's own message, in hertz with what was entered; a ratio typed in the mf box is
   // judged there instead (its message would otherwise quote a carrier the user never typed).
   const carrierRangeMessage =
@@ -61,9 +75,16 @@ export function useCarrierFields(
       : rangeError('Carrier frequency', draft.carrierFrequency, DESIGN_BOUNDS.carrierFrequency, {
           unit: 'Hz',
         });
-  // A carrier in range that is not a whole multiple: the report needs a whole mf, and the page's
-  // "Carrier as typed" panel analyses the carrier as typed (a ratio p/q over q periods).
-  const asynchronous = typedRatio === null && hasAsynchronousCarrier(draft);
+  // A carrier in range that is not a whole multiple: sine-triangle, three-phase carrier and
+  // space vector are analysed over q periods of its nearest p/q (stated in the carrier's hint);
+  // a multilevel design needs a whole mf, and the page's "Carrier as typed" panel analyses it.
+  const spanned = hasAsynchronousCarrier(draft);
+  const asynchronous = typedRatio === null && spanned && !ASYNCHRONOUS_METHODS.includes(method);
+  const span = spanned && ASYNCHRONOUS_METHODS.includes(method) ? spanOf(draft) : null;
+  const spanHint =
+    span === null
+      ? undefined
+      : `mf = ${span.p}/${span.q} ≈ ${formatNumber(span.p / span.q, 6)}: the report is exact over ${span.q} fundamental period${span.q === 1 ? '' : 's'} (${span.p} carrier cycles) with its sub-harmonics; carrier analysed ${formatNumber((span.p / span.q) * draft.fundamentalFrequency, 9)} Hz, ${formatNumber(span.error, 3)} Hz from the one entered`;
   const typedMultiple = draft.carrierFrequency / draft.fundamentalFrequency;
   const nearestWhole = Math.min(MAX_DESIGN_FREQUENCY_RATIO, Math.max(1, Math.round(typedMultiple)));
   const carrierMessage =
@@ -80,7 +101,16 @@ export function useCarrierFields(
         ? { fundamentalFrequency: f, carrierFrequency: ratio * f }
         : { fundamentalFrequency: f },
     );
-  return { ratio, ratioError, carrierMessage, setRatio, setCarrier, setFundamental };
+  return { ratio, ratioError, carrierMessage, spanHint, setRatio, setCarrier, setFundamental };
+}
+
+/** The draft's ratio as its nearest p/q, or null when the ratio is out of range (said on the field). */
+function spanOf(draft: StudyDraft): RationalRatio | null {
+  try {
+    return designRationalRatio(draft);
+  } catch {
+    return null;
+  }
 }
 
 /** What `useCarrierFields` returns, handed to the frequency fields. */

@@ -4,8 +4,10 @@ import { isCarrierMethod, type StudyDraft } from './studyDraft';
 
 /**
  * Whether a draft's carrier, with both frequencies in range, is not a whole multiple (1 to the
- * library's largest) of its fundamental: the design report refuses it (the library's
- * designFrequencyRatio), while POST /designs/asynchronous-spectra analyses it as a ratio p/q.
+ * library's largest) of its fundamental (the library's designFrequencyRatio): the design report
+ * analyses it over q periods of its nearest p/q for sine-triangle, three-phase carrier and space
+ * vector without a filter or grid (its `carrierSpan`), and POST /designs/asynchronous-spectra
+ * gives the spectra of any two-level carrier design as it is typed.
  */
 export function hasAsynchronousCarrier(
   draft: Pick<StudyDraft, 'method' | 'carrierFrequency' | 'fundamentalFrequency'>,

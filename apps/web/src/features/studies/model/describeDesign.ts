@@ -1,4 +1,5 @@
 import {
+  designCarrierSpan,
   designFrequencyRatio,
   MODULATION_METHOD_LABELS,
   modulationPhaseCount,
@@ -24,12 +25,23 @@ import { designOf, draftOf } from './studyDraft';
 
 const degrees = (radians: number) => `${formatNumber((radians * 180) / Math.PI, 6)}°`;
 
-/** The frequency ratio a carrier design states (carrier ÷ fundamental), for display. */
+/**
+ * The frequency ratio a carrier design states (carrier ÷ fundamental), for display: a whole mf,
+ * or for a ratio that is not whole its nearest p/q and the span the report covers (sine-triangle,
+ * three-phase carrier, space vector; designCarrierSpan).
+ */
 function ratioText(design: InverterDesign): string {
   if (design.carrierFrequency === undefined) return '';
   try {
     return `mf ${designFrequencyRatio(design)}`;
   } catch {
+    try {
+      const span = designCarrierSpan(design);
+      if (span !== null)
+        return `mf ${span.p}/${span.q} ≈ ${formatNumber(span.p / span.q, 6)}, analysed over ${span.q} fundamental periods`;
+    } catch {
+      // Out of range: said on the field.
+    }
     return 'mf not a whole number';
   }
 }

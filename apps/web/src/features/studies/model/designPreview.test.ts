@@ -19,8 +19,14 @@ describe('previewDesign', () => {
     expect(errors[0]?.message).toMatch(/modulation\.ma/);
   });
 
-  it('names the carrier when it is not a whole multiple of the fundamental', () => {
-    const { errors } = previewDesign(designOf({ ...defaultDraft(), carrierFrequency: 1051 }));
+  it('analyses a carrier that is not a whole multiple over its span, and names it with a filter', () => {
+    // 1051 Hz over 50 Hz is 1051/50: the library's report over 50 periods, its carrierSpan stated.
+    const spanned = previewDesign(designOf({ ...defaultDraft(), carrierFrequency: 1051 }));
+    expect(spanned.errors).toEqual([]);
+    expect(spanned.report?.carrierSpan).toMatchObject({ p: 1051, q: 50 });
+    const { errors } = previewDesign(
+      designOf({ ...defaultDraft(), carrierFrequency: 1051, filterOn: true }),
+    );
     expect(errors.map((e) => e.field)).toEqual(['carrierFrequency']);
   });
 
