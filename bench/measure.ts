@@ -14,6 +14,25 @@ export function medianTime(task: () => unknown, runs = 50, warmup = 50): number 
   return times[Math.floor(times.length / 2)] as number;
 }
 
+/**
+ * Median CPU time (ms, user + system of this process, `process.cpuUsage`) of `runs` calls of
+ * `task` after `warmup` untimed calls. On a shared machine a call's wall time also counts the
+ * time other processes hold the cores; its CPU time counts only its own work, so ratios of CPU
+ * times measured in one run stay comparable when the machine is busy.
+ */
+export function medianCpuTime(task: () => unknown, runs = 50, warmup = 50): number {
+  for (let i = 0; i < warmup; i++) task();
+  const times: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const start = process.cpuUsage();
+    task();
+    const used = process.cpuUsage(start);
+    times.push((used.user + used.system) / 1000);
+  }
+  times.sort((a, b) => a - b);
+  return times[Math.floor(times.length / 2)] as number;
+}
+
 /** Prints a markdown table of label/value rows under a heading. */
 export function printTable(heading: string, rows: [string, string][]): void {
   console.log(`\n### ${heading}\n`);
