@@ -11,6 +11,46 @@ const pump = parseYaml(readFileSync(example('pump-inverter.yaml'), 'utf8')) as I
 const drive = JSON.parse(readFileSync(example('drive.json'), 'utf8')) as InverterDesign;
 
 describe('pulsewright report', () => {
+  it('takes a fixed carrier that is no whole multiple of the fundamental: the library’s report over its span', async () => {
+    // 4 kHz at 37 Hz is 4000/37: the report covers 37 periods (carrierSpan), as the library's.
+    const flags = [
+      '--method',
+      'three-phase',
+      '--ma',
+      '0.7',
+      '--vdc',
+      '560',
+      '--fundamental-frequency',
+      '37',
+      '--carrier-frequency',
+      '4000',
+      '--load-r',
+      '3',
+      '--load-l',
+      '0.01',
+      '--max-order',
+      '50',
+      '--points',
+      '256',
+    ];
+    const json = await runCli(['report', ...flags, '--json']);
+    expect(json.code).toBe(0);
+    const design: InverterDesign = {
+      vdc: 560,
+      fundamentalFrequency: 37,
+      carrierFrequency: 4000,
+      modulation: { method: 'three-phase', ma: 0.7 },
+      load: { r: 3, l: 0.01 },
+    };
+    expect(JSON.parse(json.stdout)).toEqual(
+      viaJson(analyseDesign(design, { maxOrder: 50, points: 256 })),
+    );
+    const text = await runCli(['report', ...flags]);
+    expect(text.code).toBe(0);
+    expect(text.stdout).toContain('frequency ratio mf 4000/37 ≈ 108.108');
+    expect(text.stdout).toContain('every figure over 37 fundamental periods');
+  });
+
   it("prints the library's design report for a YAML design file, as JSON", async () => {
     const run = await runCli([
       'report',

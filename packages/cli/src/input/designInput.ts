@@ -81,7 +81,7 @@ export const DESIGN_FLAGS: readonly DesignFlag[] = [
     key: 'carrierFrequency',
     path: 'carrierFrequency',
     read: parseNumber,
-    help: 'carrier frequency, hertz (a whole multiple of the fundamental)',
+    help: 'carrier frequency, hertz (a whole multiple of the fundamental, or any ratio for sine-triangle, three-phase and space vector: analysed over q periods of its nearest p/q)',
   },
   {
     flag: '--load-r <ohms>',

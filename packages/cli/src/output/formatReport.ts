@@ -10,10 +10,13 @@ import { formatTable } from './formatTable.js';
  */
 export function formatReport(report: DesignReport): string {
   const parts: string[] = [];
+  const span = report.carrierSpan;
   const ratio =
     report.frequencyRatio === null
       ? 'no carrier (stored pattern)'
-      : `frequency ratio mf ${report.frequencyRatio}`;
+      : span
+        ? `frequency ratio mf ${span.p}/${span.q} ≈ ${formatNumber(report.frequencyRatio)} (carrier analysed ${formatNumber(span.carrierFrequency)} Hz, ${formatNumber(span.carrierError)} Hz from the one given; every figure over ${span.q} fundamental periods, spectra in steps of ${formatNumber(span.baseFrequency)} Hz with the sub-harmonics)`
+        : `frequency ratio mf ${report.frequencyRatio}`;
   parts.push(
     `${report.methodLabel} (${report.method}), ${report.phaseCount === 3 ? 'three-phase' : 'single-phase'} bridge\n` +
       `fundamental frequency ${formatNumber(report.fundamentalFrequency)} Hz, ${ratio}, spectra to order ${report.maxOrder}\n`,
