@@ -26,7 +26,10 @@ export function commonModeFigures(
   },
 ): CommonModeFigures {
   const { maxOrder, frequencyRatio, label, reducedRange, name } = context;
-  const waveform = combineWaveforms(legs, ([a = 0, b = 0, c = 0]) => (a + b + c) / 3);
+  const waveform = combineWaveforms(
+    legs,
+    (levels) => ((levels[0] ?? 0) + (levels[1] ?? 0) + (levels[2] ?? 0)) / 3,
+  );
   // Levels are sums of ±vdc/2 thirds: round away the last bits so equal levels compare equal.
   const levels = [...new Set(waveform.levels.map((level) => Number(level.toPrecision(12))))].sort(
     (x, y) => x - y,

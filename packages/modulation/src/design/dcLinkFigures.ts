@@ -34,7 +34,8 @@ export function dcLinkFigures(
   const { vdc, phaseCount, maxOrder, points, label, fft } = context;
   const size = inverterSamples[0]?.length ?? 0;
   const current = new Float64Array(size);
-  switching.forEach(({ edges, levels }, k) => {
+  for (let k = 0; k < switching.length; k++) {
+    const { edges, levels } = switching[k] as Waveform;
     const phaseCurrent = inverterSamples[k] as Float64Array;
     // One walk along the edges (the grid is in order): before the first edge the period's last level.
     let segment = -1;
@@ -47,10 +48,11 @@ export function dcLinkFigures(
       }
       current[j] = (current[j] as number) + share * (phaseCurrent[j] as number);
     }
-  });
+  }
   let sum = 0;
   let sumOfSquares = 0;
-  for (const value of current) {
+  for (let j = 0; j < size; j++) {
+    const value = current[j] as number;
     sum += value;
     sumOfSquares += value * value;
   }
@@ -61,11 +63,12 @@ export function dcLinkFigures(
     ? context.labelPhasors(phasors)
     : label(harmonicsOfPhasors(phasors));
   const stride = Math.max(1, Math.floor(size / points));
-  const angles: number[] = [];
-  const values: number[] = [];
-  for (let j = 0; j < size; j += stride) {
-    angles.push((TAU * j) / size);
-    values.push(current[j] as number);
+  const count = Math.ceil(size / stride);
+  const angles = new Array<number>(count);
+  const values = new Array<number>(count);
+  for (let k = 0, j = 0; k < count; k++, j += stride) {
+    angles[k] = (TAU * j) / size;
+    values[k] = current[j] as number;
   }
   return {
     mean,

@@ -93,11 +93,12 @@ export function filteredPhase(
   const { size, sine } = synthesiser;
   const series = (values: Float64Array): PeriodSeries => {
     const stride = Math.max(1, Math.floor(values.length / points));
-    const angles: number[] = [];
-    const picked: number[] = [];
-    for (let j = 0; j < values.length; j += stride) {
-      angles.push((TAU * j) / values.length);
-      picked.push(values[j] as number);
+    const count = Math.ceil(values.length / stride);
+    const angles = new Array<number>(count);
+    const picked = new Array<number>(count);
+    for (let k = 0, j = 0; k < count; k++, j += stride) {
+      angles[k] = (TAU * j) / values.length;
+      picked[k] = values[j] as number;
     }
     return { angles, values: picked };
   };

@@ -136,12 +136,16 @@ function threePhaseVoltages(
       name: `phase ${p} to star point`,
       waveform: combineWaveforms(
         [at(k), at(k + 1), at(k + 2)],
-        ([own = 0, next = 0, last = 0]) => (2 * own - next - last) / 3,
+        // Indexed, not destructured: destructuring runs the array iterator at every edge.
+        (levels) => (2 * (levels[0] ?? 0) - (levels[1] ?? 0) - (levels[2] ?? 0)) / 3,
       ),
     })),
     lines: PHASE_NAMES.map((p, k) => ({
       name: `line ${p}−${PHASE_NAMES[(k + 1) % 3]}`,
-      waveform: combineWaveforms([at(k), at(k + 1)], ([own = 0, next = 0]) => own - next),
+      waveform: combineWaveforms(
+        [at(k), at(k + 1)],
+        (levels) => (levels[0] ?? 0) - (levels[1] ?? 0),
+      ),
     })),
   };
 }

@@ -7,16 +7,20 @@ import type { OutputNetwork } from './outputNetworkResponse.js';
  * analysis and the same floating-point operations in the same order as `outputNetworkResponse`
  * (which reads its result from here), with no object per complex number: a report solves the
  * network at every order of its spectrum. Internal.
- * @param vRe - bridge voltage phasor, real part, volts (vIm its imaginary part)
- * @param eRe - back-EMF phasor, real part, volts (eIm its imaginary part)
+ * @param phasors - the bridge voltage's real and imaginary parts, then the back-EMF's, volts
  */
 export function solveOutputNetwork(
   network: OutputNetwork,
   omega: number,
-  [vRe, vIm, eRe, eIm]: readonly [number, number, number, number],
+  phasors: readonly [number, number, number, number],
   into: Float64Array,
   at: number,
 ): void {
+  // Read by index: destructuring the tuple would run the array iterator at every call.
+  const vRe = phasors[0];
+  const vIm = phasors[1];
+  const eRe = phasors[2];
+  const eIm = phasors[3];
   const { filter, load } = network;
   // Y_l = 1/(r + jωl), as complexDivide divides 1 + j0 by it.
   let ylRe = 0;

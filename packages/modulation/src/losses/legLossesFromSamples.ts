@@ -49,8 +49,14 @@ export function legLossesFromSamples(
   assertNumberInRange('switchingFrequency', fsw, { min: 0, minExclusive: true });
   // Conduction and switching sums of the upper and lower transistor and diode, in local
   // variables (this loop runs once per cell of every report with a device).
-  let [utConduction, ltConduction, udConduction, ldConduction] = [0, 0, 0, 0];
-  let [utSwitching, ltSwitching, udSwitching, ldSwitching] = [0, 0, 0, 0];
+  let utConduction = 0;
+  let ltConduction = 0;
+  let udConduction = 0;
+  let ldConduction = 0;
+  let utSwitching = 0;
+  let ltSwitching = 0;
+  let udSwitching = 0;
+  let ldSwitching = 0;
   for (let j = 0; j < duties.length; j++) {
     const d = duties[j] as number;
     if (d < 0 || d > 1) throw new ParameterRangeError(`duties[${j}]`, 'a fraction in [0, 1]', d);
