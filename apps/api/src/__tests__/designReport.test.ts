@@ -6,6 +6,7 @@ import {
 } from '@pulsewright/modulation';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { reportCost } from '../services/cost.js';
 import { reportFigures } from '../services/studyShare.js';
 import { DEMO, signIn, testApp, type TestApp } from './helpers.js';
 
@@ -171,6 +172,14 @@ describe('design report routes', () => {
     expect(reportFigures(report.body as DesignReport)).toContain(
       'mf 4000/37 (carrier analysed 4000 Hz, 0 Hz from the one asked for; every figure over 37 fundamental periods',
     );
+    // Without options: the span's default order, ⌈mf⌉ + 10 = 119 (the first carrier group and its
+    // main sidebands), and an answer within the cost model's estimate of its size (which errs high).
+    const byDefault = await request(t.app).get(`/api/v1/studies/${studyId}/report`).set(auth);
+    expect(byDefault.status, JSON.stringify(byDefault.body).slice(0, 400)).toBe(200);
+    expect(byDefault.body.maxOrder).toBe(119);
+    const estimate = reportCost(design, {});
+    expect(byDefault.text.length).toBeLessThanOrEqual(estimate.responseBytes);
+    expect(byDefault.text.length).toBeGreaterThan(0.8 * estimate.responseBytes);
     const csv = await request(t.app)
       .get(`/api/v1/studies/${studyId}/report`)
       .query({ ...options, format: 'csv' })

@@ -69,6 +69,15 @@ const TIMER_BYTES_PER_ROW_CHANNEL = { json: 100, csv: 50, 'c-header': 20 } as co
 /** Bytes of one number in a JSON answer, with its key and punctuation where it is in an object. */
 const BYTES_PER_NUMBER = 20;
 
+/**
+ * Bytes of a report over a span (a carrier no whole multiple of the fundamental), measured on the
+ * 4000/37 three-phase report (8.38 MB at maxOrder 135): 27 bytes an edge of its voltages with its
+ * level, so 13.5 a number, and 166 bytes a labelled component (order n/q, its label and kind);
+ * rounded up.
+ */
+const SPAN_BYTES_PER_VOLTAGE_NUMBER = 15;
+const SPAN_BYTES_PER_COMPONENT = 170;
+
 const sci = (value: number): string => value.toPrecision(3);
 
 /**
@@ -341,14 +350,20 @@ export function reportCost(
     fields: fields.length ? fields : [field],
     // Labelled spectra (about five numbers an order and voltage), time series, and the edges of each voltage.
     responseBytes:
-      BYTES_PER_NUMBER *
-      ((span === null
-        ? 5 * (maxOrder + 1) * ((filtered ? 3 : 2) + (grid ? 2 : 0))
-        : // A span's four spectra (bridge, line, common mode, DC link), six values a component.
-          6 * (q * maxOrder + 1) * 4) +
-        series * points +
-        voltageNumbers),
-    responseFields: ['maxOrder', 'points'].filter((name) => optionFields.includes(name)),
+      span === null
+        ? BYTES_PER_NUMBER *
+          (5 * (maxOrder + 1) * ((filtered ? 3 : 2) + (grid ? 2 : 0)) +
+            series * points +
+            voltageNumbers)
+        : // A span's four labelled spectra (bridge, line, common mode, DC link) and its voltages.
+          SPAN_BYTES_PER_COMPONENT * (q * maxOrder + 1) * 4 +
+          SPAN_BYTES_PER_VOLTAGE_NUMBER * voltageNumbers +
+          BYTES_PER_NUMBER * series * points,
+    // A span's size is set by its carrier cycles p as much as by the orders.
+    responseFields: [
+      ...(span === null ? [] : [`${field}.carrierFrequency`]),
+      ...['maxOrder', 'points'].filter((name) => optionFields.includes(name)),
+    ],
     series,
     points,
   };
