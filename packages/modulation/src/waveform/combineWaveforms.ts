@@ -1,10 +1,11 @@
 import type { Waveform } from './Waveform.js';
-import { waveformFromTransitions, type Transition } from './waveformFromTransitions.js';
+import { waveformFromAscending } from './waveformFromAscending.js';
 
 /**
  * Combines waveforms point by point: the result holds `combine(levels)` wherever the inputs
  * hold `levels` (one level per input, in the order given). Exact: the result's edges are the
- * union of the inputs' edges, then canonicalised by {@link waveformFromTransitions}.
+ * union of the inputs' edges, then canonicalised as `waveformFromTransitions` canonicalises them
+ * (`waveformFromAscending`).
  *
  * Used for line-to-line voltages (leg a − leg b) and for sums of cells.
  *
@@ -24,7 +25,8 @@ export function combineWaveforms(
   // Each input's edges ascend: merge them, taking the next smallest angle each step (k-way
   // merge; a handful of inputs, so a scan beats a heap).
   const next = new Array<number>(count).fill(0);
-  const transitions: Transition[] = [];
+  const angles: number[] = [];
+  const combined: number[] = [];
   for (;;) {
     let angle = Infinity;
     for (let k = 0; k < count; k++) {
@@ -40,7 +42,9 @@ export function combineWaveforms(
         next[k] = i + 1;
       }
     }
-    transitions.push({ angle, level: combine(current) });
+    angles.push(angle);
+    combined.push(combine(current));
   }
-  return waveformFromTransitions(transitions);
+  // The merged angles ascend in [0, 2π): canonicalise them as waveformFromTransitions would.
+  return waveformFromAscending(angles, combined);
 }

@@ -1,5 +1,6 @@
-import { EDGE_EPSILON, TAU, wrapAngle } from '../math.js';
+import { wrapAngle } from '../math.js';
 import type { Waveform } from './Waveform.js';
+import { waveformFromAscending } from './waveformFromAscending.js';
 
 /** A level that starts at `angle` (radians, any value: it is wrapped into [0, 2π)). */
 export interface Transition {
@@ -19,30 +20,12 @@ export interface Transition {
 export function waveformFromTransitions(transitions: readonly Transition[]): Waveform {
   const count = transitions.length;
   if (count === 0) throw new RangeError('transitions must hold at least one entry');
-  const angles: number[] = [];
-  const levels: number[] = [];
   const wrappedAngles = transitions.map((t) => wrapAngle(t.angle));
-  for (const index of ascendingOrder(wrappedAngles)) {
-    const wrapped = wrappedAngles[index] as number;
-    const { level } = transitions[index] as Transition;
-    // Merge near-coincident transitions: the last of a cluster holds the level after it.
-    if (angles.length > 0 && wrapped - (angles[angles.length - 1] as number) < EDGE_EPSILON) {
-      levels[levels.length - 1] = level;
-    } else {
-      angles.push(wrapped);
-      levels.push(level);
-    }
-  }
-  // A cluster straddling 2π: the transition just after 0 is the later one (it sits at 2π plus a
-  // little), so its level stands and the one just before 2π is dropped.
-  if (
-    angles.length > 1 &&
-    (angles[0] as number) + TAU - (angles[angles.length - 1] as number) < EDGE_EPSILON
-  ) {
-    angles.pop();
-    levels.pop();
-  }
-  return dropRepeatedLevels(angles, levels);
+  const order = ascendingOrder(wrappedAngles);
+  return waveformFromAscending(
+    order.map((index) => wrappedAngles[index] as number),
+    order.map((index) => (transitions[index] as Transition).level),
+  );
 }
 
 /**
@@ -66,17 +49,4 @@ function ascendingOrder(wrapped: readonly number[]): number[] {
   return Array.from({ length: count }, (_, k) => k).sort(
     (a, b) => (wrapped[a] as number) - (wrapped[b] as number) || a - b,
   );
-}
-
-function dropRepeatedLevels(angles: readonly number[], levels: readonly number[]): Waveform {
-  const edges: number[] = [];
-  const kept: number[] = [];
-  const count = angles.length;
-  for (let i = 0; i < count; i++) {
-    if (count > 1 && levels[i] === levels[(i + count - 1) % count]) continue;
-    edges.push(angles[i] as number);
-    kept.push(levels[i] as number);
-  }
-  if (edges.length === 0) return { edges: [0], levels: [levels[0] as number] };
-  return { edges, levels: kept };
 }
