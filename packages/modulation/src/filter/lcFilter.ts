@@ -120,8 +120,14 @@ function findPeak(
   const logAt = (k: number): number =>
     Math.log(centre) + Math.LN10 * SCAN_DECADES * ((2 * k) / (SCAN_POINTS - 1) - 1);
   let best = 0;
-  for (let k = 1; k < SCAN_POINTS; k++)
-    if (gain(Math.exp(logAt(k))) > gain(Math.exp(logAt(best)))) best = k;
+  let bestGain = gain(Math.exp(logAt(0)));
+  for (let k = 1; k < SCAN_POINTS; k++) {
+    const scanned = gain(Math.exp(logAt(k)));
+    if (scanned > bestGain) {
+      best = k;
+      bestGain = scanned;
+    }
+  }
   // H(0) = 1 is the peak when the response falls monotonically (heavily damped).
   if (best === 0) return { gain: Math.max(1, gain(Math.exp(logAt(0)))), frequency: 0 };
   let low = logAt(Math.max(0, best - 1));
