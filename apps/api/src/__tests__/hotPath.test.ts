@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import express, { type Request, type RequestHandler } from 'express';
 import helmet from 'helmet';
 import request from 'supertest';
@@ -6,6 +7,7 @@ import { cacheOpenApiMetadata } from '../http/cacheOpenApiMetadata.js';
 import { HttpError } from '../http/errors.js';
 import { HELMET_OPTIONS, securityHeaders } from '../http/securityHeaders.js';
 import { finiteResult } from '../services/library.js';
+import { hashToken } from '../services/tokens.js';
 import { DEMO, signIn, testApp, type TestApp } from './helpers.js';
 
 /**
@@ -70,6 +72,18 @@ describe('finiteResult: NaN and ±∞ refused with the field and the place, fini
     result.own = 1;
     expect(JSON.stringify(result)).toBe('{"own":1}');
     expect(finiteResult('modulation', result)).toBe(result);
+  });
+});
+
+describe('hashToken: SHA-256 as hex, from the one-shot crypto.hash', () => {
+  it('gives the published digest of "abc" and the UTF-8 digest of any text', () => {
+    // FIPS 180-2, appendix B.1: SHA-256("abc").
+    expect(hashToken('abc')).toBe(
+      'ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad',
+    );
+    // Stored hashes were made by createHash('sha256').update(token, 'utf8'): the same digests.
+    for (const token of ['pwk_abcdefgh_secret', 'pws_caf\u00e9 \u2212 \u03c9', ''])
+      expect(hashToken(token)).toBe(createHash('sha256').update(token, 'utf8').digest('hex'));
   });
 });
 
