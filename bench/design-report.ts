@@ -6,30 +6,36 @@
  * losses, for the cost of each part. Times are CPU times of this process (`medianCpuTime`): the
  * machine is shared, and wall times there bounce 2–5× with the other processes' load.
  *
- * Issue 12 speed work, second round (median CPU ms, three runs each on the busy 2-core machine,
- * before → after; every figure of a 40-design corpus of all methods, zero sequences, filters,
- * grids and devices equal to rounding): spectrum alone 1.1–1.3; no filter, spectra to 5000:
- * 16–23 → 10.5–14; LC filter, to 5000: 48–59 → 14–16; LC filter, default order: 13–16 → 8;
- * full report (filter, losses), to 5000: 29–31 → 11.6–13.5; full, default order: 14–15 → 8–9.
- * What changed: the three legs' exact spectra are read once and the phase, line and common-mode
- * spectra are their linear combinations (before: phase a twice, phases b and c, line a−b and the
- * common mode each from its own waveform, about 3.5 times the edges × orders); one label table
- * for every spectrum, labelled straight from the phasors; the filter network solved once per
- * order for the three phases, without an object per complex number; typed arrays through the
- * filtered phases, the DC link and the losses; the unfiltered currents' sines read once for the
- * three phases; waveforms combined by merging their edges instead of sorting them.
+ * Issue 12 speed work, second round (this bench, three runs of the code before and after taken
+ * in turn on the busy 2-core machine, median CPU ms; every figure of a 40-design corpus of all
+ * methods, zero sequences, filters, grids and devices equal to rounding): spectrum alone 1.1;
+ * no filter, spectra to 5000: 15–16 → 9–10; LC filter, to 5000: 27–32 → 10–13; LC filter,
+ * default order: 13–15 → 8–8.5; full report (filter, losses), to 5000: 30–32 → 10.5–12 (27.8× →
+ * 9.5–10.3× the spectrum alone); full, default order: 15–17 → 8.7–9.9. What changed: the three
+ * legs' exact spectra are read once and the phase, line and common-mode spectra are their
+ * linear combinations (before: phase a twice, phases b and c, line a−b and the common mode each
+ * from its own waveform, about 3.5 times the edges × orders); one label table for every
+ * spectrum, labelled straight from the phasors; the filter network solved once per order for the
+ * three phases, without an object per complex number; typed arrays through the filtered phases,
+ * the DC link and the losses; no array iterator or boxed number per sample or order (12 → 9 MB of
+ * heap a report); the unfiltered currents' sines read once for the three phases; waveforms
+ * combined by merging their edges; the filter's peak scan solves each frequency once.
  *
- * The 5 ms goal is not reached. Where the full report's 11–12 ms (spectra to 5000) goes, each
- * part timed alone with the report's own inputs (median CPU ms): the leg waveforms, phases and
- * lines 1.0; the three legs' exact spectra to 5000 and their combinations 1.4 (the spectrum alone
- * of one phase voltage is 1.0: a leg has a third of its edges); the filtered phases a, b and c
- * 2.2, of which the four synthesis transforms of the 16384-sample grid take 1.0; building that
- * transform's tables (fft.js, once a report) 0.65; the DC link 0.56; the label table 0.34 and
- * the bridge and line figures 0.38; losses 0.34; common mode 0.27; the network's response to
- * each order 0.14; limit check and modulator 0.26: 7.5 ms of work. The rest, about 3 ms, is
- * garbage collection of what a report holds (five labelled spectra of 5001 orders, the series
- * and sample arrays): with a 64 MB young generation (`node --max-semi-space-size=64`) the full
- * report takes 8–9 ms.
+ * The 5 ms goal is not reached. Where the full report's time goes, each part timed alone with the
+ * report's own inputs on a quieter moment (median CPU ms; the whole report took 7.9 there): the
+ * leg waveforms, phases and lines 0.9 (three-phase/threePhase 0.5 of it); the three legs' exact
+ * spectra to 5000 and their combinations 1.4 (one phase voltage's spectrum alone is 1.0: a leg has
+ * a third of its edges); the filtered phases a, b and c 2.3, of which the four synthesis
+ * transforms of the 16384-sample grid take 1.0 (the grid is 16 samples a cycle of the current
+ * order 10·mf + 10) and the per-sample figures, switching tails and output labels the rest;
+ * building that transform's tables (fft.js, once a report) 0.65; the DC link 0.4; the label table
+ * 0.34 and the bridge and line figures 0.35; losses 0.3; common mode 0.26; limit check and
+ * modulator 0.26; the network's response to each order 0.11: 7.2 of work, and garbage
+ * collection of what a report holds (five labelled spectra of 5001 orders are 2–3 MB of small
+ * objects) the rest. Two levers left outside the library's rules: the fft.js tables could be
+ * kept between reports (a module-level cache, which the package's no-mutable-state rule forbids),
+ * and a larger young generation (`node --max-semi-space-size=64`) cut the full report by a
+ * quarter here.
  */
 import {
   analyseDesign,
@@ -54,24 +60,24 @@ const full: InverterDesign = { ...filtered, device: { ...EXAMPLE_IGBT } };
 
 const phase = modulationVoltages(designModulation(unfiltered)).phases[0]?.waveform;
 if (!phase) throw new Error('no phase voltage');
-const spectrumOnly = medianCpuTime(() => harmonics(phase, 50 * mf), 20, 5);
+const spectrumOnly = medianCpuTime(() => harmonics(phase, 50 * mf), 50, 20);
 const reportUnfiltered = medianCpuTime(
   () => analyseDesign(unfiltered, { maxOrder: 5000, points: 1200 }),
+  30,
   10,
-  3,
 );
 const reportFiltered = medianCpuTime(
   () => analyseDesign(filtered, { maxOrder: 5000, points: 1200 }),
+  30,
   10,
-  3,
 );
-const reportDefault = medianCpuTime(() => analyseDesign(filtered), 10, 3);
+const reportDefault = medianCpuTime(() => analyseDesign(filtered), 30, 10);
 const reportFull = medianCpuTime(
   () => analyseDesign(full, { maxOrder: 5000, points: 1200 }),
+  30,
   10,
-  3,
 );
-const reportFullDefault = medianCpuTime(() => analyseDesign(full), 10, 3);
+const reportFullDefault = medianCpuTime(() => analyseDesign(full), 30, 10);
 
 printTable(
   `Design report, three-phase, mf ${mf} (median CPU ms; ratios against the spectrum alone in the same run)`,
