@@ -1,8 +1,11 @@
 /**
  * A fixed carrier that is not a whole multiple of the fundamental (issue 12, capability 5), in the
- * browser: the study form says which whole mf the report needs, and its "Carrier as typed" panel
- * asks the service for the design at the carrier typed and shows p/q, the carrier error and the
- * 1/3 sub-harmonic by its label. Screenshot: tests/e2e/screenshots/asynchronous-carrier.png.
+ * browser. The design report takes it for sine-triangle, three-phase carrier and space vector:
+ * the study form states p/q and the span, the editor's report says what it covers, a saved study
+ * shows its ratio in Compare and in the printed report. With a filter the report still needs a
+ * whole mf, and the "Carrier as typed" panel gives the spectra at the carrier typed.
+ * Screenshots: tests/e2e/screenshots/asynchronous-carrier.png, fixed-carrier-editor.png,
+ * fixed-carrier-compare.png, fixed-carrier-report.png.
  */
 import type { Page } from 'playwright-core';
 import type { Scenario } from './dashboard.e2e.js';
@@ -12,9 +15,15 @@ import { assert, screenshot, signIn } from './harness.js';
 const box = (page: Page, label: RegExp) =>
   page.getByLabel(label).and(page.locator('input[type="text"]'));
 
+/** The text that describes a field (its hint or its message). */
+const descriptionOf = async (page: Page, label: RegExp): Promise<string> => {
+  const described = (await box(page, label).getAttribute('aria-describedby')) ?? '';
+  return (await page.locator(`[id="${described}"]`).textContent()) ?? '';
+};
+
 export const scenarios: Scenario[] = [
   {
-    name: 'asynchronous carrier: 70 Hz at 30 Hz is analysed as 7/3 with its 1/3 sub-harmonic',
+    name: 'asynchronous carrier: 70 Hz at 30 Hz is reported as 7/3 over three periods; with a filter the panel analyses it',
     async run(context) {
       const page = await context.browser.newPage({ viewport: { width: 1400, height: 900 } });
       page.setDefaultTimeout(15_000);
@@ -24,13 +33,18 @@ export const scenarios: Scenario[] = [
       await page.getByLabel('Method').selectOption('sine-triangle');
       await box(page, /^Fundamental frequency/).fill('30');
       await box(page, /^Carrier frequency/).fill('70');
-      const carrier = box(page, /^Carrier frequency/);
-      const described = (await carrier.getAttribute('aria-describedby')) ?? '';
-      const description = (await page.locator(`[id="${described}"]`).textContent()) ?? '';
+      await page
+        .getByTestId('carrier-span')
+        .getByText(/mf = 7\/3/)
+        .waitFor();
+      const hint = await descriptionOf(page, /^Carrier frequency/);
       assert(
-        description.includes('the nearest being mf = 2 (60 Hz)'),
-        `the carrier field names the nearest whole mf (got "${description}")`,
+        hint.includes('mf = 7/3') && hint.includes('3 fundamental periods'),
+        `the carrier field states p/q and the span (got "${hint}")`,
       );
+      await page.getByText('Bridge voltage over 3 fundamental periods').waitFor();
+      // With a filter the report needs a whole mf: the panel analyses the carrier as typed.
+      await page.getByLabel('Include an LC output filter').check();
       const panel = page.getByRole('region', { name: 'Carrier as typed' });
       await panel.getByRole('button', { name: 'Analyse at this carrier' }).click();
       await panel.getByTestId('async-ratio').getByText('7/3').waitFor();
@@ -38,6 +52,69 @@ export const scenarios: Scenario[] = [
       await table.getByRole('cell', { name: '1/3', exact: true }).waitFor();
       await panel.scrollIntoViewIfNeeded();
       await screenshot(page, 'asynchronous-carrier');
+      await page.close();
+    },
+  },
+  {
+    name: 'a drive with a fixed 4 kHz carrier at 37 Hz: saved, reported over 37 periods, compared and printed with mf 4000/37',
+    async run(context) {
+      const page = await context.browser.newPage({ viewport: { width: 1400, height: 1000 } });
+      page.setDefaultTimeout(60_000);
+      context.lastPage = page;
+      await signIn(page, context.baseUrl, 'engineer@kestrel.example');
+      await page.goto(`${context.baseUrl}/studies/new`);
+      const name = `E2E fixed carrier 37 Hz ${Date.now()}`;
+      await page.getByLabel('Name', { exact: true }).fill(name);
+      await page.getByLabel('Method').selectOption('three-phase');
+      await box(page, /^Fundamental frequency/).fill('37');
+      await box(page, /^Carrier frequency/).fill('4000');
+      await page.getByLabel('Inductance L').fill('10');
+      const note = page.getByTestId('carrier-span');
+      await note.getByText(/mf = 4000\/37/).waitFor();
+      const text = (await note.textContent()) ?? '';
+      assert(
+        text.includes('37 fundamental periods (4000 carrier cycles)'),
+        `the report states its span (got "${text}")`,
+      );
+      await page.getByRole('button', { name: 'Create study' }).click();
+      await page.waitForURL(/\/studies\/[0-9a-f-]{36}$/);
+      const id = page.url().split('/').pop() ?? '';
+      await page.getByText(/Saved revision on the server: THD/).waitFor();
+      // A bar for every component n/37 (most of them near zero height).
+      await page.locator('svg[data-chart="spectrum"]').waitFor();
+      const bars = await page.locator('svg[data-chart="spectrum"] rect[data-bar]').count();
+      assert(bars >= 37 * 119, `the spectrum draws every n/37 component (got ${bars} bars)`);
+      const serverLine = (await page.getByTestId('preview-time').textContent()) ?? '';
+      assert(
+        serverLine.includes('Saved revision on the server: THD'),
+        `the server's report of the saved study is shown (got "${serverLine}")`,
+      );
+      await screenshot(page, 'fixed-carrier-editor');
+
+      const listed = (await (
+        await fetch(`${context.baseUrl}/api/v1/studies`, {
+          headers: {
+            Authorization: `Bearer ${await page.evaluate<string | null>('sessionStorage.getItem("pulsewright.session")')}`,
+          },
+        })
+      ).json()) as { id: string; name: string }[];
+      const other = listed.find((s) => s.id !== id);
+      assert(other, 'a second study to compare with');
+      await page.goto(`${context.baseUrl}/compare?ids=${id},${other.id}`);
+      const mf = page.locator(`tr[data-study="${name}"] [data-column="mf"]`);
+      await mf.waitFor();
+      const ratio = (await mf.textContent())?.trim();
+      assert(ratio === '4000/37', `Compare shows mf 4000/37 (got ${ratio})`);
+      await screenshot(page, 'fixed-carrier-compare');
+
+      await page.goto(`${context.baseUrl}/studies/${id}/report`);
+      await page.getByText('Pulsewright study report').waitFor();
+      await page.getByTestId('carrier-span').waitFor();
+      await page
+        .getByText(/mf 4000\/37 ≈ 108\.108/)
+        .first()
+        .waitFor();
+      await screenshot(page, 'fixed-carrier-report');
       await page.close();
     },
   },

@@ -99,7 +99,8 @@ export function HarmonicTable({
           <tbody className="num">
             {rows.map((h) => (
               <tr key={h.order} className="border-t border-rule/60">
-                <td className="px-2 py-0.5">{h.order}</td>
+                {/* A span's orders n/q are fractions: six digits (the CSV keeps them whole). */}
+                <td className="px-2 py-0.5">{formatNumber(h.order, 6)}</td>
                 <td className="px-2 py-0.5">{h.label ?? ''}</td>
                 <td className="px-2 py-0.5">{formatNumber(h.amplitude)}</td>
                 <td className="px-2 py-0.5">

@@ -33,7 +33,7 @@ export function CommonModePanel({ report, fileStem }: { report: StudyReport; fil
             <tr className="border-t border-rule/60">
               <th className="text-left font-sans font-medium">Steps (dv/dt events)</th>
               <td>
-                {commonMode.stepsPerPeriod} a period
+                {formatNumber(commonMode.stepsPerPeriod, 6)} a period
                 {commonMode.stepsPerCarrierPeriod !== null
                   ? `, ${formatNumber(commonMode.stepsPerCarrierPeriod)} a carrier period`
                   : ''}
@@ -43,7 +43,7 @@ export function CommonModePanel({ report, fileStem }: { report: StudyReport; fil
               <tr className="border-t border-rule/60">
                 <th className="text-left font-sans font-medium">Leg switching</th>
                 <td>
-                  {switching.legEdgesPerPeriod} edges a period; each switch on{' '}
+                  {formatNumber(switching.legEdgesPerPeriod, 6)} edges a period; each switch on{' '}
                   {formatNumber(switching.averageDeviceFrequency)} times a second on average
                 </td>
               </tr>

@@ -134,7 +134,7 @@ export const COLUMNS: Column[] = [
     value: (r) => r.commonMode?.rms ?? null,
     title: (r) =>
       r.commonMode
-        ? `levels ${r.commonMode.levels.map((l) => formatNumber(l)).join(', ')} V; ${r.commonMode.stepsPerPeriod} steps a period`
+        ? `levels ${r.commonMode.levels.map((l) => formatNumber(l)).join(', ')} V; ${formatNumber(r.commonMode.stepsPerPeriod, 6)} steps a period`
         : 'single-phase bridge',
   },
   {
@@ -143,7 +143,7 @@ export const COLUMNS: Column[] = [
     value: (r) => r.switching?.averageDeviceFrequency ?? null,
     title: (r) =>
       r.switching
-        ? `turn-ons of each switch per second, averaged over the period (${r.switching.legEdgesPerPeriod} leg edges a period)`
+        ? `turn-ons of each switch per second, averaged over the period (${formatNumber(r.switching.legEdgesPerPeriod, 6)} leg edges a period)`
         : 'no switching figure (a staircase pattern)',
   },
   {

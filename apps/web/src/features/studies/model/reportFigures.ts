@@ -112,7 +112,7 @@ export function reportFigures(report: StudyReport): Figure[] {
         commonMode.stepsPerCarrierPeriod !== null
           ? `${formatNumber(commonMode.stepsPerCarrierPeriod)} steps a carrier period, `
           : ''
-      }${commonMode.stepsPerPeriod} a period`,
+      }${formatNumber(commonMode.stepsPerPeriod, 6)} a period`,
     });
   }
   if (report.loadPower !== null)
