@@ -188,6 +188,14 @@ export function analyseDesignSpan(
           outputPower: design.vdc * dcLink.mean,
         });
 
+  // A back-EMF's torque-producing current and air-gap power, from the span's fundamentals.
+  const emf = load?.emf;
+  const loadFundamentals = currents.map((c) => ({ ...(c.load as CurrentFigures), phase: c.phase }));
+  const motor =
+    emf !== undefined && emf.amplitude > 0
+      ? motorLoadFigures(loadFundamentals, emf, frequency)
+      : null;
+
   const nominal =
     ((voltages.phaseCount === 3 ? Math.sqrt(3) : 1) * bridge.fundamental) / Math.SQRT2;
   const limitCheck = checkVoltageHarmonicLimits(
@@ -218,14 +226,7 @@ export function analyseDesignSpan(
     multilevel: null,
     loadPower,
     losses,
-    motor:
-      load?.emf && load.emf.amplitude > 0
-        ? motorLoadFigures(
-            currents.map((c) => ({ ...(c.load as CurrentFigures), phase: c.phase })),
-            load.emf,
-            frequency,
-          )
-        : null,
+    motor,
     filter: null,
     limitCheck,
     grid: null,
