@@ -28,8 +28,10 @@ export interface SpectrumLabeller {
 export function spectrumLabeller(maxOrder: number, ratio: number): SpectrumLabeller {
   assertNumberInRange('mf', ratio, { min: 0, minExclusive: true });
   const count = maxOrder + 1;
-  const groups = new Float64Array(count);
-  const sidebands = new Float64Array(count);
+  // Plain arrays, not Float64Arrays: whole numbers read from them stay small integers in the
+  // labelled objects instead of a boxed double each.
+  const groups = new Array<number>(count);
+  const sidebands = new Array<number>(count);
   const labels = new Array<string>(count);
   const split = (order: number): Omit<CarrierGroupLabel, 'order'> => {
     const carrierGroup = Math.round(order / ratio);

@@ -29,15 +29,18 @@ export function combineWaveforms(
   const combined: number[] = [];
   for (;;) {
     let angle = Infinity;
+    // Bounds are checked against the lengths: reading past an array's end is slow in V8.
     for (let k = 0; k < count; k++) {
-      const edge = (edgeLists[k] as number[])[next[k] as number];
-      if (edge !== undefined && edge < angle) angle = edge;
+      const edges = edgeLists[k] as number[];
+      const i = next[k] as number;
+      if (i < edges.length && (edges[i] as number) < angle) angle = edges[i] as number;
     }
     if (angle === Infinity) break;
     // Apply every input's change at this exact angle before evaluating.
     for (let k = 0; k < count; k++) {
+      const edges = edgeLists[k] as number[];
       const i = next[k] as number;
-      if ((edgeLists[k] as number[])[i] === angle) {
+      if (i < edges.length && edges[i] === angle) {
         current[k] = (levelLists[k] as number[])[i] as number;
         next[k] = i + 1;
       }
