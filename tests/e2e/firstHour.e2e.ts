@@ -77,7 +77,7 @@ const BREAKAGES: Breakage[] = [
     label: /^Carrier frequency/,
     typed: '4075',
     message:
-      'Carrier frequency 4075 Hz is 81.5 times the fundamental, 50 Hz: the design report takes a whole multiple (1 to 1000 times), the nearest being mf = 82 (4100 Hz), so set that to save the study; the panel "Carrier as typed" analyses 4075 Hz as it is',
+      'Carrier frequency 4075 Hz is 81.5 times the fundamental, 50 Hz: with a filter or grid the design report takes a whole multiple (1 to 1000 times), the nearest being mf = 82 (4100 Hz), so set that to save the study; the panel "Carrier as typed" analyses 4075 Hz as it is',
     restore: '4050',
   },
   {

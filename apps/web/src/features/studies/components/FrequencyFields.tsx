@@ -47,7 +47,7 @@ export function frequencyFields({
             min={MF_SLIDER.min}
             max={MF_SLIDER.max}
             step={1}
-            hint={`carrier ÷ fundamental, ${rangeText(ratioBounds(method))}${method === 'space-vector' ? ' (switching periods per fundamental period)' : '; odd values give quarter-wave symmetry'}`}
+            hint={`carrier ÷ fundamental, ${rangeText(ratioBounds(draft))}${method === 'space-vector' ? ' (switching periods per fundamental period)' : '; odd values give quarter-wave symmetry'}`}
             error={ratioError}
             onChange={setRatio}
           />
@@ -58,7 +58,7 @@ export function frequencyFields({
             hint={
               spanHint ??
               (Number.isFinite(ratio)
-                ? `mf = ${ratio} · a whole multiple of the fundamental${ratioBounds(method).integer ? '' : ', or any ratio (analysed over q periods of its nearest p/q)'}`
+                ? `mf = ${ratio} · a whole multiple of the fundamental${ratioBounds(draft).integer ? '' : ', or any ratio (analysed over q periods of its nearest p/q)'}`
                 : 'a whole multiple of the fundamental')
             }
             error={carrierMessage}

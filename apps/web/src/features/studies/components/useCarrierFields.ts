@@ -22,12 +22,19 @@ export const RATIO_BOUNDS: NumberBounds = {
 };
 
 /**
- * The frequency ratio's range for a method: any ratio for sine-triangle, three-phase carrier
- * and space vector (the report analyses it over q periods of its nearest p/q), a whole number
- * for the multilevel methods.
+ * Whether the design report takes a ratio that is not whole for this draft: sine-triangle,
+ * three-phase carrier and space vector without a filter or grid (analysed over q periods of its
+ * nearest p/q; the library's designSpanMaxOrder refuses the others).
  */
-export function ratioBounds(method: StudyDraft['method']): NumberBounds {
-  return ASYNCHRONOUS_METHODS.includes(method) ? { ...RATIO_BOUNDS, integer: false } : RATIO_BOUNDS;
+export function spansCarrier(draft: Pick<StudyDraft, 'method' | 'filterOn' | 'gridOn'>): boolean {
+  return ASYNCHRONOUS_METHODS.includes(draft.method) && !draft.filterOn && !draft.gridOn;
+}
+
+/** The frequency ratio's range: any ratio where the report spans it, else a whole number. */
+export function ratioBounds(
+  draft: Pick<StudyDraft, 'method' | 'filterOn' | 'gridOn'>,
+): NumberBounds {
+  return spansCarrier(draft) ? { ...RATIO_BOUNDS, integer: false } : RATIO_BOUNDS;
 }
 
 /**
@@ -66,7 +73,7 @@ export function useCarrierFields(
   const ratioError =
     typedRatio === null
       ? undefined
-      : rangeError('Frequency ratio mf', typedRatio, ratioBounds(method));
+      : rangeError('Frequency ratio mf', typedRatio, ratioBounds(draft));
   // The carrier's own message, in hertz with what was entered; a ratio typed in the mf box is
   // judged there instead (its message would otherwise quote a carrier the user never typed).
   const carrierRangeMessage =
@@ -79,8 +86,9 @@ export function useCarrierFields(
   // space vector are analysed over q periods of its nearest p/q (stated in the carrier's hint);
   // a multilevel design needs a whole mf, and the page's "Carrier as typed" panel analyses it.
   const spanned = hasAsynchronousCarrier(draft);
-  const asynchronous = typedRatio === null && spanned && !ASYNCHRONOUS_METHODS.includes(method);
-  const span = spanned && ASYNCHRONOUS_METHODS.includes(method) ? spanOf(draft) : null;
+  const spannable = spansCarrier(draft);
+  const asynchronous = typedRatio === null && spanned && !spannable;
+  const span = spanned && spannable ? spanOf(draft) : null;
   const spanHint =
     span === null
       ? undefined
@@ -92,7 +100,7 @@ export function useCarrierFields(
       ? undefined
       : (carrierRangeMessage ??
         (asynchronous
-          ? `Carrier frequency ${formatNumber(draft.carrierFrequency, 9)} Hz is ${formatNumber(typedMultiple, 6)} times the fundamental, ${formatNumber(draft.fundamentalFrequency, 6)} Hz: the design report takes a whole multiple (1 to ${MAX_DESIGN_FREQUENCY_RATIO} times), the nearest being mf = ${nearestWhole} (${formatNumber(nearestWhole * draft.fundamentalFrequency, 9)} Hz), so set that to save the study; the panel "Carrier as typed" analyses ${formatNumber(draft.carrierFrequency, 9)} Hz as it is`
+          ? `Carrier frequency ${formatNumber(draft.carrierFrequency, 9)} Hz is ${formatNumber(typedMultiple, 6)} times the fundamental, ${formatNumber(draft.fundamentalFrequency, 6)} Hz: ${ASYNCHRONOUS_METHODS.includes(method) ? 'with a filter or grid ' : ''}the design report takes a whole multiple (1 to ${MAX_DESIGN_FREQUENCY_RATIO} times), the nearest being mf = ${nearestWhole} (${formatNumber(nearestWhole * draft.fundamentalFrequency, 9)} Hz), so set that to save the study; the panel "Carrier as typed" analyses ${formatNumber(draft.carrierFrequency, 9)} Hz as it is`
           : carrierError));
   // Synchronous carrier PWM: a new fundamental keeps the frequency ratio, so the carrier follows.
   const setFundamental = (f: number) =>
