@@ -9,7 +9,6 @@ import { motorLoadFigures } from '../load/motorLoadFigures.js';
 import type { RlLoadOptions } from '../load/RlLoad.js';
 import { TAU } from '../math.js';
 import { complexAbs, phasorOf, type Complex } from '../numeric/complex.js';
-import { harmonicsOfPhasors } from '../spectrum/harmonicsOfPhasors.js';
 import { reducedCommonModeRange } from '../three-phase/reducedCommonModeRange.js';
 import { assertNumberInRange } from '../validation/assertions.js';
 import { withFieldPrefix } from '../validation/withFieldPrefix.js';
@@ -383,13 +382,14 @@ export function analyseDesign(
         : gridFigures({
             grid,
             network,
-            bridge: harmonicsOfPhasors(spectra.phase(0), analysisOrder + 1),
+            bridge: spectra.phase(0),
+            analysisOrder,
             source: phasorOf(load?.emf?.amplitude ?? 0, load?.emf?.phase ?? 0),
             phaseCount: voltages.phaseCount,
             fundamentalFrequency: frequency,
             carrierFrequency: frequencyRatio === null ? null : frequencyRatio * frequency,
             gridCurrentThdWholeWaveform: currents[0]?.load?.thd ?? 0,
-            label,
+            labeller,
           }),
     cautions:
       grid === null

@@ -1,8 +1,4 @@
-import {
-  outputNetworkResponse,
-  type OutputNetwork,
-  type OutputNetworkPhasors,
-} from '../filter/outputNetworkResponse.js';
+import { outputNetworkResponse, type OutputNetwork } from '../filter/outputNetworkResponse.js';
 import type { OutputNetworkTransfer } from '../filter/outputNetworkTransfer.js';
 import { currentDistortion } from '../load/currentDistortion.js';
 import { TAU } from '../math.js';
@@ -19,6 +15,7 @@ import type {
   PhaseCurrents,
   VoltageFigures,
 } from './DesignReport.js';
+import { networkPhasors } from './networkPhasors.js';
 import type { PeriodSynthesiser } from './periodSynthesiser.js';
 import type { SpectrumLabeller } from './spectrumLabeller.js';
 
@@ -84,9 +81,12 @@ export function filteredPhase(
 ): FilteredPhase {
   const { network, transfer, omega, emf, loadR, phase, suffix, outputName } = context;
   const { spectrumOrder, currentOrder, points, synthesiser, labeller } = context;
-  const solved = solvePhase(bridge, transfer, spectrumOrder + 1, (order, voltage) =>
-    outputNetworkResponse(network, omega * order, voltage, emf),
-  );
+  const solved = networkPhasors(bridge, transfer, {
+    count: spectrumOrder + 1,
+    network,
+    omega,
+    emf,
+  });
   // The currents are summed to the current order (the output spectrum to spectrumOrder).
   const held = Math.min(spectrumOrder, currentOrder) + 1;
 
@@ -201,48 +201,6 @@ export function filteredPhase(
     loadPower:
       loadR === null || loadCurrent === null ? 0 : loadR * loadCurrent.rms * loadCurrent.rms,
   };
-}
-
-/**
- * The phase's network phasors at orders 0..count − 1: the unit response times the bridge
- * voltage (superposition), the fundamental solved by `solveFundamental` with the EMF.
- */
-function solvePhase(
-  bridge: HarmonicPhasors,
-  transfer: OutputNetworkTransfer,
-  count: number,
-  solveFundamental: (order: number, voltage: Complex) => OutputNetworkPhasors,
-): OutputNetworkTransfer {
-  const scaled = (unit: HarmonicPhasors): HarmonicPhasors => {
-    const re = new Float64Array(count);
-    const im = new Float64Array(count);
-    for (let n = 0; n < count; n++) {
-      const vr = bridge.re[n] as number;
-      const vi = bridge.im[n] as number;
-      const ur = unit.re[n] as number;
-      const ui = unit.im[n] as number;
-      re[n] = ur * vr - ui * vi;
-      im[n] = ur * vi + ui * vr;
-    }
-    return { re, im };
-  };
-  const solved: OutputNetworkTransfer = {
-    output: scaled(transfer.output),
-    inverterCurrent: scaled(transfer.inverterCurrent),
-    capacitorCurrent: scaled(transfer.capacitorCurrent),
-    loadCurrent: scaled(transfer.loadCurrent),
-  };
-  if (count > 1) {
-    const fundamental = solveFundamental(1, {
-      re: bridge.re[1] as number,
-      im: bridge.im[1] as number,
-    });
-    for (const part of ['output', 'inverterCurrent', 'capacitorCurrent', 'loadCurrent'] as const) {
-      solved[part].re[1] = fundamental[part].re;
-      solved[part].im[1] = fundamental[part].im;
-    }
-  }
-  return solved;
 }
 
 /** Figures of the output voltage, a sum over its spectrum (its THD bound found by the caller). */

@@ -1,27 +1,26 @@
 import { lcFilterBranches } from '../filter/lcFilterBranches.js';
 import { lclResonanceFrequency } from '../filter/lclResonanceFrequency.js';
-import {
-  outputNetworkResponse,
-  type OutputNetwork,
-  type OutputNetworkPhasors,
-} from '../filter/outputNetworkResponse.js';
+import type { OutputNetwork } from '../filter/outputNetworkResponse.js';
+import { outputNetworkTransfer } from '../filter/outputNetworkTransfer.js';
 import { checkGridCurrentLimits } from '../limits/checkGridCurrentLimits.js';
 import { TAU } from '../math.js';
-import { complexAbs, phasorOf, type Complex } from '../numeric/complex.js';
-import type { Harmonic } from '../spectrum/Harmonic.js';
-import type { LabelledHarmonic } from '../spectrum/labelHarmonics.js';
-import { meanHarmonic } from '../spectrum/meanHarmonic.js';
+import type { Complex } from '../numeric/complex.js';
+import type { HarmonicPhasors } from '../spectrum/harmonicPhasors.js';
 import { ParameterRangeError } from '../validation/errors.js';
 import type { GridFigures } from './DesignReport.js';
 import type { DesignGrid } from './InverterDesign.js';
+import { networkPhasors } from './networkPhasors.js';
+import type { SpectrumLabeller } from './spectrumLabeller.js';
 
 /** What {@link gridFigures} reads from the analysis of a design with a grid. */
 export interface GridFigureInputs {
   grid: DesignGrid;
   /** Filter and grid of one phase (the grid as the network's load: r, l2 + l). */
   network: OutputNetwork;
-  /** Phase a's bridge voltage, orders 0..analysisOrder, peak volts. */
-  bridge: readonly Harmonic[];
+  /** Phase a's bridge voltage phasors, orders 0..analysisOrder at least, peak volts. */
+  bridge: HarmonicPhasors;
+  /** The analysis order: orders 0..analysisOrder are solved. */
+  analysisOrder: number;
   /** Phase a's grid source phasor at the fundamental, peak volts. */
   source: Complex;
   phaseCount: 1 | 3;
@@ -29,15 +28,7 @@ export interface GridFigureInputs {
   carrierFrequency: number | null;
   /** THD of phase a's grid current over the whole waveform (the report's load current), ratio. */
   gridCurrentThdWholeWaveform: number;
-  label: (spectrum: readonly Harmonic[]) => LabelledHarmonic[];
-}
-
-const ZERO: Complex = { re: 0, im: 0 };
-
-/** A phasor as a harmonic in the `harmonics` convention. */
-function harmonicOf(order: number, phasor: Complex): Harmonic {
-  if (order === 0) return meanHarmonic(phasor.re);
-  return { order, amplitude: complexAbs(phasor), phase: Math.atan2(phasor.im, phasor.re) };
+  labeller: SpectrumLabeller;
 }
 
 /** ½·V·conj(I): the mean complex power of two phasors (peak amplitudes), watts + j·var. */
@@ -47,8 +38,9 @@ function power(v: Complex, i: Complex): Complex {
 
 /**
  * The figures of a grid-connected bridge ({@link GridFigures}). Each order of the bridge
- * voltage is solved through the loaded network (`outputNetworkResponse`, nodal analysis) with
- * the grid source added at the fundamental only (superposition: the network is linear). The
+ * voltage is solved through the loaded network (`networkPhasors`: nodal analysis, the unit
+ * response of each order times the bridge voltage) with the grid source added at the
+ * fundamental only (superposition: the network is linear). The
  * damping loss is Σ ½·(Re Z_series·|I_inv|² + Re Y_shunt·|V_C|²) over the orders (L and C
  * are lossless). Limits: IEEE Std 519-2022 Table 2 with the generation footnote, and IEEE Std
  * 1547-2018 Tables 26–27, both recalled from memory, with the fundamental grid current as the
@@ -59,42 +51,52 @@ function power(v: Complex, i: Complex): Complex {
  */
 export function gridFigures(inputs: GridFigureInputs): GridFigures {
   const { grid, network, bridge, source, phaseCount, fundamentalFrequency } = inputs;
-  const { carrierFrequency, label } = inputs;
+  const { carrierFrequency, labeller, analysisOrder } = inputs;
   const omega = TAU * fundamentalFrequency;
-  const solved: OutputNetworkPhasors[] = bridge.map((h) =>
-    outputNetworkResponse(
-      network,
-      omega * h.order,
-      phasorOf(h.amplitude, h.phase),
-      h.order === 1 ? source : ZERO,
-    ),
-  );
-  const gridSpectrum = solved.map((s, order) => harmonicOf(order, s.loadCurrent));
-  const inverterSpectrum = solved.map((s, order) => harmonicOf(order, s.inverterCurrent));
-  const first = solved[1] as OutputNetworkPhasors;
-  const fundamental = complexAbs(first.loadCurrent);
+  const count = analysisOrder + 1;
+  const solved = networkPhasors(bridge, outputNetworkTransfer(network, omega, analysisOrder), {
+    count,
+    network,
+    omega,
+    emf: source,
+  });
+  const at = (phasors: HarmonicPhasors, order: number): Complex => ({
+    re: phasors.re[order] as number,
+    im: phasors.im[order] as number,
+  });
+  const first = {
+    loadCurrent: at(solved.loadCurrent, 1),
+    capacitorCurrent: at(solved.capacitorCurrent, 1),
+    output: at(solved.output, 1),
+  };
+  const fundamental = Math.hypot(first.loadCurrent.re, first.loadCurrent.im);
   if (!(fundamental > 0))
     throw new ParameterRangeError(
       'grid.phase',
       'an angle at which the bridge and the grid exchange fundamental current',
       grid.phase ?? 0,
     );
+  const squareAt = (phasors: HarmonicPhasors, order: number): number =>
+    (phasors.re[order] as number) ** 2 + (phasors.im[order] as number) ** 2;
   let harmonicSquares = 0;
-  for (const h of gridSpectrum) if (h.order >= 2) harmonicSquares += h.amplitude ** 2;
+  for (let order = 2; order < count; order++)
+    harmonicSquares += squareAt(solved.loadCurrent, order);
+  const gridSpectrum = labeller.phasors(solved.loadCurrent);
   const gridPower = power(source, first.loadCurrent);
-  const phaseVoltage = complexAbs(source);
+  const phaseVoltage = Math.hypot(source.re, source.im);
   const shortCircuitCurrent = phaseVoltage / Math.SQRT2 / Math.hypot(grid.r, omega * grid.l);
   const shortCircuitRatio = shortCircuitCurrent / (fundamental / Math.SQRT2);
 
   const filter = network.filter;
   let dampingLoss = 0;
   if (filter !== null) {
-    solved.forEach((s, order) => {
+    for (let order = 0; order < count; order++) {
       const { seriesImpedance, shuntAdmittance } = lcFilterBranches(filter, omega * order);
-      const current = complexAbs(s.inverterCurrent);
-      const voltage = complexAbs(s.output);
-      dampingLoss += (seriesImpedance.re * current ** 2 + shuntAdmittance.re * voltage ** 2) / 2;
-    });
+      dampingLoss +=
+        (seriesImpedance.re * squareAt(solved.inverterCurrent, order) +
+          shuntAdmittance.re * squareAt(solved.output, order)) /
+        2;
+    }
   }
   const l2 = grid.l2 + grid.l;
   const resonanceFrequency =
@@ -108,8 +110,8 @@ export function gridFigures(inputs: GridFigureInputs): GridFigures {
     phaseVoltage,
     shortCircuitCurrent,
     shortCircuitRatio,
-    gridCurrentSpectrum: label(gridSpectrum),
-    inverterCurrentSpectrum: label(inverterSpectrum),
+    gridCurrentSpectrum: gridSpectrum,
+    inverterCurrentSpectrum: labeller.phasors(solved.inverterCurrent),
     gridCurrentFundamental: fundamental,
     gridCurrentPhase: Math.atan2(first.loadCurrent.im, first.loadCurrent.re),
     gridCurrentThd: Math.sqrt(harmonicSquares) / fundamental,
@@ -137,7 +139,8 @@ export function gridFigures(inputs: GridFigureInputs): GridFigures {
       filter === null
         ? null
         : {
-            fundamentalCurrent: complexAbs(first.capacitorCurrent) / Math.SQRT2,
+            fundamentalCurrent:
+              Math.hypot(first.capacitorCurrent.re, first.capacitorCurrent.im) / Math.SQRT2,
             reactivePower: -phaseCount * power(first.output, first.capacitorCurrent).im,
           },
     limits: {

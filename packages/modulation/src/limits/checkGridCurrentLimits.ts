@@ -12,6 +12,7 @@ import {
   type CurrentLimitRow,
 } from './gridCurrentLimits.js';
 import type { LimitStandard } from './voltageHarmonicLimits.js';
+import { amplitudesByOrder } from './amplitudesByOrder.js';
 
 /** The current-distortion standards {@link checkGridCurrentLimits} knows. */
 export type GridCurrentStandard = 'ieee-519' | 'ieee-1547';
@@ -104,8 +105,8 @@ export function checkGridCurrentLimits(
       : (IEEE_519_2022_CURRENT_LIMITS.find(
           (r) => shortCircuitRatio < (r.shortCircuitRatio?.max ?? Infinity),
         ) as CurrentLimitRow);
-  const byOrder = new Map(spectrum.map((h) => [h.order, h.amplitude]));
-  if (!byOrder.has(source.maxOrder))
+  const byOrder = amplitudesByOrder(spectrum, source.maxOrder);
+  if (byOrder[source.maxOrder] === undefined)
     throw new ParameterRangeError(
       'spectrum',
       `a spectrum holding orders up to ${source.maxOrder}`,
@@ -114,7 +115,7 @@ export function checkGridCurrentLimits(
   const table = [];
   let sumOfSquares = 0;
   for (let order = 2; order <= source.maxOrder; order++) {
-    const ratio = (byOrder.get(order) ?? 0) / referenceCurrent;
+    const ratio = (byOrder[order] ?? 0) / referenceCurrent;
     const limit = limitOf(row, order, standard);
     sumOfSquares += ratio * ratio;
     table.push({ order, ratio, limit, pass: ratio <= limit });

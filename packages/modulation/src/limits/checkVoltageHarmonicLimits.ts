@@ -8,6 +8,7 @@ import {
   type LimitStandard,
   type VoltageLimitRow,
 } from './voltageHarmonicLimits.js';
+import { amplitudesByOrder } from './amplitudesByOrder.js';
 
 /** A figure over its limit. `order` is a harmonic order, or `'thd'` (to the table's order) or `'thd-whole-waveform'`. */
 export interface LimitViolation {
@@ -68,12 +69,7 @@ export function checkVoltageHarmonicLimits(
   const row = IEEE_519_2022_VOLTAGE_LIMITS.find(
     (r) => busVoltage <= r.maxBusVoltage,
   ) as VoltageLimitRow;
-  // Only the table's orders are read: the amplitude of each order 0..maxOrder (the last entry
-  // of an order wins), not a map of the whole spectrum (a report's runs to 5000 orders).
-  const byOrder = new Array<number | undefined>(standard.maxOrder + 1);
-  for (const { order, amplitude } of spectrum)
-    if (Number.isInteger(order) && order >= 0 && order <= standard.maxOrder)
-      byOrder[order] = amplitude;
+  const byOrder = amplitudesByOrder(spectrum, standard.maxOrder);
   const fundamental = byOrder[1] ?? 0;
   if (!(fundamental > 0))
     throw new ParameterRangeError(
