@@ -33,7 +33,7 @@ describe('bad input', () => {
     );
   });
 
-  it('names a carrier frequency that is not a whole multiple of the fundamental', async () => {
+  it('names a carrier frequency that is not a whole multiple of the fundamental where the design needs one (a filter)', async () => {
     const run = await runCli([
       'report',
       '--method',
@@ -48,6 +48,14 @@ describe('bad input', () => {
       '50',
       '--carrier-frequency',
       '1060',
+      '--load-r',
+      '10',
+      '--load-l',
+      '0.01',
+      '--filter-l',
+      '0.002',
+      '--filter-c',
+      '10e-6',
     ]);
     expect(run.code).toBe(2);
     expect(run.stderr).toMatch(/^pulsewright: design\.carrierFrequency must be /);
