@@ -5,6 +5,7 @@ import { harmonicsOfPhasors } from '../spectrum/harmonicsOfPhasors.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import { TAU } from '../math.js';
 import type { DcLinkFigures } from './DesignReport.js';
+import { periodSeries } from './periodSeries.js';
 import { sampledPhasors } from './sampledPhasors.js';
 
 /**
@@ -62,21 +63,13 @@ export function dcLinkFigures(
   const labelled = context.labelPhasors
     ? context.labelPhasors(phasors)
     : label(harmonicsOfPhasors(phasors));
-  const stride = Math.max(1, Math.floor(size / points));
-  const count = Math.ceil(size / stride);
-  const angles = new Array<number>(count);
-  const values = new Array<number>(count);
-  for (let k = 0, j = 0; k < count; k++, j += stride) {
-    angles[k] = (TAU * j) / size;
-    values[k] = current[j] as number;
-  }
   return {
     mean,
     rms,
     rippleRms: Math.sqrt(Math.max(0, rms * rms - mean * mean)),
     secondHarmonic: phaseCount === 1 ? (labelled[2]?.amplitude ?? 0) : null,
     spectrum: labelled,
-    series: { angles, values },
+    series: periodSeries(current, points),
     samplesPerPeriod: size,
   };
 }

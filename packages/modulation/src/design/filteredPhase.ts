@@ -1,7 +1,6 @@
 import { outputNetworkResponse, type OutputNetwork } from '../filter/outputNetworkResponse.js';
 import type { OutputNetworkTransfer } from '../filter/outputNetworkTransfer.js';
 import { currentDistortion } from '../load/currentDistortion.js';
-import { TAU } from '../math.js';
 import type { Complex } from '../numeric/complex.js';
 import { weightedDistortion } from '../spectrum/distortion.js';
 import type { HarmonicPhasors } from '../spectrum/harmonicPhasors.js';
@@ -11,11 +10,11 @@ import { waveformMeanSquare } from '../waveform/waveformMeanSquare.js';
 import type {
   CurrentFigures,
   DesignReport,
-  PeriodSeries,
   PhaseCurrents,
   VoltageFigures,
 } from './DesignReport.js';
 import { networkPhasors } from './networkPhasors.js';
+import { periodSeries } from './periodSeries.js';
 import type { PeriodSynthesiser } from './periodSynthesiser.js';
 import type { SpectrumLabeller } from './spectrumLabeller.js';
 
@@ -59,7 +58,7 @@ export interface FilteredPhaseContext {
  * Internal (part of analyseDesign): one phase through the loaded filter, per harmonic to the
  * analysis order: the bridge voltage's phasors (exact, to spectrumOrder at least) times the
  * network's response to each order (`outputNetworkTransfer`), the fundamental solved with the
- * back-EMF (`outputNetworkResponse`). Its currents are sampled on the synthesiser's grid of S
+ * back-EMF (`networkPhasors`). Its currents are sampled on the synthesiser's grid of S
  * angles 2πj/S: the load and inverter currents in one transform, the capacitor current as
  * their difference (Kirchhoff's current law holds phasor by phasor, so it holds sample by
  * sample to rounding), and the output voltage for the phase that reports it. Peaks and ripple
@@ -91,17 +90,6 @@ export function filteredPhase(
   const held = Math.min(spectrumOrder, currentOrder) + 1;
 
   const { size, sine } = synthesiser;
-  const series = (values: Float64Array): PeriodSeries => {
-    const stride = Math.max(1, Math.floor(values.length / points));
-    const count = Math.ceil(values.length / stride);
-    const angles = new Array<number>(count);
-    const picked = new Array<number>(count);
-    for (let k = 0, j = 0; k < count; k++, j += stride) {
-      angles[k] = (TAU * j) / values.length;
-      picked[k] = values[j] as number;
-    }
-    return { angles, values: picked };
-  };
   const figures = (
     name: string,
     samples: Float64Array,
@@ -140,7 +128,7 @@ export function filteredPhase(
       rippleRms: Math.sqrt(Math.max(0, meanSquare - (fundamentalCurrent * fundamentalCurrent) / 2)),
       ...currentDistortion(Math.sqrt(meanSquare), fundamentalCurrent),
       ripplePeakToPeak: high - low,
-      series: series(samples),
+      series: periodSeries(samples, points),
     };
   };
 
@@ -180,7 +168,7 @@ export function filteredPhase(
               labeller,
               thdUpperBound: outputThdUpperBound(waveform, bridge, solved.output, context),
             }),
-            series: series(synthesiser.pair(solved.output, null, held)[0]),
+            series: periodSeries(synthesiser.pair(solved.output, null, held)[0], points),
           },
     currents: {
       phase,
