@@ -137,6 +137,7 @@ const PUBLIC_NAMES = [
   'designLclFilter',
   'designModulation',
   'designRationalRatio',
+  'designReportPlans',
   'designSpanMaxOrder',
   'designSpanModulation',
   'deviceSwitchingFrequencies',

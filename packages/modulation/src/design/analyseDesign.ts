@@ -43,7 +43,8 @@ import { multilevelDcLinkSwitching } from './multilevelDcLinkSwitching.js';
 import { multilevelFigures } from './multilevelFigures.js';
 import { switchingLegs } from './switchingLegs.js';
 import { assertSemiconductorDevice } from '../losses/assertSemiconductorDevice.js';
-import { periodSynthesiser, synthesisSize } from './periodSynthesiser.js';
+import type { DesignReportPlans } from './designReportPlans.js';
+import { periodSynthesiser, synthesisSize, type PeriodSynthesiser } from './periodSynthesiser.js';
 
 /** Options of {@link analyseDesign}. */
 export interface AnalyseDesignOptions {
@@ -60,6 +61,13 @@ export interface AnalyseDesignOptions {
    * @default the rms line-to-line fundamental of the voltage checked
    */
   busVoltage?: number;
+  /**
+   * Transform plans to reuse (`designReportPlans`): a caller making many reports on one thread
+   * (a worker, a sweep) keeps one set and saves building the transforms' tables each report
+   * (0.65 ms of 8 at mf 101 with a filter). The figures are the same without them.
+   * @default none: each report builds its own
+   */
+  plans?: DesignReportPlans;
 }
 
 /** Most samples a period of the unfiltered currents is read on (a power of two). */
@@ -194,8 +202,9 @@ export function analyseDesign(
   const synthesiser =
     filter === null
       ? null
-      : periodSynthesiser(
+      : synthesiserOf(
           synthesisSize(currentOrder, Math.max(MIN_GRID_SAMPLES, 16 * currentOrder)),
+          options.plans,
         );
   if (synthesiser === null) {
     if (load !== null) {
@@ -281,7 +290,11 @@ export function analyseDesign(
           points,
           label,
           labelPhasors: labeller.phasors,
-          ...(synthesiser === null ? {} : { fft: synthesiser.fft }),
+          ...(synthesiser !== null
+            ? { fft: synthesiser.fft }
+            : options.plans === undefined
+              ? {}
+              : { fft: options.plans.transform((inverterSamples[0] as Float64Array).length) }),
         });
   const commonMode =
     voltages.phaseCount === 3
@@ -405,6 +418,11 @@ function legEdgeFigures(
 ): NonNullable<DesignReport['switching']> {
   const edges = state.levels.length > 1 ? state.edges.length : 0;
   return { legEdgesPerPeriod: edges, averageDeviceFrequency: (edges / 2) * frequency };
+}
+
+/** The synthesiser of size S: the caller's plans' when given, else one built for this report. */
+function synthesiserOf(size: number, plans: DesignReportPlans | undefined): PeriodSynthesiser {
+  return plans === undefined ? periodSynthesiser(size) : plans.synthesiser(size);
 }
 
 /** The reduced common-mode range of a three-phase carrier design's zero sequence, else null. */

@@ -16,6 +16,7 @@ export * from './DesignReport.js';
 export * from './voltageFigures.js';
 export * from './voltageSpectrumFigures.js';
 export * from './analyseDesign.js';
+export * from './designReportPlans.js';
 export * from './modulatorSignals.js';
 export * from './optionLabels.js';
 export * from './equalConditions.js';

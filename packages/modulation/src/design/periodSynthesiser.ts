@@ -31,9 +31,10 @@ export interface PeriodSynthesiser {
  * d_n of y, z has Z_{±n} = (c_{±n} + j·d_{±n})/2, and the forward transform of conj(Z) gives
  * conj(z): x = Re, y = −Im. S from {@link synthesisSize}, so no harmonic aliases.
  * Internal: used for the time series of the filtered design figures.
+ * @param fft - a transform of size S to build on (its tables cost as much as a transform)
  */
-export function periodSynthesiser(size: number): PeriodSynthesiser {
-  const fft = new FFT(size);
+export function periodSynthesiser(size: number, fft: FFT = new FFT(size)): PeriodSynthesiser {
+  if (fft.size !== size) throw new RangeError(`fft.size ${fft.size} is not ${size}`);
   const input = new Float64Array(2 * size);
   const output = new Float64Array(2 * size);
   const sine = new Float64Array(size);

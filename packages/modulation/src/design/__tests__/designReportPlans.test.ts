@@ -1,0 +1,63 @@
+import { describe, expect, it } from 'vitest';
+import { assertInDelta } from '../../testing/assertInDelta.js';
+import { TAU } from '../../math.js';
+import { analyseDesign } from '../analyseDesign.js';
+import { designReportPlans } from '../designReportPlans.js';
+import type { InverterDesign } from '../InverterDesign.js';
+
+const design = (mf: number, filtered: boolean): InverterDesign => ({
+  vdc: 650,
+  fundamentalFrequency: 50,
+  carrierFrequency: 50 * mf,
+  modulation: { method: 'three-phase', ma: 0.9, zeroSequence: 'min-max' },
+  load: { r: 16, l: 0.03 },
+  ...(filtered ? { filter: { l: 0.002, c: 10e-6, rDamping: 3 } } : {}),
+});
+
+describe('designReportPlans', () => {
+  it('gives reports equal to those built without plans, reused across designs and grid sizes', () => {
+    const plans = designReportPlans();
+    // Filtered at mf 21 and 45 (grids of 4096 and 8192 samples), unfiltered at mf 129 (its
+    // DC link on a 16384-sample grid): the second pass at mf 21 finds its grid evicted and builds
+    // it again.
+    const designs = [design(21, true), design(45, true), design(129, false), design(21, true)];
+    for (const d of designs) {
+      const options = { maxOrder: 200, points: 256 };
+      // Same transforms, same operations: the same numbers, not merely close ones.
+      expect(analyseDesign(d, { ...options, plans })).toEqual(analyseDesign(d, options));
+    }
+  });
+
+  it('keeps a transform per grid size for the last two sizes used', () => {
+    const plans = designReportPlans();
+    const first = plans.transform(4096);
+    expect(plans.transform(4096)).toBe(first);
+    expect(plans.synthesiser(4096).fft).toBe(first);
+    plans.transform(8192);
+    expect(plans.transform(4096)).toBe(first);
+    // 8192 is now the least recently used of the two kept: 16384 evicts it, 4096 stays.
+    plans.transform(16384);
+    expect(plans.transform(4096)).toBe(first);
+    expect(plans.transform(8192).size).toBe(8192);
+    expect(plans.transform(16384).size).toBe(16384);
+  });
+
+  it("synthesises a sinusoid from its phasor on the plans' transform", () => {
+    // x(θ) = X₀ + |X₁|·sin(θ + arg X₁) + |X₃|·sin(3θ + arg X₃) sampled at θ_j = 2πj/S: the
+    // harmonics convention (docs/methods.md), evaluated here directly.
+    const size = 64;
+    const synthesiser = designReportPlans().synthesiser(size);
+    const re = Float64Array.from([0.5, 2, 0, -0.3]);
+    const im = Float64Array.from([0, 1, 0, 0.4]);
+    const [x, y] = synthesiser.pair({ re, im }, null, 4);
+    expect(y).toBeNull();
+    for (let j = 0; j < size; j++) {
+      const theta = (TAU * j) / size;
+      const expected =
+        0.5 +
+        Math.hypot(2, 1) * Math.sin(theta + Math.atan2(1, 2)) +
+        0.5 * Math.sin(3 * theta + Math.atan2(0.4, -0.3));
+      assertInDelta(x[j] as number, expected, 1e-12);
+    }
+  });
+});
