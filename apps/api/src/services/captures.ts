@@ -122,19 +122,22 @@ export class CaptureService {
    * study's bridge voltage as GET /studies/{id}/spectrum gives it (line a−b for three-phase), by
    * default up to the study's third carrier group and its sidebands (the library's
    * defaultSpectrumOrder, 3·mf + 20), with the library's warnings (fundamentals more than 1 %
-   * apart, orders past the capture's Nyquist frequency) and no ratio below its noise floor.
+   * apart, orders past the capture's Nyquist frequency, a study's sub- and inter-harmonics that
+   * whole orders cannot compare) and no ratio below its noise floor.
    */
   async compare(teamId: string, id: string, studyId: string, options: ComparisonOptions) {
     const study = await this.studies.get(teamId, studyId);
     const maxOrder =
       options.maxOrder ?? Math.min(MAX_CAPTURE_ORDER, defaultSpectrumOrder(study.design));
     const measured = await this.analyse(teamId, id, { ...options, maxOrder, column: 'voltage' });
-    const predicted = (await this.compute.designSpectrum(study.design, maxOrder, 'study.design'))
-      .harmonics;
-    const figures = compareCapture(measured.harmonics, predicted, {
+    const predicted = await this.compute.designSpectrum(study.design, maxOrder, 'study.design');
+    // A study whose carrier spans q periods predicts every n/q: the capture's whole orders are
+    // compared with those at whole orders, and the rest are summed and named in a warning.
+    const figures = compareCapture(measured.harmonics, predicted.harmonics, {
       measuredFrequency: measured.fundamentalFrequency,
       predictedFrequency: study.design.fundamentalFrequency,
       maxOrder,
+      fundamentalPeriods: predicted.carrierSpan?.q ?? 1,
     });
     return {
       captureId: id,

@@ -2,7 +2,9 @@ import {
   analyseDesign,
   assertInverterDesign,
   asynchronousDesignSpectra,
+  designCarrierSpan,
   designModulation,
+  designSpanSpectrum,
   fftSpectrum,
   modulationVoltages,
   multilevelTimerTable,
@@ -15,6 +17,7 @@ import {
   timerTableToJson,
   type AnalyseDesignOptions,
   type AsynchronousDesignSpectra,
+  type CarrierSpanFigures,
   type DesignReport,
   type FftWindowName,
   type Harmonic,
@@ -53,6 +56,8 @@ export interface SpectrumResult {
   wthd: number;
   /** THD of orders 2..maxOrder only. */
   spectrumThd: number;
+  /** A carrier that is no whole multiple of the fundamental: the span (harmonics at orders n/q). */
+  carrierSpan?: CarrierSpanFigures;
 }
 
 export interface WaveformResult {
@@ -123,6 +128,14 @@ export function designSpectrum(
   maxOrder: number,
   field = 'design',
 ): SpectrumResult {
+  // A carrier that is no whole multiple of the fundamental: the bridge voltage over its span,
+  // components at every n/q (the library's designSpanSpectrum, as the report's).
+  const span = callLibrary(`${field}.`, () => designCarrierSpan(design));
+  if (span !== null)
+    return finiteResult(
+      field,
+      callLibrary(`${field}.`, () => designSpanSpectrum(design, span, { maxOrder }), ['maxOrder']),
+    );
   const modulation = callLibrary(`${field}.`, () => designModulation(design));
   return voltageSpectrum(
     modulationOutput(modulation, undefined, `${field}.modulation.`),

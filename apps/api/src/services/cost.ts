@@ -369,26 +369,31 @@ export function reportCost(
   };
 }
 
-/** GET /studies/{id}/spectrum and a capture comparison's prediction: the design's bridge voltage. */
+/**
+ * GET /studies/{id}/spectrum and a capture comparison's prediction: the design's bridge voltage.
+ * A carrier that is no whole multiple of the fundamental (designCarrierSpan's p/q) builds the
+ * voltage over p carrier cycles and sums q·maxOrder + 1 span components.
+ */
 export function designSpectrumCost(
   design: InverterDesign,
   maxOrder: number,
   field = 'design',
 ): CostEstimate {
   const pattern = !CARRIER_METHODS.includes(design.modulation.method);
+  const span = pattern ? null : callLibrary(`${field}.`, () => designCarrierSpan(design));
   const ratio = pattern
     ? 0
-    : Math.round((design.carrierFrequency ?? 0) / design.fundamentalFrequency);
+    : (span?.p ?? Math.round((design.carrierFrequency ?? 0) / design.fundamentalFrequency));
+  const orders = (span?.q ?? 1) * maxOrder + 1;
   const edges = designEdges(design, ratio);
   const analysed = edges.line || edges.phase;
   return {
     work:
-      Math.max(edges.build, 3 * (edges.phase + edges.line)) * BUILD_PER_EDGE +
-      analysed * (maxOrder + 1),
-    basis: `${analysed} edges × ${maxOrder + 1} orders`,
+      Math.max(edges.build, 3 * (edges.phase + edges.line)) * BUILD_PER_EDGE + analysed * orders,
+    basis: `${analysed} edges × ${orders} orders${span === null ? '' : ` over ${span.q} fundamental periods (${span.p}/${span.q})`}`,
     fields: pattern ? ['maxOrder'] : ['maxOrder', `${field}.carrierFrequency`],
-    responseBytes: (maxOrder + 1) * 3 * BYTES_PER_NUMBER,
-    responseFields: ['maxOrder'],
+    responseBytes: orders * 3 * BYTES_PER_NUMBER,
+    responseFields: span === null ? ['maxOrder'] : ['maxOrder', `${field}.carrierFrequency`],
   };
 }
 

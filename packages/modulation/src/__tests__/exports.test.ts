@@ -140,6 +140,7 @@ const PUBLIC_NAMES = [
   'designReportPlans',
   'designSpanMaxOrder',
   'designSpanModulation',
+  'designSpanSpectrum',
   'deviceSwitchingFrequencies',
   'dutyFromReference',
   'equalConditions',

@@ -38,6 +38,11 @@ export interface CompareCaptureOptions {
   maxOrder: number;
   /** Fraction of the predicted fundamental below which no ratio is given. @default CAPTURE_RATIO_FLOOR */
   ratioFloor?: number;
+  /**
+   * q, an integer in [1, 1000]: the fundamental periods the prediction spans (a carrier at a
+   * ratio p/q, `designSpanSpectrum`), so that `predicted[n]` is at order n/q. @default 1
+   */
+  fundamentalPeriods?: number;
 }
 
 /** A capture against a prediction; a plain serialisable object. */
@@ -49,7 +54,13 @@ export interface CaptureComparisonFigures {
   ratioFloor: number;
   /** (measured − predicted fundamental frequency)/predicted, a ratio. */
   frequencyMismatch: number;
-  /** Sentences a person can act on: frequencies that differ by more than 1 %, orders cut by Nyquist. */
+  /**
+   * RMS sum of the predicted components between whole orders (sub- and inter-harmonics n/q to
+   * maxOrder, with `fundamentalPeriods` q > 1) over the predicted fundamental, a ratio: what the
+   * comparison, read at whole orders, leaves out. 0 with q = 1.
+   */
+  uncomparedDistortion: number;
+  /** Sentences a person can act on: frequencies that differ by more than 1 %, orders cut by Nyquist, components between whole orders. */
   warnings: string[];
 }
 
@@ -60,9 +71,19 @@ export interface CaptureComparisonFigures {
  * the design's), or a capture sampled too slowly to reach the orders asked for. The ratio column
  * is left empty (null) where the prediction is below the noise floor.
  *
+ * A prediction over a span of q fundamental periods (a carrier that is no whole multiple of the
+ * fundamental) has components at every n/q; a capture is read at whole orders only (`fftSpectrum`
+ * over whole fundamental periods), so each whole order is compared with the prediction's
+ * component at that order, and the components between them are summed (RMS) into
+ * `uncomparedDistortion` and named in a warning: a window over whole fundamental periods but not
+ * whole spans leaks part of their energy into the neighbouring whole-order bins (Harris, 1978,
+ * "On the use of windows for harmonic analysis with the DFT", Proc. IEEE 66(1)), so a measured
+ * whole order may read above its prediction there.
+ *
  * @param measured - the capture's harmonics, orders 1 … (peak volts)
- * @param predicted - the prediction indexed by order (index 0 the mean), peak volts
- * @throws ParameterRangeError naming `measuredFrequency`, `predictedFrequency`, `maxOrder` or `ratioFloor`
+ * @param predicted - the prediction indexed by order times q (index 0 the mean), peak volts
+ * @throws ParameterRangeError naming `measuredFrequency`, `predictedFrequency`, `maxOrder`,
+ *   `ratioFloor` or `fundamentalPeriods`
  */
 export function compareCapture(
   measured: readonly CaptureHarmonic[],
@@ -74,15 +95,17 @@ export function compareCapture(
     predictedFrequency,
     maxOrder,
     ratioFloor = CAPTURE_RATIO_FLOOR,
+    fundamentalPeriods: q = 1,
   } = options;
   assertNumberInRange('measuredFrequency', measuredFrequency, { min: 0, minExclusive: true });
   assertNumberInRange('predictedFrequency', predictedFrequency, { min: 0, minExclusive: true });
   assertNumberInRange('maxOrder', maxOrder, { min: 1, integer: true });
   assertNumberInRange('ratioFloor', ratioFloor, { min: 0, max: 1 });
-  const fundamental = predicted[1]?.amplitude ?? 0;
+  assertNumberInRange('fundamentalPeriods', q, { min: 1, max: 1000, integer: true });
+  const fundamental = predicted[q]?.amplitude ?? 0;
   const noiseFloor = ratioFloor * fundamental;
   const orders = measured.map((h): CaptureComparisonOrder => {
-    const expected = predicted[h.order]?.amplitude ?? 0;
+    const expected = predicted[h.order * q]?.amplitude ?? 0;
     return {
       order: h.order,
       frequency: h.frequency,
@@ -110,7 +133,21 @@ export function compareCapture(
         `higher sample rate to compare the carrier groups above.`,
     );
   }
-  return { orders, noiseFloor, ratioFloor, frequencyMismatch, warnings };
+  let between = 0;
+  for (let n = 1; n <= Math.min(q * maxOrder, predicted.length - 1); n++)
+    if (n % q !== 0) between += (predicted[n]?.amplitude ?? 0) ** 2;
+  const uncomparedDistortion = fundamental > 0 ? Math.sqrt(between) / fundamental : 0;
+  if (q > 1) {
+    warnings.push(
+      `The study's carrier is no whole multiple of its fundamental: its pattern repeats every ` +
+        `${q} fundamental periods and it has components at every 1/${q} of the fundamental ` +
+        `(sub- and inter-harmonics, ${round(100 * uncomparedDistortion)} % of the fundamental ` +
+        `RMS-summed to order ${maxOrder}). The capture is read at whole orders only, so these ` +
+        `are not compared, and their leakage into the whole-order bins may make a measured ` +
+        `order read above its prediction.`,
+    );
+  }
+  return { orders, noiseFloor, ratioFloor, frequencyMismatch, uncomparedDistortion, warnings };
 }
 
 /** Four significant figures for a sentence. */

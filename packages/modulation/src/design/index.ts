@@ -8,6 +8,7 @@ export * from './designCarrierSpan.js';
 export * from './designSpanMaxOrder.js';
 export * from './designSpanModulation.js';
 export * from './asynchronousDesignSpectra.js';
+export * from './designSpanSpectrum.js';
 export * from './designModulation.js';
 export * from './modulationPhaseCount.js';
 export * from './modulationVoltages.js';

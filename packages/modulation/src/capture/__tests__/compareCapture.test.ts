@@ -68,6 +68,53 @@ describe('compareCapture', () => {
     expect(result.warnings[0]).toMatch(/reaches order 49 only.*orders 50 to 80 are not compared/);
   });
 
+  it('compares a prediction over a 3-period span at its whole orders and sums the components between them', () => {
+    // v = 100 sin θ + 30 sin(4θ/3) + 20 sin 3θ, 50 Hz, sampled at 30 kHz over exactly 3 periods
+    // (one span). Read with the rectangular window over the 3 periods, the 4/3 component is bin 4
+    // of the 1800-point DFT and the whole orders are bins 3 and 9: orthogonal (the DFT of whole
+    // cycles, a fact of the trade), so orders 1 and 3 read 100 and 20 exactly.
+    const rate = 30_000;
+    const span = Array.from({ length: 1800 }, (_, i) => {
+      const theta = (2 * Math.PI * 50 * i) / rate;
+      return 100 * Math.sin(theta) + 30 * Math.sin((4 * theta) / 3) + 20 * Math.sin(3 * theta);
+    });
+    const measured = fftSpectrum(span, rate, {
+      maxOrder: 4,
+      fundamentalFrequency: 50,
+      window: 'rectangular',
+    });
+    // The prediction indexed by span order n (order n/3): the same three components.
+    const predicted = Array.from({ length: 13 }, (_, n) => ({
+      order: n / 3,
+      amplitude: n === 3 ? 100 : n === 4 ? 30 : n === 9 ? 20 : 0,
+      phase: 0,
+    }));
+    const result = compareCapture(measured.harmonics, predicted, {
+      measuredFrequency: 50,
+      predictedFrequency: 50,
+      maxOrder: 4,
+      fundamentalPeriods: 3,
+    });
+    const byOrder = new Map(result.orders.map((row) => [row.order, row]));
+    assertInDelta(byOrder.get(1)?.predicted ?? NaN, 100, 0, 'predicted order 1 is span order 3');
+    assertInDelta(byOrder.get(1)?.ratio ?? NaN, 1, 1e-9, 'order 1');
+    assertInDelta(byOrder.get(3)?.ratio ?? NaN, 1, 1e-9, 'order 3');
+    expect(byOrder.get(2)?.ratio).toBeNull();
+    // The component between whole orders: 30/100 of the fundamental, named in a warning.
+    assertInDelta(result.uncomparedDistortion, 0.3, 1e-15, 'uncompared');
+    expect(result.warnings).toHaveLength(1);
+    expect(result.warnings[0]).toMatch(
+      /repeats every 3 fundamental periods.*30 % of the fundamental/,
+    );
+    // With q = 1 nothing lies between whole orders.
+    const whole = compareCapture(measured.harmonics, harmonics(square, 4), {
+      measuredFrequency: 50,
+      predictedFrequency: 50,
+      maxOrder: 4,
+    });
+    expect(whole.uncomparedDistortion).toBe(0);
+  });
+
   it('names the field of a bad option', () => {
     expect(() =>
       compareCapture([], [], { measuredFrequency: 0, predictedFrequency: 50, maxOrder: 5 }),
@@ -80,5 +127,13 @@ describe('compareCapture', () => {
         ratioFloor: 2,
       }),
     ).toThrow(/ratioFloor/);
+    expect(() =>
+      compareCapture([], [], {
+        measuredFrequency: 50,
+        predictedFrequency: 50,
+        maxOrder: 5,
+        fundamentalPeriods: 1.5,
+      }),
+    ).toThrow(/fundamentalPeriods/);
   });
 });
