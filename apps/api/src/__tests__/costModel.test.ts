@@ -263,6 +263,18 @@ describe('cost model at the default budgets', () => {
     expect(reportCost(HEAVY_DESIGN as never, { maxOrder: 5000, points: 4000 }).work).toBeLessThan(
       limits.requestWorkBudget,
     );
+    // Issue 12: the report reads the three legs' spectra once (not each phase, line and the grid's
+    // phase again), so the heaviest grid design, refused before at 2.7e8 units, fits now (about
+    // 160 ms of CPU measured on the loaded build machine; estimated 6.8e7 units, 0.34 s): three
+    // legs of 2·(mf + 1) edges each (the bound of a carrier leg) to the analysis order 10·mf + 10.
+    const grid = {
+      ...HEAVY_DESIGN,
+      load: undefined,
+      grid: { lineVoltage: 400, phase: 0, r: 0.1, l: 1e-3, l2: 0.5e-3, controlBandwidth: 1000 },
+    };
+    const gridCost = reportCost(grid, {});
+    expect(gridCost.work).toBeLessThan(limits.requestWorkBudget);
+    expect(gridCost.basis).toContain("6000 edges × 10001 orders of the legs' spectra");
     const she = {
       kind: 'staircase' as const,
       vdc: 1,

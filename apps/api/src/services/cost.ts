@@ -78,6 +78,19 @@ const BYTES_PER_NUMBER = 20;
 const SPAN_BYTES_PER_VOLTAGE_NUMBER = 15;
 const SPAN_BYTES_PER_COMPONENT = 170;
 
+/**
+ * The design report's own factors (analyseDesign reads the three legs' exact spectra once, by a
+ * recurrence over the orders at each edge, and every other spectrum is a combination of them),
+ * fitted to its CPU time on 28 designs (three-phase and single-phase, mf 21–999, load, LC filter,
+ * grid, losses, default order and 5000; the 2-core machine under a load of 8) and doubled:
+ * a quarter unit a term of the legs' sums (0.13 fitted), 40 units an order of each labelled
+ * spectrum and of each phase solved through the filter (20), 60 units a sample of each phase's
+ * current grid (30: the exact load currents or the filter's synthesis, the DC link and losses).
+ */
+const REPORT_PER_TERM = 0.25;
+const REPORT_PER_ORDER = 40;
+const REPORT_PER_SAMPLE = 60;
+
 const sci = (value: number): string => value.toPrecision(3);
 
 /**
@@ -252,14 +265,25 @@ function designVoltageEdges(
   }
 }
 
+/** The smallest power of two ≥ n and ≥ 4 (the library's sample grids). */
+function powerOfTwoAtLeast(n: number): number {
+  let size = 4;
+  while (size < n) size *= 2;
+  return size;
+}
+
 /**
  * The design report (POST /designs/report, /load-current, /filters/lc, /harmonic-limits/check,
  * GET /studies/{id}/report, a study's check on save and its shared report). The estimate follows
- * analyseDesign's documented analysis: the exact spectra of every voltage to maxOrder and, with a
- * filter, every phase to its analysis order (10·mf + 10, at most MAX_ANALYSIS_ORDER); time series
- * of `points` samples (1 + 3 per phase with a filter, one per phase with a load alone). A grid is
- * each phase's load, and its figures solve phase a once more to the analysis order (two more
- * labelled spectra in the answer).
+ * analyseDesign's analysis: the legs' exact spectra (a single-phase bridge's output) read once, to
+ * maxOrder or, with a filter, to its analysis and current orders (10·mf + 10 at least, at most
+ * MAX_ANALYSIS_ORDER), every other spectrum combined from them; each phase solved through the
+ * filter order by order; each labelled spectrum of the answer; each phase's current on its grid
+ * of samples; time series of `points` samples (1 + 3 per phase with a filter, one per phase with
+ * a load alone). A grid is each phase's load, and its figures solve phase a once more (two more
+ * labelled spectra in the answer). The factors (REPORT_PER_TERM, …) are fitted to the report's
+ * measured time and doubled; a span (a carrier no whole multiple of the fundamental) keeps one
+ * unit a term of each voltage's sum over its q periods.
  * @param field - where the design sits in the request (`design`, `study.design`)
  */
 export function reportCost(
@@ -288,15 +312,43 @@ export function reportCost(
   const analysisOrder = filtered
     ? Math.min(MAX_ANALYSIS_ORDER, Math.max(maxOrder, pattern ? 2000 : 10 * ratio + 10))
     : maxOrder;
-  const spectra = (edges.phase + edges.line) * q * maxOrder;
+  // The legs' exact spectra (a single-phase bridge's output), read once: to maxOrder, or with a
+  // filter to its analysis and current orders (analyseDesign's); every other spectrum is built
+  // from them. A span reads each of its voltages over q periods (analyseDesignSpan).
+  const currentOrder = Math.min(
+    MAX_ANALYSIS_ORDER,
+    Math.max(defaultSpectrumOrder(design), 10 * (pattern ? 200 : ratio) + 10),
+  );
+  const readOrder = filtered ? Math.max(analysisOrder, currentOrder) : maxOrder;
+  const legTerms =
+    span === null ? edges.phase * readOrder : (edges.phase + edges.line) * q * maxOrder;
+  const spectra = span === null ? Math.ceil(REPORT_PER_TERM * legTerms) : legTerms;
   const spanSamples =
     span === null || !design.load
       ? 0
       : phases * Math.min(2 ** 19, Math.max(4096 * span.q, 64 * span.p)) * 20;
   const grid = design.grid !== undefined && design.grid !== null;
-  const throughFilter =
-    (filtered ? phases * edges.phase * analysisOrder : 0) +
-    (grid ? edges.phase * analysisOrder : 0);
+  const currents = filtered || design.load !== undefined || grid;
+  // Each phase's network solved order by order to readOrder (and phase a once more for a grid),
+  // and each labelled spectrum: bridge, with three phases line and common mode, with currents
+  // the DC link, with a filter its output, with a grid the grid's and the inverter's currents.
+  const solvedOrders =
+    span === null ? ((filtered ? phases : 0) + (grid ? 1 : 0)) * (readOrder + 1) : 0;
+  const labelled =
+    span === null
+      ? 1 + (phases === 3 ? 2 : 0) + (currents ? 1 : 0) + (filtered ? 1 : 0) + (grid ? 2 : 0)
+      : 0;
+  const throughFilter = REPORT_PER_ORDER * solvedOrders;
+  const labels = REPORT_PER_ORDER * labelled * (maxOrder + 1);
+  // Each phase's current on its grid of samples: the filter's synthesis grid (16 samples a cycle
+  // of the current order) or the exact load currents' (64 a carrier cycle, at most 2^17).
+  const gridSamples =
+    span !== null || !currents
+      ? 0
+      : filtered
+        ? powerOfTwoAtLeast(Math.max(4096, 16 * currentOrder))
+        : powerOfTwoAtLeast(Math.min(2 ** 17, Math.max(4096, 64 * (pattern ? 64 : ratio))));
+  const currentSamples = REPORT_PER_SAMPLE * phases * gridSamples;
   const series =
     (filtered ? 1 + 3 * phases : 0) + (!filtered && (design.load || grid) ? phases : 0);
   const sampled = series * points * 20;
@@ -331,11 +383,11 @@ export function reportCost(
   // The fields to lower, the largest share of the work first (the carrier sets the edges of every
   // sum, but is named first only where it also sets the filter's analysis order); options the
   // route does not take are left out.
-  const fromCarrier = analysisOrder > maxOrder ? throughFilter : 0;
+  const fromCarrier = (readOrder > maxOrder ? spectra + throughFilter : 0) + currentSamples;
   const shares: [string, number][] = [
     [`${field}.carrierFrequency`, pattern ? 0 : build + fromCarrier + spanSamples],
     [`${field}.modulation.levels`, modulation.method === 'multilevel-carrier' ? build : 0],
-    ['maxOrder', spectra + throughFilter - fromCarrier],
+    ['maxOrder', spectra + throughFilter + labels + currentSamples - fromCarrier],
     ['points', sampled],
   ];
   const fields = shares
@@ -345,8 +397,11 @@ export function reportCost(
     .sort((a, b) => b[1] - a[1])
     .map(([name]) => name);
   return {
-    work: spectra + throughFilter + build + sampled + spanSamples,
-    basis: `${edges.phase + edges.line} edges × ${q * maxOrder} orders${span === null ? '' : ` over ${span.q} fundamental periods (${span.p}/${span.q})`}${filtered ? ` + ${phases} × ${edges.phase} edges × ${analysisOrder} orders through the filter` : ''}${grid ? ` + ${edges.phase} edges × ${analysisOrder} orders for the grid` : ''}${series ? ` + ${series} series × ${points} points` : ''}`,
+    work: spectra + throughFilter + labels + currentSamples + build + sampled + spanSamples,
+    basis:
+      span === null
+        ? `${edges.phase} edges × ${readOrder + 1} orders of the legs' spectra + ${labelled} labelled spectra × ${maxOrder + 1} orders${filtered ? ` + ${phases} phases × ${readOrder + 1} orders and ${gridSamples} samples through the filter` : ''}${grid ? ` + ${readOrder + 1} orders for the grid` : ''}${!filtered && gridSamples ? ` + ${phases} × ${gridSamples} current samples` : ''}${series ? ` + ${series} series × ${points} points` : ''}`
+        : `${edges.phase + edges.line} edges × ${q * maxOrder} orders over ${span.q} fundamental periods (${span.p}/${span.q})${series ? ` + ${series} series × ${points} points` : ''}`,
     fields: fields.length ? fields : [field],
     // Labelled spectra (about five numbers an order and voltage), time series, and the edges of each voltage.
     responseBytes:
