@@ -14,6 +14,13 @@
  * turn (bare, service, service with response validation, …), THROUGHPUT_CONNECTIONS (default 50);
  * THROUGHPUT_COMPARE_API=<another build's apps/api/dist/app.js> adds that build's figures;
  * THROUGHPUT_NODE_DEFAULTS=1 runs with Node's memory defaults instead of the service's settings.
+ *
+ * Figures (docs/robustness.md, throughput): on a quiet machine, 2 December 22:54 UTC, bare 1477
+ * requests/s and p99 50 ms, service 844 and 115 ms (57 %, 2.3×), CPU per answer 0.71 and 1.29 ms.
+ * On a loaded machine CPU time per answer moves by ±30 % between loads; instructions per answer
+ * counted by valgrind (each server alone, 1000 answers after 300) do not: bare 5.7–5.8 M, the
+ * service 9.5–9.9 M before the fourth pass (compute fast path, one-shot token hash) and 9.4–9.7 M
+ * after (57–61 %).
  */
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
