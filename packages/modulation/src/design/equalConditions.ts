@@ -1,6 +1,9 @@
+import { bestRationalApproximation } from '../numeric/bestRationalApproximation.js';
 import { assertNumberInRange, assertOneOf } from '../validation/assertions.js';
 import { ParameterRangeError, ParameterTypeError } from '../validation/errors.js';
-import { MAX_DESIGN_FREQUENCY_RATIO } from './designBounds.js';
+import { MAX_DESIGN_FREQUENCY_RATIO, MAX_DESIGN_FUNDAMENTAL_PERIODS } from './designBounds.js';
+import { ASYNCHRONOUS_METHODS } from './designCarrierSpan.js';
+import { designSpanMaxOrder } from './designSpanMaxOrder.js';
 import type { DesignReport } from './DesignReport.js';
 import type { InverterDesign } from './InverterDesign.js';
 
@@ -52,7 +55,12 @@ export interface EqualConditionCandidateResult {
   carrierFrequency: number | null;
   /** The factor the condition asks of the carrier (the figure's ratio), before rounding; null when not adjusted. */
   wantedFactor: number | null;
-  /** The factor applied: the new carrier over the given one, after rounding to a whole mf (1 when not adjusted). */
+  /**
+   * The factor applied: the new carrier over the given one (1 when not adjusted). Where the
+   * report spans a carrier that is no whole multiple of the fundamental, the wanted factor to
+   * within the nearest fraction mf = p/q the span's cost allows (under 1/q of an mf step); for a
+   * multilevel design or one with a filter or grid, after rounding to a whole mf.
+   */
   factor: number;
   /** Why the carrier was left as given (no carrier, no figure, mf out of range); null when adjusted or at equal carrier. */
   note: string | null;
@@ -70,9 +78,17 @@ export interface EqualConditionResult {
 /**
  * Puts candidate designs at one condition for a fair comparison: each candidate's carrier
  * frequency is multiplied by the reference's figure over its own (average device switching
- * frequency, or switching loss) and rounded to a whole frequency ratio mf (a design's mf is a
- * whole number, 1 to {@link MAX_DESIGN_FREQUENCY_RATIO}), so the realised `factor` may differ
- * from `wantedFactor` by up to half an mf step.
+ * frequency, or switching loss), its ratio mf to the fundamental kept within 1 to
+ * {@link MAX_DESIGN_FREQUENCY_RATIO}. A sine-triangle, three-phase carrier or space-vector design
+ * without a filter or grid keeps the scaled carrier as asked: its report spans a ratio p/q over q
+ * fundamental periods (`designCarrierSpan`), so mf is set to the fraction nearest the scaled
+ * ratio (continued fractions, `bestRationalApproximation`) with the largest q ≤ 64 whose span the
+ * report can afford (`designSpanMaxOrder`'s bound, p·q ≤ 4·10⁵; q = 1 always can), so the
+ * carrier differs from the one asked for by less than 1/N of an mf step, N the largest q allowed
+ * (the fractions of denominator ≤ N either side of a ratio are 1/(b·d) apart with b + d > N;
+ * Farey sequences, a fact of number theory), under 0.03 of a step at mf 150. A multilevel
+ * design, or one with a filter or grid, whose report needs a whole mf, is rounded to one, so its
+ * `factor` may differ from `wantedFactor` by up to half an mf step.
  *
  * Both figures are proportional to the carrier frequency in the model, which is why one scaling
  * suffices: each leg's edges per period grow with mf for a given waveform shape (the device
@@ -162,16 +178,21 @@ export function equalConditions(
         );
       const wantedFactor = target / figure;
       const mf = carrier / design.fundamentalFrequency;
-      const scaled = Math.max(1, Math.round(mf * wantedFactor));
+      const spans =
+        ASYNCHRONOUS_METHODS.includes(design.modulation.method) && !design.filter && !design.grid;
+      const wanted = Math.max(1, mf * wantedFactor);
+      const scaled = spans ? wanted : Math.round(wanted);
       if (scaled > MAX_DESIGN_FREQUENCY_RATIO)
         return {
           ...unchanged(
             design,
-            `equal ${what} needs mf ${scaled}, above the largest ${MAX_DESIGN_FREQUENCY_RATIO}`,
+            `equal ${what} needs mf ${Number(scaled.toPrecision(6))}, above the largest ${MAX_DESIGN_FREQUENCY_RATIO}`,
           ),
           wantedFactor,
         };
-      const carrierFrequency = scaled * design.fundamentalFrequency;
+      const carrierFrequency = spans
+        ? affordableSpanRatio(design, scaled) * design.fundamentalFrequency
+        : scaled * design.fundamentalFrequency;
       return {
         design: { ...design, carrierFrequency },
         carrierFrequency,
@@ -181,4 +202,22 @@ export function equalConditions(
       };
     }),
   };
+}
+
+/**
+ * The fraction p/q nearest to `ratio` with the largest q ≤ 64 whose span the design report can
+ * afford (`designSpanMaxOrder` does not refuse it): continued fractions' best approximation,
+ * tried with fewer periods until the span's p·q fits. q = 1 (a whole mf ≤ 1000) always fits.
+ */
+function affordableSpanRatio(design: InverterDesign, ratio: number): number {
+  for (let periods = MAX_DESIGN_FUNDAMENTAL_PERIODS; periods > 1; periods--) {
+    const { p, q } = bestRationalApproximation(ratio, periods);
+    try {
+      designSpanMaxOrder(design, { p, q, error: 0 });
+      return p / q;
+    } catch (error) {
+      if (!(error instanceof ParameterRangeError)) throw error;
+    }
+  }
+  return Math.round(ratio);
 }

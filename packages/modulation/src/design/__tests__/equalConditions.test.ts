@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { analyseDesign, EXAMPLE_IGBT, type InverterDesign } from '../../index.js';
 import { assertInDelta } from '../../testing/assertInDelta.js';
 import { rangeErrorField } from '../../testing/rangeErrorField.js';
+import { designCarrierSpan } from '../designCarrierSpan.js';
 import { equalConditions } from '../equalConditions.js';
 
 const f1 = 50;
@@ -46,13 +47,25 @@ describe('equalConditions', () => {
     expect(a?.factor).toBe(1);
     expect(a?.carrierFrequency).toBe(99 * f1);
     assertInDelta(b?.wantedFactor ?? 0, 1.5, 0.03, 'DPWM1 factor');
-    // Rounded to a whole mf.
-    expect(b?.carrierFrequency).toBe(Math.round(99 * (b?.wantedFactor ?? 0)) * f1);
+    // Kept as scaled: mf is the nearest fraction p/q the span's cost allows (q ≤ 64, p·q ≤ 4e5),
+    // less than 1/q of an mf step from the scaled ratio (neighbouring fractions of denominator
+    // ≤ N are 1/(b·d) apart with b + d > N: Farey sequences, a fact of number theory), where
+    // rounding to a whole mf could move it half a step.
+    const span = designCarrierSpan(b?.design as InverterDesign);
+    expect(span?.q).toBeGreaterThan(1);
+    assertInDelta(
+      99 * (b?.factor ?? 0),
+      99 * (b?.wantedFactor ?? 0),
+      1 / (span?.q ?? 1),
+      'kept as scaled',
+    );
+    expect((span?.p ?? 0) * (span?.q ?? 0)).toBeLessThanOrEqual(400_000);
+    assertInDelta(span?.error ?? NaN, 0, 1e-9, 'the carrier is exactly p/q');
     expect(b?.design.carrierFrequency).toBe(b?.carrierFrequency);
     // A continuous sequence switches every carrier period: unchanged.
     assertInDelta(c?.wantedFactor ?? 0, 1, 1e-12, 'third harmonic');
-    // The adjusted DPWM1 design's own report meets the condition within two mf steps (2/99):
-    // the rounding, and the clamp boundaries' partial periods at the new carrier.
+    // The adjusted DPWM1 design's own report (over its span) meets the condition within two mf
+    // steps (2/99): the clamp boundaries' partial carrier periods at the new carrier.
     const adjusted = analyseDesign(b?.design as InverterDesign);
     assertInDelta(
       adjusted.switching?.averageDeviceFrequency ?? 0,
@@ -74,6 +87,18 @@ describe('equalConditions', () => {
     assertInDelta(adjusted?.wantedFactor ?? 0, 2, 0.05, 'factor');
     const loss = analyseDesign(adjusted?.design as InverterDesign).losses?.switching ?? 0;
     assertInDelta(loss, result.target ?? 0, 0.02 * (result.target ?? 0), 'switching loss');
+  });
+
+  it('a design with a filter, whose report needs a whole mf, is still rounded to one', () => {
+    // The filtered report is solved per harmonic of one period (analyseDesign): mf whole, so the
+    // realised factor differs from the wanted one by up to half an mf step.
+    const filter = { l: 0.002, c: 10e-6, rDamping: 2 };
+    const spwm = candidate({ ...drive('none'), filter });
+    const dpwm = candidate({ ...drive('dpwm1'), filter });
+    const result = equalConditions([spwm, dpwm], { condition: 'equal-device-frequency' });
+    const b = result.candidates[1];
+    expect(b?.carrierFrequency).toBe(Math.round(99 * (b?.wantedFactor ?? 0)) * f1);
+    expect(designCarrierSpan(b?.design as InverterDesign)).toBeNull();
   });
 
   it('equal carrier leaves every design as it is; patterns and missing figures are noted, not scaled', () => {

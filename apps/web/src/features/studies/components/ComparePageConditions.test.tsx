@@ -1,4 +1,9 @@
-import { analyseDesign, EXAMPLE_IGBT, type InverterDesign } from '@pulsewright/modulation';
+import {
+  analyseDesign,
+  designCarrierSpan,
+  EXAMPLE_IGBT,
+  type InverterDesign,
+} from '@pulsewright/modulation';
 import { fireEvent, render, screen, waitFor } from '@testing-library/react';
 import { MemoryRouter } from 'react-router-dom';
 import { afterEach, describe, expect, it, vi } from 'vitest';
@@ -78,17 +83,21 @@ describe('ComparePage at equal conditions', () => {
       target: { value: 'equal-device-frequency' },
     });
     // A 120° clamp switches 2/3 of the period: 1.5× the carrier for the same average device
-    // switching frequency (A. M. Hava, R. J. Kerkman, T. A. Lipo, 1999; from memory), rounded to
-    // a whole mf, within the clamp edges' partial periods (0.03).
+    // switching frequency (A. M. Hava, R. J. Kerkman, T. A. Lipo, 1999; from memory), within the
+    // clamp edges' partial periods (0.03); kept as scaled, so mf is a fraction p/q (the report
+    // spans it) rather than rounded to a whole one.
     await waitFor(() => expect(posted).toHaveLength(1), { timeout: 10_000 });
     const carrier = posted[0]?.carrierFrequency ?? 0;
-    expect(carrier % 50).toBe(0);
     expect(carrier / 4950).toBeGreaterThan(1.47);
     expect(carrier / 4950).toBeLessThan(1.53);
+    const span = designCarrierSpan(posted[0] as InverterDesign);
+    expect(span?.q).toBeGreaterThan(1);
     await waitFor(
       () => expect(cell('DPWM1', 'Carrier (Hz)')).toHaveTextContent(formatNumber(carrier)),
       { timeout: 10_000 },
     );
+    expect(cell('DPWM1', 'mf')).toHaveTextContent(`${span?.p}/${span?.q}`);
+    expect(cell('DPWM1', 'Carrier (Hz)')?.getAttribute('title')).toMatch(/kept as scaled/);
     expect(cell('SPWM', 'Carrier (Hz)')).toHaveTextContent(formatNumber(4950));
     // The DPWM1 row shows the adjusted design's report (its device switching frequency near SPWM's).
     const spwm = analyseDesign(designs[A] as InverterDesign);

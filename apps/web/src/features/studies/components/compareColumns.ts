@@ -33,11 +33,11 @@ export const COLUMNS: Column[] = [
     heading: 'Carrier (Hz)',
     cell: (_, row) => (row.carrierFrequency === null ? '—' : formatNumber(row.carrierFrequency)),
     value: (_, row) => row.carrierFrequency,
-    title: (_, row) =>
+    title: (r, row) =>
       row.note ??
       (row.factor === 1
         ? 'as designed'
-        : `${formatNumber(row.factor)} × the carrier as designed, rounded to a whole mf`),
+        : `${formatNumber(row.factor)} × the carrier as designed${r.carrierSpan ? `, kept as scaled (mf ${r.carrierSpan.p}/${r.carrierSpan.q}, figures over ${r.carrierSpan.q} periods)` : ', rounded to a whole mf'}`),
   },
   {
     heading: 'mf',
