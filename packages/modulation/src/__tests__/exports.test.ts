@@ -79,6 +79,7 @@ const PUBLIC_NAMES = [
   'PHASE_COUNT_LABELS',
   'ParameterRangeError',
   'ParameterTypeError',
+  'SCALED_CARRIER_TOLERANCE',
   'SHE_KINDS',
   'SHE_KIND_LABELS',
   'SIX_STEP_M',

@@ -3,7 +3,6 @@ import { assertNumberInRange, assertOneOf } from '../validation/assertions.js';
 import { ParameterRangeError, ParameterTypeError } from '../validation/errors.js';
 import { MAX_DESIGN_FREQUENCY_RATIO, MAX_DESIGN_FUNDAMENTAL_PERIODS } from './designBounds.js';
 import { ASYNCHRONOUS_METHODS } from './designCarrierSpan.js';
-import { designSpanMaxOrder } from './designSpanMaxOrder.js';
 import type { DesignReport } from './DesignReport.js';
 import type { InverterDesign } from './InverterDesign.js';
 
@@ -58,7 +57,7 @@ export interface EqualConditionCandidateResult {
   /**
    * The factor applied: the new carrier over the given one (1 when not adjusted). Where the
    * report spans a carrier that is no whole multiple of the fundamental, the wanted factor to
-   * within the nearest fraction mf = p/q the span's cost allows (under 1/q of an mf step); for a
+   * within 0.1 % (mf a fraction p/q with few periods q); for a
    * multilevel design or one with a filter or grid, after rounding to a whole mf.
    */
   factor: number;
@@ -81,12 +80,14 @@ export interface EqualConditionResult {
  * frequency, or switching loss), its ratio mf to the fundamental kept within 1 to
  * {@link MAX_DESIGN_FREQUENCY_RATIO}. A sine-triangle, three-phase carrier or space-vector design
  * without a filter or grid keeps the scaled carrier as asked: its report spans a ratio p/q over q
- * fundamental periods (`designCarrierSpan`), so mf is set to the fraction nearest the scaled
- * ratio (continued fractions, `bestRationalApproximation`) with the largest q ≤ 64 whose span the
- * report can afford (`designSpanMaxOrder`'s bound, p·q ≤ 4·10⁵; q = 1 always can), so the
- * carrier differs from the one asked for by less than 1/N of an mf step, N the largest q allowed
- * (the fractions of denominator ≤ N either side of a ratio are 1/(b·d) apart with b + d > N;
- * Farey sequences, a fact of number theory), under 0.03 of a step at mf 150. A multilevel
+ * fundamental periods (`designCarrierSpan`), so mf is set to the fraction with the fewest
+ * periods q that lies within {@link SCALED_CARRIER_TOLERANCE} (0.1 %) of the scaled ratio
+ * (continued fractions, `bestRationalApproximation`; the q ≤ 64 nearest where none does, below
+ * mf 16). Fractions of denominator ≤ N leave no gap wider than 1/N (Farey sequences, a fact of
+ * number theory), so q ≤ min(64, 1000/mf + 1) and the span's p·q stays below about 7·10⁴, far
+ * inside the report's cost bound (`designSpanMaxOrder`, p·q ≤ 4·10⁵) and cheap to report; the
+ * conditions themselves hold only to a few per cent (the clamps' partial periods, the ripple's
+ * effect on the edge currents). A multilevel
  * design, or one with a filter or grid, whose report needs a whole mf, is rounded to one, so its
  * `factor` may differ from `wantedFactor` by up to half an mf step.
  *
@@ -191,7 +192,7 @@ export function equalConditions(
           wantedFactor,
         };
       const carrierFrequency = spans
-        ? affordableSpanRatio(design, scaled) * design.fundamentalFrequency
+        ? spanRatioNear(scaled) * design.fundamentalFrequency
         : scaled * design.fundamentalFrequency;
       return {
         design: { ...design, carrierFrequency },
@@ -205,19 +206,21 @@ export function equalConditions(
 }
 
 /**
- * The fraction p/q nearest to `ratio` with the largest q ≤ 64 whose span the design report can
- * afford (`designSpanMaxOrder` does not refuse it): continued fractions' best approximation,
- * tried with fewer periods until the span's p·q fits. q = 1 (a whole mf ≤ 1000) always fits.
+ * Relative distance from the scaled frequency ratio within which equalConditions takes a fraction
+ * p/q with fewer periods q: 0.1 %, a tenth of the 1–3 % to which the conditions hold in the model
+ * (common practice for a setting nobody can tell apart on the bench; no single source).
  */
-function affordableSpanRatio(design: InverterDesign, ratio: number): number {
-  for (let periods = MAX_DESIGN_FUNDAMENTAL_PERIODS; periods > 1; periods--) {
+export const SCALED_CARRIER_TOLERANCE = 1e-3;
+
+/**
+ * The fraction p/q with the fewest periods q ≤ 64 within SCALED_CARRIER_TOLERANCE of `ratio`
+ * (best approximations by continued fractions for q = 1, 2, …), else the nearest with q ≤ 64.
+ */
+function spanRatioNear(ratio: number): number {
+  for (let periods = 1; periods < MAX_DESIGN_FUNDAMENTAL_PERIODS; periods++) {
     const { p, q } = bestRationalApproximation(ratio, periods);
-    try {
-      designSpanMaxOrder(design, { p, q, error: 0 });
-      return p / q;
-    } catch (error) {
-      if (!(error instanceof ParameterRangeError)) throw error;
-    }
+    if (Math.abs(p / q - ratio) <= SCALED_CARRIER_TOLERANCE * ratio) return p / q;
   }
-  return Math.round(ratio);
+  const { p, q } = bestRationalApproximation(ratio, MAX_DESIGN_FUNDAMENTAL_PERIODS);
+  return p / q;
 }

@@ -3,6 +3,7 @@ import { analyseDesign, EXAMPLE_IGBT, type InverterDesign } from '../../index.js
 import { assertInDelta } from '../../testing/assertInDelta.js';
 import { rangeErrorField } from '../../testing/rangeErrorField.js';
 import { designCarrierSpan } from '../designCarrierSpan.js';
+import { designSpanMaxOrder } from '../designSpanMaxOrder.js';
 import { equalConditions } from '../equalConditions.js';
 
 const f1 = 50;
@@ -47,19 +48,11 @@ describe('equalConditions', () => {
     expect(a?.factor).toBe(1);
     expect(a?.carrierFrequency).toBe(99 * f1);
     assertInDelta(b?.wantedFactor ?? 0, 1.5, 0.03, 'DPWM1 factor');
-    // Kept as scaled: mf is the nearest fraction p/q the span's cost allows (q ≤ 64, p·q ≤ 4e5),
-    // less than 1/q of an mf step from the scaled ratio (neighbouring fractions of denominator
-    // ≤ N are 1/(b·d) apart with b + d > N: Farey sequences, a fact of number theory), where
-    // rounding to a whole mf could move it half a step.
+    // Kept as scaled: mf is the fraction p/q with the fewest periods within 0.1 % of the scaled
+    // ratio (where rounding to a whole mf could move it 0.34 % at mf ≈ 146), exactly p/q.
     const span = designCarrierSpan(b?.design as InverterDesign);
     expect(span?.q).toBeGreaterThan(1);
-    assertInDelta(
-      99 * (b?.factor ?? 0),
-      99 * (b?.wantedFactor ?? 0),
-      1 / (span?.q ?? 1),
-      'kept as scaled',
-    );
-    expect((span?.p ?? 0) * (span?.q ?? 0)).toBeLessThanOrEqual(400_000);
+    assertInDelta(b?.factor ?? 0, b?.wantedFactor ?? 0, 1e-3 * (b?.wantedFactor ?? 0), 'kept');
     assertInDelta(span?.error ?? NaN, 0, 1e-9, 'the carrier is exactly p/q');
     expect(b?.design.carrierFrequency).toBe(b?.carrierFrequency);
     // A continuous sequence switches every carrier period: unchanged.
@@ -87,6 +80,43 @@ describe('equalConditions', () => {
     assertInDelta(adjusted?.wantedFactor ?? 0, 2, 0.05, 'factor');
     const loss = analyseDesign(adjusted?.design as InverterDesign).losses?.switching ?? 0;
     assertInDelta(loss, result.target ?? 0, 0.02 * (result.target ?? 0), 'switching loss');
+  });
+
+  it('a kept carrier is within 0.1 % of the scaled one with a span cheap to report, over mf 1 to 1000', () => {
+    // Candidates need only the figure the condition reads: the reference's device frequency over
+    // each candidate's sets the wanted factor. Fractions of denominator ≤ N leave no gap wider
+    // than 1/N (Farey sequences, a fact of number theory), so the fewest periods within 0.1 % are
+    // at most ⌈1000/mf⌉ (or 64) and p·q ≤ (1000 + mf)²/mf, below 7e4: inside the report's bound
+    // (designSpanMaxOrder, p·q ≤ 4e5), which must not refuse it.
+    const design = drive('none', 1);
+    const reference = {
+      design,
+      report: { switching: { legEdgesPerPeriod: 2, averageDeviceFrequency: 1000 }, losses: null },
+    };
+    for (let k = 0; k < 400; k++) {
+      const wanted = 1 + 998.9 * ((k * 0.6180339887) % 1);
+      const candidate = {
+        design,
+        report: {
+          switching: { legEdgesPerPeriod: 2, averageDeviceFrequency: 1000 / wanted },
+          losses: null,
+        },
+      };
+      const result = equalConditions([reference, candidate], {
+        condition: 'equal-device-frequency',
+      });
+      const kept = result.candidates[1];
+      const span = designCarrierSpan(kept?.design as InverterDesign) ?? {
+        p: Math.round(wanted),
+        q: 1,
+        error: 0,
+      };
+      const q64 = span.q === 64;
+      if (!q64) assertInDelta(kept?.factor ?? 0, wanted, 1e-3 * wanted, `mf ${wanted}`);
+      expect(span.q).toBeLessThanOrEqual(Math.min(64, Math.ceil(1000 / wanted)));
+      expect(span.p * span.q).toBeLessThan(70_000);
+      expect(() => designSpanMaxOrder(kept?.design as InverterDesign, span)).not.toThrow();
+    }
   });
 
   it('a design with a filter, whose report needs a whole mf, is still rounded to one', () => {
