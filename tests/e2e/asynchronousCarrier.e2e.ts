@@ -42,7 +42,7 @@ export const scenarios: Scenario[] = [
         hint.includes('mf = 7/3') && hint.includes('3 fundamental periods'),
         `the carrier field states p/q and the span (got "${hint}")`,
       );
-      await page.getByText('Bridge voltage over 3 fundamental periods').waitFor();
+      await page.getByText('Modulator and bridge voltage over 3 fundamental periods').waitFor();
       // With a filter the report needs a whole mf: the panel analyses the carrier as typed.
       await page.getByLabel('Include an LC output filter').check();
       const panel = page.getByRole('region', { name: 'Carrier as typed' });

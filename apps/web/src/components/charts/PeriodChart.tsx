@@ -22,6 +22,8 @@ export interface PeriodChartProps {
   unit: string;
   footer?: ReactNode;
   controls?: ReactNode;
+  /** q, the fundamental periods the traces span on [0, 2π] (a report's carrierSpan). @default 1 */
+  fundamentalPeriods?: number;
   width?: number;
 }
 
@@ -33,8 +35,10 @@ export function PeriodChart({
   unit,
   footer,
   controls,
+  fundamentalPeriods = 1,
   width = 760,
 }: PeriodChartProps) {
+  const spanned = fundamentalPeriods > 1;
   const height = 240;
   const margin = { top: 12, right: 14, bottom: 36, left: 56 };
   const x = scaleLinear()
@@ -63,7 +67,7 @@ export function PeriodChart({
         viewBox={`0 0 ${width} ${height}`}
         className="w-full text-ink"
         role="img"
-        aria-label={`${title}: ${traces.map((t) => t.name).join(', ')} over one period`}
+        aria-label={`${title}: ${traces.map((t) => t.name).join(', ')} over ${spanned ? `${fundamentalPeriods} fundamental periods` : 'one period'}`}
       >
         <AxisLeft
           scale={y}
@@ -90,7 +94,7 @@ export function PeriodChart({
         <AxisBottom
           scale={x}
           y={height - margin.bottom}
-          label="angle θ (rad)"
+          label={spanned ? `span angle θ/${fundamentalPeriods} (rad)` : 'angle θ (rad)'}
           tickValues={angleAxis(0, 2 * Math.PI).ticks}
           format={angleAxis(0, 2 * Math.PI).format}
         />

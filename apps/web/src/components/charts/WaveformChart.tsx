@@ -41,6 +41,11 @@ export interface WaveformChartProps {
   overlay?: { name: string; angles: readonly number[]; values: readonly number[] } | undefined;
   /** Controls shown before the zoom buttons (a choice of voltage). */
   controls?: ReactNode;
+  /**
+   * q, the fundamental periods the output spans on [0, 2π] (a report's carrierSpan: span angle
+   * θ/q). The modulator, one fundamental period, is then drawn over the first 2π/q. @default 1
+   */
+  fundamentalPeriods?: number;
   width?: number;
 }
 
@@ -65,8 +70,18 @@ export function WaveformChart({
   outputName,
   overlay,
   controls,
+  fundamentalPeriods = 1,
   width = 760,
 }: WaveformChartProps) {
+  const spanned = fundamentalPeriods > 1;
+  // Over a span the modulator's period is the first 2π/q of the axis (and of the CSV's angles).
+  const shownModulator = useMemo(
+    () =>
+      modulator && spanned
+        ? { ...modulator, angles: modulator.angles.map((a) => a / fundamentalPeriods) }
+        : modulator,
+    [modulator, spanned, fundamentalPeriods],
+  );
   const svgRef = useRef<SVGSVGElement>(null);
   const zoomRef = useRef<ZoomBehavior<SVGSVGElement, unknown> | null>(null);
   const [transform, setTransform] = useState<ZoomTransform>(zoomIdentity);
@@ -151,7 +166,7 @@ export function WaveformChart({
     <ChartFrame
       title={title}
       fileName={fileName}
-      csv={() => waveformChartCsv({ output, outputName, overlay, modulator })}
+      csv={() => waveformChartCsv({ output, outputName, overlay, modulator: shownModulator })}
       controls={
         <>
           {controls}
@@ -168,7 +183,9 @@ export function WaveformChart({
       footer={
         <p className="no-print mt-1 text-xs text-ink-soft">
           Scroll or pinch to zoom, drag to pan; window {formatRadians(lo)} to {formatRadians(hi)} of
-          the fundamental period.
+          {spanned
+            ? ` the span of ${fundamentalPeriods} fundamental periods (0 to 2π is all ${fundamentalPeriods}; span angle θ/${fundamentalPeriods})${modulator ? `, the modulator drawn over the first period, 0 to ${formatRadians(TAU / fundamentalPeriods)}` : ''}.`
+            : ' the fundamental period.'}
         </p>
       }
     >
@@ -178,36 +195,37 @@ export function WaveformChart({
         viewBox={`0 0 ${width} ${height}`}
         className="w-full cursor-grab touch-none select-none text-ink"
         role="img"
-        aria-label={`${title}: ${outputName}, ${output.edges.length} switching edges per period`}
+        aria-label={`${title}: ${outputName}, ${output.edges.length} switching edges per ${spanned ? `span of ${fundamentalPeriods} periods` : 'period'}`}
       >
         <defs>
           <clipPath id={clipId}>
             <rect x={margin.left} y={0} width={innerWidth} height={height} />
           </clipPath>
         </defs>
-        {modulator ? (
+        {shownModulator ? (
           <>
             <AxisLeft scale={topY} x={margin.left} width={innerWidth} label="per unit" ticks={4} />
             <g clipPath={`url(#${clipId})`} fill="none" strokeWidth={1.4}>
-              {modulator.carrier ? (
+              {shownModulator.carrier ? (
                 <path
-                  d={topLine(visible(modulator.angles, modulator.carrier)) ?? ''}
+                  d={topLine(visible(shownModulator.angles, shownModulator.carrier)) ?? ''}
                   stroke="var(--color-trace-carrier)"
                   strokeWidth={1}
                 />
               ) : null}
-              {(modulator.carriers ?? []).map((carrier, i) => (
+              {(shownModulator.carriers ?? []).map((carrier, i) => (
                 <path
                   key={i}
                   data-carrier={i}
-                  d={topLine(visible(modulator.angles, carrier)) ?? ''}
+                  d={topLine(visible(shownModulator.angles, carrier)) ?? ''}
                   stroke="var(--color-trace-carrier)"
                   strokeWidth={1}
                   opacity={0.8}
                 />
               ))}
               <path
-                d={topLine(visible(modulator.angles, modulator.reference)) ?? ''}
+                data-trace="reference"
+                d={topLine(visible(shownModulator.angles, shownModulator.reference)) ?? ''}
                 stroke="var(--color-trace-ref)"
                 strokeWidth={2}
               />
@@ -217,13 +235,18 @@ export function WaveformChart({
               <text x={14} fill="currentColor">
                 reference
               </text>
-              {modulator.carrier || modulator.carriers?.length ? (
+              {shownModulator.carrier || shownModulator.carriers?.length ? (
                 <>
                   <rect x={80} width={10} height={3} y={-4} fill="var(--color-trace-carrier)" />
                   <text x={94} fill="currentColor">
-                    {modulator.carriers?.length ? 'carriers' : 'carrier'}
+                    {shownModulator.carriers?.length ? 'carriers' : 'carrier'}
                   </text>
                 </>
+              ) : null}
+              {spanned ? (
+                <text x={150} fill="currentColor">
+                  first of {fundamentalPeriods} fundamental periods
+                </text>
               ) : null}
             </g>
           </>
@@ -253,7 +276,7 @@ export function WaveformChart({
         <AxisBottom
           scale={x}
           y={bottomTop + bottomHeight}
-          label="angle θ (rad)"
+          label={spanned ? `span angle θ/${fundamentalPeriods} (rad)` : 'angle θ (rad)'}
           tickValues={angleAxis(lo, hi).ticks}
           format={angleAxis(lo, hi).format}
         />

@@ -18,6 +18,7 @@ export function CommonModePanel({ report, fileStem }: { report: StudyReport; fil
         output={commonMode.waveform}
         outputName={commonMode.name}
         fileName={`${fileStem}-common-mode`}
+        {...(report.carrierSpan ? { fundamentalPeriods: report.carrierSpan.q } : {})}
       />
       <div className="rounded-md border border-rule bg-panel px-3 py-2">
         <table className="w-full text-xs" aria-label="Common-mode figures">

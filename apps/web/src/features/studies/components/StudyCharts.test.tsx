@@ -29,8 +29,25 @@ describe('StudyCharts', () => {
     expect(note).toHaveTextContent(`${formatNumber(1000, 9)} Hz (0 Hz from the one entered)`);
     expect(note).toHaveTextContent('repeats after 37 fundamental periods (1000 carrier cycles)');
     expect(note).toHaveTextContent(`step by ${formatNumber(1, 6)} Hz`);
-    expect(screen.getByText('Bridge voltage over 37 fundamental periods')).toBeInTheDocument();
+    expect(
+      screen.getByText('Modulator and bridge voltage over 37 fundamental periods'),
+    ).toBeInTheDocument();
     expect(screen.getByText('Currents of phase a over 37 fundamental periods')).toBeInTheDocument();
+    // The footers and axes name the span, not one fundamental period.
+    expect(
+      screen.getAllByText(/of the span of 37 fundamental periods \(0 to 2π is all 37/).length,
+    ).toBeGreaterThan(0);
+    expect(screen.getAllByText('span angle θ/37 (rad)').length).toBeGreaterThanOrEqual(2);
+    // The modulator (the report's first fundamental period) is drawn over the first 2π/37 of the
+    // axis: 56 px margin + 690 px plot width / 37.
+    const reference = document.querySelector('[data-chart="waveform"] [data-trace="reference"]');
+    const xs = [...(reference?.getAttribute('d') ?? '').matchAll(/[ML]([\d.]+),/g)].map((m) =>
+      Number(m[1]),
+    );
+    expect(xs.length).toBeGreaterThan(100);
+    // d3 writes path coordinates to 3 decimals.
+    expect(Math.min(...xs)).toBeCloseTo(56, 2);
+    expect(Math.max(...xs)).toBeCloseTo(56 + 690 / 37, 2);
     // A whole ratio says nothing of a span.
     const whole = analyseDesign({ ...threePhase, filter: null }, { maxOrder: 50, points: 256 });
     expect(whole.carrierSpan).toBeUndefined();

@@ -79,18 +79,13 @@ function VoltageChart({ report, fileStem }: { report: StudyReport; fileStem: str
           values: report.output.series.values,
         }
       : undefined;
-  // Over a span the voltages cover q periods and the modulator one: the voltage is drawn alone.
+  // Over a span the voltages cover q periods and the modulator the first: drawn over its 2π/q.
   const span = report.carrierSpan;
   return (
     <WaveformChart
-      title={
-        span
-          ? `Bridge voltage over ${span.q} fundamental periods`
-          : report.modulator
-            ? 'Modulator and bridge voltage'
-            : 'Bridge voltage'
-      }
-      modulator={span ? undefined : (report.modulator ?? undefined)}
+      title={`${report.modulator ? 'Modulator and bridge voltage' : 'Bridge voltage'}${span ? ` over ${span.q} fundamental periods` : ''}`}
+      modulator={report.modulator ?? undefined}
+      {...(span ? { fundamentalPeriods: span.q } : {})}
       output={voltage.waveform}
       outputName={voltage.name}
       overlay={overlay}
@@ -184,6 +179,7 @@ function CurrentsChart({ report, fileStem }: { report: StudyReport; fileStem: st
     <PeriodChart
       title={`${report.phaseCount === 3 ? `Currents of phase ${phase.phase}` : 'Currents'}${report.carrierSpan ? ` over ${report.carrierSpan.q} fundamental periods` : ''}`}
       fileName={`${fileStem}-currents`}
+      {...(report.carrierSpan ? { fundamentalPeriods: report.carrierSpan.q } : {})}
       unit="amperes"
       traces={currentTraces(phase)}
       controls={
