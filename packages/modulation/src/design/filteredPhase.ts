@@ -10,6 +10,7 @@ import { waveformMeanSquare } from '../waveform/waveformMeanSquare.js';
 import type {
   CurrentFigures,
   DesignReport,
+  PeriodSeries,
   PhaseCurrents,
   VoltageFigures,
 } from './DesignReport.js';
@@ -89,12 +90,13 @@ export function filteredPhase(
   // The currents are summed to the current order (the output spectrum to spectrumOrder).
   const held = Math.min(spectrumOrder, currentOrder) + 1;
 
-  const { size, sine } = synthesiser;
+  const { size } = synthesiser;
   const figures = (
     name: string,
-    samples: Float64Array,
     phasors: HarmonicPhasors,
     tailMeanSquare: number,
+    extremes: SampleExtremes,
+    series: PeriodSeries,
   ): CurrentFigures => {
     const { re, im } = phasors;
     let meanSquare = tailMeanSquare + (re[0] as number) * (re[0] as number);
@@ -105,30 +107,17 @@ export function filteredPhase(
     }
     const firstRe = held > 1 ? (re[1] as number) : 0;
     const firstIm = held > 1 ? (im[1] as number) : 0;
-    const quarter = size / 4;
-    let peak = 0;
-    let low = Infinity;
-    let high = -Infinity;
-    for (let j = 0, k = quarter; j < size; j++, k = k + 1 === size ? 0 : k + 1) {
-      const value = samples[j] as number;
-      // cos(2πj/S) = sin(2π(j + S/4)/S): the sine table read a quarter period on.
-      const ripple = value - (firstRe * (sine[j] as number) + firstIm * (sine[k] as number));
-      const magnitude = Math.abs(value);
-      if (magnitude > peak) peak = magnitude;
-      if (ripple < low) low = ripple;
-      if (ripple > high) high = ripple;
-    }
     const fundamentalCurrent = Math.hypot(firstRe, firstIm);
     return {
       name: `${name}${suffix}`,
       rms: Math.sqrt(meanSquare),
-      peak,
+      peak: extremes.peak,
       fundamental: fundamentalCurrent,
       fundamentalPhase: Math.atan2(firstIm, firstRe),
       rippleRms: Math.sqrt(Math.max(0, meanSquare - (fundamentalCurrent * fundamentalCurrent) / 2)),
       ...currentDistortion(Math.sqrt(meanSquare), fundamentalCurrent),
-      ripplePeakToPeak: high - low,
-      series: periodSeries(samples, points),
+      ripplePeakToPeak: extremes.rippleHigh - extremes.rippleLow,
+      series,
     };
   };
 
@@ -146,18 +135,25 @@ export function filteredPhase(
     loadR === null ? null : solved.loadCurrent,
     held,
   );
-  if (tail !== null)
-    for (let j = 0; j < size; j++)
-      inverterSamples[j] = (inverterSamples[j] as number) + (tail.samples[j] as number);
-  let capacitorSamples = inverterSamples;
-  if (loadSamples !== null) {
-    capacitorSamples = new Float64Array(size);
-    for (let j = 0; j < size; j++)
-      capacitorSamples[j] = (inverterSamples[j] as number) - (loadSamples[j] as number);
-  }
+  const extremes = currentExtremes(inverterSamples, loadSamples, {
+    tail: tail?.samples ?? null,
+    sine: synthesiser.sine,
+    inverter: solved.inverterCurrent,
+    capacitor: solved.capacitorCurrent,
+    load: solved.loadCurrent,
+    held,
+  });
   const tailMeanSquare = tail?.meanSquare ?? 0;
   const loadCurrent =
-    loadSamples === null ? null : figures('load current', loadSamples, solved.loadCurrent, 0);
+    loadSamples === null
+      ? null
+      : figures(
+          'load current',
+          solved.loadCurrent,
+          0,
+          extremes.load,
+          periodSeries(loadSamples, points),
+        );
   return {
     inverterSamples,
     output:
@@ -174,15 +170,17 @@ export function filteredPhase(
       phase,
       inverter: figures(
         'inverter (switch) current',
-        inverterSamples,
         solved.inverterCurrent,
         tailMeanSquare,
+        extremes.inverter,
+        periodSeries(inverterSamples, points),
       ),
       capacitor: figures(
         'capacitor current',
-        capacitorSamples,
         solved.capacitorCurrent,
         tailMeanSquare,
+        extremes.capacitor,
+        periodSeries(inverterSamples, points, loadSamples),
       ),
       load: loadCurrent,
     },
@@ -306,5 +304,88 @@ function switchingTail(
     added: { re, im },
     samples,
     meanSquare: Math.max(0, integral.variance - heldVariance) / (reactance * reactance),
+  };
+}
+
+/** Peak |i| and the lowest and highest ripple i − i₁ of one current on the grid, amperes. */
+interface SampleExtremes {
+  peak: number;
+  rippleLow: number;
+  rippleHigh: number;
+}
+
+/**
+ * The extremes of a filtered phase's three currents over the synthesiser's S angles 2πj/S, in
+ * one pass: the inverter current (its switching tail added into `inverter` in place, when there
+ * is one), the load current, and the capacitor current as their difference (Kirchhoff's current
+ * law; the inverter current itself without a load). Each current's ripple is i − i₁ with i₁ its
+ * fundamental X₁ = re₁ + j·im₁: i₁(θ) = re₁·sin θ + im₁·cos θ, the cosine read a quarter period
+ * on in the sine table. No fundamental (fewer than two orders held) leaves i as its ripple.
+ * @param inverter - the inverter current's synthesised samples, amperes (the tail is added here)
+ * @param load - the load current's samples, amperes, or null without a load
+ */
+function currentExtremes(
+  inverter: Float64Array,
+  load: Float64Array | null,
+  context: {
+    tail: Float64Array | null;
+    sine: Float64Array;
+    inverter: HarmonicPhasors;
+    capacitor: HarmonicPhasors;
+    load: HarmonicPhasors;
+    held: number;
+  },
+): { inverter: SampleExtremes; capacitor: SampleExtremes; load: SampleExtremes } {
+  const { tail, sine, held } = context;
+  const first = (phasors: HarmonicPhasors, part: 're' | 'im'): number =>
+    held > 1 ? (phasors[part][1] as number) : 0;
+  const iRe = first(context.inverter, 're');
+  const iIm = first(context.inverter, 'im');
+  const cRe = first(context.capacitor, 're');
+  const cIm = first(context.capacitor, 'im');
+  const lRe = first(context.load, 're');
+  const lIm = first(context.load, 'im');
+  const size = inverter.length;
+  const quarter = size / 4;
+  let iPeak = 0;
+  let iLow = Infinity;
+  let iHigh = -Infinity;
+  let cPeak = 0;
+  let cLow = Infinity;
+  let cHigh = -Infinity;
+  let lPeak = 0;
+  let lLow = Infinity;
+  let lHigh = -Infinity;
+  for (let j = 0, k = quarter; j < size; j++, k = k + 1 === size ? 0 : k + 1) {
+    const s = sine[j] as number;
+    // cos(2πj/S) = sin(2π(j + S/4)/S).
+    const c = sine[k] as number;
+    let i = inverter[j] as number;
+    if (tail !== null) {
+      i = i + (tail[j] as number);
+      inverter[j] = i;
+    }
+    let ripple = i - (iRe * s + iIm * c);
+    if (Math.abs(i) > iPeak) iPeak = Math.abs(i);
+    if (ripple < iLow) iLow = ripple;
+    if (ripple > iHigh) iHigh = ripple;
+    let capacitor = i;
+    if (load !== null) {
+      const l = load[j] as number;
+      capacitor = i - l;
+      ripple = l - (lRe * s + lIm * c);
+      if (Math.abs(l) > lPeak) lPeak = Math.abs(l);
+      if (ripple < lLow) lLow = ripple;
+      if (ripple > lHigh) lHigh = ripple;
+    }
+    ripple = capacitor - (cRe * s + cIm * c);
+    if (Math.abs(capacitor) > cPeak) cPeak = Math.abs(capacitor);
+    if (ripple < cLow) cLow = ripple;
+    if (ripple > cHigh) cHigh = ripple;
+  }
+  return {
+    inverter: { peak: iPeak, rippleLow: iLow, rippleHigh: iHigh },
+    capacitor: { peak: cPeak, rippleLow: cLow, rippleHigh: cHigh },
+    load: { peak: lPeak, rippleLow: lLow, rippleHigh: lHigh },
   };
 }
