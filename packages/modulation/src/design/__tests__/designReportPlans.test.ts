@@ -19,8 +19,14 @@ describe('designReportPlans', () => {
     const plans = designReportPlans();
     // Filtered at mf 21 and 45 (grids of 4096 and 8192 samples), unfiltered at mf 129 (its
     // DC link on a 16384-sample grid): the second pass at mf 21 finds its grid evicted and builds
-    // it again.
-    const designs = [design(21, true), design(45, true), design(129, false), design(21, true)];
+    // it again; the third reuses the second's grid and label table.
+    const designs = [
+      design(21, true),
+      design(45, true),
+      design(129, false),
+      design(21, true),
+      design(21, true),
+    ];
     for (const d of designs) {
       const options = { maxOrder: 200, points: 256 };
       // Same transforms, same operations: the same numbers, not merely close ones.
@@ -40,6 +46,23 @@ describe('designReportPlans', () => {
     expect(plans.transform(4096)).toBe(first);
     expect(plans.transform(8192).size).toBe(8192);
     expect(plans.transform(16384).size).toBe(16384);
+  });
+
+  it('keeps the label table of the last orders and carrier ratio asked for', () => {
+    const plans = designReportPlans();
+    const first = plans.labeller(200, 21);
+    expect(plans.labeller(200, 21)).toBe(first);
+    // Another ratio or another highest order is another table, and replaces the one kept.
+    const other = plans.labeller(200, 45);
+    expect(other).not.toBe(first);
+    expect(plans.labeller(300, 45)).not.toBe(other);
+    expect(plans.labeller(200, 21)).not.toBe(first);
+    // mf 21: order 23 is the first carrier group's sideband +2 (23 = 1·21 + 2).
+    const [, labelled] = plans.labeller(200, 21).harmonics([
+      { order: 0, amplitude: 0, phase: 0 },
+      { order: 23, amplitude: 1, phase: 0 },
+    ]);
+    expect(labelled).toMatchObject({ carrierGroup: 1, sideband: 2, label: 'mf+2' });
   });
 
   it("synthesises a sinusoid from its phasor on the plans' transform", () => {
