@@ -53,13 +53,21 @@ export function harmonicPhasors(waveform: Waveform, maxOrder: number): HarmonicP
   // Half-wave symmetry about a level, v(θ + π) = 2c − v(θ): the second half's jumps repeat the
   // first half's negated, which doubles the odd orders and cancels the even ones.
   const symmetric = hasHalfWaveSymmetry(waveform);
-  const jumps: { theta: number; jump: number }[] = [];
-  for (let i = 0; i < (symmetric ? edgeCount / 2 : edgeCount); i++) {
+  // The edges with a jump, as two arrays padded to a whole number of groups of four with
+  // zero jumps (which add nothing).
+  const kept = symmetric ? edgeCount / 2 : edgeCount;
+  const thetas = new Float64Array(kept + 3);
+  const jumps = new Float64Array(kept + 3);
+  let jumpCount = 0;
+  for (let i = 0; i < kept; i++) {
     const jump = (levels[i] as number) - (levels[(i + edgeCount - 1) % edgeCount] as number);
-    if (jump !== 0) jumps.push({ theta: edges[i] as number, jump: symmetric ? 2 * jump : jump });
+    if (jump === 0) continue;
+    thetas[jumpCount] = edges[i] as number;
+    jumps[jumpCount] = symmetric ? 2 * jump : jump;
+    jumpCount++;
   }
-  for (let i = 0; i < jumps.length; i += 4) {
-    accumulateFourEdges(sinSum, cosSum, jumps.slice(i, i + 4), maxOrder, symmetric ? 2 : 1);
+  for (let i = 0; i < jumpCount; i += 4) {
+    accumulateFourEdges(sinSum, cosSum, { thetas, jumps, first: i }, maxOrder, symmetric ? 2 : 1);
   }
   // v = a_n cos nθ + b_n sin nθ with a_n = −ΣΔ sin/(πn), b_n = ΣΔ cos/(πn): the sums become
   // the phasors in place.
@@ -101,42 +109,46 @@ function hasHalfWaveSymmetry({ edges, levels }: Waveform): boolean {
 }
 
 /**
- * Adds Σ jump·sin(nθ) and Σ jump·cos(nθ) over up to four edges for the orders n = 1,
- * 1 + orderStep, … ≤ maxOrder into the sums. Each edge's e^{jnθ} is rotated one step at a time
- * and re-evaluated exactly at the start of every block; four edges run side by side so their
- * recurrences overlap in the pipeline.
+ * Adds Σ jump·sin(nθ) and Σ jump·cos(nθ) over the four edges first..first + 3 of `edges` for the
+ * orders n = 1, 1 + orderStep, … ≤ maxOrder into the sums. Each edge's e^{jnθ} is rotated one step
+ * at a time and re-evaluated exactly at the start of every block; four edges run side by side so
+ * their recurrences overlap in the pipeline (eight spill out of the registers: measured slower).
+ * The edges are read from typed arrays into locals, so the loop holds doubles only.
  */
 function accumulateFourEdges(
   sinSum: Float64Array,
   cosSum: Float64Array,
-  group: readonly { theta: number; jump: number }[],
+  edges: { thetas: Float64Array; jumps: Float64Array; first: number },
   maxOrder: number,
   orderStep: number,
 ): void {
-  const edge = (k: number): { theta: number; jump: number } => group[k] ?? { theta: 0, jump: 0 };
-  const [e0, e1, e2, e3] = [edge(0), edge(1), edge(2), edge(3)];
-  const [k0, k1, k2, k3] = [e0, e1, e2, e3].map((e) => Math.cos(orderStep * e.theta)) as [
-    number,
-    number,
-    number,
-    number,
-  ];
-  const [q0, q1, q2, q3] = [e0, e1, e2, e3].map((e) => Math.sin(orderStep * e.theta)) as [
-    number,
-    number,
-    number,
-    number,
-  ];
+  const { thetas, jumps, first } = edges;
+  const t0 = thetas[first] as number;
+  const t1 = thetas[first + 1] as number;
+  const t2 = thetas[first + 2] as number;
+  const t3 = thetas[first + 3] as number;
+  const j0 = jumps[first] as number;
+  const j1 = jumps[first + 1] as number;
+  const j2 = jumps[first + 2] as number;
+  const j3 = jumps[first + 3] as number;
+  const k0 = Math.cos(orderStep * t0);
+  const k1 = Math.cos(orderStep * t1);
+  const k2 = Math.cos(orderStep * t2);
+  const k3 = Math.cos(orderStep * t3);
+  const q0 = Math.sin(orderStep * t0);
+  const q1 = Math.sin(orderStep * t1);
+  const q2 = Math.sin(orderStep * t2);
+  const q3 = Math.sin(orderStep * t3);
   const blockSpan = RESEED_INTERVAL * orderStep;
   for (let blockStart = 1; blockStart <= maxOrder; blockStart += blockSpan) {
-    let c0 = e0.jump * Math.cos(blockStart * e0.theta);
-    let s0 = e0.jump * Math.sin(blockStart * e0.theta);
-    let c1 = e1.jump * Math.cos(blockStart * e1.theta);
-    let s1 = e1.jump * Math.sin(blockStart * e1.theta);
-    let c2 = e2.jump * Math.cos(blockStart * e2.theta);
-    let s2 = e2.jump * Math.sin(blockStart * e2.theta);
-    let c3 = e3.jump * Math.cos(blockStart * e3.theta);
-    let s3 = e3.jump * Math.sin(blockStart * e3.theta);
+    let c0 = j0 * Math.cos(blockStart * t0);
+    let s0 = j0 * Math.sin(blockStart * t0);
+    let c1 = j1 * Math.cos(blockStart * t1);
+    let s1 = j1 * Math.sin(blockStart * t1);
+    let c2 = j2 * Math.cos(blockStart * t2);
+    let s2 = j2 * Math.sin(blockStart * t2);
+    let c3 = j3 * Math.cos(blockStart * t3);
+    let s3 = j3 * Math.sin(blockStart * t3);
     const blockEnd = Math.min(maxOrder, blockStart + blockSpan - 1);
     for (let n = blockStart; n <= blockEnd; n += orderStep) {
       sinSum[n] = (sinSum[n] as number) + (s0 + s1 + (s2 + s3));
