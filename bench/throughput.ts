@@ -19,8 +19,8 @@
  * requests/s and p99 50 ms, service 844 and 115 ms (57 %, 2.3×), CPU per answer 0.71 and 1.29 ms.
  * On a loaded machine CPU time per answer moves by ±30 % between loads; instructions per answer
  * counted by valgrind (each server alone, 1000 answers after 300) do not: bare 5.7–5.8 M, the
- * service 9.5–9.9 M before the fourth pass (compute fast path, one-shot token hash) and 9.4–9.7 M
- * after (57–61 %).
+ * service 9.5–9.9 M before the fourth pass and 9.4–9.7 M with a compute fast path and the one-shot
+ * token hash (57–61 %); the fast path (2–5 %) was taken out again (docs/robustness.md).
  */
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';

@@ -8,7 +8,6 @@ import { openDatabase } from './db/database.js';
 import { migrate } from './db/migrate.js';
 import { cacheOpenApiMetadata } from './http/cacheOpenApiMetadata.js';
 import { cacheRouteRegexps } from './http/cacheRouteRegexps.js';
-import { computeFastPath } from './http/computeFastPath.js';
 import { HttpError } from './http/errors.js';
 import { refuseMalformedPath } from './http/malformedPath.js';
 import { securityHeaders } from './http/securityHeaders.js';
@@ -49,9 +48,6 @@ function documentForValidator(document: OpenApiDocument): OpenApiDocument {
   return copy;
 }
 
-/** Largest accepted JSON request body, in bytes (1 MiB; express.json's `'1mb'`). */
-const JSON_LIMIT = 1024 * 1024;
-
 /** Largest accepted capture upload, in bytes. */
 export const MAX_UPLOAD_BYTES = 5 * 1024 * 1024;
 
@@ -87,37 +83,11 @@ export async function createApp(overrides: ConfigOverrides = {}): Promise<Pulsew
   app.set('etag', false);
   // Which proxies may name the client address (X-Forwarded-For); off unless TRUST_PROXY says so.
   app.set('trust proxy', config.trustProxy);
-  cacheRouteRegexps();
-  const validator = cacheOpenApiMetadata(
-    OpenApiValidator.middleware({
-      apiSpec: documentForValidator(document) as never,
-      validateRequests: {
-        allErrors: true,
-        discriminator: true,
-        allowUnknownQueryParameters: false,
-      },
-      validateResponses: config.validateResponses,
-      validateSecurity: { handlers: { bearerAuth: createAuthorizer(services.auth) } },
-      ignorePaths: (path: string) =>
-        !path.startsWith('/api/') || path.startsWith('/api/docs') || path === '/api/openapi.json',
-      fileUploader: {
-        storage: multer.memoryStorage(),
-        limits: { fileSize: MAX_UPLOAD_BYTES, files: 1, fields: 10 },
-      },
-    }),
-  );
   // helmet's headers on every answer, taken from helmet once at start (http/securityHeaders.ts).
-  const headers = securityHeaders();
-  const compute = computeRoutes(services);
-  // A compute request with a plain JSON body takes the same steps below without the layers in
-  // between (http/computeFastPath.ts); every other request, and the first to each path, goes on.
-  app.use(
-    computeFastPath({ headers, validator, router: compute, document, bodyLimit: JSON_LIMIT }),
-  );
-  app.use(headers);
+  app.use(securityHeaders());
   app.use(refuseMalformedPath);
   // No CORS headers: the dashboard is served from this origin, and scripts are not browsers.
-  app.use('/api', express.json({ limit: JSON_LIMIT }));
+  app.use('/api', express.json({ limit: '1mb' }));
 
   app.get('/api/openapi.json', (_req, res) => {
     res.json(document);
@@ -128,13 +98,33 @@ export async function createApp(overrides: ConfigOverrides = {}): Promise<Pulsew
     swaggerUi.setup(document, { customSiteTitle: 'Pulsewright API' }),
   );
 
-  app.use(validator);
+  cacheRouteRegexps();
+  app.use(
+    cacheOpenApiMetadata(
+      OpenApiValidator.middleware({
+        apiSpec: documentForValidator(document) as never,
+        validateRequests: {
+          allErrors: true,
+          discriminator: true,
+          allowUnknownQueryParameters: false,
+        },
+        validateResponses: config.validateResponses,
+        validateSecurity: { handlers: { bearerAuth: createAuthorizer(services.auth) } },
+        ignorePaths: (path: string) =>
+          !path.startsWith('/api/') || path.startsWith('/api/docs') || path === '/api/openapi.json',
+        fileUploader: {
+          storage: multer.memoryStorage(),
+          limits: { fileSize: MAX_UPLOAD_BYTES, files: 1, fields: 10 },
+        },
+      }),
+    ),
+  );
   const version = document.info.version;
   const rateLimits = rateLimitStores(config.databaseUrl, sequelize);
   // The compute routes first: they take most of the load, and Express tries each route in turn
   // (about 35 fewer path matches for a compute request). No path of one router is also matched,
   // for the same method, by a route of another, so the order changes nothing else.
-  app.use(compute);
+  app.use(computeRoutes(services));
   app.use(accountRoutes(services, { ...config, version, rateLimits }));
   app.use(studyRoutes(services));
   app.use(patternRoutes(services));

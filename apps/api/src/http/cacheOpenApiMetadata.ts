@@ -10,12 +10,6 @@ interface OpenApiMetadata {
 
 type WithMetadata = Request & { openapi?: OpenApiMetadata };
 
-/** The cached step; it also says whether a method and path would be answered from the cache. */
-export interface CachedMetadataStep extends RequestHandler {
-  /** Whether `path` (no query string) is kept for `method`: the step has matched it before. */
-  knows(method: string, path: string): boolean;
-}
-
 /** The name express-openapi-validator 5 gives its metadata step in the list it returns. */
 const METADATA_STEP = 'metadataMiddleware';
 
@@ -68,8 +62,5 @@ export function cacheOpenApiMetadata<T extends RequestHandler>(steps: T[]): T[] 
       next(error);
     });
   };
-  const withLookup: CachedMetadataStep = Object.assign(cached, {
-    knows: (method: string, path: string) => known.get(method)?.has(path) ?? false,
-  });
-  return steps.map((other, i) => (i === index ? (withLookup as unknown as T) : other));
+  return steps.map((other, i) => (i === index ? (cached as unknown as T) : other));
 }
