@@ -129,9 +129,14 @@ export const scenarios: Scenario[] = [
       context.state.studyId = page.url().split('/').pop();
       await page.getByText('Revision 1', { exact: false }).first().waitFor();
       await page.getByText(/Saved revision on the server: THD/).waitFor();
-      const labels = await page
-        .locator('svg[data-chart="spectrum"] [data-labels] text')
-        .allTextContents();
+      // The saved study's page draws its chart again when the server's report arrives: wait for
+      // the labels of that drawing rather than read them in between (CI once read none there).
+      const labelTexts = page.locator('svg[data-chart="spectrum"] [data-labels] text');
+      await labelTexts
+        .first()
+        .waitFor({ timeout: 10_000 })
+        .catch(() => undefined);
+      const labels = await labelTexts.allTextContents();
       assert(
         labels.some((l) => l.startsWith('2mf')),
         `unipolar spectrum labels the 2mf group (labels: ${labels.join(' ')})`,
