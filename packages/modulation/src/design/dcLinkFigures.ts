@@ -3,7 +3,7 @@ import type { Harmonic } from '../spectrum/Harmonic.js';
 import type { HarmonicPhasors } from '../spectrum/harmonicPhasors.js';
 import { harmonicsOfPhasors } from '../spectrum/harmonicsOfPhasors.js';
 import type { Waveform } from '../waveform/Waveform.js';
-import { TAU } from '../math.js';
+import { firstGridSampleFrom } from '../waveform/firstGridSampleFrom.js';
 import type { DcLinkFigures } from './DesignReport.js';
 import { periodSeries } from './periodSeries.js';
 import { sampledPhasors } from './sampledPhasors.js';
@@ -38,16 +38,16 @@ export function dcLinkFigures(
   for (let k = 0; k < switching.length; k++) {
     const { edges, levels } = switching[k] as Waveform;
     const phaseCurrent = inverterSamples[k] as Float64Array;
-    // One walk along the edges (the grid is in order): before the first edge the period's last level.
-    let segment = -1;
-    let share = (levels[levels.length - 1] as number) / vdc;
-    for (let j = 0; j < size; j++) {
-      const theta = (TAU * j) / size;
-      while (segment + 1 < edges.length && (edges[segment + 1] as number) <= theta) {
-        segment++;
-        share = (levels[segment] as number) / vdc;
-      }
-      current[j] = (current[j] as number) + share * (phaseCurrent[j] as number);
+    // One walk along the segments (the grid is in order): before the first edge the period's
+    // last level; each segment's samples from the first at or after its edge.
+    let start = 0;
+    for (let segment = -1; segment < edges.length; segment++) {
+      const end =
+        segment + 1 < edges.length ? firstGridSampleFrom(edges[segment + 1] as number, size) : size;
+      const share = (levels[segment < 0 ? levels.length - 1 : segment] as number) / vdc;
+      for (let j = start; j < end; j++)
+        current[j] = (current[j] as number) + share * (phaseCurrent[j] as number);
+      start = Math.max(start, end);
     }
   }
   let sum = 0;

@@ -1,4 +1,5 @@
 import { TAU } from '../math.js';
+import { firstGridSampleFrom } from './firstGridSampleFrom.js';
 import type { Waveform } from './Waveform.js';
 import { waveformMean } from './waveformMean.js';
 
@@ -49,15 +50,24 @@ export function runningIntegral(waveform: Waveform): RunningIntegral {
     variance: sumOfSquares / TAU - meanFlux * meanFlux,
     at(count: number): Float64Array {
       const values = new Float64Array(count);
-      let segment = -1; // −1: the wrapped piece on [0, edges[0])
-      for (let j = 0; j < count; j++) {
-        const theta = (TAU * j) / count;
-        while (segment + 1 < edges.length && (edges[segment + 1] as number) <= theta) segment++;
-        values[j] =
-          segment < 0
-            ? startValue + wrapLevel * theta
-            : (valueAtEdge[segment] as number) +
-              ((levels[segment] as number) - mean) * (theta - (edges[segment] as number));
+      // The wrapped piece on [0, edges[0]), then each segment's samples from the first at or
+      // after its edge: one walk along the segments.
+      let start = 0;
+      for (let segment = -1; segment < edges.length; segment++) {
+        const end =
+          segment + 1 < edges.length
+            ? firstGridSampleFrom(edges[segment + 1] as number, count)
+            : count;
+        if (segment < 0) {
+          for (let j = start; j < end; j++)
+            values[j] = startValue + wrapLevel * ((TAU * j) / count);
+        } else {
+          const value = valueAtEdge[segment] as number;
+          const slope = (levels[segment] as number) - mean;
+          const edge = edges[segment] as number;
+          for (let j = start; j < end; j++) values[j] = value + slope * ((TAU * j) / count - edge);
+        }
+        start = Math.max(start, end);
       }
       return values;
     },
