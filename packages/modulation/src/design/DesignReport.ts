@@ -1,6 +1,7 @@
 import type { LcFilterCharacteristics } from '../filter/lcFilter.js';
 import type { GridCurrentLimitCheck } from '../limits/checkGridCurrentLimits.js';
 import type { HarmonicLimitCheck } from '../limits/checkVoltageHarmonicLimits.js';
+import type { HarmonicGroup } from '../limits/harmonicGroups.js';
 import type { LegLosses } from '../losses/legLossesFromSamples.js';
 import type { SemiconductorDevice } from '../losses/lossTypes.js';
 import type { MotorFigures } from '../load/MotorFigures.js';
@@ -285,6 +286,12 @@ export interface GridFigures {
   capacitor: { fundamentalCurrent: number; reactivePower: number } | null;
   /** The grid current against IEEE Std 519-2022 Table 2 and IEEE Std 1547-2018 Tables 26–27 (recalled from memory). */
   limits: { ieee519: GridCurrentLimitCheck; ieee1547: GridCurrentLimitCheck };
+  /**
+   * Only over a span (`carrierSpan`): the grid current's components at n/q grouped by whole
+   * harmonic order before the limits (`harmonicGroups`, IEC 61000-4-7 from memory), groups 1..50,
+   * each with the inter- and sub-harmonics assigned to it, and the rule in words.
+   */
+  harmonicGrouping?: { rule: string; groups: HarmonicGroup[] };
 }
 
 /** The losses of the four devices of one leg (upper and lower transistor and diode), W. */

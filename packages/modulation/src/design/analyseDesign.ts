@@ -1,6 +1,5 @@
 import { assertLcFilter } from '../filter/assertLcFilter.js';
-import { lcFilter } from '../filter/lcFilter.js';
-import { outputNetworkResponse, type OutputNetwork } from '../filter/outputNetworkResponse.js';
+import type { OutputNetwork } from '../filter/outputNetworkResponse.js';
 import { outputNetworkTransfer } from '../filter/outputNetworkTransfer.js';
 import { checkVoltageHarmonicLimits } from '../limits/checkVoltageHarmonicLimits.js';
 import { GRID_CURRENT_LIMIT_CAUTION } from '../limits/gridCurrentLimits.js';
@@ -8,7 +7,7 @@ import { HARMONIC_LIMIT_CAUTION } from '../limits/voltageHarmonicLimits.js';
 import { motorLoadFigures } from '../load/motorLoadFigures.js';
 import type { RlLoadOptions } from '../load/RlLoad.js';
 import { TAU } from '../math.js';
-import { complexAbs, phasorOf, type Complex } from '../numeric/complex.js';
+import { phasorOf, type Complex } from '../numeric/complex.js';
 import { reducedCommonModeRange } from '../three-phase/reducedCommonModeRange.js';
 import { assertNumberInRange } from '../validation/assertions.js';
 import { withFieldPrefix } from '../validation/withFieldPrefix.js';
@@ -21,6 +20,7 @@ import { designModulation } from './designModulation.js';
 import { commonModeFigures } from './commonModeFigures.js';
 import { dcLinkFigures } from './dcLinkFigures.js';
 import { designLosses } from './designLosses.js';
+import { filterFigures } from './filterFigures.js';
 import { gridFigures } from './gridFigures.js';
 import { gridLoad } from './gridLoad.js';
 import type {
@@ -125,7 +125,7 @@ const phaseSuffix = (phaseCount: number, phase: PhaseCurrents['phase']): string 
  *   current spectra, resonance, damping loss, the current limits of IEEE Std 519 and 1547).
  * - A carrier that is no whole multiple of the fundamental (sine-triangle, three-phase carrier,
  *   space vector): every figure over the span of q periods of its nearest ratio p/q, stated in
- *   `carrierSpan` (`analyseDesignSpan`; no filter or grid there).
+ *   `carrierSpan` (`analyseDesignSpan`, with a filter or grid too, bounded by `designSpanMaxOrder`).
  *
  * @throws ParameterRangeError / ParameterTypeError naming the field by its path in the design
  *   (`vdc`, `carrierFrequency`, `modulation.ma`, `load.r`, `filter.c`, …) or the option
@@ -450,19 +450,4 @@ function rlLoadOf(design: InverterDesign, phaseIndex: number): RlLoadOptions {
     ? { amplitude: load.emf.amplitude, phase: load.emf.phase - (phaseIndex * TAU) / 3 }
     : undefined;
   return { r: load.r, l: load.l, frequency: design.fundamentalFrequency, ...(emf ? { emf } : {}) };
-}
-
-function filterFigures(
-  filter: NonNullable<InverterDesign['filter']>,
-  network: OutputNetwork,
-  frequency: number,
-  frequencyRatio: number | null,
-): NonNullable<DesignReport['filter']> {
-  const gainAt = (order: number): number =>
-    complexAbs(outputNetworkResponse(network, TAU * frequency * order, { re: 1, im: 0 }).output);
-  return {
-    characteristics: withFieldPrefix('filter.', () => lcFilter(filter)),
-    gainAtFundamental: gainAt(1),
-    gainAtCarrier: frequencyRatio === null ? null : gainAt(frequencyRatio),
-  };
 }

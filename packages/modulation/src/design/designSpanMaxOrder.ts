@@ -3,36 +3,45 @@ import { ParameterRangeError } from '../validation/errors.js';
 import { MAX_ASYNCHRONOUS_COST } from './asynchronousDesignSpectra.js';
 import type { RationalRatio } from './designRationalRatio.js';
 import type { InverterDesign } from './InverterDesign.js';
+import { spanFilterOrder } from './spanFilterOrder.js';
 
 /** The fewest orders a report's spectra hold (the harmonic limit table's 50). */
 const MIN_REPORT_ORDER = 50;
+/**
+ * Most span components a filtered span solves and sums per phase (q·order), as the one-period
+ * report's MAX_ANALYSIS_ORDER: the currents' synthesis grid then stays within 2^19 samples.
+ */
+const MAX_FILTERED_SPAN_ORDERS = 20_000;
 
 /**
  * The highest spectrum order (in fundamentals) the design report of a design at a non-integer
  * ratio p/q (`designCarrierSpan`) may ask for, checked before any work: its span's spectra hold
  * q·maxOrder components, each summed over about 4p edges, so p·q·maxOrder is kept to
  * MAX_ASYNCHRONOUS_COST (as `asynchronousDesignSpectra`), q·maxOrder to what `harmonics` sums,
- * and maxOrder to 5000: min(5000, 100000/q, 2e7/(p·q)). The API's cost model asks it too, so a
- * span is refused with the same words before the report starts.
+ * and maxOrder to 5000: min(5000, 100000/q, 2e7/(p·q)). With a filter its network is solved to
+ * the span order q·max(maxOrder, ⌈10·p/q⌉ + 10) (`spanFilterOrder`, the one-period report's
+ * 10·mf + 10) and its currents summed there, so the bound is min(5000, 20000/q, 2e7/(p·q)) and
+ * must reach that order (a grid without a filter is bounded as no filter). The API's cost model
+ * asks it too, so a span is refused with the same words before the report starts.
  * @throws ParameterRangeError naming `carrierFrequency` when that bound is below 50 (the span
- *   costs too much for the limit table's orders), or when the design has a filter or a grid
- *   (solved per harmonic of one period, not over a span)
+ *   costs too much for the limit table's orders), or with a filter below ⌈10·p/q⌉ + 10
  */
 export function designSpanMaxOrder(design: InverterDesign, span: RationalRatio): number {
   const { p, q } = span;
   const frequency = design.fundamentalFrequency;
-  const attached = design.grid ? 'grid' : design.filter ? 'filter' : null;
-  if (attached !== null)
-    throw new ParameterRangeError(
-      'carrierFrequency',
-      `a whole multiple of fundamentalFrequency ${frequency} Hz for a design with a ${attached} (a non-integer ratio is analysed without a filter or grid)`,
-      design.carrierFrequency,
-    );
+  const filtered = design.filter !== undefined && design.filter !== null;
   const bound = Math.min(
     5000,
-    Math.floor(MAX_HARMONIC_ORDER / q),
+    Math.floor((filtered ? MAX_FILTERED_SPAN_ORDERS : MAX_HARMONIC_ORDER) / q),
     Math.floor(MAX_ASYNCHRONOUS_COST / (p * q)),
   );
+  const required = spanFilterOrder(span);
+  if (filtered && bound < Math.max(MIN_REPORT_ORDER, required))
+    throw new ParameterRangeError(
+      'carrierFrequency',
+      `a whole multiple of fundamentalFrequency ${frequency} Hz, or for a design with a filter a ratio p/q whose span solves the filter to order ⌈10·p/q⌉ + 10 within q·order ≤ ${MAX_FILTERED_SPAN_ORDERS} and p·q·order ≤ ${MAX_ASYNCHRONOUS_COST} (its nearest with q ≤ 64 is ${p}/${q}: order ${required} over ${q} periods costs too much)`,
+      design.carrierFrequency,
+    );
   if (bound < MIN_REPORT_ORDER)
     throw new ParameterRangeError(
       'carrierFrequency',

@@ -35,8 +35,13 @@ export interface FilteredPhaseContext {
   network: OutputNetwork;
   /** The network's response to a unit bridge voltage to spectrumOrder at least (`outputNetworkTransfer`). */
   transfer: OutputNetworkTransfer;
-  /** Fundamental angular frequency, rad/s. */
+  /** Angular frequency of order 1, rad/s: the fundamental's, or a span's base ω₁/q. */
   omega: number;
+  /**
+   * The fundamental's order: 1, or q when the waveform spans q fundamental periods (a carrier at
+   * mf = p/q; orders are then of the base f₁/q, and the back-EMF drives order q). @default 1
+   */
+  fundamentalOrder?: number;
   /** This phase's back-EMF phasor at the fundamental, volts (zero for none). */
   emf: Complex;
   /** Load resistance, ohms, or null without a load. */
@@ -81,11 +86,13 @@ export function filteredPhase(
 ): FilteredPhase {
   const { network, transfer, omega, emf, loadR, phase, suffix, outputName } = context;
   const { spectrumOrder, currentOrder, points, synthesiser, labeller } = context;
+  const f = context.fundamentalOrder ?? 1;
   const solved = networkPhasors(bridge, transfer, {
     count: spectrumOrder + 1,
     network,
     omega,
     emf,
+    fundamentalOrder: f,
   });
   // The currents are summed to the current order (the output spectrum to spectrumOrder).
   const held = Math.min(spectrumOrder, currentOrder) + 1;
@@ -105,8 +112,8 @@ export function filteredPhase(
       const b = im[n] as number;
       meanSquare += (a * a + b * b) / 2;
     }
-    const firstRe = held > 1 ? (re[1] as number) : 0;
-    const firstIm = held > 1 ? (im[1] as number) : 0;
+    const firstRe = held > f ? (re[f] as number) : 0;
+    const firstIm = held > f ? (im[f] as number) : 0;
     const fundamentalCurrent = Math.hypot(firstRe, firstIm);
     return {
       name: `${name}${suffix}`,
@@ -142,6 +149,7 @@ export function filteredPhase(
     capacitor: solved.capacitorCurrent,
     load: solved.loadCurrent,
     held,
+    fundamentalOrder: f,
   });
   const tailMeanSquare = tail?.meanSquare ?? 0;
   const loadCurrent =
@@ -162,6 +170,7 @@ export function filteredPhase(
         : {
             ...outputFigures(outputName, solved.output, {
               labeller,
+              fundamentalOrder: f,
               thdUpperBound: outputThdUpperBound(waveform, bridge, solved.output, context),
             }),
             series: periodSeries(synthesiser.pair(solved.output, null, held)[0], points),
@@ -189,13 +198,17 @@ export function filteredPhase(
   };
 }
 
-/** Figures of the output voltage, a sum over its spectrum (its THD bound found by the caller). */
+/**
+ * Figures of the output voltage, a sum over its spectrum (its THD bound found by the caller):
+ * THD over every order but the mean and the fundamental f, WTHD weighting order n by (f/n)².
+ */
 function outputFigures(
   name: string,
   phasors: HarmonicPhasors,
-  context: { labeller: SpectrumLabeller; thdUpperBound: number },
+  context: { labeller: SpectrumLabeller; thdUpperBound: number; fundamentalOrder: number },
 ): VoltageFigures {
   const { re, im } = phasors;
+  const f = context.fundamentalOrder;
   const mean = re[0] as number;
   let meanSquare = mean * mean;
   let harmonicSquares = 0;
@@ -205,16 +218,16 @@ function outputFigures(
     const b = im[n] as number;
     const square = b * b + a * a;
     meanSquare += square / 2;
-    if (n < 2) continue;
+    if (n === f) continue;
     harmonicSquares += square;
-    weightedSquares += square / (n * n);
+    weightedSquares += (square * f * f) / (n * n);
   }
-  const first = Math.sqrt((im[1] as number) ** 2 + (re[1] as number) ** 2);
+  const first = Math.sqrt((im[f] as number) ** 2 + (re[f] as number) ** 2);
   const spectrum = context.labeller.phasors(phasors);
   return {
     name,
     fundamental: first,
-    fundamentalPhase: Math.atan2(im[1] as number, re[1] as number),
+    fundamentalPhase: Math.atan2(im[f] as number, re[f] as number),
     rms: Math.sqrt(meanSquare),
     thd: Math.sqrt(harmonicSquares) / first,
     thdUpperBound: context.thdUpperBound,
@@ -233,9 +246,10 @@ function outputThdUpperBound(
   waveform: Waveform,
   bridge: HarmonicPhasors,
   output: HarmonicPhasors,
-  context: Pick<FilteredPhaseContext, 'network' | 'omega' | 'spectrumOrder'>,
+  context: Pick<FilteredPhaseContext, 'network' | 'omega' | 'spectrumOrder' | 'fundamentalOrder'>,
 ): number {
   const { network, omega, spectrumOrder } = context;
+  const f = context.fundamentalOrder ?? 1;
   let bridgeSum = (bridge.re[0] as number) * (bridge.re[0] as number);
   for (let n = 1; n <= spectrumOrder; n++) {
     const a = bridge.re[n] as number;
@@ -249,12 +263,13 @@ function outputThdUpperBound(
     tailGain = Math.max(tailGain, Math.hypot(response.output.re, response.output.im));
   }
   let harmonicSum = 0;
-  for (let n = 2; n <= spectrumOrder; n++) {
+  for (let n = 1; n <= spectrumOrder; n++) {
+    if (n === f) continue;
     const a = output.re[n] as number;
     const b = output.im[n] as number;
     harmonicSum += (a * a + b * b) / 2;
   }
-  const fundamental = Math.hypot(output.re[1] as number, output.im[1] as number);
+  const fundamental = Math.hypot(output.re[f] as number, output.im[f] as number);
   return Math.sqrt(2 * (harmonicSum + tailGain * tailGain * bridgeTail)) / fundamental;
 }
 
@@ -319,8 +334,9 @@ interface SampleExtremes {
  * one pass: the inverter current (its switching tail added into `inverter` in place, when there
  * is one), the load current, and the capacitor current as their difference (Kirchhoff's current
  * law; the inverter current itself without a load). Each current's ripple is i − i₁ with i₁ its
- * fundamental X₁ = re₁ + j·im₁: i₁(θ) = re₁·sin θ + im₁·cos θ, the cosine read a quarter period
- * on in the sine table. No fundamental (fewer than two orders held) leaves i as its ripple.
+ * fundamental X₁ = re₁ + j·im₁ at order f (1, or q over a span): i₁(θ) = re₁·sin fθ + im₁·cos fθ,
+ * the sine table read every f-th entry and the cosine a quarter period on. No fundamental (f or
+ * fewer orders held) leaves i as its ripple.
  * @param inverter - the inverter current's synthesised samples, amperes (the tail is added here)
  * @param load - the load current's samples, amperes, or null without a load
  */
@@ -334,11 +350,12 @@ function currentExtremes(
     capacitor: HarmonicPhasors;
     load: HarmonicPhasors;
     held: number;
+    fundamentalOrder: number;
   },
 ): { inverter: SampleExtremes; capacitor: SampleExtremes; load: SampleExtremes } {
-  const { tail, sine, held } = context;
+  const { tail, sine, held, fundamentalOrder: f } = context;
   const first = (phasors: HarmonicPhasors, part: 're' | 'im'): number =>
-    held > 1 ? (phasors[part][1] as number) : 0;
+    held > f ? (phasors[part][f] as number) : 0;
   const iRe = first(context.inverter, 're');
   const iIm = first(context.inverter, 'im');
   const cRe = first(context.capacitor, 're');
@@ -356,9 +373,13 @@ function currentExtremes(
   let lPeak = 0;
   let lLow = Infinity;
   let lHigh = -Infinity;
-  for (let j = 0, k = quarter; j < size; j++, k = k + 1 === size ? 0 : k + 1) {
-    const s = sine[j] as number;
-    // cos(2πj/S) = sin(2π(j + S/4)/S).
+  // sin(2πfj/S) at index fj mod S; cos(2πfj/S) = sin(2π(fj + S/4)/S).
+  for (
+    let j = 0, h = 0, k = quarter;
+    j < size;
+    j++, h = h + f >= size ? h + f - size : h + f, k = k + f >= size ? k + f - size : k + f
+  ) {
+    const s = sine[h] as number;
     const c = sine[k] as number;
     let i = inverter[j] as number;
     if (tail !== null) {

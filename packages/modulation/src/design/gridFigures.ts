@@ -3,6 +3,7 @@ import { lclResonanceFrequency } from '../filter/lclResonanceFrequency.js';
 import type { OutputNetwork } from '../filter/outputNetworkResponse.js';
 import { outputNetworkTransfer } from '../filter/outputNetworkTransfer.js';
 import { checkGridCurrentLimits } from '../limits/checkGridCurrentLimits.js';
+import { HARMONIC_GROUP_RULE, harmonicGroups } from '../limits/harmonicGroups.js';
 import { TAU } from '../math.js';
 import type { Complex } from '../numeric/complex.js';
 import type { HarmonicPhasors } from '../spectrum/harmonicPhasors.js';
@@ -21,6 +22,12 @@ export interface GridFigureInputs {
   bridge: HarmonicPhasors;
   /** The analysis order: orders 0..analysisOrder are solved. */
   analysisOrder: number;
+  /**
+   * The fundamental's order: 1, or q when the bridge voltage spans q fundamental periods (a
+   * carrier at mf = p/q: orders, `analysisOrder` included, are then of the base f₁/q, the grid
+   * source drives order q, and the limits are checked on harmonic groups). @default 1
+   */
+  fundamentalOrder?: number;
   /** Phase a's grid source phasor at the fundamental, peak volts. */
   source: Complex;
   phaseCount: 1 | 3;
@@ -44,7 +51,9 @@ function power(v: Complex, i: Complex): Complex {
  * damping loss is Σ ½·(Re Z_series·|I_inv|² + Re Y_shunt·|V_C|²) over the orders (L and C
  * are lossless). Limits: IEEE Std 519-2022 Table 2 with the generation footnote, and IEEE Std
  * 1547-2018 Tables 26–27, both recalled from memory, with the fundamental grid current as the
- * reference current.
+ * reference current. Over a span (`fundamentalOrder` q > 1) the grid current's components at
+ * n/q are grouped by whole harmonic order first (`harmonicGroups`, IEC 61000-4-7's harmonic
+ * groups, from memory) and the groups are checked; `harmonicGrouping` lists what was grouped.
  *
  * @throws ParameterRangeError naming `grid.phase` when the bridge and the grid exchange no
  *   fundamental current (no reference current for the limits)
@@ -53,21 +62,25 @@ export function gridFigures(inputs: GridFigureInputs): GridFigures {
   const { grid, network, bridge, source, phaseCount, fundamentalFrequency } = inputs;
   const { carrierFrequency, labeller, analysisOrder } = inputs;
   const omega = TAU * fundamentalFrequency;
+  const f = inputs.fundamentalOrder ?? 1;
+  // Angular frequency of order 1: the fundamental's, or the span's base ω₁/q.
+  const base = omega / f;
   const count = analysisOrder + 1;
-  const solved = networkPhasors(bridge, outputNetworkTransfer(network, omega, analysisOrder), {
+  const solved = networkPhasors(bridge, outputNetworkTransfer(network, base, analysisOrder), {
     count,
     network,
-    omega,
+    omega: base,
     emf: source,
+    fundamentalOrder: f,
   });
   const at = (phasors: HarmonicPhasors, order: number): Complex => ({
     re: phasors.re[order] as number,
     im: phasors.im[order] as number,
   });
   const first = {
-    loadCurrent: at(solved.loadCurrent, 1),
-    capacitorCurrent: at(solved.capacitorCurrent, 1),
-    output: at(solved.output, 1),
+    loadCurrent: at(solved.loadCurrent, f),
+    capacitorCurrent: at(solved.capacitorCurrent, f),
+    output: at(solved.output, f),
   };
   const fundamental = Math.hypot(first.loadCurrent.re, first.loadCurrent.im);
   if (!(fundamental > 0))
@@ -79,8 +92,8 @@ export function gridFigures(inputs: GridFigureInputs): GridFigures {
   const squareAt = (phasors: HarmonicPhasors, order: number): number =>
     (phasors.re[order] as number) ** 2 + (phasors.im[order] as number) ** 2;
   let harmonicSquares = 0;
-  for (let order = 2; order < count; order++)
-    harmonicSquares += squareAt(solved.loadCurrent, order);
+  for (let order = 1; order < count; order++)
+    if (order !== f) harmonicSquares += squareAt(solved.loadCurrent, order);
   const gridSpectrum = labeller.phasors(solved.loadCurrent);
   const gridPower = power(source, first.loadCurrent);
   const phaseVoltage = Math.hypot(source.re, source.im);
@@ -91,7 +104,7 @@ export function gridFigures(inputs: GridFigureInputs): GridFigures {
   let dampingLoss = 0;
   if (filter !== null) {
     for (let order = 0; order < count; order++) {
-      const { seriesImpedance, shuntAdmittance } = lcFilterBranches(filter, omega * order);
+      const { seriesImpedance, shuntAdmittance } = lcFilterBranches(filter, base * order);
       dampingLoss +=
         (seriesImpedance.re * squareAt(solved.inverterCurrent, order) +
           shuntAdmittance.re * squareAt(solved.output, order)) /
@@ -106,6 +119,18 @@ export function gridFigures(inputs: GridFigureInputs): GridFigures {
     shortCircuitRatio,
     totalWholeWaveform: inputs.gridCurrentThdWholeWaveform,
   };
+  // Over a span the limits (by whole order, to 50) read the harmonic groups of every component.
+  const groups =
+    f === 1
+      ? null
+      : harmonicGroups(
+          labeller.phasors({
+            re: solved.loadCurrent.re.subarray(0, Math.min(count, f * 51)),
+            im: solved.loadCurrent.im.subarray(0, Math.min(count, f * 51)),
+          }),
+          { maxOrder: 50 },
+        );
+  const limitSpectrum = groups ?? gridSpectrum;
   return {
     phaseVoltage,
     shortCircuitCurrent,
@@ -144,8 +169,9 @@ export function gridFigures(inputs: GridFigureInputs): GridFigures {
             reactivePower: -phaseCount * power(first.output, first.capacitorCurrent).im,
           },
     limits: {
-      ieee519: checkGridCurrentLimits(gridSpectrum, { ...limitOptions, standard: 'ieee-519' }),
-      ieee1547: checkGridCurrentLimits(gridSpectrum, { ...limitOptions, standard: 'ieee-1547' }),
+      ieee519: checkGridCurrentLimits(limitSpectrum, { ...limitOptions, standard: 'ieee-519' }),
+      ieee1547: checkGridCurrentLimits(limitSpectrum, { ...limitOptions, standard: 'ieee-1547' }),
     },
+    ...(groups === null ? {} : { harmonicGrouping: { rule: HARMONIC_GROUP_RULE, groups } }),
   };
 }

@@ -8,18 +8,27 @@ import type { HarmonicPhasors } from '../spectrum/harmonicPhasors.js';
  * network's response to a unit bridge voltage (`outputNetworkTransfer`) times the bridge
  * voltage's phasor at each order (the network is linear: superposition), and the fundamental
  * solved with the back-EMF (`outputNetworkResponse`), which drives that order only. Internal:
- * the filtered phases and the grid figures of analyseDesign.
+ * the filtered phases and the grid figures of analyseDesign. Over a span of q fundamental
+ * periods (a carrier at mf = p/q) the orders are of the span's base f₁/q and the fundamental,
+ * with the back-EMF, is order q (`fundamentalOrder`).
  * @param bridge - the phase's bridge voltage phasors, orders 0..count − 1 at least, volts
  * @param transfer - the unit responses, orders 0..count − 1 at least
- * @param context.omega - fundamental angular frequency, rad/s
+ * @param context.omega - angular frequency of order 1, rad/s (the fundamental's over one period)
  * @param context.emf - the back-EMF phasor at the fundamental, volts
+ * @param context.fundamentalOrder - the order of the fundamental (q over a span) @default 1
  */
 export function networkPhasors(
   bridge: HarmonicPhasors,
   transfer: OutputNetworkTransfer,
-  context: { count: number; network: OutputNetwork; omega: number; emf: Complex },
+  context: {
+    count: number;
+    network: OutputNetwork;
+    omega: number;
+    emf: Complex;
+    fundamentalOrder?: number;
+  },
 ): OutputNetworkTransfer {
-  const { count, network, omega, emf } = context;
+  const { count, network, omega, emf, fundamentalOrder: first = 1 } = context;
   const scaled = (unit: HarmonicPhasors): HarmonicPhasors => {
     const re = new Float64Array(count);
     const im = new Float64Array(count);
@@ -39,12 +48,12 @@ export function networkPhasors(
     capacitorCurrent: scaled(transfer.capacitorCurrent),
     loadCurrent: scaled(transfer.loadCurrent),
   };
-  if (count > 1) {
-    const voltage = { re: bridge.re[1] as number, im: bridge.im[1] as number };
-    const fundamental = outputNetworkResponse(network, omega, voltage, emf);
+  if (count > first) {
+    const voltage = { re: bridge.re[first] as number, im: bridge.im[first] as number };
+    const fundamental = outputNetworkResponse(network, omega * first, voltage, emf);
     for (const part of ['output', 'inverterCurrent', 'capacitorCurrent', 'loadCurrent'] as const) {
-      solved[part].re[1] = fundamental[part].re;
-      solved[part].im[1] = fundamental[part].im;
+      solved[part].re[first] = fundamental[part].re;
+      solved[part].im[first] = fundamental[part].im;
     }
   }
   return solved;

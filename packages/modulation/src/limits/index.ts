@@ -2,3 +2,4 @@ export * from './voltageHarmonicLimits.js';
 export * from './checkVoltageHarmonicLimits.js';
 export * from './gridCurrentLimits.js';
 export * from './checkGridCurrentLimits.js';
+export * from './harmonicGroups.js';
