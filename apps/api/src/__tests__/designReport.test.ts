@@ -100,6 +100,14 @@ const DESIGNS: Record<string, InverterDesign> = {
     filter: { l: 0.002, c: 10e-6, rDamping: 2 },
     grid: { lineVoltage: 400, phase: -0.1, r: 0.05, l: 0.0002, l2: 0.0005, controlBandwidth: 1000 },
   },
+  'three-phase, LCL filter into a 400 V, 60 Hz grid at a 10 kHz carrier (500/3)': {
+    vdc: 700,
+    fundamentalFrequency: 60,
+    carrierFrequency: 10_000,
+    modulation: { method: 'three-phase', ma: 0.95, zeroSequence: 'third-harmonic' },
+    filter: { l: 0.002, c: 10e-6, rDamping: 2 },
+    grid: { lineVoltage: 400, phase: -0.1, r: 0.05, l: 0.0002, l2: 0.0005, controlBandwidth: 1000 },
+  },
   'optimal pattern, staircase, no load': {
     vdc: 48,
     fundamentalFrequency: 50,
@@ -383,12 +391,13 @@ describe('design report routes', () => {
         words: ['left out or null with a grid'],
       },
       {
-        // 41.5 = 83/2 is analysed over two periods, but not through this design's filter.
-        body: { design: { ...design, carrierFrequency: 2075 } },
+        // 3000/37 through this design's filter: 821 orders over 37 periods cost too much.
+        body: { design: { ...design, fundamentalFrequency: 37, carrierFrequency: 3000 } },
         path: 'design.carrierFrequency',
         words: [
-          'whole multiple of fundamentalFrequency 50 Hz for a design with a filter',
-          'got 2075',
+          'or for a design with a filter a ratio p/q',
+          'its nearest with q ≤ 64 is 3000/37',
+          'got 3000',
         ],
       },
       {

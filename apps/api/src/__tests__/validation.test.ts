@@ -205,19 +205,21 @@ describe('bad input: 400 problem+json naming the field and the range, nothing ch
       words: ['not a known field', 'design'],
     },
     {
-      name: 'study with a filter and a carrier that is no whole multiple',
+      name: 'study with a filter and a carrier whose span costs too much',
       method: 'post',
       path: () => '/api/v1/studies',
       body: () => ({
         projectId,
         name: 'S',
-        design: { ...DESIGN, carrierFrequency: 1075, filter: { l: 0.002, c: 50e-6 } },
+        design: {
+          ...DESIGN,
+          fundamentalFrequency: 37,
+          carrierFrequency: 3000,
+          filter: { l: 0.002, c: 50e-6 },
+        },
       }),
       field: 'design.carrierFrequency',
-      words: [
-        'whole multiple of fundamentalFrequency 50 Hz for a design with a filter',
-        'got 1075',
-      ],
+      words: ['or for a design with a filter a ratio p/q', 'got 3000'],
     },
     {
       name: 'study with a frequency ratio above 1000',

@@ -283,7 +283,11 @@ function powerOfTwoAtLeast(n: number): number {
  * a load alone). A grid is each phase's load, and its figures solve phase a once more (two more
  * labelled spectra in the answer). The factors (REPORT_PER_TERM, …) are fitted to the report's
  * measured time and doubled; a span (a carrier no whole multiple of the fundamental) keeps one
- * unit a term of each voltage's sum over its q periods.
+ * unit a term of each voltage's sum over its q periods. A span with a filter or grid also reads
+ * the legs' spectra to q·max(maxOrder, ⌈10·p/q⌉ + 10) span orders (q times the current order
+ * with a filter), solves each phase (and the grid's phase a) there, synthesises the currents on
+ * 16 samples a cycle of that order (at least 4096 a period) and labels the output's and the
+ * grid's spectra, at the integer report's factors.
  * @param field - where the design sits in the request (`design`, `study.design`)
  */
 export function reportCost(
@@ -323,11 +327,13 @@ export function reportCost(
   const legTerms =
     span === null ? edges.phase * readOrder : (edges.phase + edges.line) * q * maxOrder;
   const spectra = span === null ? Math.ceil(REPORT_PER_TERM * legTerms) : legTerms;
+  const grid = design.grid !== undefined && design.grid !== null;
   const spanSamples =
-    span === null || !design.load
+    span === null || filtered || !(design.load || grid)
       ? 0
       : phases * Math.min(2 ** 19, Math.max(4096 * span.q, 64 * span.p)) * 20;
-  const grid = design.grid !== undefined && design.grid !== null;
+  const spanNetwork =
+    span === null || !(filtered || grid) ? 0 : spanNetworkCost(design, span, maxOrder, spanBound);
   const currents = filtered || design.load !== undefined || grid;
   // Each phase's network solved order by order to readOrder (and phase a once more for a grid),
   // and each labelled spectrum: bridge, with three phases line and common mode, with currents
@@ -385,7 +391,7 @@ export function reportCost(
   // route does not take are left out.
   const fromCarrier = (readOrder > maxOrder ? spectra + throughFilter : 0) + currentSamples;
   const shares: [string, number][] = [
-    [`${field}.carrierFrequency`, pattern ? 0 : build + fromCarrier + spanSamples],
+    [`${field}.carrierFrequency`, pattern ? 0 : build + fromCarrier + spanSamples + spanNetwork],
     [`${field}.modulation.levels`, modulation.method === 'multilevel-carrier' ? build : 0],
     ['maxOrder', spectra + throughFilter + labels + currentSamples - fromCarrier],
     ['points', sampled],
@@ -397,11 +403,19 @@ export function reportCost(
     .sort((a, b) => b[1] - a[1])
     .map(([name]) => name);
   return {
-    work: spectra + throughFilter + labels + currentSamples + build + sampled + spanSamples,
+    work:
+      spectra +
+      throughFilter +
+      labels +
+      currentSamples +
+      build +
+      sampled +
+      spanSamples +
+      spanNetwork,
     basis:
       span === null
         ? `${edges.phase} edges × ${readOrder + 1} orders of the legs' spectra + ${labelled} labelled spectra × ${maxOrder + 1} orders${filtered ? ` + ${phases} phases × ${readOrder + 1} orders and ${gridSamples} samples through the filter` : ''}${grid ? ` + ${readOrder + 1} orders for the grid` : ''}${!filtered && gridSamples ? ` + ${phases} × ${gridSamples} current samples` : ''}${series ? ` + ${series} series × ${points} points` : ''}`
-        : `${edges.phase + edges.line} edges × ${q * maxOrder} orders over ${span.q} fundamental periods (${span.p}/${span.q})${series ? ` + ${series} series × ${points} points` : ''}`,
+        : `${edges.phase + edges.line} edges × ${q * maxOrder} orders over ${span.q} fundamental periods (${span.p}/${span.q})${spanNetwork ? ` + ${sci(spanNetwork)} units through the ${filtered ? 'filter' : 'grid'} over the span` : ''}${series ? ` + ${series} series × ${points} points` : ''}`,
     fields: fields.length ? fields : [field],
     // Labelled spectra (about five numbers an order and voltage), time series, and the edges of each voltage.
     responseBytes:
@@ -410,8 +424,11 @@ export function reportCost(
           (5 * (maxOrder + 1) * ((filtered ? 3 : 2) + (grid ? 2 : 0)) +
             series * points +
             voltageNumbers)
-        : // A span's four labelled spectra (bridge, line, common mode, DC link) and its voltages.
-          SPAN_BYTES_PER_COMPONENT * (q * maxOrder + 1) * 4 +
+        : // A span's four labelled spectra (bridge, line, common mode, DC link), the filter's
+          // output and the grid's two currents, and its voltages.
+          SPAN_BYTES_PER_COMPONENT *
+            (q * maxOrder + 1) *
+            (4 + (filtered ? 1 : 0) + (grid ? 2 : 0)) +
           SPAN_BYTES_PER_VOLTAGE_NUMBER * voltageNumbers +
           BYTES_PER_NUMBER * series * points,
     // A span's size is set by its carrier cycles p as much as by the orders.
@@ -422,6 +439,37 @@ export function reportCost(
     series,
     points,
   };
+}
+
+/**
+ * The work a span with a filter or grid adds (analyseDesignSpan): the legs' spectra to the span
+ * orders the network is solved to, q·max(maxOrder, ⌈10·p/q⌉ + 10) with a filter (each at least
+ * the span's current order) and q·maxOrder with a grid alone, a quarter unit a term; each phase
+ * and the grid's phase a solved there and the output's and grid's spectra labelled, 40 units an
+ * order; with a filter the currents synthesised on max(4096·q, 16 × the span's current order)
+ * samples a phase, 60 units a sample (the integer report's factors, REPORT_PER_*).
+ */
+function spanNetworkCost(
+  design: InverterDesign,
+  span: { p: number; q: number },
+  maxOrder: number,
+  spanBound: number | null,
+): number {
+  const { p, q } = span;
+  const filtered = design.filter !== undefined && design.filter !== null;
+  const grid = design.grid !== undefined && design.grid !== null;
+  const phases = modulationPhaseCount(design.modulation);
+  const analysisOrder = filtered ? Math.max(maxOrder, Math.ceil((10 * p) / q) + 10) : maxOrder;
+  const currentOrder = filtered
+    ? Math.max(Math.min(defaultSpectrumOrder(design), spanBound ?? Infinity), analysisOrder)
+    : maxOrder;
+  const spanOrders = q * currentOrder;
+  const edges = designEdges(design, p);
+  const terms = REPORT_PER_TERM * edges.phase * spanOrders;
+  const solved = ((filtered ? phases : 0) + (grid ? 1 : 0)) * (spanOrders + 1);
+  const labelled = ((filtered ? 1 : 0) + (grid ? 2 : 0)) * (q * maxOrder + 1);
+  const samples = filtered ? phases * powerOfTwoAtLeast(Math.max(4096 * q, 16 * spanOrders)) : 0;
+  return Math.ceil(terms + REPORT_PER_ORDER * (solved + labelled) + REPORT_PER_SAMPLE * samples);
 }
 
 /**
