@@ -33,7 +33,7 @@ describe('bad input', () => {
     );
   });
 
-  it('names a carrier frequency that is not a whole multiple of the fundamental where the design needs one (a filter)', async () => {
+  it('names a carrier frequency whose span is too costly through a filter (3000/37: 821 orders over 37 periods)', async () => {
     const run = await runCli([
       'report',
       '--method',
@@ -45,9 +45,9 @@ describe('bad input', () => {
       '--vdc',
       '400',
       '--fundamental-frequency',
-      '50',
+      '37',
       '--carrier-frequency',
-      '1060',
+      '3000',
       '--load-r',
       '10',
       '--load-l',
