@@ -38,6 +38,26 @@ describe('GridPanel', () => {
     );
   });
 
+  it('lists the harmonic groups a carrier span’s limits were read on, with the rule and its caution (60 Hz, 10 kHz: 500/3)', () => {
+    const report = analyseDesign({ ...design, fundamentalFrequency: 60 }, { points: 256 });
+    expect(report.carrierSpan).toMatchObject({ p: 500, q: 3 });
+    const grouping = report.grid!.harmonicGrouping!;
+    render(<GridPanel report={report} fileStem="lcl" />);
+    const section = screen.getByTestId('grid-grouping');
+    expect(section).toHaveTextContent(
+      /IEC 61000-4-7, from memory; confirm with the standard and the utility/,
+    );
+    expect(section).toHaveTextContent(grouping.rule);
+    const rows = within(screen.getByRole('table', { name: 'Harmonic groups' })).getAllByRole('row');
+    // A header and groups 1..50; group 5 took the components at 14/3 and 16/3 (4.667 and 5.333).
+    expect(rows).toHaveLength(51);
+    expect(rows[5]).toHaveTextContent(/^5/);
+    expect(rows[5]).toHaveTextContent('4.667: ');
+    expect(rows[5]).toHaveTextContent('5.333: ');
+    const reference = report.grid!.limits.ieee519.referenceCurrent;
+    expect(rows[5]).toHaveTextContent(formatPercent(grouping.groups[4]!.amplitude / reference));
+  });
+
   it('names the currents as the report does: by phase on a three-phase bridge, without one on a single-phase bridge', () => {
     const three = render(
       <GridPanel report={analyseDesign(design, { points: 256 })} fileStem="lcl" />,

@@ -26,8 +26,10 @@ function Row({ name, children }: { name: string; children: ReactNode }) {
  * A grid-connected design (the report's `grid`): the grid current's harmonics against the
  * current-distortion limits of IEEE Std 519 or 1547 (as the library recalls them, from memory),
  * the grid and inverter current spectra, the LCL resonance and its distances, the damping loss,
- * the capacitor's current and the power exchanged. Draws what the report holds; nothing is
- * computed here.
+ * the capacitor's current and the power exchanged. Over a carrier span (a ratio p/q) the limits
+ * are read on harmonic groups of the n/q components (`harmonicGrouping`): the rule and each
+ * group's components are listed with the caution to confirm with the standard and the utility.
+ * Draws what the report holds; nothing is computed here but percentages of the reference current.
  */
 export function GridPanel({ report, fileStem }: { report: StudyReport; fileStem: string }) {
   const [standard, setStandard] = useState<Standard>('ieee519');
@@ -142,10 +144,63 @@ export function GridPanel({ report, fileStem }: { report: StudyReport; fileStem:
             ) : null}
           </tbody>
         </table>
+        {grid.harmonicGrouping ? (
+          <HarmonicGrouping grouping={grid.harmonicGrouping} reference={check.referenceCurrent} />
+        ) : null}
         <p className="mt-2 text-xs text-ink-soft" data-testid="grid-caution">
           {check.caution}
         </p>
       </div>
     </section>
+  );
+}
+
+/**
+ * The harmonic groups a span's limits were read on: the rule in the report's words, and per group
+ * its value, the harmonic's own and the inter- and sub-harmonics it took, in % of the reference.
+ */
+function HarmonicGrouping({
+  grouping,
+  reference,
+}: {
+  grouping: NonNullable<Grid['harmonicGrouping']>;
+  reference: number;
+}) {
+  const pct = (amplitude: number) => formatPercent(amplitude / reference);
+  return (
+    <details className="mt-2 text-xs" data-testid="grid-grouping">
+      <summary>
+        Limits read on harmonic groups of the span&apos;s components (IEC 61000-4-7, from memory;
+        confirm with the standard and the utility)
+      </summary>
+      <p className="mt-1">{grouping.rule}</p>
+      <table className="mt-1 w-full" aria-label="Harmonic groups">
+        <thead>
+          <tr className="text-left">
+            <th>Order</th>
+            <th>Group</th>
+            <th>Harmonic alone</th>
+            <th>Components grouped (order: % of the reference)</th>
+          </tr>
+        </thead>
+        <tbody className="num">
+          {grouping.groups.map((group) => (
+            <tr key={group.order} className="border-t border-rule/60">
+              <td>{group.order}</td>
+              <td>{pct(group.amplitude)}</td>
+              <td>{pct(group.harmonicAmplitude)}</td>
+              <td>
+                {group.grouped
+                  .map(
+                    (c) =>
+                      `${formatNumber(c.order, 4)}: ${pct(c.amplitude)}${c.share === 1 ? '' : ' (half)'}`,
+                  )
+                  .join(', ')}
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </details>
   );
 }

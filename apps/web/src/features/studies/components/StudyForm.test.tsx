@@ -128,10 +128,11 @@ describe('StudyForm', () => {
       'mf = 43/2 ≈ 21.5: the report is exact over 2 fundamental periods (43 carrier cycles) with its sub-harmonics; carrier analysed 1075 Hz, 0 Hz from the one entered',
     );
     cleanup();
-    // With a filter the report needs a whole mf (the library's designSpanMaxOrder).
-    renderForm({ ...defaultDraft(), carrierFrequency: 1075, filterOn: true });
+    // With a filter or grid the report spans it too (issue 12 items 5-6).
+    renderForm({ ...defaultDraft(), carrierFrequency: 1075, filterOn: true, gridOn: true });
+    expect(screen.getByLabelText(/Carrier frequency/)).not.toHaveAttribute('aria-invalid');
     expect(screen.getByLabelText(/Carrier frequency/)).toHaveAccessibleDescription(
-      'Carrier frequency 1075 Hz is 21.5 times the fundamental, 50 Hz: with a filter or grid the design report takes a whole multiple (1 to 1000 times), the nearest being mf = 22 (1100 Hz), so set that to save the study; the panel "Carrier as typed" analyses 1075 Hz as it is',
+      'mf = 43/2 ≈ 21.5: the report is exact over 2 fundamental periods (43 carrier cycles) with its sub-harmonics; carrier analysed 1075 Hz, 0 Hz from the one entered',
     );
     cleanup();
     renderForm({ ...defaultDraft(), method: 'multilevel-carrier', carrierFrequency: 1075 });

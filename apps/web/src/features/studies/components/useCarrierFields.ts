@@ -23,17 +23,16 @@ export const RATIO_BOUNDS: NumberBounds = {
 
 /**
  * Whether the design report takes a ratio that is not whole for this draft: sine-triangle,
- * three-phase carrier and space vector without a filter or grid (analysed over q periods of its
- * nearest p/q; the library's designSpanMaxOrder refuses the others).
+ * three-phase carrier and space vector, with a filter or grid too (analysed over q periods of its
+ * nearest p/q; the library's designSpanMaxOrder refuses a span too costly, on the carrier field
+ * through the preview's errors).
  */
-export function spansCarrier(draft: Pick<StudyDraft, 'method' | 'filterOn' | 'gridOn'>): boolean {
-  return ASYNCHRONOUS_METHODS.includes(draft.method) && !draft.filterOn && !draft.gridOn;
+export function spansCarrier(draft: Pick<StudyDraft, 'method'>): boolean {
+  return ASYNCHRONOUS_METHODS.includes(draft.method);
 }
 
 /** The frequency ratio's range: any ratio where the report spans it, else a whole number. */
-export function ratioBounds(
-  draft: Pick<StudyDraft, 'method' | 'filterOn' | 'gridOn'>,
-): NumberBounds {
+export function ratioBounds(draft: Pick<StudyDraft, 'method'>): NumberBounds {
   return spansCarrier(draft) ? { ...RATIO_BOUNDS, integer: false } : RATIO_BOUNDS;
 }
 
@@ -100,7 +99,7 @@ export function useCarrierFields(
       ? undefined
       : (carrierRangeMessage ??
         (asynchronous
-          ? `Carrier frequency ${formatNumber(draft.carrierFrequency, 9)} Hz is ${formatNumber(typedMultiple, 6)} times the fundamental, ${formatNumber(draft.fundamentalFrequency, 6)} Hz: ${ASYNCHRONOUS_METHODS.includes(method) ? 'with a filter or grid ' : ''}the design report takes a whole multiple (1 to ${MAX_DESIGN_FREQUENCY_RATIO} times), the nearest being mf = ${nearestWhole} (${formatNumber(nearestWhole * draft.fundamentalFrequency, 9)} Hz), so set that to save the study; the panel "Carrier as typed" analyses ${formatNumber(draft.carrierFrequency, 9)} Hz as it is`
+          ? `Carrier frequency ${formatNumber(draft.carrierFrequency, 9)} Hz is ${formatNumber(typedMultiple, 6)} times the fundamental, ${formatNumber(draft.fundamentalFrequency, 6)} Hz: the design report takes a whole multiple (1 to ${MAX_DESIGN_FREQUENCY_RATIO} times), the nearest being mf = ${nearestWhole} (${formatNumber(nearestWhole * draft.fundamentalFrequency, 9)} Hz), so set that to save the study; the panel "Carrier as typed" analyses ${formatNumber(draft.carrierFrequency, 9)} Hz as it is`
           : carrierError));
   // Synchronous carrier PWM: a new fundamental keeps the frequency ratio, so the carrier follows.
   const setFundamental = (f: number) =>

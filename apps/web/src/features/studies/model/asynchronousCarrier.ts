@@ -6,7 +6,7 @@ import { isCarrierMethod, type StudyDraft } from './studyDraft';
  * Whether a draft's carrier, with both frequencies in range, is not a whole multiple (1 to the
  * library's largest) of its fundamental (the library's designFrequencyRatio): the design report
  * analyses it over q periods of its nearest p/q for sine-triangle, three-phase carrier and space
- * vector without a filter or grid (its `carrierSpan`), and POST /designs/asynchronous-spectra
+ * vector, with a filter or grid too (its `carrierSpan`), and POST /designs/asynchronous-spectra
  * gives the spectra of any two-level carrier design as it is typed.
  */
 export function hasAsynchronousCarrier(

@@ -19,13 +19,25 @@ describe('previewDesign', () => {
     expect(errors[0]?.message).toMatch(/modulation\.ma/);
   });
 
-  it('analyses a carrier that is not a whole multiple over its span, and names it with a filter', () => {
+  it('analyses a carrier that is not a whole multiple over its span, with a filter too, and names a costly one', () => {
     // 1051 Hz over 50 Hz is 1051/50: the library's report over 50 periods, its carrierSpan stated.
     const spanned = previewDesign(designOf({ ...defaultDraft(), carrierFrequency: 1051 }));
     expect(spanned.errors).toEqual([]);
     expect(spanned.report?.carrierSpan).toMatchObject({ p: 1051, q: 50 });
+    // 1075/50 = 43/2 through the filter; 3000/37 would solve it to 821 orders over 37 periods.
+    const filtered = previewDesign(
+      designOf({ ...defaultDraft(), carrierFrequency: 1075, filterOn: true }),
+    );
+    expect(filtered.errors).toEqual([]);
+    expect(filtered.report?.carrierSpan).toMatchObject({ p: 43, q: 2 });
+    expect(filtered.report?.output?.spectrum[2]?.order).toBe(1);
     const { errors } = previewDesign(
-      designOf({ ...defaultDraft(), carrierFrequency: 1051, filterOn: true }),
+      designOf({
+        ...defaultDraft(),
+        fundamentalFrequency: 37,
+        carrierFrequency: 3000,
+        filterOn: true,
+      }),
     );
     expect(errors.map((e) => e.field)).toEqual(['carrierFrequency']);
   });
