@@ -116,6 +116,8 @@ const phaseSuffix = (phaseCount: number, phase: PhaseCurrents['phase']): string 
  *   filter's inductor alone sets the current; its time series by FFT. Ripple is i − i₁.
  * - Three-phase: the load and filter are star-connected and balanced; each phase sees its
  *   phase-to-star-point voltage (2·v_a − v_b − v_c)/3; line-to-line figures are reported beside.
+ *   The three currents then sum to zero (Kirchhoff at the star point), so with a filter phase
+ *   c's sampled currents are minus a's and b's (equal to rounding), its phasors its own.
  * - Limit check (IEEE Std 519-2022 Table 1, recalled from memory) on the voltage at the point
  *   of coupling: the filter's output with a filter, else the bridge's.
  * - With a `device`: the semiconductor losses of each leg's devices (`designLosses`) from the
@@ -236,8 +238,10 @@ export function analyseDesign(
     const omega = TAU * frequency;
     // The phases share one network: its response to each order is solved once for all three.
     const transfer = outputNetworkTransfer(network, omega, Math.max(analysisOrder, currentOrder));
-    const solved = phaseVoltages.map((waveform, k) =>
-      filteredPhase(waveform, spectra.phase(k), {
+    const solved: FilteredPhase[] = [];
+    phaseVoltages.forEach((waveform, k) => {
+      const [a, b] = solved;
+      const read = filteredPhase(waveform, spectra.phase(k), {
         network,
         transfer,
         omega,
@@ -255,8 +259,11 @@ export function analyseDesign(
         points,
         synthesiser,
         labeller,
-      }),
-    );
+        // Phase c's currents are minus a's and b's (Kirchhoff at the star point).
+        ...(voltages.phaseCount === 3 && k === 2 && a && b ? { others: [a, b] as const } : {}),
+      });
+      solved.push(read);
+    });
     output = (solved[0] as FilteredPhase).output;
     currents = solved.map((s) => s.currents);
     loadPower = load === null ? null : solved.reduce((sum, s) => sum + s.loadPower, 0);

@@ -23,6 +23,8 @@ import type { SpectrumLabeller } from './spectrumLabeller.js';
 export interface FilteredPhase {
   /** The inverter current on the synthesiser's S angles 2πj/S, amperes. */
   inverterSamples: Float64Array;
+  /** The load current on the same angles, amperes, or null without a load. */
+  loadSamples: Float64Array | null;
   /** The output voltage's figures, for the phase asked for them (the report shows phase a's), else null. */
   output: NonNullable<DesignReport['output']> | null;
   currents: PhaseCurrents;
@@ -58,6 +60,13 @@ export interface FilteredPhaseContext {
   points: number;
   synthesiser: PeriodSynthesiser;
   labeller: SpectrumLabeller;
+  /**
+   * The two other phases of a three-phase bridge, already read. Their load, filter and back-EMF
+   * are this phase's and the three phase-to-star-point voltages sum to zero, so by Kirchhoff's
+   * current law at the star point this phase's sampled currents are minus the sum of theirs (the
+   * network is linear): read so, not synthesised (equal to rounding). @default none: synthesised
+   */
+  others?: readonly [FilteredPhase, FilteredPhase];
 }
 
 /**
@@ -136,14 +145,21 @@ export function filteredPhase(
     omega,
     size,
   });
-  const inverterSynthesised = tail === null ? solved.inverterCurrent : tail.added;
-  const [inverterSamples, loadSamples] = synthesiser.pair(
-    inverterSynthesised,
-    loadR === null ? null : solved.loadCurrent,
-    held,
-  );
+  const { others } = context;
+  const [inverterSamples, loadSamples] =
+    others === undefined
+      ? synthesiser.pair(
+          tail === null ? solved.inverterCurrent : tail.added,
+          loadR === null ? null : solved.loadCurrent,
+          held,
+        )
+      : [
+          negatedSum(others[0].inverterSamples, others[1].inverterSamples),
+          loadR === null ? null : negatedSum(others[0].loadSamples, others[1].loadSamples),
+        ];
   const extremes = currentExtremes(inverterSamples, loadSamples, {
-    tail: tail?.samples ?? null,
+    // The others' samples hold their tails already.
+    tail: tail === null || others !== undefined ? null : tail.samples(),
     sine: synthesiser.sine,
     inverter: solved.inverterCurrent,
     capacitor: solved.capacitorCurrent,
@@ -164,6 +180,7 @@ export function filteredPhase(
         );
   return {
     inverterSamples,
+    loadSamples,
     output:
       outputName === null
         ? null
@@ -279,8 +296,8 @@ function outputThdUpperBound(
  * i_tail = (Φ − Φ_N)/(ω·L), with Φ the bridge voltage's running integral (exact, piecewise
  * linear) and Φ_N its harmonics to N (v = L·di/dt, standard circuit analysis). Its mean square
  * is (Var Φ − Σ_{n≤N} (V_n/n)²/2)/(ωL)² by Parseval. Returned as the inverter phasors to N with
- * those of −Φ_N/(ωL) added (`added`), the samples of (Φ − mean Φ)/(ωL) on the S angles 2πj/S,
- * and that mean square. Null for damping across the inductor, whose series branch is not
+ * those of −Φ_N/(ωL) added (`added`), the samples of (Φ − mean Φ)/(ωL) on the S angles 2πj/S
+ * (read when asked for), and that mean square. Null for damping across the inductor, whose series branch is not
  * inductive at high frequency, and when N is not ten times past the LC resonance (the sum to N
  * is used as it is there).
  * @param inverter - the inverter current's phasors to N at least
@@ -291,7 +308,7 @@ function switchingTail(
   bridge: HarmonicPhasors,
   inverter: HarmonicPhasors,
   context: { count: number; filter: OutputNetwork['filter']; omega: number; size: number },
-): { added: HarmonicPhasors; samples: Float64Array; meanSquare: number } | null {
+): { added: HarmonicPhasors; samples: () => Float64Array; meanSquare: number } | null {
   const { count, filter, omega, size } = context;
   if (filter === null || filter.dampingPlacement === 'parallel-with-inductor') return null;
   // Only valid well past the resonance, where the shunt branch shorts the load out.
@@ -312,12 +329,15 @@ function switchingTail(
   }
   re[0] = inverter.re[0] as number;
   im[0] = inverter.im[0] as number;
-  // Φ at the S angles, turned into (Φ − mean Φ)/(ωL) where it lies.
-  const samples = integral.at(size);
-  for (let j = 0; j < size; j++) samples[j] = ((samples[j] as number) - integral.mean) / reactance;
   return {
     added: { re, im },
-    samples,
+    samples: () => {
+      // Φ at the S angles, turned into (Φ − mean Φ)/(ωL) where it lies.
+      const samples = integral.at(size);
+      for (let j = 0; j < size; j++)
+        samples[j] = ((samples[j] as number) - integral.mean) / reactance;
+      return samples;
+    },
     meanSquare: Math.max(0, integral.variance - heldVariance) / (reactance * reactance),
   };
 }
@@ -409,4 +429,14 @@ function currentExtremes(
     capacitor: { peak: cPeak, rippleLow: cLow, rippleHigh: cHigh },
     load: { peak: lPeak, rippleLow: lLow, rippleHigh: lHigh },
   };
+}
+
+/** −(a + b) sample by sample (null when either is null). */
+function negatedSum(a: Float64Array, b: Float64Array): Float64Array;
+function negatedSum(a: Float64Array | null, b: Float64Array | null): Float64Array | null;
+function negatedSum(a: Float64Array | null, b: Float64Array | null): Float64Array | null {
+  if (a === null || b === null) return null;
+  const sum = new Float64Array(a.length);
+  for (let j = 0; j < a.length; j++) sum[j] = -((a[j] as number) + (b[j] as number));
+  return sum;
 }
