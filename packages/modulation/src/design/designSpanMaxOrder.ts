@@ -20,8 +20,9 @@ const MAX_FILTERED_SPAN_ORDERS = 20_000;
  * MAX_ASYNCHRONOUS_COST (as `asynchronousDesignSpectra`), q·maxOrder to what `harmonics` sums,
  * and maxOrder to 5000: min(5000, 100000/q, 2e7/(p·q)). With a filter its network is solved to
  * the span order q·max(maxOrder, ⌈10·p/q⌉ + 10) (`spanFilterOrder`, the one-period report's
- * 10·mf + 10) and its currents summed there, so the bound is min(5000, 20000/q, 2e7/(p·q)) and
- * must reach that order (a grid without a filter is bounded as no filter). The API's cost model
+ * 10·mf + 10) and its currents summed there, so that order may reach min(20000/q, 2e7/(p·q)) and
+ * must, and maxOrder is bounded by min(5000, that) (a grid without a filter is bounded as no
+ * filter). The API's cost model
  * asks it too, so a span is refused with the same words before the report starts.
  * @throws ParameterRangeError naming `carrierFrequency` when that bound is below 50 (the span
  *   costs too much for the limit table's orders), or with a filter below ⌈10·p/q⌉ + 10
@@ -30,13 +31,14 @@ export function designSpanMaxOrder(design: InverterDesign, span: RationalRatio):
   const { p, q } = span;
   const frequency = design.fundamentalFrequency;
   const filtered = design.filter !== undefined && design.filter !== null;
-  const bound = Math.min(
-    5000,
+  // The most orders (in fundamentals) the span's sums may reach.
+  const analysisBound = Math.min(
     Math.floor((filtered ? MAX_FILTERED_SPAN_ORDERS : MAX_HARMONIC_ORDER) / q),
     Math.floor(MAX_ASYNCHRONOUS_COST / (p * q)),
   );
+  const bound = Math.min(5000, analysisBound);
   const required = spanFilterOrder(span);
-  if (filtered && bound < Math.max(MIN_REPORT_ORDER, required))
+  if (filtered && analysisBound < Math.max(MIN_REPORT_ORDER, required))
     throw new ParameterRangeError(
       'carrierFrequency',
       `a whole multiple of fundamentalFrequency ${frequency} Hz, or for a design with a filter a ratio p/q whose span solves the filter to order ⌈10·p/q⌉ + 10 within q·order ≤ ${MAX_FILTERED_SPAN_ORDERS} and p·q·order ≤ ${MAX_ASYNCHRONOUS_COST} (its nearest with q ≤ 64 is ${p}/${q}: order ${required} over ${q} periods costs too much)`,

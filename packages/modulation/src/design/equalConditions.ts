@@ -58,7 +58,7 @@ export interface EqualConditionCandidateResult {
    * The factor applied: the new carrier over the given one (1 when not adjusted). Where the
    * report spans a carrier that is no whole multiple of the fundamental, the wanted factor to
    * within 0.1 % (mf a fraction p/q with few periods q); for a
-   * multilevel design or one with a filter or grid, after rounding to a whole mf.
+   * multilevel design, after rounding to a whole mf.
    */
   factor: number;
   /** Why the carrier was left as given (no carrier, no figure, mf out of range); null when adjusted or at equal carrier. */
@@ -79,16 +79,17 @@ export interface EqualConditionResult {
  * frequency is multiplied by the reference's figure over its own (average device switching
  * frequency, or switching loss), its ratio mf to the fundamental kept within 1 to
  * {@link MAX_DESIGN_FREQUENCY_RATIO}. A sine-triangle, three-phase carrier or space-vector design
- * without a filter or grid keeps the scaled carrier as asked: its report spans a ratio p/q over q
+ * (with a filter or grid too) keeps the scaled carrier as asked: its report spans a ratio p/q over q
  * fundamental periods (`designCarrierSpan`), so mf is set to the fraction with the fewest
  * periods q that lies within {@link SCALED_CARRIER_TOLERANCE} (0.1 %) of the scaled ratio
  * (continued fractions, `bestRationalApproximation`; the q ≤ 64 nearest where none does, below
  * mf 16). Fractions of denominator ≤ N leave no gap wider than 1/N (Farey sequences, a fact of
  * number theory), so q ≤ min(64, 1000/mf + 1) and the span's p·q stays below about 7·10⁴, far
- * inside the report's cost bound (`designSpanMaxOrder`, p·q ≤ 4·10⁵) and cheap to report; the
+ * inside the report's cost bound (`designSpanMaxOrder`, p·q ≤ 4·10⁵; with a filter ⌈10·p/q⌉ + 10
+ * span orders within q·order ≤ 20000 and p·q·order ≤ 2·10⁷, which p ≤ 1000 + mf meets) and cheap to report; the
  * conditions themselves hold only to a few per cent (the clamps' partial periods, the ripple's
  * effect on the edge currents). A multilevel
- * design, or one with a filter or grid, whose report needs a whole mf, is rounded to one, so its
+ * design, whose report needs a whole mf, is rounded to one, so its
  * `factor` may differ from `wantedFactor` by up to half an mf step.
  *
  * Both figures are proportional to the carrier frequency in the model, which is why one scaling
@@ -179,8 +180,7 @@ export function equalConditions(
         );
       const wantedFactor = target / figure;
       const mf = carrier / design.fundamentalFrequency;
-      const spans =
-        ASYNCHRONOUS_METHODS.includes(design.modulation.method) && !design.filter && !design.grid;
+      const spans = ASYNCHRONOUS_METHODS.includes(design.modulation.method);
       const wanted = Math.max(1, mf * wantedFactor);
       const scaled = spans ? wanted : Math.round(wanted);
       if (scaled > MAX_DESIGN_FREQUENCY_RATIO)

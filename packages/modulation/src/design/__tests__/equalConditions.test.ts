@@ -87,7 +87,8 @@ describe('equalConditions', () => {
     // each candidate's sets the wanted factor. Fractions of denominator ≤ N leave no gap wider
     // than 1/N (Farey sequences, a fact of number theory), so the fewest periods within 0.1 % are
     // at most ⌈1000/mf⌉ (or 64) and p·q ≤ (1000 + mf)²/mf, below 7e4: inside the report's bound
-    // (designSpanMaxOrder, p·q ≤ 4e5), which must not refuse it.
+    // (designSpanMaxOrder, p·q ≤ 4e5), which must not refuse it, with a filter either (its span
+    // solved to ⌈10·p/q⌉ + 10 orders within q·order ≤ 20000 and p·q·order ≤ 2e7).
     const design = drive('none', 1);
     const reference = {
       design,
@@ -116,19 +117,25 @@ describe('equalConditions', () => {
       expect(span.q).toBeLessThanOrEqual(Math.min(64, Math.ceil(1000 / wanted)));
       expect(span.p * span.q).toBeLessThan(70_000);
       expect(() => designSpanMaxOrder(kept?.design as InverterDesign, span)).not.toThrow();
+      const filtered = { ...(kept?.design as InverterDesign), filter: { l: 1e-3, c: 1e-5 } };
+      expect(() => designSpanMaxOrder(filtered, span), `mf ${wanted}`).not.toThrow();
     }
   });
 
-  it('a design with a filter, whose report needs a whole mf, is still rounded to one', () => {
-    // The filtered report is solved per harmonic of one period (analyseDesign): mf whole, so the
-    // realised factor differs from the wanted one by up to half an mf step.
+  it('a design with a filter keeps its scaled carrier too: its report spans p/q through the filter', () => {
+    // The filtered report is solved component by component over the span (analyseDesignSpan),
+    // so DPWM1 at 1.5× is kept within 0.1 % as without a filter, and reported over its span.
     const filter = { l: 0.002, c: 10e-6, rDamping: 2 };
     const spwm = candidate({ ...drive('none'), filter });
     const dpwm = candidate({ ...drive('dpwm1'), filter });
     const result = equalConditions([spwm, dpwm], { condition: 'equal-device-frequency' });
     const b = result.candidates[1];
-    expect(b?.carrierFrequency).toBe(Math.round(99 * (b?.wantedFactor ?? 0)) * f1);
-    expect(designCarrierSpan(b?.design as InverterDesign)).toBeNull();
+    assertInDelta(b?.factor ?? 0, b?.wantedFactor ?? 0, 1e-3 * (b?.wantedFactor ?? 0), 'kept');
+    const span = designCarrierSpan(b?.design as InverterDesign);
+    expect(span?.q).toBeGreaterThan(1);
+    const report = analyseDesign(b?.design as InverterDesign);
+    expect(report.carrierSpan?.q).toBe(span?.q);
+    expect(report.output).not.toBeNull();
   });
 
   it('equal carrier leaves every design as it is; patterns and missing figures are noted, not scaled', () => {
