@@ -60,7 +60,7 @@ export function ComparePage() {
               <p className="max-w-xl text-xs text-ink-soft">
                 {condition === 'equal-carrier'
                   ? 'Each study at the carrier it was designed with.'
-                  : `Each carrier scaled so that its ${condition === 'equal-device-frequency' ? 'average device switching frequency' : 'switching loss'} equals the first study's${studied[0] ? ` (${studied[0].study.name})` : ''}, kept as scaled (mf a fraction p/q, reported over its q periods; rounded to a whole mf with a filter, a grid or a multilevel method); the figures are those of the adjusted designs. Switching loss is proportional to the carrier frequency in the loss model.`}
+                  : `Each carrier scaled so that its ${condition === 'equal-device-frequency' ? 'average device switching frequency' : 'switching loss'} equals the first study's${studied[0] ? ` (${studied[0].study.name})` : ''}, kept as scaled (mf a fraction p/q, reported over its q periods; rounded to a whole mf with a multilevel method); the figures are those of the adjusted designs. Switching loss is proportional to the carrier frequency in the loss model.`}
               </p>
             </div>
           ) : null}
