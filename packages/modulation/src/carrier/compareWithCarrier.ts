@@ -144,8 +144,12 @@ function pushNaturalHalfPeriod(
   const points = searchGrid(reference, start, end);
   // Every grid point is a candidate edge: at a breakpoint the reference may jump, so the sign
   // is read just inside each piece (4 ulp in) and the piece's own crossing found by Brent.
-  const candidates: number[] = [...points];
-  for (let k = 0; k + 1 < points.length; k++) {
+  // Brent's root stays inside its bracket [a, b], within the piece, so the candidates are
+  // gathered in ascending order: each grid point, then its piece's crossing if any.
+  const candidates: number[] = [];
+  for (let k = 0; k < points.length; k++) {
+    candidates.push(points[k] as number);
+    if (k + 1 === points.length) break;
     const a = insideFrom(points[k] as number, 1);
     const b = insideFrom(points[k + 1] as number, -1);
     if (!(b > a)) continue;
@@ -155,7 +159,6 @@ function pushNaturalHalfPeriod(
       candidates.push(findBracketedRoot(difference, a, b, fa, fb));
     }
   }
-  candidates.sort((x, y) => x - y);
   // The level of each piece between candidates is read at its midpoint, so a crossing found
   // exactly at a grid point or a tangency cannot flip the sense; equal neighbours merge later.
   for (let k = 0; k + 1 < candidates.length; k++) {
@@ -210,6 +213,7 @@ function searchGrid(reference: ReferenceSignal, start: number, end: number): num
   const width = end - start;
   const pieces = Math.max(1, Math.ceil(reference.slopeBound * width));
   const points: number[] = [];
+  // Ascending as built (k·width/pieces never decreases with k): sorted only when a breakpoint joins.
   for (let k = 0; k <= pieces; k++) points.push(start + (k * width) / pieces);
   for (const breakpoint of reference.breakpoints ?? []) {
     // Breakpoints are given in [0, 2π); the half period may lie in the next fundamental period.
@@ -217,5 +221,5 @@ function searchGrid(reference: ReferenceSignal, start: number, end: number): num
       if (shifted > start && shifted < end) points.push(shifted);
     }
   }
-  return points.sort((a, b) => a - b);
+  return points.length > pieces + 1 ? points.sort((a, b) => a - b) : points;
 }
