@@ -215,9 +215,13 @@ function searchGrid(reference: ReferenceSignal, start: number, end: number): num
   const points: number[] = [];
   // Ascending as built (k·width/pieces never decreases with k): sorted only when a breakpoint joins.
   for (let k = 0; k <= pieces; k++) points.push(start + (k * width) / pieces);
-  for (const breakpoint of reference.breakpoints ?? []) {
+  const breakpoints = reference.breakpoints ?? [];
+  for (let i = 0; i < breakpoints.length; i++) {
     // Breakpoints are given in [0, 2π); the half period may lie in the next fundamental period.
-    for (const shifted of [breakpoint - TAU, breakpoint, breakpoint + TAU]) {
+    // Its copies a period before, itself and a period after, in that order.
+    for (let copy = -1; copy <= 1; copy++) {
+      const breakpoint = breakpoints[i] as number;
+      const shifted = copy === 0 ? breakpoint : copy < 0 ? breakpoint - TAU : breakpoint + TAU;
       if (shifted > start && shifted < end) points.push(shifted);
     }
   }

@@ -71,8 +71,12 @@ export function modulationVoltages(
     }
     case 'three-phase': {
       const { method: _method, ...options } = modulation;
-      const { legs } = threePhase(options, span);
-      return threePhaseVoltages([legs.a, legs.b, legs.c]);
+      const { legs, lineToLine } = threePhase(options, span);
+      return threePhaseVoltages([legs.a, legs.b, legs.c], undefined, [
+        lineToLine.ab,
+        lineToLine.bc,
+        lineToLine.ca,
+      ]);
     }
     case 'space-vector': {
       const { method: _method, ...options } = modulation;
@@ -124,9 +128,16 @@ function singlePhase(name: string, waveform: Waveform): ModulationVoltages {
   return { phaseCount: 1, phases: [{ name, waveform }], legs: [], lines: [] };
 }
 
+/**
+ * Three legs in star: each phase to the star point (2·v_k − v_k+1 − v_k+2)/3 and each line
+ * v_k − v_k+1, combined exactly.
+ * @param lines - the lines a−b, b−c, c−a when the modulator has combined them already (the
+ *   same `combineWaveforms` difference), so they are not combined twice
+ */
 function threePhaseVoltages(
   legs: [Waveform, Waveform, Waveform],
   legName = (phase: string): string => `leg ${phase} to DC midpoint`,
+  lines?: readonly [Waveform, Waveform, Waveform],
 ): ModulationVoltages {
   const at = (k: number): Waveform => legs[((k % 3) + 3) % 3] as Waveform;
   return {
@@ -142,10 +153,9 @@ function threePhaseVoltages(
     })),
     lines: PHASE_NAMES.map((p, k) => ({
       name: `line ${p}−${PHASE_NAMES[(k + 1) % 3]}`,
-      waveform: combineWaveforms(
-        [at(k), at(k + 1)],
-        (levels) => (levels[0] ?? 0) - (levels[1] ?? 0),
-      ),
+      waveform:
+        lines?.[k] ??
+        combineWaveforms([at(k), at(k + 1)], (levels) => (levels[0] ?? 0) - (levels[1] ?? 0)),
     })),
   };
 }
