@@ -2,10 +2,13 @@
  * A fixed carrier that is not a whole multiple of the fundamental (issue 12, capability 5), in the
  * browser. The design report takes it for sine-triangle, three-phase carrier and space vector:
  * the study form states p/q and the span, the editor's report says what it covers, a saved study
- * shows its ratio in Compare and in the printed report. With a filter the report still needs a
- * whole mf, and the "Carrier as typed" panel gives the spectra at the carrier typed.
+ * shows its ratio in Compare and in the printed report. With a filter or a grid the report spans
+ * it too (issue 12 items 5-6: a grid-tied design at 60 Hz with a 10 kHz carrier, 500/3); where
+ * the filter's span costs too much the carrier field says so and the "Carrier as typed" panel
+ * gives the spectra at the carrier typed.
  * Screenshots: tests/e2e/screenshots/asynchronous-carrier.png, fixed-carrier-editor.png,
- * fixed-carrier-compare.png, fixed-carrier-report.png.
+ * fixed-carrier-compare.png, fixed-carrier-report.png, grid-span-editor.png, grid-span-groups.png,
+ * grid-span-compare.png, grid-span-report.png.
  */
 import type { Page } from 'playwright-core';
 import type { Scenario } from './dashboard.e2e.js';
@@ -23,7 +26,7 @@ const descriptionOf = async (page: Page, label: RegExp): Promise<string> => {
 
 export const scenarios: Scenario[] = [
   {
-    name: 'asynchronous carrier: 70 Hz at 30 Hz is reported as 7/3 over three periods; with a filter the panel analyses it',
+    name: 'asynchronous carrier: 70 Hz at 30 Hz is reported as 7/3 over three periods, with a filter too; a costly filtered span goes to the panel',
     async run(context) {
       const page = await context.browser.newPage({ viewport: { width: 1400, height: 900 } });
       page.setDefaultTimeout(15_000);
@@ -43,13 +46,26 @@ export const scenarios: Scenario[] = [
         `the carrier field states p/q and the span (got "${hint}")`,
       );
       await page.getByText('Modulator and bridge voltage over 3 fundamental periods').waitFor();
-      // With a filter the report needs a whole mf: the panel analyses the carrier as typed.
+      // With a filter the report spans it too: the filter's output over the three periods.
       await page.getByLabel('Include an LC output filter').check();
+      await page.getByText('Modulator and bridge voltage over 3 fundamental periods').waitFor();
+      const filtered = await descriptionOf(page, /^Carrier frequency/);
+      assert(
+        filtered.includes('mf = 7/3'),
+        `with a filter the carrier field still states p/q (got "${filtered}")`,
+      );
+      // 3000 Hz at 37 Hz through the filter (821 orders over 37 periods) costs too much: the
+      // library's words on the carrier field, and the panel analyses the carrier as typed.
+      await box(page, /^Fundamental frequency/).fill('37');
+      await box(page, /^Carrier frequency/).fill('3000');
       const panel = page.getByRole('region', { name: 'Carrier as typed' });
       await panel.getByRole('button', { name: 'Analyse at this carrier' }).click();
-      await panel.getByTestId('async-ratio').getByText('7/3').waitFor();
-      const table = panel.getByRole('table', { name: 'Sub-harmonics and largest components' });
-      await table.getByRole('cell', { name: '1/3', exact: true }).waitFor();
+      await panel.getByTestId('async-ratio').getByText('3000/37').waitFor();
+      const refused = await descriptionOf(page, /^Carrier frequency/);
+      assert(
+        refused.includes('or for a design with a filter a ratio p/q'),
+        `the carrier field gives the library's refusal (got "${refused}")`,
+      );
       await panel.scrollIntoViewIfNeeded();
       await screenshot(page, 'asynchronous-carrier');
       await page.close();
@@ -115,6 +131,87 @@ export const scenarios: Scenario[] = [
         .first()
         .waitFor();
       await screenshot(page, 'fixed-carrier-report');
+      await page.close();
+    },
+  },
+  {
+    name: 'a grid-tied design at 60 Hz with a 10 kHz carrier: saved, reported over 3 periods through its LCL, limits on harmonic groups, compared and printed with mf 500/3',
+    async run(context) {
+      const page = await context.browser.newPage({ viewport: { width: 1400, height: 1000 } });
+      page.setDefaultTimeout(60_000);
+      context.lastPage = page;
+      await signIn(page, context.baseUrl, 'engineer@kestrel.example');
+      await page.goto(`${context.baseUrl}/studies/new`);
+      const name = `E2E grid 60 Hz at 10 kHz ${Date.now()}`;
+      await page.getByLabel('Name', { exact: true }).fill(name);
+      await page.getByLabel('Method').selectOption('three-phase');
+      await box(page, /^DC bus/).fill('700');
+      await box(page, /^Fundamental frequency/).fill('60');
+      await box(page, /^Carrier frequency/).fill('10000');
+      await page.getByLabel('Include an LC output filter').check();
+      await box(page, /^Filter C/).fill('10');
+      await box(page, /^Damping R/).fill('2');
+      await page.getByLabel(/Feed a grid instead of the load/).check();
+      await box(page, /^Grid voltage/).fill('400');
+      const note = page.getByTestId('carrier-span');
+      await note.getByText(/mf = 500\/3/).waitFor();
+      const text = (await note.textContent()) ?? '';
+      assert(
+        text.includes('3 fundamental periods (500 carrier cycles)'),
+        `the report states its span (got "${text}")`,
+      );
+      await page.getByRole('button', { name: 'Create study' }).click();
+      await page.waitForURL(/\/studies\/[0-9a-f-]{36}$/);
+      const id = page.url().split('/').pop() ?? '';
+      await page.getByText(/Saved revision on the server: THD/).waitFor();
+      const verdict = (await page.getByTestId('grid-verdict').textContent()) ?? '';
+      assert(verdict.includes('IEEE Std 519'), `the grid verdict is shown (got "${verdict}")`);
+      await page.getByText('Modulator and bridge voltage over 3 fundamental periods').waitFor();
+      await screenshot(page, 'grid-span-editor');
+      const grouping = page.getByTestId('grid-grouping');
+      await grouping.locator('summary').click();
+      const groups = grouping.getByRole('table', { name: 'Harmonic groups' });
+      await groups.waitFor();
+      const rows = await groups.locator('tbody tr').count();
+      assert(rows === 50, `groups 1 to 50 are listed (got ${rows})`);
+      const fifth = (await groups.locator('tbody tr').nth(4).textContent()) ?? '';
+      assert(
+        fifth.includes('4.667') && fifth.includes('5.333'),
+        `group 5 took the components at 14/3 and 16/3 (got "${fifth}")`,
+      );
+      const summary = (await grouping.locator('summary').textContent()) ?? '';
+      assert(
+        summary.includes('IEC 61000-4-7, from memory; confirm with the standard and the utility'),
+        `the grouping names its rule's source and the caution (got "${summary}")`,
+      );
+      await grouping.scrollIntoViewIfNeeded();
+      await screenshot(page, 'grid-span-groups');
+
+      const listed = (await (
+        await fetch(`${context.baseUrl}/api/v1/studies`, {
+          headers: {
+            Authorization: `Bearer ${await page.evaluate<string | null>('sessionStorage.getItem("pulsewright.session")')}`,
+          },
+        })
+      ).json()) as { id: string; name: string }[];
+      const other = listed.find((s) => s.id !== id);
+      assert(other, 'a second study to compare with');
+      await page.goto(`${context.baseUrl}/compare?ids=${id},${other.id}`);
+      const mf = page.locator(`tr[data-study="${name}"] [data-column="mf"]`);
+      await mf.waitFor();
+      const ratio = (await mf.textContent())?.trim();
+      assert(ratio === '500/3', `Compare shows mf 500/3 (got ${ratio})`);
+      await screenshot(page, 'grid-span-compare');
+
+      await page.goto(`${context.baseUrl}/studies/${id}/report`);
+      await page.getByText('Pulsewright study report').waitFor();
+      await page.getByTestId('carrier-span').waitFor();
+      await page
+        .getByText(/mf 500\/3 ≈ 166\.667/)
+        .first()
+        .waitFor();
+      await page.getByTestId('grid-verdict').waitFor();
+      await screenshot(page, 'grid-span-report');
       await page.close();
     },
   },

@@ -74,13 +74,6 @@ const BREAKAGES: Breakage[] = [
     restore: '81',
   },
   {
-    label: /^Carrier frequency/,
-    typed: '4075',
-    message:
-      'Carrier frequency 4075 Hz is 81.5 times the fundamental, 50 Hz: with a filter or grid the design report takes a whole multiple (1 to 1000 times), the nearest being mf = 82 (4100 Hz), so set that to save the study; the panel "Carrier as typed" analyses 4075 Hz as it is',
-    restore: '4050',
-  },
-  {
     label: /^Fundamental frequency/,
     typed: '0',
     message: 'Fundamental frequency must be from 0.001 to 100,000 Hz (entered 0 Hz)',
