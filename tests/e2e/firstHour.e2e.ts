@@ -70,7 +70,8 @@ const BREAKAGES: Breakage[] = [
   {
     label: /^Frequency ratio mf/,
     typed: '0.5',
-    message: 'Frequency ratio mf must be a whole number from 1 to 1,000 (entered 0.5)',
+    // Any ratio from 1 is analysed over its span (with this design's filter too): 0.5 is below.
+    message: 'Frequency ratio mf must be from 1 to 1,000 (entered 0.5)',
     restore: '81',
   },
   {
