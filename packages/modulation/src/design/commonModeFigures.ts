@@ -30,8 +30,10 @@ export function commonModeFigures(
     legs,
     (levels) => ((levels[0] ?? 0) + (levels[1] ?? 0) + (levels[2] ?? 0)) / 3,
   );
-  // Levels are sums of ±vdc/2 thirds: round away the last bits so equal levels compare equal.
-  const levels = [...new Set(waveform.levels.map((level) => Number(level.toPrecision(12))))].sort(
+  // Levels are sums of ±vdc/2 thirds: round away the last bits so equal levels compare equal,
+  // each distinct level once (a few levels recur at every one of hundreds of edges).
+  const distinct = [...new Set(waveform.levels)];
+  const levels = [...new Set(distinct.map((level) => Number(level.toPrecision(12))))].sort(
     (x, y) => x - y,
   );
   const steps = waveform.edges.length;

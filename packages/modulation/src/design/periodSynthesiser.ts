@@ -38,6 +38,8 @@ export function periodSynthesiser(size: number, fft: FFT = new FFT(size)): Perio
   const input = new Float64Array(2 * size);
   const output = new Float64Array(2 * size);
   const sine = new Float64Array(size);
+  // The highest order the last call wrote into `input` (its other entries are zero).
+  let written = 0;
   // fft.js's table holds cos(2πk/S) and −sin(2πk/S) at 2k, 2k + 1: no trigonometry of our own.
   const table = fft.table as number[];
   for (let k = 0; k < size; k++) sine[k] = -(table[2 * k + 1] as number);
@@ -46,9 +48,15 @@ export function periodSynthesiser(size: number, fft: FFT = new FFT(size)): Perio
     second: HarmonicPhasors | null,
     count: number,
   ): [Float64Array, Float64Array | null] => {
-    input.fill(0);
     const highest = count - 1;
     if (2 * highest + 2 > size) throw new RangeError(`order ${highest} aliases at ${size} samples`);
+    // Every order up to `highest` is written below: only the last call's orders above it are
+    // cleared, not the whole buffer.
+    if (written > highest) {
+      input.fill(0, 2 * highest + 2, 2 * written + 2);
+      input.fill(0, 2 * (size - written), 2 * (size - highest));
+    }
+    written = highest;
     const zeros = new Float64Array(count);
     const { re: xRe, im: xIm } = first;
     const { re: yRe, im: yIm } = second ?? { re: zeros, im: zeros };

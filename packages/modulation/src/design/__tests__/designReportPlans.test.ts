@@ -83,4 +83,23 @@ describe('designReportPlans', () => {
       assertInDelta(x[j] as number, expected, 1e-12);
     }
   });
+
+  it('leaves none of a longer series behind in a shorter one on the same synthesiser', () => {
+    // First 20 orders of a square-wave-like spectrum (1/n at odd n), then a single order 2 on
+    // the same transform: the second must be that sinusoid alone (direct evaluation).
+    const size = 64;
+    const synthesiser = designReportPlans().synthesiser(size);
+    const longRe = Float64Array.from({ length: 20 }, (_, n) => (n % 2 === 1 ? 1 / n : 0));
+    synthesiser.pair({ re: longRe, im: new Float64Array(20) }, { re: longRe, im: longRe }, 20);
+    const [x, y] = synthesiser.pair(
+      { re: Float64Array.from([0, 0, 3]), im: Float64Array.from([0, 0, 0]) },
+      { re: Float64Array.from([1, 0, 0]), im: Float64Array.from([0, 0, 0]) },
+      3,
+    );
+    for (let j = 0; j < size; j++) {
+      const theta = (TAU * j) / size;
+      assertInDelta(x[j] as number, 3 * Math.sin(2 * theta), 1e-12);
+      assertInDelta((y as Float64Array)[j] as number, 1, 1e-12);
+    }
+  });
 });
