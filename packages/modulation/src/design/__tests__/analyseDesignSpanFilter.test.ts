@@ -168,6 +168,21 @@ describe('a carrier span with an LC filter or a grid (issue 12 items 5 and 6)', 
     }
   });
 
+  it('the filter’s gain and the LCL resonance are read at the carrier analysed, p/q·f₁', () => {
+    // Voltage divider at 10 kHz (circuit theory) and the LCL resonance
+    // (1/2π)·√((L1 + L2')/(L1·L2'·C)), L2' = l2 + l (Liserre, Blaabjerg and Hansen, 2005).
+    const w = TAU * 10_000;
+    const zc: C = [0, -1 / (w * 10e-6)];
+    const zl: C = [5, w * 1e-3];
+    const zp = div(mul(zc, zl), add(zc, zl));
+    close(lc.filter?.gainAtCarrier ?? NaN, abs(div(zp, add([0, w * 1e-3], zp))), 1e-12, 'gain');
+    const l2p = l2 + gridL;
+    const resonance = Math.sqrt((l1 + l2p) / (l1 * l2p * c)) / TAU;
+    const r = grid.grid?.resonance;
+    close(r?.frequency ?? NaN, resonance, 1e-12, 'resonance');
+    close(r?.carrierRatio ?? NaN, 10_000 / resonance, 1e-12, 'carrier over resonance');
+  });
+
   it('Parseval over the span: each current’s rms is its samples’ over the q periods', () => {
     // The load current's series holds 16384 evenly spaced samples of the span (16 a cycle of
     // its highest order), so their mean square equals the sum of its components' (discrete
