@@ -247,6 +247,45 @@ describe('a carrier span with an LC filter or a grid (issue 12 items 5 and 6)', 
     }
   });
 
+  it('splits a midway component between two groups: bipolar PWM at 35/2 into a grid', () => {
+    // A single-phase bipolar bridge at 60 Hz with a 1050 Hz carrier (mf 35/2, two periods) has
+    // its carrier sidebands at half orders, midway between harmonics: each gives half its square
+    // to either neighbour (IEC 61000-4-7's harmonic group, from memory).
+    const report = analyseDesign(
+      {
+        vdc: 400,
+        fundamentalFrequency: 60,
+        carrierFrequency: 1050,
+        modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8 },
+        filter: { l: 3e-3, c: 5e-6, rDamping: 3 },
+        grid: { lineVoltage: 230, phase: -0.2, r: 0.1, l: 0.5e-3, l2: 1e-3 },
+      },
+      { maxOrder: 60, points: 256 },
+    );
+    expect(report.carrierSpan).toMatchObject({ p: 35, q: 2 });
+    const g = report.grid as NonNullable<DesignReport['grid']>;
+    const spectrum = g.gridCurrentSpectrum;
+    const amplitude = (n: number): number => spectrum[n]?.amplitude ?? 0;
+    const reference = g.gridCurrentFundamental;
+    let largest = 0;
+    for (let h = 2; h <= 50; h++) {
+      const expected = Math.sqrt(
+        amplitude(2 * h) ** 2 + (amplitude(2 * h - 1) ** 2 + amplitude(2 * h + 1) ** 2) / 2,
+      );
+      const group = g.harmonicGrouping?.groups[h - 1];
+      close(group?.amplitude ?? NaN, expected, 1e-12, `group ${h}`);
+      expect(group?.grouped.map((x) => [x.order, x.share])).toEqual([
+        [h - 0.5, 0.5],
+        [h + 0.5, 0.5],
+      ]);
+      const row = g.limits.ieee1547.table.find((r) => r.order === h);
+      close(row?.ratio ?? NaN, expected / reference, 1e-12, `1547 row ${h}`);
+      largest = Math.max(largest, amplitude(2 * h - 1), amplitude(2 * h + 1));
+    }
+    // The half-order sidebands near the carrier (17.5 ± k) carry real current into the grid.
+    expect(largest / reference).toBeGreaterThan(1e-3);
+  });
+
   it('bounds the filtered span by its cost and refuses a costly one naming carrierFrequency', () => {
     // 500/3 with a filter: min(5000, 20000/3, 2e7/1500) = 5000, past ⌈5000/3⌉ + 10 = 1677.
     expect(designSpanMaxOrder(gridDesign, designCarrierSpan(gridDesign) as RationalRatio)).toBe(
