@@ -136,9 +136,11 @@ export function reportFigures(report: StudyReport): Figure[] {
       label: 'Grid current THD',
       value: formatPercent(grid.gridCurrentThd),
       tone: ieee519.pass && ieee1547.pass ? 'good' : 'bad',
-      note: `phase a; ${verdict(ieee519.pass)} ${ieee519.standard.name}-${ieee519.standard.edition}, ${verdict(ieee1547.pass)} ${ieee1547.standard.name}-${ieee1547.standard.edition} (limits recalled from memory)${
-        grid.resonance ? `; LCL resonance ${formatNumber(grid.resonance.frequency)} Hz` : ''
-      }`,
+      note: `phase a; ${verdict(ieee519.pass)} ${ieee519.standard.name}-${ieee519.standard.edition}, ${verdict(ieee1547.pass)} ${ieee1547.standard.name}-${ieee1547.standard.edition} (limits recalled from memory${
+        grid.harmonicGrouping
+          ? '; read on IEC 61000-4-7 harmonic groups of the span’s components, from memory: confirm with the standard and the utility'
+          : ''
+      })${grid.resonance ? `; LCL resonance ${formatNumber(grid.resonance.frequency)} Hz` : ''}`,
     });
   }
   figures.push({

@@ -26,6 +26,17 @@ describe('reportFigures with a grid', () => {
     expect(figures.some((f) => f.label === 'Load current')).toBe(false);
   });
 
+  it('says a span’s limits were read on harmonic groups (60 Hz at 10 kHz: 500/3), and a whole mf’s not', () => {
+    const report = analyseDesign({ ...design, fundamentalFrequency: 60 }, { points: 256 });
+    expect(report.carrierSpan?.q).toBe(3);
+    const note = reportFigures(report).find((f) => f.label === 'Grid current THD')?.note;
+    expect(note).toContain(
+      'read on IEC 61000-4-7 harmonic groups of the span’s components, from memory: confirm with the standard and the utility',
+    );
+    const whole = reportFigures(analyseDesign(design, { points: 256 }));
+    expect(whole.find((f) => f.label === 'Grid current THD')?.note).not.toContain('IEC 61000-4-7');
+  });
+
   it('has no grid card without a grid', () => {
     const { grid: _grid, ...alone } = design;
     expect(reportFigures(analyseDesign(alone, { points: 256 })).map((f) => f.label)).not.toContain(
