@@ -30,8 +30,12 @@ export function networkPhasors(
 ): OutputNetworkTransfer {
   const { count, network, omega, emf, fundamentalOrder: first = 1 } = context;
   const scaled = (unit: HarmonicPhasors): HarmonicPhasors => {
-    const re = new Float64Array(count);
-    const im = new Float64Array(count);
+    // The result is built before the loop, not after it: V8 may compile this loop on the fly
+    // (on-stack replacement) before the code after it ever ran, and code there without type
+    // feedback then deoptimised it on every later call (measured: 12 times a report, in about
+    // half of the processes).
+    const product = { re: new Float64Array(count), im: new Float64Array(count) };
+    const { re, im } = product;
     for (let n = 0; n < count; n++) {
       const vr = bridge.re[n] as number;
       const vi = bridge.im[n] as number;
@@ -40,7 +44,7 @@ export function networkPhasors(
       re[n] = ur * vr - ui * vi;
       im[n] = ur * vi + ui * vr;
     }
-    return { re, im };
+    return product;
   };
   const solved: OutputNetworkTransfer = {
     output: scaled(transfer.output),
