@@ -134,6 +134,7 @@ const PUBLIC_NAMES = [
   'deadTimeCompensation',
   'deadTimeEffect',
   'defaultSpectrumOrder',
+  'describeGridConnection',
   'designCarrierSpan',
   'designFrequencyRatio',
   'designLclFilter',

@@ -5,6 +5,7 @@ export * from './assertInverterDesign.js';
 export * from './designFrequencyRatio.js';
 export * from './designRationalRatio.js';
 export * from './designCarrierSpan.js';
+export * from './describeGridConnection.js';
 export * from './designSpanMaxOrder.js';
 export * from './designSpanModulation.js';
 export * from './asynchronousDesignSpectra.js';
