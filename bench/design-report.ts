@@ -68,6 +68,36 @@
  * check (no difference: V8 inlines it), the DC link's angle by multiplication (no difference).
  * The 5 ms goal is not reached at spectra to 5000: what remains is the exact sums (E·N), the
  * transforms and the report's own labelled objects.
+ *
+ * Fourth round (each step bit-identical on the 40-design corpus, with and without plans, except
+ * the second, which moves figures by rounding only: 1e-14 of each figure's scale): the DC link's
+ * sampled current and the switching tail's running integral walk their waveforms' segments
+ * (firstGridSampleFrom) instead of testing an edge at each of 16384 samples; phase c's sampled
+ * currents of a filtered three-phase report are minus a's and b's (Kirchhoff at the star point),
+ * one synthesis transform and one tail sampling fewer; the carrier comparison builds its search
+ * grid and candidate edges in order instead of sorting them each half period (threePhase at mf
+ * 101: 454 → 358 µs); the line voltages are threePhase's own, not combined a second time
+ * (modulationVoltages 503 → 400 µs); the common-mode levels are rounded once each, not at every
+ * edge (2 % of a report); the synthesiser clears only what its last call wrote; networkPhasors
+ * builds its result before its loop (V8 compiled that loop by on-stack replacement before the
+ * code after it had type feedback and then deoptimised it at every later call, 12 times a
+ * report, in 6 of 10 processes; none after). All together, the round's start against its end as
+ * reports alternating in one process (300 each, four runs, both orders, machine load 3–7),
+ * median CPU ms: full report with plans, spectra to 5000: 6.41–8.29 → 5.83–7.63, 8–13 % less
+ * run by run (lower quartile 5.64–6.95 → 5.15–6.24); without plans 8.63–9.91 → 7.15–8.51; with
+ * plans at the default order 3.34–4.18 → 2.67–3.50 (16–20 % less); the spectrum alone the same
+ * in both (0.76–0.83). Instructions (callgrind, 40 reports
+ * with plans and the process's start-up and compilation): 16.2–19.0 → 11.8–13.6 G. Allocation
+ * per report 8.0 → 5.3 MB (sampling heap profile; 2.8 MB of it the five labelled spectra of the
+ * answer). Profile after (quiet moment): the legs' exact sums 11–14 %, the transforms 9–11 %
+ * (+2 % the DC link's real transform), labelling the five spectra 7–12 %, garbage collection
+ * 6–10 % (V8 pretenures the labelled objects' allocation sites in long runs, so old-space
+ * collections follow), the per-sample figures 4 %. Measured and left out: a faster atan2 path
+ * for the spectra's zero orders (atan2 of zeros is already fast: no difference). Seen and left:
+ * legLossesFromSamples and currentExtremes can fall into the same deoptimisation loop (their
+ * results are built after their loops from many sums; building them before would cost a store
+ * per sample), seen in 2 of 10 processes. The 5 ms goal is still not reached at spectra to 5000
+ * in the median under load (the lower quartile is near it); the default order is well under it.
  */
 import {
   analyseDesign,
