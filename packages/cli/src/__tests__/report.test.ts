@@ -114,6 +114,34 @@ describe('pulsewright report', () => {
     expect(run.stdout).toMatch(/limit check \(IEEE Std 519-2022/);
   });
 
+  it('prints a grid-tied design as one: the grid, its impedance and LCL, and each standard’s verdict on the grid current with the from-memory caution', async () => {
+    // Invented: a 400 V, 50 Hz grid fed from 700 V at 10 kHz through an LCL.
+    const design: InverterDesign = {
+      vdc: 700,
+      fundamentalFrequency: 50,
+      carrierFrequency: 10_000,
+      modulation: { method: 'three-phase', ma: 1, zeroSequence: 'third-harmonic' },
+      filter: { l: 2e-3, c: 10e-6, rDamping: 2 },
+      grid: { lineVoltage: 400, r: 0.05, l: 0.2e-3, l2: 0.5e-3 },
+    };
+    const run = await runCli(['report', '-'], { input: JSON.stringify({ design, maxOrder: 100 }) });
+    expect(run.code).toBe(0);
+    const { limits } = analyseDesign(design, { maxOrder: 100 }).grid!;
+    expect(run.stdout).toContain('grid connection:');
+    expect(run.stdout).toContain('Grid: 400 V rms line to line, 50 Hz');
+    // I_SC = V_ph/|r + jω₁l| = (400/√3)/|0.05 + j·0.06283| = 2876 A rms (hand-worked).
+    expect(run.stdout).toContain('R 0.05 Ω, L 0.2 mH; short-circuit current 2876 A rms');
+    // (1/2π)·√((L1 + L2')/(L1·L2'·C)) = 2210 Hz (Liserre, Blaabjerg and Hansen, 2005).
+    expect(run.stdout).toContain('L1 2 mH, C 10 µF, L2 0.5 mH; resonance 2210 Hz');
+    expect(run.stdout).toContain(
+      `IEEE Std 519-2022 (${limits.ieee519.row.label}, the row for generating equipment): ${limits.ieee519.pass ? 'within' : 'over'} the limits; TDD`,
+    );
+    expect(run.stdout).toContain(
+      `IEEE Std 1547-2018 (${limits.ieee1547.row.label}): ${limits.ieee1547.pass ? 'within' : 'over'} the limits; TRD`,
+    );
+    expect(run.stdout).toMatch(/caution: The current limits are .* recalled from memory/);
+  });
+
   it('gives byte-identical output for the same design (no timestamps)', async () => {
     const [first, second] = await Promise.all([
       runCli(['report', example('drive.json'), '--json']),

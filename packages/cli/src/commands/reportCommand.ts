@@ -40,8 +40,12 @@ export function reportCommand(io: CliIo): Command {
   addReportOptions(command);
   addOutputOptions(command);
   command.action((file: string | undefined, flags: Record<string, unknown> & OutputFlags) => {
-    const { report } = analyseDesignInput(file, flags);
-    writeOutput(flags.json === true ? toJson(report) : formatReport(report), flags.output, io);
+    const { design, report } = analyseDesignInput(file, flags);
+    writeOutput(
+      flags.json === true ? toJson(report) : formatReport(report, design),
+      flags.output,
+      io,
+    );
   });
   return command;
 }

@@ -1,14 +1,22 @@
-import type { CurrentFigures, DesignReport, VoltageFigures } from '@pulsewright/modulation';
+import {
+  describeGridConnection,
+  type CurrentFigures,
+  type DesignReport,
+  type InverterDesign,
+  type VoltageFigures,
+} from '@pulsewright/modulation';
 import { formatNumber, formatPercent } from './formatNumber.js';
 import { formatTable } from './formatTable.js';
 
 /**
  * The design report as text a person reads: the method, the voltages (fundamental, rms, THD,
  * WTHD), the currents of each phase, the load power, DC-link and common-mode figures, the
- * filter, the limit check and the cautions. Every figure is the report's own, rounded to six
- * significant digits; `--json` gives them all in full.
+ * filter, the grid a grid-tied design feeds with its current's verdict (the library's
+ * `describeGridConnection`, so it reads as the printed report and the shared e-mail do), the limit
+ * check and the cautions. Every figure is the report's own, rounded to six significant digits
+ * (the grid's words to four); `--json` gives them all in full.
  */
-export function formatReport(report: DesignReport): string {
+export function formatReport(report: DesignReport, design: InverterDesign): string {
   const parts: string[] = [];
   const span = report.carrierSpan;
   const ratio =
@@ -101,6 +109,13 @@ export function formatReport(report: DesignReport): string {
     );
   }
   if (lines.length > 0) parts.push(`${lines.join('\n')}\n`);
+  const grid = describeGridConnection(design, report.grid);
+  if (grid)
+    parts.push(
+      `grid connection:\n${grid.rows.map(([label, value]) => `  ${label}: ${value}`).join('\n')}\n` +
+        `grid current limits (phase a):\n${grid.verdicts.map((v) => `  ${v}`).join('\n')}\n` +
+        (grid.caution === null ? '' : `  caution: ${grid.caution}\n`),
+    );
   const check = report.limitCheck;
   const worst = check.worstIndividual;
   const violations =
