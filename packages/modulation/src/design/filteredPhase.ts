@@ -296,10 +296,10 @@ function outputThdUpperBound(
  * i_tail = (Φ − Φ_N)/(ω·L), with Φ the bridge voltage's running integral (exact, piecewise
  * linear) and Φ_N its harmonics to N (v = L·di/dt, standard circuit analysis). Its mean square
  * is (Var Φ − Σ_{n≤N} (V_n/n)²/2)/(ωL)² by Parseval. Returned as the inverter phasors to N with
- * those of −Φ_N/(ωL) added (`added`), the samples of (Φ − mean Φ)/(ωL) on the S angles 2πj/S
- * (read when asked for), and that mean square. Null for damping across the inductor, whose series branch is not
- * inductive at high frequency, and when N is not ten times past the LC resonance (the sum to N
- * is used as it is there).
+ * those of −Φ_N/(ωL) added (`added`), Φ on the S angles 2πj/S with mean Φ and ωL (read when
+ * asked for: the tail there is (Φ − mean Φ)/(ωL)), and that mean square. Null for damping across
+ * the inductor, whose series branch is not inductive at high frequency, and when N is not ten
+ * times past the LC resonance (the sum to N is used as it is there).
  * @param inverter - the inverter current's phasors to N at least
  * @param context.count - N + 1, the orders summed
  */
@@ -308,7 +308,7 @@ function switchingTail(
   bridge: HarmonicPhasors,
   inverter: HarmonicPhasors,
   context: { count: number; filter: OutputNetwork['filter']; omega: number; size: number },
-): { added: HarmonicPhasors; samples: () => Float64Array; meanSquare: number } | null {
+): { added: HarmonicPhasors; samples: () => TailSamples; meanSquare: number } | null {
   const { count, filter, omega, size } = context;
   if (filter === null || filter.dampingPlacement === 'parallel-with-inductor') return null;
   // Only valid well past the resonance, where the shunt branch shorts the load out.
@@ -331,15 +331,22 @@ function switchingTail(
   im[0] = inverter.im[0] as number;
   return {
     added: { re, im },
-    samples: () => {
-      // Φ at the S angles, turned into (Φ − mean Φ)/(ωL) where it lies.
-      const samples = integral.at(size);
-      for (let j = 0; j < size; j++)
-        samples[j] = ((samples[j] as number) - integral.mean) / reactance;
-      return samples;
-    },
+    samples: () => ({ flux: integral.at(size), mean: integral.mean, reactance }),
     meanSquare: Math.max(0, integral.variance - heldVariance) / (reactance * reactance),
   };
+}
+
+/**
+ * The switching tail on the grid: (flux[j] − mean)/reactance at sample j, amperes, worked out
+ * where it is added (one pass over the samples, not two).
+ */
+interface TailSamples {
+  /** The bridge voltage's running integral Φ at the S angles, volt-radians. */
+  flux: Float64Array;
+  /** Mean Φ over the period. */
+  mean: number;
+  /** ω·L of the filter's inductor, ohms. */
+  reactance: number;
 }
 
 /** Peak |i| and the lowest and highest ripple i − i₁ of one current on the grid, amperes. */
@@ -364,7 +371,7 @@ function currentExtremes(
   inverter: Float64Array,
   load: Float64Array | null,
   context: {
-    tail: Float64Array | null;
+    tail: TailSamples | null;
     sine: Float64Array;
     inverter: HarmonicPhasors;
     capacitor: HarmonicPhasors;
@@ -374,6 +381,9 @@ function currentExtremes(
   },
 ): { inverter: SampleExtremes; capacitor: SampleExtremes; load: SampleExtremes } {
   const { tail, sine, held, fundamentalOrder: f } = context;
+  const flux = tail?.flux ?? null;
+  const fluxMean = tail?.mean ?? 0;
+  const reactance = tail?.reactance ?? 1;
   const first = (phasors: HarmonicPhasors, part: 're' | 'im'): number =>
     held > f ? (phasors[part][f] as number) : 0;
   const iRe = first(context.inverter, 're');
@@ -402,8 +412,8 @@ function currentExtremes(
     const s = sine[h] as number;
     const c = sine[k] as number;
     let i = inverter[j] as number;
-    if (tail !== null) {
-      i = i + (tail[j] as number);
+    if (flux !== null) {
+      i = i + ((flux[j] as number) - fluxMean) / reactance;
       inverter[j] = i;
     }
     let ripple = i - (iRe * s + iIm * c);
