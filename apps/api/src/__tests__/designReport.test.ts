@@ -177,7 +177,7 @@ describe('design report routes', () => {
     expectSameFigures(report.body, analyseDesign(design, options));
     expect(report.body.carrierSpan).toMatchObject({ p: 4000, q: 37, baseFrequency: 1 });
     // The shared report's text states the ratio as p/q with the carrier analysed and the span.
-    expect(reportFigures(report.body as DesignReport)).toContain(
+    expect(reportFigures(report.body as DesignReport, design)).toContain(
       'mf 4000/37 (carrier analysed 4000 Hz, 0 Hz from the one asked for; every figure over 37 fundamental periods',
     );
     // Without options: the span's default order, ⌈mf⌉ + 10 = 119 (the first carrier group and its

@@ -1,6 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO, signIn, testApp, type TestApp } from './helpers.js';
+import type { DesignReport } from '@pulsewright/modulation';
 import { SINE_TRIANGLE_DESIGN as DESIGN, withMa } from './fixtures.js';
 
 interface OutboxItem {
@@ -139,5 +140,66 @@ describe('e-mailing a study report', () => {
       .set(engineer)
       .send({ email: 'r9@kestrel.example' });
     expect(limited.headers['content-type']).toMatch(/problem\+json/);
+  });
+
+  it('a grid-tied study (whole ratio, and a span at 500/3) mails its grid, impedance, LCL and each standard’s verdict on the grid current with the from-memory caution, not a load', async () => {
+    // Invented: 700 V bus into a 400 V grid through an LCL; 50 Hz with a 10 kHz carrier (mf 200),
+    // and 60 Hz with the same carrier (mf 500/3, analysed over 3 periods). Shared by the admin
+    // (the engineer's shares are spent by the rate-limit test above).
+    const base = {
+      vdc: 700,
+      fundamentalFrequency: 50,
+      carrierFrequency: 10_000,
+      modulation: { method: 'three-phase', ma: 1, zeroSequence: 'third-harmonic' },
+      filter: { l: 0.002, c: 10e-6, rDamping: 2 },
+      grid: { lineVoltage: 400, r: 0.05, l: 0.2e-3, l2: 0.5e-3 },
+    };
+    const projectId = (
+      await request(t.app)
+        .post('/api/v1/projects')
+        .set(admin)
+        .send({ name: 'Grid sharing', description: 'test' })
+    ).body.id;
+    for (const [frequency, grouped] of [
+      [50, false],
+      [60, true],
+    ] as const) {
+      const design = { ...base, fundamentalFrequency: frequency };
+      const created = await request(t.app)
+        .post('/api/v1/studies')
+        .set(admin)
+        .send({ projectId, name: `Grid at ${frequency} Hz`, design });
+      expect(created.status).toBe(201);
+      const to = `grid${frequency}@kestrel.example`;
+      const res = await request(t.app)
+        .post(`/api/v1/studies/${created.body.id}/share`)
+        .set(admin)
+        .send({ email: to });
+      expect(res.status).toBe(202);
+      const text = (await outbox()).find((m) => m.to === to)!.text;
+      const { grid } = (
+        await request(t.app).get(`/api/v1/studies/${created.body.id}/report`).set(admin)
+      ).body as DesignReport;
+      expect(text).not.toMatch(/load/i); // a grid design has no load (InverterDesign.grid)
+      expect(text).toContain(`- Grid: 400 V rms line to line, ${frequency} Hz`);
+      // I_SC = V_ph/|r + jω₁l| (hand-worked): 50 Hz 2876 A rms, 60 Hz 230.94/|0.05 + j0.0754| = 2553 A rms.
+      expect(text).toContain(
+        `- Grid impedance per phase (star): R 0.05 Ω, L 0.2 mH; short-circuit current ${frequency === 50 ? 2876 : 2553} A rms`,
+      );
+      // (1/2π)·√((L1 + L2')/(L1·L2'·C)) = 2210 Hz (Liserre, Blaabjerg and Hansen, 2005).
+      expect(text).toContain(
+        '- LCL filter per phase (star): L1 2 mH, C 10 µF, L2 0.5 mH; resonance 2210 Hz',
+      );
+      const { ieee519, ieee1547 } = grid!.limits;
+      expect(text).toContain(
+        `- grid current, IEEE Std 519-2022 (${ieee519.row.label}, the row for generating equipment): ${ieee519.pass ? 'within' : 'over'} the limits; TDD`,
+      );
+      expect(text).toContain(
+        `- grid current, IEEE Std 1547-2018 (${ieee1547.row.label}): ${ieee1547.pass ? 'within' : 'over'} the limits; TRD`,
+      );
+      expect(text).toMatch(/Grid caution\. The current limits .* recalled from memory/);
+      expect(text.includes('read on harmonic groups of the span’s components')).toBe(grouped);
+      expect(text.includes('Harmonic groups after IEC 61000-4-7')).toBe(grouped);
+    }
   });
 });

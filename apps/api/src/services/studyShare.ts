@@ -1,4 +1,8 @@
-import type { DesignReport } from '@pulsewright/modulation';
+import {
+  describeGridConnection,
+  type DesignReport,
+  type InverterDesign,
+} from '@pulsewright/modulation';
 import type { Models } from '../models/index.js';
 import type { ComputeService } from './computeService.js';
 import type { AuditLog } from './audit.js';
@@ -60,7 +64,7 @@ export class StudyShareService {
     const text =
       `${principal.user.name} (${principal.user.email}) shared a Pulsewright study report with you.\n\n` +
       `Study: ${name}\nRevision: ${study.currentRevision}, saved by ${by}\nReport: ${link}\n\n` +
-      (report ? `${reportFigures(report)}\n\n` : '') +
+      (report && revision?.design ? `${reportFigures(report, revision.design)}\n\n` : '') +
       (message ? `Message from ${principal.user.name}:\n${message}\n\n` : '') +
       `Caution. ${REPORT_CAUTION}\n`;
     await this.mailer.send({
@@ -85,8 +89,12 @@ const fixed = (value: number, unit: string): string => `${Number(value.toPrecisi
 const spanRatio = (span: NonNullable<DesignReport['carrierSpan']>): string =>
   `${span.p}/${span.q} (carrier analysed ${fixed(span.carrierFrequency, 'Hz')}, ${fixed(span.carrierError, 'Hz')} from the one asked for; every figure over ${span.q} fundamental periods, THD with the sub-harmonics)`;
 
-/** The headline figures of the design report, as plain text lines (every figure from the report). */
-export function reportFigures(report: DesignReport): string {
+/**
+ * The headline figures of the design report, as plain text lines (every figure from the report);
+ * a grid-tied design's grid, LCL and grid-current verdicts with their caution in the library's
+ * words (`describeGridConnection`), as the printed report and the command line give them.
+ */
+export function reportFigures(report: DesignReport, design: InverterDesign): string {
   const lines = [
     `Key figures (revision's design report): ${report.methodLabel}${report.frequencyRatio === null ? '' : `, mf ${report.carrierSpan ? spanRatio(report.carrierSpan) : report.frequencyRatio}`}`,
   ];
@@ -109,15 +117,25 @@ export function reportFigures(report: DesignReport): string {
     );
     if (phase.load) lines.push(`- ${phase.load.name}: ${fixed(phase.load.rms, 'A rms')}`);
   }
+  // With a grid the report's load is the grid's series resistance r, and the LC's own resonance
+  // is not the LCL's (that one is in the grid's rows below).
   if (report.loadPower !== null)
-    lines.push(`- power into the load resistance: ${fixed(report.loadPower, 'W')}`);
+    lines.push(
+      `- power into the ${report.grid ? "grid's series resistance" : 'load resistance'}: ${fixed(report.loadPower, 'W')}`,
+    );
   if (report.filter)
     lines.push(
-      `- filter resonance: ${fixed(report.filter.characteristics.resonanceFrequency, 'Hz')}`,
+      `- ${report.grid ? 'L1–C resonance (without L2 and the grid)' : 'filter resonance'}: ${fixed(report.filter.characteristics.resonanceFrequency, 'Hz')}`,
     );
+  const grid = describeGridConnection(design, report.grid);
+  if (grid) {
+    lines.push(...grid.rows.map(([label, value]) => `- ${label}: ${value}`));
+    lines.push(...grid.verdicts.map((verdict) => `- grid current, ${verdict}`));
+  }
   lines.push(
     `- ${limitCheck.standard.name}-${limitCheck.standard.edition} voltage limits (recalled from memory): ${limitCheck.pass ? 'pass' : 'fail'}` +
       ` (THD ${percent(limitCheck.thdWholeWaveform)} whole waveform, limit ${percent(limitCheck.limits.thd)})`,
   );
+  if (grid?.caution) lines.push(`Grid caution. ${grid.caution}`);
   return lines.join('\n');
 }
