@@ -3,7 +3,7 @@ import { Button } from '../../../components/ui/Button';
 import { ErrorState, Loading } from '../../../components/ui/QueryState';
 import { formatDate } from '../../../lib/format';
 import { roleAtLeast, useMe, useStudy, useStudyReport, useStudyRevisions } from '../../../lib/api';
-import { designRows } from '../model/describeDesign';
+import { DesignTable } from './DesignTable';
 import { HarmonicLimitsPanel } from './HarmonicLimitsPanel';
 import { ReportCautions } from './ReportCautions';
 import { RoleGate } from '../../../components/role/RoleGate';
@@ -53,21 +53,7 @@ export function StudyReportPage() {
       </header>
       <section className="mb-4" aria-label="Design">
         <h2 className="mb-2 text-sm font-semibold tracking-wide uppercase">Design</h2>
-        <table className="text-sm">
-          <tbody>
-            {designRows(study.data.design).map(([label, value]) => (
-              <tr key={label} className="border-t border-rule/60">
-                <th
-                  scope="row"
-                  className="py-0.5 pr-6 text-left align-top font-normal text-ink-soft"
-                >
-                  {label}
-                </th>
-                <td className="num py-0.5">{value}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+        <DesignTable design={study.data.design} grid={report.data?.grid} />
       </section>
       {report.isPending ? <Loading label="Analysing the design on the service…" /> : null}
       {report.isError ? <ErrorState error={report.error} onRetry={() => report.refetch()} /> : null}

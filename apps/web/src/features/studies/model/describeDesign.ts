@@ -1,6 +1,8 @@
 import {
+  describeGridConnection,
   designCarrierSpan,
   designFrequencyRatio,
+  type GridFigures,
   MODULATION_METHOD_LABELS,
   modulationPhaseCount,
   type InverterDesign,
@@ -46,8 +48,17 @@ function ratioText(design: InverterDesign): string {
   }
 }
 
-/** The whole design as label–value rows with units, as the printed report lists it (defaults written out). */
-export function designRows(stored: InverterDesign): [string, string][] {
+/**
+ * The whole design as label–value rows with units, as the printed report lists it (defaults
+ * written out). A grid-tied design lists its grid, impedance and LCL filter in the library's words
+ * (`describeGridConnection`) instead of a load; with the report's grid figures, also the
+ * short-circuit figures, the LCL resonance, each standard's verdict on the grid current and the
+ * caution that the limits are recalled from memory.
+ */
+export function designRows(
+  stored: InverterDesign,
+  gridFigures: GridFigures | null = null,
+): [string, string][] {
   // Read through the editor's state so the options a stored design leaves out print as their defaults.
   const design = designOf(draftOf(stored, { name: '', projectId: '' }));
   const m = design.modulation;
@@ -115,7 +126,13 @@ export function designRows(stored: InverterDesign): [string, string][] {
   if ('carrierPhase' in m && m.carrierPhase) rows.push(['Carrier phase', degrees(m.carrierPhase)]);
   const three = modulationPhaseCount(m) === 3;
   const { load, filter } = design;
-  if (load) {
+  const grid = describeGridConnection(design, gridFigures);
+  if (grid) {
+    rows.push(...grid.rows);
+    if (filter) rows.push(['Filter damping', dampingText(filter)]);
+    rows.push(...grid.verdicts.map((verdict): [string, string] => ['Grid current', verdict]));
+    if (grid.caution) rows.push(['Grid limits', grid.caution]);
+  } else if (load) {
     rows.push([
       three ? 'Load per phase (star)' : 'Load',
       `R ${formatNumber(load.r)} Ω, L ${formatNumber(load.l * 1e3)} mH`,
@@ -126,18 +143,23 @@ export function designRows(stored: InverterDesign): [string, string][] {
         `${formatNumber(load.emf.amplitude)} V peak at ${degrees(load.emf.phase)}`,
       ]);
   } else rows.push(['Load', 'none']);
-  if (filter) {
-    const damping = `${formatNumber(filter.rDamping ?? 0)} Ω, ${labelOf(DAMPING_OPTIONS, filter.dampingPlacement ?? 'series-with-capacitor')}${filter.cDamping !== undefined ? `, ${formatNumber(filter.cDamping * 1e6)} µF` : ''}`;
+  // A grid design's filter is in the grid's rows (L1 and C with L2, an LCL).
+  if (!grid && filter)
     rows.push(
       [
         three ? 'LC filter per phase (star)' : 'LC filter',
         `L ${formatNumber(filter.l * 1e3)} mH, C ${formatNumber(filter.c * 1e6)} µF`,
       ],
-      ['Filter damping', damping],
+      ['Filter damping', dampingText(filter)],
     );
-  } else rows.push(['LC filter', 'none']);
+  else if (!grid) rows.push(['LC filter', 'none']);
   if (design.device) rows.push(['Switching device', deviceText(design.device)]);
   return rows;
+}
+
+/** The filter's damping resistor, where it sits and its capacitor when it has one. */
+function dampingText(filter: NonNullable<InverterDesign['filter']>): string {
+  return `${formatNumber(filter.rDamping ?? 0)} Ω, ${labelOf(DAMPING_OPTIONS, filter.dampingPlacement ?? 'series-with-capacitor')}${filter.cDamping !== undefined ? `, ${formatNumber(filter.cDamping * 1e6)} µF` : ''}`;
 }
 
 /** A switching device's datasheet values as the loss model takes them (V, mΩ, mJ at the test point). */
