@@ -380,20 +380,62 @@ function currentExtremes(
     fundamentalOrder: number;
   },
 ): { inverter: SampleExtremes; capacitor: SampleExtremes; load: SampleExtremes } {
-  const { tail, sine, held, fundamentalOrder: f } = context;
+  const { held, fundamentalOrder: f } = context;
+  const first = (phasors: HarmonicPhasors, part: 're' | 'im'): number =>
+    held > f ? (phasors[part][f] as number) : 0;
+  const found = extremesPass(inverter, load, context.tail, context.sine, f, [
+    first(context.inverter, 're'),
+    first(context.inverter, 'im'),
+    first(context.capacitor, 're'),
+    first(context.capacitor, 'im'),
+    first(context.load, 're'),
+    first(context.load, 'im'),
+  ]);
+  const read = (at: number): SampleExtremes => ({
+    peak: found[at] as number,
+    rippleLow: found[at + 1] as number,
+    rippleHigh: found[at + 2] as number,
+  });
+  return { inverter: read(0), capacitor: read(3), load: read(6) };
+}
+
+/**
+ * The pass of {@link currentExtremes}: the inverter's, capacitor's and load's peak, lowest and
+ * highest ripple at indices 0–2, 3–5 and 6–8 (the load's 0, ∞, −∞ without a load).
+ *
+ * Each extreme is kept in a local and written to the array built before the loop when it
+ * changes, and the loop is the last thing here: V8 may compile this loop on the fly (on-stack
+ * replacement) during its first call, and code after the loop that had not yet run (the result
+ * built from the locals) then deoptimised that compiled loop again at later calls. The writes
+ * run from the first sample on (every extreme changes there), so they have type feedback before
+ * the loop is compiled. The same comparisons in the same order as before.
+ * @param fundamentals - re₁, im₁ of the inverter, capacitor and load currents, amperes
+ */
+function extremesPass(
+  inverter: Float64Array,
+  load: Float64Array | null,
+  tail: TailSamples | null,
+  sine: Float64Array,
+  f: number,
+  fundamentals: readonly [number, number, number, number, number, number],
+): Float64Array {
+  const [iRe, iIm, cRe, cIm, lRe, lIm] = fundamentals;
   const flux = tail?.flux ?? null;
   const fluxMean = tail?.mean ?? 0;
   const reactance = tail?.reactance ?? 1;
-  const first = (phasors: HarmonicPhasors, part: 're' | 'im'): number =>
-    held > f ? (phasors[part][f] as number) : 0;
-  const iRe = first(context.inverter, 're');
-  const iIm = first(context.inverter, 'im');
-  const cRe = first(context.capacitor, 're');
-  const cIm = first(context.capacitor, 'im');
-  const lRe = first(context.load, 're');
-  const lIm = first(context.load, 'im');
   const size = inverter.length;
   const quarter = size / 4;
+  const found = new Float64Array([
+    0,
+    Infinity,
+    -Infinity,
+    0,
+    Infinity,
+    -Infinity,
+    0,
+    Infinity,
+    -Infinity,
+  ]);
   let iPeak = 0;
   let iLow = Infinity;
   let iHigh = -Infinity;
@@ -417,28 +459,24 @@ function currentExtremes(
       inverter[j] = i;
     }
     let ripple = i - (iRe * s + iIm * c);
-    if (Math.abs(i) > iPeak) iPeak = Math.abs(i);
-    if (ripple < iLow) iLow = ripple;
-    if (ripple > iHigh) iHigh = ripple;
+    if (Math.abs(i) > iPeak) found[0] = iPeak = Math.abs(i);
+    if (ripple < iLow) found[1] = iLow = ripple;
+    if (ripple > iHigh) found[2] = iHigh = ripple;
     let capacitor = i;
     if (load !== null) {
       const l = load[j] as number;
       capacitor = i - l;
       ripple = l - (lRe * s + lIm * c);
-      if (Math.abs(l) > lPeak) lPeak = Math.abs(l);
-      if (ripple < lLow) lLow = ripple;
-      if (ripple > lHigh) lHigh = ripple;
+      if (Math.abs(l) > lPeak) found[6] = lPeak = Math.abs(l);
+      if (ripple < lLow) found[7] = lLow = ripple;
+      if (ripple > lHigh) found[8] = lHigh = ripple;
     }
     ripple = capacitor - (cRe * s + cIm * c);
-    if (Math.abs(capacitor) > cPeak) cPeak = Math.abs(capacitor);
-    if (ripple < cLow) cLow = ripple;
-    if (ripple > cHigh) cHigh = ripple;
+    if (Math.abs(capacitor) > cPeak) found[3] = cPeak = Math.abs(capacitor);
+    if (ripple < cLow) found[4] = cLow = ripple;
+    if (ripple > cHigh) found[5] = cHigh = ripple;
   }
-  return {
-    inverter: { peak: iPeak, rippleLow: iLow, rippleHigh: iHigh },
-    capacitor: { peak: cPeak, rippleLow: cLow, rippleHigh: cHigh },
-    load: { peak: lPeak, rippleLow: lLow, rippleHigh: lHigh },
-  };
+  return found;
 }
 
 /** −(a + b) sample by sample (null when either is null). */
