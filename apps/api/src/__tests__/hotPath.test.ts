@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { cacheOpenApiMetadata } from '../http/cacheOpenApiMetadata.js';
 import { HttpError } from '../http/errors.js';
 import { HELMET_OPTIONS, securityHeaders } from '../http/securityHeaders.js';
-import { finiteResult } from '../services/library.js';
+import { finiteResult, finiteSpectrum } from '../services/library.js';
 import { hashToken } from '../services/tokens.js';
 import { DEMO, signIn, testApp, type TestApp } from './helpers.js';
 
@@ -72,6 +72,53 @@ describe('finiteResult: NaN and ±∞ refused with the field and the place, fini
     result.own = 1;
     expect(JSON.stringify(result)).toBe('{"own":1}');
     expect(finiteResult('modulation', result)).toBe(result);
+  });
+});
+
+describe('finiteSpectrum: a spectrum answer checked as finiteResult checks it', () => {
+  const spectrum = (
+    change: (harmonics: { order: number; amplitude: number; phase: number }[]) => void,
+  ) => {
+    const harmonics = Array.from({ length: 50 }, (_, order) => ({
+      order,
+      amplitude: 1 / (order + 1),
+      phase: -order,
+    }));
+    change(harmonics);
+    return { name: 'bridge output', harmonics, thd: 0.5, wthd: 0.01, spectrumThd: 0.4 };
+  };
+  const refusalOf = (result: ReturnType<typeof spectrum>): string => {
+    try {
+      finiteSpectrum('modulation', result);
+    } catch (error) {
+      if (error instanceof HttpError && error.status === 400) return error.message;
+      throw error;
+    }
+    return 'accepted';
+  };
+
+  it('passes a finite spectrum on unchanged (the same object)', () => {
+    const result = spectrum(() => undefined);
+    expect(finiteSpectrum('modulation', result)).toBe(result);
+  });
+
+  it.each([
+    ['order', 7, NaN],
+    ['amplitude', 31, Infinity],
+    ['phase', 49, -Infinity],
+  ] as const)(
+    'refuses a non-finite %s of a harmonic, naming it as finiteResult does',
+    (key, at, value) => {
+      const result = spectrum((harmonics) => {
+        harmonics[at]![key] = value;
+      });
+      expect(refusalOf(result)).toContain(`harmonics[${at}].${key} is not a finite number`);
+    },
+  );
+
+  it('refuses a non-finite figure beside the harmonics', () => {
+    const result = { ...spectrum(() => undefined), wthd: NaN };
+    expect(refusalOf(result)).toContain('modulation holds values so extreme that wthd is not');
   });
 });
 

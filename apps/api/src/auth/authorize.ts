@@ -18,6 +18,16 @@ class AuthError extends Error {
 
 const principals = new WeakMap<object, Principal>();
 
+/** Where passport puts the authenticated principal on the request (`assignProperty`). */
+const PRINCIPAL_PROPERTY = 'bearerPrincipal';
+
+/**
+ * What passport is given as the response: on a failed token it sets a status and a
+ * `WWW-Authenticate` challenge there before handing the failure on (failWithError), and the
+ * answer is this service's own 401 problem, so both are dropped.
+ */
+const PASSPORT_RESPONSE = { statusCode: 0, setHeader: (): void => undefined };
+
 /** The caller of an authorised request (set by {@link createAuthorizer}). */
 export function principalOf(req: object): Principal {
   const principal = principals.get(req);
@@ -41,19 +51,24 @@ export function createAuthorizer(auth: AuthService): (req: Request) => Promise<b
       );
     }),
   );
+  // One passport middleware for every request (not one made per request around a callback):
+  // the principal lands on the request under PRINCIPAL_PROPERTY, a failure comes back as an
+  // AuthenticationError (failWithError), and no auth info is transformed (authInfo: false).
+  const middleware = passport.authenticate('bearer', {
+    session: false,
+    failWithError: true,
+    assignProperty: PRINCIPAL_PROPERTY,
+    authInfo: false,
+  }) as (req: Request, res: unknown, next: (error?: unknown) => void) => void;
   const authenticate = (req: Request): Promise<Principal | false> =>
     new Promise((resolve, reject) => {
-      const middleware = passport.authenticate(
-        'bearer',
-        { session: false },
-        (error: unknown, user: Principal | false) => {
-          if (error) reject(error instanceof Error ? error : new Error(inspect(error)));
-          else resolve(user);
-        },
-      ) as (req: Request, res: unknown, next: (error?: unknown) => void) => void;
-      middleware(req, {}, (error) =>
-        error ? reject(error instanceof Error ? error : new Error(inspect(error))) : resolve(false),
-      );
+      middleware(req, PASSPORT_RESPONSE, (error) => {
+        const found = (req as Request & { [PRINCIPAL_PROPERTY]?: Principal })[PRINCIPAL_PROPERTY];
+        if (!error) resolve(found ?? false);
+        // passport's AuthenticationError: no token, a malformed one (400) or an unknown one (401).
+        else if ((error as { name?: unknown }).name === 'AuthenticationError') resolve(false);
+        else reject(error instanceof Error ? error : new Error(inspect(error)));
+      });
     });
 
   return async (req) => {

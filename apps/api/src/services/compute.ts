@@ -34,7 +34,7 @@ import {
 } from '@pulsewright/modulation';
 import { badRequest } from '../http/errors.js';
 import type { TimerFormat } from './cost.js';
-import { callLibrary, finiteResult } from './library.js';
+import { callLibrary, finiteResult, finiteSpectrum } from './library.js';
 import { requestedTimerTable, type TimerTableRequest } from './requestedTimerTable.js';
 
 /**
@@ -111,7 +111,7 @@ export function voltageSpectrum(
     });
     return { name, harmonics: spectrum, thd, wthd, spectrumThd };
   });
-  return finiteResult(field, result);
+  return finiteSpectrum(field, result);
 }
 
 export function computeSpectrum(
