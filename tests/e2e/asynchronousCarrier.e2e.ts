@@ -211,6 +211,17 @@ export const scenarios: Scenario[] = [
         .first()
         .waitFor();
       await page.getByTestId('grid-verdict').waitFor();
+      // The design table reads the grid design as one: its grid and LCL, not "Load: none", and
+      // once the report is in, each standard's verdict on the grid current.
+      const designTable = page.getByRole('table', { name: 'Design' });
+      await designTable.getByText(/^IEEE Std 1547-2018 /).waitFor();
+      const designText = (await designTable.textContent()) ?? '';
+      assert(
+        designText.includes('400 V rms line to line, 60 Hz') &&
+          designText.includes('L1 2 mH, C 10 µF, L2 0.5 mH') &&
+          !/Load/.test(designText),
+        `the printed design table shows the grid and its LCL, no load (got "${designText.slice(0, 400)}")`,
+      );
       await screenshot(page, 'grid-span-report');
       await page.close();
     },
