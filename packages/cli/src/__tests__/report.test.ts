@@ -128,6 +128,8 @@ describe('pulsewright report', () => {
     expect(run.code).toBe(0);
     const { limits } = analyseDesign(design, { maxOrder: 100 }).grid!;
     expect(run.stdout).toContain('grid connection:');
+    expect(run.stdout).not.toContain('load power');
+    expect(run.stdout).toContain("power into the grid's series resistance (all phases)");
     expect(run.stdout).toContain('Grid: 400 V rms line to line, 50 Hz');
     // I_SC = V_ph/|r + jω₁l| = (400/√3)/|0.05 + j·0.06283| = 2876 A rms (hand-worked).
     expect(run.stdout).toContain('R 0.05 Ω, L 0.2 mH; short-circuit current 2876 A rms');

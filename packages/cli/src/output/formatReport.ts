@@ -78,7 +78,10 @@ export function formatReport(report: DesignReport, design: InverterDesign): stri
   }
   const lines: string[] = [];
   if (report.loadPower !== null)
-    lines.push(`load power (all phases): ${formatNumber(report.loadPower)} W`);
+    // With a grid the report's load is the grid's series resistance r (the library's gridLoad).
+    lines.push(
+      `${report.grid ? "power into the grid's series resistance" : 'load power'} (all phases): ${formatNumber(report.loadPower)} W`,
+    );
   if (report.dcLink !== null) {
     const d = report.dcLink;
     const second =

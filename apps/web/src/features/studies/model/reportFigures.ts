@@ -117,9 +117,10 @@ export function reportFigures(report: StudyReport): Figure[] {
   }
   if (report.loadPower !== null)
     figures.push({
-      label: 'Load power',
+      // With a grid the report's load is the grid's series resistance r (gridLoad in the library).
+      label: report.grid ? 'Grid resistance loss' : 'Load power',
       value: `${formatNumber(report.loadPower)} W`,
-      note: three ? 'into R, all three phases' : 'into R',
+      note: `into ${report.grid ? 'the grid’s series resistance r' : 'R'}${three ? ', all three phases' : ''}`,
     });
   if (filter) {
     figures.push({

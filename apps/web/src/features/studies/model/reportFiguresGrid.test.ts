@@ -24,6 +24,13 @@ describe('reportFigures with a grid', () => {
     expect(grid?.note).toContain('recalled from memory');
     expect(figures.some((f) => f.label === 'Grid current')).toBe(true);
     expect(figures.some((f) => f.label === 'Load current')).toBe(false);
+    // The report's load power is then the grid's r's: P = 3·I_rms²·r over the grid current
+    // (Joule's law; three phases alike), not a load's.
+    expect(figures.some((f) => f.label === 'Load power')).toBe(false);
+    const loss = figures.find((f) => f.label === 'Grid resistance loss');
+    expect(loss?.note).toBe('into the grid’s series resistance r, all three phases');
+    const gridRms = report.currents[0]!.load!.rms;
+    expect(report.loadPower!).toBeCloseTo(3 * gridRms * gridRms * 0.05, 6);
   });
 
   it('says a span’s limits were read on harmonic groups (60 Hz at 10 kHz: 500/3), and a whole mf’s not', () => {
