@@ -19,11 +19,22 @@ import { periodSeries } from './periodSeries.js';
 import type { PeriodSynthesiser } from './periodSynthesiser.js';
 import type { SpectrumLabeller } from './spectrumLabeller.js';
 
+/**
+ * The synthesiser's buffer slot (`PeriodSynthesiser.buffers`) of each phase's sampled currents,
+ * kept to the report's end, and of the output voltage's samples, read into its chart series at
+ * once. No sample array reaches the report itself: its series are copies (`periodSeries`).
+ */
+const PHASE_SLOTS: Record<PhaseCurrents['phase'], number> = { a: 0, b: 1, c: 2 };
+const OUTPUT_SLOT = 3;
+
 /** What {@link filteredPhase} gives for one phase. */
 export interface FilteredPhase {
-  /** The inverter current on the synthesiser's S angles 2πj/S, amperes. */
+  /**
+   * The inverter current on the synthesiser's S angles 2πj/S, amperes, in the synthesiser's
+   * buffers of this phase: overwritten by the next report on the same synthesiser.
+   */
   inverterSamples: Float64Array;
-  /** The load current on the same angles, amperes, or null without a load. */
+  /** The load current on the same angles (the same buffers), amperes, or null without a load. */
   loadSamples: Float64Array | null;
   /** The output voltage's figures, for the phase asked for them (the report shows phase a's), else null. */
   output: NonNullable<DesignReport['output']> | null;
@@ -146,16 +157,22 @@ export function filteredPhase(
     size,
   });
   const { others } = context;
+  // The phase's samples live in the synthesiser's buffers of its slot (reused by the next report).
+  const slot = PHASE_SLOTS[phase];
+  const [inverterInto, loadInto] = synthesiser.buffers(slot);
   const [inverterSamples, loadSamples] =
     others === undefined
       ? synthesiser.pair(
           tail === null ? solved.inverterCurrent : tail.added,
           loadR === null ? null : solved.loadCurrent,
           held,
+          slot,
         )
       : [
-          negatedSum(others[0].inverterSamples, others[1].inverterSamples),
-          loadR === null ? null : negatedSum(others[0].loadSamples, others[1].loadSamples),
+          negatedSum(others[0].inverterSamples, others[1].inverterSamples, inverterInto),
+          loadR === null
+            ? null
+            : negatedSum(others[0].loadSamples, others[1].loadSamples, loadInto),
         ];
   const extremes = currentExtremes(inverterSamples, loadSamples, {
     // The others' samples hold their tails already.
@@ -190,7 +207,10 @@ export function filteredPhase(
               fundamentalOrder: f,
               thdUpperBound: outputThdUpperBound(waveform, bridge, solved.output, context),
             }),
-            series: periodSeries(synthesiser.pair(solved.output, null, held)[0], points),
+            series: periodSeries(
+              synthesiser.pair(solved.output, null, held, OUTPUT_SLOT)[0],
+              points,
+            ),
           },
     currents: {
       phase,
@@ -479,12 +499,22 @@ function extremesPass(
   return found;
 }
 
-/** −(a + b) sample by sample (null when either is null). */
-function negatedSum(a: Float64Array, b: Float64Array): Float64Array;
-function negatedSum(a: Float64Array | null, b: Float64Array | null): Float64Array | null;
-function negatedSum(a: Float64Array | null, b: Float64Array | null): Float64Array | null {
+/**
+ * −(a + b) sample by sample, written into `into` (null when either is null).
+ * @param into - S samples, overwritten
+ */
+function negatedSum(a: Float64Array, b: Float64Array, into: Float64Array): Float64Array;
+function negatedSum(
+  a: Float64Array | null,
+  b: Float64Array | null,
+  into: Float64Array,
+): Float64Array | null;
+function negatedSum(
+  a: Float64Array | null,
+  b: Float64Array | null,
+  into: Float64Array,
+): Float64Array | null {
   if (a === null || b === null) return null;
-  const sum = new Float64Array(a.length);
-  for (let j = 0; j < a.length; j++) sum[j] = -((a[j] as number) + (b[j] as number));
-  return sum;
+  for (let j = 0; j < a.length; j++) into[j] = -((a[j] as number) + (b[j] as number));
+  return into;
 }

@@ -11,14 +11,23 @@ export interface PeriodSynthesiser {
   readonly sine: Float64Array;
   /**
    * One period of x(θ) = X₀ + Σ_{n≥1} |X_n|·sin(nθ + arg X_n) for each of two phasor spectra
-   * (orders 0..count − 1 of each; X₀ real; count at most S/2), sampled at the S angles 2πj/S.
+   * (orders 0..count − 1 of each; X₀ real; count at most S/2), sampled at the S angles 2πj/S,
+   * written into the buffers of `slot` (see {@link PeriodSynthesiser.buffers}).
    * @returns the samples of `first`, and of `second` (null when it is null)
    */
   pair(
     first: HarmonicPhasors,
     second: HarmonicPhasors | null,
     count: number,
+    slot: number,
   ): [Float64Array, Float64Array | null];
+  /**
+   * The two S-sample buffers the synthesiser keeps for `slot` (a small whole number, the
+   * caller's), built on first use and overwritten by every later call with that slot: a caller
+   * keeps nothing it returns in them beyond that. Reused from report to report (when the
+   * synthesiser is the caller's plans'), they spare two typed arrays of S doubles a series.
+   */
+  buffers(slot: number): readonly [Float64Array, Float64Array];
 }
 
 /**
@@ -40,6 +49,17 @@ export function periodSynthesiser(size: number, fft: FFT = new FFT(size)): Perio
   const sine = new Float64Array(size);
   // The highest order the last call wrote into `input` (its other entries are zero).
   let written = 0;
+  // Read as the missing second series (count ≤ S/2), never written.
+  const zeros = new Float64Array(size / 2);
+  const kept: (readonly [Float64Array, Float64Array])[] = [];
+  const buffers = (slot: number): readonly [Float64Array, Float64Array] => {
+    let found = kept[slot];
+    if (found === undefined) {
+      found = [new Float64Array(size), new Float64Array(size)];
+      kept[slot] = found;
+    }
+    return found;
+  };
   // fft.js's table holds cos(2πk/S) and −sin(2πk/S) at 2k, 2k + 1: no trigonometry of our own.
   const table = fft.table as number[];
   for (let k = 0; k < size; k++) sine[k] = -(table[2 * k + 1] as number);
@@ -47,6 +67,7 @@ export function periodSynthesiser(size: number, fft: FFT = new FFT(size)): Perio
     first: HarmonicPhasors,
     second: HarmonicPhasors | null,
     count: number,
+    slot: number,
   ): [Float64Array, Float64Array | null] => {
     const highest = count - 1;
     if (2 * highest + 2 > size) throw new RangeError(`order ${highest} aliases at ${size} samples`);
@@ -57,7 +78,6 @@ export function periodSynthesiser(size: number, fft: FFT = new FFT(size)): Perio
       input.fill(0, 2 * (size - written), 2 * (size - highest));
     }
     written = highest;
-    const zeros = new Float64Array(count);
     const { re: xRe, im: xIm } = first;
     const { re: yRe, im: yIm } = second ?? { re: zeros, im: zeros };
     // Order 0: Z₀ = X₀ + j·Y₀, both real; conj(Z₀) goes in.
@@ -76,13 +96,13 @@ export function periodSynthesiser(size: number, fft: FFT = new FFT(size)): Perio
       input[2 * (size - n) + 1] = -(dr - ci) / 2;
     }
     fft.transform(output, input);
-    const x = new Float64Array(size);
-    const y = second === null ? null : new Float64Array(size);
+    const [x, ySamples] = buffers(slot);
+    const y = second === null ? null : ySamples;
     for (let j = 0; j < size; j++) x[j] = output[2 * j] as number;
     if (y !== null) for (let j = 0; j < size; j++) y[j] = -(output[2 * j + 1] as number);
     return [x, y];
   };
-  return { size, fft, sine, pair };
+  return { size, fft, sine, pair, buffers };
 }
 
 /** The FFT size for {@link periodSynthesiser}: the smallest power of two ≥ 2·highestOrder + 2 and ≥ minimumSamples. */

@@ -4,6 +4,7 @@ import { TAU } from '../../math.js';
 import { analyseDesign } from '../analyseDesign.js';
 import { designReportPlans } from '../designReportPlans.js';
 import type { InverterDesign } from '../InverterDesign.js';
+import { EXAMPLE_IGBT } from '../../losses/exampleIgbt.js';
 
 const design = (mf: number, filtered: boolean): InverterDesign => ({
   vdc: 650,
@@ -32,6 +33,35 @@ describe('designReportPlans', () => {
       // Same transforms, same operations: the same numbers, not merely close ones.
       expect(analyseDesign(d, { ...options, plans })).toEqual(analyseDesign(d, options));
     }
+  });
+
+  it("leaves a report's figures alone when the next report reuses the plans' sample buffers", () => {
+    // The filtered phases' samples live in buffers the plans keep from report to report: a
+    // report must hold copies only. Two reports on the same grid (mf 45 and 43: 8192 samples),
+    // with device losses and the DC link reading the samples; the first, deep-copied before the
+    // second ran, must be unchanged after it.
+    const plans = designReportPlans();
+    const options = { maxOrder: 300, points: 256, plans };
+    const first = analyseDesign({ ...design(45, true), device: { ...EXAMPLE_IGBT } }, options);
+    const copy = structuredClone(first);
+    const second = analyseDesign(
+      { ...design(43, true), load: { r: 9, l: 0.02 }, device: { ...EXAMPLE_IGBT } },
+      options,
+    );
+    // Not a vacuous check: the second report's currents differ from the first's.
+    expect(second.currents[0]?.load?.rms).not.toBe(first.currents[0]?.load?.rms);
+    expect(first).toEqual(copy);
+  });
+
+  it('writes a series into the buffers of the slot asked for, one pair of buffers a slot', () => {
+    const synthesiser = designReportPlans().synthesiser(64);
+    const phasors = { re: Float64Array.from([1, 2]), im: Float64Array.from([0, 0]) };
+    const [x, y] = synthesiser.pair(phasors, phasors, 2, 1);
+    const [kept, keptSecond] = synthesiser.buffers(1);
+    expect(x).toBe(kept);
+    expect(y).toBe(keptSecond);
+    expect(synthesiser.buffers(0)[0]).not.toBe(kept);
+    expect(synthesiser.buffers(0)[1]).not.toBe(keptSecond);
   });
 
   it('keeps a transform per grid size for the last two sizes used', () => {
@@ -72,7 +102,7 @@ describe('designReportPlans', () => {
     const synthesiser = designReportPlans().synthesiser(size);
     const re = Float64Array.from([0.5, 2, 0, -0.3]);
     const im = Float64Array.from([0, 1, 0, 0.4]);
-    const [x, y] = synthesiser.pair({ re, im }, null, 4);
+    const [x, y] = synthesiser.pair({ re, im }, null, 4, 0);
     expect(y).toBeNull();
     for (let j = 0; j < size; j++) {
       const theta = (TAU * j) / size;
@@ -90,11 +120,12 @@ describe('designReportPlans', () => {
     const size = 64;
     const synthesiser = designReportPlans().synthesiser(size);
     const longRe = Float64Array.from({ length: 20 }, (_, n) => (n % 2 === 1 ? 1 / n : 0));
-    synthesiser.pair({ re: longRe, im: new Float64Array(20) }, { re: longRe, im: longRe }, 20);
+    synthesiser.pair({ re: longRe, im: new Float64Array(20) }, { re: longRe, im: longRe }, 20, 0);
     const [x, y] = synthesiser.pair(
       { re: Float64Array.from([0, 0, 3]), im: Float64Array.from([0, 0, 0]) },
       { re: Float64Array.from([1, 0, 0]), im: Float64Array.from([0, 0, 0]) },
       3,
+      0,
     );
     for (let j = 0; j < size; j++) {
       const theta = (TAU * j) / size;
