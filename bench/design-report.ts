@@ -100,6 +100,31 @@
  * results are built after their loops from many sums; building them before would cost a store
  * per sample), seen in 2 of 10 processes. The 5 ms goal is still not reached at spectra to 5000
  * in the median under load (the lower quartile is near it); the default order is well under it.
+ *
+ * Fifth round (each step bit-identical on the 40-design corpus, with and without plans, compare
+ * limit 0): legLossesFromSamples and a filtered phase's currentExtremes have their loops as the
+ * last thing in a function of their own, summing into or writing to an array built before the
+ * loop (V8's on-stack-replacement code had deoptimised at the result built after the loop at
+ * every later call: 181 times in 40 reports in 1 of 8 processes; none in 10 after); a filtered
+ * report's sampled currents and output samples live in sample buffers its synthesiser keeps a
+ * phase (`PeriodSynthesiser.buffers`), so with plans they are reused from report to report (typed
+ * arrays allocated a report 3.33 → 2.41 MB; a test checks that a report keeps copies only).
+ * The round's start against its end, 300–400 reports alternating in one process, six runs at
+ * load 2–5, median CPU ms with plans to 5000: 6.63/7.33/6.60/6.17/7.88/7.39 → 6.94/6.97/6.97/
+ * 6.36/7.65/7.07, i.e. within the machine's noise, three runs each way; default order 3.26–3.41
+ * → 3.24–3.40. Measured and left: labelling a 5001-order spectrum is about 80–115 µs (the 2501
+ * exactly-zero orders' arc tangents 20 µs of it, the objects 30–40 µs: no bit-identical cut
+ * worth its code); the legs' exact sums already rotate e^{−jnθ} with a fresh sin/cos every 256
+ * orders, and a two-term (Chebyshev, Goertzel-like) recurrence, the next cheaper step, loses
+ * accuracy near θ = 0 and π (its rounding grows as n/sin θ: W. M. Gentleman, 1969, on Goertzel's
+ * method; from memory), so they stay; validating the loss cells (assertFiniteArray, 1.2 % of a profile) and the
+ * DC link's and running integral's remaining S-sample arrays (about 1 % each) are left. Profile
+ * after (300 reports, one process): exact sums 13 %, transforms 11 % (+2 % real), garbage
+ * collection 7 %, labelling 6 % (13 % in another process of the same build). Seen: V8's
+ * allocation-site pretenuring of the labelled objects varies from process to process; with
+ * `--no-allocation-site-pretenuring` seven processes' medians were 5.00–7.06 (median 5.56)
+ * against 5.47–7.63 (5.95) without, better in six of seven pairs: a flag for the service to
+ * weigh, not set here. The 5 ms goal is still not reached in the median at spectra to 5000.
  */
 import {
   analyseDesign,
