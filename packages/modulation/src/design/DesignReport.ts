@@ -372,7 +372,11 @@ export interface DesignReport {
   losses: DesignLossFigures | null;
   /** What a load with back-EMF converts (torque-producing current per phase, air-gap power); null without an EMF. */
   motor: MotorFigures | null;
-  /** The filter's own figures (unloaded) and its loaded gain; null without a filter. */
+  /**
+   * The LC filter's own figures (unloaded) and its loaded gain; null without a filter. With a
+   * grid these are L1 with C only (without L2 and the grid): the resonance a grid design has is
+   * the LCL's, `grid.resonance` (read both through `designResonance`).
+   */
   filter: {
     characteristics: LcFilterCharacteristics;
     /** |V_out/V_bridge| at the fundamental and at the carrier frequency, with the load. */

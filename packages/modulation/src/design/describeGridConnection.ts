@@ -1,5 +1,7 @@
 import type { GridCurrentLimitCheck } from '../limits/checkGridCurrentLimits.js';
+import { generationRowReason } from '../limits/generationRowReason.js';
 import type { GridFigures } from './DesignReport.js';
+import { designResonance } from './designResonance.js';
 import type { InverterDesign } from './InverterDesign.js';
 import { modulationPhaseCount } from './modulationPhaseCount.js';
 
@@ -25,16 +27,29 @@ const digits = (value: number): string => String(Number(value.toPrecision(4)));
 const percent = (ratio: number): string =>
   Math.abs(ratio) < 1e-5 ? '< 0.001 %' : `${digits(100 * ratio)} %`;
 
-/** One standard's verdict on the grid current, in the words of the check's own fields. */
+/**
+ * One standard's verdict on the grid current, in the words of the check's own fields, and why
+ * 519's first row applies when the generation footnote chose it over a higher ratio.
+ */
 function verdict(check: GridCurrentLimitCheck, total: string, grouped: boolean): string {
   const { standard, row } = check;
+  const reason = generationRowReason(row, check.shortCircuitRatio);
   return (
     `${standard.name}-${standard.edition} (${row.label}${row.byGenerationRule ? ', the row for generating equipment' : ''}): ` +
     `${check.pass ? 'within' : 'over'} the limits; ${total} ${percent(check.total)} to order ${standard.maxOrder} (limit ${percent(check.totalLimit)}), ` +
     `${percent(check.totalWholeWaveform)} over the whole waveform; worst order ${check.worstIndividual.order} at ${percent(check.worstIndividual.ratio)} of the reference current` +
     (check.violations.length > 0 ? `; ${check.violations.length} figure(s) over their limit` : '') +
-    (grouped ? '; read on harmonic groups of the span’s components' : '')
+    (grouped ? '; read on harmonic groups of the span’s components' : '') +
+    (reason === null ? '' : `. ${reason}`)
   );
+}
+
+/** The LCL resonance and its distances from the carrier and the control bandwidth, or ''. */
+function resonanceText(figures: GridFigures | null): string {
+  const resonance = figures ? designResonance({ filter: null, grid: figures }) : null;
+  if (!resonance) return '';
+  const distances = resonance.distances === null ? '' : ` (${resonance.distances})`;
+  return `; ${resonance.name} ${digits(resonance.frequency)} Hz${distances}`;
 }
 
 /**
@@ -47,8 +62,11 @@ function verdict(check: GridCurrentLimitCheck, total: string, grouped: boolean):
  * ohms, L in millihenries, with the report's short-circuit current, amperes rms, and I_SC/I_L
  * when `figures` is given), the filter per phase (L1 and C of the design's `filter` with the
  * grid-side L2, an LCL; without a filter the L of L2 plus the grid's L) with the report's LCL
- * resonance, and the control bandwidth when given. Verdicts: IEEE Std 519-2022 Table 2 (TDD) and
- * IEEE Std 1547-2018 Tables 26–27 (TRD), recalled from memory, read from `figures.limits`.
+ * resonance and its distances from the carrier and the control bandwidth
+ * ({@link designResonance}), and the control bandwidth when given. Verdicts: IEEE Std 519-2022
+ * Table 2 (TDD) and IEEE Std 1547-2018 Tables 26–27 (TRD), recalled from memory, read from
+ * `figures.limits`; 519's ends with {@link generationRowReason}'s sentence when the generation
+ * footnote applied its first row although I_SC/I_L is higher.
  * Numbers carry four significant digits. Returns null for a design without a grid.
  */
 export function describeGridConnection(
@@ -77,7 +95,7 @@ export function describeGridConnection(
       (filter
         ? `L1 ${mH(filter.l)}, C ${digits(filter.c * 1e6)} µF, L2 ${mH(grid.l2)}`
         : `L2 ${mH(grid.l2)} with the grid's ${mH(grid.l)} (no capacitor)`) +
-        (figures?.resonance ? `; resonance ${digits(figures.resonance.frequency)} Hz` : ''),
+        resonanceText(figures),
     ],
   ];
   if (grid.controlBandwidth !== undefined)

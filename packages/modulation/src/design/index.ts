@@ -6,6 +6,7 @@ export * from './designFrequencyRatio.js';
 export * from './designRationalRatio.js';
 export * from './designCarrierSpan.js';
 export * from './describeGridConnection.js';
+export * from './designResonance.js';
 export * from './designSpanMaxOrder.js';
 export * from './designSpanModulation.js';
 export * from './asynchronousDesignSpectra.js';

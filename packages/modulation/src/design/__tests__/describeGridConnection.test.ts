@@ -40,6 +40,10 @@ describe('describeGridConnection', () => {
     // LCL resonance (1/2π)·√((L1 + L2')/(L1·L2'·C)), L2' = 0.7 mH (Liserre, Blaabjerg and
     // Hansen, 2005): √(2.7e-3/(2e-3·0.7e-3·10e-6))/2π = 2210 Hz (hand-worked).
     expect(text.rows[2]?.[1]).toContain('resonance 2210 Hz');
+    // Named as the LCL's, with 10 kHz/2210 Hz = 4.524 and 2210 Hz/1000 Hz = 2.21 (hand-worked).
+    expect(text.rows[2]?.[1]).toContain(
+      'LCL resonance 2210 Hz (carrier 4.524× above it; 2.21× the control bandwidth)',
+    );
     const { ieee519, ieee1547 } = report.grid!.limits;
     expect(text.verdicts).toHaveLength(2);
     expect(text.verdicts[0]).toMatch(/^IEEE Std 519-2022 \(I_SC\/I_L /);
@@ -47,6 +51,13 @@ describe('describeGridConnection', () => {
     expect(text.verdicts[1]).toMatch(/^IEEE Std 1547-2018 /);
     expect(text.verdicts[1]).toContain(ieee1547.pass ? 'within the limits' : 'over the limits');
     expect(text.verdicts.join(' ')).not.toContain('harmonic groups');
+    // I_SC/I_L is far above 20 here, yet IEEE 519's first row applies to generating equipment
+    // (Table 2's footnote, from memory): the verdict says why, 1547's (no rows by ratio) does not.
+    expect(report.grid!.shortCircuitRatio).toBeGreaterThan(20);
+    expect(text.verdicts[0]).toContain(
+      `The I_SC/I_L < 20 row is used although I_SC/I_L is ${Number(report.grid!.shortCircuitRatio.toPrecision(4))}`,
+    );
+    expect(text.verdicts[1]).not.toContain('row is used although');
     expect(text.caution).toContain('recalled from memory');
     expect(text.caution).toContain('confirm them with the standards and the utility');
   });
