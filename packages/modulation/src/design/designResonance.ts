@@ -2,8 +2,11 @@ import type { DesignReport } from './DesignReport.js';
 
 /** The resonance that matters in a design's report, named ({@link designResonance}). */
 export interface DesignResonance {
-  /** 'LCL resonance' for a grid-tied design, 'LC filter resonance' otherwise. */
-  name: 'LCL resonance' | 'LC filter resonance';
+  /**
+   * 'LCL resonance' for a grid-tied design, 'LC filter resonance' without a grid, 'L1–C
+   * resonance' for a grid design with no inductance on the grid side (l2 + l = 0, no LCL).
+   */
+  name: 'LCL resonance' | 'LC filter resonance' | 'L1–C resonance';
   /** Hertz. */
   frequency: number;
   /** f_carrier/f_res (LCL only, null otherwise or without a carrier). */
@@ -24,15 +27,15 @@ const digits = (value: number): string => String(Number(value.toPrecision(4)));
  * current controller's bandwidth: the report's `filter.characteristics.resonanceFrequency` is
  * then only L1 with C, without L2 and the grid, and is not the one a grid design resonates at.
  * An LC-filtered design (no grid) keeps its LC resonance 1/(2π√(LC)) (standard circuit
- * analysis). Null without a filter, or with a grid whose l2 + l is 0 (no LCL).
+ * analysis); so does a grid design with l2 + l = 0 (no LCL), named its L1–C resonance. Null
+ * without a filter.
  */
 export function designResonance(
   report: Pick<DesignReport, 'filter' | 'grid'>,
 ): DesignResonance | null {
   const { filter, grid } = report;
-  if (grid) {
-    const r = grid.resonance;
-    if (!r) return null;
+  const r = grid?.resonance;
+  if (r) {
     const parts = [
       ...(r.carrierRatio !== null ? [`carrier ${digits(r.carrierRatio)}× above it`] : []),
       ...(r.controlBandwidthRatio !== null
@@ -49,7 +52,7 @@ export function designResonance(
   }
   if (!filter) return null;
   return {
-    name: 'LC filter resonance',
+    name: grid ? 'L1–C resonance' : 'LC filter resonance',
     frequency: filter.characteristics.resonanceFrequency,
     carrierRatio: null,
     controlBandwidthRatio: null,

@@ -37,7 +37,14 @@ describe('designResonance', () => {
     expect(resonance.distances).toBeNull();
   });
 
-  it('is null without a filter and without a grid, and without the carrier distance when no control bandwidth is given', () => {
+  it('names a grid design without grid-side inductance (l2 + l = 0, no LCL) by its L1–C resonance, 1125 Hz', () => {
+    const report = analyseDesign({ ...design, grid: { ...design.grid!, l: 0, l2: 0 } });
+    expect(report.grid!.resonance).toBeNull();
+    expect(designResonance(report)).toMatchObject({ name: 'L1–C resonance', distances: null });
+    expect(designResonance(report)!.frequency).toBeCloseTo(1125.4, 1);
+  });
+
+  it('is null without a filter, and without the carrier distance when no control bandwidth is given', () => {
     expect(designResonance({ filter: null, grid: null })).toBeNull();
     const grid = { ...design.grid! };
     delete grid.controlBandwidth;
