@@ -1,3 +1,4 @@
+import type { DesignResonance } from '@pulsewright/modulation';
 import { SelectField } from '../../../components/ui/Field';
 import { formatNumber } from '../../../lib/format';
 import { DAMPING_OPTIONS } from '../../../lib/modulationOptions';
@@ -8,7 +9,7 @@ import { FilterSizing } from './FilterSizing';
 import type { StudyFieldErrors } from './studyFieldErrors';
 
 /**
- * The study form's LC output filter fieldset: filter L (H, shown in mH), C (F, shown in µF), damping R (Ω) and C, the damping placement, the sizing helper and the loaded resonance (Hz) from the live report. A render function, not a component: the form calls it
+ * The study form's LC output filter fieldset: filter L (H, shown in mH), C (F, shown in µF), damping R (Ω) and C, the damping placement, the sizing helper and the resonance (Hz) from the live report, named by the library's designResonance (a grid design's LCL resonance with its distances from the carrier and the control bandwidth). A render function, not a component: the form calls it
  * while rendering so the messages it asks for are claimed before the form lists the unclaimed ones.
  */
 export function filterFields({
@@ -24,7 +25,7 @@ export function filterFields({
   readOnly: boolean;
   fields: StudyFieldErrors;
   ratio: number;
-  filterResonance?: number | undefined;
+  filterResonance?: DesignResonance | null | undefined;
 }) {
   const set = draftSetter(onChange);
   const threePhase = draftPhaseCount(draft) === 3;
@@ -89,12 +90,14 @@ export function filterFields({
             error={error('filter.dampingPlacement')}
             options={DAMPING_OPTIONS}
           />
-          {filterResonance !== undefined ? (
+          {filterResonance ? (
             <p className="text-xs text-ink-soft" data-testid="filter-resonance">
-              Resonance {formatNumber(filterResonance)} Hz
-              {Number.isFinite(ratio)
-                ? ` (carrier ${formatNumber(draft.carrierFrequency)} Hz)`
-                : ''}
+              {filterResonance.name} {formatNumber(filterResonance.frequency)} Hz
+              {filterResonance.distances !== null
+                ? ` (${filterResonance.distances})`
+                : Number.isFinite(ratio)
+                  ? ` (carrier ${formatNumber(draft.carrierFrequency)} Hz)`
+                  : ''}
             </p>
           ) : null}
         </>

@@ -28,11 +28,18 @@ describe('GridPanel', () => {
     expect(verdict).toHaveTextContent('IEEE Std 519-2022');
     expect(verdict).toHaveTextContent(`TDD ${formatPercent(grid.limits.ieee519.total)}`);
     expect(verdict).toHaveTextContent('the row for generating equipment');
+    // I_SC/I_L is above 20 here, yet the footnote for generating equipment applies the first row
+    // of IEEE 519's Table 2 (from memory): the panel says why, and not under IEEE 1547.
+    expect(grid.shortCircuitRatio).toBeGreaterThan(20);
+    expect(screen.getByTestId('grid-row-reason')).toHaveTextContent(
+      /^The I_SC\/I_L < 20 row is used although I_SC\/I_L is .*generating equipment whatever the actual ratio \(from memory: confirm with the standard and the utility\)\.$/,
+    );
     expect(screen.getByTestId('grid-caution')).toHaveTextContent(/recalled from memory/);
     fireEvent.change(screen.getByRole('combobox', { name: 'Limits of' }), {
       target: { value: 'ieee1547' },
     });
     expect(screen.getByTestId('grid-verdict')).toHaveTextContent('IEEE Std 1547-2018');
+    expect(screen.queryByTestId('grid-row-reason')).toBeNull();
     expect(screen.getByTestId('grid-verdict')).toHaveTextContent(
       `TRD ${formatPercent(grid.limits.ieee1547.total)}`,
     );

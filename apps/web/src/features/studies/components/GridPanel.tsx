@@ -1,3 +1,4 @@
+import { generationRowReason } from '@pulsewright/modulation';
 import { useState, type ReactNode } from 'react';
 import type { StudyReport } from '../../../lib/api';
 import { SpectrumChart } from '../../../components/charts/SpectrumChart';
@@ -26,7 +27,8 @@ function Row({ name, children }: { name: string; children: ReactNode }) {
  * A grid-connected design (the report's `grid`): the grid current's harmonics against the
  * current-distortion limits of IEEE Std 519 or 1547 (as the library recalls them, from memory),
  * the grid and inverter current spectra, the LCL resonance and its distances, the damping loss,
- * the capacitor's current and the power exchanged. Over a carrier span (a ratio p/q) the limits
+ * the capacitor's current and the power exchanged; when IEEE 519's first row is applied by its
+ * footnote for generating equipment although I_SC/I_L is higher, the library's sentence why. Over a carrier span (a ratio p/q) the limits
  * are read on harmonic groups of the n/q components (`harmonicGrouping`): the rule and each
  * group's components are listed with the caution to confirm with the standard and the utility.
  * Draws what the report holds; nothing is computed here but percentages of the reference current.
@@ -36,6 +38,8 @@ export function GridPanel({ report, fileStem }: { report: StudyReport; fileStem:
   const { grid } = report;
   if (!grid) return null;
   const check = grid.limits[standard];
+  // Why IEEE 519's < 20 row applies to generating equipment although I_SC/I_L is higher.
+  const rowReason = generationRowReason(check.row, check.shortCircuitRatio);
   const resonance = grid.resonance;
   // The report names phase a's currents (no phase on a single-phase bridge).
   const gridCurrentName = report.currents[0]?.load?.name ?? 'grid current';
@@ -102,6 +106,11 @@ export function GridPanel({ report, fileStem }: { report: StudyReport; fileStem:
           {check.worstIndividual.order} at {formatPercent(check.worstIndividual.ratio)}.
           {check.violations.length ? ` ${check.violations.length} figure(s) over their limit.` : ''}
         </p>
+        {rowReason ? (
+          <p className="text-xs" data-testid="grid-row-reason">
+            {rowReason}
+          </p>
+        ) : null}
         {check.note ? <p className="text-xs">{check.note}</p> : null}
         <table className="mt-2 w-full text-xs" aria-label="Grid figures">
           <tbody className="num">

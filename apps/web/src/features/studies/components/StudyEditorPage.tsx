@@ -1,4 +1,4 @@
-import type { AnalyseDesignOptions } from '@pulsewright/modulation';
+import { designResonance, type AnalyseDesignOptions } from '@pulsewright/modulation';
 import { useCallback, useMemo, useState } from 'react';
 import { Link, useLocation, useNavigate, useParams, useSearchParams } from 'react-router-dom';
 import { paths } from '../../../config/paths';
@@ -218,7 +218,7 @@ function StudyEditor({ study }: { study: Study | undefined }) {
               projects={projects.data ?? []}
               saveError={saveError}
               previewErrors={[...designErrors, ...(dirty ? formErrors : [])]}
-              filterResonance={report?.filter?.characteristics.resonanceFrequency}
+              filterResonance={report ? designResonance(report) : undefined}
             />
           </Panel>
           {report ? (

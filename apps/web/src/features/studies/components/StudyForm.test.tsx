@@ -1,3 +1,4 @@
+import { analyseDesign, designResonance } from '@pulsewright/modulation';
 import { cleanup, fireEvent, render, screen, within } from '@testing-library/react';
 import { describe, expect, it, vi } from 'vitest';
 import { ApiError } from '../../../lib/api';
@@ -310,9 +311,40 @@ describe('StudyForm', () => {
   it('shows the damping capacitor only for the parallel R-C damping, and the resonance from the report', () => {
     renderForm(
       { ...defaultDraft(), filterOn: true, dampingPlacement: 'parallel-rc' },
-      { filterResonance: 795.77 },
+      {
+        filterResonance: {
+          name: 'LC filter resonance',
+          frequency: 795.77,
+          carrierRatio: null,
+          controlBandwidthRatio: null,
+          distances: null,
+        },
+      },
     );
     expect(screen.getByLabelText(/Damping C/)).toHaveValue('20');
-    expect(screen.getByTestId('filter-resonance')).toHaveTextContent('Resonance 795.8 Hz');
+    expect(screen.getByTestId('filter-resonance')).toHaveTextContent(
+      'LC filter resonance 795.8 Hz',
+    );
+  });
+
+  it('names a grid design’s resonance beside the filter as the LCL’s, with its distances', () => {
+    // Invented values: L1 2 mH, C 10 µF, L2 0.5 mH with the grid's 0.2 mH, 10 kHz carrier, 1 kHz
+    // control bandwidth: (1/2π)·√((L1 + L2')/(L1·L2'·C)) = 2210 Hz (Liserre, Blaabjerg and
+    // Hansen, 2005), 10 kHz/2210 Hz = 4.524, 2210 Hz/1000 Hz = 2.21 (hand-worked).
+    const report = analyseDesign(
+      {
+        vdc: 700,
+        fundamentalFrequency: 50,
+        carrierFrequency: 10_000,
+        modulation: { method: 'three-phase', ma: 1, zeroSequence: 'third-harmonic' },
+        filter: { l: 2e-3, c: 10e-6, rDamping: 2 },
+        grid: { lineVoltage: 400, r: 0.05, l: 0.2e-3, l2: 0.5e-3, controlBandwidth: 1000 },
+      },
+      { points: 256 },
+    );
+    renderForm({ ...defaultDraft(), filterOn: true }, { filterResonance: designResonance(report) });
+    expect(screen.getByTestId('filter-resonance')).toHaveTextContent(
+      'LCL resonance 2210 Hz (carrier 4.524× above it; 2.21× the control bandwidth)',
+    );
   });
 });

@@ -1,3 +1,4 @@
+import type { DesignResonance } from '@pulsewright/modulation';
 import type { Project } from '../../../lib/api';
 import type { PreviewFieldError } from '../model/designPreview';
 import type { StudyDraft } from '../model/studyDraft';
@@ -19,8 +20,8 @@ export interface StudyFormProps {
   saveError: unknown;
   /** What the library refused in the live preview, by path in the design. */
   previewErrors: readonly PreviewFieldError[];
-  /** The loaded filter's resonance from the live report, hertz (shown beside the filter). */
-  filterResonance?: number | undefined;
+  /** The live report's resonance, named (`designResonance`: the LCL's with a grid), shown beside the filter. */
+  filterResonance?: DesignResonance | null | undefined;
 }
 
 /** The study's design with units and the library's ranges; errors from the server and the library beside each field. */

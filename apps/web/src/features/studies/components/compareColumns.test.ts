@@ -25,4 +25,26 @@ describe('Compare columns', () => {
     );
     expect(mf?.cell(whole, row)).toBe('27');
   });
+
+  it('the filter resonance column gives a grid design’s LCL resonance, marked as such, and an LC design its LC one', () => {
+    const column = COLUMNS.find((c) => c.heading === 'Filter resonance (Hz)');
+    const row = { carrierFrequency: 10_000, factor: 1 } as ConditionedRow;
+    const lcl: InverterDesign = {
+      vdc: 700,
+      fundamentalFrequency: 50,
+      carrierFrequency: 10_000,
+      modulation: { method: 'three-phase', ma: 1, zeroSequence: 'third-harmonic' },
+      filter: { l: 2e-3, c: 10e-6, rDamping: 2 },
+      grid: { lineVoltage: 400, r: 0.05, l: 0.2e-3, l2: 0.5e-3 },
+    };
+    // (1/2π)·√((L1 + L2')/(L1·L2'·C)), L2' = 0.7 mH: 2210 Hz (Liserre, Blaabjerg and Hansen,
+    // 2005); L1 with C alone 1/(2π√(LC)) = 1125 Hz (hand-worked); 10 kHz/2210 Hz = 4.524.
+    const grid = analyseDesign(lcl, { points: 64 });
+    expect(column?.cell(grid, row)).toBe('2210 (LCL)');
+    expect(column?.value?.(grid, row)).toBeCloseTo(2210.2, 1);
+    expect(column?.title?.(grid, row)).toBe('LCL resonance; carrier 4.524× above it');
+    const { grid: _grid, ...alone } = lcl;
+    const lc = analyseDesign({ ...alone, load: { r: 10, l: 0 } }, { points: 64 });
+    expect(column?.cell(lc, row)).toBe('1125');
+  });
 });

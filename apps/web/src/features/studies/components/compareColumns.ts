@@ -1,3 +1,4 @@
+import { designResonance } from '@pulsewright/modulation';
 import { formatGain, formatNumber, formatPercent } from '../../../lib/format';
 import type { StudyReport } from '../../../lib/api';
 import { limitPointName } from '../model/reportFigures';
@@ -112,12 +113,22 @@ export const COLUMNS: Column[] = [
   },
   {
     heading: 'Filter resonance (Hz)',
-    cell: (r) => (r.filter ? formatNumber(r.filter.characteristics.resonanceFrequency) : '—'),
-    value: (r) => r.filter?.characteristics.resonanceFrequency ?? null,
-    title: (r) =>
-      r.filter?.gainAtCarrier != null
+    // A grid design's is the LCL's (designResonance), marked as such, not L1 with C alone.
+    cell: (r) => {
+      const resonance = designResonance(r);
+      if (!resonance) return '—';
+      const value = formatNumber(resonance.frequency);
+      return resonance.name === 'LCL resonance' ? `${value} (LCL)` : value;
+    },
+    value: (r) => designResonance(r)?.frequency ?? null,
+    title: (r) => {
+      const resonance = designResonance(r);
+      if (resonance?.name === 'LCL resonance')
+        return `${resonance.name}${resonance.distances ? `; ${resonance.distances}` : ''}`;
+      return r.filter?.gainAtCarrier != null
         ? `gain at the carrier ${formatGain(r.filter.gainAtCarrier)}`
-        : 'no filter',
+        : 'no filter';
+    },
   },
   {
     heading: 'Grid current THD',

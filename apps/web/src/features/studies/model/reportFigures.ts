@@ -1,3 +1,4 @@
+import { designResonance } from '@pulsewright/modulation';
 import type { StudyReport } from '../../../lib/api';
 import type { Figure } from '../../../components/charts/FigureCards';
 import { formatGain, formatNumber, formatPercent } from '../../../lib/format';
@@ -11,7 +12,8 @@ export function limitPointName(report: StudyReport): string {
  * The report's headline figures as the cards show them, each saying what it is of: exact
  * whole-waveform THD and WTHD (the truncated spectrum THD only with its order), the fundamental
  * per phase and line to line, the currents of phase a, the DC-link ripple and common-mode voltage,
- * load power, filter and limit result.
+ * load power, the filter's resonance (a grid design's LCL resonance with its distances from the
+ * carrier and the control bandwidth, `designResonance`) and the limit result.
  * Display only: every number is a field of the report.
  */
 export function reportFigures(report: StudyReport): Figure[] {
@@ -122,13 +124,20 @@ export function reportFigures(report: StudyReport): Figure[] {
       value: `${formatNumber(report.loadPower)} W`,
       note: `into ${report.grid ? 'the grid’s series resistance r' : 'R'}${three ? ', all three phases' : ''}`,
     });
-  if (filter) {
+  // A grid design resonates at its LCL's frequency (the library's designResonance), not L1–C's.
+  const resonance = designResonance(report);
+  if (resonance?.name === 'LCL resonance')
     figures.push({
-      label: 'Filter resonance',
-      value: `${formatNumber(filter.characteristics.resonanceFrequency)} Hz`,
+      label: resonance.name,
+      value: `${formatNumber(resonance.frequency)} Hz`,
+      note: `${resonance.distances ? `${resonance.distances}; ` : ''}L1, C and L2 with the grid’s L`,
+    });
+  else if (resonance && filter)
+    figures.push({
+      label: resonance.name === 'L1–C resonance' ? resonance.name : 'Filter resonance',
+      value: `${formatNumber(resonance.frequency)} Hz`,
       note: `${filter.gainAtCarrier !== null ? `gain at the carrier ${formatGain(filter.gainAtCarrier)}; ` : ''}at the fundamental ${formatGain(filter.gainAtFundamental)}, loaded`,
     });
-  }
   const { grid } = report;
   if (grid) {
     const { ieee519, ieee1547 } = grid.limits;
@@ -141,7 +150,7 @@ export function reportFigures(report: StudyReport): Figure[] {
         grid.harmonicGrouping
           ? '; read on IEC 61000-4-7 harmonic groups of the span’s components, from memory: confirm with the standard and the utility'
           : ''
-      })${grid.resonance ? `; LCL resonance ${formatNumber(grid.resonance.frequency)} Hz` : ''}`,
+      })`,
     });
   }
   figures.push({

@@ -1,6 +1,6 @@
 import { analyseDesign, type InverterDesign } from '@pulsewright/modulation';
 import { describe, expect, it } from 'vitest';
-import { formatPercent } from '../../../lib/format';
+import { formatNumber, formatPercent } from '../../../lib/format';
 import { reportFigures } from './reportFigures';
 
 // Invented values: a 400 V, 50 Hz grid fed through an LCL filter from 700 V at 10 kHz.
@@ -31,6 +31,32 @@ describe('reportFigures with a grid', () => {
     expect(loss?.note).toBe('into the grid’s series resistance r, all three phases');
     const gridRms = report.currents[0]!.load!.rms;
     expect(report.loadPower!).toBeCloseTo(3 * gridRms * gridRms * 0.05, 6);
+  });
+
+  it('shows the LCL resonance, named as such, with its distances from the carrier and the control bandwidth, not the L1–C one', () => {
+    const report = analyseDesign(
+      { ...design, grid: { ...design.grid!, controlBandwidth: 1000 } },
+      { points: 256 },
+    );
+    const figures = reportFigures(report);
+    expect(figures.map((f) => f.label)).not.toContain('Filter resonance');
+    const card = figures.find((f) => f.label === 'LCL resonance');
+    // (1/2π)·√((L1 + L2')/(L1·L2'·C)), L2' = l2 + l = 0.7 mH (Liserre, Blaabjerg and Hansen,
+    // 2005): 2210 Hz, where L1 with C alone would be 1125 Hz; 10 kHz/2210 Hz = 4.524 and
+    // 2210 Hz/1000 Hz = 2.21 (hand-worked).
+    expect(card?.value).toBe(`${formatNumber(2210.2)} Hz`);
+    expect(card?.note).toContain('carrier 4.524× above it; 2.21× the control bandwidth');
+  });
+
+  it('keeps an LC-filtered design (no grid) on its filter resonance 1/(2π√(LC)), 1125 Hz', () => {
+    const { grid: _grid, ...alone } = design;
+    const figures = reportFigures(
+      analyseDesign({ ...alone, load: { r: 10, l: 0 } }, { points: 256 }),
+    );
+    expect(figures.find((f) => f.label === 'Filter resonance')?.value).toBe(
+      `${formatNumber(1125.4)} Hz`,
+    );
+    expect(figures.map((f) => f.label)).not.toContain('LCL resonance');
   });
 
   it('says a span’s limits were read on harmonic groups (60 Hz at 10 kHz: 500/3), and a whole mf’s not', () => {
