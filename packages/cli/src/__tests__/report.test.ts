@@ -111,6 +111,10 @@ describe('pulsewright report', () => {
       `load power (all phases): ${Number(report.loadPower?.toPrecision(6))} W`,
     );
     expect(run.stdout).toContain('Inverter DC buses and outputs are lethal');
+    // No grid: the LC filter keeps its own resonance, 1/(2π√(1.5 mH·20 µF)) = 918.881 Hz
+    // (standard circuit analysis, hand-worked), and no LCL is named.
+    expect(run.stdout).toContain('filter: resonance 918.881 Hz, characteristic impedance');
+    expect(run.stdout).not.toContain('LCL');
     expect(run.stdout).toMatch(/limit check \(IEEE Std 519-2022/);
   });
 
@@ -122,7 +126,7 @@ describe('pulsewright report', () => {
       carrierFrequency: 10_000,
       modulation: { method: 'three-phase', ma: 1, zeroSequence: 'third-harmonic' },
       filter: { l: 2e-3, c: 10e-6, rDamping: 2 },
-      grid: { lineVoltage: 400, r: 0.05, l: 0.2e-3, l2: 0.5e-3 },
+      grid: { lineVoltage: 400, r: 0.05, l: 0.2e-3, l2: 0.5e-3, controlBandwidth: 1000 },
     };
     const run = await runCli(['report', '-'], { input: JSON.stringify({ design, maxOrder: 100 }) });
     expect(run.code).toBe(0);
@@ -133,8 +137,18 @@ describe('pulsewright report', () => {
     expect(run.stdout).toContain('Grid: 400 V rms line to line, 50 Hz');
     // I_SC = V_ph/|r + jω₁l| = (400/√3)/|0.05 + j·0.06283| = 2876 A rms (hand-worked).
     expect(run.stdout).toContain('R 0.05 Ω, L 0.2 mH; short-circuit current 2876 A rms');
-    // (1/2π)·√((L1 + L2')/(L1·L2'·C)) = 2210 Hz (Liserre, Blaabjerg and Hansen, 2005).
-    expect(run.stdout).toContain('L1 2 mH, C 10 µF, L2 0.5 mH; resonance 2210 Hz');
+    // (1/2π)·√((L1 + L2')/(L1·L2'·C)) = 2210 Hz (Liserre, Blaabjerg and Hansen, 2005), named as
+    // the LCL's, 10 kHz/2210 Hz = 4.524 and 2210 Hz/1 kHz = 2.21 from the carrier and the control
+    // bandwidth (hand-worked); L1 with C alone, 1/(2π√(LC)) = 1125 Hz, is said to be only that.
+    const distances = '(carrier 4.524× above it; 2.21× the control bandwidth)';
+    expect(run.stdout).toContain(`L1 2 mH, C 10 µF, L2 0.5 mH; LCL resonance 2210 Hz ${distances}`);
+    expect(run.stdout).toContain(
+      `filter: LCL resonance 2210.23 Hz ${distances}; L1 with C alone (without L2 and the grid): resonance 1125.4 Hz,`,
+    );
+    // I_SC/I_L is above 20, yet generating equipment takes IEEE 519's first row (Table 2's
+    // footnote, from memory): the verdict says why.
+    expect(limits.ieee519.shortCircuitRatio).toBeGreaterThan(20);
+    expect(run.stdout).toContain('The I_SC/I_L < 20 row is used although I_SC/I_L is');
     expect(run.stdout).toContain(
       `IEEE Std 519-2022 (${limits.ieee519.row.label}, the row for generating equipment): ${limits.ieee519.pass ? 'within' : 'over'} the limits; TDD`,
     );

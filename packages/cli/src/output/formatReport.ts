@@ -1,5 +1,6 @@
 import {
   describeGridConnection,
+  designResonance,
   type CurrentFigures,
   type DesignReport,
   type InverterDesign,
@@ -105,8 +106,14 @@ export function formatReport(report: DesignReport, design: InverterDesign): stri
   if (report.filter !== null) {
     const f = report.filter;
     const k = f.characteristics;
+    // A grid design resonates at its LCL's frequency; the filter's own figures are L1 with C alone.
+    const resonance = designResonance(report);
+    const lcl =
+      resonance?.name === 'LCL resonance'
+        ? `${resonance.name} ${formatNumber(resonance.frequency)} Hz${resonance.distances ? ` (${resonance.distances})` : ''}; L1 with C alone (without L2 and the grid): `
+        : '';
     lines.push(
-      `filter: resonance ${formatNumber(k.resonanceFrequency)} Hz, characteristic impedance ${formatNumber(k.characteristicImpedance)} Ω, ` +
+      `filter: ${lcl}${resonance?.name === 'L1–C resonance' ? 'L1–C resonance' : 'resonance'} ${formatNumber(k.resonanceFrequency)} Hz, characteristic impedance ${formatNumber(k.characteristicImpedance)} Ω, ` +
         `damping ratio ${formatNumber(k.dampingRatio)}, peak gain ${formatNumber(k.peakGain)}; loaded gain at the fundamental ${formatNumber(f.gainAtFundamental)}, ` +
         `at the carrier ${formatNumber(f.gainAtCarrier)}`,
     );
