@@ -186,9 +186,19 @@ describe('e-mailing a study report', () => {
       expect(text).toContain(
         `- Grid impedance per phase (star): R 0.05 Ω, L 0.2 mH; short-circuit current ${frequency === 50 ? 2876 : 2553} A rms`,
       );
-      // (1/2π)·√((L1 + L2')/(L1·L2'·C)) = 2210 Hz (Liserre, Blaabjerg and Hansen, 2005).
+      // (1/2π)·√((L1 + L2')/(L1·L2'·C)) = 2210 Hz (Liserre, Blaabjerg and Hansen, 2005), named as
+      // the LCL's with the carrier 10 kHz/2210 Hz = 4.524× above it (hand-worked); L1 with C
+      // alone, 1/(2π√(LC)) = 1125 Hz, is not the grid design's resonance and is not mailed.
       expect(text).toContain(
-        '- LCL filter per phase (star): L1 2 mH, C 10 µF, L2 0.5 mH; resonance 2210 Hz',
+        '- LCL filter per phase (star): L1 2 mH, C 10 µF, L2 0.5 mH; LCL resonance 2210 Hz (carrier 4.524× above it)',
+      );
+      expect(text).toContain('- LCL resonance: 2210 Hz (carrier 4.524× above it)');
+      expect(text).not.toContain('1125');
+      // I_SC/I_L is above 20, yet generating equipment takes IEEE 519's first row (Table 2's
+      // footnote, from memory): the verdict says why.
+      expect(grid!.shortCircuitRatio).toBeGreaterThan(20);
+      expect(text).toContain(
+        `The I_SC/I_L < 20 row is used although I_SC/I_L is ${Number(grid!.shortCircuitRatio.toPrecision(4))}: the table’s footnote applies it to generating equipment`,
       );
       const { ieee519, ieee1547 } = grid!.limits;
       expect(text).toContain(

@@ -1,5 +1,6 @@
 import {
   describeGridConnection,
+  designResonance,
   type DesignReport,
   type InverterDesign,
 } from '@pulsewright/modulation';
@@ -117,15 +118,17 @@ export function reportFigures(report: DesignReport, design: InverterDesign): str
     );
     if (phase.load) lines.push(`- ${phase.load.name}: ${fixed(phase.load.rms, 'A rms')}`);
   }
-  // With a grid the report's load is the grid's series resistance r, and the LC's own resonance
-  // is not the LCL's (that one is in the grid's rows below).
+  // With a grid the report's load is the grid's series resistance r, and the resonance is the
+  // LCL's, not L1 with C's (the library's designResonance names it).
   if (report.loadPower !== null)
     lines.push(
       `- power into the ${report.grid ? "grid's series resistance" : 'load resistance'}: ${fixed(report.loadPower, 'W')}`,
     );
-  if (report.filter)
+  const resonance = designResonance(report);
+  if (resonance)
     lines.push(
-      `- ${report.grid ? 'L1–C resonance (without L2 and the grid)' : 'filter resonance'}: ${fixed(report.filter.characteristics.resonanceFrequency, 'Hz')}`,
+      `- ${resonance.name === 'LC filter resonance' ? 'filter resonance' : resonance.name}: ${fixed(resonance.frequency, 'Hz')}` +
+        (resonance.distances === null ? '' : ` (${resonance.distances})`),
     );
   const grid = describeGridConnection(design, report.grid);
   if (grid) {
