@@ -114,4 +114,22 @@ describe('spectrumLabeller: one label table for a report', () => {
     expect(expected[20]?.label).toBe('mf−1');
     expect(expected[43]?.label).toBe('2mf+1');
   });
+
+  it('gives each order the keys, key order and JSON of a plain labelled harmonic', () => {
+    // The entries are built by a constructor (for the garbage collector); what the API sends and
+    // the dashboard reads must not tell them from labelHarmonics' object literals.
+    const { legs } = threePhase({ ma: 0.9, mf: 21, vdc: 600 });
+    const labelled = spectrumLabeller(300, 21).phasors(harmonicPhasors(legs.a, 300));
+    const plain = labelHarmonics(harmonics(legs.a, 300), 21);
+    expect(Object.keys(labelled[43] ?? {})).toEqual([
+      'order',
+      'amplitude',
+      'phase',
+      'carrierGroup',
+      'sideband',
+      'label',
+    ]);
+    expect(JSON.stringify(labelled)).toBe(JSON.stringify(plain));
+    expect(structuredClone(labelled)).toEqual(plain);
+  });
 });
