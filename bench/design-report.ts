@@ -120,11 +120,19 @@
  * method; from memory), so they stay; validating the loss cells (assertFiniteArray, 1.2 % of a profile) and the
  * DC link's and running integral's remaining S-sample arrays (about 1 % each) are left. Profile
  * after (300 reports, one process): exact sums 13 %, transforms 11 % (+2 % real), garbage
- * collection 7 %, labelling 6 % (13 % in another process of the same build). Seen: V8's
- * allocation-site pretenuring of the labelled objects varies from process to process; with
- * `--no-allocation-site-pretenuring` seven processes' medians were 5.00–7.06 (median 5.56)
- * against 5.47–7.63 (5.95) without, better in six of seven pairs: a flag for the service to
- * weigh, not set here. The 5 ms goal is still not reached in the median at spectra to 5000.
+ * collection 7 %, labelling 6 % (13 % in another process of the same build). That spread was
+ * V8's allocation-site pretenuring: the labelled orders were object literals, whose site V8
+ * tracks, and in most processes (9 of 14 seen) it moved them to the old generation, so 300
+ * reports took 39–47 minor and 19–22 major collections instead of 100–113 and 1
+ * (`--no-allocation-site-pretenuring` alone: median of seven processes 5.95 → 5.56 ms). The
+ * labeller now builds them with a constructor (same fields, order and JSON): never pretenured
+ * in 11 processes (100–151 minor, 1 major). Mean CPU a report over 300, separate processes at
+ * load 3–4: round start 8.50–10.68 ms where pretenured, 5.40–7.16 where not; after, 5.40–9.40
+ * (six of eight 5.4–7.1); the median of a process moves less (the major collections hit a few
+ * reports), 4.82–5.75 → 4.61–6.93 in four pairs. bench/design-report.ts after, two runs at load
+ * 2.9–3.1: plans row 5.91 and 5.62 ms (spectrum alone 1.06–1.08, the runs before this step at
+ * load 2.2–2.7: 7.49–8.82). The 5 ms goal is still not reached in the median at spectra to 5000
+ * on this shared machine; it is within reach of the lower quartile (4.4–5.4 ms).
  */
 import {
   analyseDesign,
