@@ -166,6 +166,21 @@ export const scenarios: Scenario[] = [
       await page.getByText(/Saved revision on the server: THD/).waitFor();
       const verdict = (await page.getByTestId('grid-verdict').textContent()) ?? '';
       assert(verdict.includes('IEEE Std 519'), `the grid verdict is shown (got "${verdict}")`);
+      // The resonance card is the LCL's, (1/2π)·√((L1 + L2')/(L1·L2'·C)) = 2210 Hz with
+      // L2' = 0.7 mH (Liserre, Blaabjerg and Hansen, 2005), 10 kHz/2210 Hz = 4.524 from the
+      // carrier (hand-worked), not L1 with C's 1125 Hz; and the grid panel says why IEEE 519's
+      // < 20 row applies although I_SC/I_L is about 80 (generation footnote, from memory).
+      const card = page.locator('[data-figure="LCL resonance"]').first().locator('..');
+      const cardText = (await card.textContent()) ?? '';
+      assert(
+        cardText.includes('2210 Hz') && cardText.includes('carrier 4.524× above it'),
+        `the LCL resonance card with its distance from the carrier (got "${cardText}")`,
+      );
+      const reason = (await page.getByTestId('grid-row-reason').textContent()) ?? '';
+      assert(
+        reason.includes('The I_SC/I_L < 20 row is used although I_SC/I_L is 80'),
+        `the grid panel says why the < 20 row is used (got "${reason}")`,
+      );
       await page.getByText('Modulator and bridge voltage over 3 fundamental periods').waitFor();
       await screenshot(page, 'grid-span-editor');
       const grouping = page.getByTestId('grid-grouping');
@@ -219,6 +234,8 @@ export const scenarios: Scenario[] = [
       assert(
         designText.includes('400 V rms line to line, 60 Hz') &&
           designText.includes('L1 2 mH, C 10 µF, L2 0.5 mH') &&
+          designText.includes('LCL resonance 2210 Hz (carrier 4.524× above it)') &&
+          designText.includes('The I_SC/I_L < 20 row is used although I_SC/I_L is 80') &&
           !/Load/.test(designText),
         `the printed design table shows the grid and its LCL, no load (got "${designText.slice(0, 400)}")`,
       );

@@ -173,7 +173,7 @@ export const scenarios: Scenario[] = [
       );
       await page
         .getByTestId('filter-resonance')
-        .getByText(/Resonance 1000 Hz/)
+        .getByText(/LC filter resonance 1000 Hz/)
         .waitFor();
       await page.getByLabel('Filter L from').selectOption('typed');
       await box(page, /^Filter L/).fill('1.5');
