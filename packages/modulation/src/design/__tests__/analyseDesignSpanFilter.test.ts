@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { abs, add, div, mul, polar, sub, type HandComplex } from '../../testing/handComplex.js';
 import { assertInDelta } from '../../testing/assertInDelta.js';
 import { rangeErrorField } from '../../testing/rangeErrorField.js';
 import { analyseDesign, DESIGN_CAUTION } from '../analyseDesign.js';
@@ -10,20 +11,8 @@ import type { DesignReport } from '../DesignReport.js';
 import type { InverterDesign } from '../InverterDesign.js';
 import type { SpanLabelledHarmonic } from '../labelSpanHarmonics.js';
 
-// Complex numbers written here without the library, for the hand-solved networks below.
-type C = [number, number];
-const add = (a: C, b: C): C => [a[0] + b[0], a[1] + b[1]];
-const sub = (a: C, b: C): C => [a[0] - b[0], a[1] - b[1]];
-const mul = (a: C, b: C): C => [a[0] * b[0] - a[1] * b[1], a[0] * b[1] + a[1] * b[0]];
-const div = (a: C, b: C): C => {
-  const d = b[0] * b[0] + b[1] * b[1];
-  return [(a[0] * b[0] + a[1] * b[1]) / d, (a[1] * b[0] - a[0] * b[1]) / d];
-};
-const abs = (a: C): number => Math.hypot(a[0], a[1]);
-const polar = (amplitude: number, phase: number): C => [
-  amplitude * Math.cos(phase),
-  amplitude * Math.sin(phase),
-];
+// Complex numbers written without the library (testing/handComplex), for the hand-solved networks below.
+type C = HandComplex;
 const TAU = 2 * Math.PI;
 
 /** |a − b| within `relative`·|b| (and an absolute floor for values near zero). */

@@ -2,16 +2,9 @@ import { describe, expect, it } from 'vitest';
 import { analyseDesign } from '../analyseDesign.js';
 import { describeGridConnection } from '../describeGridConnection.js';
 import type { InverterDesign } from '../InverterDesign.js';
+import { GRID_TIED_DESIGN } from '../../testing/gridTiedDesign.js';
 
-// Invented values: a 400 V, 50 Hz grid fed from 700 V at 10 kHz (mf 200) through an LCL.
-const design: InverterDesign = {
-  vdc: 700,
-  fundamentalFrequency: 50,
-  carrierFrequency: 10_000,
-  modulation: { method: 'three-phase', ma: 1, zeroSequence: 'third-harmonic' },
-  filter: { l: 2e-3, c: 10e-6, rDamping: 2 },
-  grid: { lineVoltage: 400, phase: -0.1, r: 0.05, l: 0.2e-3, l2: 0.5e-3, controlBandwidth: 1000 },
-};
+const design: InverterDesign = GRID_TIED_DESIGN;
 
 describe('describeGridConnection', () => {
   it('is null for a design without a grid', () => {

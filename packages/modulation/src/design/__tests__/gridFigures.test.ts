@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { abs, add, div, mul, polar, sub, type HandComplex } from '../../testing/handComplex.js';
 import { analyseDesign } from '../analyseDesign.js';
 import type { InverterDesign } from '../InverterDesign.js';
 import { harmonics } from '../../spectrum/harmonics.js';
@@ -11,19 +12,7 @@ import { ParameterRangeError } from '../../validation/errors.js';
 // grid source E. With Σ = Z1·Zc + Z1·Z2 + Zc·Z2 (mesh analysis),
 //   I_grid = (V_b·Zc − E·(Z1 + Zc))/Σ,   I_inv = (V_b·(Zc + Z2) − E·Zc)/Σ.
 // Phasors in the `harmonics` convention: A·sin(θ + φ) ↔ A·e^{jφ}.
-type C = [number, number];
-const add = (a: C, b: C): C => [a[0] + b[0], a[1] + b[1]];
-const sub = (a: C, b: C): C => [a[0] - b[0], a[1] - b[1]];
-const mul = (a: C, b: C): C => [a[0] * b[0] - a[1] * b[1], a[0] * b[1] + a[1] * b[0]];
-const div = (a: C, b: C): C => {
-  const d = b[0] * b[0] + b[1] * b[1];
-  return [(a[0] * b[0] + a[1] * b[1]) / d, (a[1] * b[0] - a[0] * b[1]) / d];
-};
-const abs = (a: C): number => Math.hypot(a[0], a[1]);
-const polar = (amplitude: number, phase: number): C => [
-  amplitude * Math.cos(phase),
-  amplitude * Math.sin(phase),
-];
+type C = HandComplex;
 const TAU = 2 * Math.PI;
 
 // Invented values: a 400 V, 50 Hz grid fed from 700 V at 10 kHz (mf 200).
