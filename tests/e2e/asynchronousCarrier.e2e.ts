@@ -24,6 +24,31 @@ const descriptionOf = async (page: Page, label: RegExp): Promise<string> => {
   return (await page.locator(`[id="${described}"]`).textContent()) ?? '';
 };
 
+/**
+ * Opens Compare with the saved study beside another study of the account and checks that the
+ * study's mf column reads the carrier span's ratio p/q.
+ */
+async function compareShowsRatio(
+  page: Page,
+  baseUrl: string,
+  study: { id: string; name: string },
+  expected: string,
+): Promise<void> {
+  const session = await page.evaluate<string | null>(
+    'sessionStorage.getItem("pulsewright.session")',
+  );
+  const listed = (await (
+    await fetch(`${baseUrl}/api/v1/studies`, { headers: { Authorization: `Bearer ${session}` } })
+  ).json()) as { id: string; name: string }[];
+  const other = listed.find((s) => s.id !== study.id);
+  assert(other, 'a second study to compare with');
+  await page.goto(`${baseUrl}/compare?ids=${study.id},${other.id}`);
+  const mf = page.locator(`tr[data-study="${study.name}"] [data-column="mf"]`);
+  await mf.waitFor();
+  const ratio = (await mf.textContent())?.trim();
+  assert(ratio === expected, `Compare shows mf ${expected} (got ${ratio})`);
+}
+
 export const scenarios: Scenario[] = [
   {
     name: 'asynchronous carrier: 70 Hz at 30 Hz is reported as 7/3 over three periods, with a filter too; a costly filtered span goes to the panel',
@@ -107,20 +132,7 @@ export const scenarios: Scenario[] = [
       );
       await screenshot(page, 'fixed-carrier-editor');
 
-      const listed = (await (
-        await fetch(`${context.baseUrl}/api/v1/studies`, {
-          headers: {
-            Authorization: `Bearer ${await page.evaluate<string | null>('sessionStorage.getItem("pulsewright.session")')}`,
-          },
-        })
-      ).json()) as { id: string; name: string }[];
-      const other = listed.find((s) => s.id !== id);
-      assert(other, 'a second study to compare with');
-      await page.goto(`${context.baseUrl}/compare?ids=${id},${other.id}`);
-      const mf = page.locator(`tr[data-study="${name}"] [data-column="mf"]`);
-      await mf.waitFor();
-      const ratio = (await mf.textContent())?.trim();
-      assert(ratio === '4000/37', `Compare shows mf 4000/37 (got ${ratio})`);
+      await compareShowsRatio(page, context.baseUrl, { id, name }, '4000/37');
       await screenshot(page, 'fixed-carrier-compare');
 
       await page.goto(`${context.baseUrl}/studies/${id}/report`);
@@ -202,20 +214,7 @@ export const scenarios: Scenario[] = [
       await grouping.scrollIntoViewIfNeeded();
       await screenshot(page, 'grid-span-groups');
 
-      const listed = (await (
-        await fetch(`${context.baseUrl}/api/v1/studies`, {
-          headers: {
-            Authorization: `Bearer ${await page.evaluate<string | null>('sessionStorage.getItem("pulsewright.session")')}`,
-          },
-        })
-      ).json()) as { id: string; name: string }[];
-      const other = listed.find((s) => s.id !== id);
-      assert(other, 'a second study to compare with');
-      await page.goto(`${context.baseUrl}/compare?ids=${id},${other.id}`);
-      const mf = page.locator(`tr[data-study="${name}"] [data-column="mf"]`);
-      await mf.waitFor();
-      const ratio = (await mf.textContent())?.trim();
-      assert(ratio === '500/3', `Compare shows mf 500/3 (got ${ratio})`);
+      await compareShowsRatio(page, context.baseUrl, { id, name }, '500/3');
       await screenshot(page, 'grid-span-compare');
 
       await page.goto(`${context.baseUrl}/studies/${id}/report`);
