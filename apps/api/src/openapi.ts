@@ -29,9 +29,45 @@ const ROLE_REQUIREMENTS: readonly string[] = ['public', 'viewer', 'engineer', 'a
 /** Where the document lives: apps/api/openapi.yaml (one level above src/ and dist/). */
 export const openApiPath = new URL('../openapi.yaml', import.meta.url);
 
-/** Reads and parses apps/api/openapi.yaml. */
+/**
+ * Reads and parses apps/api/openapi.yaml, every name in it held as a one-byte string.
+ *
+ * Why: the file's descriptions hold characters beyond Latin-1 (−, ≤, Ω, …), so its text read as
+ * UTF-8 is a two-byte string in V8, and so is every name the YAML parser cuts from it. V8 keeps
+ * one copy of each property name, the first one made; the document is parsed before most of the
+ * library's code is compiled, so a result object that the library builds later with a name the
+ * document also holds (`spectrumThd`, say) gets the two-byte copy, and `JSON.stringify` then
+ * builds the whole answer two-byte: a spectrum's 60 kB of ASCII as 120 kB, which Node measures and
+ * converts to UTF-8 again on every answer (docs/robustness.md, throughput, sixth pass).
+ *
+ * How: the bytes are read as Latin-1 (one character a byte, a one-byte string), parsed, and each
+ * string holding a byte above 0x7F (descriptions only; every name in the document is ASCII) is
+ * decoded again as the UTF-8 it is. The result equals the document parsed from its UTF-8 text
+ * (openapi.test.ts).
+ */
 export function loadOpenApiDocument(): OpenApiDocument {
-  return parse(readFileSync(openApiPath, 'utf8')) as OpenApiDocument;
+  const latin1 = parse(readFileSync(openApiPath).toString('latin1')) as unknown;
+  return decodeUtf8Strings(latin1) as OpenApiDocument;
+}
+
+/** Bytes above 0x7F in a string read as Latin-1: a UTF-8 sequence to decode. */
+const BEYOND_ASCII = /[\x80-\xff]/;
+
+/**
+ * The parsed YAML value (objects, arrays, strings, numbers, booleans, null) with each string
+ * that holds Latin-1 characters above 0x7F decoded from the UTF-8 bytes they are; objects and
+ * arrays are changed in place. Names are left as they are (all ASCII in this document).
+ */
+function decodeUtf8Strings(value: unknown): unknown {
+  if (typeof value === 'string')
+    return BEYOND_ASCII.test(value) ? Buffer.from(value, 'latin1').toString('utf8') : value;
+  if (Array.isArray(value)) {
+    for (let i = 0; i < value.length; i++) value[i] = decodeUtf8Strings(value[i]);
+  } else if (value && typeof value === 'object') {
+    const record = value as Record<string, unknown>;
+    for (const key of Object.keys(record)) record[key] = decodeUtf8Strings(record[key]);
+  }
+  return value;
 }
 
 /**
