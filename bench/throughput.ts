@@ -24,6 +24,10 @@
  * pass (3 December): one passport middleware, the spectrum's finiteness read unboxed and the
  * header not joined to the body took the service from 8.88 M to 8.44 M instructions an answer;
  * on a quiet machine four runs gave 61–70 % (the build before 3 points lower in the same run).
+ * Sixth pass: the answers had been two-byte strings (the OpenAPI document's names, read from two-
+ * byte YAML text, were the first copies V8 kept); loaded one-byte, the service answers 10–15 %
+ * faster, but this bench's bare server shares the process and its string table and gained as
+ * much: 65–66 %, p99 2.0–2.1× (docs/robustness.md, sixth pass).
  */
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
