@@ -1,4 +1,4 @@
-import { designResonance } from '@pulsewright/modulation';
+import { designResonance, generationRowReason } from '@pulsewright/modulation';
 import type { StudyReport } from '../../../lib/api';
 import type { Figure } from '../../../components/charts/FigureCards';
 import { formatGain, formatNumber, formatPercent } from '../../../lib/format';
@@ -13,7 +13,9 @@ export function limitPointName(report: StudyReport): string {
  * whole-waveform THD and WTHD (the truncated spectrum THD only with its order), the fundamental
  * per phase and line to line, the currents of phase a, the DC-link ripple and common-mode voltage,
  * load power, the filter's resonance (a grid design's LCL resonance with its distances from the
- * carrier and the control bandwidth, `designResonance`) and the limit result.
+ * carrier and the control bandwidth, `designResonance`), a grid design's current THD with each
+ * standard's verdict (and `generationRowReason` where IEEE 519's first row was read by its
+ * generation footnote) and the limit result.
  * Display only: every number is a field of the report.
  */
 export function reportFigures(report: StudyReport): Figure[] {
@@ -142,6 +144,9 @@ export function reportFigures(report: StudyReport): Figure[] {
   if (grid) {
     const { ieee519, ieee1547 } = grid.limits;
     const verdict = (pass: boolean) => (pass ? 'within' : 'over');
+    // Why IEEE 519's < 20 row was read for generating equipment at a higher I_SC/I_L, as the grid
+    // panel and the printed table say it.
+    const reason = generationRowReason(ieee519.row, ieee519.shortCircuitRatio);
     figures.push({
       label: 'Grid current THD',
       value: formatPercent(grid.gridCurrentThd),
@@ -150,7 +155,7 @@ export function reportFigures(report: StudyReport): Figure[] {
         grid.harmonicGrouping
           ? '; read on IEC 61000-4-7 harmonic groups of the span’s components, from memory: confirm with the standard and the utility'
           : ''
-      })`,
+      })${reason ? `. ${reason}` : ''}`,
     });
   }
   figures.push({

@@ -1,4 +1,4 @@
-import { analyseDesign, type InverterDesign } from '@pulsewright/modulation';
+import { analyseDesign, generationRowReason, type InverterDesign } from '@pulsewright/modulation';
 import { describe, expect, it } from 'vitest';
 import { formatNumber, formatPercent } from '../../../lib/format';
 import { reportFigures } from './reportFigures';
@@ -31,6 +31,19 @@ describe('reportFigures with a grid', () => {
     expect(loss?.note).toBe('into the grid’s series resistance r, all three phases');
     const gridRms = report.currents[0]!.load!.rms;
     expect(report.loadPower!).toBeCloseTo(3 * gridRms * gridRms * 0.05, 6);
+  });
+
+  it('says on the THD card why IEEE 519’s first row was read when the generation footnote chose it', () => {
+    const report = analyseDesign(design, { points: 256 });
+    const { ieee519 } = report.grid!.limits;
+    // I_SC = (400/√3 V)/|0.05 + j·2π·50·0.2e-3 Ω| ≈ 2.9 kA against tens of amperes of grid
+    // current: a ratio far above 20, yet IEEE 519-2022's footnote puts generating equipment on
+    // the < 20 row (from memory), so the card carries the library's sentence saying so.
+    expect(ieee519.shortCircuitRatio).toBeGreaterThan(20);
+    const reason = generationRowReason(ieee519.row, ieee519.shortCircuitRatio);
+    expect(reason).toContain('the table’s footnote applies it to generating equipment');
+    const card = reportFigures(report).find((f) => f.label === 'Grid current THD');
+    expect(card?.note).toContain(reason!);
   });
 
   it('shows the LCL resonance, named as such, with its distances from the carrier and the control bandwidth, not the L1–C one', () => {
