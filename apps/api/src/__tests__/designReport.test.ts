@@ -364,6 +364,31 @@ describe('design report routes', () => {
     ).toBeLessThan(1e-12);
   });
 
+  it('reads a grid design that draws power (grid.generation false) on the IEEE 519 row of its own I_SC/I_L', async () => {
+    const design = DESIGNS['three-phase, LCL filter into a 400 V grid'] as InverterDesign;
+    const answer = async (generation?: boolean) => {
+      const grid = { ...design.grid!, ...(generation === undefined ? {} : { generation }) };
+      const res = await request(t.app)
+        .post('/api/v1/designs/report')
+        .set(auth)
+        .send({ design: { ...design, grid } });
+      expect(res.status).toBe(200);
+      return res.body.grid.limits.ieee519 as {
+        row: { label: string; byGenerationRule: boolean };
+        shortCircuitRatio: number;
+        totalLimit: number;
+      };
+    };
+    // IEEE Std 519-2022 Table 2 (from memory): 5 % TDD on the first row, 12 % for 50–100.
+    const byDefault = await answer();
+    expect(byDefault.row).toEqual({ label: 'I_SC/I_L < 20', byGenerationRule: true });
+    expect(byDefault.totalLimit).toBe(0.05);
+    const drawing = await answer(false);
+    expect(drawing.shortCircuitRatio).toBe(byDefault.shortCircuitRatio);
+    expect(drawing.row).toEqual({ label: '50 < I_SC/I_L < 100', byGenerationRule: false });
+    expect(drawing.totalLimit).toBe(0.12);
+  });
+
   it('bad design fields are 400 naming design.<field> with the allowed range, in the library’s words where the schema cannot tell', async () => {
     const design = DESIGNS['sine-triangle, unipolar, filter and load'] as InverterDesign;
     const cases: { body: object; path: string; words: string[] }[] = [
@@ -384,6 +409,17 @@ describe('design report routes', () => {
         },
         path: 'design.grid.r',
         words: ['≥ 0.000001'],
+      },
+      {
+        body: {
+          design: {
+            ...design,
+            load: null,
+            grid: { lineVoltage: 230, r: 0.1, l: 0, l2: 0.001, generation: 'yes' },
+          },
+        },
+        path: 'design.grid.generation',
+        words: ['true or false'],
       },
       {
         body: { design: { ...design, grid: { lineVoltage: 230, r: 0.1, l: 0, l2: 0.001 } } },

@@ -50,6 +50,13 @@ export interface DesignGrid {
   l2: number;
   /** The current controller's bandwidth, hertz, to compare the resonance with. @default none */
   controlBandwidth?: number;
+  /**
+   * Whether the bridge generates power into the grid (PV, storage, a UPS feeding back): IEEE Std
+   * 519's footnote then holds it to Table 2's first row (I_SC/I_L < 20) whatever its actual
+   * ratio (from memory). `false` for equipment that draws power (an active front end), which is
+   * read on the row of its own I_SC/I_L. IEEE Std 1547 does not depend on it. @default true
+   */
+  generation?: boolean;
 }
 
 /**

@@ -124,13 +124,18 @@ function assertDesignGrid(
       'left out or null with a grid (the grid is what the bridge feeds)',
       design.load,
     );
-  const { lineVoltage, phase, r, l, l2, controlBandwidth } = grid as Record<string, unknown>;
+  const { lineVoltage, phase, r, l, l2, controlBandwidth, generation } = grid as Record<
+    string,
+    unknown
+  >;
   check('grid.lineVoltage', lineVoltage);
   if (phase !== undefined) check('grid.phase', phase);
   check('grid.r', r);
   check('grid.l', l);
   check('grid.l2', l2);
   if (controlBandwidth !== undefined) check('grid.controlBandwidth', controlBandwidth);
+  if (generation !== undefined && typeof generation !== 'boolean')
+    throw new ParameterTypeError('grid.generation', 'true or false', generation);
 }
 
 function assertDesignLoad(

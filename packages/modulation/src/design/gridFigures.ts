@@ -49,7 +49,8 @@ function power(v: Complex, i: Complex): Complex {
  * response of each order times the bridge voltage) with the grid source added at the
  * fundamental only (superposition: the network is linear). The
  * damping loss is Σ ½·(Re Z_series·|I_inv|² + Re Y_shunt·|V_C|²) over the orders (L and C
- * are lossless). Limits: IEEE Std 519-2022 Table 2 with the generation footnote, and IEEE Std
+ * are lossless). Limits: IEEE Std 519-2022 Table 2 with the generation footnote (unless the
+ * design's `grid.generation` is false), and IEEE Std
  * 1547-2018 Tables 26–27, both recalled from memory, with the fundamental grid current as the
  * reference current. Over a span (`fundamentalOrder` q > 1) the grid current's components at
  * n/q are grouped by whole harmonic order first (`harmonicGroups`, IEC 61000-4-7's harmonic
@@ -117,6 +118,7 @@ export function gridFigures(inputs: GridFigureInputs): GridFigures {
   const limitOptions = {
     referenceCurrent: fundamental,
     shortCircuitRatio,
+    generation: grid.generation ?? true,
     totalWholeWaveform: inputs.gridCurrentThdWholeWaveform,
   };
   // Over a span the limits (by whole order, to 50) read the harmonic groups of every component.

@@ -9,7 +9,7 @@ import { DEGREES } from './studyFormUnits';
 import { LclSizing } from './LclSizing';
 
 /**
- * The study form's grid connection fieldset: grid voltage (V rms), phase (radians, shown in degrees), grid-side L2, grid R and L, the control bandwidth (Hz, 0 leaves it out) and, for a three-phase bridge, the LCL sizing that fills the filter fields and L2 ({@link LclSizing}). A render function, not a component: the form calls it
+ * The study form's grid connection fieldset: grid voltage (V rms), phase (radians, shown in degrees), grid-side L2, grid R and L, the control bandwidth (Hz, 0 leaves it out), whether the bridge generates power (IEEE 519's row) and, for a three-phase bridge, the LCL sizing that fills the filter fields and L2 ({@link LclSizing}). A render function, not a component: the form calls it
  * while rendering so the messages it asks for are claimed before the form lists the unclaimed ones.
  */
 export function gridFields({
@@ -76,6 +76,17 @@ export function gridFields({
             hint={`0 (left out) or ${rangeText(DESIGN_BOUNDS['grid.controlBandwidth'], { unit: 'Hz' })}; the LCL resonance is compared with it`}
             onChange={set('gridControlBandwidth')}
           />
+          <label className="col-span-2 flex items-center gap-2 text-sm">
+            <input
+              type="checkbox"
+              checked={draft.gridGeneration}
+              onChange={(e) => set('gridGeneration')(e.target.checked)}
+              className="accent-signal"
+            />
+            The bridge delivers power to the grid (IEEE 519 then reads it on its I_SC/I_L &lt; 20
+            row, by the table&apos;s footnote for generating equipment; clear it for a bridge that
+            draws power, read on the row of its own ratio)
+          </label>
           {threePhase ? (
             <LclSizing draft={draft} onChange={onChange} readOnly={readOnly} />
           ) : (

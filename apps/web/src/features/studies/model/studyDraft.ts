@@ -114,6 +114,8 @@ export interface StudyDraft {
   gridL2: number;
   /** The current controller's bandwidth, hertz; 0 leaves it out. */
   gridControlBandwidth: number;
+  /** The bridge generates power into the grid (IEEE 519's first row by its footnote); the design's `grid.generation`. */
+  gridGeneration: boolean;
   /** The switching device the report's losses use: none, or which of the two below. */
   deviceKind: 'none' | SemiconductorDeviceKind;
   /** Datasheet values of each kind (volts, ohms, joules, amperes), kept while the other is chosen. */
@@ -185,6 +187,7 @@ export function defaultDraft(projectId = ''): StudyDraft {
     gridL: 0.0002,
     gridL2: 0.0005,
     gridControlBandwidth: 0,
+    gridGeneration: true,
     deviceKind: 'none',
     igbt: { ...EXAMPLE_IGBT },
     mosfet: { ...STARTING_MOSFET },
@@ -299,6 +302,8 @@ export function designOf(draft: StudyDraft): InverterDesign {
             ...(draft.gridControlBandwidth > 0
               ? { controlBandwidth: draft.gridControlBandwidth }
               : {}),
+            // Written only when it differs from the library's default (true).
+            ...(draft.gridGeneration ? {} : { generation: false }),
           },
         }
       : {}),
@@ -403,6 +408,7 @@ export function draftOf(
       gridL: grid.l,
       gridL2: grid.l2,
       gridControlBandwidth: grid.controlBandwidth ?? 0,
+      gridGeneration: grid.generation ?? true,
     });
   }
   if (load) {

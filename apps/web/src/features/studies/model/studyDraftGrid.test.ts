@@ -34,6 +34,17 @@ describe('a study draft with a grid (issue 12, capability 6)', () => {
     expect(analyseDesign(design, { points: 256 }).grid).not.toBeNull();
   });
 
+  it('sends grid.generation only when the bridge draws power, and reads it back', () => {
+    expect('generation' in designOf(draft).grid!).toBe(false); // the library's default, true
+    const drawing = designOf({ ...draft, gridGeneration: false });
+    expect(drawing.grid?.generation).toBe(false);
+    expect(draftOf(drawing, { name: 'g', projectId: 'p' }).gridGeneration).toBe(false);
+    expect(draftOf(designOf(draft), { name: 'g', projectId: 'p' }).gridGeneration).toBe(true);
+    // IEEE Std 519-2022 Table 2 (from memory): the row of the design's own I_SC/I_L, not the first.
+    const { ieee519 } = analyseDesign(drawing, { points: 256 }).grid!.limits;
+    expect(ieee519.row.byGenerationRule).toBe(false);
+  });
+
   it('sends a control bandwidth only when one is set, and no grid when it is off', () => {
     expect(designOf({ ...draft, gridControlBandwidth: 800 }).grid?.controlBandwidth).toBe(800);
     const off = designOf({ ...draft, gridOn: false });
