@@ -193,6 +193,18 @@ export const scenarios: Scenario[] = [
         reason.includes('The I_SC/I_L < 20 row is used although I_SC/I_L is 80'),
         `the grid panel says why the < 20 row is used (got "${reason}")`,
       );
+      // A bridge that draws power (the grid fieldset's box cleared: grid.generation false) is
+      // read on the row of its own ratio, 50 < I_SC/I_L < 100 at about 80 (IEEE Std 519-2022
+      // Table 2, from memory), and the footnote's sentence goes; ticked again, both come back.
+      const generating = page.getByLabel(/The bridge delivers power to the grid/);
+      await generating.uncheck();
+      await page.getByTestId('grid-verdict').getByText('(50 < I_SC/I_L < 100)').waitFor();
+      assert(
+        (await page.getByTestId('grid-row-reason').count()) === 0,
+        'no footnote sentence for a bridge that draws power',
+      );
+      await generating.check();
+      await page.getByTestId('grid-row-reason').waitFor();
       await page.getByText('Modulator and bridge voltage over 3 fundamental periods').waitFor();
       await screenshot(page, 'grid-span-editor');
       const grouping = page.getByTestId('grid-grouping');
