@@ -241,7 +241,8 @@ export function analyseDesign(
     const solved: FilteredPhase[] = [];
     phaseVoltages.forEach((waveform, k) => {
       const [a, b] = solved;
-      const read = filteredPhase(waveform, spectra.phase(k), {
+      // Phases b and c are read to the current order only (their spectrumOrder below).
+      const read = filteredPhase(waveform, spectra.phase(k, k === 0 ? undefined : currentOrder), {
         network,
         transfer,
         omega,

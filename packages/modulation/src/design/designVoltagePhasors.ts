@@ -3,8 +3,12 @@ import type { ModulationVoltages, NamedVoltage } from './modulationVoltages.js';
 
 /** The spectra of a design's voltages, each read once (see {@link designVoltagePhasors}). */
 export interface DesignVoltagePhasors {
-  /** Phase k's voltage (a, b, c = 0, 1, 2; a single-phase bridge's output is phase 0). */
-  phase(index: number): HarmonicPhasors;
+  /**
+   * Phase k's voltage (a, b, c = 0, 1, 2; a single-phase bridge's output is phase 0), orders
+   * 0..highestOrder (an integer ≤ maxOrder; a caller reading fewer orders of a three-phase bridge's
+   * phase, as the report's phases b and c, spares combining the rest). @default maxOrder
+   */
+  phase(index: number, highestOrder?: number): HarmonicPhasors;
   /** Line k's voltage, leg k − leg k+1 (three-phase only). */
   line(index: number): HarmonicPhasors;
   /** The common-mode voltage (v_a + v_b + v_c)/3 of the legs (three-phase only). */
@@ -45,37 +49,44 @@ export function designVoltagePhasors(
     cache.set(key, phasors);
     return phasors;
   };
-  /** Three legs from `first` combined order by order as `combination` names (weights as the waveforms'). */
+  /**
+   * Three legs from `first` combined order by order as `combination` names (weights as the
+   * waveforms'), orders 0..count − 1.
+   */
   const combine = (
     first: number,
     combination: 'phase' | 'line' | 'common mode',
+    count = size,
   ): HarmonicPhasors => {
     const [a, b, c] = [leg(first), leg(first + 1), leg(first + 2)];
-    const re = new Float64Array(size);
-    const im = new Float64Array(size);
+    const re = new Float64Array(count);
+    const im = new Float64Array(count);
     const parts = [
       [a.re, b.re, c.re, re],
       [a.im, b.im, c.im, im],
     ] as const;
     for (const [own, next, last, into] of parts) {
       if (combination === 'phase')
-        for (let n = 0; n < size; n++)
+        for (let n = 0; n < count; n++)
           into[n] = (2 * (own[n] as number) - (next[n] as number) - (last[n] as number)) / 3;
       else if (combination === 'line')
-        for (let n = 0; n < size; n++) into[n] = (own[n] as number) - (next[n] as number);
+        for (let n = 0; n < count; n++) into[n] = (own[n] as number) - (next[n] as number);
       else
-        for (let n = 0; n < size; n++)
+        for (let n = 0; n < count; n++)
           into[n] = ((own[n] as number) + (next[n] as number) + (last[n] as number)) / 3;
     }
     return { re, im };
   };
   return {
-    phase: (index) =>
-      once(`phase ${index}`, () =>
+    phase: (index, highestOrder = maxOrder) => {
+      if (highestOrder > maxOrder)
+        throw new RangeError(`order ${highestOrder} is above the ${maxOrder} read`);
+      return once(`phase ${index} to ${highestOrder}`, () =>
         legs === null
-          ? harmonicPhasors((voltages.phases[index] as NamedVoltage).waveform, maxOrder)
-          : combine(index, 'phase'),
-      ),
+          ? harmonicPhasors((voltages.phases[index] as NamedVoltage).waveform, highestOrder)
+          : combine(index, 'phase', highestOrder + 1),
+      );
+    },
     line: (index) => once(`line ${index}`, () => combine(index, 'line')),
     commonMode: () => once('common mode', () => combine(0, 'common mode')),
   };

@@ -107,15 +107,18 @@ export function filteredPhase(
   const { network, transfer, omega, emf, loadR, phase, suffix, outputName } = context;
   const { spectrumOrder, currentOrder, points, synthesiser, labeller } = context;
   const f = context.fundamentalOrder ?? 1;
+  // The currents are summed to the current order (the output spectrum to spectrumOrder).
+  const held = Math.min(spectrumOrder, currentOrder) + 1;
+  // The currents are solved to the orders summed, the output (of the phase that reports it) to
+  // spectrumOrder: no product is formed that nothing reads.
   const solved = networkPhasors(bridge, transfer, {
-    count: spectrumOrder + 1,
+    count: held,
+    outputCount: outputName === null ? 0 : spectrumOrder + 1,
     network,
     omega,
     emf,
     fundamentalOrder: f,
   });
-  // The currents are summed to the current order (the output spectrum to spectrumOrder).
-  const held = Math.min(spectrumOrder, currentOrder) + 1;
 
   const { size } = synthesiser;
   const figures = (

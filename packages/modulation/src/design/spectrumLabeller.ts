@@ -57,6 +57,30 @@ export function spectrumLabeller(maxOrder: number, ratio: number): SpectrumLabel
       labels[order] as string,
     );
   };
+  // The exactly-zero orders' entries, by the signs of the zero parts (atan2 gives ±0 or ±π from
+  // them: the same phase as a new entry's), built once and shared by every spectrum labelled
+  // here. A report's voltages are mostly half-wave symmetric, so about half of the orders of its
+  // bridge, line, common-mode and filter-output spectra are exactly zero (the legs' even-order
+  // sums are never added to, and the network's response to a zero phasor is zero): with the
+  // plans' labeller, a report's answer holds 10000 fewer new objects at 5000 orders. The
+  // entries are read, never changed (readonly), like the label strings they share already.
+  const zeros = Array.from({ length: 4 }, () => new Array<LabelledEntry | undefined>(count));
+  const zeroEntry = (order: number, a: number, b: number): LabelledHarmonic => {
+    const signs = zeros[(1 / a < 0 ? 1 : 0) + (1 / b < 0 ? 2 : 0)] as (LabelledEntry | undefined)[];
+    let entry = signs[order];
+    if (entry === undefined) {
+      entry = new LabelledEntry(
+        order,
+        0,
+        Math.atan2(a, b),
+        groups[order] as number,
+        sidebands[order] as number,
+        labels[order] as string,
+      );
+      signs[order] = entry;
+    }
+    return entry;
+  };
   return {
     harmonics: (spectrum) => {
       const length = Math.min(spectrum.length, count);
@@ -75,7 +99,10 @@ export function spectrumLabeller(maxOrder: number, ratio: number): SpectrumLabel
       for (let n = 1; n < length; n++) {
         const a = im[n] as number;
         const b = re[n] as number;
-        result[n] = labelled(n, Math.sqrt(a * a + b * b), Math.atan2(a, b));
+        result[n] =
+          a === 0 && b === 0
+            ? zeroEntry(n, a, b)
+            : labelled(n, Math.sqrt(a * a + b * b), Math.atan2(a, b));
       }
       return result;
     },

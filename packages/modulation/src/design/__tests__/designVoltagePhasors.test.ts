@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { multilevelCarrier } from '../../multilevel/carrier/multilevelCarrier.js';
 import { harmonicPhasors, type HarmonicPhasors } from '../../spectrum/harmonicPhasors.js';
+import { harmonicsOfPhasors } from '../../spectrum/harmonicsOfPhasors.js';
 import { labelHarmonics } from '../../spectrum/labelHarmonics.js';
 import { harmonics } from '../../spectrum/harmonics.js';
 import { assertInDelta } from '../../testing/assertInDelta.js';
@@ -101,6 +102,17 @@ describe('designVoltagePhasors: a three-phase bridge read from its legs', () => 
     const own = harmonicPhasors(voltages.phases[0]?.waveform as Waveform, 500);
     expect(largestDifference(spectra.phase(0), own)).toBe(0);
   });
+
+  it('reads a phase to fewer orders as the first orders of the whole, and refuses more than it read', () => {
+    // The report's phases b and c are read to the current order only: the same numbers there.
+    const spectra = designVoltagePhasors(threePhaseVoltages('dpwm1'), 600);
+    const whole = spectra.phase(1);
+    const part = spectra.phase(1, 150);
+    expect(part.re).toHaveLength(151);
+    expect(Array.from(part.re)).toEqual(Array.from(whole.re.subarray(0, 151)));
+    expect(Array.from(part.im)).toEqual(Array.from(whole.im.subarray(0, 151)));
+    expect(() => spectra.phase(1, 601)).toThrow(RangeError);
+  });
 });
 
 describe('spectrumLabeller: one label table for a report', () => {
@@ -131,5 +143,24 @@ describe('spectrumLabeller: one label table for a report', () => {
     ]);
     expect(JSON.stringify(labelled)).toBe(JSON.stringify(plain));
     expect(structuredClone(labelled)).toEqual(plain);
+  });
+
+  it('labels an exactly-zero order with the phase atan2 gives its signed zero parts, one entry for every spectrum', () => {
+    // Orders 2..5 are exact zeros of each sign pair: atan2(+0, +0) = +0, atan2(+0, −0) = π,
+    // atan2(−0, +0) = −0, atan2(−0, −0) = −π (IEEE 754 / ECMAScript Math.atan2), the phases
+    // harmonicsOfPhasors and labelHarmonics give them; order 1 is not zero.
+    const labeller = spectrumLabeller(5, 3);
+    const phasors = (scale: number): HarmonicPhasors => ({
+      re: Float64Array.from([0, 2 * scale, 0, -0, 0, -0]),
+      im: Float64Array.from([0, scale, 0, 0, -0, -0]),
+    });
+    const first = labeller.phasors(phasors(1));
+    expect(first).toEqual(labelHarmonics(harmonicsOfPhasors(phasors(1)), 3));
+    expect(first.slice(2).map((h) => h.phase)).toEqual([0, Math.PI, -0, -Math.PI]);
+    // A second spectrum (or report) on the same labeller shares the zero orders' entries only.
+    const second = labeller.phasors(phasors(3));
+    for (let n = 2; n <= 5; n++) expect(second[n]).toBe(first[n]);
+    expect(second[1]).not.toBe(first[1]);
+    expect(second[1]?.amplitude).toBeCloseTo(3 * Math.sqrt(5), 12);
   });
 });
