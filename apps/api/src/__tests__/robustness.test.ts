@@ -1,6 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { writeQueueOf, WriteQueue } from '../db/database.js';
+import { executionAsyncId } from 'node:async_hooks';
 import { escapeFormulaCells, formulaCells } from '../services/captureCsv.js';
 import { captureCsv, SINE_TRIANGLE_DESIGN as DESIGN } from './fixtures.js';
 import { DEMO, signIn, testApp, type TestApp } from './helpers.js';
@@ -253,6 +254,29 @@ describe('L1: SQLite writers wait in JavaScript, one at a time', () => {
     // A failure releases the queue for the next writer.
     await expect(queue.run(async () => Promise.reject(new Error('boom')))).rejects.toThrow('boom');
     await expect(queue.run(async () => 'after')).resolves.toBe('after');
+  });
+  it('keeps its store on only while writers wait or run (Node tracks every promise while one is on)', async () => {
+    // executionAsyncId() in a promise reaction is 0 while Node's promise hooks are off and the
+    // reaction's own id while they are on (Node's async_hooks documentation, promise tracking).
+    const reactionId = () => Promise.resolve().then(() => executionAsyncId());
+    const queue = new WriteQueue();
+    expect(await reactionId()).toBe(0); // no store on in this process before the queue runs
+    const inside: number[] = [];
+    const writer = () =>
+      queue.run(async () => {
+        inside.push(await reactionId());
+        return queue.run(async () => 'nested, straight through');
+      });
+    await expect(Promise.all([writer(), writer()])).resolves.toEqual([
+      'nested, straight through',
+      'nested, straight through',
+    ]);
+    expect(inside.every((id) => id > 0)).toBe(true);
+    expect(await reactionId()).toBe(0); // idle: off again
+    await expect(writer()).resolves.toBe('nested, straight through'); // and on for the next
+    expect(inside).toHaveLength(3);
+    expect(inside[2]).toBeGreaterThan(0);
+    expect(await reactionId()).toBe(0);
   });
   it('50 concurrent study creations and edits all complete, and the queue drains', async () => {
     const created = await Promise.all(

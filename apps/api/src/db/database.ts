@@ -66,7 +66,8 @@ export async function openDatabase(databaseUrl: string): Promise<Sequelize> {
  * transaction (or autocommit write) is in SQLite at a time and the rest wait as promises.
  *
  * Work started from inside a queued transaction (the store says so) runs straight away, so a
- * nested write never waits for itself; it meets SQLite's busy timeout as it did before.
+ * nested write never waits for itself; it meets SQLite's busy timeout as it did before. The
+ * store is on only while writers wait or run.
  */
 export class WriteQueue {
   private tail: Promise<void> = Promise.resolve();
@@ -86,6 +87,13 @@ export class WriteQueue {
       .then(() => this.holder.run(true, work))
       .finally(() => {
         this.pending -= 1;
+        // No writer waiting or running: nothing can be inside the store, so turn it off. While
+        // any AsyncLocalStorage is on, Node (20) runs its async hooks on every promise of the
+        // process (an id, the store carried over, before and after each reaction): 7.6 µs of a
+        // compute answer's request thread under the throughput bench's load (docs/robustness.md,
+        // throughput, sixth pass). The next writer's `run` turns it on again. Work a finished
+        // writer left running is then queued like any other, as it should be.
+        if (this.pending === 0) this.holder.disable();
         release();
       });
   }
