@@ -30,7 +30,8 @@ const ROLE_REQUIREMENTS: readonly string[] = ['public', 'viewer', 'engineer', 'a
 export const openApiPath = new URL('../openapi.yaml', import.meta.url);
 
 /**
- * Reads and parses apps/api/openapi.yaml, every name in it held as a one-byte string.
+ * Reads and parses apps/api/openapi.yaml (or another document at `path`, for tests), every name
+ * in it held as a one-byte string.
  *
  * Why: the file's descriptions hold characters beyond Latin-1 (−, ≤, Ω, …), so its text read as
  * UTF-8 is a two-byte string in V8, and so is every name the YAML parser cuts from it. V8 keeps
@@ -45,13 +46,15 @@ export const openApiPath = new URL('../openapi.yaml', import.meta.url);
  * decoded again as the UTF-8 it is. The result equals the document parsed from its UTF-8 text
  * (openapi.test.ts).
  */
-export function loadOpenApiDocument(): OpenApiDocument {
-  const latin1 = parse(readFileSync(openApiPath).toString('latin1')) as unknown;
+export function loadOpenApiDocument(path: URL | string = openApiPath): OpenApiDocument {
+  const latin1 = parse(readFileSync(path).toString('latin1')) as unknown;
   return decodeUtf8Strings(latin1) as OpenApiDocument;
 }
 
 /** Bytes above 0x7F in a string read as Latin-1: a UTF-8 sequence to decode. */
 const BEYOND_ASCII = /[\x80-\xff]/;
+/** Characters no byte read as Latin-1 gives: only a YAML escape makes them. */
+const BEYOND_LATIN1 = /[\u0100-\uffff]/;
 
 /**
  * The parsed YAML value (objects, arrays, strings, numbers, booleans, null) with each string
@@ -59,8 +62,15 @@ const BEYOND_ASCII = /[\x80-\xff]/;
  * arrays are changed in place. Names are left as they are (all ASCII in this document).
  */
 function decodeUtf8Strings(value: unknown): unknown {
-  if (typeof value === 'string')
-    return BEYOND_ASCII.test(value) ? Buffer.from(value, 'latin1').toString('utf8') : value;
+  if (typeof value === 'string') {
+    if (!BEYOND_ASCII.test(value)) return value;
+    // A YAML escape (\u2212) gives a character beyond Latin-1 that the bytes cannot hold.
+    if (BEYOND_LATIN1.test(value))
+      throw new Error(
+        `openapi.yaml: "${value.slice(0, 40)}…" mixes escapes beyond Latin-1 with UTF-8 characters; write them one way`,
+      );
+    return Buffer.from(value, 'latin1').toString('utf8');
+  }
   if (Array.isArray(value)) {
     for (let i = 0; i < value.length; i++) value[i] = decodeUtf8Strings(value[i]);
   } else if (value && typeof value === 'object') {

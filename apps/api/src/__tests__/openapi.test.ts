@@ -1,4 +1,6 @@
-import { readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
 import v8 from 'node:v8';
 import { parse } from 'yaml';
 import { describe, expect, it } from 'vitest';
@@ -33,6 +35,21 @@ describe('loadOpenApiDocument: the document as written, its names one byte a cha
     const text = readFileSync(openApiPath, 'utf8');
     expect(text).toMatch(/[\u0100-\uffff]/); // the case the loader is for: − ≤ Ω … in descriptions
     expect(document).toEqual(parse(text));
+  });
+
+  it('refuses a string mixing a YAML escape beyond Latin-1 with UTF-8 characters, naming it', () => {
+    const dir = mkdtempSync(path.join(tmpdir(), 'openapi-'));
+    try {
+      const file = path.join(dir, 'mixed.yaml');
+      writeFileSync(file, 'info:\n  title: "a \\u2212 b − c"\n  version: 1\n', 'utf8');
+      expect(() => loadOpenApiDocument(file)).toThrow(
+        /openapi\.yaml: "a − b .*" mixes escapes beyond Latin-1 with UTF-8 characters/,
+      );
+      writeFileSync(file, 'info:\n  title: "a \\u2212 b"\n  summary: a − b\n', 'utf8');
+      expect(loadOpenApiDocument(file)).toEqual({ info: { title: 'a − b', summary: 'a − b' } });
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
   });
 
   it('holds only ASCII names (the loader decodes values only)', () => {
