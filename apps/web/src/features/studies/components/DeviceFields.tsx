@@ -1,8 +1,8 @@
 import { LOSS_DEVICE_BOUNDS } from '@pulsewright/modulation';
 import { NumberField, SelectField } from '../../../components/ui/Field';
 import { rangeError, rangeText, type FieldUnit } from '../../../lib/fieldRange';
-import type { SemiconductorDeviceKind, StudyDraft } from '../model/studyDraft';
-import type { StudyFieldErrors } from './studyFieldErrors';
+import type { SemiconductorDeviceKind } from '../model/studyDraft';
+import type { StudyFieldsetArgs } from './studyFieldsetArgs';
 
 type DeviceField = keyof typeof LOSS_DEVICE_BOUNDS;
 
@@ -37,17 +37,7 @@ const KINDS = [
  * and A). A render function, not a component: the form calls it while rendering so the
  * messages it asks for are claimed before the form lists the unclaimed ones.
  */
-export function deviceFields({
-  draft,
-  onChange,
-  readOnly,
-  fields: { error },
-}: {
-  draft: StudyDraft;
-  onChange: (patch: Partial<StudyDraft>) => void;
-  readOnly: boolean;
-  fields: StudyFieldErrors;
-}) {
+export function deviceFields({ draft, onChange, readOnly, fields: { error } }: StudyFieldsetArgs) {
   const kind = draft.deviceKind;
   const setValue = (field: DeviceField) => (value: number) =>
     kind === 'igbt'

@@ -6,7 +6,7 @@ import { draftPhaseCount, isCarrierMethod, type StudyDraft } from '../model/stud
 import { designNumberFields } from './designNumberFields';
 import { draftSetter } from './draftSetter';
 import { FilterSizing } from './FilterSizing';
-import type { StudyFieldErrors } from './studyFieldErrors';
+import type { StudyFieldsetArgs } from './studyFieldsetArgs';
 
 /**
  * The study form's LC output filter fieldset: filter L (H, shown in mH), C (F, shown in µF), damping R (Ω) and C, the damping placement, the sizing helper and the resonance (Hz) from the live report, named by the library's designResonance (a grid design's LCL resonance with its distances from the carrier and the control bandwidth). A render function, not a component: the form calls it
@@ -19,11 +19,7 @@ export function filterFields({
   fields: { error, limits },
   ratio,
   filterResonance,
-}: {
-  draft: StudyDraft;
-  onChange: (patch: Partial<StudyDraft>) => void;
-  readOnly: boolean;
-  fields: StudyFieldErrors;
+}: StudyFieldsetArgs & {
   ratio: number;
   filterResonance?: DesignResonance | null | undefined;
 }) {

@@ -1,8 +1,8 @@
 import { DESIGN_BOUNDS } from '@pulsewright/modulation';
 import { NumberField, SliderField } from '../../../components/ui/Field';
 import { rangeText } from '../../../lib/fieldRange';
-import { isCarrierMethod, type StudyDraft } from '../model/studyDraft';
-import type { StudyFieldErrors } from './studyFieldErrors';
+import { isCarrierMethod } from '../model/studyDraft';
+import type { StudyFieldsetArgs } from './studyFieldsetArgs';
 import { DEGREES, RADIANS_TO_DEGREES } from './studyFormUnits';
 import { ratioBounds, type CarrierFields } from './useCarrierFields';
 
@@ -19,10 +19,7 @@ export function frequencyFields({
   onChange,
   fields: { limits },
   carrier: { ratio, ratioError, carrierMessage, spanHint, setRatio, setCarrier, setFundamental },
-}: {
-  draft: StudyDraft;
-  onChange: (patch: Partial<StudyDraft>) => void;
-  fields: StudyFieldErrors;
+}: Omit<StudyFieldsetArgs, 'readOnly'> & {
   carrier: CarrierFields;
 }) {
   const { method } = draft;

@@ -1,10 +1,10 @@
 import { DESIGN_BOUNDS } from '@pulsewright/modulation';
 import { NumberField } from '../../../components/ui/Field';
 import { rangeText } from '../../../lib/fieldRange';
-import { draftPhaseCount, type StudyDraft } from '../model/studyDraft';
+import { draftPhaseCount } from '../model/studyDraft';
 import { designNumberFields } from './designNumberFields';
 import { draftSetter } from './draftSetter';
-import type { StudyFieldErrors } from './studyFieldErrors';
+import type { StudyFieldsetArgs } from './studyFieldsetArgs';
 import { DEGREES } from './studyFormUnits';
 import { LclSizing } from './LclSizing';
 
@@ -12,17 +12,7 @@ import { LclSizing } from './LclSizing';
  * The study form's grid connection fieldset: grid voltage (V rms), phase (radians, shown in degrees), grid-side L2, grid R and L, the control bandwidth (Hz, 0 leaves it out), whether the bridge generates power (IEEE 519's row) and, for a three-phase bridge, the LCL sizing that fills the filter fields and L2 ({@link LclSizing}). A render function, not a component: the form calls it
  * while rendering so the messages it asks for are claimed before the form lists the unclaimed ones.
  */
-export function gridFields({
-  draft,
-  onChange,
-  readOnly,
-  fields: { limits },
-}: {
-  draft: StudyDraft;
-  onChange: (patch: Partial<StudyDraft>) => void;
-  readOnly: boolean;
-  fields: StudyFieldErrors;
-}) {
+export function gridFields({ draft, onChange, readOnly, fields: { limits } }: StudyFieldsetArgs) {
   const set = draftSetter(onChange);
   const threePhase = draftPhaseCount(draft) === 3;
   return (

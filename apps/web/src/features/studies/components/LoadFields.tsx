@@ -1,24 +1,14 @@
-import { draftPhaseCount, type StudyDraft } from '../model/studyDraft';
+import { draftPhaseCount } from '../model/studyDraft';
 import { designNumberFields } from './designNumberFields';
 import { draftSetter } from './draftSetter';
-import type { StudyFieldErrors } from './studyFieldErrors';
+import type { StudyFieldsetArgs } from './studyFieldsetArgs';
 import { DEGREES } from './studyFormUnits';
 
 /**
  * The study form's load fieldset: series R (Ω), L (H, shown in mH) and a back-EMF (V peak, phase in radians shown in degrees), per phase for three-phase methods. A render function, not a component: the form calls it
  * while rendering so the messages it asks for are claimed before the form lists the unclaimed ones.
  */
-export function loadFields({
-  draft,
-  onChange,
-  readOnly,
-  fields: { limits },
-}: {
-  draft: StudyDraft;
-  onChange: (patch: Partial<StudyDraft>) => void;
-  readOnly: boolean;
-  fields: StudyFieldErrors;
-}) {
+export function loadFields({ draft, onChange, readOnly, fields: { limits } }: StudyFieldsetArgs) {
   const set = draftSetter(onChange);
   const threePhase = draftPhaseCount(draft) === 3;
   return (

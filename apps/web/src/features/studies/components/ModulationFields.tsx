@@ -23,7 +23,7 @@ import { draftSetter } from './draftSetter';
 import { frequencyFields } from './FrequencyFields';
 import { multilevelFields, multilevelSpaceVectorFields } from './multilevel/multilevelFields';
 import { PatternSummary } from './PatternSummary';
-import type { StudyFieldErrors } from './studyFieldErrors';
+import type { StudyFieldsetArgs } from './studyFieldsetArgs';
 import type { CarrierFields } from './useCarrierFields';
 
 /** Sliders cover the useful part of a range; the number box beside takes the whole range. */
@@ -53,11 +53,7 @@ export function modulationFields({
   readOnly,
   fields,
   carrier,
-}: {
-  draft: StudyDraft;
-  onChange: (patch: Partial<StudyDraft>) => void;
-  readOnly: boolean;
-  fields: StudyFieldErrors;
+}: StudyFieldsetArgs & {
   carrier: CarrierFields;
 }) {
   const { error, limits } = fields;

@@ -1,8 +1,7 @@
 import { SelectField, TextField } from '../../../components/ui/Field';
 import type { Project } from '../../../lib/api';
-import type { StudyDraft } from '../model/studyDraft';
 import { draftSetter } from './draftSetter';
-import type { StudyFieldErrors } from './studyFieldErrors';
+import type { StudyFieldsetArgs } from './studyFieldsetArgs';
 
 /**
  * The study form's "Study" fieldset: name, project and note. A render function, not a component:
@@ -15,13 +14,7 @@ export function studyDetailsFields({
   readOnly,
   projects,
   fields: { error },
-}: {
-  draft: StudyDraft;
-  onChange: (patch: Partial<StudyDraft>) => void;
-  readOnly: boolean;
-  projects: readonly Project[];
-  fields: StudyFieldErrors;
-}) {
+}: StudyFieldsetArgs & { projects: readonly Project[] }) {
   const set = draftSetter(onChange);
   return (
     <fieldset disabled={readOnly} className="flex flex-col gap-3">
