@@ -237,7 +237,13 @@ export function analyseDesign(
   } else {
     const omega = TAU * frequency;
     // The phases share one network: its response to each order is solved once for all three.
-    const transfer = outputNetworkTransfer(network, omega, Math.max(analysisOrder, currentOrder));
+    // Its currents are read to the current order only (the output to the analysis order).
+    const transfer = outputNetworkTransfer(
+      network,
+      omega,
+      Math.max(analysisOrder, currentOrder),
+      currentOrder,
+    );
     const solved: FilteredPhase[] = [];
     phaseVoltages.forEach((waveform, k) => {
       const [a, b] = solved;

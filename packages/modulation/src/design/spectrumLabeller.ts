@@ -63,10 +63,12 @@ export function spectrumLabeller(maxOrder: number, ratio: number): SpectrumLabel
   // bridge, line, common-mode and filter-output spectra are exactly zero (the legs' even-order
   // sums are never added to, and the network's response to a zero phasor is zero): with the
   // plans' labeller, a report's answer holds 10000 fewer new objects at 5000 orders. The
-  // entries are read, never changed (readonly), like the label strings they share already.
-  const zeros = Array.from({ length: 4 }, () => new Array<LabelledEntry | undefined>(count));
+  // entries are read, never changed (readonly), like the label strings they share already. A
+  // sign pair's table is built when its first zero comes (a report meets one or two of the four).
+  const zeros: (LabelledEntry | undefined)[][] = [];
   const zeroEntry = (order: number, a: number, b: number): LabelledHarmonic => {
-    const signs = zeros[(1 / a < 0 ? 1 : 0) + (1 / b < 0 ? 2 : 0)] as (LabelledEntry | undefined)[];
+    const key = (1 / a < 0 ? 1 : 0) + (1 / b < 0 ? 2 : 0);
+    const signs = (zeros[key] ??= new Array<LabelledEntry | undefined>(count));
     let entry = signs[order];
     if (entry === undefined) {
       entry = new LabelledEntry(

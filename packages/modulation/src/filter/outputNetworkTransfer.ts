@@ -21,22 +21,26 @@ export interface OutputNetworkTransfer {
  * the fundamental only, is added by solving that order with it). A balanced three-phase
  * bridge's phases share one network, so a report solves it once for all of them. Internal:
  * part of analyseDesign.
+ * @param currentOrder - the highest order whose currents are kept (a report sums its currents to
+ *   an order of its own and reads only the output voltage above it), ≤ maxOrder @default maxOrder
  */
 export function outputNetworkTransfer(
   network: OutputNetwork,
   omega: number,
   maxOrder: number,
+  currentOrder: number = maxOrder,
 ): OutputNetworkTransfer {
   const size = maxOrder + 1;
-  const phasors = (): HarmonicPhasors => ({
-    re: new Float64Array(size),
-    im: new Float64Array(size),
+  const currents = Math.min(size, currentOrder + 1);
+  const phasors = (count: number): HarmonicPhasors => ({
+    re: new Float64Array(count),
+    im: new Float64Array(count),
   });
   const transfer: OutputNetworkTransfer = {
-    output: phasors(),
-    inverterCurrent: phasors(),
-    capacitorCurrent: phasors(),
-    loadCurrent: phasors(),
+    output: phasors(size),
+    inverterCurrent: phasors(currents),
+    capacitorCurrent: phasors(currents),
+    loadCurrent: phasors(currents),
   };
   const solved = new Float64Array(8);
   const unit = [1, 0, 0, 0] as const;
@@ -44,6 +48,7 @@ export function outputNetworkTransfer(
     solveOutputNetwork(network, omega * n, unit, solved, 0);
     transfer.output.re[n] = solved[0] as number;
     transfer.output.im[n] = solved[1] as number;
+    if (n >= currents) continue;
     transfer.inverterCurrent.re[n] = solved[2] as number;
     transfer.inverterCurrent.im[n] = solved[3] as number;
     transfer.capacitorCurrent.re[n] = solved[4] as number;
