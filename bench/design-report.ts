@@ -137,34 +137,38 @@
  * Sixth round (bit-identical: a 132-design corpus of every method and zero sequence, with and
  * without load, filter, grid, device and back-EMF, at mf 21, 45 and 101, the default order and
  * 5000, each report without plans and twice on shared plans, serialised with its signed zeros,
- * the same before and after): no product or label formed that nothing reads. The labeller shares
- * one entry per exactly-zero order and sign pair of its zero parts among the spectra it labels
- * (about half the orders of a half-wave-symmetric design's bridge, line, common-mode and
- * filter-output spectra: 10000 fewer objects a report with plans); phases b and c are combined
- * from the legs and solved through the network to the current order (1020) only, and only phase
- * a's output voltage is formed, to its spectrum order (8 of 12 network products 5001 → 1021
- * orders). Instructions a report (callgrind, `node --single-threaded`, slope over 40–100 reports
- * with plans at mf 101 to 5000): 90.8–93.1 → 88.3–88.6 M, 3–5 % fewer; processes in turn, 300
- * reports each, median CPU ms a process: 8 pairs at load 2.5–3.5, 4.84–6.74 → 4.32–5.30 (median
- * of the medians about 5.4 → 4.9); 6 pairs at load 3–4, 3.95–7.18 → 4.12–4.75; 8 pairs while the
- * machine was slow (spectrum alone 1.0–1.3 ms), 6.57–9.20 → 5.61–8.03; alternating in one process
- * (both builds sharing one heap, so the collector's gain is shared too) within the noise. Garbage
- * collection 8 → 5 % of a CPU profile of 400 reports. Measured and left: the loss cells'
- * finiteness check given a loop of its own for a Float64Array (no gain: 65 and 64 µs for the three
- * legs' cells); the legs' last, padded group of four edges (0.4 % of the instructions); the
- * legs' exactly-zero even orders in the combinations and the network products (a bit-identical
- * skip must reproduce each zero's sign: under 1 %). Profile after: the legs' exact sums 14 %
- * (four edges' rotations an order, near the floating-point units' throughput: what is left there
- * changes rounding), fft.js's transforms 14 %, labelling the non-zero orders (a square root, an
- * arc tangent and an object each) 8 %, garbage collection 5 %, the per-sample extremes 5 %, the
- * modulator and waveforms 10 %, the DC link 8 %, losses 7 %. bench/design-report.ts after, three
- * runs at load 0.8–1.1 on a slow moment of the machine (spectrum alone 0.96–1.07 ms, 0.89 on the
- * quiet morning when the round's start gave 4.78–5.10 ms): plans row 6.29, 6.93 and 7.66 ms; the
- * bench run against the builds before and after in turn, three pairs: 5.82/5.67/6.25 →
- * 8.15/5.54/7.02 ms, i.e. the 30-report row cannot show a 3–5 % step on this machine. The 5 ms
- * goal is still not reached reliably at spectra to 5000; without plans the report gained more
- * (200 reports a process, four pairs in turn: median 7.7–9.4 → 5.9–6.8 ms), the shared zero
- * entries sparing each report its own.
+ * the same before and after each step): no product or label formed that nothing reads. The
+ * labeller shares one entry per exactly-zero order and sign pair of its zero parts among the
+ * spectra it labels (about half the orders of a half-wave-symmetric design's bridge, line,
+ * common-mode and filter-output spectra: 10000 fewer objects a report with plans), a sign pair's
+ * table built when its first zero comes; phases b and c are combined from the legs and solved
+ * through the network to the current order (1020) only, only phase a's output voltage is formed,
+ * to its spectrum order, and the network's unit responses keep their currents to the current
+ * order (16 arrays of 5001 orders → 1021, and phases b and c's four output arrays no longer
+ * formed). Instructions a report at mf 101 to 5000
+ * (callgrind, `node --single-threaded`, slope from 40 to 100 reports): with plans 90.8 → 88.6
+ * (first step) → 86.1 M, 5 % fewer; without plans 110.1 → 102.0 M, 7 % fewer. Processes in turn,
+ * 300 reports with plans each, median CPU ms a process, eight pairs twice at load 2.5 (one core
+ * busy with callgrind): 4.36–5.99 → 4.14–6.27 (median of the medians 5.06 → 4.55) and 4.92–7.89
+ * → 4.28–6.79 (5.93 → 5.24); as the bench runs them (200 reports without plans, then 200 with
+ * plans in the same process), three pairs: with plans 5.62/6.10/4.69 → 5.01/4.71/4.60, without
+ * 7.38/6.53/7.85 → 6.47/6.05/5.67. Alternating in one process (both builds sharing one heap, so
+ * the collector's gain is shared too): within the noise. Garbage collection 8 → 5 % of a CPU
+ * profile of 400 reports. Measured and left: the loss cells' finiteness check given a loop of its
+ * own for a Float64Array (no gain: 65 and 64 µs for the three legs' cells); the legs' last, padded
+ * group of four edges (0.4 % of the instructions); the legs' exactly-zero even orders in the
+ * combinations and network products (a bit-identical skip must reproduce each zero's sign: under
+ * 1 %). Profile after: the legs' exact sums 14 % (four edges' rotations an order, near the
+ * floating-point units' throughput: what is left there changes rounding), fft.js's transforms
+ * 14 %, labelling the non-zero orders (a square root, an arc tangent and an object each) 8 %,
+ * garbage collection 5 %, the per-sample extremes 5 %, the modulator and waveforms 10 %, the DC
+ * link 8 %, losses 7 %. bench/design-report.ts after, three runs at load 0.5–0.9 (spectrum alone
+ * 0.93–1.04 ms; 0.89 on the quiet morning when the round's start gave 4.78–5.10): plans row 7.05,
+ * 5.80 and 8.40 ms; the bench against the builds of the round's start and end in turn, three
+ * pairs at load 0.8: plans row 6.46/5.12/5.75 → 5.05/5.26/5.55 ms, full report at the default
+ * order 4.70/4.43/4.73 → 4.08/4.06/6.07. The 5 ms goal is still not reached reliably at spectra
+ * to 5000 on this machine: the round's 5–7 % is smaller than its run-to-run spread, and what is
+ * left is the exact sums, the transforms and the answer's own labelled objects.
  */
 import {
   analyseDesign,
