@@ -27,7 +27,7 @@
  * Sixth pass: the answers had been two-byte strings (the OpenAPI document's names, read from two-
  * byte YAML text, were the first copies V8 kept); loaded one-byte, the service answers 10–15 %
  * faster, but this bench's bare server shares the process and its string table and gained as
- * much: 65–66 %, p99 2.0–2.1× (docs/robustness.md, sixth pass).
+ * much: 58–71 % in six runs (median 64 %), p99 1.5–2.2× (docs/robustness.md, sixth pass).
  */
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
