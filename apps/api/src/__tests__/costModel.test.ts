@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { loadConfig } from '../config.js';
-import { maSweepCost, reportCost, sheSweepCost } from '../services/cost.js';
+import { assertWithinBudget, maSweepCost, reportCost, sheSweepCost } from '../services/cost.js';
 import {
   captureCsv,
   SINE_TRIANGLE,
@@ -174,6 +174,45 @@ describe('cost model: refused before work, naming the fields and the limit', () 
       });
     expectRefusal(res, ['design.carrierFrequency'], ['through the filter']);
     expect(await t.app.services.models.Study.count()).toBe(before);
+  });
+
+  it('a study’s trial analysis too large to answer names the design’s carrier (no option to lower)', () => {
+    // Found by the fuzzer (seed 20251202): a three-level space-vector design at a ratio of 20000
+    // (100 MHz against 5 kHz) with asymmetric sampling holds two trajectory samples a switching
+    // period and the edges of nine voltages: within the default work budget, over the default
+    // answer budget; the refusal of the study's trial analysis (maxOrder 50, 64 points, no option
+    // the caller can lower) named no field before.
+    const limits = loadConfig({}).compute;
+    const design = {
+      vdc: 800,
+      fundamentalFrequency: 5000,
+      carrierFrequency: 100_000_000,
+      modulation: {
+        method: 'multilevel-space-vector',
+        m: 0.5,
+        sampling: 'asymmetric',
+        topology: 't-type',
+      },
+    };
+    const cost = reportCost(design as never, { maxOrder: 50, points: 64 }, 'design', []);
+    expect(cost.work).toBeLessThanOrEqual(limits.requestWorkBudget);
+    expect(cost.responseBytes).toBeGreaterThan(limits.responseBytesBudget);
+    expect(cost.responseFields).toEqual(['design.carrierFrequency']);
+    let refusal: unknown;
+    try {
+      assertWithinBudget(cost, 'request', limits);
+    } catch (error) {
+      refusal = error;
+    }
+    const { errors, detail } = refusal as { errors: { path: string }[]; detail: string };
+    expect(errors.map((e) => e.path)).toEqual(['design.carrierFrequency']);
+    expect(detail).toMatch(/^design\.carrierFrequency would make an answer of about/);
+    expect(detail).toContain('RESPONSE_BYTES_BUDGET');
+    // With options to lower (the report route), those are named as before.
+    expect(reportCost(design as never, { maxOrder: 50, points: 64 }).responseFields).toEqual([
+      'maxOrder',
+      'points',
+    ]);
   });
 
   it('POST /timer-tables: rows × channels, and the default table length by the two frequencies', async () => {

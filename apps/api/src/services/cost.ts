@@ -445,14 +445,30 @@ export function reportCost(
             (4 + (filtered ? 1 : 0) + (grid ? 2 : 0)) +
           SPAN_BYTES_PER_VOLTAGE_NUMBER * voltageNumbers +
           BYTES_PER_NUMBER * series * points,
-    // A span's size is set by its carrier cycles p as much as by the orders.
-    responseFields: [
-      ...(span === null ? [] : [`${field}.carrierFrequency`]),
-      ...['maxOrder', 'points'].filter((name) => optionFields.includes(name)),
-    ],
+    // A span's size is set by its carrier cycles p as much as by the orders. Where the caller
+    // can lower no option (a study's trial analysis), the design's carrier is named: it sets the
+    // voltages' edges and the default order (a stored pattern's size is its modulation's).
+    responseFields: responseFieldsOf(span !== null, pattern, field, optionFields),
     series,
     points,
   };
+}
+
+/**
+ * The fields that set a design report's size, in the order to lower them: a span's carrier, then
+ * the options the caller can lower (`optionFields` of maxOrder and points), and when there are
+ * none, the design's carrier (or a stored pattern's modulation), so a refusal always names one.
+ */
+function responseFieldsOf(
+  isSpan: boolean,
+  pattern: boolean,
+  field: string,
+  optionFields: readonly string[],
+): string[] {
+  const options = ['maxOrder', 'points'].filter((name) => optionFields.includes(name));
+  if (isSpan) return [`${field}.carrierFrequency`, ...options];
+  if (options.length) return options;
+  return [pattern ? `${field}.modulation` : `${field}.carrierFrequency`];
 }
 
 /**
