@@ -5,6 +5,7 @@ import { DAMPING_OPTIONS } from '../../../lib/modulationOptions';
 import { draftPhaseCount, isCarrierMethod, type StudyDraft } from '../model/studyDraft';
 import { designNumberFields } from './designNumberFields';
 import { draftSetter } from './draftSetter';
+import { DraftSwitch } from './DraftSwitch';
 import { FilterSizing } from './FilterSizing';
 import type { StudyFieldsetArgs } from './studyFieldsetArgs';
 
@@ -30,15 +31,9 @@ export function filterFields({
       <legend className="mb-1 text-sm font-semibold tracking-wide uppercase">
         {threePhase ? 'Output filter per phase (LC, star)' : 'Output filter (LC)'}
       </legend>
-      <label className="flex items-center gap-2 text-sm">
-        <input
-          type="checkbox"
-          checked={draft.filterOn}
-          onChange={(e) => set('filterOn')(e.target.checked)}
-          className="accent-signal"
-        />
+      <DraftSwitch draft={draft} name="filterOn" onChange={onChange}>
         Include an LC output filter
-      </label>
+      </DraftSwitch>
       {draft.filterOn ? (
         <>
           <div className="grid grid-cols-2 gap-3">

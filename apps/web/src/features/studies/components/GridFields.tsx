@@ -4,6 +4,7 @@ import { rangeText } from '../../../lib/fieldRange';
 import { draftPhaseCount } from '../model/studyDraft';
 import { designNumberFields } from './designNumberFields';
 import { draftSetter } from './draftSetter';
+import { DraftSwitch } from './DraftSwitch';
 import type { StudyFieldsetArgs } from './studyFieldsetArgs';
 import { DEGREES } from './studyFormUnits';
 import { LclSizing } from './LclSizing';
@@ -20,15 +21,9 @@ export function gridFields({ draft, onChange, readOnly, fields: { limits } }: St
       <legend className="mb-1 text-sm font-semibold tracking-wide uppercase">
         Grid connection
       </legend>
-      <label className="flex items-center gap-2 text-sm">
-        <input
-          type="checkbox"
-          checked={draft.gridOn}
-          onChange={(e) => set('gridOn')(e.target.checked)}
-          className="accent-signal"
-        />
+      <DraftSwitch draft={draft} name="gridOn" onChange={onChange}>
         Feed a grid instead of the load (the filter&apos;s L and C with L2 make an LCL)
-      </label>
+      </DraftSwitch>
       {draft.gridOn ? (
         <div className="grid grid-cols-2 gap-3">
           {designNumberFields(
@@ -66,17 +61,16 @@ export function gridFields({ draft, onChange, readOnly, fields: { limits } }: St
             hint={`0 (left out) or ${rangeText(DESIGN_BOUNDS['grid.controlBandwidth'], { unit: 'Hz' })}; the LCL resonance is compared with it`}
             onChange={set('gridControlBandwidth')}
           />
-          <label className="col-span-2 flex items-center gap-2 text-sm">
-            <input
-              type="checkbox"
-              checked={draft.gridGeneration}
-              onChange={(e) => set('gridGeneration')(e.target.checked)}
-              className="accent-signal"
-            />
+          <DraftSwitch
+            draft={draft}
+            name="gridGeneration"
+            onChange={onChange}
+            className="col-span-2"
+          >
             The bridge delivers power to the grid (IEEE 519 then reads it on its I_SC/I_L &lt; 20
             row, by the table&apos;s footnote for generating equipment; clear it for a bridge that
             draws power, read on the row of its own ratio)
-          </label>
+          </DraftSwitch>
           {threePhase ? (
             <LclSizing draft={draft} onChange={onChange} readOnly={readOnly} />
           ) : (

@@ -1,6 +1,6 @@
 import { draftPhaseCount } from '../model/studyDraft';
 import { designNumberFields } from './designNumberFields';
-import { draftSetter } from './draftSetter';
+import { DraftSwitch } from './DraftSwitch';
 import type { StudyFieldsetArgs } from './studyFieldsetArgs';
 import { DEGREES } from './studyFormUnits';
 
@@ -9,22 +9,15 @@ import { DEGREES } from './studyFormUnits';
  * while rendering so the messages it asks for are claimed before the form lists the unclaimed ones.
  */
 export function loadFields({ draft, onChange, readOnly, fields: { limits } }: StudyFieldsetArgs) {
-  const set = draftSetter(onChange);
   const threePhase = draftPhaseCount(draft) === 3;
   return (
     <fieldset disabled={readOnly} className="flex flex-col gap-3">
       <legend className="mb-1 text-sm font-semibold tracking-wide uppercase">
         {threePhase ? 'Load per phase (star, series R-L)' : 'Load (series R-L)'}
       </legend>
-      <label className="flex items-center gap-2 text-sm">
-        <input
-          type="checkbox"
-          checked={draft.loadOn}
-          onChange={(e) => set('loadOn')(e.target.checked)}
-          className="accent-signal"
-        />
+      <DraftSwitch draft={draft} name="loadOn" onChange={onChange}>
         Include a load
-      </label>
+      </DraftSwitch>
       {draft.loadOn ? (
         <div className="grid grid-cols-2 gap-3">
           {designNumberFields(
