@@ -11,7 +11,8 @@
  *
  * Run: `npx tsx bench/throughput.ts` (after `npx turbo run build --filter=@pulsewright/api`);
  * THROUGHPUT_SECONDS (default 5) a load, THROUGHPUT_ROUNDS (default 3) rounds of them taken in
- * turn (bare, service, service with response validation, …), THROUGHPUT_CONNECTIONS (default 50);
+ * turn (bare, service, service with response validation, …) after an untimed load of
+ * THROUGHPUT_WARM_UP_SECONDS (default 2) on each, THROUGHPUT_CONNECTIONS (default 50);
  * THROUGHPUT_COMPARE_API=<another build's apps/api/dist/app.js> adds that build's figures;
  * THROUGHPUT_NODE_DEFAULTS=1 runs with Node's memory defaults instead of the service's settings.
  *
@@ -68,6 +69,8 @@ const NODE_FLAGS =
 
 const SECONDS = Number(process.env.THROUGHPUT_SECONDS ?? 5);
 const ROUNDS = Number(process.env.THROUGHPUT_ROUNDS ?? 3);
+/** Untimed load on each target before the rounds (THROUGHPUT_WARM_UP_SECONDS, default 2). */
+const WARM_UP_SECONDS = Number(process.env.THROUGHPUT_WARM_UP_SECONDS ?? 2);
 const CONNECTIONS = Number(process.env.THROUGHPUT_CONNECTIONS ?? 50);
 const BODY = JSON.stringify({
   modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.9, mf: 21, vdc: 400 },
@@ -95,7 +98,11 @@ async function listen(server: Server): Promise<number> {
   return (server.address() as AddressInfo).port;
 }
 
-async function load(url: string, headers: Record<string, string>): Promise<Run> {
+async function load(
+  url: string,
+  headers: Record<string, string>,
+  seconds: number = SECONDS,
+): Promise<Run> {
   const cpu = process.cpuUsage();
   const result = await autocannon({
     url,
@@ -103,7 +110,7 @@ async function load(url: string, headers: Record<string, string>): Promise<Run> 
     headers: { 'content-type': 'application/json', ...headers },
     body: BODY,
     connections: CONNECTIONS,
-    duration: SECONDS,
+    duration: seconds,
   });
   const used = process.cpuUsage(cpu);
   return {
@@ -198,6 +205,10 @@ async function service(validateResponses: boolean, build: CreateApp = createApp)
  */
 async function interleaved(targets: Target[]): Promise<Run[]> {
   const runs: Run[][] = targets.map(() => []);
+  // Untimed: each target's code reaches its optimised form before any round counts (the
+  // service has far more of it to compile than the bare server, and a first round measured cold
+  // would count that against it).
+  for (const target of targets) await load(target.url, target.headers, WARM_UP_SECONDS);
   for (let round = 0; round < ROUNDS; round++) {
     for (const [index, target] of targets.entries())
       runs[index]!.push(await load(target.url, target.headers));

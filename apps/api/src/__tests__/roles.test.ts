@@ -103,6 +103,37 @@ describe('every route against every role', () => {
     }
   }
 
+  // The forms passport-http-bearer reads (its README and lib/strategy.js): the scheme's name in
+  // any case, exactly one space-separated token, and a token in the body's access_token only
+  // when there is no header. Anything else is a failed attempt, answered as our 401.
+  it('reads the bearer token as passport-http-bearer does, and answers 401 for every other form', async () => {
+    const spectrum = {
+      modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.9, mf: 21, vdc: 400 },
+    };
+    const post = (authorization: string | undefined, body: object = spectrum) => {
+      const call = request(t.app).post('/api/v1/spectra');
+      return (authorization === undefined ? call : call.set('Authorization', authorization)).send(
+        body,
+      );
+    };
+    const key = tokens.viewer;
+    expect((await post(`Bearer ${key}`)).status).toBe(200);
+    expect((await post(`bearer ${key}`)).status).toBe(200);
+    for (const refused of [
+      'Bearer',
+      `Bearer ${key} extra`,
+      `Basic ${Buffer.from('engineer@kestrel.example:pulsewright-demo').toString('base64')}`,
+      `Token ${key}`,
+    ]) {
+      const res = await post(refused);
+      expect(res.status, refused).toBe(401);
+      expect(res.headers['content-type']).toMatch(/^application\/problem\+json/);
+    }
+    // Two tokens at once (header and body) are refused even when both are the caller's own.
+    const twice = await post(`Bearer ${key}`, { ...spectrum, access_token: key });
+    expect(twice.status).toBe(401);
+  });
+
   it('marks exactly the sign-in, reset, invitation-accept and health operations public', () => {
     const publicOps = operations
       .filter((o: OperationInfo) => o.role === 'public')

@@ -1,6 +1,5 @@
 import { inspect } from 'node:util';
 import type { Request } from 'express';
-import { Passport } from 'passport';
 import { Strategy as BearerStrategy } from 'passport-http-bearer';
 import type { AuthService } from '../services/auth.js';
 import { roleAtLeast, type Principal } from '../services/principal.js';
@@ -18,15 +17,38 @@ class AuthError extends Error {
 
 const principals = new WeakMap<object, Principal>();
 
-/** Where passport puts the authenticated principal on the request (`assignProperty`). */
-const PRINCIPAL_PROPERTY = 'bearerPrincipal';
+/**
+ * What passport-http-bearer's strategy calls back with (passport-strategy's contract: an
+ * authenticating framework gives each attempt `success`, `fail` and `error`; this strategy never
+ * calls `redirect` or `pass`).
+ */
+interface BearerAttempt {
+  authenticate(req: Request): void;
+  success(user: Principal): void;
+  fail(challengeOrStatus?: unknown): void;
+  error(error: unknown): void;
+}
 
 /**
- * What passport is given as the response: on a failed token it sets a status and a
- * `WWW-Authenticate` challenge there before handing the failure on (failWithError), and the
- * answer is this service's own 401 problem, so both are dropped.
+ * One attempt of passport-http-bearer's strategy on `req`, run as passport-strategy's contract
+ * describes: an object that inherits the strategy and carries this attempt's `success`, `fail`
+ * and `error`. It resolves to the principal, or false when the strategy fails the request (no
+ * token, a malformed Authorization header, two tokens, an unknown one). passport's own
+ * `authenticate` middleware does the same and also installs login, logout and session helpers on
+ * every request, which a stateless bearer API never calls: about 11 kB allocated an answer of
+ * `POST /api/v1/spectra` (sampled), and 7.19 → 7.00 M instructions an answer without it
+ * (callgrind; docs/robustness.md, throughput, seventh pass). The `passport` package itself is
+ * no longer used.
  */
-const PASSPORT_RESPONSE = { statusCode: 0, setHeader: (): void => undefined };
+function attemptBearer(strategy: object, req: Request): Promise<Principal | false> {
+  return new Promise((resolve, reject) => {
+    const attempt = Object.create(strategy) as BearerAttempt;
+    attempt.success = resolve;
+    attempt.fail = () => resolve(false);
+    attempt.error = (error) => reject(error instanceof Error ? error : new Error(inspect(error)));
+    attempt.authenticate(req);
+  });
+}
 
 /** The caller of an authorised request (set by {@link createAuthorizer}). */
 export function principalOf(req: object): Principal {
@@ -42,34 +64,12 @@ export function principalOf(req: object): Principal {
  * API keys alike) and compares the caller's role with the operation's `x-pulsewright-role`.
  */
 export function createAuthorizer(auth: AuthService): (req: Request) => Promise<boolean> {
-  const passport = new Passport();
-  passport.use(
-    new BearerStrategy((token, done) => {
-      auth.authenticate(token).then(
-        (principal) => done(null, principal ?? false),
-        (error: unknown) => done(error as Error),
-      );
-    }),
-  );
-  // One passport middleware for every request (not one made per request around a callback):
-  // the principal lands on the request under PRINCIPAL_PROPERTY, a failure comes back as an
-  // AuthenticationError (failWithError), and no auth info is transformed (authInfo: false).
-  const middleware = passport.authenticate('bearer', {
-    session: false,
-    failWithError: true,
-    assignProperty: PRINCIPAL_PROPERTY,
-    authInfo: false,
-  }) as (req: Request, res: unknown, next: (error?: unknown) => void) => void;
-  const authenticate = (req: Request): Promise<Principal | false> =>
-    new Promise((resolve, reject) => {
-      middleware(req, PASSPORT_RESPONSE, (error) => {
-        const found = (req as Request & { [PRINCIPAL_PROPERTY]?: Principal })[PRINCIPAL_PROPERTY];
-        if (!error) resolve(found ?? false);
-        // passport's AuthenticationError: no token, a malformed one (400) or an unknown one (401).
-        else if ((error as { name?: unknown }).name === 'AuthenticationError') resolve(false);
-        else reject(error instanceof Error ? error : new Error(inspect(error)));
-      });
-    });
+  const strategy = new BearerStrategy((token, done) => {
+    auth.authenticate(token).then(
+      (principal) => done(null, principal ?? false),
+      (error: unknown) => done(error),
+    );
+  });
 
   return async (req) => {
     const required = (req as Request & { openapi?: { schema?: Record<string, unknown> } }).openapi
@@ -78,7 +78,7 @@ export function createAuthorizer(auth: AuthService): (req: Request) => Promise<b
       throw new AuthError(403, 'This operation has no role requirement; refusing by default.');
     if (!req.headers.authorization)
       throw new AuthError(401, 'Sign in first: send Authorization: Bearer <token>.');
-    const principal = await authenticate(req);
+    const principal = await attemptBearer(strategy, req);
     if (!principal)
       throw new AuthError(
         401,
