@@ -177,7 +177,12 @@ async function service(validateResponses: boolean, build: CreateApp = createApp)
     webDist: path.join(dir, 'no-web'),
     validateResponses,
   });
-  const server = createServer(app);
+  // The service's own server (src/index.ts listens on the same); a build from before it had one
+  // (THROUGHPUT_COMPARE_API) is served as it was then.
+  const server =
+    typeof (app as Partial<typeof app>).httpServer === 'function'
+      ? app.httpServer()
+      : createServer(app);
   const port = await listen(server);
   const login = await fetch(`http://127.0.0.1:${port}/api/v1/auth/login`, {
     method: 'POST',

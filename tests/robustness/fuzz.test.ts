@@ -1,4 +1,4 @@
-import { createServer, type Server } from 'node:http';
+import type { Server } from 'node:http';
 import fc from 'fast-check';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -60,7 +60,8 @@ beforeAll(async () => {
       args.map((a) => (a instanceof Error ? `${a.name}: ${a.message}` : String(a))).join(' '),
     );
   };
-  server = createServer(setup.app).listen(0, '127.0.0.1');
+  // The service's own server, as src/index.ts listens (requests built on the app's prototypes).
+  server = setup.app.httpServer().listen(0, '127.0.0.1');
   await new Promise((resolve) => server.once('listening', resolve));
   const login = await request(server)
     .post('/api/v1/auth/login')

@@ -1,3 +1,4 @@
+import type { Server } from 'node:http';
 import express, { type Express } from 'express';
 import * as OpenApiValidator from 'express-openapi-validator';
 import multer from 'multer';
@@ -23,6 +24,7 @@ import { computeRoutes } from './routes/computeRoutes.js';
 import { captureRoutes } from './routes/captureRoutes.js';
 import { shareRoutes } from './routes/shareRoutes.js';
 import { exportRoutes } from './routes/exportRoutes.js';
+import { appServer, useOwnPrototypes } from './http/appServer.js';
 import { createServices, type Services } from './services/index.js';
 import { seedDemo } from './services/seed.js';
 
@@ -58,6 +60,11 @@ export type PulsewrightApp = Express & {
   freshDatabase: boolean;
   /** Stops background work and closes the database. */
   close(): Promise<void>;
+  /**
+   * A node:http server for the app, not yet listening, whose requests and responses are built
+   * on the app's own prototypes (http/appServer.ts): src/index.ts listens on one.
+   */
+  httpServer(): Server;
 };
 
 /**
@@ -76,6 +83,8 @@ export async function createApp(overrides: ConfigOverrides = {}): Promise<Pulsew
   if (fresh && config.seedDemo) await seedDemo(services, config.demoPassword);
 
   const app = express() as PulsewrightApp;
+  const messageClasses = useOwnPrototypes(app);
+  app.httpServer = () => appServer(app, messageClasses);
   app.disable('x-powered-by');
   // No ETag on answers: Express would hash every body (SHA-1 over a spectrum's 60 kB, each time)
   // to let a GET be answered 304, but the answers are computed per request or private to a bearer
