@@ -29,10 +29,11 @@
  * byte YAML text, were the first copies V8 kept); loaded one-byte, the service answers 10–15 %
  * faster, but this bench's bare server shares the process and its string table and gained as
  * much: 58–71 % in six runs (median 64 %), p99 1.5–2.2× (docs/robustness.md, sixth pass).
- * Seventh pass: passport's per-request middleware left out (7.19 → 7.00 M instructions an
- * answer; bare 5.58 M, 80 %) and an untimed warm-up load per target; 60–70 % in three runs, p99
- * 1.7–2.1×: in CPU time the service stays at 55–65 %, the rest of the gap being how the stack's
- * code runs rather than how much of it (docs/robustness.md, seventh pass).
+ * Seventh pass: Express changed every request's and response's prototype after node:http had
+ * built them; the service's server now builds them on the app's own prototypes, and passport's
+ * per-request middleware is gone (7.19 → 6.51 M instructions an answer; bare 5.58 M). Four runs
+ * after, with an untimed warm-up load per target: 78–90 %, p99 1.1–1.2×, no errors: the goal is
+ * met (docs/robustness.md, seventh pass).
  */
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
