@@ -3,7 +3,7 @@ import type { AddressInfo } from 'node:net';
 import express from 'express';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
-import { useOwnPrototypes } from '../http/appServer.js';
+import { appServer, useOwnPrototypes } from '../http/appServer.js';
 import { DEMO, signIn, testApp, type TestApp } from './helpers.js';
 
 /** Starts `server` on a free loopback port and gives its base URL. */
@@ -59,10 +59,7 @@ describe("the app's own request and response prototypes", () => {
       return setPrototypeOf(target, prototype);
     });
     try {
-      const own = createServer(
-        { IncomingMessage: classes.IncomingMessage, ServerResponse: classes.ServerResponse },
-        app,
-      );
+      const own = appServer(app, classes);
       const ownAnswer = await fetch(`${await listening(own)}/hello?x=1`);
       await closed(own);
       expect(changes).toEqual([]);

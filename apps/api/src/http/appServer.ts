@@ -60,8 +60,5 @@ export function useOwnPrototypes(app: Express): AppMessageClasses {
 
 /** A node:http server (not listening) for `app`, whose requests and responses are built from `classes`. */
 export function appServer(app: Express, classes: AppMessageClasses): Server {
-  return createServer(
-    { IncomingMessage: classes.IncomingMessage, ServerResponse: classes.ServerResponse },
-    app,
-  );
+  return createServer(classes, app);
 }
