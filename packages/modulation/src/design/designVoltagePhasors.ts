@@ -1,4 +1,6 @@
 import { harmonicPhasors, type HarmonicPhasors } from '../spectrum/harmonicPhasors.js';
+import { mirroredPhasors } from '../spectrum/mirroredPhasors.js';
+import { waveformMirror } from '../waveform/waveformSymmetry.js';
 import type { ModulationVoltages, NamedVoltage } from './modulationVoltages.js';
 
 /** The spectra of a design's voltages, each read once (see {@link designVoltagePhasors}). */
@@ -34,9 +36,7 @@ export function designVoltagePhasors(
 ): DesignVoltagePhasors {
   const size = maxOrder + 1;
   const legs =
-    voltages.phaseCount === 3 && voltages.legs.length === 3
-      ? voltages.legs.map((leg) => harmonicPhasors(leg.waveform, maxOrder))
-      : null;
+    voltages.phaseCount === 3 && voltages.legs.length === 3 ? legPhasors(voltages, maxOrder) : null;
   const leg = (k: number): HarmonicPhasors => {
     if (legs === null) throw new RangeError('a three-phase bridge has legs; this one has none');
     return legs[((k % 3) + 3) % 3] as HarmonicPhasors;
@@ -90,4 +90,24 @@ export function designVoltagePhasors(
     line: (index) => once(`line ${index}`, () => combine(index, 'line')),
     commonMode: () => once('common mode', () => combine(0, 'common mode')),
   };
+}
+
+/**
+ * The exact phasors of each leg, orders 0..maxOrder. A leg that is an earlier leg read backwards
+ * (`waveformMirror`: leg c is leg b mirrored about π/2 under carrier modulation with any zero
+ * sequence, see there) is read from that leg's phasors (`mirroredPhasors`), not summed again.
+ */
+function legPhasors(voltages: ModulationVoltages, maxOrder: number): HarmonicPhasors[] {
+  const read: HarmonicPhasors[] = [];
+  voltages.legs.forEach(({ waveform }, k) => {
+    for (let j = 0; j < k; j++) {
+      const mirror = waveformMirror((voltages.legs[j] as NamedVoltage).waveform, waveform);
+      if (mirror !== null) {
+        read.push(mirroredPhasors(read[j] as HarmonicPhasors, mirror.axis));
+        return;
+      }
+    }
+    read.push(harmonicPhasors(waveform, maxOrder));
+  });
+  return read;
 }

@@ -1,4 +1,6 @@
+import { MAX_HARMONIC_ORDER } from '../spectrum/harmonicPhasors.js';
 import { harmonics } from '../spectrum/harmonics.js';
+import { assertNumberInRange } from '../validation/assertions.js';
 import { labelHarmonics } from '../spectrum/labelHarmonics.js';
 import type { VoltageFigures } from './DesignReport.js';
 import { labelledVoltageFigures } from './labelledVoltageFigures.js';
@@ -26,6 +28,7 @@ export function voltageFigures(
   options: VoltageFiguresOptions,
 ): VoltageFigures {
   const { maxOrder, frequencyRatio = null } = options;
+  assertNumberInRange('maxOrder', maxOrder, { min: 1, max: MAX_HARMONIC_ORDER, integer: true });
   const spectrum = harmonics(voltage.waveform, maxOrder);
   return labelledVoltageFigures(
     voltage,

@@ -1,6 +1,10 @@
-import { TAU } from '../math.js';
 import { assertNumberInRange } from '../validation/assertions.js';
 import { assertWaveform } from '../waveform/assertWaveform.js';
+import {
+  hasHalfWaveSymmetry,
+  waveformMirror,
+  type WaveformMirror,
+} from '../waveform/waveformSymmetry.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import { waveformMean } from '../waveform/waveformMean.js';
 
@@ -53,21 +57,21 @@ export function harmonicPhasors(waveform: Waveform, maxOrder: number): HarmonicP
   // Half-wave symmetry about a level, v(θ + π) = 2c − v(θ): the second half's jumps repeat the
   // first half's negated, which doubles the odd orders and cancels the even ones.
   const symmetric = hasHalfWaveSymmetry(waveform);
-  // The edges with a jump, as two arrays padded to a whole number of groups of four with
-  // zero jumps (which add nothing).
-  const kept = symmetric ? edgeCount / 2 : edgeCount;
-  const thetas = new Float64Array(kept + 3);
-  const jumps = new Float64Array(kept + 3);
-  let jumpCount = 0;
-  for (let i = 0; i < kept; i++) {
-    const jump = (levels[i] as number) - (levels[(i + edgeCount - 1) % edgeCount] as number);
-    if (jump === 0) continue;
-    thetas[jumpCount] = edges[i] as number;
-    jumps[jumpCount] = symmetric ? 2 * jump : jump;
-    jumpCount++;
-  }
+  // Mirror symmetry about α, v(θ) = v(2α − θ): each jump Δ at θ has −Δ at 2α − θ.
+  const mirror = waveformMirror(waveform, waveform);
+  const { thetas, jumps, jumpCount } = representativeEdges(waveform, symmetric, mirror);
   for (let i = 0; i < jumpCount; i += 4) {
     accumulateFourEdges(sinSum, cosSum, { thetas, jumps, first: i }, maxOrder, symmetric ? 2 : 1);
+  }
+  // The part each mirror pair cancels: with e^{−jn(2α − θ)} = e^{−j2nα}·e^{jnθ}, a pair adds
+  // Δ(e^{−jnθ} − e^{−j2nα}e^{jnθ}), which is 2Δ·cos nθ when e^{−j2nα} = −1 (odd n about π/2)
+  // and −2jΔ·sin nθ when it is 1 (every n about 0, even n about π/2): the representatives' sums
+  // hold the surviving part, the other is exactly zero.
+  if (mirror !== null) {
+    for (let n = 1; n <= maxOrder; n++) {
+      if (mirror.axis !== 0 && n % 2 === 1) sinSum[n] = 0;
+      else cosSum[n] = 0;
+    }
   }
   // v = a_n cos nθ + b_n sin nθ with a_n = −ΣΔ sin/(πn), b_n = ΣΔ cos/(πn): the sums become
   // the phasors in place.
@@ -88,24 +92,46 @@ export function harmonicPhasors(waveform: Waveform, maxOrder: number): HarmonicP
 }
 
 /**
- * Tolerance (radians) for pairing an edge with the one half a period later: 4 ulp at 2π. An
- * edge off by that much moves any amplitude by at most |jump|·tolerance/π (the 1/n of the
- * coefficient cancels the n of the phase), below 1e-14 of the jump.
+ * One edge of each orbit under the waveform's symmetries (the half-wave shift i → i + N/2 and
+ * the mirror i → offset − i, and both), weighted by the orbit's size: every member adds the
+ * representative's term to the orders that survive the symmetries (odd ones under the half-wave
+ * shift; the mirror's surviving part, see harmonicPhasors), so the sums run over a half or a
+ * quarter of the edges. Edges without a jump are left out. As two arrays padded to a whole
+ * number of groups of four with zero jumps (which add nothing), in the waveform's order.
  */
-const SYMMETRY_TOLERANCE = 4 * Number.EPSILON * TAU;
-
-/** True when v(θ + π) = 2c − v(θ) for one constant c, to {@link SYMMETRY_TOLERANCE}. */
-function hasHalfWaveSymmetry({ edges, levels }: Waveform): boolean {
+function representativeEdges(
+  { edges, levels }: Waveform,
+  halfWave: boolean,
+  mirror: WaveformMirror | null,
+): { thetas: Float64Array; jumps: Float64Array; jumpCount: number } {
   const count = edges.length;
-  if (count < 2 || count % 2 === 1) return false;
-  const half = count / 2;
-  const levelSum = (levels[0] as number) + (levels[half] as number);
-  for (let i = 0; i < half; i++) {
-    if ((levels[i] as number) + (levels[i + half] as number) !== levelSum) return false;
-    const gap = (edges[i + half] as number) - (edges[i] as number) - Math.PI;
-    if (Math.abs(gap) > SYMMETRY_TOLERANCE) return false;
+  const thetas = new Float64Array(count + 3);
+  const jumps = new Float64Array(count + 3);
+  const seen = new Uint8Array(count);
+  let jumpCount = 0;
+  for (let i = 0; i < count; i++) {
+    if (seen[i] === 1) continue;
+    let orbitSize = 0;
+    const join = (k: number): void => {
+      if (seen[k] === 0) {
+        seen[k] = 1;
+        orbitSize++;
+      }
+    };
+    join(i);
+    if (halfWave) join((i + count / 2) % count);
+    if (mirror !== null) {
+      const image = (((mirror.offset - i) % count) + count) % count;
+      join(image);
+      if (halfWave) join((image + count / 2) % count);
+    }
+    const jump = (levels[i] as number) - (levels[(i + count - 1) % count] as number);
+    if (jump === 0) continue;
+    thetas[jumpCount] = edges[i] as number;
+    jumps[jumpCount] = orbitSize * jump;
+    jumpCount++;
   }
-  return true;
+  return { thetas, jumps, jumpCount };
 }
 
 /**

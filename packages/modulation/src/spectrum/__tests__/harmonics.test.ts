@@ -69,3 +69,35 @@ describe('harmonics: the mean (order 0)', () => {
     assertInDelta((mean?.amplitude ?? NaN) * Math.cos(mean?.phase ?? NaN), -25, 1e-12, 'mean');
   });
 });
+
+describe('harmonics of mirror-symmetric pulses (read from half their edges)', () => {
+  // A pulse of height V and width 2w centred at θ₀: v = V·w/π + Σ (2V/(nπ))·sin(nw)·cos(n(θ − θ₀))
+  // (the Fourier series of a rectangular pulse train, standard Fourier analysis): amplitude
+  // (2V/(nπ))·|sin nw| and phase π/2 − nθ₀ (+π where sin nw < 0) in the convention
+  // A·sin(nθ + φ). Centred at π/2 it is its own mirror image about π/2, without half-wave
+  // symmetry; centred at 0, about 0.
+  const volts = 300;
+  const halfWidth = 0.7;
+  const pulses = [
+    [
+      'π/2',
+      Math.PI / 2,
+      { edges: [Math.PI / 2 - halfWidth, Math.PI / 2 + halfWidth], levels: [volts, 0] },
+    ],
+    ['0', 0, { edges: [halfWidth, 2 * Math.PI - halfWidth], levels: [0, volts] }],
+  ] as const;
+  for (const [name, centre, pulse] of pulses) {
+    it(`centred at ${name}: every order as the closed form`, () => {
+      const spectrum = harmonics({ edges: [...pulse.edges], levels: [...pulse.levels] }, 200);
+      assertInDelta(spectrum[0]?.amplitude ?? NaN, (volts * halfWidth) / Math.PI, 1e-12 * volts);
+      for (const { order, amplitude, phase } of spectrum.slice(1)) {
+        const signed = ((2 * volts) / (order * Math.PI)) * Math.sin(order * halfWidth);
+        assertInDelta(amplitude, Math.abs(signed), 1e-12 * volts, `order ${order}`);
+        if (Math.abs(signed) < 1e-9 * volts) continue;
+        const expected = Math.PI / 2 - order * centre + (signed < 0 ? Math.PI : 0);
+        const gap = Math.abs(phase - expected) % (2 * Math.PI);
+        expect(Math.min(gap, 2 * Math.PI - gap), `phase ${order}`).toBeLessThan(1e-12);
+      }
+    });
+  }
+});
