@@ -35,7 +35,7 @@ import { modulationVoltages, type NamedVoltage } from './modulationVoltages.js';
 import { spectrumLabelRatio } from './spectrumLabelRatio.js';
 import { designVoltagePhasors } from './designVoltagePhasors.js';
 import { exactLoadCurrents } from './exactLoadCurrents.js';
-import { filteredPhase, type FilteredPhase } from './filteredPhase.js';
+import { filteredPhase, outputSeriesSize, type FilteredPhase } from './filteredPhase.js';
 import { labelledVoltageFigures } from './labelledVoltageFigures.js';
 import { spectrumLabeller } from './spectrumLabeller.js';
 import { modulatorSignals } from './modulatorSignals.js';
@@ -244,6 +244,11 @@ export function analyseDesign(
       Math.max(analysisOrder, currentOrder),
       currentOrder,
     );
+    // Phase a's output voltage is drawn only: its series has a grid of its own, of the chart's size.
+    const outputSynthesiser = synthesiserOf(
+      outputSeriesSize(currentOrder, points, synthesiser.size),
+      options.plans,
+    );
     const solved: FilteredPhase[] = [];
     phaseVoltages.forEach((waveform, k) => {
       const [a, b] = solved;
@@ -265,6 +270,7 @@ export function analyseDesign(
         currentOrder,
         points,
         synthesiser,
+        outputSynthesiser,
         labeller,
         // Phase c's currents are minus a's and b's (Kirchhoff at the star point).
         ...(voltages.phaseCount === 3 && k === 2 && a && b ? { others: [a, b] as const } : {}),

@@ -28,7 +28,7 @@ import type { RationalRatio } from './designRationalRatio.js';
 import { designSpanMaxOrder } from './designSpanMaxOrder.js';
 import { designSpanModulation } from './designSpanModulation.js';
 import { designVoltagePhasors } from './designVoltagePhasors.js';
-import { filteredPhase, type FilteredPhase } from './filteredPhase.js';
+import { filteredPhase, outputSeriesSize, type FilteredPhase } from './filteredPhase.js';
 import { filterFigures } from './filterFigures.js';
 import { gridFigures } from './gridFigures.js';
 import { gridLoad } from './gridLoad.js';
@@ -398,6 +398,10 @@ function spanFilteredPhases(
   const synthesiser = periodSynthesiser(
     synthesisSize(currentOrder, Math.max(MIN_SAMPLES_PER_PERIOD * q, 16 * currentOrder)),
   );
+  // Phase a's output voltage is drawn only: its series has a grid of its own, of the chart's size.
+  const outputSynthesiser = periodSynthesiser(
+    outputSeriesSize(currentOrder, points, synthesiser.size),
+  );
   const three = voltages.phaseCount === 3;
   return voltages.phases.map((voltage, k) => {
     const phase = PHASES[k] ?? 'a';
@@ -419,6 +423,7 @@ function spanFilteredPhases(
       currentOrder,
       points,
       synthesiser,
+      outputSynthesiser,
       labeller,
     });
   });

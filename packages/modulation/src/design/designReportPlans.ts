@@ -9,9 +9,9 @@ import { spectrumLabeller, type SpectrumLabeller } from './spectrumLabeller.js';
  * synthesiser of filtered time series built on each, and the label table of the last spectrum
  * orders and carrier ratio (0.2 ms and 0.5 MB of strings a report to 5000 orders, built again only
  * when a report labels other orders or another ratio). Not shared between threads: a worker keeps
- * its own. The plans hold the last two grid sizes asked for, so a run of reports at one or two
- * designs' grids builds nothing again, and memory stays bounded (a grid of S samples holds about
- * 7·S doubles: 3.7 MB at S = 65536, 29 MB at the largest, 2^19).
+ * its own. The plans hold the last three grid sizes asked for (see {@link PLAN_SIZES}), so a
+ * run of reports at one or two designs' grids builds nothing again, and memory stays bounded (a
+ * grid of S samples holds about 7·S doubles: 3.7 MB at S = 65536, 29 MB at the largest, 2^19).
  */
 export interface DesignReportPlans {
   /** The transform of size S (a power of two ≥ 4), built on first use. */
@@ -25,8 +25,13 @@ export interface DesignReportPlans {
   labeller(maxOrder: number, ratio: number): SpectrumLabeller;
 }
 
-/** How many grid sizes {@link designReportPlans} keeps (the least recently used goes first). */
-const PLAN_SIZES = 2;
+/**
+ * How many grid sizes {@link designReportPlans} keeps (the least recently used goes first): a
+ * filtered report reads two, its currents' and its output chart's (`outputSeriesSize`, 4096 at
+ * the default points for mf up to 200), so reports alternating between two designs share the
+ * chart's grid and build nothing again.
+ */
+const PLAN_SIZES = 3;
 
 /**
  * New, empty transform plans for `analyseDesign` (see {@link DesignReportPlans}). The figures

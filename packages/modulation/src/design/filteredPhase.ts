@@ -16,7 +16,7 @@ import type {
 } from './DesignReport.js';
 import { networkPhasors } from './networkPhasors.js';
 import { periodSeries } from './periodSeries.js';
-import type { PeriodSynthesiser } from './periodSynthesiser.js';
+import { synthesisSize, type PeriodSynthesiser } from './periodSynthesiser.js';
 import type { SpectrumLabeller } from './spectrumLabeller.js';
 
 /**
@@ -70,6 +70,12 @@ export interface FilteredPhaseContext {
   currentOrder: number;
   points: number;
   synthesiser: PeriodSynthesiser;
+  /**
+   * The synthesiser of the output voltage's chart series, on a grid of its own
+   * ({@link outputSeriesSize}): no figure is read from those samples, so a grid of about twice
+   * the chart's points serves, not the currents'. @default synthesiser
+   */
+  outputSynthesiser?: PeriodSynthesiser;
   labeller: SpectrumLabeller;
   /**
    * The two other phases of a three-phase bridge, already read. Their load, filter and back-EMF
@@ -211,7 +217,12 @@ export function filteredPhase(
               thdUpperBound: outputThdUpperBound(waveform, bridge, solved.output, context),
             }),
             series: periodSeries(
-              synthesiser.pair(solved.output, null, held, OUTPUT_SLOT)[0],
+              (context.outputSynthesiser ?? synthesiser).pair(
+                solved.output,
+                null,
+                held,
+                OUTPUT_SLOT,
+              )[0],
               points,
             ),
           },
@@ -236,6 +247,20 @@ export function filteredPhase(
     loadPower:
       loadR === null || loadCurrent === null ? 0 : loadR * loadCurrent.rms * loadCurrent.rms,
   };
+}
+
+/**
+ * The grid of the output voltage's chart series (`FilteredPhaseContext.outputSynthesiser`): the
+ * smallest power of two that holds its orders to `highestOrder` without aliasing and at least
+ * 2·points samples (so the series gets between `points` and 2·points of them), and never more
+ * than the currents' grid.
+ */
+export function outputSeriesSize(
+  highestOrder: number,
+  points: number,
+  currentGrid: number,
+): number {
+  return Math.min(currentGrid, synthesisSize(highestOrder, 2 * points));
 }
 
 /**

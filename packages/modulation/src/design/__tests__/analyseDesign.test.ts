@@ -134,6 +134,36 @@ describe('analyseDesign: one report of a design', () => {
     );
   });
 
+  it("draws the output voltage from its spectrum, on a chart's grid of points to 2·points samples", () => {
+    // The series is the output's Fourier sum (the harmonics convention, docs/methods.md) to the
+    // currents' order, at least 10·mf + 10: summing the whole reported spectrum at the series'
+    // angles differs from it by at most the amplitudes above 10·mf + 10.
+    const mf = 99;
+    const points = 700;
+    const report = analyseDesign(
+      bipolar(0.8, mf, { load: { r: 5, l: 0.002 }, filter: { l: 0.002, c: 20e-6, rDamping: 1 } }),
+      { maxOrder: 2500, points },
+    );
+    const spectrum = report.output?.spectrum ?? [];
+    const series = report.output?.series ?? { angles: [], values: [] };
+    expect(series.values.length).toBeGreaterThanOrEqual(points);
+    expect(series.values.length).toBeLessThanOrEqual(2 * points);
+    const beyond = spectrum
+      .filter((h) => h.order > 10 * mf + 10)
+      .reduce((sum, h) => sum + h.amplitude, 0);
+    series.angles.forEach((theta, j) => {
+      const summed = spectrum.reduce(
+        (sum, h) =>
+          sum +
+          (h.order === 0
+            ? h.amplitude * Math.cos(h.phase)
+            : h.amplitude * Math.sin(h.order * theta + h.phase)),
+        0,
+      );
+      assertInDelta(series.values[j] ?? NaN, summed, beyond + 1e-9 * 100, `angle ${theta}`);
+    });
+  });
+
   it('the loaded filter: output = divider of the series branch and (shunt ∥ load); switch current = capacitor + load', () => {
     const design = bipolar(0.8, 99, {
       load: { r: 5, l: 0.002 },

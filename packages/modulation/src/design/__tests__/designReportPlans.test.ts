@@ -64,18 +64,21 @@ describe('designReportPlans', () => {
     expect(synthesiser.buffers(0)[1]).not.toBe(keptSecond);
   });
 
-  it('keeps a transform per grid size for the last two sizes used', () => {
+  it('keeps a transform per grid size for the last three sizes used', () => {
     const plans = designReportPlans();
     const first = plans.transform(4096);
     expect(plans.transform(4096)).toBe(first);
     expect(plans.synthesiser(4096).fft).toBe(first);
-    plans.transform(8192);
+    const second = plans.transform(8192);
+    const third = plans.transform(16384);
     expect(plans.transform(4096)).toBe(first);
-    // 8192 is now the least recently used of the two kept: 16384 evicts it, 4096 stays.
-    plans.transform(16384);
+    // 8192 is now the least recently used of the three kept: 32768 evicts it, the others stay.
+    plans.transform(32768);
     expect(plans.transform(4096)).toBe(first);
-    expect(plans.transform(8192).size).toBe(8192);
-    expect(plans.transform(16384).size).toBe(16384);
+    expect(plans.transform(16384)).toBe(third);
+    const rebuilt = plans.transform(8192);
+    expect(rebuilt.size).toBe(8192);
+    expect(rebuilt).not.toBe(second);
   });
 
   it('keeps the label table of the last orders and carrier ratio asked for', () => {
