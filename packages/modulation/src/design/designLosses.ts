@@ -1,4 +1,4 @@
-import { legLossesFromSamples } from '../losses/legLossesFromSamples.js';
+import { legLossesOfValidSamples } from '../losses/legLossesOfValidSamples.js';
 import type { DeviceLoss, SemiconductorDevice } from '../losses/lossTypes.js';
 import { switchingEnergyScale } from '../losses/switchingEnergyScale.js';
 import { TAU } from '../math.js';
@@ -56,7 +56,7 @@ export function designLosses(
     );
     while (current.length % stride !== 0) stride--;
     const cells = stride === 1 ? current : everyNth(current, stride);
-    const conduction = legLossesFromSamples(
+    const conduction = legLossesOfValidSamples(
       highFractions(leg.state, cells.length),
       cells,
       // Only the conduction part is read; the cells' own switching count is not a carrier's.
