@@ -169,6 +169,32 @@
  * order 4.70/4.43/4.73 → 4.08/4.06/6.07. The 5 ms goal is still not reached reliably at spectra
  * to 5000 on this machine: the round's 5–7 % is smaller than its run-to-run spread, and what is
  * left is the exact sums, the transforms and the answer's own labelled objects.
+ *
+ * Seventh round (figures equal to rounding on a 584-report corpus of every method and zero
+ * sequence at mf 21, 45, 100 and 101 and a span, with and without load, filter, device and
+ * back-EMF, at the default order and 5000: the largest change 2e-10 of a figure, in the ripple RMS
+ * after its tail's cancellation, and values that were rounding noise, 1e-16–1e-14, moved within
+ * it): mirror symmetry. A waveform that is its own mirror image about π/2 or 0 (leg a under
+ * carrier PWM, a single-phase bridge) is summed over one edge of each orbit of its symmetries (a
+ * quarter of the edges with half-wave symmetry), the other part of each order exactly zero; leg c,
+ * leg b read backwards, takes leg b's phasors with signs changed (`waveformMirror`,
+ * `mirroredPhasors`): the legs' sums 3 → 1.5 legs' worth, and the spectrum alone 0.93 → 0.60 ms.
+ * The bridge and line THD and WTHD take their fundamental from the exact spectrum the report
+ * holds (four single-order sums fewer). The filter output's chart series, which no figure reads,
+ * is synthesised on a grid of its own of about twice the chart's points (4096 samples, not the
+ * currents' 16384: one 16384-sample transform fewer). The conduction cells are summed without
+ * `assertFiniteArray`'s passes (legLossesOfValidSamples; 3.6 M instructions a report: that
+ * loop's element loads are megamorphic) and the running integral's samples take a
+ * multiplication for a division. Instructions a full report with plans (callgrind, node
+ * --single-threaded, slope from 40 to 100 reports): 89.0 → 78.3 (first two steps) → 74.7 M,
+ * 16 % fewer. Reports alternating with the round's start in one process, median CPU ms with
+ * plans: 5.16/5.51 → 4.77/4.96 after the first step, 4.86/5.44 → 4.22/4.99 after the second
+ * (quiet moments), and 5.97–7.25 → 5.21–6.33 later when the same code ran a third slower
+ * throughout (the host's state: load under 1, no steal counted). The plans row now runs 100
+ * reports after 30, the goal's row, for a steadier median. Measured and left: the finiteness
+ * check split by array kind (no fewer instructions); fft.js on plain arrays against
+ * Float64Arrays (within the noise). Profile after: fft.js's transforms 14 %, labelling 9 %, the
+ * legs' sums 7 %, the filtered phases' per-sample extremes 6 %, garbage collection 5 %.
  */
 import {
   analyseDesign,
@@ -216,8 +242,8 @@ const reportFullDefault = medianCpuTime(() => analyseDesign(full), 30, 10);
 const plans = designReportPlans();
 const reportFullPlanned = medianCpuTime(
   () => analyseDesign(full, { maxOrder: 5000, points: 1200, plans }),
+  100,
   30,
-  10,
 );
 
 printTable(
