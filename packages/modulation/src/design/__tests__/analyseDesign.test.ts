@@ -9,6 +9,7 @@ import { threePhase } from '../../three-phase/threePhase.js';
 import { combineWaveforms } from '../../waveform/combineWaveforms.js';
 import { analyseDesign } from '../analyseDesign.js';
 import type { InverterDesign } from '../InverterDesign.js';
+import { spectrumValueAt } from '../../testing/spectrumValueAt.js';
 
 const bipolar = (ma: number, mf: number, extra: Partial<InverterDesign> = {}): InverterDesign => ({
   vdc: 100,
@@ -152,14 +153,7 @@ describe('analyseDesign: one report of a design', () => {
       .filter((h) => h.order > 10 * mf + 10)
       .reduce((sum, h) => sum + h.amplitude, 0);
     series.angles.forEach((theta, j) => {
-      const summed = spectrum.reduce(
-        (sum, h) =>
-          sum +
-          (h.order === 0
-            ? h.amplitude * Math.cos(h.phase)
-            : h.amplitude * Math.sin(h.order * theta + h.phase)),
-        0,
-      );
+      const summed = spectrumValueAt(spectrum, theta);
       assertInDelta(series.values[j] ?? NaN, summed, beyond + 1e-9 * 100, `angle ${theta}`);
     });
   });

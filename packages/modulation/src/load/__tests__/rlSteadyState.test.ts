@@ -8,6 +8,7 @@ import type { Waveform } from '../../waveform/Waveform.js';
 import type { Harmonic } from '../../spectrum/Harmonic.js';
 import type { RlLoadOptions } from '../RlLoad.js';
 import { assertInDelta } from '../../testing/assertInDelta.js';
+import { spectrumValueAt } from '../../testing/spectrumValueAt.js';
 
 const TAU = 2 * Math.PI;
 
@@ -132,14 +133,7 @@ describe('rlSteadyState against the harmonic sum (standard circuit analysis)', (
     const angles = [0.05, 1.3, 2.2, 3.33, 5.0, 6.2];
     const exact = rlCurrentAt(waveform, angles, load);
     angles.forEach((theta, k) => {
-      const summed = spectrum.reduce(
-        (sum, h) =>
-          sum +
-          (h.order === 0
-            ? h.amplitude * Math.cos(h.phase)
-            : h.amplitude * Math.sin(h.order * theta + h.phase)),
-        0,
-      );
+      const summed = spectrumValueAt(spectrum, theta);
       assertInDelta(exact[k] as number, summed, bound, `θ = ${theta}`);
     });
   });
