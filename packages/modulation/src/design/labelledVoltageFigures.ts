@@ -1,11 +1,7 @@
 import { weightedDistortion } from '../spectrum/distortion.js';
 import type { LabelledHarmonic } from '../spectrum/labelHarmonics.js';
-import {
-  assertFundamental,
-  waveformThdOfFundamental,
-  waveformWthdOfFundamental,
-} from '../spectrum/wholeWaveformDistortion.js';
-import { assertWaveform } from '../waveform/assertWaveform.js';
+import { waveformThd } from '../spectrum/waveformThd.js';
+import { waveformWthd } from '../spectrum/waveformWthd.js';
 import { waveformMeanSquare } from '../waveform/waveformMeanSquare.js';
 import type { VoltageFigures } from './DesignReport.js';
 import type { NamedVoltage } from './modulationVoltages.js';
@@ -23,20 +19,16 @@ export function labelledVoltageFigures(
   spectrum: LabelledHarmonic[],
 ): VoltageFigures {
   const { name, waveform } = voltage;
-  assertWaveform(waveform);
-  const fundamental = spectrum[1];
-  if (fundamental === undefined) throw new RangeError('the spectrum has no order 1');
-  // The spectrum's fundamental is exact: the ratios' denominator without reading it again.
-  const amplitude = assertFundamental(fundamental.amplitude);
-  const thd = waveformThdOfFundamental(waveform, amplitude);
+  const thd = waveformThd(waveform);
+  const fundamental = spectrum[1] as LabelledHarmonic;
   return {
     name,
-    fundamental: amplitude,
+    fundamental: fundamental.amplitude,
     fundamentalPhase: fundamental.phase,
     rms: Math.sqrt(waveformMeanSquare(waveform)),
     thd,
     thdUpperBound: thd,
-    wthd: waveformWthdOfFundamental(waveform, amplitude),
+    wthd: waveformWthd(waveform),
     exact: true,
     spectrum,
     spectrumThd: weightedDistortion(spectrum, 0),
