@@ -1,7 +1,11 @@
 import { weightedDistortion } from '../spectrum/distortion.js';
 import type { LabelledHarmonic } from '../spectrum/labelHarmonics.js';
-import { waveformThd } from '../spectrum/waveformThd.js';
-import { waveformWthd } from '../spectrum/waveformWthd.js';
+import { fundamentalAmplitude } from '../spectrum/fundamentalAmplitude.js';
+import {
+  waveformThdOfFundamental,
+  waveformWthdOfFundamental,
+} from '../spectrum/wholeWaveformDistortion.js';
+import { assertWaveform } from '../waveform/assertWaveform.js';
 import { waveformMeanSquare } from '../waveform/waveformMeanSquare.js';
 import type { VoltageFigures } from './DesignReport.js';
 import type { NamedVoltage } from './modulationVoltages.js';
@@ -19,7 +23,12 @@ export function labelledVoltageFigures(
   spectrum: LabelledHarmonic[],
 ): VoltageFigures {
   const { name, waveform } = voltage;
-  const thd = waveformThd(waveform);
+  assertWaveform(waveform);
+  // The ratios' denominator is the waveform's own fundamental, read once for both, as
+  // `waveformThd` reads it: a report's spectra are combined from the legs, equal to it to
+  // rounding only, and one voltage gets one whole-waveform THD from every route.
+  const ownFundamental = fundamentalAmplitude(waveform);
+  const thd = waveformThdOfFundamental(waveform, ownFundamental);
   const fundamental = spectrum[1] as LabelledHarmonic;
   return {
     name,
@@ -28,7 +37,7 @@ export function labelledVoltageFigures(
     rms: Math.sqrt(waveformMeanSquare(waveform)),
     thd,
     thdUpperBound: thd,
-    wthd: waveformWthd(waveform),
+    wthd: waveformWthdOfFundamental(waveform, ownFundamental),
     exact: true,
     spectrum,
     spectrumThd: weightedDistortion(spectrum, 0),

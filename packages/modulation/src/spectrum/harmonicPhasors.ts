@@ -157,14 +157,17 @@ function accumulateFourEdges(
   const j1 = jumps[first + 1] as number;
   const j2 = jumps[first + 2] as number;
   const j3 = jumps[first + 3] as number;
-  const k0 = Math.cos(orderStep * t0);
-  const k1 = Math.cos(orderStep * t1);
-  const k2 = Math.cos(orderStep * t2);
-  const k3 = Math.cos(orderStep * t3);
-  const q0 = Math.sin(orderStep * t0);
-  const q1 = Math.sin(orderStep * t1);
-  const q2 = Math.sin(orderStep * t2);
-  const q3 = Math.sin(orderStep * t3);
+  // The step's rotation, needed only when a block holds more than one order (a fundamental
+  // alone, `fundamentalAmplitude`, spares half its trigonometry): the identity otherwise.
+  const stepped = maxOrder >= 1 + orderStep;
+  const k0 = stepped ? Math.cos(orderStep * t0) : 1;
+  const k1 = stepped ? Math.cos(orderStep * t1) : 1;
+  const k2 = stepped ? Math.cos(orderStep * t2) : 1;
+  const k3 = stepped ? Math.cos(orderStep * t3) : 1;
+  const q0 = stepped ? Math.sin(orderStep * t0) : 0;
+  const q1 = stepped ? Math.sin(orderStep * t1) : 0;
+  const q2 = stepped ? Math.sin(orderStep * t2) : 0;
+  const q3 = stepped ? Math.sin(orderStep * t3) : 0;
   const blockSpan = RESEED_INTERVAL * orderStep;
   for (let blockStart = 1; blockStart <= maxOrder; blockStart += blockSpan) {
     let c0 = j0 * Math.cos(blockStart * t0);

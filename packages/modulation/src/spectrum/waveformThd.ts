@@ -1,8 +1,7 @@
 import { assertWaveform } from '../waveform/assertWaveform.js';
 import type { Waveform } from '../waveform/Waveform.js';
-import { waveformMean } from '../waveform/waveformMean.js';
-import { waveformMeanSquare } from '../waveform/waveformMeanSquare.js';
 import { fundamentalAmplitude } from './fundamentalAmplitude.js';
+import { waveformThdOfFundamental } from './wholeWaveformDistortion.js';
 
 /**
  * Total harmonic distortion of a whole waveform, every order ≥ 2 included, exact: by Parseval's
@@ -16,9 +15,5 @@ import { fundamentalAmplitude } from './fundamentalAmplitude.js';
  */
 export function waveformThd(waveform: Waveform): number {
   assertWaveform(waveform);
-  const fundamental = fundamentalAmplitude(waveform);
-  const mean = waveformMean(waveform);
-  const remainder = waveformMeanSquare(waveform) - mean * mean - (fundamental * fundamental) / 2;
-  // Rounding can leave a tiny negative remainder for a waveform with (almost) no distortion.
-  return Math.sqrt(Math.max(0, 2 * remainder)) / fundamental;
+  return waveformThdOfFundamental(waveform, fundamentalAmplitude(waveform));
 }

@@ -1,7 +1,7 @@
 import { assertWaveform } from '../waveform/assertWaveform.js';
 import type { Waveform } from '../waveform/Waveform.js';
-import { runningIntegral } from '../waveform/runningIntegral.js';
 import { fundamentalAmplitude } from './fundamentalAmplitude.js';
+import { waveformWthdOfFundamental } from './wholeWaveformDistortion.js';
 
 /**
  * Weighted total harmonic distortion of a whole waveform, every order ≥ 2 included, exact:
@@ -16,7 +16,5 @@ import { fundamentalAmplitude } from './fundamentalAmplitude.js';
  */
 export function waveformWthd(waveform: Waveform): number {
   assertWaveform(waveform);
-  const fundamental = fundamentalAmplitude(waveform);
-  const remainder = 2 * runningIntegral(waveform).variance - fundamental * fundamental;
-  return Math.sqrt(Math.max(0, remainder)) / fundamental;
+  return waveformWthdOfFundamental(waveform, fundamentalAmplitude(waveform));
 }
