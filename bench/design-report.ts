@@ -179,22 +179,25 @@
  * quarter of the edges with half-wave symmetry), the other part of each order exactly zero; leg c,
  * leg b read backwards, takes leg b's phasors with signs changed (`waveformMirror`,
  * `mirroredPhasors`): the legs' sums 3 → 1.5 legs' worth, and the spectrum alone 0.93 → 0.60 ms.
- * The bridge and line THD and WTHD take their fundamental from the exact spectrum the report
- * holds (four single-order sums fewer). The filter output's chart series, which no figure reads,
- * is synthesised on a grid of its own of about twice the chart's points (4096 samples, not the
- * currents' 16384: one 16384-sample transform fewer). The conduction cells are summed without
- * `assertFiniteArray`'s passes (legLossesOfValidSamples; 3.6 M instructions a report: that
- * loop's element loads are megamorphic) and the running integral's samples take a
- * multiplication for a division. Instructions a full report with plans (callgrind, node
- * --single-threaded, slope from 40 to 100 reports): 89.0 → 78.3 (first two steps) → 74.7 M,
- * 16 % fewer. Reports alternating with the round's start in one process, median CPU ms with
- * plans: 5.16/5.51 → 4.77/4.96 after the first step, 4.86/5.44 → 4.22/4.99 after the second
- * (quiet moments), and 5.97–7.25 → 5.21–6.33 later when the same code ran a third slower
- * throughout (the host's state: load under 1, no steal counted). The plans row now runs 100
- * reports after 30, the goal's row, for a steadier median. Measured and left: the finiteness
- * check split by array kind (no fewer instructions); fft.js on plain arrays against
- * Float64Arrays (within the noise). Profile after: fft.js's transforms 14 %, labelling 9 %, the
- * legs' sums 7 %, the filtered phases' per-sample extremes 6 %, garbage collection 5 %.
+ * The bridge and line THD and WTHD read the waveform's own fundamental once for both, not once
+ * each, and a fundamental's sum skips the step rotation's trigonometry (reading it from the
+ * report's leg-combined spectrum instead, tried first, differed from POST /spectra's by rounding:
+ * one voltage must get one whole-waveform THD from every route). The filter output's chart series,
+ * which no figure reads, is synthesised on a grid of its own of about twice the chart's points
+ * (4096 samples, not the currents' 16384: one 16384-sample transform fewer). The conduction cells
+ * are summed without `assertFiniteArray`'s passes (`legLossesOfValidSamples`: two passes over 8192
+ * cells a leg fewer) and the running integral's samples take a multiplication for a division.
+ * Instructions a full report with plans (callgrind, node --single-threaded, slope from 50 to 250
+ * reports, two runs each; the slope from 40 to 100 moved by ±3 M run to run): 86.5/87.8 →
+ * 77.1/76.4 M, 12–13 % fewer. Reports alternating with the round's start in one process, median
+ * CPU ms with plans: 5.16/5.51 → 4.77/4.96 after the first step, 4.86/5.44 → 4.22/4.99 after the
+ * second (quiet moments), and 5.97–7.25 → 5.21–6.33 later when the same code ran a third slower
+ * throughout (the host's state: load under 1, no steal counted), and 6.50/7.28 → 5.93/6.40 at the
+ * round's end in that state, the bench's plans row 5.01 and 6.84 ms. The plans row now runs 100
+ * reports after 30, the goal's row, for a steadier median. Measured and left: the finiteness check
+ * split by array kind (no fewer instructions); fft.js on plain arrays against Float64Arrays
+ * (within the noise). Profile after: fft.js's transforms 14 %, labelling 9 %, the legs' sums 7 %,
+ * the filtered phases' per-sample extremes 6 %, garbage collection 5 %.
  */
 import {
   analyseDesign,
