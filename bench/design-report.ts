@@ -193,11 +193,13 @@
  * CPU ms with plans: 5.16/5.51 → 4.77/4.96 after the first step, 4.86/5.44 → 4.22/4.99 after the
  * second (quiet moments), and 5.97–7.25 → 5.21–6.33 later when the same code ran a third slower
  * throughout (the host's state: load under 1, no steal counted), and 6.50/7.28 → 5.93/6.40 at the
- * round's end in that state, the bench's plans row 5.01 and 6.84 ms. The plans row now runs 100
- * reports after 30, the goal's row, for a steadier median. Measured and left: the finiteness check
- * split by array kind (no fewer instructions); fft.js on plain arrays against Float64Arrays
- * (within the noise). Profile after: fft.js's transforms 14 %, labelling 9 %, the legs' sums 7 %,
- * the filtered phases' per-sample extremes 6 %, garbage collection 5 %.
+ * round's end in that state, the bench's plans row 5.01 and 6.84 ms; when the host was quick again
+ * (12:55, load 0.2–0.5) the round's start against its end alternating, 4.66 → 4.11 ms, and four
+ * bench runs' plans row 4.07, 4.52, 5.08 and 4.67 ms (spectrum alone 0.49–0.68 ms). The plans row
+ * now runs 100 reports after 30, the goal's row, for a steadier median. Measured and left: the
+ * finiteness check split by array kind (no fewer instructions); fft.js on plain arrays against
+ * Float64Arrays (within the noise). Profile after: fft.js's transforms 14 %, labelling 9 %, the
+ * legs' sums 7 %, the filtered phases' per-sample extremes 6 %, garbage collection 5 %.
  */
 import {
   analyseDesign,
