@@ -5,7 +5,6 @@ import {
   waveformThdOfFundamental,
   waveformWthdOfFundamental,
 } from '../spectrum/wholeWaveformDistortion.js';
-import { assertWaveform } from '../waveform/assertWaveform.js';
 import { waveformMeanSquare } from '../waveform/waveformMeanSquare.js';
 import type { VoltageFigures } from './DesignReport.js';
 import type { NamedVoltage } from './modulationVoltages.js';
@@ -23,10 +22,9 @@ export function labelledVoltageFigures(
   spectrum: LabelledHarmonic[],
 ): VoltageFigures {
   const { name, waveform } = voltage;
-  assertWaveform(waveform);
-  // The ratios' denominator is the waveform's own fundamental, read once for both, as
-  // `waveformThd` reads it: a report's spectra are combined from the legs, equal to it to
-  // rounding only, and one voltage gets one whole-waveform THD from every route.
+  // The ratios' denominator is the waveform's own fundamental (which checks the waveform), read
+  // once for both, as `waveformThd` reads it: a report's spectra are combined from the legs,
+  // equal to it to rounding only, and one voltage gets one whole-waveform THD from every route.
   const ownFundamental = fundamentalAmplitude(waveform);
   const thd = waveformThdOfFundamental(waveform, ownFundamental);
   const fundamental = spectrum[1] as LabelledHarmonic;

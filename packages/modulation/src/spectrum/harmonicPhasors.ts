@@ -5,6 +5,7 @@ import {
   waveformMirror,
   type WaveformMirror,
 } from '../waveform/waveformSymmetry.js';
+import { mirrorRotation } from './mirroredPhasors.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import { waveformMean } from '../waveform/waveformMean.js';
 
@@ -69,7 +70,7 @@ export function harmonicPhasors(waveform: Waveform, maxOrder: number): HarmonicP
   // hold the surviving part, the other is exactly zero.
   if (mirror !== null) {
     for (let n = 1; n <= maxOrder; n++) {
-      if (mirror.axis !== 0 && n % 2 === 1) sinSum[n] = 0;
+      if (mirrorRotation(mirror.axis, n) === -1) sinSum[n] = 0;
       else cosSum[n] = 0;
     }
   }

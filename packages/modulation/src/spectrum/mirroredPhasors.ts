@@ -19,9 +19,21 @@ export function mirroredPhasors(phasors: HarmonicPhasors, axis: number): Harmoni
     im[0] = phasors.im[0] as number;
   }
   for (let n = 1; n < count; n++) {
-    const odd = axis !== 0 && n % 2 === 1;
-    re[n] = odd ? (phasors.re[n] as number) : -(phasors.re[n] as number);
-    im[n] = odd ? -(phasors.im[n] as number) : (phasors.im[n] as number);
+    // −e^{−j2nα}·conj(V) = (−s·re, s·im) with s = e^{−j2nα}; s = ±1 keeps the numbers exact.
+    const sign = mirrorRotation(axis, n);
+    re[n] = -sign * (phasors.re[n] as number);
+    im[n] = sign * (phasors.im[n] as number);
   }
   return { re, im };
+}
+
+/**
+ * e^{−j2nα}, the rotation a reflection about α puts on order n, for the axes `waveformMirror`
+ * finds: −1 for odd n about π/2, else 1. The one rule for reading a mirror image's phasors
+ * ({@link mirroredPhasors}) and for which part of a self-mirrored waveform's order vanishes
+ * (`harmonicPhasors`).
+ * @param axis - α, radians: π/2 or 0
+ */
+export function mirrorRotation(axis: number, order: number): 1 | -1 {
+  return axis !== 0 && order % 2 === 1 ? -1 : 1;
 }

@@ -1,11 +1,20 @@
 import { describe, expect, it } from 'vitest';
 import { assertInDelta } from '../../testing/assertInDelta.js';
+import { rangeErrorField } from '../../testing/rangeErrorField.js';
 import { sineTriangle } from '../../carrier/sineTriangle.js';
 import { voltageFigures } from '../voltageFigures.js';
 import { voltageSpectrumFigures } from '../voltageSpectrumFigures.js';
 
 // A ±200 V square wave: V_n = 4·200/(nπ) on odd n, 0 on even n (standard Fourier analysis).
 const square = { name: 'bridge output', waveform: { edges: [0, Math.PI], levels: [200, -200] } };
+
+describe('voltageFigures input checks', () => {
+  it('refuses a spectrum without its fundamental, naming maxOrder', () => {
+    expect(rangeErrorField(() => voltageFigures(square, { maxOrder: 0 }))).toBe('maxOrder');
+    expect(rangeErrorField(() => voltageFigures(square, { maxOrder: 1.5 }))).toBe('maxOrder');
+    expect(rangeErrorField(() => voltageFigures(square, { maxOrder: 1 }))).toBeUndefined();
+  });
+});
 
 describe('voltageSpectrumFigures: the spectrum figures without labels', () => {
   it('square wave: V_n = 4V/(nπ) on odd n, THD √(π²/8 − 1), WTHD √(π⁴/96 − 1), spectrum THD the partial sum', () => {
