@@ -37,14 +37,13 @@ import { designVoltagePhasors } from './designVoltagePhasors.js';
 import { exactLoadCurrents } from './exactLoadCurrents.js';
 import { filteredPhase, outputSeriesSize, type FilteredPhase } from './filteredPhase.js';
 import { labelledVoltageFigures } from './labelledVoltageFigures.js';
-import { spectrumLabeller } from './spectrumLabeller.js';
 import { modulatorSignals } from './modulatorSignals.js';
 import { multilevelDcLinkSwitching } from './multilevelDcLinkSwitching.js';
 import { multilevelFigures } from './multilevelFigures.js';
 import { switchingLegs } from './switchingLegs.js';
 import { assertSemiconductorDevice } from '../losses/assertSemiconductorDevice.js';
-import type { DesignReportPlans } from './designReportPlans.js';
-import { periodSynthesiser, synthesisSize, type PeriodSynthesiser } from './periodSynthesiser.js';
+import { designReportPlans, type DesignReportPlans } from './designReportPlans.js';
+import { synthesisSize } from './periodSynthesiser.js';
 
 /** Options of {@link analyseDesign}. */
 export interface AnalyseDesignOptions {
@@ -179,10 +178,9 @@ export function analyseDesign(
     Math.max(defaultSpectrumOrder(given), 10 * (frequencyRatio ?? 200) + 10),
   );
   // Every spectrum is labelled from one table, and every voltage read once (see designVoltagePhasors).
-  const labeller =
-    options.plans === undefined
-      ? spectrumLabeller(maxOrder, labelRatio)
-      : options.plans.labeller(maxOrder, labelRatio);
+  // The caller's plans, or plans of this report's own (the same transforms, built here).
+  const plans = options.plans ?? designReportPlans();
+  const labeller = plans.labeller(maxOrder, labelRatio);
   const label = labeller.harmonics;
   const spectra = designVoltagePhasors(
     voltages,
@@ -208,9 +206,8 @@ export function analyseDesign(
   const synthesiser =
     filter === null
       ? null
-      : synthesiserOf(
+      : plans.synthesiser(
           synthesisSize(currentOrder, Math.max(MIN_GRID_SAMPLES, 16 * currentOrder)),
-          options.plans,
         );
   if (synthesiser === null) {
     if (load !== null) {
@@ -245,9 +242,8 @@ export function analyseDesign(
       currentOrder,
     );
     // Phase a's output voltage is drawn only: its series has a grid of its own, of the chart's size.
-    const outputSynthesiser = synthesiserOf(
+    const outputSynthesiser = plans.synthesiser(
       outputSeriesSize(currentOrder, points, synthesiser.size),
-      options.plans,
     );
     const solved: FilteredPhase[] = [];
     phaseVoltages.forEach((waveform, k) => {
@@ -314,11 +310,7 @@ export function analyseDesign(
           points,
           label,
           labelPhasors: labeller.phasors,
-          ...(synthesiser !== null
-            ? { fft: synthesiser.fft }
-            : options.plans === undefined
-              ? {}
-              : { fft: options.plans.transform((inverterSamples[0] as Float64Array).length) }),
+          transform: (size) => plans.transform(size),
         });
   const commonMode =
     voltages.phaseCount === 3
@@ -442,11 +434,6 @@ function legEdgeFigures(
 ): NonNullable<DesignReport['switching']> {
   const edges = state.levels.length > 1 ? state.edges.length : 0;
   return { legEdgesPerPeriod: edges, averageDeviceFrequency: (edges / 2) * frequency };
-}
-
-/** The synthesiser of size S: the caller's plans' when given, else one built for this report. */
-function synthesiserOf(size: number, plans: DesignReportPlans | undefined): PeriodSynthesiser {
-  return plans === undefined ? periodSynthesiser(size) : plans.synthesiser(size);
 }
 
 /** The reduced common-mode range of a three-phase carrier design's zero sequence, else null. */

@@ -4,6 +4,7 @@ import type { HarmonicPhasors } from '../spectrum/harmonicPhasors.js';
 import { harmonicsOfPhasors } from '../spectrum/harmonicsOfPhasors.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import { firstGridSampleFrom } from '../waveform/firstGridSampleFrom.js';
+import { hasHalfWaveSymmetry } from '../waveform/waveformSymmetry.js';
 import type { DcLinkFigures } from './DesignReport.js';
 import { periodSeries } from './periodSeries.js';
 import { sampledPhasors } from './sampledPhasors.js';
@@ -15,6 +16,12 @@ import { sampledPhasors } from './sampledPhasors.js';
  * star-connected load and filter, so i_dc = Σ (v_k/vdc)·i_k; for a single-phase bridge
  * i_dc = (v_bridge/vdc)·i (standard circuit analysis; J. W. Kolar and S. D. Round, 2006).
  * At a sample that falls exactly on an edge the level that starts there is used.
+ *
+ * When every switching waveform and every current is half-wave symmetric (v(θ + π) = −v(θ), as
+ * the legs of carrier PWM at odd mf are, and the samples exactly so), each product s_k·i_k
+ * repeats every half period: i_dc has even orders only (the ripple at 2, 4, … times the output
+ * frequency, Kolar and Round, 2006). The first half period is then sampled, its mean, RMS and
+ * transform are the whole period's, and the odd orders are exactly zero.
  * Internal: part of analyseDesign.
  */
 export function dcLinkFigures(
@@ -28,12 +35,15 @@ export function dcLinkFigures(
     label: (s: readonly Harmonic[]) => DcLinkFigures['spectrum'];
     /** Labels the spectrum's phasors directly (the report's labeller); else they go through `label`. */
     labelPhasors?: (p: HarmonicPhasors) => DcLinkFigures['spectrum'];
-    /** A transform of the grid's size to reuse for the spectrum. */
-    fft?: FFT;
+    /** The transform of a size (the grid's, or half of it), to reuse for the spectrum. */
+    transform?: (size: number) => FFT;
   },
 ): DcLinkFigures {
-  const { vdc, phaseCount, maxOrder, points, label, fft } = context;
+  const { vdc, phaseCount, maxOrder, points, label, transform } = context;
   const size = inverterSamples[0]?.length ?? 0;
+  const repeats = halfPeriodic(switching, inverterSamples) ? 2 : 1;
+  // The samples of one repeat (the whole period, or its first half).
+  const span = size / repeats;
   const current = new Float64Array(size);
   for (let k = 0; k < switching.length; k++) {
     const { edges, levels } = switching[k] as Waveform;
@@ -43,7 +53,9 @@ export function dcLinkFigures(
     let start = 0;
     for (let segment = -1; segment < edges.length; segment++) {
       const end =
-        segment + 1 < edges.length ? firstGridSampleFrom(edges[segment + 1] as number, size) : size;
+        segment + 1 < edges.length
+          ? Math.min(span, firstGridSampleFrom(edges[segment + 1] as number, size))
+          : span;
       const share = (levels[segment < 0 ? levels.length - 1 : segment] as number) / vdc;
       for (let j = start; j < end; j++)
         current[j] = (current[j] as number) + share * (phaseCurrent[j] as number);
@@ -52,14 +64,17 @@ export function dcLinkFigures(
   }
   let sum = 0;
   let sumOfSquares = 0;
-  for (let j = 0; j < size; j++) {
+  for (let j = 0; j < span; j++) {
     const value = current[j] as number;
     sum += value;
     sumOfSquares += value * value;
   }
-  const mean = sum / size;
-  const rms = Math.sqrt(sumOfSquares / size);
-  const phasors = sampledPhasors(current, maxOrder, fft);
+  const mean = sum / span;
+  const rms = Math.sqrt(sumOfSquares / span);
+  const repeat = span === size ? current : current.subarray(0, span);
+  const phasors = sampledPhasors(repeat, maxOrder, transform?.(span), repeats);
+  // The chart's series reads the whole period.
+  if (span < size) current.copyWithin(span, 0, span);
   const labelled = context.labelPhasors
     ? context.labelPhasors(phasors)
     : label(harmonicsOfPhasors(phasors));
@@ -72,4 +87,26 @@ export function dcLinkFigures(
     series: periodSeries(current, points),
     samplesPerPeriod: size,
   };
+}
+
+/**
+ * Whether each switching waveform is half-wave symmetric about zero (edges half a period apart
+ * to `SYMMETRY_TOLERANCE`, levels negated) and each current's sample at 2πj/S + π is exactly
+ * minus its sample at 2πj/S: then every product s_k·i_k repeats each half period.
+ */
+function halfPeriodic(
+  switching: readonly Waveform[],
+  inverterSamples: readonly Float64Array[],
+): boolean {
+  for (const waveform of switching) {
+    const half = waveform.levels.length / 2;
+    if (!hasHalfWaveSymmetry(waveform)) return false;
+    if ((waveform.levels[0] as number) + (waveform.levels[half] as number) !== 0) return false;
+  }
+  for (const samples of inverterSamples) {
+    const half = samples.length / 2;
+    if (samples.length % 2 === 1) return false;
+    for (let j = 0; j < half; j++) if (samples[j + half] !== -(samples[j] as number)) return false;
+  }
+  return switching.length > 0 && switching.length === inverterSamples.length;
 }

@@ -9,7 +9,7 @@ import { spectrumLabeller, type SpectrumLabeller } from './spectrumLabeller.js';
  * synthesiser of filtered time series built on each, and the label table of the last spectrum
  * orders and carrier ratio (0.2 ms and 0.5 MB of strings a report to 5000 orders, built again only
  * when a report labels other orders or another ratio). Not shared between threads: a worker keeps
- * its own. The plans hold the last three grid sizes asked for (see {@link PLAN_SIZES}), so a
+ * its own. The plans hold the last six grid sizes asked for (see {@link PLAN_SIZES}), so a
  * run of reports at one or two designs' grids builds nothing again, and memory stays bounded (a
  * grid of S samples holds about 7·S doubles: 3.7 MB at S = 65536, 29 MB at the largest, 2^19).
  */
@@ -27,11 +27,12 @@ export interface DesignReportPlans {
 
 /**
  * How many grid sizes {@link designReportPlans} keeps (the least recently used goes first): a
- * filtered report reads two, its currents' and its output chart's (`outputSeriesSize`, 4096 at
- * the default points for mf up to 200), so reports alternating between two designs share the
- * chart's grid and build nothing again.
+ * filtered report reads four, its currents' grid S and its output chart's (`outputSeriesSize`,
+ * 4096 at the default points for mf up to 200) and the half of each (the half-wave synthesis
+ * and the DC link's half period), so reports alternating between two designs (six sizes when
+ * their current grids differ) build nothing again.
  */
-const PLAN_SIZES = 3;
+const PLAN_SIZES = 6;
 
 /**
  * New, empty transform plans for `analyseDesign` (see {@link DesignReportPlans}). The figures
@@ -55,7 +56,7 @@ export function designReportPlans(): DesignReportPlans {
     transform: (size) => entry(size).fft,
     synthesiser: (size) => {
       const found = entry(size);
-      found.synthesiser ??= periodSynthesiser(size, found.fft);
+      found.synthesiser ??= periodSynthesiser(size, found.fft, (half) => entry(half).fft);
       return found.synthesiser;
     },
     labeller: (maxOrder, ratio) => {

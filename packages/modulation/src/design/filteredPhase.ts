@@ -6,6 +6,7 @@ import { weightedDistortion } from '../spectrum/distortion.js';
 import type { HarmonicPhasors } from '../spectrum/harmonicPhasors.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import { runningIntegral } from '../waveform/runningIntegral.js';
+import { hasHalfWaveSymmetry } from '../waveform/waveformSymmetry.js';
 import { waveformMeanSquare } from '../waveform/waveformMeanSquare.js';
 import type {
   CurrentFigures,
@@ -36,6 +37,11 @@ export interface FilteredPhase {
   inverterSamples: Float64Array;
   /** The load current on the same angles (the same buffers), amperes, or null without a load. */
   loadSamples: Float64Array | null;
+  /**
+   * Whether both sample arrays are half-wave symmetric exactly: the sample at 2πj/S + π the
+   * negated sample at 2πj/S (read from the first half: see {@link PeriodSynthesiser.pair}).
+   */
+  halfWave: boolean;
   /** The output voltage's figures, for the phase asked for them (the report shows phase a's), else null. */
   output: NonNullable<DesignReport['output']> | null;
   currents: PhaseCurrents;
@@ -169,7 +175,7 @@ export function filteredPhase(
   // The phase's samples live in the synthesiser's buffers of its slot (reused by the next report).
   const slot = PHASE_SLOTS[phase];
   const [inverterInto, loadInto] = synthesiser.buffers(slot);
-  const [inverterSamples, loadSamples] =
+  const [inverterSamples, loadSamples, synthesisedHalfWave] =
     others === undefined
       ? synthesiser.pair(
           tail === null ? solved.inverterCurrent : tail.added,
@@ -182,16 +188,22 @@ export function filteredPhase(
           loadR === null
             ? null
             : negatedSum(others[0].loadSamples, others[1].loadSamples, loadInto),
+          others[0].halfWave && others[1].halfWave,
         ];
+  // The tail added to half-wave symmetric samples keeps them so when the bridge voltage is: its
+  // running integral less its mean is then half-wave symmetric too.
+  const halfWave =
+    synthesisedHalfWave && (tail === null || others !== undefined || hasHalfWaveSymmetry(waveform));
   const extremes = currentExtremes(inverterSamples, loadSamples, {
     // The others' samples hold their tails already.
-    tail: tail === null || others !== undefined ? null : tail.samples(),
+    tail: tail === null || others !== undefined ? null : tail.samples(halfWave ? size / 2 : size),
     sine: synthesiser.sine,
     inverter: solved.inverterCurrent,
     capacitor: solved.capacitorCurrent,
     load: solved.loadCurrent,
     held,
     fundamentalOrder: f,
+    halfWave,
   });
   const tailMeanSquare = tail?.meanSquare ?? 0;
   const loadCurrent =
@@ -207,6 +219,7 @@ export function filteredPhase(
   return {
     inverterSamples,
     loadSamples,
+    halfWave,
     output:
       outputName === null
         ? null
@@ -344,10 +357,10 @@ function outputThdUpperBound(
  * i_tail = (Φ − Φ_N)/(ω·L), with Φ the bridge voltage's running integral (exact, piecewise
  * linear) and Φ_N its harmonics to N (v = L·di/dt, standard circuit analysis). Its mean square
  * is (Var Φ − Σ_{n≤N} (V_n/n)²/2)/(ωL)² by Parseval. Returned as the inverter phasors to N with
- * those of −Φ_N/(ωL) added (`added`), Φ on the S angles 2πj/S with mean Φ and ωL (read when
- * asked for: the tail there is (Φ − mean Φ)/(ωL)), and that mean square. Null for damping across
- * the inductor, whose series branch is not inductive at high frequency, and when N is not ten
- * times past the LC resonance (the sum to N is used as it is there).
+ * those of −Φ_N/(ωL) added (`added`), Φ on the first `upTo` of the S angles 2πj/S with mean Φ
+ * and ωL (read when asked for: the tail there is (Φ − mean Φ)/(ωL)), and that mean square.
+ * Null for damping across the inductor, whose series branch is not inductive at high frequency,
+ * and when N is not ten times past the LC resonance (the sum to N is used as it is there).
  * @param inverter - the inverter current's phasors to N at least
  * @param context.count - N + 1, the orders summed
  */
@@ -356,7 +369,11 @@ function switchingTail(
   bridge: HarmonicPhasors,
   inverter: HarmonicPhasors,
   context: { count: number; filter: OutputNetwork['filter']; omega: number; size: number },
-): { added: HarmonicPhasors; samples: () => TailSamples; meanSquare: number } | null {
+): {
+  added: HarmonicPhasors;
+  samples: (upTo: number) => TailSamples;
+  meanSquare: number;
+} | null {
   const { count, filter, omega, size } = context;
   if (filter === null || filter.dampingPlacement === 'parallel-with-inductor') return null;
   // Only valid well past the resonance, where the shunt branch shorts the load out.
@@ -379,7 +396,7 @@ function switchingTail(
   im[0] = inverter.im[0] as number;
   return {
     added: { re, im },
-    samples: () => ({ flux: integral.at(size), mean: integral.mean, reactance }),
+    samples: (upTo) => ({ flux: integral.at(size, upTo), mean: integral.mean, reactance }),
     meanSquare: Math.max(0, integral.variance - heldVariance) / (reactance * reactance),
   };
 }
@@ -389,7 +406,10 @@ function switchingTail(
  * where it is added (one pass over the samples, not two).
  */
 interface TailSamples {
-  /** The bridge voltage's running integral Φ at the S angles, volt-radians. */
+  /**
+   * The bridge voltage's running integral Φ at the S angles (the first half of them when the
+   * samples are half-wave symmetric), volt-radians.
+   */
   flux: Float64Array;
   /** Mean Φ over the period. */
   mean: number;
@@ -411,7 +431,10 @@ interface SampleExtremes {
  * law; the inverter current itself without a load). Each current's ripple is i − i₁ with i₁ its
  * fundamental X₁ = re₁ + j·im₁ at order f (1, or q over a span): i₁(θ) = re₁·sin fθ + im₁·cos fθ,
  * the sine table read every f-th entry and the cosine a quarter period on. No fundamental (f or
- * fewer orders held) leaves i as its ripple.
+ * fewer orders held) leaves i as its ripple. Half-wave symmetric samples are read over the first
+ * half period: i(θ + π) = −i(θ) and i₁(θ + π) = −i₁(θ) (f is odd, or i₁ is zero, when every even
+ * order is), so the second half's peak is the first's and its ripple extremes are the first's
+ * negated, to rounding.
  * @param inverter - the inverter current's synthesised samples, amperes (the tail is added here)
  * @param load - the load current's samples, amperes, or null without a load
  */
@@ -426,12 +449,15 @@ function currentExtremes(
     load: HarmonicPhasors;
     held: number;
     fundamentalOrder: number;
+    /** Whether the samples, their tail added, are half-wave symmetric. */
+    halfWave: boolean;
   },
 ): { inverter: SampleExtremes; capacitor: SampleExtremes; load: SampleExtremes } {
   const { held, fundamentalOrder: f } = context;
   const first = (phasors: HarmonicPhasors, part: 're' | 'im'): number =>
     held > f ? (phasors[part][f] as number) : 0;
-  const found = extremesPass(inverter, load, context.tail, context.sine, f, [
+  const span = context.halfWave ? inverter.length / 2 : inverter.length;
+  const found = extremesPass(inverter, load, context.tail, context.sine, f, span, [
     first(context.inverter, 're'),
     first(context.inverter, 'im'),
     first(context.capacitor, 're'),
@@ -439,17 +465,28 @@ function currentExtremes(
     first(context.load, 're'),
     first(context.load, 'im'),
   ]);
-  const read = (at: number): SampleExtremes => ({
-    peak: found[at] as number,
-    rippleLow: found[at + 1] as number,
-    rippleHigh: found[at + 2] as number,
-  });
+  if (span < inverter.length && context.tail !== null) {
+    // The tail was added to the first half only: the second half is its negation.
+    for (let j = 0; j < span; j++) inverter[j + span] = -(inverter[j] as number);
+  }
+  const read = (at: number): SampleExtremes => {
+    const low = found[at + 1] as number;
+    const high = found[at + 2] as number;
+    return span < inverter.length
+      ? {
+          peak: found[at] as number,
+          rippleLow: Math.min(low, -high),
+          rippleHigh: Math.max(high, -low),
+        }
+      : { peak: found[at] as number, rippleLow: low, rippleHigh: high };
+  };
   return { inverter: read(0), capacitor: read(3), load: read(6) };
 }
 
 /**
- * The pass of {@link currentExtremes}: the inverter's, capacitor's and load's peak, lowest and
- * highest ripple at indices 0–2, 3–5 and 6–8 (the load's 0, ∞, −∞ without a load).
+ * The pass of {@link currentExtremes} over samples 0..span − 1: the inverter's, capacitor's and
+ * load's peak, lowest and highest ripple at indices 0–2, 3–5 and 6–8 (the load's 0, ∞, −∞
+ * without a load).
  *
  * Each extreme is kept in a local and written to the array built before the loop when it
  * changes, and the loop is the last thing here: V8 may compile this loop on the fly (on-stack
@@ -465,6 +502,7 @@ function extremesPass(
   tail: TailSamples | null,
   sine: Float64Array,
   f: number,
+  span: number,
   fundamentals: readonly [number, number, number, number, number, number],
 ): Float64Array {
   const [iRe, iIm, cRe, cIm, lRe, lIm] = fundamentals;
@@ -496,7 +534,7 @@ function extremesPass(
   // sin(2πfj/S) at index fj mod S; cos(2πfj/S) = sin(2π(fj + S/4)/S).
   for (
     let j = 0, h = 0, k = quarter;
-    j < size;
+    j < span;
     j++, h = h + f >= size ? h + f - size : h + f, k = k + f >= size ? k + f - size : k + f
   ) {
     const s = sine[h] as number;

@@ -15,8 +15,11 @@ export interface RunningIntegral {
   mean: number;
   /** Variance of Φ over the period, exact (closed-form integrals of each linear piece). */
   variance: number;
-  /** Φ at evenly spaced angles 2πj/count, j = 0..count−1. */
-  at(count: number): Float64Array;
+  /**
+   * Φ at evenly spaced angles 2πj/count, j = 0..upTo − 1 (the whole period by default).
+   * @param upTo - how many of the count angles, from the first, at most count
+   */
+  at(count: number, upTo?: number): Float64Array;
 }
 
 /** Builds the {@link RunningIntegral} of a validated waveform. */
@@ -48,8 +51,8 @@ export function runningIntegral(waveform: Waveform): RunningIntegral {
   return {
     mean: meanFlux,
     variance: sumOfSquares / TAU - meanFlux * meanFlux,
-    at(count: number): Float64Array {
-      const values = new Float64Array(count);
+    at(count: number, upTo = count): Float64Array {
+      const values = new Float64Array(upTo);
       // Sample j's angle j·(2π/count): equal to 2πj/count bit for bit when count is a power of
       // two (the report's grids), a multiplication instead of a division per sample.
       const step = TAU / count;
@@ -59,8 +62,8 @@ export function runningIntegral(waveform: Waveform): RunningIntegral {
       for (let segment = -1; segment < edges.length; segment++) {
         const end =
           segment + 1 < edges.length
-            ? firstGridSampleFrom(edges[segment + 1] as number, count)
-            : count;
+            ? Math.min(upTo, firstGridSampleFrom(edges[segment + 1] as number, count))
+            : upTo;
         if (segment < 0) {
           for (let j = start; j < end; j++) values[j] = startValue + wrapLevel * (j * step);
         } else {

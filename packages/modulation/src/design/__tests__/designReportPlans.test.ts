@@ -19,8 +19,9 @@ describe('designReportPlans', () => {
   it('gives reports equal to those built without plans, reused across designs and grid sizes', () => {
     const plans = designReportPlans();
     // Filtered at mf 21 and 45 (grids of 4096 and 8192 samples), unfiltered at mf 129 (its
-    // DC link on a 16384-sample grid): the second pass at mf 21 finds its grid evicted and builds
-    // it again; the third reuses the second's grid and label table.
+    // DC link on a 16384-sample grid): seven sizes among them (the current and chart grids and
+    // the half of each), more than the plans keep, so the second pass at mf 21 finds some
+    // evicted and builds them again; the third reuses the second's grids and label table.
     const designs = [
       design(21, true),
       design(45, true),
@@ -64,18 +65,18 @@ describe('designReportPlans', () => {
     expect(synthesiser.buffers(0)[1]).not.toBe(keptSecond);
   });
 
-  it('keeps a transform per grid size for the last three sizes used', () => {
+  it('keeps a transform per grid size for the last six sizes used', () => {
     const plans = designReportPlans();
     const first = plans.transform(4096);
     expect(plans.transform(4096)).toBe(first);
     expect(plans.synthesiser(4096).fft).toBe(first);
     const second = plans.transform(8192);
-    const third = plans.transform(16384);
+    const kept = [16384, 32768, 65536, 128].map((size) => plans.transform(size));
     expect(plans.transform(4096)).toBe(first);
-    // 8192 is now the least recently used of the three kept: 32768 evicts it, the others stay.
-    plans.transform(32768);
+    // 8192 is now the least recently used of the six kept: a seventh size evicts it, the others stay.
+    plans.transform(256);
     expect(plans.transform(4096)).toBe(first);
-    expect(plans.transform(16384)).toBe(third);
+    expect(plans.transform(16384)).toBe(kept[0]);
     const rebuilt = plans.transform(8192);
     expect(rebuilt.size).toBe(8192);
     expect(rebuilt).not.toBe(second);
@@ -135,5 +136,63 @@ describe('designReportPlans', () => {
       assertInDelta(x[j] as number, 3 * Math.sin(2 * theta), 1e-12);
       assertInDelta((y as Float64Array)[j] as number, 1, 1e-12);
     }
+  });
+
+  it('synthesises a half-wave symmetric pair through half the transform, exactly antisymmetric', () => {
+    // Odd orders only (1, 3 and 7 in x, 5 in y): the synthesiser says so, its samples are the
+    // direct sums of the harmonics convention, and each sample half a period on is the negated
+    // one, exactly. The same call with an even order added takes the whole transform.
+    const size = 64;
+    const synthesiser = designReportPlans().synthesiser(size);
+    const x = { re: new Float64Array(8), im: new Float64Array(8) };
+    const y = { re: new Float64Array(8), im: new Float64Array(8) };
+    [x.re[1], x.im[1], x.re[3], x.im[3], x.im[7]] = [2, 1, -0.3, 0.4, 0.05];
+    [y.re[5], y.im[5]] = [0.7, -0.2];
+    const expected = (p: typeof x, theta: number): number => {
+      let sum = p.re[0] as number;
+      for (let n = 1; n < 8; n++) {
+        const a = p.re[n] as number;
+        const b = p.im[n] as number;
+        sum += Math.hypot(a, b) * Math.sin(n * theta + Math.atan2(b, a));
+      }
+      return sum;
+    };
+    const [xs, ys, halfWave] = synthesiser.pair(x, y, 8, 0);
+    expect(halfWave).toBe(true);
+    for (let j = 0; j < size; j++) {
+      const theta = (TAU * j) / size;
+      assertInDelta(xs[j] as number, expected(x, theta), 1e-12, `x[${j}]`);
+      assertInDelta((ys as Float64Array)[j] as number, expected(y, theta), 1e-12, `y[${j}]`);
+      if (j < size / 2) {
+        expect(xs[j + size / 2]).toBe(-(xs[j] as number));
+        expect((ys as Float64Array)[j + size / 2]).toBe(-((ys as Float64Array)[j] as number));
+      }
+    }
+    y.im[2] = 0.1;
+    const [xw, yw, whole] = synthesiser.pair(x, y, 8, 0);
+    expect(whole).toBe(false);
+    for (let j = 0; j < size; j++) {
+      const theta = (TAU * j) / size;
+      assertInDelta(xw[j] as number, expected(x, theta), 1e-12, `x[${j}]`);
+      assertInDelta((yw as Float64Array)[j] as number, expected(y, theta), 1e-12, `y[${j}]`);
+    }
+  });
+
+  it('leaves none of a longer half-wave series behind in a shorter one', () => {
+    // Orders 1..19 (1/n at odd n), then order 3 alone on the same synthesiser: that sinusoid only.
+    const size = 64;
+    const synthesiser = designReportPlans().synthesiser(size);
+    const longRe = Float64Array.from({ length: 20 }, (_, n) => (n % 2 === 1 ? 1 / n : 0));
+    synthesiser.pair({ re: longRe, im: longRe }, { re: longRe, im: new Float64Array(20) }, 20, 0);
+    const [x, y, halfWave] = synthesiser.pair(
+      { re: Float64Array.from([0, 0, 0, 3]), im: new Float64Array(4) },
+      null,
+      4,
+      0,
+    );
+    expect(halfWave).toBe(true);
+    expect(y).toBeNull();
+    for (let j = 0; j < size; j++)
+      assertInDelta(x[j] as number, 3 * Math.sin((3 * TAU * j) / size), 1e-12, `x[${j}]`);
   });
 });

@@ -71,3 +71,44 @@ describe('a filtered three-phase report at the star point', () => {
     }
   });
 });
+
+describe("a filtered report's peaks and ripple read over every sample", () => {
+  // At odd mf every even order is zero, so the currents are half-wave symmetric and read over the
+  // first half period (see currentExtremes). With as many chart points as grid samples the
+  // series holds every sample: the peak is the largest |i| among them and the ripple
+  // peak-to-peak the range of i − i₁, i₁ = A₁·sin(θ + φ₁) from the current's own fundamental
+  // (the harmonics convention), over the whole period.
+  const design: InverterDesign = {
+    vdc: 650,
+    fundamentalFrequency: 50,
+    carrierFrequency: 50 * 21,
+    modulation: { method: 'three-phase', ma: 0.9, zeroSequence: 'min-max' },
+    load: { r: 12, l: 0.02 },
+    // Resonance 796 Hz, order 16: the sum to 220 is ten times past it, so the switching tail
+    // is added to the samples (filteredPhase's switchingTail).
+    filter: { l: 0.002, c: 20e-6, rDamping: 3 },
+  };
+  const grid = analyseDesign(design).dcLink?.samplesPerPeriod ?? 0;
+  const report = analyseDesign(design, { points: grid });
+
+  it('every phase and current, the samples half a period apart negated', () => {
+    expect(grid).toBeGreaterThanOrEqual(4096);
+    for (const phase of report.currents)
+      for (const part of ['inverter', 'capacitor', 'load'] as const) {
+        const figures = phase[part];
+        if (figures === null) throw new Error(`no ${part} current`);
+        const { angles, values } = figures.series;
+        expect(values.length).toBe(grid);
+        const label = `${part}, phase ${phase.phase}`;
+        expect(figures.peak, label).toBe(Math.max(...values.map(Math.abs)));
+        const ripple = values.map(
+          (v, j) =>
+            v - figures.fundamental * Math.sin((angles[j] as number) + figures.fundamentalPhase),
+        );
+        const range = Math.max(...ripple) - Math.min(...ripple);
+        expect(Math.abs(figures.ripplePeakToPeak - range), label).toBeLessThan(1e-9 * figures.peak);
+        for (let j = 0; j < grid / 2; j++)
+          expect(values[j + grid / 2], `${label} at ${j}`).toBe(-(values[j] as number));
+      }
+  });
+});
