@@ -107,7 +107,14 @@ export function periodSynthesiser(
       into[2 * at + 1] = -(ci + dr) / 2;
     }
   };
-  const whole = (x: HarmonicPhasors, y: HarmonicPhasors, highest: number): void => {
+  // The samples of x into xOut and of y into yOut (when not null) through the transform of S.
+  const whole = (
+    x: HarmonicPhasors,
+    y: HarmonicPhasors,
+    highest: number,
+    xOut: Float64Array,
+    yOut: Float64Array | null,
+  ): void => {
     // Every order up to `highest` is written below: only the last call's orders above it are
     // cleared, not the whole buffer.
     if (written > highest) {
@@ -123,10 +130,18 @@ export function periodSynthesiser(
       put(input, size - n, n, x, y, true);
     }
     fft.transform(output, input);
+    for (let j = 0; j < size; j++) xOut[j] = output[2 * j] as number;
+    if (yOut !== null) for (let j = 0; j < size; j++) yOut[j] = -(output[2 * j + 1] as number);
   };
   // The half-wave transform: conj(Z_{2k+1}) at k and conj(Z_{−(2k+1)}) at S/2 − 1 − k; the
-  // forward transform F gives conj(z_j) = F_j·w^{−j}, j < S/2, written into `output`.
-  const halfWave = (x: HarmonicPhasors, y: HarmonicPhasors, highest: number): void => {
+  // forward transform F gives conj(z_j) = F_j·w^{−j}, j < S/2, and z_{j+S/2} = −z_j.
+  const halfWave = (
+    x: HarmonicPhasors,
+    y: HarmonicPhasors,
+    highest: number,
+    xOut: Float64Array,
+    yOut: Float64Array | null,
+  ): void => {
     halfFft ??= transformOf(half);
     halfInput ??= new Float64Array(size);
     const into = halfInput;
@@ -147,8 +162,15 @@ export function periodSynthesiser(
       const im = output[2 * j + 1] as number;
       const s = sine[j] as number;
       const c = sine[j + quarter] as number;
-      output[2 * j] = re * c + im * s;
-      output[2 * j + 1] = im * c - re * s;
+      // x = Re z = Re conj(z), y = −Im conj(z), conj(z) = (re + j·im)·(c − j·s).
+      const xj = re * c + im * s;
+      xOut[j] = xj;
+      xOut[j + half] = -xj;
+      if (yOut !== null) {
+        const yj = re * s - im * c;
+        yOut[j] = yj;
+        yOut[j + half] = -yj;
+      }
     }
   };
   const pair = (
@@ -160,20 +182,12 @@ export function periodSynthesiser(
     const highest = count - 1;
     if (2 * highest + 2 > size) throw new RangeError(`order ${highest} aliases at ${size} samples`);
     const y = second ?? { re: zeros, im: zeros };
-    const symmetric = evenOrdersZero(first, highest) && evenOrdersZero(y, highest);
-    if (symmetric) halfWave(first, y, highest);
-    else whole(first, y, highest);
-    const computed = symmetric ? half : size;
     const [xSamples, ySamples] = buffers(slot);
-    for (let j = 0; j < computed; j++) xSamples[j] = output[2 * j] as number;
-    if (second !== null)
-      for (let j = 0; j < computed; j++) ySamples[j] = -(output[2 * j + 1] as number);
-    if (symmetric) {
-      for (let j = 0; j < half; j++) xSamples[j + half] = -(xSamples[j] as number);
-      if (second !== null)
-        for (let j = 0; j < half; j++) ySamples[j + half] = -(ySamples[j] as number);
-    }
-    return [xSamples, second === null ? null : ySamples, symmetric];
+    const yOut = second === null ? null : ySamples;
+    const symmetric = evenOrdersZero(first, highest) && evenOrdersZero(y, highest);
+    if (symmetric) halfWave(first, y, highest, xSamples, yOut);
+    else whole(first, y, highest, xSamples, yOut);
+    return [xSamples, yOut, symmetric];
   };
   return { size, fft, sine, pair, buffers };
 }
