@@ -4,7 +4,7 @@ import type { HarmonicPhasors } from '../spectrum/harmonicPhasors.js';
 import { harmonicsOfPhasors } from '../spectrum/harmonicsOfPhasors.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import { firstGridSampleFrom } from '../waveform/firstGridSampleFrom.js';
-import { hasHalfWaveSymmetry } from '../waveform/waveformSymmetry.js';
+import { hasAntisymmetricHalves, hasHalfWaveSymmetryAbout } from '../waveform/waveformSymmetry.js';
 import type { DcLinkFigures } from './DesignReport.js';
 import { periodSeries } from './periodSeries.js';
 import { sampledPhasors } from './sampledPhasors.js';
@@ -98,15 +98,10 @@ function halfPeriodic(
   switching: readonly Waveform[],
   inverterSamples: readonly Float64Array[],
 ): boolean {
-  for (const waveform of switching) {
-    const half = waveform.levels.length / 2;
-    if (!hasHalfWaveSymmetry(waveform)) return false;
-    if ((waveform.levels[0] as number) + (waveform.levels[half] as number) !== 0) return false;
-  }
-  for (const samples of inverterSamples) {
-    const half = samples.length / 2;
-    if (samples.length % 2 === 1) return false;
-    for (let j = 0; j < half; j++) if (samples[j + half] !== -(samples[j] as number)) return false;
-  }
-  return switching.length > 0 && switching.length === inverterSamples.length;
+  return (
+    switching.length > 0 &&
+    switching.length === inverterSamples.length &&
+    switching.every((waveform) => hasHalfWaveSymmetryAbout(waveform, 0)) &&
+    inverterSamples.every(hasAntisymmetricHalves)
+  );
 }

@@ -1,10 +1,18 @@
 import { legLossesOfValidSamples } from '../losses/legLossesOfValidSamples.js';
+import type { LegLosses } from '../losses/legLossesFromSamples.js';
 import type { DeviceLoss, SemiconductorDevice } from '../losses/lossTypes.js';
 import { switchingEnergyScale } from '../losses/switchingEnergyScale.js';
 import { TAU } from '../math.js';
 import type { Waveform } from '../waveform/Waveform.js';
+import { hasAntisymmetricHalves, hasHalfWaveSymmetryAbout } from '../waveform/waveformSymmetry.js';
 import type { DesignLossFigures, LegLossFigures } from './DesignReport.js';
 import type { SwitchingLeg } from './switchingLegs.js';
+
+/** The four devices of a leg, as `LegLosses` names them. */
+type DeviceName = 'upperTransistor' | 'lowerTransistor' | 'upperDiode' | 'lowerDiode';
+
+/** A device's conduction loss, W: the part of a `DeviceLoss` the cells give. */
+type Conduction = Pick<DeviceLoss, 'conduction'>;
 
 /** Fewest cells a period the conduction integral is summed over. */
 const MIN_CONDUCTION_CELLS = 4096;
@@ -55,15 +63,23 @@ export function designLosses(
       Math.floor(current.length / Math.max(MIN_CONDUCTION_CELLS, 32 * leg.state.edges.length)),
     );
     while (current.length % stride !== 0) stride--;
-    const cells = stride === 1 ? current : everyNth(current, stride);
-    const conduction = legLossesOfValidSamples(
-      highFractions(leg.state, cells.length),
+    const cellCount = current.length / stride;
+    // A half-wave symmetric leg and current: the first half's cells give the whole period's.
+    const halfWave =
+      cellCount % 2 === 0 &&
+      hasHalfWaveSymmetryAbout(leg.state, 1) &&
+      hasAntisymmetricHalves(current);
+    const read = halfWave ? cellCount / 2 : cellCount;
+    const cells = stride === 1 && !halfWave ? current : everyNth(current, stride, read);
+    const summed = legLossesOfValidSamples(
+      highFractions(leg.state, cellCount, read),
       cells,
       // Only the conduction part is read; the cells' own switching count is not a carrier's.
-      { device, vdc, switchingFrequency: fundamentalFrequency * cells.length },
+      { device, vdc, switchingFrequency: fundamentalFrequency * cellCount },
     );
+    const conduction = halfWave ? mirroredHalfConduction(summed) : summed;
     const switching = edgeSwitchingLosses(leg.state, current, device, vdc, fundamentalFrequency);
-    const loss = (c: DeviceLoss, s: number): DeviceLoss => ({
+    const loss = (c: Conduction, s: number): DeviceLoss => ({
       conduction: c.conduction,
       switching: s,
       total: c.conduction + s,
@@ -112,29 +128,55 @@ function negated(samples: Float64Array): Float64Array {
   return result;
 }
 
-/** Samples 0, stride, 2·stride, … (stride divides the length). */
-function everyNth(samples: Float64Array, stride: number): Float64Array {
-  const result = new Float64Array(samples.length / stride);
+/**
+ * The whole period's conduction from the first half's cells of a half-wave symmetric leg: half a
+ * period on, the state is 1 − s and the current −i, so each cell's upper transistor (diode)
+ * conducts there as the lower one did in the first half, and the reverse: over the period each
+ * device of a pair averages the pair's two first-half means.
+ */
+function mirroredHalfConduction(half: LegLosses): Record<DeviceName, Conduction> {
+  const transistors = (half.upperTransistor.conduction + half.lowerTransistor.conduction) / 2;
+  const diodes = (half.upperDiode.conduction + half.lowerDiode.conduction) / 2;
+  return {
+    upperTransistor: { conduction: transistors },
+    lowerTransistor: { conduction: transistors },
+    upperDiode: { conduction: diodes },
+    lowerDiode: { conduction: diodes },
+  };
+}
+
+/** Samples 0, stride, 2·stride, … (stride divides the length), the first `count` of them. */
+function everyNth(
+  samples: Float64Array,
+  stride: number,
+  count = samples.length / stride,
+): Float64Array {
+  const result = new Float64Array(count);
   for (let j = 0; j < result.length; j++) result[j] = samples[j * stride] as number;
   return result;
 }
 
-/** The share of each of `size` cells (centred on 2πj/size) in which the state is 1. */
-function highFractions(state: Waveform, size: number): Float64Array {
+/**
+ * The share of each of `size` cells (centred on 2πj/size) in which the state is 1, for the first
+ * `upTo` cells.
+ */
+function highFractions(state: Waveform, size: number, upTo = size): Float64Array {
   const width = TAU / size;
-  const high = new Float64Array(size);
+  const high = new Float64Array(upTo);
   const { edges, levels } = state;
   // Shifted by half a cell, cell j is [j·width, (j + 1)·width).
   const add = (from: number, to: number): void => {
     const first = Math.min(size - 1, Math.floor(from / width));
+    if (first >= upTo) return;
     const last = Math.floor(to / width);
     if (first >= last) {
       high[first] = (high[first] as number) + (to - from);
       return;
     }
     high[first] = (high[first] as number) + ((first + 1) * width - from);
-    for (let j = first + 1; j < last; j++) high[j] = (high[j] as number) + width;
-    if (last < size) high[last] = (high[last] as number) + (to - last * width);
+    const through = Math.min(last, upTo);
+    for (let j = first + 1; j < through; j++) high[j] = (high[j] as number) + width;
+    if (last < upTo) high[last] = (high[last] as number) + (to - last * width);
   };
   edges.forEach((edge, i) => {
     if (levels[i] !== 1) return;
@@ -151,7 +193,7 @@ function highFractions(state: Waveform, size: number): Float64Array {
       add(0, Math.min(to - TAU, TAU));
     }
   });
-  for (let j = 0; j < size; j++) high[j] = Math.min(1, Math.max(0, (high[j] as number) / width));
+  for (let j = 0; j < upTo; j++) high[j] = Math.min(1, Math.max(0, (high[j] as number) / width));
   return high;
 }
 
@@ -162,7 +204,7 @@ function edgeSwitchingLosses(
   device: SemiconductorDevice,
   vdc: number,
   fundamentalFrequency: number,
-): Record<'upperTransistor' | 'lowerTransistor' | 'upperDiode' | 'lowerDiode', number> {
+): Record<DeviceName, number> {
   const energy = { upperTransistor: 0, lowerTransistor: 0, upperDiode: 0, lowerDiode: 0 };
   const { edges, levels } = state;
   const size = current.length;

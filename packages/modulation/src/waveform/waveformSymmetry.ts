@@ -27,6 +27,29 @@ export function hasHalfWaveSymmetry({ edges, levels }: Waveform): boolean {
 }
 
 /**
+ * True when v(θ + π) = c − v(θ) for the given constant c (`hasHalfWaveSymmetry` with the levels
+ * mirrored about c/2): a leg voltage about zero (c = 0) or a 0/1 switching state (c = 1).
+ */
+export function hasHalfWaveSymmetryAbout(waveform: Waveform, sum: number): boolean {
+  const half = waveform.levels.length / 2;
+  return (
+    hasHalfWaveSymmetry(waveform) &&
+    (waveform.levels[0] as number) + (waveform.levels[half] as number) === sum
+  );
+}
+
+/**
+ * True when the S samples of one period (S even) at 2πj/S + π are exactly the negated samples at
+ * 2πj/S, as the half-wave synthesis writes them.
+ */
+export function hasAntisymmetricHalves(samples: Float64Array): boolean {
+  const half = samples.length / 2;
+  if (samples.length % 2 === 1) return false;
+  for (let j = 0; j < half; j++) if (samples[j + half] !== -(samples[j] as number)) return false;
+  return true;
+}
+
+/**
  * How one waveform is another read backwards in angle: second(θ) = first(2α − θ) about the
  * axis α (see {@link waveformMirror}).
  */

@@ -14,6 +14,7 @@ import { modulationVoltages } from '../modulationVoltages.js';
 import { switchingLegs } from '../switchingLegs.js';
 import { sineTriangle } from '../../carrier/sineTriangle.js';
 import { waveformValueAt } from '../../waveform/waveformValueAt.js';
+import { designLosses } from '../designLosses.js';
 
 // An invented device (not from any real part), as in the loss tests.
 const device = { ...EXAMPLE_IGBT };
@@ -339,5 +340,36 @@ describe('analyseDesign: losses by device', () => {
         analyseDesign({ ...unityPowerFactorDesign('none'), device: { ...device, vce0: -1 } }),
       ),
     ).toBe('device.vce0');
+  });
+
+  it('a half-wave symmetric leg and current: its first half gives the whole period’s losses', () => {
+    // A bipolar sine-triangle state at mf 21 (half-wave symmetric: the odd ratio) carrying
+    // i = 10·sin(θ − 0.5) written exactly antisymmetric on 4096 samples. The same state with a
+    // redundant edge (one segment split, so no half-wave pairing is seen) is read over the whole
+    // period: the two agree to rounding, device by device.
+    const bipolar = sineTriangle({ scheme: 'bipolar', ma: 0.8, mf: 21, vdc });
+    const state = { edges: bipolar.edges, levels: bipolar.levels.map((v) => (v > 0 ? 1 : 0)) };
+    const split = (state.edges[0] + state.edges[1]) / 2;
+    const redundant = {
+      edges: [state.edges[0], split, ...state.edges.slice(1)],
+      levels: [state.levels[0], state.levels[0], ...state.levels.slice(1)],
+    };
+    const size = 4096;
+    const current = new Float64Array(size);
+    for (let j = 0; j < size / 2; j++) {
+      current[j] = 10 * Math.sin((2 * Math.PI * j) / size - 0.5);
+      current[j + size / 2] = -(current[j] as number);
+    }
+    const context = { device, vdc, fundamentalFrequency: f1, outputPower: 1000 };
+    const leg = { name: 'leg a', phaseIndex: 0, currentSign: 1 as const };
+    const half = designLosses([{ ...leg, state }], [current], context);
+    const whole = designLosses([{ ...leg, state: redundant }], [current], context);
+    const parts = ['upperTransistor', 'lowerTransistor', 'upperDiode', 'lowerDiode'] as const;
+    for (const part of parts)
+      for (const kind of ['conduction', 'switching'] as const) {
+        const expected = whole.legs[0]?.[part][kind] as number;
+        expect(expected).toBeGreaterThan(0);
+        assertInDelta(half.legs[0]?.[part][kind] as number, expected, 1e-12 * expected, part);
+      }
   });
 });
