@@ -200,6 +200,30 @@
  * finiteness check split by array kind (no fewer instructions); fft.js on plain arrays against
  * Float64Arrays (within the noise). Profile after: fft.js's transforms 14 %, labelling 9 %, the
  * legs' sums 7 %, the filtered phases' per-sample extremes 6 %, garbage collection 5 %.
+ *
+ * Eighth round (figures equal to rounding on a 3004-report corpus of every method and zero
+ * sequence at mf 21, 45, 100, 101 and a span ratio 40.5, with and without load, filter (both
+ * damping kinds), device and back-EMF, at the default order and 5000, with and without plans:
+ * the largest change 4.5e-11 of a cascaded cell's power, a residue of cancelling products, and
+ * 3.1e-13 of a device's conduction): half-wave symmetry of the sampled series. Currents whose
+ * even orders are all zero (carrier PWM at odd mf) are synthesised through a transform of S/2
+ * (the odd orders' inverse DFT times a twiddle; the second half is the first negated, written
+ * from the same loop) and their extremes read over the first half; the DC-link current of
+ * half-wave symmetric legs and currents repeats each half period, so its first half is sampled
+ * and transformed and its odd orders are exactly zero (2500 fewer arc tangents and labelled
+ * objects a report); a half-wave symmetric leg's conduction cells are summed over the first half
+ * (half a period on, the upper device conducts as the lower did). The plans keep six grid sizes
+ * (each grid and its half), and a report without plans makes plans of its own. Instructions a
+ * full report with plans (callgrind, node --single-threaded, slope from 50 to 250 reports):
+ * 76.5 → 67.4 (synthesis, extremes and DC link) → 63.3 M (losses), 17 % fewer. Reports
+ * alternating with the round's start in one process, median CPU ms with plans: 6.06 → 5.07
+ * after the first step and 6.11 → 5.08 at the end (a slow spell of the host). The plans row
+ * alone, six processes of 300 reports: 3.87–3.97 ms in five, 5.16 in one; the bench's sequence
+ * of rows in plain node, four runs: plans row 4.50, 4.89, 3.63 and 3.39 ms; this bench (tsx),
+ * four runs: 4.24, 3.54, 5.72 and 7.19 ms (spectrum alone 0.50–0.60 ms in all four: the
+ * spread is the host's, which moves by a third or more between minutes). Profile after:
+ * labelling the five spectra 10 % (an arc tangent and an object an order, the answer itself),
+ * the legs' exact sums 9 %, garbage collection 7 %, fft.js's transforms 8 %, the extremes 4 %.
  */
 import {
   analyseDesign,
