@@ -349,10 +349,11 @@ describe('analyseDesign: losses by device', () => {
     // period: the two agree to rounding, device by device.
     const bipolar = sineTriangle({ scheme: 'bipolar', ma: 0.8, mf: 21, vdc });
     const state = { edges: bipolar.edges, levels: bipolar.levels.map((v) => (v > 0 ? 1 : 0)) };
-    const split = (state.edges[0] + state.edges[1]) / 2;
+    const [firstEdge = 0, secondEdge = 0] = state.edges;
+    const firstLevel = state.levels[0] ?? 0;
     const redundant = {
-      edges: [state.edges[0], split, ...state.edges.slice(1)],
-      levels: [state.levels[0], state.levels[0], ...state.levels.slice(1)],
+      edges: [firstEdge, (firstEdge + secondEdge) / 2, ...state.edges.slice(1)],
+      levels: [firstLevel, firstLevel, ...state.levels.slice(1)],
     };
     const size = 4096;
     const current = new Float64Array(size);
