@@ -1,12 +1,10 @@
 import FFT from 'fft.js';
 import type { HarmonicPhasors } from '../spectrum/harmonicPhasors.js';
 
-/** What {@link periodSynthesiser} returns: one FFT of size S and its buffers, reused call after call. */
+/** What {@link periodSynthesiser} returns: its transforms and buffers, reused call after call. */
 export interface PeriodSynthesiser {
   /** S, samples a period (a power of two). */
   readonly size: number;
-  /** The `fft.js` transform of size S (for `sampledPhasors` on the same grid). */
-  readonly fft: FFT;
   /** sin(2πj/S), j = 0..S−1 (cos(2πj/S) is sine[(j + S/4) mod S]). */
   readonly sine: Float64Array;
   /**
@@ -45,9 +43,9 @@ export interface PeriodSynthesiser {
  * Half-wave symmetric series (every even order zero, as the bridge voltages and currents of
  * carrier PWM at odd mf and of the other symmetric patterns have) take a transform of S/2: with
  * only odd orders n = 2k + 1, z_j = w^j·Σ_k Z_{2k+1}·(w²)^{kj}, w = e^{j2π/S}, an S/2-point
- * inverse DFT of the odd coefficients times a twiddle, and z_{j+S/2} = −z_j (w^{S/2} = −1), the
- * decimation in frequency of the DFT (Brigham, 1988, ch. 10). The first S/2 samples are so
- * computed and the others are their negatives.
+ * inverse DFT of the odd coefficients times a twiddle, and z_{j+S/2} = −z_j (w^{S/2} = −1): the
+ * odd-frequency half of the decimation-in-frequency split, run backwards (Brigham, 1988; from
+ * memory). The first S/2 samples are so computed and the others are their negatives.
  * Internal: used for the time series of the filtered design figures.
  * @param fft - a transform of size S to build on (its tables cost as much as a transform)
  * @param transformOf - where the transform of S/2 comes from, asked once, on the first
@@ -189,7 +187,7 @@ export function periodSynthesiser(
     else whole(first, y, highest, xSamples, yOut);
     return [xSamples, yOut, symmetric];
   };
-  return { size, fft, sine, pair, buffers };
+  return { size, sine, pair, buffers };
 }
 
 /** Whether orders 0, 2, 4, … up to `highest` of the phasors are all exactly zero. */

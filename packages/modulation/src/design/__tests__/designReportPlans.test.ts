@@ -69,7 +69,8 @@ describe('designReportPlans', () => {
     const plans = designReportPlans();
     const first = plans.transform(4096);
     expect(plans.transform(4096)).toBe(first);
-    expect(plans.synthesiser(4096).fft).toBe(first);
+    plans.synthesiser(4096);
+    expect(plans.transform(4096)).toBe(first);
     const second = plans.transform(8192);
     const kept = [16384, 32768, 65536, 128].map((size) => plans.transform(size));
     expect(plans.transform(4096)).toBe(first);
