@@ -4,6 +4,9 @@ import { Panel } from '../../../components/ui/Panel';
 import { formatNumber, formatPercent } from '../../../lib/format';
 import { limitPointName } from '../model/reportFigures';
 
+/** Digits of the percentages shown for single orders. */
+const ORDER_PERCENT_DIGITS = 3;
+
 export interface HarmonicLimitsPanelProps {
   /** The design report whose `limitCheck` is shown. */
   report: StudyReport;
@@ -77,8 +80,8 @@ export function HarmonicLimitsPanel({
           <dt className="text-ink-soft">Above order {check.limits.maxOrder}</dt>
           <dd className="num">{formatPercent(check.thdAboveTable)}</dd>
           <dt className="text-ink-soft">Worst single order</dt>
-          <dd className="num">
-            {check.worstIndividual.order} at {formatPercent(check.worstIndividual.ratio, 3)}
+          <dd className="num" data-figure="Limit worst single order">
+            {worstOrderText(check.worstIndividual)}
           </dd>
         </dl>
         {check.note ? (
@@ -141,7 +144,7 @@ function OrderTable({ rows }: { rows: StudyReport['limitCheck']['table'] }) {
         {rows.map((row) => (
           <tr key={row.order} className={row.pass ? '' : 'text-bad'}>
             <td>{row.order}</td>
-            <td>{formatPercent(row.ratio, 3)}</td>
+            <td>{formatPercent(row.ratio, ORDER_PERCENT_DIGITS)}</td>
             <td>{formatPercent(row.limit, 1)}</td>
             <td className="font-sans">{row.pass ? 'pass' : 'over'}</td>
           </tr>
@@ -149,4 +152,14 @@ function OrderTable({ rows }: { rows: StudyReport['limitCheck']['table'] }) {
       </tbody>
     </table>
   );
+}
+
+/**
+ * The worst single order and its share of the fundamental; when even that share rounds to zero
+ * at the digits shown, no order is named (which one is largest is then rounding noise).
+ */
+function worstOrderText(worst: { order: number; ratio: number }): string {
+  const shown = formatPercent(worst.ratio, ORDER_PERCENT_DIGITS);
+  if (shown !== formatPercent(0, ORDER_PERCENT_DIGITS)) return `${worst.order} at ${shown}`;
+  return `every order under ${formatPercent(0.5 * 10 ** -(ORDER_PERCENT_DIGITS + 2), ORDER_PERCENT_DIGITS + 1)}`;
 }

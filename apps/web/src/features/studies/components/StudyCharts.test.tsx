@@ -139,5 +139,26 @@ describe('HarmonicLimitsPanel', () => {
     expect(screen.getByTestId('limit-note')).toHaveTextContent(
       report.limitCheck.note ?? 'missing note',
     );
+    // Orders 2..50 of bipolar PWM at mf 201 are rounding noise (half-wave symmetry and the
+    // sidebands far above): no worst order is named at the digits shown.
+    expect(report.limitCheck.worstIndividual.ratio).toBeLessThan(5e-6);
+    expect(figure('Limit worst single order')).toHaveTextContent('every order under 0.0005 %');
+  });
+
+  it('names the worst single order when it shows at the digits printed', () => {
+    // Bipolar PWM at mf 9: the carrier harmonic (order 9) and its first sidebands (7 and 11,
+    // mf ∓ 2; Holmes and Lipo, 2003, ch. 3) lie inside the table, well above rounding.
+    const report = analyseDesign({
+      vdc: 400,
+      fundamentalFrequency: 50,
+      carrierFrequency: 50 * 9,
+      modulation: { method: 'sine-triangle', scheme: 'bipolar', ma: 0.8 },
+    });
+    render(<HarmonicLimitsPanel report={report} />);
+    const { order, ratio } = report.limitCheck.worstIndividual;
+    expect(ratio).toBeGreaterThan(0.01);
+    expect(figure('Limit worst single order')).toHaveTextContent(
+      `${order} at ${formatPercent(ratio, 3)}`,
+    );
   });
 });
