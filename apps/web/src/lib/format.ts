@@ -11,6 +11,17 @@ export function formatPercent(ratio: number, digits = 2): string {
   return Number.isFinite(ratio) ? `${(ratio * 100).toFixed(digits)} %` : '—';
 }
 
+/**
+ * The worst single order of a limit check and its share of the fundamental, at `digits` decimals
+ * of a per cent; when even that share rounds to zero no order is named (which one is largest is
+ * then rounding noise): "every order under" half the last digit shown.
+ */
+export function formatWorstOrder(worst: { order: number; ratio: number }, digits = 2): string {
+  const shown = formatPercent(worst.ratio, digits);
+  if (shown !== formatPercent(0, digits)) return `${worst.order} at ${shown}`;
+  return `every order under ${formatPercent(0.5 * 10 ** -(digits + 2), digits + 1)}`;
+}
+
 export function formatDate(iso: string): string {
   const date = new Date(iso);
   return Number.isNaN(date.getTime()) ? iso : date.toLocaleString();

@@ -1,7 +1,7 @@
 import { analyseDesign, type InverterDesign } from '@pulsewright/modulation';
 import { fireEvent, render, screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { formatNumber, formatPercent } from '../../../lib/format';
+import { formatNumber, formatPercent, formatWorstOrder } from '../../../lib/format';
 import { GridPanel } from './GridPanel';
 
 // Invented values: a 400 V, 50 Hz grid fed through an LCL filter from 700 V at 10 kHz.
@@ -27,6 +27,9 @@ describe('GridPanel', () => {
     const verdict = screen.getByTestId('grid-verdict');
     expect(verdict).toHaveTextContent('IEEE Std 519-2022');
     expect(verdict).toHaveTextContent(`TDD ${formatPercent(grid.limits.ieee519.total)}`);
+    expect(verdict).toHaveTextContent(
+      `worst order ${formatWorstOrder(grid.limits.ieee519.worstIndividual)}.`,
+    );
     expect(verdict).toHaveTextContent('the row for generating equipment');
     // I_SC/I_L is above 20 here, yet the footnote for generating equipment applies the first row
     // of IEEE 519's Table 2 (from memory): the panel says why, and not under IEEE 1547.

@@ -2,7 +2,7 @@ import { generationRowReason } from '@pulsewright/modulation';
 import { useState, type ReactNode } from 'react';
 import type { StudyReport } from '../../../lib/api';
 import { SpectrumChart } from '../../../components/charts/SpectrumChart';
-import { formatNumber, formatPercent } from '../../../lib/format';
+import { formatNumber, formatPercent, formatWorstOrder } from '../../../lib/format';
 
 type Grid = NonNullable<StudyReport['grid']>;
 type Standard = keyof Grid['limits'];
@@ -103,7 +103,7 @@ export function GridPanel({ report, fileStem }: { report: StudyReport; fileStem:
           {standard === 'ieee519' ? 'TDD' : 'TRD'} {formatPercent(check.total)} to order{' '}
           {check.standard.maxOrder}, {formatPercent(check.totalWholeWaveform)} over the whole
           waveform, limit {formatPercent(check.totalLimit)}; worst order{' '}
-          {check.worstIndividual.order} at {formatPercent(check.worstIndividual.ratio)}.
+          {formatWorstOrder(check.worstIndividual)}.
           {check.violations.length ? ` ${check.violations.length} figure(s) over their limit.` : ''}
         </p>
         {rowReason ? (

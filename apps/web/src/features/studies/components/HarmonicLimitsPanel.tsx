@@ -1,7 +1,7 @@
 import type { StudyReport } from '../../../lib/api';
 import { NumberField } from '../../../components/ui/Field';
 import { Panel } from '../../../components/ui/Panel';
-import { formatNumber, formatPercent } from '../../../lib/format';
+import { formatNumber, formatPercent, formatWorstOrder } from '../../../lib/format';
 import { limitPointName } from '../model/reportFigures';
 
 /** Digits of the percentages shown for single orders. */
@@ -81,7 +81,7 @@ export function HarmonicLimitsPanel({
           <dd className="num">{formatPercent(check.thdAboveTable)}</dd>
           <dt className="text-ink-soft">Worst single order</dt>
           <dd className="num" data-figure="Limit worst single order">
-            {worstOrderText(check.worstIndividual)}
+            {formatWorstOrder(check.worstIndividual, ORDER_PERCENT_DIGITS)}
           </dd>
         </dl>
         {check.note ? (
@@ -152,14 +152,4 @@ function OrderTable({ rows }: { rows: StudyReport['limitCheck']['table'] }) {
       </tbody>
     </table>
   );
-}
-
-/**
- * The worst single order and its share of the fundamental; when even that share rounds to zero
- * at the digits shown, no order is named (which one is largest is then rounding noise).
- */
-function worstOrderText(worst: { order: number; ratio: number }): string {
-  const shown = formatPercent(worst.ratio, ORDER_PERCENT_DIGITS);
-  if (shown !== formatPercent(0, ORDER_PERCENT_DIGITS)) return `${worst.order} at ${shown}`;
-  return `every order under ${formatPercent(0.5 * 10 ** -(ORDER_PERCENT_DIGITS + 2), ORDER_PERCENT_DIGITS + 1)}`;
 }
