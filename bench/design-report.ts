@@ -219,9 +219,12 @@
  * alternating with the round's start in one process, median CPU ms with plans: 6.06 → 5.07
  * after the first step and 6.11 → 5.08 at the end (a slow spell of the host). The plans row
  * alone, six processes of 300 reports: 3.87–3.97 ms in five, 5.16 in one; the bench's sequence
- * of rows in plain node, four runs: plans row 4.50, 4.89, 3.63 and 3.39 ms; this bench (tsx),
- * four runs: 4.24, 3.54, 5.72 and 7.19 ms (spectrum alone 0.50–0.60 ms in all four: the
- * spread is the host's, which moves by a third or more between minutes). Profile after:
+ * of rows in plain node, eight runs: plans row 4.50, 4.89, 3.63, 3.39, 5.30, 6.08, 5.46 and
+ * 4.16 ms; this bench (tsx), fourteen runs: 4.24, 3.54, 5.72, 7.19, 4.53, 4.00, 5.53, 5.24, 4.97,
+ * 4.34, 5.07, 4.17, 4.56 and 3.93 ms, median about 4.55 ms (spectrum alone 0.50–1.04 ms; a run
+ * can read 7.19 ms with the spectrum at 0.52: the report, memory bound, spreads more than the
+ * cache-resident spectrum on this shared host). Under 5 ms in the median, not in every run.
+ * Profile after:
  * labelling the five spectra 10 % (an arc tangent and an object an order, the answer itself),
  * the legs' exact sums 9 %, garbage collection 7 %, fft.js's transforms 8 %, the extremes 4 %.
  */
