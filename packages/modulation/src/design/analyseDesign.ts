@@ -41,6 +41,7 @@ import { modulatorSignals } from './modulatorSignals.js';
 import { multilevelDcLinkSwitching } from './multilevelDcLinkSwitching.js';
 import { multilevelFigures } from './multilevelFigures.js';
 import { switchingLegs } from './switchingLegs.js';
+import { hasAntisymmetricHalves } from '../waveform/waveformSymmetry.js';
 import { assertSemiconductorDevice } from '../losses/assertSemiconductorDevice.js';
 import { designReportPlans, type DesignReportPlans } from './designReportPlans.js';
 import { synthesisSize } from './periodSynthesiser.js';
@@ -287,6 +288,9 @@ export function analyseDesign(
         name: `grid current${phaseSuffix(voltages.phaseCount, c.phase)}`,
       },
     }));
+  // Whether each phase's current repeats negated half a period on, read once for the DC link and
+  // the losses.
+  const antisymmetricCurrents = inverterSamples.map(hasAntisymmetricHalves);
   // The switching function of each leg: a two-level leg's upper switch is on at +vdc/2; a
   // single-phase bridge draws (v_bridge/vdc)·i. A staircase has a source per cell: no one DC link.
   const staircase = 'kind' in design.modulation && design.modulation.kind === 'staircase';
@@ -311,6 +315,7 @@ export function analyseDesign(
           label,
           labelPhasors: labeller.phasors,
           transform: (size) => plans.transform(size),
+          antisymmetricCurrents,
         });
   const commonMode =
     voltages.phaseCount === 3
@@ -365,6 +370,7 @@ export function analyseDesign(
           vdc: design.vdc,
           fundamentalFrequency: frequency,
           outputPower: design.vdc * dcLink.mean,
+          antisymmetricCurrents,
         });
 
   const pcc = output ?? bridge;

@@ -42,6 +42,7 @@ import { spanFilterOrder } from './spanFilterOrder.js';
 import { spanLoadCurrents } from './spanLoadCurrents.js';
 import type { SpectrumLabeller } from './spectrumLabeller.js';
 import { switchingLegs } from './switchingLegs.js';
+import { hasAntisymmetricHalves } from '../waveform/waveformSymmetry.js';
 
 /** Fewest grid samples a fundamental period of the span's currents (as the integer report's). */
 const MIN_SAMPLES_PER_PERIOD = 4096;
@@ -204,6 +205,9 @@ export function analyseDesignSpan(
     voltages.phaseCount === 3
       ? voltages.legs.map((v) => v.waveform)
       : voltages.phases.map((v) => v.waveform);
+  // Whether each phase's current repeats negated half the span on, read once for the DC link and
+  // the losses.
+  const antisymmetricCurrents = inverterSamples.map(hasAntisymmetricHalves);
   const dcLinkSpan =
     inverterSamples.length === 0
       ? null
@@ -213,6 +217,7 @@ export function analyseDesignSpan(
           maxOrder: q * maxOrder,
           points,
           label,
+          antisymmetricCurrents,
         });
   const dcLink =
     dcLinkSpan === null
@@ -258,6 +263,7 @@ export function analyseDesignSpan(
           vdc: design.vdc,
           fundamentalFrequency: spanFrequency,
           outputPower: design.vdc * dcLink.mean,
+          antisymmetricCurrents,
         });
 
   // A back-EMF's torque-producing current and air-gap power, from the span's fundamentals.

@@ -37,11 +37,18 @@ export function dcLinkFigures(
     labelPhasors?: (p: HarmonicPhasors) => DcLinkFigures['spectrum'];
     /** The transform of a size (the grid's, or half of it), to reuse for the spectrum. */
     transform?: (size: number) => FFT;
+    /**
+     * Whether each current's samples are exactly half-wave antisymmetric
+     * (`hasAntisymmetricHalves`), when the caller has read it for its other uses. @default read here
+     */
+    antisymmetricCurrents?: readonly boolean[];
   },
 ): DcLinkFigures {
   const { vdc, phaseCount, maxOrder, points, label, transform } = context;
   const size = inverterSamples[0]?.length ?? 0;
-  const repeats = halfPeriodic(switching, inverterSamples) ? 2 : 1;
+  const antisymmetric =
+    context.antisymmetricCurrents ?? inverterSamples.map(hasAntisymmetricHalves);
+  const repeats = halfPeriodic(switching, antisymmetric) ? 2 : 1;
   // The samples of one repeat (the whole period, or its first half).
   const span = size / repeats;
   const current = new Float64Array(size);
@@ -91,17 +98,18 @@ export function dcLinkFigures(
 
 /**
  * Whether each switching waveform is half-wave symmetric about zero (edges half a period apart
- * to `SYMMETRY_TOLERANCE`, levels negated) and each current's sample at 2πj/S + π is exactly
- * minus its sample at 2πj/S: then every product s_k·i_k repeats each half period.
+ * to `SYMMETRY_TOLERANCE`, levels negated) and each current's samples are antisymmetric (its
+ * sample at 2πj/S + π exactly minus its sample at 2πj/S): then every product s_k·i_k repeats
+ * each half period.
  */
 function halfPeriodic(
   switching: readonly Waveform[],
-  inverterSamples: readonly Float64Array[],
+  antisymmetricCurrents: readonly boolean[],
 ): boolean {
   return (
     switching.length > 0 &&
-    switching.length === inverterSamples.length &&
+    switching.length === antisymmetricCurrents.length &&
     switching.every((waveform) => hasHalfWaveSymmetryAbout(waveform, 0)) &&
-    inverterSamples.every(hasAntisymmetricHalves)
+    antisymmetricCurrents.every(Boolean)
   );
 }

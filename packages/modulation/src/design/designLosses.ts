@@ -50,9 +50,16 @@ export function designLosses(
     vdc: number;
     fundamentalFrequency: number;
     outputPower: number;
+    /**
+     * Whether each phase's samples are exactly half-wave antisymmetric
+     * (`hasAntisymmetricHalves`), when the caller has read it for its other uses. @default read here
+     */
+    antisymmetricCurrents?: readonly boolean[];
   },
 ): DesignLossFigures {
   const { device, vdc, fundamentalFrequency, outputPower } = context;
+  const antisymmetric =
+    context.antisymmetricCurrents ?? inverterSamples.map(hasAntisymmetricHalves);
   const figures = legs.map((leg): LegLossFigures => {
     const phase = inverterSamples[leg.phaseIndex] as Float64Array;
     const current = leg.currentSign === 1 ? phase : negated(phase);
@@ -68,7 +75,7 @@ export function designLosses(
     const halfWave =
       cellCount % 2 === 0 &&
       hasHalfWaveSymmetryAbout(leg.state, 1) &&
-      hasAntisymmetricHalves(current);
+      antisymmetric[leg.phaseIndex] === true;
     const read = halfWave ? cellCount / 2 : cellCount;
     const cells = stride === 1 && !halfWave ? current : everyNth(current, stride, read);
     const summed = legLossesOfValidSamples(
