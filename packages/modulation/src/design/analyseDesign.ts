@@ -318,21 +318,18 @@ export function analyseDesign(
           antisymmetricCurrents,
         });
   const commonMode =
-    voltages.phaseCount === 3
-      ? commonModeFigures(
-          voltages.legs.map((v) => v.waveform),
-          {
-            maxOrder,
-            frequencyRatio,
-            label,
-            spectrum: labeller.phasors(spectra.commonMode()),
-            reducedRange: reducedRangeOf(design),
-            name:
-              voltages.multilevel?.topology === 'cascaded-h-bridge'
-                ? "common mode, star point to the strings' neutral"
-                : 'common mode, star point to DC midpoint',
-          },
-        )
+    voltages.commonMode !== null
+      ? commonModeFigures(voltages.commonMode, {
+          maxOrder,
+          frequencyRatio,
+          label,
+          spectrum: labeller.phasors(spectra.commonMode()),
+          reducedRange: reducedRangeOf(design),
+          name:
+            voltages.multilevel?.topology === 'cascaded-h-bridge'
+              ? "common mode, star point to the strings' neutral"
+              : 'common mode, star point to DC midpoint',
+        })
       : null;
   const multilevel =
     voltages.multilevel === undefined

@@ -231,20 +231,17 @@ export function analyseDesignSpan(
           samplesPerPeriod: dcLinkSpan.samplesPerPeriod / q,
         };
   const commonModeSpan =
-    voltages.phaseCount === 3
-      ? commonModeFigures(
-          voltages.legs.map((v) => v.waveform),
-          {
-            maxOrder: q * maxOrder,
-            frequencyRatio: p,
-            label,
-            reducedRange:
-              modulation.method === 'three-phase'
-                ? reducedCommonModeRange(modulation.zeroSequence ?? 'none')
-                : null,
-            name: 'common mode, star point to DC midpoint',
-          },
-        )
+    voltages.commonMode !== null
+      ? commonModeFigures(voltages.commonMode, {
+          maxOrder: q * maxOrder,
+          frequencyRatio: p,
+          label,
+          reducedRange:
+            modulation.method === 'three-phase'
+              ? reducedCommonModeRange(modulation.zeroSequence ?? 'none')
+              : null,
+          name: 'common mode, star point to DC midpoint',
+        })
       : null;
   const commonMode =
     commonModeSpan === null

@@ -1,19 +1,19 @@
 import type { Harmonic } from '../spectrum/Harmonic.js';
 import { harmonics } from '../spectrum/harmonics.js';
-import { combineWaveforms } from '../waveform/combineWaveforms.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import { waveformMeanSquare } from '../waveform/waveformMeanSquare.js';
 import type { CommonModeFigures } from './DesignReport.js';
 
 /**
- * The common-mode voltage (v_a + v_b + v_c)/3 of three leg (or cascaded string) voltages, exact: its levels, RMS,
- * steps (edges) per period and per carrier period, and spectrum (standard circuit analysis;
- * A. M. Hava and E. Ün, IEEE Trans. Power Electronics, 2009, for why the steps matter), with the
- * range of a reduced common-mode method passed through.
+ * The figures of a common-mode voltage (v_a + v_b + v_c)/3 of three leg (or cascaded string)
+ * voltages (`starVoltages`), exact: its levels, RMS, steps (edges) per period and per carrier
+ * period, and spectrum (standard circuit analysis; A. M. Hava and E. Ün, IEEE Trans. Power
+ * Electronics, 2009, for why the steps matter), with the range of a reduced common-mode method
+ * passed through.
  * Internal: part of analyseDesign.
  */
 export function commonModeFigures(
-  legs: readonly Waveform[],
+  waveform: Waveform,
   context: {
     maxOrder: number;
     frequencyRatio: number | null;
@@ -26,10 +26,6 @@ export function commonModeFigures(
   },
 ): CommonModeFigures {
   const { maxOrder, frequencyRatio, label, reducedRange, name } = context;
-  const waveform = combineWaveforms(
-    legs,
-    (levels) => ((levels[0] ?? 0) + (levels[1] ?? 0) + (levels[2] ?? 0)) / 3,
-  );
   // Levels are sums of ±vdc/2 thirds: round away the last bits so equal levels compare equal,
   // each distinct level once (a few levels recur at every one of hundreds of edges).
   const distinct = [...new Set(waveform.levels)];

@@ -5,7 +5,8 @@ import { threeLevelSpaceVectorWaveforms } from '../multilevel/space-vector/three
 import type { MultilevelTopology, MultilevelWaveforms } from '../multilevel/MultilevelTypes.js';
 import { sheWaveform } from '../she/sheWaveform.js';
 import { spaceVectorWaveforms } from '../space-vector/spaceVectorWaveforms.js';
-import { threePhase } from '../three-phase/threePhase.js';
+import { starVoltages } from '../three-phase/starVoltages.js';
+import { threePhaseLegs } from '../three-phase/threePhaseLegs.js';
 import { combineWaveforms } from '../waveform/combineWaveforms.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import type { Modulation } from './Modulation.js';
@@ -35,6 +36,11 @@ export interface ModulationVoltages {
   legs: NamedVoltage[];
   /** Line-to-line voltages a−b, b−c, c−a (three-phase only). */
   lines: NamedVoltage[];
+  /**
+   * Three-phase only (null for a single-phase bridge): the star point of a balanced star load
+   * to the legs' reference, (v_a + v_b + v_c)/3 (volts).
+   */
+  commonMode: Waveform | null;
   /** A multilevel bridge's legs (strings), their switches and cells, as its method built them. */
   multilevel?: MultilevelWaveforms & { topology: MultilevelTopology };
 }
@@ -71,12 +77,8 @@ export function modulationVoltages(
     }
     case 'three-phase': {
       const { method: _method, ...options } = modulation;
-      const { legs, lineToLine } = threePhase(options, span);
-      return threePhaseVoltages([legs.a, legs.b, legs.c], undefined, [
-        lineToLine.ab,
-        lineToLine.bc,
-        lineToLine.ca,
-      ]);
+      const legs = threePhaseLegs(options, span);
+      return threePhaseVoltages([legs.a, legs.b, legs.c]);
     }
     case 'space-vector': {
       const { method: _method, ...options } = modulation;
@@ -125,37 +127,29 @@ function multilevelVoltages(
 }
 
 function singlePhase(name: string, waveform: Waveform): ModulationVoltages {
-  return { phaseCount: 1, phases: [{ name, waveform }], legs: [], lines: [] };
+  return { phaseCount: 1, phases: [{ name, waveform }], legs: [], lines: [], commonMode: null };
 }
 
 /**
- * Three legs in star: each phase to the star point (2·v_k − v_k+1 − v_k+2)/3 and each line
- * v_k − v_k+1, combined exactly.
- * @param lines - the lines a−b, b−c, c−a when the modulator has combined them already (the
- *   same `combineWaveforms` difference), so they are not combined twice
+ * Three legs in star: each phase to the star point, each line and the common mode, combined
+ * exactly (`starVoltages`).
  */
 function threePhaseVoltages(
   legs: [Waveform, Waveform, Waveform],
   legName = (phase: string): string => `leg ${phase} to DC midpoint`,
-  lines?: readonly [Waveform, Waveform, Waveform],
 ): ModulationVoltages {
-  const at = (k: number): Waveform => legs[((k % 3) + 3) % 3] as Waveform;
+  const star = starVoltages(legs);
   return {
     phaseCount: 3,
-    legs: PHASE_NAMES.map((p, k) => ({ name: legName(p), waveform: at(k) })),
+    legs: PHASE_NAMES.map((p, k) => ({ name: legName(p), waveform: legs[k] as Waveform })),
     phases: PHASE_NAMES.map((p, k) => ({
       name: `phase ${p} to star point`,
-      waveform: combineWaveforms(
-        [at(k), at(k + 1), at(k + 2)],
-        // Indexed, not destructured: destructuring runs the array iterator at every edge.
-        (levels) => (2 * (levels[0] ?? 0) - (levels[1] ?? 0) - (levels[2] ?? 0)) / 3,
-      ),
+      waveform: star.phases[k] as Waveform,
     })),
     lines: PHASE_NAMES.map((p, k) => ({
       name: `line ${p}−${PHASE_NAMES[(k + 1) % 3]}`,
-      waveform:
-        lines?.[k] ??
-        combineWaveforms([at(k), at(k + 1)], (levels) => (levels[0] ?? 0) - (levels[1] ?? 0)),
+      waveform: star.lines[k] as Waveform,
     })),
+    commonMode: star.commonMode,
   };
 }

@@ -1,7 +1,6 @@
 import { EDGE_EPSILON, HALF_PI, TAU } from '../math.js';
 import { assertNumberInRange, assertOneOf } from '../validation/assertions.js';
-import { combineWaveforms } from '../waveform/combineWaveforms.js';
-import { subtractWaveforms } from '../waveform/subtractWaveforms.js';
+import { starVoltages } from '../three-phase/starVoltages.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import { waveformFromTransitions, type Transition } from '../waveform/waveformFromTransitions.js';
 import { applyOvermodulation } from './applyOvermodulation.js';
@@ -180,17 +179,17 @@ export function spaceVectorWaveforms({
     Waveform,
     Waveform,
   ];
-  const phase = (x: number, y: number, z: number) => (2 * x - y - z) / 3;
+  const star = starVoltages([a, b, c]);
   return {
     a,
     b,
     c,
-    ab: subtractWaveforms(a, b),
-    bc: subtractWaveforms(b, c),
-    ca: subtractWaveforms(c, a),
-    an: combineWaveforms([a, b, c], ([x, y, z]) => phase(x as number, y as number, z as number)),
-    bn: combineWaveforms([b, c, a], ([x, y, z]) => phase(x as number, y as number, z as number)),
-    cn: combineWaveforms([c, a, b], ([x, y, z]) => phase(x as number, y as number, z as number)),
+    ab: star.lines[0],
+    bc: star.lines[1],
+    ca: star.lines[2],
+    an: star.phases[0],
+    bn: star.phases[1],
+    cn: star.phases[2],
     m: index,
     ma: maUsed,
     mode: setting.mode,

@@ -6,48 +6,66 @@ import type { Waveform } from './Waveform.js';
  * (ties in the order given): of changes closer than `EDGE_EPSILON` the later one wins (a
  * zero-width pulse is dropped), also across 2π, and a change that keeps the level is removed; a
  * constant signal becomes `{ edges: [0], levels: [value] }`. Internal: the second half of
- * `waveformFromTransitions`, and what `combineWaveforms` calls with its merged edges.
+ * `waveformFromTransitions`, and what `combineWaveforms` and `starVoltages` call with their
+ * merged edges.
+ *
+ * One pass: a cluster of near-coincident changes is held until the next one starts, then kept
+ * unless its level repeats the cluster before it. Comparing with the cluster before (kept or
+ * not) is the same as comparing with the last kept level, since a dropped cluster repeats it.
+ * Only the ends wait for the whole list: the last cluster may fold into the first across 2π,
+ * and the first is compared with the last.
  * @param angles - radians, ascending, at least one
  * @param levels - the level from each angle on, one per angle
  */
 export function waveformFromAscending(
-  angles: readonly number[],
-  levels: readonly number[],
+  angles: ArrayLike<number>,
+  levels: ArrayLike<number>,
 ): Waveform {
-  const merged: number[] = [];
-  const held: number[] = [];
-  for (let k = 0; k < angles.length; k++) {
-    const angle = angles[k] as number;
-    const level = levels[k] as number;
-    // Merge near-coincident transitions: the last of a cluster holds the level after it.
-    if (merged.length > 0 && angle - (merged[merged.length - 1] as number) < EDGE_EPSILON) {
-      held[held.length - 1] = level;
-    } else {
-      merged.push(angle);
-      held.push(level);
-    }
-  }
-  // A cluster straddling 2π: the transition just after 0 is the later one (it sits at 2π plus a
-  // little), so its level stands and the one just before 2π is dropped.
-  if (
-    merged.length > 1 &&
-    (merged[0] as number) + TAU - (merged[merged.length - 1] as number) < EDGE_EPSILON
-  ) {
-    merged.pop();
-    held.pop();
-  }
-  return dropRepeatedLevels(merged, held);
-}
-
-function dropRepeatedLevels(angles: readonly number[], levels: readonly number[]): Waveform {
+  const count = angles.length;
   const edges: number[] = [];
   const kept: number[] = [];
-  const count = angles.length;
-  for (let i = 0; i < count; i++) {
-    if (count > 1 && levels[i] === levels[(i + count - 1) % count]) continue;
-    edges.push(angles[i] as number);
-    kept.push(levels[i] as number);
+  // The cluster being gathered (its first angle, its last level), how many have begun, the
+  // first one's level and the level of the one before the cluster being gathered.
+  let clusterAngle = angles[0] as number;
+  let clusterLevel = levels[0] as number;
+  let clusters = 1;
+  let firstLevel = NaN;
+  let previousLevel = NaN;
+  for (let k = 1; k < count; k++) {
+    const angle = angles[k] as number;
+    const level = levels[k] as number;
+    if (angle - clusterAngle < EDGE_EPSILON) {
+      clusterLevel = level;
+      continue;
+    }
+    // The cluster is complete. The first is compared with the last at the end.
+    if (clusters === 1) firstLevel = clusterLevel;
+    else if (clusterLevel !== previousLevel) {
+      edges.push(clusterAngle);
+      kept.push(clusterLevel);
+    }
+    previousLevel = clusterLevel;
+    clusterAngle = angle;
+    clusterLevel = level;
+    clusters++;
   }
-  if (edges.length === 0) return { edges: [0], levels: [levels[0] as number] };
+  if (clusters === 1) firstLevel = clusterLevel;
+  const firstAngle = angles[0] as number;
+  // A cluster straddling 2π: the transition just after 0 is the later one (it sits at 2π plus a
+  // little), so its level stands and the last cluster, just before 2π, is dropped.
+  const lastFolds = clusters > 1 && firstAngle + TAU - clusterAngle < EDGE_EPSILON;
+  if (clusters > 1 && !lastFolds && clusterLevel !== previousLevel) {
+    edges.push(clusterAngle);
+    kept.push(clusterLevel);
+  }
+  const lastLevel = lastFolds ? previousLevel : clusterLevel;
+  // The first cluster, unless it repeats the last level round the period (a single cluster is
+  // kept: it is the whole signal).
+  const mergedCount = lastFolds ? clusters - 1 : clusters;
+  if (mergedCount === 1 || firstLevel !== lastLevel) {
+    edges.unshift(firstAngle);
+    kept.unshift(firstLevel);
+  }
+  if (edges.length === 0) return { edges: [0], levels: [firstLevel] };
   return { edges, levels: kept };
 }
