@@ -20,20 +20,36 @@ export interface Transition {
 export function waveformFromTransitions(transitions: readonly Transition[]): Waveform {
   const count = transitions.length;
   if (count === 0) throw new RangeError('transitions must hold at least one entry');
-  const wrappedAngles = transitions.map((t) => wrapAngle(t.angle));
-  const order = ascendingOrder(wrappedAngles);
-  return waveformFromAscending(
-    order.map((index) => wrappedAngles[index] as number),
-    order.map((index) => (transitions[index] as Transition).level),
-  );
+  const wrappedAngles: number[] = [];
+  for (let k = 0; k < count; k++) {
+    wrappedAngles.push(wrapAngle((transitions[k] as Transition).angle));
+  }
+  const angles: number[] = [];
+  const levels: number[] = [];
+  const take = (index: number): void => {
+    angles.push(wrappedAngles[index] as number);
+    levels.push((transitions[index] as Transition).level);
+  };
+  const start = rotationStart(wrappedAngles);
+  if (start === null) {
+    // Any other order: sorted, ties in input order.
+    const order = Array.from({ length: count }, (_, k) => k).sort(
+      (a, b) => (wrappedAngles[a] as number) - (wrappedAngles[b] as number) || a - b,
+    );
+    for (let k = 0; k < count; k++) take(order[k] as number);
+  } else {
+    for (let k = start; k < count; k++) take(k);
+    for (let k = 0; k < start; k++) take(k);
+  }
+  return waveformFromAscending(angles, levels);
 }
 
 /**
- * The indices of `wrapped` (angles in [0, 2π)) in ascending order, ties in input order. The
- * modulators emit transitions in ascending unwrapped order, which wrapping turns into one
- * rotation of an ascending list: that case is found in one pass, anything else is sorted.
+ * Where `wrapped` (angles in [0, 2π)) starts ascending when it is one rotation of an ascending
+ * list, null otherwise. The modulators emit transitions in ascending unwrapped order, which
+ * wrapping turns into such a rotation: that case is found in one pass, anything else is sorted.
  */
-function ascendingOrder(wrapped: readonly number[]): number[] {
+function rotationStart(wrapped: readonly number[]): number | null {
   const count = wrapped.length;
   let descents = 0;
   let start = 0;
@@ -45,8 +61,5 @@ function ascendingOrder(wrapped: readonly number[]): number[] {
   }
   const rotation =
     descents === 0 || (descents === 1 && (wrapped[count - 1] as number) <= (wrapped[0] as number));
-  if (rotation) return Array.from({ length: count }, (_, k) => (start + k) % count);
-  return Array.from({ length: count }, (_, k) => k).sort(
-    (a, b) => (wrapped[a] as number) - (wrapped[b] as number) || a - b,
-  );
+  return rotation ? start : null;
 }
