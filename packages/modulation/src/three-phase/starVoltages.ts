@@ -69,7 +69,9 @@ export function starVoltages(legs: readonly [Waveform, Waveform, Waveform]): Sta
     changes[count] = changed;
     count++;
   }
-  const merged = { angles, levelsA, levelsB, levelsC, changes, count };
+  // One pair of buffers for every output's edges and levels (waveformFromAscending copies out).
+  const scratch = { angles: new Float64Array(count), levels: new Float64Array(count) };
+  const merged = { angles, levelsA, levelsB, levelsC, changes, count, scratch };
   return {
     phases: [
       waveformOf(merged, LEG_A | LEG_B | LEG_C, (x, y, z) => (2 * x - y - z) / 3),
@@ -87,7 +89,8 @@ export function starVoltages(legs: readonly [Waveform, Waveform, Waveform]): Sta
 
 /**
  * The waveform `level` of the legs' levels takes over the merged edges where any leg of `legs`
- * (bits) changes, canonicalised (`waveformFromAscending`).
+ * (bits) changes, canonicalised (`waveformFromAscending`, which copies what it keeps, so the
+ * merge's scratch buffers serve the next output).
  */
 function waveformOf(
   merged: {
@@ -97,13 +100,13 @@ function waveformOf(
     levelsC: Float64Array;
     changes: Uint8Array;
     count: number;
+    scratch: { angles: Float64Array; levels: Float64Array };
   },
   legs: number,
   level: (a: number, b: number, c: number) => number,
 ): Waveform {
   const { angles, levelsA, levelsB, levelsC, changes, count } = merged;
-  const own = new Float64Array(count);
-  const values = new Float64Array(count);
+  const { angles: own, levels: values } = merged.scratch;
   let kept = 0;
   for (let k = 0; k < count; k++) {
     if (((changes[k] as number) & legs) === 0) continue;
@@ -111,5 +114,5 @@ function waveformOf(
     values[kept] = level(levelsA[k] as number, levelsB[k] as number, levelsC[k] as number);
     kept++;
   }
-  return waveformFromAscending(own.subarray(0, kept), values.subarray(0, kept));
+  return waveformFromAscending(own, values, kept);
 }

@@ -14,14 +14,15 @@ import type { Waveform } from './Waveform.js';
  * not) is the same as comparing with the last kept level, since a dropped cluster repeats it.
  * Only the ends wait for the whole list: the last cluster may fold into the first across 2π,
  * and the first is compared with the last.
- * @param angles - radians, ascending, at least one
+ * @param angles - radians, ascending, at least `count`
  * @param levels - the level from each angle on, one per angle
+ * @param count - how many of them to read, ≥ 1 @default angles.length
  */
 export function waveformFromAscending(
   angles: ArrayLike<number>,
   levels: ArrayLike<number>,
+  count = angles.length,
 ): Waveform {
-  const count = angles.length;
   const edges: number[] = [];
   const kept: number[] = [];
   // The cluster being gathered (its first angle, its last level), how many have begun, the
