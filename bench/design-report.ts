@@ -227,6 +227,18 @@
  * Profile after:
  * labelling the five spectra 10 % (an arc tangent and an object an order, the answer itself),
  * the legs' exact sums 9 %, garbage collection 7 %, fft.js's transforms 8 %, the extremes 4 %.
+ *
+ * Ninth round (bit for bit the same reports on the 3004-report corpus): the phase, line and
+ * common-mode voltages from one merge of the three legs' edges (`starVoltages`, seven waveforms
+ * that were seven merges), the canonical form of a waveform in one pass, and the modulator's
+ * transitions put in order without array maps: 62.5 → 60.1 M instructions a full report with
+ * plans (callgrind), threePhase at mf 101 355–373 → 290–302 µs. The host was quick all session:
+ * the round's start and its end, eight processes each in turn, plans row median 3.36 and 3.30 ms
+ * (2.84–3.91 and 2.88–3.97), the same to the noise; this bench, nine runs: plans row 3.05, 3.32,
+ * 3.41, 4.49, 3.78, 3.42, 4.36, 3.46 and 3.66 ms (spectrum alone 0.50–0.78 ms), every run under
+ * 5 ms; the full report without plans (each call building its own fft.js tables) 4.64–6.98 ms
+ * in the three runs that printed it. Scavenges: one every 3.3 reports, 1.1 ms each (0.34 ms a
+ * report on the mean; the median report has none).
  */
 import {
   analyseDesign,
