@@ -204,6 +204,10 @@ describe('the hot path of a compute answer, against the same service with respon
     expect(a.text).toBe(b.text);
     expect(a.headers['content-type']).toBe('application/json; charset=utf-8');
     expect(Number(a.headers['content-length'])).toBe(Buffer.byteLength(a.text));
+    // The worker's UTF-8 bytes go out with the headers res.json gives the same report.
+    const { date: _a, ...headersA } = a.headers as Record<string, string>;
+    const { date: _b, ...headersB } = b.headers as Record<string, string>;
+    expect(headersA).toEqual(headersB);
   });
 
   it('answers the CSV form and a refused request as before', async () => {

@@ -24,21 +24,25 @@ export function sendJson(req: Pick<Request, 'method'>, res: Response, body: unkn
 }
 
 /**
- * Answers JSON text made elsewhere (a worker's serialised result) as {@link sendJson} would
- * answer the value: when the response is validated (development, tests) or the request is a
- * HEAD, `value()` gives the object to `res.json`; otherwise the text is written as it is.
+ * Answers JSON made elsewhere, as UTF-8 bytes (a worker's serialised and encoded result), as
+ * {@link sendJson} would answer the value: when the response is validated (development, tests)
+ * or the request is a HEAD, `value()` gives the object to `res.json`; otherwise the bytes are
+ * written as they are.
  */
-export async function sendJsonText(
+export async function sendJsonBytes(
   req: Pick<Request, 'method'>,
   res: Response,
-  text: () => Promise<string>,
+  bytes: () => Promise<Uint8Array>,
   value: () => Promise<unknown>,
 ): Promise<void> {
   if (res.json !== plainJson || req.method === 'HEAD') {
     res.json(await value());
     return;
   }
-  endJson(res, await text());
+  const body = await bytes();
+  res.setHeader('Content-Type', 'application/json; charset=utf-8');
+  // Node sets Content-Length from the bytes given to `end` when no header has gone yet.
+  res.end(body);
 }
 
 /**

@@ -4,7 +4,7 @@ import { sendFile } from '../http/sendFile.js';
 import { principalOf } from '../auth/authorize.js';
 import { intQuery } from '../http/query.js';
 import { sendData } from '../http/sendData.js';
-import { sendJsonText } from '../http/sendJson.js';
+import { sendJsonBytes } from '../http/sendJson.js';
 import { spectrumCsv, waveformCsv } from '../services/csvExports.js';
 import type { TimerFormat } from '../services/cost.js';
 import type { Services } from '../services/index.js';
@@ -28,8 +28,9 @@ export function computeRoutes(services: Services): Router {
   });
   router.post('/api/v1/designs/report', async (req: ApiRequest<'analyseDesign'>, res) => {
     const { design, ...options } = req.body;
-    // Megabytes of report: serialised in the worker, so the request thread only writes it.
-    await sendJsonText(
+    // Megabytes of report: serialised and encoded in the worker, so the request thread only
+    // writes its bytes.
+    await sendJsonBytes(
       req,
       res,
       () => compute.reportJson(design, options),

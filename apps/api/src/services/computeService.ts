@@ -124,8 +124,9 @@ export class ComputeService {
   }
 
   /**
-   * The design report as JSON text (`designReport`'s answer serialised in the worker that made
-   * it), for routes that send it as it is; same cost check and budget as {@link report}.
+   * The design report as JSON in UTF-8 bytes (`designReport`'s answer serialised and encoded in
+   * the worker that made it), for routes that send it as it is; same cost check and budget as
+   * {@link report}.
    */
   reportJson(design: InverterDesign, options: AnalyseDesignOptions = {}) {
     return this.run(

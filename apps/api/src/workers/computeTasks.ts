@@ -69,11 +69,17 @@ export const COMPUTE_TASKS = {
   designReport: (a: { design: InverterDesign; options: AnalyseDesignOptions; field: string }) =>
     designReport(a.design, { ...a.options, plans }, a.field),
   /**
-   * The design report as JSON text, serialised where it was computed: a report of megabytes
-   * costs the request thread a copy of a string instead of a structured clone and a stringify.
+   * The design report as JSON in UTF-8 bytes, serialised and encoded where it was computed: a
+   * report of megabytes then costs the request thread a copy of its bytes, instead of a
+   * structured clone and a stringify (or, as text, the clone of a two-byte string, since the
+   * labels hold U+2212, and its UTF-8 encoding at the socket: about 6 ms of 3.3 MB).
    */
-  designReportJson: (a: { design: InverterDesign; options: AnalyseDesignOptions; field: string }) =>
-    JSON.stringify(designReport(a.design, { ...a.options, plans }, a.field)),
+  designReportJson: (a: {
+    design: InverterDesign;
+    options: AnalyseDesignOptions;
+    field: string;
+  }): Uint8Array =>
+    Buffer.from(JSON.stringify(designReport(a.design, { ...a.options, plans }, a.field)), 'utf8'),
   designSpectrum: (a: { design: InverterDesign; maxOrder: number; field: string }) =>
     designSpectrum(a.design, a.maxOrder, a.field),
   asynchronousSpectra: (a: { design: InverterDesign; maxOrder: number }) =>
