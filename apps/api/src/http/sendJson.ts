@@ -39,15 +39,13 @@ export async function sendJsonBytes(
     res.json(await value());
     return;
   }
-  const body = await bytes();
-  res.setHeader('Content-Type', 'application/json; charset=utf-8');
-  // Node sets Content-Length from the bytes given to `end` when no header has gone yet.
-  res.end(body);
+  endJson(res, await bytes());
 }
 
 /**
- * Ends the response with JSON text, its encoding named `'utf-8'` rather than left to Node's
- * default `'utf8'`: the same bytes on the wire (one encoding, two names; Node measures the
+ * Ends the response with JSON, as UTF-8 bytes or as text; Node sets `Content-Length` from either
+ * when no header has gone yet. Text goes with its encoding named `'utf-8'` rather than left to
+ * Node's default `'utf8'`: the same bytes on the wire (one encoding, two names; Node measures the
  * `Content-Length` in UTF-8 either way), but Node's `OutgoingMessage#_send` joins the header
  * block and a first body chunk given as a string in its default encoding into one string, which
  * is flattened on the JavaScript heap before the socket write (a copy of the whole answer, 60 kB
@@ -56,7 +54,8 @@ export async function sendJsonBytes(
  * about 100 kB an answer less; instructions an answer (valgrind): about 1 % fewer
  * (docs/robustness.md, throughput, fifth pass).
  */
-function endJson(res: Response, text: string): void {
+function endJson(res: Response, body: string | Uint8Array): void {
   res.setHeader('Content-Type', 'application/json; charset=utf-8');
-  res.end(text, 'utf-8');
+  if (typeof body === 'string') res.end(body, 'utf-8');
+  else res.end(body);
 }
