@@ -4,7 +4,7 @@ import { multilevelCarrier } from '../multilevel/carrier/multilevelCarrier.js';
 import { threeLevelSpaceVectorWaveforms } from '../multilevel/space-vector/threeLevelSpaceVectorWaveforms.js';
 import type { MultilevelTopology, MultilevelWaveforms } from '../multilevel/MultilevelTypes.js';
 import { sheWaveform } from '../she/sheWaveform.js';
-import { spaceVectorWaveforms } from '../space-vector/spaceVectorWaveforms.js';
+import { spaceVectorLegs } from '../space-vector/spaceVectorWaveforms.js';
 import { starVoltages } from '../three-phase/starVoltages.js';
 import { threePhaseLegs } from '../three-phase/threePhaseLegs.js';
 import { combineWaveforms } from '../waveform/combineWaveforms.js';
@@ -82,8 +82,8 @@ export function modulationVoltages(
     }
     case 'space-vector': {
       const { method: _method, ...options } = modulation;
-      const result = spaceVectorWaveforms(options);
-      return threePhaseVoltages([result.a, result.b, result.c]);
+      const legs = spaceVectorLegs(options);
+      return threePhaseVoltages([legs.a, legs.b, legs.c]);
     }
     case 'multilevel-carrier': {
       const { method: _method, ...options } = modulation;

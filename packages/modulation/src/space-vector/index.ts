@@ -5,5 +5,13 @@ export * from './spaceVectorSequence.js';
 export * from './overmodulationSetting.js';
 export * from './overmodulatedReference.js';
 export * from './spaceVectorIndices.js';
-export * from './spaceVectorWaveforms.js';
+// Listed, not `export *`: spaceVectorLegs is internal (the design report's).
+export {
+  MAX_SPACE_VECTOR_PERIODS,
+  SPACE_VECTOR_SAMPLINGS,
+  spaceVectorWaveforms,
+  type SpaceVectorSampling,
+  type SpaceVectorWaveformOptions,
+  type SpaceVectorWaveforms,
+} from './spaceVectorWaveforms.js';
 export * from './overmodulationGainCurve.js';

@@ -114,7 +114,34 @@ export interface SpaceVectorWaveforms {
  *
  * @throws ParameterRangeError naming the field (`m`, `ma`, `vdc`, `frequencyRatio`, …)
  */
-export function spaceVectorWaveforms({
+export function spaceVectorWaveforms(options: SpaceVectorWaveformOptions): SpaceVectorWaveforms {
+  const { a, b, c, ...indicesAndSpan } = spaceVectorLegs(options);
+  const star = starVoltages([a, b, c]);
+  // The fields in the order they always had (legs, lines, phases, then the indices and span).
+  return {
+    a,
+    b,
+    c,
+    ab: star.lines[0],
+    bc: star.lines[1],
+    ca: star.lines[2],
+    an: star.phases[0],
+    bn: star.phases[1],
+    cn: star.phases[2],
+    ...indicesAndSpan,
+  };
+}
+
+/** What {@link spaceVectorLegs} gives: the legs and the span, without the star's voltages. */
+export type SpaceVectorLegs = Omit<SpaceVectorWaveforms, 'ab' | 'bc' | 'ca' | 'an' | 'bn' | 'cn'>;
+
+/**
+ * The legs of {@link spaceVectorWaveforms} alone, with its indices and span, for a caller that
+ * combines them itself (the design report, through `starVoltages`). Internal: not in the
+ * package's exports.
+ * @throws ParameterRangeError as {@link spaceVectorWaveforms}
+ */
+export function spaceVectorLegs({
   m,
   ma,
   vdc,
@@ -125,7 +152,7 @@ export function spaceVectorWaveforms({
   clamping = 'dpwm1',
   overmodulation = 'two-mode',
   maxFundamentalPeriods = 64,
-}: SpaceVectorWaveformOptions): SpaceVectorWaveforms {
+}: SpaceVectorWaveformOptions): SpaceVectorLegs {
   const { m: index, ma: maUsed } = spaceVectorIndices({ m, ma });
   assertNumberInRange('vdc', vdc, { min: 0, minExclusive: true });
   assertOneOf('sequence', sequence, SPACE_VECTOR_SEQUENCES);
@@ -179,17 +206,10 @@ export function spaceVectorWaveforms({
     Waveform,
     Waveform,
   ];
-  const star = starVoltages([a, b, c]);
   return {
     a,
     b,
     c,
-    ab: star.lines[0],
-    bc: star.lines[1],
-    ca: star.lines[2],
-    an: star.phases[0],
-    bn: star.phases[1],
-    cn: star.phases[2],
     m: index,
     ma: maUsed,
     mode: setting.mode,
