@@ -6,7 +6,7 @@ import type { MultilevelTopology, MultilevelWaveforms } from '../multilevel/Mult
 import { sheWaveform } from '../she/sheWaveform.js';
 import { spaceVectorLegs } from '../space-vector/spaceVectorWaveforms.js';
 import { starVoltages } from '../three-phase/starVoltages.js';
-import { threePhaseLegs } from '../three-phase/threePhaseLegs.js';
+import { threePhaseLegs } from '../three-phase/threePhase.js';
 import { combineWaveforms } from '../waveform/combineWaveforms.js';
 import type { Waveform } from '../waveform/Waveform.js';
 import type { Modulation } from './Modulation.js';
